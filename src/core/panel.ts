@@ -1,0 +1,76 @@
+/**
+ * The aligned panel: what the reading + alignment edge hands to the pure core. One entry per
+ * matched key (series, timestamp, horizon, origin), in no particular order; columnar typed arrays
+ * so millions of rows stay cheap.
+ */
+
+/** How timestamps are ordered: numbers numerically, ISO 8601 chronologically, else as text. */
+export type TimestampKind = 'number' | 'datetime' | 'text';
+
+/** Point and quantile forecasts of one model, aligned to the panel's rows. */
+export interface ModelForecasts {
+  /** Point forecasts, or null when the file has no prediction column. */
+  readonly prediction: Float64Array | null;
+  /** Quantile forecasts by level (0 < level < 1), sorted by level ascending. */
+  readonly quantiles: readonly QuantileColumn[];
+}
+
+export interface QuantileColumn {
+  readonly level: number;
+  /** The header name it came from, e.g. "q0.1". */
+  readonly column: string;
+  readonly values: Float64Array;
+}
+
+/** Rows read, matched and left out, per side: nothing is dropped silently. */
+export interface InputCoverage {
+  readonly files: readonly FileSummary[];
+  /** Keys present in baseline, candidate and actuals. */
+  readonly rowsMatched: number;
+  /** Keys in the baseline that the candidate lacks. */
+  readonly baselineOnly: number;
+  /** Keys in the candidate that the baseline lacks. */
+  readonly candidateOnly: number;
+  /** Matched prediction keys that had no actual (only with a separate actuals file). */
+  readonly withoutActual: number;
+  /** Rows of a separate actuals file that matched no prediction key. */
+  readonly actualsUnused: number;
+  /** A few example keys from each one-sided set, for the report (at most 5 each). */
+  readonly examples: {
+    readonly baselineOnly: readonly string[];
+    readonly candidateOnly: readonly string[];
+  };
+}
+
+export interface FileSummary {
+  readonly role: 'baseline' | 'candidate' | 'actuals';
+  readonly path: string;
+  /** Data rows (excluding the header). */
+  readonly rows: number;
+  /** "sha256:<hex>" of the file's bytes as stored (before decompression). */
+  readonly sha256: string;
+  readonly columns: readonly string[];
+}
+
+export interface AlignedPanel {
+  /** Number of matched rows. */
+  readonly size: number;
+  /** Series id per row; names in seriesNames. */
+  readonly series: Int32Array;
+  readonly seriesNames: readonly string[];
+  /**
+   * Timestamp rank per row: 0..timestamps.length−1 in time order (numeric, chronological or
+   * text order per timestampKind). timestamps[rank] is the label as written in the files.
+   */
+  readonly time: Int32Array;
+  readonly timestamps: readonly string[];
+  readonly timestampKind: TimestampKind;
+  /** Steps ahead per row (integer ≥ 1; 1 when the files have no horizon column). */
+  readonly horizon: Int32Array;
+  readonly actual: Float64Array;
+  readonly baseline: ModelForecasts;
+  readonly candidate: ModelForecasts;
+  /** Optional per-row weights (weight column), else null. */
+  readonly weight: Float64Array | null;
+  readonly coverage: InputCoverage;
+}
