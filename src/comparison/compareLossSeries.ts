@@ -1,0 +1,85 @@
+import { lossDifferential, type LossSeries } from '../aggregation/lossSeries.js';
+import { decideComparison } from '../decision/decideComparison.js';
+import type { Hypothesis } from '../decision/hypothesis.js';
+import type { LossName } from '../losses/lossName.js';
+import type { BootstrapSummary, Comparison, DieboldMarianoSummary } from '../report/reportModel.js';
+import type { Settings } from '../settings/settings.js';
+import { runBootstrap } from './runBootstrap.js';
+import { runDieboldMariano } from './runDieboldMariano.js';
+
+export interface ComparisonScope {
+  readonly loss: LossName;
+  readonly horizon: 'all' | number;
+  readonly series: 'all' | string;
+  readonly timestamps: readonly string[];
+}
+
+/**
+ * One comparison: the loss series of one scope (overall, a horizon, a series) → the tested
+ * differential → Diebold–Mariano and stationary bootstrap → a decision under the policy.
+ */
+export function compareLossSeries(
+  series: LossSeries,
+  scope: ComparisonScope,
+  hypothesis: Hypothesis,
+  settings: Settings,
+): Comparison {
+  const n = series.baseline.length;
+  const meanBaselineLoss = mean(series.baseline);
+  const meanCandidateLoss = mean(series.candidate);
+  const d = lossDifferential(series, hypothesis.baselineFactor - 1);
+  const meanTestedDifferential = mean(d);
+  const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
+
+  const dieboldMariano: DieboldMarianoSummary = runDieboldMariano(d, series.maxHorizon, hypothesis, settings);
+  const bootstrap: BootstrapSummary = runBootstrap(d, hypothesis, settings);
+  const decision = decideComparison({
+    hypothesis,
+    alpha: settings.alpha,
+    agreement: settings.agreement,
+    dieboldMariano: {
+      label: `Diebold–Mariano (${dieboldMariano.estimator})`,
+      pValue: dieboldMariano.decisionPValue,
+      mean: meanTestedDifferential,
+      state: dieboldMariano.state,
+    },
+    bootstrap: {
+      label: 'Stationary bootstrap',
+      pValue: bootstrap.decisionPValue,
+      mean: meanTestedDifferential,
+      state: bootstrap.state,
+    },
+    n,
+    minPoints: settings.minPoints,
+    shortData: settings.shortData,
+    identicalLosses,
+  });
+  const first = series.time[0];
+  const last = series.time[n - 1];
+  return {
+    loss: scope.loss,
+    horizon: scope.horizon,
+    series: scope.series,
+    n,
+    rows: series.rowCount,
+    maxHorizon: series.maxHorizon,
+    firstTimestamp: first === undefined ? null : (scope.timestamps[first] ?? null),
+    lastTimestamp: last === undefined ? null : (scope.timestamps[last] ?? null),
+    meanBaselineLoss,
+    meanCandidateLoss,
+    meanDifference: meanCandidateLoss - meanBaselineLoss,
+    relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1,
+    meanTestedDifferential,
+    dieboldMariano,
+    bootstrap,
+    verdict: decision.verdict,
+    reasons: decision.reasons,
+    rejected: decision.rejected,
+  };
+}
+
+function mean(x: Float64Array): number {
+  let s = 0;
+  for (let i = 0; i < x.length; i++) s += x[i]!;
+  return x.length === 0 ? 0 : s / x.length;
+}

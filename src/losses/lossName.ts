@@ -1,0 +1,12 @@
+/** The losses a comparison can use, by the name the CLI and the action accept. */
+export const LOSS_NAMES = ['squared', 'absolute', 'ape', 'sape', 'pinball'] as const;
+export type LossName = (typeof LOSS_NAMES)[number];
+
+/** Plain-words label for reports. */
+export const LOSS_LABELS: Record<LossName, string> = {
+  squared: 'squared error',
+  absolute: 'absolute error',
+  ape: 'absolute percentage error (%)',
+  sape: 'symmetric absolute percentage error (%)',
+  pinball: 'pinball loss (mean over quantile levels)',
+};

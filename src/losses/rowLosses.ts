@@ -1,0 +1,116 @@
+import type { AlignedPanel, QuantileColumn } from '../core/panel.js';
+import { absoluteError } from './absoluteError.js';
+import { absolutePercentageError } from './absolutePercentageError.js';
+import type { LossName } from './lossName.js';
+import { pinballLoss } from './pinballLoss.js';
+import type { PointLossFunction } from './pointLoss.js';
+import { squaredError } from './squaredError.js';
+import { symmetricAbsolutePercentageError } from './symmetricAbsolutePercentageError.js';
+
+/** Per-row losses of both models over an aligned panel. */
+export interface RowLosses {
+  readonly loss: LossName;
+  readonly baseline: Float64Array;
+  readonly candidate: Float64Array;
+  /**
+   * 1 where the row takes part, 0 where it was skipped (absolute percentage error with a zero
+   * actual and `zeroActuals: 'skip'`); null when every row takes part.
+   */
+  readonly included: Uint8Array | null;
+  /** Rows whose actual is 0 under the absolute percentage error (skipped or refused). */
+  readonly zeroActualRows: readonly number[];
+  /** Quantile levels the pinball loss averaged over (empty for point losses). */
+  readonly levels: readonly number[];
+}
+
+/** Why losses cannot be computed for this panel, in plain words; the edge names the files. */
+export class LossUnavailableError extends Error {}
+
+const POINT_LOSSES: Record<Exclude<LossName, 'pinball'>, PointLossFunction> = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError,
+};
+
+/**
+ * Computes the loss of every matched row for baseline and candidate. Absolute percentage error
+ * rows with y = 0 are listed in `zeroActualRows` and, when `zeroActuals` is 'skip', excluded via
+ * `included`; with 'error' the caller must refuse them (nothing is dropped silently).
+ */
+export function computeRowLosses(
+  panel: AlignedPanel,
+  loss: LossName,
+  zeroActuals: 'error' | 'skip',
+): RowLosses {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === 'pinball') {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        'the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate',
+      );
+    }
+    const y = panel.actual;
+    for (const { level, base, cand } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y[i]!;
+        baseline[i]! += pinballLoss(yi, base[i]!, level);
+        candidate[i]! += pinballLoss(yi, cand[i]!, level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i]! /= k;
+      candidate[i]! /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level),
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`,
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows: number[] = [];
+  let included: Uint8Array | null = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i]!;
+    if (loss === 'ape' && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === 'skip') {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]!);
+    candidate[i] = f(yi, cand[i]!);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
+}
+
+function commonQuantiles(
+  baseline: readonly QuantileColumn[],
+  candidate: readonly QuantileColumn[],
+): { level: number; base: Float64Array; cand: Float64Array }[] {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs: { level: number; base: Float64Array; cand: Float64Array }[] = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== undefined) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}

@@ -1,0 +1,144 @@
+import type { FileSummary } from '../core/panel.js';
+import type { LossName } from '../losses/lossName.js';
+import type { Verdict } from '../decision/verdict.js';
+import type { Settings } from '../settings/settings.js';
+
+/**
+ * The JSON report: the one artefact every renderer (terminal, Markdown comment, job summary)
+ * reads. Its shape is fixed by DESIGN ("JSON report contract") and described by
+ * docs/report.schema.json; numbers that cannot be computed are null, never NaN.
+ */
+export interface Report {
+  readonly tool: { readonly name: 'skillgate'; readonly version: string };
+  readonly name: string;
+  readonly verdict: Verdict;
+  /** One sentence in plain words: what was tested and what came out. */
+  readonly headline: string;
+  readonly policy: PolicySummary;
+  /** The overall comparison first (horizon "all", series "all"). */
+  readonly comparisons: readonly Comparison[];
+  readonly inputs: InputsSummary;
+  readonly settings: Settings;
+  /** Reasons that concern the whole gate (e.g. rows the candidate lacks). */
+  readonly reasons: readonly string[];
+}
+
+export interface PolicySummary {
+  readonly policy: Settings['policy'];
+  readonly agreement: Settings['agreement'];
+  readonly alpha: number;
+  readonly margin: number;
+  readonly marginKind: Settings['marginKind'];
+  /** H0 and H1 in plain words. */
+  readonly nullHypothesis: string;
+  readonly alternative: string;
+  /** What rejecting H0 does to the gate. */
+  readonly onReject: 'fail' | 'pass';
+  /** d_t = L_c,t − k·L_b,t and the boundary δ of H0 (E[d] = δ). */
+  readonly baselineFactor: number;
+  readonly boundary: number;
+}
+
+export interface Comparison {
+  readonly loss: LossName;
+  readonly horizon: 'all' | number;
+  readonly series: 'all' | string;
+  /** Time points in the tested series. */
+  readonly n: number;
+  /** Rows averaged into those time points. */
+  readonly rows: number;
+  readonly maxHorizon: number;
+  readonly firstTimestamp: string | null;
+  readonly lastTimestamp: string | null;
+  readonly meanBaselineLoss: number;
+  readonly meanCandidateLoss: number;
+  /** Mean of d_t = loss(candidate) − loss(baseline) (no margin applied). */
+  readonly meanDifference: number;
+  /** meanCandidateLoss / meanBaselineLoss − 1, or null when the baseline loss is 0. */
+  readonly relativeDifference: number | null;
+  /** Mean of the tested differential d_t = L_c,t − k·L_b,t (k from the margin). */
+  readonly meanTestedDifferential: number;
+  readonly dieboldMariano: DieboldMarianoSummary;
+  readonly bootstrap: BootstrapSummary;
+  readonly verdict: Verdict;
+  readonly reasons: readonly string[];
+  readonly rejected: { readonly dieboldMariano: boolean | null; readonly bootstrap: boolean | null };
+}
+
+export interface DieboldMarianoSummary {
+  readonly state: 'ok' | 'identical' | 'zero-variance' | 'too-short';
+  readonly estimator: Settings['variance'];
+  readonly requestedEstimator: Settings['variance'];
+  readonly statistic: number | null;
+  /** One-sided: H1 E[d] > δ (the candidate worse by more than the margin). */
+  readonly pValue: number | null;
+  readonly pValueTwoSided: number | null;
+  /** p-value in the policy's direction, the one the decision used. */
+  readonly decisionPValue: number | null;
+  /** ω̂²/n, the estimated variance of d̄. */
+  readonly variance: number | null;
+  readonly longRunVariance: number | null;
+  readonly lag: number | null;
+  readonly degreesOfFreedom: number | null;
+  readonly smallSample: {
+    readonly statistic: number;
+    readonly pValue: number;
+    readonly pValueTwoSided: number;
+    readonly degreesOfFreedom: number;
+  } | null;
+  /** Two-sided interval for E[d] (tested differential), from the same variance and reference. */
+  readonly interval: Interval | null;
+  readonly lagSelection: Readonly<Record<string, number | string>> | null;
+  readonly notes: readonly string[];
+}
+
+export interface BootstrapSummary {
+  readonly state: 'ok' | 'identical' | 'too-short';
+  readonly resamples: number;
+  readonly seed: number;
+  readonly expectedBlockLength: number;
+  readonly blockLengthRule: 'auto' | 'fixed';
+  readonly blockLengthSelection: Readonly<Record<string, number | boolean>> | null;
+  readonly standardError: number | null;
+  /** Interval for E[d] (tested differential). */
+  readonly interval: Interval | null;
+  /** One-sided: H1 E[d] > δ. */
+  readonly pValue: number | null;
+  readonly pValueTwoSided: number | null;
+  readonly decisionPValue: number | null;
+  readonly notes: readonly string[];
+}
+
+export interface Interval {
+  readonly level: number;
+  readonly lower: number;
+  readonly upper: number;
+  readonly method: string;
+}
+
+export interface InputsSummary {
+  readonly files: readonly FileSummary[];
+  readonly rowsMatched: number;
+  readonly rowsDropped: {
+    /** Baseline keys the candidate lacks. */
+    readonly baseline: number;
+    /** Candidate keys the baseline lacks. */
+    readonly candidate: number;
+    /** Matched keys without an actual. */
+    readonly withoutActual: number;
+    /** Actuals rows that matched no forecast. */
+    readonly actualsUnused: number;
+    /** Rows skipped by the loss (zero actuals under ape with zero-actuals: skip). */
+    readonly skippedByLoss: number;
+  };
+  readonly examples: { readonly baselineOnly: readonly string[]; readonly candidateOnly: readonly string[] };
+  readonly timestamps: {
+    readonly count: number;
+    readonly kind: 'number' | 'datetime' | 'text';
+    readonly first: string | null;
+    readonly last: string | null;
+  };
+  readonly series: number;
+  readonly horizons: readonly number[];
+  readonly quantileLevels: readonly number[];
+}

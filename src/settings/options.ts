@@ -1,0 +1,44 @@
+import { LOSS_NAMES } from '../losses/lossName.js';
+
+/**
+ * The engine's options, in one place: the CLI's flags (`--name`) and the action's inputs (`name`)
+ * are both read from this table, so the two cannot drift apart. `action.yml` mirrors it (a test
+ * checks that).
+ */
+export interface OptionSpec {
+  readonly name: string;
+  /** Default as text, or null when the option is required / has no default. */
+  readonly defaultValue: string | null;
+  readonly required?: boolean;
+  /** Takes no value on the CLI (a switch); in the action it is "true"/"false". */
+  readonly flag?: boolean;
+  readonly choices?: readonly string[];
+  readonly help: string;
+}
+
+export const ENGINE_OPTIONS: readonly OptionSpec[] = [
+  { name: 'baseline', defaultValue: null, required: true, help: 'predictions of the model on the main branch (CSV/TSV, optionally .gz)' },
+  { name: 'candidate', defaultValue: null, required: true, help: "predictions of the pull request's model" },
+  { name: 'actuals', defaultValue: null, help: 'observed values keyed by series and timestamp, when the prediction files lack an actual column' },
+  { name: 'columns', defaultValue: '', help: 'rename columns, e.g. actual=observed,prediction=point,series=zone' },
+  { name: 'format', defaultValue: 'auto', choices: ['auto', 'csv', 'tsv'], help: 'input format; auto: TSV for .tsv/.tsv.gz, else CSV' },
+  { name: 'loss', defaultValue: 'squared', choices: LOSS_NAMES, help: 'loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns)' },
+  { name: 'zero-actuals', defaultValue: 'error', choices: ['error', 'skip'], help: 'with ape: refuse rows whose actual is 0, or skip and count them' },
+  { name: 'alpha', defaultValue: '0.05', help: 'significance level of each one-sided test' },
+  { name: 'margin', defaultValue: '0', help: 'allowed margin: with --margin-kind relative, 0.02 means the candidate may be up to 2% worse' },
+  { name: 'margin-kind', defaultValue: 'relative', choices: ['relative', 'absolute'], help: 'relative (fraction of the baseline loss) or absolute (loss units)' },
+  { name: 'policy', defaultValue: 'no-regression', choices: ['no-regression', 'non-inferiority', 'superiority'], help: 'no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin' },
+  { name: 'agreement', defaultValue: 'both', choices: ['both', 'either', 'dm', 'bootstrap'], help: 'which tests must reject for the decision; with both, a split verdict is a warning' },
+  { name: 'variance', defaultValue: 'ewc', choices: ['ewc', 'bartlett', 'uniform'], help: 'long-run variance for Diebold–Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey–West), uniform' },
+  { name: 'lag', defaultValue: 'auto', help: 'HAC lag for bartlett/uniform: auto (Newey–West 1994, at least h−1), h-1, or a number' },
+  { name: 'block-length', defaultValue: 'auto', help: 'expected block length of the stationary bootstrap: auto (Politis–White) or a number ≥ 1' },
+  { name: 'resamples', defaultValue: '9999', help: 'bootstrap resamples' },
+  { name: 'seed', defaultValue: '1729', help: 'seed of the bootstrap random numbers (same seed, same numbers on every machine)' },
+  { name: 'confidence', defaultValue: '0.95', help: 'level of the two-sided intervals in the report' },
+  { name: 'min-points', defaultValue: '30', help: 'fewest time points for a firm verdict (fewer: too little data)' },
+  { name: 'short-data', defaultValue: 'warn', choices: ['warn', 'fail'], help: 'verdict when there are fewer time points than --min-points' },
+  { name: 'allow-missing', defaultValue: 'false', flag: true, help: 'let the gate pass although the candidate lacks rows the baseline has' },
+  { name: 'name', defaultValue: '', help: 'a name for this comparison (report title; keeps two gates apart on one pull request)' },
+  { name: 'json', defaultValue: null, help: 'write the JSON report to this file' },
+  { name: 'markdown', defaultValue: null, help: 'write the Markdown report to this file' },
+];

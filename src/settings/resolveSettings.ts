@@ -1,0 +1,102 @@
+import { InputError } from '../core/inputError.js';
+import type { LossName } from '../losses/lossName.js';
+import { parseColumnMapping } from '../reading/columnMapping.js';
+import { ENGINE_OPTIONS, type OptionSpec } from './options.js';
+import type { BlockLengthRule, LagRule, Settings } from './settings.js';
+
+/** Raw option values by option name (as typed by the user, before validation). */
+export type RawOptions = Readonly<Record<string, string | undefined>>;
+
+/**
+ * Validates raw option text into Settings. `label(name)` says how the user spelled the option
+ * (`--alpha` on the CLI, input `alpha` in the action) so messages point at what they typed.
+ * Every failure is an InputError naming the option and the value.
+ */
+export function resolveSettings(raw: RawOptions, label: (name: string) => string): Settings {
+  const value = (name: string): string => {
+    const spec = specOf(name);
+    const given = raw[name];
+    const text = given === undefined || given === '' ? spec.defaultValue : given.trim();
+    if (text === null || (spec.required && text === '')) {
+      throw new InputError(`${label(name)} is required: ${spec.help}`);
+    }
+    if (spec.choices !== undefined && !spec.choices.includes(text)) {
+      throw new InputError(`${label(name)} must be one of ${spec.choices.join(', ')}`, {
+        value: text,
+      });
+    }
+    return text;
+  };
+  const optional = (name: string): string | null => {
+    const given = raw[name]?.trim();
+    return given === undefined || given === '' ? null : given;
+  };
+  const number = (name: string, check: (x: number) => boolean, expected: string): number => {
+    const text = value(name);
+    const x = Number(text);
+    if (text === '' || !Number.isFinite(x) || !check(x)) {
+      throw new InputError(`${label(name)} must be ${expected}`, { value: text });
+    }
+    return x;
+  };
+  const integer = (name: string, min: number, max = Number.MAX_SAFE_INTEGER): number =>
+    number(name, (x) => Number.isInteger(x) && x >= min && x <= max, `an integer from ${min} to ${max}`);
+  const bool = (name: string): boolean => {
+    const text = value(name).toLowerCase();
+    if (text === 'true') return true;
+    if (text === 'false') return false;
+    throw new InputError(`${label(name)} must be true or false`, { value: text });
+  };
+
+  return {
+    name: value('name'),
+    baseline: value('baseline'),
+    candidate: value('candidate'),
+    actuals: optional('actuals'),
+    columns: parseColumnMapping(value('columns'), label('columns')),
+    format: value('format') as Settings['format'],
+    loss: value('loss') as LossName,
+    zeroActuals: value('zero-actuals') as Settings['zeroActuals'],
+    alpha: number('alpha', (x) => x > 0 && x < 0.5, 'a number between 0 and 0.5, such as 0.05'),
+    margin: number('margin', (x) => x >= 0, 'a number ≥ 0 (0.02 = 2% with --margin-kind relative)'),
+    marginKind: value('margin-kind') as Settings['marginKind'],
+    policy: value('policy') as Settings['policy'],
+    agreement: value('agreement') as Settings['agreement'],
+    variance: value('variance') as Settings['variance'],
+    lag: parseLag(value('lag'), label('lag')),
+    blockLength: parseBlockLength(value('block-length'), label('block-length')),
+    resamples: integer('resamples', 99, 10_000_000),
+    seed: integer('seed', 0, 2 ** 31 - 1),
+    confidence: number('confidence', (x) => x > 0.5 && x < 1, 'a number between 0.5 and 1, such as 0.95'),
+    minPoints: integer('min-points', 1),
+    shortData: value('short-data') as Settings['shortData'],
+    allowMissing: bool('allow-missing'),
+    json: optional('json'),
+    markdown: optional('markdown'),
+  };
+}
+
+function specOf(name: string): OptionSpec {
+  const spec = ENGINE_OPTIONS.find((o) => o.name === name);
+  if (spec === undefined) throw new Error(`unknown option ${name}`);
+  return spec;
+}
+
+function parseLag(text: string, label: string): LagRule {
+  if (text === 'auto') return { kind: 'auto' };
+  if (text === 'h-1') return { kind: 'horizon' };
+  const lag = Number(text);
+  if (!Number.isInteger(lag) || lag < 0) {
+    throw new InputError(`${label} must be auto, h-1 or an integer ≥ 0`, { value: text });
+  }
+  return { kind: 'fixed', lag };
+}
+
+function parseBlockLength(text: string, label: string): BlockLengthRule {
+  if (text === 'auto') return { kind: 'auto' };
+  const length = Number(text);
+  if (!Number.isFinite(length) || length < 1) {
+    throw new InputError(`${label} must be auto or a number ≥ 1`, { value: text });
+  }
+  return { kind: 'fixed', length };
+}

@@ -1,0 +1,40 @@
+import type { LossName } from '../losses/lossName.js';
+import type { ColumnMapping } from '../reading/columnMapping.js';
+
+/** Which way the gate leans: what a pull request must show to pass. */
+export type Policy = 'no-regression' | 'non-inferiority' | 'superiority';
+/** Which tests must reject for the policy's decision; a split gives `warn`. */
+export type Agreement = 'both' | 'either' | 'dm' | 'bootstrap';
+export type VarianceEstimator = 'ewc' | 'bartlett' | 'uniform';
+export type LagRule = { kind: 'auto' } | { kind: 'horizon' } | { kind: 'fixed'; lag: number };
+export type BlockLengthRule = { kind: 'auto' } | { kind: 'fixed'; length: number };
+export type MarginKind = 'relative' | 'absolute';
+
+/** Everything one comparison needs, validated; built once at the edge (CLI flags or action inputs). */
+export interface Settings {
+  readonly name: string;
+  readonly baseline: string;
+  readonly candidate: string;
+  readonly actuals: string | null;
+  /** Column-role → header-name remapping, e.g. { actual: 'observed' }. */
+  readonly columns: ColumnMapping;
+  readonly format: 'auto' | 'csv' | 'tsv';
+  readonly loss: LossName;
+  readonly zeroActuals: 'error' | 'skip';
+  readonly alpha: number;
+  readonly margin: number;
+  readonly marginKind: MarginKind;
+  readonly policy: Policy;
+  readonly agreement: Agreement;
+  readonly variance: VarianceEstimator;
+  readonly lag: LagRule;
+  readonly blockLength: BlockLengthRule;
+  readonly resamples: number;
+  readonly seed: number;
+  readonly confidence: number;
+  readonly minPoints: number;
+  readonly shortData: 'warn' | 'fail';
+  readonly allowMissing: boolean;
+  readonly json: string | null;
+  readonly markdown: string | null;
+}
