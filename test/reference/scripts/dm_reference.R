@@ -253,3 +253,38 @@ writeCase("co2_h6_squared", "R datasets::co2 (Mauna Loa, monthly, 1959-1997)", y
   "naive: y[t-6]", function(y, t, h) naive(y, t, h),
   "seasonal naive: y[t-12]", function(y, t, h) seasonalNaive(y, t, h, 12)
 )
+
+# Distribution functions behind the p-values (src/statistics/distributions.ts).
+dist <- function(fn, call, args, value) {
+  obj(list(fn = str(fn), call = str(call), args = arr(args), value = num(value)), indent = "    ")
+}
+entries <- character(0)
+for (x in c(-8, -3, -1.5, 0, 0.5, 2, 5)) {
+  entries <- c(entries,
+    dist("standardNormalCdf", sprintf("pnorm(%s)", num(x)), x, pnorm(x)),
+    dist("standardNormalUpperTail", sprintf("pnorm(%s, lower.tail = FALSE)", num(x)), x,
+         pnorm(x, lower.tail = FALSE)),
+    dist("standardNormalTwoSided", sprintf("2 * pnorm(-abs(%s))", num(x)), x, 2 * pnorm(-abs(x))))
+}
+for (p in c(0.001, 0.025, 0.5, 0.95, 0.999)) {
+  entries <- c(entries, dist("standardNormalQuantile", sprintf("qnorm(%s)", num(p)), p, qnorm(p)))
+}
+for (df in c(1, 2, 5, 30, 455)) {
+  for (x in c(-6, -2, 0, 1.5, 4)) {
+    entries <- c(entries,
+      dist("studentTCdf", sprintf("pt(%s, %s)", num(x), num(df)), c(x, df), pt(x, df)),
+      dist("studentTUpperTail", sprintf("pt(%s, %s, lower.tail = FALSE)", num(x), num(df)),
+           c(x, df), pt(x, df, lower.tail = FALSE)),
+      dist("studentTTwoSided", sprintf("2 * pt(-abs(%s), %s)", num(x), num(df)), c(x, df),
+           2 * pt(-abs(x), df)))
+  }
+  for (p in c(0.001, 0.025, 0.5, 0.95, 0.999)) {
+    entries <- c(entries,
+      dist("studentTQuantile", sprintf("qt(%s, %s)", num(p), num(df)), c(p, df), qt(p, df)))
+  }
+}
+writeLines(obj(list(
+  generator = str("test/reference/scripts/dm_reference.R"),
+  source = str(paste("R", getRversion(), "stats::pnorm, qnorm, pt, qt")),
+  values = paste0("[\n    ", paste(entries, collapse = ",\n    "), "\n  ]")
+), indent = ""), file.path(out, "dm_distributions.json"))

@@ -176,7 +176,7 @@ def check_r_cases(out):
     for path in sorted(glob.glob(os.path.join(out, "dm_*.json"))):
         with open(path, encoding="utf-8") as f:
             case = json.load(f)
-        if case.get("generator") != "test/reference/scripts/dm_reference.R":
+        if case.get("generator") != "test/reference/scripts/dm_reference.R" or "d" not in case:
             continue
         d = np.array(case["d"], dtype=float)
         h = case["horizon"]
