@@ -30,6 +30,8 @@ export interface GeometricSampler {
   readonly mean: number;
   /** L: lengths 1..L are in the table; longer ones go through the overflow outcome. */
   readonly truncation: number;
+  /** The alias table over outcomes 0..L (length outcome + 1; L = overflow), 2^j = L + 1 columns. */
+  readonly table: { readonly threshold: Float64Array; readonly alias: Int32Array };
   sample(random: RandomSource, cap: number): number;
 }
 
@@ -40,7 +42,10 @@ export function createGeometricSampler(mean: number): GeometricSampler {
   if (!(Number.isFinite(mean) && mean >= 1)) {
     throw new RangeError(`the mean of a geometric length must be a finite number ≥ 1, got ${mean}`);
   }
-  if (mean === 1) return { mean, truncation: 1, sample: () => 1 };
+  if (mean === 1) {
+    const table = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
+    return { mean, truncation: 1, table, sample: () => 1 };
+  }
   const p = 1 / mean;
   const q = 1 - p;
   let bits = 1;
@@ -66,6 +71,7 @@ export function createGeometricSampler(mean: number): GeometricSampler {
   return {
     mean,
     truncation,
+    table: { threshold, alias },
     sample(random: RandomSource, cap: number): number {
       let total = 0;
       for (;;) {
