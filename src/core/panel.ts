@@ -39,6 +39,8 @@ export interface InputCoverage {
   readonly examples: {
     readonly baselineOnly: readonly string[];
     readonly candidateOnly: readonly string[];
+    /** Matched prediction keys that had no actual (at most 5). */
+    readonly withoutActual: readonly string[];
   };
 }
 
@@ -50,6 +52,17 @@ export interface FileSummary {
   /** "sha256:<hex>" of the file's bytes as stored (before decompression). */
   readonly sha256: string;
   readonly columns: readonly string[];
+  /** Header columns that play no role in this file (unknown extras), in header order. */
+  readonly ignoredColumns: readonly string[];
+  /** Empty lines that were skipped (not counted in rows). */
+  readonly blankLines: number;
+}
+
+/** Which quantile levels the two models share; only common levels are in the panel. */
+export interface QuantileLevels {
+  readonly common: readonly number[];
+  readonly baselineOnly: readonly number[];
+  readonly candidateOnly: readonly number[];
 }
 
 export interface AlignedPanel {
@@ -65,12 +78,23 @@ export interface AlignedPanel {
   readonly time: Int32Array;
   readonly timestamps: readonly string[];
   readonly timestampKind: TimestampKind;
+  /** One sentence on why this kind was chosen (e.g. which label forced text order). */
+  readonly timestampKindReason: string;
   /** Steps ahead per row (integer ≥ 1; 1 when the files have no horizon column). */
   readonly horizon: Int32Array;
+  /**
+   * Origin rank per row (like time: 0..origins.length−1 in time order, origins[rank] the label),
+   * or null when the files have no origin column.
+   */
+  readonly origin: Int32Array | null;
+  readonly origins: readonly string[];
+  /** How origins are ordered ('text' when there is no origin column). */
+  readonly originKind: TimestampKind;
   readonly actual: Float64Array;
   readonly baseline: ModelForecasts;
   readonly candidate: ModelForecasts;
   /** Optional per-row weights (weight column), else null. */
   readonly weight: Float64Array | null;
+  readonly quantileLevels: QuantileLevels;
   readonly coverage: InputCoverage;
 }
