@@ -1,0 +1,53 @@
+import { ENGINE_OPTIONS, type OptionSpec } from '../settings/options.js';
+
+/**
+ * The action's input and output names, in one place; `action.yml` mirrors this module (a test
+ * checks that). The engine's own options come from ENGINE_OPTIONS under the same names the CLI
+ * uses without `--`; the inputs below exist only in the action.
+ */
+export const INPUT = {
+  githubToken: 'github-token',
+  comment: 'comment',
+  pullRequest: 'pull-request',
+  reportFile: 'report-file',
+} as const;
+
+export const ACTION_INPUTS: readonly OptionSpec[] = [
+  {
+    name: INPUT.githubToken,
+    // biome-ignore lint/suspicious/noTemplateCurlyInString: a GitHub expression, kept verbatim
+    defaultValue: '${{ github.token }}',
+    help: 'token for the pull-request comment (needs pull-requests: write); empty to skip commenting',
+  },
+  {
+    name: INPUT.comment,
+    defaultValue: 'true',
+    flag: true,
+    help: 'post or update the sticky pull-request comment',
+  },
+  {
+    name: INPUT.pullRequest,
+    defaultValue: '',
+    help: 'pull-request number to comment on (workflow_dispatch, workflow_run); the event decides when empty',
+  },
+  {
+    name: INPUT.reportFile,
+    defaultValue: '',
+    help: 'post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered',
+  },
+];
+
+/** Every input of action.yml: the engine's options, then the action's own. */
+export const ALL_INPUTS: readonly OptionSpec[] = [...ENGINE_OPTIONS, ...ACTION_INPUTS];
+
+export const OUTPUT = {
+  verdict: 'verdict',
+  report: 'report',
+  commentUrl: 'comment-url',
+} as const;
+
+export const OUTPUT_HELP: Readonly<Record<(typeof OUTPUT)[keyof typeof OUTPUT], string>> = {
+  verdict: 'pass, warn or fail',
+  report: 'path of the JSON report written by this step',
+  'comment-url': 'URL of the pull-request comment, when one was posted or updated',
+};

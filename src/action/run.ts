@@ -1,0 +1,268 @@
+import { createHash } from 'node:crypto';
+import { appendFile, mkdir, readFile, stat, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { InputError } from '../core/inputError.js';
+import { renderMarkdown } from '../report/renderMarkdown.js';
+import type { Report } from '../report/reportModel.js';
+import { type CommentPlan, planComment } from './commentTarget.js';
+import { type ActionDependencies, runnerDependencies } from './dependencies.js';
+import {
+  COMMENT_LIMIT_CHARS,
+  fitReport,
+  measureBytes,
+  measureChars,
+  SUMMARY_LIMIT_BYTES,
+} from './fitReport.js';
+import {
+  type GitHubClient,
+  getPullRequest,
+  openPullRequestsFromHead,
+  pullRequestsOfCommit,
+} from './githubApi.js';
+import { OUTPUT } from './names.js';
+import { type ActionSettings, inputLabel, readActionSettings } from './readInputs.js';
+import { defaultRetryPolicy, installRetries } from './retry.js';
+import { type RunnerEnvironment, readRunnerEnvironment, runUrl } from './runnerEnvironment.js';
+import { commentMarker, encodeName, upsertStickyComment } from './stickyComment.js';
+import { MAX_REPORT_BYTES, parseUntrustedReport } from './untrustedReport.js';
+
+/**
+ * The action's one place where outcomes become the step's result: the step fails exactly when
+ * the verdict is `fail`, or when the inputs are wrong (a message naming the input, no stack
+ * trace). Problems with the comment (a read-only token, an API error) are warnings only, so the
+ * exit code stays tied to the verdict.
+ */
+export async function run(deps: ActionDependencies = runnerDependencies()): Promise<void> {
+  try {
+    const report = await gate(deps);
+    if (report.verdict === 'fail')
+      deps.log.setFailed(`skillgate: the gate failed. ${report.headline}`);
+  } catch (error) {
+    if (error instanceof InputError) {
+      deps.log.setFailed(`skillgate: ${error.describe()}`);
+      return;
+    }
+    const message = error instanceof Error ? error.message : String(error);
+    deps.log.setFailed(
+      `skillgate: internal error: ${message}. This is a bug in skillgate; set SKILLGATE_DEBUG=1 for details.`,
+    );
+    if (deps.env.SKILLGATE_DEBUG && error instanceof Error) deps.log.info(error.stack ?? '');
+  }
+}
+
+/** Compares (or loads a report), writes outputs, summary and annotations, then comments. */
+async function gate(deps: ActionDependencies): Promise<Report> {
+  const env = readRunnerEnvironment(deps.env);
+  const action = readActionSettings(deps.getInput);
+  const payload = await readEventPayload(env.eventPath);
+  const plan = planComment(env.eventName, payload, action.pullRequest, env.sha);
+
+  const report = await obtainReport(deps, action);
+  const name =
+    action.source.kind === 'compare'
+      ? action.source.settings.name
+      : action.source.name || report.name;
+  // A report posted from an earlier run links to that run, where its summary is.
+  const link = runUrl(env, plan.kind === 'workflow-run' ? plan.runId : env.runId);
+  const render = (r: Report): string =>
+    renderMarkdown(r, link === undefined ? {} : { runUrl: link });
+
+  const jsonTarget = jsonPath(action, env, name);
+  await writeText(jsonTarget, `${JSON.stringify(report, null, 2)}\n`);
+  const markdownTarget =
+    action.source.kind === 'compare' ? action.source.settings.markdown : action.source.markdown;
+  if (markdownTarget !== null) await writeText(markdownTarget, render(report));
+  deps.log.setOutput(OUTPUT.verdict, report.verdict);
+  deps.log.setOutput(OUTPUT.report, jsonTarget);
+
+  if (env.stepSummary !== null) {
+    const summary = fitReport(report, {
+      render,
+      measure: measureBytes,
+      limit: SUMMARY_LIMIT_BYTES - 1024,
+      ...(link === undefined ? {} : { fullReportUrl: link }),
+    });
+    await appendFile(env.stepSummary, summary.text);
+  } else {
+    deps.log.info('skillgate: GITHUB_STEP_SUMMARY is not set; no job summary written');
+  }
+  annotate(deps, report, name);
+
+  if (action.comment) {
+    const marker = commentMarker(name);
+    const body = fitReport(report, {
+      render,
+      measure: measureChars,
+      limit: COMMENT_LIMIT_CHARS,
+      prefix: `${marker}\n`,
+      ...(link === undefined ? {} : { fullReportUrl: link }),
+    });
+    if (body.shortened) deps.log.info('skillgate: the report was shortened to fit in a comment');
+    const url = await comment(deps, env, action, plan, marker, body.text);
+    if (url !== null) deps.log.setOutput(OUTPUT.commentUrl, url);
+  }
+  return report;
+}
+
+async function obtainReport(deps: ActionDependencies, action: ActionSettings): Promise<Report> {
+  const source = action.source;
+  if (source.kind === 'compare') {
+    let stage = '';
+    const { report } = await deps.compare(source.settings, {
+      onProgress: (progress) => {
+        if (progress.stage !== stage) deps.log.info(`skillgate: ${progress.stage}`);
+        stage = progress.stage;
+      },
+    });
+    return report;
+  }
+  const label = inputLabel('report-file');
+  const size = await stat(source.path).then(
+    (s) => s.size,
+    () => {
+      throw new InputError(`${label}: cannot read the file`, { value: source.path });
+    },
+  );
+  if (size > MAX_REPORT_BYTES) {
+    throw new InputError(`${label}: the report is larger than ${MAX_REPORT_BYTES} bytes`, {
+      value: source.path,
+    });
+  }
+  return parseUntrustedReport(await readFile(source.path, 'utf8'), source.path);
+}
+
+async function readEventPayload(eventPath: string | null): Promise<unknown> {
+  if (eventPath === null) return {};
+  try {
+    return JSON.parse(await readFile(eventPath, 'utf8'));
+  } catch {
+    return {};
+  }
+}
+
+function jsonPath(action: ActionSettings, env: RunnerEnvironment, name: string): string {
+  const given = action.source.kind === 'compare' ? action.source.settings.json : action.source.json;
+  if (given !== null) return given;
+  if (name === '') return path.join(env.tempDir, 'skillgate-report.json');
+  const encoded = encodeName(name);
+  const slug =
+    encoded.length <= 80 ? encoded : createHash('sha256').update(name).digest('hex').slice(0, 16);
+  return path.join(env.tempDir, `skillgate-report-${slug}.json`);
+}
+
+async function writeText(file: string, text: string): Promise<void> {
+  await mkdir(path.dirname(path.resolve(file)), { recursive: true });
+  await writeFile(file, text);
+}
+
+function annotate(deps: ActionDependencies, report: Report, name: string): void {
+  const title = name === '' ? 'skillgate' : `skillgate · ${name}`;
+  const message = `${report.verdict.toUpperCase()}: ${report.headline}`;
+  if (report.verdict === 'fail') deps.log.error(message, { title });
+  else if (report.verdict === 'warn') deps.log.warning(message, { title });
+  else deps.log.notice(message, { title });
+}
+
+const READ_ONLY_HINT =
+  'The report is in the job summary. To comment on pull requests from forks, use the workflow_run pattern in docs/action.md.';
+
+/** Posts or updates the sticky comment; returns its URL, or null (with a warning or a note). */
+async function comment(
+  deps: ActionDependencies,
+  env: RunnerEnvironment,
+  action: ActionSettings,
+  plan: CommentPlan,
+  marker: string,
+  body: string,
+): Promise<string | null> {
+  if (plan.kind === 'none') {
+    deps.log.info(`skillgate: no comment: ${plan.reason}`);
+    return null;
+  }
+  if (plan.kind === 'read-only') {
+    deps.log.warning(`skillgate: no comment: ${plan.reason}. ${READ_ONLY_HINT}`);
+    return null;
+  }
+  if (env.repository === null) {
+    deps.log.warning('skillgate: no comment: GITHUB_REPOSITORY is not set');
+    return null;
+  }
+  if (action.token === '') {
+    deps.log.warning(`skillgate: no comment: ${inputLabel('github-token')} is empty`);
+    return null;
+  }
+  const repository = env.repository;
+  try {
+    const client = installRetries(deps.createClient(action.token, env.apiUrl), {
+      ...defaultRetryPolicy((m) => deps.log.info(`skillgate: ${m}`)),
+      sleep: deps.sleep,
+      now: deps.now,
+    });
+    const number = await resolvePullRequest(deps, client, repository, plan);
+    if (number === null) return null;
+    const result = await upsertStickyComment(client, repository, number, marker, body);
+    deps.log.info(
+      `skillgate: ${result.action} the comment on pull request #${number}: ${result.url}`,
+    );
+    return result.url;
+  } catch (error) {
+    const status = (error as { status?: unknown }).status;
+    if (status === 403) {
+      deps.log.warning(
+        'skillgate: GitHub refused to write the comment (403): this token is read-only here (a pull request from a fork or from Dependabot) or the job lacks `permissions: pull-requests: write`. ' +
+          READ_ONLY_HINT,
+      );
+    } else {
+      const message = error instanceof Error ? error.message : String(error);
+      deps.log.warning(`skillgate: could not post the comment: ${message}`);
+    }
+    return null;
+  }
+}
+
+async function resolvePullRequest(
+  deps: ActionDependencies,
+  client: GitHubClient,
+  repository: { owner: string; repo: string },
+  plan: Exclude<CommentPlan, { kind: 'none' } | { kind: 'read-only' }>,
+): Promise<number | null> {
+  switch (plan.kind) {
+    case 'pull-request':
+      return plan.number;
+    case 'commit': {
+      const open = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
+        (p) => p.state === 'open',
+      );
+      const chosen = open.find((p) => p.headSha === plan.sha) ?? open[0];
+      if (chosen === undefined) {
+        deps.log.info(
+          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} belongs to no open pull request`,
+        );
+        return null;
+      }
+      return chosen.number;
+    }
+    case 'workflow-run': {
+      // The pull request must be the one whose head is the commit the earlier run tested;
+      // a number coming with an untrusted artifact is checked, never taken on faith.
+      if (plan.number !== null) {
+        const pr = await getPullRequest(client, repository, plan.number);
+        if (pr.headSha === plan.headSha) return pr.number;
+        deps.log.warning(
+          `skillgate: no comment: pull request #${plan.number} is at ${pr.headSha.slice(0, 12)}, not at the tested commit ${plan.headSha.slice(0, 12)}`,
+        );
+        return null;
+      }
+      if (plan.head !== null) {
+        const match = (await openPullRequestsFromHead(client, repository, plan.head)).find(
+          (p) => p.headSha === plan.headSha,
+        );
+        if (match !== undefined) return match.number;
+      }
+      deps.log.info(
+        `skillgate: no comment: no open pull request has head ${plan.headSha.slice(0, 12)}`,
+      );
+      return null;
+    }
+  }
+}

@@ -1,0 +1,349 @@
+import { InputError } from '../core/inputError.js';
+import type { FileSummary } from '../core/panel.js';
+import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
+import { COLUMN_ROLES, type ColumnMapping } from '../reading/columnMapping.js';
+import type {
+  BootstrapSummary,
+  Comparison,
+  DieboldMarianoSummary,
+  InputsSummary,
+  Interval,
+  PolicySummary,
+  Report,
+} from '../report/reportModel.js';
+import type { Settings } from '../settings/settings.js';
+
+/** Larger report files are refused before parsing. */
+export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
+
+/**
+ * Reads a JSON report written by an earlier run (typically an artifact of a pull request from
+ * a fork) as untrusted data. A fresh Report is built field by field: every enum is checked
+ * against its allowed values, every number must be a finite number (or null where the model
+ * allows it), every string a string; unknown fields are dropped. Renderers then escape the
+ * strings as they do for any input. Anything malformed is an InputError naming the file and
+ * the JSON path of the offending field.
+ */
+export function parseUntrustedReport(text: string, source: string): Report {
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(text);
+  } catch (error) {
+    throw new InputError(`is not valid JSON: ${(error as Error).message}`, { file: source });
+  }
+  return readReport(new Reader(parsed, '$', source));
+}
+
+class Reader {
+  constructor(
+    readonly value: unknown,
+    readonly path: string,
+    readonly source: string,
+  ) {}
+
+  fail(expected: string): never {
+    const shown = JSON.stringify(this.value) ?? String(this.value);
+    throw new InputError(`field ${this.path} must be ${expected}`, {
+      file: this.source,
+      value: shown.length > 80 ? `${shown.slice(0, 80)}…` : shown,
+    });
+  }
+  field(name: string): Reader {
+    if (typeof this.value !== 'object' || this.value === null || Array.isArray(this.value)) {
+      this.fail('an object');
+    }
+    const object = this.value as Record<string, unknown>;
+    return new Reader(
+      Object.hasOwn(object, name) ? object[name] : undefined,
+      `${this.path}.${name}`,
+      this.source,
+    );
+  }
+  items(): Reader[] {
+    if (!Array.isArray(this.value)) this.fail('an array');
+    return (this.value as unknown[]).map(
+      (v, i) => new Reader(v, `${this.path}[${i}]`, this.source),
+    );
+  }
+  string(): string {
+    if (typeof this.value !== 'string') this.fail('a string');
+    return this.value as string;
+  }
+  stringOrNull(): string | null {
+    return this.value === null ? null : this.string();
+  }
+  number(): number {
+    if (typeof this.value !== 'number' || !Number.isFinite(this.value))
+      this.fail('a finite number');
+    return this.value as number;
+  }
+  numberOrNull(): number | null {
+    return this.value === null ? null : this.number();
+  }
+  integer(min = 0): number {
+    const x = this.number();
+    if (!Number.isSafeInteger(x) || x < min) this.fail(`an integer ≥ ${min}`);
+    return x;
+  }
+  integerOrNull(): number | null {
+    return this.value === null ? null : this.integer();
+  }
+  boolean(): boolean {
+    if (typeof this.value !== 'boolean') this.fail('true or false');
+    return this.value as boolean;
+  }
+  booleanOrNull(): boolean | null {
+    return this.value === null ? null : this.boolean();
+  }
+  oneOf<T extends string>(choices: readonly T[]): T {
+    if (typeof this.value !== 'string' || !(choices as readonly string[]).includes(this.value)) {
+      this.fail(`one of ${choices.join(', ')}`);
+    }
+    return this.value as T;
+  }
+  matching(pattern: RegExp, expected: string): string {
+    const text = this.string();
+    if (!pattern.test(text)) this.fail(expected);
+    return text;
+  }
+  strings(): string[] {
+    return this.items().map((r) => r.string());
+  }
+  /**
+   * A flat object of estimator diagnostics. Renderers do not show these, so entries that are
+   * not a finite number, string, boolean or null (say, a list of notes) are dropped, not refused.
+   */
+  scalars<T extends string | number | boolean>(): Readonly<Record<string, T>> | null {
+    if (this.value === null || this.value === undefined) return null;
+    if (typeof this.value !== 'object' || Array.isArray(this.value)) this.fail('an object or null');
+    const out: Record<string, T> = {};
+    for (const [key, v] of Object.entries(this.value as Record<string, unknown>)) {
+      if (!/^[A-Za-z][A-Za-z0-9]{0,40}$/.test(key)) continue;
+      const keep =
+        v === null ||
+        typeof v === 'string' ||
+        typeof v === 'boolean' ||
+        (typeof v === 'number' && Number.isFinite(v));
+      if (keep) out[key] = v as T;
+    }
+    return out;
+  }
+}
+
+const VERDICTS = ['pass', 'warn', 'fail'] as const;
+const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
+const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
+const ESTIMATORS = ['ewc', 'bartlett', 'uniform'] as const;
+const MARGIN_KINDS = ['relative', 'absolute'] as const;
+
+function readReport(r: Reader): Report {
+  const tool = r.field('tool');
+  tool.field('name').oneOf(['skillgate']);
+  const comparisons = r.field('comparisons').items().map(readComparison);
+  if (comparisons.length === 0) r.field('comparisons').fail('a non-empty array');
+  return {
+    tool: {
+      name: 'skillgate',
+      version: tool.field('version').matching(/^[0-9A-Za-z.+-]{1,40}$/, 'a version such as 0.1.0'),
+    },
+    name: r.field('name').string(),
+    verdict: r.field('verdict').oneOf(VERDICTS),
+    headline: r.field('headline').string(),
+    policy: readPolicy(r.field('policy')),
+    comparisons,
+    inputs: readInputs(r.field('inputs')),
+    settings: readSettings(r.field('settings')),
+    reasons: r.field('reasons').strings(),
+  };
+}
+
+function readPolicy(r: Reader): PolicySummary {
+  return {
+    policy: r.field('policy').oneOf(POLICIES),
+    agreement: r.field('agreement').oneOf(AGREEMENTS),
+    alpha: r.field('alpha').number(),
+    margin: r.field('margin').number(),
+    marginKind: r.field('marginKind').oneOf(MARGIN_KINDS),
+    nullHypothesis: r.field('nullHypothesis').string(),
+    alternative: r.field('alternative').string(),
+    onReject: r.field('onReject').oneOf(['fail', 'pass']),
+    baselineFactor: r.field('baselineFactor').number(),
+    boundary: r.field('boundary').number(),
+  };
+}
+
+function readInterval(r: Reader): Interval | null {
+  if (r.value === null) return null;
+  return {
+    level: r.field('level').number(),
+    lower: r.field('lower').number(),
+    upper: r.field('upper').number(),
+    method: r.field('method').string(),
+  };
+}
+
+function readComparison(r: Reader): Comparison {
+  const horizon = r.field('horizon');
+  const series = r.field('series');
+  const rejected = r.field('rejected');
+  return {
+    loss: r.field('loss').oneOf<LossName>(LOSS_NAMES),
+    horizon: horizon.value === 'all' ? 'all' : horizon.integer(1),
+    series: series.string(),
+    n: r.field('n').integer(),
+    rows: r.field('rows').integer(),
+    maxHorizon: r.field('maxHorizon').integer(),
+    firstTimestamp: r.field('firstTimestamp').stringOrNull(),
+    lastTimestamp: r.field('lastTimestamp').stringOrNull(),
+    meanBaselineLoss: r.field('meanBaselineLoss').number(),
+    meanCandidateLoss: r.field('meanCandidateLoss').number(),
+    meanDifference: r.field('meanDifference').number(),
+    relativeDifference: r.field('relativeDifference').numberOrNull(),
+    meanTestedDifferential: r.field('meanTestedDifferential').number(),
+    dieboldMariano: readDieboldMariano(r.field('dieboldMariano')),
+    bootstrap: readBootstrap(r.field('bootstrap')),
+    verdict: r.field('verdict').oneOf(VERDICTS),
+    reasons: r.field('reasons').strings(),
+    rejected: {
+      dieboldMariano: rejected.field('dieboldMariano').booleanOrNull(),
+      bootstrap: rejected.field('bootstrap').booleanOrNull(),
+    },
+  };
+}
+
+function readDieboldMariano(r: Reader): DieboldMarianoSummary {
+  const small = r.field('smallSample');
+  return {
+    state: r.field('state').oneOf(['ok', 'identical', 'zero-variance', 'too-short']),
+    estimator: r.field('estimator').oneOf(ESTIMATORS),
+    requestedEstimator: r.field('requestedEstimator').oneOf(ESTIMATORS),
+    statistic: r.field('statistic').numberOrNull(),
+    pValue: r.field('pValue').numberOrNull(),
+    pValueTwoSided: r.field('pValueTwoSided').numberOrNull(),
+    decisionPValue: r.field('decisionPValue').numberOrNull(),
+    variance: r.field('variance').numberOrNull(),
+    longRunVariance: r.field('longRunVariance').numberOrNull(),
+    lag: r.field('lag').integerOrNull(),
+    degreesOfFreedom: r.field('degreesOfFreedom').numberOrNull(),
+    smallSample:
+      small.value === null
+        ? null
+        : {
+            statistic: small.field('statistic').number(),
+            pValue: small.field('pValue').number(),
+            pValueTwoSided: small.field('pValueTwoSided').number(),
+            degreesOfFreedom: small.field('degreesOfFreedom').number(),
+          },
+    interval: readInterval(r.field('interval')),
+    lagSelection: r.field('lagSelection').scalars<number | string>(),
+    notes: r.field('notes').strings(),
+  };
+}
+
+function readBootstrap(r: Reader): BootstrapSummary {
+  return {
+    state: r.field('state').oneOf(['ok', 'identical', 'too-short']),
+    resamples: r.field('resamples').integer(),
+    seed: r.field('seed').integer(),
+    expectedBlockLength: r.field('expectedBlockLength').number(),
+    blockLengthRule: r.field('blockLengthRule').oneOf(['auto', 'fixed']),
+    blockLengthSelection: r.field('blockLengthSelection').scalars<number | boolean>(),
+    standardError: r.field('standardError').numberOrNull(),
+    interval: readInterval(r.field('interval')),
+    pValue: r.field('pValue').numberOrNull(),
+    pValueTwoSided: r.field('pValueTwoSided').numberOrNull(),
+    decisionPValue: r.field('decisionPValue').numberOrNull(),
+    notes: r.field('notes').strings(),
+  };
+}
+
+function readFile(r: Reader): FileSummary {
+  return {
+    role: r.field('role').oneOf(['baseline', 'candidate', 'actuals']),
+    path: r.field('path').string(),
+    rows: r.field('rows').integer(),
+    sha256: r.field('sha256').matching(/^sha256:[0-9a-f]{64}$/, 'sha256: and 64 hex digits'),
+    columns: r.field('columns').strings(),
+    ignoredColumns: r.field('ignoredColumns').strings(),
+    blankLines: r.field('blankLines').integer(),
+  };
+}
+
+function readInputs(r: Reader): InputsSummary {
+  const d = r.field('rowsDropped');
+  const examples = r.field('examples');
+  const timestamps = r.field('timestamps');
+  return {
+    files: r.field('files').items().map(readFile),
+    rowsMatched: r.field('rowsMatched').integer(),
+    rowsDropped: {
+      baseline: d.field('baseline').integer(),
+      candidate: d.field('candidate').integer(),
+      withoutActual: d.field('withoutActual').integer(),
+      actualsUnused: d.field('actualsUnused').integer(),
+      skippedByLoss: d.field('skippedByLoss').integer(),
+    },
+    examples: {
+      baselineOnly: examples.field('baselineOnly').strings(),
+      candidateOnly: examples.field('candidateOnly').strings(),
+    },
+    timestamps: {
+      count: timestamps.field('count').integer(),
+      kind: timestamps.field('kind').oneOf(['number', 'datetime', 'text']),
+      first: timestamps.field('first').stringOrNull(),
+      last: timestamps.field('last').stringOrNull(),
+    },
+    series: r.field('series').integer(),
+    horizons: r
+      .field('horizons')
+      .items()
+      .map((h) => h.integer(1)),
+    quantileLevels: r
+      .field('quantileLevels')
+      .items()
+      .map((q) => q.number()),
+  };
+}
+
+function readSettings(r: Reader): Settings {
+  const columns: Record<string, string> = {};
+  const mapping = r.field('columns');
+  for (const role of COLUMN_ROLES) {
+    const name = mapping.field(role);
+    if (name.value !== undefined) columns[role] = name.string();
+  }
+  const lag = r.field('lag');
+  const lagKind = lag.field('kind').oneOf(['auto', 'horizon', 'fixed']);
+  const block = r.field('blockLength');
+  const blockKind = block.field('kind').oneOf(['auto', 'fixed']);
+  return {
+    name: r.field('name').string(),
+    baseline: r.field('baseline').string(),
+    candidate: r.field('candidate').string(),
+    actuals: r.field('actuals').stringOrNull(),
+    columns: columns as ColumnMapping,
+    format: r.field('format').oneOf(['auto', 'csv', 'tsv']),
+    loss: r.field('loss').oneOf<LossName>(LOSS_NAMES),
+    zeroActuals: r.field('zeroActuals').oneOf(['error', 'skip']),
+    alpha: r.field('alpha').number(),
+    margin: r.field('margin').number(),
+    marginKind: r.field('marginKind').oneOf(MARGIN_KINDS),
+    policy: r.field('policy').oneOf(POLICIES),
+    agreement: r.field('agreement').oneOf(AGREEMENTS),
+    variance: r.field('variance').oneOf(ESTIMATORS),
+    lag:
+      lagKind === 'fixed' ? { kind: 'fixed', lag: lag.field('lag').integer() } : { kind: lagKind },
+    blockLength:
+      blockKind === 'fixed'
+        ? { kind: 'fixed', length: block.field('length').number() }
+        : { kind: 'auto' },
+    resamples: r.field('resamples').integer(),
+    seed: r.field('seed').integer(),
+    confidence: r.field('confidence').number(),
+    minPoints: r.field('minPoints').integer(),
+    shortData: r.field('shortData').oneOf(['warn', 'fail']),
+    allowMissing: r.field('allowMissing').boolean(),
+    json: r.field('json').stringOrNull(),
+    markdown: r.field('markdown').stringOrNull(),
+  };
+}
