@@ -6,14 +6,15 @@ import { studentTTwoSided, studentTUpperTail } from './distributions.js';
  *
  *   √((n + 1 − 2h + h(h − 1)/n) / n)  =  (1/n) √((n − h)(n − h + 1)).
  *
+ * Computed in the product form, which avoids the cancellation of the sum when h is close to n.
  * Positive exactly when h < n; returns null otherwise (the correction is undefined).
  *
- * @example harveyLeybourneNewboldFactor(100, 1) // √(100/100) = 1
+ * @example harveyLeybourneNewboldFactor(100, 1) // √(99/100) ≈ 0.99499
  * @example harveyLeybourneNewboldFactor(10, 3)  // √((10 + 1 − 6 + 0.6)/10) ≈ 0.74833
  */
 export function harveyLeybourneNewboldFactor(n: number, horizon: number): number | null {
-  const ratio = (n + 1 - 2 * horizon + (horizon * (horizon - 1)) / n) / n;
-  return ratio > 0 && horizon < n ? Math.sqrt(ratio) : null;
+  if (!(horizon < n)) return null;
+  return Math.sqrt((n - horizon) * (n - horizon + 1)) / n;
 }
 
 export interface SmallSampleTest {
@@ -32,7 +33,7 @@ export interface SmallSampleTest {
  * p-values: one-sided for large values (upper tail), and two-sided 2 F(−|x|).
  * Null when h ≥ n.
  *
- * @example harveyLeybourneNewbold(2, 100, 1) // { statistic: 2, pValue ≈ 0.02412, …, degreesOfFreedom: 99 }
+ * @example harveyLeybourneNewbold(2, 100, 1) // { statistic: 2√0.99 ≈ 1.98997, pValue ≈ 0.02468, …, degreesOfFreedom: 99 }
  */
 export function harveyLeybourneNewbold(
   statistic: number,

@@ -259,7 +259,7 @@ dist <- function(fn, call, args, value) {
   obj(list(fn = str(fn), call = str(call), args = arr(args), value = num(value)), indent = "    ")
 }
 entries <- character(0)
-for (x in c(-8, -3, -1.5, 0, 0.5, 2, 5)) {
+for (x in c(-30, -8, -3, -1.5, 0, 0.5, 2, 5, 30)) {
   entries <- c(entries,
     dist("standardNormalCdf", sprintf("pnorm(%s)", num(x)), x, pnorm(x)),
     dist("standardNormalUpperTail", sprintf("pnorm(%s, lower.tail = FALSE)", num(x)), x,
@@ -270,7 +270,7 @@ for (p in c(0.001, 0.025, 0.5, 0.95, 0.999)) {
   entries <- c(entries, dist("standardNormalQuantile", sprintf("qnorm(%s)", num(p)), p, qnorm(p)))
 }
 for (df in c(1, 2, 5, 30, 455)) {
-  for (x in c(-6, -2, 0, 1.5, 4)) {
+  for (x in c(-40, -6, -2, 0, 1.5, 4, 40)) {
     entries <- c(entries,
       dist("studentTCdf", sprintf("pt(%s, %s)", num(x), num(df)), c(x, df), pt(x, df)),
       dist("studentTUpperTail", sprintf("pt(%s, %s, lower.tail = FALSE)", num(x), num(df)),
