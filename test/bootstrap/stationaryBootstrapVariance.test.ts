@@ -1,0 +1,68 @@
+import { describe, expect, it } from 'vitest';
+import { stationaryBootstrapVariance } from '../../src/statistics/bootstrap/stationaryBootstrapVariance.js';
+import { expectClose, readFixture, type SeriesFixture } from './expectClose.js';
+
+interface VarianceFixture {
+  cases: { series: string; expectedBlockLength: number; variance: number }[];
+}
+
+/** Lemma 1 summed over every lag, O(n²), as DESIGN.md writes it. */
+function fullSum(d: Float64Array, b: number): number {
+  const n = d.length;
+  const mean = d.reduce((a, x) => a + x, 0) / n;
+  const u = d.map((x) => x - mean);
+  const q = 1 - 1 / b;
+  let total = 0;
+  for (let k = 0; k < n; k++) {
+    let c = 0;
+    for (let t = k; t < n; t++) c += u[t]! * u[t - k]!;
+    c /= n;
+    total += k === 0 ? c : 2 * ((1 - k / n) * q ** k + (k / n) * q ** (n - k)) * c;
+  }
+  return total / n;
+}
+
+describe('stationaryBootstrapVariance (Politis & Romano 1994, Lemma 1)', () => {
+  it('matches the worked example: d = (1, 2, 3), b = 2 gives 7/54', () => {
+    expectClose(stationaryBootstrapVariance(Float64Array.of(1, 2, 3), 2), 7 / 54, 1e-15, {
+      what: 'Var*(mean*)',
+      source: 'hand computation in the doc comment',
+    });
+  });
+
+  it('agrees with the circular-autocovariance evaluation in R to 1e-9 (relative)', async () => {
+    const series = await readFixture<SeriesFixture>('bootstrap_series.json');
+    const fixture = await readFixture<VarianceFixture>('bootstrap_variance.json');
+    expect(fixture.cases.length).toBe(20);
+    for (const c of fixture.cases) {
+      const values = series.series.find((s) => s.name === c.series)!.values;
+      const actual = stationaryBootstrapVariance(Float64Array.from(values), c.expectedBlockLength);
+      const relative = Math.abs(actual / c.variance - 1);
+      expect(
+        relative <= 1e-9,
+        `${c.series}, b = ${c.expectedBlockLength}: R (bootstrap_series.R, circular form) ${c.variance}, actual ${actual}, relative difference ${relative}`,
+      ).toBe(true);
+    }
+  });
+
+  it('skips only negligible lags: equals the full O(n²) sum to 1e-12 (relative)', () => {
+    const n = 700;
+    const d = Float64Array.from(
+      { length: n },
+      (_, t) => Math.sin(0.05 * t) + Math.cos(0.9 * t * t),
+    );
+    for (const b of [1, 1.3, 6, 90, 2000, 1e7]) {
+      const actual = stationaryBootstrapVariance(d, b);
+      const expected = fullSum(d, b);
+      expect(
+        Math.abs(actual / expected - 1) <= 1e-12,
+        `b ${b}: full sum ${expected}, actual ${actual}`,
+      ).toBe(true);
+    }
+  });
+
+  it('is 0 for a constant series and refuses b < 1', () => {
+    expect(stationaryBootstrapVariance(new Float64Array(10).fill(3), 4)).toBe(0);
+    expect(() => stationaryBootstrapVariance(Float64Array.of(1, 2), 0.5)).toThrow(RangeError);
+  });
+});
