@@ -1,9 +1,10 @@
 // Bundles the CLI and the action into dist/ with esbuild. The output is committed; a test
 // rebuilds into a temporary folder and fails when the committed files differ.
-import { build } from 'esbuild';
+
 import { existsSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { build } from 'esbuild';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const outdir = process.argv[2] ? path.resolve(process.argv[2]) : path.join(root, 'dist');

@@ -13,8 +13,13 @@ export function helpText(): string {
     'Options:',
   ];
   for (const o of ENGINE_OPTIONS) {
-    const flag = o.flag ? `--${o.name}` : `--${o.name} ${o.choices ? o.choices.join('|') : 'VALUE'}`;
-    const dflt = o.defaultValue === null || o.defaultValue === '' || o.flag ? '' : ` (default ${o.defaultValue})`;
+    const flag = o.flag
+      ? `--${o.name}`
+      : `--${o.name} ${o.choices ? o.choices.join('|') : 'VALUE'}`;
+    const dflt =
+      o.defaultValue === null || o.defaultValue === '' || o.flag
+        ? ''
+        : ` (default ${o.defaultValue})`;
     lines.push(`  ${flag}`, `      ${o.help}${dflt}`);
   }
   lines.push(

@@ -26,7 +26,8 @@ async function main(argv: readonly string[]): Promise<number> {
     const progress = progressReporter(process.stderr);
     const { report } = await runComparison(settings, { onProgress: progress.update });
     progress.done();
-    if (settings.json !== null) await writeFile(settings.json, `${JSON.stringify(report, null, 2)}\n`);
+    if (settings.json !== null)
+      await writeFile(settings.json, `${JSON.stringify(report, null, 2)}\n`);
     if (settings.markdown !== null) await writeFile(settings.markdown, renderMarkdown(report));
     if (!request.quiet) {
       const color = process.stdout.isTTY === true && process.env.NO_COLOR === undefined;
@@ -42,7 +43,8 @@ async function main(argv: readonly string[]): Promise<number> {
     process.stderr.write(
       `skillgate: internal error: ${message}\nThis is a bug in skillgate; set SKILLGATE_DEBUG=1 for details.\n`,
     );
-    if (process.env.SKILLGATE_DEBUG && error instanceof Error) process.stderr.write(`${error.stack}\n`);
+    if (process.env.SKILLGATE_DEBUG && error instanceof Error)
+      process.stderr.write(`${error.stack}\n`);
     return 3;
   }
 }

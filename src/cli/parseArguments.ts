@@ -16,13 +16,20 @@ export function parseArguments(argv: readonly string[]): CliRequest {
   if (argv.includes('--version')) return { kind: 'version' };
   const [command, ...rest] = argv;
   if (command !== 'compare') {
-    throw new InputError(`unknown command "${command}"; the command is "compare" (see skillgate --help)`);
+    throw new InputError(
+      `unknown command "${command}"; the command is "compare" (see skillgate --help)`,
+    );
   }
   const spec: Record<string, { type: 'string' | 'boolean' }> = { quiet: { type: 'boolean' } };
   for (const o of ENGINE_OPTIONS) spec[o.name] = { type: o.flag ? 'boolean' : 'string' };
   let values: Record<string, string | boolean | undefined>;
   try {
-    ({ values } = parseArgs({ args: [...rest], options: spec, strict: true, allowPositionals: false }));
+    ({ values } = parseArgs({
+      args: [...rest],
+      options: spec,
+      strict: true,
+      allowPositionals: false,
+    }));
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     throw new InputError(`${message.replace(/\.$/, '')}; see skillgate --help`);

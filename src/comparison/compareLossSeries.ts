@@ -1,4 +1,4 @@
-import { lossDifferential, type LossSeries } from '../aggregation/lossSeries.js';
+import { type LossSeries, lossDifferential } from '../aggregation/lossSeries.js';
 import { decideComparison } from '../decision/decideComparison.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
 import type { LossName } from '../losses/lossName.js';
@@ -31,7 +31,12 @@ export function compareLossSeries(
   const meanTestedDifferential = mean(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
 
-  const dieboldMariano: DieboldMarianoSummary = runDieboldMariano(d, series.maxHorizon, hypothesis, settings);
+  const dieboldMariano: DieboldMarianoSummary = runDieboldMariano(
+    d,
+    series.maxHorizon,
+    hypothesis,
+    settings,
+  );
   const bootstrap: BootstrapSummary = runBootstrap(d, hypothesis, settings);
   const decision = decideComparison({
     hypothesis,

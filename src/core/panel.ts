@@ -9,9 +9,12 @@ export type TimestampKind = 'number' | 'datetime' | 'text';
 
 /** Point and quantile forecasts of one model, aligned to the panel's rows. */
 export interface ModelForecasts {
-  /** Point forecasts, or null when the file has no prediction column. */
+  /** Point forecasts, or null unless both models' files have a prediction column. */
   readonly prediction: Float64Array | null;
-  /** Quantile forecasts by level (0 < level < 1), sorted by level ascending. */
+  /**
+   * Quantile forecasts by level (0 < level < 1), sorted by level ascending; only the levels both
+   * models have (see AlignedPanel.quantileLevels).
+   */
   readonly quantiles: readonly QuantileColumn[];
 }
 

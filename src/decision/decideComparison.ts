@@ -35,7 +35,10 @@ export interface Decision {
   readonly verdict: Verdict;
   readonly reasons: string[];
   /** Whether each test rejected H0 (null: it could not be computed). */
-  readonly rejected: { readonly dieboldMariano: boolean | null; readonly bootstrap: boolean | null };
+  readonly rejected: {
+    readonly dieboldMariano: boolean | null;
+    readonly bootstrap: boolean | null;
+  };
 }
 
 /**
@@ -51,7 +54,8 @@ export function decideComparison(input: DecisionInput): Decision {
   const { hypothesis, alpha } = input;
   const reasons: string[] = [];
   if (input.identicalLosses) {
-    const verdict: Verdict = hypothesis.rejectWhen === 'below' && hypothesis.boundary < 0 ? 'fail' : 'pass';
+    const verdict: Verdict =
+      hypothesis.rejectWhen === 'below' && hypothesis.boundary < 0 ? 'fail' : 'pass';
     reasons.push(
       verdict === 'pass'
         ? 'The candidate has exactly the same loss as the baseline on every row.'
@@ -121,8 +125,9 @@ function describeTest(
       rejected ? 'evidence that' : 'no evidence that'
     } ${hypothesis.alternative}.`;
   }
-  const p = formatPValue(e.pValue);
+  const text = formatPValue(e.pValue);
+  const p = text.startsWith('<') ? `p ${text}` : `p = ${text}`;
   return rejected
-    ? `${e.label}: p = ${p} ≤ α = ${alpha}: evidence that ${hypothesis.alternative}.`
-    : `${e.label}: p = ${p} > α = ${alpha}: no evidence that ${hypothesis.alternative}.`;
+    ? `${e.label}: ${p} ≤ α = ${alpha}: evidence that ${hypothesis.alternative}.`
+    : `${e.label}: ${p} > α = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }

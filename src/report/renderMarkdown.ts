@@ -125,7 +125,9 @@ function inputSection(report: Report): string[] {
   const out = ['<details><summary>Inputs and coverage</summary>', ''];
   out.push('| file | role | rows | sha256 |', '|---|---|---:|---|');
   for (const f of i.files) {
-    out.push(`| ${esc(f.path)} | ${f.role} | ${f.rows} | \`${f.sha256.replace(/^sha256:/, '').slice(0, 12)}\` |`);
+    out.push(
+      `| ${esc(f.path)} | ${f.role} | ${f.rows} | \`${f.sha256.replace(/^sha256:/, '').slice(0, 12)}\` |`,
+    );
   }
   const d = i.rowsDropped;
   out.push(
@@ -136,16 +138,24 @@ function inputSection(report: Report): string[] {
     `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`,
   );
   if (i.examples.baselineOnly.length > 0) {
-    out.push(`Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => esc(k)).join(', ')}.`);
+    out.push(
+      `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => esc(k)).join(', ')}.`,
+    );
   }
   out.push('', '</details>');
   return out;
 }
 
 function settingsSection(report: Report): string[] {
-  const out = ['<details><summary>Settings in force</summary>', '', '| setting | value |', '|---|---|'];
+  const out = [
+    '<details><summary>Settings in force</summary>',
+    '',
+    '| setting | value |',
+    '|---|---|',
+  ];
   for (const [key, value] of Object.entries(report.settings)) {
-    const text = typeof value === 'object' && value !== null ? JSON.stringify(value) : String(value);
+    const text =
+      typeof value === 'object' && value !== null ? JSON.stringify(value) : String(value);
     out.push(`| ${key} | ${esc(text)} |`);
   }
   out.push('', '</details>');

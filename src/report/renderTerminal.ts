@@ -12,13 +12,25 @@ export interface TerminalOptions {
  * series name cannot move the cursor or recolour the screen.
  */
 export function renderTerminal(report: Report, options: TerminalOptions): string {
-  const paint = (code: string, text: string) => (options.color ? `\x1b[${code}m${text}\x1b[0m` : text);
+  const paint = (code: string, text: string) =>
+    options.color ? `\x1b[${code}m${text}\x1b[0m` : text;
   const verdictColor = { pass: '32', warn: '33', fail: '31' }[report.verdict];
   const title = report.name === '' ? 'skillgate' : `skillgate · ${clean(report.name)}`;
   const out: string[] = [];
   out.push(`${paint('1', title)}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`);
   out.push(wrap(report.headline, 100), '');
-  const header = ['comparison', 'n', 'baseline', 'candidate', 'diff', 'relative', 'p (DM)', 'p (boot)', 'interval (boot)', 'verdict'];
+  const header = [
+    'comparison',
+    'n',
+    'baseline',
+    'candidate',
+    'diff',
+    'relative',
+    'p (DM)',
+    'p (boot)',
+    'interval (boot)',
+    'verdict',
+  ];
   const rows = report.comparisons.map((c) => [
     scope(c),
     String(c.n),
@@ -35,7 +47,9 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   ]);
   const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)));
   const line = (cells: string[]) =>
-    cells.map((cell, j) => (j === 0 || j >= 8 ? cell.padEnd(widths[j]!) : cell.padStart(widths[j]!))).join('  ');
+    cells
+      .map((cell, j) => (j === 0 || j >= 8 ? cell.padEnd(widths[j]!) : cell.padStart(widths[j]!)))
+      .join('  ');
   out.push(paint('2', line(header)));
   for (const r of rows) out.push(line(r));
   out.push('');

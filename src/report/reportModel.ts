@@ -1,7 +1,9 @@
 import type { FileSummary } from '../core/panel.js';
-import type { LossName } from '../losses/lossName.js';
 import type { Verdict } from '../decision/verdict.js';
+import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
+import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
+import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
 
 /**
  * The JSON report: the one artefact every renderer (terminal, Markdown comment, job summary)
@@ -62,7 +64,10 @@ export interface Comparison {
   readonly bootstrap: BootstrapSummary;
   readonly verdict: Verdict;
   readonly reasons: readonly string[];
-  readonly rejected: { readonly dieboldMariano: boolean | null; readonly bootstrap: boolean | null };
+  readonly rejected: {
+    readonly dieboldMariano: boolean | null;
+    readonly bootstrap: boolean | null;
+  };
 }
 
 export interface DieboldMarianoSummary {
@@ -88,7 +93,7 @@ export interface DieboldMarianoSummary {
   } | null;
   /** Two-sided interval for E[d] (tested differential), from the same variance and reference. */
   readonly interval: Interval | null;
-  readonly lagSelection: Readonly<Record<string, number | string>> | null;
+  readonly lagSelection: DieboldMarianoResult['lagSelection'];
   readonly notes: readonly string[];
 }
 
@@ -98,7 +103,8 @@ export interface BootstrapSummary {
   readonly seed: number;
   readonly expectedBlockLength: number;
   readonly blockLengthRule: 'auto' | 'fixed';
-  readonly blockLengthSelection: Readonly<Record<string, number | boolean>> | null;
+  /** Politis–White quantities when the block length was chosen automatically. */
+  readonly blockLengthSelection: AutomaticBlockLength | null;
   readonly standardError: number | null;
   /** Interval for E[d] (tested differential). */
   readonly interval: Interval | null;
@@ -131,7 +137,10 @@ export interface InputsSummary {
     /** Rows skipped by the loss (zero actuals under ape with zero-actuals: skip). */
     readonly skippedByLoss: number;
   };
-  readonly examples: { readonly baselineOnly: readonly string[]; readonly candidateOnly: readonly string[] };
+  readonly examples: {
+    readonly baselineOnly: readonly string[];
+    readonly candidateOnly: readonly string[];
+  };
   readonly timestamps: {
     readonly count: number;
     readonly kind: 'number' | 'datetime' | 'text';

@@ -40,7 +40,11 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     return x;
   };
   const integer = (name: string, min: number, max = Number.MAX_SAFE_INTEGER): number =>
-    number(name, (x) => Number.isInteger(x) && x >= min && x <= max, `an integer from ${min} to ${max}`);
+    number(
+      name,
+      (x) => Number.isInteger(x) && x >= min && x <= max,
+      `an integer from ${min} to ${max}`,
+    );
   const bool = (name: string): boolean => {
     const text = value(name).toLowerCase();
     if (text === 'true') return true;
@@ -67,7 +71,11 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     blockLength: parseBlockLength(value('block-length'), label('block-length')),
     resamples: integer('resamples', 99, 10_000_000),
     seed: integer('seed', 0, 2 ** 31 - 1),
-    confidence: number('confidence', (x) => x > 0.5 && x < 1, 'a number between 0.5 and 1, such as 0.95'),
+    confidence: number(
+      'confidence',
+      (x) => x > 0.5 && x < 1,
+      'a number between 0.5 and 1, such as 0.95',
+    ),
     minPoints: integer('min-points', 1),
     shortData: value('short-data') as Settings['shortData'],
     allowMissing: bool('allow-missing'),

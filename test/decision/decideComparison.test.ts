@@ -14,7 +14,11 @@ const base = (over: Partial<DecisionInput> = {}): DecisionInput => ({
   identicalLosses: false,
   ...over,
 });
-const ev = (pValue: number | null, state: 'ok' | 'too-short' | 'zero-variance' = 'ok', mean = 0) => ({
+const ev = (
+  pValue: number | null,
+  state: 'ok' | 'too-short' | 'zero-variance' = 'ok',
+  mean = 0,
+) => ({
   label: 't',
   pValue,
   mean,
@@ -23,14 +27,18 @@ const ev = (pValue: number | null, state: 'ok' | 'too-short' | 'zero-variance' =
 
 describe('decideComparison under the default policy (no-regression)', () => {
   it('fails when both tests reject, passes when neither does, warns on a split', () => {
-    expect(decideComparison(base({ dieboldMariano: ev(0.01), bootstrap: ev(0.02) })).verdict).toBe('fail');
+    expect(decideComparison(base({ dieboldMariano: ev(0.01), bootstrap: ev(0.02) })).verdict).toBe(
+      'fail',
+    );
     expect(decideComparison(base()).verdict).toBe('pass');
     const split = decideComparison(base({ dieboldMariano: ev(0.01), bootstrap: ev(0.2) }));
     expect(split.verdict).toBe('warn');
     expect(split.reasons.join(' ')).toMatch(/disagree/);
   });
   it('rejects at p = α exactly (p ≤ α)', () => {
-    expect(decideComparison(base({ dieboldMariano: ev(0.05), bootstrap: ev(0.05) })).verdict).toBe('fail');
+    expect(decideComparison(base({ dieboldMariano: ev(0.05), bootstrap: ev(0.05) })).verdict).toBe(
+      'fail',
+    );
   });
   it('agreement either/dm/bootstrap', () => {
     const split = { dieboldMariano: ev(0.01), bootstrap: ev(0.2) };
@@ -49,12 +57,17 @@ describe('decideComparison under the default policy (no-regression)', () => {
   });
   it('a constant positive differential is decided by its sign', () => {
     const d = decideComparison(
-      base({ dieboldMariano: ev(null, 'zero-variance', 1), bootstrap: ev(null, 'zero-variance', 1) }),
+      base({
+        dieboldMariano: ev(null, 'zero-variance', 1),
+        bootstrap: ev(null, 'zero-variance', 1),
+      }),
     );
     expect(d.verdict).toBe('fail');
   });
   it('uncomputable tests give warn', () => {
-    const d = decideComparison(base({ dieboldMariano: ev(null, 'too-short'), bootstrap: ev(null, 'too-short') }));
+    const d = decideComparison(
+      base({ dieboldMariano: ev(null, 'too-short'), bootstrap: ev(null, 'too-short') }),
+    );
     expect(d.verdict).toBe('warn');
   });
 });
@@ -63,7 +76,10 @@ describe('decideComparison under non-inferiority and superiority', () => {
   it('passes only on evidence', () => {
     for (const policy of ['non-inferiority', 'superiority'] as const) {
       const hypothesis = hypothesisFor(policy, 0.02, 'relative');
-      expect(decideComparison(base({ hypothesis, dieboldMariano: ev(0.01), bootstrap: ev(0.01) })).verdict).toBe('pass');
+      expect(
+        decideComparison(base({ hypothesis, dieboldMariano: ev(0.01), bootstrap: ev(0.01) }))
+          .verdict,
+      ).toBe('pass');
       expect(decideComparison(base({ hypothesis })).verdict).toBe('fail');
       expect(decideComparison(base({ hypothesis, dieboldMariano: ev(0.01) })).verdict).toBe('warn');
     }
@@ -77,8 +93,17 @@ describe('decideComparison under non-inferiority and superiority', () => {
 
 describe('hypothesisFor', () => {
   it('maps margins to the tested differential', () => {
-    expect(hypothesisFor('no-regression', 0.02, 'relative')).toMatchObject({ baselineFactor: 1.02, boundary: 0 });
-    expect(hypothesisFor('no-regression', 0.5, 'absolute')).toMatchObject({ baselineFactor: 1, boundary: 0.5 });
-    expect(hypothesisFor('superiority', 0.5, 'absolute')).toMatchObject({ baselineFactor: 1, boundary: -0.5 });
+    expect(hypothesisFor('no-regression', 0.02, 'relative')).toMatchObject({
+      baselineFactor: 1.02,
+      boundary: 0,
+    });
+    expect(hypothesisFor('no-regression', 0.5, 'absolute')).toMatchObject({
+      baselineFactor: 1,
+      boundary: 0.5,
+    });
+    expect(hypothesisFor('superiority', 0.5, 'absolute')).toMatchObject({
+      baselineFactor: 1,
+      boundary: -0.5,
+    });
   });
 });
