@@ -7,11 +7,13 @@
  *
  * Tolerance: 1e-6 relative throughout (the two libraries agree with each other to ~1e-12).
  */
+import { existsSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { dieboldMariano, type LagRule } from '../../src/statistics/dieboldMariano.js';
 import { neweyWestBandwidth, selectLag } from '../../src/statistics/neweyWestLag.js';
 import { expectClose } from './closeTo.js';
-import { loadDieboldMarianoReferences } from './referenceFixtures.js';
+import { FIXTURES, loadDieboldMarianoReferences } from './referenceFixtures.js';
 
 const RELATIVE = 1e-6;
 const cases = loadDieboldMarianoReferences();
@@ -33,6 +35,30 @@ describe.each(cases)('$file', ({ file, ref }) => {
   const d = Float64Array.from(ref.d);
   const h = ref.horizon;
   const where = `${file} (${ref.dataset}; ${ref.loss} loss, h = ${h}, n = ${ref.n}, margin ${ref.margin})`;
+
+  const forecasts = (side: 'baseline' | 'candidate') =>
+    join(FIXTURES, `dm_${ref.name.replace(/_statsmodels$/, '')}_${side}.csv`);
+  it('the forecast CSVs reproduce d exactly (for end-to-end runs)', () => {
+    const read = (side: 'baseline' | 'candidate') => {
+      expect(existsSync(forecasts(side)), forecasts(side)).toBe(true);
+      const lines = readFileSync(forecasts(side), 'utf8').trim().split('\n');
+      expect(lines[0]).toBe('timestamp,horizon,actual,prediction');
+      return lines.slice(1).map((line) => line.split(',').map(Number));
+    };
+    const base = read('baseline');
+    const cand = read('candidate');
+    const loss = (actual: number, prediction: number) =>
+      ref.loss === 'squared'
+        ? (prediction - actual) * (prediction - actual)
+        : Math.abs(prediction - actual);
+    const again = base.map((row, i) => {
+      const [timestamp, horizon, actual, prediction] = row as [number, number, number, number];
+      const other = cand[i]!;
+      expect([timestamp, horizon, other[2]]).toEqual([i + 1, h, actual]);
+      return loss(actual, other[3]!) - loss(actual, prediction);
+    });
+    expect(again).toEqual(ref.d);
+  });
 
   it('automatic lag: pilot lag, s0, s1, bandwidth and lag', () => {
     const bw = neweyWestBandwidth(d);

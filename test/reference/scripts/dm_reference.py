@@ -172,6 +172,26 @@ def write_forecasts(path, h, actual, prediction):
             f.write(f"{i},{h},{float(a)!r},{float(p)!r}\n")
 
 
+def read_forecasts(path, h):
+    with open(path, encoding="utf-8") as f:
+        lines = f.read().splitlines()
+    assert lines[0] == "timestamp,horizon,actual,prediction", path
+    rows = [line.split(",") for line in lines[1:]]
+    assert [int(r[0]) for r in rows] == list(range(1, len(rows) + 1)), path
+    assert all(int(r[1]) == h for r in rows), path
+    return (np.array([float(r[2]) for r in rows]), np.array([float(r[3]) for r in rows]))
+
+
+def check_forecasts_reproduce(out, name, kind, h, d):
+    """The forecast CSVs must give back d exactly, so they can run end to end through the CLI."""
+    actual, base = read_forecasts(os.path.join(out, "dm_" + name + "_baseline.csv"), h)
+    actual2, cand = read_forecasts(os.path.join(out, "dm_" + name + "_candidate.csv"), h)
+    assert np.array_equal(actual, actual2), name
+    again = loss(kind, actual, cand) - loss(kind, actual, base)
+    if not np.array_equal(again, d):
+        sys.exit(name + ": the forecast CSVs do not reproduce d exactly")
+
+
 def check_r_cases(out):
     for path in sorted(glob.glob(os.path.join(out, "dm_*.json"))):
         with open(path, encoding="utf-8") as f:
@@ -180,6 +200,7 @@ def check_r_cases(out):
             continue
         d = np.array(case["d"], dtype=float)
         h = case["horizon"]
+        check_forecasts_reproduce(out, case["name"], case["loss"], h, d)
         lags = [(e["lagRule"], e["lag"]) for e in case["hac"] if e["estimator"] == "bartlett"]
         result = {
             "generator": GENERATOR,
@@ -237,6 +258,7 @@ def write_case(out, name, dataset, y, h, kind, margin, first, baseline_rule, bas
     write_json(os.path.join(out, "dm_" + name + ".json"), result)
     write_forecasts(os.path.join(out, "dm_" + name + "_baseline.csv"), h, actual, base)
     write_forecasts(os.path.join(out, "dm_" + name + "_candidate.csv"), h, actual, cand)
+    check_forecasts_reproduce(out, name, kind, h, d)
 
 
 # Forecasts of y[t] (1-based t) issued h steps earlier, using only y[1..t-h].
