@@ -8,6 +8,7 @@ import { meanOf } from './autocovariances.js';
 import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';
+import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
 
 /**
@@ -76,7 +77,7 @@ export function stationaryBootstrap(
   options: StationaryBootstrapOptions,
   random: RandomSourceFactory = createRandomSource,
 ): StationaryBootstrapResult {
-  validateOptions(options);
+  validateStationaryBootstrapOptions(options);
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
   const n = d.length;
   for (let t = 0; t < n; t++) {
@@ -195,19 +196,8 @@ export function resampleDeviationsOfStream(
   return out;
 }
 
-/** Standard deviation with divisor m − 1 (two-pass); 0 for m = 1. */
-function sampleStandardDeviation(values: Float64Array): number {
-  const m = values.length;
-  if (m < 2) return 0;
-  let sum = 0;
-  for (let i = 0; i < m; i++) sum += values[i]!;
-  const centre = sum / m;
-  let squares = 0;
-  for (let i = 0; i < m; i++) squares += (values[i]! - centre) ** 2;
-  return Math.sqrt(squares / (m - 1));
-}
-
-function validateOptions(options: StationaryBootstrapOptions): void {
+/** Throws a RangeError naming the first option that cannot be honoured. */
+export function validateStationaryBootstrapOptions(options: StationaryBootstrapOptions): void {
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
   if (!(confidence > 0 && confidence < 1)) {
     throw new RangeError(`confidence must lie strictly between 0 and 1, got ${confidence}`);

@@ -1,0 +1,140 @@
+import { createGeometricSampler } from '../../random/geometricSampler.js';
+import { createRandomSource, type RandomSourceFactory } from '../../random/randomSource.js';
+import { meanOf } from './autocovariances.js';
+import { basicBootstrapInference } from './basicBootstrapInference.js';
+import { centredPrefixSums } from './centredPrefixSums.js';
+import { resampleMeanDeviation } from './resampleMeanDeviation.js';
+import { sampleStandardDeviation } from './sampleStandardDeviation.js';
+import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
+import {
+  MINIMUM_BOOTSTRAP_LENGTH,
+  RESAMPLES_PER_STREAM,
+  type StationaryBootstrapOptions,
+  validateStationaryBootstrapOptions,
+} from './stationaryBootstrap.js';
+
+export interface RelativeDifferenceResult {
+  /** 'baseline-zero': the baseline's mean loss is not positive, so no ratio exists. */
+  state: 'ok' | 'identical' | 'too-short' | 'baseline-zero';
+  resamples: number;
+  seed: number;
+  expectedBlockLength: number;
+  /** θ̂ = mean(candidate loss) / mean(baseline loss) − 1, e.g. 0.03 = "3% worse". */
+  relativeDifference: number | null;
+  /** Standard deviation of the B resampled θ*, divisor B − 1. */
+  standardError: number | null;
+  interval: { level: number; lower: number; upper: number; method: 'basic' } | null;
+  oneSidedLower: { level: number; alpha: number; lower: number; method: 'basic' } | null;
+  /** (1 + #{θ*_b − θ̂ ≥ θ̂ − r})/(B + 1) for H0: θ ≤ r, r = options.margin (relative). */
+  pValue: number | null;
+  pValueTwoSided: number | null;
+  notes: string[];
+}
+
+/**
+ * Stationary bootstrap (Politis & Romano 1994) of the relative difference of mean losses,
+ * θ = E[candidate loss] / E[baseline loss] − 1: each resample applies the same blocks to both
+ * loss series (so their dependence on each other and over time is kept) and yields
+ * θ* = (mean of resampled candidate losses)/(mean of resampled baseline losses) − 1. Interval,
+ * one-sided bound and p-values are the basic ones of `basicBootstrapInference` (Davison & Hinkley
+ * 1997, §5.2) on θ* − θ̂, with `margin` read as a relative margin r (0.02 = "at most 2% worse").
+ *
+ * This is a report companion, not the gate's test: DESIGN.md tests a relative margin exactly as
+ * δ = 0 on d_t = candidate_t − (1 + r)·baseline_t, which `stationaryBootstrap` does.
+ *
+ * Conventions: the same blocks and random streams as `stationaryBootstrap` with the same options
+ * (resample b from stream ⌊b/256⌋), so the two describe the same resamples. A resample whose
+ * baseline mean is 0 gives θ* = ±∞ (or NaN when both are 0, counted as +∞) and is noted.
+ *
+ * Example: candidate losses (2, 2, 2), baseline (1, 1, 1) → θ̂ = 1 ("100% worse"), every θ* = 1,
+ * interval [1, 1].
+ */
+export function relativeDifferenceBootstrap(
+  candidateLoss: Float64Array,
+  baselineLoss: Float64Array,
+  options: StationaryBootstrapOptions,
+  random: RandomSourceFactory = createRandomSource,
+): RelativeDifferenceResult {
+  validateStationaryBootstrapOptions(options);
+  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
+  const n = candidateLoss.length;
+  if (baselineLoss.length !== n) {
+    throw new RangeError(`loss series differ in length: ${n} vs ${baselineLoss.length}`);
+  }
+  for (let t = 0; t < n; t++) {
+    if (!(Number.isFinite(candidateLoss[t]!) && Number.isFinite(baselineLoss[t]!))) {
+      throw new RangeError(`loss at position ${t} is not a finite number`);
+    }
+  }
+  const empty = {
+    resamples,
+    seed,
+    expectedBlockLength,
+    standardError: null,
+    interval: null,
+    oneSidedLower: null,
+    pValue: null,
+    pValueTwoSided: null,
+  };
+  if (n < MINIMUM_BOOTSTRAP_LENGTH) {
+    return {
+      state: 'too-short',
+      ...empty,
+      relativeDifference: null,
+      notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`],
+    };
+  }
+  const candidateMean = meanOf(candidateLoss);
+  const baselineMean = meanOf(baselineLoss);
+  if (!(baselineMean > 0)) {
+    return {
+      state: 'baseline-zero',
+      ...empty,
+      relativeDifference: null,
+      notes: [`the baseline's mean loss is ${baselineMean}; a relative difference needs it > 0`],
+    };
+  }
+  const estimate = candidateMean / baselineMean - 1;
+  const identical = candidateLoss.every((x, t) => x === baselineLoss[t]);
+  const notes: string[] = [];
+  const deviations = new Float64Array(resamples);
+  if (identical) {
+    notes.push('candidate and baseline losses are identical; no resampling needed');
+  } else {
+    const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
+    const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
+    const sampler = createGeometricSampler(expectedBlockLength);
+    const blocks = allocateStationaryBlocks(n);
+    let zeroDenominators = 0;
+    for (let first = 0, stream = 0; first < resamples; first += RESAMPLES_PER_STREAM, stream++) {
+      const source = random(seed, stream);
+      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
+      for (let b = first; b < last; b++) {
+        drawStationaryBlocks(n, sampler, source, blocks);
+        const c = candidateMean + resampleMeanDeviation(candidatePrefix, n, blocks);
+        const base = baselineMean + resampleMeanDeviation(baselinePrefix, n, blocks);
+        if (base === 0) zeroDenominators++;
+        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+        deviations[b] = theta - estimate;
+      }
+    }
+    if (zeroDenominators > 0) {
+      notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (θ* infinite)`);
+    }
+  }
+  const reflected = new Float64Array(resamples);
+  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b]!;
+  reflected.sort();
+  const inference = basicBootstrapInference(reflected, margin, confidence);
+  return {
+    state: identical ? 'identical' : 'ok',
+    ...empty,
+    relativeDifference: estimate,
+    standardError: sampleStandardDeviation(deviations),
+    interval: { ...inference.interval, method: 'basic' },
+    oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
+    pValue: inference.pValue,
+    pValueTwoSided: inference.pValueTwoSided,
+    notes,
+  };
+}
