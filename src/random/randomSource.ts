@@ -11,7 +11,7 @@ export interface RandomSource {
   /**
    * A uniform double on [0, 1) with 53 random bits, built from two steps:
    * (a >>> 5) · 2^26 + (b >>> 6), divided by 2^53. The high bits of each step are kept, because
-   * the lowest bits of xoroshiro128+ are its weakest (Blackman & Vigna 2021, §10).
+   * the lowest bits of xoroshiro128+ are its weakest (Blackman & Vigna 2021).
    */
   nextDouble(): number;
 }

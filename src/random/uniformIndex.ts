@@ -8,11 +8,11 @@ const LEMIRE_LIMIT = 2097152; // 2^21
  * A uniform integer on 0..n − 1, exactly uniform.
  *
  * For n ≤ 2^21: Lemire's multiply-and-reject method (Lemire 2019, "Fast random integer generation
- * in an interval", ACM TOMACS 29(1), Algorithm 5): with x = `nextUint32`, m = x·n, the answer is
+ * in an interval", ACM TOMACS 29(1)): with x = `nextUint32`, m = x·n, the answer is
  * ⌊m / 2^32⌋ unless m mod 2^32 < 2^32 mod n, in which case x is drawn again (probability < n/2^32,
  * so almost always one step). The product is exact in a double since x·n < 2^53.
  * For 2^21 < n ≤ 2^32: bitmask rejection — the top ⌈log2 n⌉ bits of `nextUint32`, drawn again while
- * ≥ n (Devroye 1986, "Non-Uniform Random Variate Generation", §II.2); fewer than 2 steps on average.
+ * ≥ n (Devroye 1986, "Non-Uniform Random Variate Generation", ch. II); fewer than 2 steps on average.
  *
  * Conventions: n an integer, 1 ≤ n ≤ 2^32 (not checked: a hot path; callers check). n = 1 returns
  * 0 without drawing.

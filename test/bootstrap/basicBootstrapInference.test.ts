@@ -30,7 +30,7 @@ describe('basicBootstrapInference', () => {
     expect(result.pValueTwoSided).toBe(0.2);
   });
 
-  it('uses the (B + 1)-order-statistic rule (Davison & Hinkley 1997, §5.2)', () => {
+  it('uses the (B + 1)-order-statistic rule (Davison & Hinkley 1997, ch. 5)', () => {
     expect(tailOrderStatistic(0.05, 9999)).toBe(500);
     expect(tailOrderStatistic(0.025, 9999)).toBe(250);
     expect(tailOrderStatistic(0.025, 999)).toBe(25);

@@ -14,9 +14,8 @@ describe('stationaryBootstrap coverage (simulation, fixed seeds)', () => {
     // Data: iid N(0, 1) from seed 31 (Box–Muller); true E[d] = 0. Each replication: B = 199,
     // b = 1, level 0.9, margin = 0 (so H0 holds with equality and the one-sided test should
     // reject about 10% of the time). With 400 replications a binomial proportion near 0.9 has
-    // standard error 0.015; the tolerance ±0.05 is 3.3 standard errors. The basic interval with a
-    // divide-by-n bootstrap variance is known to under-cover slightly at n = 100 (common
-    // practice to expect ~1 point), which the tolerance allows.
+    // standard error 0.015; the tolerance ±0.05 is 3.3 standard errors. (The bootstrap variance
+    // divides by n, so intervals are √(99/100) too narrow: well under a point of coverage.)
     const replications = 400;
     const n = 100;
     const data = createRandomSource(31);

@@ -42,7 +42,7 @@ describe('drawStationaryBlocks (random step)', () => {
 
   it('has 1 + Binomial(n − 1, 1/b) blocks: mean count within 1% of 1 + (n − 1)/b', () => {
     // Geometric lengths are memoryless, so after the first position each position starts a new
-    // block with probability p independently (Politis & Romano 1994, §2): count − 1 ~
+    // block with probability p independently (Politis & Romano 1994): count − 1 ~
     // Binomial(n − 1, p). n = 10,000, b = 8: mean 1,250.875, sd 33.1, so the mean of 200
     // resamples has standard error 2.3; 1% (12.5) is 5 standard errors.
     const n = 10_000;

@@ -2,7 +2,7 @@
  * Sample autocovariances γ̂_k = (1/n) Σ_{t=k+1..n} (d_t − d̄)(d_{t−k} − d̄) for k = 0..maxLag.
  *
  * Conventions: always divide by n (not n − k), as in DESIGN.md "Autocovariance" and Brockwell &
- * Davis (1991, §7.2), so the sequence is positive semi-definite; d̄ is the plain mean. maxLag is
+ * Davis (1991, ch. 7), so the sequence is positive semi-definite; d̄ is the plain mean. maxLag is
  * clamped to n − 1. Private to the bootstrap code (it needs the same γ̂ as Politis & Romano 1994
  * and Politis & White 2004 use).
  *

@@ -1,8 +1,8 @@
 /**
  * Basic (reverse-percentile) bootstrap interval, one-sided bound and p-values for E[d], from the
  * resample deviations T_b = d̄*_b − d̄ (Davison & Hinkley 1997, "Bootstrap Methods and their
- * Application", §5.2.1 for the basic interval with the (B+1)-order-statistic rule, §4.2 / eq. 4.11
- * for the Monte Carlo p-value (1 + #)/(B + 1)).
+ * Application": ch. 5 for the basic interval with the (B + 1)-order-statistic rule, ch. 4 for the
+ * Monte Carlo p-value (1 + #)/(B + 1)).
  *
  * Everything is computed on the reflected resamples U_b = d̄ − T_b (= 2d̄ − d̄*_b), sorted
  * ascending U_(1) ≤ … ≤ U_(B):

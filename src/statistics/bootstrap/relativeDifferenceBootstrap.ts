@@ -37,7 +37,7 @@ export interface RelativeDifferenceResult {
  * loss series (so their dependence on each other and over time is kept) and yields
  * θ* = (mean of resampled candidate losses)/(mean of resampled baseline losses) − 1. Interval,
  * one-sided bound and p-values are the basic ones of `basicBootstrapInference` (Davison & Hinkley
- * 1997, §5.2) on θ* − θ̂, with `margin` read as a relative margin r (0.02 = "at most 2% worse").
+ * 1997, ch. 5) on θ* − θ̂, with `margin` read as a relative margin r (0.02 = "at most 2% worse").
  *
  * This is a report companion, not the gate's test: DESIGN.md tests a relative margin exactly as
  * δ = 0 on d_t = candidate_t − (1 + r)·baseline_t, which `stationaryBootstrap` does.

@@ -62,7 +62,7 @@ export interface StationaryBootstrapResult {
  * (`drawStationaryBlocks`); each resample's mean comes from prefix sums in O(blocks)
  * (`resampleMeanDeviation`). From the deviations T_b = d̄*_b − d̄ it reports the standard error
  * (divisor B − 1), the basic interval, a one-sided lower bound and p-values that agree exactly
- * with them (`basicBootstrapInference`, Davison & Hinkley 1997 §5.2).
+ * with them (`basicBootstrapInference`, Davison & Hinkley 1997, ch. 5).
  *
  * Conventions: randomness only through `random(seed, stream)` (default `createRandomSource`);
  * resample b uses stream ⌊b / RESAMPLES_PER_STREAM⌋. Same inputs, same numbers, on every
