@@ -20,7 +20,7 @@ export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
  * Reads a JSON report written by an earlier run (typically an artifact of a pull request from
  * a fork) as untrusted data. A fresh Report is built field by field: every enum is checked
  * against its allowed values, every number must be a finite number (or null where the model
- * allows it), every string a string; unknown fields are dropped. Renderers then escape the
+ * allows it), every string a string; unknown fields and estimator diagnostics are dropped. Renderers then escape the
  * strings as they do for any input. Anything malformed is an InputError naming the file and
  * the JSON path of the offending field.
  */
@@ -108,25 +108,6 @@ class Reader {
   }
   strings(): string[] {
     return this.items().map((r) => r.string());
-  }
-  /**
-   * A flat object of estimator diagnostics. Renderers do not show these, so entries that are
-   * not a finite number, string, boolean or null (say, a list of notes) are dropped, not refused.
-   */
-  scalars<T extends string | number | boolean>(): Readonly<Record<string, T>> | null {
-    if (this.value === null || this.value === undefined) return null;
-    if (typeof this.value !== 'object' || Array.isArray(this.value)) this.fail('an object or null');
-    const out: Record<string, T> = {};
-    for (const [key, v] of Object.entries(this.value as Record<string, unknown>)) {
-      if (!/^[A-Za-z][A-Za-z0-9]{0,40}$/.test(key)) continue;
-      const keep =
-        v === null ||
-        typeof v === 'string' ||
-        typeof v === 'boolean' ||
-        (typeof v === 'number' && Number.isFinite(v));
-      if (keep) out[key] = v as T;
-    }
-    return out;
   }
 }
 
@@ -235,7 +216,8 @@ function readDieboldMariano(r: Reader): DieboldMarianoSummary {
             degreesOfFreedom: small.field('degreesOfFreedom').number(),
           },
     interval: readInterval(r.field('interval')),
-    lagSelection: r.field('lagSelection').scalars<number | string>(),
+    // Estimator diagnostics are not shown by the renderers and not carried over from untrusted data.
+    lagSelection: null,
     notes: r.field('notes').strings(),
   };
 }
@@ -247,7 +229,7 @@ function readBootstrap(r: Reader): BootstrapSummary {
     seed: r.field('seed').integer(),
     expectedBlockLength: r.field('expectedBlockLength').number(),
     blockLengthRule: r.field('blockLengthRule').oneOf(['auto', 'fixed']),
-    blockLengthSelection: r.field('blockLengthSelection').scalars<number | boolean>(),
+    blockLengthSelection: null,
     standardError: r.field('standardError').numberOrNull(),
     interval: readInterval(r.field('interval')),
     pValue: r.field('pValue').numberOrNull(),

@@ -58,6 +58,7 @@ export async function runBundle(options: BundleOptions): Promise<BundleRun> {
     RUNNER_TEMP: dir,
   };
   for (const [name, entry] of readActionYml(path.join(ROOT, 'action.yml')).inputs) {
+    // biome-ignore lint/suspicious/noTemplateCurlyInString: the runner expands this expression
     const fallback = (entry.default ?? '').replace('${{ github.token }}', token);
     env[`INPUT_${name.toUpperCase()}`] = options.inputs[name] ?? fallback;
   }

@@ -80,6 +80,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
             d: 34.55049122494512,
             unclamped: 3.6538357393873,
             blockLength: 3.6538357393873,
+            notes: [],
           },
           standardError: 0.11613769531290219,
           interval: {

@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { parseUntrustedReport } from '../../src/action/untrustedReport.js';
+import { InputError } from '../../src/core/inputError.js';
+import { sampleReport } from './sampleReport.js';
+
+const describeError = (text: string): string => {
+  try {
+    parseUntrustedReport(text, 'report.json');
+  } catch (error) {
+    if (error instanceof InputError) return error.describe();
+    throw error;
+  }
+  throw new Error('expected an InputError');
+};
+
+describe('parseUntrustedReport', () => {
+  it('reads back a report runComparison wrote, diagnostics aside', () => {
+    const report = sampleReport();
+    const parsed = parseUntrustedReport(JSON.stringify(report), 'report.json');
+    const c = report.comparisons[0]!;
+    expect(parsed).toEqual({
+      ...report,
+      comparisons: [
+        {
+          ...c,
+          dieboldMariano: { ...c.dieboldMariano, lagSelection: null },
+          bootstrap: { ...c.bootstrap, blockLengthSelection: null },
+        },
+      ],
+    });
+  });
+
+  it('drops unknown fields, so a renderer never sees them', () => {
+    const report = sampleReport();
+    const hostile = {
+      ...report,
+      settings: { ...report.settings, '<img src=x>': 'y' },
+      extra: '<!--',
+    };
+    const parsed = parseUntrustedReport(JSON.stringify(hostile), 'r.json');
+    expect(Object.keys(parsed.settings)).not.toContain('<img src=x>');
+    expect(parsed).not.toHaveProperty('extra');
+  });
+
+  it('refuses malformed fields, naming the file and the JSON path', () => {
+    const report = sampleReport();
+    const c = report.comparisons[0]!;
+    expect(describeError('{')).toMatch(/^report\.json: is not valid JSON/);
+    expect(describeError(JSON.stringify({ ...report, verdict: 'maybe' }))).toBe(
+      'report.json: field $.verdict must be one of pass, warn, fail (value "\\"maybe\\"")',
+    );
+    const badHash = {
+      ...report,
+      inputs: { ...report.inputs, files: [{ ...report.inputs.files[0], sha256: '`@x`' }] },
+    };
+    expect(describeError(JSON.stringify(badHash))).toMatch(
+      /field \$\.inputs\.files\[0\]\.sha256 must be sha256:/,
+    );
+    const badNumber = { ...report, comparisons: [{ ...c, n: '240' }] };
+    expect(describeError(JSON.stringify(badNumber))).toMatch(
+      /field \$\.comparisons\[0\]\.n must be a finite number/,
+    );
+    expect(describeError(JSON.stringify({ ...report, comparisons: [] }))).toMatch(
+      /\$\.comparisons must be a non-empty array/,
+    );
+    expect(
+      describeError(JSON.stringify({ ...report, tool: { name: 'other', version: '1' } })),
+    ).toMatch(/\$\.tool\.name/);
+  });
+});
