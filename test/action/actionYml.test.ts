@@ -42,6 +42,7 @@ describe('action.yml mirrors the names module', () => {
       // The runner never enforces `required`; baseline/candidate may be left out with report-file.
       expect(entry?.required).toBe('false');
     }
+    // biome-ignore lint/suspicious/noTemplateCurlyInString: the runner expands this expression
     expect(yml.inputs.get('github-token')?.default).toBe('${{ github.token }}');
     expect(yml.inputs.get('comment')?.default).toBe('true');
   });

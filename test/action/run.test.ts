@@ -61,7 +61,9 @@ function harness(
       warning: (m: string | Error) => void log.push(`warning ${String(m)}`),
       error: (m: string | Error) => void log.push(`error ${String(m)}`),
       notice: (m: string | Error) => void log.push(`notice ${String(m)}`),
-      setOutput: (name: string, value: unknown) => void (outputs[name] = String(value)),
+      setOutput: (name: string, value: unknown) => {
+        outputs[name] = String(value);
+      },
       setFailed: (m: string | Error) => void log.push(`failed ${String(m)}`),
     },
   };
