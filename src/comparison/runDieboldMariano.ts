@@ -3,6 +3,7 @@ import type { DieboldMarianoSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { dieboldMariano } from '../statistics/dieboldMariano.js';
 import { standardNormalQuantile, studentTQuantile } from '../statistics/distributions.js';
+import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbold.js';
 
 /**
  * Runs the Diebold–Mariano test on the tested differential and adds what the report and the
@@ -37,7 +38,7 @@ export function runDieboldMariano(
     let se = Math.sqrt(result.variance);
     let q: number;
     if (result.smallSample !== null) {
-      se *= result.statistic / result.smallSample.statistic;
+      se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
       q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
     } else if (result.degreesOfFreedom !== null) {
       q = studentTQuantile(tail, result.degreesOfFreedom);
