@@ -30,7 +30,9 @@ const TWO_POW_MINUS_53 = 1 / 9007199254740992;
  * i.e. by k · 2^64 steps, so streams never overlap in practice.
  *
  * Conventions: `seed` is an integer 0 ≤ seed ≤ 2^53 − 1 (every such seed gives its own state);
- * `stream` an integer ≥ 0. Each `nextUint32` is the low 32 bits of one 64-bit xoroshiro128+
+ * `stream` an integer ≥ 0 (creating stream k costs k jumps, about 1.5 µs each, so the streams
+ * 0..S−1 of one computation cost O(S²) jumps: 0.1 s for S = 400). Each `nextUint32` is the low
+ * 32 bits of one 64-bit xoroshiro128+
  * output. The numbers depend on nothing but (seed, stream): same on every machine and platform.
  *
  * Example: `createRandomSource(42).nextUint32()` is always the same number (see the golden-value
