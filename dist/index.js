@@ -32270,7 +32270,9 @@ function inputSection(report) {
   const out = ["<details><summary>Inputs and coverage</summary>", ""];
   out.push("| file | role | rows | sha256 |", "|---|---|---:|---|");
   for (const f of i.files) {
-    out.push(`| ${escapeMarkdown(f.path)} | ${f.role} | ${f.rows} | \`${f.sha256.replace(/^sha256:/, "").slice(0, 12)}\` |`);
+    out.push(
+      `| ${escapeMarkdown(f.path)} | ${f.role} | ${f.rows} | \`${f.sha256.replace(/^sha256:/, "").slice(0, 12)}\` |`
+    );
   }
   const d = i.rowsDropped;
   out.push(
@@ -32281,13 +32283,20 @@ function inputSection(report) {
     `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`
   );
   if (i.examples.baselineOnly.length > 0) {
-    out.push(`Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => escapeMarkdown(k)).join(", ")}.`);
+    out.push(
+      `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => escapeMarkdown(k)).join(", ")}.`
+    );
   }
   out.push("", "</details>");
   return out;
 }
 function settingsSection(report) {
-  const out = ["<details><summary>Settings in force</summary>", "", "| setting | value |", "|---|---|"];
+  const out = [
+    "<details><summary>Settings in force</summary>",
+    "",
+    "| setting | value |",
+    "|---|---|"
+  ];
   for (const [key, value] of Object.entries(report.settings)) {
     const text2 = typeof value === "object" && value !== null ? JSON.stringify(value) : String(value);
     out.push(`| ${key} | ${escapeMarkdown(text2)} |`);
@@ -38798,52 +38807,6 @@ function getOctokit(token, options, ...additionalPlugins) {
   return new GitHubWithPlugins(getOctokitOptions(token, options));
 }
 
-// src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, selected) {
-  const points = panel.timestamps.length;
-  const sumB = new Float64Array(points);
-  const sumC = new Float64Array(points);
-  const count = new Int32Array(points);
-  let maxHorizon = 1;
-  let rowCount = 0;
-  const included = losses.included;
-  for (let i = 0; i < panel.size; i++) {
-    if (included !== null && included[i] === 0) continue;
-    if (selected !== void 0 && !selected(i)) continue;
-    const t = panel.time[i];
-    sumB[t] += losses.baseline[i];
-    sumC[t] += losses.candidate[i];
-    count[t]++;
-    rowCount++;
-    const h = panel.horizon[i];
-    if (h > maxHorizon) maxHorizon = h;
-  }
-  let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0) n++;
-  const time = new Int32Array(n);
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const rows = new Int32Array(n);
-  let k = 0;
-  for (let t = 0; t < points; t++) {
-    const m = count[t];
-    if (m === 0) continue;
-    time[k] = t;
-    baseline[k] = sumB[t] / m;
-    candidate[k] = sumC[t] / m;
-    rows[k] = m;
-    k++;
-  }
-  return { time, baseline, candidate, rows, rowCount, maxHorizon };
-}
-function lossDifferential(series, relativeMargin) {
-  const n = series.baseline.length;
-  const d = new Float64Array(n);
-  const factor = 1 + relativeMargin;
-  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
-  return d;
-}
-
 // src/alignment/keyOrder.ts
 function sortByKey(size, components) {
   let order = new Int32Array(size);
@@ -39438,6 +39401,289 @@ function compact(ids, names) {
   return { ids, names: kept };
 }
 
+// src/aggregation/lossSeries.ts
+function aggregateByTime(panel, losses, selected) {
+  const points = panel.timestamps.length;
+  const sumB = new Float64Array(points);
+  const sumC = new Float64Array(points);
+  const count = new Int32Array(points);
+  let maxHorizon = 1;
+  let rowCount = 0;
+  const included = losses.included;
+  for (let i = 0; i < panel.size; i++) {
+    if (included !== null && included[i] === 0) continue;
+    if (selected !== void 0 && !selected(i)) continue;
+    const t = panel.time[i];
+    sumB[t] += losses.baseline[i];
+    sumC[t] += losses.candidate[i];
+    count[t]++;
+    rowCount++;
+    const h = panel.horizon[i];
+    if (h > maxHorizon) maxHorizon = h;
+  }
+  let n = 0;
+  for (let t = 0; t < points; t++) if (count[t] > 0) n++;
+  const time = new Int32Array(n);
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const rows = new Int32Array(n);
+  let k = 0;
+  for (let t = 0; t < points; t++) {
+    const m = count[t];
+    if (m === 0) continue;
+    time[k] = t;
+    baseline[k] = sumB[t] / m;
+    candidate[k] = sumC[t] / m;
+    rows[k] = m;
+    k++;
+  }
+  return { time, baseline, candidate, rows, rowCount, maxHorizon };
+}
+function lossDifferential(series, relativeMargin) {
+  const n = series.baseline.length;
+  const d = new Float64Array(n);
+  const factor = 1 + relativeMargin;
+  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
+  return d;
+}
+
+// src/core/version.ts
+var VERSION7 = "0.1.0";
+
+// src/decision/hypothesis.ts
+function hypothesisFor(policy, margin, kind) {
+  const better = policy === "superiority";
+  const signed = better ? -margin : margin;
+  const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
+  const base = {
+    baselineFactor: kind === "relative" ? 1 + signed : 1,
+    boundary: kind === "relative" ? 0 : signed
+  };
+  switch (policy) {
+    case "no-regression":
+      return {
+        ...base,
+        rejectWhen: "above",
+        onReject: "fail",
+        alternative: `the candidate's expected loss is higher than the baseline's${marginText}`
+      };
+    case "non-inferiority":
+      return {
+        ...base,
+        rejectWhen: "below",
+        onReject: "pass",
+        alternative: margin === 0 ? "the candidate's expected loss is lower than the baseline's" : `the candidate is not worse than the baseline by ${describeMargin(margin, kind)} or more`
+      };
+    case "superiority":
+      return {
+        ...base,
+        rejectWhen: "below",
+        onReject: "pass",
+        alternative: `the candidate's expected loss is lower than the baseline's${marginText}`
+      };
+  }
+}
+function describeMargin(margin, kind) {
+  return kind === "relative" ? formatPercent(margin) : `${margin} loss units`;
+}
+function formatPercent(fraction) {
+  return `${Number((fraction * 100).toPrecision(6))}%`;
+}
+
+// src/losses/absoluteError.ts
+function absoluteError(actual, prediction) {
+  return Math.abs(actual - prediction);
+}
+
+// src/losses/absolutePercentageError.ts
+function absolutePercentageError(actual, prediction) {
+  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/pinballLoss.ts
+function pinballLoss(actual, quantile, level) {
+  const u = actual - quantile;
+  return u >= 0 ? level * u : (level - 1) * u;
+}
+
+// src/losses/squaredError.ts
+function squaredError(actual, prediction) {
+  const e = actual - prediction;
+  return e * e;
+}
+
+// src/losses/symmetricAbsolutePercentageError.ts
+function symmetricAbsolutePercentageError(actual, prediction) {
+  const denominator = Math.abs(actual) + Math.abs(prediction);
+  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
+}
+
+// src/losses/rowLosses.ts
+var LossUnavailableError = class extends Error {
+};
+var POINT_LOSSES = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError
+};
+function computeRowLosses(panel, loss, zeroActuals) {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === "pinball") {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
+      );
+    }
+    const y2 = panel.actual;
+    for (const { level, base: base2, cand: cand2 } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y2[i];
+        baseline[i] += pinballLoss(yi, base2[i], level);
+        candidate[i] += pinballLoss(yi, cand2[i], level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i] /= k;
+      candidate[i] /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level)
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows = [];
+  let included = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i];
+    if (loss === "ape" && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === "skip") {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]);
+    candidate[i] = f(yi, cand[i]);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
+}
+function commonQuantiles(baseline, candidate) {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}
+
+// src/decision/verdict.ts
+function worstVerdict(verdicts) {
+  if (verdicts.includes("fail")) return "fail";
+  if (verdicts.includes("warn")) return "warn";
+  return "pass";
+}
+
+// src/report/buildReport.ts
+function buildReport(parts) {
+  const { panel, settings, hypothesis } = parts;
+  const overall = parts.comparisons[0];
+  if (overall === void 0) throw new Error("a report needs the overall comparison");
+  const reasons = [];
+  const verdicts = [overall.verdict];
+  const missing = panel.coverage.baselineOnly;
+  if (missing > 0) {
+    if (settings.allowMissing) {
+      reasons.push(
+        `The candidate lacks ${missing} rows that the baseline has; allowed by allow-missing, they are left out of the comparison.`
+      );
+    } else {
+      verdicts.push("fail");
+      reasons.push(
+        `The candidate lacks ${missing} rows that the baseline has. A candidate must not pass by skipping hard cases; set allow-missing to compare on the common rows only.`
+      );
+    }
+  }
+  const verdict = worstVerdict(verdicts);
+  const horizons = /* @__PURE__ */ new Set();
+  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]);
+  const ts = panel.timestamps;
+  return {
+    tool: { name: "skillgate", version: parts.version },
+    name: settings.name,
+    verdict,
+    headline: headline(verdict, overall, hypothesis),
+    policy: {
+      policy: settings.policy,
+      agreement: settings.agreement,
+      alpha: settings.alpha,
+      margin: settings.margin,
+      marginKind: settings.marginKind,
+      nullHypothesis: `not (${hypothesis.alternative})`,
+      alternative: hypothesis.alternative,
+      onReject: hypothesis.onReject,
+      baselineFactor: hypothesis.baselineFactor,
+      boundary: hypothesis.boundary
+    },
+    comparisons: parts.comparisons,
+    inputs: {
+      files: panel.coverage.files,
+      rowsMatched: panel.coverage.rowsMatched,
+      rowsDropped: {
+        baseline: panel.coverage.baselineOnly,
+        candidate: panel.coverage.candidateOnly,
+        withoutActual: panel.coverage.withoutActual,
+        actualsUnused: panel.coverage.actualsUnused,
+        skippedByLoss: parts.losses.included === null ? 0 : parts.losses.zeroActualRows.length
+      },
+      examples: panel.coverage.examples,
+      timestamps: {
+        count: ts.length,
+        kind: panel.timestampKind,
+        first: ts[0] ?? null,
+        last: ts[ts.length - 1] ?? null
+      },
+      series: panel.seriesNames.length,
+      horizons: [...horizons].sort((a, b) => a - b),
+      quantileLevels: parts.losses.levels
+    },
+    settings,
+    reasons
+  };
+}
+function headline(verdict, overall, hypothesis) {
+  const rel = overall.relativeDifference;
+  const change = rel === null ? `mean loss ${overall.meanCandidateLoss} vs ${overall.meanBaselineLoss}` : `mean loss ${rel >= 0 ? "up" : "down"} ${Math.abs(rel * 100).toFixed(2)}% against the baseline`;
+  const tested = `Tested whether ${hypothesis.alternative}, over ${overall.n} time points (${change}).`;
+  switch (verdict) {
+    case "pass":
+      return `${tested} The gate passes.`;
+    case "warn":
+      return `${tested} The evidence is mixed or thin: the gate passes with a warning.`;
+    case "fail":
+      return `${tested} The gate fails.`;
+  }
+}
+
 // src/decision/decideComparison.ts
 function decideComparison(input) {
   const { hypothesis, alpha } = input;
@@ -39899,6 +40145,18 @@ function resampleMeanDeviation(prefix, n, blocks) {
   return sum / n;
 }
 
+// src/statistics/bootstrap/sampleStandardDeviation.ts
+function sampleStandardDeviation(values) {
+  const m = values.length;
+  if (m < 2) return 0;
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += values[i];
+  const centre2 = sum / m;
+  let squares = 0;
+  for (let i = 0; i < m; i++) squares += (values[i] - centre2) ** 2;
+  return Math.sqrt(squares / (m - 1));
+}
+
 // src/random/uniformIndex.ts
 var TWO_POW_32 = 4294967296;
 var LEMIRE_LIMIT = 2097152;
@@ -39948,7 +40206,7 @@ function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlock
 var RESAMPLES_PER_STREAM = 256;
 var MINIMUM_BOOTSTRAP_LENGTH = 2;
 function stationaryBootstrap(d, options, random = createRandomSource) {
-  validateOptions(options);
+  validateStationaryBootstrapOptions(options);
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
   const n = d.length;
   for (let t = 0; t < n; t++) {
@@ -40040,17 +40298,7 @@ function resampleDeviationsOfStream(prefix, n, sampler, random, count) {
   }
   return out;
 }
-function sampleStandardDeviation(values) {
-  const m = values.length;
-  if (m < 2) return 0;
-  let sum = 0;
-  for (let i = 0; i < m; i++) sum += values[i];
-  const centre2 = sum / m;
-  let squares = 0;
-  for (let i = 0; i < m; i++) squares += (values[i] - centre2) ** 2;
-  return Math.sqrt(squares / (m - 1));
-}
-function validateOptions(options) {
+function validateStationaryBootstrapOptions(options) {
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
   if (!(confidence > 0 && confidence < 1)) {
     throw new RangeError(`confidence must lie strictly between 0 and 1, got ${confidence}`);
@@ -40460,7 +40708,7 @@ function runDieboldMariano(d, horizon, hypothesis, settings) {
     let se = Math.sqrt(result.variance);
     let q;
     if (result.smallSample !== null) {
-      se *= result.statistic / result.smallSample.statistic;
+      se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
       q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
     } else if (result.degreesOfFreedom !== null) {
       q = studentTQuantile(tail, result.degreesOfFreedom);
@@ -40501,7 +40749,12 @@ function compareLossSeries(series, scope, hypothesis, settings) {
   const d = lossDifferential(series, hypothesis.baselineFactor - 1);
   const meanTestedDifferential = mean2(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
-  const dieboldMariano2 = runDieboldMariano(d, series.maxHorizon, hypothesis, settings);
+  const dieboldMariano2 = runDieboldMariano(
+    d,
+    series.maxHorizon,
+    hypothesis,
+    settings
+  );
   const bootstrap = runBootstrap(d, hypothesis, settings);
   const decision = decideComparison({
     hypothesis,
@@ -40553,153 +40806,47 @@ function mean2(x) {
   return x.length === 0 ? 0 : s / x.length;
 }
 
-// src/core/version.ts
-var VERSION7 = "0.1.0";
-
-// src/decision/hypothesis.ts
-function hypothesisFor(policy, margin, kind) {
-  const better = policy === "superiority";
-  const signed = better ? -margin : margin;
-  const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
-  const base = {
-    baselineFactor: kind === "relative" ? 1 + signed : 1,
-    boundary: kind === "relative" ? 0 : signed
-  };
-  switch (policy) {
-    case "no-regression":
-      return {
-        ...base,
-        rejectWhen: "above",
-        onReject: "fail",
-        alternative: `the candidate's expected loss is higher than the baseline's${marginText}`
-      };
-    case "non-inferiority":
-      return {
-        ...base,
-        rejectWhen: "below",
-        onReject: "pass",
-        alternative: margin === 0 ? "the candidate's expected loss is lower than the baseline's" : `the candidate is not worse than the baseline by ${describeMargin(margin, kind)} or more`
-      };
-    case "superiority":
-      return {
-        ...base,
-        rejectWhen: "below",
-        onReject: "pass",
-        alternative: `the candidate's expected loss is lower than the baseline's${marginText}`
-      };
+// src/comparison/evaluatePanel.ts
+function evaluatePanel(panel, settings) {
+  const losses = rowLossesOrInputError(panel, settings);
+  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const overall = compareLossSeries(
+    aggregateByTime(panel, losses),
+    { loss: settings.loss, horizon: "all", series: "all", timestamps: panel.timestamps },
+    hypothesis,
+    settings
+  );
+  return buildReport({
+    version: VERSION7,
+    settings,
+    hypothesis,
+    panel,
+    losses,
+    comparisons: [overall]
+  });
+}
+function rowLossesOrInputError(panel, settings) {
+  let losses;
+  try {
+    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals);
+  } catch (error2) {
+    if (error2 instanceof LossUnavailableError) {
+      throw new InputError(`loss ${settings.loss}: ${error2.message}`, {
+        file: `${settings.baseline}, ${settings.candidate}`
+      });
+    }
+    throw error2;
   }
-}
-function describeMargin(margin, kind) {
-  return kind === "relative" ? formatPercent(margin) : `${margin} loss units`;
-}
-function formatPercent(fraction) {
-  return `${Number((fraction * 100).toPrecision(6))}%`;
-}
-
-// src/losses/absoluteError.ts
-function absoluteError(actual, prediction) {
-  return Math.abs(actual - prediction);
-}
-
-// src/losses/absolutePercentageError.ts
-function absolutePercentageError(actual, prediction) {
-  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
-}
-
-// src/losses/pinballLoss.ts
-function pinballLoss(actual, quantile, level) {
-  const u = actual - quantile;
-  return u >= 0 ? level * u : (level - 1) * u;
-}
-
-// src/losses/squaredError.ts
-function squaredError(actual, prediction) {
-  const e = actual - prediction;
-  return e * e;
-}
-
-// src/losses/symmetricAbsolutePercentageError.ts
-function symmetricAbsolutePercentageError(actual, prediction) {
-  const denominator = Math.abs(actual) + Math.abs(prediction);
-  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
-}
-
-// src/losses/rowLosses.ts
-var LossUnavailableError = class extends Error {
-};
-var POINT_LOSSES = {
-  squared: squaredError,
-  absolute: absoluteError,
-  ape: absolutePercentageError,
-  sape: symmetricAbsolutePercentageError
-};
-function computeRowLosses(panel, loss, zeroActuals) {
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  if (loss === "pinball") {
-    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
-    if (pairs.length === 0) {
-      throw new LossUnavailableError(
-        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
-      );
-    }
-    const y2 = panel.actual;
-    for (const { level, base: base2, cand: cand2 } of pairs) {
-      for (let i = 0; i < n; i++) {
-        const yi = y2[i];
-        baseline[i] += pinballLoss(yi, base2[i], level);
-        candidate[i] += pinballLoss(yi, cand2[i], level);
-      }
-    }
-    const k = pairs.length;
-    for (let i = 0; i < n; i++) {
-      baseline[i] /= k;
-      candidate[i] /= k;
-    }
-    return {
-      loss,
-      baseline,
-      candidate,
-      included: null,
-      zeroActualRows: [],
-      levels: pairs.map((p) => p.level)
-    };
-  }
-  const base = panel.baseline.prediction;
-  const cand = panel.candidate.prediction;
-  if (base === null || cand === null) {
-    throw new LossUnavailableError(
-      `the ${loss} loss needs a prediction column in both baseline and candidate`
+  if (settings.zeroActuals === "error" && losses.zeroActualRows.length > 0) {
+    const row = losses.zeroActualRows[0];
+    throw new InputError(
+      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows; first at series ${JSON.stringify(
+        panel.seriesNames[panel.series[row]]
+      )}, timestamp ${JSON.stringify(panel.timestamps[panel.time[row]])}); use zero-actuals skip to leave them out and count them, or another loss`,
+      { file: settings.actuals ?? settings.baseline, column: "actual", value: "0" }
     );
   }
-  const f = POINT_LOSSES[loss];
-  const y = panel.actual;
-  const zeroActualRows = [];
-  let included = null;
-  for (let i = 0; i < n; i++) {
-    const yi = y[i];
-    if (loss === "ape" && yi === 0) {
-      zeroActualRows.push(i);
-      if (zeroActuals === "skip") {
-        included ??= new Uint8Array(n).fill(1);
-        included[i] = 0;
-      }
-      continue;
-    }
-    baseline[i] = f(yi, base[i]);
-    candidate[i] = f(yi, cand[i]);
-  }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
-}
-function commonQuantiles(baseline, candidate) {
-  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
-  const pairs = [];
-  for (const q of baseline) {
-    const cand = byLevel.get(q.level);
-    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
-  }
-  return pairs;
+  return losses;
 }
 
 // src/reading/readForecastFile.ts
@@ -41349,94 +41496,6 @@ function asInputError(error2, path7) {
   return new InputError(`cannot read the file: ${message}`, { file: path7 });
 }
 
-// src/decision/verdict.ts
-function worstVerdict(verdicts) {
-  if (verdicts.includes("fail")) return "fail";
-  if (verdicts.includes("warn")) return "warn";
-  return "pass";
-}
-
-// src/report/buildReport.ts
-function buildReport(parts) {
-  const { panel, settings, hypothesis } = parts;
-  const overall = parts.comparisons[0];
-  if (overall === void 0) throw new Error("a report needs the overall comparison");
-  const reasons = [];
-  const verdicts = [overall.verdict];
-  const missing = panel.coverage.baselineOnly;
-  if (missing > 0) {
-    if (settings.allowMissing) {
-      reasons.push(
-        `The candidate lacks ${missing} rows that the baseline has; allowed by allow-missing, they are left out of the comparison.`
-      );
-    } else {
-      verdicts.push("fail");
-      reasons.push(
-        `The candidate lacks ${missing} rows that the baseline has. A candidate must not pass by skipping hard cases; set allow-missing to compare on the common rows only.`
-      );
-    }
-  }
-  const verdict = worstVerdict(verdicts);
-  const horizons = /* @__PURE__ */ new Set();
-  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]);
-  const ts = panel.timestamps;
-  return {
-    tool: { name: "skillgate", version: parts.version },
-    name: settings.name,
-    verdict,
-    headline: headline(verdict, overall, hypothesis),
-    policy: {
-      policy: settings.policy,
-      agreement: settings.agreement,
-      alpha: settings.alpha,
-      margin: settings.margin,
-      marginKind: settings.marginKind,
-      nullHypothesis: `not (${hypothesis.alternative})`,
-      alternative: hypothesis.alternative,
-      onReject: hypothesis.onReject,
-      baselineFactor: hypothesis.baselineFactor,
-      boundary: hypothesis.boundary
-    },
-    comparisons: parts.comparisons,
-    inputs: {
-      files: panel.coverage.files,
-      rowsMatched: panel.coverage.rowsMatched,
-      rowsDropped: {
-        baseline: panel.coverage.baselineOnly,
-        candidate: panel.coverage.candidateOnly,
-        withoutActual: panel.coverage.withoutActual,
-        actualsUnused: panel.coverage.actualsUnused,
-        skippedByLoss: parts.losses.included === null ? 0 : parts.losses.zeroActualRows.length
-      },
-      examples: panel.coverage.examples,
-      timestamps: {
-        count: ts.length,
-        kind: panel.timestampKind,
-        first: ts[0] ?? null,
-        last: ts[ts.length - 1] ?? null
-      },
-      series: panel.seriesNames.length,
-      horizons: [...horizons].sort((a, b) => a - b),
-      quantileLevels: parts.losses.levels
-    },
-    settings,
-    reasons
-  };
-}
-function headline(verdict, overall, hypothesis) {
-  const rel = overall.relativeDifference;
-  const change = rel === null ? `mean loss ${overall.meanCandidateLoss} vs ${overall.meanBaselineLoss}` : `mean loss ${rel >= 0 ? "up" : "down"} ${Math.abs(rel * 100).toFixed(2)}% against the baseline`;
-  const tested = `Tested whether ${hypothesis.alternative}, over ${overall.n} time points (${change}).`;
-  switch (verdict) {
-    case "pass":
-      return `${tested} The gate passes.`;
-    case "warn":
-      return `${tested} The evidence is mixed or thin: the gate passes with a warning.`;
-    case "fail":
-      return `${tested} The gate fails.`;
-  }
-}
-
 // src/app/runComparison.ts
 async function runComparison(settings, hooks = {}) {
   const read = (path7, role) => readForecastFile(path7, {
@@ -41451,43 +41510,9 @@ async function runComparison(settings, hooks = {}) {
   const actuals = settings.actuals === null ? void 0 : await read(settings.actuals, "actuals");
   hooks.onProgress?.({ stage: "aligning", fraction: 0 });
   const panel = alignPanel({ baseline, candidate, ...actuals === void 0 ? {} : { actuals } });
-  let losses;
-  try {
-    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals);
-  } catch (error2) {
-    if (error2 instanceof LossUnavailableError) {
-      throw new InputError(`--loss ${settings.loss}: ${error2.message}`, {
-        file: `${settings.baseline}, ${settings.candidate}`
-      });
-    }
-    throw error2;
-  }
-  if (settings.zeroActuals === "error" && losses.zeroActualRows.length > 0) {
-    const row = losses.zeroActualRows[0];
-    throw new InputError(
-      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows; first at series ${JSON.stringify(
-        panel.seriesNames[panel.series[row]]
-      )}, timestamp ${JSON.stringify(panel.timestamps[panel.time[row]])}); use zero-actuals skip to leave them out and count them, or another loss`,
-      { file: settings.actuals ?? settings.baseline, column: "actual", value: "0" }
-    );
-  }
   hooks.onProgress?.({ stage: "testing", fraction: 0 });
-  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
-  const overall = compareLossSeries(
-    aggregateByTime(panel, losses),
-    { loss: settings.loss, horizon: "all", series: "all", timestamps: panel.timestamps },
-    hypothesis,
-    settings
-  );
+  const report = evaluatePanel(panel, settings);
   hooks.onProgress?.({ stage: "testing", fraction: 1 });
-  const report = buildReport({
-    version: VERSION7,
-    settings,
-    hypothesis,
-    panel,
-    losses,
-    comparisons: [overall]
-  });
   return { report };
 }
 
@@ -41701,28 +41726,119 @@ async function openPullRequestsFromHead(client, repository, head) {
 
 // src/settings/options.ts
 var ENGINE_OPTIONS = [
-  { name: "baseline", defaultValue: null, required: true, help: "predictions of the model on the main branch (CSV/TSV, optionally .gz)" },
-  { name: "candidate", defaultValue: null, required: true, help: "predictions of the pull request's model" },
-  { name: "actuals", defaultValue: null, help: "observed values keyed by series and timestamp, when the prediction files lack an actual column" },
-  { name: "columns", defaultValue: "", help: "rename columns, e.g. actual=observed,prediction=point,series=zone" },
-  { name: "format", defaultValue: "auto", choices: ["auto", "csv", "tsv"], help: "input format; auto: TSV for .tsv/.tsv.gz, else CSV" },
-  { name: "loss", defaultValue: "squared", choices: LOSS_NAMES, help: "loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns)" },
-  { name: "zero-actuals", defaultValue: "error", choices: ["error", "skip"], help: "with ape: refuse rows whose actual is 0, or skip and count them" },
+  {
+    name: "baseline",
+    defaultValue: null,
+    required: true,
+    help: "predictions of the model on the main branch (CSV/TSV, optionally .gz)"
+  },
+  {
+    name: "candidate",
+    defaultValue: null,
+    required: true,
+    help: "predictions of the pull request's model"
+  },
+  {
+    name: "actuals",
+    defaultValue: null,
+    help: "observed values keyed by series and timestamp, when the prediction files lack an actual column"
+  },
+  {
+    name: "columns",
+    defaultValue: "",
+    help: "rename columns, e.g. actual=observed,prediction=point,series=zone"
+  },
+  {
+    name: "format",
+    defaultValue: "auto",
+    choices: ["auto", "csv", "tsv"],
+    help: "input format; auto: TSV for .tsv/.tsv.gz, else CSV"
+  },
+  {
+    name: "loss",
+    defaultValue: "squared",
+    choices: LOSS_NAMES,
+    help: "loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns)"
+  },
+  {
+    name: "zero-actuals",
+    defaultValue: "error",
+    choices: ["error", "skip"],
+    help: "with ape: refuse rows whose actual is 0, or skip and count them"
+  },
   { name: "alpha", defaultValue: "0.05", help: "significance level of each one-sided test" },
-  { name: "margin", defaultValue: "0", help: "allowed margin: with --margin-kind relative, 0.02 means the candidate may be up to 2% worse" },
-  { name: "margin-kind", defaultValue: "relative", choices: ["relative", "absolute"], help: "relative (fraction of the baseline loss) or absolute (loss units)" },
-  { name: "policy", defaultValue: "no-regression", choices: ["no-regression", "non-inferiority", "superiority"], help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin" },
-  { name: "agreement", defaultValue: "both", choices: ["both", "either", "dm", "bootstrap"], help: "which tests must reject for the decision; with both, a split verdict is a warning" },
-  { name: "variance", defaultValue: "ewc", choices: ["ewc", "bartlett", "uniform"], help: "long-run variance for Diebold\u2013Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey\u2013West), uniform" },
-  { name: "lag", defaultValue: "auto", help: "HAC lag for bartlett/uniform: auto (Newey\u2013West 1994, at least h\u22121), h-1, or a number" },
-  { name: "block-length", defaultValue: "auto", help: "expected block length of the stationary bootstrap: auto (Politis\u2013White) or a number \u2265 1" },
+  {
+    name: "margin",
+    defaultValue: "0",
+    help: "allowed margin: with --margin-kind relative, 0.02 means the candidate may be up to 2% worse"
+  },
+  {
+    name: "margin-kind",
+    defaultValue: "relative",
+    choices: ["relative", "absolute"],
+    help: "relative (fraction of the baseline loss) or absolute (loss units)"
+  },
+  {
+    name: "policy",
+    defaultValue: "no-regression",
+    choices: ["no-regression", "non-inferiority", "superiority"],
+    help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin"
+  },
+  {
+    name: "agreement",
+    defaultValue: "both",
+    choices: ["both", "either", "dm", "bootstrap"],
+    help: "which tests must reject for the decision; with both, a split verdict is a warning"
+  },
+  {
+    name: "variance",
+    defaultValue: "ewc",
+    choices: ["ewc", "bartlett", "uniform"],
+    help: "long-run variance for Diebold\u2013Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey\u2013West), uniform"
+  },
+  {
+    name: "lag",
+    defaultValue: "auto",
+    help: "HAC lag for bartlett/uniform: auto (Newey\u2013West 1994, at least h\u22121), h-1, or a number"
+  },
+  {
+    name: "block-length",
+    defaultValue: "auto",
+    help: "expected block length of the stationary bootstrap: auto (Politis\u2013White) or a number \u2265 1"
+  },
   { name: "resamples", defaultValue: "9999", help: "bootstrap resamples" },
-  { name: "seed", defaultValue: "1729", help: "seed of the bootstrap random numbers (same seed, same numbers on every machine)" },
-  { name: "confidence", defaultValue: "0.95", help: "level of the two-sided intervals in the report" },
-  { name: "min-points", defaultValue: "30", help: "fewest time points for a firm verdict (fewer: too little data)" },
-  { name: "short-data", defaultValue: "warn", choices: ["warn", "fail"], help: "verdict when there are fewer time points than --min-points" },
-  { name: "allow-missing", defaultValue: "false", flag: true, help: "let the gate pass although the candidate lacks rows the baseline has" },
-  { name: "name", defaultValue: "", help: "a name for this comparison (report title; keeps two gates apart on one pull request)" },
+  {
+    name: "seed",
+    defaultValue: "1729",
+    help: "seed of the bootstrap random numbers (same seed, same numbers on every machine)"
+  },
+  {
+    name: "confidence",
+    defaultValue: "0.95",
+    help: "level of the two-sided intervals in the report"
+  },
+  {
+    name: "min-points",
+    defaultValue: "30",
+    help: "fewest time points for a firm verdict (fewer: too little data)"
+  },
+  {
+    name: "short-data",
+    defaultValue: "warn",
+    choices: ["warn", "fail"],
+    help: "verdict when there are fewer time points than --min-points"
+  },
+  {
+    name: "allow-missing",
+    defaultValue: "false",
+    flag: true,
+    help: "let the gate pass although the candidate lacks rows the baseline has"
+  },
+  {
+    name: "name",
+    defaultValue: "",
+    help: "a name for this comparison (report title; keeps two gates apart on one pull request)"
+  },
   { name: "json", defaultValue: null, help: "write the JSON report to this file" },
   { name: "markdown", defaultValue: null, help: "write the Markdown report to this file" }
 ];
@@ -41793,7 +41909,11 @@ function resolveSettings(raw, label) {
     }
     return x;
   };
-  const integer = (name, min, max = Number.MAX_SAFE_INTEGER) => number(name, (x) => Number.isInteger(x) && x >= min && x <= max, `an integer from ${min} to ${max}`);
+  const integer = (name, min, max = Number.MAX_SAFE_INTEGER) => number(
+    name,
+    (x) => Number.isInteger(x) && x >= min && x <= max,
+    `an integer from ${min} to ${max}`
+  );
   const bool = (name) => {
     const text2 = value(name).toLowerCase();
     if (text2 === "true") return true;
@@ -41819,7 +41939,11 @@ function resolveSettings(raw, label) {
     blockLength: parseBlockLength(value("block-length"), label("block-length")),
     resamples: integer("resamples", 99, 1e7),
     seed: integer("seed", 0, 2 ** 31 - 1),
-    confidence: number("confidence", (x) => x > 0.5 && x < 1, "a number between 0.5 and 1, such as 0.95"),
+    confidence: number(
+      "confidence",
+      (x) => x > 0.5 && x < 1,
+      "a number between 0.5 and 1, such as 0.95"
+    ),
     minPoints: integer("min-points", 1),
     shortData: value("short-data"),
     allowMissing: bool("allow-missing"),
@@ -42059,21 +42183,6 @@ var Reader = class _Reader {
   strings() {
     return this.items().map((r) => r.string());
   }
-  /**
-   * A flat object of estimator diagnostics. Renderers do not show these, so entries that are
-   * not a finite number, string, boolean or null (say, a list of notes) are dropped, not refused.
-   */
-  scalars() {
-    if (this.value === null || this.value === void 0) return null;
-    if (typeof this.value !== "object" || Array.isArray(this.value)) this.fail("an object or null");
-    const out = {};
-    for (const [key, v] of Object.entries(this.value)) {
-      if (!/^[A-Za-z][A-Za-z0-9]{0,40}$/.test(key)) continue;
-      const keep = v === null || typeof v === "string" || typeof v === "boolean" || typeof v === "number" && Number.isFinite(v);
-      if (keep) out[key] = v;
-    }
-    return out;
-  }
 };
 var VERDICTS = ["pass", "warn", "fail"];
 var POLICIES = ["no-regression", "non-inferiority", "superiority"];
@@ -42172,7 +42281,8 @@ function readDieboldMariano(r) {
       degreesOfFreedom: small.field("degreesOfFreedom").number()
     },
     interval: readInterval(r.field("interval")),
-    lagSelection: r.field("lagSelection").scalars(),
+    // Estimator diagnostics are not shown by the renderers and not carried over from untrusted data.
+    lagSelection: null,
     notes: r.field("notes").strings()
   };
 }
@@ -42183,7 +42293,7 @@ function readBootstrap(r) {
     seed: r.field("seed").integer(),
     expectedBlockLength: r.field("expectedBlockLength").number(),
     blockLengthRule: r.field("blockLengthRule").oneOf(["auto", "fixed"]),
-    blockLengthSelection: r.field("blockLengthSelection").scalars(),
+    blockLengthSelection: null,
     standardError: r.field("standardError").numberOrNull(),
     interval: readInterval(r.field("interval")),
     pValue: r.field("pValue").numberOrNull(),
