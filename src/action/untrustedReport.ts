@@ -232,6 +232,7 @@ function readBootstrap(r: Reader): BootstrapSummary {
     blockLengthSelection: null,
     standardError: r.field('standardError').numberOrNull(),
     interval: readInterval(r.field('interval')),
+    relativeInterval: readInterval(r.field('relativeInterval')),
     pValue: r.field('pValue').numberOrNull(),
     pValueTwoSided: r.field('pValueTwoSided').numberOrNull(),
     decisionPValue: r.field('decisionPValue').numberOrNull(),

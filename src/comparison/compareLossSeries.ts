@@ -37,7 +37,7 @@ export function compareLossSeries(
     hypothesis,
     settings,
   );
-  const bootstrap: BootstrapSummary = runBootstrap(d, hypothesis, settings);
+  const bootstrap: BootstrapSummary = runBootstrap(d, series, hypothesis, settings);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,

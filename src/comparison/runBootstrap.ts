@@ -1,7 +1,9 @@
+import type { LossSeries } from '../aggregation/lossSeries.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
 import type { BootstrapSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { automaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
+import { relativeDifferenceBootstrap } from '../statistics/bootstrap/relativeDifferenceBootstrap.js';
 import { stationaryBootstrap } from '../statistics/bootstrap/stationaryBootstrap.js';
 
 /**
@@ -11,6 +13,7 @@ import { stationaryBootstrap } from '../statistics/bootstrap/stationaryBootstrap
  */
 export function runBootstrap(
   d: Float64Array,
+  series: LossSeries,
   hypothesis: Hypothesis,
   settings: Settings,
 ): BootstrapSummary {
@@ -18,17 +21,23 @@ export function runBootstrap(
     settings.blockLength.kind === 'auto' && d.length >= 2 ? automaticBlockLength(d) : null;
   const expectedBlockLength =
     settings.blockLength.kind === 'fixed' ? settings.blockLength.length : (auto?.blockLength ?? 1);
-  const result = stationaryBootstrap(d, {
+  const options = {
     resamples: settings.resamples,
     expectedBlockLength,
     seed: settings.seed,
     confidence: settings.confidence,
     margin: hypothesis.boundary,
-  });
-  const decisionPValue =
-    hypothesis.rejectWhen === 'above'
-      ? result.pValue
-      : ((result as { pValueBelow?: number | null }).pValueBelow ?? null);
+  };
+  const result = stationaryBootstrap(d, options);
+  // With a relative margin, also the interval for E[L_c]/E[L_b] − 1 from the same resamples.
+  const relative =
+    settings.marginKind === 'relative'
+      ? relativeDifferenceBootstrap(series.candidate, series.baseline, {
+          ...options,
+          margin: hypothesis.baselineFactor - 1,
+        })
+      : null;
+  const decisionPValue = hypothesis.rejectWhen === 'above' ? result.pValue : result.pValueBelow;
   return {
     state: result.state,
     resamples: result.resamples,
@@ -38,6 +47,7 @@ export function runBootstrap(
     blockLengthSelection: auto,
     standardError: result.standardError,
     interval: result.interval,
+    relativeInterval: relative?.interval ?? null,
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,

@@ -64,12 +64,21 @@ function comparisonTable(report: Report): string[] {
     rows.push(
       `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
         c.meanCandidateLoss,
-      )} | ${formatNumber(c.meanDifference)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(
+      )} | ${formatNumber(c.meanDifference)} | ${relativeCell(c)} | ${formatNumber(
         dm.smallSample?.statistic ?? dm.statistic,
       )} | ${formatPValue(dm.decisionPValue)} | ${formatPValue(bs.decisionPValue)} | ${interval} | ${c.verdict} |`,
     );
   }
   return rows;
+}
+
+/** The relative difference, with its bootstrap interval when a relative margin is in force. */
+function relativeCell(c: Comparison): string {
+  const r = c.bootstrap.relativeInterval;
+  const point = formatSignedPercent(c.relativeDifference);
+  return r === null
+    ? point
+    : `${point} [${formatSignedPercent(r.lower)}, ${formatSignedPercent(r.upper)}]`;
 }
 
 function testDetails(report: Report): string[] {

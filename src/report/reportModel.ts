@@ -108,6 +108,11 @@ export interface BootstrapSummary {
   readonly standardError: number | null;
   /** Interval for E[d] (tested differential). */
   readonly interval: Interval | null;
+  /**
+   * With a relative margin: interval for E[L_c]/E[L_b] − 1 from the same resamples (basic
+   * method), e.g. [−0.02, 0.05] = "between 2% better and 5% worse".
+   */
+  readonly relativeInterval: Interval | null;
   /** One-sided: H1 E[d] > δ. */
   readonly pValue: number | null;
   readonly pValueTwoSided: number | null;

@@ -66,6 +66,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
           seed: 1729,
           expectedBlockLength: 3.6538357393873,
           blockLengthRule: 'auto',
+          relativeInterval: null,
           blockLengthSelection: {
             n: 240,
             runLength: 5,

@@ -42,6 +42,8 @@ export interface BasicBootstrapInference {
     readonly lower: number;
   };
   readonly pValue: number;
+  /** (1 + #{U_b ≥ δ})/(B + 1): one-sided for the opposite alternative, E[d] < δ. */
+  readonly pValueBelow: number;
   readonly pValueTwoSided: number;
 }
 
@@ -104,6 +106,7 @@ export function basicBootstrapInference(
     },
     oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1]! },
     pValue,
+    pValueBelow: pAbove,
     pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove)),
   };
 }

@@ -50,6 +50,8 @@ export interface StationaryBootstrapResult {
   oneSidedLower: { level: number; alpha: number; lower: number; method: 'basic' } | null;
   /** (1 + #{d̄*_b − d̄ ≥ d̄ − δ})/(B + 1): one-sided, "candidate worse by more than δ". */
   pValue: number | null;
+  /** (1 + #{d̄*_b − d̄ ≤ d̄ − δ})/(B + 1): one-sided, "candidate better than δ" (E[d] < δ). */
+  pValueBelow: number | null;
   /** min(1, 2·min of the two one-sided p-values): H0 E[d] = δ. */
   pValueTwoSided: number | null;
   notes: string[];
@@ -99,6 +101,7 @@ export function stationaryBootstrap(
       interval: null,
       oneSidedLower: null,
       pValue: null,
+      pValueBelow: null,
       pValueTwoSided: null,
       notes,
     };
@@ -140,6 +143,7 @@ export function stationaryBootstrap(
     interval: { ...inference.interval, method: 'basic' },
     oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
     pValue: inference.pValue,
+    pValueBelow: inference.pValueBelow,
     pValueTwoSided: inference.pValueTwoSided,
     notes,
   };
