@@ -12,9 +12,16 @@ export {
   relativeDifferenceBootstrap,
 } from './relativeDifferenceBootstrap.js';
 export {
-  MINIMUM_BOOTSTRAP_LENGTH,
   RESAMPLES_PER_STREAM,
+  type ResampleJob,
+  type ResampleRunner,
   resampleDeviationsOfStream,
+  runResampleJob,
+  streamCount,
+  streamShare,
+} from './resampleJob.js';
+export {
+  MINIMUM_BOOTSTRAP_LENGTH,
   type StationaryBootstrapOptions,
   type StationaryBootstrapResult,
   stationaryBootstrap,

@@ -1,5 +1,9 @@
 import { createGeometricSampler } from '../../random/geometricSampler.js';
-import { createRandomSource, type RandomSourceFactory } from '../../random/randomSource.js';
+import {
+  createRandomSource,
+  randomStreams,
+  type SequentialRandomSourceFactory,
+} from '../../random/randomSource.js';
 import { meanOf } from './autocovariances.js';
 import { basicBootstrapInference } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
@@ -53,7 +57,7 @@ export function relativeDifferenceBootstrap(
   candidateLoss: Float64Array,
   baselineLoss: Float64Array,
   options: StationaryBootstrapOptions,
-  random: RandomSourceFactory = createRandomSource,
+  random: SequentialRandomSourceFactory = createRandomSource,
 ): RelativeDifferenceResult {
   validateStationaryBootstrapOptions(options);
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
@@ -106,8 +110,9 @@ export function relativeDifferenceBootstrap(
     const sampler = createGeometricSampler(expectedBlockLength);
     const blocks = allocateStationaryBlocks(n);
     let zeroDenominators = 0;
-    for (let first = 0, stream = 0; first < resamples; first += RESAMPLES_PER_STREAM, stream++) {
-      const source = random(seed, stream);
+    const streams = randomStreams(random, seed, 0);
+    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
+      const source = streams.next();
       const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
       for (let b = first; b < last; b++) {
         drawStationaryBlocks(n, sampler, source, blocks);

@@ -1,22 +1,22 @@
-import { createGeometricSampler, type GeometricSampler } from '../../random/geometricSampler.js';
 import {
   createRandomSource,
-  type RandomSource,
-  type RandomSourceFactory,
+  type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
 import { meanOf } from './autocovariances.js';
 import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
-import { resampleMeanDeviation } from './resampleMeanDeviation.js';
+import { type ResampleRunner, runResampleJob } from './resampleJob.js';
 import { sampleStandardDeviation } from './sampleStandardDeviation.js';
-import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
 
-/**
- * Resample b (0-based) draws from stream ⌊b / RESAMPLES_PER_STREAM⌋ of the seed, resamples of one
- * stream in order. Fixed, so splitting the work by stream across threads gives the same numbers
- * whatever the number of threads.
- */
-export const RESAMPLES_PER_STREAM = 256;
+export {
+  RESAMPLES_PER_STREAM,
+  type ResampleJob,
+  type ResampleRunner,
+  resampleDeviationsOfStream,
+  runResampleJob,
+  streamCount,
+  streamShare,
+} from './resampleJob.js';
 
 /** Series shorter than this are not resampled (state 'too-short'). */
 export const MINIMUM_BOOTSTRAP_LENGTH = 2;
@@ -67,8 +67,10 @@ export interface StationaryBootstrapResult {
  * with them (`basicBootstrapInference`, Davison & Hinkley 1997, ch. 5).
  *
  * Conventions: randomness only through `random(seed, stream)` (default `createRandomSource`);
- * resample b uses stream ⌊b / RESAMPLES_PER_STREAM⌋. Same inputs, same numbers, on every
- * machine. Non-finite values in d are a RangeError (callers validate input first).
+ * resample b uses stream ⌊b / RESAMPLES_PER_STREAM⌋. `runner` says where the streams are
+ * computed (default: this thread, `runResampleJob`; src/parallel/ offers worker threads); every
+ * runner gives the same numbers. Same inputs, same numbers, on every machine and for any number
+ * of threads. Non-finite values in d are a RangeError (callers validate input first).
  *
  * Example: `stationaryBootstrap(d, { resamples: 9999, expectedBlockLength: 5, seed: 1,
  * confidence: 0.95, margin: 0 })` on d = per-row loss differences returns the mean of d, its
@@ -77,7 +79,8 @@ export interface StationaryBootstrapResult {
 export function stationaryBootstrap(
   d: Float64Array,
   options: StationaryBootstrapOptions,
-  random: RandomSourceFactory = createRandomSource,
+  random: SequentialRandomSourceFactory = createRandomSource,
+  runner: ResampleRunner = runResampleJob,
 ): StationaryBootstrapResult {
   validateStationaryBootstrapOptions(options);
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
@@ -127,6 +130,7 @@ export function stationaryBootstrap(
       resamples,
       seed,
       random,
+      runner,
     );
   }
 
@@ -159,45 +163,11 @@ export function stationaryResampleDeviations(
   expectedBlockLength: number,
   resamples: number,
   seed: number,
-  random: RandomSourceFactory = createRandomSource,
+  random: SequentialRandomSourceFactory = createRandomSource,
+  runner: ResampleRunner = runResampleJob,
 ): Float64Array {
   const prefix = centredPrefixSums(d, mean);
-  const sampler = createGeometricSampler(expectedBlockLength);
-  const out = new Float64Array(resamples);
-  const streams = Math.ceil(resamples / RESAMPLES_PER_STREAM);
-  for (let stream = 0; stream < streams; stream++) {
-    const first = stream * RESAMPLES_PER_STREAM;
-    const count = Math.min(RESAMPLES_PER_STREAM, resamples - first);
-    const share = resampleDeviationsOfStream(
-      prefix,
-      d.length,
-      sampler,
-      random(seed, stream),
-      count,
-    );
-    out.set(share, first);
-  }
-  return out;
-}
-
-/**
- * `count` consecutive resample deviations drawn from one random source: the unit of work that a
- * thread can take (stream k yields resamples k·RESAMPLES_PER_STREAM onwards).
- */
-export function resampleDeviationsOfStream(
-  prefix: Float64Array,
-  n: number,
-  sampler: GeometricSampler,
-  random: RandomSource,
-  count: number,
-): Float64Array {
-  const out = new Float64Array(count);
-  const blocks = allocateStationaryBlocks(n);
-  for (let b = 0; b < count; b++) {
-    drawStationaryBlocks(n, sampler, random, blocks);
-    out[b] = resampleMeanDeviation(prefix, n, blocks);
-  }
-  return out;
+  return runner({ prefix, n: d.length, expectedBlockLength, resamples, seed }, random);
 }
 
 /** Throws a RangeError naming the first option that cannot be honoured. */
