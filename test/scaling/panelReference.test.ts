@@ -5,6 +5,8 @@
  * Diebold–Mariano core (Bartlett with the automatic lag, and ewc) reproduces R sandwich's values
  * overall, per horizon, per series and after scaling by each series' mean baseline loss; the
  * scales and the Holm / Benjamini–Hochberg adjustments of the per-series p-values match R.
+ * panel_seatbelts_statsmodels.json (test/reference/scripts/panel_reference.py) repeats the
+ * Bartlett variances, statistics and adjustments with statsmodels, from d recomputed in numpy.
  *
  * Tolerances: d_t to 1e-13 of the mean row loss at t (R's mean accumulates in long double);
  * statistics, variances and p-values 1e-10 relative (measured agreement: within 1e-14 for statistics and
@@ -269,5 +271,91 @@ describe.each(fixture.losses)('$loss loss', (block) => {
       perTimestamp(rows, scaled.baseline, scaled.candidate, () => true),
       block.scaled.overall,
     );
+  });
+});
+
+interface StatsmodelsStats {
+  n: number;
+  timestamps: [number, number];
+  mean: number;
+  lag: number;
+  variance: number;
+  longRunVariance: number;
+  statistic: number;
+  pValue: number;
+}
+interface StatsmodelsFixture {
+  generator: string;
+  source: string;
+  losses: {
+    loss: 'squared' | 'absolute';
+    overall: StatsmodelsStats;
+    byHorizon: (StatsmodelsStats & { horizon: number })[];
+    bySeries: (StatsmodelsStats & { series: string; meanBaselineLoss: number })[];
+    seriesAdjusted: { series: string[]; raw: number[]; holm: number[]; bh: number[] };
+    scaled: { scales: Record<string, number>; overall: StatsmodelsStats };
+  }[];
+}
+const statsmodels = JSON.parse(
+  readFileSync(join(FIXTURES, 'panel_seatbelts_statsmodels.json'), 'utf8'),
+) as StatsmodelsFixture;
+
+function checkAgainstStatsmodels(
+  where: string,
+  series: ReturnType<typeof perTimestamp>,
+  expected: StatsmodelsStats,
+): void {
+  const context = `${where} (${statsmodels.source})`;
+  expect([series.times[0], series.times.at(-1)], context).toEqual(expected.timestamps);
+  const result = dieboldMariano(series.d, {
+    estimator: 'bartlett',
+    lag: { kind: 'fixed', lag: expected.lag },
+    horizon: series.maxHorizon,
+    margin: 0,
+  });
+  expect(result.n, context).toBe(expected.n);
+  const R = 1e-10;
+  expectRelative(result.mean, expected.mean, R, `${context}: mean`);
+  expectRelative(result.variance!, expected.variance, R, `${context}: variance of the mean`);
+  expectRelative(result.statistic!, expected.statistic, R, `${context}: DM statistic`);
+  expectRelative(result.pValue!, expected.pValue, R, `${context}: one-sided p`);
+}
+
+describe.each(statsmodels.losses)('against statsmodels: $loss loss', (block) => {
+  const f = lossFunctions[block.loss];
+  const lb = rows.actual.map((y, i) => f(y, rows.baseline[i]!));
+  const lc = rows.actual.map((y, i) => f(y, rows.candidate[i]!));
+  it('overall, per horizon, per series and scaled, at the lags R chose', () => {
+    expect(statsmodels.generator).toBe('test/reference/scripts/panel_reference.py');
+    checkAgainstStatsmodels(
+      'overall',
+      perTimestamp(rows, lb, lc, () => true),
+      block.overall,
+    );
+    for (const h of block.byHorizon) {
+      const selected = (i: number) => rows.horizon[i] === h.horizon;
+      checkAgainstStatsmodels(`horizon ${h.horizon}`, perTimestamp(rows, lb, lc, selected), h);
+    }
+    for (const s of block.bySeries) {
+      const k = fixture.series.indexOf(s.series);
+      const selected = (i: number) => rows.series[i] === k;
+      checkAgainstStatsmodels(`series ${s.series}`, perTimestamp(rows, lb, lc, selected), s);
+    }
+    const scales = baselineMeanLossScale(fixture.series, rows.series, lb);
+    for (const [name, value] of Object.entries(block.scaled.scales)) {
+      expectRelative(scales.get(name)!.value!, value, 1e-13, `scale of ${name}`);
+    }
+    const scaled = scaleLossesBySeries(fixture.series, rows.series, lb, lc, scales);
+    if (scaled.state !== 'ok') return expect.fail(JSON.stringify(scaled));
+    checkAgainstStatsmodels(
+      'scaled overall',
+      perTimestamp(rows, scaled.baseline, scaled.candidate, () => true),
+      block.scaled.overall,
+    );
+  });
+  it('Holm and Benjamini–Hochberg on the per-series p-values (multipletests)', () => {
+    const { raw, holm, bh } = block.seriesAdjusted;
+    expectAdjusted(holmAdjust(raw), holm, `Holm vs multipletests (${statsmodels.source})`);
+    expectAdjusted(benjaminiHochbergAdjust(raw), bh, `BH vs multipletests (${statsmodels.source})`);
   });
 });

@@ -28,6 +28,7 @@
 #   panel_seatbelts_baseline.csv, panel_seatbelts_candidate.csv
 #       series,timestamp,horizon,origin,actual,prediction (rows by series, origin, horizon)
 #   panel_seatbelts.json   the expected values, each block with its source
+# panel_reference.py then repeats the Bartlett values with statsmodels (panel_seatbelts_statsmodels.json).
 # Numbers are printed with sprintf("%.17g") so the files are byte-reproducible.
 #
 # Usage: Rscript --vanilla panel_reference.R OUTDIR
