@@ -3,8 +3,9 @@
  *
  *   coverage = (1/n) Σ_i 1{l_i ≤ y_i ≤ u_i}.
  *
- * For a central (1 − α) interval it should be close to 1 − α (Gneiting & Raftery 2007, §6.2,
- * discuss coverage next to the interval score: coverage alone does not reward narrow intervals).
+ * For a central (1 − α) interval it should be close to 1 − α. Coverage alone does not reward
+ * narrow intervals, which is why it is reported next to the interval score (Gneiting & Raftery
+ * 2007, who motivate the interval score by that gap).
  *
  * Conventions: both bounds count as inside (closed interval); a crossed interval (l_i > u_i)
  * covers nothing; an empty input has no coverage and gives null.
