@@ -12,6 +12,8 @@ const outdir = process.argv[2] ? path.resolve(process.argv[2]) : path.join(root,
 const entries = [
   { in: 'src/cli/main.ts', out: 'cli' },
   { in: 'src/action/main.ts', out: 'index' },
+  // The bootstrap's worker thread (src/parallel/resamplePool.ts loads it from next to the bundle).
+  { in: 'src/parallel/resampleWorker.ts', out: 'resampleWorker' },
 ].filter((e) => existsSync(path.join(root, e.in)));
 
 await build({
