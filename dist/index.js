@@ -32211,12 +32211,17 @@ function comparisonTable(report) {
     rows.push(
       `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
         c.meanCandidateLoss
-      )} | ${formatNumber(c.meanDifference)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(
+      )} | ${formatNumber(c.meanDifference)} | ${relativeCell(c)} | ${formatNumber(
         dm.smallSample?.statistic ?? dm.statistic
       )} | ${formatPValue(dm.decisionPValue)} | ${formatPValue(bs.decisionPValue)} | ${interval} | ${c.verdict} |`
     );
   }
   return rows;
+}
+function relativeCell(c) {
+  const r = c.bootstrap.relativeInterval;
+  const point = formatSignedPercent(c.relativeDifference);
+  return r === null ? point : `${point} [${formatSignedPercent(r.lower)}, ${formatSignedPercent(r.upper)}]`;
 }
 function testDetails(report) {
   const c = report.comparisons[0];
@@ -39401,50 +39406,55 @@ function compact(ids, names) {
   return { ids, names: kept };
 }
 
-// src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, selected) {
-  const points = panel.timestamps.length;
-  const sumB = new Float64Array(points);
-  const sumC = new Float64Array(points);
-  const count = new Int32Array(points);
-  let maxHorizon = 1;
-  let rowCount = 0;
-  const included = losses.included;
-  for (let i = 0; i < panel.size; i++) {
-    if (included !== null && included[i] === 0) continue;
-    if (selected !== void 0 && !selected(i)) continue;
-    const t = panel.time[i];
-    sumB[t] += losses.baseline[i];
-    sumC[t] += losses.candidate[i];
-    count[t]++;
-    rowCount++;
-    const h = panel.horizon[i];
-    if (h > maxHorizon) maxHorizon = h;
+// src/alignment/orderLossSeries.ts
+function orderLossSeries(table) {
+  const file = table.summary.path;
+  const order = orderLabels([{ file, column: table.timestamp }], "timestamp");
+  const ranks = order.ranks[0];
+  const n = table.size;
+  const rowAt = new Int32Array(order.labels.length).fill(-1);
+  for (let i = 0; i < n; i++) {
+    const rank = ranks[table.timestamp.ids[i]];
+    const other = rowAt[rank];
+    if (other >= 0) {
+      throw new InputError(
+        `this timestamp denotes the same time as line ${table.lines[other]} (${JSON.stringify(
+          table.timestamp.labels[table.timestamp.ids[other]]
+        )})`,
+        {
+          file,
+          line: table.lines[i],
+          column: table.timestamp.column,
+          value: table.timestamp.labels[table.timestamp.ids[i]]
+        }
+      );
+    }
+    rowAt[rank] = i;
   }
-  let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0) n++;
   const time = new Int32Array(n);
   const baseline = new Float64Array(n);
   const candidate = new Float64Array(n);
   const rows = new Int32Array(n);
   let k = 0;
-  for (let t = 0; t < points; t++) {
-    const m = count[t];
-    if (m === 0) continue;
-    time[k] = t;
-    baseline[k] = sumB[t] / m;
-    candidate[k] = sumC[t] / m;
-    rows[k] = m;
+  let rowCount = 0;
+  let maxHorizon = 1;
+  for (let rank = 0; rank < rowAt.length; rank++) {
+    const i = rowAt[rank];
+    if (i < 0) continue;
+    time[k] = rank;
+    baseline[k] = table.baseline[i];
+    candidate[k] = table.candidate[i];
+    rows[k] = table.rows[i];
+    rowCount += table.rows[i];
+    maxHorizon = Math.max(maxHorizon, table.horizon[i]);
     k++;
   }
-  return { time, baseline, candidate, rows, rowCount, maxHorizon };
-}
-function lossDifferential(series, relativeMargin) {
-  const n = series.baseline.length;
-  const d = new Float64Array(n);
-  const factor = 1 + relativeMargin;
-  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
-  return d;
+  return {
+    series: { time, baseline, candidate, rows, rowCount, maxHorizon },
+    timestamps: [...order.labels],
+    kind: order.kind,
+    reason: order.reason
+  };
 }
 
 // src/core/version.ts
@@ -39490,112 +39500,6 @@ function formatPercent(fraction) {
   return `${Number((fraction * 100).toPrecision(6))}%`;
 }
 
-// src/losses/absoluteError.ts
-function absoluteError(actual, prediction) {
-  return Math.abs(actual - prediction);
-}
-
-// src/losses/absolutePercentageError.ts
-function absolutePercentageError(actual, prediction) {
-  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
-}
-
-// src/losses/pinballLoss.ts
-function pinballLoss(actual, quantile, level) {
-  const u = actual - quantile;
-  return u >= 0 ? level * u : (level - 1) * u;
-}
-
-// src/losses/squaredError.ts
-function squaredError(actual, prediction) {
-  const e = actual - prediction;
-  return e * e;
-}
-
-// src/losses/symmetricAbsolutePercentageError.ts
-function symmetricAbsolutePercentageError(actual, prediction) {
-  const denominator = Math.abs(actual) + Math.abs(prediction);
-  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
-}
-
-// src/losses/rowLosses.ts
-var LossUnavailableError = class extends Error {
-};
-var POINT_LOSSES = {
-  squared: squaredError,
-  absolute: absoluteError,
-  ape: absolutePercentageError,
-  sape: symmetricAbsolutePercentageError
-};
-function computeRowLosses(panel, loss, zeroActuals) {
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  if (loss === "pinball") {
-    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
-    if (pairs.length === 0) {
-      throw new LossUnavailableError(
-        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
-      );
-    }
-    const y2 = panel.actual;
-    for (const { level, base: base2, cand: cand2 } of pairs) {
-      for (let i = 0; i < n; i++) {
-        const yi = y2[i];
-        baseline[i] += pinballLoss(yi, base2[i], level);
-        candidate[i] += pinballLoss(yi, cand2[i], level);
-      }
-    }
-    const k = pairs.length;
-    for (let i = 0; i < n; i++) {
-      baseline[i] /= k;
-      candidate[i] /= k;
-    }
-    return {
-      loss,
-      baseline,
-      candidate,
-      included: null,
-      zeroActualRows: [],
-      levels: pairs.map((p) => p.level)
-    };
-  }
-  const base = panel.baseline.prediction;
-  const cand = panel.candidate.prediction;
-  if (base === null || cand === null) {
-    throw new LossUnavailableError(
-      `the ${loss} loss needs a prediction column in both baseline and candidate`
-    );
-  }
-  const f = POINT_LOSSES[loss];
-  const y = panel.actual;
-  const zeroActualRows = [];
-  let included = null;
-  for (let i = 0; i < n; i++) {
-    const yi = y[i];
-    if (loss === "ape" && yi === 0) {
-      zeroActualRows.push(i);
-      if (zeroActuals === "skip") {
-        included ??= new Uint8Array(n).fill(1);
-        included[i] = 0;
-      }
-      continue;
-    }
-    baseline[i] = f(yi, base[i]);
-    candidate[i] = f(yi, cand[i]);
-  }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
-}
-function commonQuantiles(baseline, candidate) {
-  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
-  const pairs = [];
-  for (const q of baseline) {
-    const cand = byLevel.get(q.level);
-    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
-  }
-  return pairs;
-}
-
 // src/decision/verdict.ts
 function worstVerdict(verdicts) {
   if (verdicts.includes("fail")) return "fail";
@@ -39605,12 +39509,12 @@ function worstVerdict(verdicts) {
 
 // src/report/buildReport.ts
 function buildReport(parts) {
-  const { panel, settings, hypothesis } = parts;
+  const { inputs, settings, hypothesis } = parts;
   const overall = parts.comparisons[0];
   if (overall === void 0) throw new Error("a report needs the overall comparison");
   const reasons = [];
   const verdicts = [overall.verdict];
-  const missing = panel.coverage.baselineOnly;
+  const missing = inputs.rowsDropped.baseline;
   if (missing > 0) {
     if (settings.allowMissing) {
       reasons.push(
@@ -39624,9 +39528,6 @@ function buildReport(parts) {
     }
   }
   const verdict = worstVerdict(verdicts);
-  const horizons = /* @__PURE__ */ new Set();
-  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]);
-  const ts = panel.timestamps;
   return {
     tool: { name: "skillgate", version: parts.version },
     name: settings.name,
@@ -39645,27 +39546,7 @@ function buildReport(parts) {
       boundary: hypothesis.boundary
     },
     comparisons: parts.comparisons,
-    inputs: {
-      files: panel.coverage.files,
-      rowsMatched: panel.coverage.rowsMatched,
-      rowsDropped: {
-        baseline: panel.coverage.baselineOnly,
-        candidate: panel.coverage.candidateOnly,
-        withoutActual: panel.coverage.withoutActual,
-        actualsUnused: panel.coverage.actualsUnused,
-        skippedByLoss: parts.losses.included === null ? 0 : parts.losses.zeroActualRows.length
-      },
-      examples: panel.coverage.examples,
-      timestamps: {
-        count: ts.length,
-        kind: panel.timestampKind,
-        first: ts[0] ?? null,
-        last: ts[ts.length - 1] ?? null
-      },
-      series: panel.seriesNames.length,
-      horizons: [...horizons].sort((a, b) => a - b),
-      quantileLevels: parts.losses.levels
-    },
+    inputs,
     settings,
     reasons
   };
@@ -39682,6 +39563,106 @@ function headline(verdict, overall, hypothesis) {
     case "fail":
       return `${tested} The gate fails.`;
   }
+}
+
+// src/report/inputsSummary.ts
+function panelInputsSummary(panel, losses) {
+  const horizons = /* @__PURE__ */ new Set();
+  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]);
+  const ts = panel.timestamps;
+  return {
+    files: panel.coverage.files,
+    rowsMatched: panel.coverage.rowsMatched,
+    rowsDropped: {
+      baseline: panel.coverage.baselineOnly,
+      candidate: panel.coverage.candidateOnly,
+      withoutActual: panel.coverage.withoutActual,
+      actualsUnused: panel.coverage.actualsUnused,
+      skippedByLoss: losses.included === null ? 0 : losses.zeroActualRows.length
+    },
+    examples: {
+      baselineOnly: panel.coverage.examples.baselineOnly,
+      candidateOnly: panel.coverage.examples.candidateOnly
+    },
+    timestamps: {
+      count: ts.length,
+      kind: panel.timestampKind,
+      first: ts[0] ?? null,
+      last: ts.at(-1) ?? null
+    },
+    series: panel.seriesNames.length,
+    horizons: [...horizons].sort((a, b) => a - b),
+    quantileLevels: losses.levels
+  };
+}
+function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
+  return {
+    files: [file],
+    rowsMatched: file.rows,
+    rowsDropped: {
+      baseline: 0,
+      candidate: 0,
+      withoutActual: 0,
+      actualsUnused: 0,
+      skippedByLoss: 0
+    },
+    examples: { baselineOnly: [], candidateOnly: [] },
+    timestamps: {
+      count: timestamps.length,
+      kind,
+      first: timestamps[0] ?? null,
+      last: timestamps.at(-1) ?? null
+    },
+    series: 1,
+    horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),
+    quantileLevels: []
+  };
+}
+
+// src/aggregation/lossSeries.ts
+function aggregateByTime(panel, losses, selected) {
+  const points = panel.timestamps.length;
+  const sumB = new Float64Array(points);
+  const sumC = new Float64Array(points);
+  const count = new Int32Array(points);
+  let maxHorizon = 1;
+  let rowCount = 0;
+  const included = losses.included;
+  for (let i = 0; i < panel.size; i++) {
+    if (included !== null && included[i] === 0) continue;
+    if (selected !== void 0 && !selected(i)) continue;
+    const t = panel.time[i];
+    sumB[t] += losses.baseline[i];
+    sumC[t] += losses.candidate[i];
+    count[t]++;
+    rowCount++;
+    const h = panel.horizon[i];
+    if (h > maxHorizon) maxHorizon = h;
+  }
+  let n = 0;
+  for (let t = 0; t < points; t++) if (count[t] > 0) n++;
+  const time = new Int32Array(n);
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const rows = new Int32Array(n);
+  let k = 0;
+  for (let t = 0; t < points; t++) {
+    const m = count[t];
+    if (m === 0) continue;
+    time[k] = t;
+    baseline[k] = sumB[t] / m;
+    candidate[k] = sumC[t] / m;
+    rows[k] = m;
+    k++;
+  }
+  return { time, baseline, candidate, rows, rowCount, maxHorizon };
+}
+function lossDifferential(series, relativeMargin) {
+  const n = series.baseline.length;
+  const d = new Float64Array(n);
+  const factor = 1 + relativeMargin;
+  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
+  return d;
 }
 
 // src/decision/decideComparison.ts
@@ -40053,16 +40034,35 @@ function splitMix64Words(seed, count) {
 // src/random/randomSource.ts
 var TWO_POW_26 = 67108864;
 var TWO_POW_MINUS_53 = 1 / 9007199254740992;
+function randomStreams(factory, seed, first) {
+  if (factory.sequence !== void 0) return factory.sequence(seed, first);
+  let stream = first;
+  return { next: () => factory(seed, stream++) };
+}
 function createRandomSource(seed, stream = 0) {
+  return createRandomStreams(seed, stream).next();
+}
+createRandomSource.sequence = createRandomStreams;
+function createRandomStreams(seed, first = 0) {
   if (!Number.isSafeInteger(seed) || seed < 0) {
     throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
   }
-  if (!Number.isSafeInteger(stream) || stream < 0) {
-    throw new RangeError(`stream must be a non-negative integer, got ${stream}`);
+  if (!Number.isSafeInteger(first) || first < 0) {
+    throw new RangeError(`stream must be a non-negative integer, got ${first}`);
   }
   const [s0High, s0Low, s1High, s1Low] = splitMix64Words(seed, 2);
-  const generator = xoroshiro128plusFromState([s0High, s0Low, s1High, s1Low]);
-  for (let k = 0; k < stream; k++) generator.jump();
+  const cursor = xoroshiro128plusFromState([s0High, s0Low, s1High, s1Low]);
+  for (let k = 0; k < first; k++) cursor.jump();
+  let started = false;
+  return {
+    next: () => {
+      if (started) cursor.jump();
+      started = true;
+      return sourceOf(cursor.clone());
+    }
+  };
+}
+function sourceOf(generator) {
   return {
     nextUint32: () => generator.next() >>> 0,
     nextDouble: () => {
@@ -40118,6 +40118,7 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
     },
     oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
     pValue,
+    pValueBelow: pAbove,
     pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove))
   };
 }
@@ -40202,10 +40203,39 @@ function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlock
   return into;
 }
 
-// src/statistics/bootstrap/stationaryBootstrap.ts
+// src/statistics/bootstrap/resampleJob.ts
 var RESAMPLES_PER_STREAM = 256;
+function streamCount(resamples) {
+  return Math.ceil(resamples / RESAMPLES_PER_STREAM);
+}
+function streamShare(resamples, stream) {
+  const first = stream * RESAMPLES_PER_STREAM;
+  return { first, count: Math.max(0, Math.min(RESAMPLES_PER_STREAM, resamples - first)) };
+}
+function runResampleJob(job, random = createRandomSource) {
+  const out = new Float64Array(job.resamples);
+  const sampler = createGeometricSampler(job.expectedBlockLength);
+  const streams = randomStreams(random, job.seed, 0);
+  const total = streamCount(job.resamples);
+  for (let stream = 0; stream < total; stream++) {
+    const { first, count } = streamShare(job.resamples, stream);
+    out.set(resampleDeviationsOfStream(job.prefix, job.n, sampler, streams.next(), count), first);
+  }
+  return out;
+}
+function resampleDeviationsOfStream(prefix, n, sampler, random, count) {
+  const out = new Float64Array(count);
+  const blocks = allocateStationaryBlocks(n);
+  for (let b = 0; b < count; b++) {
+    drawStationaryBlocks(n, sampler, random, blocks);
+    out[b] = resampleMeanDeviation(prefix, n, blocks);
+  }
+  return out;
+}
+
+// src/statistics/bootstrap/stationaryBootstrap.ts
 var MINIMUM_BOOTSTRAP_LENGTH = 2;
-function stationaryBootstrap(d, options, random = createRandomSource) {
+function stationaryBootstrap(d, options, random = createRandomSource, runner = runResampleJob) {
   validateStationaryBootstrapOptions(options);
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
   const n = d.length;
@@ -40228,6 +40258,7 @@ function stationaryBootstrap(d, options, random = createRandomSource) {
       interval: null,
       oneSidedLower: null,
       pValue: null,
+      pValueBelow: null,
       pValueTwoSided: null,
       notes
     };
@@ -40250,7 +40281,8 @@ function stationaryBootstrap(d, options, random = createRandomSource) {
       expectedBlockLength,
       resamples,
       seed,
-      random
+      random,
+      runner
     );
   }
   const standardError = sampleStandardDeviation(deviations);
@@ -40266,37 +40298,14 @@ function stationaryBootstrap(d, options, random = createRandomSource) {
     interval: { ...inference.interval, method: "basic" },
     oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
     pValue: inference.pValue,
+    pValueBelow: inference.pValueBelow,
     pValueTwoSided: inference.pValueTwoSided,
     notes
   };
 }
-function stationaryResampleDeviations(d, mean3, expectedBlockLength, resamples, seed, random = createRandomSource) {
+function stationaryResampleDeviations(d, mean3, expectedBlockLength, resamples, seed, random = createRandomSource, runner = runResampleJob) {
   const prefix = centredPrefixSums(d, mean3);
-  const sampler = createGeometricSampler(expectedBlockLength);
-  const out = new Float64Array(resamples);
-  const streams = Math.ceil(resamples / RESAMPLES_PER_STREAM);
-  for (let stream = 0; stream < streams; stream++) {
-    const first = stream * RESAMPLES_PER_STREAM;
-    const count = Math.min(RESAMPLES_PER_STREAM, resamples - first);
-    const share = resampleDeviationsOfStream(
-      prefix,
-      d.length,
-      sampler,
-      random(seed, stream),
-      count
-    );
-    out.set(share, first);
-  }
-  return out;
-}
-function resampleDeviationsOfStream(prefix, n, sampler, random, count) {
-  const out = new Float64Array(count);
-  const blocks = allocateStationaryBlocks(n);
-  for (let b = 0; b < count; b++) {
-    drawStationaryBlocks(n, sampler, random, blocks);
-    out[b] = resampleMeanDeviation(prefix, n, blocks);
-  }
-  return out;
+  return runner({ prefix, n: d.length, expectedBlockLength, resamples, seed }, random);
 }
 function validateStationaryBootstrapOptions(options) {
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
@@ -40320,18 +40329,110 @@ function validateStationaryBootstrapOptions(options) {
   if (!Number.isFinite(margin)) throw new RangeError(`margin must be finite, got ${margin}`);
 }
 
+// src/statistics/bootstrap/relativeDifferenceBootstrap.ts
+function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, random = createRandomSource) {
+  validateStationaryBootstrapOptions(options);
+  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
+  const n = candidateLoss.length;
+  if (baselineLoss.length !== n) {
+    throw new RangeError(`loss series differ in length: ${n} vs ${baselineLoss.length}`);
+  }
+  for (let t = 0; t < n; t++) {
+    if (!(Number.isFinite(candidateLoss[t]) && Number.isFinite(baselineLoss[t]))) {
+      throw new RangeError(`loss at position ${t} is not a finite number`);
+    }
+  }
+  const empty = {
+    resamples,
+    seed,
+    expectedBlockLength,
+    standardError: null,
+    interval: null,
+    oneSidedLower: null,
+    pValue: null,
+    pValueTwoSided: null
+  };
+  if (n < MINIMUM_BOOTSTRAP_LENGTH) {
+    return {
+      state: "too-short",
+      ...empty,
+      relativeDifference: null,
+      notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`]
+    };
+  }
+  const candidateMean = meanOf(candidateLoss);
+  const baselineMean = meanOf(baselineLoss);
+  if (!(baselineMean > 0)) {
+    return {
+      state: "baseline-zero",
+      ...empty,
+      relativeDifference: null,
+      notes: [`the baseline's mean loss is ${baselineMean}; a relative difference needs it > 0`]
+    };
+  }
+  const estimate = candidateMean / baselineMean - 1;
+  const identical = candidateLoss.every((x, t) => x === baselineLoss[t]);
+  const notes = [];
+  const deviations = new Float64Array(resamples);
+  if (identical) {
+    notes.push("candidate and baseline losses are identical; no resampling needed");
+  } else {
+    const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
+    const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
+    const sampler = createGeometricSampler(expectedBlockLength);
+    const blocks = allocateStationaryBlocks(n);
+    let zeroDenominators = 0;
+    const streams = randomStreams(random, seed, 0);
+    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
+      const source = streams.next();
+      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
+      for (let b = first; b < last; b++) {
+        drawStationaryBlocks(n, sampler, source, blocks);
+        const c = candidateMean + resampleMeanDeviation(candidatePrefix, n, blocks);
+        const base = baselineMean + resampleMeanDeviation(baselinePrefix, n, blocks);
+        if (base === 0) zeroDenominators++;
+        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+        deviations[b] = theta - estimate;
+      }
+    }
+    if (zeroDenominators > 0) {
+      notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (\u03B8* infinite)`);
+    }
+  }
+  const reflected = new Float64Array(resamples);
+  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b];
+  reflected.sort();
+  const inference = basicBootstrapInference(reflected, margin, confidence);
+  return {
+    state: identical ? "identical" : "ok",
+    ...empty,
+    relativeDifference: estimate,
+    standardError: sampleStandardDeviation(deviations),
+    interval: { ...inference.interval, method: "basic" },
+    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
+    pValue: inference.pValue,
+    pValueTwoSided: inference.pValueTwoSided,
+    notes
+  };
+}
+
 // src/comparison/runBootstrap.ts
-function runBootstrap(d, hypothesis, settings) {
+function runBootstrap(d, series, hypothesis, settings) {
   const auto = settings.blockLength.kind === "auto" && d.length >= 2 ? automaticBlockLength(d) : null;
   const expectedBlockLength = settings.blockLength.kind === "fixed" ? settings.blockLength.length : auto?.blockLength ?? 1;
-  const result = stationaryBootstrap(d, {
+  const options = {
     resamples: settings.resamples,
     expectedBlockLength,
     seed: settings.seed,
     confidence: settings.confidence,
     margin: hypothesis.boundary
-  });
-  const decisionPValue = hypothesis.rejectWhen === "above" ? result.pValue : result.pValueBelow ?? null;
+  };
+  const result = stationaryBootstrap(d, options);
+  const relative2 = settings.marginKind === "relative" ? relativeDifferenceBootstrap(series.candidate, series.baseline, {
+    ...options,
+    margin: hypothesis.baselineFactor - 1
+  }) : null;
+  const decisionPValue = hypothesis.rejectWhen === "above" ? result.pValue : result.pValueBelow;
   return {
     state: result.state,
     resamples: result.resamples,
@@ -40341,6 +40442,7 @@ function runBootstrap(d, hypothesis, settings) {
     blockLengthSelection: auto,
     standardError: result.standardError,
     interval: result.interval,
+    relativeInterval: relative2?.interval ?? null,
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,
@@ -40755,7 +40857,7 @@ function compareLossSeries(series, scope, hypothesis, settings) {
     hypothesis,
     settings
   );
-  const bootstrap = runBootstrap(d, hypothesis, settings);
+  const bootstrap = runBootstrap(d, series, hypothesis, settings);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -40806,6 +40908,130 @@ function mean2(x) {
   return x.length === 0 ? 0 : s / x.length;
 }
 
+// src/comparison/evaluateLossSeries.ts
+function evaluateLossSeries(series, source, settings) {
+  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const overall = compareLossSeries(
+    series,
+    { loss: settings.loss, horizon: "all", series: "all", timestamps: source.timestamps },
+    hypothesis,
+    settings
+  );
+  return buildReport({
+    version: VERSION7,
+    settings,
+    hypothesis,
+    inputs: lossFileInputsSummary(source.file, source.timestamps, source.kind, series.maxHorizon),
+    comparisons: [overall]
+  });
+}
+
+// src/losses/absoluteError.ts
+function absoluteError(actual, prediction) {
+  return Math.abs(actual - prediction);
+}
+
+// src/losses/absolutePercentageError.ts
+function absolutePercentageError(actual, prediction) {
+  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/pinballLoss.ts
+function pinballLoss(actual, quantile, level) {
+  const u = actual - quantile;
+  return u >= 0 ? level * u : (level - 1) * u;
+}
+
+// src/losses/squaredError.ts
+function squaredError(actual, prediction) {
+  const e = actual - prediction;
+  return e * e;
+}
+
+// src/losses/symmetricAbsolutePercentageError.ts
+function symmetricAbsolutePercentageError(actual, prediction) {
+  const denominator = Math.abs(actual) + Math.abs(prediction);
+  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
+}
+
+// src/losses/rowLosses.ts
+var LossUnavailableError = class extends Error {
+};
+var POINT_LOSSES = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError
+};
+function computeRowLosses(panel, loss, zeroActuals) {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === "pinball") {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
+      );
+    }
+    const y2 = panel.actual;
+    for (const { level, base: base2, cand: cand2 } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y2[i];
+        baseline[i] += pinballLoss(yi, base2[i], level);
+        candidate[i] += pinballLoss(yi, cand2[i], level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i] /= k;
+      candidate[i] /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level)
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows = [];
+  let included = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i];
+    if (loss === "ape" && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === "skip") {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]);
+    candidate[i] = f(yi, cand[i]);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
+}
+function commonQuantiles(baseline, candidate) {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}
+
 // src/comparison/evaluatePanel.ts
 function evaluatePanel(panel, settings) {
   const losses = rowLossesOrInputError(panel, settings);
@@ -40820,8 +41046,7 @@ function evaluatePanel(panel, settings) {
     version: VERSION7,
     settings,
     hypothesis,
-    panel,
-    losses,
+    inputs: panelInputsSummary(panel, losses),
     comparisons: [overall]
   });
 }
@@ -40849,13 +41074,70 @@ function rowLossesOrInputError(panel, settings) {
   return losses;
 }
 
-// src/reading/readForecastFile.ts
+// src/reading/streamTextFile.ts
 import { createHash } from "node:crypto";
 import { createReadStream } from "node:fs";
 import { stat as stat2 } from "node:fs/promises";
 import { pipeline } from "node:stream/promises";
 import { TextDecoder as TextDecoder2 } from "node:util";
 import { createGunzip } from "node:zlib";
+var CHUNK_BYTES = 1 << 20;
+async function streamTextFile(path7, gzip, sink, onProgress) {
+  let totalBytes;
+  try {
+    const info2 = await stat2(path7);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
+    totalBytes = info2.size;
+  } catch (error2) {
+    throw asInputError(error2, path7);
+  }
+  const hash = createHash("sha256");
+  const decoder = new TextDecoder2("utf-8", { fatal: true });
+  let bytesRead = 0;
+  const tap = async function* (source) {
+    for await (const chunk of source) {
+      hash.update(chunk);
+      bytesRead += chunk.length;
+      onProgress?.(bytesRead, totalBytes);
+      yield chunk;
+    }
+  };
+  const consume = async (source) => {
+    for await (const chunk of source) sink.push(decode(decoder, chunk, true, path7, sink));
+    sink.push(decode(decoder, void 0, false, path7, sink));
+  };
+  try {
+    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
+    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
+    else await pipeline(raw, tap, consume);
+  } catch (error2) {
+    throw asInputError(error2, path7);
+  }
+  return `sha256:${hash.digest("hex")}`;
+}
+function decode(decoder, chunk, stream, path7, sink) {
+  try {
+    return decoder.decode(chunk, { stream });
+  } catch {
+    throw new InputError(
+      `the file is not valid UTF-8 text (the first invalid bytes come after line ${sink.linesRead})`,
+      { file: path7 }
+    );
+  }
+}
+function asInputError(error2, path7) {
+  if (error2 instanceof InputError) return error2;
+  const code = error2?.code;
+  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
+  if (code === "EACCES" || code === "EPERM")
+    return new InputError("permission denied", { file: path7 });
+  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
+  if (typeof code === "string" && code.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
+  }
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+}
 
 // src/reading/columnMapping.ts
 var COLUMN_ROLES = [
@@ -41428,7 +41710,6 @@ function formatFromPath(path7) {
   const base = gzip ? lower.slice(0, -3) : lower;
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
 }
-var CHUNK_BYTES = 1 << 20;
 async function readForecastFile(path7, options) {
   const implied = formatFromPath(path7);
   const format = options.format ?? implied.format;
@@ -41438,66 +41719,194 @@ async function readForecastFile(path7, options) {
     ...options.columns === void 0 ? {} : { columns: options.columns },
     ...options.requireActual === void 0 ? {} : { requireActual: options.requireActual }
   });
-  let totalBytes;
-  try {
-    const info2 = await stat2(path7);
-    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
-    totalBytes = info2.size;
-  } catch (error2) {
-    throw asInputError(error2, path7);
-  }
-  const hash = createHash("sha256");
-  const decoder = new TextDecoder2("utf-8", { fatal: true });
-  let bytesRead = 0;
-  const tap = async function* (source) {
-    for await (const chunk of source) {
-      hash.update(chunk);
-      bytesRead += chunk.length;
-      options.onProgress?.(bytesRead, totalBytes);
-      yield chunk;
-    }
-  };
-  const consume = async (source) => {
-    for await (const chunk of source) {
-      reader.push(decode(decoder, chunk, true, path7, reader));
-    }
-    reader.push(decode(decoder, void 0, false, path7, reader));
-  };
-  try {
-    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
-    if (implied.gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
-    else await pipeline(raw, tap, consume);
-  } catch (error2) {
-    throw asInputError(error2, path7);
-  }
-  return reader.finish(`sha256:${hash.digest("hex")}`);
+  const sha256 = await streamTextFile(path7, implied.gzip, reader, options.onProgress);
+  return reader.finish(sha256);
 }
-function decode(decoder, chunk, stream, path7, reader) {
-  try {
-    return decoder.decode(chunk, { stream });
-  } catch {
-    throw new InputError(
-      `the file is not valid UTF-8 text (the first invalid bytes come after line ${reader.linesRead})`,
-      { file: path7 }
+
+// src/reading/lossSeriesReader.ts
+var REQUIRED = ["baseline_loss", "candidate_loss"];
+var KNOWN = ["baseline_loss", "candidate_loss", "differential", "rows", "horizon"];
+var LossSeriesReader = class {
+  path;
+  timestampName;
+  tokenizer;
+  header = null;
+  lines = [];
+  labels = [];
+  ids = [];
+  firstLines = [];
+  idOf = /* @__PURE__ */ new Map();
+  baseline = [];
+  candidate = [];
+  rows = [];
+  horizon = [];
+  constructor(path7, options) {
+    this.path = path7;
+    this.timestampName = options.timestampColumn ?? "timestamp";
+    this.tokenizer = new Tokenizer(
+      options.format === "tsv" ? "	" : ",",
+      (fields, count, line) => this.record(fields, count, line),
+      path7
     );
   }
-}
-function asInputError(error2, path7) {
-  if (error2 instanceof InputError) return error2;
-  const code = error2?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path7 });
-  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
-  if (typeof code === "string" && code.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
+  get linesRead() {
+    return this.tokenizer.lines;
   }
-  const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+  push(chunk) {
+    this.tokenizer.push(chunk);
+  }
+  finish(sha256 = "") {
+    this.tokenizer.end();
+    if (this.header === null) throw new InputError("the file is empty", { file: this.path });
+    if (this.baseline.length === 0) {
+      throw new InputError("the file has a header but no data rows", { file: this.path });
+    }
+    const names = this.header.names;
+    return {
+      summary: {
+        role: "losses",
+        path: this.path,
+        rows: this.baseline.length,
+        sha256,
+        columns: names,
+        ignoredColumns: names.filter((n) => n !== this.timestampName && !KNOWN.includes(n)),
+        blankLines: this.tokenizer.blankLines
+      },
+      size: this.baseline.length,
+      lines: Int32Array.from(this.lines),
+      timestamp: {
+        column: this.timestampName,
+        ids: Int32Array.from(this.ids),
+        labels: this.labels,
+        firstLines: Int32Array.from(this.firstLines)
+      },
+      baseline: Float64Array.from(this.baseline),
+      candidate: Float64Array.from(this.candidate),
+      rows: Int32Array.from(this.rows),
+      horizon: Int32Array.from(this.horizon)
+    };
+  }
+  record(fields, count, line) {
+    if (this.header === null) {
+      const names2 = fields.slice(0, count).map((f) => f.trim());
+      const index2 = {};
+      names2.forEach((n, i) => {
+        if (n in index2) {
+          throw new InputError(`the header names the column "${n}" twice`, {
+            file: this.path,
+            line
+          });
+        }
+        index2[n] = i;
+      });
+      for (const need of [this.timestampName, ...REQUIRED]) {
+        if (!(need in index2)) {
+          throw new InputError(
+            `a loss file needs the columns ${this.timestampName}, baseline_loss and candidate_loss; "${need}" is missing`,
+            { file: this.path, line, column: need }
+          );
+        }
+      }
+      this.header = { names: names2, index: index2 };
+      return;
+    }
+    const { names, index } = this.header;
+    if (count !== names.length) {
+      throw new InputError(`expected ${names.length} fields as in the header, found ${count}`, {
+        file: this.path,
+        line
+      });
+    }
+    const at = (name) => fields[index[name]];
+    const number = (name) => {
+      const text2 = at(name);
+      const x = parseDecimal(text2);
+      if (Number.isNaN(x)) {
+        throw new InputError("not a finite decimal number", {
+          file: this.path,
+          line,
+          column: name,
+          value: text2
+        });
+      }
+      return x;
+    };
+    const integer = (name) => {
+      if (!(name in index)) return 1;
+      const x = number(name);
+      if (!Number.isInteger(x) || x < 1) {
+        throw new InputError("expected a whole number \u2265 1", {
+          file: this.path,
+          line,
+          column: name,
+          value: at(name)
+        });
+      }
+      return x;
+    };
+    const label = at(this.timestampName);
+    if (label === "") {
+      throw new InputError("empty timestamp", {
+        file: this.path,
+        line,
+        column: this.timestampName
+      });
+    }
+    const b = number("baseline_loss");
+    const c = number("candidate_loss");
+    if ("differential" in index) {
+      const d = number("differential");
+      const scale = Math.max(1, Math.abs(b), Math.abs(c));
+      if (Math.abs(d - (c - b)) > 1e-9 * scale) {
+        throw new InputError(`differential should be candidate_loss \u2212 baseline_loss = ${c - b}`, {
+          file: this.path,
+          line,
+          column: "differential",
+          value: at("differential")
+        });
+      }
+    }
+    let id = this.idOf.get(label);
+    if (id === void 0) {
+      id = this.labels.length;
+      this.idOf.set(label, id);
+      this.labels.push(label);
+      this.firstLines.push(line);
+    } else {
+      throw new InputError(
+        `timestamp ${JSON.stringify(label)} appears twice (first on line ${this.firstLines[id]})`,
+        {
+          file: this.path,
+          line,
+          column: this.timestampName,
+          value: label
+        }
+      );
+    }
+    this.ids.push(id);
+    this.lines.push(line);
+    this.baseline.push(b);
+    this.candidate.push(c);
+    this.rows.push(integer("rows"));
+    this.horizon.push(integer("horizon"));
+  }
+};
+
+// src/reading/readLossSeriesFile.ts
+async function readLossSeriesFile(path7, options = {}) {
+  const implied = formatFromPath(path7);
+  const reader = new LossSeriesReader(path7, {
+    format: options.format ?? implied.format,
+    ...options.timestampColumn === void 0 ? {} : { timestampColumn: options.timestampColumn }
+  });
+  const sha256 = await streamTextFile(path7, implied.gzip, reader, options.onProgress);
+  return reader.finish(sha256);
 }
 
 // src/app/runComparison.ts
 async function runComparison(settings, hooks = {}) {
+  if (settings.losses !== null)
+    return { report: await runOnLossFile(settings.losses, settings, hooks) };
   const read = (path7, role) => readForecastFile(path7, {
     role,
     columns: settings.columns,
@@ -41514,6 +41923,15 @@ async function runComparison(settings, hooks = {}) {
   const report = evaluatePanel(panel, settings);
   hooks.onProgress?.({ stage: "testing", fraction: 1 });
   return { report };
+}
+async function runOnLossFile(path7, settings, hooks) {
+  const table = await readLossSeriesFile(path7, {
+    ...settings.format === "auto" ? {} : { format: settings.format },
+    ...settings.columns.timestamp === void 0 ? {} : { timestampColumn: settings.columns.timestamp },
+    onProgress: (done, total) => hooks.onProgress?.({ stage: "reading losses", fraction: total > 0 ? done / total : 1 })
+  });
+  const { series, timestamps, kind } = orderLossSeries(table);
+  return evaluateLossSeries(series, { file: table.summary, timestamps, kind }, settings);
 }
 
 // src/action/retry.ts
@@ -41739,6 +42157,11 @@ var ENGINE_OPTIONS = [
     help: "predictions of the pull request's model"
   },
   {
+    name: "losses",
+    defaultValue: null,
+    help: "instead of baseline and candidate: a pre-aggregated file with timestamp, baseline_loss, candidate_loss (optional differential, rows, horizon) per time point"
+  },
+  {
     name: "actuals",
     defaultValue: null,
     help: "observed values keyed by series and timestamp, when the prediction files lack an actual column"
@@ -41920,10 +42343,24 @@ function resolveSettings(raw, label) {
     if (text2 === "false") return false;
     throw new InputError(`${label(name)} must be true or false`, { value: text2 });
   };
+  const losses = optional("losses");
+  if (losses !== null) {
+    for (const name of ["baseline", "candidate", "actuals"]) {
+      if (optional(name) !== null) {
+        throw new InputError(
+          `${label("losses")} replaces ${label("baseline")} and ${label("candidate")}; give one or the other`,
+          {
+            value: name
+          }
+        );
+      }
+    }
+  }
   return {
     name: value("name"),
-    baseline: value("baseline"),
-    candidate: value("candidate"),
+    baseline: losses === null ? value("baseline") : "",
+    candidate: losses === null ? value("candidate") : "",
+    losses,
     actuals: optional("actuals"),
     columns: parseColumnMapping(value("columns"), label("columns")),
     format: value("format"),
@@ -42296,6 +42733,7 @@ function readBootstrap(r) {
     blockLengthSelection: null,
     standardError: r.field("standardError").numberOrNull(),
     interval: readInterval(r.field("interval")),
+    relativeInterval: readInterval(r.field("relativeInterval")),
     pValue: r.field("pValue").numberOrNull(),
     pValueTwoSided: r.field("pValueTwoSided").numberOrNull(),
     decisionPValue: r.field("decisionPValue").numberOrNull(),
@@ -42357,6 +42795,7 @@ function readSettings(r) {
     name: r.field("name").string(),
     baseline: r.field("baseline").string(),
     candidate: r.field("candidate").string(),
+    losses: r.field("losses").value === void 0 ? null : r.field("losses").stringOrNull(),
     actuals: r.field("actuals").stringOrNull(),
     columns,
     format: r.field("format").oneOf(["auto", "csv", "tsv"]),

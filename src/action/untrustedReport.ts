@@ -303,6 +303,7 @@ function readSettings(r: Reader): Settings {
     name: r.field('name').string(),
     baseline: r.field('baseline').string(),
     candidate: r.field('candidate').string(),
+    losses: r.field('losses').value === undefined ? null : r.field('losses').stringOrNull(),
     actuals: r.field('actuals').stringOrNull(),
     columns: columns as ColumnMapping,
     format: r.field('format').oneOf(['auto', 'csv', 'tsv']),

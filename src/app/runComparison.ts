@@ -1,6 +1,9 @@
 import { alignPanel } from '../alignment/alignPanel.js';
+import { orderLossSeries } from '../alignment/orderLossSeries.js';
+import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
+import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import type { Progress } from './progress.js';
@@ -18,6 +21,8 @@ export async function runComparison(
   settings: Settings,
   hooks: RunHooks = {},
 ): Promise<{ report: Report }> {
+  if (settings.losses !== null)
+    return { report: await runOnLossFile(settings.losses, settings, hooks) };
   const read = (path: string, role: 'baseline' | 'candidate' | 'actuals') =>
     readForecastFile(path, {
       role,
@@ -37,4 +42,17 @@ export async function runComparison(
   const report = evaluatePanel(panel, settings);
   hooks.onProgress?.({ stage: 'testing', fraction: 1 });
   return { report };
+}
+
+async function runOnLossFile(path: string, settings: Settings, hooks: RunHooks): Promise<Report> {
+  const table = await readLossSeriesFile(path, {
+    ...(settings.format === 'auto' ? {} : { format: settings.format }),
+    ...(settings.columns.timestamp === undefined
+      ? {}
+      : { timestampColumn: settings.columns.timestamp }),
+    onProgress: (done, total) =>
+      hooks.onProgress?.({ stage: 'reading losses', fraction: total > 0 ? done / total : 1 }),
+  });
+  const { series, timestamps, kind } = orderLossSeries(table);
+  return evaluateLossSeries(series, { file: table.summary, timestamps, kind }, settings);
 }

@@ -5,6 +5,7 @@ import { VERSION } from '../core/version.js';
 import { hypothesisFor } from '../decision/hypothesis.js';
 import { computeRowLosses, LossUnavailableError, type RowLosses } from '../losses/rowLosses.js';
 import { buildReport } from '../report/buildReport.js';
+import { panelInputsSummary } from '../report/inputsSummary.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { compareLossSeries } from './compareLossSeries.js';
@@ -27,8 +28,7 @@ export function evaluatePanel(panel: AlignedPanel, settings: Settings): Report {
     version: VERSION,
     settings,
     hypothesis,
-    panel,
-    losses,
+    inputs: panelInputsSummary(panel, losses),
     comparisons: [overall],
   });
 }

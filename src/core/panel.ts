@@ -48,7 +48,7 @@ export interface InputCoverage {
 }
 
 export interface FileSummary {
-  readonly role: 'baseline' | 'candidate' | 'actuals';
+  readonly role: 'baseline' | 'candidate' | 'actuals' | 'losses';
   readonly path: string;
   /** Data rows (excluding the header). */
   readonly rows: number;

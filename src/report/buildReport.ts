@@ -1,16 +1,13 @@
-import type { AlignedPanel } from '../core/panel.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
-import type { RowLosses } from '../losses/rowLosses.js';
 import type { Settings } from '../settings/settings.js';
-import type { Comparison, Report } from './reportModel.js';
+import type { Comparison, InputsSummary, Report } from './reportModel.js';
 
 export interface ReportParts {
   readonly version: string;
   readonly settings: Settings;
   readonly hypothesis: Hypothesis;
-  readonly panel: AlignedPanel;
-  readonly losses: RowLosses;
+  readonly inputs: InputsSummary;
   /** The overall comparison first. */
   readonly comparisons: readonly Comparison[];
 }
@@ -21,12 +18,12 @@ export interface ReportParts {
  * not pass by skipping hard cases.
  */
 export function buildReport(parts: ReportParts): Report {
-  const { panel, settings, hypothesis } = parts;
+  const { inputs, settings, hypothesis } = parts;
   const overall = parts.comparisons[0];
   if (overall === undefined) throw new Error('a report needs the overall comparison');
   const reasons: string[] = [];
   const verdicts: Verdict[] = [overall.verdict];
-  const missing = panel.coverage.baselineOnly;
+  const missing = inputs.rowsDropped.baseline;
   if (missing > 0) {
     if (settings.allowMissing) {
       reasons.push(
@@ -40,9 +37,6 @@ export function buildReport(parts: ReportParts): Report {
     }
   }
   const verdict = worstVerdict(verdicts);
-  const horizons = new Set<number>();
-  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]!);
-  const ts = panel.timestamps;
   return {
     tool: { name: 'skillgate', version: parts.version },
     name: settings.name,
@@ -61,27 +55,7 @@ export function buildReport(parts: ReportParts): Report {
       boundary: hypothesis.boundary,
     },
     comparisons: parts.comparisons,
-    inputs: {
-      files: panel.coverage.files,
-      rowsMatched: panel.coverage.rowsMatched,
-      rowsDropped: {
-        baseline: panel.coverage.baselineOnly,
-        candidate: panel.coverage.candidateOnly,
-        withoutActual: panel.coverage.withoutActual,
-        actualsUnused: panel.coverage.actualsUnused,
-        skippedByLoss: parts.losses.included === null ? 0 : parts.losses.zeroActualRows.length,
-      },
-      examples: panel.coverage.examples,
-      timestamps: {
-        count: ts.length,
-        kind: panel.timestampKind,
-        first: ts[0] ?? null,
-        last: ts[ts.length - 1] ?? null,
-      },
-      series: panel.seriesNames.length,
-      horizons: [...horizons].sort((a, b) => a - b),
-      quantileLevels: parts.losses.levels,
-    },
+    inputs,
     settings,
     reasons,
   };

@@ -30,6 +30,11 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     help: "predictions of the pull request's model",
   },
   {
+    name: 'losses',
+    defaultValue: null,
+    help: 'instead of baseline and candidate: a pre-aggregated file with timestamp, baseline_loss, candidate_loss (optional differential, rows, horizon) per time point',
+  },
+  {
     name: 'actuals',
     defaultValue: null,
     help: 'observed values keyed by series and timestamp, when the prediction files lack an actual column',

@@ -52,10 +52,24 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     throw new InputError(`${label(name)} must be true or false`, { value: text });
   };
 
+  const losses = optional('losses');
+  if (losses !== null) {
+    for (const name of ['baseline', 'candidate', 'actuals']) {
+      if (optional(name) !== null) {
+        throw new InputError(
+          `${label('losses')} replaces ${label('baseline')} and ${label('candidate')}; give one or the other`,
+          {
+            value: name,
+          },
+        );
+      }
+    }
+  }
   return {
     name: value('name'),
-    baseline: value('baseline'),
-    candidate: value('candidate'),
+    baseline: losses === null ? value('baseline') : '',
+    candidate: losses === null ? value('candidate') : '',
+    losses,
     actuals: optional('actuals'),
     columns: parseColumnMapping(value('columns'), label('columns')),
     format: value('format') as Settings['format'],

@@ -13,8 +13,11 @@ export type MarginKind = 'relative' | 'absolute';
 /** Everything one comparison needs, validated; built once at the edge (CLI flags or action inputs). */
 export interface Settings {
   readonly name: string;
+  /** Forecast files; empty strings when a pre-aggregated `losses` file is given instead. */
   readonly baseline: string;
   readonly candidate: string;
+  /** A pre-aggregated loss file (timestamp, baseline_loss, candidate_loss), or null. */
+  readonly losses: string | null;
   readonly actuals: string | null;
   /** Column-role → header-name remapping, e.g. { actual: 'observed' }. */
   readonly columns: ColumnMapping;

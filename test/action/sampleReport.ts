@@ -153,6 +153,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       name: '',
       baseline: 'examples/data/baseline.csv',
       candidate: 'examples/data/candidate.csv',
+      losses: null,
       actuals: null,
       columns: {
         series: 'zone',
