@@ -59,7 +59,9 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
   for (const name of cases) {
     const fixture = JSON.parse(readFileSync(path.join(fixtures, `${name}.json`), 'utf8'));
     it(`${name}: bartlett with the automatic lag (${fixture.dataset})`, () => {
-      const hac = (fixture.hac as HacEntry[]).find((h) => h.estimator === 'bartlett' && h.lagRule === 'auto');
+      const hac = (fixture.hac as HacEntry[]).find(
+        (h) => h.estimator === 'bartlett' && h.lagRule === 'auto',
+      );
       expect(hac, 'fixture has a bartlett/auto entry').toBeDefined();
       const c = run(name, fixture, ['--variance', 'bartlett', '--lag', 'auto']);
       const dm = c.dieboldMariano;
@@ -70,7 +72,12 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       expectClose(dm.statistic, hac!.statistic, 1e-6, `${what}: statistic`);
       expectClose(dm.pValue, hac!.pValue, 1e-6, `${what}: one-sided p`);
       expectClose(dm.pValueTwoSided, hac!.pValueTwoSided, 1e-6, `${what}: two-sided p`);
-      expectClose(dm.smallSample.statistic, hac!.smallSample.statistic, 1e-6, `${what}: HLN statistic`);
+      expectClose(
+        dm.smallSample.statistic,
+        hac!.smallSample.statistic,
+        1e-6,
+        `${what}: HLN statistic`,
+      );
       expectClose(dm.smallSample.pValue, hac!.smallSample.pValue, 1e-6, `${what}: HLN p`);
     });
     it(`${name}: ewc (the default) against the published formula evaluated in R/Python`, () => {
@@ -79,7 +86,12 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       const what = `${name} vs ${fixture.ewc.source}`;
       expect(dm.estimator).toBe('ewc');
       expect(dm.degreesOfFreedom).toBe(fixture.ewc.degreesOfFreedom);
-      expectClose(dm.longRunVariance, fixture.ewc.longRunVariance, 1e-6, `${what}: long-run variance`);
+      expectClose(
+        dm.longRunVariance,
+        fixture.ewc.longRunVariance,
+        1e-6,
+        `${what}: long-run variance`,
+      );
       expectClose(dm.statistic, fixture.ewc.statistic, 1e-6, `${what}: statistic`);
       expectClose(dm.pValue, fixture.ewc.pValue, 1e-6, `${what}: p`);
     });
