@@ -13,6 +13,11 @@ export interface AlignInput {
 
 const EXAMPLES = 5;
 
+export interface AlignHooks {
+  /** Called as the steps finish, with the fraction of the work done (0..1); for long inputs. */
+  readonly onProgress?: (fraction: number) => void;
+}
+
 /**
  * Matches baseline and candidate rows on the key (series, timestamp, horizon, origin) and attaches
  * the actual, never relying on file order. Pure: tables in, panel out, InputError on bad input.
@@ -31,8 +36,9 @@ const EXAMPLES = 5;
  *   (series names in code-unit order, times in time order), so the panel does not depend on
  *   the order of rows in the files.
  */
-export function alignPanel(input: AlignInput): AlignedPanel {
+export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPanel {
   const { baseline, candidate, actuals } = input;
+  const progress = hooks.onProgress ?? (() => {});
   const bFile = baseline.summary.path;
   const cFile = candidate.summary.path;
   checkSameShape(baseline, candidate, 'series', (t) => t.series);
@@ -54,6 +60,7 @@ export function alignPanel(input: AlignInput): AlignedPanel {
       )
     : null;
   const horizons = orderHorizons([baseline, candidate]);
+  progress(0.1);
 
   const keysOf = (table: ForecastTable, index: number, withHorizon: boolean): KeyComponent[] => {
     const n = table.size;
@@ -81,8 +88,11 @@ export function alignPanel(input: AlignInput): AlignedPanel {
   };
   const bKeys = keysOf(baseline, 0, true);
   const cKeys = keysOf(candidate, 1, true);
+  progress(0.2);
   const bOrder = sortByKey(baseline.size, bKeys);
+  progress(0.3);
   const cOrder = sortByKey(candidate.size, cKeys);
+  progress(0.4);
 
   const describeKey = (keys: readonly KeyComponent[], row: number, depth = keys.length): string => {
     const parts: string[] = [];
@@ -108,6 +118,7 @@ export function alignPanel(input: AlignInput): AlignedPanel {
   };
   checkDuplicates(baseline, bKeys, bOrder);
   checkDuplicates(candidate, cKeys, cOrder);
+  progress(0.5);
 
   // Merge join of the two sorted key lists.
   let pairs = new Int32Array(Math.min(baseline.size, candidate.size) * 2);
@@ -147,6 +158,8 @@ export function alignPanel(input: AlignInput): AlignedPanel {
       { file: cFile },
     );
   }
+
+  progress(0.6);
 
   // Actuals: from the actuals file (joined on series, timestamp) or from the predictions files.
   const actualRow = new Int32Array(matched).fill(-1);
@@ -211,6 +224,7 @@ export function alignPanel(input: AlignInput): AlignedPanel {
     }
   }
   pairs = new Int32Array(0);
+  progress(0.7);
 
   const describeRow = (p: number): string => describeKey(bKeys, bRows[p]!);
   const sources = (pick: (t: ForecastTable) => ValueColumn | null): ValueSource[] => {
@@ -242,6 +256,8 @@ export function alignPanel(input: AlignInput): AlignedPanel {
     }
     weight = agreedValues(weightSources, size, 'weight', describeRow);
   }
+
+  progress(0.8);
 
   // What the two models can be compared on.
   const bLevels = baseline.quantiles.map((q) => q.level);
@@ -281,6 +297,7 @@ export function alignPanel(input: AlignInput): AlignedPanel {
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2]!.values[bRows[p]!]!]!;
   const originIds =
     origin === null ? null : compact(gather32(bKeys[3]!.values, bRows), origin.labels);
+  progress(1);
 
   return {
     size,
