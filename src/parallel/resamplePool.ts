@@ -24,11 +24,13 @@ import { shareResampleJob, waitForSharedTask, workOnSharedTask } from './sharedR
 
 /**
  * Jobs smaller than this many block draws (B · (n/b + 1)) run in the calling thread: below it,
- * starting a worker and copying the prefix sums cost more than the second core gives back.
- * Measured with `npm run bench` on 2 cores (docs/performance.md): at about 60 ns per block draw a
- * cold worker breaks even near 1–2 · 10^6 block draws (≈ 0.1 s of work).
+ * starting a worker costs more than the second core gives back. Measured with `npm run bench` on
+ * 2 cores (docs/performance.md): a cold worker costs about 0.1–0.15 s of CPU (thread start,
+ * loading its bundle, compiling the kernel) before it contributes, and one block draw costs about
+ * 40–60 ns, so the second core pays for itself from about 5 · 10^6 block draws (≈ 0.3 s of work
+ * in one thread). The default run (B = 9,999 at n = 100,000, b ≈ 68: 1.5 · 10^7 draws) is above.
  */
-export const MINIMUM_PARALLEL_BLOCK_DRAWS = 2_000_000;
+export const MINIMUM_PARALLEL_BLOCK_DRAWS = 5_000_000;
 
 export interface ResamplePoolOptions {
   /** Worker threads besides the calling thread; default: available cores − 1. 0 = never. */
