@@ -152,22 +152,28 @@ function readingCase(files, runs) {
     rows: files.rows,
     bare: median(bare.map((m) => m.wall)),
     cli: median(ours.map((m) => m.wall)),
+    bareBest: Math.min(...bare.map((m) => m.wall)),
+    cliBest: Math.min(...ours.map((m) => m.wall)),
     bareRss: Math.max(...bare.map((m) => m.rss ?? 0)),
     cliRss: Math.max(...ours.map((m) => m.rss ?? 0)),
   };
   result.ratio = result.cli / result.bare;
+  // Other work on the machine only ever adds time: the best runs are the least disturbed.
+  result.bestRatio = result.cliBest / result.bareBest;
   return result;
 }
 
 log('1. reading + aligning two files end to end (node dist/cli.js compare), against a bare split');
-log('   rows per file │ bare split │ skillgate CLI │ ratio │ peak RSS bare │ peak RSS CLI');
+log(
+  '   rows per file │ bare split │ skillgate CLI │ ratio │ best-run ratio │ peak RSS bare │ peak RSS CLI',
+);
 const reading = [];
 for (const series of [500, 1000, 2000]) {
   const files = await panelFiles(series, 1000);
   const r = readingCase(files, series === 1000 ? RUNS : SCALING_RUNS);
   reading.push(r);
   log(
-    `   ${String(r.rows).padStart(13)} │ ${fmt(r.bare / 1000).padStart(8)} s │ ${fmt(r.cli / 1000).padStart(11)} s │ ${fmt(r.ratio).padStart(4)}× │ ${fmt(r.bareRss).padStart(9)} MiB │ ${fmt(r.cliRss).padStart(8)} MiB`,
+    `   ${String(r.rows).padStart(13)} │ ${fmt(r.bare / 1000).padStart(8)} s │ ${fmt(r.cli / 1000).padStart(11)} s │ ${fmt(r.ratio).padStart(4)}× │ ${fmt(r.bestRatio).padStart(13)}× │ ${fmt(r.bareRss).padStart(9)} MiB │ ${fmt(r.cliRss).padStart(8)} MiB`,
   );
 }
 const readingSlope = logLogSlope(reading.map((r) => ({ x: r.rows, y: r.cli })));
@@ -181,7 +187,7 @@ if (large) {
   largeReading = readingCase(files, 1);
   const r = largeReading;
   log(
-    `   ${String(r.rows).padStart(13)} │ ${fmt(r.bare / 1000).padStart(8)} s │ ${fmt(r.cli / 1000).padStart(11)} s │ ${fmt(r.ratio).padStart(4)}× │ ${fmt(r.bareRss).padStart(9)} MiB │ ${fmt(r.cliRss).padStart(8)} MiB   (--large, 1 run)`,
+    `   ${String(r.rows).padStart(13)} │ ${fmt(r.bare / 1000).padStart(8)} s │ ${fmt(r.cli / 1000).padStart(11)} s │ ${fmt(r.ratio).padStart(4)}× │ ${fmt(r.bestRatio).padStart(13)}× │ ${fmt(r.bareRss).padStart(9)} MiB │ ${fmt(r.cliRss).padStart(8)} MiB   (--large, 1 run)`,
   );
 }
 log();
@@ -237,7 +243,11 @@ function numpyRun(file, blockLength, resamples, runs) {
     ]);
     walls.push(JSON.parse(stdout).wall);
   }
-  return { wall: median(walls), perResample: median(walls) / resamples };
+  return {
+    wall: median(walls),
+    perResample: median(walls) / resamples,
+    bestPerResample: Math.min(...walls) / resamples,
+  };
 }
 
 const N = 100_000;
