@@ -32153,13 +32153,14 @@ function formatPValue(p) {
 }
 
 // src/losses/lossName.ts
-var LOSS_NAMES = ["squared", "absolute", "ape", "sape", "pinball"];
+var LOSS_NAMES = ["squared", "absolute", "ape", "sape", "pinball", "interval"];
 var LOSS_LABELS = {
   squared: "squared error",
   absolute: "absolute error",
   ape: "absolute percentage error (%)",
   sape: "symmetric absolute percentage error (%)",
-  pinball: "pinball loss (mean over quantile levels)"
+  pinball: "pinball loss (mean over quantile levels)",
+  interval: "interval score of the central interval (Gneiting & Raftery 2007)"
 };
 
 // src/report/escapeMarkdown.ts
@@ -32175,6 +32176,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, "");
   lines.push(escapeMarkdown(report.headline), "");
   lines.push(...comparisonTable(report), "");
+  lines.push(...seriesSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
   if (reasons.length > 0) {
     lines.push("**Why**", "");
@@ -32204,7 +32206,7 @@ function comparisonTable(report) {
     `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
     "|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|"
   ];
-  for (const c of report.comparisons) {
+  for (const c of report.comparisons.filter((x) => x.series === "all")) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
     const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]`;
@@ -32222,6 +32224,32 @@ function relativeCell(c) {
   const r = c.bootstrap.relativeInterval;
   const point = formatSignedPercent(c.relativeDifference);
   return r === null ? point : `${point} [${formatSignedPercent(r.lower)}, ${formatSignedPercent(r.upper)}]`;
+}
+function seriesSection(report) {
+  const summary2 = report.seriesSummary;
+  if (summary2 === null) return [];
+  const method = summary2.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
+  const out = [
+    `**Series**: of ${summary2.series}, ${summary2.worse} worse, ${summary2.better} better, ${summary2.noEvidence} without evidence either way (Diebold\u2013Mariano per series, ${method}-adjusted, \u03B1 = ${summary2.alpha}). These locate a regression; the verdict rests on the overall comparison.`,
+    ""
+  ];
+  const byName = new Map(
+    report.comparisons.filter((c) => c.series !== "all").map((c) => [c.series, c])
+  );
+  const top = summary2.topRegressions.map((name) => byName.get(name)).filter((c) => c !== void 0);
+  if (top.length > 0) {
+    out.push(
+      `| series (largest significant regressions) | time points | baseline loss | candidate loss | relative | DM statistic | adjusted p |`,
+      "|---|---:|---:|---:|---:|---:|---:|"
+    );
+    for (const c of top) {
+      out.push(
+        `| ${escapeMarkdown(String(c.series))} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(c.dieboldMariano.smallSample?.statistic ?? c.dieboldMariano.statistic)} | ${formatPValue(c.adjustedPValue)} |`
+      );
+    }
+    out.push("");
+  }
+  return out;
 }
 function testDetails(report) {
   const c = report.comparisons[0];
@@ -32266,6 +32294,12 @@ function testDetails(report) {
     `| bootstrap standard error of d\u0304 | ${formatNumber(bs.standardError)} |`,
     `| bootstrap p one-sided (worse) / two-sided | ${formatPValue(bs.pValue)} / ${formatPValue(bs.pValueTwoSided)} |`
   );
+  const coverage = report.inputs.intervalCoverage;
+  if (coverage !== null) {
+    out.push(
+      `| empirical coverage of the ${formatNumber(coverage.nominal * 100, 3)}% interval, baseline / candidate | ${formatSignedPercent(coverage.baseline).replace("+", "")} / ${formatSignedPercent(coverage.candidate).replace("+", "")} |`
+    );
+  }
   for (const note of [...dm.notes, ...bs.notes]) out.push("", `Note: ${escapeMarkdown(note)}`);
   out.push("", "</details>");
   return out;
@@ -39039,8 +39073,10 @@ function compareCodeUnits(a, b) {
 
 // src/alignment/alignPanel.ts
 var EXAMPLES = 5;
-function alignPanel(input) {
+function alignPanel(input, hooks = {}) {
   const { baseline, candidate, actuals } = input;
+  const progress = hooks.onProgress ?? (() => {
+  });
   const bFile = baseline.summary.path;
   const cFile = candidate.summary.path;
   checkSameShape(baseline, candidate, "series", (t) => t.series);
@@ -39058,6 +39094,7 @@ function alignPanel(input) {
     "origin"
   ) : null;
   const horizons = orderHorizons([baseline, candidate]);
+  progress(0.1);
   const keysOf = (table, index, withHorizon) => {
     const n = table.size;
     const components = [
@@ -39084,8 +39121,11 @@ function alignPanel(input) {
   };
   const bKeys = keysOf(baseline, 0, true);
   const cKeys = keysOf(candidate, 1, true);
+  progress(0.2);
   const bOrder = sortByKey(baseline.size, bKeys);
+  progress(0.3);
   const cOrder = sortByKey(candidate.size, cKeys);
+  progress(0.4);
   const describeKey = (keys, row, depth = keys.length) => {
     const parts = [];
     if (baseline.series !== null) parts.push(`series=${series.names[keys[0].values[row]]}`);
@@ -39110,6 +39150,7 @@ function alignPanel(input) {
   };
   checkDuplicates(baseline, bKeys, bOrder);
   checkDuplicates(candidate, cKeys, cOrder);
+  progress(0.5);
   let pairs = new Int32Array(Math.min(baseline.size, candidate.size) * 2);
   let matched = 0;
   let baselineOnly = 0;
@@ -39142,6 +39183,7 @@ function alignPanel(input) {
       { file: cFile }
     );
   }
+  progress(0.6);
   const actualRow = new Int32Array(matched).fill(-1);
   let withoutActual = 0;
   let actualsUnused = 0;
@@ -39202,6 +39244,7 @@ function alignPanel(input) {
     }
   }
   pairs = new Int32Array(0);
+  progress(0.7);
   const describeRow = (p) => describeKey(bKeys, bRows[p]);
   const sources = (pick) => {
     const list = [];
@@ -39231,6 +39274,7 @@ function alignPanel(input) {
     }
     weight = agreedValues(weightSources, size, "weight", describeRow);
   }
+  progress(0.8);
   const bLevels = baseline.quantiles.map((q) => q.level);
   const cLevels = candidate.quantiles.map((q) => q.level);
   const common = bLevels.filter((l) => cLevels.includes(l));
@@ -39260,6 +39304,7 @@ function alignPanel(input) {
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2].values[bRows[p]]];
   const originIds = origin === null ? null : compact(gather32(bKeys[3].values, bRows), origin.labels);
+  progress(1);
   return {
     size,
     series: seriesIds.ids,
@@ -39406,6 +39451,32 @@ function compact(ids, names) {
   return { ids, names: kept };
 }
 
+// src/alignment/historyBySeries.ts
+function historyBySeries(table) {
+  const order = orderLabels([{ file: table.summary.path, column: table.timestamp }], "timestamp");
+  const ranks = order.ranks[0];
+  const actual = table.actual?.values ?? new Float64Array(table.size);
+  const bySeries = /* @__PURE__ */ new Map();
+  for (let i = 0; i < table.size; i++) {
+    const name = table.series === null ? "" : table.series.labels[table.series.ids[i]];
+    let list = bySeries.get(name);
+    if (list === void 0) {
+      list = [];
+      bySeries.set(name, list);
+    }
+    list.push({ rank: ranks[table.timestamp.ids[i]], value: actual[i] });
+  }
+  const out = /* @__PURE__ */ new Map();
+  for (const [name, list] of bySeries) {
+    list.sort((a, b) => a.rank - b.rank);
+    out.set(
+      name,
+      Float64Array.from(list, (p) => p.value)
+    );
+  }
+  return out;
+}
+
 // src/alignment/orderLossSeries.ts
 function orderLossSeries(table) {
   const file = table.summary.path;
@@ -39548,7 +39619,8 @@ function buildReport(parts) {
     comparisons: parts.comparisons,
     inputs,
     settings,
-    reasons
+    reasons,
+    seriesSummary: parts.seriesSummary ?? null
   };
 }
 function headline(verdict, overall, hypothesis) {
@@ -39592,7 +39664,8 @@ function panelInputsSummary(panel, losses) {
     },
     series: panel.seriesNames.length,
     horizons: [...horizons].sort((a, b) => a - b),
-    quantileLevels: losses.levels
+    quantileLevels: losses.levels,
+    intervalCoverage: losses.coverage
   };
 }
 function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
@@ -39615,47 +39688,53 @@ function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
     },
     series: 1,
     horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),
-    quantileLevels: []
+    quantileLevels: [],
+    intervalCoverage: null
   };
 }
 
 // src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, selected) {
+function aggregateByTime(panel, losses, rows, weights = null) {
   const points = panel.timestamps.length;
   const sumB = new Float64Array(points);
   const sumC = new Float64Array(points);
   const count = new Int32Array(points);
+  const weightSum = weights === null ? null : new Float64Array(points);
   let maxHorizon = 1;
   let rowCount = 0;
   const included = losses.included;
-  for (let i = 0; i < panel.size; i++) {
+  const total = rows === void 0 ? panel.size : rows.length;
+  for (let r = 0; r < total; r++) {
+    const i = rows === void 0 ? r : rows[r];
     if (included !== null && included[i] === 0) continue;
-    if (selected !== void 0 && !selected(i)) continue;
     const t = panel.time[i];
-    sumB[t] += losses.baseline[i];
-    sumC[t] += losses.candidate[i];
+    const w = weights === null ? 1 : weights[i];
+    sumB[t] += w * losses.baseline[i];
+    sumC[t] += w * losses.candidate[i];
+    if (weightSum !== null) weightSum[t] += w;
     count[t]++;
     rowCount++;
     const h = panel.horizon[i];
     if (h > maxHorizon) maxHorizon = h;
   }
+  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
   let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0) n++;
+  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
   const time = new Int32Array(n);
   const baseline = new Float64Array(n);
   const candidate = new Float64Array(n);
-  const rows = new Int32Array(n);
+  const rowsAt = new Int32Array(n);
   let k = 0;
   for (let t = 0; t < points; t++) {
-    const m = count[t];
-    if (m === 0) continue;
+    const m = denominator(t);
+    if (count[t] === 0 || m <= 0) continue;
     time[k] = t;
     baseline[k] = sumB[t] / m;
     candidate[k] = sumC[t] / m;
-    rows[k] = m;
+    rowsAt[k] = count[t];
     k++;
   }
-  return { time, baseline, candidate, rows, rowCount, maxHorizon };
+  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
 }
 function lossDifferential(series, relativeMargin) {
   const n = series.baseline.length;
@@ -39729,6 +39808,141 @@ function describeTest(e, rejected, alpha, hypothesis) {
   const text2 = formatPValue(e.pValue);
   const p = text2.startsWith("<") ? `p ${text2}` : `p = ${text2}`;
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
+}
+
+// node_modules/pure-rand/lib/esm/generator/xoroshiro128plus.js
+var jumps = [
+  3639956645,
+  3750757012,
+  1261568508,
+  386426335
+];
+var XoroShiro128Plus = class XoroShiro128Plus2 {
+  constructor(s01, s00, s11, s10) {
+    this.s01 = s01;
+    this.s00 = s00;
+    this.s11 = s11;
+    this.s10 = s10;
+  }
+  clone() {
+    return new XoroShiro128Plus2(this.s01, this.s00, this.s11, this.s10);
+  }
+  next() {
+    const out = this.s00 + this.s10 | 0;
+    const a0 = this.s10 ^ this.s00;
+    const a1 = this.s11 ^ this.s01;
+    const s00 = this.s00;
+    const s01 = this.s01;
+    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+    this.s10 = a1 << 5 ^ a0 >>> 27;
+    this.s11 = a0 << 5 ^ a1 >>> 27;
+    return out;
+  }
+  jump() {
+    let ns01 = 0;
+    let ns00 = 0;
+    let ns11 = 0;
+    let ns10 = 0;
+    let s01 = this.s01;
+    let s00 = this.s00;
+    let s11 = this.s11;
+    let s10 = this.s10;
+    for (let i = 0; i !== 4; ++i) {
+      const ji = jumps[i];
+      for (let mask = 1; mask; mask <<= 1) {
+        if (ji & mask) {
+          ns01 ^= s01;
+          ns00 ^= s00;
+          ns11 ^= s11;
+          ns10 ^= s10;
+        }
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const s00_ = s00;
+        const s01_ = s01;
+        s00 = s00_ << 24 ^ s01_ >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01_ << 24 ^ s00_ >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+    }
+    this.s01 = ns01;
+    this.s00 = ns00;
+    this.s11 = ns11;
+    this.s10 = ns10;
+  }
+  getState() {
+    return [
+      this.s01,
+      this.s00,
+      this.s11,
+      this.s10
+    ];
+  }
+};
+function xoroshiro128plusFromState(state) {
+  if (!(state.length === 4)) throw new Error("The state must have been produced by a xoroshiro128plus RandomGenerator");
+  return new XoroShiro128Plus(state[0], state[1], state[2], state[3]);
+}
+
+// src/random/splitMix64.ts
+var MASK_64 = (1n << 64n) - 1n;
+var GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
+function splitMix64Words(seed, count) {
+  let state = BigInt(seed) & MASK_64;
+  const words = [];
+  for (let i = 0; i < count; i++) {
+    state = state + GOLDEN_GAMMA & MASK_64;
+    let z = state;
+    z = (z ^ z >> 30n) * 0xbf58476d1ce4e5b9n & MASK_64;
+    z = (z ^ z >> 27n) * 0x94d049bb133111ebn & MASK_64;
+    z = z ^ z >> 31n;
+    words.push(Number(BigInt.asIntN(32, z >> 32n)), Number(BigInt.asIntN(32, z)));
+  }
+  return words;
+}
+
+// src/random/randomSource.ts
+var TWO_POW_26 = 67108864;
+var TWO_POW_MINUS_53 = 1 / 9007199254740992;
+function randomStreams(factory, seed, first) {
+  if (factory.sequence !== void 0) return factory.sequence(seed, first);
+  let stream = first;
+  return { next: () => factory(seed, stream++) };
+}
+function createRandomSource(seed, stream = 0) {
+  return createRandomStreams(seed, stream).next();
+}
+createRandomSource.sequence = createRandomStreams;
+function createRandomStreams(seed, first = 0) {
+  if (!Number.isSafeInteger(seed) || seed < 0) {
+    throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
+  }
+  if (!Number.isSafeInteger(first) || first < 0) {
+    throw new RangeError(`stream must be a non-negative integer, got ${first}`);
+  }
+  const [s0High, s0Low, s1High, s1Low] = splitMix64Words(seed, 2);
+  const cursor = xoroshiro128plusFromState([s0High, s0Low, s1High, s1Low]);
+  for (let k = 0; k < first; k++) cursor.jump();
+  let started = false;
+  return {
+    next: () => {
+      if (started) cursor.jump();
+      started = true;
+      return sourceOf(cursor.clone());
+    }
+  };
+}
+function sourceOf(generator) {
+  return {
+    nextUint32: () => generator.next() >>> 0,
+    nextDouble: () => {
+      const a = generator.next() >>> 5;
+      const b = generator.next() >>> 6;
+      return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
+    }
+  };
 }
 
 // src/statistics/bootstrap/autocovariances.ts
@@ -39934,141 +40148,6 @@ function createGeometricSampler(mean3) {
         total += truncation;
         if (total >= cap) return cap;
       }
-    }
-  };
-}
-
-// node_modules/pure-rand/lib/esm/generator/xoroshiro128plus.js
-var jumps = [
-  3639956645,
-  3750757012,
-  1261568508,
-  386426335
-];
-var XoroShiro128Plus = class XoroShiro128Plus2 {
-  constructor(s01, s00, s11, s10) {
-    this.s01 = s01;
-    this.s00 = s00;
-    this.s11 = s11;
-    this.s10 = s10;
-  }
-  clone() {
-    return new XoroShiro128Plus2(this.s01, this.s00, this.s11, this.s10);
-  }
-  next() {
-    const out = this.s00 + this.s10 | 0;
-    const a0 = this.s10 ^ this.s00;
-    const a1 = this.s11 ^ this.s01;
-    const s00 = this.s00;
-    const s01 = this.s01;
-    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-    this.s10 = a1 << 5 ^ a0 >>> 27;
-    this.s11 = a0 << 5 ^ a1 >>> 27;
-    return out;
-  }
-  jump() {
-    let ns01 = 0;
-    let ns00 = 0;
-    let ns11 = 0;
-    let ns10 = 0;
-    let s01 = this.s01;
-    let s00 = this.s00;
-    let s11 = this.s11;
-    let s10 = this.s10;
-    for (let i = 0; i !== 4; ++i) {
-      const ji = jumps[i];
-      for (let mask = 1; mask; mask <<= 1) {
-        if (ji & mask) {
-          ns01 ^= s01;
-          ns00 ^= s00;
-          ns11 ^= s11;
-          ns10 ^= s10;
-        }
-        const a0 = s10 ^ s00;
-        const a1 = s11 ^ s01;
-        const s00_ = s00;
-        const s01_ = s01;
-        s00 = s00_ << 24 ^ s01_ >>> 8 ^ a0 ^ a0 << 16;
-        s01 = s01_ << 24 ^ s00_ >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-        s10 = a1 << 5 ^ a0 >>> 27;
-        s11 = a0 << 5 ^ a1 >>> 27;
-      }
-    }
-    this.s01 = ns01;
-    this.s00 = ns00;
-    this.s11 = ns11;
-    this.s10 = ns10;
-  }
-  getState() {
-    return [
-      this.s01,
-      this.s00,
-      this.s11,
-      this.s10
-    ];
-  }
-};
-function xoroshiro128plusFromState(state) {
-  if (!(state.length === 4)) throw new Error("The state must have been produced by a xoroshiro128plus RandomGenerator");
-  return new XoroShiro128Plus(state[0], state[1], state[2], state[3]);
-}
-
-// src/random/splitMix64.ts
-var MASK_64 = (1n << 64n) - 1n;
-var GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
-function splitMix64Words(seed, count) {
-  let state = BigInt(seed) & MASK_64;
-  const words = [];
-  for (let i = 0; i < count; i++) {
-    state = state + GOLDEN_GAMMA & MASK_64;
-    let z = state;
-    z = (z ^ z >> 30n) * 0xbf58476d1ce4e5b9n & MASK_64;
-    z = (z ^ z >> 27n) * 0x94d049bb133111ebn & MASK_64;
-    z = z ^ z >> 31n;
-    words.push(Number(BigInt.asIntN(32, z >> 32n)), Number(BigInt.asIntN(32, z)));
-  }
-  return words;
-}
-
-// src/random/randomSource.ts
-var TWO_POW_26 = 67108864;
-var TWO_POW_MINUS_53 = 1 / 9007199254740992;
-function randomStreams(factory, seed, first) {
-  if (factory.sequence !== void 0) return factory.sequence(seed, first);
-  let stream = first;
-  return { next: () => factory(seed, stream++) };
-}
-function createRandomSource(seed, stream = 0) {
-  return createRandomStreams(seed, stream).next();
-}
-createRandomSource.sequence = createRandomStreams;
-function createRandomStreams(seed, first = 0) {
-  if (!Number.isSafeInteger(seed) || seed < 0) {
-    throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
-  }
-  if (!Number.isSafeInteger(first) || first < 0) {
-    throw new RangeError(`stream must be a non-negative integer, got ${first}`);
-  }
-  const [s0High, s0Low, s1High, s1Low] = splitMix64Words(seed, 2);
-  const cursor = xoroshiro128plusFromState([s0High, s0Low, s1High, s1Low]);
-  for (let k = 0; k < first; k++) cursor.jump();
-  let started = false;
-  return {
-    next: () => {
-      if (started) cursor.jump();
-      started = true;
-      return sourceOf(cursor.clone());
-    }
-  };
-}
-function sourceOf(generator) {
-  return {
-    nextUint32: () => generator.next() >>> 0,
-    nextDouble: () => {
-      const a = generator.next() >>> 5;
-      const b = generator.next() >>> 6;
-      return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
     }
   };
 }
@@ -40417,7 +40496,7 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
 }
 
 // src/comparison/runBootstrap.ts
-function runBootstrap(d, series, hypothesis, settings) {
+function runBootstrap(d, series, hypothesis, settings, runner) {
   const auto = settings.blockLength.kind === "auto" && d.length >= 2 ? automaticBlockLength(d) : null;
   const expectedBlockLength = settings.blockLength.kind === "fixed" ? settings.blockLength.length : auto?.blockLength ?? 1;
   const options = {
@@ -40427,7 +40506,7 @@ function runBootstrap(d, series, hypothesis, settings) {
     confidence: settings.confidence,
     margin: hypothesis.boundary
   };
-  const result = stationaryBootstrap(d, options);
+  const result = stationaryBootstrap(d, options, createRandomSource, runner);
   const relative2 = settings.marginKind === "relative" ? relativeDifferenceBootstrap(series.candidate, series.baseline, {
     ...options,
     margin: hypothesis.baselineFactor - 1
@@ -40844,7 +40923,7 @@ function runDieboldMariano(d, horizon, hypothesis, settings) {
 }
 
 // src/comparison/compareLossSeries.ts
-function compareLossSeries(series, scope, hypothesis, settings) {
+function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
   const n = series.baseline.length;
   const meanBaselineLoss = mean2(series.baseline);
   const meanCandidateLoss = mean2(series.candidate);
@@ -40857,11 +40936,12 @@ function compareLossSeries(series, scope, hypothesis, settings) {
     hypothesis,
     settings
   );
-  const bootstrap = runBootstrap(d, series, hypothesis, settings);
+  const withBootstrap = options.bootstrap ?? true;
+  const bootstrap = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner) : bootstrapNotRun(settings);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
-    agreement: settings.agreement,
+    agreement: withBootstrap ? settings.agreement : "dm",
     dieboldMariano: {
       label: `Diebold\u2013Mariano (${dieboldMariano2.estimator})`,
       pValue: dieboldMariano2.decisionPValue,
@@ -40907,15 +40987,35 @@ function mean2(x) {
   for (let i = 0; i < x.length; i++) s += x[i];
   return x.length === 0 ? 0 : s / x.length;
 }
+function bootstrapNotRun(settings) {
+  return {
+    state: "not-run",
+    resamples: 0,
+    seed: settings.seed,
+    expectedBlockLength: 1,
+    blockLengthRule: settings.blockLength.kind,
+    blockLengthSelection: null,
+    standardError: null,
+    interval: null,
+    relativeInterval: null,
+    pValue: null,
+    pValueTwoSided: null,
+    decisionPValue: null,
+    notes: [
+      "not run for per-series comparisons (the Diebold\u2013Mariano test with adjusted p-values locates them)"
+    ]
+  };
+}
 
 // src/comparison/evaluateLossSeries.ts
-function evaluateLossSeries(series, source, settings) {
+function evaluateLossSeries(series, source, settings, resampleRunner) {
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
   const overall = compareLossSeries(
     series,
     { loss: settings.loss, horizon: "all", series: "all", timestamps: source.timestamps },
     hypothesis,
-    settings
+    settings,
+    resampleRunner === void 0 ? {} : { runner: resampleRunner }
   );
   return buildReport({
     version: VERSION7,
@@ -40926,6 +41026,32 @@ function evaluateLossSeries(series, source, settings) {
   });
 }
 
+// src/decision/decideAdjusted.ts
+function decideAdjusted(input) {
+  const { hypothesis, alpha, adjustedPValue: p } = input;
+  const name = input.method === "holm" ? "Holm-adjusted" : "Benjamini\u2013Hochberg-adjusted";
+  if (p === null) {
+    return {
+      verdict: "warn",
+      reasons: ["The Diebold\u2013Mariano test could not be computed for this series."],
+      rejected: null
+    };
+  }
+  const rejected = p <= alpha;
+  const onKeep = hypothesis.onReject === "fail" ? "pass" : "fail";
+  const text2 = formatPValue(p);
+  const shown = text2.startsWith("<") ? `p ${text2}` : `p = ${text2}`;
+  const reasons = [
+    `${name} Diebold\u2013Mariano ${shown} ${rejected ? "\u2264" : ">"} \u03B1 = ${alpha}: ${rejected ? "evidence" : "no evidence"} that ${hypothesis.alternative}.`
+  ];
+  let verdict = rejected ? hypothesis.onReject : onKeep;
+  if (input.n < input.minPoints) {
+    verdict = "warn";
+    reasons.push(`Too little data: ${input.n} time points, fewer than ${input.minPoints}.`);
+  }
+  return { verdict, reasons, rejected };
+}
+
 // src/losses/absoluteError.ts
 function absoluteError(actual, prediction) {
   return Math.abs(actual - prediction);
@@ -40934,6 +41060,35 @@ function absoluteError(actual, prediction) {
 // src/losses/absolutePercentageError.ts
 function absolutePercentageError(actual, prediction) {
   return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/intervalCoverage.ts
+function intervalCoverage(actual, lower, upper) {
+  const n = actual.length;
+  if (lower.length !== n || upper.length !== n) {
+    throw new RangeError(
+      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
+    );
+  }
+  if (n === 0) return null;
+  let inside = 0;
+  for (let i = 0; i < n; i++) {
+    const y = actual[i];
+    if (lower[i] <= y && y <= upper[i]) inside++;
+  }
+  return inside / n;
+}
+
+// src/losses/intervalScore.ts
+function intervalScore(actual, lower, upper, alpha) {
+  if (!(alpha > 0 && alpha < 1)) {
+    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
+  }
+  const penalty = 2 / alpha;
+  let score = upper - lower;
+  if (actual < lower) score += penalty * (lower - actual);
+  if (actual > upper) score += penalty * (actual - upper);
+  return score;
 }
 
 // src/losses/pinballLoss.ts
@@ -40963,10 +41118,11 @@ var POINT_LOSSES = {
   ape: absolutePercentageError,
   sape: symmetricAbsolutePercentageError
 };
-function computeRowLosses(panel, loss, zeroActuals) {
+function computeRowLosses(panel, loss, zeroActuals, interval = null) {
   const n = panel.size;
   const baseline = new Float64Array(n);
   const candidate = new Float64Array(n);
+  if (loss === "interval") return intervalLosses(panel, interval);
   if (loss === "pinball") {
     const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
     if (pairs.length === 0) {
@@ -40993,7 +41149,8 @@ function computeRowLosses(panel, loss, zeroActuals) {
       candidate,
       included: null,
       zeroActualRows: [],
-      levels: pairs.map((p) => p.level)
+      levels: pairs.map((p) => p.level),
+      coverage: null
     };
   }
   const base = panel.baseline.prediction;
@@ -41020,7 +41177,47 @@ function computeRowLosses(panel, loss, zeroActuals) {
     baseline[i] = f(yi, base[i]);
     candidate[i] = f(yi, cand[i]);
   }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
+}
+function intervalLosses(panel, interval) {
+  if (interval === null) {
+    throw new LossUnavailableError(
+      "the interval loss needs the two quantile levels of the interval"
+    );
+  }
+  const [lowLevel, highLevel] = interval;
+  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
+  const bl = find(panel.baseline.quantiles, lowLevel);
+  const bu = find(panel.baseline.quantiles, highLevel);
+  const cl = find(panel.candidate.quantiles, lowLevel);
+  const cu = find(panel.candidate.quantiles, highLevel);
+  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
+    throw new LossUnavailableError(
+      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
+    );
+  }
+  const alpha = 1 - (highLevel - lowLevel);
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const y = panel.actual;
+  for (let i = 0; i < n; i++) {
+    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
+    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
+  }
+  return {
+    loss: "interval",
+    baseline,
+    candidate,
+    included: null,
+    zeroActualRows: [],
+    levels: [lowLevel, highLevel],
+    coverage: {
+      nominal: highLevel - lowLevel,
+      baseline: intervalCoverage(y, bl, bu),
+      candidate: intervalCoverage(y, cl, cu)
+    }
+  };
 }
 function commonQuantiles(baseline, candidate) {
   const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
@@ -41032,28 +41229,345 @@ function commonQuantiles(baseline, candidate) {
   return pairs;
 }
 
+// src/multiplicity/testFamily.ts
+function testFamily(pValues, what) {
+  const positions = [];
+  const values = [];
+  pValues.forEach((p, i) => {
+    if (p === null) return;
+    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
+      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
+    }
+    positions.push(i);
+    values.push(p);
+  });
+  return { positions, values };
+}
+function ascendingOrder(values) {
+  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
+}
+
+// src/multiplicity/benjaminiHochbergAdjust.ts
+function benjaminiHochbergAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  const order = ascendingOrder(values);
+  let running = 1;
+  for (let i = m - 1; i >= 0; i--) {
+    const k = order[i];
+    running = Math.min(running, m / (i + 1) * values[k]);
+    adjusted[positions[k]] = running;
+  }
+  return adjusted;
+}
+
+// src/multiplicity/holmAdjust.ts
+function holmAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "holmAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  let running = 0;
+  ascendingOrder(values).forEach((k, i) => {
+    running = Math.max(running, Math.min(1, (m - i) * values[k]));
+    adjusted[positions[k]] = running;
+  });
+  return adjusted;
+}
+
+// src/scaling/seriesScale.ts
+function scaleFromSum(sum, terms, what) {
+  if (terms === 0) {
+    return { state: "too-short", value: null, terms, note: `the ${what} has no terms` };
+  }
+  const value = sum / terms;
+  if (!Number.isFinite(value)) {
+    throw new RangeError(`the ${what} is ${value}, too large for double precision`);
+  }
+  if (value === 0) {
+    return {
+      state: "zero",
+      value: null,
+      terms,
+      note: `the ${what} is 0 over ${terms} term${terms === 1 ? "" : "s"}, so it cannot scale`
+    };
+  }
+  return { state: "ok", value, terms, note: null };
+}
+
+// src/scaling/baselineMeanLossScale.ts
+function baselineMeanLossScale(seriesNames, series, baselineLoss, included = null) {
+  const n = series.length;
+  if (baselineLoss.length !== n || included !== null && included.length !== n) {
+    throw new RangeError(
+      `baselineMeanLossScale: ${n} series indices, ${baselineLoss.length} losses` + (included === null ? "" : `, ${included.length} inclusion flags`)
+    );
+  }
+  const k = seriesNames.length;
+  const sum = new Float64Array(k);
+  const count = new Int32Array(k);
+  for (let i = 0; i < n; i++) {
+    if (included !== null && included[i] === 0) continue;
+    const s = series[i];
+    if (!(s >= 0 && s < k)) {
+      throw new RangeError(
+        `baselineMeanLossScale: row ${i + 1} has series index ${s}, not 0..${k - 1}`
+      );
+    }
+    const loss = baselineLoss[i];
+    if (!(loss >= 0 && Number.isFinite(loss))) {
+      throw new RangeError(`baselineMeanLossScale: row ${i + 1} has baseline loss ${loss}`);
+    }
+    sum[s] += loss;
+    count[s]++;
+  }
+  const scales = /* @__PURE__ */ new Map();
+  seriesNames.forEach((name, s) => {
+    scales.set(name, scaleFromSum(sum[s], count[s], "mean baseline loss"));
+  });
+  return scales;
+}
+
+// src/scaling/scaleLossesBySeries.ts
+function scaleLossesBySeries(seriesNames, series, baseline, candidate, scales) {
+  const n = series.length;
+  if (baseline.length !== n || candidate.length !== n) {
+    throw new RangeError(
+      `scaleLossesBySeries: ${n} series indices, ${baseline.length} baseline and ${candidate.length} candidate losses`
+    );
+  }
+  const k = seriesNames.length;
+  const used = new Uint8Array(k);
+  for (let i = 0; i < n; i++) {
+    const s = series[i];
+    if (!(s >= 0 && s < k)) {
+      throw new RangeError(
+        `scaleLossesBySeries: row ${i + 1} has series index ${s}, not 0..${k - 1}`
+      );
+    }
+    used[s] = 1;
+  }
+  const divisor = new Float64Array(k);
+  const missing = [];
+  seriesNames.forEach((name, s) => {
+    if (used[s] === 0) return;
+    const scale = scales.get(name);
+    if (scale === void 0) {
+      missing.push({ series: name, state: "absent", note: "no scale was given for this series" });
+    } else if (scale.state !== "ok" || scale.value === null) {
+      const state = scale.state === "ok" ? "zero" : scale.state;
+      missing.push({ series: name, state, note: scale.note ?? "the scale is not usable" });
+    } else {
+      divisor[s] = scale.value;
+    }
+  });
+  if (missing.length > 0) return { state: "unavailable", missing };
+  const scaledBaseline = new Float64Array(n);
+  const scaledCandidate = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const c = divisor[series[i]];
+    scaledBaseline[i] = baseline[i] / c;
+    scaledCandidate[i] = candidate[i] / c;
+  }
+  return { state: "ok", baseline: scaledBaseline, candidate: scaledCandidate };
+}
+
+// src/scaling/seasonalNaiveScale.ts
+function seasonalNaiveScaleOf(history, period, loss) {
+  if (!Number.isInteger(period) || period < 1) {
+    throw new RangeError(`seasonalNaiveScale: the period must be an integer \u2265 1, got ${period}`);
+  }
+  const n = history.length;
+  for (let t = 0; t < n; t++) {
+    if (!Number.isFinite(history[t])) {
+      throw new RangeError(`seasonalNaiveScale: value ${t + 1} is ${history[t]}, not finite`);
+    }
+  }
+  let sum = 0;
+  for (let t = period; t < n; t++) {
+    const e = history[t] - history[t - period];
+    sum += loss === "absolute" ? Math.abs(e) : e * e;
+  }
+  const what = loss === "absolute" ? `mean absolute seasonal naive error (period ${period})` : `mean squared seasonal naive error (period ${period})`;
+  return scaleFromSum(sum, Math.max(0, n - period), what);
+}
+function seasonalNaiveScale(histories, period, loss) {
+  const scales = /* @__PURE__ */ new Map();
+  for (const [name, history] of histories) {
+    try {
+      scales.set(name, seasonalNaiveScaleOf(history, period, loss));
+    } catch (error2) {
+      if (error2 instanceof RangeError) {
+        throw new RangeError(`series ${JSON.stringify(name)}: ${error2.message}`);
+      }
+      throw error2;
+    }
+  }
+  return scales;
+}
+
 // src/comparison/evaluatePanel.ts
-function evaluatePanel(panel, settings) {
+function evaluatePanel(panel, settings, extras = {}) {
   const losses = rowLossesOrInputError(panel, settings);
+  const pooled = settings.pooling === "scaled" ? scaledLosses(panel, losses, settings, extras) : losses;
+  const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
-  const overall = compareLossSeries(
-    aggregateByTime(panel, losses),
-    { loss: settings.loss, horizon: "all", series: "all", timestamps: panel.timestamps },
-    hypothesis,
-    settings
-  );
+  const runner = extras.resampleRunner === void 0 ? {} : { runner: extras.resampleRunner };
+  const scope = (horizon, series) => ({
+    loss: settings.loss,
+    horizon,
+    series,
+    timestamps: panel.timestamps
+  });
+  const comparisons = [
+    compareLossSeries(
+      aggregateByTime(panel, pooled, void 0, weights),
+      scope("all", "all"),
+      hypothesis,
+      settings,
+      runner
+    )
+  ];
+  const byHorizon = groupRows(panel.horizon);
+  if (byHorizon.size > 1) {
+    for (const h of [...byHorizon.keys()].sort((a, b) => a - b)) {
+      const series = aggregateByTime(panel, pooled, byHorizon.get(h), weights);
+      comparisons.push(compareLossSeries(series, scope(h, "all"), hypothesis, settings, runner));
+    }
+  }
+  let seriesSummary = null;
+  if (panel.seriesNames.length > 1) {
+    const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
+    comparisons.push(...perSeries.comparisons);
+    seriesSummary = perSeries.summary;
+  }
   return buildReport({
     version: VERSION7,
     settings,
     hypothesis,
     inputs: panelInputsSummary(panel, losses),
-    comparisons: [overall]
+    comparisons,
+    seriesSummary
   });
+}
+function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
+  const k = panel.seriesNames.length;
+  const rowsOf = groupRows(panel.series);
+  const raw = panel.seriesNames.map((name, id) => {
+    const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
+    return compareLossSeries(series, scope("all", name), hypothesis, settings, {
+      bootstrap: false
+    });
+  });
+  const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
+  const upper = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const worseP = adjust(upper);
+  const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
+  const policyP = hypothesis.rejectWhen === "above" ? worseP : betterP;
+  let worse = 0;
+  let better = 0;
+  const comparisons = raw.map((c, j) => {
+    const w = worseP[j] ?? null;
+    const b = betterP[j] ?? null;
+    const direction = w !== null && w <= settings.alpha ? "worse" : b !== null && b <= settings.alpha ? "better" : "no evidence";
+    if (direction === "worse") worse++;
+    if (direction === "better") better++;
+    const decision = decideAdjusted({
+      hypothesis,
+      alpha: settings.alpha,
+      adjustedPValue: policyP[j] ?? null,
+      method: settings.adjust,
+      n: c.n,
+      minPoints: settings.minPoints
+    });
+    return {
+      ...c,
+      verdict: decision.verdict,
+      reasons: decision.reasons,
+      rejected: { dieboldMariano: decision.rejected, bootstrap: null },
+      adjustedPValue: policyP[j] ?? null,
+      direction
+    };
+  });
+  const top = comparisons.filter((c) => c.direction === "worse").sort(
+    (a, b) => (b.relativeDifference ?? b.meanDifference) - (a.relativeDifference ?? a.meanDifference)
+  ).slice(0, settings.top).map((c) => c.series);
+  return {
+    comparisons,
+    summary: {
+      method: settings.adjust,
+      alpha: settings.alpha,
+      series: k,
+      worse,
+      better,
+      noEvidence: k - worse - better,
+      topRegressions: top
+    }
+  };
+}
+function groupRows(values) {
+  const groups = /* @__PURE__ */ new Map();
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    let list = groups.get(v);
+    if (list === void 0) {
+      list = [];
+      groups.set(v, list);
+    }
+    list.push(i);
+  }
+  return groups;
+}
+function scaledLosses(panel, losses, settings, extras) {
+  let scales;
+  if (settings.scale === "baseline") {
+    scales = baselineMeanLossScale(
+      panel.seriesNames,
+      panel.series,
+      losses.baseline,
+      losses.included
+    );
+  } else {
+    if (extras.history === void 0) {
+      throw new InputError(
+        "the seasonal-naive scale needs a history file (series, timestamp, actual)",
+        {
+          file: "history"
+        }
+      );
+    }
+    const lossKind = settings.loss === "squared" ? "squared" : "absolute";
+    scales = seasonalNaiveScale(extras.history, settings.season, lossKind);
+  }
+  const scaled = scaleLossesBySeries(
+    panel.seriesNames,
+    panel.series,
+    losses.baseline,
+    losses.candidate,
+    scales
+  );
+  if (scaled.state === "unavailable") {
+    const first = scaled.missing[0];
+    throw new InputError(
+      `pooling scaled losses needs a positive scale for every series; ${scaled.missing.length} series lack one, first ${JSON.stringify(first.series)}: ${first.note}`,
+      { file: settings.history ?? settings.baseline, value: first.series }
+    );
+  }
+  return { ...losses, baseline: scaled.baseline, candidate: scaled.candidate };
+}
+function weightsOrInputError(panel, settings) {
+  if (panel.weight === null) {
+    throw new InputError("weights were asked for, but the files have no weight column", {
+      file: settings.actuals ?? settings.baseline,
+      column: settings.columns.weight ?? "weight"
+    });
+  }
+  return panel.weight;
 }
 function rowLossesOrInputError(panel, settings) {
   let losses;
   try {
-    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals);
+    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals, settings.interval);
   } catch (error2) {
     if (error2 instanceof LossUnavailableError) {
       throw new InputError(`loss ${settings.loss}: ${error2.message}`, {
@@ -41918,9 +42432,16 @@ async function runComparison(settings, hooks = {}) {
   const candidate = await read(settings.candidate, "candidate");
   const actuals = settings.actuals === null ? void 0 : await read(settings.actuals, "actuals");
   hooks.onProgress?.({ stage: "aligning", fraction: 0 });
-  const panel = alignPanel({ baseline, candidate, ...actuals === void 0 ? {} : { actuals } });
+  const panel = alignPanel(
+    { baseline, candidate, ...actuals === void 0 ? {} : { actuals } },
+    { onProgress: (fraction) => hooks.onProgress?.({ stage: "aligning", fraction }) }
+  );
+  const history = settings.pooling === "scaled" && settings.scale === "seasonal-naive" ? await readHistory(settings) : void 0;
   hooks.onProgress?.({ stage: "testing", fraction: 0 });
-  const report = evaluatePanel(panel, settings);
+  const report = evaluatePanel(panel, settings, {
+    ...history === void 0 ? {} : { history },
+    ...hooks.resampleRunner === void 0 ? {} : { resampleRunner: hooks.resampleRunner }
+  });
   hooks.onProgress?.({ stage: "testing", fraction: 1 });
   return { report };
 }
@@ -41931,7 +42452,157 @@ async function runOnLossFile(path7, settings, hooks) {
     onProgress: (done, total) => hooks.onProgress?.({ stage: "reading losses", fraction: total > 0 ? done / total : 1 })
   });
   const { series, timestamps, kind } = orderLossSeries(table);
-  return evaluateLossSeries(series, { file: table.summary, timestamps, kind }, settings);
+  return evaluateLossSeries(
+    series,
+    { file: table.summary, timestamps, kind },
+    settings,
+    hooks.resampleRunner
+  );
+}
+async function readHistory(settings) {
+  if (settings.history === null) {
+    throw new InputError("--scale seasonal-naive needs --history FILE (series, timestamp, actual)");
+  }
+  const table = await readForecastFile(settings.history, {
+    role: "actuals",
+    columns: settings.columns,
+    ...settings.format === "auto" ? {} : { format: settings.format },
+    requireActual: true
+  });
+  return historyBySeries(table);
+}
+
+// src/parallel/resamplePool.ts
+import { availableParallelism } from "node:os";
+import {
+  MessageChannel,
+  receiveMessageOnPort,
+  Worker
+} from "node:worker_threads";
+
+// src/parallel/sharedResampleTask.ts
+var NEXT_STREAM = 0;
+var FINISHED_STREAMS = 1;
+var FAILED = 2;
+var CONTROL_SLOTS = 3;
+function shareResampleJob(job) {
+  const prefix = new SharedArrayBuffer(job.prefix.length * Float64Array.BYTES_PER_ELEMENT);
+  new Float64Array(prefix).set(job.prefix);
+  return {
+    prefix,
+    out: new SharedArrayBuffer(job.resamples * Float64Array.BYTES_PER_ELEMENT),
+    control: new SharedArrayBuffer(CONTROL_SLOTS * Int32Array.BYTES_PER_ELEMENT),
+    n: job.n,
+    expectedBlockLength: job.expectedBlockLength,
+    resamples: job.resamples,
+    seed: job.seed
+  };
+}
+function workOnSharedTask(task, reportFailure = () => {
+}) {
+  const control = new Int32Array(task.control);
+  const prefix = new Float64Array(task.prefix);
+  const out = new Float64Array(task.out);
+  const total = streamCount(task.resamples);
+  let sampler = null;
+  let streams = null;
+  let nextIndex = 0;
+  let done = 0;
+  for (; ; ) {
+    const stream = Atomics.add(control, NEXT_STREAM, 1);
+    if (stream >= total) return done;
+    try {
+      sampler ??= createGeometricSampler(task.expectedBlockLength);
+      if (streams === null) {
+        streams = createRandomStreams(task.seed, stream);
+        nextIndex = stream;
+      }
+      for (; nextIndex < stream; nextIndex++) streams.next();
+      const source = streams.next();
+      nextIndex++;
+      const { first, count } = streamShare(task.resamples, stream);
+      out.set(resampleDeviationsOfStream(prefix, task.n, sampler, source, count), first);
+      done++;
+    } catch (error2) {
+      reportFailure(error2 instanceof Error ? error2.message : String(error2));
+      Atomics.store(control, FAILED, 1);
+      throw error2;
+    } finally {
+      Atomics.add(control, FINISHED_STREAMS, 1);
+      Atomics.notify(control, FINISHED_STREAMS);
+    }
+  }
+}
+function waitForSharedTask(task, describeFailure) {
+  const control = new Int32Array(task.control);
+  const total = streamCount(task.resamples);
+  for (; ; ) {
+    const finished = Atomics.load(control, FINISHED_STREAMS);
+    if (finished >= total) break;
+    Atomics.wait(control, FINISHED_STREAMS, finished);
+  }
+  if (Atomics.load(control, FAILED) !== 0) {
+    throw new Error(`a resampling thread failed: ${describeFailure()}`);
+  }
+}
+
+// src/parallel/resamplePool.ts
+var MINIMUM_PARALLEL_BLOCK_DRAWS = 5e6;
+function createResamplePool(options = {}) {
+  const workerCount = options.workers ?? Math.max(0, availableParallelism() - 1);
+  const minimum = options.minimumBlockDraws ?? MINIMUM_PARALLEL_BLOCK_DRAWS;
+  const workerUrl = options.workerUrl ?? new URL("./resampleWorker.js", import.meta.url);
+  const workers = [];
+  let lastShared = null;
+  const start = () => {
+    while (workers.length < workerCount) {
+      const channel = new MessageChannel();
+      const worker = new Worker(workerUrl, {
+        workerData: { failures: channel.port2 },
+        transferList: [channel.port2]
+      });
+      worker.unref();
+      channel.port1.unref();
+      workers.push({ worker, failures: channel.port1 });
+    }
+  };
+  const runner = (job, random) => {
+    const blockDraws = job.resamples * (job.n / job.expectedBlockLength + 1);
+    if (workerCount === 0 || random !== createRandomSource || blockDraws < minimum) {
+      return runResampleJob(job, random);
+    }
+    start();
+    const task = shareResampleJob(job);
+    for (const { worker } of workers) worker.postMessage(task);
+    const inCallingThread = workOnSharedTask(task);
+    waitForSharedTask(task, () => {
+      const messages = [];
+      for (const { failures } of workers) {
+        for (let m = receiveMessageOnPort(failures); m !== void 0; m = receiveMessageOnPort(failures)) {
+          messages.push(String(m.message));
+        }
+      }
+      return messages.join("; ") || "no message";
+    });
+    lastShared = { streams: streamCount(job.resamples), inCallingThread };
+    return new Float64Array(task.out).slice();
+  };
+  return {
+    runner,
+    get started() {
+      return workers.length;
+    },
+    get lastShared() {
+      return lastShared;
+    },
+    close: async () => {
+      const stopping = workers.splice(0).map(({ worker, failures }) => {
+        failures.close();
+        return worker.terminate();
+      });
+      await Promise.all(stopping);
+    }
+  };
 }
 
 // src/action/retry.ts
@@ -42006,7 +42677,14 @@ function runnerDependencies() {
   return {
     getInput: (name) => getInput(name),
     env: process.env,
-    compare: runComparison,
+    compare: async (settings, options) => {
+      const pool = createResamplePool();
+      try {
+        return await runComparison(settings, { ...options, resampleRunner: pool.runner });
+      } finally {
+        await pool.close();
+      }
+    },
     createClient: (token, apiUrl) => getOctokit(token, { baseUrl: apiUrl }),
     sleep: realSleep,
     now: Date.now,
@@ -42181,7 +42859,7 @@ var ENGINE_OPTIONS = [
     name: "loss",
     defaultValue: "squared",
     choices: LOSS_NAMES,
-    help: "loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns)"
+    help: "loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)"
   },
   {
     name: "zero-actuals",
@@ -42256,6 +42934,50 @@ var ENGINE_OPTIONS = [
     defaultValue: "false",
     flag: true,
     help: "let the gate pass although the candidate lacks rows the baseline has"
+  },
+  {
+    name: "interval",
+    defaultValue: "",
+    help: "with --loss interval: the two quantile levels of the central interval, e.g. 0.1,0.9 (an 80% interval)"
+  },
+  {
+    name: "pooling",
+    defaultValue: "raw",
+    choices: ["raw", "scaled"],
+    help: "pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)"
+  },
+  {
+    name: "scale",
+    defaultValue: "baseline",
+    choices: ["baseline", "seasonal-naive"],
+    help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)"
+  },
+  {
+    name: "history",
+    defaultValue: null,
+    help: "in-sample history (series, timestamp, actual) for --scale seasonal-naive"
+  },
+  {
+    name: "season",
+    defaultValue: "1",
+    help: "period m of the seasonal naive forecast for --scale seasonal-naive (1: naive)"
+  },
+  {
+    name: "weights",
+    defaultValue: "false",
+    flag: true,
+    help: "weight rows by the weight column when averaging losses per time point"
+  },
+  {
+    name: "adjust",
+    defaultValue: "holm",
+    choices: ["holm", "bh"],
+    help: "multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)"
+  },
+  {
+    name: "top",
+    defaultValue: "10",
+    help: "how many series with the largest significant regressions to list"
   },
   {
     name: "name",
@@ -42384,6 +43106,14 @@ function resolveSettings(raw, label) {
     minPoints: integer("min-points", 1),
     shortData: value("short-data"),
     allowMissing: bool("allow-missing"),
+    interval: parseInterval(value("interval"), label("interval"), value("loss") === "interval"),
+    pooling: value("pooling"),
+    scale: value("scale"),
+    history: optional("history"),
+    season: integer("season", 1),
+    weights: bool("weights"),
+    adjust: value("adjust"),
+    top: integer("top", 0, 1e4),
     json: optional("json"),
     markdown: optional("markdown")
   };
@@ -42392,6 +43122,21 @@ function specOf(name) {
   const spec = ENGINE_OPTIONS.find((o) => o.name === name);
   if (spec === void 0) throw new Error(`unknown option ${name}`);
   return spec;
+}
+function parseInterval(text2, label, needed) {
+  if (text2 === "") {
+    if (needed) throw new InputError(`${label} is required with the interval loss, e.g. 0.1,0.9`);
+    return null;
+  }
+  const parts = text2.split(",").map((p) => Number(p.trim()));
+  const [lower, upper] = parts;
+  if (parts.length !== 2 || lower === void 0 || upper === void 0 || !(lower > 0 && lower < upper && upper < 1) || Math.abs(lower + upper - 1) > 1e-9) {
+    throw new InputError(
+      `${label} takes two quantile levels of a central interval, lower,upper with lower + upper = 1 (e.g. 0.1,0.9)`,
+      { value: text2 }
+    );
+  }
+  return [lower, upper];
 }
 function parseLag(text2, label) {
   if (text2 === "auto") return { kind: "auto" };
@@ -42642,6 +43387,7 @@ function readReport(r) {
     policy: readPolicy(r.field("policy")),
     comparisons,
     inputs: readInputs(r.field("inputs")),
+    seriesSummary: readSeriesSummary(r.field("seriesSummary")),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
   };
@@ -42694,7 +43440,21 @@ function readComparison(r) {
     rejected: {
       dieboldMariano: rejected.field("dieboldMariano").booleanOrNull(),
       bootstrap: rejected.field("bootstrap").booleanOrNull()
-    }
+    },
+    ...r.field("adjustedPValue").value === void 0 ? {} : { adjustedPValue: r.field("adjustedPValue").numberOrNull() },
+    ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) }
+  };
+}
+function readSeriesSummary(r) {
+  if (r.value === null || r.value === void 0) return null;
+  return {
+    method: r.field("method").oneOf(["holm", "bh"]),
+    alpha: r.field("alpha").number(),
+    series: r.field("series").integer(),
+    worse: r.field("worse").integer(),
+    better: r.field("better").integer(),
+    noEvidence: r.field("noEvidence").integer(),
+    topRegressions: r.field("topRegressions").strings()
   };
 }
 function readDieboldMariano(r) {
@@ -42725,7 +43485,7 @@ function readDieboldMariano(r) {
 }
 function readBootstrap(r) {
   return {
-    state: r.field("state").oneOf(["ok", "identical", "too-short"]),
+    state: r.field("state").oneOf(["ok", "identical", "too-short", "not-run"]),
     resamples: r.field("resamples").integer(),
     seed: r.field("seed").integer(),
     expectedBlockLength: r.field("expectedBlockLength").number(),
@@ -42777,7 +43537,16 @@ function readInputs(r) {
     },
     series: r.field("series").integer(),
     horizons: r.field("horizons").items().map((h) => h.integer(1)),
-    quantileLevels: r.field("quantileLevels").items().map((q) => q.number())
+    quantileLevels: r.field("quantileLevels").items().map((q) => q.number()),
+    intervalCoverage: readIntervalCoverage(r.field("intervalCoverage"))
+  };
+}
+function readIntervalCoverage(r) {
+  if (r.value === null || r.value === void 0) return null;
+  return {
+    nominal: r.field("nominal").number(),
+    baseline: r.field("baseline").numberOrNull(),
+    candidate: r.field("candidate").numberOrNull()
   };
 }
 function readSettings(r) {
@@ -42815,9 +43584,23 @@ function readSettings(r) {
     minPoints: r.field("minPoints").integer(),
     shortData: r.field("shortData").oneOf(["warn", "fail"]),
     allowMissing: r.field("allowMissing").boolean(),
+    interval: readLevels(r.field("interval")),
+    pooling: r.field("pooling").oneOf(["raw", "scaled"]),
+    scale: r.field("scale").oneOf(["baseline", "seasonal-naive"]),
+    history: r.field("history").stringOrNull(),
+    season: r.field("season").integer(),
+    weights: r.field("weights").boolean(),
+    adjust: r.field("adjust").oneOf(["holm", "bh"]),
+    top: r.field("top").integer(),
     json: r.field("json").stringOrNull(),
     markdown: r.field("markdown").stringOrNull()
   };
+}
+function readLevels(r) {
+  if (r.value === null) return null;
+  const [lower, upper, ...rest] = r.items().map((x) => x.number());
+  if (lower === void 0 || upper === void 0 || rest.length > 0) r.fail("two quantile levels");
+  return [lower, upper];
 }
 
 // src/action/run.ts

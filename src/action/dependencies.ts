@@ -2,6 +2,7 @@ import * as core from '@actions/core';
 import { getOctokit } from '@actions/github';
 import type { Progress } from '../app/progress.js';
 import { runComparison } from '../app/runComparison.js';
+import { createResamplePool } from '../parallel/resamplePool.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import type { GitHubClient } from './githubApi.js';
@@ -35,7 +36,15 @@ export function runnerDependencies(): ActionDependencies {
   return {
     getInput: (name) => core.getInput(name),
     env: process.env,
-    compare: runComparison,
+    compare: async (settings, options) => {
+      // Bootstrap resamples on every core of the runner (worker bundle beside dist/index.js).
+      const pool = createResamplePool();
+      try {
+        return await runComparison(settings, { ...options, resampleRunner: pool.runner });
+      } finally {
+        await pool.close();
+      }
+    },
     createClient: (token, apiUrl) => getOctokit(token, { baseUrl: apiUrl }),
     sleep: realSleep,
     now: Date.now,

@@ -10,6 +10,7 @@ import type {
   Interval,
   PolicySummary,
   Report,
+  SeriesSummary,
 } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 
@@ -133,6 +134,7 @@ function readReport(r: Reader): Report {
     policy: readPolicy(r.field('policy')),
     comparisons,
     inputs: readInputs(r.field('inputs')),
+    seriesSummary: readSeriesSummary(r.field('seriesSummary')),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
   };
@@ -189,6 +191,25 @@ function readComparison(r: Reader): Comparison {
       dieboldMariano: rejected.field('dieboldMariano').booleanOrNull(),
       bootstrap: rejected.field('bootstrap').booleanOrNull(),
     },
+    ...(r.field('adjustedPValue').value === undefined
+      ? {}
+      : { adjustedPValue: r.field('adjustedPValue').numberOrNull() }),
+    ...(r.field('direction').value === undefined
+      ? {}
+      : { direction: r.field('direction').oneOf(['worse', 'better', 'no evidence'] as const) }),
+  };
+}
+
+function readSeriesSummary(r: Reader): SeriesSummary | null {
+  if (r.value === null || r.value === undefined) return null;
+  return {
+    method: r.field('method').oneOf(['holm', 'bh']),
+    alpha: r.field('alpha').number(),
+    series: r.field('series').integer(),
+    worse: r.field('worse').integer(),
+    better: r.field('better').integer(),
+    noEvidence: r.field('noEvidence').integer(),
+    topRegressions: r.field('topRegressions').strings(),
   };
 }
 
@@ -224,7 +245,7 @@ function readDieboldMariano(r: Reader): DieboldMarianoSummary {
 
 function readBootstrap(r: Reader): BootstrapSummary {
   return {
-    state: r.field('state').oneOf(['ok', 'identical', 'too-short']),
+    state: r.field('state').oneOf(['ok', 'identical', 'too-short', 'not-run']),
     resamples: r.field('resamples').integer(),
     seed: r.field('seed').integer(),
     expectedBlockLength: r.field('expectedBlockLength').number(),
@@ -285,6 +306,16 @@ function readInputs(r: Reader): InputsSummary {
       .field('quantileLevels')
       .items()
       .map((q) => q.number()),
+    intervalCoverage: readIntervalCoverage(r.field('intervalCoverage')),
+  };
+}
+
+function readIntervalCoverage(r: Reader): InputsSummary['intervalCoverage'] {
+  if (r.value === null || r.value === undefined) return null;
+  return {
+    nominal: r.field('nominal').number(),
+    baseline: r.field('baseline').numberOrNull(),
+    candidate: r.field('candidate').numberOrNull(),
   };
 }
 
@@ -327,7 +358,22 @@ function readSettings(r: Reader): Settings {
     minPoints: r.field('minPoints').integer(),
     shortData: r.field('shortData').oneOf(['warn', 'fail']),
     allowMissing: r.field('allowMissing').boolean(),
+    interval: readLevels(r.field('interval')),
+    pooling: r.field('pooling').oneOf(['raw', 'scaled']),
+    scale: r.field('scale').oneOf(['baseline', 'seasonal-naive']),
+    history: r.field('history').stringOrNull(),
+    season: r.field('season').integer(),
+    weights: r.field('weights').boolean(),
+    adjust: r.field('adjust').oneOf(['holm', 'bh']),
+    top: r.field('top').integer(),
     json: r.field('json').stringOrNull(),
     markdown: r.field('markdown').stringOrNull(),
   };
+}
+
+function readLevels(r: Reader): readonly [number, number] | null {
+  if (r.value === null) return null;
+  const [lower, upper, ...rest] = r.items().map((x) => x.number());
+  if (lower === undefined || upper === undefined || rest.length > 0) r.fail('two quantile levels');
+  return [lower, upper];
 }

@@ -21,49 +21,58 @@ export interface LossSeries {
 }
 
 /**
- * Averages row losses by timestamp: L̄_t = (1/m_t) Σ_{rows i at t} L_i, over the rows for which
- * `selected(i)` holds (all rows when omitted) and that the losses include.
+ * Averages row losses by timestamp: L̄_t = (1/m_t) Σ_{rows i at t} L_i, over the listed rows (all
+ * rows when omitted) that the losses include. Cost O(rows listed + time points), so one call per
+ * series stays linear in the panel overall. With `weights`, the
+ * weighted mean L̄_t = Σ w_i L_i / Σ w_i (revenue- or volume-weighted gates); a time point whose
+ * selected weights sum to 0 is left out like one without rows.
  */
 export function aggregateByTime(
   panel: AlignedPanel,
   losses: RowLosses,
-  selected?: (row: number) => boolean,
+  rows?: ArrayLike<number>,
+  weights: Float64Array | null = null,
 ): LossSeries {
   const points = panel.timestamps.length;
   const sumB = new Float64Array(points);
   const sumC = new Float64Array(points);
   const count = new Int32Array(points);
+  const weightSum = weights === null ? null : new Float64Array(points);
   let maxHorizon = 1;
   let rowCount = 0;
   const included = losses.included;
-  for (let i = 0; i < panel.size; i++) {
+  const total = rows === undefined ? panel.size : rows.length;
+  for (let r = 0; r < total; r++) {
+    const i = rows === undefined ? r : rows[r]!;
     if (included !== null && included[i] === 0) continue;
-    if (selected !== undefined && !selected(i)) continue;
     const t = panel.time[i]!;
-    sumB[t]! += losses.baseline[i]!;
-    sumC[t]! += losses.candidate[i]!;
+    const w = weights === null ? 1 : weights[i]!;
+    sumB[t]! += w * losses.baseline[i]!;
+    sumC[t]! += w * losses.candidate[i]!;
+    if (weightSum !== null) weightSum[t]! += w;
     count[t]!++;
     rowCount++;
     const h = panel.horizon[i]!;
     if (h > maxHorizon) maxHorizon = h;
   }
+  const denominator = (t: number) => (weightSum === null ? count[t]! : weightSum[t]!);
   let n = 0;
-  for (let t = 0; t < points; t++) if (count[t]! > 0) n++;
+  for (let t = 0; t < points; t++) if (count[t]! > 0 && denominator(t) > 0) n++;
   const time = new Int32Array(n);
   const baseline = new Float64Array(n);
   const candidate = new Float64Array(n);
-  const rows = new Int32Array(n);
+  const rowsAt = new Int32Array(n);
   let k = 0;
   for (let t = 0; t < points; t++) {
-    const m = count[t]!;
-    if (m === 0) continue;
+    const m = denominator(t);
+    if (count[t]! === 0 || m <= 0) continue;
     time[k] = t;
     baseline[k] = sumB[t]! / m;
     candidate[k] = sumC[t]! / m;
-    rows[k] = m;
+    rowsAt[k] = count[t]!;
     k++;
   }
-  return { time, baseline, candidate, rows, rowCount, maxHorizon };
+  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
 }
 
 /**

@@ -1,15 +1,20 @@
 import { alignPanel } from '../alignment/alignPanel.js';
+import { historyBySeries } from '../alignment/historyBySeries.js';
 import { orderLossSeries } from '../alignment/orderLossSeries.js';
 import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
+import { InputError } from '../core/inputError.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import type { Progress } from './progress.js';
 
 export interface RunHooks {
   readonly onProgress?: (progress: Progress) => void;
+  /** Where bootstrap resamples run (a worker pool); default: the calling thread. */
+  readonly resampleRunner?: ResampleRunner;
 }
 
 /**
@@ -36,10 +41,20 @@ export async function runComparison(
   const candidate = await read(settings.candidate, 'candidate');
   const actuals = settings.actuals === null ? undefined : await read(settings.actuals, 'actuals');
   hooks.onProgress?.({ stage: 'aligning', fraction: 0 });
-  const panel = alignPanel({ baseline, candidate, ...(actuals === undefined ? {} : { actuals }) });
+  const panel = alignPanel(
+    { baseline, candidate, ...(actuals === undefined ? {} : { actuals }) },
+    { onProgress: (fraction) => hooks.onProgress?.({ stage: 'aligning', fraction }) },
+  );
 
+  const history =
+    settings.pooling === 'scaled' && settings.scale === 'seasonal-naive'
+      ? await readHistory(settings)
+      : undefined;
   hooks.onProgress?.({ stage: 'testing', fraction: 0 });
-  const report = evaluatePanel(panel, settings);
+  const report = evaluatePanel(panel, settings, {
+    ...(history === undefined ? {} : { history }),
+    ...(hooks.resampleRunner === undefined ? {} : { resampleRunner: hooks.resampleRunner }),
+  });
   hooks.onProgress?.({ stage: 'testing', fraction: 1 });
   return { report };
 }
@@ -54,5 +69,23 @@ async function runOnLossFile(path: string, settings: Settings, hooks: RunHooks):
       hooks.onProgress?.({ stage: 'reading losses', fraction: total > 0 ? done / total : 1 }),
   });
   const { series, timestamps, kind } = orderLossSeries(table);
-  return evaluateLossSeries(series, { file: table.summary, timestamps, kind }, settings);
+  return evaluateLossSeries(
+    series,
+    { file: table.summary, timestamps, kind },
+    settings,
+    hooks.resampleRunner,
+  );
+}
+
+async function readHistory(settings: Settings): Promise<Map<string, Float64Array>> {
+  if (settings.history === null) {
+    throw new InputError('--scale seasonal-naive needs --history FILE (series, timestamp, actual)');
+  }
+  const table = await readForecastFile(settings.history, {
+    role: 'actuals',
+    columns: settings.columns,
+    ...(settings.format === 'auto' ? {} : { format: settings.format }),
+    requireActual: true,
+  });
+  return historyBySeries(table);
 }

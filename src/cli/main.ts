@@ -3,6 +3,7 @@ import { writeFile } from 'node:fs/promises';
 import { runComparison } from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
 import { VERSION } from '../core/version.js';
+import { createResamplePool } from '../parallel/resamplePool.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import { renderTerminal } from '../report/renderTerminal.js';
 import { resolveSettings } from '../settings/resolveSettings.js';
@@ -24,7 +25,12 @@ async function main(argv: readonly string[]): Promise<number> {
     }
     const settings = resolveSettings(request.options, (name) => `--${name}`);
     const progress = progressReporter(process.stderr);
-    const { report } = await runComparison(settings, { onProgress: progress.update });
+    const pool = createResamplePool();
+    const { report } = await runComparison(settings, {
+      onProgress: progress.update,
+      resampleRunner: pool.runner,
+    });
+    await pool.close();
     progress.done();
     if (settings.json !== null)
       await writeFile(settings.json, `${JSON.stringify(report, null, 2)}\n`);

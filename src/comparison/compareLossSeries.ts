@@ -4,6 +4,7 @@ import type { Hypothesis } from '../decision/hypothesis.js';
 import type { LossName } from '../losses/lossName.js';
 import type { BootstrapSummary, Comparison, DieboldMarianoSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { runBootstrap } from './runBootstrap.js';
 import { runDieboldMariano } from './runDieboldMariano.js';
 
@@ -23,6 +24,7 @@ export function compareLossSeries(
   scope: ComparisonScope,
   hypothesis: Hypothesis,
   settings: Settings,
+  options: { readonly bootstrap?: boolean; readonly runner?: ResampleRunner } = {},
 ): Comparison {
   const n = series.baseline.length;
   const meanBaselineLoss = mean(series.baseline);
@@ -37,11 +39,14 @@ export function compareLossSeries(
     hypothesis,
     settings,
   );
-  const bootstrap: BootstrapSummary = runBootstrap(d, series, hypothesis, settings);
+  const withBootstrap = options.bootstrap ?? true;
+  const bootstrap: BootstrapSummary = withBootstrap
+    ? runBootstrap(d, series, hypothesis, settings, options.runner)
+    : bootstrapNotRun(settings);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
-    agreement: settings.agreement,
+    agreement: withBootstrap ? settings.agreement : 'dm',
     dieboldMariano: {
       label: `Diebold–Mariano (${dieboldMariano.estimator})`,
       pValue: dieboldMariano.decisionPValue,
@@ -87,4 +92,24 @@ function mean(x: Float64Array): number {
   let s = 0;
   for (let i = 0; i < x.length; i++) s += x[i]!;
   return x.length === 0 ? 0 : s / x.length;
+}
+
+function bootstrapNotRun(settings: Settings): BootstrapSummary {
+  return {
+    state: 'not-run',
+    resamples: 0,
+    seed: settings.seed,
+    expectedBlockLength: 1,
+    blockLengthRule: settings.blockLength.kind,
+    blockLengthSelection: null,
+    standardError: null,
+    interval: null,
+    relativeInterval: null,
+    pValue: null,
+    pValueTwoSided: null,
+    decisionPValue: null,
+    notes: [
+      'not run for per-series comparisons (the Diebold–Mariano test with adjusted p-values locates them)',
+    ],
+  };
 }

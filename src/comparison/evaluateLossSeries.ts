@@ -6,6 +6,7 @@ import { buildReport } from '../report/buildReport.js';
 import { lossFileInputsSummary } from '../report/inputsSummary.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { compareLossSeries } from './compareLossSeries.js';
 
 /**
@@ -16,6 +17,7 @@ export function evaluateLossSeries(
   series: LossSeries,
   source: { file: FileSummary; timestamps: readonly string[]; kind: TimestampKind },
   settings: Settings,
+  resampleRunner?: ResampleRunner,
 ): Report {
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
   const overall = compareLossSeries(
@@ -23,6 +25,7 @@ export function evaluateLossSeries(
     { loss: settings.loss, horizon: 'all', series: 'all', timestamps: source.timestamps },
     hypothesis,
     settings,
+    resampleRunner === undefined ? {} : { runner: resampleRunner },
   );
   return buildReport({
     version: VERSION,

@@ -2,41 +2,241 @@ import { aggregateByTime } from '../aggregation/lossSeries.js';
 import { InputError } from '../core/inputError.js';
 import type { AlignedPanel } from '../core/panel.js';
 import { VERSION } from '../core/version.js';
-import { hypothesisFor } from '../decision/hypothesis.js';
+import { decideAdjusted } from '../decision/decideAdjusted.js';
+import { type Hypothesis, hypothesisFor } from '../decision/hypothesis.js';
 import { computeRowLosses, LossUnavailableError, type RowLosses } from '../losses/rowLosses.js';
+import { benjaminiHochbergAdjust } from '../multiplicity/benjaminiHochbergAdjust.js';
+import { holmAdjust } from '../multiplicity/holmAdjust.js';
 import { buildReport } from '../report/buildReport.js';
 import { panelInputsSummary } from '../report/inputsSummary.js';
-import type { Report } from '../report/reportModel.js';
+import type { Comparison, Report, SeriesSummary } from '../report/reportModel.js';
+import { baselineMeanLossScale } from '../scaling/baselineMeanLossScale.js';
+import { scaleLossesBySeries } from '../scaling/scaleLossesBySeries.js';
+import { seasonalNaiveScale } from '../scaling/seasonalNaiveScale.js';
+import type { SeriesScale } from '../scaling/seriesScale.js';
 import type { Settings } from '../settings/settings.js';
-import { compareLossSeries } from './compareLossSeries.js';
+import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
+import { type ComparisonScope, compareLossSeries } from './compareLossSeries.js';
+
+export interface PanelExtras {
+  /** In-sample actuals per series name, for the seasonal naive scale. */
+  readonly history?: ReadonlyMap<string, Float64Array>;
+  /** Where bootstrap resamples are computed (default: this thread); same numbers either way. */
+  readonly resampleRunner?: ResampleRunner;
+}
 
 /**
- * The pure core from an aligned panel to the report: row losses → per-time-point loss series →
- * tests → decision. No files, no clock; the bootstrap's randomness comes from the seed in the
+ * The pure core from an aligned panel to the report: row losses → (optionally scaled) → per-time
+ * loss series → tests → decision, for the overall comparison (which decides the gate), then one
+ * comparison per horizon (both tests; the lag floor h − 1 follows from the horizon), then one per
+ * series (Diebold–Mariano alone, p-values adjusted for multiplicity by Holm 1979 or Benjamini &
+ * Hochberg 1995). No files, no clock; the bootstrap's randomness comes from the seed in the
  * settings. Losses that cannot be computed on this panel are InputErrors.
  */
-export function evaluatePanel(panel: AlignedPanel, settings: Settings): Report {
+export function evaluatePanel(
+  panel: AlignedPanel,
+  settings: Settings,
+  extras: PanelExtras = {},
+): Report {
   const losses = rowLossesOrInputError(panel, settings);
+  const pooled =
+    settings.pooling === 'scaled' ? scaledLosses(panel, losses, settings, extras) : losses;
+  const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
-  const overall = compareLossSeries(
-    aggregateByTime(panel, losses),
-    { loss: settings.loss, horizon: 'all', series: 'all', timestamps: panel.timestamps },
-    hypothesis,
-    settings,
-  );
+  const runner = extras.resampleRunner === undefined ? {} : { runner: extras.resampleRunner };
+  const scope = (horizon: 'all' | number, series: 'all' | string): ComparisonScope => ({
+    loss: settings.loss,
+    horizon,
+    series,
+    timestamps: panel.timestamps,
+  });
+  const comparisons: Comparison[] = [
+    compareLossSeries(
+      aggregateByTime(panel, pooled, undefined, weights),
+      scope('all', 'all'),
+      hypothesis,
+      settings,
+      runner,
+    ),
+  ];
+
+  const byHorizon = groupRows(panel.horizon);
+  if (byHorizon.size > 1) {
+    for (const h of [...byHorizon.keys()].sort((a, b) => a - b)) {
+      const series = aggregateByTime(panel, pooled, byHorizon.get(h), weights);
+      comparisons.push(compareLossSeries(series, scope(h, 'all'), hypothesis, settings, runner));
+    }
+  }
+
+  let seriesSummary: SeriesSummary | null = null;
+  if (panel.seriesNames.length > 1) {
+    const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
+    comparisons.push(...perSeries.comparisons);
+    seriesSummary = perSeries.summary;
+  }
+
   return buildReport({
     version: VERSION,
     settings,
     hypothesis,
     inputs: panelInputsSummary(panel, losses),
-    comparisons: [overall],
+    comparisons,
+    seriesSummary,
   });
+}
+
+/**
+ * Per-series comparisons on raw losses (a series' own scale does not change its test), the
+ * Diebold–Mariano test with the chosen variance, adjusted across series in both directions
+ * (worse / better), and the summary the report shows: counts and the top regressions.
+ */
+function seriesComparisons(
+  panel: AlignedPanel,
+  losses: RowLosses,
+  weights: Float64Array | null,
+  hypothesis: Hypothesis,
+  settings: Settings,
+  scope: (h: 'all', s: string) => ComparisonScope,
+): { comparisons: Comparison[]; summary: SeriesSummary } {
+  const k = panel.seriesNames.length;
+  const rowsOf = groupRows(panel.series);
+  const raw = panel.seriesNames.map((name, id) => {
+    const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
+    return compareLossSeries(series, scope('all', name), hypothesis, settings, {
+      bootstrap: false,
+    });
+  });
+  const adjust = settings.adjust === 'holm' ? holmAdjust : benjaminiHochbergAdjust;
+  // One-sided p-values in each direction, as the decision uses them (HLN-corrected for
+  // bartlett/uniform), then adjusted across the series family.
+  const upper = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const worseP = adjust(upper);
+  const betterP = adjust(upper.map((p) => (p === null ? null : 1 - p)));
+  const policyP = hypothesis.rejectWhen === 'above' ? worseP : betterP;
+  let worse = 0;
+  let better = 0;
+  const comparisons = raw.map((c, j) => {
+    const w = worseP[j] ?? null;
+    const b = betterP[j] ?? null;
+    const direction: 'worse' | 'better' | 'no evidence' =
+      w !== null && w <= settings.alpha
+        ? 'worse'
+        : b !== null && b <= settings.alpha
+          ? 'better'
+          : 'no evidence';
+    if (direction === 'worse') worse++;
+    if (direction === 'better') better++;
+    const decision = decideAdjusted({
+      hypothesis,
+      alpha: settings.alpha,
+      adjustedPValue: policyP[j] ?? null,
+      method: settings.adjust,
+      n: c.n,
+      minPoints: settings.minPoints,
+    });
+    return {
+      ...c,
+      verdict: decision.verdict,
+      reasons: decision.reasons,
+      rejected: { dieboldMariano: decision.rejected, bootstrap: null },
+      adjustedPValue: policyP[j] ?? null,
+      direction,
+    };
+  });
+  const top = comparisons
+    .filter((c) => c.direction === 'worse')
+    .sort(
+      (a, b) =>
+        (b.relativeDifference ?? b.meanDifference) - (a.relativeDifference ?? a.meanDifference),
+    )
+    .slice(0, settings.top)
+    .map((c) => c.series as string);
+  return {
+    comparisons,
+    summary: {
+      method: settings.adjust,
+      alpha: settings.alpha,
+      series: k,
+      worse,
+      better,
+      noEvidence: k - worse - better,
+      topRegressions: top,
+    },
+  };
+}
+
+/** Row indices by value (a horizon, a series id), in row order: one pass over the panel. */
+function groupRows(values: Int32Array): Map<number, number[]> {
+  const groups = new Map<number, number[]>();
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i]!;
+    let list = groups.get(v);
+    if (list === undefined) {
+      list = [];
+      groups.set(v, list);
+    }
+    list.push(i);
+  }
+  return groups;
+}
+
+function scaledLosses(
+  panel: AlignedPanel,
+  losses: RowLosses,
+  settings: Settings,
+  extras: PanelExtras,
+): RowLosses {
+  let scales: Map<string, SeriesScale>;
+  if (settings.scale === 'baseline') {
+    scales = baselineMeanLossScale(
+      panel.seriesNames,
+      panel.series,
+      losses.baseline,
+      losses.included,
+    );
+  } else {
+    if (extras.history === undefined) {
+      throw new InputError(
+        'the seasonal-naive scale needs a history file (series, timestamp, actual)',
+        {
+          file: 'history',
+        },
+      );
+    }
+    const lossKind = settings.loss === 'squared' ? 'squared' : 'absolute';
+    scales = seasonalNaiveScale(extras.history, settings.season, lossKind);
+  }
+  const scaled = scaleLossesBySeries(
+    panel.seriesNames,
+    panel.series,
+    losses.baseline,
+    losses.candidate,
+    scales,
+  );
+  if (scaled.state === 'unavailable') {
+    const first = scaled.missing[0]!;
+    throw new InputError(
+      `pooling scaled losses needs a positive scale for every series; ${scaled.missing.length} series lack one, first ${JSON.stringify(first.series)}: ${first.note}`,
+      { file: settings.history ?? settings.baseline, value: first.series },
+    );
+  }
+  return { ...losses, baseline: scaled.baseline, candidate: scaled.candidate };
+}
+
+function weightsOrInputError(panel: AlignedPanel, settings: Settings): Float64Array {
+  if (panel.weight === null) {
+    throw new InputError('weights were asked for, but the files have no weight column', {
+      file: settings.actuals ?? settings.baseline,
+      column: settings.columns.weight ?? 'weight',
+    });
+  }
+  return panel.weight;
 }
 
 function rowLossesOrInputError(panel: AlignedPanel, settings: Settings): RowLosses {
   let losses: RowLosses;
   try {
-    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals);
+    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals, settings.interval);
   } catch (error) {
     if (error instanceof LossUnavailableError) {
       throw new InputError(`loss ${settings.loss}: ${error.message}`, {

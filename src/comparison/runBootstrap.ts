@@ -1,9 +1,11 @@
 import type { LossSeries } from '../aggregation/lossSeries.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
+import { createRandomSource } from '../random/randomSource.js';
 import type { BootstrapSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { automaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import { relativeDifferenceBootstrap } from '../statistics/bootstrap/relativeDifferenceBootstrap.js';
+import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { stationaryBootstrap } from '../statistics/bootstrap/stationaryBootstrap.js';
 
 /**
@@ -16,6 +18,7 @@ export function runBootstrap(
   series: LossSeries,
   hypothesis: Hypothesis,
   settings: Settings,
+  runner?: ResampleRunner,
 ): BootstrapSummary {
   const auto =
     settings.blockLength.kind === 'auto' && d.length >= 2 ? automaticBlockLength(d) : null;
@@ -28,7 +31,7 @@ export function runBootstrap(
     confidence: settings.confidence,
     margin: hypothesis.boundary,
   };
-  const result = stationaryBootstrap(d, options);
+  const result = stationaryBootstrap(d, options, createRandomSource, runner);
   // With a relative margin, also the interval for E[L_c]/E[L_b] − 1 from the same resamples.
   const relative =
     settings.marginKind === 'relative'

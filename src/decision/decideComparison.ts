@@ -14,7 +14,7 @@ export interface TestEvidence {
   readonly pValue: number | null;
   /** Mean of the tested differential. */
   readonly mean: number;
-  readonly state: 'ok' | 'identical' | 'zero-variance' | 'too-short';
+  readonly state: 'ok' | 'identical' | 'zero-variance' | 'too-short' | 'not-run';
 }
 
 export interface DecisionInput {

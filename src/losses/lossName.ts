@@ -1,5 +1,5 @@
 /** The losses a comparison can use, by the name the CLI and the action accept. */
-export const LOSS_NAMES = ['squared', 'absolute', 'ape', 'sape', 'pinball'] as const;
+export const LOSS_NAMES = ['squared', 'absolute', 'ape', 'sape', 'pinball', 'interval'] as const;
 export type LossName = (typeof LOSS_NAMES)[number];
 
 /** Plain-words label for reports. */
@@ -9,4 +9,5 @@ export const LOSS_LABELS: Record<LossName, string> = {
   ape: 'absolute percentage error (%)',
   sape: 'symmetric absolute percentage error (%)',
   pinball: 'pinball loss (mean over quantile levels)',
+  interval: 'interval score of the central interval (Gneiting & Raftery 2007)',
 };

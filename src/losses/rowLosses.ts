@@ -1,6 +1,8 @@
 import type { AlignedPanel, QuantileColumn } from '../core/panel.js';
 import { absoluteError } from './absoluteError.js';
 import { absolutePercentageError } from './absolutePercentageError.js';
+import { intervalCoverage } from './intervalCoverage.js';
+import { intervalScore } from './intervalScore.js';
 import type { LossName } from './lossName.js';
 import { pinballLoss } from './pinballLoss.js';
 import type { PointLossFunction } from './pointLoss.js';
@@ -19,14 +21,23 @@ export interface RowLosses {
   readonly included: Uint8Array | null;
   /** Rows whose actual is 0 under the absolute percentage error (skipped or refused). */
   readonly zeroActualRows: readonly number[];
-  /** Quantile levels the pinball loss averaged over (empty for point losses). */
+  /** Quantile levels the pinball loss averaged over, or the interval's two (else empty). */
   readonly levels: readonly number[];
+  /** Empirical coverage of the central interval by each model (interval loss only). */
+  readonly coverage: IntervalCoverage | null;
+}
+
+export interface IntervalCoverage {
+  /** Nominal coverage upper − lower, e.g. 0.8 for [q0.1, q0.9]. */
+  readonly nominal: number;
+  readonly baseline: number | null;
+  readonly candidate: number | null;
 }
 
 /** Why losses cannot be computed for this panel, in plain words; the edge names the files. */
 export class LossUnavailableError extends Error {}
 
-const POINT_LOSSES: Record<Exclude<LossName, 'pinball'>, PointLossFunction> = {
+const POINT_LOSSES: Record<Exclude<LossName, 'pinball' | 'interval'>, PointLossFunction> = {
   squared: squaredError,
   absolute: absoluteError,
   ape: absolutePercentageError,
@@ -42,10 +53,12 @@ export function computeRowLosses(
   panel: AlignedPanel,
   loss: LossName,
   zeroActuals: 'error' | 'skip',
+  interval: readonly [number, number] | null = null,
 ): RowLosses {
   const n = panel.size;
   const baseline = new Float64Array(n);
   const candidate = new Float64Array(n);
+  if (loss === 'interval') return intervalLosses(panel, interval);
   if (loss === 'pinball') {
     const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
     if (pairs.length === 0) {
@@ -73,6 +86,7 @@ export function computeRowLosses(
       included: null,
       zeroActualRows: [],
       levels: pairs.map((p) => p.level),
+      coverage: null,
     };
   }
   const base = panel.baseline.prediction;
@@ -99,7 +113,56 @@ export function computeRowLosses(
     baseline[i] = f(yi, base[i]!);
     candidate[i] = f(yi, cand[i]!);
   }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [] };
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
+}
+
+/**
+ * Interval score of the central interval [q_lower, q_upper] (Gneiting & Raftery 2007, eq. 43),
+ * α = 1 − (upper − lower), and each model's empirical coverage of it.
+ */
+function intervalLosses(
+  panel: AlignedPanel,
+  interval: readonly [number, number] | null,
+): RowLosses {
+  if (interval === null) {
+    throw new LossUnavailableError(
+      'the interval loss needs the two quantile levels of the interval',
+    );
+  }
+  const [lowLevel, highLevel] = interval;
+  const find = (columns: readonly QuantileColumn[], level: number) =>
+    columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
+  const bl = find(panel.baseline.quantiles, lowLevel);
+  const bu = find(panel.baseline.quantiles, highLevel);
+  const cl = find(panel.candidate.quantiles, lowLevel);
+  const cu = find(panel.candidate.quantiles, highLevel);
+  if (bl === undefined || bu === undefined || cl === undefined || cu === undefined) {
+    throw new LossUnavailableError(
+      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`,
+    );
+  }
+  const alpha = 1 - (highLevel - lowLevel);
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const y = panel.actual;
+  for (let i = 0; i < n; i++) {
+    baseline[i] = intervalScore(y[i]!, bl[i]!, bu[i]!, alpha);
+    candidate[i] = intervalScore(y[i]!, cl[i]!, cu[i]!, alpha);
+  }
+  return {
+    loss: 'interval',
+    baseline,
+    candidate,
+    included: null,
+    zeroActualRows: [],
+    levels: [lowLevel, highLevel],
+    coverage: {
+      nominal: highLevel - lowLevel,
+      baseline: intervalCoverage(y, bl, bu),
+      candidate: intervalCoverage(y, cl, cu),
+    },
+  };
 }
 
 function commonQuantiles(

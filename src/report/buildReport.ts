@@ -1,7 +1,7 @@
 import type { Hypothesis } from '../decision/hypothesis.js';
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
 import type { Settings } from '../settings/settings.js';
-import type { Comparison, InputsSummary, Report } from './reportModel.js';
+import type { Comparison, InputsSummary, Report, SeriesSummary } from './reportModel.js';
 
 export interface ReportParts {
   readonly version: string;
@@ -10,6 +10,7 @@ export interface ReportParts {
   readonly inputs: InputsSummary;
   /** The overall comparison first. */
   readonly comparisons: readonly Comparison[];
+  readonly seriesSummary?: SeriesSummary | null;
 }
 
 /**
@@ -58,6 +59,7 @@ export function buildReport(parts: ReportParts): Report {
     inputs,
     settings,
     reasons,
+    seriesSummary: parts.seriesSummary ?? null,
   };
 }
 

@@ -30,6 +30,7 @@ export function panelInputsSummary(panel: AlignedPanel, losses: RowLosses): Inpu
     series: panel.seriesNames.length,
     horizons: [...horizons].sort((a, b) => a - b),
     quantileLevels: losses.levels,
+    intervalCoverage: losses.coverage,
   };
 }
 
@@ -60,5 +61,6 @@ export function lossFileInputsSummary(
     series: 1,
     horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),
     quantileLevels: [],
+    intervalCoverage: null,
   };
 }

@@ -21,6 +21,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, '');
   lines.push(esc(report.headline), '');
   lines.push(...comparisonTable(report), '');
+  lines.push(...seriesSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
   if (reasons.length > 0) {
     lines.push('**Why**', '');
@@ -54,7 +55,7 @@ function comparisonTable(report: Report): string[] {
     `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
     '|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|',
   ];
-  for (const c of report.comparisons) {
+  for (const c of report.comparisons.filter((x) => x.series === 'all')) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
     const interval =
@@ -79,6 +80,37 @@ function relativeCell(c: Comparison): string {
   return r === null
     ? point
     : `${point} [${formatSignedPercent(r.lower)}, ${formatSignedPercent(r.upper)}]`;
+}
+
+/**
+ * Where regressions live: counts of series by what their adjusted one-sided tests found, and a
+ * table of the series with the largest significant regressions (top N).
+ */
+function seriesSection(report: Report): string[] {
+  const summary = report.seriesSummary;
+  if (summary === null) return [];
+  const method = summary.method === 'holm' ? 'Holm' : 'Benjamini–Hochberg';
+  const out = [
+    `**Series**: of ${summary.series}, ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} without evidence either way (Diebold–Mariano per series, ${method}-adjusted, α = ${summary.alpha}). These locate a regression; the verdict rests on the overall comparison.`,
+    '',
+  ];
+  const byName = new Map(
+    report.comparisons.filter((c) => c.series !== 'all').map((c) => [c.series, c]),
+  );
+  const top = summary.topRegressions.map((name) => byName.get(name)).filter((c) => c !== undefined);
+  if (top.length > 0) {
+    out.push(
+      `| series (largest significant regressions) | time points | baseline loss | candidate loss | relative | DM statistic | adjusted p |`,
+      '|---|---:|---:|---:|---:|---:|---:|',
+    );
+    for (const c of top) {
+      out.push(
+        `| ${esc(String(c.series))} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(c.dieboldMariano.smallSample?.statistic ?? c.dieboldMariano.statistic)} | ${formatPValue(c.adjustedPValue)} |`,
+      );
+    }
+    out.push('');
+  }
+  return out;
 }
 
 function testDetails(report: Report): string[] {
@@ -124,6 +156,12 @@ function testDetails(report: Report): string[] {
     `| bootstrap standard error of d̄ | ${formatNumber(bs.standardError)} |`,
     `| bootstrap p one-sided (worse) / two-sided | ${formatPValue(bs.pValue)} / ${formatPValue(bs.pValueTwoSided)} |`,
   );
+  const coverage = report.inputs.intervalCoverage;
+  if (coverage !== null) {
+    out.push(
+      `| empirical coverage of the ${formatNumber(coverage.nominal * 100, 3)}% interval, baseline / candidate | ${formatSignedPercent(coverage.baseline).replace('+', '')} / ${formatSignedPercent(coverage.candidate).replace('+', '')} |`,
+    );
+  }
   for (const note of [...dm.notes, ...bs.notes]) out.push('', `Note: ${esc(note)}`);
   out.push('', '</details>');
   return out;

@@ -31,20 +31,22 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
     'interval (boot)',
     'verdict',
   ];
-  const rows = report.comparisons.map((c) => [
-    scope(c),
-    String(c.n),
-    formatNumber(c.meanBaselineLoss),
-    formatNumber(c.meanCandidateLoss),
-    formatNumber(c.meanDifference),
-    formatSignedPercent(c.relativeDifference),
-    formatPValue(c.dieboldMariano.decisionPValue),
-    formatPValue(c.bootstrap.decisionPValue),
-    c.bootstrap.interval === null
-      ? 'n/a'
-      : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]`,
-    c.verdict,
-  ]);
+  const rows = report.comparisons
+    .filter((c) => c.series === 'all')
+    .map((c) => [
+      scope(c),
+      String(c.n),
+      formatNumber(c.meanBaselineLoss),
+      formatNumber(c.meanCandidateLoss),
+      formatNumber(c.meanDifference),
+      formatSignedPercent(c.relativeDifference),
+      formatPValue(c.dieboldMariano.decisionPValue),
+      formatPValue(c.bootstrap.decisionPValue),
+      c.bootstrap.interval === null
+        ? 'n/a'
+        : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]`,
+      c.verdict,
+    ]);
   const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)));
   const line = (cells: string[]) =>
     cells
@@ -55,6 +57,13 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   out.push('');
   for (const reason of [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])]) {
     out.push(wrap(`- ${reason}`, 100, '  '));
+  }
+  const summary = report.seriesSummary;
+  if (summary !== null) {
+    const top = summary.topRegressions.slice(0, 5).map(clean).join(', ');
+    out.push(
+      `series: ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} no evidence (${summary.method}-adjusted)${top === '' ? '' : `; largest regressions: ${top}`}`,
+    );
   }
   const i = report.inputs;
   out.push(

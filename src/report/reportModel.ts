@@ -23,6 +23,23 @@ export interface Report {
   readonly settings: Settings;
   /** Reasons that concern the whole gate (e.g. rows the candidate lacks). */
   readonly reasons: readonly string[];
+  /** Per-series findings when the panel has more than one series, else null. */
+  readonly seriesSummary: SeriesSummary | null;
+}
+
+/**
+ * Where regressions live across series: counts by direction (from multiplicity-adjusted
+ * one-sided p-values at α) and the series with the largest significant regressions.
+ */
+export interface SeriesSummary {
+  readonly method: 'holm' | 'bh';
+  readonly alpha: number;
+  readonly series: number;
+  readonly worse: number;
+  readonly better: number;
+  readonly noEvidence: number;
+  /** Names of the significantly worse series, largest relative difference first (top N). */
+  readonly topRegressions: readonly string[];
 }
 
 export interface PolicySummary {
@@ -68,6 +85,10 @@ export interface Comparison {
     readonly dieboldMariano: boolean | null;
     readonly bootstrap: boolean | null;
   };
+  /** Per-series comparisons: the multiplicity-adjusted p-value in the policy's direction. */
+  readonly adjustedPValue?: number | null;
+  /** Per-series comparisons: what the adjusted one-sided tests found. */
+  readonly direction?: 'worse' | 'better' | 'no evidence';
 }
 
 export interface DieboldMarianoSummary {
@@ -98,7 +119,8 @@ export interface DieboldMarianoSummary {
 }
 
 export interface BootstrapSummary {
-  readonly state: 'ok' | 'identical' | 'too-short';
+  /** 'not-run': per-series comparisons use the Diebold–Mariano test alone. */
+  readonly state: 'ok' | 'identical' | 'too-short' | 'not-run';
   readonly resamples: number;
   readonly seed: number;
   readonly expectedBlockLength: number;
@@ -155,4 +177,10 @@ export interface InputsSummary {
   readonly series: number;
   readonly horizons: readonly number[];
   readonly quantileLevels: readonly number[];
+  /** With the interval loss: each model's empirical coverage of the central interval. */
+  readonly intervalCoverage: {
+    readonly nominal: number;
+    readonly baseline: number | null;
+    readonly candidate: number | null;
+  } | null;
 }

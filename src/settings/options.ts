@@ -54,7 +54,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     name: 'loss',
     defaultValue: 'squared',
     choices: LOSS_NAMES,
-    help: 'loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns)',
+    help: 'loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)',
   },
   {
     name: 'zero-actuals',
@@ -129,6 +129,50 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     defaultValue: 'false',
     flag: true,
     help: 'let the gate pass although the candidate lacks rows the baseline has',
+  },
+  {
+    name: 'interval',
+    defaultValue: '',
+    help: 'with --loss interval: the two quantile levels of the central interval, e.g. 0.1,0.9 (an 80% interval)',
+  },
+  {
+    name: 'pooling',
+    defaultValue: 'raw',
+    choices: ['raw', 'scaled'],
+    help: 'pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)',
+  },
+  {
+    name: 'scale',
+    defaultValue: 'baseline',
+    choices: ['baseline', 'seasonal-naive'],
+    help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)",
+  },
+  {
+    name: 'history',
+    defaultValue: null,
+    help: 'in-sample history (series, timestamp, actual) for --scale seasonal-naive',
+  },
+  {
+    name: 'season',
+    defaultValue: '1',
+    help: 'period m of the seasonal naive forecast for --scale seasonal-naive (1: naive)',
+  },
+  {
+    name: 'weights',
+    defaultValue: 'false',
+    flag: true,
+    help: 'weight rows by the weight column when averaging losses per time point',
+  },
+  {
+    name: 'adjust',
+    defaultValue: 'holm',
+    choices: ['holm', 'bh'],
+    help: 'multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)',
+  },
+  {
+    name: 'top',
+    defaultValue: '10',
+    help: 'how many series with the largest significant regressions to list',
   },
   {
     name: 'name',

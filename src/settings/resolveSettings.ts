@@ -93,6 +93,14 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     minPoints: integer('min-points', 1),
     shortData: value('short-data') as Settings['shortData'],
     allowMissing: bool('allow-missing'),
+    interval: parseInterval(value('interval'), label('interval'), value('loss') === 'interval'),
+    pooling: value('pooling') as Settings['pooling'],
+    scale: value('scale') as Settings['scale'],
+    history: optional('history'),
+    season: integer('season', 1),
+    weights: bool('weights'),
+    adjust: value('adjust') as Settings['adjust'],
+    top: integer('top', 0, 10_000),
     json: optional('json'),
     markdown: optional('markdown'),
   };
@@ -102,6 +110,32 @@ function specOf(name: string): OptionSpec {
   const spec = ENGINE_OPTIONS.find((o) => o.name === name);
   if (spec === undefined) throw new Error(`unknown option ${name}`);
   return spec;
+}
+
+function parseInterval(
+  text: string,
+  label: string,
+  needed: boolean,
+): readonly [number, number] | null {
+  if (text === '') {
+    if (needed) throw new InputError(`${label} is required with the interval loss, e.g. 0.1,0.9`);
+    return null;
+  }
+  const parts = text.split(',').map((p) => Number(p.trim()));
+  const [lower, upper] = parts;
+  if (
+    parts.length !== 2 ||
+    lower === undefined ||
+    upper === undefined ||
+    !(lower > 0 && lower < upper && upper < 1) ||
+    Math.abs(lower + upper - 1) > 1e-9
+  ) {
+    throw new InputError(
+      `${label} takes two quantile levels of a central interval, lower,upper with lower + upper = 1 (e.g. 0.1,0.9)`,
+      { value: text },
+    );
+  }
+  return [lower, upper];
 }
 
 function parseLag(text: string, label: string): LagRule {

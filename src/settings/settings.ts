@@ -38,6 +38,15 @@ export interface Settings {
   readonly minPoints: number;
   readonly shortData: 'warn' | 'fail';
   readonly allowMissing: boolean;
+  /** Levels [lower, upper] of the central interval for the interval score, or null. */
+  readonly interval: readonly [number, number] | null;
+  readonly pooling: 'raw' | 'scaled';
+  readonly scale: 'baseline' | 'seasonal-naive';
+  readonly history: string | null;
+  readonly season: number;
+  readonly weights: boolean;
+  readonly adjust: 'holm' | 'bh';
+  readonly top: number;
   readonly json: string | null;
   readonly markdown: string | null;
 }

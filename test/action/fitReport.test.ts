@@ -6,13 +6,12 @@ import { sampleReport } from './sampleReport.js';
 const render = (r: Parameters<typeof renderMarkdown>[0]) =>
   renderMarkdown(r, { runUrl: 'https://run' });
 
-function bigReport(count: number, seriesLength = 30) {
+// Many rows of the main table: per-horizon comparisons (per-series ones render only as the
+// top-regressions table).
+function bigReport(count: number) {
   const report = sampleReport();
   const overall = report.comparisons[0]!;
-  const more = Array.from({ length: count }, (_, i) => ({
-    ...overall,
-    series: `s${i}-${'y'.repeat(seriesLength)}`,
-  }));
+  const more = Array.from({ length: count }, (_, i) => ({ ...overall, horizon: i + 1 }));
   return sampleReport({ comparisons: [overall, ...more] });
 }
 

@@ -148,6 +148,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       series: 4,
       horizons: [1, 2, 3],
       quantileLevels: [],
+      intervalCoverage: null,
     },
     settings: {
       name: '',
@@ -183,10 +184,19 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       minPoints: 30,
       shortData: 'warn',
       allowMissing: false,
+      interval: null,
+      pooling: 'raw',
+      scale: 'baseline',
+      history: null,
+      season: 1,
+      weights: false,
+      adjust: 'holm',
+      top: 10,
       json: null,
       markdown: null,
     },
     reasons: [],
+    seriesSummary: null,
   };
   return { ...report, ...overrides };
 }
