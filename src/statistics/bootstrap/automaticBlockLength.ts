@@ -1,4 +1,4 @@
-import { autocovariances } from './autocovariances.js';
+import { autocovariances } from '../autocovariance.js';
 import { flatTop } from './flatTopWindow.js';
 
 /** Every quantity the automatic choice went through, for the report and for audits. */

@@ -4,7 +4,7 @@ import {
   randomStreams,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
-import { meanOf } from './autocovariances.js';
+import { meanOf } from './centring.js';
 import { basicBootstrapInference } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';

@@ -2,7 +2,7 @@ import {
   createRandomSource,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
-import { meanOf } from './autocovariances.js';
+import { meanOf } from './centring.js';
 import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
 import { type ResampleRunner, runResampleJob } from './resampleJob.js';

@@ -1,4 +1,4 @@
-import { centre, lagProduct } from './autocovariances.js';
+import { centre, lagProduct } from './centring.js';
 
 /**
  * The exact variance of the stationary-bootstrap mean given the data (Politis & Romano 1994,
