@@ -1,6 +1,7 @@
 import { InputError } from '../core/inputError.js';
 import type { AlignedPanel, QuantileColumn } from '../core/panel.js';
 import type { ForecastTable, LabelColumn, ValueColumn } from '../reading/forecastTable.js';
+import { parseDecimal } from '../reading/numbers.js';
 import { compareKeys, type KeyComponent, sortByKey } from './keyOrder.js';
 import { compareCodeUnits, type LabelOrder, orderLabels } from './timeOrder.js';
 
@@ -19,8 +20,10 @@ export interface AlignHooks {
 }
 
 /**
- * Matches baseline and candidate rows on the key (series, timestamp, horizon, origin) and attaches
- * the actual, never relying on file order. Pure: tables in, panel out, InputError on bad input.
+ * Matches baseline and candidate rows on the key (series, timestamp, horizon, origin, path) and
+ * attaches the actual, never relying on file order. Origin and path are part of the key only when
+ * the files have those columns (both predictions files alike, else an error); an actuals file is
+ * keyed on (series, timestamp) alone. Pure: tables in, panel out, InputError on bad input.
  *
  * - Timestamps (and origins) are ordered by one kind decided over all files together (see
  *   orderLabels); the panel keeps, per time, the label as written (the smallest if several
@@ -32,9 +35,10 @@ export interface AlignHooks {
  *   weight column in only one predictions file is an error, so one model cannot set the weights.
  * - Only what both models provide is compared: the prediction when both have one, and the
  *   quantile levels they share (panel.quantileLevels says which were left out).
- * - Rows come out sorted by (series, timestamp, horizon, origin); ids are compact and sorted
- *   (series names in code-unit order, times in time order), so the panel does not depend on
- *   the order of rows in the files.
+ * - Rows come out sorted by (series, timestamp, horizon, origin, path); ids are compact and
+ *   sorted (series names in code-unit order, times in time order, paths numerically when all are
+ *   numbers, else in code-unit order), so the panel does not depend on the order of rows in
+ *   the files.
  */
 export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPanel {
   const { baseline, candidate, actuals } = input;
@@ -43,6 +47,7 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
   const cFile = candidate.summary.path;
   checkSameShape(baseline, candidate, 'series', (t) => t.series);
   checkSameShape(baseline, candidate, 'origin', (t) => t.origin);
+  checkSameShape(baseline, candidate, 'path', (t) => t.path);
   if (actuals !== undefined) checkSameShape(baseline, actuals, 'series', (t) => t.series);
   const tables = actuals === undefined ? [baseline, candidate] : [baseline, candidate, actuals];
 
@@ -59,6 +64,11 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
         'origin',
       )
     : null;
+  const hasPath = baseline.path !== null;
+  const path = hasPath ? orderPaths([baseline.path!, candidate.path!]) : null;
+  // Position of the optional components in a predictions key.
+  const originAt = 3;
+  const pathAt = hasOrigin ? 4 : 3;
   const horizons = orderHorizons([baseline, candidate]);
   progress(0.1);
 
@@ -83,6 +93,12 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
           cardinality: origin.labels.length,
         });
       }
+      if (path !== null) {
+        components.push({
+          values: mapIds(table.path, path.ids[index]!, n),
+          cardinality: path.names.length,
+        });
+      }
     }
     return components;
   };
@@ -99,7 +115,12 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
     if (baseline.series !== null) parts.push(`series=${series.names[keys[0]!.values[row]!]}`);
     parts.push(`timestamp=${time.labels[keys[1]!.values[row]!]}`);
     if (depth > 2) parts.push(`horizon=${horizons.values[keys[2]!.values[row]!]}`);
-    if (depth > 3 && origin !== null) parts.push(`origin=${origin.labels[keys[3]!.values[row]!]}`);
+    if (depth > originAt && origin !== null) {
+      parts.push(`origin=${origin.labels[keys[originAt]!.values[row]!]}`);
+    }
+    if (depth > pathAt && path !== null) {
+      parts.push(`path=${path.names[keys[pathAt]!.values[row]!]}`);
+    }
     return parts.join(' ');
   };
   const checkDuplicates = (table: ForecastTable, keys: KeyComponent[], order: Int32Array): void => {
@@ -154,7 +175,7 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
   if (matched === 0) {
     const eg = (list: string[]): string => (list.length > 0 ? ` (e.g. ${list[0]})` : '');
     throw new InputError(
-      `${bFile} and ${cFile} have no key (series, timestamp, horizon${hasOrigin ? ', origin' : ''}) in common: ${baseline.size} baseline rows${eg(examples.baselineOnly)}, ${candidate.size} candidate rows${eg(examples.candidateOnly)}`,
+      `${bFile} and ${cFile} have no key (series, timestamp, horizon${hasOrigin ? ', origin' : ''}${hasPath ? ', path' : ''}) in common: ${baseline.size} baseline rows${eg(examples.baselineOnly)}, ${candidate.size} candidate rows${eg(examples.candidateOnly)}`,
       { file: cFile },
     );
   }
@@ -296,7 +317,9 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2]!.values[bRows[p]!]!]!;
   const originIds =
-    origin === null ? null : compact(gather32(bKeys[3]!.values, bRows), origin.labels);
+    origin === null ? null : compact(gather32(bKeys[originAt]!.values, bRows), origin.labels);
+  const pathIds =
+    path === null ? null : compact(gather32(bKeys[pathAt]!.values, bRows), path.names);
   progress(1);
 
   return {
@@ -311,6 +334,8 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
     origin: originIds === null ? null : originIds.ids,
     origins: originIds === null ? [] : originIds.names,
     originKind: origin === null ? 'text' : origin.kind,
+    path: pathIds === null ? null : pathIds.ids,
+    paths: pathIds === null ? [] : pathIds.names,
     actual,
     baseline: forecasts(baseline, bRows),
     candidate: forecasts(candidate, cRows),
@@ -397,7 +422,34 @@ function orderSeries(columns: readonly (LabelColumn | null)[]): {
 } {
   const all = new Set<string>();
   for (const column of columns) for (const label of column?.labels ?? ['']) all.add(label);
-  const names = [...all].sort(compareCodeUnits);
+  return numberLabels(columns, [...all].sort(compareCodeUnits));
+}
+
+/**
+ * Union of path labels, matched exactly (as series are); ordered numerically when every label is
+ * a decimal number (ties between spellings of one number in code-unit order), else in code-unit
+ * order. Per table, local id → global id.
+ */
+function orderPaths(columns: readonly LabelColumn[]): { names: string[]; ids: Int32Array[] } {
+  const all = new Set<string>();
+  for (const column of columns) for (const label of column.labels) all.add(label);
+  const names = [...all];
+  const values = new Map<string, number>();
+  for (const name of names) values.set(name, parseDecimal(name));
+  const numeric = names.every((name) => !Number.isNaN(values.get(name)!));
+  names.sort(
+    numeric
+      ? (a, b) => values.get(a)! - values.get(b)! || compareCodeUnits(a, b)
+      : compareCodeUnits,
+  );
+  return numberLabels(columns, names);
+}
+
+/** Ids of sorted, distinct names; per column (a missing one is the label ""), local → global. */
+function numberLabels(
+  columns: readonly (LabelColumn | null)[],
+  names: string[],
+): { names: string[]; ids: Int32Array[] } {
   const index = new Map<string, number>();
   names.forEach((name, id) => {
     index.set(name, id);

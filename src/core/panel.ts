@@ -1,7 +1,7 @@
 /**
  * The aligned panel: what the reading + alignment edge hands to the pure core. One entry per
- * matched key (series, timestamp, horizon, origin), in no particular order; columnar typed arrays
- * so millions of rows stay cheap.
+ * matched key (series, timestamp, horizon, origin, path), in no particular order; columnar typed
+ * arrays so millions of rows stay cheap.
  */
 
 /** How timestamps are ordered: numbers numerically, ISO 8601 chronologically, else as text. */
@@ -93,6 +93,15 @@ export interface AlignedPanel {
   readonly origins: readonly string[];
   /** How origins are ordered ('text' when there is no origin column). */
   readonly originKind: TimestampKind;
+  /**
+   * Backtest path id per row (several out-of-sample paths over the same history, e.g. the folds
+   * of a combinatorial cross-validation), or null when the files have no path column. paths[id]
+   * is the label as written; ids follow numeric order when every path label is a decimal number,
+   * else code-unit order. Labels are matched exactly ("1" and "01" are different paths).
+   */
+  readonly path: Int32Array | null;
+  /** Path labels by id; empty when there is no path column. */
+  readonly paths: readonly string[];
   readonly actual: Float64Array;
   readonly baseline: ModelForecasts;
   readonly candidate: ModelForecasts;

@@ -10,6 +10,8 @@ export interface ColumnMapping {
   readonly timestamp?: string;
   readonly horizon?: string;
   readonly origin?: string;
+  /** Backtest path (e.g. the fold of a combinatorial cross-validation); optional key column. */
+  readonly path?: string;
   readonly actual?: string;
   readonly prediction?: string;
   readonly weight?: string;
@@ -23,6 +25,7 @@ export const COLUMN_ROLES: readonly ColumnRole[] = [
   'timestamp',
   'horizon',
   'origin',
+  'path',
   'actual',
   'prediction',
   'weight',
@@ -34,6 +37,7 @@ export const DEFAULT_COLUMNS: Readonly<Required<ColumnMapping>> = {
   timestamp: 'timestamp',
   horizon: 'horizon',
   origin: 'origin',
+  path: 'path',
   actual: 'actual',
   prediction: 'prediction',
   weight: 'weight',

@@ -18,6 +18,11 @@ export interface ForecastTable {
   readonly horizon: IntegerColumn | null;
   /** Null when the file has no origin column, and always null for actuals files. */
   readonly origin: LabelColumn | null;
+  /**
+   * Backtest path (several out-of-sample paths over the same history): null when the file has no
+   * path column, and always null for actuals files.
+   */
+  readonly path: LabelColumn | null;
   readonly actual: ValueColumn | null;
   /** Null for actuals files and for predictions files without a point forecast. */
   readonly prediction: ValueColumn | null;

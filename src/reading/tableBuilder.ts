@@ -37,6 +37,7 @@ export class ForecastTableReader {
   private seriesIds: Int32Array = new Int32Array(0);
   private timeIds: Int32Array = new Int32Array(0);
   private originIds: Int32Array = new Int32Array(0);
+  private pathIds: Int32Array = new Int32Array(0);
   private horizons: Int32Array = new Int32Array(0);
   private actual: Float64Array = new Float64Array(0);
   private prediction: Float64Array = new Float64Array(0);
@@ -45,6 +46,7 @@ export class ForecastTableReader {
   private readonly seriesLabels = new Interner();
   private readonly timeLabels = new Interner();
   private readonly originLabels = new Interner();
+  private readonly pathLabels = new Interner();
 
   constructor(path: string, options: ParseOptions) {
     this.path = path;
@@ -124,6 +126,8 @@ export class ForecastTableReader {
         header.origin < 0
           ? null
           : label(this.originLabels, this.originIds, header.names[header.origin]!),
+      path:
+        header.path < 0 ? null : label(this.pathLabels, this.pathIds, header.names[header.path]!),
       actual:
         header.actual < 0
           ? null
@@ -153,6 +157,7 @@ export class ForecastTableReader {
     this.timeIds = growInt(this.timeIds, capacity);
     if (h.series >= 0) this.seriesIds = growInt(this.seriesIds, capacity);
     if (h.origin >= 0) this.originIds = growInt(this.originIds, capacity);
+    if (h.path >= 0) this.pathIds = growInt(this.pathIds, capacity);
     if (h.horizon >= 0) this.horizons = growInt(this.horizons, capacity);
     if (h.actual >= 0) this.actual = growFloat(this.actual, capacity);
     if (h.prediction >= 0) this.prediction = growFloat(this.prediction, capacity);
@@ -179,6 +184,9 @@ export class ForecastTableReader {
     this.timeIds[r] = this.keyLabel(this.timeLabels, fields[h.timestamp]!, h.timestamp, line);
     if (h.origin >= 0) {
       this.originIds[r] = this.keyLabel(this.originLabels, fields[h.origin]!, h.origin, line);
+    }
+    if (h.path >= 0) {
+      this.pathIds[r] = this.keyLabel(this.pathLabels, fields[h.path]!, h.path, line);
     }
     if (h.horizon >= 0) {
       const text = fields[h.horizon]!;
@@ -259,6 +267,7 @@ interface Header {
   readonly timestamp: number;
   readonly horizon: number;
   readonly origin: number;
+  readonly path: number;
   readonly actual: number;
   readonly prediction: number;
   readonly weight: number;
@@ -291,6 +300,7 @@ function resolveHeader(names: string[], file: string, line: number, options: Par
   const timestamp = find(columns.timestamp, true);
   const horizon = find(columns.horizon, predictions);
   const origin = find(columns.origin, predictions);
+  const path = find(columns.path, predictions);
   const actual = find(columns.actual, true);
   const prediction = find(columns.prediction, predictions);
   const weight = find(columns.weight, true);
@@ -353,6 +363,7 @@ function resolveHeader(names: string[], file: string, line: number, options: Par
     timestamp,
     horizon,
     origin,
+    path,
     actual,
     prediction,
     weight,

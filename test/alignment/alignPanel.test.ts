@@ -28,7 +28,7 @@ function alignError(b: string, c: string, a?: string): InputError {
   throw new Error('expected an InputError');
 }
 
-/** Rows of the panel as readable tuples, in panel order. */
+/** Rows of the panel as readable tuples, in panel order (the path last, when there is one). */
 function rows(panel: AlignedPanel): (string | number | null)[][] {
   return Array.from({ length: panel.size }, (_, i) => [
     panel.seriesNames[panel.series[i]!]!,
@@ -37,6 +37,7 @@ function rows(panel: AlignedPanel): (string | number | null)[][] {
     panel.actual[i]!,
     panel.baseline.prediction?.[i] ?? null,
     panel.candidate.prediction?.[i] ?? null,
+    ...(panel.path === null ? [] : [panel.paths[panel.path[i]!]!]),
   ]);
 }
 
@@ -84,6 +85,8 @@ describe('alignPanel', () => {
     ]);
     expect(panel.weight).toBeNull();
     expect(panel.origin).toBeNull();
+    expect(panel.path).toBeNull();
+    expect(panel.paths).toEqual([]);
   });
 
   it('treats a missing series column as one series and a missing horizon as 1', () => {
@@ -119,6 +122,66 @@ describe('alignPanel', () => {
     expect(Array.from(panel.origin!)).toEqual([0, 1, 1]);
     expect(Array.from(panel.baseline.prediction!)).toEqual([2, 1, 2]);
     expect(panel.originKind).toBe('number');
+  });
+
+  it('keys on the backtest path too: the same history on two paths is two rows', () => {
+    // Paths 10 and 2 over the same timestamps, written in different orders in the two files.
+    const b =
+      'timestamp,origin,path,actual,prediction\n' +
+      '5,4,10,1,1.1\n5,4,2,1,1.2\n6,4,2,2,2.2\n6,4,10,2,2.1\n7,4,2,3,3.2\n';
+    const c =
+      'path,timestamp,origin,actual,prediction\n' +
+      '2,6,4,2,0.22\n10,6,4,2,0.21\n2,5,4,1,0.12\n10,5,4,1,0.11\n10,7,4,3,0.31\n';
+    const panel = align(b, c);
+    expect(panel.paths).toEqual(['2', '10']);
+    expect(rows(panel)).toEqual([
+      ['', '5', 1, 1, 1.2, 0.12, '2'],
+      ['', '5', 1, 1, 1.1, 0.11, '10'],
+      ['', '6', 1, 2, 2.2, 0.22, '2'],
+      ['', '6', 1, 2, 2.1, 0.21, '10'],
+    ]);
+    expect(Array.from(panel.path!)).toEqual([0, 1, 0, 1]);
+    expect(panel.origins).toEqual(['4']);
+    expect(panel.coverage).toMatchObject({
+      rowsMatched: 4,
+      baselineOnly: 1,
+      candidateOnly: 1,
+      examples: {
+        baselineOnly: ['timestamp=7 horizon=1 origin=4 path=2'],
+        candidateOnly: ['timestamp=7 horizon=1 origin=4 path=10'],
+      },
+    });
+  });
+
+  it('orders text paths in code-unit order, and matches path labels exactly', () => {
+    const b =
+      'series,timestamp,path,actual,prediction\nA,1,fold-b,1,1\nA,1,fold-a,1,2\nA,1,01,1,3\n';
+    const c =
+      'series,timestamp,path,actual,prediction\nA,1,fold-a,1,5\nA,1,fold-b,1,6\nA,1,1,1,7\n';
+    const panel = align(b, c);
+    expect(panel.paths).toEqual(['fold-a', 'fold-b']);
+    expect(rows(panel)).toEqual([
+      ['A', '1', 1, 1, 2, 5, 'fold-a'],
+      ['A', '1', 1, 1, 1, 6, 'fold-b'],
+    ]);
+    expect(panel.coverage.examples).toMatchObject({
+      baselineOnly: ['series=A timestamp=1 horizon=1 path=01'],
+      candidateOnly: ['series=A timestamp=1 horizon=1 path=1'],
+    });
+  });
+
+  it('attaches the actual of (series, timestamp) to every path', () => {
+    const panel = align(
+      'timestamp,path,prediction\n1,a,10\n1,b,11\n2,a,12\n',
+      'timestamp,path,prediction\n2,a,13\n1,b,14\n1,a,15\n',
+      'timestamp,path,actual\n1,ignored,100\n2,ignored,200\n',
+    );
+    expect(rows(panel)).toEqual([
+      ['', '1', 1, 100, 10, 15, 'a'],
+      ['', '1', 1, 100, 11, 14, 'b'],
+      ['', '2', 1, 200, 12, 13, 'a'],
+    ]);
+    expect(panel.coverage.files[2]!.ignoredColumns).toEqual(['path']);
   });
 
   it('takes actuals from a separate file keyed on (series, timestamp)', () => {
@@ -271,6 +334,51 @@ describe('alignPanel', () => {
       );
     });
 
+    it('a path column on one side only', () => {
+      const error = alignError(
+        'timestamp,path,actual,prediction\n1,a,1,1\n',
+        'timestamp,actual,prediction\n1,1,1\n',
+      );
+      expect(error.describe()).toBe(
+        'cand.csv:1: this file has no path column but base.csv has one ("path"), so their keys cannot match (column "path")',
+      );
+      const other = alignError(
+        'timestamp,actual,prediction\n1,1,1\n',
+        'timestamp,path,actual,prediction\n1,a,1,1\n',
+      );
+      expect(other.location.file).toBe('base.csv');
+    });
+
+    it('a duplicated key within one path names the path', () => {
+      const error = alignError(
+        'timestamp,path,actual,prediction\n1,a,1,1\n1,b,1,1\n1,a,1,2\n',
+        'timestamp,path,actual,prediction\n1,a,1,1\n',
+      );
+      expect(error.describe()).toBe(
+        'base.csv:4: duplicated key timestamp=1 horizon=1 path=a: lines 2 and 4 have the same key (value "timestamp=1 horizon=1 path=a")',
+      );
+    });
+
+    it('no common keys lists the path in the key', () => {
+      const error = alignError(
+        'timestamp,path,actual,prediction\n1,a,1,1\n',
+        'timestamp,path,actual,prediction\n1,b,1,1\n',
+      );
+      expect(error.describe()).toBe(
+        'cand.csv: base.csv and cand.csv have no key (series, timestamp, horizon, path) in common: 1 baseline rows (e.g. timestamp=1 horizon=1 path=a), 1 candidate rows (e.g. timestamp=1 horizon=1 path=b)',
+      );
+    });
+
+    it('an actual that differs between paths of the two files names the path', () => {
+      const error = alignError(
+        'timestamp,path,actual,prediction\n1,a,1,1\n1,b,2,1\n',
+        'timestamp,path,actual,prediction\n1,a,1,1\n1,b,3,1\n',
+      );
+      expect(error.describe()).toMatch(
+        /^cand\.csv:3: the actual differs between files for timestamp=1 horizon=1 path=b:/,
+      );
+    });
+
     it('a weight column in one predictions file only', () => {
       const error = alignError(
         'timestamp,actual,prediction\n1,1,1\n',
@@ -315,6 +423,8 @@ interface Row {
   series: string;
   time: string;
   horizon: number;
+  /** Backtest path; the actual depends on (series, time) only, as on real paths. */
+  path: string;
   actual: number;
   prediction: number;
 }
@@ -327,6 +437,11 @@ const times = [
   '2024-01-10',
   '2023-12-31',
 ];
+const pathNames = ['2', '10', '1.5'];
+
+/** The full key of a test row. */
+const rowKey = (r: Row | Omit<Row, 'actual'>): string =>
+  `${r.series}|${r.time}|${r.horizon}|${r.path}`;
 
 /** Random keyed rows (unique keys) with the actual a function of (series, time). */
 const rowsArb = (name: string) =>
@@ -336,10 +451,11 @@ const rowsArb = (name: string) =>
         series: fc.constantFrom(...seriesNames),
         time: fc.constantFrom(...times),
         horizon: fc.integer({ min: 1, max: 3 }),
+        path: fc.constantFrom(...pathNames),
         // -0 is written "0" and read back as 0, so generate +0 only.
         prediction: fc.double({ min: -100, max: 100, noNaN: true }).map((x) => (x === 0 ? 0 : x)),
       }),
-      { selector: (r) => `${r.series}|${r.time}|${r.horizon}`, minLength: 1, maxLength: 40 },
+      { selector: rowKey, minLength: 1, maxLength: 40 },
     )
     .map((rs) =>
       rs.map(
@@ -360,7 +476,7 @@ function render(rows: readonly Row[], s: Spelling): string {
   const d = s.tsv ? '\t' : ',';
   const q = (v: string): string =>
     s.quoteAll || v.includes(d) || v.includes('"') ? `"${v.replaceAll('"', '""')}"` : v;
-  const head = ['series', 'timestamp', 'horizon', 'actual', 'prediction'];
+  const head = ['series', 'timestamp', 'horizon', 'path', 'actual', 'prediction'];
   const line = (cells: string[]): string =>
     (s.extra ? [q('note, "x"'), ...cells, q('42')] : cells).map(q).join(d);
   const eol = s.crlf ? '\r\n' : '\n';
@@ -368,7 +484,8 @@ function render(rows: readonly Row[], s: Spelling): string {
     (s.bom ? '\uFEFF' : '') + (s.extra ? ['comment', ...head, 'q0.5x'] : head).map(q).join(d) + eol;
   for (const r of rows) {
     text +=
-      line([r.series, r.time, String(r.horizon), String(r.actual), String(r.prediction)]) + eol;
+      line([r.series, r.time, String(r.horizon), r.path, String(r.actual), String(r.prediction)]) +
+      eol;
   }
   return text;
 }
@@ -405,15 +522,15 @@ const pair = fc
     const shared = b.rows
       .filter((_, i) => keep[i])
       .map((r) => ({ ...r, prediction: r.prediction + 1 }));
-    const keys = new Set(shared.map((r) => `${r.series}|${r.time}|${r.horizon}`));
-    const own = c.rows.filter((r) => !keys.has(`${r.series}|${r.time}|${r.horizon}`));
+    const keys = new Set(shared.map(rowKey));
+    const own = c.rows.filter((r) => !keys.has(rowKey(r)));
     return { b: b.rows, c: [b.rows[0]!, ...shared.slice(1), ...own].filter(unique()) };
   });
 
 function unique() {
   const seen = new Set<string>();
   return (r: Row) => {
-    const key = `${r.series}|${r.time}|${r.horizon}`;
+    const key = rowKey(r);
     if (seen.has(key)) return false;
     seen.add(key);
     return true;
@@ -453,7 +570,7 @@ describe('alignPanel properties', () => {
     fc.assert(
       fc.property(pair, ({ b, c }) => {
         const panel = panelOf(b, c, plain, plain);
-        const key = (r: Row) => `${r.series}|${keyTime(r.time)}|${r.horizon}`;
+        const key = (r: Row) => `${r.series}|${keyTime(r.time)}|${r.horizon}|${r.path}`;
         const cByKey = new Map(c.map((r) => [key(r), r]));
         const expected = b
           .filter((r) => cByKey.has(key(r)))
@@ -464,6 +581,7 @@ describe('alignPanel properties', () => {
             r.actual,
             r.prediction,
             cByKey.get(key(r))!.prediction,
+            r.path,
           ])
           .sort((x, y) => JSON.stringify(x).localeCompare(JSON.stringify(y)));
         const got = rows(panel)

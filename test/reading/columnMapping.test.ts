@@ -21,14 +21,17 @@ describe('parseColumnMapping', () => {
     });
     expect(parseColumnMapping('timestamp=ds=utc')).toEqual({ timestamp: 'ds=utc' });
     expect(parseColumnMapping('  ')).toEqual({});
+    expect(parseColumnMapping('path=fold')).toEqual({ path: 'fold' });
   });
 
   it('applies the mapping over the defaults', () => {
     expect(resolveColumns(parseColumnMapping('series=store'))).toMatchObject({
       series: 'store',
       timestamp: 'timestamp',
+      path: 'path',
       quantile: 'q',
     });
+    expect(resolveColumns({ path: 'fold' }).path).toBe('fold');
   });
 
   it('rejects malformed pairs, unknown roles, empty names and repeats, naming the pair', () => {
@@ -49,6 +52,9 @@ describe('parseColumnMapping', () => {
     );
     expect(errorOf(() => parseColumnMapping('prediction=actual')).describe()).toContain(
       'roles "actual" and "prediction" both use the column "actual"',
+    );
+    expect(errorOf(() => parseColumnMapping('path=origin')).describe()).toContain(
+      'roles "origin" and "path" both use the column "origin"',
     );
     expect(errorOf(() => parseColumnMapping('bogus=y', '--x')).location.file).toBe('--x');
   });

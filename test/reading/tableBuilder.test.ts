@@ -40,6 +40,7 @@ describe('parseForecastText', () => {
       [0.9, 'q0.9', [12, 22, 31]],
     ]);
     expect(table.origin).toBeNull();
+    expect(table.path).toBeNull();
     expect(table.summary).toEqual({
       role: 'baseline',
       path: 'base.csv',
@@ -83,6 +84,35 @@ describe('parseForecastText', () => {
     expect(table.prediction).toBeNull();
     expect(table.quantiles).toEqual([]);
     expect(table.summary.ignoredColumns).toEqual(['horizon', 'prediction', 'q0.5']);
+  });
+
+  it('reads an optional path column as interned key labels, renamable by the mapping', () => {
+    const table = parseForecastText(
+      'timestamp,path,origin,prediction\n1,p1,0,2\n1,p2,0,3\n2,p1,1,4\n',
+      'b.csv',
+      base,
+    );
+    expect(table.path?.column).toBe('path');
+    expect(table.path?.labels).toEqual(['p1', 'p2']);
+    expect(Array.from(table.path!.ids)).toEqual([0, 1, 0]);
+    expect(Array.from(table.path!.firstLines)).toEqual([2, 3]);
+    expect(table.summary.ignoredColumns).toEqual([]);
+
+    const mapped = parseForecastText('timestamp,fold,path,prediction\n1,7,x,2\n', 'b.csv', {
+      role: 'candidate',
+      columns: { path: 'fold' },
+    });
+    expect(mapped.path?.column).toBe('fold');
+    expect(mapped.path?.labels).toEqual(['7']);
+    expect(mapped.summary.ignoredColumns).toEqual(['path']);
+  });
+
+  it('ignores a path column in an actuals file and lists it as ignored', () => {
+    const table = parseForecastText('timestamp,path,actual\n1,p1,5\n', 'act.csv', {
+      role: 'actuals',
+    });
+    expect(table.path).toBeNull();
+    expect(table.summary.ignoredColumns).toEqual(['path']);
   });
 
   it('treats q-columns that are not q<number> as ordinary extra columns', () => {
@@ -216,6 +246,18 @@ describe('parseForecastText', () => {
         'timestamp,prediction\n,2\n',
         undefined,
         'base.csv:2: empty value in a key column (column "timestamp", value "")',
+      ],
+      [
+        'empty path',
+        'timestamp,path,prediction\n1,a,2\n2,,3\n',
+        undefined,
+        'base.csv:3: empty value in a key column (column "path", value "")',
+      ],
+      [
+        'a path column twice',
+        'timestamp,path,prediction,path\n1,a,2,b\n',
+        undefined,
+        'base.csv:1: the column "path" appears twice in the header (fields 2 and 4)',
       ],
       [
         'quantile level 5',
