@@ -32177,6 +32177,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(escapeMarkdown(report.headline), "");
   lines.push(...comparisonTable(report), "");
   lines.push(...seriesSection(report));
+  lines.push(...pathSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
   if (reasons.length > 0) {
     lines.push("**Why**", "");
@@ -32206,7 +32207,7 @@ function comparisonTable(report) {
     `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
     "|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|"
   ];
-  for (const c of report.comparisons.filter((x) => x.series === "all")) {
+  for (const c of report.comparisons.filter((x) => x.series === "all" && x.path === void 0)) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
     const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]`;
@@ -32249,6 +32250,29 @@ function seriesSection(report) {
     }
     out.push("");
   }
+  return out;
+}
+function pathSection(report) {
+  const summary2 = report.pathSummary;
+  if (summary2 === null) return [];
+  const out = [
+    `**Backtest paths**: the candidate's mean loss is higher on ${summary2.worse} of ${summary2.paths} paths (${formatNumber(summary2.shareWorse * 100, 3)}%), significantly so (one-sided Diebold\u2013Mariano, p \u2264 ${report.policy.alpha}) on ${summary2.significantlyWorse}. The verdict tests the path-averaged differential.`,
+    ""
+  ];
+  const rows = report.comparisons.filter((c) => c.path !== void 0);
+  if (rows.length <= 50) {
+    out.push(
+      "| path | time points | baseline loss | candidate loss | relative | DM statistic | p (DM) |"
+    );
+    out.push("|---|---:|---:|---:|---:|---:|---:|");
+    for (const c of rows) {
+      const dm = c.dieboldMariano;
+      out.push(
+        `| ${escapeMarkdown(c.path ?? "")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(dm.smallSample?.statistic ?? dm.statistic)} | ${formatPValue(dm.smallSample?.pValue ?? dm.pValue)} |`
+      );
+    }
+  }
+  out.push("");
   return out;
 }
 function testDetails(report) {
@@ -38846,39 +38870,6 @@ function getOctokit(token, options, ...additionalPlugins) {
   return new GitHubWithPlugins(getOctokitOptions(token, options));
 }
 
-// src/alignment/keyOrder.ts
-function sortByKey(size, components) {
-  let order = new Int32Array(size);
-  for (let i = 0; i < size; i++) order[i] = i;
-  let sorted = true;
-  for (let i = 1; i < size && sorted; i++)
-    sorted = compareKeys(components, i - 1, components, i) <= 0;
-  if (sorted) return order;
-  let next = new Int32Array(size);
-  for (let c = components.length - 1; c >= 0; c--) {
-    const { values, cardinality } = components[c];
-    if (cardinality <= 1) continue;
-    const starts = new Int32Array(cardinality + 1);
-    for (let i = 0; i < size; i++) starts[values[i] + 1]++;
-    for (let v = 0; v < cardinality; v++) starts[v + 1] += starts[v];
-    for (let i = 0; i < size; i++) {
-      const row = order[i];
-      next[starts[values[row]]++] = row;
-    }
-    const swap = order;
-    order = next;
-    next = swap;
-  }
-  return order;
-}
-function compareKeys(components, a, other, b, depth = components.length) {
-  for (let c = 0; c < depth; c++) {
-    const d = components[c].values[a] - other[c].values[b];
-    if (d !== 0) return d;
-  }
-  return 0;
-}
-
 // src/reading/numbers.ts
 function parseDecimal(text2) {
   const n = text2.length;
@@ -38953,6 +38944,39 @@ function parseHorizon(text2) {
   }
   const value = parseDecimal(text2);
   return Number.isInteger(value) && value >= 1 && value <= 2147483647 ? value : 0;
+}
+
+// src/alignment/keyOrder.ts
+function sortByKey(size, components) {
+  let order = new Int32Array(size);
+  for (let i = 0; i < size; i++) order[i] = i;
+  let sorted = true;
+  for (let i = 1; i < size && sorted; i++)
+    sorted = compareKeys(components, i - 1, components, i) <= 0;
+  if (sorted) return order;
+  let next = new Int32Array(size);
+  for (let c = components.length - 1; c >= 0; c--) {
+    const { values, cardinality } = components[c];
+    if (cardinality <= 1) continue;
+    const starts = new Int32Array(cardinality + 1);
+    for (let i = 0; i < size; i++) starts[values[i] + 1]++;
+    for (let v = 0; v < cardinality; v++) starts[v + 1] += starts[v];
+    for (let i = 0; i < size; i++) {
+      const row = order[i];
+      next[starts[values[row]]++] = row;
+    }
+    const swap = order;
+    order = next;
+    next = swap;
+  }
+  return order;
+}
+function compareKeys(components, a, other, b, depth = components.length) {
+  for (let c = 0; c < depth; c++) {
+    const d = components[c].values[a] - other[c].values[b];
+    if (d !== 0) return d;
+  }
+  return 0;
 }
 
 // src/alignment/timeOrder.ts
@@ -39081,6 +39105,7 @@ function alignPanel(input, hooks = {}) {
   const cFile = candidate.summary.path;
   checkSameShape(baseline, candidate, "series", (t) => t.series);
   checkSameShape(baseline, candidate, "origin", (t) => t.origin);
+  checkSameShape(baseline, candidate, "path", (t) => t.path);
   if (actuals !== void 0) checkSameShape(baseline, actuals, "series", (t) => t.series);
   const tables = actuals === void 0 ? [baseline, candidate] : [baseline, candidate, actuals];
   const series = orderSeries(tables.map((t) => t.series));
@@ -39093,6 +39118,10 @@ function alignPanel(input, hooks = {}) {
     [baseline, candidate].map((t) => ({ file: t.summary.path, column: t.origin })),
     "origin"
   ) : null;
+  const hasPath = baseline.path !== null;
+  const path7 = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
+  const originAt = 3;
+  const pathAt = hasOrigin ? 4 : 3;
   const horizons = orderHorizons([baseline, candidate]);
   progress(0.1);
   const keysOf = (table, index, withHorizon) => {
@@ -39116,6 +39145,12 @@ function alignPanel(input, hooks = {}) {
           cardinality: origin.labels.length
         });
       }
+      if (path7 !== null) {
+        components.push({
+          values: mapIds(table.path, path7.ids[index], n),
+          cardinality: path7.names.length
+        });
+      }
     }
     return components;
   };
@@ -39131,7 +39166,12 @@ function alignPanel(input, hooks = {}) {
     if (baseline.series !== null) parts.push(`series=${series.names[keys[0].values[row]]}`);
     parts.push(`timestamp=${time.labels[keys[1].values[row]]}`);
     if (depth > 2) parts.push(`horizon=${horizons.values[keys[2].values[row]]}`);
-    if (depth > 3 && origin !== null) parts.push(`origin=${origin.labels[keys[3].values[row]]}`);
+    if (depth > originAt && origin !== null) {
+      parts.push(`origin=${origin.labels[keys[originAt].values[row]]}`);
+    }
+    if (depth > pathAt && path7 !== null) {
+      parts.push(`path=${path7.names[keys[pathAt].values[row]]}`);
+    }
     return parts.join(" ");
   };
   const checkDuplicates = (table, keys, order) => {
@@ -39179,7 +39219,7 @@ function alignPanel(input, hooks = {}) {
   if (matched === 0) {
     const eg = (list) => list.length > 0 ? ` (e.g. ${list[0]})` : "";
     throw new InputError(
-      `${bFile} and ${cFile} have no key (series, timestamp, horizon${hasOrigin ? ", origin" : ""}) in common: ${baseline.size} baseline rows${eg(examples.baselineOnly)}, ${candidate.size} candidate rows${eg(examples.candidateOnly)}`,
+      `${bFile} and ${cFile} have no key (series, timestamp, horizon${hasOrigin ? ", origin" : ""}${hasPath ? ", path" : ""}) in common: ${baseline.size} baseline rows${eg(examples.baselineOnly)}, ${candidate.size} candidate rows${eg(examples.candidateOnly)}`,
       { file: cFile }
     );
   }
@@ -39303,7 +39343,8 @@ function alignPanel(input, hooks = {}) {
   const timeIds = compact(gather32(bKeys[1].values, bRows), time.labels);
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2].values[bRows[p]]];
-  const originIds = origin === null ? null : compact(gather32(bKeys[3].values, bRows), origin.labels);
+  const originIds = origin === null ? null : compact(gather32(bKeys[originAt].values, bRows), origin.labels);
+  const pathIds = path7 === null ? null : compact(gather32(bKeys[pathAt].values, bRows), path7.names);
   progress(1);
   return {
     size,
@@ -39317,6 +39358,8 @@ function alignPanel(input, hooks = {}) {
     origin: originIds === null ? null : originIds.ids,
     origins: originIds === null ? [] : originIds.names,
     originKind: origin === null ? "text" : origin.kind,
+    path: pathIds === null ? null : pathIds.ids,
+    paths: pathIds === null ? [] : pathIds.names,
     actual,
     baseline: forecasts(baseline, bRows),
     candidate: forecasts(candidate, cRows),
@@ -39378,7 +39421,21 @@ function checkSameShape(a, b, what, pick) {
 function orderSeries(columns) {
   const all = /* @__PURE__ */ new Set();
   for (const column of columns) for (const label of column?.labels ?? [""]) all.add(label);
-  const names = [...all].sort(compareCodeUnits);
+  return numberLabels(columns, [...all].sort(compareCodeUnits));
+}
+function orderPaths(columns) {
+  const all = /* @__PURE__ */ new Set();
+  for (const column of columns) for (const label of column.labels) all.add(label);
+  const names = [...all];
+  const values = /* @__PURE__ */ new Map();
+  for (const name of names) values.set(name, parseDecimal(name));
+  const numeric = names.every((name) => !Number.isNaN(values.get(name)));
+  names.sort(
+    numeric ? (a, b) => values.get(a) - values.get(b) || compareCodeUnits(a, b) : compareCodeUnits
+  );
+  return numberLabels(columns, names);
+}
+function numberLabels(columns, names) {
   const index = /* @__PURE__ */ new Map();
   names.forEach((name, id) => {
     index.set(name, id);
@@ -39620,7 +39677,8 @@ function buildReport(parts) {
     inputs,
     settings,
     reasons,
-    seriesSummary: parts.seriesSummary ?? null
+    seriesSummary: parts.seriesSummary ?? null,
+    pathSummary: parts.pathSummary ?? null
   };
 }
 function headline(verdict, overall, hypothesis) {
@@ -39945,32 +40003,37 @@ function sourceOf(generator) {
   };
 }
 
-// src/statistics/bootstrap/autocovariances.ts
-function autocovariances(d, maxLag) {
-  const n = d.length;
-  if (n === 0) return new Float64Array(0);
-  const centred = centre(d);
-  const lags = Math.min(maxLag, n - 1);
-  const out = new Float64Array(lags + 1);
-  for (let k = 0; k <= lags; k++) out[k] = lagProduct(centred, k) / n;
-  return out;
-}
-function centre(d) {
-  const n = d.length;
-  const mean3 = meanOf(d);
-  const centred = new Float64Array(n);
-  for (let t = 0; t < n; t++) centred[t] = d[t] - mean3;
-  return centred;
-}
-function meanOf(d) {
+// src/statistics/mean.ts
+function mean(x) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("mean: the series is empty");
   let sum = 0;
-  for (let t = 0; t < d.length; t++) sum += d[t];
-  return sum / d.length;
+  for (let t = 0; t < n; t++) sum += x[t];
+  const first = sum / n;
+  let residual = 0;
+  for (let t = 0; t < n; t++) residual += x[t] - first;
+  return first + residual / n;
 }
-function lagProduct(u, k) {
-  let sum = 0;
-  for (let t = k; t < u.length; t++) sum += u[t] * u[t - k];
-  return sum;
+
+// src/statistics/autocovariance.ts
+function autocovariances(x, maxLag) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("autocovariances: the series is empty");
+  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
+    throw new RangeError(
+      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
+    );
+  }
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) {
+    let sum = 0;
+    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
+    gamma[k] = sum / n;
+  }
+  return gamma;
 }
 
 // src/statistics/bootstrap/flatTopWindow.ts
@@ -40214,6 +40277,13 @@ function centredPrefixSums(d, mean3) {
   return prefix;
 }
 
+// src/statistics/bootstrap/centring.ts
+function meanOf(d) {
+  let sum = 0;
+  for (let t = 0; t < d.length; t++) sum += d[t];
+  return sum / d.length;
+}
+
 // src/statistics/bootstrap/resampleMeanDeviation.ts
 function resampleMeanDeviation(prefix, n, blocks) {
   const { starts, lengths, count } = blocks;
@@ -40231,9 +40301,9 @@ function sampleStandardDeviation(values) {
   if (m < 2) return 0;
   let sum = 0;
   for (let i = 0; i < m; i++) sum += values[i];
-  const centre2 = sum / m;
+  const centre = sum / m;
   let squares = 0;
-  for (let i = 0; i < m; i++) squares += (values[i] - centre2) ** 2;
+  for (let i = 0; i < m; i++) squares += (values[i] - centre) ** 2;
   return Math.sqrt(squares / (m - 1));
 }
 
@@ -40529,42 +40599,9 @@ function runBootstrap(d, series, hypothesis, settings, runner) {
   };
 }
 
-// src/statistics/mean.ts
-function mean(x) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("mean: the series is empty");
-  let sum = 0;
-  for (let t = 0; t < n; t++) sum += x[t];
-  const first = sum / n;
-  let residual = 0;
-  for (let t = 0; t < n; t++) residual += x[t] - first;
-  return first + residual / n;
-}
-
-// src/statistics/autocovariance.ts
-function autocovariances2(x, maxLag) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("autocovariances: the series is empty");
-  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
-    throw new RangeError(
-      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
-    );
-  }
-  const centre2 = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
-  }
-  return gamma;
-}
-
 // src/statistics/bartlettLongRunVariance.ts
 function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances2(x, lag);
+  const gamma = autocovariances(x, lag);
   let sum = gamma[0];
   for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
   return sum;
@@ -40606,9 +40643,9 @@ function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length))
       `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
     );
   }
-  const centre2 = mean(x);
+  const centre = mean(x);
   const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
   const cosTable = new Float64Array(n + 1);
   for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
   const period = 4 * n;
@@ -40654,7 +40691,7 @@ function neweyWestBandwidth(x) {
   const n = x.length;
   if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
   const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
-  const sigma = autocovariances2(x, pilotLag);
+  const sigma = autocovariances(x, pilotLag);
   let sum = 0;
   let weighted = 0;
   for (let j = 1; j <= pilotLag; j++) {
@@ -40716,14 +40753,14 @@ function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
 
 // src/statistics/uniformLongRunVariance.ts
 function uniformWeightSum(x, lag) {
-  const gamma = autocovariances2(x, lag);
+  const gamma = autocovariances(x, lag);
   let sum = gamma[0];
   for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
   return sum;
 }
 function uniformLongRunVariance(x, lag) {
   const uniformValue = uniformWeightSum(x, lag);
-  const gamma0 = autocovariances2(x, 0)[0];
+  const gamma0 = autocovariances(x, 0)[0];
   if (!isEffectivelyNonPositive(uniformValue, gamma0, x.length)) {
     return { value: uniformValue, estimator: "uniform", lag, uniformValue, note: null };
   }
@@ -40784,7 +40821,7 @@ function dieboldMariano(d, options) {
     );
     return base;
   }
-  const gamma0 = autocovariances2(d, 0)[0];
+  const gamma0 = autocovariances(d, 0)[0];
   let longRunVariance;
   let estimator = requestedEstimator;
   let lagChoice = null;
@@ -40965,6 +41002,7 @@ function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
     loss: scope.loss,
     horizon: scope.horizon,
     series: scope.series,
+    ...scope.path === void 0 ? {} : { path: scope.path },
     n,
     rows: series.rowCount,
     maxHorizon: series.maxHorizon,
@@ -41435,6 +41473,30 @@ function evaluatePanel(panel, settings, extras = {}) {
       comparisons.push(compareLossSeries(series, scope(h, "all"), hypothesis, settings, runner));
     }
   }
+  let pathSummary = null;
+  if (panel.path !== null && panel.paths.length > 1) {
+    const byPath = groupRows(panel.path);
+    const perPath = panel.paths.map(
+      (name, id) => compareLossSeries(
+        aggregateByTime(panel, pooled, byPath.get(id) ?? [], weights),
+        { ...scope("all", "all"), path: name },
+        hypothesis,
+        settings,
+        { bootstrap: false }
+      )
+    );
+    comparisons.push(...perPath);
+    const worse = perPath.filter((c) => c.meanDifference > 0).length;
+    pathSummary = {
+      paths: perPath.length,
+      worse,
+      shareWorse: worse / perPath.length,
+      significantlyWorse: perPath.filter((c) => {
+        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        return p !== null && p <= settings.alpha;
+      }).length
+    };
+  }
   let seriesSummary = null;
   if (panel.seriesNames.length > 1) {
     const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
@@ -41447,7 +41509,8 @@ function evaluatePanel(panel, settings, extras = {}) {
     hypothesis,
     inputs: panelInputsSummary(panel, losses),
     comparisons,
-    seriesSummary
+    seriesSummary,
+    pathSummary
   });
 }
 function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
@@ -41659,6 +41722,7 @@ var COLUMN_ROLES = [
   "timestamp",
   "horizon",
   "origin",
+  "path",
   "actual",
   "prediction",
   "weight",
@@ -41669,6 +41733,7 @@ var DEFAULT_COLUMNS = {
   timestamp: "timestamp",
   horizon: "horizon",
   origin: "origin",
+  path: "path",
   actual: "actual",
   prediction: "prediction",
   weight: "weight",
@@ -41926,6 +41991,7 @@ var ForecastTableReader = class {
   seriesIds = new Int32Array(0);
   timeIds = new Int32Array(0);
   originIds = new Int32Array(0);
+  pathIds = new Int32Array(0);
   horizons = new Int32Array(0);
   actual = new Float64Array(0);
   prediction = new Float64Array(0);
@@ -41934,6 +42000,7 @@ var ForecastTableReader = class {
   seriesLabels = new Interner();
   timeLabels = new Interner();
   originLabels = new Interner();
+  pathLabels = new Interner();
   constructor(path7, options) {
     this.path = path7;
     this.options = options;
@@ -42000,6 +42067,7 @@ var ForecastTableReader = class {
       timestamp: label(this.timeLabels, this.timeIds, header.names[header.timestamp]),
       horizon: header.horizon < 0 ? null : { column: header.names[header.horizon], values: this.horizons.slice(0, n) },
       origin: header.origin < 0 ? null : label(this.originLabels, this.originIds, header.names[header.origin]),
+      path: header.path < 0 ? null : label(this.pathLabels, this.pathIds, header.names[header.path]),
       actual: header.actual < 0 ? null : { column: header.names[header.actual], values: this.actual.slice(0, n) },
       prediction: header.prediction < 0 ? null : { column: header.names[header.prediction], values: this.prediction.slice(0, n) },
       weight: header.weight < 0 ? null : { column: header.names[header.weight], values: this.weight.slice(0, n) },
@@ -42018,6 +42086,7 @@ var ForecastTableReader = class {
     this.timeIds = growInt(this.timeIds, capacity);
     if (h.series >= 0) this.seriesIds = growInt(this.seriesIds, capacity);
     if (h.origin >= 0) this.originIds = growInt(this.originIds, capacity);
+    if (h.path >= 0) this.pathIds = growInt(this.pathIds, capacity);
     if (h.horizon >= 0) this.horizons = growInt(this.horizons, capacity);
     if (h.actual >= 0) this.actual = growFloat(this.actual, capacity);
     if (h.prediction >= 0) this.prediction = growFloat(this.prediction, capacity);
@@ -42043,6 +42112,9 @@ var ForecastTableReader = class {
     this.timeIds[r] = this.keyLabel(this.timeLabels, fields[h.timestamp], h.timestamp, line);
     if (h.origin >= 0) {
       this.originIds[r] = this.keyLabel(this.originLabels, fields[h.origin], h.origin, line);
+    }
+    if (h.path >= 0) {
+      this.pathIds[r] = this.keyLabel(this.pathLabels, fields[h.path], h.path, line);
     }
     if (h.horizon >= 0) {
       const text2 = fields[h.horizon];
@@ -42122,6 +42194,7 @@ function resolveHeader(names, file, line, options) {
   const timestamp = find(columns.timestamp, true);
   const horizon = find(columns.horizon, predictions);
   const origin = find(columns.origin, predictions);
+  const path7 = find(columns.path, predictions);
   const actual = find(columns.actual, true);
   const prediction = find(columns.prediction, predictions);
   const weight = find(columns.weight, true);
@@ -42179,6 +42252,7 @@ function resolveHeader(names, file, line, options) {
     timestamp,
     horizon,
     origin,
+    path: path7,
     actual,
     prediction,
     weight,
@@ -43388,6 +43462,7 @@ function readReport(r) {
     comparisons,
     inputs: readInputs(r.field("inputs")),
     seriesSummary: readSeriesSummary(r.field("seriesSummary")),
+    pathSummary: readPathSummary(r.field("pathSummary")),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
   };
@@ -43437,12 +43512,22 @@ function readComparison(r) {
     bootstrap: readBootstrap(r.field("bootstrap")),
     verdict: r.field("verdict").oneOf(VERDICTS),
     reasons: r.field("reasons").strings(),
+    ...r.field("path").value === void 0 ? {} : { path: r.field("path").string() },
     rejected: {
       dieboldMariano: rejected.field("dieboldMariano").booleanOrNull(),
       bootstrap: rejected.field("bootstrap").booleanOrNull()
     },
     ...r.field("adjustedPValue").value === void 0 ? {} : { adjustedPValue: r.field("adjustedPValue").numberOrNull() },
     ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) }
+  };
+}
+function readPathSummary(r) {
+  if (r.value === null || r.value === void 0) return null;
+  return {
+    paths: r.field("paths").integer(),
+    worse: r.field("worse").integer(),
+    shareWorse: r.field("shareWorse").number(),
+    significantlyWorse: r.field("significantlyWorse").integer()
   };
 }
 function readSeriesSummary(r) {

@@ -8,6 +8,7 @@ import type {
   DieboldMarianoSummary,
   InputsSummary,
   Interval,
+  PathSummary,
   PolicySummary,
   Report,
   SeriesSummary,
@@ -135,6 +136,7 @@ function readReport(r: Reader): Report {
     comparisons,
     inputs: readInputs(r.field('inputs')),
     seriesSummary: readSeriesSummary(r.field('seriesSummary')),
+    pathSummary: readPathSummary(r.field('pathSummary')),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
   };
@@ -187,6 +189,7 @@ function readComparison(r: Reader): Comparison {
     bootstrap: readBootstrap(r.field('bootstrap')),
     verdict: r.field('verdict').oneOf(VERDICTS),
     reasons: r.field('reasons').strings(),
+    ...(r.field('path').value === undefined ? {} : { path: r.field('path').string() }),
     rejected: {
       dieboldMariano: rejected.field('dieboldMariano').booleanOrNull(),
       bootstrap: rejected.field('bootstrap').booleanOrNull(),
@@ -197,6 +200,16 @@ function readComparison(r: Reader): Comparison {
     ...(r.field('direction').value === undefined
       ? {}
       : { direction: r.field('direction').oneOf(['worse', 'better', 'no evidence'] as const) }),
+  };
+}
+
+function readPathSummary(r: Reader): PathSummary | null {
+  if (r.value === null || r.value === undefined) return null;
+  return {
+    paths: r.field('paths').integer(),
+    worse: r.field('worse').integer(),
+    shareWorse: r.field('shareWorse').number(),
+    significantlyWorse: r.field('significantlyWorse').integer(),
   };
 }
 

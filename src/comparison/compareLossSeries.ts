@@ -12,6 +12,8 @@ export interface ComparisonScope {
   readonly loss: LossName;
   readonly horizon: 'all' | number;
   readonly series: 'all' | string;
+  /** A backtest path, when the comparison is restricted to one. */
+  readonly path?: string;
   readonly timestamps: readonly string[];
 }
 
@@ -70,6 +72,7 @@ export function compareLossSeries(
     loss: scope.loss,
     horizon: scope.horizon,
     series: scope.series,
+    ...(scope.path === undefined ? {} : { path: scope.path }),
     n,
     rows: series.rowCount,
     maxHorizon: series.maxHorizon,

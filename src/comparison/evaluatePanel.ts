@@ -9,7 +9,7 @@ import { benjaminiHochbergAdjust } from '../multiplicity/benjaminiHochbergAdjust
 import { holmAdjust } from '../multiplicity/holmAdjust.js';
 import { buildReport } from '../report/buildReport.js';
 import { panelInputsSummary } from '../report/inputsSummary.js';
-import type { Comparison, Report, SeriesSummary } from '../report/reportModel.js';
+import type { Comparison, PathSummary, Report, SeriesSummary } from '../report/reportModel.js';
 import { baselineMeanLossScale } from '../scaling/baselineMeanLossScale.js';
 import { scaleLossesBySeries } from '../scaling/scaleLossesBySeries.js';
 import { seasonalNaiveScale } from '../scaling/seasonalNaiveScale.js';
@@ -68,6 +68,31 @@ export function evaluatePanel(
     }
   }
 
+  let pathSummary: PathSummary | null = null;
+  if (panel.path !== null && panel.paths.length > 1) {
+    const byPath = groupRows(panel.path);
+    const perPath = panel.paths.map((name, id) =>
+      compareLossSeries(
+        aggregateByTime(panel, pooled, byPath.get(id) ?? [], weights),
+        { ...scope('all', 'all'), path: name },
+        hypothesis,
+        settings,
+        { bootstrap: false },
+      ),
+    );
+    comparisons.push(...perPath);
+    const worse = perPath.filter((c) => c.meanDifference > 0).length;
+    pathSummary = {
+      paths: perPath.length,
+      worse,
+      shareWorse: worse / perPath.length,
+      significantlyWorse: perPath.filter((c) => {
+        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        return p !== null && p <= settings.alpha;
+      }).length,
+    };
+  }
+
   let seriesSummary: SeriesSummary | null = null;
   if (panel.seriesNames.length > 1) {
     const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
@@ -82,6 +107,7 @@ export function evaluatePanel(
     inputs: panelInputsSummary(panel, losses),
     comparisons,
     seriesSummary,
+    pathSummary,
   });
 }
 

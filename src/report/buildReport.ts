@@ -1,7 +1,13 @@
 import type { Hypothesis } from '../decision/hypothesis.js';
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
 import type { Settings } from '../settings/settings.js';
-import type { Comparison, InputsSummary, Report, SeriesSummary } from './reportModel.js';
+import type {
+  Comparison,
+  InputsSummary,
+  PathSummary,
+  Report,
+  SeriesSummary,
+} from './reportModel.js';
 
 export interface ReportParts {
   readonly version: string;
@@ -11,6 +17,7 @@ export interface ReportParts {
   /** The overall comparison first. */
   readonly comparisons: readonly Comparison[];
   readonly seriesSummary?: SeriesSummary | null;
+  readonly pathSummary?: PathSummary | null;
 }
 
 /**
@@ -60,6 +67,7 @@ export function buildReport(parts: ReportParts): Report {
     settings,
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
+    pathSummary: parts.pathSummary ?? null,
   };
 }
 

@@ -22,6 +22,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(esc(report.headline), '');
   lines.push(...comparisonTable(report), '');
   lines.push(...seriesSection(report));
+  lines.push(...pathSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
   if (reasons.length > 0) {
     lines.push('**Why**', '');
@@ -55,7 +56,7 @@ function comparisonTable(report: Report): string[] {
     `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
     '|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|',
   ];
-  for (const c of report.comparisons.filter((x) => x.series === 'all')) {
+  for (const c of report.comparisons.filter((x) => x.series === 'all' && x.path === undefined)) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
     const interval =
@@ -110,6 +111,31 @@ function seriesSection(report: Report): string[] {
     }
     out.push('');
   }
+  return out;
+}
+
+/** Backtest paths: the share on which the candidate is worse, and one row per path. */
+function pathSection(report: Report): string[] {
+  const summary = report.pathSummary;
+  if (summary === null) return [];
+  const out = [
+    `**Backtest paths**: the candidate's mean loss is higher on ${summary.worse} of ${summary.paths} paths (${formatNumber(summary.shareWorse * 100, 3)}%), significantly so (one-sided Diebold–Mariano, p ≤ ${report.policy.alpha}) on ${summary.significantlyWorse}. The verdict tests the path-averaged differential.`,
+    '',
+  ];
+  const rows = report.comparisons.filter((c) => c.path !== undefined);
+  if (rows.length <= 50) {
+    out.push(
+      '| path | time points | baseline loss | candidate loss | relative | DM statistic | p (DM) |',
+    );
+    out.push('|---|---:|---:|---:|---:|---:|---:|');
+    for (const c of rows) {
+      const dm = c.dieboldMariano;
+      out.push(
+        `| ${esc(c.path ?? '')} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(dm.smallSample?.statistic ?? dm.statistic)} | ${formatPValue(dm.smallSample?.pValue ?? dm.pValue)} |`,
+      );
+    }
+  }
+  out.push('');
   return out;
 }
 

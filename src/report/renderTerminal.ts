@@ -32,7 +32,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
     'verdict',
   ];
   const rows = report.comparisons
-    .filter((c) => c.series === 'all')
+    .filter((c) => c.series === 'all' && c.path === undefined)
     .map((c) => [
       scope(c),
       String(c.n),
@@ -63,6 +63,12 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
     const top = summary.topRegressions.slice(0, 5).map(clean).join(', ');
     out.push(
       `series: ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} no evidence (${summary.method}-adjusted)${top === '' ? '' : `; largest regressions: ${top}`}`,
+    );
+  }
+  const paths = report.pathSummary;
+  if (paths !== null) {
+    out.push(
+      `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`,
     );
   }
   const i = report.inputs;

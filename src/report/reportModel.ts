@@ -25,6 +25,20 @@ export interface Report {
   readonly reasons: readonly string[];
   /** Per-series findings when the panel has more than one series, else null. */
   readonly seriesSummary: SeriesSummary | null;
+  /** Per-path findings when the files have a path column with several paths, else null. */
+  readonly pathSummary: PathSummary | null;
+}
+
+/**
+ * Backtest paths (each a complete out-of-sample history): on how many the candidate's mean loss
+ * is higher, and on how many that is significant (one-sided Diebold–Mariano p ≤ α, unadjusted:
+ * paths overlap in time, so this describes consistency rather than testing each path).
+ */
+export interface PathSummary {
+  readonly paths: number;
+  readonly worse: number;
+  readonly shareWorse: number;
+  readonly significantlyWorse: number;
 }
 
 /**
@@ -62,6 +76,8 @@ export interface Comparison {
   readonly loss: LossName;
   readonly horizon: 'all' | number;
   readonly series: 'all' | string;
+  /** Set when the comparison covers one backtest path only. */
+  readonly path?: string;
   /** Time points in the tested series. */
   readonly n: number;
   /** Rows averaged into those time points. */

@@ -197,6 +197,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
     },
     reasons: [],
     seriesSummary: null,
+    pathSummary: null,
   };
   return { ...report, ...overrides };
 }

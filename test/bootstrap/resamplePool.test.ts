@@ -7,8 +7,8 @@ import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createResamplePool, type ResamplePool } from '../../src/parallel/resamplePool.js';
 import { createRandomSource, type RandomSourceFactory } from '../../src/random/randomSource.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
 import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
+import { meanOf } from '../../src/statistics/bootstrap/centring.js';
 import {
   type ResampleJob,
   runResampleJob,

@@ -2,8 +2,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { createGeometricSampler } from '../../src/random/geometricSampler.js';
 import { createRandomSource, type RandomSourceFactory } from '../../src/random/randomSource.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
 import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
+import { meanOf } from '../../src/statistics/bootstrap/centring.js';
 import {
   RESAMPLES_PER_STREAM,
   resampleDeviationsOfStream,

@@ -4,9 +4,9 @@ import {
   randomStreams,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
-import { meanOf } from './centring.js';
 import { basicBootstrapInference } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
+import { meanOf } from './centring.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';
 import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';

@@ -2,9 +2,9 @@ import {
   createRandomSource,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
-import { meanOf } from './centring.js';
 import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
+import { meanOf } from './centring.js';
 import { type ResampleRunner, runResampleJob } from './resampleJob.js';
 import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 
