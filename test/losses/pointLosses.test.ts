@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { absoluteError } from '../../src/losses/absoluteError.js';
@@ -71,4 +73,31 @@ describe('point losses, properties', () => {
       }),
     );
   });
+});
+
+describe('pinball loss against scikit-learn', () => {
+  // Check values: sklearn.metrics.mean_pinball_loss (python3-sklearn), written by
+  // test/reference/scripts/panel_pinball_sklearn.py from the Nile and LakeHuron quantile
+  // forecasts of panel_pinball.json. Tolerance 1e-12 relative.
+  const dir = path.resolve(import.meta.dirname, '..', 'reference', 'fixtures');
+  const inputs = JSON.parse(readFileSync(path.join(dir, 'panel_pinball.json'), 'utf8'));
+  const expected = JSON.parse(readFileSync(path.join(dir, 'panel_pinball_sklearn.json'), 'utf8'));
+  for (const c of inputs.cases as {
+    name: string;
+    actual: number[];
+    quantiles: { level: number; values: number[] }[];
+  }[]) {
+    it(`${c.name}: mean pinball loss per level`, () => {
+      const ref = (
+        expected.cases as { name: string; levels: { level: number; meanLoss: number }[] }[]
+      ).find((x) => x.name === c.name)!;
+      for (const q of c.quantiles) {
+        const mean =
+          c.actual.reduce((s, y, i) => s + pinballLoss(y, q.values[i]!, q.level), 0) /
+          c.actual.length;
+        const want = ref.levels.find((l) => l.level === q.level)!.meanLoss;
+        expectClose(mean, want, 1e-12, `${c.name} τ=${q.level} vs ${expected.source}`);
+      }
+    });
+  }
 });
