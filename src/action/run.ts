@@ -164,7 +164,7 @@ function annotate(deps: ActionDependencies, report: Report, name: string): void 
 }
 
 const READ_ONLY_HINT =
-  'The report is in the job summary. To comment on pull requests from forks, use the workflow_run pattern in docs/action.md.';
+  'The report is in the job summary. To comment on pull requests from forks, use the workflow_run pattern in the README (Pull requests from forks).';
 
 /** Posts or updates the sticky comment; returns its URL, or null (with a warning or a note). */
 async function comment(
