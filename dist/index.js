@@ -43803,7 +43803,7 @@ function annotate(deps, report, name) {
   else if (report.verdict === "warn") deps.log.warning(message, { title });
   else deps.log.notice(message, { title });
 }
-var READ_ONLY_HINT = "The report is in the job summary. To comment on pull requests from forks, use the workflow_run pattern in docs/action.md.";
+var READ_ONLY_HINT = "The report is in the job summary. To comment on pull requests from forks, use the workflow_run pattern in the README (Pull requests from forks).";
 async function comment(deps, env, action, plan, marker, body) {
   if (plan.kind === "none") {
     deps.log.info(`skillgate: no comment: ${plan.reason}`);
