@@ -42898,28 +42898,33 @@ async function openPullRequestsFromHead(client, repository, head) {
 var ENGINE_OPTIONS = [
   {
     name: "baseline",
+    valueName: "FILE",
     defaultValue: null,
     required: true,
     help: "predictions of the model on the main branch (CSV/TSV, optionally .gz)"
   },
   {
     name: "candidate",
+    valueName: "FILE",
     defaultValue: null,
     required: true,
     help: "predictions of the pull request's model"
   },
   {
     name: "losses",
+    valueName: "FILE",
     defaultValue: null,
     help: "instead of baseline and candidate: a pre-aggregated file with timestamp, baseline_loss, candidate_loss (optional differential, rows, horizon) per time point"
   },
   {
     name: "actuals",
+    valueName: "FILE",
     defaultValue: null,
     help: "observed values keyed by series and timestamp, when the prediction files lack an actual column"
   },
   {
     name: "columns",
+    valueName: "ROLE=HEADER,\u2026",
     defaultValue: "",
     help: "rename columns, e.g. actual=observed,prediction=point,series=zone"
   },
@@ -42941,9 +42946,15 @@ var ENGINE_OPTIONS = [
     choices: ["error", "skip"],
     help: "with ape: refuse rows whose actual is 0, or skip and count them"
   },
-  { name: "alpha", defaultValue: "0.05", help: "significance level of each one-sided test" },
+  {
+    name: "alpha",
+    valueName: "NUMBER",
+    defaultValue: "0.05",
+    help: "significance level of each one-sided test"
+  },
   {
     name: "margin",
+    valueName: "NUMBER",
     defaultValue: "0",
     help: "allowed margin: with --margin-kind relative, 0.02 means the candidate may be up to 2% worse"
   },
@@ -42973,27 +42984,32 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "lag",
+    valueName: "auto|h-1|N",
     defaultValue: "auto",
     help: "HAC lag for bartlett/uniform: auto (Newey\u2013West 1994, at least h\u22121), h-1, or a number"
   },
   {
     name: "block-length",
+    valueName: "auto|N",
     defaultValue: "auto",
     help: "expected block length of the stationary bootstrap: auto (Politis\u2013White) or a number \u2265 1"
   },
-  { name: "resamples", defaultValue: "9999", help: "bootstrap resamples" },
+  { name: "resamples", valueName: "N", defaultValue: "9999", help: "bootstrap resamples" },
   {
     name: "seed",
+    valueName: "N",
     defaultValue: "1729",
     help: "seed of the bootstrap random numbers (same seed, same numbers on every machine)"
   },
   {
     name: "confidence",
+    valueName: "NUMBER",
     defaultValue: "0.95",
     help: "level of the two-sided intervals in the report"
   },
   {
     name: "min-points",
+    valueName: "N",
     defaultValue: "30",
     help: "fewest time points for a firm verdict (fewer: too little data)"
   },
@@ -43011,6 +43027,7 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "interval",
+    valueName: "LOWER,UPPER",
     defaultValue: "",
     help: "with --loss interval: the two quantile levels of the central interval, e.g. 0.1,0.9 (an 80% interval)"
   },
@@ -43028,11 +43045,13 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "history",
+    valueName: "FILE",
     defaultValue: null,
     help: "in-sample history (series, timestamp, actual) for --scale seasonal-naive"
   },
   {
     name: "season",
+    valueName: "N",
     defaultValue: "1",
     help: "period m of the seasonal naive forecast for --scale seasonal-naive (1: naive)"
   },
@@ -43050,16 +43069,28 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "top",
+    valueName: "N",
     defaultValue: "10",
     help: "how many series with the largest significant regressions to list"
   },
   {
     name: "name",
+    valueName: "TEXT",
     defaultValue: "",
     help: "a name for this comparison (report title; keeps two gates apart on one pull request)"
   },
-  { name: "json", defaultValue: null, help: "write the JSON report to this file" },
-  { name: "markdown", defaultValue: null, help: "write the Markdown report to this file" }
+  {
+    name: "json",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "write the JSON report to this file"
+  },
+  {
+    name: "markdown",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "write the Markdown report to this file"
+  }
 ];
 
 // src/action/names.ts

@@ -15,7 +15,7 @@ export function helpText(): string {
   for (const o of ENGINE_OPTIONS) {
     const flag = o.flag
       ? `--${o.name}`
-      : `--${o.name} ${o.choices ? o.choices.join('|') : 'VALUE'}`;
+      : `--${o.name} ${o.choices ? o.choices.join('|') : (o.valueName ?? 'VALUE')}`;
     const dflt =
       o.defaultValue === null || o.defaultValue === '' || o.flag
         ? ''
