@@ -18,19 +18,8 @@ args <- commandArgs(trailingOnly = TRUE)
 if (length(args) < 1) stop("usage: Rscript --vanilla panel_pinball.R OUTDIR")
 out <- args[[1]]
 
-num <- function(x) {
-  stopifnot(all(is.finite(x)))
-  sprintf("%.17g", x)
-}
-str <- function(s) paste0("\"", gsub("\"", "'", s), "\"")
-arr <- function(x) paste0("[", paste(num(x), collapse = ", "), "]")
-obj <- function(fields, indent) {
-  body <- paste0(indent, "  ", str(names(fields)), ": ", unlist(fields), collapse = ",\n")
-  paste0("{\n", body, "\n", indent, "}")
-}
-list_of <- function(items, indent) {
-  paste0("[\n", indent, "  ", paste(items, collapse = paste0(",\n", indent, "  ")), "\n", indent, "]")
-}
+script_dir <- dirname(normalizePath(sub("^--file=", "", grep("^--file=", commandArgs(FALSE), value = TRUE))))
+source(file.path(script_dir, "lib", "json_writer.R"))
 
 levels <- c(0.05, 0.1, 0.5, 0.9, 0.95)
 window <- 10
