@@ -39603,6 +39603,7 @@ function hypothesisFor(policy, margin, kind) {
         ...base,
         rejectWhen: "above",
         onReject: "fail",
+        nullHypothesis: `the candidate's expected loss is not higher than the baseline's${marginText}`,
         alternative: `the candidate's expected loss is higher than the baseline's${marginText}`
       };
     case "non-inferiority":
@@ -39610,6 +39611,7 @@ function hypothesisFor(policy, margin, kind) {
         ...base,
         rejectWhen: "below",
         onReject: "pass",
+        nullHypothesis: margin === 0 ? "the candidate's expected loss is at least the baseline's" : `the candidate is worse than the baseline by ${describeMargin(margin, kind)} or more`,
         alternative: margin === 0 ? "the candidate's expected loss is lower than the baseline's" : `the candidate is not worse than the baseline by ${describeMargin(margin, kind)} or more`
       };
     case "superiority":
@@ -39617,6 +39619,7 @@ function hypothesisFor(policy, margin, kind) {
         ...base,
         rejectWhen: "below",
         onReject: "pass",
+        nullHypothesis: `the candidate's expected loss is not lower than the baseline's${marginText}`,
         alternative: `the candidate's expected loss is lower than the baseline's${marginText}`
       };
   }
@@ -39667,7 +39670,7 @@ function buildReport(parts) {
       alpha: settings.alpha,
       margin: settings.margin,
       marginKind: settings.marginKind,
-      nullHypothesis: `not (${hypothesis.alternative})`,
+      nullHypothesis: hypothesis.nullHypothesis,
       alternative: hypothesis.alternative,
       onReject: hypothesis.onReject,
       baselineFactor: hypothesis.baselineFactor,

@@ -22,7 +22,8 @@ export interface Hypothesis {
   readonly rejectWhen: 'above' | 'below';
   /** What rejecting H0 means for the gate. */
   readonly onReject: 'fail' | 'pass';
-  /** The alternative in plain words. */
+  /** H0 and the alternative H1 in plain words. */
+  readonly nullHypothesis: string;
   readonly alternative: string;
 }
 
@@ -45,6 +46,7 @@ export function hypothesisFor(policy: Policy, margin: number, kind: MarginKind):
         ...base,
         rejectWhen: 'above',
         onReject: 'fail',
+        nullHypothesis: `the candidate's expected loss is not higher than the baseline's${marginText}`,
         alternative: `the candidate's expected loss is higher than the baseline's${marginText}`,
       };
     case 'non-inferiority':
@@ -52,6 +54,10 @@ export function hypothesisFor(policy: Policy, margin: number, kind: MarginKind):
         ...base,
         rejectWhen: 'below',
         onReject: 'pass',
+        nullHypothesis:
+          margin === 0
+            ? "the candidate's expected loss is at least the baseline's"
+            : `the candidate is worse than the baseline by ${describeMargin(margin, kind)} or more`,
         alternative:
           margin === 0
             ? "the candidate's expected loss is lower than the baseline's"
@@ -62,6 +68,7 @@ export function hypothesisFor(policy: Policy, margin: number, kind: MarginKind):
         ...base,
         rejectWhen: 'below',
         onReject: 'pass',
+        nullHypothesis: `the candidate's expected loss is not lower than the baseline's${marginText}`,
         alternative: `the candidate's expected loss is lower than the baseline's${marginText}`,
       };
   }

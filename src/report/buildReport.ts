@@ -56,7 +56,7 @@ export function buildReport(parts: ReportParts): Report {
       alpha: settings.alpha,
       margin: settings.margin,
       marginKind: settings.marginKind,
-      nullHypothesis: `not (${hypothesis.alternative})`,
+      nullHypothesis: hypothesis.nullHypothesis,
       alternative: hypothesis.alternative,
       onReject: hypothesis.onReject,
       baselineFactor: hypothesis.baselineFactor,
