@@ -39361,6 +39361,7 @@ function alignPanel(input, hooks = {}) {
     path: pathIds === null ? null : pathIds.ids,
     paths: pathIds === null ? [] : pathIds.names,
     actual,
+    actualSource: actuals === void 0 ? { file: bFile, lines: gather32(baseline.lines, bRows) } : { file: actuals.summary.path, lines: gather32(actuals.lines, aRows) },
     baseline: forecasts(baseline, bRows),
     candidate: forecasts(candidate, cRows),
     weight,
@@ -41645,10 +41646,15 @@ function rowLossesOrInputError(panel, settings) {
   if (settings.zeroActuals === "error" && losses.zeroActualRows.length > 0) {
     const row = losses.zeroActualRows[0];
     throw new InputError(
-      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows; first at series ${JSON.stringify(
+      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows, this the first; series ${JSON.stringify(
         panel.seriesNames[panel.series[row]]
       )}, timestamp ${JSON.stringify(panel.timestamps[panel.time[row]])}); use zero-actuals skip to leave them out and count them, or another loss`,
-      { file: settings.actuals ?? settings.baseline, column: "actual", value: "0" }
+      {
+        file: panel.actualSource.file,
+        line: panel.actualSource.lines[row],
+        column: settings.columns.actual ?? "actual",
+        value: "0"
+      }
     );
   }
   return losses;

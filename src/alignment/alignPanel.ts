@@ -337,6 +337,10 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
     path: pathIds === null ? null : pathIds.ids,
     paths: pathIds === null ? [] : pathIds.names,
     actual,
+    actualSource:
+      actuals === undefined
+        ? { file: bFile, lines: gather32(baseline.lines, bRows) }
+        : { file: actuals.summary.path, lines: gather32(actuals.lines, aRows) },
     baseline: forecasts(baseline, bRows),
     candidate: forecasts(candidate, cRows),
     weight,

@@ -274,10 +274,15 @@ function rowLossesOrInputError(panel: AlignedPanel, settings: Settings): RowLoss
   if (settings.zeroActuals === 'error' && losses.zeroActualRows.length > 0) {
     const row = losses.zeroActualRows[0]!;
     throw new InputError(
-      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows; first at series ${JSON.stringify(
+      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows, this the first; series ${JSON.stringify(
         panel.seriesNames[panel.series[row]!],
       )}, timestamp ${JSON.stringify(panel.timestamps[panel.time[row]!])}); use zero-actuals skip to leave them out and count them, or another loss`,
-      { file: settings.actuals ?? settings.baseline, column: 'actual', value: '0' },
+      {
+        file: panel.actualSource.file,
+        line: panel.actualSource.lines[row]!,
+        column: settings.columns.actual ?? 'actual',
+        value: '0',
+      },
     );
   }
   return losses;

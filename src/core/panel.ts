@@ -103,6 +103,11 @@ export interface AlignedPanel {
   /** Path labels by id; empty when there is no path column. */
   readonly paths: readonly string[];
   readonly actual: Float64Array;
+  /**
+   * Where each row's actual was read: the actuals file when there is one, else the baseline
+   * file (the candidate's agrees, or alignment refused it), and the 1-based physical line.
+   */
+  readonly actualSource: { readonly file: string; readonly lines: Int32Array };
   readonly baseline: ModelForecasts;
   readonly candidate: ModelForecasts;
   /** Optional per-row weights (weight column), else null. */

@@ -146,6 +146,14 @@ describe('usage and input errors exit 2 with a message and no stack trace', () =
       expect: /empty\.csv/,
     },
     {
+      name: 'a zero actual under the absolute percentage error',
+      args: () => {
+        const zero = file('zero-actual.csv', `${header}1,1,1.5\n2,0,2.5\n3,3,2\n`);
+        return ['compare', '--baseline', zero, '--candidate', zero, '--loss', 'ape'];
+      },
+      expect: /zero-actual\.csv:3: .*actual is 0.*zero-actuals skip/,
+    },
+    {
       name: 'no common keys',
       args: () => [
         'compare',
