@@ -196,10 +196,14 @@ function testDetails(report: Report): string[] {
 function inputSection(report: Report): string[] {
   const i = report.inputs;
   const out = ['<details><summary>Inputs and coverage</summary>', ''];
-  out.push('| file | role | rows | sha256 |', '|---|---|---:|---|');
+  out.push(
+    '| file | role | rows | blank lines skipped | columns not used | sha256 |',
+    '|---|---|---:|---:|---|---|',
+  );
   for (const f of i.files) {
+    const unused = f.ignoredColumns.length === 0 ? '' : f.ignoredColumns.map(esc).join(', ');
     out.push(
-      `| ${esc(f.path)} | ${f.role} | ${f.rows} | \`${f.sha256.replace(/^sha256:/, '').slice(0, 12)}\` |`,
+      `| ${esc(f.path)} | ${f.role} | ${f.rows} | ${f.blankLines} | ${unused} | \`${f.sha256.replace(/^sha256:/, '').slice(0, 12)}\` |`,
     );
   }
   const d = i.rowsDropped;
