@@ -13263,6 +13263,18 @@ function describeTest(e, rejected, alpha, hypothesis) {
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
+// src/statistics/mean.ts
+function mean(x) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("mean: the series is empty");
+  let sum = 0;
+  for (let t = 0; t < n; t++) sum += x[t];
+  const first = sum / n;
+  let residual = 0;
+  for (let t = 0; t < n; t++) residual += x[t] - first;
+  return first + residual / n;
+}
+
 // node_modules/pure-rand/lib/esm/generator/xoroshiro128plus.js
 var jumps = [
   3639956645,
@@ -13396,18 +13408,6 @@ function sourceOf(generator) {
       return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
     }
   };
-}
-
-// src/statistics/mean.ts
-function mean(x) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("mean: the series is empty");
-  let sum = 0;
-  for (let t = 0; t < n; t++) sum += x[t];
-  const first = sum / n;
-  let residual = 0;
-  for (let t = 0; t < n; t++) residual += x[t] - first;
-  return first + residual / n;
 }
 
 // src/statistics/autocovariance.ts
@@ -13557,15 +13557,15 @@ function buildAliasTable(probabilities) {
 // src/random/geometricSampler.ts
 var MAX_COLUMNS_LOG2 = 12;
 var OVERFLOW_PROBABILITY = 1 / 1024;
-function createGeometricSampler(mean3) {
-  if (!(Number.isFinite(mean3) && mean3 >= 1)) {
-    throw new RangeError(`the mean of a geometric length must be a finite number \u2265 1, got ${mean3}`);
+function createGeometricSampler(mean2) {
+  if (!(Number.isFinite(mean2) && mean2 >= 1)) {
+    throw new RangeError(`the mean of a geometric length must be a finite number \u2265 1, got ${mean2}`);
   }
-  if (mean3 === 1) {
+  if (mean2 === 1) {
     const table = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
-    return { mean: mean3, truncation: 1, table, sample: () => 1 };
+    return { mean: mean2, truncation: 1, table, sample: () => 1 };
   }
-  const p = 1 / mean3;
+  const p = 1 / mean2;
   const q = 1 - p;
   let bits = 1;
   while (bits < MAX_COLUMNS_LOG2 && q ** (2 ** bits - 1) > OVERFLOW_PROBABILITY) bits++;
@@ -13587,7 +13587,7 @@ function createGeometricSampler(mean3) {
   }
   const overflow = truncation;
   return {
-    mean: mean3,
+    mean: mean2,
     truncation,
     table: { threshold, alias },
     sample(random, cap) {
@@ -13661,12 +13661,12 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
 }
 
 // src/statistics/bootstrap/centredPrefixSums.ts
-function centredPrefixSums(d, mean3) {
+function centredPrefixSums(d, mean2) {
   const n = d.length;
   const prefix = new Float64Array(2 * n + 1);
   let running = 0;
   for (let i = 0; i < 2 * n; i++) {
-    running += d[i < n ? i : i - n] - mean3;
+    running += d[i < n ? i : i - n] - mean2;
     prefix[i + 1] = running;
   }
   return prefix;
@@ -13809,7 +13809,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
   }
   const constant = d.every((x) => x === d[0]);
   const identical = constant && d[0] === 0;
-  const mean3 = constant ? d[0] : meanOf(d);
+  const mean2 = constant ? d[0] : meanOf(d);
   let deviations;
   if (identical) {
     notes.push("every loss differential is 0 (identical forecasts); no resampling needed");
@@ -13821,7 +13821,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
     }
     deviations = stationaryResampleDeviations(
       d,
-      mean3,
+      mean2,
       expectedBlockLength,
       resamples,
       seed,
@@ -13831,13 +13831,13 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
   }
   const standardError = sampleStandardDeviation(deviations);
   const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = mean3 - deviations[b];
+  for (let b = 0; b < resamples; b++) reflected[b] = mean2 - deviations[b];
   reflected.sort();
   const inference = basicBootstrapInference(reflected, margin, confidence);
   return {
     state: identical ? "identical" : "ok",
     ...base,
-    mean: mean3,
+    mean: mean2,
     standardError,
     interval: { ...inference.interval, method: "basic" },
     oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
@@ -13847,8 +13847,8 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
     notes
   };
 }
-function stationaryResampleDeviations(d, mean3, expectedBlockLength, resamples, seed, random = createRandomSource, runner = runResampleJob) {
-  const prefix = centredPrefixSums(d, mean3);
+function stationaryResampleDeviations(d, mean2, expectedBlockLength, resamples, seed, random = createRandomSource, runner = runResampleJob) {
+  const prefix = centredPrefixSums(d, mean2);
   return runner({ prefix, n: d.length, expectedBlockLength, resamples, seed }, random);
 }
 function validateStationaryBootstrapOptions(options) {
@@ -14357,10 +14357,10 @@ function runDieboldMariano(d, horizon, hypothesis, settings) {
 // src/comparison/compareLossSeries.ts
 function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
   const n = series.baseline.length;
-  const meanBaselineLoss = mean2(series.baseline);
-  const meanCandidateLoss = mean2(series.candidate);
+  const meanBaselineLoss = meanOrZero(series.baseline);
+  const meanCandidateLoss = meanOrZero(series.candidate);
   const d = lossDifferential(series, hypothesis.baselineFactor - 1);
-  const meanTestedDifferential = mean2(d);
+  const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
   const dieboldMariano2 = runDieboldMariano(
     d,
@@ -14415,10 +14415,8 @@ function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
     rejected: decision.rejected
   };
 }
-function mean2(x) {
-  let s = 0;
-  for (let i = 0; i < x.length; i++) s += x[i];
-  return x.length === 0 ? 0 : s / x.length;
+function meanOrZero(x) {
+  return x.length === 0 ? 0 : mean(x);
 }
 function bootstrapNotRun(settings) {
   return {

@@ -5,6 +5,7 @@ import type { LossName } from '../losses/lossName.js';
 import type { BootstrapSummary, Comparison, DieboldMarianoSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
+import { mean } from '../statistics/mean.js';
 import { runBootstrap } from './runBootstrap.js';
 import { runDieboldMariano } from './runDieboldMariano.js';
 
@@ -29,10 +30,10 @@ export function compareLossSeries(
   options: { readonly bootstrap?: boolean; readonly runner?: ResampleRunner } = {},
 ): Comparison {
   const n = series.baseline.length;
-  const meanBaselineLoss = mean(series.baseline);
-  const meanCandidateLoss = mean(series.candidate);
+  const meanBaselineLoss = meanOrZero(series.baseline);
+  const meanCandidateLoss = meanOrZero(series.candidate);
   const d = lossDifferential(series, hypothesis.baselineFactor - 1);
-  const meanTestedDifferential = mean(d);
+  const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
 
   const dieboldMariano: DieboldMarianoSummary = runDieboldMariano(
@@ -91,10 +92,9 @@ export function compareLossSeries(
   };
 }
 
-function mean(x: Float64Array): number {
-  let s = 0;
-  for (let i = 0; i < x.length; i++) s += x[i]!;
-  return x.length === 0 ? 0 : s / x.length;
+/** The project's mean (statistics/mean.ts), with 0 for a comparison that has no time points. */
+function meanOrZero(x: Float64Array): number {
+  return x.length === 0 ? 0 : mean(x);
 }
 
 function bootstrapNotRun(settings: Settings): BootstrapSummary {
