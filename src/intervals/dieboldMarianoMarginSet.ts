@@ -7,7 +7,12 @@ import { mean } from '../statistics/mean.js';
 import { selectLag } from '../statistics/neweyWestLag.js';
 import { uniformWeightSum } from '../statistics/uniformLongRunVariance.js';
 import { fiellerSet } from './fiellerSet.js';
-import type { IntervalSet } from './intervalSet.js';
+import {
+  complementOfSet,
+  type IntervalSet,
+  intersectionOfSets,
+  unionOfSets,
+} from './intervalSet.js';
 import { longRunCovariance } from './longRunCovariance.js';
 
 export interface DieboldMarianoMarginSet {
@@ -30,8 +35,10 @@ export interface DieboldMarianoMarginSet {
  * `ewc` (Lazarus et al. 2018); for `bartlett` / `uniform` Student t with n − 1 df divided by the
  * Harvey–Leybourne–Newbold (1997) factor, or N(0, 1) when that correction is undefined (h ≥ n).
  *
- * `uniform` uses its own matrix when that makes ω(D − r·B) positive for every r (then the gate
- * never falls back to Bartlett at any margin); otherwise the Bartlett matrix at the same lag.
+ * `uniform` follows the gate's fallback margin by margin: where the uniform-weight ω(D − r·B) is
+ * positive the gate uses it, elsewhere Bartlett at the same lag, so the set is the union of the
+ * two Fieller sets each restricted to its region. `estimator` says `bartlett` when the uniform
+ * weights are positive at no margin.
  *
  * Returns null when n < 3 or a covariance is not finite.
  */
@@ -51,40 +58,60 @@ export function dieboldMarianoMarginSet(input: {
   const d = new Float64Array(n);
   for (let t = 0; t < n; t++) d[t] = candidate[t]! - baseline[t]!;
   let estimator = input.estimator;
-  let covariance: { dd: number; db: number; bb: number };
   let critical: number;
+  const meanD = mean(d);
+  const meanB = mean(baseline);
+  const fieller = (v: { dd: number; db: number; bb: number }) =>
+    fiellerSet({ meanD, meanB, varDD: v.dd / n, varDB: v.db / n, varBB: v.bb / n, critical });
+  let covariance: { dd: number; db: number; bb: number };
+  let set: IntervalSet;
   if (estimator === 'ewc') {
     const nu = input.degreesOfFreedom;
     if (nu === null) return null;
     covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
     critical = studentTQuantile(1 - tail, nu);
+    if (!finite(covariance)) return null;
+    set = fieller(covariance);
   } else {
     const lag = selectLag(d, input.lag, horizon).lag;
-    const bartlett = () =>
-      longRunCovariance(d, baseline, candidate, (x) => bartlettLongRunVariance(x, lag));
-    if (estimator === 'uniform') {
-      const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
-      const positive = uniform.bb > 0 && uniform.dd * uniform.bb - uniform.db * uniform.db > 0;
-      covariance = positive ? uniform : bartlett();
-      if (!positive) estimator = 'bartlett';
-    } else {
-      covariance = bartlett();
-    }
     const factor = harveyLeybourneNewboldFactor(n, horizon);
     critical =
       factor === null
         ? standardNormalQuantile(1 - tail)
         : studentTQuantile(1 - tail, n - 1) / factor;
+    const bartlett = longRunCovariance(d, baseline, candidate, (x) =>
+      bartlettLongRunVariance(x, lag),
+    );
+    if (!finite(bartlett)) return null;
+    covariance = bartlett;
+    set = fieller(bartlett);
+    if (estimator === 'uniform') {
+      const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
+      if (!finite(uniform)) return null;
+      // Where ω_uniform(D − r·B) > 0 the gate uses it, elsewhere Bartlett at the same lag.
+      const positive = complementOfSet(
+        fiellerSet({
+          meanD: 0,
+          meanB: 0,
+          varDD: -uniform.dd,
+          varDB: -uniform.db,
+          varBB: -uniform.bb,
+          critical: 1,
+        }),
+      );
+      if (positive.length === 0) estimator = 'bartlett';
+      else {
+        covariance = uniform;
+        set = unionOfSets(
+          intersectionOfSets(fieller(uniform), positive),
+          intersectionOfSets(set, complementOfSet(positive)),
+        );
+      }
+    }
   }
-  const { dd, db, bb } = covariance;
-  if (![dd, db, bb].every(Number.isFinite)) return null;
-  const set = fiellerSet({
-    meanD: mean(d),
-    meanB: mean(baseline),
-    varDD: dd / n,
-    varDB: db / n,
-    varBB: bb / n,
-    critical,
-  });
   return { set, estimator, critical, covariance };
+}
+
+function finite(v: { dd: number; db: number; bb: number }): boolean {
+  return Number.isFinite(v.dd) && Number.isFinite(v.db) && Number.isFinite(v.bb);
 }

@@ -68,3 +68,15 @@ export function hullOfSet(set: IntervalSet): IntervalPiece | null {
   if (first === undefined || last === undefined) return null;
   return { lower: first.lower, upper: last.upper };
 }
+
+/** The complement on the real line (ends kept closed on both sides: a boundary of measure 0). */
+export function complementOfSet(set: IntervalSet): IntervalSet {
+  const out: IntervalPiece[] = [];
+  let from = Number.NEGATIVE_INFINITY;
+  for (const p of normaliseSet(set)) {
+    if (lo(p) > from) out.push(piece(from, lo(p)));
+    from = hi(p);
+  }
+  if (from < Number.POSITIVE_INFINITY) out.push(piece(from, Number.POSITIVE_INFINITY));
+  return out;
+}
