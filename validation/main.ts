@@ -2,12 +2,18 @@
  * `npm run validate`: the full size, power and coverage study behind docs/validation.md. Runs the
  * designs of DESIGN.md ("Why ewc is the default") through the gate's own code on both cores
  * (worker threads, replications split by index, so the numbers do not depend on the split) and
- * writes the table. Options: --replications N (default 2000), --resamples B (default 9999),
- * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples).
+ * writes the table, then the coverage study of every interval the report shows
+ * (validation/coverageStudy.ts). Options: --replications N (default 2000), --resamples B (default
+ * 9999), --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
+ * --coverage (rerun only the coverage section, replacing it in the file),
+ * --coverage-replications N (default 1000), --coverage-resamples B (default 999).
  */
-import { writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
+import { type CoverageDesign, coverageDesigns } from './coverageDesigns.js';
+import { COVERAGE_HEADING, renderCoverageSection } from './coverageSection.js';
+import { type CoverageResult, runCoverage } from './coverageStudy.js';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
 
@@ -22,9 +28,15 @@ interface Job {
   seed: number;
 }
 
+interface CoverageJob extends Omit<Job, 'design'> {
+  coverage: CoverageDesign;
+}
+
 if (!isMainThread) {
-  const jobs = workerData as Job[];
-  parentPort!.postMessage(jobs.map((j) => runStudy(j.design, j)));
+  const jobs = workerData as (Job | CoverageJob)[];
+  parentPort!.postMessage(
+    jobs.map((j) => ('coverage' in j ? runCoverage(j.coverage, j) : runStudy(j.design, j))),
+  );
 } else {
   await main();
 }
@@ -40,6 +52,18 @@ async function main(): Promise<void> {
   const resamples = option('resamples', quick ? 999 : 9999);
   const outIndex = args.indexOf('--out');
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
+  const coverageReplications = option('coverage-replications', quick ? 200 : 1000);
+  const coverageResamples = option('coverage-resamples', 999);
+  if (args.includes('--coverage')) {
+    // Only the coverage section, replacing it in the existing file.
+    const previous = existsSync(out) ? readFileSync(out, 'utf8') : '';
+    const at = previous.indexOf(COVERAGE_HEADING);
+    const head = at >= 0 ? previous.slice(0, at) : previous === '' ? '' : `${previous}\n`;
+    const section = await coverageStudy(coverageReplications, coverageResamples);
+    writeFileSync(out, `${head}${section}`);
+    process.stderr.write(`wrote the coverage section of ${out}\n`);
+    return;
+  }
   const designs: SimulationDesign[] = [];
   for (const innovationCorrelation of [0.5, 0.8]) {
     for (const n of [100, 200]) {
@@ -68,11 +92,65 @@ async function main(): Promise<void> {
     );
   }
   const seconds = (Date.now() - started) / 1000;
-  writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }));
+  const coverage = await coverageStudy(coverageReplications, coverageResamples);
+  writeFileSync(
+    out,
+    `${renderTable(results, { replications, resamples, seconds, threads })}\n${coverage}`,
+  );
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
 }
 
-function runInWorker(jobs: Job[]): Promise<StudyResult[]> {
+/** The coverage study (validation/coverageStudy.ts) at n = 50, 100, 200, 500 on both threads. */
+async function coverageStudy(replications: number, resamples: number): Promise<string> {
+  const threads = Math.max(1, Math.min(2, availableParallelism()));
+  const started = Date.now();
+  const results: CoverageResult[] = [];
+  for (const n of [50, 100, 200, 500]) {
+    for (const design of coverageDesigns(n)) {
+      const per = Math.ceil(replications / threads);
+      const parts = (await Promise.all(
+        Array.from({ length: threads }, (_, k) => {
+          const first = k * per;
+          const count = Math.max(0, Math.min(per, replications - first));
+          return runInWorker([
+            {
+              coverage: design,
+              firstReplication: first,
+              replications: count,
+              resamples,
+              seed: SEED,
+            },
+          ]);
+        }),
+      )) as unknown as CoverageResult[][];
+      results.push(mergeCoverage(parts.flat()));
+      process.stderr.write(`coverage n=${n} ${design.label}\n`);
+    }
+  }
+  const seconds = (Date.now() - started) / 1000;
+  return renderCoverageSection(results, { replications, resamples, seconds, threads, seed: SEED });
+}
+
+function mergeCoverage(parts: CoverageResult[]): CoverageResult {
+  const total = parts.reduce((s, p) => s + p.replications, 0);
+  const first = parts[0]!;
+  const combine = (pick: (p: CoverageResult) => Readonly<Record<string, number>>) =>
+    Object.fromEntries(
+      Object.keys(pick(first)).map((k) => [
+        k,
+        parts.reduce((s, p) => s + pick(p)[k]! * p.replications, 0) / total,
+      ]),
+    ) as CoverageResult['covered'];
+  return {
+    ...first,
+    replications: total,
+    covered: combine((p) => p.covered),
+    missAbove: combine((p) => p.missAbove),
+    missBelow: combine((p) => p.missBelow),
+  };
+}
+
+function runInWorker(jobs: (Job | CoverageJob)[]): Promise<StudyResult[]> {
   return new Promise((resolve, reject) => {
     const worker = new Worker(new URL(import.meta.url), { workerData: jobs });
     worker.once('message', resolve);
