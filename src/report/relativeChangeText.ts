@@ -1,5 +1,6 @@
 import { formatNumber, formatSignedPercent } from '../core/formatNumber.js';
 import type { IntervalPiece } from '../intervals/intervalSet.js';
+import type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 import { confidenceOverridesDefault } from '../settings/defaultConfidence.js';
 import type { Comparison, Report } from './reportModel.js';
 
@@ -14,7 +15,16 @@ export function relativeChangeText(c: Comparison): string {
   if (rc === null) return point;
   const pieces: readonly IntervalPiece[] = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
   if (pieces.length === 0) return `${point} ∅`;
-  return `${point} ${pieces.map(pieceText).join(' ∪ ')}`;
+  return `${point} ${pieces.map(pieceText).join(' ∪ ')}${measuredCoverageText(rc.measuredCoverage)}`;
+}
+
+/**
+ * " (measured coverage 84% at n = 100)" when the coverage study found the interval more than 2
+ * points under its level (src/intervals/measuredCoverage.ts), else "".
+ */
+export function measuredCoverageText(measured: MeasuredCoverage | undefined): string {
+  if (measured === undefined) return '';
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 3)}% at n = ${measured.studiedN})`;
 }
 
 function pieceText(p: IntervalPiece): string {

@@ -1,5 +1,5 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
-import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { intervalNote, measuredCoverageText, relativeChangeText } from './relativeChangeText.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -45,7 +45,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       formatPValue(c.bootstrap.decisionPValue),
       c.bootstrap.interval === null
         ? 'n/a'
-        : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]`,
+        : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]${measuredCoverageText(c.bootstrap.interval.measuredCoverage)}`,
       c.verdict,
     ]);
   const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)));
