@@ -3,6 +3,7 @@ import type { Verdict } from '../decision/verdict.js';
 import type { RelativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
+import type { Stability } from '../stability/stabilityModel.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
 
@@ -30,6 +31,8 @@ export interface Report {
   readonly seriesSummary: SeriesSummary | null;
   /** Per-path findings when the files have a path column with several paths, else null. */
   readonly pathSummary: PathSummary | null;
+  /** Whether the difference holds over time (fluctuation test, recent window, periods), or null. */
+  readonly stability: Stability | null;
 }
 
 /**
