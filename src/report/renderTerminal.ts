@@ -1,4 +1,4 @@
-import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
+import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import type { Comparison, Report } from './reportModel.js';
 
