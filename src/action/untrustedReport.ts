@@ -16,6 +16,8 @@ import type {
   SeriesSummary,
 } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import { MAX_PERIODS } from '../stability/periodBuckets.js';
+import type { FluctuationSummary, Stability, TimeSpan } from '../stability/stabilityModel.js';
 
 /** Larger report files are refused before parsing. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -139,6 +141,7 @@ function readReport(r: Reader): Report {
     inputs: readInputs(r.field('inputs')),
     seriesSummary: readSeriesSummary(r.field('seriesSummary')),
     pathSummary: readPathSummary(r.field('pathSummary')),
+    stability: readStability(r.field('stability')),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
   };
@@ -251,6 +254,42 @@ function readPathSummary(r: Reader): PathSummary | null {
     shareWorse: r.field('shareWorse').number(),
     significantlyWorse: r.field('significantlyWorse').integer(),
   };
+}
+
+/** report.stability; absent (a report from before it existed) reads as null. */
+function readStability(r: Reader): Stability | null {
+  if (r.value === null || r.value === undefined) return null;
+  const periods = r.field('periods').items();
+  if (periods.length > MAX_PERIODS) r.field('periods').fail(`at most ${MAX_PERIODS} periods`);
+  const recent = r.field('recent');
+  return {
+    fluctuation: readFluctuation(r.field('fluctuation')),
+    recent: recent.value === null ? null : readComparison(recent),
+    periods: periods.map((p) => ({
+      ...readSpan(p),
+      n: p.field('n').integer(1),
+      meanBaselineLoss: p.field('meanBaselineLoss').number(),
+      meanCandidateLoss: p.field('meanCandidateLoss').number(),
+      relativeDifference: p.field('relativeDifference').numberOrNull(),
+    })),
+  };
+}
+
+function readFluctuation(r: Reader): FluctuationSummary | null {
+  if (r.value === null) return null;
+  return {
+    statistic: r.field('statistic').number(),
+    criticalValue: r.field('criticalValue').number(),
+    mu: r.field('mu').number(),
+    windowSize: r.field('windowSize').integer(1),
+    rejected: r.field('rejected').boolean(),
+    peak: readSpan(r.field('peak')),
+    worsePeriods: r.field('worsePeriods').items().map(readSpan),
+  };
+}
+
+function readSpan(r: Reader): TimeSpan {
+  return { start: r.field('start').string(), end: r.field('end').string() };
 }
 
 function readSeriesSummary(r: Reader): SeriesSummary | null {

@@ -4,6 +4,7 @@ import type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 import type { RelativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
+import type { Stability } from '../stability/stabilityModel.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
 
@@ -12,7 +13,7 @@ export type { RelativeChange } from '../intervals/relativeChange.js';
 
 /**
  * The JSON report: the one artefact every renderer (terminal, Markdown comment, job summary)
- * reads. Its shape is fixed by DESIGN ("JSON report contract") and described by
+ * reads. Its shape is fixed by docs/design.md ("The JSON report") and described by
  * docs/report.schema.json; numbers that cannot be computed are null, never NaN.
  */
 export interface Report {
@@ -32,6 +33,8 @@ export interface Report {
   readonly seriesSummary: SeriesSummary | null;
   /** Per-path findings when the files have a path column with several paths, else null. */
   readonly pathSummary: PathSummary | null;
+  /** Whether the difference holds over time (fluctuation test, recent window, periods), or null. */
+  readonly stability: Stability | null;
 }
 
 /**

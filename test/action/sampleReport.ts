@@ -205,6 +205,36 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
     reasons: [],
     seriesSummary: null,
     pathSummary: null,
+    stability: {
+      fluctuation: {
+        statistic: 1.8421,
+        criticalValue: 2.938,
+        mu: 0.2,
+        windowSize: 48,
+        rejected: false,
+        peak: { start: '2026-05-02', end: '2026-06-18' },
+        worsePeriods: [],
+      },
+      recent: null,
+      periods: [
+        {
+          start: '2026-03-04',
+          end: '2026-03-08',
+          n: 5,
+          meanBaselineLoss: 4.61,
+          meanCandidateLoss: 3.9,
+          relativeDifference: -0.154,
+        },
+        {
+          start: '2026-03-09',
+          end: '2026-03-15',
+          n: 7,
+          meanBaselineLoss: 4.2,
+          meanCandidateLoss: 0,
+          relativeDifference: -1,
+        },
+      ],
+    },
   };
   return { ...report, ...overrides };
 }

@@ -94,4 +94,35 @@ describe('parseUntrustedReport', () => {
       describeError(JSON.stringify({ ...report, tool: { name: 'other', version: '1' } })),
     ).toMatch(/\$\.tool\.name/);
   });
+
+  it('reads report.stability field by field; a report without it reads as null', () => {
+    const report = sampleReport();
+    const { stability: _, ...older } = report;
+    expect(parseUntrustedReport(JSON.stringify(older), 'r.json').stability).toBeNull();
+    const stability = report.stability!;
+    const badPeriod = {
+      ...report,
+      stability: { ...stability, periods: [{ ...stability.periods[0], start: 3 }] },
+    };
+    expect(describeError(JSON.stringify(badPeriod))).toMatch(
+      /field \$\.stability\.periods\[0\]\.start must be a string/,
+    );
+    const tooMany = {
+      ...report,
+      stability: { ...stability, periods: Array(61).fill(stability.periods[0]) },
+    };
+    expect(describeError(JSON.stringify(tooMany))).toMatch(
+      /\$\.stability\.periods must be at most 60/,
+    );
+    const badFlag = {
+      ...report,
+      stability: { ...stability, fluctuation: { ...stability.fluctuation, rejected: 'yes' } },
+    };
+    expect(describeError(JSON.stringify(badFlag))).toMatch(
+      /\$\.stability\.fluctuation\.rejected must be true or false/,
+    );
+    const recent = { ...report, stability: { ...stability, recent: report.comparisons[0] } };
+    const parsed = parseUntrustedReport(JSON.stringify(recent), 'r.json');
+    expect(parsed.stability?.recent?.n).toBe(240);
+  });
 });
