@@ -196,7 +196,7 @@ function renderTable(
     `${run.replications} replications per design (replication r uses random stream r of seed ${SEED}),`,
     `${run.resamples} bootstrap resamples with the automatic block length, seed 1729 as in the gate.`,
     `Run on ${run.threads} worker threads in ${run.seconds.toFixed(0)} s. Monte Carlo standard error of a`,
-    `5% rate: ${pct(Math.sqrt((0.05 * 0.95) / run.replications))}; of a 90% coverage: ${pct(Math.sqrt((0.1 * 0.9) / run.replications))}.`,
+    `5% rate: ${pct(Math.sqrt((0.05 * 0.95) / run.replications))}; of a 95% coverage: the same.`,
     '',
     '## Rejection rate ("candidate worse")',
     '',
@@ -211,7 +211,7 @@ function renderTable(
   }
   lines.push(
     '',
-    '## Coverage of the 90% (1 − 2α) intervals for E[d] and the default verdicts',
+    '## Coverage of the 95% intervals for E[d] and the default verdicts',
     '',
     '| ρ | n | truth | bootstrap (basic) | Diebold–Mariano (ewc, t_ν) | verdict fail | verdict warn |',
     '|---:|---:|---|---:|---:|---:|---:|',

@@ -18,7 +18,7 @@ export interface StudyResult {
   readonly alpha: number;
   /** Share of replications in which each procedure found "candidate worse". */
   readonly rejectionRate: Readonly<Record<StudyProcedure, number>>;
-  /** Share of replications in which each interval (default level 1 − 2α) covered the true E[d]. */
+  /** Share of replications in which each 95% interval covered the true E[d]. */
   readonly coverage: { readonly bootstrap: number; readonly dieboldMarianoEwc: number };
   /** Share of replications whose default-policy verdict was fail / warn. */
   readonly verdicts: { readonly fail: number; readonly warn: number };
