@@ -6,11 +6,13 @@
  * (validation/coverageStudy.ts). Options: --replications N (default 2000), --resamples B (default
  * 9999), --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
  * --coverage (rerun only the coverage section, replacing it in the file),
- * --coverage-replications N (default 1000), --coverage-resamples B (default 999).
+ * --coverage-replications N (default 1000), --coverage-resamples B (default 999),
+ * --candidates (print the measurement of the studentised-bootstrap candidate, 300 replications).
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
+import { candidateStudy } from './candidateStudy.js';
 import { type CoverageDesign, coverageDesigns } from './coverageDesigns.js';
 import { COVERAGE_HEADING, renderCoverageSection } from './coverageSection.js';
 import { type CoverageResult, runCoverage } from './coverageStudy.js';
@@ -54,6 +56,10 @@ async function main(): Promise<void> {
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
   const coverageReplications = option('coverage-replications', quick ? 200 : 1000);
   const coverageResamples = option('coverage-resamples', 999);
+  if (args.includes('--candidates')) {
+    process.stdout.write(candidateStudy(option('replications', 300)));
+    return;
+  }
   if (args.includes('--coverage')) {
     // Only the coverage section, replacing it in the existing file.
     const previous = existsSync(out) ? readFileSync(out, 'utf8') : '';
