@@ -19,12 +19,12 @@ export function relativeChangeText(c: Comparison): string {
 }
 
 /**
- * " (measured coverage 84% at n = 100)" when the coverage study found the interval more than 2
- * points under its level (src/intervals/measuredCoverage.ts), else "".
+ * " (measured coverage 84%)" when the coverage study found the interval more than 2 points under
+ * its level (src/intervals/measuredCoverage.ts), else ""; `intervalNote` says what it means.
  */
 export function measuredCoverageText(measured: MeasuredCoverage | undefined): string {
   if (measured === undefined) return '';
-  return ` (measured coverage ${formatNumber(measured.coverage * 100, 3)}% at n = ${measured.studiedN})`;
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
 }
 
 function pieceText(p: IntervalPiece): string {
@@ -47,9 +47,20 @@ export function intervalNote(report: Report): string {
       `${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (α = ${alpha} each side) may disagree.`
     );
   }
-  return (
+  const base =
     `Intervals are ${pct} (1 − 2α): each end is a one-sided bound at α = ${alpha}. The relative ` +
     'change interval holds the relative margins at which the gate would not reject: a margin ' +
-    'below its lower end means evidence of a regression larger than that margin.'
-  );
+    'below its lower end means evidence of a regression larger than that margin.';
+  const measured = report.comparisons
+    .flatMap((c) => [
+      c.relativeChange?.measuredCoverage,
+      c.dieboldMariano.interval?.measuredCoverage,
+      c.bootstrap.interval?.measuredCoverage,
+    ])
+    .find((m) => m !== undefined);
+  return measured === undefined
+    ? base
+    : `${base} A measured coverage beside an interval is the lowest the validation study ` +
+        `(docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to ` +
+        'strong persistence and heavy tails.';
 }

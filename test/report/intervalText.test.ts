@@ -46,6 +46,7 @@ describe('intervals in the rendered report', () => {
     };
     const md = renderMarkdown({ ...report, comparisons: [edited] });
     expect(md).toContain('-16.5% [−∞, -50%] ∪ [-10%, +∞]');
-    expect(md).toMatch(/\[-?[\d.]+, -?[\d.]+\] \(measured coverage 84% at n = 100\) \|/);
+    expect(md).toMatch(/\[-?[\d.]+, -?[\d.]+\] \(measured coverage 84%\) \|/);
+    expect(md).toContain('the validation study (docs/validation.md) found at n = 100 time points');
   });
 });
