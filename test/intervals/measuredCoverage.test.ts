@@ -26,11 +26,10 @@ describe('measured coverage', () => {
     const header = `| design | n | ${COVERAGE_INTERVALS.join(' | ')} |`;
     const start = section.indexOf(header);
     expect(start).toBeGreaterThan(0);
-    const rows = section
-      .slice(start)
+    const table = section.slice(start).split('\n\n')[0]!;
+    const rows = table
       .split('\n')
       .slice(2)
-      .filter((line) => line.startsWith('| '))
       .map((line) =>
         line
           .split('|')
