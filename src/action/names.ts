@@ -23,7 +23,7 @@ export const ACTION_INPUTS: readonly OptionSpec[] = [
     name: INPUT.comment,
     defaultValue: 'true',
     flag: true,
-    help: 'post or update the sticky pull-request comment',
+    help: "post the gate's own pull-request comment, or edit it in place",
   },
   {
     name: INPUT.pullRequest,
