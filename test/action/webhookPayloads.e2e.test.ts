@@ -10,6 +10,8 @@ import { demoInputs, runBundle } from './runBundle.js';
 
 // The action on real example event payloads as GitHub sends them (the npm package
 // `@octokit/webhooks-examples`), run as the runner runs dist/index.js against the loopback API.
+// biome-ignore lint/suspicious/noExplicitAny: the example payloads are untyped JSON
+type Payload = Record<string, any>;
 interface Examples {
   readonly name: string;
   readonly examples: readonly Record<string, unknown>[];
@@ -18,7 +20,7 @@ const all = createRequire(import.meta.url)('@octokit/webhooks-examples') as Exam
 function example(event: string, pick: (p: Record<string, unknown>) => boolean) {
   const found = all.find((e) => e.name === event)?.examples.find(pick);
   if (found === undefined) throw new Error(`no ${event} example`);
-  return structuredClone(found) as Record<string, any>;
+  return structuredClone(found) as Payload;
 }
 
 const marker = commentMarker('');
@@ -35,8 +37,7 @@ const gateComments = (issue: number) =>
   api.commentsOn(issue).filter((c) => c.body.startsWith(`${marker}\n`));
 
 describe('pull_request', () => {
-  const synchronize = () =>
-    example('pull_request', (p) => p.action === 'synchronize') as Record<string, any>;
+  const synchronize = () => example('pull_request', (p) => p.action === 'synchronize');
 
   it('from a branch: comments on the pull request the payload names', async () => {
     const event = synchronize();
@@ -95,7 +96,7 @@ describe('workflow_run', () => {
   it('posts a stored report on the listed pull request once its head is the run commit', async () => {
     const event = example(
       'workflow_run',
-      (p) => p.action === 'completed' && (p.workflow_run as any).pull_requests.length > 0,
+      (p) => p.action === 'completed' && (p.workflow_run as Payload).pull_requests.length > 0,
     );
     const run = event.workflow_run;
     const number = run.pull_requests[0].number as number;

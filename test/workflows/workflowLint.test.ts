@@ -52,6 +52,7 @@ describe('workflow linter (actionlint)', () => {
 
   it('catches a broken workflow (the linter can fail)', () => {
     const broken =
+      // biome-ignore lint/suspicious/noTemplateCurlyInString: a workflow expression, kept verbatim
       'on: push\njobs:\n  a:\n    runs-on: ubuntu-latest\n    steps:\n      - run: echo ${{ github.nope }}\n';
     expect(lint(broken, 'broken.yml').length).toBeGreaterThan(0);
   });
