@@ -39,6 +39,13 @@ export interface ServedDelay {
   readonly ms: number;
 }
 
+/** Holds matching requests until `count` of them have arrived (or `timeoutMs` passed). */
+export interface ServedBarrier {
+  readonly match: string;
+  readonly count: number;
+  readonly timeoutMs: number;
+}
+
 export interface RecordedRequest {
   readonly method: string;
   readonly path: string;
@@ -59,6 +66,8 @@ export class FakeGitHub {
   readonly requests: RecordedRequest[] = [];
   readonly failures: ServedFailure[] = [];
   readonly delays: ServedDelay[] = [];
+  barrier: ServedBarrier | null = null;
+  private readonly held: (() => void)[] = [];
   forbidWrites = false;
   /**
    * What GET /user answers: null (as for the workflow's installation token) is a 403; a login
@@ -132,6 +141,17 @@ export class FakeGitHub {
     const route = `${method} ${path}`;
     const delay = this.delays.find((d) => route.startsWith(d.match));
     if (delay !== undefined) await new Promise((resolve) => setTimeout(resolve, delay.ms));
+    const barrier = this.barrier;
+    if (barrier !== null && route.startsWith(barrier.match)) {
+      await new Promise<void>((resolve) => {
+        const timer = setTimeout(resolve, barrier.timeoutMs);
+        this.held.push(() => {
+          clearTimeout(timer);
+          resolve();
+        });
+        if (this.held.length >= barrier.count) for (const release of this.held.splice(0)) release();
+      });
+    }
     const failure = this.failures.find((f) => f.times > 0 && route.startsWith(f.match));
     if (failure !== undefined) failure.times -= 1;
     const fail = (): void => {

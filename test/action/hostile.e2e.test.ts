@@ -137,8 +137,12 @@ describe('2. no duplicate comments', () => {
   });
 
   it('two runs of one pull request at the same time end with one comment', async () => {
-    // Both runs list before either create is answered, so both create.
-    api.delays.push({ match: 'POST /repos/acme/models/issues/76/comments', ms: 1500 });
+    // No create is answered before both have arrived, so both runs listed none and created one.
+    api.barrier = {
+      match: 'POST /repos/acme/models/issues/76/comments',
+      count: 2,
+      timeoutMs: 30_000,
+    };
     const [a, b] = await Promise.all([gate(76), gate(76, demoInputs('candidate-regressed.csv'))]);
     expect(a.code).toBe(0);
     expect(b.code).toBe(1);
