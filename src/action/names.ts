@@ -33,7 +33,7 @@ export const ACTION_INPUTS: readonly OptionSpec[] = [
   {
     name: INPUT.reportFile,
     defaultValue: '',
-    help: 'post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered',
+    help: 'post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered, and named by the name input, never by the report',
   },
 ];
 
