@@ -4,6 +4,8 @@ import { orderLossSeries } from '../alignment/orderLossSeries.js';
 import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
+import { checkBacktest } from '../integrity/checkBacktest.js';
+import { readFoldLayout } from '../reading/readFoldLayout.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
 import type { Report } from '../report/reportModel.js';
@@ -46,12 +48,25 @@ export async function runComparison(
     { onProgress: (fraction) => hooks.onProgress?.({ stage: 'aligning', fraction }) },
   );
 
+  const folds = settings.folds === null ? undefined : await readFoldLayout(settings.folds);
+  const integrity = checkBacktest(
+    {
+      panel,
+      baseline,
+      candidate,
+      ...(actuals === undefined ? {} : { actuals }),
+      ...(folds === undefined ? {} : { folds }),
+    },
+    { frequency: settings.frequency, embargo: settings.embargo, mode: settings.backtestChecks },
+  );
+
   const history =
     settings.pooling === 'scaled' && settings.scale === 'seasonal-naive'
       ? await readHistory(settings)
       : undefined;
   hooks.onProgress?.({ stage: 'testing', fraction: 0 });
   const report = evaluatePanel(panel, settings, {
+    integrity,
     ...(history === undefined ? {} : { history }),
     ...(hooks.resampleRunner === undefined ? {} : { resampleRunner: hooks.resampleRunner }),
   });

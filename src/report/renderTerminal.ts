@@ -1,4 +1,5 @@
 import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
+import { backtestChecksLines } from './renderBacktestChecks.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -71,6 +72,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`,
     );
   }
+  out.push(...backtestChecksLines(report, clean));
   const i = report.inputs;
   out.push(
     '',

@@ -1,0 +1,55 @@
+import type { IntegrityCheck } from '../integrity/checkResult.js';
+import { escapeMarkdown as esc } from './escapeMarkdown.js';
+import type { Report } from './reportModel.js';
+
+/** How many examples a line shows. */
+const SHOWN = 2;
+
+/**
+ * The comment's "Backtest checks" section: one line per check (ok / warn / fail, the count,
+ * two examples), then one line per check that could not run and why. Every example comes from
+ * an input file and is escaped.
+ */
+export function backtestChecksSection(report: Report): string[] {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
+    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
+    return [`**Backtest checks**: not run (${reasons.map(esc).join('; ')}).`, ''];
+  }
+  const mode =
+    integrity.mode === 'report'
+      ? ' Shown only: they do not change the verdict (backtest-checks report).'
+      : integrity.mode === 'warn'
+        ? ' Findings warn (backtest-checks warn).'
+        : '';
+  const step =
+    integrity.frequency === null
+      ? ''
+      : ` Steps of ${esc(integrity.frequency.text)} (${integrity.frequency.source}).`;
+  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ''];
+  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
+  for (const n of integrity.notRun) out.push(`- not run · ${n.id}: ${esc(n.reason)}`);
+  out.push('');
+  return out;
+}
+
+function checkLine(check: IntegrityCheck): string {
+  const shown = check.examples.slice(0, SHOWN).map(esc);
+  const examples = shown.length === 0 ? '' : `, e.g. ${shown.join('; ')}`;
+  return `${check.status} · ${check.id}: ${check.count}${examples}`;
+}
+
+/** The terminal's lines: the outcome, and each check that did not come out ok. */
+export function backtestChecksLines(report: Report, clean: (text: string) => string): string[] {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0) return [];
+  const flagged = integrity.checks.filter((c) => c.status !== 'ok');
+  const out = [
+    `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`,
+  ];
+  for (const c of flagged) {
+    const eg = c.examples.slice(0, SHOWN).map(clean).join('; ');
+    out.push(`  ${c.status} ${c.id}: ${c.count}${eg === '' ? '' : `, e.g. ${eg}`}`);
+  }
+  return out;
+}
