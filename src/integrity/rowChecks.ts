@@ -87,10 +87,10 @@ export function checkRows(input: RowCheckInput): {
       const o = origins[oIds[i]!]!;
       if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table, i));
       else if (countSteps && stepsAhead(o, t, f) !== h![i]) {
-        horizon.add(
-          () =>
-            `${describeTableRow(table, i)} (${stepsAhead(o, t, f)} steps of ${formatFrequency(f)})`,
-        );
+        horizon.add(() => {
+          const steps = stepsAhead(o, t, f);
+          return `${describeTableRow(table, i)} (${steps} step${steps === 1 ? '' : 's'} of ${formatFrequency(f)})`;
+        });
       }
       if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
         afterActuals.add(() => describeTableRow(table, i));
