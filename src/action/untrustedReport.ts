@@ -421,10 +421,17 @@ function readSettings(r: Reader): Settings {
     weights: r.field('weights').boolean(),
     adjust: r.field('adjust').oneOf(['holm', 'bh']),
     top: r.field('top').integer(),
-    frequency: r.field('frequency').matching(/^[0-9A-Za-z.]{1,20}$/, 'a frequency such as 1h'),
-    folds: r.field('folds').stringOrNull(),
-    embargo: r.field('embargo').integer(),
-    backtestChecks: r.field('backtestChecks').oneOf(CHECK_MODES),
+    // Absent from reports written before the backtest checks: their defaults.
+    frequency:
+      r.field('frequency').value === undefined
+        ? 'auto'
+        : r.field('frequency').matching(/^[0-9A-Za-z.]{1,20}$/, 'a frequency such as 1h'),
+    folds: r.field('folds').value === undefined ? null : r.field('folds').stringOrNull(),
+    embargo: r.field('embargo').value === undefined ? 0 : r.field('embargo').integer(),
+    backtestChecks:
+      r.field('backtestChecks').value === undefined
+        ? 'enforce'
+        : r.field('backtestChecks').oneOf(CHECK_MODES),
     json: r.field('json').stringOrNull(),
     markdown: r.field('markdown').stringOrNull(),
   };
