@@ -3,6 +3,7 @@ import { type Verdict, worstVerdict } from '../decision/verdict.js';
 import { noChecks } from '../integrity/checkPolicy.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
 import type { Settings } from '../settings/settings.js';
+import type { Stability } from '../stability/stabilityModel.js';
 import type {
   Comparison,
   InputsSummary,
@@ -22,6 +23,7 @@ export interface ReportParts {
   readonly pathSummary?: PathSummary | null;
   /** Backtest checks; absent for inputs with no rows to check (a pre-aggregated loss file). */
   readonly integrity?: IntegrityReport;
+  readonly stability?: Stability | null;
 }
 
 /**
@@ -86,6 +88,7 @@ export function buildReport(parts: ReportParts): Report {
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
     integrity,
+    stability: parts.stability ?? null,
   };
 }
 
