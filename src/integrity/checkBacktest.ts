@@ -135,19 +135,25 @@ function chooseFrequency(
     : { frequency: inferred.frequency, reason: '', source: 'inferred' };
 }
 
-/** Each series' distinct timestamps in time order. */
+/**
+ * Each series' distinct timestamps in time order: one pass, since alignment sorts the panel's
+ * rows by (series, timestamp, …).
+ */
 function pointsBySeries(panel: AlignedPanel, kind: 'number' | 'datetime'): TimePoint[][] {
   const points = panel.timestamps.map((label) => toTimePoint(label, kind)!);
-  const t = panel.timestamps.length;
-  const keys = new Float64Array(panel.size);
-  for (let p = 0; p < panel.size; p++) keys[p] = panel.series[p]! * t + panel.time[p]!;
-  keys.sort();
   const out: TimePoint[][] = panel.seriesNames.map(() => []);
-  for (let i = 0; i < keys.length; i++) {
-    if (i > 0 && keys[i] === keys[i - 1]) continue;
-    const key = keys[i]!;
-    const series = Math.floor(key / t);
-    out[series]!.push(points[key - series * t]!);
+  let lastSeries = -1;
+  let lastTime = -1;
+  for (let p = 0; p < panel.size; p++) {
+    const series = panel.series[p]!;
+    const time = panel.time[p]!;
+    if (series === lastSeries && time === lastTime) continue;
+    if (series === lastSeries && time < lastTime) {
+      throw new Error('the aligned panel is not sorted by series and timestamp');
+    }
+    out[series]!.push(points[time]!);
+    lastSeries = series;
+    lastTime = time;
   }
   return out;
 }

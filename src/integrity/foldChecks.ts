@@ -123,19 +123,15 @@ export function checkFolds(input: FoldCheckInput): {
     });
   }
 
-  // Evaluated rows inside their fold's test window.
+  // Evaluated rows inside their fold's test window (merged, sorted windows; binary search).
   const times = panel.timestamps.map((label) => toTimePoint(label, kind)!);
-  const all = [...folds.values()].flatMap((fold) => fold.test);
-  const testsOf = (p: number): Segment[] | undefined =>
-    panel.path === null ? all : folds.get(panel.paths[panel.path[p]!]!)?.test;
+  const windows = new Map<string, Window[]>();
+  for (const [name, fold] of folds) windows.set(name, mergeWindows(fold.test));
+  const anyFold = mergeWindows([...folds.values()].flatMap((fold) => fold.test));
   const outside = new FindingCollector();
   for (let p = 0; p < panel.size; p++) {
-    const tests = testsOf(p);
-    const t = times[panel.time[p]!]!;
-    const inside = tests?.some(
-      (s) => compareTimePoints(s.from, t) <= 0 && compareTimePoints(t, s.to) <= 0,
-    );
-    if (!inside) {
+    const tests = panel.path === null ? anyFold : windows.get(panel.paths[panel.path[p]!]!);
+    if (tests === undefined || !insideAny(tests, times[panel.time[p]!]!)) {
       outside.add(
         () =>
           `${describePanelRow(panel, p)}${tests === undefined ? ' (no such fold in the layout)' : ''}`,
@@ -162,4 +158,41 @@ function touches(train: Segment, test: Segment, h: number, n: number, f: Frequen
   const startsEarly =
     compareTimePoints(train.from, test.to) <= 0 || stepsAhead(test.to, train.from, f) <= n;
   return endsLate && startsEarly;
+}
+
+interface Window {
+  readonly from: TimePoint;
+  readonly to: TimePoint;
+}
+
+/** The union of segments as disjoint windows sorted by start. */
+function mergeWindows(segments: readonly Segment[]): Window[] {
+  const sorted = [...segments].sort((a, b) => compareTimePoints(a.from, b.from));
+  const out: { from: TimePoint; to: TimePoint }[] = [];
+  for (const s of sorted) {
+    const last = out[out.length - 1];
+    if (last !== undefined && compareTimePoints(s.from, last.to) <= 0) {
+      if (compareTimePoints(s.to, last.to) > 0) last.to = s.to;
+    } else {
+      out.push({ from: s.from, to: s.to });
+    }
+  }
+  return out;
+}
+
+/** Whether t lies in one of the sorted disjoint windows (both ends included). */
+function insideAny(windows: readonly Window[], t: TimePoint): boolean {
+  let lo = 0;
+  let hi = windows.length - 1;
+  let found = -1;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    if (compareTimePoints(windows[mid]!.from, t) <= 0) {
+      found = mid;
+      lo = mid + 1;
+    } else {
+      hi = mid - 1;
+    }
+  }
+  return found >= 0 && compareTimePoints(t, windows[found]!.to) <= 0;
 }

@@ -29,18 +29,19 @@ export function inferFrequency(
   kind: 'number' | 'datetime',
   series: readonly (readonly TimePoint[])[],
 ): FrequencyInference {
-  const all = series.flat();
   if (!series.some((points) => points.length >= 2)) {
     return { frequency: null, reason: 'no series has two different timestamps' };
   }
   if (kind === 'number') {
     return fromGaps(series, 'number', (a, b) => b.seconds - a.seconds);
   }
-  const first = all[0]!;
-  const oneTimeOfDay = all.every((p) => p.wallSecond === first.wallSecond);
+  const first = series.find((points) => points.length > 0)![0]!;
+  const every = (test: (p: TimePoint) => boolean): boolean =>
+    series.every((points) => points.every(test));
+  const oneTimeOfDay = every((p) => p.wallSecond === first.wallSecond);
   if (oneTimeOfDay) {
-    const oneDay = all.every((p) => p.dayOfMonth === first.dayOfMonth);
-    const monthEnds = all.every((p) => p.dayOfMonth === p.monthLength);
+    const oneDay = every((p) => p.dayOfMonth === first.dayOfMonth);
+    const monthEnds = every((p) => p.dayOfMonth === p.monthLength);
     if (oneDay || monthEnds) return fromGaps(series, 'month', (a, b) => b.month - a.month);
     return fromGaps(series, 'day', (a, b) => b.wallDay - a.wallDay);
   }

@@ -6,7 +6,7 @@ import { Tokenizer } from './tokenizer.js';
 const FOLD_NAMES = ['fold', 'path'];
 const REQUIRED = ['role', 'start', 'end'] as const;
 /** More segments than this are refused: a fold layout is small, a huge one is hostile. */
-export const MAX_SEGMENTS = 100_000;
+export const MAX_SEGMENTS = 10_000;
 
 /**
  * Pure reader of a fold layout file (CSV, or TSV with format 'tsv'): a header naming `fold`

@@ -2,8 +2,11 @@ import type { IntegrityCheck } from '../integrity/checkResult.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import type { Report } from './reportModel.js';
 
-/** How many examples a line shows. */
+/** How many examples a line shows, and how many characters of each. */
 const SHOWN = 2;
+const MAX_CHARS = 200;
+const clip = (text: string): string =>
+  text.length <= MAX_CHARS ? text : `${text.slice(0, MAX_CHARS)}…`;
 
 /**
  * The comment's "Backtest checks" section: one line per check (ok / warn / fail, the count,
@@ -34,7 +37,7 @@ export function backtestChecksSection(report: Report): string[] {
 }
 
 function checkLine(check: IntegrityCheck): string {
-  const shown = check.examples.slice(0, SHOWN).map(esc);
+  const shown = check.examples.slice(0, SHOWN).map((e) => esc(clip(e)));
   const examples = shown.length === 0 ? '' : `, e.g. ${shown.join('; ')}`;
   return `${check.status} · ${check.id}: ${check.count}${examples}`;
 }
@@ -48,7 +51,10 @@ export function backtestChecksLines(report: Report, clean: (text: string) => str
     `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`,
   ];
   for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map(clean).join('; ');
+    const eg = c.examples
+      .slice(0, SHOWN)
+      .map((e) => clean(clip(e)))
+      .join('; ');
     out.push(`  ${c.status} ${c.id}: ${c.count}${eg === '' ? '' : `, e.g. ${eg}`}`);
   }
   return out;
