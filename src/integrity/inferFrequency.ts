@@ -1,5 +1,28 @@
 import { type Frequency, formatFrequency } from './frequency.js';
+import { isWeekday } from './stepCount.js';
 import type { TimePoint } from './timePoint.js';
+
+const BUSINESS_DAILY: FrequencyInference = { frequency: { unit: 'businessDay', size: 1 } };
+
+/** Every date a weekday, and some series steps over a weekend (Friday to Monday). */
+function isBusinessDaily(series: readonly (readonly TimePoint[])[]): boolean {
+  let crossesWeekend = false;
+  for (const points of series) {
+    for (let i = 0; i < points.length; i++) {
+      if (!isWeekday(points[i]!.wallDay)) return false;
+      const from = points[i - 1]?.wallDay;
+      // 1970-01-02 (day 1) was a Friday.
+      if (
+        from !== undefined &&
+        points[i]!.wallDay - from === 3 &&
+        (((from - 1) % 7) + 7) % 7 === 0
+      ) {
+        crossesWeekend = true;
+      }
+    }
+  }
+  return crossesWeekend;
+}
 
 export type FrequencyInference =
   | { readonly frequency: Frequency }
@@ -17,6 +40,8 @@ const SLACK = 1e-6;
  * 1. date-times that all share one written time of day and either one day of the month or all
  *    fall on the last day of their month: calendar months (12 → a year);
  * 2. date-times that all share one written time of day: calendar days (multiples of 7 → weeks);
+ *    a one-day step whose dates are all weekdays and that steps over a weekend somewhere is
+ *    business days (Monday to Friday);
  * 3. other date-times: elapsed time between instants (so an hourly series in local-offset
  *    notation stays hourly across a DST change);
  * 4. numbers: the numeric gap.
@@ -43,7 +68,8 @@ export function inferFrequency(
     const oneDay = every((p) => p.dayOfMonth === first.dayOfMonth);
     const monthEnds = every((p) => p.dayOfMonth === p.monthLength);
     if (oneDay || monthEnds) return fromGaps(series, 'month', (a, b) => b.month - a.month);
-    return fromGaps(series, 'day', (a, b) => b.wallDay - a.wallDay);
+    const daily = fromGaps(series, 'day', (a, b) => b.wallDay - a.wallDay);
+    return daily.frequency?.size === 1 && isBusinessDaily(series) ? BUSINESS_DAILY : daily;
   }
   return fromGaps(series, 'second', (a, b) => b.seconds - a.seconds + (b.nanos - a.nanos) / 1e9);
 }

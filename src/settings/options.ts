@@ -200,7 +200,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     name: 'frequency',
     valueName: 'auto|STEP',
     defaultValue: 'auto',
-    help: 'step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps',
+    help: 'step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, bd for business days, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps',
   },
   {
     name: 'folds',

@@ -49,6 +49,25 @@ describe('frequency inference', () => {
     expect(inferred(['2024-01-01', '2024-01-02', '2024-01-05', '2024-01-06'])).toBe('1d');
   });
 
+  it('business days: weekdays only, stepping over weekends', () => {
+    // 2024-01-05 is a Friday, 2024-01-08 the Monday after.
+    const weekdays = [
+      '2024-01-03',
+      '2024-01-04',
+      '2024-01-05',
+      '2024-01-08',
+      '2024-01-09',
+      '2024-01-12',
+      '2024-01-15',
+    ];
+    expect(inferred(weekdays)).toBe('1bd');
+    // Weekdays that never reach a weekend are plain days; a weekend date makes it calendar days.
+    expect(inferred(['2024-01-08', '2024-01-09', '2024-01-10'])).toBe('1d');
+    expect(inferred([...weekdays, '2024-01-13'].sort())).toBe('1d');
+    // A Tuesday-to-Friday gap of 3 days is not a weekend.
+    expect(inferred(['2024-01-08', '2024-01-09', '2024-01-12'])).toBe('1d');
+  });
+
   it('monthly steps are calendar months (28 to 31 days), at the start or the end of the month', () => {
     const starts = ['2023-11-01', '2023-12-01', '2024-01-01', '2024-02-01', '2024-03-01'];
     expect(inferred(starts)).toBe('1mo');
@@ -151,6 +170,35 @@ describe('stepsAhead', () => {
     expect(stepsAhead(at('2024-01-03'), at('2024-01-08'), f('1w'))).toBe(1);
   });
 
+  it('counts business days: Friday to Monday is one step, weekends are skipped', () => {
+    expect(stepsAhead(at('2024-01-05'), at('2024-01-08'), f('1bd'))).toBe(1);
+    expect(stepsAhead(at('2024-01-05'), at('2024-01-12'), f('1bd'))).toBe(5);
+    expect(stepsAhead(at('2024-01-06'), at('2024-01-08'), f('1bd'))).toBe(1); // from a Saturday
+    expect(stepsAhead(at('2024-01-04'), at('2024-01-05'), f('1bd'))).toBe(1);
+    expect(stepsAhead(at('2024-01-04T18:00Z'), at('2024-01-05T09:00Z'), f('1bd'))).toBe(1);
+    expect(stepsAhead(at('2024-01-04T08:00Z'), at('2024-01-05T09:00Z'), f('1bd'))).toBe(2);
+    expect(stepsAhead(at('2023-12-29'), at('2024-01-31'), f('1bd'))).toBe(23);
+  });
+
+  it('business-day steps between dates agree with counting weekdays one by one (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: 20_000 }),
+        fc.integer({ min: 1, max: 60 }),
+        (a, span) => {
+          const iso = (d: number) =>
+            new Date(Date.UTC(1990, 0, 1) + d * 86_400_000).toISOString().slice(0, 10);
+          let weekdays = 0;
+          for (let d = a + 1; d <= a + span; d++) {
+            const w = new Date(Date.UTC(1990, 0, 1) + d * 86_400_000).getUTCDay();
+            if (w !== 0 && w !== 6) weekdays++;
+          }
+          return stepsAhead(at(iso(a)), at(iso(a + span)), f('1bd')) === weekdays;
+        },
+      ),
+    );
+  });
+
   it('counts calendar months, clamping the day to the shorter month', () => {
     expect(stepsAhead(at('2024-01-31'), at('2024-02-29'), f('1mo'))).toBe(1);
     expect(stepsAhead(at('2024-01-31'), at('2024-04-30'), f('1mo'))).toBe(3);
@@ -190,6 +238,7 @@ describe('parseFrequency', () => {
     expect(parseFrequency('1h')).toEqual({ unit: 'second', size: 3600 });
     expect(parseFrequency('15min')).toEqual({ unit: 'second', size: 900 });
     expect(parseFrequency('1w')).toEqual({ unit: 'day', size: 7 });
+    expect(parseFrequency('1bd')).toEqual({ unit: 'businessDay', size: 1 });
     expect(parseFrequency('1mo')).toEqual({ unit: 'month', size: 1 });
     expect(parseFrequency('1y')).toEqual({ unit: 'month', size: 12 });
     expect(parseFrequency('0.25')).toEqual({ unit: 'number', size: 0.25 });
@@ -202,7 +251,7 @@ describe('parseFrequency', () => {
     fc.assert(
       fc.property(
         fc.integer({ min: 1, max: 999 }),
-        fc.constantFrom('s', 'min', 'h', 'd', 'w', 'mo', 'q', 'y'),
+        fc.constantFrom('s', 'min', 'h', 'd', 'bd', 'w', 'mo', 'q', 'y'),
         (n, unit) => {
           const f = parseFrequency(`${n}${unit}`)!;
           expect(parseFrequency(formatFrequency(f))).toEqual(f);
