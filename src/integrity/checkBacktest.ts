@@ -111,8 +111,8 @@ function chooseFrequency(
     if ((f.unit === 'number') !== (kind === 'number')) {
       throw new InputError(
         kind === 'number'
-          ? 'frequency must be a plain number (such as 1) for numeric timestamps'
-          : 'frequency must have a unit (such as 1h, 1d, 1mo) for ISO 8601 timestamps',
+          ? `the frequency ${text} has a unit, but the timestamps are numbers: give a plain step such as 1`
+          : `the frequency ${text} is a plain number, but the timestamps are ISO 8601 date-times: give a unit such as 1h, 1d or 1mo`,
         { value: text },
       );
     }
