@@ -75,6 +75,13 @@ export async function runComparison(
 }
 
 async function runOnLossFile(path: string, settings: Settings, hooks: RunHooks): Promise<Report> {
+  if (settings.folds !== null || settings.frequency !== 'auto' || settings.embargo !== 0) {
+    // The backtest checks need forecast rows; a loss file has none, so these would do nothing.
+    throw new InputError(
+      'frequency, folds and embargo configure the backtest checks, which need the forecast files (baseline and candidate), not a loss file',
+      { file: path },
+    );
+  }
   const table = await readLossSeriesFile(path, {
     ...(settings.format === 'auto' ? {} : { format: settings.format }),
     ...(settings.columns.timestamp === undefined

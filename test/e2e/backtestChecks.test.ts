@@ -338,6 +338,22 @@ describe('backtest checks through dist/cli.js', () => {
     expect(r.stderr).toMatch(new RegExp(`${path.basename(bad)}:2: .*end.*2026-13-01`));
   });
 
+  it('a loss file has no rows to check: listed as not run; fold options with it are refused', () => {
+    const losses = writeText(
+      `timestamp,baseline_loss,candidate_loss\n${Array.from({ length: 40 }, (_, i) => `${i + 1},${1 + (i % 3)},${1 + (i % 4)}`).join('\n')}\n`,
+    );
+    const json = path.join(work, 'losses.json');
+    const r = runCli(['compare', '--losses', losses, '--resamples', '99', '--json', json]);
+    expect(r.stderr).toBe('');
+    const report = JSON.parse(readFileSync(json, 'utf8'));
+    expect(validate(report), JSON.stringify(validate.errors)).toBe(true);
+    expect(report.integrity.checks).toEqual([]);
+    expect(report.integrity.notRun).toHaveLength(ALL.length);
+    const refused = runCli(['compare', '--losses', losses, '--folds', cleanLayout]);
+    expect(refused.status).toBe(2);
+    expect(refused.stderr).toMatch(/need the forecast files/);
+  });
+
   it('the peeking candidate of the demo is caught', () => {
     const json = path.join(work, 'peeking.json');
     const r = runCli([
