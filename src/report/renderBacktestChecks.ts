@@ -1,4 +1,4 @@
-import type { IntegrityCheck } from '../integrity/checkResult.js';
+import type { CheckId, IntegrityCheck } from '../integrity/checkResult.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import type { Report } from './reportModel.js';
 
@@ -7,6 +7,21 @@ const SHOWN = 2;
 const MAX_CHARS = 200;
 const clip = (text: string): string =>
   text.length <= MAX_CHARS ? text : `${text.slice(0, MAX_CHARS)}…`;
+
+/** What each check looks for, in a few words (README, "Backtest checks", has the details). */
+const CHECK_LABELS: Readonly<Record<CheckId, string>> = {
+  'look-ahead': 'origin at or after the timestamp',
+  'horizon-steps': 'horizon differs from the steps from origin to timestamp',
+  'origin-after-actuals': 'issued after the last actual',
+  'origin-sets': 'origins in one file only',
+  'path-sets': 'paths in one file only',
+  'horizon-sets': 'horizons in one file only',
+  'time-spans': "timestamps outside the other file's span",
+  'series-coverage': 'series in one file only',
+  'fold-purge': 'training within the purge or embargo window',
+  'outside-test-window': "rows outside their fold's test window",
+  'exact-predictions': 'predictions equal to the actual far more often than the other model',
+};
 
 /**
  * The comment's "Backtest checks" section: one line per check (ok / warn / fail, the count,
@@ -39,7 +54,7 @@ export function backtestChecksSection(report: Report): string[] {
 function checkLine(check: IntegrityCheck): string {
   const shown = check.examples.slice(0, SHOWN).map((e) => esc(clip(e)));
   const examples = shown.length === 0 ? '' : `, e.g. ${shown.join('; ')}`;
-  return `${check.status} · ${check.id}: ${check.count}${examples}`;
+  return `${check.status} · ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
 
 /** The terminal's lines: the outcome, and each check that did not come out ok. */

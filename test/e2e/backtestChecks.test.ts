@@ -156,7 +156,7 @@ describe('backtest checks through dist/cli.js', () => {
     expect(run.report.verdict).toBe('pass');
     expect(run.status).toBe(0);
     expect(run.markdown).toMatch(/\*\*Backtest checks\*\*: ok\. Steps of 1d \(inferred\)\./);
-    expect(run.markdown).toMatch(/^- ok · look-ahead: 0$/m);
+    expect(run.markdown).toMatch(/^- ok · look-ahead \(origin at or after the timestamp\): 0$/m);
   });
 
   it('look-ahead: a candidate forecast issued on its target date fails the gate', () => {
@@ -173,7 +173,7 @@ describe('backtest checks through dist/cli.js', () => {
     expect(run.status).toBe(1);
     expect(run.report.reasons.join(' ')).toMatch(/A backtest check failed \(look-ahead\)/);
     expect(run.markdown).toMatch(
-      /^- fail · look-ahead: 59, e\.g\. candidate line \d+: series=old-town/m,
+      /^- fail · look-ahead \(origin at or after the timestamp\): 59, e\.g\. candidate line \d+: series=old-town/m,
     );
   });
 

@@ -34,7 +34,9 @@ describe('the backtest checks section', () => {
   it('one line per check with status, count and two examples, escaped and clipped', () => {
     const lines = backtestChecksSection(hostile);
     expect(lines[0]).toBe('**Backtest checks**: fail. Steps of 1h (given).');
-    const check = lines.find((l) => l.startsWith('- fail · look-ahead: 3, e.g. '))!;
+    const check = lines.find((l) =>
+      l.startsWith('- fail · look-ahead (origin at or after the timestamp): 3, e.g. '),
+    )!;
     expect(check).toContain('series=a\\|b @\u200Bteam timestamp=&lt;img src=x&gt;');
     expect(check).toContain(`${'x'.repeat(150)}`);
     expect(check).not.toContain('x'.repeat(300));
