@@ -30,6 +30,11 @@ export interface TimePoint {
   readonly monthLength: number;
 }
 
+/** readLabel's key of a date-time: seconds since 0000-01-01 shifted by 1e12, and nanoseconds. */
+const INSTANT_KEY = /^(\d{13})\.(\d{9})$/;
+/** The date and time of day as written in a label readLabel accepted as ISO 8601. */
+const WRITTEN_FIELDS = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?/;
+
 /**
  * The time point of a label of the given kind, or null when the label is not of that kind
  * (text order, or a number among dates). Labels reach here after alignment accepted them.
@@ -49,18 +54,24 @@ export function toTimePoint(label: string, kind: TimestampKind): TimePoint | nul
     };
   }
   if (reading.kind !== 'datetime') return null;
-  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
-  const nanos = Number(reading.key.slice(14));
-  const year = Number(label.slice(0, 4));
-  const month = Number(label.slice(5, 7));
-  const day = Number(label.slice(8, 10));
-  let wallSecond = 0;
-  if (label.length >= 16) {
-    const hour = Number(label.slice(11, 13));
-    const minute = Number(label.slice(14, 16));
-    const second = label[16] === ':' ? Number(label.slice(17, 19)) : 0;
-    wallSecond = hour * 3600 + minute * 60 + second + nanos / 1e9;
+  const instant = INSTANT_KEY.exec(reading.key);
+  const written = WRITTEN_FIELDS.exec(label);
+  if (instant === null || written === null) {
+    // readLabel's key or accepted spelling changed: a bug to fix here, never a guess.
+    throw new Error(`cannot take the instant and written date of ${JSON.stringify(label)}`);
   }
+  const seconds = Number(instant[1]) - 1e12;
+  const nanos = Number(instant[2]);
+  const year = Number(written[1]);
+  const month = Number(written[2]);
+  const day = Number(written[3]);
+  const wallSecond =
+    written[4] === undefined
+      ? 0
+      : Number(written[4]) * 3600 +
+        Number(written[5]) * 60 +
+        (written[6] === undefined ? 0 : Number(written[6])) +
+        nanos / 1e9;
   return {
     seconds,
     nanos,
