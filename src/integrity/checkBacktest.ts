@@ -39,7 +39,19 @@ export function checkBacktest(
   input: BacktestInput,
   settings: BacktestCheckSettings,
 ): IntegrityReport {
-  const { panel } = input;
+  // The checks read time as alignment's readLabel does (numbers, ISO 8601); labels read some
+  // other way are treated like text order: the time-based checks do not run.
+  const timestampKind = readableKind(input.panel.timestampKind, [
+    input.panel.timestamps,
+    input.baseline.timestamp.labels,
+    input.candidate.timestamp.labels,
+    ...(input.actuals === undefined ? [] : [input.actuals.timestamp.labels]),
+  ]);
+  const originKind = readableKind(input.panel.originKind, [
+    input.baseline.origin?.labels ?? [],
+    input.candidate.origin?.labels ?? [],
+  ]);
+  const panel: AlignedPanel = { ...input.panel, timestampKind, originKind };
   const frequency = chooseFrequency(panel, settings.frequency);
   const findings: CheckFinding[] = [];
   const notRun: CheckNotRun[] = [];
@@ -156,6 +168,15 @@ function pointsBySeries(panel: AlignedPanel, kind: 'number' | 'datetime'): TimeP
     lastTime = time;
   }
   return out;
+}
+
+/** `kind`, or 'text' when some label cannot be read as a time point of that kind. */
+function readableKind(kind: TimestampKind, lists: readonly (readonly string[])[]): TimestampKind {
+  if (kind === 'text') return kind;
+  for (const labels of lists) {
+    for (const label of labels) if (toTimePoint(label, kind) === null) return 'text';
+  }
+  return kind;
 }
 
 /** The latest timestamp over the files that carry actuals. */
