@@ -32,7 +32,26 @@ const cases = [
   })),
 ];
 
+const checksOf = async (baseline: string, candidate: string, columns: object) => {
+  const b = await readForecastFile(baseline, { role: 'baseline', columns, requireActual: true });
+  const c = await readForecastFile(candidate, { role: 'candidate', columns, requireActual: true });
+  const panel = alignPanel({ baseline: b, candidate: c });
+  return checkBacktest(
+    { panel, baseline: b, candidate: c },
+    { frequency: 'auto', embargo: 0, mode: 'enforce' },
+  );
+};
+
 describe('the backtest checks raise no false alarm on the clean backtests in the repository', () => {
+  it('control: the same harness does raise the alarm on the demo candidate that peeks', async () => {
+    const report = await checksOf(
+      path.join(examples, 'baseline.csv'),
+      path.join(examples, 'candidate-peeking.csv'),
+      demoColumns,
+    );
+    expect(report.outcome).toBe('fail');
+  });
+
   it('finds every reference fixture pair and the demo', () => {
     expect(cases.length).toBeGreaterThanOrEqual(14);
   });
