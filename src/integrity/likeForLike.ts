@@ -146,18 +146,19 @@ function timeSpans(b: ForecastTable, c: ForecastTable, kind: TimestampKind): Che
     mine: ReturnType<typeof span>,
     other: ReturnType<typeof span>,
     role: string,
+    otherRole: string,
   ): number => {
     let n = 0;
     for (const [key, label] of mine.keys) {
       if (order(key, other.first) < 0 || order(key, other.last) > 0) {
         n++;
-        found.add(() => `timestamp=${label} only in the ${role}'s span`);
+        found.add(() => `timestamp=${label} in the ${role}, outside the ${otherRole}'s span`);
       }
     }
     return n;
   };
-  const nb = outside(sb, sc, 'baseline');
-  const nc = outside(sc, sb, 'candidate');
+  const nb = outside(sb, sc, 'baseline', 'candidate');
+  const nc = outside(sc, sb, 'candidate', 'baseline');
   const label = (s: ReturnType<typeof span>) => `${s.keys.get(s.first)} to ${s.keys.get(s.last)}`;
   return {
     id: 'time-spans',

@@ -271,7 +271,9 @@ describe('backtest checks through dist/cli.js', () => {
     );
     const c = run.check('time-spans');
     expect(c).toMatchObject({ status: 'warn', count: 10 });
-    expect(c.examples[0]).toBe("timestamp=2026-03-04 only in the baseline's span");
+    expect(c.examples[0]).toBe(
+      "timestamp=2026-03-04 in the baseline, outside the candidate's span",
+    );
   });
 
   it('series-coverage: the candidate leaves out a zone', () => {
