@@ -1787,11 +1787,11 @@ var require_request = __commonJS({
           }
         } else if (headers && typeof headers === "object") {
           if (headers[Symbol.iterator]) {
-            for (const header of headers) {
-              if (!Array.isArray(header) || header.length !== 2) {
+            for (const header2 of headers) {
+              if (!Array.isArray(header2) || header2.length !== 2) {
                 throw new InvalidArgumentError("headers must be in key-value pair format");
               }
-              processHeader(this, header[0], header[1]);
+              processHeader(this, header2[0], header2[1]);
             }
           } else {
             const keys = Object.keys(headers);
@@ -4188,9 +4188,9 @@ var require_util2 = __commonJS({
       return "success";
     }
     function appendFetchMetadata(httpRequest) {
-      let header = null;
-      header = httpRequest.mode;
-      httpRequest.headersList.set("sec-fetch-mode", header, true);
+      let header2 = null;
+      header2 = httpRequest.mode;
+      httpRequest.headersList.set("sec-fetch-mode", header2, true);
     }
     function appendRequestOriginHeader(request2) {
       let serializedOrigin = request2.origin;
@@ -5790,7 +5790,7 @@ var require_client_h1 = __commonJS({
       kResume,
       kHTTPContext
     } = require_symbols();
-    var constants3 = require_constants2();
+    var constants4 = require_constants2();
     var EMPTY_BUF = Buffer.alloc(0);
     var FastBuffer = Buffer[Symbol.species];
     var addListener = util.addListener;
@@ -5865,7 +5865,7 @@ var require_client_h1 = __commonJS({
       constructor(client, socket, { exports: exports2 }) {
         assert(Number.isFinite(client[kMaxHeadersSize]) && client[kMaxHeadersSize] > 0);
         this.llhttp = exports2;
-        this.ptr = this.llhttp.llhttp_alloc(constants3.TYPE.RESPONSE);
+        this.ptr = this.llhttp.llhttp_alloc(constants4.TYPE.RESPONSE);
         this.client = client;
         this.socket = socket;
         this.timeout = null;
@@ -5960,11 +5960,11 @@ var require_client_h1 = __commonJS({
             currentBufferRef = null;
           }
           const offset = llhttp.llhttp_get_error_pos(this.ptr) - currentBufferPtr;
-          if (ret !== constants3.ERROR.OK) {
+          if (ret !== constants4.ERROR.OK) {
             const body = data.subarray(offset);
-            if (ret === constants3.ERROR.PAUSED_UPGRADE) {
+            if (ret === constants4.ERROR.PAUSED_UPGRADE) {
               this.onUpgrade(body);
-            } else if (ret === constants3.ERROR.PAUSED) {
+            } else if (ret === constants4.ERROR.PAUSED) {
               this.paused = true;
               socket.unshift(body);
             } else {
@@ -5987,10 +5987,10 @@ var require_client_h1 = __commonJS({
         } finally {
           currentParser = null;
         }
-        if (ret === constants3.ERROR.OK) {
+        if (ret === constants4.ERROR.OK) {
           return null;
         }
-        if (ret === constants3.ERROR.PAUSED || ret === constants3.ERROR.PAUSED_UPGRADE) {
+        if (ret === constants4.ERROR.PAUSED || ret === constants4.ERROR.PAUSED_UPGRADE) {
           this.paused = true;
           return null;
         }
@@ -6007,7 +6007,7 @@ var require_client_h1 = __commonJS({
           const len = new Uint8Array(llhttp.memory.buffer, ptr).indexOf(0);
           message = "Response does not match the HTTP/1.1 protocol (" + Buffer.from(llhttp.memory.buffer, ptr, len).toString() + ")";
         }
-        return new HTTPParserError(message, constants3.ERROR[ret], data);
+        return new HTTPParserError(message, constants4.ERROR[ret], data);
       }
       destroy() {
         assert(this.ptr != null);
@@ -6187,7 +6187,7 @@ var require_client_h1 = __commonJS({
           socket[kBlocking] = false;
           client[kResume]();
         }
-        return pause ? constants3.ERROR.PAUSED : 0;
+        return pause ? constants4.ERROR.PAUSED : 0;
       }
       onBody(buf) {
         const { client, socket, statusCode, maxResponseSize } = this;
@@ -6209,7 +6209,7 @@ var require_client_h1 = __commonJS({
         }
         this.bytesRead += buf.length;
         if (request2.onData(buf) === false) {
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         }
       }
       onMessageComplete() {
@@ -6245,13 +6245,13 @@ var require_client_h1 = __commonJS({
         if (socket[kWriting]) {
           assert(client[kRunning] === 0);
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (!shouldKeepAlive) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (socket[kReset] && client[kRunning] === 0) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (client[kPipelining] == null || client[kPipelining] === 1) {
           setImmediate(() => client[kResume]());
         } else {
@@ -6542,22 +6542,22 @@ var require_client_h1 = __commonJS({
       if (blocking) {
         socket[kBlocking] = true;
       }
-      let header = `${method} ${path7} HTTP/1.1\r
+      let header2 = `${method} ${path7} HTTP/1.1\r
 `;
       if (typeof host === "string") {
-        header += `host: ${host}\r
+        header2 += `host: ${host}\r
 `;
       } else {
-        header += client[kHostHeader];
+        header2 += client[kHostHeader];
       }
       if (upgrade) {
-        header += `connection: upgrade\r
+        header2 += `connection: upgrade\r
 upgrade: ${upgrade}\r
 `;
       } else if (client[kPipelining] && !socket[kReset]) {
-        header += "connection: keep-alive\r\n";
+        header2 += "connection: keep-alive\r\n";
       } else {
-        header += "connection: close\r\n";
+        header2 += "connection: close\r\n";
       }
       if (Array.isArray(headers)) {
         for (let n = 0; n < headers.length; n += 2) {
@@ -6565,41 +6565,41 @@ upgrade: ${upgrade}\r
           const val = headers[n + 1];
           if (Array.isArray(val)) {
             for (let i = 0; i < val.length; i++) {
-              header += `${key}: ${val[i]}\r
+              header2 += `${key}: ${val[i]}\r
 `;
             }
           } else {
-            header += `${key}: ${val}\r
+            header2 += `${key}: ${val}\r
 `;
           }
         }
       }
       if (channels.sendHeaders.hasSubscribers) {
-        channels.sendHeaders.publish({ request: request2, headers: header, socket });
+        channels.sendHeaders.publish({ request: request2, headers: header2, socket });
       }
       if (!body || bodyLength === 0) {
-        writeBuffer(abort, null, client, request2, socket, contentLength, header, expectsPayload);
+        writeBuffer(abort, null, client, request2, socket, contentLength, header2, expectsPayload);
       } else if (util.isBuffer(body)) {
-        writeBuffer(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+        writeBuffer(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
       } else if (util.isBlobLike(body)) {
         if (typeof body.stream === "function") {
-          writeIterable(abort, body.stream(), client, request2, socket, contentLength, header, expectsPayload);
+          writeIterable(abort, body.stream(), client, request2, socket, contentLength, header2, expectsPayload);
         } else {
-          writeBlob(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+          writeBlob(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
         }
       } else if (util.isStream(body)) {
-        writeStream(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+        writeStream(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
       } else if (util.isIterable(body)) {
-        writeIterable(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+        writeIterable(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
       } else {
         assert(false);
       }
       return true;
     }
-    function writeStream(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    function writeStream(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       assert(contentLength !== 0 || client[kRunning] === 0, "stream body cannot be pipelined");
       let finished = false;
-      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header });
+      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header: header2 });
       const onData = function(chunk) {
         if (finished) {
           return;
@@ -6665,22 +6665,22 @@ upgrade: ${upgrade}\r
         setImmediate(onClose);
       }
     }
-    function writeBuffer(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    function writeBuffer(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       try {
         if (!body) {
           if (contentLength === 0) {
-            socket.write(`${header}content-length: 0\r
+            socket.write(`${header2}content-length: 0\r
 \r
 `, "latin1");
           } else {
             assert(contentLength === null, "no body must not have content length");
-            socket.write(`${header}\r
+            socket.write(`${header2}\r
 `, "latin1");
           }
         } else if (util.isBuffer(body)) {
           assert(contentLength === body.byteLength, "buffer body must have content length");
           socket.cork();
-          socket.write(`${header}content-length: ${contentLength}\r
+          socket.write(`${header2}content-length: ${contentLength}\r
 \r
 `, "latin1");
           socket.write(body);
@@ -6696,7 +6696,7 @@ upgrade: ${upgrade}\r
         abort(err);
       }
     }
-    async function writeBlob(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    async function writeBlob(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       assert(contentLength === body.size, "blob body must have content length");
       try {
         if (contentLength != null && contentLength !== body.size) {
@@ -6704,7 +6704,7 @@ upgrade: ${upgrade}\r
         }
         const buffer = Buffer.from(await body.arrayBuffer());
         socket.cork();
-        socket.write(`${header}content-length: ${contentLength}\r
+        socket.write(`${header2}content-length: ${contentLength}\r
 \r
 `, "latin1");
         socket.write(buffer);
@@ -6719,7 +6719,7 @@ upgrade: ${upgrade}\r
         abort(err);
       }
     }
-    async function writeIterable(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    async function writeIterable(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       assert(contentLength !== 0 || client[kRunning] === 0, "iterator body cannot be pipelined");
       let callback = null;
       function onDrain() {
@@ -6738,7 +6738,7 @@ upgrade: ${upgrade}\r
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
-      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header });
+      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header: header2 });
       try {
         for await (const chunk of body) {
           if (socket[kError]) {
@@ -6756,19 +6756,19 @@ upgrade: ${upgrade}\r
       }
     }
     var AsyncWriter = class {
-      constructor({ abort, socket, request: request2, contentLength, client, expectsPayload, header }) {
+      constructor({ abort, socket, request: request2, contentLength, client, expectsPayload, header: header2 }) {
         this.socket = socket;
         this.request = request2;
         this.contentLength = contentLength;
         this.client = client;
         this.bytesWritten = 0;
         this.expectsPayload = expectsPayload;
-        this.header = header;
+        this.header = header2;
         this.abort = abort;
         socket[kWriting] = true;
       }
       write(chunk) {
-        const { socket, request: request2, contentLength, client, bytesWritten, expectsPayload, header } = this;
+        const { socket, request: request2, contentLength, client, bytesWritten, expectsPayload, header: header2 } = this;
         if (socket[kError]) {
           throw socket[kError];
         }
@@ -6791,10 +6791,10 @@ upgrade: ${upgrade}\r
             socket[kReset] = true;
           }
           if (contentLength === null) {
-            socket.write(`${header}transfer-encoding: chunked\r
+            socket.write(`${header2}transfer-encoding: chunked\r
 `, "latin1");
           } else {
-            socket.write(`${header}content-length: ${contentLength}\r
+            socket.write(`${header2}content-length: ${contentLength}\r
 \r
 `, "latin1");
           }
@@ -6818,7 +6818,7 @@ ${len.toString(16)}\r
         return ret;
       }
       end() {
-        const { socket, contentLength, client, bytesWritten, expectsPayload, header, request: request2 } = this;
+        const { socket, contentLength, client, bytesWritten, expectsPayload, header: header2, request: request2 } = this;
         request2.onRequestSent();
         socket[kWriting] = false;
         if (socket[kError]) {
@@ -6829,11 +6829,11 @@ ${len.toString(16)}\r
         }
         if (bytesWritten === 0) {
           if (expectsPayload) {
-            socket.write(`${header}content-length: 0\r
+            socket.write(`${header2}content-length: 0\r
 \r
 `, "latin1");
           } else {
-            socket.write(`${header}\r
+            socket.write(`${header2}\r
 `, "latin1");
           }
         } else if (contentLength === null) {
@@ -7563,15 +7563,15 @@ var require_redirect_handler = __commonJS({
         }
       }
     }
-    function shouldRemoveHeader(header, removeContent, unknownOrigin) {
-      if (header.length === 4) {
-        return util.headerNameToString(header) === "host";
+    function shouldRemoveHeader(header2, removeContent, unknownOrigin) {
+      if (header2.length === 4) {
+        return util.headerNameToString(header2) === "host";
       }
-      if (removeContent && util.headerNameToString(header).startsWith("content-")) {
+      if (removeContent && util.headerNameToString(header2).startsWith("content-")) {
         return true;
       }
-      if (unknownOrigin && (header.length === 13 || header.length === 6 || header.length === 19)) {
-        const name = util.headerNameToString(header);
+      if (unknownOrigin && (header2.length === 13 || header2.length === 6 || header2.length === 19)) {
+        const name = util.headerNameToString(header2);
         return name === "authorization" || name === "cookie" || name === "proxy-authorization";
       }
       return false;
@@ -11959,14 +11959,14 @@ var require_headers = __commonJS({
     function fill(headers, object) {
       if (Array.isArray(object)) {
         for (let i = 0; i < object.length; ++i) {
-          const header = object[i];
-          if (header.length !== 2) {
+          const header2 = object[i];
+          if (header2.length !== 2) {
             throw webidl.errors.exception({
               header: "Headers constructor",
-              message: `expected name/value pair to be length 2, found ${header.length}.`
+              message: `expected name/value pair to be length 2, found ${header2.length}.`
             });
           }
-          appendHeader(headers, header[0], header[1]);
+          appendHeader(headers, header2[0], header2[1]);
         }
       } else if (typeof object === "object" && object !== null) {
         const keys = Object.keys(object);
@@ -15410,10 +15410,10 @@ var require_util5 = __commonJS({
       const serializedB = URLSerializer(B, excludeFragment);
       return serializedA === serializedB;
     }
-    function getFieldValues(header) {
-      assert(header !== null);
+    function getFieldValues(header2) {
+      assert(header2 !== null);
       const values = [];
-      for (let value of header.split(",")) {
+      for (let value of header2.split(",")) {
         value = value.trim();
         if (isValidHeaderName(value)) {
           values.push(value);
@@ -16312,20 +16312,20 @@ var require_parse = __commonJS({
     var { isCTLExcludingHtab } = require_util6();
     var { collectASequenceOfCodePointsFast } = require_data_url();
     var assert = __require("node:assert");
-    function parseSetCookie(header) {
-      if (isCTLExcludingHtab(header)) {
+    function parseSetCookie(header2) {
+      if (isCTLExcludingHtab(header2)) {
         return null;
       }
       let nameValuePair = "";
       let unparsedAttributes = "";
       let name = "";
       let value = "";
-      if (header.includes(";")) {
+      if (header2.includes(";")) {
         const position = { position: 0 };
-        nameValuePair = collectASequenceOfCodePointsFast(";", header, position);
-        unparsedAttributes = header.slice(position.position);
+        nameValuePair = collectASequenceOfCodePointsFast(";", header2, position);
+        unparsedAttributes = header2.slice(position.position);
       } else {
-        nameValuePair = header;
+        nameValuePair = header2;
       }
       if (!nameValuePair.includes("=")) {
         value = nameValuePair;
@@ -19574,9 +19574,9 @@ var require_lib = __commonJS({
               }
               yield response.readBody();
               if (parsedRedirectUrl.hostname !== parsedUrl.hostname) {
-                for (const header in headers) {
-                  if (header.toLowerCase() === "authorization") {
-                    delete headers[header];
+                for (const header2 in headers) {
+                  if (header2.toLowerCase() === "authorization") {
+                    delete headers[header2];
                   }
                 }
               }
@@ -19729,15 +19729,15 @@ var require_lib = __commonJS({
        * For headers that must always be a single string (like Content-Type), use the
        * specialized _getExistingOrDefaultContentTypeHeader method instead.
        */
-      _getExistingOrDefaultHeader(additionalHeaders, header, _default) {
+      _getExistingOrDefaultHeader(additionalHeaders, header2, _default) {
         let clientHeader;
         if (this.requestOptions && this.requestOptions.headers) {
-          const headerValue = lowercaseKeys3(this.requestOptions.headers)[header];
+          const headerValue = lowercaseKeys3(this.requestOptions.headers)[header2];
           if (headerValue) {
             clientHeader = typeof headerValue === "number" ? headerValue.toString() : headerValue;
           }
         }
-        const additionalValue = additionalHeaders[header];
+        const additionalValue = additionalHeaders[header2];
         if (additionalValue !== void 0) {
           return typeof additionalValue === "number" ? additionalValue.toString() : additionalValue;
         }
@@ -19923,6 +19923,145 @@ var require_lib = __commonJS({
     };
     exports.HttpClient = HttpClient3;
     var lowercaseKeys3 = (obj) => Object.keys(obj).reduce((c, k) => (c[k.toLowerCase()] = obj[k], c), {});
+  }
+});
+
+// node_modules/@octokit/request/node_modules/content-type/dist/index.js
+var require_dist = __commonJS({
+  "node_modules/@octokit/request/node_modules/content-type/dist/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.format = format;
+    exports.parse = parse3;
+    var TEXT_REGEXP = /^[\u0009\u0020-\u007e\u0080-\u00ff]*$/;
+    var TOKEN_REGEXP = /^[!#$%&'*+.^_`|~0-9A-Za-z-]+$/;
+    var QUOTE_REGEXP = /[\\"]/g;
+    var TYPE_REGEXP = /^[!#$%&'*+.^_`|~0-9A-Za-z-]+\/[!#$%&'*+.^_`|~0-9A-Za-z-]+$/;
+    var NullObject = /* @__PURE__ */ (() => {
+      const C = function() {
+      };
+      C.prototype = /* @__PURE__ */ Object.create(null);
+      return C;
+    })();
+    function format(obj) {
+      const { type, parameters } = obj;
+      if (!type || !TYPE_REGEXP.test(type)) {
+        throw new TypeError(`Invalid type: ${type}`);
+      }
+      let result = type;
+      if (parameters) {
+        for (const param of Object.keys(parameters)) {
+          if (!TOKEN_REGEXP.test(param)) {
+            throw new TypeError(`Invalid parameter name: ${param}`);
+          }
+          result += `; ${param}=${qstring(parameters[param])}`;
+        }
+      }
+      return result;
+    }
+    function parse3(header2, options) {
+      const stopChar = options?.comma === true ? COMMA : 65536;
+      const len = header2.length;
+      let index = skipOWS(header2, options?.start ?? 0, len);
+      const valueStart = index;
+      index = skipValue(header2, index, len, stopChar);
+      const valueEnd = trailingOWS(header2, valueStart, index);
+      const type = header2.slice(valueStart, valueEnd).toLowerCase();
+      if (options?.parameters === false) {
+        return { type, index, parameters: new NullObject() };
+      }
+      return parseParameters(header2, type, index, len, stopChar);
+    }
+    var SP = 32;
+    var HTAB = 9;
+    var SEMI = 59;
+    var EQ = 61;
+    var DQUOTE = 34;
+    var BSLASH = 92;
+    var COMMA = 44;
+    function parseParameters(header2, type, index, len, stopChar) {
+      const parameters = new NullObject();
+      parameter: while (index < len) {
+        if (header2.charCodeAt(index) === stopChar)
+          break;
+        index = skipOWS(header2, index + 1, len);
+        const keyStart = index;
+        while (index < len) {
+          const code = header2.charCodeAt(index);
+          if (code === stopChar)
+            break parameter;
+          if (code === SEMI)
+            continue parameter;
+          if (code === EQ) {
+            const keyEnd = trailingOWS(header2, keyStart, index);
+            const key = header2.slice(keyStart, keyEnd).toLowerCase();
+            index = skipOWS(header2, index + 1, len);
+            if (index < len && header2.charCodeAt(index) === DQUOTE) {
+              index++;
+              let value = "";
+              while (index < len) {
+                const code2 = header2.charCodeAt(index++);
+                if (code2 === DQUOTE) {
+                  index = skipValue(header2, index, len, stopChar);
+                  if (parameters[key] === void 0)
+                    parameters[key] = value;
+                  break;
+                }
+                if (code2 === BSLASH && index < len) {
+                  value += header2[index++];
+                  continue;
+                }
+                value += String.fromCharCode(code2);
+              }
+              continue parameter;
+            }
+            const valueStart = index;
+            index = skipValue(header2, index, len, stopChar);
+            if (parameters[key] === void 0) {
+              const valueEnd = trailingOWS(header2, valueStart, index);
+              parameters[key] = header2.slice(valueStart, valueEnd);
+            }
+            continue parameter;
+          }
+          index++;
+        }
+      }
+      return { type, index, parameters };
+    }
+    function skipValue(str, index, len, stopChar) {
+      while (index < len) {
+        const code = str.charCodeAt(index);
+        if (code === SEMI || code === stopChar)
+          break;
+        index++;
+      }
+      return index;
+    }
+    function skipOWS(header2, index, len) {
+      while (index < len) {
+        const char = header2.charCodeAt(index);
+        if (char !== SP && char !== HTAB)
+          break;
+        index++;
+      }
+      return index;
+    }
+    function trailingOWS(header2, start, end) {
+      while (end > start) {
+        const char = header2.charCodeAt(end - 1);
+        if (char !== SP && char !== HTAB)
+          break;
+        end--;
+      }
+      return end;
+    }
+    function qstring(str) {
+      if (TOKEN_REGEXP.test(str))
+        return str;
+      if (TEXT_REGEXP.test(str))
+        return `"${str.replace(QUOTE_REGEXP, "\\$&")}"`;
+      throw new TypeError(`Invalid parameter value: ${str}`);
+    }
   }
 });
 
@@ -32109,7 +32248,7 @@ var require_lib140 = __commonJS({
 
 // src/action/run.ts
 import { createHash as createHash2 } from "node:crypto";
-import { appendFile as appendFile2, mkdir as mkdir2, readFile as readFile2, stat as stat3, writeFile as writeFile2 } from "node:fs/promises";
+import { appendFile as appendFile2, mkdir as mkdir2, readFile as readFile2, writeFile as writeFile2 } from "node:fs/promises";
 import path6 from "node:path";
 
 // src/core/inputError.ts
@@ -32120,16 +32259,30 @@ var InputError = class extends Error {
     this.name = "InputError";
     this.location = location;
   }
-  /** One paragraph: "file:line: message (column "c", value "v")". */
+  /**
+   * One line: "file:line: message (column "c", value "v")". Everything echoed from the input
+   * (file and column names, values, and whatever the message quotes, such as a series name) is
+   * passed through `printable`, so the line cannot be broken into several, and a name cannot
+   * start a line that the Actions runner would read as a workflow command (`::error::…`).
+   */
   describe() {
     const { file, line, column, value } = this.location;
     const where = file === void 0 ? "" : line === void 0 ? `${file}: ` : `${file}:${line}: `;
     const details = [];
     if (column !== void 0) details.push(`column "${column}"`);
     if (value !== void 0) details.push(`value ${JSON.stringify(truncate(value, 80))}`);
-    return `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`;
+    return printable(
+      `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`
+    );
   }
 };
+function printable(text2) {
+  return text2.replace(
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are the target
+    /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g,
+    (ch) => ch === "\n" ? "\\n" : ch === "\r" ? "\\r" : ch === "	" ? "\\t" : `\\u{${ch.codePointAt(0)?.toString(16).toUpperCase().padStart(4, "0")}}`
+  );
+}
 function truncate(text2, max) {
   return text2.length <= max ? text2 : `${text2.slice(0, max)}\u2026`;
 }
@@ -32165,7 +32318,7 @@ var LOSS_LABELS = {
 
 // src/report/escapeMarkdown.ts
 function escapeMarkdown(text2) {
-  return text2.replace(/[\r\n\t]+/g, " ").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B");
+  return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
 }
 
 // src/settings/defaultConfidence.ts
@@ -32199,6 +32352,43 @@ function intervalNote(report) {
   return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
 }
 
+// src/report/renderBacktestChecks.ts
+var SHOWN = 2;
+var MAX_CHARS = 200;
+var clip = (text2) => text2.length <= MAX_CHARS ? text2 : `${text2.slice(0, MAX_CHARS)}\u2026`;
+var CHECK_LABELS = {
+  "look-ahead": "origin at or after the timestamp",
+  "horizon-steps": "horizon differs from the steps from origin to timestamp",
+  "origin-after-actuals": "issued after the last actual",
+  "origin-sets": "origins in one file only",
+  "path-sets": "paths in one file only",
+  "horizon-sets": "horizons in one file only",
+  "time-spans": "timestamps outside the other file's span",
+  "series-coverage": "series in one file only",
+  "fold-purge": "training within the purge or embargo window",
+  "outside-test-window": "rows outside their fold's test window",
+  "exact-predictions": "predictions equal to the actual far more often than the other model"
+};
+function backtestChecksSection(report) {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
+    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
+    return [`**Backtest checks**: not run (${reasons.map(escapeMarkdown).join("; ")}).`, ""];
+  }
+  const mode = integrity.mode === "report" ? " Shown only: they do not change the verdict (backtest-checks report)." : integrity.mode === "warn" ? " Findings warn (backtest-checks warn)." : "";
+  const step = integrity.frequency === null ? "" : ` Steps of ${escapeMarkdown(integrity.frequency.text)} (${integrity.frequency.source}).`;
+  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ""];
+  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
+  for (const n of integrity.notRun) out.push(`- not run \xB7 ${n.id}: ${escapeMarkdown(n.reason)}`);
+  out.push("");
+  return out;
+}
+function checkLine(check) {
+  const shown = check.examples.slice(0, SHOWN).map((e) => escapeMarkdown(clip(e)));
+  const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
+  return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
+}
+
 // src/report/renderMarkdown.ts
 var VERDICT_WORDS = { pass: "PASS", warn: "WARN", fail: "FAIL" };
 function renderMarkdown(report, options = {}) {
@@ -32210,6 +32400,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
   if (reasons.length > 0) {
     lines.push("**Why**", "");
@@ -32442,6 +32633,9 @@ function planComment(eventName, payload, pullRequestInput, envSha) {
       };
     }
     case "push": {
+      const ref = text(event.ref) ?? "";
+      if (ref.startsWith("refs/tags/"))
+        return { kind: "none", reason: `a tag push (${ref}) belongs to no pull request` };
       if (pullRequestInput !== null) return { kind: "pull-request", number: pullRequestInput };
       const sha = text(event.after) ?? envSha;
       if (sha === null || /^0+$/.test(sha))
@@ -32964,9 +33158,9 @@ var HttpClient = class {
           }
           yield response.readBody();
           if (parsedRedirectUrl.hostname !== parsedUrl.hostname) {
-            for (const header in headers) {
-              if (header.toLowerCase() === "authorization") {
-                delete headers[header];
+            for (const header2 in headers) {
+              if (header2.toLowerCase() === "authorization") {
+                delete headers[header2];
               }
             }
           }
@@ -33119,15 +33313,15 @@ var HttpClient = class {
    * For headers that must always be a single string (like Content-Type), use the
    * specialized _getExistingOrDefaultContentTypeHeader method instead.
    */
-  _getExistingOrDefaultHeader(additionalHeaders, header, _default) {
+  _getExistingOrDefaultHeader(additionalHeaders, header2, _default) {
     let clientHeader;
     if (this.requestOptions && this.requestOptions.headers) {
-      const headerValue = lowercaseKeys(this.requestOptions.headers)[header];
+      const headerValue = lowercaseKeys(this.requestOptions.headers)[header2];
       if (headerValue) {
         clientHeader = typeof headerValue === "number" ? headerValue.toString() : headerValue;
       }
     }
-    const additionalValue = additionalHeaders[header];
+    const additionalValue = additionalHeaders[header2];
     if (additionalValue !== void 0) {
       return typeof additionalValue === "number" ? additionalValue.toString() : additionalValue;
     }
@@ -33638,8 +33832,8 @@ var Summary = class {
         if (typeof cell === "string") {
           return this.wrap("td", cell);
         }
-        const { header, data, colspan, rowspan } = cell;
-        const tag = header ? "th" : "td";
+        const { header: header2, data, colspan, rowspan } = cell;
+        const tag = header2 ? "th" : "td";
         const attrs = Object.assign(Object.assign({}, colspan && { colspan }), rowspan && { rowspan });
         return this.wrap(tag, data, attrs);
       }).join("");
@@ -35290,189 +35484,8 @@ function withDefaults(oldDefaults, newDefaults) {
 }
 var endpoint = withDefaults(null, DEFAULTS);
 
-// node_modules/content-type/dist/index.js
-var SP = 32;
-var HTAB = 9;
-var SEMI = 59;
-var EQ = 61;
-var DQUOTE = 34;
-var BSLASH = 92;
-var COMMA = 44;
-var LOWER_CASE = 1;
-var OWS = 2;
-var SEMI_FLAG = 4;
-var COMMA_FLAG = 8;
-var TOKEN_FLAG = 16;
-var NON_ASCII = 65280;
-var CASE_FLAGS = LOWER_CASE | NON_ASCII;
-var CHAR_MAP = new Uint8Array(256);
-CHAR_MAP[HTAB] |= OWS;
-CHAR_MAP[SP] |= OWS;
-CHAR_MAP[SEMI] |= SEMI_FLAG;
-CHAR_MAP[COMMA] |= COMMA_FLAG;
-for (let code = 128; code <= 255; code++) {
-  CHAR_MAP[code] |= LOWER_CASE;
-}
-for (const char of "!#$%&'*+-.^_`|~") {
-  CHAR_MAP[char.charCodeAt(0)] |= TOKEN_FLAG;
-}
-for (let code = 48; code <= 57; code++) {
-  CHAR_MAP[code] |= TOKEN_FLAG;
-}
-for (let code = 65; code <= 90; code++) {
-  CHAR_MAP[code] |= LOWER_CASE | TOKEN_FLAG;
-}
-for (let code = 97; code <= 122; code++) {
-  CHAR_MAP[code] |= TOKEN_FLAG;
-}
-var NullObject = /* @__PURE__ */ (() => {
-  const C = function() {
-  };
-  C.prototype = /* @__PURE__ */ Object.create(null);
-  return C;
-})();
-function parse2(header, options) {
-  const stopFlags = SEMI_FLAG | (options?.comma === true ? COMMA_FLAG : 0);
-  const len = header.length;
-  let valueStart = options?.start ?? 0;
-  while ((CHAR_MAP[header.charCodeAt(valueStart)] & OWS) !== 0) {
-    valueStart++;
-  }
-  let index = valueStart;
-  let typeFlags = 0;
-  let whitespace = -1;
-  let stop = options?.parameters === false ? COMMA_FLAG : 0;
-  while (index < len) {
-    const code = header.charCodeAt(index);
-    const flags = CHAR_MAP[code];
-    if ((flags & stopFlags) !== 0) {
-      stop |= flags & COMMA_FLAG;
-      break;
-    }
-    if ((flags & OWS) !== 0) {
-      if (whitespace === -1)
-        whitespace = index;
-    } else {
-      whitespace = -1;
-    }
-    typeFlags |= code & NON_ASCII | flags;
-    index++;
-  }
-  const valueEnd = whitespace === -1 ? index : whitespace;
-  const value = header.slice(valueStart, valueEnd);
-  const type = (typeFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
-  if (index === len || stop !== 0) {
-    return { type, index, parameters: new NullObject() };
-  }
-  return parseParameters(header, type, index, len, stopFlags);
-}
-function parseParameters(header, type, index, len, stopFlags) {
-  const parameters = new NullObject();
-  parameter: while (index < len) {
-    index++;
-    while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
-      index++;
-    }
-    const keyStart = index;
-    let keyFlags = 0;
-    let keyWhitespace = -1;
-    while (index < len) {
-      const code = header.charCodeAt(index);
-      const flags = CHAR_MAP[code];
-      if ((flags & stopFlags) !== 0) {
-        if ((flags & COMMA_FLAG) !== 0)
-          break parameter;
-        continue parameter;
-      }
-      if (code === EQ) {
-        const keyEnd = keyWhitespace === -1 ? index : keyWhitespace;
-        const value = header.slice(keyStart, keyEnd);
-        const key = (keyFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
-        index++;
-        while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
-          index++;
-        }
-        if (index < len && header.charCodeAt(index) === DQUOTE) {
-          const quotedStart = ++index;
-          let escaped = false;
-          while (index < len) {
-            const code2 = header.charCodeAt(index);
-            if (code2 === DQUOTE) {
-              if (parameters[key] === void 0) {
-                parameters[key] = escaped ? unescapeQuotedPairs(header, quotedStart, index) : header.slice(quotedStart, index);
-              }
-              index++;
-              let stop2 = 0;
-              while (index < len) {
-                const code3 = header.charCodeAt(index);
-                const flags2 = CHAR_MAP[code3];
-                if ((flags2 & stopFlags) !== 0) {
-                  stop2 = flags2 & COMMA_FLAG;
-                  break;
-                }
-                index++;
-              }
-              if (stop2 !== 0)
-                break parameter;
-              continue parameter;
-            }
-            if (code2 === BSLASH && index + 1 < len) {
-              escaped = true;
-              index += 2;
-              continue;
-            }
-            index++;
-          }
-          continue parameter;
-        }
-        const valueStart = index;
-        let stop = 0;
-        let valueWhitespace = -1;
-        while (index < len) {
-          const code2 = header.charCodeAt(index);
-          const flags2 = CHAR_MAP[code2];
-          if ((flags2 & stopFlags) !== 0) {
-            stop = flags2 & COMMA_FLAG;
-            break;
-          }
-          if ((flags2 & OWS) !== 0) {
-            if (valueWhitespace === -1)
-              valueWhitespace = index;
-          } else {
-            valueWhitespace = -1;
-          }
-          index++;
-        }
-        if (parameters[key] === void 0) {
-          const valueEnd = valueWhitespace === -1 ? index : valueWhitespace;
-          parameters[key] = header.slice(valueStart, valueEnd);
-        }
-        if (stop !== 0)
-          break parameter;
-        continue parameter;
-      }
-      if ((flags & OWS) !== 0) {
-        if (keyWhitespace === -1)
-          keyWhitespace = index;
-      } else {
-        keyWhitespace = -1;
-      }
-      keyFlags |= code & NON_ASCII | flags;
-      index++;
-    }
-  }
-  return { type, index, parameters };
-}
-function unescapeQuotedPairs(str, start, end) {
-  let result = "";
-  for (let index = start; index < end; index++) {
-    if (str.charCodeAt(index) === BSLASH) {
-      result += str.slice(start, index);
-      start = ++index;
-    }
-  }
-  return result + str.slice(start, end);
-}
+// node_modules/@octokit/request/dist-bundle/index.js
+var import_content_type = __toESM(require_dist(), 1);
 
 // node_modules/json-with-bigint/json-with-bigint.js
 var intRegex = /^-?\d+$/;
@@ -35967,7 +35980,7 @@ async function getResponseData(response) {
   if (!contentType) {
     return response.text().catch(noop);
   }
-  const mimetype = parse2(contentType);
+  const mimetype = (0, import_content_type.parse)(contentType);
   if (isJSONResponse(mimetype)) {
     let text2 = "";
     try {
@@ -39673,6 +39686,57 @@ function worstVerdict(verdicts) {
   return "pass";
 }
 
+// src/integrity/checkResult.ts
+var CHECK_IDS = [
+  "look-ahead",
+  "horizon-steps",
+  "origin-after-actuals",
+  "origin-sets",
+  "path-sets",
+  "horizon-sets",
+  "time-spans",
+  "series-coverage",
+  "fold-purge",
+  "outside-test-window",
+  "exact-predictions"
+];
+var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
+var MAX_EXAMPLES = 5;
+var FindingCollector = class {
+  count = 0;
+  examples = [];
+  add(example) {
+    if (this.count++ < MAX_EXAMPLES) this.examples.push(example());
+  }
+};
+
+// src/integrity/checkPolicy.ts
+function applyCheckPolicy(findings, notRun, mode, frequency) {
+  const checks = findings.map((f) => ({
+    id: f.id,
+    status: statusOf(f, mode),
+    count: f.count,
+    examples: f.examples,
+    summary: f.summary
+  }));
+  const outcome = checks.some((c) => c.status === "fail") ? "fail" : checks.some((c) => c.status === "warn") ? "warn" : "ok";
+  return { mode, outcome, affectsVerdict: mode !== "report", frequency, checks, notRun };
+}
+function statusOf(f, mode) {
+  if (f.count === 0) return "ok";
+  return mode === "enforce" && FAILING_CHECKS.includes(f.id) ? "fail" : "warn";
+}
+function noChecks(mode, reason) {
+  return {
+    mode,
+    outcome: "ok",
+    affectsVerdict: mode !== "report",
+    frequency: null,
+    checks: [],
+    notRun: CHECK_IDS.map((id) => ({ id, reason }))
+  };
+}
+
 // src/report/buildReport.ts
 function buildReport(parts) {
   const { inputs, settings, hypothesis } = parts;
@@ -39692,6 +39756,14 @@ function buildReport(parts) {
         `The candidate lacks ${missing} rows that the baseline has. A candidate must not pass by skipping hard cases; set allow-missing to compare on the common rows only.`
       );
     }
+  }
+  const integrity = parts.integrity ?? noChecks(settings.backtestChecks, "a pre-aggregated loss file has no forecast rows to check");
+  if (integrity.affectsVerdict && integrity.outcome !== "ok") {
+    verdicts.push(integrity.outcome === "fail" ? "fail" : "warn");
+    const which2 = integrity.checks.filter((c) => c.status === integrity.outcome).map((c) => c.id);
+    reasons.push(
+      integrity.outcome === "fail" ? `A backtest check failed (${which2.join(", ")}): the comparison cannot be trusted until the backtest is fixed.` : `A backtest check warns (${which2.join(", ")}): look at the backtest checks before trusting the comparison.`
+    );
   }
   const verdict = worstVerdict(verdicts);
   return {
@@ -39717,6 +39789,7 @@ function buildReport(parts) {
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
+    integrity,
     stability: parts.stability ?? null
   };
 }
@@ -40165,24 +40238,24 @@ function bootstrapMarginSet(input) {
   const unique = [];
   for (const p of points) if (unique[unique.length - 1] !== p) unique.push(p);
   const pieces = [];
-  let open2;
+  let open3;
   const close = (upper) => {
-    if (open2 !== void 0) pieces.push({ lower: open2, upper });
-    open2 = void 0;
+    if (open3 !== void 0) pieces.push({ lower: open3, upper });
+    open3 = void 0;
   };
   const m = unique.length;
-  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open2 = null;
+  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open3 = null;
   for (let i = 0; i < m; i++) {
     const p = unique[i];
     if (accepted(p)) {
-      if (open2 === void 0) open2 = p;
+      if (open3 === void 0) open3 = p;
     } else {
       close(p);
     }
     const next = unique[i + 1];
     const between = next === void 0 ? p + 1 + Math.abs(p) : p + (next - p) / 2;
     if (accepted(between)) {
-      if (open2 === void 0) open2 = p;
+      if (open3 === void 0) open3 = p;
     } else {
       close(p);
     }
@@ -41986,6 +42059,7 @@ function evaluatePanel(panel, settings, extras = {}) {
     comparisons,
     seriesSummary,
     pathSummary,
+    ...extras.integrity === void 0 ? {} : { integrity: extras.integrity },
     stability: assessStability({
       series: overallSeries,
       timestamps: panel.timestamps,
@@ -42139,154 +42213,736 @@ function rowLossesOrInputError(panel, settings) {
   return losses;
 }
 
-// src/reading/streamTextFile.ts
-import { createHash } from "node:crypto";
-import { createReadStream } from "node:fs";
-import { stat as stat2 } from "node:fs/promises";
-import { pipeline } from "node:stream/promises";
-import { TextDecoder as TextDecoder2 } from "node:util";
-import { createGunzip } from "node:zlib";
-var CHUNK_BYTES = 1 << 20;
-async function streamTextFile(path7, gzip, sink, onProgress) {
-  let totalBytes;
-  try {
-    const info2 = await stat2(path7);
-    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
-    totalBytes = info2.size;
-  } catch (error2) {
-    throw asInputError(error2, path7);
+// src/integrity/panelRowKey.ts
+function describePanelRow(panel, p) {
+  const parts = [];
+  if (panel.seriesNames.length > 1 || panel.seriesNames[0] !== "") {
+    parts.push(`series=${panel.seriesNames[panel.series[p]]}`);
   }
-  const hash = createHash("sha256");
-  const decoder = new TextDecoder2("utf-8", { fatal: true });
-  let bytesRead = 0;
-  const tap = async function* (source) {
-    for await (const chunk of source) {
-      hash.update(chunk);
-      bytesRead += chunk.length;
-      onProgress?.(bytesRead, totalBytes);
-      yield chunk;
-    }
-  };
-  const consume = async (source) => {
-    for await (const chunk of source) sink.push(decode(decoder, chunk, true, path7, sink));
-    sink.push(decode(decoder, void 0, false, path7, sink));
-  };
-  try {
-    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
-    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
-    else await pipeline(raw, tap, consume);
-  } catch (error2) {
-    throw asInputError(error2, path7);
-  }
-  return `sha256:${hash.digest("hex")}`;
-}
-function decode(decoder, chunk, stream, path7, sink) {
-  try {
-    return decoder.decode(chunk, { stream });
-  } catch {
-    throw new InputError(
-      `the file is not valid UTF-8 text (the first invalid bytes come after line ${sink.linesRead})`,
-      { file: path7 }
-    );
-  }
-}
-function asInputError(error2, path7) {
-  if (error2 instanceof InputError) return error2;
-  const code = error2?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path7 });
-  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
-  if (typeof code === "string" && code.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
-  }
-  const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+  parts.push(`timestamp=${panel.timestamps[panel.time[p]]}`);
+  parts.push(`horizon=${panel.horizon[p]}`);
+  if (panel.origin !== null) parts.push(`origin=${panel.origins[panel.origin[p]]}`);
+  if (panel.path !== null) parts.push(`path=${panel.paths[panel.path[p]]}`);
+  return parts.join(" ");
 }
 
-// src/reading/columnMapping.ts
-var COLUMN_ROLES = [
-  "series",
-  "timestamp",
-  "horizon",
-  "origin",
-  "path",
-  "actual",
-  "prediction",
-  "weight",
-  "quantile"
-];
-var DEFAULT_COLUMNS = {
-  series: "series",
-  timestamp: "timestamp",
-  horizon: "horizon",
-  origin: "origin",
-  path: "path",
-  actual: "actual",
-  prediction: "prediction",
-  weight: "weight",
-  quantile: "q"
+// src/integrity/exactPredictions.ts
+var EXACT_TOLERANCE = 1e-9;
+var EXACT_RULE = { MIN_ROWS: 5, MIN_SHARE_GAP: 0.05, RATIO: 5 };
+function isExact(prediction, actual) {
+  return Math.abs(prediction - actual) <= EXACT_TOLERANCE * Math.max(Math.abs(prediction), Math.abs(actual));
+}
+function checkExactPredictions(panel) {
+  const b = panel.baseline.prediction;
+  const c = panel.candidate.prediction;
+  if (b === null || c === null) {
+    return {
+      findings: [],
+      notRun: [{ id: "exact-predictions", reason: "the models have no point forecasts in common" }]
+    };
+  }
+  const exactB = new FindingCollector();
+  const exactC = new FindingCollector();
+  for (let p = 0; p < panel.size; p++) {
+    const a = panel.actual[p];
+    if (isExact(b[p], a)) exactB.add(() => `baseline: ${describePanelRow(panel, p)}`);
+    if (isExact(c[p], a)) exactC.add(() => `candidate: ${describePanelRow(panel, p)}`);
+  }
+  const n = panel.size;
+  const shareB = exactB.count / n;
+  const shareC = exactC.count / n;
+  const flagged = (mine, share, other) => mine.count >= EXACT_RULE.MIN_ROWS && share - other >= EXACT_RULE.MIN_SHARE_GAP && share >= EXACT_RULE.RATIO * other;
+  const flagB = flagged(exactB, shareB, shareC);
+  const flagC = flagged(exactC, shareC, shareB);
+  const pct = (x) => `${(x * 100).toFixed(2)}%`;
+  const shares = `candidate ${exactC.count} (${pct(shareC)}), baseline ${exactB.count} (${pct(shareB)})`;
+  let count = 0;
+  let examples = [];
+  let summary2 = `rows where the prediction equals the actual (to 1e-9 relative), of ${n}: ${shares}; no model stands out`;
+  if (flagC || flagB) {
+    const who = flagC && flagB ? "both models" : flagC ? "the candidate" : "the baseline";
+    count = (flagC ? exactC.count : 0) + (flagB ? exactB.count : 0);
+    examples = [...flagC ? exactC.examples : [], ...flagB ? exactB.examples : []].slice(0, 5);
+    summary2 = `${who} reproduce${flagC && flagB ? "" : "s"} the actual far more often than the other model, a sign of target leakage: ${shares} of ${n} rows`;
+  }
+  return { findings: [{ id: "exact-predictions", count, examples, summary: summary2 }], notRun: [] };
+}
+
+// src/integrity/frequency.ts
+var UNITS = {
+  s: { unit: "second", factor: 1 },
+  min: { unit: "second", factor: 60 },
+  h: { unit: "second", factor: 3600 },
+  d: { unit: "day", factor: 1 },
+  bd: { unit: "businessDay", factor: 1 },
+  w: { unit: "day", factor: 7 },
+  mo: { unit: "month", factor: 1 },
+  q: { unit: "month", factor: 3 },
+  y: { unit: "month", factor: 12 }
 };
-function resolveColumns(mapping = {}) {
-  const resolved = { ...DEFAULT_COLUMNS };
-  for (const role of COLUMN_ROLES) {
-    const name = mapping[role];
-    if (name !== void 0) resolved[role] = name;
+var FREQUENCY_SYNTAX = "auto, a count and unit (s, min, h, d, bd, w, mo, q, y), e.g. 1h, 15min, 1d, 1bd, 1w, 1mo, or a number > 0 for numeric timestamps";
+function parseFrequency(text2) {
+  const m = /^(\d{1,6})(s|min|h|d|bd|w|mo|q|y)$/.exec(text2);
+  if (m !== null) {
+    const count = Number(m[1]);
+    const { unit, factor } = UNITS[m[2]];
+    return count > 0 ? { unit, size: count * factor } : null;
   }
-  return resolved;
+  if (!/^\d*\.?\d+(?:[eE][-+]?\d+)?$/.test(text2)) return null;
+  const size = Number(text2);
+  return Number.isFinite(size) && size > 0 ? { unit: "number", size } : null;
 }
-function parseColumnMapping(text2, source = "--columns") {
-  const mapping = {};
-  if (text2.trim() === "") return mapping;
-  for (const rawPair of text2.split(",")) {
-    const pair = rawPair.trim();
-    const eq = pair.indexOf("=");
-    if (eq < 0) {
-      throw new InputError(
-        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
-        { file: source, value: pair }
-      );
+function formatFrequency(f) {
+  switch (f.unit) {
+    case "number":
+      return String(f.size);
+    case "second":
+      if (f.size % 3600 === 0) return `${f.size / 3600}h`;
+      if (f.size % 60 === 0) return `${f.size / 60}min`;
+      return `${f.size}s`;
+    case "day":
+      return f.size % 7 === 0 ? `${f.size / 7}w` : `${f.size}d`;
+    case "businessDay":
+      return `${f.size}bd`;
+    case "month":
+      return f.size % 12 === 0 ? `${f.size / 12}y` : `${f.size}mo`;
+  }
+}
+
+// src/integrity/timePoint.ts
+var INSTANT_KEY = /^(\d{13})\.(\d{9})$/;
+var WRITTEN_FIELDS = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?/;
+function toTimePoint(label, kind) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== kind) return null;
+  if (reading.kind === "number") {
+    return {
+      seconds: reading.key,
+      nanos: 0,
+      wallDay: 0,
+      wallSecond: 0,
+      month: 0,
+      dayOfMonth: 0,
+      monthLength: 0
+    };
+  }
+  if (reading.kind !== "datetime") return null;
+  const instant = INSTANT_KEY.exec(reading.key);
+  const written = WRITTEN_FIELDS.exec(label);
+  if (instant === null || written === null) {
+    throw new Error(`cannot take the instant and written date of ${JSON.stringify(label)}`);
+  }
+  const seconds = Number(instant[1]) - 1e12;
+  const nanos = Number(instant[2]);
+  const year = Number(written[1]);
+  const month = Number(written[2]);
+  const day = Number(written[3]);
+  const wallSecond = written[4] === void 0 ? 0 : Number(written[4]) * 3600 + Number(written[5]) * 60 + (written[6] === void 0 ? 0 : Number(written[6])) + nanos / 1e9;
+  return {
+    seconds,
+    nanos,
+    wallDay: daysFromCivil(year, month, day),
+    wallSecond,
+    month: year * 12 + month - 1,
+    dayOfMonth: day,
+    monthLength: lengthOfMonth(year, month)
+  };
+}
+function compareTimePoints(a, b) {
+  return a.seconds - b.seconds || a.nanos - b.nanos;
+}
+function timePointsOf(labels, kind) {
+  return labels.map((label) => toTimePoint(label, kind));
+}
+function lengthOfMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
+
+// src/integrity/stepCount.ts
+var SLACK = 1e-9;
+function stepsAhead(from, target, f) {
+  if (compareTimePoints(target, from) <= 0) return 0;
+  switch (f.unit) {
+    case "number":
+    case "second": {
+      const diff = target.seconds - from.seconds + (target.nanos - from.nanos) / 1e9;
+      return Math.max(0, Math.ceil(diff / f.size - SLACK));
     }
-    const role = pair.slice(0, eq).trim();
-    const name = pair.slice(eq + 1).trim();
-    if (!isRole(role)) {
-      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
-        file: source,
-        value: pair
+    case "day": {
+      const days = target.wallDay - from.wallDay;
+      const later = target.wallSecond > from.wallSecond;
+      return gridCount(later ? days : days - 1, f.size);
+    }
+    case "businessDay": {
+      const later = target.wallSecond > from.wallSecond && isWeekday(from.wallDay);
+      const n = weekdaysUpTo(target.wallDay) - weekdaysUpTo(from.wallDay) + (later ? 1 : 0);
+      return gridCount(n - 1, f.size);
+    }
+    case "month": {
+      const months = target.month - from.month;
+      const day = Math.min(target.dayOfMonth, from.monthLength);
+      const later = day > from.dayOfMonth || day === from.dayOfMonth && target.wallSecond > from.wallSecond;
+      return gridCount(later ? months : months - 1, f.size);
+    }
+  }
+}
+function gridCount(span, size) {
+  return span < 0 ? 0 : Math.floor(span / size) + 1;
+}
+function isWeekday(day) {
+  const weekday = ((day + 4) % 7 + 7) % 7;
+  return weekday !== 0 && weekday !== 6;
+}
+function weekdaysUpTo(day) {
+  const m = day - 4;
+  const weeks = Math.floor(m / 7);
+  const r = m - 7 * weeks;
+  return 5 * weeks + Math.min(r + 1, 5);
+}
+
+// src/integrity/foldChecks.ts
+function checkFolds(input) {
+  const { panel, layout } = input;
+  const kind = panel.timestampKind;
+  if (kind === "text") {
+    throw new InputError(
+      "--folds needs timestamps that are all numbers or all ISO 8601 date-times; these are in text order",
+      { file: layout.file }
+    );
+  }
+  const folds = /* @__PURE__ */ new Map();
+  for (const s of layout.segments) {
+    const point = (label, column) => {
+      const p = toTimePoint(label, kind);
+      if (p === null) {
+        throw new InputError(
+          `${column} is not a ${kind === "number" ? "number" : "ISO 8601 date-time"} like the predictions' timestamps`,
+          { file: layout.file, line: s.line, column, value: label }
+        );
+      }
+      return p;
+    };
+    const from = point(s.start, "start");
+    const to = point(s.end, "end");
+    if (compareTimePoints(from, to) > 0) {
+      throw new InputError(`the segment ends (${s.end}) before it starts (${s.start})`, {
+        file: layout.file,
+        line: s.line,
+        value: s.end
       });
     }
-    if (name === "") {
-      throw new InputError(`the column name for role "${role}" is empty`, {
-        file: source,
-        value: pair
-      });
+    let fold = folds.get(s.fold);
+    if (fold === void 0) {
+      fold = { train: [], test: [] };
+      folds.set(s.fold, fold);
     }
-    if (mapping[role] !== void 0) {
-      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
-    }
-    mapping[role] = name;
+    fold[s.role].push({ ...s, from, to });
   }
-  checkDistinctNames(mapping, source);
-  return mapping;
-}
-function checkDistinctNames(mapping, source = "--columns") {
-  const resolved = resolveColumns(mapping);
-  const seen = /* @__PURE__ */ new Map();
-  for (const role of COLUMN_ROLES) {
-    if (role === "quantile") continue;
-    const name = resolved[role];
-    const other = seen.get(name);
-    if (other !== void 0) {
-      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
-        file: source,
+  for (const [name, fold] of folds) {
+    if (fold.test.length === 0) {
+      const line = fold.train[0].line;
+      throw new InputError(`fold "${name}" has no test segment`, {
+        file: layout.file,
+        line,
         value: name
       });
     }
-    seen.set(name, role);
   }
+  const findings = [];
+  const notRun = [];
+  let maxHorizon = 1;
+  for (let p = 0; p < panel.size; p++) maxHorizon = Math.max(maxHorizon, panel.horizon[p]);
+  const f = input.frequency;
+  if (f === null) {
+    notRun.push({ id: "fold-purge", reason: input.frequencyReason });
+  } else {
+    const purge = new FindingCollector();
+    let pairs = 0;
+    for (const [name, fold] of folds) {
+      for (const test of fold.test) {
+        for (const train of fold.train) {
+          pairs++;
+          if (touches(train, test, maxHorizon, input.embargo, f)) {
+            purge.add(
+              () => `fold ${name}: train ${train.start} to ${train.end} (line ${train.line}) touches test ${test.start} to ${test.end} (line ${test.line})`
+            );
+          }
+        }
+      }
+    }
+    findings.push({
+      id: "fold-purge",
+      count: purge.count,
+      examples: purge.examples,
+      summary: `${purge.count} of ${pairs} (training, test) segment pairs overlap the test window widened by ${maxHorizon} steps before (largest horizon) and ${input.embargo} after (embargo), at ${formatFrequency(f)}`
+    });
+  }
+  const times = panel.timestamps.map((label) => toTimePoint(label, kind));
+  const windows = /* @__PURE__ */ new Map();
+  for (const [name, fold] of folds) windows.set(name, mergeWindows(fold.test));
+  const anyFold = mergeWindows([...folds.values()].flatMap((fold) => fold.test));
+  const outside = new FindingCollector();
+  for (let p = 0; p < panel.size; p++) {
+    const tests = panel.path === null ? anyFold : windows.get(panel.paths[panel.path[p]]);
+    if (tests === void 0 || !insideAny(tests, times[panel.time[p]])) {
+      outside.add(
+        () => `${describePanelRow(panel, p)}${tests === void 0 ? " (no such fold in the layout)" : ""}`
+      );
+    }
+  }
+  findings.push({
+    id: "outside-test-window",
+    count: outside.count,
+    examples: outside.examples,
+    summary: `${outside.count} of ${panel.size} evaluated rows lie outside the test segments of their fold${panel.path === null ? " (no path column: any fold)" : ""}`
+  });
+  return { findings, notRun };
 }
-function isRole(text2) {
-  return COLUMN_ROLES.includes(text2);
+function touches(train, test, h, n, f) {
+  const endsLate = compareTimePoints(train.to, test.from) >= 0 || stepsAhead(train.to, test.from, f) <= h;
+  const startsEarly = compareTimePoints(train.from, test.to) <= 0 || stepsAhead(test.to, train.from, f) <= n;
+  return endsLate && startsEarly;
+}
+function mergeWindows(segments) {
+  const sorted = [...segments].sort((a, b) => compareTimePoints(a.from, b.from));
+  const out = [];
+  for (const s of sorted) {
+    const last = out[out.length - 1];
+    if (last !== void 0 && compareTimePoints(s.from, last.to) <= 0) {
+      if (compareTimePoints(s.to, last.to) > 0) last.to = s.to;
+    } else {
+      out.push({ from: s.from, to: s.to });
+    }
+  }
+  return out;
+}
+function insideAny(windows, t) {
+  let lo2 = 0;
+  let hi2 = windows.length - 1;
+  let found = -1;
+  while (lo2 <= hi2) {
+    const mid = lo2 + hi2 >> 1;
+    if (compareTimePoints(windows[mid].from, t) <= 0) {
+      found = mid;
+      lo2 = mid + 1;
+    } else {
+      hi2 = mid - 1;
+    }
+  }
+  return found >= 0 && compareTimePoints(t, windows[found].to) <= 0;
+}
+
+// src/integrity/inferFrequency.ts
+var BUSINESS_DAILY = { frequency: { unit: "businessDay", size: 1 } };
+function isBusinessDaily(series) {
+  let crossesWeekend = false;
+  for (const points of series) {
+    for (let i = 0; i < points.length; i++) {
+      if (!isWeekday(points[i].wallDay)) return false;
+      const from = points[i - 1]?.wallDay;
+      if (from !== void 0 && points[i].wallDay - from === 3 && ((from - 1) % 7 + 7) % 7 === 0) {
+        crossesWeekend = true;
+      }
+    }
+  }
+  return crossesWeekend;
+}
+var SLACK2 = 1e-6;
+function inferFrequency(kind, series) {
+  if (!series.some((points) => points.length >= 2)) {
+    return { frequency: null, reason: "no series has two different timestamps" };
+  }
+  if (kind === "number") {
+    return fromGaps(series, "number", (a, b) => b.seconds - a.seconds);
+  }
+  const first = series.find((points) => points.length > 0)[0];
+  const every = (test) => series.every((points) => points.every(test));
+  const oneTimeOfDay = every((p) => p.wallSecond === first.wallSecond);
+  if (oneTimeOfDay) {
+    const oneDay = every((p) => p.dayOfMonth === first.dayOfMonth);
+    const monthEnds = every((p) => p.dayOfMonth === p.monthLength);
+    if (oneDay || monthEnds) return fromGaps(series, "month", (a, b) => b.month - a.month);
+    const daily = fromGaps(series, "day", (a, b) => b.wallDay - a.wallDay);
+    return daily.frequency?.size === 1 && isBusinessDaily(series) ? BUSINESS_DAILY : daily;
+  }
+  return fromGaps(series, "second", (a, b) => b.seconds - a.seconds + (b.nanos - a.nanos) / 1e9);
+}
+function fromGaps(series, unit, gap) {
+  let step = Number.POSITIVE_INFINITY;
+  for (const points of series) {
+    for (let i = 1; i < points.length; i++) {
+      const g = gap(points[i - 1], points[i]);
+      if (g > 0 && g < step) step = g;
+    }
+  }
+  if (!Number.isFinite(step)) {
+    return { frequency: null, reason: "no two timestamps of a series are a step apart" };
+  }
+  const frequency = { unit, size: step };
+  for (const points of series) {
+    for (let i = 1; i < points.length; i++) {
+      const g = gap(points[i - 1], points[i]);
+      const ratio = g / step;
+      if (Math.abs(ratio - Math.round(ratio)) > SLACK2 * Math.max(1, ratio)) {
+        const other = { unit, size: g };
+        return {
+          frequency: null,
+          reason: `irregular timestamps: gaps of ${formatFrequency(frequency)} and ${formatFrequency(other)} (not a multiple of it)`
+        };
+      }
+    }
+  }
+  return { frequency };
+}
+
+// src/integrity/likeForLike.ts
+function checkLikeForLike(input) {
+  const { baseline: b, candidate: c } = input;
+  const findings = [];
+  const notRun = [];
+  const labelSets = (id, what, pick, keyOf) => {
+    const bc = pick(b);
+    const cc = pick(c);
+    if (bc === null || cc === null) {
+      notRun.push({ id, reason: `the files have no ${what} column` });
+      return;
+    }
+    findings.push(compareSets(id, what, keyed(bc.labels, keyOf), keyed(cc.labels, keyOf)));
+  };
+  labelSets("origin-sets", "origin", (t) => t.origin, timeKey(input.originKind));
+  labelSets(
+    "path-sets",
+    "path",
+    (t) => t.path,
+    (label) => label
+  );
+  if (b.horizon === null || c.horizon === null) {
+    notRun.push({ id: "horizon-sets", reason: "the files have no horizon column" });
+  } else {
+    findings.push(
+      compareSets(
+        "horizon-sets",
+        "horizon",
+        new Map([...distinct(b.horizon.values)].map((h) => [String(h), String(h)])),
+        new Map([...distinct(c.horizon.values)].map((h) => [String(h), String(h)]))
+      )
+    );
+  }
+  if (input.timestampKind === "text") {
+    notRun.push({ id: "time-spans", reason: "timestamps are in text order" });
+  } else {
+    findings.push(timeSpans(b, c, input.timestampKind));
+  }
+  labelSets(
+    "series-coverage",
+    "series",
+    (t) => t.series,
+    (label) => label
+  );
+  return { findings, notRun };
+}
+function timeKey(kind) {
+  if (kind === "text") return (label) => label;
+  return (label) => {
+    const r = readLabel(label);
+    return typeof r === "string" || r.kind === "text" ? label : String(r.key);
+  };
+}
+function keyed(labels, keyOf) {
+  const out = /* @__PURE__ */ new Map();
+  for (const label of labels) {
+    const key = keyOf(label);
+    if (!out.has(key)) out.set(key, label);
+  }
+  return out;
+}
+function distinct(values) {
+  const out = /* @__PURE__ */ new Set();
+  for (let i = 0; i < values.length; i++) out.add(values[i]);
+  return out;
+}
+function compareSets(id, what, baseline, candidate) {
+  const onlyIn = (mine, other, role) => {
+    const found = new FindingCollector();
+    for (const [key, label] of mine) {
+      if (!other.has(key)) found.add(() => `${what}=${label} only in the ${role}`);
+    }
+    return found;
+  };
+  const b = onlyIn(baseline, candidate, "baseline");
+  const c = onlyIn(candidate, baseline, "candidate");
+  const examples = [...b.examples.slice(0, c.count > 0 ? 3 : MAX_EXAMPLES), ...c.examples].slice(
+    0,
+    MAX_EXAMPLES
+  );
+  return {
+    id,
+    count: b.count + c.count,
+    examples,
+    summary: `${b.count} of ${baseline.size} ${what} values only in the baseline, ${c.count} of ${candidate.size} only in the candidate`
+  };
+}
+function timeSpans(b, c, kind) {
+  const keyOf = timeKey(kind);
+  const order = (x, y) => kind === "number" ? Number(x) - Number(y) : x < y ? -1 : x > y ? 1 : 0;
+  const span = (t) => {
+    const keys = keyed(t.timestamp.labels, keyOf);
+    const sorted = [...keys.keys()].sort(order);
+    return { keys, first: sorted[0], last: sorted[sorted.length - 1] };
+  };
+  const sb = span(b);
+  const sc = span(c);
+  const found = new FindingCollector();
+  const outside = (mine, other, role, otherRole) => {
+    let n = 0;
+    for (const [key, label2] of mine.keys) {
+      if (order(key, other.first) < 0 || order(key, other.last) > 0) {
+        n++;
+        found.add(() => `timestamp=${label2} in the ${role}, outside the ${otherRole}'s span`);
+      }
+    }
+    return n;
+  };
+  const nb = outside(sb, sc, "baseline", "candidate");
+  const nc = outside(sc, sb, "candidate", "baseline");
+  const label = (s) => `${s.keys.get(s.first)} to ${s.keys.get(s.last)}`;
+  return {
+    id: "time-spans",
+    count: found.count,
+    examples: found.examples,
+    summary: `baseline spans ${label(sb)}, candidate ${label(sc)}: ${nb} baseline and ${nc} candidate timestamps lie outside the other's span`
+  };
+}
+
+// src/integrity/rowKey.ts
+function describeTableRow(table, i) {
+  const parts = [];
+  if (table.series !== null) parts.push(`series=${table.series.labels[table.series.ids[i]]}`);
+  parts.push(`timestamp=${table.timestamp.labels[table.timestamp.ids[i]]}`);
+  if (table.horizon !== null) parts.push(`horizon=${table.horizon.values[i]}`);
+  if (table.origin !== null) parts.push(`origin=${table.origin.labels[table.origin.ids[i]]}`);
+  if (table.path !== null) parts.push(`path=${table.path.labels[table.path.ids[i]]}`);
+  return `${table.summary.role} line ${table.lines[i]}: ${parts.join(" ")}`;
+}
+
+// src/integrity/rowChecks.ts
+function checkRows(input) {
+  const { tables } = input;
+  if (tables.some((t) => t.origin === null)) {
+    const reason = "the predictions files have no origin column";
+    return {
+      findings: [],
+      notRun: [
+        { id: "look-ahead", reason },
+        { id: "horizon-steps", reason },
+        { id: "origin-after-actuals", reason }
+      ]
+    };
+  }
+  if (input.timestampKind === "text" || input.originKind !== input.timestampKind) {
+    const reason = input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`;
+    return {
+      findings: [],
+      notRun: [
+        { id: "look-ahead", reason },
+        { id: "horizon-steps", reason },
+        { id: "origin-after-actuals", reason }
+      ]
+    };
+  }
+  const kind = input.timestampKind;
+  const lookAhead = new FindingCollector();
+  const horizon = new FindingCollector();
+  const afterActuals = new FindingCollector();
+  const notRun = [];
+  const f = input.frequency;
+  const hasHorizon = tables.every((t) => t.horizon !== null);
+  if (!hasHorizon) notRun.push({ id: "horizon-steps", reason: "the files have no horizon column" });
+  else if (f === null) notRun.push({ id: "horizon-steps", reason: input.frequencyReason });
+  const countSteps = hasHorizon && f !== null;
+  let rows = 0;
+  for (const table of tables) {
+    const times = timePointsOf(table.timestamp.labels, kind);
+    const origins = timePointsOf(table.origin.labels, kind);
+    const tIds = table.timestamp.ids;
+    const oIds = table.origin.ids;
+    const h = table.horizon?.values;
+    rows += table.size;
+    for (let i = 0; i < table.size; i++) {
+      const t = times[tIds[i]];
+      const o = origins[oIds[i]];
+      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table, i));
+      else if (countSteps && stepsAhead(o, t, f) !== h[i]) {
+        horizon.add(() => {
+          const steps = stepsAhead(o, t, f);
+          return `${describeTableRow(table, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
+        });
+      }
+      if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
+        afterActuals.add(() => describeTableRow(table, i));
+      }
+    }
+  }
+  const findings = [
+    {
+      id: "look-ahead",
+      ...lookAhead,
+      summary: `${lookAhead.count} of ${rows} predictions rows have an origin at or after the timestamp they forecast`
+    }
+  ];
+  if (countSteps) {
+    findings.push({
+      id: "horizon-steps",
+      ...horizon,
+      summary: `${horizon.count} of ${rows} rows have a horizon that differs from the steps of ${formatFrequency(f)} from origin to timestamp`
+    });
+  }
+  if (input.lastActual === null) {
+    notRun.push({ id: "origin-after-actuals", reason: "no actual has a comparable timestamp" });
+  } else {
+    findings.push({
+      id: "origin-after-actuals",
+      ...afterActuals,
+      summary: `${afterActuals.count} of ${rows} rows were issued after the last actual (${input.lastActualLabel})`
+    });
+  }
+  return { findings, notRun };
+}
+
+// src/integrity/checkBacktest.ts
+function checkBacktest(input, settings) {
+  const timestampKind = readableKind(input.panel.timestampKind, [
+    input.panel.timestamps,
+    input.baseline.timestamp.labels,
+    input.candidate.timestamp.labels,
+    ...input.actuals === void 0 ? [] : [input.actuals.timestamp.labels]
+  ]);
+  const originKind = readableKind(input.panel.originKind, [
+    input.baseline.origin?.labels ?? [],
+    input.candidate.origin?.labels ?? []
+  ]);
+  const panel = { ...input.panel, timestampKind, originKind };
+  const frequency = chooseFrequency(panel, settings.frequency);
+  const findings = [];
+  const notRun = [];
+  const add = (part) => {
+    findings.push(...part.findings);
+    notRun.push(...part.notRun);
+  };
+  const actualTables = input.actuals === void 0 ? [input.baseline, input.candidate] : [input.actuals];
+  const last = lastTime(actualTables, panel.timestampKind);
+  add(
+    checkRows({
+      tables: [input.baseline, input.candidate],
+      timestampKind: panel.timestampKind,
+      originKind: panel.originKind,
+      lastActual: last?.point ?? null,
+      lastActualLabel: last?.label ?? "",
+      frequency: frequency.frequency,
+      frequencyReason: frequency.reason
+    })
+  );
+  add(
+    checkLikeForLike({
+      baseline: input.baseline,
+      candidate: input.candidate,
+      timestampKind: panel.timestampKind,
+      originKind: panel.originKind
+    })
+  );
+  if (input.folds === void 0) {
+    const reason = "no fold layout given (--folds FILE)";
+    notRun.push({ id: "fold-purge", reason }, { id: "outside-test-window", reason });
+  } else {
+    add(
+      checkFolds({
+        panel,
+        layout: input.folds,
+        embargo: settings.embargo,
+        frequency: frequency.frequency,
+        frequencyReason: frequency.reason
+      })
+    );
+  }
+  add(checkExactPredictions(panel));
+  const rank = (id) => CHECK_IDS.indexOf(id);
+  findings.sort((a, b) => rank(a.id) - rank(b.id));
+  notRun.sort((a, b) => rank(a.id) - rank(b.id));
+  return applyCheckPolicy(
+    findings,
+    notRun,
+    settings.mode,
+    frequency.frequency === null ? null : { text: formatFrequency(frequency.frequency), source: frequency.source }
+  );
+}
+function chooseFrequency(panel, text2) {
+  const kind = panel.timestampKind;
+  if (text2 !== "auto") {
+    const f = parseFrequency(text2);
+    if (f === null) throw new InputError("frequency is not a frequency", { value: text2 });
+    if (kind === "text") {
+      return { frequency: null, reason: "timestamps are in text order", source: "given" };
+    }
+    if (f.unit === "number" !== (kind === "number")) {
+      throw new InputError(
+        kind === "number" ? `the frequency ${text2} has a unit, but the timestamps are numbers: give a plain step such as 1` : `the frequency ${text2} is a plain number, but the timestamps are ISO 8601 date-times: give a unit such as 1h, 1d or 1mo`,
+        { value: text2 }
+      );
+    }
+    return { frequency: f, reason: "", source: "given" };
+  }
+  if (kind === "text") {
+    return {
+      frequency: null,
+      reason: "timestamps are in text order, so steps cannot be counted",
+      source: "inferred"
+    };
+  }
+  const inferred = inferFrequency(kind, pointsBySeries(panel, kind));
+  return inferred.frequency === null ? {
+    frequency: null,
+    reason: `no frequency: ${inferred.reason}; give --frequency`,
+    source: "inferred"
+  } : { frequency: inferred.frequency, reason: "", source: "inferred" };
+}
+function pointsBySeries(panel, kind) {
+  const points = panel.timestamps.map((label) => toTimePoint(label, kind));
+  const out = panel.seriesNames.map(() => []);
+  let lastSeries = -1;
+  let lastTime2 = -1;
+  for (let p = 0; p < panel.size; p++) {
+    const series = panel.series[p];
+    const time = panel.time[p];
+    if (series === lastSeries && time === lastTime2) continue;
+    if (series === lastSeries && time < lastTime2) {
+      throw new Error("the aligned panel is not sorted by series and timestamp");
+    }
+    out[series].push(points[time]);
+    lastSeries = series;
+    lastTime2 = time;
+  }
+  return out;
+}
+function readableKind(kind, lists) {
+  if (kind === "text") return kind;
+  for (const labels of lists) {
+    for (const label of labels) if (toTimePoint(label, kind) === null) return "text";
+  }
+  return kind;
+}
+function lastTime(tables, kind) {
+  if (kind === "text") return null;
+  let best = null;
+  for (const table of tables) {
+    for (const label of table.timestamp.labels) {
+      const point = toTimePoint(label, kind);
+      if (point !== null && (best === null || compareTimePoints(point, best.point) > 0)) {
+        best = { point, label };
+      }
+    }
+  }
+  return best;
 }
 
 // src/reading/tokenizer.ts
@@ -42466,6 +43122,239 @@ function truncateValue(text2) {
   return text2.length <= 60 ? text2 : `${text2.slice(0, 60)}\u2026`;
 }
 
+// src/reading/foldLayoutReader.ts
+var FOLD_NAMES = ["fold", "path"];
+var REQUIRED = ["role", "start", "end"];
+var MAX_SEGMENTS = 1e4;
+var FoldLayoutReader = class {
+  tokenizer;
+  file;
+  index = null;
+  segments = [];
+  constructor(file, format) {
+    this.file = file;
+    this.tokenizer = new Tokenizer(
+      format === "tsv" ? "	" : ",",
+      (fields, count, line) => this.record(fields.slice(0, count), line),
+      file
+    );
+  }
+  push(chunk) {
+    this.tokenizer.push(chunk);
+  }
+  get linesRead() {
+    return this.tokenizer.lines;
+  }
+  finish() {
+    this.tokenizer.end();
+    if (this.index === null) {
+      throw new InputError("the fold layout is empty (expected a header: fold,role,start,end)", {
+        file: this.file
+      });
+    }
+    if (this.segments.length === 0) {
+      throw new InputError("the fold layout has a header but no segments", {
+        file: this.file,
+        line: 2
+      });
+    }
+    return { file: this.file, segments: this.segments };
+  }
+  record(fields, line) {
+    if (this.index === null) {
+      const index = /* @__PURE__ */ new Map();
+      fields.forEach((name, i) => {
+        const key = name.trim().toLowerCase();
+        if (!index.has(key)) index.set(key, i);
+      });
+      const fold = FOLD_NAMES.find((n) => index.has(n));
+      for (const name of [...REQUIRED, fold ?? "fold"]) {
+        if (!index.has(name)) {
+          throw new InputError(
+            `the fold layout needs the columns fold (or path), role, start and end; "${name}" is missing`,
+            { file: this.file, line, value: fields.join(",") }
+          );
+        }
+      }
+      index.set("fold", index.get(fold));
+      this.index = index;
+      return;
+    }
+    if (this.segments.length >= MAX_SEGMENTS) {
+      throw new InputError(`the fold layout has more than ${MAX_SEGMENTS} segments`, {
+        file: this.file,
+        line
+      });
+    }
+    const at = (name) => (fields[this.index.get(name)] ?? "").trim();
+    const role = at("role");
+    if (role !== "train" && role !== "test") {
+      throw new InputError("role must be train or test", {
+        file: this.file,
+        line,
+        column: "role",
+        value: role
+      });
+    }
+    for (const name of ["fold", "start", "end"]) {
+      if (at(name) === "") {
+        throw new InputError(`empty ${name}`, { file: this.file, line, column: name, value: "" });
+      }
+    }
+    this.segments.push({ fold: at("fold"), role, start: at("start"), end: at("end"), line });
+  }
+};
+
+// src/reading/streamTextFile.ts
+import { createHash } from "node:crypto";
+import { createReadStream } from "node:fs";
+import { stat as stat2 } from "node:fs/promises";
+import { pipeline } from "node:stream/promises";
+import { TextDecoder as TextDecoder2 } from "node:util";
+import { createGunzip } from "node:zlib";
+var CHUNK_BYTES = 1 << 20;
+async function streamTextFile(path7, gzip, sink, onProgress) {
+  let totalBytes;
+  try {
+    const info2 = await stat2(path7);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
+    totalBytes = info2.size;
+  } catch (error2) {
+    throw asInputError(error2, path7);
+  }
+  const hash = createHash("sha256");
+  const decoder = new TextDecoder2("utf-8", { fatal: true });
+  let bytesRead = 0;
+  const tap = async function* (source) {
+    for await (const chunk of source) {
+      hash.update(chunk);
+      bytesRead += chunk.length;
+      onProgress?.(bytesRead, totalBytes);
+      yield chunk;
+    }
+  };
+  const consume = async (source) => {
+    for await (const chunk of source) sink.push(decode(decoder, chunk, true, path7, sink));
+    sink.push(decode(decoder, void 0, false, path7, sink));
+  };
+  try {
+    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
+    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
+    else await pipeline(raw, tap, consume);
+  } catch (error2) {
+    throw asInputError(error2, path7);
+  }
+  return `sha256:${hash.digest("hex")}`;
+}
+function decode(decoder, chunk, stream, path7, sink) {
+  try {
+    return decoder.decode(chunk, { stream });
+  } catch {
+    throw new InputError(
+      `the file is not valid UTF-8 text (the first invalid bytes come after line ${sink.linesRead})`,
+      { file: path7 }
+    );
+  }
+}
+function asInputError(error2, path7) {
+  if (error2 instanceof InputError) return error2;
+  const code = error2?.code;
+  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
+  if (code === "EACCES" || code === "EPERM")
+    return new InputError("permission denied", { file: path7 });
+  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
+  if (typeof code === "string" && code.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
+  }
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+}
+
+// src/reading/columnMapping.ts
+var COLUMN_ROLES = [
+  "series",
+  "timestamp",
+  "horizon",
+  "origin",
+  "path",
+  "actual",
+  "prediction",
+  "weight",
+  "quantile"
+];
+var DEFAULT_COLUMNS = {
+  series: "series",
+  timestamp: "timestamp",
+  horizon: "horizon",
+  origin: "origin",
+  path: "path",
+  actual: "actual",
+  prediction: "prediction",
+  weight: "weight",
+  quantile: "q"
+};
+function resolveColumns(mapping = {}) {
+  const resolved = { ...DEFAULT_COLUMNS };
+  for (const role of COLUMN_ROLES) {
+    const name = mapping[role];
+    if (name !== void 0) resolved[role] = name;
+  }
+  return resolved;
+}
+function parseColumnMapping(text2, source = "--columns") {
+  const mapping = {};
+  if (text2.trim() === "") return mapping;
+  for (const rawPair of text2.split(",")) {
+    const pair = rawPair.trim();
+    const eq = pair.indexOf("=");
+    if (eq < 0) {
+      throw new InputError(
+        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
+        { file: source, value: pair }
+      );
+    }
+    const role = pair.slice(0, eq).trim();
+    const name = pair.slice(eq + 1).trim();
+    if (!isRole(role)) {
+      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (name === "") {
+      throw new InputError(`the column name for role "${role}" is empty`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (mapping[role] !== void 0) {
+      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
+    }
+    mapping[role] = name;
+  }
+  checkDistinctNames(mapping, source);
+  return mapping;
+}
+function checkDistinctNames(mapping, source = "--columns") {
+  const resolved = resolveColumns(mapping);
+  const seen = /* @__PURE__ */ new Map();
+  for (const role of COLUMN_ROLES) {
+    if (role === "quantile") continue;
+    const name = resolved[role];
+    const other = seen.get(name);
+    if (other !== void 0) {
+      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
+        file: source,
+        value: name
+      });
+    }
+    seen.set(name, role);
+  }
+}
+function isRole(text2) {
+  return COLUMN_ROLES.includes(text2);
+}
+
 // src/reading/tableBuilder.ts
 var ForecastTableReader = class {
   tokenizer;
@@ -42513,8 +43402,8 @@ var ForecastTableReader = class {
   /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
   finish(sha256 = "") {
     this.tokenizer.end();
-    const header = this.header;
-    if (header === null) {
+    const header2 = this.header;
+    if (header2 === null) {
       throw new InputError("the file is empty (expected a header line and data rows)", {
         file: this.path,
         line: 1
@@ -42532,8 +43421,8 @@ var ForecastTableReader = class {
       path: this.path,
       rows: n,
       sha256,
-      columns: header.names,
-      ignoredColumns: header.ignored,
+      columns: header2.names,
+      ignoredColumns: header2.ignored,
       blankLines: this.tokenizer.blankLines
     };
     const label = (interner, ids, column) => ({
@@ -42542,7 +43431,7 @@ var ForecastTableReader = class {
       labels: interner.labels,
       firstLines: Int32Array.from(interner.firstLines)
     });
-    const quantiles = header.quantiles.map((q, k) => ({
+    const quantiles = header2.quantiles.map((q, k) => ({
       level: q.level,
       column: q.column,
       values: this.quantileValues[k].slice(0, n)
@@ -42551,14 +43440,14 @@ var ForecastTableReader = class {
       summary: summary2,
       size: n,
       lines: this.lines.slice(0, n),
-      series: header.series < 0 ? null : label(this.seriesLabels, this.seriesIds, header.names[header.series]),
-      timestamp: label(this.timeLabels, this.timeIds, header.names[header.timestamp]),
-      horizon: header.horizon < 0 ? null : { column: header.names[header.horizon], values: this.horizons.slice(0, n) },
-      origin: header.origin < 0 ? null : label(this.originLabels, this.originIds, header.names[header.origin]),
-      path: header.path < 0 ? null : label(this.pathLabels, this.pathIds, header.names[header.path]),
-      actual: header.actual < 0 ? null : { column: header.names[header.actual], values: this.actual.slice(0, n) },
-      prediction: header.prediction < 0 ? null : { column: header.names[header.prediction], values: this.prediction.slice(0, n) },
-      weight: header.weight < 0 ? null : { column: header.names[header.weight], values: this.weight.slice(0, n) },
+      series: header2.series < 0 ? null : label(this.seriesLabels, this.seriesIds, header2.names[header2.series]),
+      timestamp: label(this.timeLabels, this.timeIds, header2.names[header2.timestamp]),
+      horizon: header2.horizon < 0 ? null : { column: header2.names[header2.horizon], values: this.horizons.slice(0, n) },
+      origin: header2.origin < 0 ? null : label(this.originLabels, this.originIds, header2.names[header2.origin]),
+      path: header2.path < 0 ? null : label(this.pathLabels, this.pathIds, header2.names[header2.path]),
+      actual: header2.actual < 0 ? null : { column: header2.names[header2.actual], values: this.actual.slice(0, n) },
+      prediction: header2.prediction < 0 ? null : { column: header2.names[header2.prediction], values: this.prediction.slice(0, n) },
+      weight: header2.weight < 0 ? null : { column: header2.names[header2.weight], values: this.weight.slice(0, n) },
       quantiles
     };
   }
@@ -42712,9 +43601,9 @@ function resolveHeader(names, file, line, options) {
     });
     quantiles.sort((a, b) => a.level - b.level);
   }
-  const header = names.map((n) => JSON.stringify(n)).join(", ");
+  const header2 = names.map((n) => JSON.stringify(n)).join(", ");
   const missing = (role, name, why) => new InputError(
-    `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)`,
+    `missing the ${role} column "${name}" ${why}; the header has ${header2} (map another column with e.g. ${role}=NAME)`,
     { file, line, column: name }
   );
   if (timestamp < 0) throw missing("timestamp", columns.timestamp, "(required)");
@@ -42799,8 +43688,16 @@ async function readForecastFile(path7, options) {
   return reader.finish(sha256);
 }
 
+// src/reading/readFoldLayout.ts
+async function readFoldLayout(path7, format) {
+  const implied = formatFromPath(path7);
+  const reader = new FoldLayoutReader(path7, format ?? implied.format);
+  await streamTextFile(path7, implied.gzip, reader);
+  return reader.finish();
+}
+
 // src/reading/lossSeriesReader.ts
-var REQUIRED = ["baseline_loss", "candidate_loss"];
+var REQUIRED2 = ["baseline_loss", "candidate_loss"];
 var KNOWN = ["baseline_loss", "candidate_loss", "differential", "rows", "horizon"];
 var LossSeriesReader = class {
   path;
@@ -42875,7 +43772,7 @@ var LossSeriesReader = class {
         }
         index2[n] = i;
       });
-      for (const need of [this.timestampName, ...REQUIRED]) {
+      for (const need of [this.timestampName, ...REQUIRED2]) {
         if (!(need in index2)) {
           throw new InputError(
             `a loss file needs the columns ${this.timestampName}, baseline_loss and candidate_loss; "${need}" is missing`,
@@ -42998,9 +43895,21 @@ async function runComparison(settings, hooks = {}) {
     { baseline, candidate, ...actuals === void 0 ? {} : { actuals } },
     { onProgress: (fraction) => hooks.onProgress?.({ stage: "aligning", fraction }) }
   );
+  const folds = settings.folds === null ? void 0 : await readFoldLayout(settings.folds);
+  const integrity = checkBacktest(
+    {
+      panel,
+      baseline,
+      candidate,
+      ...actuals === void 0 ? {} : { actuals },
+      ...folds === void 0 ? {} : { folds }
+    },
+    { frequency: settings.frequency, embargo: settings.embargo, mode: settings.backtestChecks }
+  );
   const history = settings.pooling === "scaled" && settings.scale === "seasonal-naive" ? await readHistory(settings) : void 0;
   hooks.onProgress?.({ stage: "testing", fraction: 0 });
   const report = evaluatePanel(panel, settings, {
+    integrity,
     ...history === void 0 ? {} : { history },
     ...hooks.resampleRunner === void 0 ? {} : { resampleRunner: hooks.resampleRunner }
   });
@@ -43008,6 +43917,12 @@ async function runComparison(settings, hooks = {}) {
   return { report };
 }
 async function runOnLossFile(path7, settings, hooks) {
+  if (settings.folds !== null || settings.frequency !== "auto" || settings.embargo !== 0) {
+    throw new InputError(
+      "frequency, folds and embargo configure the backtest checks, which need the forecast files (baseline and candidate), not a loss file",
+      { file: path7 }
+    );
+  }
   const table = await readLossSeriesFile(path7, {
     ...settings.format === "auto" ? {} : { format: settings.format },
     ...settings.columns.timestamp === void 0 ? {} : { timestampColumn: settings.columns.timestamp },
@@ -43095,7 +44010,7 @@ function workOnSharedTask(task, reportFailure = () => {
     }
   }
 }
-function waitForSharedTask(task, describeFailure) {
+function waitForSharedTask(task, describeFailure2) {
   const control = new Int32Array(task.control);
   const total = streamCount(task.resamples);
   for (; ; ) {
@@ -43104,7 +44019,7 @@ function waitForSharedTask(task, describeFailure) {
     Atomics.wait(control, FINISHED_STREAMS, finished);
   }
   if (Atomics.load(control, FAILED) !== 0) {
-    throw new Error(`a resampling thread failed: ${describeFailure()}`);
+    throw new Error(`a resampling thread failed: ${describeFailure2()}`);
   }
 }
 
@@ -43179,29 +44094,58 @@ function defaultRetryPolicy(log) {
     log
   };
 }
+var DEFAULT_API_TIMEOUTS = { requestMs: 3e4, budgetMs: 12e4 };
+var ApiTimeoutError = class extends Error {
+  constructor(request2, limitMs) {
+    super(`GitHub did not answer ${request2} within ${formatSeconds(limitMs)}`);
+    this.request = request2;
+    this.limitMs = limitMs;
+    this.name = "ApiTimeoutError";
+  }
+  request;
+  limitMs;
+};
+var ApiBudgetError = class extends Error {
+  constructor(budgetMs) {
+    super(`the API calls took longer than their budget of ${formatSeconds(budgetMs)}`);
+    this.budgetMs = budgetMs;
+    this.name = "ApiBudgetError";
+  }
+  budgetMs;
+};
+var formatSeconds = (ms) => ms >= 1e3 ? `${Math.round(ms / 1e3)} s` : `${ms} ms`;
 function httpFailure(error2) {
   if (typeof error2 !== "object" || error2 === null) return null;
   const status = error2.status;
   if (typeof status !== "number") return null;
   const response = error2.response;
   const headers = typeof response?.headers === "object" && response.headers !== null ? response.headers : {};
-  return { status, headers };
+  const data = response?.data;
+  const message = typeof data?.message === "string" ? data.message : error2 instanceof Error ? error2.message : "";
+  return { status, headers, message };
+}
+var header = (failure, name) => {
+  const value = failure.headers[name] ?? failure.headers[name.toLowerCase()];
+  return value === void 0 ? void 0 : String(value);
+};
+function isRateLimited(error2) {
+  const failure = httpFailure(error2);
+  if (failure === null) return false;
+  if (failure.status === 429) return true;
+  return failure.status === 403 && (header(failure, "retry-after") !== void 0 || header(failure, "x-ratelimit-remaining") === "0" || /rate limit/i.test(failure.message));
 }
 function retryDelay(error2, attempt, policy) {
+  const backoff = policy.baseDelayMs * 2 ** attempt;
+  if (error2 instanceof ApiTimeoutError) return backoff;
   const failure = httpFailure(error2);
   if (failure === null) return null;
-  const header = (name) => {
-    const value = failure.headers[name] ?? failure.headers[name.toLowerCase()];
-    return value === void 0 ? void 0 : String(value);
-  };
-  const retryAfter = header("retry-after");
-  const remaining = header("x-ratelimit-remaining");
-  const reset = header("x-ratelimit-reset");
-  const rateLimited = (failure.status === 403 || failure.status === 429) && (retryAfter !== void 0 || remaining === "0" || failure.status === 429);
+  const retryAfter = header(failure, "retry-after");
+  const remaining = header(failure, "x-ratelimit-remaining");
+  const reset = header(failure, "x-ratelimit-reset");
+  const rateLimited = isRateLimited(error2);
   const serverError = failure.status >= 500 && failure.status <= 599;
   if (!rateLimited && !serverError) return null;
-  const backoff = policy.baseDelayMs * 2 ** attempt;
-  let wait = backoff;
+  let wait = rateLimited && retryAfter === void 0 && remaining !== "0" ? 6e4 : backoff;
   if (retryAfter !== void 0 && /^\d+$/.test(retryAfter.trim())) {
     wait = Number(retryAfter) * 1e3;
   } else if (retryAfter !== void 0 && !Number.isNaN(Date.parse(retryAfter))) {
@@ -43211,27 +44155,43 @@ function retryDelay(error2, attempt, policy) {
   }
   return wait > policy.maxWaitMs ? null : wait;
 }
-async function withRetries(call, policy) {
-  for (let attempt = 0; ; attempt += 1) {
-    try {
-      return await call();
-    } catch (error2) {
-      const wait = attempt < policy.maxRetries ? retryDelay(error2, attempt, policy) : null;
-      if (wait === null) throw error2;
-      const status = httpFailure(error2)?.status;
-      policy.log(
-        `GitHub answered ${status}; retrying in ${Math.ceil(wait / 1e3)} s (retry ${attempt + 1} of ${policy.maxRetries})`
-      );
-      await policy.sleep(wait);
+function installRetries(client, policy, timeouts = DEFAULT_API_TIMEOUTS) {
+  const deadline = policy.now() + timeouts.budgetMs;
+  client.hook.wrap("request", async (request2, options) => {
+    const idempotent = String(options.method).toUpperCase() !== "POST";
+    const name = `${String(options.method).toUpperCase()} ${String(options.url)}`;
+    for (let attempt = 0; ; attempt += 1) {
+      const remaining = deadline - policy.now();
+      if (remaining <= 0) throw new ApiBudgetError(timeouts.budgetMs);
+      const limit = Math.min(timeouts.requestMs, remaining);
+      const signal = AbortSignal.timeout(limit);
+      options.request = { ...options.request, signal };
+      try {
+        return await request2(options);
+      } catch (error2) {
+        const failure = signal.aborted ? new ApiTimeoutError(name, limit) : error2;
+        if (!idempotent) throw failure;
+        const wait = attempt < policy.maxRetries ? retryDelay(failure, attempt, policy) : null;
+        if (wait === null || wait >= deadline - policy.now()) throw failure;
+        policy.log(
+          `${retryReason(failure)}; retrying in ${Math.ceil(wait / 1e3)} s (retry ${attempt + 1} of ${policy.maxRetries})`
+        );
+        await policy.sleep(wait);
+      }
     }
-  }
-}
-function installRetries(client, policy) {
-  client.hook.wrap(
-    "request",
-    (request2, options) => withRetries(async () => request2(options), policy)
-  );
+  });
   return client;
+}
+function createRetryWait(policy, timeouts, start) {
+  const deadline = start + timeouts.budgetMs;
+  return (error2, attempt) => {
+    const wait = attempt < policy.maxRetries ? retryDelay(error2, attempt, policy) : null;
+    return wait === null || wait >= deadline - policy.now() ? null : wait;
+  };
+}
+function retryReason(error2) {
+  if (error2 instanceof ApiTimeoutError) return error2.message;
+  return `GitHub answered ${httpFailure(error2)?.status}`;
 }
 
 // src/action/dependencies.ts
@@ -43297,10 +44257,10 @@ function shortenedNote(options, what) {
 function cutAtLines(text2, budget, measure) {
   const kept = [];
   let used = 0;
-  let open2 = 0;
+  let open3 = 0;
   for (const line of text2.split("\n")) {
     const cost = measure(line) + 1;
-    const closing = measure("\n</details>\n") * (open2 + 1);
+    const closing = measure("\n</details>\n") * (open3 + 1);
     if (used + cost + closing > budget) {
       if (kept.length === 0)
         kept.push(sliceCodePoints(line, Math.max(0, budget - closing - 1), measure));
@@ -43308,9 +44268,9 @@ function cutAtLines(text2, budget, measure) {
     }
     kept.push(line);
     used += cost;
-    open2 += (line.match(/<details>/g) ?? []).length - (line.match(/<\/details>/g) ?? []).length;
+    open3 += (line.match(/<details>/g) ?? []).length - (line.match(/<\/details>/g) ?? []).length;
   }
-  for (; open2 > 0; open2 -= 1) kept.push("", "</details>");
+  for (; open3 > 0; open3 -= 1) kept.push("", "</details>");
   return `${kept.join("\n")}
 `;
 }
@@ -43327,8 +44287,9 @@ function sliceCodePoints(line, budget, measure) {
 
 // src/action/githubApi.ts
 var COMMENTS_PER_PAGE = 100;
-async function findIssueComment(client, repository, issueNumber, matches, maxPages = 500) {
+async function listIssueComments(client, repository, issueNumber, matches, maxPages = 500) {
   let pages = 0;
+  const found = [];
   const iterator2 = client.paginate.iterator(client.rest.issues.listComments, {
     ...repository,
     issue_number: issueNumber,
@@ -43337,12 +44298,15 @@ async function findIssueComment(client, repository, issueNumber, matches, maxPag
   for await (const page of iterator2) {
     for (const comment2 of page.data) {
       const body = comment2.body ?? "";
-      if (matches(body)) return { id: comment2.id, body, url: comment2.html_url };
+      if (matches(body)) found.push(toComment(comment2));
     }
     pages += 1;
     if (pages >= maxPages) break;
   }
-  return null;
+  return found;
+}
+function toComment(data) {
+  return { id: data.id, body: data.body ?? "", url: data.html_url, author: data.user?.login ?? "" };
 }
 async function createIssueComment(client, repository, issueNumber, body) {
   const { data } = await client.rest.issues.createComment({
@@ -43350,7 +44314,7 @@ async function createIssueComment(client, repository, issueNumber, body) {
     issue_number: issueNumber,
     body
   });
-  return { id: data.id, body: data.body ?? "", url: data.html_url };
+  return toComment(data);
 }
 async function updateIssueComment(client, repository, commentId, body) {
   const { data } = await client.rest.issues.updateComment({
@@ -43358,7 +44322,24 @@ async function updateIssueComment(client, repository, commentId, body) {
     comment_id: commentId,
     body
   });
-  return { id: data.id, body: data.body ?? "", url: data.html_url };
+  return toComment(data);
+}
+async function deleteIssueComment(client, repository, commentId) {
+  try {
+    await client.rest.issues.deleteComment({ ...repository, comment_id: commentId });
+  } catch (error2) {
+    if (error2.status !== 404) throw error2;
+  }
+}
+async function authenticatedLogin(client) {
+  try {
+    const { data } = await client.rest.users.getAuthenticated();
+    return data.login;
+  } catch (error2) {
+    const status = error2.status;
+    if (status === 401 || status === 403 || status === 404) return null;
+    throw error2;
+  }
 }
 async function pullRequestsOfCommit(client, repository, sha) {
   const { data } = await client.rest.repos.listPullRequestsAssociatedWithCommit({
@@ -43380,6 +44361,111 @@ async function openPullRequestsFromHead(client, repository, head) {
     per_page: 100
   });
   return data.map((p) => ({ number: p.number, state: p.state, headSha: p.head.sha }));
+}
+
+// src/action/postingIdentity.ts
+var WORKFLOW_TOKEN_LOGIN = "github-actions[bot]";
+async function postingIdentity(client) {
+  return await authenticatedLogin(client) ?? WORKFLOW_TOKEN_LOGIN;
+}
+function sameLogin(a, b) {
+  return a.toLowerCase() === b.toLowerCase();
+}
+
+// src/action/gateComment.ts
+function commentMarker(name) {
+  return `<!-- skillgate:gate=${encodeName(name)} -->`;
+}
+function encodeName(name) {
+  let out = "";
+  for (const byte of new TextEncoder().encode(name)) {
+    const ch = String.fromCharCode(byte);
+    out += /[A-Za-z0-9._]/.test(ch) ? ch : `%${byte.toString(16).toUpperCase().padStart(2, "0")}`;
+  }
+  return out;
+}
+function carriesMarker(body, marker) {
+  if (!body.startsWith(marker)) return false;
+  const rest = body.slice(marker.length);
+  return rest === "" || rest.startsWith("\n") || rest.startsWith("\r\n");
+}
+async function publishGateComment(client, repository, issueNumber, marker, body, options) {
+  const listOwn = async () => {
+    const marked = await listIssueComments(
+      client,
+      repository,
+      issueNumber,
+      (b) => carriesMarker(b, marker)
+    );
+    const own2 = marked.filter((c) => sameLogin(c.author, options.author));
+    const foreign = marked.length - own2.length;
+    if (foreign > 0) {
+      options.info(
+        `skillgate: ignored ${foreign} comment${foreign === 1 ? "" : "s"} carrying this gate's marker but not written by ${options.author}`
+      );
+    }
+    return own2;
+  };
+  let own = await listOwn();
+  let created = null;
+  if (own.length === 0) {
+    const outcome = await createOnce(client, repository, issueNumber, body, listOwn, options);
+    if (outcome.kind === "created") {
+      created = outcome.comment;
+      if (!sameLogin(created.author, options.author)) {
+        options.warning(
+          `skillgate: the comment was written as ${created.author || "an unknown user"}, not as ${options.author}; later runs will not recognise it and will post again. Use the workflow's token or a personal access token for github-token.`
+        );
+        return { action: "created", id: created.id, url: created.url, removed: 0 };
+      }
+      own = await listOwn();
+      if (!own.some((c) => c.id === created?.id)) own = [...own, created];
+    } else {
+      own = outcome.own;
+    }
+  }
+  const newest = own.reduce((a, b) => b.id > a.id ? b : a);
+  let kept = newest;
+  if (created === null || newest.id !== created.id) {
+    kept = await updateIssueComment(client, repository, newest.id, body);
+  }
+  const older = own.filter((c) => c.id !== newest.id);
+  for (const comment2 of older) await deleteIssueComment(client, repository, comment2.id);
+  if (older.length > 0) {
+    options.info(
+      `skillgate: removed ${older.length} older comment${older.length === 1 ? "" : "s"} of this gate`
+    );
+  }
+  return {
+    action: created !== null && newest.id === created.id ? "created" : "updated",
+    id: kept.id,
+    url: kept.url,
+    removed: older.length
+  };
+}
+async function createOnce(client, repository, issueNumber, body, listOwn, options) {
+  for (let attempt = 0; ; attempt += 1) {
+    try {
+      return {
+        kind: "created",
+        comment: await createIssueComment(client, repository, issueNumber, body)
+      };
+    } catch (error2) {
+      const wait = options.retryWait(error2, attempt);
+      if (wait === null) throw error2;
+      options.info(
+        `skillgate: creating the comment failed (${describeFailure(error2)}); checking whether it was created before trying again`
+      );
+      await options.sleep(wait);
+      const own = await listOwn();
+      if (own.length > 0) return { kind: "found", own };
+    }
+  }
+}
+function describeFailure(error2) {
+  const status = error2.status;
+  if (typeof status === "number") return `GitHub answered ${status}`;
+  return error2 instanceof Error ? error2.message : String(error2);
 }
 
 // src/settings/options.ts
@@ -43562,6 +44648,30 @@ var ENGINE_OPTIONS = [
     help: "how many series with the largest significant regressions to list"
   },
   {
+    name: "frequency",
+    valueName: "auto|STEP",
+    defaultValue: "auto",
+    help: "step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, bd for business days, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps"
+  },
+  {
+    name: "folds",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "fold layout (fold or path, role train|test, start, end; one row per segment) to check purging, embargo and that every row lies in its test window"
+  },
+  {
+    name: "embargo",
+    valueName: "N",
+    defaultValue: "0",
+    help: "with --folds: steps after each test window that training must also avoid"
+  },
+  {
+    name: "backtest-checks",
+    defaultValue: "enforce",
+    choices: ["enforce", "warn", "report"],
+    help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
+  },
+  {
     name: "name",
     valueName: "TEXT",
     defaultValue: "",
@@ -43599,7 +44709,7 @@ var ACTION_INPUTS = [
     name: INPUT.comment,
     defaultValue: "true",
     flag: true,
-    help: "post or update the sticky pull-request comment"
+    help: "post the gate's own pull-request comment, or edit it in place"
   },
   {
     name: INPUT.pullRequest,
@@ -43609,7 +44719,7 @@ var ACTION_INPUTS = [
   {
     name: INPUT.reportFile,
     defaultValue: "",
-    help: "post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered"
+    help: "post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered, and named by the name input, never by the report"
   }
 ];
 var ALL_INPUTS = [...ENGINE_OPTIONS, ...ACTION_INPUTS];
@@ -43708,6 +44818,10 @@ function resolveSettings(raw, label) {
     weights: bool("weights"),
     adjust: value("adjust"),
     top: integer("top", 0, 1e4),
+    frequency: parseFrequencyOption(value("frequency"), label("frequency")),
+    folds: optional("folds"),
+    embargo: integer("embargo", 0, 1e6),
+    backtestChecks: value("backtest-checks"),
     json: optional("json"),
     markdown: optional("markdown")
   };
@@ -43748,6 +44862,10 @@ function parseBlockLength(text2, label) {
     throw new InputError(`${label} must be auto or a number \u2265 1`, { value: text2 });
   }
   return { kind: "fixed", length };
+}
+function parseFrequencyOption(text2, label) {
+  if (text2 === "auto" || parseFrequency(text2) !== null) return text2;
+  throw new InputError(`${label} must be ${FREQUENCY_SYNTAX}`, { value: text2 });
 }
 
 // src/action/readInputs.ts
@@ -43808,6 +44926,37 @@ function readPullRequest(text2) {
   return n;
 }
 
+// src/action/readRegularFile.ts
+import { constants as constants3 } from "node:fs";
+import { lstat as lstat2, open as open2 } from "node:fs/promises";
+async function readRegularFile(file, maxBytes, label) {
+  const refuse = (why) => {
+    throw new InputError(`${label}: ${why}`, { value: file });
+  };
+  const link = await lstat2(file).catch(() => refuse("cannot read the file"));
+  if (link.isSymbolicLink()) refuse("is a symbolic link; only a regular file is read");
+  if (!link.isFile()) refuse("is not a regular file");
+  const handle = await open2(
+    file,
+    constants3.O_RDONLY | constants3.O_NOFOLLOW | constants3.O_NONBLOCK
+  ).catch(() => refuse("cannot read the file"));
+  try {
+    const opened = await handle.stat();
+    if (!opened.isFile()) refuse("is not a regular file");
+    if (opened.size > maxBytes) refuse(`the report is larger than ${maxBytes} bytes`);
+    const buffer = Buffer.alloc(opened.size);
+    let read = 0;
+    while (read < opened.size) {
+      const { bytesRead } = await handle.read(buffer, read, opened.size - read, read);
+      if (bytesRead === 0) break;
+      read += bytesRead;
+    }
+    return buffer.subarray(0, read).toString("utf8");
+  } finally {
+    await handle.close();
+  }
+}
+
 // src/action/runnerEnvironment.ts
 import { tmpdir } from "node:os";
 function readRunnerEnvironment(env) {
@@ -43838,37 +44987,6 @@ function parseRepository(text2) {
 function runUrl(env, runId = env.runId) {
   if (env.repository === null || runId === null) return void 0;
   return `${env.serverUrl}/${env.repository.owner}/${env.repository.repo}/actions/runs/${runId}`;
-}
-
-// src/action/stickyComment.ts
-function commentMarker(name) {
-  return `<!-- skillgate:gate=${encodeName(name)} -->`;
-}
-function encodeName(name) {
-  let out = "";
-  for (const byte of new TextEncoder().encode(name)) {
-    const ch = String.fromCharCode(byte);
-    out += /[A-Za-z0-9._]/.test(ch) ? ch : `%${byte.toString(16).toUpperCase().padStart(2, "0")}`;
-  }
-  return out;
-}
-function isStickyComment(body, marker) {
-  return body.startsWith(`${marker}
-`) || body === marker;
-}
-async function upsertStickyComment(client, repository, issueNumber, marker, body) {
-  const existing = await findIssueComment(
-    client,
-    repository,
-    issueNumber,
-    (b) => isStickyComment(b, marker)
-  );
-  if (existing === null) {
-    const created = await createIssueComment(client, repository, issueNumber, body);
-    return { action: "created", id: created.id, url: created.url };
-  }
-  const updated = await updateIssueComment(client, repository, existing.id, body);
-  return { action: "updated", id: updated.id, url: updated.url };
 }
 
 // src/action/untrustedReport.ts
@@ -43961,6 +45079,7 @@ var Reader = class _Reader {
   }
 };
 var VERDICTS = ["pass", "warn", "fail"];
+var CHECK_STATUSES = ["ok", "warn", "fail"];
 var POLICIES = ["no-regression", "non-inferiority", "superiority"];
 var AGREEMENTS = ["both", "either", "dm", "bootstrap"];
 var ESTIMATORS = ["ewc", "bartlett", "uniform"];
@@ -43983,6 +45102,7 @@ function readReport(r) {
     inputs: readInputs(r.field("inputs")),
     seriesSummary: readSeriesSummary(r.field("seriesSummary")),
     pathSummary: readPathSummary(r.field("pathSummary")),
+    integrity: readIntegrity(r.field("integrity")),
     stability: readStability(r.field("stability")),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
@@ -44062,6 +45182,30 @@ function readComparison(r) {
     },
     ...r.field("adjustedPValue").value === void 0 ? {} : { adjustedPValue: r.field("adjustedPValue").numberOrNull() },
     ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) }
+  };
+}
+var CHECK_MODES = ["enforce", "warn", "report"];
+function readIntegrity(r) {
+  if (r.value === void 0) {
+    return noChecks("report", "the report was written without backtest checks");
+  }
+  const frequency = r.field("frequency");
+  return {
+    mode: r.field("mode").oneOf(CHECK_MODES),
+    outcome: r.field("outcome").oneOf(CHECK_STATUSES),
+    affectsVerdict: r.field("affectsVerdict").boolean(),
+    frequency: frequency.value === null ? null : {
+      text: frequency.field("text").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
+      source: frequency.field("source").oneOf(["inferred", "given"])
+    },
+    checks: r.field("checks").items().map((c) => ({
+      id: c.field("id").oneOf(CHECK_IDS),
+      status: c.field("status").oneOf(CHECK_STATUSES),
+      count: c.field("count").integer(),
+      examples: c.field("examples").strings(),
+      summary: c.field("summary").string()
+    })),
+    notRun: r.field("notRun").items().map((c) => ({ id: c.field("id").oneOf(CHECK_IDS), reason: c.field("reason").string() }))
   };
 }
 function readPathSummary(r) {
@@ -44252,6 +45396,11 @@ function readSettings(r) {
     weights: r.field("weights").boolean(),
     adjust: r.field("adjust").oneOf(["holm", "bh"]),
     top: r.field("top").integer(),
+    // Absent from reports written before the backtest checks: their defaults.
+    frequency: r.field("frequency").value === void 0 ? "auto" : r.field("frequency").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
+    folds: r.field("folds").value === void 0 ? null : r.field("folds").stringOrNull(),
+    embargo: r.field("embargo").value === void 0 ? 0 : r.field("embargo").integer(),
+    backtestChecks: r.field("backtestChecks").value === void 0 ? "enforce" : r.field("backtestChecks").oneOf(CHECK_MODES),
     json: r.field("json").stringOrNull(),
     markdown: r.field("markdown").stringOrNull()
   };
@@ -44286,8 +45435,9 @@ async function gate(deps) {
   const action = readActionSettings(deps.getInput);
   const payload = await readEventPayload(env.eventPath);
   const plan = planComment(env.eventName, payload, action.pullRequest, env.sha);
-  const report = await obtainReport(deps, action);
-  const name = action.source.kind === "compare" ? action.source.settings.name : action.source.name || report.name;
+  const obtained = await obtainReport(deps, action);
+  const report = action.source.kind === "compare" ? obtained : { ...obtained, name: action.source.name };
+  const name = report.name;
   const link = runUrl(env, plan.kind === "workflow-run" ? plan.runId : env.runId);
   const render = (r) => renderMarkdown(r, link === void 0 ? {} : { runUrl: link });
   const jsonTarget = jsonPath(action, env, name);
@@ -44337,19 +45487,8 @@ async function obtainReport(deps, action) {
     });
     return report;
   }
-  const label = inputLabel("report-file");
-  const size = await stat3(source.path).then(
-    (s) => s.size,
-    () => {
-      throw new InputError(`${label}: cannot read the file`, { value: source.path });
-    }
-  );
-  if (size > MAX_REPORT_BYTES) {
-    throw new InputError(`${label}: the report is larger than ${MAX_REPORT_BYTES} bytes`, {
-      value: source.path
-    });
-  }
-  return parseUntrustedReport(await readFile2(source.path, "utf8"), source.path);
+  const text2 = await readRegularFile(source.path, MAX_REPORT_BYTES, inputLabel("report-file"));
+  return parseUntrustedReport(text2, source.path);
 }
 async function readEventPayload(eventPath) {
   if (eventPath === null) return {};
@@ -44398,21 +45537,39 @@ async function comment(deps, env, action, plan, marker, body) {
   }
   const repository = env.repository;
   try {
-    const client = installRetries(deps.createClient(action.token, env.apiUrl), {
+    const policy = {
       ...defaultRetryPolicy((m) => deps.log.info(`skillgate: ${m}`)),
       sleep: deps.sleep,
       now: deps.now
-    });
+    };
+    const timeouts = apiTimeouts(deps.env);
+    const start = deps.now();
+    const client = installRetries(deps.createClient(action.token, env.apiUrl), policy, timeouts);
     const number = await resolvePullRequest(deps, client, repository, plan);
     if (number === null) return null;
-    const result = await upsertStickyComment(client, repository, number, marker, body);
+    const author = await postingIdentity(client);
+    const result = await publishGateComment(client, repository, number, marker, body, {
+      author,
+      retryWait: createRetryWait(policy, timeouts, start),
+      sleep: deps.sleep,
+      info: (m) => deps.log.info(m),
+      warning: (m) => deps.log.warning(m)
+    });
     deps.log.info(
-      `skillgate: ${result.action} the comment on pull request #${number}: ${result.url}`
+      `skillgate: ${result.action} the comment on pull request #${number} (as ${author}): ${result.url}`
     );
     return result.url;
   } catch (error2) {
     const status = error2.status;
-    if (status === 403) {
+    if (isRateLimited(error2)) {
+      deps.log.warning(
+        `skillgate: GitHub's rate limit stopped the comment (${status}); it was not retried past the wait limits. The report is in the job summary.`
+      );
+    } else if (error2 instanceof ApiTimeoutError || error2 instanceof ApiBudgetError) {
+      deps.log.warning(
+        `skillgate: could not post the comment: ${error2.message}. The report is in the job summary.`
+      );
+    } else if (status === 403) {
       deps.log.warning(
         "skillgate: GitHub refused to write the comment (403): this token is read-only here (a pull request from a fork or from Dependabot) or the job lacks `permissions: pull-requests: write`. " + READ_ONLY_HINT
       );
@@ -44423,18 +45580,24 @@ async function comment(deps, env, action, plan, marker, body) {
     return null;
   }
 }
+function apiTimeouts(env) {
+  const text2 = env.SKILLGATE_API_TIMEOUT_MS?.trim() ?? "";
+  const ms = Number(text2);
+  if (!/^\d+$/.test(text2) || ms < 1) return DEFAULT_API_TIMEOUTS;
+  return { requestMs: ms, budgetMs: 4 * ms };
+}
 async function resolvePullRequest(deps, client, repository, plan) {
   switch (plan.kind) {
     case "pull-request":
       return plan.number;
     case "commit": {
-      const open2 = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
+      const open3 = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
         (p) => p.state === "open"
       );
-      const chosen = open2.find((p) => p.headSha === plan.sha) ?? open2[0];
+      const chosen = open3.find((p) => p.headSha === plan.sha);
       if (chosen === void 0) {
         deps.log.info(
-          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} belongs to no open pull request`
+          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} is the head of no open pull request`
         );
         return null;
       }
