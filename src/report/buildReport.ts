@@ -1,6 +1,7 @@
 import type { Hypothesis } from '../decision/hypothesis.js';
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
 import type { Settings } from '../settings/settings.js';
+import { stabilityFinding } from '../stability/stabilityFinding.js';
 import type { Stability } from '../stability/stabilityModel.js';
 import type {
   Comparison,
@@ -46,12 +47,16 @@ export function buildReport(parts: ReportParts): Report {
       );
     }
   }
-  const verdict = worstVerdict(verdicts);
+  const stability = parts.stability ?? null;
+  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  reasons.push(...finding.reasons);
+  const gateVerdict = worstVerdict(verdicts);
+  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
   return {
     tool: { name: 'skillgate', version: parts.version },
     name: settings.name,
     verdict,
-    headline: headline(verdict, overall, hypothesis),
+    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(' ').trim(),
     policy: {
       policy: settings.policy,
       agreement: settings.agreement,
@@ -70,7 +75,7 @@ export function buildReport(parts: ReportParts): Report {
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
-    stability: parts.stability ?? null,
+    stability,
   };
 }
 
