@@ -1,6 +1,7 @@
 import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
+import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Comparison, Report } from './reportModel.js';
 
 const VERDICT_WORDS = { pass: 'PASS', warn: 'WARN', fail: 'FAIL' } as const;
@@ -23,6 +24,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(...comparisonTable(report), '');
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...renderStabilitySection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
   if (reasons.length > 0) {
     lines.push('**Why**', '');

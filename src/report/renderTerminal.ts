@@ -1,4 +1,5 @@
 import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
+import { renderStabilityTerminal } from './renderStabilityTerminal.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -54,7 +55,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       .join('  ');
   out.push(paint('2', line(header)));
   for (const r of rows) out.push(line(r));
-  out.push('');
+  out.push(...renderStabilityTerminal(report), '');
   for (const reason of [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])]) {
     out.push(wrap(`- ${reason}`, 100, '  '));
   }
