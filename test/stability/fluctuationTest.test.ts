@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { createRandomSource } from '../../src/random/randomSource.js';
 import { fluctuationCriticalValue } from '../../src/stability/fluctuationCriticalValues.js';
 import { fluctuationTest } from '../../src/stability/fluctuationTest.js';
 import { rollingStatistic } from '../../src/stability/rollingStatistic.js';
@@ -66,12 +67,18 @@ describe('fluctuationTest', () => {
     lag: { kind: 'auto' },
     horizon: 1,
   } as const;
-  const noise = (n: number) =>
-    Float64Array.from({ length: n }, (_, t) => Math.sin(t * 12.9898) * 0.5);
+  // Independent uniform noise on [−0.5, 0.5] (variance 1/12) from the project's seeded source.
+  const noise = (n: number) => {
+    const random = createRandomSource(7, 0);
+    return Float64Array.from({ length: n }, () => random.nextDouble() - 0.5);
+  };
 
   it('finds a late stretch where the candidate is worse, and where it peaks', () => {
     const d = noise(200);
-    for (let t = 170; t < 200; t++) d[t]! += 0.6;
+    // Windows of 40 points, noise variance 1/12: a shift of 0.4 over the last 30 points adds
+    // about 30·0.4/√(40·σ̂²) ≈ 3.6 to the last window's statistic (σ̂² ≈ 0.17 once the shift
+    // itself inflates the prewhitened estimate), against 2.938.
+    for (let t = 170; t < 200; t++) d[t]! += 0.4;
     const r = fluctuationTest(d, options)!;
     expect(r.windowSize).toBe(40);
     expect(r.rejected).toBe(true);
@@ -92,6 +99,10 @@ describe('fluctuationTest', () => {
         expect(b.peakWindow).toBe(a.peakWindow);
       }),
     );
+  });
+
+  it('does not reject pure noise', () => {
+    expect(fluctuationTest(noise(200), options)!.rejected).toBe(false);
   });
 
   it('is not run on fewer than 20 points or a constant differential', () => {

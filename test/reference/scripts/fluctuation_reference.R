@@ -3,9 +3,14 @@
 #
 # For each case: per-time-point losses of two simple forecasts (baseline, candidate), the
 # differential d_t = loss(candidate)_t - loss(baseline)_t, and
-#   - lag:              floor(sandwich::bwNeweyWest(lm(d ~ 1), kernel = "Bartlett", prewhite = 0))
-#   - long-run variance: n * sandwich::NeweyWest(lm(d ~ 1), lag = L, prewhite = FALSE,
-#                        adjust = FALSE)  (sigma^2 of d on the whole sample)
+#   - AR(1) prewhitening (Andrews & Monahan 1992): x = d - mean(d),
+#                       a = stats::ar.ols(x, order.max = 1, aic = FALSE, demean = FALSE,
+#                       intercept = FALSE)$ar (capped at +-0.97), residuals e = x[-1] - a x[-n]
+#   - lag:              floor(sandwich::bwNeweyWest(lm(e ~ 1), kernel = "Bartlett", prewhite = 0))
+#   - long-run variance: (n - 1) * sandwich::NeweyWest(lm(e ~ 1), lag = L, prewhite = FALSE,
+#                        adjust = FALSE) / (1 - a)^2  (sigma^2 of d on the whole sample)
+#   - for comparison only: n * sandwich::NeweyWest(lm(d ~ 1), prewhite = TRUE, adjust = FALSE),
+#     sandwich's own prewhitened estimate (it does not demean the residuals, so it differs slightly)
 #   - window m = floor(mu * n + 0.5)
 #   - rolling sums:     stats::filter(d, rep(1, m), sides = 1) (sum of d[k-m+1..k])
 #   - F_k = sum / sqrt(m * sigma^2) for every full window (Giacomini & Rossi 2010, eq. 6)
@@ -57,9 +62,14 @@ for (case in cases) {
   losses <- case$make()
   d <- losses$c - losses$b
   n <- length(d)
-  fit <- lm(d ~ 1)
-  lag <- floor(bwNeweyWest(fit, kernel = "Bartlett", prewhite = 0))
-  sigma2 <- n * as.numeric(NeweyWest(fit, lag = lag, prewhite = FALSE, adjust = FALSE))
+  x <- d - mean(d)
+  a <- as.numeric(ar.ols(x, order.max = 1, aic = FALSE, demean = FALSE, intercept = FALSE)$ar)
+  a <- max(-0.97, min(0.97, a))
+  e <- x[-1] - a * x[-n]
+  efit <- lm(e ~ 1)
+  lag <- floor(bwNeweyWest(efit, kernel = "Bartlett", prewhite = 0))
+  sigma2 <- (n - 1) * as.numeric(NeweyWest(efit, lag = lag, prewhite = FALSE, adjust = FALSE)) / (1 - a)^2
+  sandwichPrewhite <- n * as.numeric(NeweyWest(lm(d ~ 1), prewhite = TRUE, adjust = FALSE))
   m <- floor(case$mu * n + 0.5)
   sums <- as.numeric(stats::filter(d, rep(1, m), sides = 1))[m:n]
   f <- sums / sqrt(m * sigma2)
@@ -70,12 +80,14 @@ for (case in cases) {
     baseline = str(case$baseline),
     candidate = str(case$candidate),
     loss = str(case$loss),
-    source = str("R sandwich::bwNeweyWest, sandwich::NeweyWest, stats::filter"),
+    source = str("R stats::ar.ols, sandwich::bwNeweyWest, sandwich::NeweyWest, stats::filter"),
     n = num(n),
     mu = num(case$mu),
     windowSize = num(m),
+    prewhiteningCoefficient = num(a),
     lag = num(lag),
     longRunVariance = num(sigma2),
+    sandwichPrewhitened = num(sandwichPrewhite),
     baselineLoss = arr(losses$b),
     candidateLoss = arr(losses$c),
     statistics = arr(f),
