@@ -111,7 +111,7 @@ export function renderStabilityValidation(
     "squared loss); equal and stable accuracy, and a planted late regression: the candidate's loss ×1.2",
     "(20% worse) over the last 15% of time points, equal before. The gate's own code (assessStability)",
     'with the default settings: fluctuation test (Giacomini & Rossi 2010, μ = 0.2, one-sided, α = 0.05,',
-    'Newey–West long-run variance with the automatic lag, Table I critical value 2.938), and the recent',
+    'Newey–West long-run variance after AR(1) prewhitening, automatic lag, Table I critical value 2.938), and the recent',
     `window \`--recent 15%\` (Diebold–Mariano ewc and the stationary bootstrap agreeing, ${run.resamples} resamples).`,
     `${run.replications} replications per design (replication r uses random stream r of seed ${run.seed}); ran on`,
     `${run.threads} worker threads in ${run.seconds.toFixed(0)} s. Monte Carlo standard error of a 5% rate: ${se(0.05)};`,
