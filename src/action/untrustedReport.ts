@@ -10,6 +10,7 @@ import type {
   Interval,
   PathSummary,
   PolicySummary,
+  RelativeChange,
   Report,
   SeriesSummary,
 } from '../report/reportModel.js';
@@ -171,6 +172,30 @@ function readInterval(r: Reader): Interval | null {
   };
 }
 
+const MAX_PIECES = 64;
+
+/** Null ends mean unbounded; `pieces` only when the set is not one interval (RelativeChange). */
+function readRelativeChange(r: Reader): RelativeChange | null {
+  if (r.value === null || r.value === undefined) return null;
+  const piece = (p: Reader) => ({
+    lower: p.field('lower').numberOrNull(),
+    upper: p.field('upper').numberOrNull(),
+  });
+  return {
+    estimate: r.field('estimate').number(),
+    level: r.field('level').number(),
+    lower: r.field('lower').numberOrNull(),
+    upper: r.field('upper').numberOrNull(),
+    method: r.field('method').string(),
+    ...(r.field('pieces').value === undefined ? {} : { pieces: readPieces(r.field('pieces')) }),
+  };
+  function readPieces(p: Reader) {
+    const items = p.items();
+    if (items.length > MAX_PIECES) p.fail(`at most ${MAX_PIECES} pieces`);
+    return items.map(piece);
+  }
+}
+
 function readComparison(r: Reader): Comparison {
   const horizon = r.field('horizon');
   const series = r.field('series');
@@ -189,6 +214,7 @@ function readComparison(r: Reader): Comparison {
     meanDifference: r.field('meanDifference').number(),
     relativeDifference: r.field('relativeDifference').numberOrNull(),
     meanTestedDifferential: r.field('meanTestedDifferential').number(),
+    relativeChange: readRelativeChange(r.field('relativeChange')),
     dieboldMariano: readDieboldMariano(r.field('dieboldMariano')),
     bootstrap: readBootstrap(r.field('bootstrap')),
     verdict: r.field('verdict').oneOf(VERDICTS),

@@ -1,6 +1,7 @@
 import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
 import type { Stability } from '../stability/stabilityModel.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
+import { relativeChangeText } from './relativeChangeText.js';
 import type { Comparison, Report } from './reportModel.js';
 
 /**
@@ -21,17 +22,14 @@ export function renderStabilitySection(report: Report): string[] {
 }
 
 function windowTable(overall: Comparison, recent: Comparison): string[] {
-  const level = recent.bootstrap.relativeInterval?.level ?? recent.bootstrap.interval?.level;
-  const head = level === undefined ? 'interval' : `${formatNumber(level * 100, 3)}% interval`;
-  const row = (name: string, c: Comparison) => {
-    const r = c.bootstrap.relativeInterval;
-    const interval =
-      r === null ? 'n/a' : `${formatSignedPercent(r.lower)} to ${formatSignedPercent(r.upper)}`;
-    return `| ${name} | ${esc(c.firstTimestamp ?? 'n/a')} to ${esc(c.lastTimestamp ?? 'n/a')} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${interval} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
-  };
+  const level = recent.relativeChange?.level;
+  const head =
+    level === undefined ? 'relative' : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name: string, c: Comparison) =>
+    `| ${name} | ${esc(c.firstTimestamp ?? 'n/a')} to ${esc(c.lastTimestamp ?? 'n/a')} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
   return [
-    `| window | from – to | time points | baseline loss | candidate loss | relative | ${head} (bootstrap) | p (DM) | p (bootstrap) | verdict |`,
-    '|---|---|---:|---:|---:|---:|---|---:|---:|---|',
+    `| window | from – to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
+    '|---|---|---:|---:|---:|---:|---:|---:|---|',
     row('whole backtest', overall),
     row('most recent', recent),
   ];

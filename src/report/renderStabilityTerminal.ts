@@ -1,4 +1,5 @@
-import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
+import { formatNumber, formatPValue } from '../core/formatNumber.js';
+import { relativeChangeText } from './relativeChangeText.js';
 import type { Report } from './reportModel.js';
 
 /**
@@ -12,9 +13,8 @@ export function renderStabilityTerminal(report: Report): string[] {
   const out: string[] = [];
   const r = s.recent;
   if (r !== null) {
-    const interval = r.bootstrap.relativeInterval;
     out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? '?')} to ${clean(r.lastTimestamp ?? '?')}, relative ${formatSignedPercent(r.relativeDifference)}${interval === null ? '' : ` [${formatSignedPercent(interval.lower)}, ${formatSignedPercent(interval.upper)}]`}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}: ${r.verdict}`,
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? '?')} to ${clean(r.lastTimestamp ?? '?')}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}: ${r.verdict}`,
     );
   }
   const f = s.fluctuation;

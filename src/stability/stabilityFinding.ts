@@ -1,6 +1,7 @@
 import { formatNumber, formatSignedPercent } from '../core/formatNumber.js';
 import type { TimestampKind } from '../core/panel.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
+import { relativeChangeText } from '../report/relativeChangeText.js';
 import type { Comparison } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { describeSpan } from './describeSpan.js';
@@ -77,16 +78,24 @@ function recentWords(c: Comparison, kind: TimestampKind): string {
   return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
 }
 
-/** "+18% (interval +9% to +27%)", the interval from the bootstrap when there is one. */
+/**
+ * "+18% mean loss (90% interval +9% to +27%)": the comparison's relative-change interval (the
+ * one the comparison table shows), else the bare relative difference.
+ */
 function changeWords(c: Comparison): string {
   const rel = c.relativeDifference;
-  const interval = c.bootstrap.relativeInterval;
-  if (rel === null)
+  if (rel === null) {
     return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
-  const shown = formatSignedPercent(rel);
-  return interval === null
-    ? `${shown} mean loss`
-    : `${shown} mean loss (${Math.round(interval.level * 100)}% interval ${formatSignedPercent(interval.lower)} to ${formatSignedPercent(interval.upper)})`;
+  }
+  const rc = c.relativeChange;
+  const shown = `${formatSignedPercent(rel)} mean loss`;
+  if (rc === null) return shown;
+  const single = rc.pieces === undefined || rc.pieces.length === 1;
+  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
+  if (single && rc.lower !== null && rc.upper !== null) {
+    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
+  }
+  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, '')})`;
 }
 
 function spanWords(span: TimeSpan): string {

@@ -30,6 +30,33 @@ describe('parseUntrustedReport', () => {
     });
   });
 
+  it('reads the relative change with unbounded ends and pieces, and refuses too many pieces', () => {
+    const report = sampleReport();
+    const c = report.comparisons[0]!;
+    const rays = {
+      ...c.relativeChange!,
+      lower: null,
+      upper: null,
+      pieces: [
+        { lower: null, upper: -0.5 },
+        { lower: 0.1, upper: null },
+      ],
+    };
+    const parsed = parseUntrustedReport(
+      JSON.stringify({ ...report, comparisons: [{ ...c, relativeChange: rays }] }),
+      'r.json',
+    );
+    expect(parsed.comparisons[0]!.relativeChange).toEqual(rays);
+    const many = { ...rays, pieces: Array.from({ length: 65 }, () => ({ lower: 0, upper: 1 })) };
+    expect(
+      describeError(JSON.stringify({ ...report, comparisons: [{ ...c, relativeChange: many }] })),
+    ).toMatch(/relativeChange\.pieces must be at most 64 pieces/);
+    const older = { ...report, comparisons: [{ ...c, relativeChange: undefined }] };
+    expect(
+      parseUntrustedReport(JSON.stringify(older), 'r.json').comparisons[0]!.relativeChange,
+    ).toBe(null);
+  });
+
   it('drops unknown fields, so a renderer never sees them', () => {
     const report = sampleReport();
     const hostile = {

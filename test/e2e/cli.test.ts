@@ -73,7 +73,7 @@ describe('skillgate compare on the demo backtest', () => {
       verdict: 'fail',
     });
     expect(report.headline).toMatch(
-      /worse in the most recent 5 weeks \(2026-09-24 to 2026-10-29\): \+\d+(\.\d+)?% mean loss \(95% interval \+[\d.]+% to \+[\d.]+%\)/,
+      /worse in the most recent 5 weeks \(2026-09-24 to 2026-10-29\): \+\d+(\.\d+)?% mean loss \(\d+% interval \+[\d.]+% to \+[\d.]+%\)/,
     );
     expect(report.headline).toMatch(/it does not fail it \(stability-gate warn\)/);
     expect(report.stability.periods).toHaveLength(35);

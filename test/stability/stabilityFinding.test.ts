@@ -14,10 +14,7 @@ const recentFail = {
   lastTimestamp: '2026-10-25',
   relativeDifference: 0.18,
   verdict: 'fail' as const,
-  bootstrap: {
-    ...overall.bootstrap,
-    relativeInterval: { level: 0.95, lower: 0.09, upper: 0.27, method: 'basic' },
-  },
+  relativeChange: { estimate: 0.18, level: 0.9, lower: 0.09, upper: 0.27, method: 'Fieller' },
 };
 const stable: Stability = { ...report.stability!, recent: null };
 const settings = (gate: 'off' | 'warn' | 'fail') => ({ ...report.settings, stabilityGate: gate });
@@ -32,7 +29,7 @@ describe('stabilityFinding', () => {
     );
     expect(f.effect).toBe('warn');
     expect(f.headline).toBe(
-      'The candidate is worse in the most recent 6 weeks (2026-09-14 to 2026-10-25): +18% mean loss (95% interval +9% to +27%). This makes the gate warn; it does not fail it (stability-gate warn).',
+      'The candidate is worse in the most recent 6 weeks (2026-09-14 to 2026-10-25): +18% mean loss (90% interval +9% to +27%). This makes the gate warn; it does not fail it (stability-gate warn).',
     );
   });
 
