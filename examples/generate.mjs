@@ -1,8 +1,9 @@
 // Writes the demo backtest under examples/data/: an invented water utility, "Harbour Valley
 // Water", forecasting daily demand (megalitres) in four pressure zones, 1 to 3 days ahead, over
-// 240 days. Four models: the current one on main (baseline.csv), a pull request that improves
-// it (candidate.csv), one that regresses in two zones (candidate-regressed.csv), and one that is
-// better for most of the backtest but worse in its last six weeks (candidate-late.csv). Invented
+// 240 days. Five models: the current one on main (baseline.csv), a pull request that improves
+// it (candidate.csv), one that regresses in two zones (candidate-regressed.csv), one whose
+// backtest peeks at the future (candidate-peeking.csv), and one that is better for most of the
+// backtest but worse in its last six weeks (candidate-late.csv). Invented
 // data, for the demo and examples only. Fixed seed: the files are the same on every run.
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
@@ -60,7 +61,13 @@ for (let i = 0; i < days + 3; i++) {
 }
 
 const header = 'zone,target_date,horizon,issued,observed,forecast';
-const rows = { baseline: [header], candidate: [header], regressed: [header], late: [header] };
+const rows = {
+  baseline: [header],
+  candidate: [header],
+  regressed: [header],
+  peeking: [header],
+  late: [header],
+};
 for (const zone of zones) {
   const actual = [];
   let noise = 0;
@@ -93,6 +100,14 @@ for (const zone of zones) {
       rows.candidate.push(`${key},${candidate.toFixed(3)}`);
       rows.regressed.push(`${key},${regressed.toFixed(3)}`);
       rows.late.push(`${key},${late.toFixed(3)}`);
+      // A pull request whose backtest peeks: its one-day-ahead forecasts are issued on the
+      // target date itself, after the demand was observed, and simply repeat it. No new random
+      // draws, so the other files stay the same.
+      rows.peeking.push(
+        horizon === 1
+          ? `${zone.name},${date(i)},${horizon},${date(i)},${y.toFixed(3)},${y.toFixed(3)}`
+          : `${key},${candidate.toFixed(3)}`,
+      );
     }
   }
 }
@@ -100,6 +115,7 @@ writeFileSync(path.join(out, 'baseline.csv'), `${rows.baseline.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate.csv'), `${rows.candidate.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate-regressed.csv'), `${rows.regressed.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate-late.csv'), `${rows.late.join('\n')}\n`);
+writeFileSync(path.join(out, 'candidate-peeking.csv'), `${rows.peeking.join('\n')}\n`);
 console.log(
   `wrote ${rows.baseline.length - 1} rows per model to ${path.relative(process.cwd(), out)}/`,
 );
