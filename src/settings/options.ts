@@ -102,8 +102,8 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'variance',
     defaultValue: 'ewc',
-    choices: ['ewc', 'bartlett', 'uniform'],
-    help: 'long-run variance for Diebold–Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey–West), uniform',
+    choices: ['ewc', 'ewc-ar1', 'bartlett', 'uniform'],
+    help: 'long-run variance for Diebold–Mariano: ewc (equal-weighted cosine, fixed-b), ewc-ar1 (ewc with the number of cosine terms from the data), bartlett (Newey–West), uniform',
   },
   {
     name: 'lag',
