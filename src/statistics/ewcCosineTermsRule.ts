@@ -24,7 +24,7 @@ export interface CosineTermsChoice {
   readonly terms: number;
   /** ρ̂ = γ̂_1/γ̂_0 of the series (divide by n), before clamping; 0 when γ̂_0 = 0. */
   readonly autocorrelation: number;
-  /** ρ̃, the clamped ρ̂ that enters the rule. */
+  /** ρ̃, the bias-corrected and clamped ρ̂ that enters the rule. */
   readonly pluginAutocorrelation: number;
 }
 
@@ -45,7 +45,13 @@ export interface CosineTermsChoice {
  * from memory), which fixes C_κ = 0.4·ω^{(2)}(0.7)^{1/3}. With ω^{(2)} = 2ρ/(1 − ρ)² for an AR(1):
  *
  *   ν̂ = clamp( round( 0.4 · n^{2/3} · (ω^{(2)}(0.7) / ω^{(2)}(ρ̃))^{1/3} ), 2, ⌊n/2⌋ ),
- *   ρ̃ = min(max(ρ̂, 0.05), 0.97),  ρ̂ = γ̂_1/γ̂_0 (autocovariances divide by n).
+ *   ρ̃ = min(max(ρ̂ + (1 + 3ρ̂)/n, 0.05), 0.97),  ρ̂ = γ̂_1/γ̂_0 (autocovariances divide by n).
+ *
+ * The term (1 + 3ρ̂)/n removes the first-order small-sample bias of ρ̂ for an AR(1) with unknown
+ * mean, E[ρ̂] − ρ = −(1 + 3ρ)/n + O(n^{−2}) (Kendall 1954, "Note on bias in the estimation of
+ * autocorrelation", Biometrika 41; Marriott & Pope 1954, Biometrika 41): without it the plug-in
+ * under-states persistence at n = 100 exactly where the fixed rule is oversized (the first
+ * measurement, without the correction, is kept in docs/validation.md).
  *
  * So ν̂ equals today's fixed rule when ρ̃ = 0.7, is smaller (fewer terms, less bias, wider
  * t_ν critical values) for stronger persistence and larger for weaker. Conventions: the floor
@@ -54,15 +60,17 @@ export interface CosineTermsChoice {
  * Nyquist frequency, and ν ≤ n − 1 always holds, as `ewcLongRunVariance` requires. Rounding to
  * nearest (`Math.round`). For n < 4 it returns the fixed rule's ν (= 2).
  *
- * @example ar1PluginCosineTerms(x) for n = 100 and ρ̂ = 0.7 → ν = 9 (= ewcDegreesOfFreedom(100));
- *   for ρ̂ = 0.81 → round(8.618 · (15.556/44.88)^{1/3}) = round(6.05) = 6.
+ * @example ar1PluginCosineTerms(x) for n = 100 and ρ̂ = 0.669 (ρ̃ = 0.669 + 3.007/100 = 0.699)
+ *   → ν = 9 (= ewcDegreesOfFreedom(100)); for ρ̃ = 0.81 → round(8.618 · (15.556/44.88)^{1/3})
+ *   = round(6.05) = 6.
  */
 export function ar1PluginCosineTerms(x: Float64Array): CosineTermsChoice {
   const n = x.length;
   if (n < 4) return { terms: ewcDegreesOfFreedom(n), autocorrelation: 0, pluginAutocorrelation: 0 };
   const [gamma0, gamma1] = autocovariances(x, 1);
   const rho = gamma0! > 0 ? gamma1! / gamma0! : 0;
-  const plugin = Math.min(Math.max(rho, AUTOCORRELATION_FLOOR), AUTOCORRELATION_CEILING);
+  const corrected = rho + (1 + 3 * rho) / n;
+  const plugin = Math.min(Math.max(corrected, AUTOCORRELATION_FLOOR), AUTOCORRELATION_CEILING);
   return {
     terms: cosineTermsForAutocorrelation(n, plugin),
     autocorrelation: rho,

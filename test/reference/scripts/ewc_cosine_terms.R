@@ -1,7 +1,7 @@
 # Reference for the data-driven number of EWC cosine terms (src/statistics/ewcCosineTermsRule.ts):
 # for series that ship with R's 'datasets' package, the lag-1 autocorrelation from R's acf()
 # (divide by n, demeaned) and the rule evaluated here independently of the TypeScript code:
-#   rho~ = min(max(rho^, 0.05), 0.97),  w(r) = 2 r / (1 - r)^2,
+#   rho~ = min(max(rho^ + (1 + 3 rho^)/n, 0.05), 0.97),  w(r) = 2 r / (1 - r)^2,
 #   nu   = min(max(2, round(0.4 n^(2/3) (w(0.7) / w(rho~))^(1/3))), max(2, floor(n / 2))).
 # R's round() rounds half to even, JavaScript's Math.round half up; the script refuses a tie.
 #   Nile            annual Nile flow at Aswan (n = 100)
@@ -15,7 +15,7 @@ script_dir <- dirname(normalizePath(sub("^--file=", "", grep("^--file=", command
 source(file.path(script_dir, "lib", "json_writer.R"))
 w <- function(r) 2 * r / (1 - r)^2
 rule <- function(n, rho) {
-  r <- min(max(rho, 0.05), 0.97)
+  r <- min(max(rho + (1 + 3 * rho) / n, 0.05), 0.97)
   raw <- 0.4 * n^(2 / 3) * (w(0.7) / w(r))^(1 / 3)
   stopifnot(abs(raw - floor(raw) - 0.5) > 1e-9)
   min(max(2, floor(raw + 0.5)), max(2, floor(n / 2)))
