@@ -120,7 +120,8 @@ const TWO_POW_32 = 4294967296;
  * (Blackman & Vigna 2021, §10: only the lowest bits fail linearity tests).
  *
  * State layout as pure-rand's: s01/s00 are the high/low words of s0, s11/s10 those of s1
- * (signed 32-bit integers); `pending` holds the low word of the last output while `hasPending`.
+ * (signed 32-bit integers); `pending` holds the low word of the last output (as a signed 32-bit
+ * integer, so it never needs a heap number) while `hasPending`.
  */
 export class Xoroshiro128PlusSource implements RandomSource {
   s01: number;
@@ -140,7 +141,7 @@ export class Xoroshiro128PlusSource implements RandomSource {
   nextUint32(): number {
     if (this.hasPending) {
       this.hasPending = false;
-      return this.pending;
+      return this.pending >>> 0;
     }
     const s00 = this.s00;
     const s01 = this.s01;
@@ -148,7 +149,7 @@ export class Xoroshiro128PlusSource implements RandomSource {
     const s11 = this.s11;
     const low = (s00 >>> 0) + (s10 >>> 0);
     const carry = low >= TWO_POW_32 ? 1 : 0;
-    this.pending = low - carry * TWO_POW_32;
+    this.pending = low | 0;
     this.hasPending = true;
     const high = (s01 + s11 + carry) >>> 0;
     const a0 = s10 ^ s00;
