@@ -36,10 +36,23 @@ export function resampleDeviationsInline(
   source: Xoroshiro128PlusSource,
   count: number,
 ): Float64Array {
+  if (sampler.inline === null) return unitBlocks(prefix, n, source, count);
+  return geometricBlocks(prefix, n, sampler, source, count);
+}
+
+/** b = 1: every block is one observation. */
+function unitBlocks(
+  prefix: Float64Array,
+  n: number,
+  source: Xoroshiro128PlusSource,
+  count: number,
+): Float64Array {
+  // Local copies of the constants: folded into the machine code, not loaded per use.
+  const P32 = 4294967296;
+  const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
-  const inline = sampler.inline;
   const lemire = n <= LEMIRE_LIMIT;
-  const threshold = TWO_POW_32 % n;
+  const threshold = P32 % n;
   const maskShift = Math.clz32(n - 1);
   let s00 = source.s00;
   let s01 = source.s01;
@@ -48,142 +61,163 @@ export function resampleDeviationsInline(
   let pend = source.pending;
   let has = source.hasPending;
 
-  if (inline === null) {
-    // b = 1: every block is one observation.
-    const step = new Float64Array(n);
-    for (let s = 0; s < n; s++) step[s] = prefix[s + 1]! - prefix[s]!;
-    for (let r = 0; r < count; r++) {
-      let filled = 0;
-      let sum = 0;
-      while (filled < n) {
-        if (lemire && !has && filled + 1 < n) {
-          // The common case: two starts from one output, its high word, then its low word.
-          const lo = (s00 >>> 0) + (s10 >>> 0);
-          const c = lo >= TWO_POW_32 ? 1 : 0;
-          const low = lo | 0;
-          const high = (s01 + s11 + c) >>> 0;
-          const a0 = s10 ^ s00;
-          const a1 = s11 ^ s01;
-          const t00 = s00;
-          s00 = (t00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
-          s01 = (s01 << 24) ^ (t00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
-          s10 = (a1 << 5) ^ (a0 >>> 27);
-          s11 = (a0 << 5) ^ (a1 >>> 27);
-          const m1 = high * n;
-          const first = Math.floor(m1 * TWO_POW_MINUS_32);
-          if (m1 - first * TWO_POW_32 < threshold) {
-            // Rejected: the low word is the next in the stream.
-            pend = low;
-            has = true;
-            source.s00 = s00;
-            source.s01 = s01;
-            source.s10 = s10;
-            source.s11 = s11;
-            source.pending = pend;
-            source.hasPending = has;
-            sum += step[rejectedStart(source, n, threshold)]!;
-            filled++;
-            s00 = source.s00;
-            s01 = source.s01;
-            s10 = source.s10;
-            s11 = source.s11;
-            pend = source.pending;
-            has = source.hasPending;
-            continue;
-          }
-          sum += step[first]!;
+  const step = new Float64Array(n);
+  for (let s = 0; s < n; s++) step[s] = prefix[s + 1]! - prefix[s]!;
+  for (let r = 0; r < count; r++) {
+    let filled = 0;
+    let sum = 0;
+    while (filled < n) {
+      if (lemire && !has && filled + 1 < n) {
+        // The common case: two starts from one output, its high word, then its low word.
+        const lo = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo >= P32 ? 1 : 0;
+        const low = lo | 0;
+        const high = (s01 + s11 + c) >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = (t00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
+        s01 = (s01 << 24) ^ (t00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
+        s10 = (a1 << 5) ^ (a0 >>> 27);
+        s11 = (a0 << 5) ^ (a1 >>> 27);
+        const m1 = high * n;
+        const first = Math.floor(m1 * INV32);
+        if (m1 - first * P32 < threshold) {
+          // Rejected: the low word is the next in the stream.
+          pend = low;
+          has = true;
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          sum += step[rejectedStart(source, n, threshold)]!;
           filled++;
-          const m2 = (low >>> 0) * n;
-          const second = Math.floor(m2 * TWO_POW_MINUS_32);
-          if (m2 - second * TWO_POW_32 < threshold) {
-            source.s00 = s00;
-            source.s01 = s01;
-            source.s10 = s10;
-            source.s11 = s11;
-            source.pending = pend;
-            source.hasPending = has;
-            sum += step[rejectedStart(source, n, threshold)]!;
-            filled++;
-            s00 = source.s00;
-            s01 = source.s01;
-            s10 = source.s10;
-            s11 = source.s11;
-            pend = source.pending;
-            has = source.hasPending;
-            continue;
-          }
-          sum += step[second]!;
-          filled++;
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
           continue;
         }
-        let x: number;
-        if (has) {
-          x = pend >>> 0;
-          has = false;
-        } else {
-          const lo = (s00 >>> 0) + (s10 >>> 0);
-          const c = lo >= TWO_POW_32 ? 1 : 0;
-          pend = lo | 0;
-          has = true;
-          x = (s01 + s11 + c) >>> 0;
-          const a0 = s10 ^ s00;
-          const a1 = s11 ^ s01;
-          const t00 = s00;
-          s00 = (t00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
-          s01 = (s01 << 24) ^ (t00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
-          s10 = (a1 << 5) ^ (a0 >>> 27);
-          s11 = (a0 << 5) ^ (a1 >>> 27);
-        }
-        let start: number;
-        if (lemire) {
-          const m = x * n;
-          start = Math.floor(m * TWO_POW_MINUS_32);
-          if (m - start * TWO_POW_32 < threshold) {
-            source.s00 = s00;
-            source.s01 = s01;
-            source.s10 = s10;
-            source.s11 = s11;
-            source.pending = pend;
-            source.hasPending = has;
-            start = rejectedStart(source, n, threshold);
-            s00 = source.s00;
-            s01 = source.s01;
-            s10 = source.s10;
-            s11 = source.s11;
-            pend = source.pending;
-            has = source.hasPending;
-          }
-        } else {
-          start = maskShift === 0 ? x : x >>> maskShift;
-          if (start >= n) {
-            source.s00 = s00;
-            source.s01 = s01;
-            source.s10 = s10;
-            source.s11 = s11;
-            source.pending = pend;
-            source.hasPending = has;
-            start = bitmaskStart(source, n, maskShift);
-            s00 = source.s00;
-            s01 = source.s01;
-            s10 = source.s10;
-            s11 = source.s11;
-            pend = source.pending;
-            has = source.hasPending;
-          }
-        }
-        sum += step[start]!;
+        sum += step[first]!;
         filled++;
+        const m2 = (low >>> 0) * n;
+        const second = Math.floor(m2 * INV32);
+        if (m2 - second * P32 < threshold) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          sum += step[rejectedStart(source, n, threshold)]!;
+          filled++;
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+          continue;
+        }
+        sum += step[second]!;
+        filled++;
+        continue;
       }
-      out[r] = sum / n;
+      let x: number;
+      if (has) {
+        x = pend >>> 0;
+        has = false;
+      } else {
+        const lo = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo >= P32 ? 1 : 0;
+        pend = lo | 0;
+        has = true;
+        x = (s01 + s11 + c) >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = (t00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
+        s01 = (s01 << 24) ^ (t00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
+        s10 = (a1 << 5) ^ (a0 >>> 27);
+        s11 = (a0 << 5) ^ (a1 >>> 27);
+      }
+      let start: number;
+      if (lemire) {
+        const m = x * n;
+        start = Math.floor(m * INV32);
+        if (m - start * P32 < threshold) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = rejectedStart(source, n, threshold);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      } else {
+        start = maskShift === 0 ? x : x >>> maskShift;
+        if (start >= n) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = bitmaskStart(source, n, maskShift);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      }
+      sum += step[start]!;
+      filled++;
     }
-    source.s00 = s00;
-    source.s01 = s01;
-    source.s10 = s10;
-    source.s11 = s11;
-    source.pending = pend;
-    source.hasPending = has;
-    return out;
+    out[r] = sum / n;
   }
+  source.s00 = s00;
+  source.s01 = s01;
+  source.s10 = s10;
+  source.s11 = s11;
+  source.pending = pend;
+  source.hasPending = has;
+  return out;
+}
+
+/** b > 1: geometric lengths through the sampler's alias table. */
+function geometricBlocks(
+  prefix: Float64Array,
+  n: number,
+  sampler: GeometricSampler,
+  source: Xoroshiro128PlusSource,
+  count: number,
+): Float64Array {
+  // Local copies of the constants: folded into the machine code, not loaded per use.
+  const P32 = 4294967296;
+  const INV32 = 1 / 4294967296;
+  const out = new Float64Array(count);
+  const inline = sampler.inline!;
+  const lemire = n <= LEMIRE_LIMIT;
+  const threshold = P32 % n;
+  const maskShift = Math.clz32(n - 1);
+  let s00 = source.s00;
+  let s01 = source.s01;
+  let s10 = source.s10;
+  let s11 = source.s11;
+  let pend = source.pending;
+  let has = source.hasPending;
 
   const { shift, coinMask, edge, alias, truncation } = inline;
   const starts = new Int32Array(n);
@@ -199,7 +233,7 @@ export function resampleDeviationsInline(
         has = false;
       } else {
         const lo = (s00 >>> 0) + (s10 >>> 0);
-        const c = lo >= TWO_POW_32 ? 1 : 0;
+        const c = lo >= P32 ? 1 : 0;
         pend = lo | 0;
         has = true;
         x = (s01 + s11 + c) >>> 0;
@@ -214,8 +248,8 @@ export function resampleDeviationsInline(
       let start: number;
       if (lemire) {
         const m = x * n;
-        start = Math.floor(m * TWO_POW_MINUS_32);
-        if (m - start * TWO_POW_32 < threshold) {
+        start = Math.floor(m * INV32);
+        if (m - start * P32 < threshold) {
           source.s00 = s00;
           source.s01 = s01;
           source.s10 = s10;
@@ -255,7 +289,7 @@ export function resampleDeviationsInline(
         has = false;
       } else {
         const lo = (s00 >>> 0) + (s10 >>> 0);
-        const c = lo >= TWO_POW_32 ? 1 : 0;
+        const c = lo >= P32 ? 1 : 0;
         pend = lo | 0;
         has = true;
         y = (s01 + s11 + c) >>> 0;
