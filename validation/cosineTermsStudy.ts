@@ -12,7 +12,7 @@ export const COSINE_TERMS_PROCEDURES = [
   'ewc, ν = 0.4 n^{2/3}',
   'ewc-ar1',
   'stationary bootstrap',
-  'default policy (ewc and bootstrap)',
+  'policy with ewc (ewc and bootstrap)',
   'policy with ewc-ar1 (ewc-ar1 and bootstrap)',
 ] as const;
 export type CosineTermsProcedure = (typeof COSINE_TERMS_PROCEDURES)[number];
@@ -26,10 +26,10 @@ export interface CosineTermsStudyResult {
 }
 
 /**
- * Rejection rates ("candidate worse", one-sided α) of the default gate and of the same gate with
+ * Rejection rates ("candidate worse", one-sided α) of the gate with `--variance ewc` and with
  * `--variance ewc-ar1`, on `replications` simulated backtests of one design. Each replication runs
- * the default comparison once (ewc with the fixed ν and the stationary bootstrap, the gate's own
- * code and settings: relative margin 0, no-regression, agreement both) and the ewc-ar1
+ * the ewc comparison once (ewc with the fixed ν and the stationary bootstrap, the gate's own
+ * code and default settings otherwise: relative margin 0, no-regression, agreement both) and the ewc-ar1
  * Diebold–Mariano test on the same differential; the ewc-ar1 policy fails when that test and the
  * same bootstrap both reject, exactly what `--variance ewc-ar1` would decide (the bootstrap does
  * not depend on the variance setting). Replication r uses random stream r of `seed`.
@@ -46,7 +46,7 @@ export function runCosineTermsStudy(
     alpha: String(alpha),
     'min-points': '1',
   };
-  const settings = resolveSettings(base, (name) => name);
+  const settings = resolveSettings({ ...base, variance: 'ewc' }, (name) => name);
   const ar1Settings = resolveSettings({ ...base, variance: 'ewc-ar1' }, (name) => name);
   const hypothesis = hypothesisFor('no-regression', 0, 'relative');
   const counts = Object.fromEntries(COSINE_TERMS_PROCEDURES.map((p) => [p, 0])) as Record<
@@ -72,7 +72,7 @@ export function runCosineTermsStudy(
     if (comparison.rejected.dieboldMariano) counts['ewc, ν = 0.4 n^{2/3}']++;
     if (ar1Rejects) counts['ewc-ar1']++;
     if (comparison.rejected.bootstrap) counts['stationary bootstrap']++;
-    if (comparison.verdict === 'fail') counts['default policy (ewc and bootstrap)']++;
+    if (comparison.verdict === 'fail') counts['policy with ewc (ewc and bootstrap)']++;
     if (ar1Rejects && comparison.rejected.bootstrap) {
       counts['policy with ewc-ar1 (ewc-ar1 and bootstrap)']++;
     }
