@@ -57,7 +57,7 @@ export function renderCosineTermsSection(
     '',
     'Fixed ν = max(2, round(0.4 n^{2/3})) (`--variance ewc`, Lazarus, Lewis, Stock & Watson 2018; the',
     'default before this measurement) against ν chosen from the data (`--variance ewc-ar1`,',
-    '`ar1PluginCosineTerms` in src/statistics/ewcCosineTermsRule.ts; decision 0008). Innovations',
+    '`ar1PluginCosineTerms` in src/statistics/ewcCosineTermsRule.ts; decision 0009). Innovations',
     'correlated 0.5 between the models, squared loss, one-sided α = 0.05, margin 0; policies with',
     `agreement both. ${run.replications} replications per design (replication r: stream r of seed ${run.seed}),`,
     `${run.resamples} bootstrap resamples, automatic block length, seed 1729. Monte Carlo standard`,

@@ -65,7 +65,13 @@ export function runCosineTermsStudy(
       settings,
     );
     const d = lossDifferential(series, hypothesis.baselineFactor - 1);
-    const ar1 = runDieboldMariano(d, series.maxHorizon, hypothesis, ar1Settings);
+    const ar1 = runDieboldMariano(
+      d,
+      series.maxHorizon,
+      hypothesis,
+      ar1Settings,
+      lossDifferential(series, 0),
+    );
     const ar1Rejects = ar1.decisionPValue !== null && ar1.decisionPValue <= alpha;
     fixedTerms += comparison.dieboldMariano.degreesOfFreedom ?? 0;
     ar1Terms += ar1.degreesOfFreedom ?? 0;

@@ -31,9 +31,9 @@ export interface DieboldMarianoOptions {
   /** Absolute margin δ in loss units: H0 is E[d] ≤ δ. */
   margin: number;
   /**
-   * The series on which `bartlett` / `uniform` choose their lag (default d). The gate passes the
-   * unshifted differential L_c − L_b, so the lag, and with it the test's variance, is the same
-   * quadratic form at every relative margin (docs/decisions/0008-intervals-from-the-tests.md).
+   * The series on which `bartlett` / `uniform` choose their lag and `ewc-ar1` its ν (default d).
+   * The gate passes the unshifted differential L_c − L_b, so the lag or ν, and with it the test's
+   * variance, is the same quadratic form at every relative margin (docs/decisions/0008-intervals-from-the-tests.md).
    */
   lagSeries?: Float64Array;
 }
@@ -176,7 +176,7 @@ export function dieboldMariano(
   if (requestedEstimator === 'ewc' || requestedEstimator === 'ewc-ar1') {
     let terms: number | undefined;
     if (requestedEstimator === 'ewc-ar1') {
-      const choice = ar1PluginCosineTerms(d);
+      const choice = ar1PluginCosineTerms(options.lagSeries ?? d);
       terms = choice.terms;
       base.notes.push(
         `${terms} cosine terms chosen from the first-order autocorrelation ` +
