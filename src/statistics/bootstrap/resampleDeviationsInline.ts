@@ -67,25 +67,44 @@ function unitBlocks(
     let filled = 0;
     let sum = 0;
     while (filled < n) {
-      if (lemire && !has && filled + 1 < n) {
-        // The common case: two starts from one output, its high word, then its low word.
-        const lo = (s00 >>> 0) + (s10 >>> 0);
-        const c = lo >= P32 ? 1 : 0;
-        const low = lo | 0;
-        const high = (s01 + s11 + c) >>> 0;
-        const a0 = s10 ^ s00;
-        const a1 = s11 ^ s01;
-        const t00 = s00;
-        s00 = (t00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
-        s01 = (s01 << 24) ^ (t00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
-        s10 = (a1 << 5) ^ (a0 >>> 27);
-        s11 = (a0 << 5) ^ (a1 >>> 27);
-        const m1 = high * n;
-        const first = Math.floor(m1 * INV32);
-        if (m1 - first * P32 < threshold) {
-          // Rejected: the low word is the next in the stream.
-          pend = low;
-          has = true;
+      if (lemire && !has) {
+        // The common case, in a tight loop: two starts from one output, its high word, then its
+        // low word. A rejected word leaves the loop; the rest of the stream is the same.
+        const stop = n - 1;
+        let rejected = false;
+        while (filled < stop) {
+          const lo = (s00 >>> 0) + (s10 >>> 0);
+          const c = lo >= P32 ? 1 : 0;
+          const low = lo | 0;
+          const high = (s01 + s11 + c) >>> 0;
+          const a0 = s10 ^ s00;
+          const a1 = s11 ^ s01;
+          const t00 = s00;
+          s00 = (t00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
+          s01 = (s01 << 24) ^ (t00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
+          s10 = (a1 << 5) ^ (a0 >>> 27);
+          s11 = (a0 << 5) ^ (a1 >>> 27);
+          const m1 = high * n;
+          const first = Math.floor(m1 * INV32);
+          if (m1 - first * P32 < threshold) {
+            // The low word is the next in the stream.
+            pend = low;
+            has = true;
+            rejected = true;
+            break;
+          }
+          sum += step[first]!;
+          filled++;
+          const m2 = (low >>> 0) * n;
+          const second = Math.floor(m2 * INV32);
+          if (m2 - second * P32 < threshold) {
+            rejected = true;
+            break;
+          }
+          sum += step[second]!;
+          filled++;
+        }
+        if (rejected) {
           source.s00 = s00;
           source.s01 = s01;
           source.s10 = s10;
@@ -102,30 +121,7 @@ function unitBlocks(
           has = source.hasPending;
           continue;
         }
-        sum += step[first]!;
-        filled++;
-        const m2 = (low >>> 0) * n;
-        const second = Math.floor(m2 * INV32);
-        if (m2 - second * P32 < threshold) {
-          source.s00 = s00;
-          source.s01 = s01;
-          source.s10 = s10;
-          source.s11 = s11;
-          source.pending = pend;
-          source.hasPending = has;
-          sum += step[rejectedStart(source, n, threshold)]!;
-          filled++;
-          s00 = source.s00;
-          s01 = source.s01;
-          s10 = source.s10;
-          s11 = source.s11;
-          pend = source.pending;
-          has = source.hasPending;
-          continue;
-        }
-        sum += step[second]!;
-        filled++;
-        continue;
+        if (filled >= n) break;
       }
       let x: number;
       if (has) {
