@@ -25,7 +25,7 @@ export function renderCoverageSection(
     '(φ = 0.9), heavy tails (t with 3 degrees of freedom, unit variance: the losses have no finite',
     'variance) and a variance that doubles halfway; equal accuracy and a candidate error scale 1.2',
     '(true relative change +44%). Truth: E[L_c − L_b] and E[L_c]/E[L_b] − 1 averaged over the n time',
-    `points. Default settings (level 1 − 2α = ${pct(level)}, ewc, automatic block length, agreement both),`,
+    `points. Default settings (level 1 − 2α = ${pct(level)}, variance ewc-ar1, automatic block length, agreement both),`,
     `${run.replications} replications per cell (replication r uses random stream r of seed ${run.seed}),`,
     `B = ${run.resamples} bootstrap resamples (the gate's default is 9,999; ${run.resamples} keeps the study to`,
     `minutes on a shared machine and moves bootstrap quantiles by well under a point), ${run.threads} worker threads,`,

@@ -11,9 +11,9 @@ import { type CoverageDesign, coverageTruth, simulateCoverageSeries } from './co
 /** The intervals the report shows, and the two tests' inverted sets the combined one is made of. */
 export const COVERAGE_INTERVALS = [
   'relative change (shown: both tests inverted, union)',
-  'relative change, Fieller (ewc) alone',
+  'relative change, Fieller alone',
   'relative change, inverted bootstrap alone',
-  'difference, Diebold–Mariano (ewc, t_ν)',
+  'difference, Diebold–Mariano (t_ν)',
   'difference, bootstrap (basic)',
 ] as const;
 export type CoverageInterval = (typeof COVERAGE_INTERVALS)[number];

@@ -2,27 +2,44 @@
  * `npm run validate`: the full size, power and coverage study behind docs/validation.md. Runs the
  * designs of DESIGN.md ("Why ewc is the default") through the gate's own code on both cores
  * (worker threads, replications split by index, so the numbers do not depend on the split) and
- * writes the table, then the coverage study of every interval the report shows
- * (validation/coverageStudy.ts). Options: --replications N (default 2000), --resamples B (default
- * 9999), --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
- * --coverage (rerun only the coverage section, replacing it in the file),
- * --coverage-replications N (default 1000), --coverage-resamples B (default 999),
- * --candidates (print the measurement of the studentised-bootstrap candidate, 300 replications).
+ * writes the table. Options: --replications N (default 2000), --resamples B (default 9999),
+ * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
+ * --stability-replications N (default 4000) and --stability-only (the stability study of
+ * validation/stabilityStudy.ts alone, replacing its section of the existing document),
+ * --section cosine-terms (run only that study and replace its section in the existing FILE),
+ * --coverage (the coverage study of every interval the report shows, validation/coverageStudy.ts,
+ * alone, replacing its section), --coverage-replications N (default 1000), --coverage-resamples B
+ * (default 999), --candidates (print the measurement of the studentised-bootstrap candidate).
  */
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import { candidateStudy } from './candidateStudy.js';
+import {
+  COSINE_TERMS_SECTION_END,
+  COSINE_TERMS_SECTION_START,
+  cosineTermsDesigns,
+  renderCosineTermsSection,
+} from './cosineTermsSection.js';
+import { type CosineTermsStudyResult, runCosineTermsStudy } from './cosineTermsStudy.js';
 import { type CoverageDesign, coverageDesigns } from './coverageDesigns.js';
 import { COVERAGE_HEADING, renderCoverageSection } from './coverageSection.js';
 import { type CoverageResult, runCoverage } from './coverageStudy.js';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
+import {
+  renderStabilityValidation,
+  runStabilityJobs,
+  runStabilityValidation,
+  type StabilityJob,
+  withStabilitySection,
+} from './stabilityValidation.js';
 
 /** Seed of the simulated errors (the bootstrap keeps the gate's default seed). */
 const SEED = 20261201;
 
 interface Job {
+  study?: 'size-power' | 'cosine-terms';
   design: SimulationDesign;
   firstReplication: number;
   replications: number;
@@ -35,9 +52,17 @@ interface CoverageJob extends Omit<Job, 'design'> {
 }
 
 if (!isMainThread) {
-  const jobs = workerData as (Job | CoverageJob)[];
+  const jobs = workerData as (Job | StabilityJob | CoverageJob)[];
   parentPort!.postMessage(
-    jobs.map((j) => ('coverage' in j ? runCoverage(j.coverage, j) : runStudy(j.design, j))),
+    jobs[0] !== undefined && 'kind' in jobs[0]
+      ? runStabilityJobs(jobs as StabilityJob[])
+      : (jobs as (Job | CoverageJob)[]).map((j) =>
+          'coverage' in j
+            ? runCoverage(j.coverage, j)
+            : j.study === 'cosine-terms'
+              ? runCosineTermsStudy(j.design, j)
+              : runStudy(j.design, j),
+        ),
   );
 } else {
   await main();
@@ -54,6 +79,7 @@ async function main(): Promise<void> {
   const resamples = option('resamples', quick ? 999 : 9999);
   const outIndex = args.indexOf('--out');
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
+  const threads = Math.max(1, Math.min(2, availableParallelism()));
   const coverageReplications = option('coverage-replications', quick ? 200 : 1000);
   const coverageResamples = option('coverage-resamples', 999);
   if (args.includes('--candidates')) {
@@ -61,13 +87,19 @@ async function main(): Promise<void> {
     return;
   }
   if (args.includes('--coverage')) {
-    // Only the coverage section, replacing it in the existing file.
-    const previous = existsSync(out) ? readFileSync(out, 'utf8') : '';
-    const at = previous.indexOf(COVERAGE_HEADING);
-    const head = at >= 0 ? previous.slice(0, at) : previous === '' ? '' : `${previous}\n`;
     const section = await coverageStudy(coverageReplications, coverageResamples);
-    writeFileSync(out, `${head}${section}`);
+    writeFileSync(out, withCoverageSection(readFileSync(out, 'utf8'), section));
     process.stderr.write(`wrote the coverage section of ${out}\n`);
+    return;
+  }
+  const sectionIndex = args.indexOf('--section');
+  if (sectionIndex >= 0) {
+    if (args[sectionIndex + 1] !== 'cosine-terms') {
+      throw new Error(`unknown section ${args[sectionIndex + 1]}; known: cosine-terms`);
+    }
+    const section = await cosineTermsStudy(replications, resamples, threads);
+    writeFileSync(out, spliceSection(readFileSync(out, 'utf8'), section));
+    process.stderr.write(`replaced the cosine-terms section of ${out}\n`);
     return;
   }
   const designs: SimulationDesign[] = [];
@@ -78,7 +110,20 @@ async function main(): Promise<void> {
       }
     }
   }
-  const threads = Math.max(1, Math.min(2, availableParallelism()));
+  // --stability-only: regenerate the stability section of an existing document alone.
+  const stabilityReplications = option('stability-replications', quick ? 400 : 4000);
+  const stability = async (document: string) => {
+    const run = { replications: stabilityReplications, resamples, seed: SEED };
+    const { results, seconds } = await runStabilityValidation(
+      new URL(import.meta.url),
+      threads,
+      run,
+    );
+    const section = renderStabilityValidation(results, { ...run, seconds, threads });
+    writeFileSync(out, withStabilitySection(document, section));
+    process.stderr.write(`wrote the stability section of ${out} in ${seconds.toFixed(0)} s\n`);
+  };
+  if (args.includes('--stability-only')) return stability(readFileSync(out, 'utf8'));
   const started = Date.now();
   const results: StudyResult[] = [];
   for (const design of designs) {
@@ -98,12 +143,97 @@ async function main(): Promise<void> {
     );
   }
   const seconds = (Date.now() - started) / 1000;
+  const section = await cosineTermsStudy(replications, resamples, threads);
   const coverage = await coverageStudy(coverageReplications, coverageResamples);
   writeFileSync(
     out,
-    `${renderTable(results, { replications, resamples, seconds, threads })}\n${coverage}`,
+    withCoverageSection(
+      `${renderTable(results, { replications, resamples, seconds, threads })}${section}`,
+      coverage,
+    ),
   );
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
+  await stability(readFileSync(out, 'utf8'));
+}
+
+/** The cosine-terms study on `threads` worker threads, rendered as its section. */
+async function cosineTermsStudy(
+  replications: number,
+  resamples: number,
+  threads: number,
+): Promise<string> {
+  const started = Date.now();
+  const results: CosineTermsStudyResult[] = [];
+  for (const design of cosineTermsDesigns()) {
+    const per = Math.ceil(replications / threads);
+    const parts = (await Promise.all(
+      Array.from({ length: threads }, (_, k) => {
+        const first = k * per;
+        const count = Math.max(0, Math.min(per, replications - first));
+        return runInWorker([
+          {
+            study: 'cosine-terms',
+            design,
+            firstReplication: first,
+            replications: count,
+            resamples,
+            seed: SEED,
+          },
+        ]);
+      }),
+    )) as unknown as CosineTermsStudyResult[][];
+    const flat = parts.flat();
+    const total = flat.reduce((s, p) => s + p.replications, 0);
+    const weighted = (pick: (p: CosineTermsStudyResult) => number) =>
+      flat.reduce((s, p) => s + pick(p) * p.replications, 0) / total;
+    results.push({
+      design,
+      replications: total,
+      rejectionRate: Object.fromEntries(
+        Object.keys(flat[0]!.rejectionRate).map((k) => [
+          k,
+          weighted((p) => p.rejectionRate[k as keyof typeof p.rejectionRate]),
+        ]),
+      ) as CosineTermsStudyResult['rejectionRate'],
+      meanTerms: {
+        fixed: weighted((p) => p.meanTerms.fixed),
+        ar1: weighted((p) => p.meanTerms.ar1),
+      },
+    });
+    process.stderr.write(
+      `cosine terms: n=${design.n} φ=${design.phi} ${JSON.stringify(results.at(-1)!.rejectionRate)}\n`,
+    );
+  }
+  const seconds = (Date.now() - started) / 1000;
+  return renderCosineTermsSection(results, {
+    replications,
+    resamples,
+    seed: SEED,
+    seconds,
+    note: `${threads} worker threads, under nice -n 10 on a machine shared with other work`,
+  });
+}
+
+/** Replaces the cosine-terms section of a validation document (appends it when absent). */
+function spliceSection(document: string, section: string): string {
+  const start = document.indexOf(COSINE_TERMS_SECTION_START);
+  const end = document.indexOf(COSINE_TERMS_SECTION_END);
+  if (start < 0 || end < 0) return `${document.trimEnd()}\n\n${section}`;
+  return `${document.slice(0, start)}${section}${document.slice(end + COSINE_TERMS_SECTION_END.length + 1)}`;
+}
+
+/**
+ * Puts the coverage section into a document: replaces it (from its heading to the next "## "
+ * heading, "<!--" marker or the end) when present, else appends it.
+ */
+function withCoverageSection(document: string, section: string): string {
+  const at = document.indexOf(COVERAGE_HEADING);
+  if (at < 0) return `${document.trimEnd()}\n\n${section}`;
+  const after = at + COVERAGE_HEADING.length;
+  const ends = [document.indexOf('\n## ', after), document.indexOf('\n<!--', after)];
+  const next = Math.min(...ends.map((i) => (i < 0 ? document.length : i)));
+  const rest = document.slice(next).replace(/^\n+/, '');
+  return `${document.slice(0, at)}${section}${rest === '' ? '' : `\n${rest}`}`;
 }
 
 /** The coverage study (validation/coverageStudy.ts) at n = 50, 100, 200, 500 on both threads. */
@@ -196,7 +326,7 @@ function renderTable(
     '',
     'Generated by `npm run validate` (validation/main.ts); do not edit by hand.',
     '',
-    `Design (DESIGN.md, "Why ewc is the default"): both models' errors are AR(1) with φ = 0.6,`,
+    `Design (docs/design.md, "Why ewc is the default"): both models' errors are AR(1) with φ = 0.6,`,
     'innovations correlated ρ between the models, squared loss, one series, one-sided α = 0.05,',
     'H0 "candidate not worse" (margin 0). Size: equal accuracy. Power: candidate error scale 1.2.',
     `${run.replications} replications per design (replication r uses random stream r of seed ${SEED}),`,

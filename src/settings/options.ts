@@ -101,9 +101,9 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   },
   {
     name: 'variance',
-    defaultValue: 'ewc',
-    choices: ['ewc', 'bartlett', 'uniform'],
-    help: 'long-run variance for Diebold–Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey–West), uniform',
+    defaultValue: 'ewc-ar1',
+    choices: ['ewc-ar1', 'ewc', 'bartlett', 'uniform'],
+    help: 'long-run variance for Diebold–Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4·n^(2/3) terms), bartlett (Newey–West), uniform',
   },
   {
     name: 'lag',
@@ -195,6 +195,30 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     valueName: 'N',
     defaultValue: '10',
     help: 'how many series with the largest significant regressions to list',
+  },
+  {
+    name: 'recent',
+    valueName: 'N|P%',
+    defaultValue: '',
+    help: 'also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)',
+  },
+  {
+    name: 'fluctuation-window',
+    valueName: 'MU',
+    defaultValue: '0.2',
+    help: 'window of the fluctuation test (Giacomini–Rossi) as a fraction of the time points, 0.1 to 0.9',
+  },
+  {
+    name: 'fluctuation-sides',
+    defaultValue: 'one',
+    choices: ['one', 'two'],
+    help: 'fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)',
+  },
+  {
+    name: 'stability-gate',
+    defaultValue: 'warn',
+    choices: ['off', 'warn', 'fail'],
+    help: 'what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail',
   },
   {
     name: 'frequency',
