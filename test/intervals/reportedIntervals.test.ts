@@ -67,7 +67,7 @@ describe('every interval is for the quantity printed beside it', () => {
     expect(rc.upper!).toBeGreaterThan(rc.estimate);
     expect(rc.method).toBe('Fieller (ewc-ar1) ∪ inverted bootstrap');
     expect(relativeChangeText(margin)).toMatch(
-      /^[−+-]?\d.*% \[.*%, .*%\] ( \(measured coverage [\d.]+%\))?$/,
+      /^[−+-]?\d.*% \[.*%, .*%\]( \(measured coverage [\d.]+%\))?$/,
     );
   });
 
