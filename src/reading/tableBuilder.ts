@@ -1,8 +1,10 @@
-import { InputError } from '../core/inputError.js';
+import { echo, InputError } from '../core/inputError.js';
 import type { FileSummary, QuantileColumn } from '../core/panel.js';
 import { type ColumnMapping, checkDistinctNames, resolveColumns } from './columnMapping.js';
 import type { ForecastTable, LabelColumn } from './forecastTable.js';
+import { type Delimiter, delimiterLabel } from './inputFormat.js';
 import { parseDecimal, parseHorizon } from './numbers.js';
+import { RowKeySet } from './rowKeySet.js';
 import { Tokenizer } from './tokenizer.js';
 
 export type FileRole = 'baseline' | 'candidate' | 'actuals';
@@ -18,6 +20,12 @@ export interface ParseOptions {
    * Actuals files always require it.
    */
   readonly requireActual?: boolean;
+  /** Field separator; overrides the one `format` implies. */
+  readonly delimiter?: Delimiter;
+  /** Decimal mark of numbers: "." (default) or "," (then the delimiter must not be a comma). */
+  readonly decimal?: '.' | ',';
+  /** Longest record in characters (default 1 MiB). */
+  readonly lineLimit?: number;
 }
 
 /**
@@ -47,20 +55,45 @@ export class ForecastTableReader {
   private readonly timeLabels = new Interner();
   private readonly originLabels = new Interner();
   private readonly pathLabels = new Interner();
+  private readonly delimiter: Delimiter;
+  private readonly decimalComma: boolean;
+  private keys: RowKeySet | null = null;
 
   constructor(path: string, options: ParseOptions) {
     this.path = path;
     this.options = options;
     checkDistinctNames(options.columns ?? {});
-    const delimiter = options.format === 'tsv' ? '\t' : ',';
+    const delimiter = options.delimiter ?? (options.format === 'tsv' ? '\t' : ',');
+    this.delimiter = delimiter;
+    this.decimalComma = options.decimal === ',';
+    if (this.decimalComma && delimiter === ',') {
+      throw new InputError(
+        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
+        { file: path },
+      );
+    }
     this.tokenizer = new Tokenizer(
       delimiter,
-      (fields, count, line) => {
-        if (this.header === null) this.readHeader(fields, count, line);
-        else this.readRow(fields, count, line);
-      },
+      (fields, count, line) => this.record(fields, count, line),
       path,
+      options.lineLimit,
     );
+  }
+
+  /**
+   * Takes one record (the header first, then rows) from a source other than text, such as a
+   * Parquet file's rows rendered as fields; `line` is what messages call the record's line.
+   */
+  record(fields: string[], count: number, line: number): void {
+    if (this.header === null) this.readHeader(fields, count, line);
+    else this.readRow(fields, count, line);
+  }
+
+  /** Header indices of the columns that play a role (after the header was read). */
+  get usedColumns(): readonly number[] {
+    const h = this.header;
+    if (h === null) return [];
+    return h.names.map((_, i) => i).filter((i) => !h.ignored.includes(h.names[i]!));
   }
 
   push(chunk: string): void {
@@ -145,9 +178,24 @@ export class ForecastTableReader {
   }
 
   private readHeader(fields: string[], count: number, line: number): void {
-    this.header = resolveHeader(fields.slice(0, count), this.path, line, this.options);
+    this.header = resolveHeader(
+      fields.slice(0, count),
+      this.path,
+      line,
+      this.options,
+      this.delimiter,
+    );
     this.headerLine = line;
     this.quantileValues = this.header.quantiles.map(() => new Float64Array(0));
+    const h = this.header;
+    const key: (() => Int32Array)[] = [() => this.timeIds];
+    if (h.series >= 0) key.push(() => this.seriesIds);
+    if (this.options.role !== 'actuals') {
+      if (h.horizon >= 0) key.push(() => this.horizons);
+      if (h.origin >= 0) key.push(() => this.originIds);
+      if (h.path >= 0) key.push(() => this.pathIds);
+    }
+    this.keys = new RowKeySet(key);
   }
 
   private grow(): void {
@@ -172,7 +220,7 @@ export class ForecastTableReader {
       throw new InputError(`expected ${h.names.length} fields as in the header, found ${count}`, {
         file: this.path,
         line,
-        value: fields.slice(0, count).join(this.options.format === 'tsv' ? '\t' : ','),
+        value: echo(fields.slice(0, Math.min(count, 50)).join(this.delimiter)),
       });
     }
     const r = this.rows;
@@ -222,7 +270,30 @@ export class ForecastTableReader {
       const index = qs[k]!.index;
       this.quantileValues[k]![r] = this.number(fields[index]!, index, line);
     }
+    const earlier = this.keys!.add(r);
+    if (earlier >= 0) this.duplicate(earlier, r, line);
     this.rows = r + 1;
+  }
+
+  /** A key seen twice in this file: refused at once, naming both lines. */
+  private duplicate(earlier: number, row: number, line: number): never {
+    const h = this.header!;
+    const parts: string[] = [];
+    const label = (interner: Interner, ids: Int32Array, index: number): void => {
+      if (index >= 0) parts.push(`${h.names[index]}=${interner.labels[ids[row]!]}`);
+    };
+    label(this.seriesLabels, this.seriesIds, h.series);
+    label(this.timeLabels, this.timeIds, h.timestamp);
+    if (this.options.role !== 'actuals') {
+      if (h.horizon >= 0) parts.push(`${h.names[h.horizon]}=${this.horizons[row]}`);
+      label(this.originLabels, this.originIds, h.origin);
+      label(this.pathLabels, this.pathIds, h.path);
+    }
+    const key = echo(parts.join(' '));
+    throw new InputError(
+      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line} have the same key (each key may appear once per file)`,
+      { file: this.path, line, value: key },
+    );
   }
 
   private keyLabel(interner: Interner, text: string, index: number, line: number): number {
@@ -238,10 +309,19 @@ export class ForecastTableReader {
   }
 
   private number(text: string, index: number, line: number): number {
-    const value = parseDecimal(text);
+    const value = this.decimalComma ? parseDecimalComma(text) : parseDecimal(text);
     if (!Number.isNaN(value)) return value; // not NaN
+    let hint = '';
+    if (!this.decimalComma && /^[-+]?\d*,\d+$/.test(text)) {
+      hint = ` (a decimal comma? add --decimal , with a separator other than the comma, e.g. --delimiter ";")`;
+    } else if (this.decimalComma && text.includes('.')) {
+      hint =
+        ' (with --decimal , a point is not a decimal mark, and thousands separators are not read)';
+    }
     throw new InputError(
-      text.length === 0 ? 'empty value where a number is required' : 'not a finite decimal number',
+      text.length === 0
+        ? 'empty value where a number is required'
+        : `not a finite decimal number${hint}`,
       { file: this.path, line, column: this.header!.names[index]!, value: text },
     );
   }
@@ -278,7 +358,13 @@ interface Header {
   }[];
 }
 
-function resolveHeader(names: string[], file: string, line: number, options: ParseOptions): Header {
+function resolveHeader(
+  names: string[],
+  file: string,
+  line: number,
+  options: ParseOptions,
+  delimiter: Delimiter = ',',
+): Header {
   const columns = resolveColumns(options.columns);
   const predictions = options.role !== 'actuals';
   const used = new Set<number>();
@@ -332,10 +418,11 @@ function resolveHeader(names: string[], file: string, line: number, options: Par
     quantiles.sort((a, b) => a.level - b.level);
   }
 
-  const header = names.map((n) => JSON.stringify(n)).join(', ');
+  const shown = names.slice(0, 20).map((n) => JSON.stringify(echo(n, 60)));
+  const header = `${shown.join(', ')}${names.length > 20 ? `, … (${names.length} columns)` : ''}`;
   const missing = (role: string, name: string, why: string): InputError =>
     new InputError(
-      `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)`,
+      `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)${delimiterHint(names, delimiter)}`,
       { file, line, column: name },
     );
   if (timestamp < 0) throw missing('timestamp', columns.timestamp, '(required)');
@@ -369,6 +456,32 @@ function resolveHeader(names: string[], file: string, line: number, options: Par
     weight,
     quantiles,
   };
+}
+
+/**
+ * When a header is one field that holds another separator ("series;timestamp;actual" read with
+ * commas), the likely fix.
+ */
+function delimiterHint(names: readonly string[], delimiter: Delimiter): string {
+  if (names.length !== 1) return '';
+  const only = names[0]!;
+  for (const [candidate, option] of [
+    [';', '";"'],
+    ['\t', 'tab'],
+    ['|', '"|"'],
+    [',', '","'],
+  ] as const) {
+    if (candidate !== delimiter && only.includes(candidate)) {
+      return `; the header is one field that contains ${candidate === '\t' ? 'tabs' : `"${candidate}"`} but the separator is ${delimiterLabel(delimiter)}: add --delimiter ${option}`;
+    }
+  }
+  return '';
+}
+
+/** A number written with a decimal comma ("3,25"); a point anywhere makes it NaN. */
+function parseDecimalComma(text: string): number {
+  if (text.includes('.')) return Number.NaN;
+  return parseDecimal(text.replace(',', '.'));
 }
 
 /** Interns labels to dense ids, remembering the first line of each. */
