@@ -1,9 +1,10 @@
 /**
  * The Parquet file edge: reads a Parquet file one row group at a time with hyparquet (a pure
- * JavaScript reader; docs/decisions/0010-parquet-reading.md) and hands each row, rendered as the
- * text fields a CSV of the same data would hold, to the same ForecastTableReader that reads CSV.
- * So every check, message and number is the one CSV gets: a double becomes its shortest
- * round-trip decimal text (String(x)), which parses back to the same double.
+ * JavaScript reader; docs/decisions/0010-parquet-reading.md) and hands each row, as the fields a
+ * CSV of the same data would hold, to the same ForecastTableReader that reads CSV. So every check
+ * and message is the one CSV gets; numbers match because a CSV writer prints a double as its shortest
+ * round-trip decimal text, which parses back to the same double, so a double is handed over as it
+ * is and a CSV written with round-trip precision gives the very same numbers.
  *
  * Conventions:
  * - The header is the schema's top-level column names; nested columns (lists, structs, maps)
@@ -26,7 +27,9 @@ import { pipeline } from 'node:stream/promises';
 import { type AsyncBuffer, type FileMetaData, parquetMetadataAsync, parquetRead } from 'hyparquet';
 import { compressors } from 'hyparquet-compressors';
 import { echo, InputError } from '../core/inputError.js';
-import type { ForecastTableReader } from './tableBuilder.js';
+import type { Field, ForecastTableReader } from './tableBuilder.js';
+
+const MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
 
 /** Streams `path` into `reader`; returns "sha256:<hex>" of the file's bytes. */
 export async function streamParquetFile(
@@ -57,39 +60,44 @@ export async function streamParquetFile(
     reader.record([...names], names.length, 1);
     const used = reader.usedColumns;
     const usedNames = used.map((i) => names[i]!);
-    const fields = new Array<string>(names.length).fill('');
+    const fields = new Array<Field>(names.length).fill('');
     const total = Number(metadata.num_rows);
-    let rowStart = 0;
+    let groupStart = 0;
     for (const group of metadata.row_groups) {
-      const rowEnd = rowStart + Number(group.num_rows);
-      let rows: unknown[][] = [];
+      const groupRows = Number(group.num_rows);
+      const groupEnd = groupStart + groupRows;
+      const columns = usedNames.map(() => new Array<unknown>(groupRows));
+      const slot = new Map(usedNames.map((name, k) => [name, k]));
       try {
         await parquetRead({
           file,
           metadata,
           columns: usedNames,
-          rowStart,
-          rowEnd,
+          rowStart: groupStart,
+          rowEnd: groupEnd,
           compressors,
           parsers: TEXT_PARSERS,
-          rowFormat: 'array',
-          onComplete: (result: unknown[][]) => {
-            rows = result;
+          onChunk: ({ columnName, columnData, rowStart }) => {
+            const target = columns[slot.get(columnName)!]!;
+            const offset = rowStart - groupStart;
+            for (let i = 0; i < columnData.length; i++) {
+              const at = offset + i;
+              if (at >= 0 && at < groupRows) target[at] = columnData[i];
+            }
           },
         });
       } catch (error) {
         throw notParquet(error, path);
       }
-      for (let r = 0; r < rows.length; r++) {
-        const row = rows[r]!;
-        const line = rowStart + r + 2;
+      for (let r = 0; r < groupRows; r++) {
+        const line = groupStart + r + 2;
         for (let k = 0; k < used.length; k++) {
-          fields[used[k]!] = fieldText(row[k], path, line, usedNames[k]!);
+          fields[used[k]!] = fieldValue(columns[k]![r], path, line, usedNames[k]!);
         }
         reader.record(fields, names.length, line);
       }
-      rowStart = rowEnd;
-      onProgress?.(total > 0 ? Math.round((size * rowStart) / total) : size, size);
+      groupStart = groupEnd;
+      onProgress?.(total > 0 ? Math.round((size * groupStart) / total) : size, size);
     }
   } finally {
     await handle.close();
@@ -163,14 +171,18 @@ function isoTimestamp(count: bigint, digits: number): string {
   return `${text}${f}Z`;
 }
 
-function fieldText(value: unknown, path: string, line: number, column: string): string {
+/**
+ * A Parquet value as the reader's field: text as it is, a double as it is (the number the CSV of
+ * the same data holds, written to round-trip), a 64-bit integer as a number when it is exact in a
+ * double and as its decimal text otherwise, null as the empty field.
+ */
+function fieldValue(value: unknown, path: string, line: number, column: string): Field {
   switch (typeof value) {
     case 'string':
-      return value;
     case 'number':
-      return Number.isFinite(value) ? String(value) : String(value);
+      return value;
     case 'bigint':
-      return value.toString();
+      return value >= -MAX_EXACT && value <= MAX_EXACT ? Number(value) : value.toString();
     case 'boolean':
       return value ? 'true' : 'false';
     case 'undefined':
@@ -178,6 +190,13 @@ function fieldText(value: unknown, path: string, line: number, column: string): 
     case 'object':
       if (value === null) return '';
       if (value instanceof Date) return value.toISOString();
+      if (value instanceof Uint8Array) {
+        throw new InputError('a binary Parquet value that is not UTF-8 text', {
+          file: path,
+          line,
+          column,
+        });
+      }
       throw new InputError(
         'a Parquet value that is neither a number nor text (binary or nested data)',
         { file: path, line, column },

@@ -8,6 +8,8 @@ import { RowKeySet } from './rowKeySet.js';
 import { Tokenizer } from './tokenizer.js';
 
 export type FileRole = 'baseline' | 'candidate' | 'actuals';
+/** One field of a record: text from a CSV, or a number from a typed source such as Parquet. */
+export type Field = string | number;
 export type TextFormat = 'csv' | 'tsv';
 
 export interface ParseOptions {
@@ -82,10 +84,12 @@ export class ForecastTableReader {
 
   /**
    * Takes one record (the header first, then rows) from a source other than text, such as a
-   * Parquet file's rows rendered as fields; `line` is what messages call the record's line.
+   * Parquet file's rows; `line` is what messages call the record's line. A field may be a number
+   * already (a Parquet double): it is taken as the double a CSV's shortest round-trip text of it
+   * parses to, that is, as it is.
    */
-  record(fields: string[], count: number, line: number): void {
-    if (this.header === null) this.readHeader(fields, count, line);
+  record(fields: readonly Field[], count: number, line: number): void {
+    if (this.header === null) this.readHeader(fields.map(String), count, line);
     else this.readRow(fields, count, line);
   }
 
@@ -214,7 +218,7 @@ export class ForecastTableReader {
     this.capacity = capacity;
   }
 
-  private readRow(fields: string[], count: number, line: number): void {
+  private readRow(fields: readonly Field[], count: number, line: number): void {
     const h = this.header!;
     if (count !== h.names.length) {
       throw new InputError(`expected ${h.names.length} fields as in the header, found ${count}`, {
@@ -238,13 +242,18 @@ export class ForecastTableReader {
     }
     if (h.horizon >= 0) {
       const text = fields[h.horizon]!;
-      const value = parseHorizon(text);
+      const value =
+        typeof text === 'number'
+          ? Number.isInteger(text) && text >= 1 && text <= 0x7fffffff
+            ? text
+            : 0
+          : parseHorizon(text);
       if (value === 0) {
         throw new InputError('the horizon must be a whole number ≥ 1', {
           file: this.path,
           line,
           column: h.names[h.horizon]!,
-          value: text,
+          value: String(text),
         });
       }
       this.horizons[r] = value;
@@ -260,7 +269,7 @@ export class ForecastTableReader {
           file: this.path,
           line,
           column: h.names[h.weight]!,
-          value: fields[h.weight]!,
+          value: String(fields[h.weight]!),
         });
       }
       this.weight[r] = value;
@@ -278,25 +287,27 @@ export class ForecastTableReader {
   /** A key seen twice in this file: refused at once, naming both lines. */
   private duplicate(earlier: number, row: number, line: number): never {
     const h = this.header!;
+    // Spelled as alignment spells keys (role names; horizon 1 when there is no horizon column).
     const parts: string[] = [];
-    const label = (interner: Interner, ids: Int32Array, index: number): void => {
-      if (index >= 0) parts.push(`${h.names[index]}=${interner.labels[ids[row]!]}`);
+    const label = (role: string, interner: Interner, ids: Int32Array, index: number): void => {
+      if (index >= 0) parts.push(`${role}=${interner.labels[ids[row]!]}`);
     };
-    label(this.seriesLabels, this.seriesIds, h.series);
-    label(this.timeLabels, this.timeIds, h.timestamp);
+    label('series', this.seriesLabels, this.seriesIds, h.series);
+    label('timestamp', this.timeLabels, this.timeIds, h.timestamp);
     if (this.options.role !== 'actuals') {
-      if (h.horizon >= 0) parts.push(`${h.names[h.horizon]}=${this.horizons[row]}`);
-      label(this.originLabels, this.originIds, h.origin);
-      label(this.pathLabels, this.pathIds, h.path);
+      parts.push(`horizon=${h.horizon >= 0 ? this.horizons[row] : 1}`);
+      label('origin', this.originLabels, this.originIds, h.origin);
+      label('path', this.pathLabels, this.pathIds, h.path);
     }
     const key = echo(parts.join(' '));
     throw new InputError(
-      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line} have the same key (each key may appear once per file)`,
+      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line} have the same key`,
       { file: this.path, line, value: key },
     );
   }
 
-  private keyLabel(interner: Interner, text: string, index: number, line: number): number {
+  private keyLabel(interner: Interner, field: Field, index: number, line: number): number {
+    const text = typeof field === 'string' ? field : String(field);
     if (text.length === 0) {
       throw new InputError('empty value in a key column', {
         file: this.path,
@@ -308,7 +319,17 @@ export class ForecastTableReader {
     return interner.id(text, line);
   }
 
-  private number(text: string, index: number, line: number): number {
+  private number(field: Field, index: number, line: number): number {
+    if (typeof field === 'number') {
+      if (Number.isFinite(field)) return field;
+      throw new InputError('not a finite number', {
+        file: this.path,
+        line,
+        column: this.header!.names[index]!,
+        value: String(field),
+      });
+    }
+    const text = field;
     const value = this.decimalComma ? parseDecimalComma(text) : parseDecimal(text);
     if (!Number.isNaN(value)) return value; // not NaN
     let hint = '';
