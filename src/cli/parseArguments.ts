@@ -67,6 +67,12 @@ function usageError(error: unknown, names: readonly string[]): InputError {
       `unexpected argument "${echo(positional[1]!, 60)}": every value follows its option, e.g. --baseline FILE (see skillgate --help)`,
     );
   }
+  const ambiguous = /Option '(--[^']*)' argument is ambiguous/.exec(message);
+  if (ambiguous !== null) {
+    return new InputError(
+      `the value after ${ambiguous[1]} starts with "-" and looks like an option; write ${ambiguous[1]}=VALUE (see skillgate --help)`,
+    );
+  }
   const missing = /Option '(?:-., )?(--[^ ']*)[^']*' argument missing/.exec(message);
   if (missing !== null) {
     return new InputError(`${missing[1]} needs a value (see skillgate --help)`);
