@@ -161,14 +161,15 @@ function seriesComparisons(
       n: c.n,
       minPoints: settings.minPoints,
     });
-    return {
-      ...c,
+    // In place: `raw` is this function's own, and a copy per series doubles the memory of a
+    // panel with a million series.
+    return Object.assign(c as Mutable<Comparison>, {
       verdict: decision.verdict,
       reasons: decision.reasons,
       rejected: { dieboldMariano: decision.rejected, bootstrap: null },
       adjustedPValue: policyP[j] ?? null,
       direction,
-    };
+    }) as Comparison;
   });
   const top = comparisons
     .filter((c) => c.direction === 'worse')
@@ -191,6 +192,8 @@ function seriesComparisons(
     },
   };
 }
+
+type Mutable<T> = { -readonly [K in keyof T]: T[K] };
 
 /** Row indices by value (a horizon, a series id), in row order: one pass over the panel. */
 function groupRows(values: Int32Array): Map<number, number[]> {
