@@ -155,7 +155,8 @@ function parseDecimalMark(
   delimiter: string,
   label: (name: string) => string,
 ): '.' | ',' {
-  if (text === ',' && (delimiter === ',' || delimiter === 'auto')) {
+  // With delimiter auto the reader decides per file (a TSV file is fine, a CSV file is refused).
+  if (text === ',' && delimiter === ',') {
     throw new InputError(
       `${label('decimal')} , (decimal comma) needs a field separator other than the comma: add ${label('delimiter')} ";" (or tab, |)`,
       { value: text },
