@@ -11,6 +11,7 @@ import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
+import { parquetReadingSection } from './parquetReading.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const work = path.join(root, 'bench', '.work');
@@ -329,8 +330,19 @@ for (const [n, resamples] of [
     `     ${draws.toExponential(1)} block draws (n = ${n}, B = ${resamples}): 1 thread ${fmt(one.wall)} ms, pool ${fmt(two.wall)} ms (${fmt(one.wall / two.wall)}×)`,
   );
 }
-const after = machine();
 log();
+const parquetReading = await parquetReadingSection({
+  root,
+  work,
+  cli,
+  files: await panelFiles(1000, 1000),
+  runs: SCALING_RUNS,
+  measure,
+  log,
+  fmt,
+  median,
+});
+const after = machine();
 log(`load average at end: ${after.load}`);
 
 const results = {
@@ -340,6 +352,7 @@ const results = {
   reading,
   readingSlope,
   largeReading,
+  parquetReading,
   bootstrap: {
     n: N,
     resamples: B,
