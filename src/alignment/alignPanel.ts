@@ -1,4 +1,4 @@
-import { InputError } from '../core/inputError.js';
+import { echo, InputError } from '../core/inputError.js';
 import type { AlignedPanel, QuantileColumn } from '../core/panel.js';
 import type { ForecastTable, LabelColumn, ValueColumn } from '../reading/forecastTable.js';
 import { parseDecimal } from '../reading/numbers.js';
@@ -127,7 +127,7 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
     if (depth > pathAt && path !== null) {
       parts.push(`path=${path.names[keys[pathAt]!.values[row]!]}`);
     }
-    return parts.join(' ');
+    return parts.map((part) => echo(part, 80)).join(' ');
   };
   const checkDuplicates = (table: ForecastTable, keys: KeyComponent[], order: Int32Array): void => {
     for (let i = 1; i < order.length; i++) {
