@@ -7,6 +7,7 @@ import { buildReport } from '../report/buildReport.js';
 import { lossFileInputsSummary } from '../report/inputsSummary.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import { assessStability } from '../stability/assessStability.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { compareLossSeries } from './compareLossSeries.js';
 
@@ -26,12 +27,13 @@ export function evaluateLossSeries(
   resampleRunner?: ResampleRunner,
 ): Report {
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const runner = resampleRunner === undefined ? {} : { runner: resampleRunner };
   const overall = compareLossSeries(
     series,
     { loss: settings.loss, horizon: 'all', series: 'all', timestamps: source.timestamps },
     hypothesis,
     settings,
-    resampleRunner === undefined ? {} : { runner: resampleRunner },
+    runner,
   );
   return buildReport({
     version: VERSION,
@@ -45,5 +47,13 @@ export function evaluateLossSeries(
       source.order,
     ),
     comparisons: [overall],
+    stability: assessStability({
+      series,
+      timestamps: source.timestamps,
+      kind: source.kind,
+      hypothesis,
+      settings,
+      ...runner,
+    }),
   });
 }

@@ -2,6 +2,7 @@ import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatN
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { inputNotes } from './inputNotes.js';
+import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import type { Comparison, Report } from './reportModel.js';
 
 const VERDICT_WORDS = { pass: 'PASS', warn: 'WARN', fail: 'FAIL' } as const;
@@ -22,6 +23,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, '');
   lines.push(esc(report.headline), '');
   lines.push(...comparisonTable(report), '');
+  lines.push(`<sub>${esc(intervalNote(report))}</sub>`, '');
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
@@ -75,13 +77,9 @@ function comparisonTable(report: Report): string[] {
   return rows;
 }
 
-/** The relative difference, with its bootstrap interval when a relative margin is in force. */
+/** The relative change with the interval of margins at which the gate would not reject. */
 function relativeCell(c: Comparison): string {
-  const r = c.bootstrap.relativeInterval;
-  const point = formatSignedPercent(c.relativeDifference);
-  return r === null
-    ? point
-    : `${point} [${formatSignedPercent(r.lower)}, ${formatSignedPercent(r.upper)}]`;
+  return relativeChangeText(c);
 }
 
 /**
@@ -174,7 +172,7 @@ function testDetails(report: Report): string[] {
   );
   if (dm.interval !== null) {
     out.push(
-      `| DM interval for E[d] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`,
+      `| DM interval for E[L_candidate − L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`,
     );
   }
   out.push(

@@ -1,5 +1,6 @@
-import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
+import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { inputNotes } from './inputNotes.js';
+import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -40,7 +41,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       formatNumber(c.meanBaselineLoss),
       formatNumber(c.meanCandidateLoss),
       formatNumber(c.meanDifference),
-      formatSignedPercent(c.relativeDifference),
+      relativeChangeText(c),
       formatPValue(c.dieboldMariano.decisionPValue),
       formatPValue(c.bootstrap.decisionPValue),
       c.bootstrap.interval === null
@@ -55,7 +56,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       .join('  ');
   out.push(paint('2', line(header)));
   for (const r of rows) out.push(line(r));
-  out.push('');
+  out.push(wrap(intervalNote(report), 100), '');
   for (const reason of [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])]) {
     out.push(wrap(`- ${reason}`, 100, '  '));
   }
