@@ -15,7 +15,8 @@ const out = (name) => path.join(here, name).replaceAll("'", "''");
 const db = await DuckDBInstance.create(':memory:');
 const c = await db.connect();
 
-// 3 series × 60 days × horizons 1–2 = 360 rows; row groups of 100 rows, so a file has several.
+// 3 series × 60 days × horizons 1–2 = 360 rows (DuckDB writes row groups of at least 2048 rows,
+// so these files have one; row-groups.parquet below has several).
 await c.run(`create table baseline as
   select 'zone-' || (i % 3) as series,
          date '2026-01-01' + ((i // 6))::int as timestamp,
@@ -56,4 +57,8 @@ await c.run(`copy (select i::bigint as timestamp, 2::bigint as horizon, 1.0 as a
 await c.run(`copy (select i as timestamp, 1.0 as actual, 1.5 as prediction
     from range(1, 6) r(i) union all select 2, 1.0, 1.5)
   to '${out('duplicate-key.parquet')}' (format parquet)`);
+// 6144 rows in row groups of 2048: three groups, to see reading and progress group by group.
+await c.run(`copy (select 's' || (i % 4) as series, (i // 4)::int as timestamp,
+    sin(i) as actual, sin(i) + 0.1 as prediction from range(6144) r(i))
+  to '${out('row-groups.parquet')}' (format parquet, row_group_size 2048)`);
 console.log('wrote Parquet fixtures to', here);
