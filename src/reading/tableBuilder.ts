@@ -8,6 +8,13 @@ import { RowKeySet } from './rowKeySet.js';
 import { Tokenizer } from './tokenizer.js';
 
 export type FileRole = 'baseline' | 'candidate' | 'actuals';
+/**
+ * Longest key value (series, timestamp, origin, path). Distinct key values are kept for the whole
+ * file, so a cap on them (with the line limit and duplicate keys found while reading) bounds the
+ * memory a small compressed file can make the reader use.
+ */
+export const MAX_LABEL = 512;
+
 /** One field of a record: text from a CSV, or a number from a typed source such as Parquet. */
 export type Field = string | number;
 export type TextFormat = 'csv' | 'tsv';
@@ -192,8 +199,10 @@ export class ForecastTableReader {
     this.headerLine = line;
     this.quantileValues = this.header.quantiles.map(() => new Float64Array(0));
     const h = this.header;
-    const key: (() => Int32Array)[] = [() => this.timeIds];
+    // Series first, then time: the orders files are usually written in (see RowKeySet).
+    const key: (() => Int32Array)[] = [];
     if (h.series >= 0) key.push(() => this.seriesIds);
+    key.push(() => this.timeIds);
     if (this.options.role !== 'actuals') {
       if (h.horizon >= 0) key.push(() => this.horizons);
       if (h.origin >= 0) key.push(() => this.originIds);
@@ -216,6 +225,7 @@ export class ForecastTableReader {
     if (h.weight >= 0) this.weight = growFloat(this.weight, capacity);
     this.quantileValues = this.quantileValues.map((v) => growFloat(v, capacity));
     this.capacity = capacity;
+    this.keys?.refresh();
   }
 
   private readRow(fields: readonly Field[], count: number, line: number): void {
@@ -308,6 +318,12 @@ export class ForecastTableReader {
 
   private keyLabel(interner: Interner, field: Field, index: number, line: number): number {
     const text = typeof field === 'string' ? field : String(field);
+    if (text.length > MAX_LABEL) {
+      throw new InputError(
+        `a key value longer than ${MAX_LABEL} characters (${text.length}); series names, timestamps, origins and paths are kept in memory for every distinct value, so they must be short`,
+        { file: this.path, line, column: this.header!.names[index]!, value: text },
+      );
+    }
     if (text.length === 0) {
       throw new InputError('empty value in a key column', {
         file: this.path,

@@ -818,6 +818,13 @@ export const CASES: readonly CorpusCase[] = [
     exit: 2,
     stderr: 'not a valid gzip file',
   },
+  {
+    id: 'long-key-label',
+    files: { 'b.csv': () => `${H}${'s'.repeat(600)},1,1,1\n`, 'c.csv': cand },
+    args: compare(),
+    exit: 2,
+    stderr: 'b.csv:2: a key value longer than 512 characters (600)',
+  },
   // --- Names from a pull request ----------------------------------------------------------------
   {
     id: 'markdown-injection',

@@ -41,6 +41,43 @@ describe('RowKeySet', () => {
   });
 });
 
+describe('RowKeySet on sorted input', () => {
+  it('finds repeats in files sorted either way, and after the order breaks', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 30 }),
+        fc.integer({ min: 1, max: 30 }),
+        fc.boolean(),
+        fc.array(fc.nat(), { maxLength: 5 }),
+        (series, times, timeFirst, extra) => {
+          const keys: [number, number][] = [];
+          for (let i = 0; i < series * times; i++) {
+            keys.push(
+              timeFirst ? [i % series, Math.floor(i / series)] : [Math.floor(i / times), i % times],
+            );
+          }
+          // Append a few rows repeating earlier keys (or out of order): the first repeat is found.
+          for (const e of extra) keys.push(keys[e % keys.length]!);
+          const a = Int32Array.from(keys, (k) => k[0]);
+          const b = Int32Array.from(keys, (k) => k[1]);
+          const set = new RowKeySet([() => a, () => b]);
+          let found = -1;
+          for (let i = 0; i < keys.length && found < 0; i++) {
+            const earlier = set.add(i);
+            if (earlier >= 0) {
+              expect(keys[earlier]).toEqual(keys[i]);
+              expect(earlier).toBeLessThan(i);
+              found = i;
+            }
+          }
+          expect(found).toBe(extra.length > 0 ? series * times : -1);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+});
+
 describe('line limit', () => {
   it('refuses a line longer than the limit, naming its line, and echoes at most ~200 characters', () => {
     const tokenizer = new Tokenizer(',', () => {}, 'f.csv', 1024);
