@@ -1,6 +1,7 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { inputNotes } from './inputNotes.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { backtestChecksLines } from './renderBacktestChecks.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -73,6 +74,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`,
     );
   }
+  out.push(...backtestChecksLines(report, clean));
   const i = report.inputs;
   out.push(
     '',
