@@ -26,6 +26,9 @@ async function write(file: string, series: number, shift: number): Promise<void>
   await once(out, 'finish');
 }
 
+// About 26 s for the CLI alone on this 2-core machine (load average 9.5, GNU time: 2.5 GiB peak
+// RSS); the generous timeout is for a full `npm test` on a shared machine, not a speed claim
+// (speed is measured by the benchmark).
 describe('a million distinct series', () => {
   it('are read, aligned, compared and reported without exhausting the stack', async () => {
     const n = 1_000_000;
@@ -45,10 +48,10 @@ describe('a million distinct series', () => {
         '--resamples',
         '199',
       ],
-      { cwd: work, encoding: 'utf8', timeout: 170_000, maxBuffer: 64 << 20 },
+      { cwd: work, encoding: 'utf8', timeout: 540_000, maxBuffer: 64 << 20 },
     );
     expect(r.stderr).toBe('');
     expect(r.status).toBe(0);
     expect(r.stdout).toContain(`**Series**: of ${n},`);
-  }, 180_000);
+  }, 600_000);
 });
