@@ -4,6 +4,7 @@ import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { inputNotes } from './inputNotes.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
+import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Comparison, Report } from './reportModel.js';
 
 const VERDICT_WORDS = { pass: 'PASS', warn: 'WARN', fail: 'FAIL' } as const;
@@ -27,6 +28,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(`<sub>${esc(intervalNote(report))}</sub>`, '');
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...renderStabilitySection(report));
   lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
   if (reasons.length > 0) {
