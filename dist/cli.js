@@ -13247,7 +13247,11 @@ function relativeChangeText(c) {
   if (rc === null) return point;
   const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
   if (pieces.length === 0) return `${point} \u2205`;
-  return `${point} ${pieces.map(pieceText).join(" \u222A ")}`;
+  return `${point} ${pieces.map(pieceText).join(" \u222A ")}${measuredCoverageText(rc.measuredCoverage)}`;
+}
+function measuredCoverageText(measured) {
+  if (measured === void 0) return "";
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
 }
 function pieceText(p) {
   const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
@@ -13260,7 +13264,13 @@ function intervalNote(report) {
   if (confidenceOverridesDefault(confidence, alpha)) {
     return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
   }
-  return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const base = `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const measured = report.comparisons.flatMap((c) => [
+    c.relativeChange?.measuredCoverage,
+    c.dieboldMariano.interval?.measuredCoverage,
+    c.bootstrap.interval?.measuredCoverage
+  ]).find((m) => m !== void 0);
+  return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
 }
 
 // src/stability/calendarDate.ts
@@ -13931,6 +13941,37 @@ function describeTest(e, rejected, alpha, hypothesis) {
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
+// src/intervals/measuredCoverage.ts
+var STUDIED_LEVEL = 0.9;
+var WORST_COVERAGE = {
+  relativeChange: [
+    [50, 0.865],
+    [100, 0.887],
+    [200, 0.878],
+    [500, 0.878]
+  ],
+  dieboldMarianoDifference: [
+    [50, 0.826],
+    [100, 0.842],
+    [200, 0.851],
+    [500, 0.866]
+  ],
+  bootstrapDifference: [
+    [50, 0.618],
+    [100, 0.718],
+    [200, 0.748],
+    [500, 0.802]
+  ]
+};
+function measuredCoverage(kind, n, level) {
+  if (level !== STUDIED_LEVEL) return null;
+  const rows = WORST_COVERAGE[kind];
+  let chosen = rows[0];
+  for (const row of rows) if (row[0] <= n) chosen = row;
+  const [studiedN, coverage] = chosen;
+  return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
+}
+
 // src/statistics/bootstrap/basicBootstrapInference.ts
 function tailProbability(level) {
   return Number((1 - level).toPrecision(15));
@@ -14291,13 +14332,20 @@ function dieboldMarianoMarginSet(input) {
     if (estimator === "uniform") {
       const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
       if (!finite(uniform)) return null;
+      const gamma0 = longRunCovariance(
+        d,
+        baseline,
+        candidate,
+        (x) => bartlettLongRunVariance(x, 0)
+      );
+      const tolerance = n * Number.EPSILON;
       const positive = complementOfSet(
         fiellerSet({
           meanD: 0,
           meanB: 0,
-          varDD: -uniform.dd,
-          varDB: -uniform.db,
-          varBB: -uniform.bb,
+          varDD: tolerance * gamma0.dd - uniform.dd,
+          varDB: tolerance * gamma0.db - uniform.db,
+          varBB: tolerance * gamma0.bb - uniform.bb,
           critical: 1
         })
       );
@@ -14363,13 +14411,15 @@ function relativeChange(input) {
   const chosen = combine(input.agreement, dm, bs);
   if (chosen === null) return null;
   const hull = hullOfSet(chosen.set);
+  const measured = measuredCoverage("relativeChange", n, level);
   return {
     estimate,
     level,
     lower: hull?.lower ?? null,
     upper: hull?.upper ?? null,
     method: chosen.method,
-    ...chosen.set.length === 1 ? {} : { pieces: chosen.set }
+    ...chosen.set.length === 1 ? {} : { pieces: chosen.set },
+    ...measured === null ? {} : { measuredCoverage: measured }
   };
 }
 function combine(agreement, dm, bs) {
@@ -15629,16 +15679,14 @@ function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
   const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
   const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
-  const dieboldMariano2 = runDieboldMariano(
-    d,
-    series.maxHorizon,
-    hypothesis,
-    settings,
-    difference
+  const dieboldMariano2 = withMeasured(
+    runDieboldMariano(d, series.maxHorizon, hypothesis, settings, difference),
+    "dieboldMarianoDifference",
+    n
   );
   const withBootstrap = options.bootstrap ?? true;
   const bootstrapRun = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner, difference) : null;
-  const bootstrap = bootstrapRun?.summary ?? bootstrapNotRun(settings);
+  const bootstrap = bootstrapRun === null ? bootstrapNotRun(settings) : withMeasured(bootstrapRun.summary, "bootstrapDifference", n);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -15693,6 +15741,12 @@ function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
     reasons: decision.reasons,
     rejected: decision.rejected
   };
+}
+function withMeasured(summary, kind, n) {
+  const interval = summary.interval;
+  if (interval === null) return summary;
+  const measured = measuredCoverage(kind, n, interval.level);
+  return measured === null ? summary : { ...summary, interval: { ...interval, measuredCoverage: measured } };
 }
 function meanOrZero(x) {
   return x.length === 0 ? 0 : mean(x);
@@ -27527,7 +27581,7 @@ function comparisonTable(report) {
   for (const c of report.comparisons.filter((x) => x.series === "all" && x.path === void 0)) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
-    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]`;
+    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
     rows.push(
       `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
         c.meanCandidateLoss
@@ -27624,7 +27678,7 @@ function testDetails(report) {
   );
   if (dm.interval !== null) {
     out.push(
-      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`
+      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`
     );
   }
   out.push(
@@ -27740,7 +27794,7 @@ function renderTerminal(report, options) {
     relativeChangeText(c),
     formatPValue(c.dieboldMariano.decisionPValue),
     formatPValue(c.bootstrap.decisionPValue),
-    c.bootstrap.interval === null ? "n/a" : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]`,
+    c.bootstrap.interval === null ? "n/a" : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]${measuredCoverageText(c.bootstrap.interval.measuredCoverage)}`,
     c.verdict
   ]);
   const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length)));

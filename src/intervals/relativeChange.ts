@@ -15,7 +15,7 @@ import { type MeasuredCoverage, measuredCoverage } from './measuredCoverage.js';
 
 /**
  * The relative change E[L_c]/E[L_b] − 1 with the set of relative margins at which the gate would
- * not reject (docs/decisions/0014-intervals-from-the-tests.md): each test inverted over the margin
+ * not reject (docs/decisions/0011-intervals-from-the-tests.md): each test inverted over the margin
  * (`dieboldMarianoMarginSet`, `bootstrapMarginSet`), then combined the way the policy combines
  * the tests: the union with agreement `both` (the gate acts only when both reject), the
  * intersection with `either`, one test's set with `dm` / `bootstrap` or when only one was

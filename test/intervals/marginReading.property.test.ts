@@ -8,7 +8,7 @@ import { resolveSettings } from '../../src/settings/resolveSettings.js';
 import type { Policy } from '../../src/settings/settings.js';
 
 // The interval of the relative change is the set of margins at which the gate does not reject
-// (docs/decisions/0014-intervals-from-the-tests.md). Property: on random loss series, for every
+// (docs/decisions/0011-intervals-from-the-tests.md). Property: on random loss series, for every
 // policy, agreement and variance estimator, the verdict the gate reaches at a relative margin just
 // below and just above each end of the interval is the one read off the interval. Invented
 // numbers: this checks an invariant, not values.
