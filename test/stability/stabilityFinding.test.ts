@@ -57,7 +57,7 @@ describe('stabilityFinding', () => {
       'datetime',
     );
     expect(f.headline).toMatch(
-      /not stable over time: significantly worse over 2026-09-01 to 2026-10-29/,
+      /Over time, the candidate is significantly worse over 2026-09-01 to 2026-10-29/,
     );
     expect(stabilityFinding(stable, hypothesis, settings('warn'), 'datetime')).toEqual({
       effect: null,
