@@ -12,6 +12,7 @@ import type {
   DieboldMarianoSummary,
   InputsSummary,
   Interval,
+  MeasuredCoverage,
   PathSummary,
   PolicySummary,
   RelativeChange,
@@ -180,6 +181,18 @@ function readInterval(r: Reader): Interval | null {
     lower: r.field('lower').number(),
     upper: r.field('upper').number(),
     method: r.field('method').string(),
+    ...readMeasuredCoverage(r.field('measuredCoverage')),
+  };
+}
+
+function readMeasuredCoverage(r: Reader): { measuredCoverage?: MeasuredCoverage } {
+  if (r.value === undefined) return {};
+  return {
+    measuredCoverage: {
+      coverage: r.field('coverage').number(),
+      level: r.field('level').number(),
+      studiedN: r.field('studiedN').integer(),
+    },
   };
 }
 
@@ -199,6 +212,7 @@ function readRelativeChange(r: Reader): RelativeChange | null {
     upper: r.field('upper').numberOrNull(),
     method: r.field('method').string(),
     ...(r.field('pieces').value === undefined ? {} : { pieces: readPieces(r.field('pieces')) }),
+    ...readMeasuredCoverage(r.field('measuredCoverage')),
   };
   function readPieces(p: Reader) {
     const items = p.items();
