@@ -13312,7 +13312,7 @@ function plural(count, unit) {
 }
 
 // src/stability/stabilityFinding.ts
-function stabilityFinding(stability, hypothesis, settings, kind) {
+function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
   if (stability === null) return { effect: null, headline: "", reasons: [] };
   const sentences = [];
   const reasons = [];
@@ -13324,8 +13324,9 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     sentences.push(
       hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
     );
+    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
     reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
     );
   }
   const f = stability.fluctuation;
@@ -13334,15 +13335,15 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
     sentences.push(
-      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
     );
     reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
     );
   }
   if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
   const gate = settings.stabilityGate;
-  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate}).` : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
   return {
     effect: gate === "off" ? null : gate,
     headline: [...sentences, response].join(" "),
@@ -13368,6 +13369,9 @@ function changeWords(c) {
     return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
   }
   return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function splitNote(stability) {
+  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
 }
 function spanWords(span) {
   return `${span.start} to ${span.end}`;
@@ -13402,7 +13406,13 @@ function buildReport(parts) {
     );
   }
   const stability = parts.stability ?? null;
-  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  const finding = stabilityFinding(
+    stability,
+    hypothesis,
+    settings,
+    inputs.timestamps.kind,
+    worstVerdict(verdicts)
+  );
   reasons.push(...finding.reasons);
   const gateVerdict = worstVerdict(verdicts);
   const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
@@ -15818,6 +15828,11 @@ function recentComparison(series, window2, scope2, hypothesis, settings, runner)
   );
 }
 
+// src/stability/stabilityLevels.ts
+function splitLevel(alpha, checks) {
+  return checks === 2 ? alpha / 2 : alpha;
+}
+
 // src/stability/assessStability.ts
 function assessStability(inputs) {
   const { series, timestamps, settings } = inputs;
@@ -15826,9 +15841,11 @@ function assessStability(inputs) {
   const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
   const d = lossDifferential(series, worse.baselineFactor - 1);
   if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const withRecent = settings.recent !== null && series.baseline.length > 0;
+  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
   const test = fluctuationTest(d, {
     mu: settings.fluctuationWindow,
-    alpha: settings.alpha,
+    alpha: fluctuationAlpha,
     sides: settings.fluctuationSides,
     lag: settings.lag,
     horizon: series.maxHorizon
@@ -15848,15 +15865,22 @@ function assessStability(inputs) {
       end: label(to)
     }))
   };
-  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
+  const recent = settings.recent === null || !withRecent ? null : recentComparison(
     series,
     settings.recent,
     { loss: settings.loss, horizon: "all", series: "all", timestamps },
     inputs.hypothesis,
-    settings,
+    recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
     inputs.runner
   );
-  return { fluctuation, recent, periods };
+  const levels = {
+    adjustment: fluctuation !== null && recent !== null ? "bonferroni" : "none",
+    alpha: settings.alpha,
+    fluctuation: fluctuation === null ? null : fluctuationAlpha,
+    recent: recent === null ? null : recentAlpha
+  };
+  return { fluctuation, recent, periods, levels };
 }
 
 // src/comparison/evaluateLossSeries.ts
@@ -27492,6 +27516,7 @@ function renderStabilitySection(report) {
   const out = ["**Over time**", ""];
   if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
   out.push(fluctuationSentence(stability, report), "");
+  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
   if (stability.periods.length > 0) out.push(...periodTable(stability), "");
   return out;
 }
@@ -27509,15 +27534,19 @@ function windowTable(overall, recent) {
 function fluctuationSentence(stability, report) {
   const f = stability.fluctuation;
   if (f === null) {
-    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
   }
   const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
   if (f.worsePeriods.length > 0) {
     const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
     return `${setup} The candidate is significantly worse over ${spans}.`;
   }
   return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function levelsSentence(stability) {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
 }
 function periodTable(stability) {
   const out = [
@@ -27748,15 +27777,16 @@ function renderStabilityTerminal(report) {
   if (s === null) return [];
   const out = [];
   const r = s.recent;
+  const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}: ${r.verdict}`
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
     );
   }
   return out;

@@ -32434,6 +32434,7 @@ function renderStabilitySection(report) {
   const out = ["**Over time**", ""];
   if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
   out.push(fluctuationSentence(stability, report), "");
+  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
   if (stability.periods.length > 0) out.push(...periodTable(stability), "");
   return out;
 }
@@ -32451,15 +32452,19 @@ function windowTable(overall, recent) {
 function fluctuationSentence(stability, report) {
   const f = stability.fluctuation;
   if (f === null) {
-    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
   }
   const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
   if (f.worsePeriods.length > 0) {
     const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
     return `${setup} The candidate is significantly worse over ${spans}.`;
   }
   return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function levelsSentence(stability) {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
 }
 function periodTable(stability) {
   const out = [
@@ -39999,7 +40004,7 @@ function plural(count, unit) {
 }
 
 // src/stability/stabilityFinding.ts
-function stabilityFinding(stability, hypothesis, settings, kind) {
+function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
   if (stability === null) return { effect: null, headline: "", reasons: [] };
   const sentences = [];
   const reasons = [];
@@ -40011,8 +40016,9 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     sentences.push(
       hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
     );
+    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
     reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
     );
   }
   const f = stability.fluctuation;
@@ -40021,15 +40027,15 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
     sentences.push(
-      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
     );
     reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
     );
   }
   if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
   const gate2 = settings.stabilityGate;
-  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate2 === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate2}).` : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
   return {
     effect: gate2 === "off" ? null : gate2,
     headline: [...sentences, response].join(" "),
@@ -40055,6 +40061,9 @@ function changeWords(c) {
     return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
   }
   return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function splitNote(stability) {
+  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
 }
 function spanWords(span) {
   return `${span.start} to ${span.end}`;
@@ -40089,7 +40098,13 @@ function buildReport(parts) {
     );
   }
   const stability = parts.stability ?? null;
-  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  const finding = stabilityFinding(
+    stability,
+    hypothesis,
+    settings,
+    inputs.timestamps.kind,
+    worstVerdict(verdicts)
+  );
   reasons.push(...finding.reasons);
   const gateVerdict = worstVerdict(verdicts);
   const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
@@ -42505,6 +42520,11 @@ function recentComparison(series, window2, scope, hypothesis, settings, runner) 
   );
 }
 
+// src/stability/stabilityLevels.ts
+function splitLevel(alpha, checks) {
+  return checks === 2 ? alpha / 2 : alpha;
+}
+
 // src/stability/assessStability.ts
 function assessStability(inputs) {
   const { series, timestamps, settings } = inputs;
@@ -42513,9 +42533,11 @@ function assessStability(inputs) {
   const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
   const d = lossDifferential(series, worse.baselineFactor - 1);
   if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const withRecent = settings.recent !== null && series.baseline.length > 0;
+  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
   const test = fluctuationTest(d, {
     mu: settings.fluctuationWindow,
-    alpha: settings.alpha,
+    alpha: fluctuationAlpha,
     sides: settings.fluctuationSides,
     lag: settings.lag,
     horizon: series.maxHorizon
@@ -42535,15 +42557,22 @@ function assessStability(inputs) {
       end: label(to)
     }))
   };
-  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
+  const recent = settings.recent === null || !withRecent ? null : recentComparison(
     series,
     settings.recent,
     { loss: settings.loss, horizon: "all", series: "all", timestamps },
     inputs.hypothesis,
-    settings,
+    recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
     inputs.runner
   );
-  return { fluctuation, recent, periods };
+  const levels = {
+    adjustment: fluctuation !== null && recent !== null ? "bonferroni" : "none",
+    alpha: settings.alpha,
+    fluctuation: fluctuation === null ? null : fluctuationAlpha,
+    recent: recent === null ? null : recentAlpha
+  };
+  return { fluctuation, recent, periods, levels };
 }
 
 // src/comparison/evaluateLossSeries.ts
@@ -55216,7 +55245,7 @@ function readReport(r) {
     seriesSummary: readSeriesSummary(r.field("seriesSummary")),
     pathSummary: readPathSummary(r.field("pathSummary")),
     integrity: readIntegrity(r.field("integrity")),
-    stability: readStability(r.field("stability")),
+    stability: readStability(r.field("stability"), r.field("policy").field("alpha").number()),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
   };
@@ -55342,14 +55371,17 @@ function readPathSummary(r) {
     significantlyWorse: r.field("significantlyWorse").integer()
   };
 }
-function readStability(r) {
+function readStability(r, alpha) {
   if (r.value === null || r.value === void 0) return null;
   const periods = r.field("periods").items();
   if (periods.length > MAX_PERIODS) r.field("periods").fail(`at most ${MAX_PERIODS} periods`);
-  const recent = r.field("recent");
+  const recentField = r.field("recent");
+  const fluctuation = readFluctuation(r.field("fluctuation"));
+  const recent = recentField.value === null ? null : readComparison(recentField);
   return {
-    fluctuation: readFluctuation(r.field("fluctuation")),
-    recent: recent.value === null ? null : readComparison(recent),
+    fluctuation,
+    recent,
+    levels: readStabilityLevels(r.field("levels"), alpha, fluctuation !== null, recent !== null),
     periods: periods.map((p) => ({
       ...readSpan(p),
       n: p.field("n").integer(1),
@@ -55357,6 +55389,22 @@ function readStability(r) {
       meanCandidateLoss: p.field("meanCandidateLoss").number(),
       relativeDifference: p.field("relativeDifference").numberOrNull()
     }))
+  };
+}
+function readStabilityLevels(r, alpha, fluctuation, recent) {
+  if (r.value === void 0) {
+    return {
+      adjustment: "none",
+      alpha,
+      fluctuation: fluctuation ? alpha : null,
+      recent: recent ? alpha : null
+    };
+  }
+  return {
+    adjustment: r.field("adjustment").oneOf(["none", "bonferroni"]),
+    alpha: r.field("alpha").number(),
+    fluctuation: r.field("fluctuation").numberOrNull(),
+    recent: r.field("recent").numberOrNull()
   };
 }
 function readFluctuation(r) {
