@@ -200,6 +200,9 @@ function readComparison(r: Reader): Comparison {
     ...(r.field('direction').value === undefined
       ? {}
       : { direction: r.field('direction').oneOf(['worse', 'better', 'no evidence'] as const) }),
+    ...(r.field('directionPValue').value === undefined
+      ? {}
+      : { directionPValue: r.field('directionPValue').numberOrNull() }),
   };
 }
 

@@ -105,6 +105,11 @@ export interface Comparison {
   readonly adjustedPValue?: number | null;
   /** Per-series comparisons: what the adjusted one-sided tests found. */
   readonly direction?: 'worse' | 'better' | 'no evidence';
+  /**
+   * Per-series comparisons: the adjusted one-sided p-value of the plain difference L_c − L_b
+   * behind `direction` (upper tail for worse and no evidence, lower tail for better).
+   */
+  readonly directionPValue?: number | null;
 }
 
 export interface DieboldMarianoSummary {

@@ -1,0 +1,91 @@
+import { describe, expect, it } from 'vitest';
+import { alignPanel } from '../../src/alignment/alignPanel.js';
+import { evaluatePanel } from '../../src/comparison/evaluatePanel.js';
+import { createRandomSource, type RandomSource } from '../../src/random/randomSource.js';
+import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import type { Report } from '../../src/report/reportModel.js';
+import { resolveSettings } from '../../src/settings/resolveSettings.js';
+
+// A series is "worse" only with evidence that the candidate's loss is higher, "better" only with
+// evidence that it is lower, whatever the policy and margin. Invented panel, fixed seed: five
+// series with AR(1) errors; the candidate's error is scaled by 0.7 on "planted-better" (about
+// 51% lower squared loss), by 1.4 on "planted-worse" (about 96% higher) and left alone elsewhere.
+
+function normal(random: RandomSource): number {
+  const u = 1 - random.nextDouble();
+  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * random.nextDouble());
+}
+
+const SCALES: Record<string, number> = {
+  'planted-better': 0.7,
+  'planted-worse': 1.4,
+  'same-a': 1,
+  'same-b': 1,
+  'same-c': 1,
+};
+
+function files(seed: number): { baseline: string; candidate: string } {
+  const random = createRandomSource(seed);
+  const b = ['series,timestamp,actual,prediction'];
+  const c = [...b];
+  for (const [name, scale] of Object.entries(SCALES)) {
+    let eb = 0;
+    let ec = 0;
+    for (let t = 0; t < 400; t++) {
+      eb = 0.5 * eb + normal(random);
+      ec = 0.5 * ec + normal(random);
+      b.push(`${name},${t},10,${10 + eb}`);
+      c.push(`${name},${t},10,${10 + scale * ec}`);
+    }
+  }
+  return { baseline: `${b.join('\n')}\n`, candidate: `${c.join('\n')}\n` };
+}
+
+function evaluate(extra: Record<string, string>): Report {
+  const f = files(97);
+  const panel = alignPanel({
+    baseline: parseForecastText(f.baseline, 'b.csv', { role: 'baseline' }),
+    candidate: parseForecastText(f.candidate, 'c.csv', { role: 'candidate' }),
+  });
+  const settings = resolveSettings(
+    { baseline: 'b.csv', candidate: 'c.csv', resamples: '199', ...extra },
+    (n) => `--${n}`,
+  );
+  return evaluatePanel(panel, settings);
+}
+
+function directions(report: Report): Record<string, string | undefined> {
+  return Object.fromEntries(
+    report.comparisons.filter((c) => c.series !== 'all').map((c) => [c.series, c.direction]),
+  );
+}
+
+const EXPECTED = {
+  'planted-better': 'better',
+  'planted-worse': 'worse',
+  'same-a': 'no evidence',
+  'same-b': 'no evidence',
+  'same-c': 'no evidence',
+};
+
+describe('per-series direction follows the evidence, not the policy', () => {
+  for (const extra of [
+    {},
+    { policy: 'superiority', margin: '0.10' },
+    { policy: 'non-inferiority', margin: '0.10' },
+    { policy: 'no-regression', margin: '0.10' },
+  ]) {
+    it(`${extra.policy ?? 'no-regression'} with margin ${extra.margin ?? '0'}`, () => {
+      const report = evaluate(extra);
+      expect(directions(report)).toEqual(EXPECTED);
+      expect(report.seriesSummary).toMatchObject({ worse: 1, better: 1, noEvidence: 3 });
+      expect(report.seriesSummary?.topRegressions).toEqual(['planted-worse']);
+      for (const c of report.comparisons.filter((x) => x.series !== 'all')) {
+        // The p-value behind the word is small exactly when there is a direction.
+        expect(c.directionPValue ?? 1).toSatisfy((p: number) =>
+          c.direction === 'no evidence' ? p > 0.05 : p <= 0.05,
+        );
+      }
+    });
+  }
+});
