@@ -384,6 +384,7 @@ function readSettings(r: Reader): Settings {
     top: r.field('top').integer(),
     json: r.field('json').stringOrNull(),
     markdown: r.field('markdown').stringOrNull(),
+    html: r.field('html').value === undefined ? null : r.field('html').stringOrNull(),
   };
 }
 

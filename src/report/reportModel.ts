@@ -4,6 +4,7 @@ import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
+import type { MissingRowsSummary } from './missingRows.js';
 
 /**
  * The JSON report: the one artefact every renderer (terminal, Markdown comment, job summary)
@@ -204,4 +205,6 @@ export interface InputsSummary {
     readonly baseline: number | null;
     readonly candidate: number | null;
   } | null;
+  /** Where the rows the candidate lacks are (null or absent when it lacks none). */
+  readonly missingRows?: MissingRowsSummary | null;
 }

@@ -103,6 +103,7 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     top: integer('top', 0, 10_000),
     json: optional('json'),
     markdown: optional('markdown'),
+    html: optional('html'),
   };
 }
 

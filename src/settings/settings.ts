@@ -49,4 +49,6 @@ export interface Settings {
   readonly top: number;
   readonly json: string | null;
   readonly markdown: string | null;
+  /** Where to write the self-contained HTML report, or null. */
+  readonly html: string | null;
 }

@@ -194,6 +194,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       top: 10,
       json: null,
       markdown: null,
+      html: null,
     },
     reasons: [],
     seriesSummary: null,

@@ -69,7 +69,7 @@ const EXPECTED = {
 };
 
 describe('per-series direction follows the evidence, not the policy', () => {
-  for (const extra of [
+  for (const extra of <Record<string, string>[]>[
     {},
     { policy: 'superiority', margin: '0.10' },
     { policy: 'non-inferiority', margin: '0.10' },

@@ -1,0 +1,104 @@
+import type { Comparison } from './reportModel.js';
+import type { ComparisonView, ReportView } from './reportView.js';
+
+/**
+ * Cell texts shared by the Markdown, HTML and terminal renderers. Each column keeps a fixed
+ * number of significant digits (trailing zeros kept, so a column reads evenly); p-values show
+ * four decimals and their ends as "< 0.0001" / "> 0.9999". Texts are plain: each renderer
+ * escapes them for its medium.
+ */
+
+/** Significant digits of loss columns. */
+export const LOSS_DIGITS = 4;
+/** Significant digits of percentages. */
+export const PERCENT_DIGITS = 3;
+
+/** x with `digits` significant digits, trailing zeros kept (1.200), exponent form outside 1e-4…1e6. */
+export function significant(x: number | null | undefined, digits = LOSS_DIGITS): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return 'n/a';
+  if (x === 0) return '0';
+  const magnitude = Math.abs(x);
+  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
+  return x.toPrecision(digits);
+}
+
+/** A fraction as a signed percentage with fixed significant digits: 0.0372 → "+3.72%". */
+export function percent(x: number | null | undefined, digits = PERCENT_DIGITS): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return 'n/a';
+  if (x === 0) return '0%';
+  const text = significant(x * 100, digits);
+  return `${x > 0 ? '+' : ''}${text}%`;
+}
+
+/** A p-value: four decimals, with its ends as "< 0.0001" and "> 0.9999". */
+export function pValue(p: number | null | undefined): string {
+  if (p === null || p === undefined || !Number.isFinite(p)) return 'n/a';
+  if (p < 0.0001) return '< 0.0001';
+  if (p > 0.9999) return '> 0.9999';
+  return p.toFixed(4);
+}
+
+export interface RelativeInterval {
+  readonly lower: number;
+  readonly upper: number;
+  readonly level: number;
+  readonly method: string;
+}
+
+/**
+ * An interval for E[L_c]/E[L_b] − 1, the quantity the "change" column prints: the engine's
+ * test-inversion interval when the report has it, else the bootstrap's interval for the same
+ * ratio (computed with a relative margin). Never an interval for another quantity.
+ */
+export function relativeInterval(c: ComparisonView): RelativeInterval | null {
+  const r = c.relativeChange;
+  if (r !== undefined && r !== null && r.lower !== null && r.upper !== null) {
+    return { lower: r.lower, upper: r.upper, level: r.level, method: r.method };
+  }
+  const b = c.bootstrap.relativeInterval;
+  return b === null ? null : { lower: b.lower, upper: b.upper, level: b.level, method: b.method };
+}
+
+/** "+3.72% [+1.10%, +6.40%]", or the point alone when no interval for the ratio exists. */
+export function changeCell(c: ComparisonView): string {
+  const point = percent(c.relativeChange?.estimate ?? c.relativeDifference);
+  const i = relativeInterval(c);
+  return i === null ? point : `${point} [${percent(i.lower)}, ${percent(i.upper)}]`;
+}
+
+export type Evidence = 'worse' | 'better' | 'no clear difference' | 'n/a';
+
+/**
+ * Evidence in words about the plain difference E[L_c] − E[L_b], whatever the policy: "worse"
+ * when the interval for the relative change lies above 0, "better" when below. Without such an
+ * interval, the intervals for E[d] are used when d is the plain difference (no relative
+ * margin); both tests' intervals must then exclude 0 on the same side. Per-series comparisons use
+ * their multiplicity-adjusted direction.
+ */
+export function evidenceOf(c: ComparisonView, report: ReportView): Evidence {
+  if (c.direction !== undefined) {
+    return c.direction === 'no evidence' ? 'no clear difference' : c.direction;
+  }
+  const i = relativeInterval(c);
+  if (i !== null) return sideOf([i]);
+  if (report.policy.baselineFactor !== 1) return 'n/a';
+  const intervals = [c.dieboldMariano.interval, c.bootstrap.interval].filter((x) => x !== null);
+  if (intervals.length === 0) return 'n/a';
+  return sideOf(intervals);
+}
+
+function sideOf(intervals: readonly { lower: number; upper: number }[]): Evidence {
+  if (intervals.every((i) => i.lower > 0)) return 'worse';
+  if (intervals.every((i) => i.upper < 0)) return 'better';
+  return 'no clear difference';
+}
+
+/** "overall", "horizon 3", "series north", "path p1". */
+export function scopeText(c: Comparison): string {
+  if (c.path !== undefined) return `path ${c.path}`;
+  if (c.horizon === 'all' && c.series === 'all') return 'overall';
+  const parts: string[] = [];
+  if (c.horizon !== 'all') parts.push(`horizon ${c.horizon}`);
+  if (c.series !== 'all') parts.push(`series ${c.series}`);
+  return parts.join(', ');
+}
