@@ -78,7 +78,7 @@ export function aggregateByTime(
 /**
  * The loss differential tested against zero: d_t = L^cand_t − (1 + r) · L^base_t. With r = 0
  * this is the plain differential of Diebold & Mariano (1995); a relative margin r > 0 tolerates
- * a candidate up to 100·r % worse (DESIGN: "tested exactly as δ = 0 on …").
+ * a candidate up to 100·r % worse (docs/design.md, "Margins": "tested exactly as δ = 0 on …").
  */
 export function lossDifferential(series: LossSeries, relativeMargin: number): Float64Array {
   const n = series.baseline.length;

@@ -12,7 +12,7 @@ import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbo
  * Which p-value decides: for `ewc`, Student t with ν degrees of freedom (fixed-b, Lazarus et
  * al. 2018); for `bartlett` / `uniform`, the Harvey, Leybourne & Newbold (1997) corrected
  * statistic against Student t with n − 1 df, since their normal reference over-rejects in short
- * samples (DESIGN, measured size). The lower-tail p-value is 1 − upper (continuous reference).
+ * samples (docs/design.md, "Long-run variance"; measured size in docs/validation.md). The lower-tail p-value is 1 − upper (continuous reference).
  * The interval inverts the same statistic: d̄ ± q · SE, with SE = √(ω̂²/n) divided by the HLN
  * factor where that correction is used.
  */

@@ -10,7 +10,7 @@ import type { MarginKind, Policy } from '../settings/settings.js';
  * - superiority:     H0 E[L_c] ≥ (1 − r) E[L_b]  vs  H1 better by more than the margin; the gate
  *                    passes when H0 is rejected.
  *
- * A relative margin r is tested as δ = 0 on d_t = L_c,t − (1 ± r) L_b,t (DESIGN); an absolute
+ * A relative margin r is tested as δ = 0 on d_t = L_c,t − (1 ± r) L_b,t (docs/design.md, "Margins"); an absolute
  * margin m on d_t = L_c,t − L_b,t against δ = ±m.
  */
 export interface Hypothesis {

@@ -1,7 +1,7 @@
 import { InputError } from '../core/inputError.js';
 
 /**
- * Which header column plays which role. Every role has a default name (DESIGN.md, "Input
+ * Which header column plays which role. Every role has a default name (docs/design.md, "Input
  * contract"); a mapping renames some of them. `quantile` is the prefix of quantile columns: with
  * the default "q", a column "q0.1" holds the 0.1 quantile.
  */

@@ -8,7 +8,7 @@ import type { MissingRowsSummary } from './missingRows.js';
 
 /**
  * The JSON report: the one artefact every renderer (terminal, Markdown comment, job summary)
- * reads. Its shape is fixed by DESIGN ("JSON report contract") and described by
+ * reads. Its shape is fixed by docs/design.md ("The JSON report") and described by
  * docs/report.schema.json; numbers that cannot be computed are null, never NaN.
  */
 export interface Report {

@@ -56,7 +56,7 @@ describe('automaticBlockLength (Politis & White 2004; Patton, Politis & White 20
     expect(fixture.cases.some((c) => (c.unclamped ?? 2) < 1 && c.blockLength === 1)).toBe(true);
   });
 
-  it('states K_N, m_max, b_max and the critical value as DESIGN.md does (n = 1000)', () => {
+  it('states K_N, m_max, b_max and the critical value as docs/design.md does (n = 1000)', () => {
     const d = Float64Array.from({ length: 1000 }, (_, t) => Math.sin(t * 1.3));
     const r = automaticBlockLength(d);
     expect(r.runLength).toBe(5); // max(5, ⌈log10 1000⌉ = 3)

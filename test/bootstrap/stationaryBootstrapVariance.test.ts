@@ -6,7 +6,7 @@ interface VarianceFixture {
   cases: { series: string; expectedBlockLength: number; variance: number }[];
 }
 
-/** Lemma 1 summed over every lag, O(n²), as DESIGN.md writes it. */
+/** Lemma 1 summed over every lag, O(n²), as docs/design.md writes it. */
 function fullSum(d: Float64Array, b: number): number {
   const n = d.length;
   const mean = d.reduce((a, x) => a + x, 0) / n;

@@ -4,7 +4,7 @@ import { createRandomSource } from '../../src/random/randomSource.js';
 import { chiSquareQuantile, chiSquareStatistic } from './chiSquare.js';
 import { scriptedSource } from './scriptedSource.js';
 
-/** P(ℓ = k) = p q^{k−1}; P(ℓ ≥ k) = q^{k−1} (the published law, DESIGN.md "Stationary bootstrap"). */
+/** P(ℓ = k) = p q^{k−1}; P(ℓ ≥ k) = q^{k−1} (the published law, docs/design.md "Stationary bootstrap"). */
 function geometricCell(b: number, from: number, to: number): number {
   const q = 1 - 1 / b;
   return q ** (from - 1) - (Number.isFinite(to) ? q ** to : 0);

@@ -18,7 +18,7 @@ describe('harveyLeybourneNewboldFactor: √((n + 1 − 2h + h(h − 1)/n)/n) (HL
     expect(harveyLeybourneNewbold(1, 5, 7)).toBeNull();
   });
 
-  it('property: equals the DESIGN form √((n + 1 − 2h + h(h − 1)/n)/n) for 1 ≤ h < n', () => {
+  it('property: equals the docs/design.md form √((n + 1 − 2h + h(h − 1)/n)/n) for 1 ≤ h < n', () => {
     fc.assert(
       fc.property(fc.integer({ min: 2, max: 10_000 }), fc.nat(), (n, hSeed) => {
         const h = 1 + (hSeed % (n - 1));

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runStudy } from '../../validation/sizeAndPowerStudy.js';
 
-// The size study of DESIGN.md ("Why ewc is the default"), at reduced cost for every test run:
+// The size study of docs/design.md ("Why ewc is the default"), at reduced cost for every test run:
 // AR(1) errors with φ = 0.6 for both models, innovations correlated 0.5, equal accuracy,
 // α = 0.05, 1,000 replications (stream r of seed 20261201 for replication r), 999 bootstrap
 // resamples. The full study (2,000 replications, 9,999 resamples, power too) is

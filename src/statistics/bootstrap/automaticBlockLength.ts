@@ -36,7 +36,7 @@ export interface AutomaticBlockLength {
  * Automatic expected block length for the stationary bootstrap: the plug-in rule of Politis &
  * White (2004), "Automatic block-length selection for the dependent bootstrap", Econometric
  * Reviews 23(1), with the correction of Patton, Politis & White (2009), Econometric Reviews 28(4),
- * exactly as DESIGN.md "Automatic b" states it:
+ * exactly as docs/design.md ("Stationary bootstrap", automatic b) states it:
  *
  * - γ̂_k = (1/n) Σ_{t=k+1..n} (d_t − d̄)(d_{t−k} − d̄) (divide by n), ρ̂_k = γ̂_k / γ̂_0;
  * - K_N = max(5, ⌈log10 n⌉), m_max = ⌈√n⌉ + K_N, b_max = ⌈min(3√n, n/3)⌉,

@@ -20,7 +20,7 @@
  *   [U_(k(a)), U_(B+1−k(a))] = [d̄ − q_{1−α/2}(T), d̄ − q_{α/2}(T)].
  * - One-sided lower bound at level c: L = U_(k(α)).
  * - One-sided p-value for H0: E[d] ≤ δ against "candidate worse by more than δ":
- *   p = (1 + #{U_b ≤ δ})/(B + 1), which is DESIGN.md's (1 + #{d̄*_b − d̄ ≥ d̄ − δ})/(B + 1).
+ *   p = (1 + #{U_b ≤ δ})/(B + 1), which is docs/design.md's (1 + #{d̄*_b − d̄ ≥ d̄ − δ})/(B + 1).
  * - Two-sided p-value: min(1, 2·min(p, (1 + #{U_b ≥ δ})/(B + 1))).
  *
  * Consistency, exact in floating point (tested): p ≤ α ⇔ δ < L, and

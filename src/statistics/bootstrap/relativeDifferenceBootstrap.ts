@@ -43,7 +43,7 @@ export interface RelativeDifferenceResult {
  * one-sided bound and p-values are the basic ones of `basicBootstrapInference` (Davison & Hinkley
  * 1997, ch. 5) on θ* − θ̂, with `margin` read as a relative margin r (0.02 = "at most 2% worse").
  *
- * This is a report companion, not the gate's test: DESIGN.md tests a relative margin exactly as
+ * This is a report companion, not the gate's test: docs/design.md ("Margins") tests a relative margin exactly as
  * δ = 0 on d_t = candidate_t − (1 + r)·baseline_t, which `stationaryBootstrap` does.
  *
  * Conventions: the same blocks and random streams as `stationaryBootstrap` with the same options

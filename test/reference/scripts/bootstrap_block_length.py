@@ -1,7 +1,7 @@
 """Reference values for skillgate's automatic stationary-bootstrap block length: an independent
 numpy implementation of Politis & White (2004, Econometric Reviews 23(1)) with the correction of
 Patton, Politis & White (2009, Econometric Reviews 28(4)), following the rule as stated in
-DESIGN.md "Automatic b":
+docs/design.md "Automatic b":
 
   gamma_k = (1/n) sum_{t=k+1..n} (d_t - mean)(d_{t-k} - mean), rho_k = gamma_k / gamma_0
   K_N = max(5, ceil(log10 n)), m_max = ceil(sqrt n) + K_N, b_max = ceil(min(3 sqrt n, n / 3)),

@@ -123,7 +123,7 @@ writeCase <- function(name, dataset, y, h, lossKind, margin, first, baselineRule
   n <- length(d)
   fit <- lm(d ~ 1)
 
-  # Newey & West (1994) pilot quantities, the DESIGN formula evaluated in R; the bandwidth itself
+  # Newey & West (1994) pilot quantities, the docs/design.md formula evaluated in R; the bandwidth itself
   # is sandwich's, and the two must agree.
   pilot <- floor(4 * (n / 100)^(2 / 9))
   u <- d - mean(d)
@@ -157,7 +157,7 @@ writeCase <- function(name, dataset, y, h, lossKind, margin, first, baselineRule
       entries <- c(entries, hacEntry("uniform", l$rule, l$lag, vu, n, mean(d), margin, h,
                                      paste0(uniformSource, "; pnorm, pt")))
     } else {
-      # Not positive: the expected result is Bartlett at the same lag (DESIGN, `uniform`).
+      # Not positive: the expected result is Bartlett at the same lag (docs/design.md, `uniform`).
       entries <- c(entries, hacEntry("uniform", l$rule, l$lag, vb, n, mean(d), margin, h,
         paste0(uniformSource, " is not positive, so the values are ", bartlettSource),
         usedEstimator = "bartlett", extra = list(uniformLongRunVariance = num(vu * n))

@@ -139,7 +139,7 @@ def autocovariances(d):
 
 
 def auto_lag(d, h):
-    """Newey & West (1994) without prewhitening, as in DESIGN.md, with numpy."""
+    """Newey & West (1994) without prewhitening, as in docs/design.md, with numpy."""
     n = len(d)
     pilot = math.floor(4 * (n / 100) ** (2 / 9))
     u = d - np.mean(d)

@@ -1,6 +1,6 @@
 # Reference panel for pooled comparisons (overall, per horizon, per series, scaled): forecasts of
 # several series for horizons 1..3 from every origin, and the Diebold-Mariano quantities R
-# computes from the definitions in docs (DESIGN, "Statistics"):
+# computes from the definitions in docs/design.md ("Statistics"):
 #
 #   - row loss L_i (squared or absolute error) of each model, d_i = L^cand_i - L^base_i;
 #   - overall:     d_t = mean of d_i over all rows with timestamp t (all series and horizons);

@@ -2,7 +2,7 @@
 
 Reads the forecast CSVs that panel_reference.R wrote into the folder given as the first argument
 (R runs first), recomputes every loss differential series from the rows with numpy (per-timestamp
-means, DESIGN "Statistics"), and for each takes the lag L that R chose (panel_seatbelts.json) and
+means, docs/design.md "Statistics"), and for each takes the lag L that R chose (panel_seatbelts.json) and
 computes with statsmodels:
   - variance of the mean: sm.OLS(d, ones).fit(cov_type='HAC',
         cov_kwds={'maxlags': L, 'kernel': 'bartlett', 'use_correction': False}).cov_params()[0, 0]
