@@ -34,6 +34,8 @@ function compare(candidate, label) {
       path.join(out, `${label}.json`),
       '--markdown',
       path.join(out, `${label}.md`),
+      '--html',
+      path.join(out, `${label}.html`),
     ],
     { stdio: 'inherit' },
   );
@@ -43,7 +45,9 @@ function compare(candidate, label) {
 
 const improved = compare('candidate.csv', 'demand-improved');
 const regressed = compare('candidate-regressed.csv', 'demand-regressed');
-console.log(`\nReports written to ${path.relative(process.cwd(), out)}/ (JSON and Markdown).`);
+console.log(
+  `\nReports written to ${path.relative(process.cwd(), out)}/ (JSON, Markdown and a self-contained HTML report to open in a browser).`,
+);
 if (improved !== 0 || regressed !== 1) {
   console.error(
     'demo: unexpected verdicts (the improved candidate should pass, the regressed one fail)',

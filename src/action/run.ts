@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { appendFile, mkdir, readFile, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { InputError } from '../core/inputError.js';
+import { renderHtml } from '../report/renderHtml.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import type { Report } from '../report/reportModel.js';
 import { type CommentPlan, planComment } from './commentTarget.js';
@@ -64,16 +65,25 @@ async function gate(deps: ActionDependencies): Promise<Report> {
       : action.source.name || report.name;
   // A report posted from an earlier run links to that run, where its summary is.
   const link = runUrl(env, plan.kind === 'workflow-run' ? plan.runId : env.runId);
+  const workingDirectory = deps.env.GITHUB_WORKSPACE ?? process.cwd();
   const render = (r: Report): string =>
-    renderMarkdown(r, link === undefined ? {} : { runUrl: link });
+    renderMarkdown(r, { workingDirectory, ...(link === undefined ? {} : { runUrl: link }) });
 
   const jsonTarget = jsonPath(action, env, name);
   await writeText(jsonTarget, `${JSON.stringify(report, null, 2)}\n`);
   const markdownTarget =
     action.source.kind === 'compare' ? action.source.settings.markdown : action.source.markdown;
   if (markdownTarget !== null) await writeText(markdownTarget, render(report));
+  const htmlTarget = reportPath(
+    action.source.kind === 'compare' ? action.source.settings.html : action.source.html,
+    env,
+    name,
+    'html',
+  );
+  await writeText(htmlTarget, renderHtml(report, { workingDirectory }));
   deps.log.setOutput(OUTPUT.verdict, report.verdict);
   deps.log.setOutput(OUTPUT.report, jsonTarget);
+  deps.log.setOutput(OUTPUT.htmlReport, htmlTarget);
 
   if (env.stepSummary !== null) {
     const summary = fitReport(report, {
@@ -142,12 +152,22 @@ async function readEventPayload(eventPath: string | null): Promise<unknown> {
 
 function jsonPath(action: ActionSettings, env: RunnerEnvironment, name: string): string {
   const given = action.source.kind === 'compare' ? action.source.settings.json : action.source.json;
+  return reportPath(given, env, name, 'json');
+}
+
+/** The given path, else a file under RUNNER_TEMP named after the comparison. */
+function reportPath(
+  given: string | null,
+  env: RunnerEnvironment,
+  name: string,
+  extension: 'json' | 'html',
+): string {
   if (given !== null) return given;
-  if (name === '') return path.join(env.tempDir, 'skillgate-report.json');
+  if (name === '') return path.join(env.tempDir, `skillgate-report.${extension}`);
   const encoded = encodeName(name);
   const slug =
     encoded.length <= 80 ? encoded : createHash('sha256').update(name).digest('hex').slice(0, 16);
-  return path.join(env.tempDir, `skillgate-report-${slug}.json`);
+  return path.join(env.tempDir, `skillgate-report-${slug}.${extension}`);
 }
 
 async function writeText(file: string, text: string): Promise<void> {

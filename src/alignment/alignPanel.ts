@@ -417,7 +417,8 @@ function lackingRows(
     out.horizon[k] = horizonValues[bKeys[2]!.values[row]!]!;
     if (baseline.prediction !== null) out.prediction[k] = baseline.prediction.values[row]!;
     if (baseline.actual !== null) out.actual[k] = baseline.actual.values[row]!;
-    else if (fromActuals !== null) out.actual[k] = fromActuals.get(s * timeLabels.length + t) ?? Number.NaN;
+    else if (fromActuals !== null)
+      out.actual[k] = fromActuals.get(s * timeLabels.length + t) ?? Number.NaN;
   }
   return out;
 }

@@ -4,6 +4,7 @@ import { runComparison } from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
 import { VERSION } from '../core/version.js';
 import { createResamplePool } from '../parallel/resamplePool.js';
+import { renderHtml } from '../report/renderHtml.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import { renderTerminal } from '../report/renderTerminal.js';
 import { resolveSettings } from '../settings/resolveSettings.js';
@@ -34,10 +35,13 @@ async function main(argv: readonly string[]): Promise<number> {
     progress.done();
     if (settings.json !== null)
       await writeFile(settings.json, `${JSON.stringify(report, null, 2)}\n`);
-    if (settings.markdown !== null) await writeFile(settings.markdown, renderMarkdown(report));
+    const shown = { workingDirectory: process.cwd() };
+    if (settings.markdown !== null)
+      await writeFile(settings.markdown, renderMarkdown(report, shown));
+    if (settings.html !== null) await writeFile(settings.html, renderHtml(report, shown));
     if (!request.quiet) {
       const color = process.stdout.isTTY === true && process.env.NO_COLOR === undefined;
-      process.stdout.write(renderTerminal(report, { color }));
+      process.stdout.write(renderTerminal(report, { color, workingDirectory: process.cwd() }));
     }
     return report.verdict === 'fail' ? 1 : 0;
   } catch (error) {

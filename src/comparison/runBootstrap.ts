@@ -54,6 +54,7 @@ export function runBootstrap(
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,
+    distribution: result.distribution,
     notes: result.notes,
   };
 }

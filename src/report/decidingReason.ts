@@ -152,7 +152,9 @@ function comparisonReason(report: ReportView): DecidingReason {
     kind: 'one-test-decides',
     verdict,
     text: `${finds} evidence that ${alternative}${
-      agreement === 'both' ? ' (the other test could not be computed)' : ` (--agreement ${agreement})`
+      agreement === 'both'
+        ? ' (the other test could not be computed)'
+        : ` (--agreement ${agreement})`
     }`,
   };
 }

@@ -19,7 +19,9 @@ export interface DifferenceSeries {
 
 export function differenceSeries(report: ReportView): DifferenceSeries | null {
   const all = report.stability?.periods ?? [];
-  const periods = all.filter((p) => p.relativeDifference !== null && Number.isFinite(p.relativeDifference));
+  const periods = all.filter(
+    (p) => p.relativeDifference !== null && Number.isFinite(p.relativeDifference),
+  );
   if (periods.length < 2) return null;
   const p = report.policy;
   const margin =
@@ -85,7 +87,8 @@ export function mermaidChart(series: DifferenceSeries): string[] {
     `    line [${values.join(', ')}]`,
     `    line [${Array(n).fill(0).join(', ')}]`,
   ];
-  if (series.margin !== null) lines.push(`    line [${Array(n).fill(round(series.margin)).join(', ')}]`);
+  if (series.margin !== null)
+    lines.push(`    line [${Array(n).fill(round(series.margin)).join(', ')}]`);
   lines.push('```');
   return lines;
 }

@@ -44,7 +44,8 @@ export function missingRowsSummary(
   for (let k = 0; k < n; k++) {
     const y = lacking.actual[k]!;
     const f = lacking.prediction[k]!;
-    const value = lossOf !== null && Number.isFinite(y) && Number.isFinite(f) ? lossOf(y, f) : Number.NaN;
+    const value =
+      lossOf !== null && Number.isFinite(y) && Number.isFinite(f) ? lossOf(y, f) : Number.NaN;
     if (Number.isFinite(value)) loss[k] = value;
     else withoutLoss++;
   }

@@ -33,13 +33,21 @@ export function missingRowsSection(report: ReportView): MissingRowsSection | nul
     `The candidate lacks ${m.rows} rows that the baseline scored, from ${m.first ?? 'n/a'} to ${m.last ?? 'n/a'}. The baseline's mean loss on them is ${significant(m.meanBaselineLoss)}${harder}: a model must not pass by skipping hard cases.`,
   ];
   if (m.rowsWithoutLoss > 0) {
-    lines.push(`The baseline's loss is unknown on ${m.rowsWithoutLoss} of them (no actual value, or a loss that needs quantiles).`);
+    lines.push(
+      `The baseline's loss is unknown on ${m.rowsWithoutLoss} of them (no actual value, or a loss that needs quantiles).`,
+    );
   }
   const rows = (groups: readonly MissingRowsGroup[]) =>
-    groups.map((g) => [g.key, String(g.rows), `${g.first ?? 'n/a'} to ${g.last ?? 'n/a'}`, significant(g.meanBaselineLoss)]);
+    groups.map((g) => [
+      g.key,
+      String(g.rows),
+      `${g.first ?? 'n/a'} to ${g.last ?? 'n/a'}`,
+      significant(g.meanBaselineLoss),
+    ]);
   const header = (what: string) => [what, 'rows lacking', 'time span', 'baseline loss on them'];
   const align = ['left', 'right', 'left', 'right'] as const;
   const tables = [table(header('series'), align, rows(m.bySeries))];
-  if (m.byHorizon.length > 1 || report.inputs.horizons.length > 1) tables.push(table(header('horizon'), align, rows(m.byHorizon)));
+  if (m.byHorizon.length > 1 || report.inputs.horizons.length > 1)
+    tables.push(table(header('horizon'), align, rows(m.byHorizon)));
   return { title, lines, tables };
 }

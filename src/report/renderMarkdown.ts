@@ -43,43 +43,57 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
     '',
   );
 
-  lines.push(...collapsed('How the overall comparison was tested', [
-    ...markdownTable(s.details),
-    '',
-    ...s.detailNotes.map((n) => `- ${esc(n)}`),
-  ]));
-  if (s.horizons !== null) {
-    lines.push(...collapsed(`By horizon (${s.horizons.rows.length}): for locating a change only, not verdicts`, [
-      'Each horizon is compared on its own; the p-values are Holm-adjusted across horizons. The gate’s verdict rests on the overall comparison.',
+  lines.push(
+    ...collapsed('How the overall comparison was tested', [
+      ...markdownTable(s.details),
       '',
-      ...markdownTable(s.horizons),
-    ]));
+      ...s.detailNotes.map((n) => `- ${esc(n)}`),
+    ]),
+  );
+  if (s.horizons !== null) {
+    lines.push(
+      ...collapsed(
+        `By horizon (${s.horizons.rows.length}): for locating a change only, not verdicts`,
+        [
+          'Each horizon is compared on its own; the p-values are Holm-adjusted across horizons. The gate’s verdict rests on the overall comparison.',
+          '',
+          ...markdownTable(s.horizons),
+        ],
+      ),
+    );
   }
   if (s.series !== null) {
-    lines.push(...collapsed(`By series (${report.seriesSummary?.series ?? 0}): ${report.seriesSummary?.worse ?? 0} worse, ${report.seriesSummary?.better ?? 0} better`, [
-      esc(s.series.summary),
-      '',
-      ...markdownTable(s.series.table),
-    ]));
+    lines.push(
+      ...collapsed(
+        `By series (${report.seriesSummary?.series ?? 0}): ${report.seriesSummary?.worse ?? 0} worse, ${report.seriesSummary?.better ?? 0} better`,
+        [esc(s.series.summary), '', ...markdownTable(s.series.table)],
+      ),
+    );
   }
   if (s.paths !== null) {
-    lines.push(...collapsed('By backtest path', [
-      esc(s.paths.summary),
-      ...(s.paths.table === null ? [] : ['', ...markdownTable(s.paths.table)]),
-    ]));
+    lines.push(
+      ...collapsed('By backtest path', [
+        esc(s.paths.summary),
+        ...(s.paths.table === null ? [] : ['', ...markdownTable(s.paths.table)]),
+      ]),
+    );
   }
   const missing = missingRowsSection(view);
   if (missing !== null) {
-    lines.push(...collapsed(missing.title, [
-      ...missing.lines.map((l) => esc(l)),
-      ...missing.tables.flatMap((t) => ['', ...markdownTable(t)]),
-    ]));
+    lines.push(
+      ...collapsed(missing.title, [
+        ...missing.lines.map((l) => esc(l)),
+        ...missing.tables.flatMap((t) => ['', ...markdownTable(t)]),
+      ]),
+    );
   }
-  lines.push(...collapsed('Inputs and coverage', [
-    ...markdownTable(s.inputs.table),
-    '',
-    ...s.inputs.lines.map((l) => esc(l)),
-  ]));
+  lines.push(
+    ...collapsed('Inputs and coverage', [
+      ...markdownTable(s.inputs.table),
+      '',
+      ...s.inputs.lines.map((l) => esc(l)),
+    ]),
+  );
   lines.push(...collapsed('All settings', markdownTable(s.settings)));
   lines.push(
     '<sub>A pass is evidence, not proof: it is only as good as the backtest behind it. ' +

@@ -3,6 +3,7 @@ import type { Verdict } from '../decision/verdict.js';
 import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
+import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
 import type { MissingRowsSummary } from './missingRows.js';
 
@@ -161,6 +162,8 @@ export interface BootstrapSummary {
   readonly pValue: number | null;
   readonly pValueTwoSided: number | null;
   readonly decisionPValue: number | null;
+  /** The resample means of the tested differential in equal-width bins, for drawing. */
+  readonly distribution?: ResampleHistogram | null;
   readonly notes: readonly string[];
 }
 

@@ -1,19 +1,15 @@
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { holmAdjust } from '../multiplicity/holmAdjust.js';
-import { asCommandLine, type OptionValue, settingsAsOptions } from '../settings/settingsAsOptions.js';
 import {
-  changeCell,
-  evidenceOf,
-  percent,
-  pValue,
-  relativeInterval,
-  scopeText,
-  significant,
-} from './cells.js';
+  asCommandLine,
+  type OptionValue,
+  settingsAsOptions,
+} from '../settings/settingsAsOptions.js';
+import { changeCell, evidenceOf, percent, pValue, relativeInterval, significant } from './cells.js';
 import { type DecidingReason, decidingReasons } from './decidingReason.js';
 import { displayPath } from './displayPath.js';
-import type { ComparisonView, ReportView } from './reportView.js';
 import { type ReportTable, table } from './reportTable.js';
+import type { ComparisonView, ReportView } from './reportView.js';
 
 /**
  * The content every rendering of a report shows (comment, job summary, HTML, terminal), built
@@ -101,7 +97,7 @@ function pct(level: number): string {
   return `${Number((level * 100).toPrecision(3))}%`;
 }
 
-function changeHeader(report: ReportView, rows: readonly ComparisonView[]): string {
+function changeHeader(rows: readonly ComparisonView[]): string {
   const level = rows.map(relativeInterval).find((i) => i !== null)?.level;
   return level === undefined ? 'change' : `change [${pct(level)} interval]`;
 }
@@ -115,7 +111,7 @@ function mainTable(report: ReportView, overall: ComparisonView): ReportTable {
       : `${VERDICT_WORD[gate]} (tests alone: ${overall.verdict})`;
   const scope = report.inputs.rowsDropped.baseline > 0 ? 'overall, common rows' : 'overall';
   return table(
-    ['scope', 'baseline loss', 'candidate loss', changeHeader(report, [overall]), 'evidence', 'verdict'],
+    ['scope', 'baseline loss', 'candidate loss', changeHeader([overall]), 'evidence', 'verdict'],
     ['left', 'right', 'right', 'right', 'left', 'left'],
     [
       [
@@ -155,9 +151,21 @@ function detailsTable(report: ReportView, c: ComparisonView): ReportTable {
         : `${significant(dm.smallSample.statistic)} (Harvey–Leybourne–Newbold; raw ${significant(dm.statistic)})`,
       bs.standardError === null ? 'n/a' : `standard error of d̄ ${significant(bs.standardError)}`,
     ],
-    ['p, one-sided: candidate worse', pValue(dm.smallSample?.pValue ?? dm.pValue), pValue(bs.pValue)],
-    ['p, in the policy’s direction (decides)', pValue(dm.decisionPValue), pValue(bs.decisionPValue)],
-    ['p, two-sided', pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided), pValue(bs.pValueTwoSided)],
+    [
+      'p, one-sided: candidate worse',
+      pValue(dm.smallSample?.pValue ?? dm.pValue),
+      pValue(bs.pValue),
+    ],
+    [
+      'p, in the policy’s direction (decides)',
+      pValue(dm.decisionPValue),
+      pValue(bs.decisionPValue),
+    ],
+    [
+      'p, two-sided',
+      pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
+      pValue(bs.pValueTwoSided),
+    ],
     ['interval for E[d]', interval(dm.interval), interval(bs.interval)],
     [
       'rejects H0 at α',
@@ -215,7 +223,14 @@ function horizonTable(report: ReportView): ReportTable | null {
   if (rows.length === 0) return null;
   const adjusted = holmAdjust(rows.map((c) => c.dieboldMariano.decisionPValue));
   return table(
-    ['horizon', 'baseline loss', 'candidate loss', changeHeader(report, rows), 'evidence', 'policy p, Holm'],
+    [
+      'horizon',
+      'baseline loss',
+      'candidate loss',
+      changeHeader(rows),
+      'evidence',
+      'policy p, Holm',
+    ],
     ['left', 'right', 'right', 'right', 'left', 'right'],
     rows.map((c, j) => [
       String(c.horizon),
@@ -237,9 +252,14 @@ function seriesSection(report: ReportView): ReportSections['series'] {
   const rows = report.comparisons
     .filter((c) => c.series !== 'all')
     .sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));
-  const shown = rows.length <= SERIES_ROWS ? rows : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
+  const shown =
+    rows.length <= SERIES_ROWS
+      ? rows
+      : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
   const summary = `${s.series} series: ${s.worse} worse, ${s.better} better, ${s.noEvidence} with no clear difference (Diebold–Mariano on L_candidate − L_baseline per series, ${method}-adjusted, α = ${s.alpha}; whatever the policy, "worse" needs evidence of a higher loss and "better" of a lower one).${
-    shown.length < rows.length ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.` : ''
+    shown.length < rows.length
+      ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.`
+      : ''
   }`;
   return {
     summary,
@@ -317,6 +337,10 @@ function settingsTable(options: readonly OptionValue[]): ReportTable {
   return table(
     ['option', 'value', 'default'],
     ['left', 'left', 'left'],
-    options.map((o) => [`--${o.name}`, o.value === '' ? '(none)' : o.value, o.isDefault ? 'yes' : 'no']),
+    options.map((o) => [
+      `--${o.name}`,
+      o.value === '' ? '(none)' : o.value,
+      o.isDefault ? 'yes' : 'no',
+    ]),
   );
 }
