@@ -1,4 +1,5 @@
 import type { Verdict } from '../decision/verdict.js';
+import { significant } from './cells.js';
 import type { ReportView } from './reportView.js';
 
 /**
@@ -61,12 +62,17 @@ export function decidingReasons(report: ReportView): DecidingReason[] {
 
   const missing = report.inputs.rowsDropped.baseline;
   if (missing > 0) {
+    const m = report.inputs.missingRows ?? null;
+    const hard =
+      m === null || m.meanBaselineLoss === null || m.meanBaselineLossCommon === null
+        ? ''
+        : `; the baseline's mean loss on them is ${significant(m.meanBaselineLoss)}, against ${significant(m.meanBaselineLossCommon)} on the rows both scored`;
     found.push({
       kind: 'missing-rows',
       verdict: report.settings.allowMissing ? 'pass' : 'fail',
       text: `the candidate lacks ${missing} ${missing === 1 ? 'row' : 'rows'} that the baseline scored${
         report.settings.allowMissing ? ' (allowed by --allow-missing)' : ''
-      }`,
+      }${hard}`,
     });
   }
 

@@ -1,0 +1,81 @@
+import { describe, expect, it } from 'vitest';
+import { decidingReasons } from '../../src/report/decidingReason.js';
+import type { Comparison, Report } from '../../src/report/reportModel.js';
+import type { ReportView } from '../../src/report/reportView.js';
+import { renderMarkdown } from '../../src/report/renderMarkdown.js';
+import { sampleReport } from '../action/sampleReport.js';
+
+// Hand-built reports (the demo's passing run, changed one field at a time): the deciding reason
+// is the finding whose verdict is the gate's, preferring one that made it worse than the tests.
+
+function withOverall(report: Report, change: Partial<Comparison>): Report {
+  const [overall, ...rest] = report.comparisons;
+  return { ...report, comparisons: [{ ...overall!, ...change }, ...rest] };
+}
+
+const kinds = (r: ReportView) => decidingReasons(r).map((x) => x.kind);
+
+describe('the deciding reason', () => {
+  it('both tests agree (no evidence): the demo pass', () => {
+    const reasons = decidingReasons(sampleReport());
+    expect(reasons[0]).toMatchObject({ kind: 'both-tests-agree', verdict: 'pass' });
+    expect(reasons[0]?.text).toMatch(/^neither test finds evidence that/);
+  });
+
+  it('both tests agree (evidence): a fail', () => {
+    const r = withOverall(sampleReport({ verdict: 'fail' }), {
+      verdict: 'fail',
+      rejected: { dieboldMariano: true, bootstrap: true },
+    });
+    expect(decidingReasons(r)[0]?.text).toMatch(/^both tests find evidence that/);
+  });
+
+  it('the tests split', () => {
+    const r = withOverall(sampleReport({ verdict: 'warn' }), {
+      verdict: 'warn',
+      rejected: { dieboldMariano: true, bootstrap: false },
+    });
+    expect(kinds(r)[0]).toBe('tests-split');
+    expect(decidingReasons(r)[0]?.text).toMatch(/Diebold–Mariano finds evidence .* the bootstrap does not/);
+  });
+
+  it('too little data', () => {
+    const r = withOverall(sampleReport({ verdict: 'warn' }), { verdict: 'warn', n: 12 });
+    expect(kinds(r)[0]).toBe('too-little-data');
+  });
+
+  it('rows the candidate lacks decide a fail the tests alone would pass', () => {
+    const base = sampleReport();
+    const r: Report = {
+      ...base,
+      verdict: 'fail',
+      inputs: { ...base.inputs, rowsDropped: { ...base.inputs.rowsDropped, baseline: 40 } },
+    };
+    expect(kinds(r)).toEqual(['missing-rows', 'both-tests-agree']);
+    const md = renderMarkdown(r);
+    // The verdict and the reason come first, before any table.
+    const lead = md.split('\n')[2] ?? '';
+    expect(lead).toMatch(/^\*\*The gate fails: the candidate lacks 40 rows that the baseline scored/);
+    expect(md).toContain('| FAIL (tests alone: pass) |');
+  });
+
+  it('a failed backtest check and a recent regression plug in', () => {
+    const r: ReportView = {
+      ...sampleReport({ verdict: 'fail' }),
+      integrity: {
+        checks: [
+          { id: 'future-origin', status: 'fail', count: 3, examples: ['north 2026-03-04'] },
+          { id: 'gaps', status: 'ok', count: 0, examples: [] },
+        ],
+      },
+      stability: { periods: [], recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' } },
+    };
+    expect(kinds(r)).toEqual(['backtest-check-failed', 'both-tests-agree', 'worse-lately']);
+    expect(decidingReasons(r)[0]?.text).toContain('future-origin');
+    const warn: ReportView = {
+      ...sampleReport({ verdict: 'warn' }),
+      stability: { periods: [], recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' } },
+    };
+    expect(kinds(warn)[0]).toBe('worse-lately');
+  });
+});
