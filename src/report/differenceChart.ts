@@ -45,6 +45,8 @@ export function periodLabel(timestamp: string): string {
 }
 
 const BLOCKS = '▁▂▃▄▅▆▇█';
+/** Line colours in order: the difference (dark), zero (grey), the margin (rust). */
+const PALETTE = '#1f2328, #8c959f, #b4501a';
 
 /**
  * One line of block characters, one per value, scaled between the smallest and largest value
@@ -78,11 +80,13 @@ export function mermaidChart(series: DifferenceSeries): string[] {
   const top = Math.max(0, series.margin ?? 0, ...values);
   const bottom = Math.min(0, series.margin ?? 0, ...values);
   const pad = Math.max(0.5, (top - bottom) * 0.08);
+  // A numbered axis (dates in its title): n date labels would overlap in a comment column.
   const lines = [
     '```mermaid',
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${PALETTE}"}}}}%%`,
     'xychart-beta',
     '    title "Candidate vs baseline: change in mean loss per period (%)"',
-    `    x-axis [${series.labels.map((l) => `"${l}"`).join(', ')}]`,
+    `    x-axis "period, ${periodLabel(series.first)} to ${periodLabel(series.last)}" 1 --> ${n}`,
     `    y-axis "change in mean loss (%)" ${round(bottom - pad)} --> ${round(top + pad)}`,
     `    line [${values.join(', ')}]`,
     `    line [${Array(n).fill(0).join(', ')}]`,

@@ -32,6 +32,7 @@ th, td { border: 1px solid #d0d7de; padding: 4px 10px; vertical-align: top; }
 th { background: #f6f8fa; text-align: left; }
 td.r, th.r { text-align: right; }
 figure { margin: 12px 0; } figcaption { color: #59636e; font-size: 0.9em; }
+p, li, h1, h2, code { overflow-wrap: anywhere; }
 code, .spark { font-family: ui-monospace, SFMono-Regular, Menlo, Consolas, monospace; font-size: 0.9em; }
 .muted { color: #59636e; font-size: 0.9em; }
 @media (max-width: 600px) { body { font-size: 14px; padding: 8px; } th, td { padding: 3px 6px; } }

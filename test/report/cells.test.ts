@@ -36,11 +36,19 @@ describe('cells', () => {
     expect(
       changeCell({
         ...overall,
-        relativeChange: { estimate: -0.1649, level: 0.9, lower: -0.2, upper: -0.1, method: 'test inversion' },
+        relativeChange: {
+          estimate: -0.1649,
+          level: 0.9,
+          lower: -0.2,
+          upper: -0.1,
+          method: 'test inversion',
+        },
       }),
     ).toBe('-16.5% [-20.0%, -10.0%]');
     // Without either, the point alone (never the interval of the margin-shifted differential).
-    expect(changeCell({ ...overall, bootstrap: { ...overall.bootstrap, relativeInterval: null } })).toBe('-16.5%');
+    expect(
+      changeCell({ ...overall, bootstrap: { ...overall.bootstrap, relativeInterval: null } }),
+    ).toBe('-16.5%');
   });
 
   it('says "better" only with evidence of a lower loss', () => {
@@ -49,7 +57,10 @@ describe('cells', () => {
     expect(evidenceOf(overall, report)).toBe('better');
     const straddles = {
       ...overall,
-      bootstrap: { ...overall.bootstrap, relativeInterval: { level: 0.95, lower: -0.1, upper: 0.02, method: 'basic' } },
+      bootstrap: {
+        ...overall.bootstrap,
+        relativeInterval: { level: 0.95, lower: -0.1, upper: 0.02, method: 'basic' },
+      },
     };
     expect(evidenceOf(straddles, report)).toBe('no clear difference');
   });

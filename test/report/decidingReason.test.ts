@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { decidingReasons } from '../../src/report/decidingReason.js';
+import { renderMarkdown } from '../../src/report/renderMarkdown.js';
 import type { Comparison, Report } from '../../src/report/reportModel.js';
 import type { ReportView } from '../../src/report/reportView.js';
-import { renderMarkdown } from '../../src/report/renderMarkdown.js';
 import { sampleReport } from '../action/sampleReport.js';
 
 // Hand-built reports (the demo's passing run, changed one field at a time): the deciding reason
@@ -36,7 +36,9 @@ describe('the deciding reason', () => {
       rejected: { dieboldMariano: true, bootstrap: false },
     });
     expect(kinds(r)[0]).toBe('tests-split');
-    expect(decidingReasons(r)[0]?.text).toMatch(/Diebold–Mariano finds evidence .* the bootstrap does not/);
+    expect(decidingReasons(r)[0]?.text).toMatch(
+      /Diebold–Mariano finds evidence .* the bootstrap does not/,
+    );
   });
 
   it('too little data', () => {
@@ -55,7 +57,9 @@ describe('the deciding reason', () => {
     const md = renderMarkdown(r);
     // The verdict and the reason come first, before any table.
     const lead = md.split('\n')[2] ?? '';
-    expect(lead).toMatch(/^\*\*The gate fails: the candidate lacks 40 rows that the baseline scored/);
+    expect(lead).toMatch(
+      /^\*\*The gate fails: the candidate lacks 40 rows that the baseline scored/,
+    );
     expect(md).toContain('| FAIL (tests alone: pass) |');
   });
 
@@ -68,13 +72,19 @@ describe('the deciding reason', () => {
           { id: 'gaps', status: 'ok', count: 0, examples: [] },
         ],
       },
-      stability: { periods: [], recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' } },
+      stability: {
+        periods: [],
+        recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' },
+      },
     };
     expect(kinds(r)).toEqual(['backtest-check-failed', 'both-tests-agree', 'worse-lately']);
     expect(decidingReasons(r)[0]?.text).toContain('future-origin');
     const warn: ReportView = {
       ...sampleReport({ verdict: 'warn' }),
-      stability: { periods: [], recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' } },
+      stability: {
+        periods: [],
+        recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' },
+      },
     };
     expect(kinds(warn)[0]).toBe('worse-lately');
   });

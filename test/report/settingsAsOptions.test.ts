@@ -57,7 +57,9 @@ describe('settings as a user types them', () => {
       { workingDirectory: '/home/runner/work/repo' },
     );
     const main = md.slice(0, md.indexOf('<details>'));
-    expect(main).toContain('Settings that differ from the defaults: `--columns series=zone,timestamp=target_date,origin=issued,actual=observed,prediction=forecast --alpha 0.1`');
+    expect(main).toContain(
+      'Settings that differ from the defaults: `--columns series=zone,timestamp=target_date,origin=issued,actual=observed,prediction=forecast --alpha 0.1`',
+    );
     expect(md).not.toContain('/home/runner');
     expect(md).toContain('| --baseline | examples/data/baseline.csv | no |');
     expect(md).toContain('| --seed | 1729 | yes |');

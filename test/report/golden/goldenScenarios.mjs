@@ -93,7 +93,8 @@ export const SCENARIOS = [
         days: 120,
         horizons: [1, 2, 3],
         candidateScale: () => 0.97,
-        keep: (zone, h, i, eb) => !(zone === 'harbour' && h >= 2 && i >= 50 && i < 100 && Math.abs(eb) > 0.6),
+        keep: (zone, h, i, eb) =>
+          !(zone === 'harbour' && h >= 2 && i >= 50 && i < 100 && Math.abs(eb) > 0.6),
       }),
   },
   {
@@ -118,7 +119,10 @@ export function writeGoldens(work, out, cli = path.join(root, 'dist', 'cli.js'))
     const dir = path.join(work, s.name);
     mkdirSync(dir, { recursive: true });
     if (s.demo !== undefined) {
-      copyFileSync(path.join(root, 'examples', 'data', 'baseline.csv'), path.join(dir, 'baseline.csv'));
+      copyFileSync(
+        path.join(root, 'examples', 'data', 'baseline.csv'),
+        path.join(dir, 'baseline.csv'),
+      );
       copyFileSync(path.join(root, 'examples', 'data', s.demo), path.join(dir, 'candidate.csv'));
     } else {
       const f = s.files();
@@ -155,5 +159,7 @@ export function writeGoldens(work, out, cli = path.join(root, 'dist', 'cli.js'))
 if (process.argv[1] === fileURLToPath(import.meta.url)) {
   const work = path.join(root, 'tmp', 'golden-work');
   writeGoldens(work, here);
-  console.log(`wrote ${SCENARIOS.map((s) => `${s.name}.md`).join(', ')} to ${path.relative(process.cwd(), here)}/`);
+  console.log(
+    `wrote ${SCENARIOS.map((s) => `${s.name}.md`).join(', ')} to ${path.relative(process.cwd(), here)}/`,
+  );
 }
