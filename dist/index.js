@@ -16456,8 +16456,8 @@ var require_cookies = __commonJS({
       if (!cookie) {
         return out;
       }
-      for (const piece of cookie.split(";")) {
-        const [name, ...value] = piece.split("=");
+      for (const piece2 of cookie.split(";")) {
+        const [name, ...value] = piece2.split("=");
         out[name.trim()] = value.join("=");
       }
       return out;
@@ -21798,15 +21798,15 @@ var require_expmulti = __commonJS({
     "use strict";
     var ldexp = require_lib51();
     var polyvalP = require_polyval_p();
-    function expmulti(hi, lo, k) {
+    function expmulti(hi2, lo2, k) {
       var r;
       var t;
       var c;
       var y;
-      r = hi - lo;
+      r = hi2 - lo2;
       t = r * r;
       c = r - t * polyvalP(t);
-      y = 1 - (lo - r * c / (2 - c) - hi);
+      y = 1 - (lo2 - r * c / (2 - c) - hi2);
       return ldexp(y, k);
     }
     module.exports = expmulti;
@@ -21830,8 +21830,8 @@ var require_main37 = __commonJS({
     var NEARZERO = 1 / (1 << 28);
     var NEG_NEARZERO = -NEARZERO;
     function exp(x) {
-      var hi;
-      var lo;
+      var hi2;
+      var lo2;
       var k;
       if (isnan(x) || x === PINF) {
         return x;
@@ -21853,9 +21853,9 @@ var require_main37 = __commonJS({
       } else {
         k = trunc(LOG2_E * x + 0.5);
       }
-      hi = x - k * LN2_HI;
-      lo = k * LN2_LO;
-      return expmulti(hi, lo, k);
+      hi2 = x - k * LN2_HI;
+      lo2 = k * LN2_LO;
+      return expmulti(hi2, lo2, k);
     }
     module.exports = exp;
   }
@@ -22871,8 +22871,8 @@ var require_main49 = __commonJS({
       var halfX;
       var twopk;
       var sign;
-      var hi;
-      var lo;
+      var hi2;
+      var lo2;
       var hx;
       var r1;
       var y;
@@ -22909,12 +22909,12 @@ var require_main49 = __commonJS({
       if (y > HALF_LN2) {
         if (y < LN2_HALFX3) {
           if (sign) {
-            hi = x + LN2_HI;
-            lo = -LN2_LO;
+            hi2 = x + LN2_HI;
+            lo2 = -LN2_LO;
             k = -1;
           } else {
-            hi = x - LN2_HI;
-            lo = LN2_LO;
+            hi2 = x - LN2_HI;
+            lo2 = LN2_LO;
             k = 1;
           }
         } else {
@@ -22925,11 +22925,11 @@ var require_main49 = __commonJS({
           }
           k |= 0;
           t = k;
-          hi = x - t * LN2_HI;
-          lo = t * LN2_LO;
+          hi2 = x - t * LN2_HI;
+          lo2 = t * LN2_LO;
         }
-        x = hi - lo;
-        c = hi - x - lo;
+        x = hi2 - lo2;
+        c = hi2 - x - lo2;
       } else if (hx < 1016070144) {
         return x;
       } else {
@@ -22958,8 +22958,8 @@ var require_main49 = __commonJS({
       if (k <= -2 || k > 56) {
         y = 1 - (e - x);
         if (k === 1024) {
-          hi = getHighWord(y) + (k << 20) | 0;
-          y = setHighWord(y, hi);
+          hi2 = getHighWord(y) + (k << 20) | 0;
+          y = setHighWord(y, hi2);
         } else {
           y *= twopk;
         }
@@ -22967,12 +22967,12 @@ var require_main49 = __commonJS({
       }
       t = 1;
       if (k < 20) {
-        hi = 1072693248 - (2097152 >> k) | 0;
-        t = setHighWord(t, hi);
+        hi2 = 1072693248 - (2097152 >> k) | 0;
+        t = setHighWord(t, hi2);
         y = t - (e - x);
       } else {
-        hi = FLOAT64_EXPONENT_BIAS - k << 20 | 0;
-        t = setHighWord(t, hi);
+        hi2 = FLOAT64_EXPONENT_BIAS - k << 20 | 0;
+        t = setHighWord(t, hi2);
         y = x - (e + t);
         y += 1;
       }
@@ -32168,6 +32168,37 @@ function escapeMarkdown(text2) {
   return text2.replace(/[\r\n\t]+/g, " ").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B");
 }
 
+// src/settings/defaultConfidence.ts
+function defaultConfidence(alpha) {
+  return Number((1 - 2 * alpha).toPrecision(15));
+}
+function confidenceOverridesDefault(confidence, alpha) {
+  return confidence !== defaultConfidence(alpha);
+}
+
+// src/report/relativeChangeText.ts
+function relativeChangeText(c) {
+  const rc = c.relativeChange;
+  const point = formatSignedPercent(c.relativeDifference);
+  if (rc === null) return point;
+  const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
+  if (pieces.length === 0) return `${point} \u2205`;
+  return `${point} ${pieces.map(pieceText).join(" \u222A ")}`;
+}
+function pieceText(p) {
+  const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
+  const upper = p.upper === null ? "+\u221E" : formatSignedPercent(p.upper);
+  return `[${lower}, ${upper}]`;
+}
+function intervalNote(report) {
+  const { confidence, alpha } = report.settings;
+  const pct = `${formatNumber(confidence * 100, 3)}%`;
+  if (confidenceOverridesDefault(confidence, alpha)) {
+    return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
+  }
+  return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+}
+
 // src/report/renderMarkdown.ts
 var VERDICT_WORDS = { pass: "PASS", warn: "WARN", fail: "FAIL" };
 function renderMarkdown(report, options = {}) {
@@ -32176,6 +32207,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, "");
   lines.push(escapeMarkdown(report.headline), "");
   lines.push(...comparisonTable(report), "");
+  lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
@@ -32222,9 +32254,7 @@ function comparisonTable(report) {
   return rows;
 }
 function relativeCell(c) {
-  const r = c.bootstrap.relativeInterval;
-  const point = formatSignedPercent(c.relativeDifference);
-  return r === null ? point : `${point} [${formatSignedPercent(r.lower)}, ${formatSignedPercent(r.upper)}]`;
+  return relativeChangeText(c);
 }
 function seriesSection(report) {
   const summary2 = report.seriesSummary;
@@ -32309,7 +32339,7 @@ function testDetails(report) {
   );
   if (dm.interval !== null) {
     out.push(
-      `| DM interval for E[d] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`
+      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`
     );
   }
   out.push(
@@ -39686,7 +39716,8 @@ function buildReport(parts) {
     settings,
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
-    pathSummary: parts.pathSummary ?? null
+    pathSummary: parts.pathSummary ?? null,
+    stability: parts.stability ?? null
   };
 }
 function headline(verdict, overall, hypothesis) {
@@ -39757,6 +39788,129 @@ function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
     quantileLevels: [],
     intervalCoverage: null
   };
+}
+
+// src/statistics/mean.ts
+function mean(x) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("mean: the series is empty");
+  let sum = 0;
+  for (let t = 0; t < n; t++) sum += x[t];
+  const first = sum / n;
+  let residual = 0;
+  for (let t = 0; t < n; t++) residual += x[t] - first;
+  return first + residual / n;
+}
+
+// src/stability/calendarDate.ts
+function calendarDateOf(label) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== "datetime") return null;
+  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
+  const dayNumber = Math.floor(seconds / 86400);
+  return { ...civilFromDays(dayNumber), dayNumber };
+}
+function civilFromDays(days) {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+// src/stability/periodBuckets.ts
+var MIN_PERIODS = 8;
+var MAX_PERIODS = 60;
+var POINTS_PER_BUCKET = 10;
+var CALENDAR_UNITS = [
+  "day",
+  "week",
+  "month",
+  "quarter"
+];
+function periodBuckets(labels, kind) {
+  const n = labels.length;
+  if (kind === "datetime" && n > 0) {
+    const dates = labels.map(calendarDateOf);
+    if (dates.every((d) => d !== null)) {
+      for (const unit of CALENDAR_UNITS) {
+        const bounds = calendarBounds(dates, unit);
+        const count = bounds.length - 1;
+        if (count > MAX_PERIODS) continue;
+        if (count >= MIN_PERIODS) return { unit, bounds };
+        break;
+      }
+    }
+  }
+  return { unit: "equal-count", bounds: equalCountBounds(n) };
+}
+function calendarKey(date, unit) {
+  switch (unit) {
+    case "day":
+      return date.dayNumber;
+    case "week":
+      return Math.floor((date.dayNumber + 3) / 7);
+    case "month":
+      return date.year * 12 + date.month - 1;
+    case "quarter":
+      return date.year * 4 + Math.floor((date.month - 1) / 3);
+  }
+}
+function calendarBounds(dates, unit) {
+  const bounds = [];
+  let previous = null;
+  dates.forEach((date, t) => {
+    const key = calendarKey(date, unit);
+    if (key !== previous) bounds.push(t);
+    previous = key;
+  });
+  bounds.push(dates.length);
+  return bounds;
+}
+function equalCountBounds(n) {
+  if (n === 0) return [0];
+  const k = Math.min(
+    n,
+    Math.max(MIN_PERIODS, Math.min(MAX_PERIODS, Math.ceil(n / POINTS_PER_BUCKET)))
+  );
+  const bounds = [];
+  for (let j = 0; j <= k; j++) bounds.push(Math.floor(j * n / k));
+  return bounds;
+}
+
+// src/stability/periodBreakdown.ts
+function periodBreakdown(series, timestamps, kind) {
+  const labels = Array.from(series.time, (t) => timestamps[t] ?? String(t));
+  const buckets = periodBuckets(labels, kind);
+  const periods = [];
+  for (let j = 0; j + 1 < buckets.bounds.length; j++) {
+    const from = buckets.bounds[j];
+    const to = buckets.bounds[j + 1];
+    if (to <= from) continue;
+    const meanBaselineLoss = mean(series.baseline.subarray(from, to));
+    const meanCandidateLoss = mean(series.candidate.subarray(from, to));
+    periods.push({
+      start: labels[from],
+      end: labels[to - 1],
+      n: to - from,
+      meanBaselineLoss,
+      meanCandidateLoss,
+      relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1
+    });
+  }
+  return { buckets, periods };
+}
+
+// src/stability/assessStability.ts
+function assessStability(inputs) {
+  const { periods } = periodBreakdown(inputs.series, inputs.timestamps, inputs.kind);
+  return { fluctuation: null, recent: null, periods };
 }
 
 // src/aggregation/lossSeries.ts
@@ -39876,16 +40030,541 @@ function describeTest(e, rejected, alpha, hypothesis) {
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
-// src/statistics/mean.ts
-function mean(x) {
+// src/statistics/bootstrap/basicBootstrapInference.ts
+function tailProbability(level) {
+  return Number((1 - level).toPrecision(15));
+}
+function tailOrderStatistic(tail, resamples) {
+  const denominator = resamples + 1;
+  let k = Math.min(resamples, Math.max(0, Math.floor(tail * denominator)));
+  while (k < resamples && (k + 1) / denominator <= tail) k++;
+  while (k > 0 && k / denominator > tail) k--;
+  return k;
+}
+function minimumResamples(level) {
+  const alpha = tailProbability(level);
+  let resamples = Math.max(1, Math.floor(2 / alpha) - 1);
+  while (tailOrderStatistic(alpha / 2, resamples) < 1) resamples++;
+  while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
+  return resamples;
+}
+function basicBootstrapInference(reflectedSorted, margin, level) {
+  const resamples = reflectedSorted.length;
+  const alpha = tailProbability(level);
+  const kTwo = tailOrderStatistic(alpha / 2, resamples);
+  const kOne = tailOrderStatistic(alpha, resamples);
+  if (kTwo < 1) {
+    throw new RangeError(
+      `${resamples} resamples are too few for a ${level} interval (need at least ${minimumResamples(level)})`
+    );
+  }
+  let atOrBelow = 0;
+  let atOrAbove = 0;
+  for (let b = 0; b < resamples; b++) {
+    const u = reflectedSorted[b];
+    if (u <= margin) atOrBelow++;
+    if (u >= margin) atOrAbove++;
+  }
+  const pValue = (1 + atOrBelow) / (resamples + 1);
+  const pAbove = (1 + atOrAbove) / (resamples + 1);
+  return {
+    interval: {
+      level,
+      lower: reflectedSorted[kTwo - 1],
+      upper: reflectedSorted[resamples - kTwo]
+    },
+    oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
+    pValue,
+    pValueBelow: pAbove,
+    pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove))
+  };
+}
+
+// src/intervals/intervalSet.ts
+var lo = (p) => p.lower ?? Number.NEGATIVE_INFINITY;
+var hi = (p) => p.upper ?? Number.POSITIVE_INFINITY;
+var piece = (lower, upper) => ({
+  lower: lower === Number.NEGATIVE_INFINITY ? null : lower,
+  upper: upper === Number.POSITIVE_INFINITY ? null : upper
+});
+function normaliseSet(pieces) {
+  const sorted = pieces.filter((p) => lo(p) <= hi(p)).sort((a, b) => lo(a) - lo(b));
+  const out = [];
+  for (const p of sorted) {
+    const last = out[out.length - 1];
+    if (last !== void 0 && lo(p) <= last.upper) last.upper = Math.max(last.upper, hi(p));
+    else out.push({ lower: lo(p), upper: hi(p) });
+  }
+  return out.map((p) => piece(p.lower, p.upper));
+}
+function unionOfSets(a, b) {
+  return normaliseSet([...a, ...b]);
+}
+function intersectionOfSets(a, b) {
+  const out = [];
+  for (const p of a) {
+    for (const q of b) {
+      const lower = Math.max(lo(p), lo(q));
+      const upper = Math.min(hi(p), hi(q));
+      if (lower <= upper) out.push(piece(lower, upper));
+    }
+  }
+  return normaliseSet(out);
+}
+function hullOfSet(set) {
+  const first = set[0];
+  const last = set[set.length - 1];
+  if (first === void 0 || last === void 0) return null;
+  return { lower: first.lower, upper: last.upper };
+}
+function complementOfSet(set) {
+  const out = [];
+  let from = Number.NEGATIVE_INFINITY;
+  for (const p of normaliseSet(set)) {
+    if (lo(p) > from) out.push(piece(from, lo(p)));
+    from = hi(p);
+  }
+  if (from < Number.POSITIVE_INFINITY) out.push(piece(from, Number.POSITIVE_INFINITY));
+  return out;
+}
+
+// src/intervals/bootstrapMarginSet.ts
+function bootstrapMarginSet(input) {
+  const { meanD, meanB, deviationsD, deviationsB, tail } = input;
+  const resamples = deviationsD.length;
+  const k = tailOrderStatistic(tail, resamples);
+  const rising = [];
+  const falling = [];
+  let flatBelow = 0;
+  let flatAbove = 0;
+  for (let b = 0; b < resamples; b++) {
+    const a = meanD - deviationsD[b];
+    const c = meanB - deviationsB[b];
+    if (c > 0) rising.push(a / c);
+    else if (c < 0) falling.push(a / c);
+    else {
+      if (a <= 0) flatBelow++;
+      if (a >= 0) flatAbove++;
+    }
+  }
+  const up = Float64Array.from(rising).sort();
+  const down = Float64Array.from(falling).sort();
+  const accepted = (r) => {
+    const upAtOrBelow = countAtOrBelow(up, r);
+    const upAtOrAbove = up.length - countBelow(up, r);
+    const downAtOrBelow = countAtOrBelow(down, r);
+    const downAtOrAbove = down.length - countBelow(down, r);
+    const nonPositive = flatBelow + upAtOrBelow + downAtOrAbove;
+    const nonNegative = flatAbove + upAtOrAbove + downAtOrBelow;
+    return nonPositive >= k && nonNegative >= k;
+  };
+  if (up.length === 0 && down.length === 0) {
+    return accepted(0) ? [{ lower: null, upper: null }] : [];
+  }
+  const points = Float64Array.from([...up, ...down]).sort();
+  const unique = [];
+  for (const p of points) if (unique[unique.length - 1] !== p) unique.push(p);
+  const pieces = [];
+  let open2;
+  const close = (upper) => {
+    if (open2 !== void 0) pieces.push({ lower: open2, upper });
+    open2 = void 0;
+  };
+  const m = unique.length;
+  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open2 = null;
+  for (let i = 0; i < m; i++) {
+    const p = unique[i];
+    if (accepted(p)) {
+      if (open2 === void 0) open2 = p;
+    } else {
+      close(p);
+    }
+    const next = unique[i + 1];
+    const between = next === void 0 ? p + 1 + Math.abs(p) : p + (next - p) / 2;
+    if (accepted(between)) {
+      if (open2 === void 0) open2 = p;
+    } else {
+      close(p);
+    }
+  }
+  close(null);
+  return normaliseSet(pieces);
+}
+function countAtOrBelow(sorted, r) {
+  let lo2 = 0;
+  let hi2 = sorted.length;
+  while (lo2 < hi2) {
+    const mid = lo2 + hi2 >>> 1;
+    if (sorted[mid] <= r) lo2 = mid + 1;
+    else hi2 = mid;
+  }
+  return lo2;
+}
+function countBelow(sorted, r) {
+  let lo2 = 0;
+  let hi2 = sorted.length;
+  while (lo2 < hi2) {
+    const mid = lo2 + hi2 >>> 1;
+    if (sorted[mid] < r) lo2 = mid + 1;
+    else hi2 = mid;
+  }
+  return lo2;
+}
+
+// src/statistics/autocovariance.ts
+function autocovariances(x, maxLag) {
   const n = x.length;
-  if (n === 0) throw new RangeError("mean: the series is empty");
+  if (n === 0) throw new RangeError("autocovariances: the series is empty");
+  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
+    throw new RangeError(
+      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
+    );
+  }
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) {
+    let sum = 0;
+    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
+    gamma[k] = sum / n;
+  }
+  return gamma;
+}
+
+// src/statistics/bartlettLongRunVariance.ts
+function bartlettLongRunVariance(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
+  return sum;
+}
+
+// src/statistics/distributions.ts
+var import_stats_base_dists_normal_cdf = __toESM(require_lib58(), 1);
+var import_stats_base_dists_normal_quantile = __toESM(require_lib63(), 1);
+var import_stats_base_dists_t_cdf = __toESM(require_lib130(), 1);
+var import_stats_base_dists_t_quantile = __toESM(require_lib140(), 1);
+function standardNormalUpperTail(x) {
+  return (0, import_stats_base_dists_normal_cdf.default)(-x, 0, 1);
+}
+function standardNormalTwoSided(x) {
+  return Math.min(1, 2 * (0, import_stats_base_dists_normal_cdf.default)(-Math.abs(x), 0, 1));
+}
+function standardNormalQuantile(p) {
+  return (0, import_stats_base_dists_normal_quantile.default)(p, 0, 1);
+}
+function studentTUpperTail(x, degreesOfFreedom) {
+  return (0, import_stats_base_dists_t_cdf.default)(-x, degreesOfFreedom);
+}
+function studentTTwoSided(x, degreesOfFreedom) {
+  return Math.min(1, 2 * (0, import_stats_base_dists_t_cdf.default)(-Math.abs(x), degreesOfFreedom));
+}
+function studentTQuantile(p, degreesOfFreedom) {
+  return (0, import_stats_base_dists_t_quantile.default)(p, degreesOfFreedom);
+}
+
+// src/statistics/ewcLongRunVariance.ts
+function ewcDegreesOfFreedom(n) {
+  return Math.max(2, Math.round(0.4 * n ** (2 / 3)));
+}
+function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length)) {
+  const n = x.length;
+  const nu = degreesOfFreedom;
+  if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
+    throw new RangeError(
+      `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
+    );
+  }
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  const cosTable = new Float64Array(n + 1);
+  for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
+  const period = 4 * n;
+  const half = 2 * n;
+  let sumOfSquares = 0;
+  for (let j = 1; j <= nu; j++) {
+    const step = 2 * j % period;
+    let k = j % period;
+    let lambda = 0;
+    for (let t = 0; t < n; t++) {
+      const r = k > half ? period - k : k;
+      const c = r > n ? -cosTable[half - r] : cosTable[r];
+      lambda += c * u[t];
+      k += step;
+      if (k >= period) k -= period;
+    }
+    lambda *= Math.sqrt(2 / n);
+    sumOfSquares += lambda * lambda;
+  }
+  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+}
+
+// src/statistics/harveyLeybourneNewbold.ts
+function harveyLeybourneNewboldFactor(n, horizon) {
+  if (!(horizon < n)) return null;
+  return Math.sqrt((n - horizon) * (n - horizon + 1)) / n;
+}
+function harveyLeybourneNewbold(statistic, n, horizon) {
+  const factor = harveyLeybourneNewboldFactor(n, horizon);
+  if (factor === null) return null;
+  const corrected = statistic * factor;
+  const degreesOfFreedom = n - 1;
+  return {
+    statistic: corrected,
+    pValue: studentTUpperTail(corrected, degreesOfFreedom),
+    pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
+    degreesOfFreedom
+  };
+}
+
+// src/statistics/neweyWestLag.ts
+function neweyWestBandwidth(x) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
+  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
+  const sigma = autocovariances(x, pilotLag);
   let sum = 0;
-  for (let t = 0; t < n; t++) sum += x[t];
-  const first = sum / n;
-  let residual = 0;
-  for (let t = 0; t < n; t++) residual += x[t] - first;
-  return first + residual / n;
+  let weighted = 0;
+  for (let j = 1; j <= pilotLag; j++) {
+    sum += sigma[j];
+    weighted += j * sigma[j];
+  }
+  const s0 = sigma[0] + 2 * sum;
+  const s1 = 2 * weighted;
+  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
+  return { pilotLag, s0, s1, bandwidth };
+}
+function selectLag(x, rule, horizon) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
+  if (!Number.isInteger(horizon) || horizon < 1) {
+    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
+  }
+  const notes = [];
+  const cap = (lag, what) => {
+    if (lag <= n - 1) return lag;
+    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
+    return n - 1;
+  };
+  switch (rule.kind) {
+    case "auto": {
+      const bandwidth = neweyWestBandwidth(x);
+      let lag = Math.floor(bandwidth.bandwidth);
+      if (bandwidth.s0 === 0) {
+        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
+      }
+      if (lag < horizon - 1) {
+        notes.push(
+          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
+        );
+        lag = horizon - 1;
+      }
+      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
+    }
+    case "horizon":
+      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
+    case "fixed": {
+      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
+        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
+      }
+      if (rule.lag < horizon - 1) {
+        notes.push(
+          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
+        );
+      }
+      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
+    }
+  }
+}
+
+// src/statistics/varianceTolerance.ts
+function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
+  return !(longRunVariance > n * Number.EPSILON * gamma0);
+}
+
+// src/statistics/uniformLongRunVariance.ts
+function uniformWeightSum(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
+  return sum;
+}
+function uniformLongRunVariance(x, lag) {
+  const uniformValue = uniformWeightSum(x, lag);
+  const gamma0 = autocovariances(x, 0)[0];
+  if (!isEffectivelyNonPositive(uniformValue, gamma0, x.length)) {
+    return { value: uniformValue, estimator: "uniform", lag, uniformValue, note: null };
+  }
+  const value = bartlettLongRunVariance(x, lag);
+  return {
+    value,
+    estimator: "bartlett",
+    lag,
+    uniformValue,
+    note: `The uniform-weight long-run variance at lag ${lag} is not positive (${uniformValue.toPrecision(6)}), so the Bartlett (Newey\u2013West) weights were used instead, with the same lag ${lag}.`
+  };
+}
+
+// src/intervals/fiellerSet.ts
+function fiellerSet(input) {
+  const { meanD, meanB, varDD, varDB, varBB, critical } = input;
+  const c2 = critical * critical;
+  const a = meanB * meanB - c2 * varBB;
+  const b = meanD * meanB - c2 * varDB;
+  const e = meanD * meanD - c2 * varDD;
+  const discriminant = b * b - a * e;
+  if (a === 0) {
+    if (b > 0) return [{ lower: e / (2 * b), upper: null }];
+    if (b < 0) return [{ lower: null, upper: e / (2 * b) }];
+    return e <= 0 ? [{ lower: null, upper: null }] : [];
+  }
+  if (discriminant < 0) return a > 0 ? [] : [{ lower: null, upper: null }];
+  const root = Math.sqrt(discriminant);
+  const q = b + (b >= 0 ? root : -root);
+  const r1 = q / a;
+  const r2 = q === 0 ? 0 : e / q;
+  const small = Math.min(r1, r2);
+  const large = Math.max(r1, r2);
+  if (a > 0) return [{ lower: small, upper: large }];
+  return normaliseSet([
+    { lower: null, upper: small },
+    { lower: large, upper: null }
+  ]);
+}
+
+// src/intervals/longRunCovariance.ts
+function longRunCovariance(d, b, sum, variance) {
+  const dd = variance(d);
+  const bb = variance(b);
+  const ss = variance(sum);
+  return { dd, bb, db: (ss - dd - bb) / 2 };
+}
+
+// src/intervals/dieboldMarianoMarginSet.ts
+function dieboldMarianoMarginSet(input) {
+  const { candidate, baseline, horizon, tail } = input;
+  const n = baseline.length;
+  if (n < 3) return null;
+  const d = new Float64Array(n);
+  for (let t = 0; t < n; t++) d[t] = candidate[t] - baseline[t];
+  let estimator = input.estimator;
+  let critical;
+  const meanD = mean(d);
+  const meanB = mean(baseline);
+  const fieller = (v) => fiellerSet({ meanD, meanB, varDD: v.dd / n, varDB: v.db / n, varBB: v.bb / n, critical });
+  let covariance;
+  let set;
+  if (estimator === "ewc") {
+    const nu = input.degreesOfFreedom;
+    if (nu === null) return null;
+    covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
+    critical = studentTQuantile(1 - tail, nu);
+    if (!finite(covariance)) return null;
+    set = fieller(covariance);
+  } else {
+    const lag = selectLag(d, input.lag, horizon).lag;
+    const factor = harveyLeybourneNewboldFactor(n, horizon);
+    critical = factor === null ? standardNormalQuantile(1 - tail) : studentTQuantile(1 - tail, n - 1) / factor;
+    const bartlett = longRunCovariance(
+      d,
+      baseline,
+      candidate,
+      (x) => bartlettLongRunVariance(x, lag)
+    );
+    if (!finite(bartlett)) return null;
+    covariance = bartlett;
+    set = fieller(bartlett);
+    if (estimator === "uniform") {
+      const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
+      if (!finite(uniform)) return null;
+      const positive = complementOfSet(
+        fiellerSet({
+          meanD: 0,
+          meanB: 0,
+          varDD: -uniform.dd,
+          varDB: -uniform.db,
+          varBB: -uniform.bb,
+          critical: 1
+        })
+      );
+      if (positive.length === 0) estimator = "bartlett";
+      else {
+        covariance = uniform;
+        set = unionOfSets(
+          intersectionOfSets(fieller(uniform), positive),
+          intersectionOfSets(set, complementOfSet(positive))
+        );
+      }
+    }
+  }
+  return { set, estimator, critical, covariance };
+}
+function finite(v) {
+  return Number.isFinite(v.dd) && Number.isFinite(v.db) && Number.isFinite(v.bb);
+}
+
+// src/intervals/relativeChange.ts
+function relativeChange(input) {
+  const { series, settings } = input;
+  const n = series.baseline.length;
+  if (n === 0) return null;
+  const meanB = mean(series.baseline);
+  if (!(meanB > 0)) return null;
+  const estimate = mean(series.candidate) / meanB - 1;
+  const level = settings.confidence;
+  const tail = tailProbability(level) / 2;
+  let dm = null;
+  if (input.dieboldMariano.state === "ok") {
+    const found = dieboldMarianoMarginSet({
+      candidate: series.candidate,
+      baseline: series.baseline,
+      estimator: settings.variance,
+      lag: settings.lag,
+      degreesOfFreedom: input.dieboldMariano.degreesOfFreedom,
+      horizon: series.maxHorizon,
+      tail
+    });
+    if (found !== null) dm = { set: found.set, method: `Fieller (${found.estimator})` };
+  }
+  let bs = null;
+  const deviations = input.bootstrap.resampledDeviations;
+  if (input.bootstrap.state === "ok" && deviations !== null) {
+    const deviationsD = new Float64Array(deviations.candidate.length);
+    for (let b = 0; b < deviationsD.length; b++) {
+      deviationsD[b] = deviations.candidate[b] - deviations.baseline[b];
+    }
+    const d = new Float64Array(n);
+    for (let t = 0; t < n; t++) d[t] = series.candidate[t] - series.baseline[t];
+    bs = {
+      set: bootstrapMarginSet({
+        meanD: mean(d),
+        meanB,
+        deviationsD,
+        deviationsB: deviations.baseline,
+        tail
+      }),
+      method: "inverted bootstrap"
+    };
+  }
+  const chosen = combine(input.agreement, dm, bs);
+  if (chosen === null) return null;
+  const hull = hullOfSet(chosen.set);
+  return {
+    estimate,
+    level,
+    lower: hull?.lower ?? null,
+    upper: hull?.upper ?? null,
+    method: chosen.method,
+    ...chosen.set.length === 1 ? {} : { pieces: chosen.set }
+  };
+}
+function combine(agreement, dm, bs) {
+  if (agreement === "dm") return dm;
+  if (agreement === "bootstrap") return bs;
+  if (dm === null || bs === null) return dm ?? bs;
+  return agreement === "both" ? { set: unionOfSets(dm.set, bs.set), method: `${dm.method} \u222A ${bs.method}` } : { set: intersectionOfSets(dm.set, bs.set), method: `${dm.method} \u2229 ${bs.method}` };
 }
 
 // node_modules/pure-rand/lib/esm/generator/xoroshiro128plus.js
@@ -40023,27 +40702,6 @@ function sourceOf(generator) {
   };
 }
 
-// src/statistics/autocovariance.ts
-function autocovariances(x, maxLag) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("autocovariances: the series is empty");
-  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
-    throw new RangeError(
-      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
-    );
-  }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
-  }
-  return gamma;
-}
-
 // src/statistics/bootstrap/flatTopWindow.ts
 function flatTop(s) {
   const a = Math.abs(s);
@@ -40136,6 +40794,13 @@ function degenerate(base, blockLength, notes) {
   };
 }
 
+// src/statistics/bootstrap/centring.ts
+function meanOf(d) {
+  let sum = 0;
+  for (let t = 0; t < d.length; t++) sum += d[t];
+  return sum / d.length;
+}
+
 // src/random/aliasTable.ts
 function buildAliasTable(probabilities) {
   const size = probabilities.length;
@@ -40223,56 +40888,6 @@ function createGeometricSampler(mean2) {
   };
 }
 
-// src/statistics/bootstrap/basicBootstrapInference.ts
-function tailProbability(level) {
-  return Number((1 - level).toPrecision(15));
-}
-function tailOrderStatistic(tail, resamples) {
-  const denominator = resamples + 1;
-  let k = Math.min(resamples, Math.max(0, Math.floor(tail * denominator)));
-  while (k < resamples && (k + 1) / denominator <= tail) k++;
-  while (k > 0 && k / denominator > tail) k--;
-  return k;
-}
-function minimumResamples(level) {
-  const alpha = tailProbability(level);
-  let resamples = Math.max(1, Math.floor(2 / alpha) - 1);
-  while (tailOrderStatistic(alpha / 2, resamples) < 1) resamples++;
-  while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
-  return resamples;
-}
-function basicBootstrapInference(reflectedSorted, margin, level) {
-  const resamples = reflectedSorted.length;
-  const alpha = tailProbability(level);
-  const kTwo = tailOrderStatistic(alpha / 2, resamples);
-  const kOne = tailOrderStatistic(alpha, resamples);
-  if (kTwo < 1) {
-    throw new RangeError(
-      `${resamples} resamples are too few for a ${level} interval (need at least ${minimumResamples(level)})`
-    );
-  }
-  let atOrBelow = 0;
-  let atOrAbove = 0;
-  for (let b = 0; b < resamples; b++) {
-    const u = reflectedSorted[b];
-    if (u <= margin) atOrBelow++;
-    if (u >= margin) atOrAbove++;
-  }
-  const pValue = (1 + atOrBelow) / (resamples + 1);
-  const pAbove = (1 + atOrAbove) / (resamples + 1);
-  return {
-    interval: {
-      level,
-      lower: reflectedSorted[kTwo - 1],
-      upper: reflectedSorted[resamples - kTwo]
-    },
-    oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
-    pValue,
-    pValueBelow: pAbove,
-    pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove))
-  };
-}
-
 // src/statistics/bootstrap/centredPrefixSums.ts
 function centredPrefixSums(d, mean2) {
   const n = d.length;
@@ -40283,13 +40898,6 @@ function centredPrefixSums(d, mean2) {
     prefix[i + 1] = running;
   }
   return prefix;
-}
-
-// src/statistics/bootstrap/centring.ts
-function meanOf(d) {
-  let sum = 0;
-  for (let t = 0; t < d.length; t++) sum += d[t];
-  return sum / d.length;
 }
 
 // src/statistics/bootstrap/resampleMeanDeviation.ts
@@ -40507,7 +41115,8 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
     interval: null,
     oneSidedLower: null,
     pValue: null,
-    pValueTwoSided: null
+    pValueTwoSided: null,
+    resampledDeviations: null
   };
   if (n < MINIMUM_BOOTSTRAP_LENGTH) {
     return {
@@ -40531,6 +41140,8 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
   const identical = candidateLoss.every((x, t) => x === baselineLoss[t]);
   const notes = [];
   const deviations = new Float64Array(resamples);
+  const candidateDeviations = new Float64Array(resamples);
+  const baselineDeviations = new Float64Array(resamples);
   if (identical) {
     notes.push("candidate and baseline losses are identical; no resampling needed");
   } else {
@@ -40545,8 +41156,10 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
       const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
       for (let b = first; b < last; b++) {
         drawStationaryBlocks(n, sampler, source, blocks);
-        const c = candidateMean + resampleMeanDeviation(candidatePrefix, n, blocks);
-        const base = baselineMean + resampleMeanDeviation(baselinePrefix, n, blocks);
+        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+        const c = candidateMean + candidateDeviations[b];
+        const base = baselineMean + baselineDeviations[b];
         if (base === 0) zeroDenominators++;
         const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
         deviations[b] = theta - estimate;
@@ -40569,13 +41182,14 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
     oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
     pValue: inference.pValue,
     pValueTwoSided: inference.pValueTwoSided,
+    resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
     notes
   };
 }
 
 // src/comparison/runBootstrap.ts
-function runBootstrap(d, series, hypothesis, settings, runner) {
-  const auto = settings.blockLength.kind === "auto" && d.length >= 2 ? automaticBlockLength(d) : null;
+function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
+  const auto = settings.blockLength.kind === "auto" && d.length >= 2 ? automaticBlockLength(difference) : null;
   const expectedBlockLength = settings.blockLength.kind === "fixed" ? settings.blockLength.length : auto?.blockLength ?? 1;
   const options = {
     resamples: settings.resamples,
@@ -40585,12 +41199,12 @@ function runBootstrap(d, series, hypothesis, settings, runner) {
     margin: hypothesis.boundary
   };
   const result = stationaryBootstrap(d, options, createRandomSource, runner);
-  const relative2 = settings.marginKind === "relative" ? relativeDifferenceBootstrap(series.candidate, series.baseline, {
+  const relative2 = relativeDifferenceBootstrap(series.candidate, series.baseline, {
     ...options,
     margin: hypothesis.baselineFactor - 1
-  }) : null;
+  });
   const decisionPValue = hypothesis.rejectWhen === "above" ? result.pValue : result.pValueBelow;
-  return {
+  const summary2 = {
     state: result.state,
     resamples: result.resamples,
     seed: result.seed,
@@ -40598,188 +41212,25 @@ function runBootstrap(d, series, hypothesis, settings, runner) {
     blockLengthRule: settings.blockLength.kind,
     blockLengthSelection: auto,
     standardError: result.standardError,
-    interval: result.interval,
-    relativeInterval: relative2?.interval ?? null,
+    interval: difference === d ? result.interval : differenceInterval(difference, relative2.resampledDeviations, settings.confidence),
+    relativeInterval: settings.marginKind === "relative" ? relative2.interval : null,
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,
     notes: result.notes
   };
+  return { summary: summary2, resampledDeviations: relative2.resampledDeviations };
 }
-
-// src/statistics/bartlettLongRunVariance.ts
-function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
-}
-
-// src/statistics/distributions.ts
-var import_stats_base_dists_normal_cdf = __toESM(require_lib58(), 1);
-var import_stats_base_dists_normal_quantile = __toESM(require_lib63(), 1);
-var import_stats_base_dists_t_cdf = __toESM(require_lib130(), 1);
-var import_stats_base_dists_t_quantile = __toESM(require_lib140(), 1);
-function standardNormalUpperTail(x) {
-  return (0, import_stats_base_dists_normal_cdf.default)(-x, 0, 1);
-}
-function standardNormalTwoSided(x) {
-  return Math.min(1, 2 * (0, import_stats_base_dists_normal_cdf.default)(-Math.abs(x), 0, 1));
-}
-function standardNormalQuantile(p) {
-  return (0, import_stats_base_dists_normal_quantile.default)(p, 0, 1);
-}
-function studentTUpperTail(x, degreesOfFreedom) {
-  return (0, import_stats_base_dists_t_cdf.default)(-x, degreesOfFreedom);
-}
-function studentTTwoSided(x, degreesOfFreedom) {
-  return Math.min(1, 2 * (0, import_stats_base_dists_t_cdf.default)(-Math.abs(x), degreesOfFreedom));
-}
-function studentTQuantile(p, degreesOfFreedom) {
-  return (0, import_stats_base_dists_t_quantile.default)(p, degreesOfFreedom);
-}
-
-// src/statistics/ewcLongRunVariance.ts
-function ewcDegreesOfFreedom(n) {
-  return Math.max(2, Math.round(0.4 * n ** (2 / 3)));
-}
-function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length)) {
-  const n = x.length;
-  const nu = degreesOfFreedom;
-  if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
-    throw new RangeError(
-      `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
-    );
+function differenceInterval(difference, deviations, level) {
+  if (deviations === null) return null;
+  const centre = meanOf(difference);
+  const reflected = new Float64Array(deviations.candidate.length);
+  for (let b = 0; b < reflected.length; b++) {
+    reflected[b] = centre - (deviations.candidate[b] - deviations.baseline[b]);
   }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const cosTable = new Float64Array(n + 1);
-  for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
-  const period = 4 * n;
-  const half = 2 * n;
-  let sumOfSquares = 0;
-  for (let j = 1; j <= nu; j++) {
-    const step = 2 * j % period;
-    let k = j % period;
-    let lambda = 0;
-    for (let t = 0; t < n; t++) {
-      const r = k > half ? period - k : k;
-      const c = r > n ? -cosTable[half - r] : cosTable[r];
-      lambda += c * u[t];
-      k += step;
-      if (k >= period) k -= period;
-    }
-    lambda *= Math.sqrt(2 / n);
-    sumOfSquares += lambda * lambda;
-  }
-  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
-}
-
-// src/statistics/harveyLeybourneNewbold.ts
-function harveyLeybourneNewboldFactor(n, horizon) {
-  if (!(horizon < n)) return null;
-  return Math.sqrt((n - horizon) * (n - horizon + 1)) / n;
-}
-function harveyLeybourneNewbold(statistic, n, horizon) {
-  const factor = harveyLeybourneNewboldFactor(n, horizon);
-  if (factor === null) return null;
-  const corrected = statistic * factor;
-  const degreesOfFreedom = n - 1;
-  return {
-    statistic: corrected,
-    pValue: studentTUpperTail(corrected, degreesOfFreedom),
-    pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
-    degreesOfFreedom
-  };
-}
-
-// src/statistics/neweyWestLag.ts
-function neweyWestBandwidth(x) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
-  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
-  const sigma = autocovariances(x, pilotLag);
-  let sum = 0;
-  let weighted = 0;
-  for (let j = 1; j <= pilotLag; j++) {
-    sum += sigma[j];
-    weighted += j * sigma[j];
-  }
-  const s0 = sigma[0] + 2 * sum;
-  const s1 = 2 * weighted;
-  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
-  return { pilotLag, s0, s1, bandwidth };
-}
-function selectLag(x, rule, horizon) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
-  if (!Number.isInteger(horizon) || horizon < 1) {
-    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
-  }
-  const notes = [];
-  const cap = (lag, what) => {
-    if (lag <= n - 1) return lag;
-    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
-    return n - 1;
-  };
-  switch (rule.kind) {
-    case "auto": {
-      const bandwidth = neweyWestBandwidth(x);
-      let lag = Math.floor(bandwidth.bandwidth);
-      if (bandwidth.s0 === 0) {
-        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
-      }
-      if (lag < horizon - 1) {
-        notes.push(
-          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
-        );
-        lag = horizon - 1;
-      }
-      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
-    }
-    case "horizon":
-      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
-    case "fixed": {
-      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
-        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
-      }
-      if (rule.lag < horizon - 1) {
-        notes.push(
-          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
-        );
-      }
-      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
-    }
-  }
-}
-
-// src/statistics/varianceTolerance.ts
-function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
-  return !(longRunVariance > n * Number.EPSILON * gamma0);
-}
-
-// src/statistics/uniformLongRunVariance.ts
-function uniformWeightSum(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
-  return sum;
-}
-function uniformLongRunVariance(x, lag) {
-  const uniformValue = uniformWeightSum(x, lag);
-  const gamma0 = autocovariances(x, 0)[0];
-  if (!isEffectivelyNonPositive(uniformValue, gamma0, x.length)) {
-    return { value: uniformValue, estimator: "uniform", lag, uniformValue, note: null };
-  }
-  const value = bartlettLongRunVariance(x, lag);
-  return {
-    value,
-    estimator: "bartlett",
-    lag,
-    uniformValue,
-    note: `The uniform-weight long-run variance at lag ${lag} is not positive (${uniformValue.toPrecision(6)}), so the Bartlett (Newey\u2013West) weights were used instead, with the same lag ${lag}.`
-  };
+  reflected.sort();
+  const { interval } = basicBootstrapInference(reflected, 0, level);
+  return { ...interval, method: "basic" };
 }
 
 // src/statistics/dieboldMariano.ts
@@ -40838,7 +41289,7 @@ function dieboldMariano(d, options) {
     longRunVariance = ewc.value;
     base.degreesOfFreedom = ewc.degreesOfFreedom;
   } else {
-    lagChoice = selectLag(d, options.lag, horizon);
+    lagChoice = selectLag(options.lagSeries ?? d, options.lag, horizon);
     base.notes.push(...lagChoice.notes);
     base.lag = lagChoice.lag;
     base.lagSelection = describeLagChoice(lagChoice);
@@ -40918,36 +41369,17 @@ function describeLagChoice(choice) {
 }
 
 // src/comparison/runDieboldMariano.ts
-function runDieboldMariano(d, horizon, hypothesis, settings) {
-  const result = dieboldMariano(d, {
+function runDieboldMariano(d, horizon, hypothesis, settings, difference = d) {
+  const options = {
     estimator: settings.variance,
     lag: settings.lag,
     horizon,
-    margin: hypothesis.boundary
-  });
+    lagSeries: difference
+  };
+  const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
   const upper = result.smallSample?.pValue ?? result.pValue;
   const decisionPValue = upper === null ? null : hypothesis.rejectWhen === "above" ? upper : 1 - upper;
-  let interval = null;
-  if (result.variance !== null && result.variance > 0 && result.statistic !== null) {
-    const level = settings.confidence;
-    const tail = 1 - (1 - level) / 2;
-    let se = Math.sqrt(result.variance);
-    let q;
-    if (result.smallSample !== null) {
-      se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
-      q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
-    } else if (result.degreesOfFreedom !== null) {
-      q = studentTQuantile(tail, result.degreesOfFreedom);
-    } else {
-      q = standardNormalQuantile(tail);
-    }
-    interval = {
-      level,
-      lower: result.mean - q * se,
-      upper: result.mean + q * se,
-      method: result.smallSample !== null ? "HLN-corrected t" : result.degreesOfFreedom !== null ? "fixed-b t" : "normal"
-    };
-  }
+  const unshifted = difference === d ? result : dieboldMariano(difference, { ...options, margin: 0 });
   return {
     state: result.state,
     estimator: result.estimator,
@@ -40961,9 +41393,29 @@ function runDieboldMariano(d, horizon, hypothesis, settings) {
     lag: result.lag,
     degreesOfFreedom: result.degreesOfFreedom,
     smallSample: result.smallSample,
-    interval,
+    interval: meanInterval(unshifted, horizon, settings.confidence),
     lagSelection: result.lagSelection,
     notes: result.notes
+  };
+}
+function meanInterval(result, horizon, level) {
+  if (result.variance === null || !(result.variance > 0) || result.statistic === null) return null;
+  const tail = 1 - (1 - level) / 2;
+  let se = Math.sqrt(result.variance);
+  let q;
+  if (result.smallSample !== null) {
+    se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
+    q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
+  } else if (result.degreesOfFreedom !== null) {
+    q = studentTQuantile(tail, result.degreesOfFreedom);
+  } else {
+    q = standardNormalQuantile(tail);
+  }
+  return {
+    level,
+    lower: result.mean - q * se,
+    upper: result.mean + q * se,
+    method: result.smallSample !== null ? "HLN-corrected t" : result.degreesOfFreedom !== null ? "fixed-b t" : "normal"
   };
 }
 
@@ -40973,16 +41425,19 @@ function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
   const meanBaselineLoss = meanOrZero(series.baseline);
   const meanCandidateLoss = meanOrZero(series.candidate);
   const d = lossDifferential(series, hypothesis.baselineFactor - 1);
+  const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
   const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
   const dieboldMariano2 = runDieboldMariano(
     d,
     series.maxHorizon,
     hypothesis,
-    settings
+    settings,
+    difference
   );
   const withBootstrap = options.bootstrap ?? true;
-  const bootstrap = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner) : bootstrapNotRun(settings);
+  const bootstrapRun = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner, difference) : null;
+  const bootstrap = bootstrapRun?.summary ?? bootstrapNotRun(settings);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -41021,6 +41476,16 @@ function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
     meanDifference: meanCandidateLoss - meanBaselineLoss,
     relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1,
     meanTestedDifferential,
+    relativeChange: relativeChange({
+      series,
+      settings,
+      agreement: withBootstrap ? settings.agreement : "dm",
+      dieboldMariano: dieboldMariano2,
+      bootstrap: {
+        state: bootstrap.state,
+        resampledDeviations: bootstrapRun?.resampledDeviations ?? null
+      }
+    }),
     dieboldMariano: dieboldMariano2,
     bootstrap,
     verdict: decision.verdict,
@@ -41054,19 +41519,28 @@ function bootstrapNotRun(settings) {
 // src/comparison/evaluateLossSeries.ts
 function evaluateLossSeries(series, source, settings, resampleRunner) {
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const runner = resampleRunner === void 0 ? {} : { runner: resampleRunner };
   const overall = compareLossSeries(
     series,
     { loss: settings.loss, horizon: "all", series: "all", timestamps: source.timestamps },
     hypothesis,
     settings,
-    resampleRunner === void 0 ? {} : { runner: resampleRunner }
+    runner
   );
   return buildReport({
     version: VERSION7,
     settings,
     hypothesis,
     inputs: lossFileInputsSummary(source.file, source.timestamps, source.kind, series.maxHorizon),
-    comparisons: [overall]
+    comparisons: [overall],
+    stability: assessStability({
+      series,
+      timestamps: source.timestamps,
+      kind: source.kind,
+      hypothesis,
+      settings,
+      ...runner
+    })
   });
 }
 
@@ -41463,14 +41937,9 @@ function evaluatePanel(panel, settings, extras = {}) {
     series,
     timestamps: panel.timestamps
   });
+  const overallSeries = aggregateByTime(panel, pooled, void 0, weights);
   const comparisons = [
-    compareLossSeries(
-      aggregateByTime(panel, pooled, void 0, weights),
-      scope("all", "all"),
-      hypothesis,
-      settings,
-      runner
-    )
+    compareLossSeries(overallSeries, scope("all", "all"), hypothesis, settings, runner)
   ];
   const byHorizon = groupRows(panel.horizon);
   if (byHorizon.size > 1) {
@@ -41516,7 +41985,15 @@ function evaluatePanel(panel, settings, extras = {}) {
     inputs: panelInputsSummary(panel, losses),
     comparisons,
     seriesSummary,
-    pathSummary
+    pathSummary,
+    stability: assessStability({
+      series: overallSeries,
+      timestamps: panel.timestamps,
+      kind: panel.timestampKind,
+      hypothesis,
+      settings,
+      ...runner
+    })
   });
 }
 function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
@@ -42794,14 +43271,14 @@ function fitReport(report, options) {
   };
   const fits = (k) => options.measure(reduced(k)) <= budget;
   if (total > 1 && fits(1)) {
-    let lo = 1;
-    let hi = total - 1;
-    while (lo < hi) {
-      const mid = Math.ceil((lo + hi) / 2);
-      if (fits(mid)) lo = mid;
-      else hi = mid - 1;
+    let lo2 = 1;
+    let hi2 = total - 1;
+    while (lo2 < hi2) {
+      const mid = Math.ceil((lo2 + hi2) / 2);
+      if (fits(mid)) lo2 = mid;
+      else hi2 = mid - 1;
     }
-    return { text: prefix + reduced(lo), shortened: true };
+    return { text: prefix + reduced(lo2), shortened: true };
   }
   const note = shortenedNote(options, "It was cut short.");
   const source = options.render({ ...report, comparisons: report.comparisons.slice(0, 1) });
@@ -43015,8 +43492,8 @@ var ENGINE_OPTIONS = [
   {
     name: "confidence",
     valueName: "NUMBER",
-    defaultValue: "0.95",
-    help: "level of the two-sided intervals in the report"
+    defaultValue: "",
+    help: "level of the intervals in the report; default 1 \u2212 2\xB7alpha (0.9 for alpha 0.05), so each end is the one-sided bound of the tests and the interval shows the decision at any margin; another level may disagree with the tests"
   },
   {
     name: "min-points",
@@ -43194,6 +43671,11 @@ function resolveSettings(raw, label) {
       }
     }
   }
+  const alpha = number(
+    "alpha",
+    (x) => x > 0 && x < 0.5,
+    "a number between 0 and 0.5, such as 0.05"
+  );
   return {
     name: value("name"),
     baseline: losses === null ? value("baseline") : "",
@@ -43204,7 +43686,7 @@ function resolveSettings(raw, label) {
     format: value("format"),
     loss: value("loss"),
     zeroActuals: value("zero-actuals"),
-    alpha: number("alpha", (x) => x > 0 && x < 0.5, "a number between 0 and 0.5, such as 0.05"),
+    alpha,
     margin: number("margin", (x) => x >= 0, "a number \u2265 0 (0.02 = 2% with --margin-kind relative)"),
     marginKind: value("margin-kind"),
     policy: value("policy"),
@@ -43214,11 +43696,7 @@ function resolveSettings(raw, label) {
     blockLength: parseBlockLength(value("block-length"), label("block-length")),
     resamples: integer("resamples", 99, 1e7),
     seed: integer("seed", 0, 2 ** 31 - 1),
-    confidence: number(
-      "confidence",
-      (x) => x > 0.5 && x < 1,
-      "a number between 0.5 and 1, such as 0.95"
-    ),
+    confidence: optional("confidence") === null ? defaultConfidence(alpha) : number("confidence", (x) => x > 0.5 && x < 1, "a number between 0.5 and 1, such as 0.9"),
     minPoints: integer("min-points", 1),
     shortData: value("short-data"),
     allowMissing: bool("allow-missing"),
@@ -43505,6 +43983,7 @@ function readReport(r) {
     inputs: readInputs(r.field("inputs")),
     seriesSummary: readSeriesSummary(r.field("seriesSummary")),
     pathSummary: readPathSummary(r.field("pathSummary")),
+    stability: readStability(r.field("stability")),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
   };
@@ -43532,6 +44011,27 @@ function readInterval(r) {
     method: r.field("method").string()
   };
 }
+var MAX_PIECES = 64;
+function readRelativeChange(r) {
+  if (r.value === null || r.value === void 0) return null;
+  const piece2 = (p) => ({
+    lower: p.field("lower").numberOrNull(),
+    upper: p.field("upper").numberOrNull()
+  });
+  return {
+    estimate: r.field("estimate").number(),
+    level: r.field("level").number(),
+    lower: r.field("lower").numberOrNull(),
+    upper: r.field("upper").numberOrNull(),
+    method: r.field("method").string(),
+    ...r.field("pieces").value === void 0 ? {} : { pieces: readPieces(r.field("pieces")) }
+  };
+  function readPieces(p) {
+    const items = p.items();
+    if (items.length > MAX_PIECES) p.fail(`at most ${MAX_PIECES} pieces`);
+    return items.map(piece2);
+  }
+}
 function readComparison(r) {
   const horizon = r.field("horizon");
   const series = r.field("series");
@@ -43550,6 +44050,7 @@ function readComparison(r) {
     meanDifference: r.field("meanDifference").number(),
     relativeDifference: r.field("relativeDifference").numberOrNull(),
     meanTestedDifferential: r.field("meanTestedDifferential").number(),
+    relativeChange: readRelativeChange(r.field("relativeChange")),
     dieboldMariano: readDieboldMariano(r.field("dieboldMariano")),
     bootstrap: readBootstrap(r.field("bootstrap")),
     verdict: r.field("verdict").oneOf(VERDICTS),
@@ -43571,6 +44072,38 @@ function readPathSummary(r) {
     shareWorse: r.field("shareWorse").number(),
     significantlyWorse: r.field("significantlyWorse").integer()
   };
+}
+function readStability(r) {
+  if (r.value === null || r.value === void 0) return null;
+  const periods = r.field("periods").items();
+  if (periods.length > MAX_PERIODS) r.field("periods").fail(`at most ${MAX_PERIODS} periods`);
+  const recent = r.field("recent");
+  return {
+    fluctuation: readFluctuation(r.field("fluctuation")),
+    recent: recent.value === null ? null : readComparison(recent),
+    periods: periods.map((p) => ({
+      ...readSpan(p),
+      n: p.field("n").integer(1),
+      meanBaselineLoss: p.field("meanBaselineLoss").number(),
+      meanCandidateLoss: p.field("meanCandidateLoss").number(),
+      relativeDifference: p.field("relativeDifference").numberOrNull()
+    }))
+  };
+}
+function readFluctuation(r) {
+  if (r.value === null) return null;
+  return {
+    statistic: r.field("statistic").number(),
+    criticalValue: r.field("criticalValue").number(),
+    mu: r.field("mu").number(),
+    windowSize: r.field("windowSize").integer(1),
+    rejected: r.field("rejected").boolean(),
+    peak: readSpan(r.field("peak")),
+    worsePeriods: r.field("worsePeriods").items().map(readSpan)
+  };
+}
+function readSpan(r) {
+  return { start: r.field("start").string(), end: r.field("end").string() };
 }
 function readSeriesSummary(r) {
   if (r.value === null || r.value === void 0) return null;

@@ -59,6 +59,8 @@ export function runStudy(
       resamples: String(options.resamples),
       alpha: String(alpha),
       'min-points': '1',
+      // The coverage columns are for two-sided 95% intervals, whatever the report's default level.
+      confidence: '0.95',
     },
     (name) => name,
   );

@@ -10,10 +10,13 @@ import type {
   Interval,
   PathSummary,
   PolicySummary,
+  RelativeChange,
   Report,
   SeriesSummary,
 } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import { MAX_PERIODS } from '../stability/periodBuckets.js';
+import type { FluctuationSummary, Stability, TimeSpan } from '../stability/stabilityModel.js';
 
 /** Larger report files are refused before parsing. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -137,6 +140,7 @@ function readReport(r: Reader): Report {
     inputs: readInputs(r.field('inputs')),
     seriesSummary: readSeriesSummary(r.field('seriesSummary')),
     pathSummary: readPathSummary(r.field('pathSummary')),
+    stability: readStability(r.field('stability')),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
   };
@@ -167,6 +171,30 @@ function readInterval(r: Reader): Interval | null {
   };
 }
 
+const MAX_PIECES = 64;
+
+/** Null ends mean unbounded; `pieces` only when the set is not one interval (RelativeChange). */
+function readRelativeChange(r: Reader): RelativeChange | null {
+  if (r.value === null || r.value === undefined) return null;
+  const piece = (p: Reader) => ({
+    lower: p.field('lower').numberOrNull(),
+    upper: p.field('upper').numberOrNull(),
+  });
+  return {
+    estimate: r.field('estimate').number(),
+    level: r.field('level').number(),
+    lower: r.field('lower').numberOrNull(),
+    upper: r.field('upper').numberOrNull(),
+    method: r.field('method').string(),
+    ...(r.field('pieces').value === undefined ? {} : { pieces: readPieces(r.field('pieces')) }),
+  };
+  function readPieces(p: Reader) {
+    const items = p.items();
+    if (items.length > MAX_PIECES) p.fail(`at most ${MAX_PIECES} pieces`);
+    return items.map(piece);
+  }
+}
+
 function readComparison(r: Reader): Comparison {
   const horizon = r.field('horizon');
   const series = r.field('series');
@@ -185,6 +213,7 @@ function readComparison(r: Reader): Comparison {
     meanDifference: r.field('meanDifference').number(),
     relativeDifference: r.field('relativeDifference').numberOrNull(),
     meanTestedDifferential: r.field('meanTestedDifferential').number(),
+    relativeChange: readRelativeChange(r.field('relativeChange')),
     dieboldMariano: readDieboldMariano(r.field('dieboldMariano')),
     bootstrap: readBootstrap(r.field('bootstrap')),
     verdict: r.field('verdict').oneOf(VERDICTS),
@@ -214,6 +243,42 @@ function readPathSummary(r: Reader): PathSummary | null {
     shareWorse: r.field('shareWorse').number(),
     significantlyWorse: r.field('significantlyWorse').integer(),
   };
+}
+
+/** report.stability; absent (a report from before it existed) reads as null. */
+function readStability(r: Reader): Stability | null {
+  if (r.value === null || r.value === undefined) return null;
+  const periods = r.field('periods').items();
+  if (periods.length > MAX_PERIODS) r.field('periods').fail(`at most ${MAX_PERIODS} periods`);
+  const recent = r.field('recent');
+  return {
+    fluctuation: readFluctuation(r.field('fluctuation')),
+    recent: recent.value === null ? null : readComparison(recent),
+    periods: periods.map((p) => ({
+      ...readSpan(p),
+      n: p.field('n').integer(1),
+      meanBaselineLoss: p.field('meanBaselineLoss').number(),
+      meanCandidateLoss: p.field('meanCandidateLoss').number(),
+      relativeDifference: p.field('relativeDifference').numberOrNull(),
+    })),
+  };
+}
+
+function readFluctuation(r: Reader): FluctuationSummary | null {
+  if (r.value === null) return null;
+  return {
+    statistic: r.field('statistic').number(),
+    criticalValue: r.field('criticalValue').number(),
+    mu: r.field('mu').number(),
+    windowSize: r.field('windowSize').integer(1),
+    rejected: r.field('rejected').boolean(),
+    peak: readSpan(r.field('peak')),
+    worsePeriods: r.field('worsePeriods').items().map(readSpan),
+  };
+}
+
+function readSpan(r: Reader): TimeSpan {
+  return { start: r.field('start').string(), end: r.field('end').string() };
 }
 
 function readSeriesSummary(r: Reader): SeriesSummary | null {

@@ -1,6 +1,7 @@
 import { type LossSeries, lossDifferential } from '../aggregation/lossSeries.js';
 import { decideComparison } from '../decision/decideComparison.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
+import { relativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
 import type { BootstrapSummary, Comparison, DieboldMarianoSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
@@ -33,6 +34,7 @@ export function compareLossSeries(
   const meanBaselineLoss = meanOrZero(series.baseline);
   const meanCandidateLoss = meanOrZero(series.candidate);
   const d = lossDifferential(series, hypothesis.baselineFactor - 1);
+  const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
   const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
 
@@ -41,11 +43,13 @@ export function compareLossSeries(
     series.maxHorizon,
     hypothesis,
     settings,
+    difference,
   );
   const withBootstrap = options.bootstrap ?? true;
-  const bootstrap: BootstrapSummary = withBootstrap
-    ? runBootstrap(d, series, hypothesis, settings, options.runner)
-    : bootstrapNotRun(settings);
+  const bootstrapRun = withBootstrap
+    ? runBootstrap(d, series, hypothesis, settings, options.runner, difference)
+    : null;
+  const bootstrap: BootstrapSummary = bootstrapRun?.summary ?? bootstrapNotRun(settings);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -84,6 +88,16 @@ export function compareLossSeries(
     meanDifference: meanCandidateLoss - meanBaselineLoss,
     relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1,
     meanTestedDifferential,
+    relativeChange: relativeChange({
+      series,
+      settings,
+      agreement: withBootstrap ? settings.agreement : 'dm',
+      dieboldMariano,
+      bootstrap: {
+        state: bootstrap.state,
+        resampledDeviations: bootstrapRun?.resampledDeviations ?? null,
+      },
+    }),
     dieboldMariano,
     bootstrap,
     verdict: decision.verdict,

@@ -6,6 +6,7 @@ import { buildReport } from '../report/buildReport.js';
 import { lossFileInputsSummary } from '../report/inputsSummary.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
+import { assessStability } from '../stability/assessStability.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { compareLossSeries } from './compareLossSeries.js';
 
@@ -20,12 +21,13 @@ export function evaluateLossSeries(
   resampleRunner?: ResampleRunner,
 ): Report {
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const runner = resampleRunner === undefined ? {} : { runner: resampleRunner };
   const overall = compareLossSeries(
     series,
     { loss: settings.loss, horizon: 'all', series: 'all', timestamps: source.timestamps },
     hypothesis,
     settings,
-    resampleRunner === undefined ? {} : { runner: resampleRunner },
+    runner,
   );
   return buildReport({
     version: VERSION,
@@ -33,5 +35,13 @@ export function evaluateLossSeries(
     hypothesis,
     inputs: lossFileInputsSummary(source.file, source.timestamps, source.kind, series.maxHorizon),
     comparisons: [overall],
+    stability: assessStability({
+      series,
+      timestamps: source.timestamps,
+      kind: source.kind,
+      hypothesis,
+      settings,
+      ...runner,
+    }),
   });
 }

@@ -15,6 +15,7 @@ import { scaleLossesBySeries } from '../scaling/scaleLossesBySeries.js';
 import { seasonalNaiveScale } from '../scaling/seasonalNaiveScale.js';
 import type { SeriesScale } from '../scaling/seriesScale.js';
 import type { Settings } from '../settings/settings.js';
+import { assessStability } from '../stability/assessStability.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { type ComparisonScope, compareLossSeries } from './compareLossSeries.js';
 import { runDieboldMariano } from './runDieboldMariano.js';
@@ -51,14 +52,9 @@ export function evaluatePanel(
     series,
     timestamps: panel.timestamps,
   });
+  const overallSeries = aggregateByTime(panel, pooled, undefined, weights);
   const comparisons: Comparison[] = [
-    compareLossSeries(
-      aggregateByTime(panel, pooled, undefined, weights),
-      scope('all', 'all'),
-      hypothesis,
-      settings,
-      runner,
-    ),
+    compareLossSeries(overallSeries, scope('all', 'all'), hypothesis, settings, runner),
   ];
 
   const byHorizon = groupRows(panel.horizon);
@@ -109,6 +105,14 @@ export function evaluatePanel(
     comparisons,
     seriesSummary,
     pathSummary,
+    stability: assessStability({
+      series: overallSeries,
+      timestamps: panel.timestamps,
+      kind: panel.timestampKind,
+      hypothesis,
+      settings,
+      ...runner,
+    }),
   });
 }
 

@@ -1,7 +1,7 @@
 import type { Hypothesis } from '../decision/hypothesis.js';
 import type { DieboldMarianoSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
-import { dieboldMariano } from '../statistics/dieboldMariano.js';
+import { type DieboldMarianoResult, dieboldMariano } from '../statistics/dieboldMariano.js';
 import { standardNormalQuantile, studentTQuantile } from '../statistics/distributions.js';
 import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbold.js';
 
@@ -14,49 +14,31 @@ import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbo
  * statistic against Student t with n − 1 df, since their normal reference over-rejects in short
  * samples (docs/design.md, "Long-run variance"; measured size in docs/validation.md). The lower-tail p-value is 1 − upper (continuous reference).
  * The interval inverts the same statistic: d̄ ± q · SE, with SE = √(ω̂²/n) divided by the HLN
- * factor where that correction is used.
+ * factor where that correction is used. It is for E[L_c − L_b] (`difference`, no margin applied),
+ * the quantity the report prints beside it; with a relative margin the test's differential is
+ * L_c − (1 + r)·L_b, and the automatic lag is chosen on `difference` so that it does not depend
+ * on the margin.
  */
 export function runDieboldMariano(
   d: Float64Array,
   horizon: number,
   hypothesis: Hypothesis,
   settings: Settings,
+  difference: Float64Array = d,
 ): DieboldMarianoSummary {
-  const result = dieboldMariano(d, {
+  const options = {
     estimator: settings.variance,
     lag: settings.lag,
     horizon,
-    margin: hypothesis.boundary,
-  });
+    lagSeries: difference,
+  };
+  const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
   const upper = result.smallSample?.pValue ?? result.pValue;
   const decisionPValue =
     upper === null ? null : hypothesis.rejectWhen === 'above' ? upper : 1 - upper;
-  let interval: DieboldMarianoSummary['interval'] = null;
-  if (result.variance !== null && result.variance > 0 && result.statistic !== null) {
-    const level = settings.confidence;
-    const tail = 1 - (1 - level) / 2;
-    let se = Math.sqrt(result.variance);
-    let q: number;
-    if (result.smallSample !== null) {
-      se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
-      q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
-    } else if (result.degreesOfFreedom !== null) {
-      q = studentTQuantile(tail, result.degreesOfFreedom);
-    } else {
-      q = standardNormalQuantile(tail);
-    }
-    interval = {
-      level,
-      lower: result.mean - q * se,
-      upper: result.mean + q * se,
-      method:
-        result.smallSample !== null
-          ? 'HLN-corrected t'
-          : result.degreesOfFreedom !== null
-            ? 'fixed-b t'
-            : 'normal',
-    };
-  }
+  // The interval is for E[L_c − L_b], the difference printed beside it, at every margin.
+  const unshifted =
+    difference === d ? result : dieboldMariano(difference, { ...options, margin: 0 });
   return {
     state: result.state,
     estimator: result.estimator,
@@ -70,8 +52,39 @@ export function runDieboldMariano(
     lag: result.lag,
     degreesOfFreedom: result.degreesOfFreedom,
     smallSample: result.smallSample,
-    interval,
+    interval: meanInterval(unshifted, horizon, settings.confidence),
     lagSelection: result.lagSelection,
     notes: result.notes,
+  };
+}
+
+/** d̄ ± q · SE at `level`, inverting the same statistic the test uses (see above). */
+function meanInterval(
+  result: DieboldMarianoResult,
+  horizon: number,
+  level: number,
+): DieboldMarianoSummary['interval'] {
+  if (result.variance === null || !(result.variance > 0) || result.statistic === null) return null;
+  const tail = 1 - (1 - level) / 2;
+  let se = Math.sqrt(result.variance);
+  let q: number;
+  if (result.smallSample !== null) {
+    se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
+    q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
+  } else if (result.degreesOfFreedom !== null) {
+    q = studentTQuantile(tail, result.degreesOfFreedom);
+  } else {
+    q = standardNormalQuantile(tail);
+  }
+  return {
+    level,
+    lower: result.mean - q * se,
+    upper: result.mean + q * se,
+    method:
+      result.smallSample !== null
+        ? 'HLN-corrected t'
+        : result.degreesOfFreedom !== null
+          ? 'fixed-b t'
+          : 'normal',
   };
 }

@@ -1,6 +1,7 @@
 import type { Hypothesis } from '../decision/hypothesis.js';
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
 import type { Settings } from '../settings/settings.js';
+import type { Stability } from '../stability/stabilityModel.js';
 import type {
   Comparison,
   InputsSummary,
@@ -18,6 +19,7 @@ export interface ReportParts {
   readonly comparisons: readonly Comparison[];
   readonly seriesSummary?: SeriesSummary | null;
   readonly pathSummary?: PathSummary | null;
+  readonly stability?: Stability | null;
 }
 
 /**
@@ -68,6 +70,7 @@ export function buildReport(parts: ReportParts): Report {
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
+    stability: parts.stability ?? null,
   };
 }
 

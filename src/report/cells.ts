@@ -38,58 +38,74 @@ export function pValue(p: number | null | undefined): string {
   return p.toFixed(4);
 }
 
+/** An interval for E[L_c]/E[L_b] − 1; a null end is unbounded on that side. */
 export interface RelativeInterval {
-  readonly lower: number;
-  readonly upper: number;
+  readonly lower: number | null;
+  readonly upper: number | null;
   readonly level: number;
   readonly method: string;
+  /** Disjoint pieces when the set is not one interval (empty: no margin is kept). */
+  readonly pieces?: readonly { readonly lower: number | null; readonly upper: number | null }[];
 }
 
 /**
  * An interval for E[L_c]/E[L_b] − 1, the quantity the "change" column prints: the engine's
- * test-inversion interval when the report has it, else the bootstrap's interval for the same
- * ratio (computed with a relative margin). Never an interval for another quantity.
+ * test-inversion set (`relativeChange`) when the report has it, else the bootstrap's interval
+ * for the same ratio (computed with a relative margin). Never an interval for another quantity.
  */
 export function relativeInterval(c: ComparisonView): RelativeInterval | null {
-  const r = c.relativeChange;
-  if (r !== undefined && r !== null && r.lower !== null && r.upper !== null) {
-    return { lower: r.lower, upper: r.upper, level: r.level, method: r.method };
+  const r = c.relativeChange ?? null;
+  if (r !== null) {
+    return {
+      lower: r.lower,
+      upper: r.upper,
+      level: r.level,
+      method: r.method,
+      ...(r.pieces === undefined ? {} : { pieces: r.pieces }),
+    };
   }
   const b = c.bootstrap.relativeInterval;
   return b === null ? null : { lower: b.lower, upper: b.upper, level: b.level, method: b.method };
 }
 
+/** "[+1.10%, +6.40%]"; "[−∞, +6.40%]" for an unbounded end; pieces joined by ∪; ∅ when empty. */
+export function intervalText(i: RelativeInterval): string {
+  const piece = (p: { lower: number | null; upper: number | null }) =>
+    `[${p.lower === null ? '−∞' : percent(p.lower)}, ${p.upper === null ? '+∞' : percent(p.upper)}]`;
+  if (i.pieces !== undefined) return i.pieces.length === 0 ? '∅' : i.pieces.map(piece).join(' ∪ ');
+  return piece(i);
+}
+
 /** "+3.72% [+1.10%, +6.40%]", or the point alone when no interval for the ratio exists. */
 export function changeCell(c: ComparisonView): string {
-  const point = percent(c.relativeChange?.estimate ?? c.relativeDifference);
+  const point = percent(c.relativeDifference);
   const i = relativeInterval(c);
-  return i === null ? point : `${point} [${percent(i.lower)}, ${percent(i.upper)}]`;
+  return i === null ? point : `${point} ${intervalText(i)}`;
 }
 
 export type Evidence = 'worse' | 'better' | 'no clear difference' | 'n/a';
 
 /**
  * Evidence in words about the plain difference E[L_c] − E[L_b], whatever the policy: "worse"
- * when the interval for the relative change lies above 0, "better" when below. Without such an
- * interval, the intervals for E[d] are used when d is the plain difference (no relative
- * margin); both tests' intervals must then exclude 0 on the same side. Per-series comparisons use
- * their multiplicity-adjusted direction.
+ * when the interval for the relative change lies above 0, "better" when below (at the default
+ * level 1 − 2α, exactly when the tests reject equal loss at α on that side). Without such an
+ * interval, both tests' intervals for E[L_c − L_b] must exclude 0 on the same side. Per-series
+ * comparisons use their multiplicity-adjusted direction.
  */
-export function evidenceOf(c: ComparisonView, report: ReportView): Evidence {
+export function evidenceOf(c: ComparisonView, _report: ReportView): Evidence {
   if (c.direction !== undefined) {
     return c.direction === 'no evidence' ? 'no clear difference' : c.direction;
   }
   const i = relativeInterval(c);
-  if (i !== null) return sideOf([i]);
-  if (report.policy.baselineFactor !== 1) return 'n/a';
+  if (i !== null) return sideOf(i.pieces ?? [i]);
   const intervals = [c.dieboldMariano.interval, c.bootstrap.interval].filter((x) => x !== null);
   if (intervals.length === 0) return 'n/a';
   return sideOf(intervals);
 }
 
-function sideOf(intervals: readonly { lower: number; upper: number }[]): Evidence {
-  if (intervals.every((i) => i.lower > 0)) return 'worse';
-  if (intervals.every((i) => i.upper < 0)) return 'better';
+function sideOf(intervals: readonly { lower: number | null; upper: number | null }[]): Evidence {
+  if (intervals.every((i) => i.lower !== null && i.lower > 0)) return 'worse';
+  if (intervals.every((i) => i.upper !== null && i.upper < 0)) return 'better';
   return 'no clear difference';
 }
 

@@ -1,5 +1,5 @@
 import type { Verdict } from '../decision/verdict.js';
-import { significant } from './cells.js';
+import { percent, significant } from './cells.js';
 import type { ReportView } from './reportView.js';
 
 /**
@@ -76,16 +76,14 @@ export function decidingReasons(report: ReportView): DecidingReason[] {
     });
   }
 
-  const recent = report.stability?.recent;
-  if (recent?.verdict !== undefined && recent.verdict !== 'pass') {
+  const recent = report.stability?.recent ?? null;
+  if (recent !== null && recent.verdict !== 'pass') {
     found.push({
       kind: 'worse-lately',
       verdict: recent.verdict,
-      text:
-        recent.summary ??
-        `the candidate is worse in the most recent period${
-          recent.start === undefined ? '' : ` (${recent.start} to ${recent.end ?? '…'})`
-        }`,
+      text: `on the most recent stretch alone (${recent.firstTimestamp ?? 'n/a'} to ${
+        recent.lastTimestamp ?? 'n/a'
+      }, ${recent.n} time points) the gate would ${recent.verdict === 'fail' ? 'fail' : 'warn'}: mean loss ${percent(recent.relativeDifference)}`,
     });
   }
 

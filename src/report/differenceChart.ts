@@ -1,5 +1,6 @@
+import type { PeriodSummary } from '../stability/stabilityModel.js';
 import { percent } from './cells.js';
-import type { PeriodView, ReportView } from './reportView.js';
+import type { ReportView } from './reportView.js';
 
 /**
  * The loss difference over time, drawn from `report.stability.periods` (the engine's own
@@ -10,7 +11,7 @@ export interface DifferenceSeries {
   readonly labels: readonly string[];
   /** Percent; periods whose baseline loss is 0 (no relative difference) are left out. */
   readonly values: readonly number[];
-  readonly periods: readonly PeriodView[];
+  readonly periods: readonly PeriodSummary[];
   /** The margin in percent on the same axis (+r for no-regression and non-inferiority, −r for superiority), or null. */
   readonly margin: number | null;
   readonly first: string;

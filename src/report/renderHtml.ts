@@ -62,6 +62,7 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
     `<h1>${xml(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
     `<p class="lead"><strong>${xml(s.lead)}</strong> ${xml(s.change)}</p>`,
     htmlTable(s.main),
+    `<p class="muted">${xml(s.intervalNote)}</p>`,
   );
   if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml(n)}</li>`).join('')}</ul>`);
   out.push(
@@ -70,7 +71,11 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
 
   const chart = differenceSeries(view);
   if (chart !== null) {
-    const band = relativeInterval(overall);
+    const interval = relativeInterval(overall);
+    const band =
+      interval === null || interval.lower === null || interval.upper === null
+        ? null
+        : { lower: interval.lower, upper: interval.upper, level: interval.level };
     out.push(
       '<h2>Difference over time</h2>',
       `<figure>${differenceOverTimeSvg({
@@ -94,8 +99,8 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
         return {
           label: `h ${c.horizon}`,
           estimate: (c.relativeDifference as number) * 100,
-          lower: i === null ? null : i.lower * 100,
-          upper: i === null ? null : i.upper * 100,
+          lower: i?.lower == null ? null : i.lower * 100,
+          upper: i?.upper == null ? null : i.upper * 100,
         };
       });
     out.push('<h2>By horizon (for locating a change only)</h2>');

@@ -27,6 +27,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(`### ${esc(s.title)}: ${s.verdict.toUpperCase()}`, '');
   lines.push(`**${esc(s.lead)}** ${esc(s.change)}`, '');
   lines.push(...markdownTable(s.main), '');
+  lines.push(`<sub>${esc(s.intervalNote)}</sub>`, '');
   for (const note of s.notes) lines.push(`- ${esc(note)}`);
   if (s.notes.length > 0) lines.push('');
 

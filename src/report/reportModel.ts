@@ -1,11 +1,15 @@
 import type { FileSummary } from '../core/panel.js';
 import type { Verdict } from '../decision/verdict.js';
+import type { RelativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
+import type { Stability } from '../stability/stabilityModel.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
 import type { MissingRowsSummary } from './missingRows.js';
+
+export type { RelativeChange } from '../intervals/relativeChange.js';
 
 /**
  * The JSON report: the one artefact every renderer (terminal, Markdown comment, job summary)
@@ -29,6 +33,8 @@ export interface Report {
   readonly seriesSummary: SeriesSummary | null;
   /** Per-path findings when the files have a path column with several paths, else null. */
   readonly pathSummary: PathSummary | null;
+  /** Whether the difference holds over time (fluctuation test, recent window, periods), or null. */
+  readonly stability: Stability | null;
 }
 
 /**
@@ -95,6 +101,12 @@ export interface Comparison {
   readonly relativeDifference: number | null;
   /** Mean of the tested differential d_t = L_c,t − k·L_b,t (k from the margin). */
   readonly meanTestedDifferential: number;
+  /**
+   * E[L_c]/E[L_b] − 1 with the set of relative margins at which the gate would not reject
+   * (its tests inverted; see src/intervals/relativeChange.ts), or null when the baseline's mean
+   * loss is not positive or no test could be inverted.
+   */
+  readonly relativeChange: RelativeChange | null;
   readonly dieboldMariano: DieboldMarianoSummary;
   readonly bootstrap: BootstrapSummary;
   readonly verdict: Verdict;
@@ -135,7 +147,10 @@ export interface DieboldMarianoSummary {
     readonly pValueTwoSided: number;
     readonly degreesOfFreedom: number;
   } | null;
-  /** Two-sided interval for E[d] (tested differential), from the same variance and reference. */
+  /**
+   * Two-sided interval for E[L_c − L_b] (the mean difference, no margin applied), from the same
+   * variance and reference as the test.
+   */
   readonly interval: Interval | null;
   readonly lagSelection: DieboldMarianoResult['lagSelection'];
   readonly notes: readonly string[];
@@ -151,7 +166,7 @@ export interface BootstrapSummary {
   /** Politis–White quantities when the block length was chosen automatically. */
   readonly blockLengthSelection: AutomaticBlockLength | null;
   readonly standardError: number | null;
-  /** Interval for E[d] (tested differential). */
+  /** Basic interval for E[L_c − L_b] (the mean difference, no margin applied). */
   readonly interval: Interval | null;
   /**
    * With a relative margin: interval for E[L_c]/E[L_b] − 1 from the same resamples (basic

@@ -8,6 +8,7 @@ import {
 import { changeCell, evidenceOf, percent, pValue, relativeInterval, significant } from './cells.js';
 import { type DecidingReason, decidingReasons } from './decidingReason.js';
 import { displayPath } from './displayPath.js';
+import { intervalNote } from './relativeChangeText.js';
 import { type ReportTable, table } from './reportTable.js';
 import type { ComparisonView, ReportView } from './reportView.js';
 
@@ -27,6 +28,8 @@ export interface ReportSections {
   /** "Mean loss −3.72% [−5.10%, −2.20%] against the baseline over 240 time points (…)." */
   readonly change: string;
   readonly main: ReportTable;
+  /** What the intervals mean (their level and how they relate to the tests). */
+  readonly intervalNote: string;
   readonly notes: readonly string[];
   /** Options that differ from the defaults, as typed (files left out: they are under inputs). */
   readonly changedSettings: string;
@@ -81,6 +84,7 @@ export function reportSections(report: ReportView, options: SectionOptions = {})
     lead,
     change,
     main: mainTable(report, overall),
+    intervalNote: intervalNote(report),
     notes: mainNotes(report, reasons),
     changedSettings: asCommandLine(options_.filter((o) => !o.isDefault && !o.file)),
     details: detailsTable(report, overall),
@@ -166,7 +170,7 @@ function detailsTable(report: ReportView, c: ComparisonView): ReportTable {
       pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
       pValue(bs.pValueTwoSided),
     ],
-    ['interval for E[d]', interval(dm.interval), interval(bs.interval)],
+    ['interval for E[L_candidate − L_baseline]', interval(dm.interval), interval(bs.interval)],
     [
       'rejects H0 at α',
       c.rejected.dieboldMariano === null ? 'n/a' : c.rejected.dieboldMariano ? 'yes' : 'no',

@@ -127,8 +127,8 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'confidence',
     valueName: 'NUMBER',
-    defaultValue: '0.95',
-    help: 'level of the two-sided intervals in the report',
+    defaultValue: '',
+    help: 'level of the intervals in the report; default 1 − 2·alpha (0.9 for alpha 0.05), so each end is the one-sided bound of the tests and the interval shows the decision at any margin; another level may disagree with the tests',
   },
   {
     name: 'min-points',

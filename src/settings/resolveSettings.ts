@@ -1,6 +1,7 @@
 import { InputError } from '../core/inputError.js';
 import type { LossName } from '../losses/lossName.js';
 import { parseColumnMapping } from '../reading/columnMapping.js';
+import { defaultConfidence } from './defaultConfidence.js';
 import { ENGINE_OPTIONS, type OptionSpec } from './options.js';
 import type { BlockLengthRule, LagRule, Settings } from './settings.js';
 
@@ -65,6 +66,11 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
       }
     }
   }
+  const alpha = number(
+    'alpha',
+    (x) => x > 0 && x < 0.5,
+    'a number between 0 and 0.5, such as 0.05',
+  );
   return {
     name: value('name'),
     baseline: losses === null ? value('baseline') : '',
@@ -75,7 +81,7 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     format: value('format') as Settings['format'],
     loss: value('loss') as LossName,
     zeroActuals: value('zero-actuals') as Settings['zeroActuals'],
-    alpha: number('alpha', (x) => x > 0 && x < 0.5, 'a number between 0 and 0.5, such as 0.05'),
+    alpha,
     margin: number('margin', (x) => x >= 0, 'a number ≥ 0 (0.02 = 2% with --margin-kind relative)'),
     marginKind: value('margin-kind') as Settings['marginKind'],
     policy: value('policy') as Settings['policy'],
@@ -85,11 +91,10 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     blockLength: parseBlockLength(value('block-length'), label('block-length')),
     resamples: integer('resamples', 99, 10_000_000),
     seed: integer('seed', 0, 2 ** 31 - 1),
-    confidence: number(
-      'confidence',
-      (x) => x > 0.5 && x < 1,
-      'a number between 0.5 and 1, such as 0.95',
-    ),
+    confidence:
+      optional('confidence') === null
+        ? defaultConfidence(alpha)
+        : number('confidence', (x) => x > 0.5 && x < 1, 'a number between 0.5 and 1, such as 0.9'),
     minPoints: integer('min-points', 1),
     shortData: value('short-data') as Settings['shortData'],
     allowMissing: bool('allow-missing'),

@@ -1,3 +1,4 @@
+import { confidenceOverridesDefault } from './defaultConfidence.js';
 import { ENGINE_OPTIONS } from './options.js';
 import type { Settings } from './settings.js';
 
@@ -42,7 +43,11 @@ export function settingsAsOptions(
     const raw = optionText(record[key]);
     const value = file && raw !== '' ? paths(raw) : raw;
     const defaultText = spec.defaultValue ?? '';
-    const isDefault = sameValue(raw, defaultText);
+    // The intervals' level defaults to 1 − 2α, whatever α is.
+    const isDefault =
+      spec.name === 'confidence'
+        ? !confidenceOverridesDefault(settings.confidence, settings.alpha)
+        : sameValue(raw, defaultText);
     out.push({ name: spec.name, value, isDefault, flag: spec.flag === true, file });
   }
   return out;

@@ -26,6 +26,12 @@ export interface DieboldMarianoOptions {
   horizon: number;
   /** Absolute margin δ in loss units: H0 is E[d] ≤ δ. */
   margin: number;
+  /**
+   * The series on which `bartlett` / `uniform` choose their lag (default d). The gate passes the
+   * unshifted differential L_c − L_b, so the lag, and with it the test's variance, is the same
+   * quadratic form at every relative margin (docs/decisions/0008-intervals-from-the-tests.md).
+   */
+  lagSeries?: Float64Array;
 }
 
 /**
@@ -167,7 +173,7 @@ export function dieboldMariano(
     longRunVariance = ewc.value;
     base.degreesOfFreedom = ewc.degreesOfFreedom;
   } else {
-    lagChoice = selectLag(d, options.lag, horizon);
+    lagChoice = selectLag(options.lagSeries ?? d, options.lag, horizon);
     base.notes.push(...lagChoice.notes);
     base.lag = lagChoice.lag;
     base.lagSelection = describeLagChoice(lagChoice);

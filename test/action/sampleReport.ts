@@ -38,6 +38,13 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
         meanDifference: -0.7579885354166653,
         relativeDifference: -0.16489906158069922,
         meanTestedDifferential: -0.7579885354166669,
+        relativeChange: {
+          estimate: -0.16489906158069922,
+          level: 0.9,
+          lower: -0.2012,
+          upper: -0.1287,
+          method: 'Fieller (ewc) ∪ inverted bootstrap',
+        },
         dieboldMariano: {
           state: 'ok',
           estimator: 'ewc',
@@ -52,7 +59,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
           degreesOfFreedom: 15,
           smallSample: null,
           interval: {
-            level: 0.95,
+            level: 0.9,
             lower: -0.9665873126799988,
             upper: -0.5493897581533352,
             method: 'fixed-b t',
@@ -85,7 +92,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
           },
           standardError: 0.11613769531290219,
           interval: {
-            level: 0.95,
+            level: 0.9,
             lower: -0.9879755315972226,
             upper: -0.5289580079861115,
             method: 'basic',
@@ -180,7 +187,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       },
       resamples: 9999,
       seed: 1729,
-      confidence: 0.95,
+      confidence: 0.9,
       minPoints: 30,
       shortData: 'warn',
       allowMissing: false,
@@ -199,6 +206,36 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
     reasons: [],
     seriesSummary: null,
     pathSummary: null,
+    stability: {
+      fluctuation: {
+        statistic: 1.8421,
+        criticalValue: 2.938,
+        mu: 0.2,
+        windowSize: 48,
+        rejected: false,
+        peak: { start: '2026-05-02', end: '2026-06-18' },
+        worsePeriods: [],
+      },
+      recent: null,
+      periods: [
+        {
+          start: '2026-03-04',
+          end: '2026-03-08',
+          n: 5,
+          meanBaselineLoss: 4.61,
+          meanCandidateLoss: 3.9,
+          relativeDifference: -0.154,
+        },
+        {
+          start: '2026-03-09',
+          end: '2026-03-15',
+          n: 7,
+          meanBaselineLoss: 4.2,
+          meanCandidateLoss: 0,
+          relativeDifference: -1,
+        },
+      ],
+    },
   };
   return { ...report, ...overrides };
 }

@@ -30,6 +30,33 @@ describe('parseUntrustedReport', () => {
     });
   });
 
+  it('reads the relative change with unbounded ends and pieces, and refuses too many pieces', () => {
+    const report = sampleReport();
+    const c = report.comparisons[0]!;
+    const rays = {
+      ...c.relativeChange!,
+      lower: null,
+      upper: null,
+      pieces: [
+        { lower: null, upper: -0.5 },
+        { lower: 0.1, upper: null },
+      ],
+    };
+    const parsed = parseUntrustedReport(
+      JSON.stringify({ ...report, comparisons: [{ ...c, relativeChange: rays }] }),
+      'r.json',
+    );
+    expect(parsed.comparisons[0]!.relativeChange).toEqual(rays);
+    const many = { ...rays, pieces: Array.from({ length: 65 }, () => ({ lower: 0, upper: 1 })) };
+    expect(
+      describeError(JSON.stringify({ ...report, comparisons: [{ ...c, relativeChange: many }] })),
+    ).toMatch(/relativeChange\.pieces must be at most 64 pieces/);
+    const older = { ...report, comparisons: [{ ...c, relativeChange: undefined }] };
+    expect(
+      parseUntrustedReport(JSON.stringify(older), 'r.json').comparisons[0]!.relativeChange,
+    ).toBe(null);
+  });
+
   it('drops unknown fields, so a renderer never sees them', () => {
     const report = sampleReport();
     const hostile = {
@@ -66,5 +93,36 @@ describe('parseUntrustedReport', () => {
     expect(
       describeError(JSON.stringify({ ...report, tool: { name: 'other', version: '1' } })),
     ).toMatch(/\$\.tool\.name/);
+  });
+
+  it('reads report.stability field by field; a report without it reads as null', () => {
+    const report = sampleReport();
+    const { stability: _, ...older } = report;
+    expect(parseUntrustedReport(JSON.stringify(older), 'r.json').stability).toBeNull();
+    const stability = report.stability!;
+    const badPeriod = {
+      ...report,
+      stability: { ...stability, periods: [{ ...stability.periods[0], start: 3 }] },
+    };
+    expect(describeError(JSON.stringify(badPeriod))).toMatch(
+      /field \$\.stability\.periods\[0\]\.start must be a string/,
+    );
+    const tooMany = {
+      ...report,
+      stability: { ...stability, periods: Array(61).fill(stability.periods[0]) },
+    };
+    expect(describeError(JSON.stringify(tooMany))).toMatch(
+      /\$\.stability\.periods must be at most 60/,
+    );
+    const badFlag = {
+      ...report,
+      stability: { ...stability, fluctuation: { ...stability.fluctuation, rejected: 'yes' } },
+    };
+    expect(describeError(JSON.stringify(badFlag))).toMatch(
+      /\$\.stability\.fluctuation\.rejected must be true or false/,
+    );
+    const recent = { ...report, stability: { ...stability, recent: report.comparisons[0] } };
+    const parsed = parseUntrustedReport(JSON.stringify(recent), 'r.json');
+    expect(parsed.stability?.recent?.n).toBe(240);
   });
 });

@@ -1,3 +1,4 @@
+/// <reference lib="dom" />
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';

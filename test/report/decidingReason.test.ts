@@ -13,6 +13,18 @@ function withOverall(report: Report, change: Partial<Comparison>): Report {
   return { ...report, comparisons: [{ ...overall!, ...change }, ...rest] };
 }
 
+/** The recent-window comparison as the stability part reports it (a full comparison). */
+function recentWarn(): Comparison {
+  return {
+    ...sampleReport().comparisons[0]!,
+    verdict: 'warn',
+    n: 29,
+    firstTimestamp: '2026-10-01',
+    lastTimestamp: '2026-10-29',
+    relativeDifference: 0.04,
+  };
+}
+
 const kinds = (r: ReportView) => decidingReasons(r).map((x) => x.kind);
 
 describe('the deciding reason', () => {
@@ -72,20 +84,17 @@ describe('the deciding reason', () => {
           { id: 'gaps', status: 'ok', count: 0, examples: [] },
         ],
       },
-      stability: {
-        periods: [],
-        recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' },
-      },
+      stability: { fluctuation: null, periods: [], recent: recentWarn() },
     };
     expect(kinds(r)).toEqual(['backtest-check-failed', 'both-tests-agree', 'worse-lately']);
     expect(decidingReasons(r)[0]?.text).toContain('future-origin');
     const warn: ReportView = {
       ...sampleReport({ verdict: 'warn' }),
-      stability: {
-        periods: [],
-        recent: { verdict: 'warn', start: '2026-10-01', end: '2026-10-29' },
-      },
+      stability: { fluctuation: null, periods: [], recent: recentWarn() },
     };
     expect(kinds(warn)[0]).toBe('worse-lately');
+    expect(decidingReasons(warn)[0]?.text).toBe(
+      'on the most recent stretch alone (2026-10-01 to 2026-10-29, 29 time points) the gate would warn: mean loss +4.00%',
+    );
   });
 });

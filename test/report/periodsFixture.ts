@@ -1,11 +1,12 @@
 import type { Report } from '../../src/report/reportModel.js';
-import type { PeriodView, ReportView } from '../../src/report/reportView.js';
+import type { ReportView } from '../../src/report/reportView.js';
+import type { PeriodSummary } from '../../src/stability/stabilityModel.js';
 
 /**
  * Hand-built periods in the shape of `report.stability.periods` (weekly buckets of an invented
  * backtest): the candidate about 3% better for most weeks, then worse in the last five.
  */
-export function weeklyPeriods(weeks = 34): PeriodView[] {
+export function weeklyPeriods(weeks = 34): PeriodSummary[] {
   const start = Date.UTC(2026, 2, 2);
   const day = (i: number) => new Date(start + i * 86_400_000).toISOString().slice(0, 10);
   return Array.from({ length: weeks }, (_, w) => {
@@ -23,5 +24,5 @@ export function weeklyPeriods(weeks = 34): PeriodView[] {
 }
 
 export function withPeriods(report: Report, periods = weeklyPeriods()): ReportView {
-  return { ...report, stability: { periods } };
+  return { ...report, stability: { fluctuation: null, recent: null, periods } };
 }

@@ -31,7 +31,7 @@ describe('resolveSettings', () => {
       blockLength: { kind: 'auto' },
       resamples: 9999,
       seed: 1729,
-      confidence: 0.95,
+      confidence: 0.9,
       minPoints: 30,
       shortData: 'warn',
       allowMissing: false,
@@ -42,6 +42,14 @@ describe('resolveSettings', () => {
       losses: null,
     });
     for (const o of ENGINE_OPTIONS) expect(o.help.length).toBeGreaterThan(10);
+  });
+
+  it('derives the default level 1 − 2α from alpha, and keeps a level the user gives', () => {
+    expect(resolveSettings({ ...base, alpha: '0.1' }, label).confidence).toBe(0.8);
+    expect(resolveSettings({ ...base, alpha: '0.025' }, label).confidence).toBe(0.95);
+    expect(resolveSettings({ ...base, alpha: '0.1', confidence: '0.95' }, label).confidence).toBe(
+      0.95,
+    );
   });
 
   it('parses lags, block lengths, intervals and column mappings', () => {

@@ -32,6 +32,12 @@ export interface RelativeDifferenceResult {
   /** (1 + #{θ*_b − θ̂ ≥ θ̂ − r})/(B + 1) for H0: θ ≤ r, r = options.margin (relative). */
   pValue: number | null;
   pValueTwoSided: number | null;
+  /**
+   * Per resample b (in resample order), the deviations c̄*_b − c̄ and l̄*_b − l̄ of the resampled
+   * candidate and baseline means from the same blocks: any linear combination's resample
+   * deviations follow from them (`bootstrapMarginSet`). Null when nothing was resampled.
+   */
+  resampledDeviations: { candidate: Float64Array; baseline: Float64Array } | null;
   notes: string[];
 }
 
@@ -79,6 +85,7 @@ export function relativeDifferenceBootstrap(
     oneSidedLower: null,
     pValue: null,
     pValueTwoSided: null,
+    resampledDeviations: null,
   };
   if (n < MINIMUM_BOOTSTRAP_LENGTH) {
     return {
@@ -102,6 +109,8 @@ export function relativeDifferenceBootstrap(
   const identical = candidateLoss.every((x, t) => x === baselineLoss[t]);
   const notes: string[] = [];
   const deviations = new Float64Array(resamples);
+  const candidateDeviations = new Float64Array(resamples);
+  const baselineDeviations = new Float64Array(resamples);
   if (identical) {
     notes.push('candidate and baseline losses are identical; no resampling needed');
   } else {
@@ -116,8 +125,10 @@ export function relativeDifferenceBootstrap(
       const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
       for (let b = first; b < last; b++) {
         drawStationaryBlocks(n, sampler, source, blocks);
-        const c = candidateMean + resampleMeanDeviation(candidatePrefix, n, blocks);
-        const base = baselineMean + resampleMeanDeviation(baselinePrefix, n, blocks);
+        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+        const c = candidateMean + candidateDeviations[b]!;
+        const base = baselineMean + baselineDeviations[b]!;
         if (base === 0) zeroDenominators++;
         const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
         deviations[b] = theta - estimate;
@@ -140,6 +151,7 @@ export function relativeDifferenceBootstrap(
     oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
     pValue: inference.pValue,
     pValueTwoSided: inference.pValueTwoSided,
+    resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
     notes,
   };
 }
