@@ -25,6 +25,7 @@ describe('cells', () => {
     const sample = sampleReport().comparisons[0]!;
     const overall = {
       ...sample,
+      relativeChange: null,
       bootstrap: {
         ...sample.bootstrap,
         relativeInterval: { level: 0.95, lower: -0.2108, upper: -0.1221, method: 'basic' },
@@ -57,6 +58,7 @@ describe('cells', () => {
     expect(evidenceOf(overall, report)).toBe('better');
     const straddles = {
       ...overall,
+      relativeChange: { ...overall.relativeChange!, lower: -0.1, upper: 0.02 },
       bootstrap: {
         ...overall.bootstrap,
         relativeInterval: { level: 0.95, lower: -0.1, upper: 0.02, method: 'basic' },

@@ -28,7 +28,7 @@ describe('the difference over time', () => {
   });
 
   it('has no chart without periods, and no margin line without a relative margin', () => {
-    expect(differenceSeries(sampleReport())).toBeNull();
+    expect(differenceSeries({ ...sampleReport(), stability: null })).toBeNull();
     const series = differenceSeries(withPeriods(sampleReport()))!;
     expect(series.margin).toBeNull();
     expect(mermaidChart(series).filter((l) => l.trim().startsWith('line ['))).toHaveLength(2);
