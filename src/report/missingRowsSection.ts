@@ -37,6 +37,7 @@ export function missingRowsSection(report: ReportView): MissingRowsSection | nul
       `The baseline's loss is unknown on ${m.rowsWithoutLoss} of them (no actual value, or a loss that needs quantiles).`,
     );
   }
+  if (examples.length > 0) lines.push(`Examples: ${examples.join('; ')}.`);
   const rows = (groups: readonly MissingRowsGroup[]) =>
     groups.map((g) => [
       g.key,

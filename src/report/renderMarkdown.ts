@@ -119,7 +119,11 @@ function collapsed(summary: string, body: readonly string[]): string[] {
   return [`<details><summary>${esc(summary)}</summary>`, '', ...body, '', '</details>', ''];
 }
 
-/** Inline code when the text allows it (no backtick, no line break), else escaped text. */
+/**
+ * Inline code when the text is made of plain characters only, else escaped text: a code span
+ * would show HTML or a mention literally, but a reader (or a check) should never see raw markup
+ * from an input in the comment's source.
+ */
 function code(text: string): string {
-  return /[`\r\n]/.test(text) ? esc(text) : `\`${text}\``;
+  return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : esc(text);
 }
