@@ -53,6 +53,13 @@ describe('pull_request: sticky comment', () => {
     const report = JSON.parse(readFileSync(first.outputs.report!, 'utf8'));
     expect(report.verdict).toBe('pass');
     expect(path.dirname(first.outputs.report!)).toBe(first.dir);
+    // The self-contained HTML report, for upload as an artifact, and the chart in the summary.
+    expect(path.dirname(first.outputs['html-report']!)).toBe(first.dir);
+    const html = readFileSync(first.outputs['html-report']!, 'utf8');
+    expect(html).toMatch(/^<!doctype html>/);
+    expect(html).toContain('<svg');
+    expect(html).not.toMatch(/<script|<link/i);
+    expect(first.summary).toContain('```mermaid\n');
 
     api.requests.length = 0;
     const second = await runBundle({
