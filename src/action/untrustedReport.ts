@@ -2,6 +2,7 @@ import { InputError } from '../core/inputError.js';
 import type { FileSummary } from '../core/panel.js';
 import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
 import { COLUMN_ROLES, type ColumnMapping } from '../reading/columnMapping.js';
+import type { MissingRowsGroup, MissingRowsSummary } from '../report/missingRows.js';
 import type {
   BootstrapSummary,
   Comparison,
@@ -388,6 +389,37 @@ function readInputs(r: Reader): InputsSummary {
       .items()
       .map((q) => q.number()),
     intervalCoverage: readIntervalCoverage(r.field('intervalCoverage')),
+    ...(r.field('missingRows').value === undefined
+      ? {}
+      : { missingRows: readMissingRows(r.field('missingRows')) }),
+  };
+}
+
+/** At most this many groups per breakdown are kept from an untrusted report. */
+const MAX_MISSING_GROUPS = 50;
+
+function readMissingRows(r: Reader): MissingRowsSummary | null {
+  if (r.value === null || r.value === undefined) return null;
+  const groups = (g: Reader): MissingRowsGroup[] =>
+    g
+      .items()
+      .slice(0, MAX_MISSING_GROUPS)
+      .map((x) => ({
+        key: x.field('key').string(),
+        rows: x.field('rows').integer(),
+        first: x.field('first').stringOrNull(),
+        last: x.field('last').stringOrNull(),
+        meanBaselineLoss: x.field('meanBaselineLoss').numberOrNull(),
+      }));
+  return {
+    rows: r.field('rows').integer(),
+    first: r.field('first').stringOrNull(),
+    last: r.field('last').stringOrNull(),
+    meanBaselineLoss: r.field('meanBaselineLoss').numberOrNull(),
+    meanBaselineLossCommon: r.field('meanBaselineLossCommon').numberOrNull(),
+    rowsWithoutLoss: r.field('rowsWithoutLoss').integer(),
+    bySeries: groups(r.field('bySeries')),
+    byHorizon: groups(r.field('byHorizon')),
   };
 }
 

@@ -24,7 +24,9 @@ describe('golden comments', () => {
     });
   }
   it('every committed golden file has a scenario', () => {
-    const committed = readdirSync(GOLDEN).filter((f) => f.endsWith('.md')).sort();
+    const committed = readdirSync(GOLDEN)
+      .filter((f) => f.endsWith('.md'))
+      .sort();
     expect(committed).toEqual((SCENARIOS as { name: string }[]).map((s) => `${s.name}.md`).sort());
   });
 
@@ -33,7 +35,9 @@ describe('golden comments', () => {
     const beforeDetails = md.slice(0, md.indexOf('<details>'));
     // The 24 horizon rows are folded away; none of them is in the main part.
     expect(beforeDetails).not.toMatch(/^\| (1|24) \|/m);
-    expect(md).toMatch(/<details><summary>By horizon \(24\): for locating a change only, not verdicts<\/summary>/);
+    expect(md).toMatch(
+      /<details><summary>By horizon \(24\): for locating a change only, not verdicts<\/summary>/,
+    );
     expect(beforeDetails.split('\n')[2]).toMatch(/^\*\*The gate fails: /);
   });
 });
