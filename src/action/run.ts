@@ -5,6 +5,7 @@ import { InputError } from '../core/inputError.js';
 import { renderHtml } from '../report/renderHtml.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import type { Report } from '../report/reportModel.js';
+import { reportSections } from '../report/reportSections.js';
 import { type CommentPlan, planComment } from './commentTarget.js';
 import { type ActionDependencies, runnerDependencies } from './dependencies.js';
 import {
@@ -36,8 +37,7 @@ import { MAX_REPORT_BYTES, parseUntrustedReport } from './untrustedReport.js';
 export async function run(deps: ActionDependencies = runnerDependencies()): Promise<void> {
   try {
     const report = await gate(deps);
-    if (report.verdict === 'fail')
-      deps.log.setFailed(`skillgate: the gate failed. ${report.headline}`);
+    if (report.verdict === 'fail') deps.log.setFailed(`skillgate: ${summaryLine(report)}`);
   } catch (error) {
     if (error instanceof InputError) {
       deps.log.setFailed(`skillgate: ${error.describe()}`);
@@ -114,6 +114,12 @@ async function gate(deps: ActionDependencies): Promise<Report> {
   return report;
 }
 
+/** The comment's first paragraph as one line: the verdict, what decided it, the change. */
+function summaryLine(report: Report): string {
+  const s = reportSections(report);
+  return `${s.lead} ${s.change}`;
+}
+
 async function obtainReport(deps: ActionDependencies, action: ActionSettings): Promise<Report> {
   const source = action.source;
   if (source.kind === 'compare') {
@@ -177,7 +183,7 @@ async function writeText(file: string, text: string): Promise<void> {
 
 function annotate(deps: ActionDependencies, report: Report, name: string): void {
   const title = name === '' ? 'skillgate' : `skillgate · ${name}`;
-  const message = `${report.verdict.toUpperCase()}: ${report.headline}`;
+  const message = `${report.verdict.toUpperCase()}: ${summaryLine(report)}`;
   if (report.verdict === 'fail') deps.log.error(message, { title });
   else if (report.verdict === 'warn') deps.log.warning(message, { title });
   else deps.log.notice(message, { title });

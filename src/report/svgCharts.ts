@@ -261,9 +261,27 @@ export function bootstrapHistogramSvg(input: {
       `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}</text>`,
     );
   }
-  const vline = (v: number, colour: string, dash: string, label: string, anchor: string) =>
-    `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/>` +
-    `<text x="${x(v).toFixed(1)}" y="${M.top + 10}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml(label)}</text>`;
+  const vline = (
+    v: number,
+    colour: string,
+    dash: string,
+    label: string,
+    side: 'start' | 'end',
+    row: number,
+  ) => {
+    // Keep the label inside the plot: flip it to the other side of its line when it would not fit.
+    const width = label.length * 6.2;
+    const anchor =
+      side === 'end' && x(v) - width < M.left
+        ? 'start'
+        : side === 'start' && x(v) + width > W - M.right
+          ? 'end'
+          : side;
+    return (
+      `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/>` +
+      `<text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml(label)}</text>`
+    );
+  };
   body.push(
     vline(
       boundary,
@@ -271,6 +289,7 @@ export function bootstrapHistogramSvg(input: {
       '4 3',
       ` H0 boundary ${fmt(boundary)} `,
       observed >= boundary ? 'end' : 'start',
+      0,
     ),
   );
   body.push(
@@ -280,6 +299,7 @@ export function bootstrapHistogramSvg(input: {
       '0',
       ` observed ${fmt(observed)} `,
       observed >= boundary ? 'start' : 'end',
+      1,
     ),
   );
   body.push(

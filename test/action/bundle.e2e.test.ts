@@ -89,7 +89,7 @@ describe('pull_request: sticky comment', () => {
     expect(third.code).toBe(1);
     expect(third.outputs.verdict).toBe('fail');
     expect(third.stdout).toMatch(/^::error title=skillgate::FAIL: /m);
-    expect(third.stdout).toMatch(/^::error::skillgate: the gate failed\./m);
+    expect(third.stdout).toMatch(/^::error::skillgate: The gate fails: both tests find evidence/m);
     expect(stickyOn(7)).toHaveLength(1);
     expect(stickyOn(7)[0]!.id).toBe(created.id);
     expect(stickyOn(7)[0]!.body).toContain('### skillgate: FAIL');
