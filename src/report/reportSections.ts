@@ -114,19 +114,31 @@ function mainTable(report: ReportView, overall: ComparisonView): ReportTable {
       ? VERDICT_WORD[gate]
       : `${VERDICT_WORD[gate]} (tests alone: ${overall.verdict})`;
   const scope = report.inputs.rowsDropped.baseline > 0 ? 'overall, common rows' : 'overall';
+  const rows: string[][] = [
+    [
+      scope,
+      significant(overall.meanBaselineLoss),
+      significant(overall.meanCandidateLoss),
+      changeCell(overall),
+      evidenceOf(overall, report),
+      verdict,
+    ],
+  ];
+  const recent = report.stability?.recent ?? null;
+  if (recent !== null) {
+    rows.push([
+      `recent: ${recent.firstTimestamp ?? 'n/a'} to ${recent.lastTimestamp ?? 'n/a'}`,
+      significant(recent.meanBaselineLoss),
+      significant(recent.meanCandidateLoss),
+      changeCell(recent),
+      evidenceOf(recent, report),
+      recent.verdict,
+    ]);
+  }
   return table(
     ['scope', 'baseline loss', 'candidate loss', changeHeader([overall]), 'evidence', 'verdict'],
     ['left', 'right', 'right', 'right', 'left', 'left'],
-    [
-      [
-        scope,
-        significant(overall.meanBaselineLoss),
-        significant(overall.meanCandidateLoss),
-        changeCell(overall),
-        evidenceOf(overall, report),
-        verdict,
-      ],
-    ],
+    rows,
   );
 }
 
@@ -138,6 +150,13 @@ function mainNotes(report: ReportView, reasons: readonly DecidingReason[]): stri
   }
   for (const r of report.reasons) {
     if (!r.startsWith('The candidate lacks')) notes.push(r);
+  }
+  const f = report.stability?.fluctuation ?? null;
+  if (f?.rejected) {
+    const spans = f.worsePeriods.map((p) => `${p.start} to ${p.end}`).join(', ');
+    notes.push(
+      `The relative accuracy changes over time (fluctuation test, Giacomini & Rossi 2010: ${significant(f.statistic, 3)} > ${significant(f.criticalValue, 3)})${spans === '' ? '' : `; the candidate is significantly worse in windows covering ${spans}`}.`,
+    );
   }
   return notes;
 }

@@ -97,4 +97,30 @@ describe('the deciding reason', () => {
       'on the most recent stretch alone (2026-10-01 to 2026-10-29, 29 time points) the gate would warn: mean loss +4.00%',
     );
   });
+
+  it('the recent stretch gets its own row, and a changing accuracy a note', () => {
+    const base = sampleReport({ verdict: 'warn' });
+    const r: ReportView = {
+      ...base,
+      stability: {
+        periods: base.stability?.periods ?? [],
+        recent: recentWarn(),
+        fluctuation: {
+          statistic: 3.1,
+          criticalValue: 2.4,
+          mu: 0.3,
+          windowSize: 72,
+          rejected: true,
+          peak: { start: '2026-09-01', end: '2026-10-29' },
+          worsePeriods: [{ start: '2026-09-10', end: '2026-10-29' }],
+        },
+      },
+    };
+    const md = renderMarkdown(r);
+    const main = md.slice(0, md.indexOf('<details>'));
+    expect(main).toMatch(/^\| recent: 2026-10-01 to 2026-10-29 \| 4\.597 \| 3\.839 \| \+4\.00% /m);
+    expect(main).toContain(
+      'fluctuation test, Giacomini &amp; Rossi 2010: 3.10 &gt; 2.40); the candidate is significantly worse in windows covering 2026-09-10 to 2026-10-29.',
+    );
+  });
 });

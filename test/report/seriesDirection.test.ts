@@ -3,6 +3,7 @@ import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { evaluatePanel } from '../../src/comparison/evaluatePanel.js';
 import { createRandomSource, type RandomSource } from '../../src/random/randomSource.js';
 import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { renderMarkdown } from '../../src/report/renderMarkdown.js';
 import type { Report } from '../../src/report/reportModel.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
 
@@ -88,4 +89,19 @@ describe('per-series direction follows the evidence, not the policy', () => {
       }
     });
   }
+});
+
+describe('the comment says the same', () => {
+  it('under superiority with a 10% margin: the better series reads "better", not "worse"', () => {
+    const md = renderMarkdown(evaluate({ policy: 'superiority', margin: '0.10' }));
+    expect(md).toContain('<summary>By series (5): 1 worse, 1 better</summary>');
+    expect(md).toMatch(/^\| planted-better \| [^|]+ \| [^|]+ \| -\d[^|]*% \| better \| /m);
+    expect(md).toMatch(/^\| planted-worse \| [^|]+ \| [^|]+ \| \+\d[^|]*% \| worse \| /m);
+    expect(md).toMatch(/^\| same-a \| [^|]+ \| [^|]+ \| [^|]+ \| no clear difference \| /m);
+  });
+
+  it('under non-inferiority the planted worse series is counted as worse', () => {
+    const md = renderMarkdown(evaluate({ policy: 'non-inferiority', margin: '0.10' }));
+    expect(md).toContain('<summary>By series (5): 1 worse, 1 better</summary>');
+  });
 });
