@@ -1,3 +1,4 @@
+import { formatPValue } from '../core/formatNumber.js';
 import type { Comparison } from './reportModel.js';
 import type { ComparisonView, ReportView } from './reportView.js';
 
@@ -30,13 +31,8 @@ export function percent(x: number | null | undefined, digits = PERCENT_DIGITS): 
   return `${x > 0 ? '+' : ''}${text}%`;
 }
 
-/** A p-value: four decimals, with its ends as "< 0.0001" and "> 0.9999". */
-export function pValue(p: number | null | undefined): string {
-  if (p === null || p === undefined || !Number.isFinite(p)) return 'n/a';
-  if (p < 0.0001) return '< 0.0001';
-  if (p > 0.9999) return '> 0.9999';
-  return p.toFixed(4);
-}
+/** A p-value: four decimals, with its ends as "< 0.0001" and "> 0.9999" (core/formatNumber). */
+export const pValue = formatPValue;
 
 /** An interval for E[L_c]/E[L_b] − 1; a null end is unbounded on that side. */
 export interface RelativeInterval {

@@ -29,7 +29,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   );
   out.push(wrap(`${s.lead} ${s.change}`, 100), '');
   out.push(...textTable(s.main, paint));
-  out.push(paint('2', wrap(s.intervalNote, 100)));
+  out.push('', paint('2', wrap(s.intervalNote, 100)));
   const chart = differenceSeries(view);
   if (chart !== null) out.push('', clean(sparklineText(chart)));
   if (s.notes.length > 0) out.push('');
