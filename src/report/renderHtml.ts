@@ -158,6 +158,7 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
     htmlTable(s.details),
     `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join('')}</ul>`,
   );
+  if (s.checks !== null) out.push('<h2>Backtest checks</h2>', htmlTable(s.checks));
   out.push(
     '<h2>Inputs and coverage</h2>',
     htmlTable(s.inputs.table),

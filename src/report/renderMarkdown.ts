@@ -88,6 +88,10 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
       ]),
     );
   }
+  if (s.checks !== null) {
+    const failing = s.checks.rows.filter((r) => r[1] !== 'ok').length;
+    lines.push(...collapsed(`Backtest checks (${failing} not ok)`, markdownTable(s.checks)));
+  }
   lines.push(
     ...collapsed('Inputs and coverage', [
       ...markdownTable(s.inputs.table),

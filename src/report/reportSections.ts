@@ -39,6 +39,8 @@ export interface ReportSections {
   readonly series: { readonly summary: string; readonly table: ReportTable } | null;
   readonly paths: { readonly summary: string; readonly table: ReportTable | null } | null;
   readonly inputs: { readonly table: ReportTable; readonly lines: readonly string[] };
+  /** The backtest checks, when the report has them. */
+  readonly checks: ReportTable | null;
   readonly settings: ReportTable;
 }
 
@@ -93,6 +95,7 @@ export function reportSections(report: ReportView, options: SectionOptions = {})
     series: seriesSection(report),
     paths: pathSection(report),
     inputs: inputSection(report, paths),
+    checks: checksTable(report),
     settings: settingsTable(options_),
   };
 }
@@ -346,6 +349,16 @@ function inputSection(report: ReportView, paths: (f: string) => string): ReportS
     ),
     lines,
   };
+}
+
+function checksTable(report: ReportView): ReportTable | null {
+  const checks = report.integrity?.checks ?? [];
+  if (checks.length === 0) return null;
+  return table(
+    ['check', 'status', 'cases', 'examples'],
+    ['left', 'left', 'right', 'left'],
+    checks.map((c) => [c.id, c.status, String(c.count), c.examples.slice(0, 3).join('; ')]),
+  );
 }
 
 /** 1–24, or 1, 3, 6. */

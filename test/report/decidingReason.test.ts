@@ -88,6 +88,12 @@ describe('the deciding reason', () => {
     };
     expect(kinds(r)).toEqual(['backtest-check-failed', 'both-tests-agree', 'worse-lately']);
     expect(decidingReasons(r)[0]?.text).toContain('future-origin');
+    const md = renderMarkdown(r);
+    expect(md.split('\n')[2]).toMatch(
+      /^\*\*The gate fails: the backtest check "future-origin" failed \(3 cases\)/,
+    );
+    expect(md).toContain('<details><summary>Backtest checks (1 not ok)</summary>');
+    expect(md).toContain('| future-origin | fail | 3 | north 2026-03-04 |');
     const warn: ReportView = {
       ...sampleReport({ verdict: 'warn' }),
       stability: { fluctuation: null, periods: [], recent: recentWarn() },
