@@ -18,6 +18,7 @@ import type {
 import type { Settings } from '../settings/settings.js';
 import { MAX_PERIODS } from '../stability/periodBuckets.js';
 import type { FluctuationSummary, Stability, TimeSpan } from '../stability/stabilityModel.js';
+import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 
 /** Larger report files are refused before parsing. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -339,7 +340,26 @@ function readBootstrap(r: Reader): BootstrapSummary {
     pValue: r.field('pValue').numberOrNull(),
     pValueTwoSided: r.field('pValueTwoSided').numberOrNull(),
     decisionPValue: r.field('decisionPValue').numberOrNull(),
+    ...(r.field('distribution').value === undefined
+      ? {}
+      : { distribution: readHistogram(r.field('distribution')) }),
     notes: r.field('notes').strings(),
+  };
+}
+
+/** At most this many bins of a bootstrap histogram are accepted from an untrusted report. */
+const MAX_HISTOGRAM_BINS = 200;
+
+function readHistogram(r: Reader): ResampleHistogram | null {
+  if (r.value === null) return null;
+  const counts = r.field('counts').items();
+  if (counts.length === 0 || counts.length > MAX_HISTOGRAM_BINS) {
+    r.field('counts').fail(`an array of 1 to ${MAX_HISTOGRAM_BINS} counts`);
+  }
+  return {
+    lower: r.field('lower').number(),
+    upper: r.field('upper').number(),
+    counts: counts.map((c) => c.integer()),
   };
 }
 
