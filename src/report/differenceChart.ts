@@ -46,8 +46,11 @@ export function periodLabel(timestamp: string): string {
 }
 
 const BLOCKS = '▁▂▃▄▅▆▇█';
-/** Line colours in order: the difference (dark), zero (grey), the margin (rust). */
-const PALETTE = '#1f2328, #8c959f, #b4501a';
+/**
+ * Line colours in order: the difference (dark), zero (grey), the margin (rust). Colour names, not
+ * hex codes: "#1…" in a comment reads to GitHub like an issue reference.
+ */
+const PALETTE = 'black, darkgray, sienna';
 
 /**
  * One line of block characters, one per value, scaled between the smallest and largest value
