@@ -49,14 +49,16 @@ export function decidingReasons(report: ReportView): DecidingReason[] {
   const found: DecidingReason[] = [];
   if (overall !== undefined) found.push(comparisonReason(report));
 
-  for (const check of report.integrity?.checks ?? []) {
+  const integrity = report.integrity;
+  for (const check of integrity.checks) {
     if (check.status === 'ok') continue;
     found.push({
       kind: check.status === 'fail' ? 'backtest-check-failed' : 'backtest-check-warned',
-      verdict: check.status,
-      text: `the backtest check "${check.id}" ${check.status === 'fail' ? 'failed' : 'warned'}${
-        check.message === undefined ? '' : `: ${check.message}`
-      } (${check.count} ${check.count === 1 ? 'case' : 'cases'})`,
+      // With --backtest-checks report the findings are shown only.
+      verdict: integrity.affectsVerdict ? check.status : 'pass',
+      text: `the backtest check ${check.id} ${check.status === 'fail' ? 'failed' : 'warned'}: ${lowerFirst(
+        check.summary,
+      ).replace(/\.$/, '')}`,
     });
   }
 
@@ -97,6 +99,10 @@ export function decidingReasons(report: ReportView): DecidingReason[] {
     .map((r, i) => ({ r, s: score(r, i) }))
     .sort((a, b) => b.s - a.s)
     .map((x) => x.r);
+}
+
+function lowerFirst(text: string): string {
+  return text.length === 0 ? text : text[0]!.toLowerCase() + text.slice(1);
 }
 
 /** Why the overall comparison came out as it did. */

@@ -1,6 +1,7 @@
 import { chartCaption, differenceSeries, mermaidChart, sparklineText } from './differenceChart.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { missingRowsSection } from './missingRowsSection.js';
+import { backtestChecksSection } from './renderBacktestChecks.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
 import type { ReportTable } from './reportTable.js';
@@ -88,9 +89,15 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
       ]),
     );
   }
-  if (s.checks !== null) {
-    const failing = s.checks.rows.filter((r) => r[1] !== 'ok').length;
-    lines.push(...collapsed(`Backtest checks (${failing} not ok)`, markdownTable(s.checks)));
+  const checks = backtestChecksSection(report);
+  if (checks.length > 0) {
+    lines.push(
+      `<details><summary>Backtest checks: ${esc(report.integrity.outcome)}</summary>`,
+      '',
+      ...checks,
+      '</details>',
+      '',
+    );
   }
   lines.push(
     ...collapsed('Inputs and coverage', [

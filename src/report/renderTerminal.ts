@@ -1,4 +1,5 @@
 import { differenceSeries, sparklineText } from './differenceChart.js';
+import { backtestChecksLines } from './renderBacktestChecks.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
 import type { ReportTable } from './reportTable.js';
@@ -40,6 +41,8 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   }
   if (s.series !== null) out.push('', wrap(s.series.summary, 100));
   if (s.paths !== null) out.push('', wrap(s.paths.summary, 100));
+  const checks = backtestChecksLines(report, clean);
+  if (checks.length > 0) out.push('', ...checks);
   out.push('', paint('2', clean(s.inputs.lines[1] ?? '')));
   if (s.changedSettings !== '') out.push(paint('2', clean(`settings: ${s.changedSettings}`)));
   return `${out.join('\n')}\n`;

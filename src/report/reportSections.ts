@@ -352,10 +352,10 @@ function inputSection(report: ReportView, paths: (f: string) => string): ReportS
 }
 
 function checksTable(report: ReportView): ReportTable | null {
-  const checks = report.integrity?.checks ?? [];
+  const checks = report.integrity.checks;
   if (checks.length === 0) return null;
   return table(
-    ['check', 'status', 'cases', 'examples'],
+    ['check', 'status', 'found', 'examples'],
     ['left', 'left', 'right', 'left'],
     checks.map((c) => [c.id, c.status, String(c.count), c.examples.slice(0, 3).join('; ')]),
   );

@@ -1,4 +1,5 @@
 import { InputError } from '../core/inputError.js';
+import { FREQUENCY_SYNTAX, parseFrequency } from '../integrity/frequency.js';
 import type { LossName } from '../losses/lossName.js';
 import { parseColumnMapping } from '../reading/columnMapping.js';
 import { defaultConfidence } from './defaultConfidence.js';
@@ -106,6 +107,10 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     weights: bool('weights'),
     adjust: value('adjust') as Settings['adjust'],
     top: integer('top', 0, 10_000),
+    frequency: parseFrequencyOption(value('frequency'), label('frequency')),
+    folds: optional('folds'),
+    embargo: integer('embargo', 0, 1_000_000),
+    backtestChecks: value('backtest-checks') as Settings['backtestChecks'],
     json: optional('json'),
     markdown: optional('markdown'),
     html: optional('html'),
@@ -161,4 +166,9 @@ function parseBlockLength(text: string, label: string): BlockLengthRule {
     throw new InputError(`${label} must be auto or a number ≥ 1`, { value: text });
   }
   return { kind: 'fixed', length };
+}
+
+function parseFrequencyOption(text: string, label: string): string {
+  if (text === 'auto' || parseFrequency(text) !== null) return text;
+  throw new InputError(`${label} must be ${FREQUENCY_SYNTAX}`, { value: text });
 }

@@ -79,21 +79,37 @@ describe('the deciding reason', () => {
     const r: ReportView = {
       ...sampleReport({ verdict: 'fail' }),
       integrity: {
+        mode: 'enforce',
+        outcome: 'fail',
+        affectsVerdict: true,
+        frequency: null,
         checks: [
-          { id: 'future-origin', status: 'fail', count: 3, examples: ['north 2026-03-04'] },
-          { id: 'gaps', status: 'ok', count: 0, examples: [] },
+          {
+            id: 'look-ahead',
+            status: 'fail',
+            count: 3,
+            examples: ['north 2026-03-04'],
+            summary: 'Three rows were issued on or after the day they forecast.',
+          },
+          { id: 'time-spans', status: 'ok', count: 0, examples: [], summary: 'Spans agree.' },
         ],
+        notRun: [],
       },
       stability: { fluctuation: null, periods: [], recent: recentWarn() },
     };
     expect(kinds(r)).toEqual(['backtest-check-failed', 'both-tests-agree', 'worse-lately']);
-    expect(decidingReasons(r)[0]?.text).toContain('future-origin');
     const md = renderMarkdown(r);
     expect(md.split('\n')[2]).toMatch(
-      /^\*\*The gate fails: the backtest check "future-origin" failed \(3 cases\)/,
+      /^\*\*The gate fails: the backtest check look-ahead failed: three rows were issued on or after the day they forecast\.\*\*/,
     );
-    expect(md).toContain('<details><summary>Backtest checks (1 not ok)</summary>');
-    expect(md).toContain('| future-origin | fail | 3 | north 2026-03-04 |');
+    expect(md).toContain('<details><summary>Backtest checks: fail</summary>');
+    // Shown only (--backtest-checks report): the check no longer decides.
+    const shownOnly = {
+      ...r,
+      verdict: 'pass' as const,
+      integrity: { ...r.integrity, mode: 'report' as const, affectsVerdict: false },
+    };
+    expect(kinds(shownOnly)[0]).toBe('both-tests-agree');
     const warn: ReportView = {
       ...sampleReport({ verdict: 'warn' }),
       stability: { fluctuation: null, periods: [], recent: recentWarn() },
