@@ -52,7 +52,9 @@ const lookAhead = peekingReport.integrity.checks.find((c) => c.id === 'look-ahea
 console.log(
   `\nThe peeking candidate's backtest check look-ahead: ${lookAhead.status}, ${lookAhead.count} rows (e.g. ${lookAhead.examples[0]}).`,
 );
-console.log(`\nReports written to ${path.relative(process.cwd(), out)}/ (JSON, Markdown and a self-contained HTML report to open in a browser).`);
+console.log(
+  `\nReports written to ${path.relative(process.cwd(), out)}/ (JSON, Markdown and a self-contained HTML report to open in a browser).`,
+);
 if (improved !== 0 || regressed !== 1 || peeking !== 1 || lookAhead.status !== 'fail') {
   console.error(
     'demo: unexpected verdicts (the improved candidate should pass, the regressed one fail, the peeking one fail its look-ahead check)',
