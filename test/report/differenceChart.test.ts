@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   differenceSeries,
@@ -52,5 +53,31 @@ describe('the difference over time', () => {
     expect(md).toMatch(/```mermaid\n%%\{init: .*\}%%\nxychart-beta\n/);
     expect(md).toMatch(/`change per period, 2026-03-02 → 2026-10-25: [▁▂▃▄▅▆▇█]{34} \(from /);
     expect(renderTerminal(view, { color: false })).toMatch(/change per period, .*[▁▂▃▄▅▆▇█]{34}/);
+  });
+});
+
+describe('the chart, for any input text (property)', () => {
+  it('labels never carry a quote, backtick, bracket or line break; the block has two fences', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.string({ unit: 'grapheme' }), { minLength: 2, maxLength: 8 }),
+        (labels) => {
+          for (const l of labels) expect(periodLabel(l)).toMatch(/^[A-Za-z0-9 .:/+-]{0,16}$/);
+          const periods = weeklyPeriods(labels.length).map((p, i) => ({
+            ...p,
+            start: labels[i]!,
+            end: labels[i]!,
+          }));
+          const text = mermaidChart(differenceSeries(withPeriods(sampleReport(), periods))!).join(
+            '\n',
+          );
+          expect(text.match(/```/g)).toHaveLength(2);
+          expect(sparkline(periods.map((p) => p.relativeDifference ?? 0))).toHaveLength(
+            labels.length,
+          );
+        },
+      ),
+      { numRuns: 200, seed: 9 },
+    );
   });
 });
