@@ -10230,9 +10230,9 @@ var require_ms = __commonJS({
       return ms + "ms";
     }
     function fmtLong(ms) {
-      return plural(ms, d, "day") || plural(ms, h, "hour") || plural(ms, m, "minute") || plural(ms, s, "second") || ms + " ms";
+      return plural2(ms, d, "day") || plural2(ms, h, "hour") || plural2(ms, m, "minute") || plural2(ms, s, "second") || ms + " ms";
     }
-    function plural(ms, n, name) {
+    function plural2(ms, n, name) {
       if (ms < n) {
         return;
       }
@@ -13077,6 +13077,155 @@ function noChecks(mode, reason) {
   };
 }
 
+// src/core/formatNumber.ts
+function formatNumber(x, digits = 4) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  if (x === 0) return "0";
+  const magnitude = Math.abs(x);
+  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
+  return String(Number(x.toPrecision(digits)));
+}
+function formatSignedPercent(x) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  const text = formatNumber(x * 100, 3);
+  return `${x > 0 ? "+" : ""}${text}%`;
+}
+function formatPValue(p) {
+  if (p === null || p === void 0 || !Number.isFinite(p)) return "n/a";
+  return p < 1e-4 ? "< 0.0001" : p.toFixed(4);
+}
+
+// src/settings/defaultConfidence.ts
+function defaultConfidence(alpha) {
+  return Number((1 - 2 * alpha).toPrecision(15));
+}
+function confidenceOverridesDefault(confidence, alpha) {
+  return confidence !== defaultConfidence(alpha);
+}
+
+// src/report/relativeChangeText.ts
+function relativeChangeText(c) {
+  const rc = c.relativeChange;
+  const point = formatSignedPercent(c.relativeDifference);
+  if (rc === null) return point;
+  const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
+  if (pieces.length === 0) return `${point} \u2205`;
+  return `${point} ${pieces.map(pieceText).join(" \u222A ")}`;
+}
+function pieceText(p) {
+  const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
+  const upper = p.upper === null ? "+\u221E" : formatSignedPercent(p.upper);
+  return `[${lower}, ${upper}]`;
+}
+function intervalNote(report) {
+  const { confidence, alpha } = report.settings;
+  const pct = `${formatNumber(confidence * 100, 3)}%`;
+  if (confidenceOverridesDefault(confidence, alpha)) {
+    return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
+  }
+  return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+}
+
+// src/stability/calendarDate.ts
+function calendarDateOf(label) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== "datetime") return null;
+  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
+  const dayNumber = Math.floor(seconds / 86400);
+  return { ...civilFromDays(dayNumber), dayNumber };
+}
+function civilFromDays(days) {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+// src/stability/describeSpan.ts
+function describeSpan(first, last, points, kind) {
+  const a = kind === "datetime" ? calendarDateOf(first) : null;
+  const b = kind === "datetime" ? calendarDateOf(last) : null;
+  if (a !== null && b !== null) {
+    const days = b.dayNumber - a.dayNumber + 1;
+    if (days >= 90) return plural(Math.round(days / 30.44), "month");
+    if (days >= 14) return plural(Math.round(days / 7), "week");
+    if (days >= 2) return plural(days, "day");
+  }
+  return plural(points, "time point");
+}
+function plural(count, unit) {
+  return `${count} ${unit}${count === 1 ? "" : "s"}`;
+}
+
+// src/stability/stabilityFinding.ts
+function stabilityFinding(stability, hypothesis, settings, kind) {
+  if (stability === null) return { effect: null, headline: "", reasons: [] };
+  const sentences = [];
+  const reasons = [];
+  const recent = stability.recent;
+  const recentWorse = recent !== null && recent.verdict === "fail";
+  if (recent !== null && recentWorse) {
+    const where = recentWords(recent, kind);
+    const change = changeWords(recent);
+    sentences.push(
+      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
+    );
+    reasons.push(
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+    );
+  }
+  const f = stability.fluctuation;
+  const stretchWorse = f !== null && f.rejected && f.worsePeriods.length > 0;
+  if (f !== null && stretchWorse) {
+    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
+    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
+    sentences.push(
+      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+    );
+    reasons.push(
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+    );
+  }
+  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
+  const gate = settings.stabilityGate;
+  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  return {
+    effect: gate === "off" ? null : gate,
+    headline: [...sentences, response].join(" "),
+    reasons
+  };
+}
+function recentWords(c, kind) {
+  const first = c.firstTimestamp ?? "?";
+  const last = c.lastTimestamp ?? "?";
+  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
+}
+function changeWords(c) {
+  const rel = c.relativeDifference;
+  if (rel === null) {
+    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
+  }
+  const rc = c.relativeChange;
+  const shown = `${formatSignedPercent(rel)} mean loss`;
+  if (rc === null) return shown;
+  const single = rc.pieces === void 0 || rc.pieces.length === 1;
+  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
+  if (single && rc.lower !== null && rc.upper !== null) {
+    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
+  }
+  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function spanWords(span) {
+  return `${span.start} to ${span.end}`;
+}
+
 // src/report/buildReport.ts
 function buildReport(parts) {
   const { inputs, settings, hypothesis } = parts;
@@ -13105,12 +13254,16 @@ function buildReport(parts) {
       integrity.outcome === "fail" ? `A backtest check failed (${which.join(", ")}): the comparison cannot be trusted until the backtest is fixed.` : `A backtest check warns (${which.join(", ")}): look at the backtest checks before trusting the comparison.`
     );
   }
-  const verdict = worstVerdict(verdicts);
+  const stability = parts.stability ?? null;
+  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  reasons.push(...finding.reasons);
+  const gateVerdict = worstVerdict(verdicts);
+  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
   return {
     tool: { name: "skillgate", version: parts.version },
     name: settings.name,
     verdict,
-    headline: headline(verdict, overall, hypothesis),
+    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(" ").trim(),
     policy: {
       policy: settings.policy,
       agreement: settings.agreement,
@@ -13130,7 +13283,7 @@ function buildReport(parts) {
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
     integrity,
-    stability: parts.stability ?? null
+    stability
   };
 }
 function headline(verdict, overall, hypothesis) {
@@ -13203,6 +13356,57 @@ function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
   };
 }
 
+// src/aggregation/lossSeries.ts
+function aggregateByTime(panel, losses, rows, weights = null) {
+  const points = panel.timestamps.length;
+  const sumB = new Float64Array(points);
+  const sumC = new Float64Array(points);
+  const count = new Int32Array(points);
+  const weightSum = weights === null ? null : new Float64Array(points);
+  let maxHorizon = 1;
+  let rowCount = 0;
+  const included = losses.included;
+  const total = rows === void 0 ? panel.size : rows.length;
+  for (let r = 0; r < total; r++) {
+    const i = rows === void 0 ? r : rows[r];
+    if (included !== null && included[i] === 0) continue;
+    const t = panel.time[i];
+    const w = weights === null ? 1 : weights[i];
+    sumB[t] += w * losses.baseline[i];
+    sumC[t] += w * losses.candidate[i];
+    if (weightSum !== null) weightSum[t] += w;
+    count[t]++;
+    rowCount++;
+    const h = panel.horizon[i];
+    if (h > maxHorizon) maxHorizon = h;
+  }
+  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
+  let n = 0;
+  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
+  const time = new Int32Array(n);
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const rowsAt = new Int32Array(n);
+  let k = 0;
+  for (let t = 0; t < points; t++) {
+    const m = denominator(t);
+    if (count[t] === 0 || m <= 0) continue;
+    time[k] = t;
+    baseline[k] = sumB[t] / m;
+    candidate[k] = sumC[t] / m;
+    rowsAt[k] = count[t];
+    k++;
+  }
+  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
+}
+function lossDifferential(series, relativeMargin) {
+  const n = series.baseline.length;
+  const d = new Float64Array(n);
+  const factor = 1 + relativeMargin;
+  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
+  return d;
+}
+
 // src/statistics/mean.ts
 function mean(x) {
   const n = x.length;
@@ -13215,26 +13419,226 @@ function mean(x) {
   return first + residual / n;
 }
 
-// src/stability/calendarDate.ts
-function calendarDateOf(label) {
-  const reading = readLabel(label);
-  if (typeof reading === "string" || reading.kind !== "datetime") return null;
-  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
-  const dayNumber = Math.floor(seconds / 86400);
-  return { ...civilFromDays(dayNumber), dayNumber };
+// src/statistics/autocovariance.ts
+function autocovariances(x, maxLag) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("autocovariances: the series is empty");
+  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
+    throw new RangeError(
+      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
+    );
+  }
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) {
+    let sum = 0;
+    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
+    gamma[k] = sum / n;
+  }
+  return gamma;
 }
-function civilFromDays(days) {
-  const z = days + 719468;
-  const era = Math.floor(z / 146097);
-  const doe = z - era * 146097;
-  const yoe = Math.floor(
-    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
-  );
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
-  const month = mp < 10 ? mp + 3 : mp - 9;
-  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+
+// src/statistics/bartlettLongRunVariance.ts
+function bartlettLongRunVariance(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
+  return sum;
+}
+
+// src/statistics/neweyWestLag.ts
+function neweyWestBandwidth(x) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
+  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
+  const sigma = autocovariances(x, pilotLag);
+  let sum = 0;
+  let weighted = 0;
+  for (let j = 1; j <= pilotLag; j++) {
+    sum += sigma[j];
+    weighted += j * sigma[j];
+  }
+  const s0 = sigma[0] + 2 * sum;
+  const s1 = 2 * weighted;
+  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
+  return { pilotLag, s0, s1, bandwidth };
+}
+function selectLag(x, rule, horizon) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
+  if (!Number.isInteger(horizon) || horizon < 1) {
+    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
+  }
+  const notes = [];
+  const cap = (lag, what) => {
+    if (lag <= n - 1) return lag;
+    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
+    return n - 1;
+  };
+  switch (rule.kind) {
+    case "auto": {
+      const bandwidth = neweyWestBandwidth(x);
+      let lag = Math.floor(bandwidth.bandwidth);
+      if (bandwidth.s0 === 0) {
+        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
+      }
+      if (lag < horizon - 1) {
+        notes.push(
+          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
+        );
+        lag = horizon - 1;
+      }
+      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
+    }
+    case "horizon":
+      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
+    case "fixed": {
+      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
+        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
+      }
+      if (rule.lag < horizon - 1) {
+        notes.push(
+          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
+        );
+      }
+      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
+    }
+  }
+}
+
+// src/statistics/prewhitenedLongRunVariance.ts
+var PREWHITENING_CAP = 0.97;
+function prewhitenedLongRunVariance(y, rule, horizon) {
+  const n = y.length;
+  if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
+  const centre = mean(y);
+  let cross = 0;
+  let square = 0;
+  for (let t = 1; t < n; t++) {
+    const previous = y[t - 1] - centre;
+    cross += (y[t] - centre) * previous;
+    square += previous * previous;
+  }
+  const raw = square === 0 ? 0 : cross / square;
+  const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
+  const residuals = new Float64Array(n - 1);
+  for (let t = 1; t < n; t++) {
+    residuals[t - 1] = y[t] - centre - coefficient * (y[t - 1] - centre);
+  }
+  const lag = selectLag(residuals, rule, horizon).lag;
+  const recolour = (1 - coefficient) ** 2;
+  return {
+    longRunVariance: bartlettLongRunVariance(residuals, lag) / recolour,
+    coefficient,
+    lag
+  };
+}
+
+// src/stability/fluctuationCriticalValues.ts
+var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var TABLE = {
+  two: [
+    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
+    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
+    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
+  ],
+  one: [
+    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
+    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
+    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
+  ]
+};
+function fluctuationCriticalValue(mu, alpha, sides) {
+  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
+  const columns = TABLE[sides];
+  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
+  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
+  for (let i = 0; i + 1 < columns.length; i++) {
+    const lo2 = columns[i];
+    const hi2 = columns[i + 1];
+    if (alpha > lo2.alpha && alpha < hi2.alpha) {
+      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
+      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
+    }
+  }
+  return null;
+}
+function interpolateInMu(values, mu) {
+  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
+  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
+  const w = Math.min(Math.max(position - i, 0), 1);
+  return (1 - w) * values[i] + w * values[i + 1];
+}
+
+// src/stability/rollingStatistic.ts
+function rollingStatistic(d, m, longRunVariance) {
+  const n = d.length;
+  if (!Number.isInteger(m) || m < 1 || m > n) {
+    throw new RangeError(`rollingStatistic: window ${m} must be an integer in 1..${n}`);
+  }
+  if (!(longRunVariance > 0)) {
+    throw new RangeError(
+      `rollingStatistic: the long-run variance must be > 0, got ${longRunVariance}`
+    );
+  }
+  const scale = 1 / Math.sqrt(m * longRunVariance);
+  const out = new Float64Array(n - m + 1);
+  let sum = 0;
+  for (let k = 0; k <= n - m; k++) {
+    if (k % 1024 === 0) {
+      sum = 0;
+      for (let j = k; j < k + m; j++) sum += d[j];
+    } else {
+      sum += d[k + m - 1] - d[k - 1];
+    }
+    out[k] = sum * scale;
+  }
+  return out;
+}
+
+// src/stability/fluctuationTest.ts
+var FLUCTUATION_MIN_POINTS = 20;
+function fluctuationTest(d, options) {
+  const n = d.length;
+  if (n < FLUCTUATION_MIN_POINTS) return null;
+  const criticalValue = fluctuationCriticalValue(options.mu, options.alpha, options.sides);
+  if (criticalValue === null) return null;
+  const windowSize = Math.round(options.mu * n);
+  if (windowSize < 2) return null;
+  const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
+  if (!(longRunVariance > 0)) return null;
+  const path = rollingStatistic(d, windowSize, longRunVariance);
+  let peakWindow = 0;
+  let statistic = Number.NEGATIVE_INFINITY;
+  for (let k = 0; k < path.length; k++) {
+    const value = options.sides === "one" ? path[k] : Math.abs(path[k]);
+    if (value > statistic) {
+      statistic = value;
+      peakWindow = k;
+    }
+  }
+  const worseRuns = [];
+  for (let k = 0; k < path.length; k++) {
+    if (!(path[k] > criticalValue)) continue;
+    const from = k;
+    const to = k + windowSize - 1;
+    const last = worseRuns.at(-1);
+    if (last !== void 0 && from <= last[1] + 1) last[1] = to;
+    else worseRuns.push([from, to]);
+  }
+  return {
+    statistic,
+    criticalValue,
+    windowSize,
+    rejected: statistic > criticalValue,
+    peakWindow,
+    worseRuns,
+    lag,
+    longRunVariance,
+    path
+  };
 }
 
 // src/stability/periodBuckets.ts
@@ -13318,81 +13722,6 @@ function periodBreakdown(series, timestamps, kind) {
     });
   }
   return { buckets, periods };
-}
-
-// src/stability/assessStability.ts
-function assessStability(inputs) {
-  const { periods } = periodBreakdown(inputs.series, inputs.timestamps, inputs.kind);
-  return { fluctuation: null, recent: null, periods };
-}
-
-// src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, rows, weights = null) {
-  const points = panel.timestamps.length;
-  const sumB = new Float64Array(points);
-  const sumC = new Float64Array(points);
-  const count = new Int32Array(points);
-  const weightSum = weights === null ? null : new Float64Array(points);
-  let maxHorizon = 1;
-  let rowCount = 0;
-  const included = losses.included;
-  const total = rows === void 0 ? panel.size : rows.length;
-  for (let r = 0; r < total; r++) {
-    const i = rows === void 0 ? r : rows[r];
-    if (included !== null && included[i] === 0) continue;
-    const t = panel.time[i];
-    const w = weights === null ? 1 : weights[i];
-    sumB[t] += w * losses.baseline[i];
-    sumC[t] += w * losses.candidate[i];
-    if (weightSum !== null) weightSum[t] += w;
-    count[t]++;
-    rowCount++;
-    const h = panel.horizon[i];
-    if (h > maxHorizon) maxHorizon = h;
-  }
-  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
-  let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
-  const time = new Int32Array(n);
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const rowsAt = new Int32Array(n);
-  let k = 0;
-  for (let t = 0; t < points; t++) {
-    const m = denominator(t);
-    if (count[t] === 0 || m <= 0) continue;
-    time[k] = t;
-    baseline[k] = sumB[t] / m;
-    candidate[k] = sumC[t] / m;
-    rowsAt[k] = count[t];
-    k++;
-  }
-  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
-}
-function lossDifferential(series, relativeMargin) {
-  const n = series.baseline.length;
-  const d = new Float64Array(n);
-  const factor = 1 + relativeMargin;
-  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
-  return d;
-}
-
-// src/core/formatNumber.ts
-function formatNumber(x, digits = 4) {
-  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
-  if (x === 0) return "0";
-  const magnitude = Math.abs(x);
-  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
-  return String(Number(x.toPrecision(digits)));
-}
-function formatSignedPercent(x) {
-  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
-  const text = formatNumber(x * 100, 3);
-  return `${x > 0 ? "+" : ""}${text}%`;
-}
-function formatPValue(p) {
-  if (p === null || p === void 0 || !Number.isFinite(p)) return "n/a";
-  return p < 1e-4 ? "< 0.0001" : p.toFixed(4);
 }
 
 // src/decision/decideComparison.ts
@@ -13642,35 +13971,6 @@ function countBelow(sorted, r) {
   return lo2;
 }
 
-// src/statistics/autocovariance.ts
-function autocovariances(x, maxLag) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("autocovariances: the series is empty");
-  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
-    throw new RangeError(
-      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
-    );
-  }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
-  }
-  return gamma;
-}
-
-// src/statistics/bartlettLongRunVariance.ts
-function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
-}
-
 // src/statistics/distributions.ts
 var import_stats_base_dists_normal_cdf = __toESM(require_lib57(), 1);
 var import_stats_base_dists_normal_quantile = __toESM(require_lib62(), 1);
@@ -13748,66 +14048,6 @@ function harveyLeybourneNewbold(statistic, n, horizon) {
     pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
     degreesOfFreedom
   };
-}
-
-// src/statistics/neweyWestLag.ts
-function neweyWestBandwidth(x) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
-  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
-  const sigma = autocovariances(x, pilotLag);
-  let sum = 0;
-  let weighted = 0;
-  for (let j = 1; j <= pilotLag; j++) {
-    sum += sigma[j];
-    weighted += j * sigma[j];
-  }
-  const s0 = sigma[0] + 2 * sum;
-  const s1 = 2 * weighted;
-  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
-  return { pilotLag, s0, s1, bandwidth };
-}
-function selectLag(x, rule, horizon) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
-  if (!Number.isInteger(horizon) || horizon < 1) {
-    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
-  }
-  const notes = [];
-  const cap = (lag, what) => {
-    if (lag <= n - 1) return lag;
-    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
-    return n - 1;
-  };
-  switch (rule.kind) {
-    case "auto": {
-      const bandwidth = neweyWestBandwidth(x);
-      let lag = Math.floor(bandwidth.bandwidth);
-      if (bandwidth.s0 === 0) {
-        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
-      }
-      if (lag < horizon - 1) {
-        notes.push(
-          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
-        );
-        lag = horizon - 1;
-      }
-      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
-    }
-    case "horizon":
-      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
-    case "fixed": {
-      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
-        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
-      }
-      if (rule.lag < horizon - 1) {
-        notes.push(
-          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
-        );
-      }
-      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
-    }
-  }
 }
 
 // src/statistics/varianceTolerance.ts
@@ -14945,6 +15185,94 @@ function bootstrapNotRun(settings) {
       "not run for per-series comparisons (the Diebold\u2013Mariano test with adjusted p-values locates them)"
     ]
   };
+}
+
+// src/stability/recentWindow.ts
+function parseRecentWindow(text, label) {
+  if (text === "") return null;
+  const percent = /^(\d+(?:\.\d+)?)%$/.exec(text);
+  if (percent !== null) {
+    const share = Number(percent[1]) / 100;
+    if (share > 0 && share < 1) return { kind: "share", share };
+  } else if (/^\d+$/.test(text)) {
+    const points = Number(text);
+    if (Number.isSafeInteger(points) && points >= 2) return { kind: "points", points };
+  }
+  throw new InputError(
+    `${label} must be a number of time points (an integer \u2265 2) or a percentage such as 15%`,
+    { value: text }
+  );
+}
+function recentPoints(window2, n) {
+  const k = window2.kind === "points" ? window2.points : Math.ceil(window2.share * n - 1e-9);
+  return Math.min(n, Math.max(k, 0));
+}
+
+// src/stability/recentComparison.ts
+function lastPoints(series, count) {
+  const from = series.baseline.length - count;
+  const rows = series.rows.subarray(from);
+  let rowCount = 0;
+  for (let t = 0; t < rows.length; t++) rowCount += rows[t];
+  return {
+    time: series.time.subarray(from),
+    baseline: series.baseline.subarray(from),
+    candidate: series.candidate.subarray(from),
+    rows,
+    rowCount,
+    maxHorizon: series.maxHorizon
+  };
+}
+function recentComparison(series, window2, scope2, hypothesis, settings, runner) {
+  const count = recentPoints(window2, series.baseline.length);
+  return compareLossSeries(
+    lastPoints(series, count),
+    scope2,
+    hypothesis,
+    settings,
+    runner === void 0 ? {} : { runner }
+  );
+}
+
+// src/stability/assessStability.ts
+function assessStability(inputs) {
+  const { series, timestamps, settings } = inputs;
+  const label = (i) => timestamps[series.time[i]] ?? String(i);
+  const { periods } = periodBreakdown(series, timestamps, inputs.kind);
+  const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
+  const d = lossDifferential(series, worse.baselineFactor - 1);
+  if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const test = fluctuationTest(d, {
+    mu: settings.fluctuationWindow,
+    alpha: settings.alpha,
+    sides: settings.fluctuationSides,
+    lag: settings.lag,
+    horizon: series.maxHorizon
+  });
+  const fluctuation = test === null ? null : {
+    statistic: test.statistic,
+    criticalValue: test.criticalValue,
+    mu: settings.fluctuationWindow,
+    windowSize: test.windowSize,
+    rejected: test.rejected,
+    peak: {
+      start: label(test.peakWindow),
+      end: label(test.peakWindow + test.windowSize - 1)
+    },
+    worsePeriods: test.worseRuns.map(([from, to]) => ({
+      start: label(from),
+      end: label(to)
+    }))
+  };
+  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+    series,
+    settings.recent,
+    { loss: settings.loss, horizon: "all", series: "all", timestamps },
+    inputs.hypothesis,
+    settings,
+    inputs.runner
+  );
+  return { fluctuation, recent, periods };
 }
 
 // src/comparison/evaluateLossSeries.ts
@@ -17456,37 +17784,6 @@ function escapeMarkdown(text) {
   return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
 }
 
-// src/settings/defaultConfidence.ts
-function defaultConfidence(alpha) {
-  return Number((1 - 2 * alpha).toPrecision(15));
-}
-function confidenceOverridesDefault(confidence, alpha) {
-  return confidence !== defaultConfidence(alpha);
-}
-
-// src/report/relativeChangeText.ts
-function relativeChangeText(c) {
-  const rc = c.relativeChange;
-  const point = formatSignedPercent(c.relativeDifference);
-  if (rc === null) return point;
-  const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
-  if (pieces.length === 0) return `${point} \u2205`;
-  return `${point} ${pieces.map(pieceText).join(" \u222A ")}`;
-}
-function pieceText(p) {
-  const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
-  const upper = p.upper === null ? "+\u221E" : formatSignedPercent(p.upper);
-  return `[${lower}, ${upper}]`;
-}
-function intervalNote(report) {
-  const { confidence, alpha } = report.settings;
-  const pct = `${formatNumber(confidence * 100, 3)}%`;
-  if (confidenceOverridesDefault(confidence, alpha)) {
-    return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
-  }
-  return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
-}
-
 // src/report/renderBacktestChecks.ts
 var SHOWN = 2;
 var MAX_CHARS = 200;
@@ -17523,7 +17820,7 @@ function checkLine(check) {
   const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
-function backtestChecksLines(report, clean2) {
+function backtestChecksLines(report, clean3) {
   const integrity = report.integrity;
   if (integrity.checks.length === 0) return [];
   const flagged = integrity.checks.filter((c) => c.status !== "ok");
@@ -17531,9 +17828,61 @@ function backtestChecksLines(report, clean2) {
     `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
   ];
   for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map((e) => clean2(clip(e))).join("; ");
+    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
     out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
   }
+  return out;
+}
+
+// src/report/renderStabilitySection.ts
+function renderStabilitySection(report) {
+  const stability = report.stability;
+  const overall = report.comparisons[0];
+  if (stability === null || overall === void 0) return [];
+  const out = ["**Over time**", ""];
+  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
+  out.push(fluctuationSentence(stability, report), "");
+  if (stability.periods.length > 0) out.push(...periodTable(stability), "");
+  return out;
+}
+function windowTable(overall, recent) {
+  const level = recent.relativeChange?.level;
+  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name, c) => `| ${name} | ${escapeMarkdown(c.firstTimestamp ?? "n/a")} to ${escapeMarkdown(c.lastTimestamp ?? "n/a")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
+  return [
+    `| window | from \u2013 to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
+    "|---|---|---:|---:|---:|---:|---:|---:|---|",
+    row("whole backtest", overall),
+    row("most recent", recent)
+  ];
+}
+function fluctuationSentence(stability, report) {
+  const f = stability.fluctuation;
+  if (f === null) {
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+  }
+  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  if (f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
+    return `${setup} The candidate is significantly worse over ${spans}.`;
+  }
+  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function periodTable(stability) {
+  const out = [
+    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
+    "",
+    "| period | time points | baseline loss | candidate loss | relative |",
+    "|---|---:|---:|---:|---:|"
+  ];
+  for (const p of stability.periods) {
+    const span = p.start === p.end ? escapeMarkdown(p.start) : `${escapeMarkdown(p.start)} to ${escapeMarkdown(p.end)}`;
+    out.push(
+      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`
+    );
+  }
+  out.push("", "</details>");
   return out;
 }
 
@@ -17548,6 +17897,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...renderStabilitySection(report));
   lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
   if (reasons.length > 0) {
@@ -17741,11 +18091,34 @@ function settingsSection(report) {
   return out;
 }
 
+// src/report/renderStabilityTerminal.ts
+function renderStabilityTerminal(report) {
+  const s = report.stability;
+  if (s === null) return [];
+  const out = [];
+  const r = s.recent;
+  if (r !== null) {
+    out.push(
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}: ${r.verdict}`
+    );
+  }
+  const f = s.fluctuation;
+  if (f !== null) {
+    out.push(
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
+    );
+  }
+  return out;
+}
+function clean(text) {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
+}
+
 // src/report/renderTerminal.ts
 function renderTerminal(report, options) {
   const paint = (code, text) => options.color ? `\x1B[${code}m${text}\x1B[0m` : text;
   const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
-  const title = report.name === "" ? "skillgate" : `skillgate \xB7 ${clean(report.name)}`;
+  const title = report.name === "" ? "skillgate" : `skillgate \xB7 ${clean2(report.name)}`;
   const out = [];
   out.push(`${paint("1", title)}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`);
   out.push(wrap(report.headline, 100), "");
@@ -17777,13 +18150,14 @@ function renderTerminal(report, options) {
   const line = (cells) => cells.map((cell, j) => j === 0 || j >= 8 ? cell.padEnd(widths[j]) : cell.padStart(widths[j])).join("  ");
   out.push(paint("2", line(header)));
   for (const r of rows) out.push(line(r));
+  out.push(...renderStabilityTerminal(report));
   out.push(wrap(intervalNote(report), 100), "");
   for (const reason of [...report.reasons, ...report.comparisons[0]?.reasons ?? []]) {
     out.push(wrap(`- ${reason}`, 100, "  "));
   }
   const summary = report.seriesSummary;
   if (summary !== null) {
-    const top = summary.topRegressions.slice(0, 5).map(clean).join(", ");
+    const top = summary.topRegressions.slice(0, 5).map(clean2).join(", ");
     out.push(
       `series: ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} no evidence (${summary.method}-adjusted)${top === "" ? "" : `; largest regressions: ${top}`}`
     );
@@ -17794,7 +18168,7 @@ function renderTerminal(report, options) {
       `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`
     );
   }
-  out.push(...backtestChecksLines(report, clean));
+  out.push(...backtestChecksLines(report, clean2));
   const i = report.inputs;
   out.push(
     "",
@@ -17810,14 +18184,14 @@ function scope(c) {
   if (c.horizon === "all" && c.series === "all") return "overall";
   const parts = [];
   if (c.horizon !== "all") parts.push(`h=${c.horizon}`);
-  if (c.series !== "all") parts.push(clean(c.series));
+  if (c.series !== "all") parts.push(clean2(c.series));
   return parts.join(" ");
 }
-function clean(text) {
+function clean2(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 function wrap(text, width, indent = "") {
-  const words = clean(text).split(" ");
+  const words = clean2(text).split(" ");
   const lines = [];
   let current = "";
   for (const w of words) {
@@ -18012,6 +18386,30 @@ var ENGINE_OPTIONS = [
     help: "how many series with the largest significant regressions to list"
   },
   {
+    name: "recent",
+    valueName: "N|P%",
+    defaultValue: "",
+    help: "also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)"
+  },
+  {
+    name: "fluctuation-window",
+    valueName: "MU",
+    defaultValue: "0.2",
+    help: "window of the fluctuation test (Giacomini\u2013Rossi) as a fraction of the time points, 0.1 to 0.9"
+  },
+  {
+    name: "fluctuation-sides",
+    defaultValue: "one",
+    choices: ["one", "two"],
+    help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
+  },
+  {
+    name: "stability-gate",
+    defaultValue: "warn",
+    choices: ["off", "warn", "fail"],
+    help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
+  },
+  {
     name: "frequency",
     valueName: "auto|STEP",
     defaultValue: "auto",
@@ -18144,6 +18542,14 @@ function resolveSettings(raw, label) {
     weights: bool("weights"),
     adjust: value("adjust"),
     top: integer("top", 0, 1e4),
+    recent: parseRecentWindow(value("recent"), label("recent")),
+    fluctuationWindow: number(
+      "fluctuation-window",
+      (x) => x >= 0.1 && x <= 0.9,
+      "a number from 0.1 to 0.9 (the window as a fraction of the time points)"
+    ),
+    fluctuationSides: value("fluctuation-sides"),
+    stabilityGate: value("stability-gate"),
     frequency: parseFrequencyOption(value("frequency"), label("frequency")),
     folds: optional("folds"),
     embargo: integer("embargo", 0, 1e6),

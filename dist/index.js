@@ -3673,8 +3673,8 @@ var require_webidl = __commonJS({
       return new TypeError(`${message.header}: ${message.message}`);
     };
     webidl.errors.conversionFailed = function(context3) {
-      const plural = context3.types.length === 1 ? "" : " one of";
-      const message = `${context3.argument} could not be converted to${plural}: ${context3.types.join(", ")}.`;
+      const plural2 = context3.types.length === 1 ? "" : " one of";
+      const message = `${context3.argument} could not be converted to${plural2}: ${context3.types.join(", ")}.`;
       return webidl.errors.exception({
         header: context3.prefix,
         message
@@ -11237,9 +11237,9 @@ var require_pluralizer = __commonJS({
       this: "these"
     };
     module.exports = class Pluralizer {
-      constructor(singular, plural) {
+      constructor(singular, plural2) {
         this.singular = singular;
-        this.plural = plural;
+        this.plural = plural2;
       }
       pluralize(count) {
         const one = count === 1;
@@ -30258,9 +30258,9 @@ var require_ms = __commonJS({
       return ms + "ms";
     }
     function fmtLong(ms) {
-      return plural(ms, d, "day") || plural(ms, h, "hour") || plural(ms, m, "minute") || plural(ms, s, "second") || ms + " ms";
+      return plural2(ms, d, "day") || plural2(ms, h, "hour") || plural2(ms, m, "minute") || plural2(ms, s, "second") || ms + " ms";
     }
-    function plural(ms, n, name) {
+    function plural2(ms, n, name) {
       if (ms < n) {
         return;
       }
@@ -32389,6 +32389,58 @@ function checkLine(check) {
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
 
+// src/report/renderStabilitySection.ts
+function renderStabilitySection(report) {
+  const stability = report.stability;
+  const overall = report.comparisons[0];
+  if (stability === null || overall === void 0) return [];
+  const out = ["**Over time**", ""];
+  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
+  out.push(fluctuationSentence(stability, report), "");
+  if (stability.periods.length > 0) out.push(...periodTable(stability), "");
+  return out;
+}
+function windowTable(overall, recent) {
+  const level = recent.relativeChange?.level;
+  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name, c) => `| ${name} | ${escapeMarkdown(c.firstTimestamp ?? "n/a")} to ${escapeMarkdown(c.lastTimestamp ?? "n/a")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
+  return [
+    `| window | from \u2013 to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
+    "|---|---|---:|---:|---:|---:|---:|---:|---|",
+    row("whole backtest", overall),
+    row("most recent", recent)
+  ];
+}
+function fluctuationSentence(stability, report) {
+  const f = stability.fluctuation;
+  if (f === null) {
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+  }
+  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  if (f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
+    return `${setup} The candidate is significantly worse over ${spans}.`;
+  }
+  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function periodTable(stability) {
+  const out = [
+    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
+    "",
+    "| period | time points | baseline loss | candidate loss | relative |",
+    "|---|---:|---:|---:|---:|"
+  ];
+  for (const p of stability.periods) {
+    const span = p.start === p.end ? escapeMarkdown(p.start) : `${escapeMarkdown(p.start)} to ${escapeMarkdown(p.end)}`;
+    out.push(
+      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`
+    );
+  }
+  out.push("", "</details>");
+  return out;
+}
+
 // src/report/renderMarkdown.ts
 var VERDICT_WORDS = { pass: "PASS", warn: "WARN", fail: "FAIL" };
 function renderMarkdown(report, options = {}) {
@@ -32400,6 +32452,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...renderStabilitySection(report));
   lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
   if (reasons.length > 0) {
@@ -39737,6 +39790,106 @@ function noChecks(mode, reason) {
   };
 }
 
+// src/stability/calendarDate.ts
+function calendarDateOf(label) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== "datetime") return null;
+  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
+  const dayNumber = Math.floor(seconds / 86400);
+  return { ...civilFromDays(dayNumber), dayNumber };
+}
+function civilFromDays(days) {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+// src/stability/describeSpan.ts
+function describeSpan(first, last, points, kind) {
+  const a = kind === "datetime" ? calendarDateOf(first) : null;
+  const b = kind === "datetime" ? calendarDateOf(last) : null;
+  if (a !== null && b !== null) {
+    const days = b.dayNumber - a.dayNumber + 1;
+    if (days >= 90) return plural(Math.round(days / 30.44), "month");
+    if (days >= 14) return plural(Math.round(days / 7), "week");
+    if (days >= 2) return plural(days, "day");
+  }
+  return plural(points, "time point");
+}
+function plural(count, unit) {
+  return `${count} ${unit}${count === 1 ? "" : "s"}`;
+}
+
+// src/stability/stabilityFinding.ts
+function stabilityFinding(stability, hypothesis, settings, kind) {
+  if (stability === null) return { effect: null, headline: "", reasons: [] };
+  const sentences = [];
+  const reasons = [];
+  const recent = stability.recent;
+  const recentWorse = recent !== null && recent.verdict === "fail";
+  if (recent !== null && recentWorse) {
+    const where = recentWords(recent, kind);
+    const change = changeWords(recent);
+    sentences.push(
+      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
+    );
+    reasons.push(
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+    );
+  }
+  const f = stability.fluctuation;
+  const stretchWorse = f !== null && f.rejected && f.worsePeriods.length > 0;
+  if (f !== null && stretchWorse) {
+    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
+    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
+    sentences.push(
+      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+    );
+    reasons.push(
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+    );
+  }
+  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
+  const gate2 = settings.stabilityGate;
+  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  return {
+    effect: gate2 === "off" ? null : gate2,
+    headline: [...sentences, response].join(" "),
+    reasons
+  };
+}
+function recentWords(c, kind) {
+  const first = c.firstTimestamp ?? "?";
+  const last = c.lastTimestamp ?? "?";
+  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
+}
+function changeWords(c) {
+  const rel = c.relativeDifference;
+  if (rel === null) {
+    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
+  }
+  const rc = c.relativeChange;
+  const shown = `${formatSignedPercent(rel)} mean loss`;
+  if (rc === null) return shown;
+  const single = rc.pieces === void 0 || rc.pieces.length === 1;
+  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
+  if (single && rc.lower !== null && rc.upper !== null) {
+    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
+  }
+  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function spanWords(span) {
+  return `${span.start} to ${span.end}`;
+}
+
 // src/report/buildReport.ts
 function buildReport(parts) {
   const { inputs, settings, hypothesis } = parts;
@@ -39765,12 +39918,16 @@ function buildReport(parts) {
       integrity.outcome === "fail" ? `A backtest check failed (${which2.join(", ")}): the comparison cannot be trusted until the backtest is fixed.` : `A backtest check warns (${which2.join(", ")}): look at the backtest checks before trusting the comparison.`
     );
   }
-  const verdict = worstVerdict(verdicts);
+  const stability = parts.stability ?? null;
+  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  reasons.push(...finding.reasons);
+  const gateVerdict = worstVerdict(verdicts);
+  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
   return {
     tool: { name: "skillgate", version: parts.version },
     name: settings.name,
     verdict,
-    headline: headline(verdict, overall, hypothesis),
+    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(" ").trim(),
     policy: {
       policy: settings.policy,
       agreement: settings.agreement,
@@ -39790,7 +39947,7 @@ function buildReport(parts) {
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
     integrity,
-    stability: parts.stability ?? null
+    stability
   };
 }
 function headline(verdict, overall, hypothesis) {
@@ -39863,6 +40020,57 @@ function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
   };
 }
 
+// src/aggregation/lossSeries.ts
+function aggregateByTime(panel, losses, rows, weights = null) {
+  const points = panel.timestamps.length;
+  const sumB = new Float64Array(points);
+  const sumC = new Float64Array(points);
+  const count = new Int32Array(points);
+  const weightSum = weights === null ? null : new Float64Array(points);
+  let maxHorizon = 1;
+  let rowCount = 0;
+  const included = losses.included;
+  const total = rows === void 0 ? panel.size : rows.length;
+  for (let r = 0; r < total; r++) {
+    const i = rows === void 0 ? r : rows[r];
+    if (included !== null && included[i] === 0) continue;
+    const t = panel.time[i];
+    const w = weights === null ? 1 : weights[i];
+    sumB[t] += w * losses.baseline[i];
+    sumC[t] += w * losses.candidate[i];
+    if (weightSum !== null) weightSum[t] += w;
+    count[t]++;
+    rowCount++;
+    const h = panel.horizon[i];
+    if (h > maxHorizon) maxHorizon = h;
+  }
+  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
+  let n = 0;
+  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
+  const time = new Int32Array(n);
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const rowsAt = new Int32Array(n);
+  let k = 0;
+  for (let t = 0; t < points; t++) {
+    const m = denominator(t);
+    if (count[t] === 0 || m <= 0) continue;
+    time[k] = t;
+    baseline[k] = sumB[t] / m;
+    candidate[k] = sumC[t] / m;
+    rowsAt[k] = count[t];
+    k++;
+  }
+  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
+}
+function lossDifferential(series, relativeMargin) {
+  const n = series.baseline.length;
+  const d = new Float64Array(n);
+  const factor = 1 + relativeMargin;
+  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
+  return d;
+}
+
 // src/statistics/mean.ts
 function mean(x) {
   const n = x.length;
@@ -39875,26 +40083,226 @@ function mean(x) {
   return first + residual / n;
 }
 
-// src/stability/calendarDate.ts
-function calendarDateOf(label) {
-  const reading = readLabel(label);
-  if (typeof reading === "string" || reading.kind !== "datetime") return null;
-  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
-  const dayNumber = Math.floor(seconds / 86400);
-  return { ...civilFromDays(dayNumber), dayNumber };
+// src/statistics/autocovariance.ts
+function autocovariances(x, maxLag) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("autocovariances: the series is empty");
+  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
+    throw new RangeError(
+      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
+    );
+  }
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) {
+    let sum = 0;
+    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
+    gamma[k] = sum / n;
+  }
+  return gamma;
 }
-function civilFromDays(days) {
-  const z = days + 719468;
-  const era = Math.floor(z / 146097);
-  const doe = z - era * 146097;
-  const yoe = Math.floor(
-    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
-  );
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
-  const month = mp < 10 ? mp + 3 : mp - 9;
-  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+
+// src/statistics/bartlettLongRunVariance.ts
+function bartlettLongRunVariance(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
+  return sum;
+}
+
+// src/statistics/neweyWestLag.ts
+function neweyWestBandwidth(x) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
+  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
+  const sigma = autocovariances(x, pilotLag);
+  let sum = 0;
+  let weighted = 0;
+  for (let j = 1; j <= pilotLag; j++) {
+    sum += sigma[j];
+    weighted += j * sigma[j];
+  }
+  const s0 = sigma[0] + 2 * sum;
+  const s1 = 2 * weighted;
+  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
+  return { pilotLag, s0, s1, bandwidth };
+}
+function selectLag(x, rule, horizon) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
+  if (!Number.isInteger(horizon) || horizon < 1) {
+    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
+  }
+  const notes = [];
+  const cap = (lag, what) => {
+    if (lag <= n - 1) return lag;
+    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
+    return n - 1;
+  };
+  switch (rule.kind) {
+    case "auto": {
+      const bandwidth = neweyWestBandwidth(x);
+      let lag = Math.floor(bandwidth.bandwidth);
+      if (bandwidth.s0 === 0) {
+        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
+      }
+      if (lag < horizon - 1) {
+        notes.push(
+          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
+        );
+        lag = horizon - 1;
+      }
+      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
+    }
+    case "horizon":
+      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
+    case "fixed": {
+      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
+        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
+      }
+      if (rule.lag < horizon - 1) {
+        notes.push(
+          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
+        );
+      }
+      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
+    }
+  }
+}
+
+// src/statistics/prewhitenedLongRunVariance.ts
+var PREWHITENING_CAP = 0.97;
+function prewhitenedLongRunVariance(y, rule, horizon) {
+  const n = y.length;
+  if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
+  const centre = mean(y);
+  let cross = 0;
+  let square = 0;
+  for (let t = 1; t < n; t++) {
+    const previous = y[t - 1] - centre;
+    cross += (y[t] - centre) * previous;
+    square += previous * previous;
+  }
+  const raw = square === 0 ? 0 : cross / square;
+  const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
+  const residuals = new Float64Array(n - 1);
+  for (let t = 1; t < n; t++) {
+    residuals[t - 1] = y[t] - centre - coefficient * (y[t - 1] - centre);
+  }
+  const lag = selectLag(residuals, rule, horizon).lag;
+  const recolour = (1 - coefficient) ** 2;
+  return {
+    longRunVariance: bartlettLongRunVariance(residuals, lag) / recolour,
+    coefficient,
+    lag
+  };
+}
+
+// src/stability/fluctuationCriticalValues.ts
+var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var TABLE = {
+  two: [
+    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
+    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
+    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
+  ],
+  one: [
+    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
+    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
+    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
+  ]
+};
+function fluctuationCriticalValue(mu, alpha, sides) {
+  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
+  const columns = TABLE[sides];
+  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
+  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
+  for (let i = 0; i + 1 < columns.length; i++) {
+    const lo2 = columns[i];
+    const hi2 = columns[i + 1];
+    if (alpha > lo2.alpha && alpha < hi2.alpha) {
+      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
+      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
+    }
+  }
+  return null;
+}
+function interpolateInMu(values, mu) {
+  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
+  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
+  const w = Math.min(Math.max(position - i, 0), 1);
+  return (1 - w) * values[i] + w * values[i + 1];
+}
+
+// src/stability/rollingStatistic.ts
+function rollingStatistic(d, m, longRunVariance) {
+  const n = d.length;
+  if (!Number.isInteger(m) || m < 1 || m > n) {
+    throw new RangeError(`rollingStatistic: window ${m} must be an integer in 1..${n}`);
+  }
+  if (!(longRunVariance > 0)) {
+    throw new RangeError(
+      `rollingStatistic: the long-run variance must be > 0, got ${longRunVariance}`
+    );
+  }
+  const scale = 1 / Math.sqrt(m * longRunVariance);
+  const out = new Float64Array(n - m + 1);
+  let sum = 0;
+  for (let k = 0; k <= n - m; k++) {
+    if (k % 1024 === 0) {
+      sum = 0;
+      for (let j = k; j < k + m; j++) sum += d[j];
+    } else {
+      sum += d[k + m - 1] - d[k - 1];
+    }
+    out[k] = sum * scale;
+  }
+  return out;
+}
+
+// src/stability/fluctuationTest.ts
+var FLUCTUATION_MIN_POINTS = 20;
+function fluctuationTest(d, options) {
+  const n = d.length;
+  if (n < FLUCTUATION_MIN_POINTS) return null;
+  const criticalValue = fluctuationCriticalValue(options.mu, options.alpha, options.sides);
+  if (criticalValue === null) return null;
+  const windowSize = Math.round(options.mu * n);
+  if (windowSize < 2) return null;
+  const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
+  if (!(longRunVariance > 0)) return null;
+  const path7 = rollingStatistic(d, windowSize, longRunVariance);
+  let peakWindow = 0;
+  let statistic = Number.NEGATIVE_INFINITY;
+  for (let k = 0; k < path7.length; k++) {
+    const value = options.sides === "one" ? path7[k] : Math.abs(path7[k]);
+    if (value > statistic) {
+      statistic = value;
+      peakWindow = k;
+    }
+  }
+  const worseRuns = [];
+  for (let k = 0; k < path7.length; k++) {
+    if (!(path7[k] > criticalValue)) continue;
+    const from = k;
+    const to = k + windowSize - 1;
+    const last = worseRuns.at(-1);
+    if (last !== void 0 && from <= last[1] + 1) last[1] = to;
+    else worseRuns.push([from, to]);
+  }
+  return {
+    statistic,
+    criticalValue,
+    windowSize,
+    rejected: statistic > criticalValue,
+    peakWindow,
+    worseRuns,
+    lag,
+    longRunVariance,
+    path: path7
+  };
 }
 
 // src/stability/periodBuckets.ts
@@ -39978,63 +40386,6 @@ function periodBreakdown(series, timestamps, kind) {
     });
   }
   return { buckets, periods };
-}
-
-// src/stability/assessStability.ts
-function assessStability(inputs) {
-  const { periods } = periodBreakdown(inputs.series, inputs.timestamps, inputs.kind);
-  return { fluctuation: null, recent: null, periods };
-}
-
-// src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, rows, weights = null) {
-  const points = panel.timestamps.length;
-  const sumB = new Float64Array(points);
-  const sumC = new Float64Array(points);
-  const count = new Int32Array(points);
-  const weightSum = weights === null ? null : new Float64Array(points);
-  let maxHorizon = 1;
-  let rowCount = 0;
-  const included = losses.included;
-  const total = rows === void 0 ? panel.size : rows.length;
-  for (let r = 0; r < total; r++) {
-    const i = rows === void 0 ? r : rows[r];
-    if (included !== null && included[i] === 0) continue;
-    const t = panel.time[i];
-    const w = weights === null ? 1 : weights[i];
-    sumB[t] += w * losses.baseline[i];
-    sumC[t] += w * losses.candidate[i];
-    if (weightSum !== null) weightSum[t] += w;
-    count[t]++;
-    rowCount++;
-    const h = panel.horizon[i];
-    if (h > maxHorizon) maxHorizon = h;
-  }
-  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
-  let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
-  const time = new Int32Array(n);
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const rowsAt = new Int32Array(n);
-  let k = 0;
-  for (let t = 0; t < points; t++) {
-    const m = denominator(t);
-    if (count[t] === 0 || m <= 0) continue;
-    time[k] = t;
-    baseline[k] = sumB[t] / m;
-    candidate[k] = sumC[t] / m;
-    rowsAt[k] = count[t];
-    k++;
-  }
-  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
-}
-function lossDifferential(series, relativeMargin) {
-  const n = series.baseline.length;
-  const d = new Float64Array(n);
-  const factor = 1 + relativeMargin;
-  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
-  return d;
 }
 
 // src/decision/decideComparison.ts
@@ -40284,35 +40635,6 @@ function countBelow(sorted, r) {
   return lo2;
 }
 
-// src/statistics/autocovariance.ts
-function autocovariances(x, maxLag) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("autocovariances: the series is empty");
-  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
-    throw new RangeError(
-      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
-    );
-  }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
-  }
-  return gamma;
-}
-
-// src/statistics/bartlettLongRunVariance.ts
-function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
-}
-
 // src/statistics/distributions.ts
 var import_stats_base_dists_normal_cdf = __toESM(require_lib58(), 1);
 var import_stats_base_dists_normal_quantile = __toESM(require_lib63(), 1);
@@ -40390,66 +40712,6 @@ function harveyLeybourneNewbold(statistic, n, horizon) {
     pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
     degreesOfFreedom
   };
-}
-
-// src/statistics/neweyWestLag.ts
-function neweyWestBandwidth(x) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
-  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
-  const sigma = autocovariances(x, pilotLag);
-  let sum = 0;
-  let weighted = 0;
-  for (let j = 1; j <= pilotLag; j++) {
-    sum += sigma[j];
-    weighted += j * sigma[j];
-  }
-  const s0 = sigma[0] + 2 * sum;
-  const s1 = 2 * weighted;
-  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
-  return { pilotLag, s0, s1, bandwidth };
-}
-function selectLag(x, rule, horizon) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
-  if (!Number.isInteger(horizon) || horizon < 1) {
-    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
-  }
-  const notes = [];
-  const cap = (lag, what) => {
-    if (lag <= n - 1) return lag;
-    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
-    return n - 1;
-  };
-  switch (rule.kind) {
-    case "auto": {
-      const bandwidth = neweyWestBandwidth(x);
-      let lag = Math.floor(bandwidth.bandwidth);
-      if (bandwidth.s0 === 0) {
-        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
-      }
-      if (lag < horizon - 1) {
-        notes.push(
-          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
-        );
-        lag = horizon - 1;
-      }
-      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
-    }
-    case "horizon":
-      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
-    case "fixed": {
-      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
-        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
-      }
-      if (rule.lag < horizon - 1) {
-        notes.push(
-          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
-        );
-      }
-      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
-    }
-  }
 }
 
 // src/statistics/varianceTolerance.ts
@@ -41587,6 +41849,94 @@ function bootstrapNotRun(settings) {
       "not run for per-series comparisons (the Diebold\u2013Mariano test with adjusted p-values locates them)"
     ]
   };
+}
+
+// src/stability/recentWindow.ts
+function parseRecentWindow(text2, label) {
+  if (text2 === "") return null;
+  const percent = /^(\d+(?:\.\d+)?)%$/.exec(text2);
+  if (percent !== null) {
+    const share = Number(percent[1]) / 100;
+    if (share > 0 && share < 1) return { kind: "share", share };
+  } else if (/^\d+$/.test(text2)) {
+    const points = Number(text2);
+    if (Number.isSafeInteger(points) && points >= 2) return { kind: "points", points };
+  }
+  throw new InputError(
+    `${label} must be a number of time points (an integer \u2265 2) or a percentage such as 15%`,
+    { value: text2 }
+  );
+}
+function recentPoints(window2, n) {
+  const k = window2.kind === "points" ? window2.points : Math.ceil(window2.share * n - 1e-9);
+  return Math.min(n, Math.max(k, 0));
+}
+
+// src/stability/recentComparison.ts
+function lastPoints(series, count) {
+  const from = series.baseline.length - count;
+  const rows = series.rows.subarray(from);
+  let rowCount = 0;
+  for (let t = 0; t < rows.length; t++) rowCount += rows[t];
+  return {
+    time: series.time.subarray(from),
+    baseline: series.baseline.subarray(from),
+    candidate: series.candidate.subarray(from),
+    rows,
+    rowCount,
+    maxHorizon: series.maxHorizon
+  };
+}
+function recentComparison(series, window2, scope, hypothesis, settings, runner) {
+  const count = recentPoints(window2, series.baseline.length);
+  return compareLossSeries(
+    lastPoints(series, count),
+    scope,
+    hypothesis,
+    settings,
+    runner === void 0 ? {} : { runner }
+  );
+}
+
+// src/stability/assessStability.ts
+function assessStability(inputs) {
+  const { series, timestamps, settings } = inputs;
+  const label = (i) => timestamps[series.time[i]] ?? String(i);
+  const { periods } = periodBreakdown(series, timestamps, inputs.kind);
+  const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
+  const d = lossDifferential(series, worse.baselineFactor - 1);
+  if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const test = fluctuationTest(d, {
+    mu: settings.fluctuationWindow,
+    alpha: settings.alpha,
+    sides: settings.fluctuationSides,
+    lag: settings.lag,
+    horizon: series.maxHorizon
+  });
+  const fluctuation = test === null ? null : {
+    statistic: test.statistic,
+    criticalValue: test.criticalValue,
+    mu: settings.fluctuationWindow,
+    windowSize: test.windowSize,
+    rejected: test.rejected,
+    peak: {
+      start: label(test.peakWindow),
+      end: label(test.peakWindow + test.windowSize - 1)
+    },
+    worsePeriods: test.worseRuns.map(([from, to]) => ({
+      start: label(from),
+      end: label(to)
+    }))
+  };
+  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+    series,
+    settings.recent,
+    { loss: settings.loss, horizon: "all", series: "all", timestamps },
+    inputs.hypothesis,
+    settings,
+    inputs.runner
+  );
+  return { fluctuation, recent, periods };
 }
 
 // src/comparison/evaluateLossSeries.ts
@@ -44648,6 +44998,30 @@ var ENGINE_OPTIONS = [
     help: "how many series with the largest significant regressions to list"
   },
   {
+    name: "recent",
+    valueName: "N|P%",
+    defaultValue: "",
+    help: "also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)"
+  },
+  {
+    name: "fluctuation-window",
+    valueName: "MU",
+    defaultValue: "0.2",
+    help: "window of the fluctuation test (Giacomini\u2013Rossi) as a fraction of the time points, 0.1 to 0.9"
+  },
+  {
+    name: "fluctuation-sides",
+    defaultValue: "one",
+    choices: ["one", "two"],
+    help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
+  },
+  {
+    name: "stability-gate",
+    defaultValue: "warn",
+    choices: ["off", "warn", "fail"],
+    help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
+  },
+  {
     name: "frequency",
     valueName: "auto|STEP",
     defaultValue: "auto",
@@ -44818,6 +45192,14 @@ function resolveSettings(raw, label) {
     weights: bool("weights"),
     adjust: value("adjust"),
     top: integer("top", 0, 1e4),
+    recent: parseRecentWindow(value("recent"), label("recent")),
+    fluctuationWindow: number(
+      "fluctuation-window",
+      (x) => x >= 0.1 && x <= 0.9,
+      "a number from 0.1 to 0.9 (the window as a fraction of the time points)"
+    ),
+    fluctuationSides: value("fluctuation-sides"),
+    stabilityGate: value("stability-gate"),
     frequency: parseFrequencyOption(value("frequency"), label("frequency")),
     folds: optional("folds"),
     embargo: integer("embargo", 0, 1e6),
@@ -45396,6 +45778,10 @@ function readSettings(r) {
     weights: r.field("weights").boolean(),
     adjust: r.field("adjust").oneOf(["holm", "bh"]),
     top: r.field("top").integer(),
+    recent: readRecentWindow(r.field("recent")),
+    fluctuationWindow: r.field("fluctuationWindow").value === void 0 ? 0.2 : r.field("fluctuationWindow").number(),
+    fluctuationSides: r.field("fluctuationSides").value === void 0 ? "one" : r.field("fluctuationSides").oneOf(["one", "two"]),
+    stabilityGate: r.field("stabilityGate").value === void 0 ? "warn" : r.field("stabilityGate").oneOf(["off", "warn", "fail"]),
     // Absent from reports written before the backtest checks: their defaults.
     frequency: r.field("frequency").value === void 0 ? "auto" : r.field("frequency").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
     folds: r.field("folds").value === void 0 ? null : r.field("folds").stringOrNull(),
@@ -45404,6 +45790,10 @@ function readSettings(r) {
     json: r.field("json").stringOrNull(),
     markdown: r.field("markdown").stringOrNull()
   };
+}
+function readRecentWindow(r) {
+  if (r.value === null || r.value === void 0) return null;
+  return r.field("kind").oneOf(["points", "share"]) === "points" ? { kind: "points", points: r.field("points").integer(2) } : { kind: "share", share: r.field("share").number() };
 }
 function readLevels(r) {
   if (r.value === null) return null;

@@ -3,13 +3,22 @@
  * designs of DESIGN.md ("Why ewc is the default") through the gate's own code on both cores
  * (worker threads, replications split by index, so the numbers do not depend on the split) and
  * writes the table. Options: --replications N (default 2000), --resamples B (default 9999),
- * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples).
+ * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
+ * --stability-replications N (default 4000) and --stability-only (the stability study of
+ * validation/stabilityStudy.ts alone, replacing its section of the existing document).
  */
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
+import {
+  renderStabilityValidation,
+  runStabilityJobs,
+  runStabilityValidation,
+  type StabilityJob,
+  withStabilitySection,
+} from './stabilityValidation.js';
 
 /** Seed of the simulated errors (the bootstrap keeps the gate's default seed). */
 const SEED = 20261201;
@@ -23,8 +32,12 @@ interface Job {
 }
 
 if (!isMainThread) {
-  const jobs = workerData as Job[];
-  parentPort!.postMessage(jobs.map((j) => runStudy(j.design, j)));
+  const jobs = workerData as (Job | StabilityJob)[];
+  parentPort!.postMessage(
+    jobs[0] !== undefined && 'kind' in jobs[0]
+      ? runStabilityJobs(jobs as StabilityJob[])
+      : (jobs as Job[]).map((j) => runStudy(j.design, j)),
+  );
 } else {
   await main();
 }
@@ -49,6 +62,20 @@ async function main(): Promise<void> {
     }
   }
   const threads = Math.max(1, Math.min(2, availableParallelism()));
+  // --stability-only: regenerate the stability section of an existing document alone.
+  const stabilityReplications = option('stability-replications', quick ? 400 : 4000);
+  const stability = async (document: string) => {
+    const run = { replications: stabilityReplications, resamples, seed: SEED };
+    const { results, seconds } = await runStabilityValidation(
+      new URL(import.meta.url),
+      threads,
+      run,
+    );
+    const section = renderStabilityValidation(results, { ...run, seconds, threads });
+    writeFileSync(out, withStabilitySection(document, section));
+    process.stderr.write(`wrote the stability section of ${out} in ${seconds.toFixed(0)} s\n`);
+  };
+  if (args.includes('--stability-only')) return stability(readFileSync(out, 'utf8'));
   const started = Date.now();
   const results: StudyResult[] = [];
   for (const design of designs) {
@@ -70,6 +97,7 @@ async function main(): Promise<void> {
   const seconds = (Date.now() - started) / 1000;
   writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }));
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
+  await stability(readFileSync(out, 'utf8'));
 }
 
 function runInWorker(jobs: Job[]): Promise<StudyResult[]> {

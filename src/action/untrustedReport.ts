@@ -19,6 +19,7 @@ import type {
 } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { MAX_PERIODS } from '../stability/periodBuckets.js';
+import type { RecentWindow } from '../stability/recentWindow.js';
 import type { FluctuationSummary, Stability, TimeSpan } from '../stability/stabilityModel.js';
 import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 
@@ -541,6 +542,19 @@ function readSettings(r: Reader): Settings {
     weights: r.field('weights').boolean(),
     adjust: r.field('adjust').oneOf(['holm', 'bh']),
     top: r.field('top').integer(),
+    recent: readRecentWindow(r.field('recent')),
+    fluctuationWindow:
+      r.field('fluctuationWindow').value === undefined
+        ? 0.2
+        : r.field('fluctuationWindow').number(),
+    fluctuationSides:
+      r.field('fluctuationSides').value === undefined
+        ? 'one'
+        : r.field('fluctuationSides').oneOf(['one', 'two']),
+    stabilityGate:
+      r.field('stabilityGate').value === undefined
+        ? 'warn'
+        : r.field('stabilityGate').oneOf(['off', 'warn', 'fail']),
     // Absent from reports written before the backtest checks: their defaults.
     frequency:
       r.field('frequency').value === undefined
@@ -556,6 +570,14 @@ function readSettings(r: Reader): Settings {
     markdown: r.field('markdown').stringOrNull(),
     html: r.field('html').value === undefined ? null : r.field('html').stringOrNull(),
   };
+}
+
+/** settings.recent; absent in reports from before it existed. */
+function readRecentWindow(r: Reader): RecentWindow | null {
+  if (r.value === null || r.value === undefined) return null;
+  return r.field('kind').oneOf(['points', 'share']) === 'points'
+    ? { kind: 'points', points: r.field('points').integer(2) }
+    : { kind: 'share', share: r.field('share').number() };
 }
 
 function readLevels(r: Reader): readonly [number, number] | null {

@@ -13,7 +13,8 @@ import type { ReportView } from './reportView.js';
  * - 'identical-losses': the candidate's loss equals the baseline's on every row;
  * - 'too-little-data': fewer time points than --min-points;
  * - 'missing-rows': the candidate lacks rows the baseline scored (and allow-missing is off);
- * - 'worse-lately': the most recent stretch of time is judged on its own and is worse;
+ * - 'worse-lately': the comparison on the most recent window fails under the policy;
+ * - 'worse-in-a-stretch': the fluctuation test finds stretches where the candidate is worse;
  * - 'backtest-check-failed' / 'backtest-check-warned': a check of the backtest itself.
  */
 export type DecidingReasonKind =
@@ -25,6 +26,7 @@ export type DecidingReasonKind =
   | 'too-little-data'
   | 'missing-rows'
   | 'worse-lately'
+  | 'worse-in-a-stretch'
   | 'backtest-check-failed'
   | 'backtest-check-warned';
 
@@ -78,14 +80,31 @@ export function decidingReasons(report: ReportView): DecidingReason[] {
     });
   }
 
+  // The stability findings act on the gate as --stability-gate says (src/stability/stabilityFinding.ts).
+  const gateEffect: Verdict =
+    report.settings.stabilityGate === 'off' ? 'pass' : report.settings.stabilityGate;
   const recent = report.stability?.recent ?? null;
-  if (recent !== null && recent.verdict !== 'pass') {
+  if (recent !== null && recent.verdict === 'fail') {
     found.push({
       kind: 'worse-lately',
-      verdict: recent.verdict,
-      text: `on the most recent stretch alone (${recent.firstTimestamp ?? 'n/a'} to ${
+      verdict: gateEffect,
+      text: `the candidate is worse in the most recent ${recent.n} time points (${recent.firstTimestamp ?? 'n/a'} to ${
         recent.lastTimestamp ?? 'n/a'
-      }, ${recent.n} time points) the gate would ${recent.verdict === 'fail' ? 'fail' : 'warn'}: mean loss ${percent(recent.relativeDifference)}`,
+      }): mean loss ${percent(recent.relativeDifference)}`,
+    });
+  }
+  const f = report.stability?.fluctuation ?? null;
+  if (f?.rejected && f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods
+      .slice(0, 3)
+      .map((p) => `${p.start} to ${p.end}`)
+      .join(', ');
+    found.push({
+      kind: 'worse-in-a-stretch',
+      verdict: gateEffect,
+      text: `the candidate is significantly worse over ${spans}${
+        f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more stretches` : ''
+      } (fluctuation test, Giacomini & Rossi 2010)`,
     });
   }
 

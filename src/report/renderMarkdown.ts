@@ -2,6 +2,7 @@ import { chartCaption, differenceSeries, mermaidChart, sparklineText } from './d
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { missingRowsSection } from './missingRowsSection.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
+import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
 import type { ReportTable } from './reportTable.js';
@@ -89,6 +90,16 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
       ]),
     );
   }
+  const overTime = renderStabilitySection(report);
+  if (overTime.length > 0) {
+    lines.push(
+      `<details><summary>${esc(overTimeSummary(view))}</summary>`,
+      '',
+      ...overTime,
+      '</details>',
+      '',
+    );
+  }
   const checks = backtestChecksSection(report);
   if (checks.length > 0) {
     lines.push(
@@ -114,6 +125,17 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
       }</sub>`,
   );
   return `${lines.join('\n')}\n`;
+}
+
+/** "Over time: worse recently" and the like, for the folded stability section. */
+function overTimeSummary(report: ReportView): string {
+  const s = report.stability;
+  const recent = s?.recent?.verdict === 'fail';
+  const stretch = (s?.fluctuation?.worsePeriods.length ?? 0) > 0;
+  if (recent && stretch) return 'Over time: worse recently and in some stretches';
+  if (recent) return 'Over time: worse recently';
+  if (stretch) return 'Over time: worse in some stretches';
+  return 'Over time: the recent window, the fluctuation test and the mean loss by period';
 }
 
 /** A GFM table with every cell escaped. */

@@ -1,5 +1,6 @@
 import { differenceSeries, sparklineText } from './differenceChart.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
+import { renderStabilityTerminal } from './renderStabilityTerminal.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
 import type { ReportTable } from './reportTable.js';
@@ -33,6 +34,8 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   out.push('', paint('2', wrap(s.intervalNote, 100)));
   const chart = differenceSeries(view);
   if (chart !== null) out.push('', clean(sparklineText(chart)));
+  const overTime = renderStabilityTerminal(report);
+  if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, '  ')));
   if (s.notes.length > 0) out.push('');
   for (const note of s.notes) out.push(wrap(`- ${note}`, 100, '  '));
   if (s.horizons !== null) {

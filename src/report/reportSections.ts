@@ -87,7 +87,7 @@ export function reportSections(report: ReportView, options: SectionOptions = {})
     change,
     main: mainTable(report, overall),
     intervalNote: intervalNote(report),
-    notes: mainNotes(report, reasons),
+    notes: mainNotes(reasons),
     changedSettings: asCommandLine(options_.filter((o) => !o.isDefault && !o.file)),
     details: detailsTable(report, overall),
     detailNotes: detailNotes(report, overall),
@@ -145,22 +145,9 @@ function mainTable(report: ReportView, overall: ComparisonView): ReportTable {
   );
 }
 
-function mainNotes(report: ReportView, reasons: readonly DecidingReason[]): string[] {
+function mainNotes(reasons: readonly DecidingReason[]): string[] {
   const notes: string[] = [];
-  for (const r of reasons.slice(1)) {
-    if (r.verdict === 'pass' && r.kind !== 'missing-rows') continue;
-    notes.push(`Also: ${r.text}.`);
-  }
-  for (const r of report.reasons) {
-    if (!r.startsWith('The candidate lacks')) notes.push(r);
-  }
-  const f = report.stability?.fluctuation ?? null;
-  if (f?.rejected) {
-    const spans = f.worsePeriods.map((p) => `${p.start} to ${p.end}`).join(', ');
-    notes.push(
-      `The relative accuracy changes over time (fluctuation test, Giacomini & Rossi 2010: ${significant(f.statistic, 3)} > ${significant(f.criticalValue, 3)})${spans === '' ? '' : `; the candidate is significantly worse in windows covering ${spans}`}.`,
-    );
-  }
+  for (const r of reasons.slice(1)) notes.push(`Also: ${r.text}.`);
   return notes;
 }
 
@@ -233,6 +220,7 @@ function detailNotes(report: ReportView, c: ComparisonView): string[] {
       p.onReject === 'fail' ? 'low' : 'high'
     } side of ${boundary}.`,
     `H0: ${p.nullHypothesis}. H1: ${p.alternative}. Rejecting H0 makes the gate ${p.onReject}; each test is one-sided at α = ${p.alpha}.`,
+    ...report.reasons.filter((r) => !r.startsWith('The candidate lacks')),
     ...c.reasons,
     ...[...c.dieboldMariano.notes, ...c.bootstrap.notes].map((n) => `Note: ${n}`),
   ];

@@ -17,11 +17,13 @@ function withOverall(report: Report, change: Partial<Comparison>): Report {
 function recentWarn(): Comparison {
   return {
     ...sampleReport().comparisons[0]!,
-    verdict: 'warn',
+    verdict: 'fail',
     n: 29,
     firstTimestamp: '2026-10-01',
     lastTimestamp: '2026-10-29',
+    meanCandidateLoss: 4.597 * 1.04,
     relativeDifference: 0.04,
+    relativeChange: null,
   };
 }
 
@@ -116,7 +118,7 @@ describe('the deciding reason', () => {
     };
     expect(kinds(warn)[0]).toBe('worse-lately');
     expect(decidingReasons(warn)[0]?.text).toBe(
-      'on the most recent stretch alone (2026-10-01 to 2026-10-29, 29 time points) the gate would warn: mean loss +4.00%',
+      'the candidate is worse in the most recent 29 time points (2026-10-01 to 2026-10-29): mean loss +4.00%',
     );
   });
 
@@ -140,9 +142,13 @@ describe('the deciding reason', () => {
     };
     const md = renderMarkdown(r);
     const main = md.slice(0, md.indexOf('<details>'));
-    expect(main).toMatch(/^\| recent: 2026-10-01 to 2026-10-29 \| 4\.597 \| 3\.839 \| \+4\.00% /m);
+    expect(main).toMatch(/^\| recent: 2026-10-01 to 2026-10-29 \| 4\.597 \| 4\.781 \| \+4\.00% \| /m);
+    // Under --stability-gate warn (the default) both findings warn; the recent window comes first.
+    expect(kinds(r).slice(0, 2)).toEqual(['worse-lately', 'worse-in-a-stretch']);
     expect(main).toContain(
-      'fluctuation test, Giacomini &amp; Rossi 2010: 3.10 &gt; 2.40); the candidate is significantly worse in windows covering 2026-09-10 to 2026-10-29.',
+      '- Also: the candidate is significantly worse over 2026-09-10 to 2026-10-29 (fluctuation test, Giacomini &amp; Rossi 2010).',
     );
+    // The engine's own section is folded below.
+    expect(md).toContain('<details><summary>Over time: worse recently and in some stretches</summary>');
   });
 });
