@@ -135,7 +135,7 @@ function mainTable(report: ReportView, overall: ComparisonView): ReportTable {
       significant(recent.meanCandidateLoss),
       changeCell(recent),
       evidenceOf(recent, report),
-      recent.verdict,
+      `${recent.verdict} on its own`,
     ]);
   }
   return table(
