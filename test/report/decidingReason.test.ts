@@ -142,13 +142,17 @@ describe('the deciding reason', () => {
     };
     const md = renderMarkdown(r);
     const main = md.slice(0, md.indexOf('<details>'));
-    expect(main).toMatch(/^\| recent: 2026-10-01 to 2026-10-29 \| 4\.597 \| 4\.781 \| \+4\.00% \| /m);
+    expect(main).toMatch(
+      /^\| recent: 2026-10-01 to 2026-10-29 \| 4\.597 \| 4\.781 \| \+4\.00% \| /m,
+    );
     // Under --stability-gate warn (the default) both findings warn; the recent window comes first.
     expect(kinds(r).slice(0, 2)).toEqual(['worse-lately', 'worse-in-a-stretch']);
     expect(main).toContain(
       '- Also: the candidate is significantly worse over 2026-09-10 to 2026-10-29 (fluctuation test, Giacomini &amp; Rossi 2010).',
     );
     // The engine's own section is folded below.
-    expect(md).toContain('<details><summary>Over time: worse recently and in some stretches</summary>');
+    expect(md).toContain(
+      '<details><summary>Over time: worse recently and in some stretches</summary>',
+    );
   });
 });
