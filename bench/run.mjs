@@ -1,5 +1,6 @@
 // The benchmark behind docs/performance.md: `npm run bench` (add `-- --large` for the 10M-row
-// case, `-- --runs N` to change the repetitions). Inputs are generated deterministically under
+// case, `-- --runs N` to change the repetitions, `-- --sweep-only` for the block-length sweep
+// alone). Inputs are generated deterministically under
 // bench/.work/ (gitignored) and reused; every case runs several times in child processes and is
 // reported as a median, with ratios against references measured in the same run, so a loaded
 // machine shifts both sides alike. Nothing here is a test: nothing fails on a slow machine.
@@ -10,6 +11,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
+import { blockLengthSweep } from './blockLengthSweep.mjs';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
@@ -19,6 +21,7 @@ const large = args.includes('--large');
 const runsIndex = args.indexOf('--runs');
 const RUNS = runsIndex >= 0 ? Number(args[runsIndex + 1]) : 5;
 const SCALING_RUNS = Math.max(3, Math.floor(RUNS / 2) + 1);
+const sweepOnly = args.includes('--sweep-only');
 mkdirSync(work, { recursive: true });
 
 const median = (xs) => {
@@ -106,6 +109,28 @@ log(
   `peak memory from ${TIME === null ? 'none available (install GNU time)' : '/usr/bin/time (maximum resident set)'}`,
 );
 log();
+
+const hasNumpyForSweep =
+  spawnSync('/usr/bin/python3', ['-c', 'import numpy'], { encoding: 'utf8' }).status === 0;
+if (sweepOnly) {
+  log('3. stationary bootstrap by block length');
+  const sweep = blockLengthSweep({
+    work,
+    root,
+    bootstrapCase,
+    runs: SCALING_RUNS,
+    log,
+    hasNumpy: hasNumpyForSweep,
+  });
+  const end = machine();
+  log();
+  log(`load average at end: ${end.load}`);
+  writeFileSync(
+    path.join(work, 'sweep.json'),
+    `${JSON.stringify({ date: new Date().toISOString(), machine: { ...before, loadAtEnd: end.load }, sweep }, null, 2)}\n`,
+  );
+  process.exit(0);
+}
 
 // ── 1. reading + aligning through the CLI, against a bare split ────────────────────────────────
 async function panelFiles(series, times) {
@@ -329,6 +354,16 @@ for (const [n, resamples] of [
     `     ${draws.toExponential(1)} block draws (n = ${n}, B = ${resamples}): 1 thread ${fmt(one.wall)} ms, pool ${fmt(two.wall)} ms (${fmt(one.wall / two.wall)}×)`,
   );
 }
+log();
+log('3. stationary bootstrap by block length');
+const sweep = blockLengthSweep({
+  work,
+  root,
+  bootstrapCase,
+  runs: SCALING_RUNS,
+  log,
+  hasNumpy: hasNumpyForSweep,
+});
 const after = machine();
 log();
 log(`load average at end: ${after.load}`);
@@ -352,6 +387,7 @@ const results = {
     bootstrapSlope,
     threshold,
   },
+  sweep,
 };
 writeFileSync(path.join(work, 'results.json'), `${JSON.stringify(results, null, 2)}\n`);
 log(`results written to ${path.relative(root, path.join(work, 'results.json'))}`);

@@ -125,7 +125,7 @@ const VERDICTS = ['pass', 'warn', 'fail'] as const;
 const CHECK_STATUSES = ['ok', 'warn', 'fail'] as const;
 const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
 const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
-const ESTIMATORS = ['ewc', 'bartlett', 'uniform'] as const;
+const ESTIMATORS = ['ewc', 'ewc-ar1', 'bartlett', 'uniform'] as const;
 const MARGIN_KINDS = ['relative', 'absolute'] as const;
 
 function readReport(r: Reader): Report {
