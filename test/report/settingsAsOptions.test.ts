@@ -58,9 +58,10 @@ describe('settings as a user types them', () => {
     );
     const main = md.slice(0, md.indexOf('<details>'));
     expect(main).toContain(
-      'Settings that differ from the defaults: `--columns series=zone,timestamp=target_date,origin=issued,actual=observed,prediction=forecast --alpha 0.1 --confidence 0.9`',
+      'Settings that differ from the defaults: `--columns series=zone,timestamp=target_date,origin=issued,actual=observed,prediction=forecast --alpha 0.1 --variance ewc --confidence 0.9`',
     );
-    // With α = 0.1 the default level is 1 − 2α = 0.8, so the report's 0.9 is a changed option.
+    // With α = 0.1 the default level is 1 − 2α = 0.8, so the report's 0.9 is a changed option;
+    // the sample report was made with --variance ewc (the default is ewc-ar1).
     expect(md).not.toContain('/home/runner');
     expect(md).toContain('| --baseline | examples/data/baseline.csv | no |');
     expect(md).toContain('| --seed | 1729 | yes |');
