@@ -13,6 +13,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
 import { blockLengthSweep } from './blockLengthSweep.mjs';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
+import { parquetReadingSection } from './parquetReading.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const work = path.join(root, 'bench', '.work');
@@ -364,8 +365,19 @@ const sweep = blockLengthSweep({
   log,
   hasNumpy: hasNumpyForSweep,
 });
-const after = machine();
 log();
+const parquetReading = await parquetReadingSection({
+  root,
+  work,
+  cli,
+  files: await panelFiles(1000, 1000),
+  runs: SCALING_RUNS,
+  measure,
+  log,
+  fmt,
+  median,
+});
+const after = machine();
 log(`load average at end: ${after.load}`);
 
 const results = {
@@ -375,6 +387,7 @@ const results = {
   reading,
   readingSlope,
   largeReading,
+  parquetReading,
   bootstrap: {
     n: N,
     resamples: B,

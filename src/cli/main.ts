@@ -1,4 +1,6 @@
 #!/usr/bin/env node
+import { once } from 'node:events';
+import { createWriteStream } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import { runComparison } from '../app/runComparison.js';
 import { InputError, printable } from '../core/inputError.js';
@@ -7,8 +9,10 @@ import { createResamplePool } from '../parallel/resamplePool.js';
 import { renderHtml } from '../report/renderHtml.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import { renderTerminal } from '../report/renderTerminal.js';
+import type { Report } from '../report/reportModel.js';
 import { resolveSettings } from '../settings/resolveSettings.js';
-import { helpText } from './helpText.js';
+import { helpText, usageText } from './helpText.js';
+import { checkWritable, jsonPieces, STANDARD_OUTPUT } from './outputs.js';
 import { parseArguments } from './parseArguments.js';
 import { progressReporter } from './progressReporter.js';
 
@@ -16,6 +20,10 @@ import { progressReporter } from './progressReporter.js';
 async function main(argv: readonly string[]): Promise<number> {
   try {
     const request = parseArguments(argv);
+    if (request.kind === 'usage') {
+      process.stderr.write(usageText());
+      return 2;
+    }
     if (request.kind === 'help') {
       process.stdout.write(helpText());
       return 0;
@@ -25,23 +33,37 @@ async function main(argv: readonly string[]): Promise<number> {
       return 0;
     }
     const settings = resolveSettings(request.options, (name) => `--${name}`);
+    if (settings.json === STANDARD_OUTPUT && settings.markdown === STANDARD_OUTPUT) {
+      throw new InputError(
+        '--json - and --markdown - both ask for standard output; send one of them to a file',
+      );
+    }
+    if (settings.json !== null) await checkWritable(settings.json, '--json');
+    if (settings.markdown !== null) await checkWritable(settings.markdown, '--markdown');
+    if (settings.html !== null) await checkWritable(settings.html, '--html');
+    const shown = { workingDirectory: process.cwd() };
     const progress = progressReporter(process.stderr);
     const pool = createResamplePool();
-    const { report } = await runComparison(settings, {
-      onProgress: progress.update,
-      resampleRunner: pool.runner,
-    });
-    await pool.close();
-    progress.done();
-    if (settings.json !== null)
-      await writeFile(settings.json, `${JSON.stringify(report, null, 2)}\n`);
-    const shown = { workingDirectory: process.cwd() };
-    if (settings.markdown !== null)
-      await writeFile(settings.markdown, renderMarkdown(report, shown));
+    let report: Report;
+    try {
+      ({ report } = await runComparison(settings, {
+        onProgress: progress.update,
+        resampleRunner: pool.runner,
+      }));
+    } finally {
+      await pool.close();
+      progress.done();
+    }
+    if (settings.json !== null) await writeJson(settings.json, report);
+    if (settings.markdown !== null) {
+      if (settings.markdown === STANDARD_OUTPUT) await write(renderMarkdown(report, shown));
+      else await writeFile(settings.markdown, renderMarkdown(report, shown));
+    }
     if (settings.html !== null) await writeFile(settings.html, renderHtml(report, shown));
-    if (!request.quiet) {
+    const toStdout = settings.json === STANDARD_OUTPUT || settings.markdown === STANDARD_OUTPUT;
+    if (!request.quiet && !toStdout) {
       const color = process.stdout.isTTY === true && process.env.NO_COLOR === undefined;
-      process.stdout.write(renderTerminal(report, { color, workingDirectory: process.cwd() }));
+      await write(renderTerminal(report, { color, ...shown }));
     }
     return report.verdict === 'fail' ? 1 : 0;
   } catch (error) {
@@ -57,6 +79,25 @@ async function main(argv: readonly string[]): Promise<number> {
       process.stderr.write(`${error.stack}\n`);
     return 3;
   }
+}
+
+/** Writes the JSON report (to a file, or standard output for "-") in pieces. */
+async function writeJson(path: string, report: Report): Promise<void> {
+  const pieces = jsonPieces(report as unknown as Record<string, unknown>);
+  if (path === STANDARD_OUTPUT) {
+    for (const piece of pieces) await write(piece);
+    await write('\n');
+    return;
+  }
+  const out = createWriteStream(path);
+  for (const piece of pieces) if (!out.write(piece)) await once(out, 'drain');
+  out.end('\n');
+  await once(out, 'finish');
+}
+
+/** Writes to standard output, waiting when the pipe is full. */
+async function write(text: string): Promise<void> {
+  if (!process.stdout.write(text)) await once(process.stdout, 'drain');
 }
 
 main(process.argv.slice(2)).then((code) => {

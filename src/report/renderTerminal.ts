@@ -46,7 +46,10 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   if (s.paths !== null) out.push('', wrap(s.paths.summary, 100));
   const checks = backtestChecksLines(report, clean);
   if (checks.length > 0) out.push('', ...checks);
-  out.push('', paint('2', clean(s.inputs.lines[1] ?? '')));
+  out.push('');
+  for (const l of s.inputs.lines) {
+    if (!l.startsWith('Rows matched')) out.push(paint('2', wrap(l, 100, '  ')));
+  }
   if (s.changedSettings !== '') out.push(paint('2', clean(`settings: ${s.changedSettings}`)));
   return `${out.join('\n')}\n`;
 }

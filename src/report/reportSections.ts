@@ -8,6 +8,7 @@ import {
 import { changeCell, evidenceOf, percent, pValue, relativeInterval, significant } from './cells.js';
 import { type DecidingReason, decidingReasons } from './decidingReason.js';
 import { displayPath } from './displayPath.js';
+import { inputNotes } from './inputNotes.js';
 import { intervalNote } from './relativeChangeText.js';
 import { type ReportTable, table } from './reportTable.js';
 import type { ComparisonView, ReportView } from './reportView.js';
@@ -319,6 +320,7 @@ function inputSection(report: ReportView, paths: (f: string) => string): ReportS
   const i = report.inputs;
   const d = i.rowsDropped;
   const lines = [
+    ...inputNotes(report),
     `Rows matched: ${i.rowsMatched} over ${i.timestamps.count} timestamps (${i.timestamps.first ?? 'n/a'} to ${i.timestamps.last ?? 'n/a'}), ${i.series} series, horizons ${compactRange(i.horizons)}.`,
     `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`,
   ];
