@@ -46,9 +46,23 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   if (s.paths !== null) out.push('', wrap(s.paths.summary, 100));
   const checks = backtestChecksLines(report, clean);
   if (checks.length > 0) out.push('', ...checks);
+  for (const r of report.reasons) {
+    if (r.startsWith('The candidate lacks')) out.push(wrap(`- ${r}`, 100, '  '));
+  }
   out.push('');
+  const i = report.inputs;
+  out.push(
+    paint(
+      '2',
+      clean(
+        `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`,
+      ),
+    ),
+  );
   for (const l of s.inputs.lines) {
-    if (!l.startsWith('Rows matched')) out.push(paint('2', wrap(l, 100, '  ')));
+    if (!l.startsWith('Rows matched') && !l.startsWith('Left out')) {
+      out.push(paint('2', wrap(l, 100, '  ')));
+    }
   }
   if (s.changedSettings !== '') out.push(paint('2', clean(`settings: ${s.changedSettings}`)));
   return `${out.join('\n')}\n`;
