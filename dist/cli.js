@@ -4741,8 +4741,8 @@ var require_kernel_rempio2 = __commonJS({
 var require_main67 = __commonJS({
   "node_modules/@stdlib/math-base-special-round/lib/main.js"(exports, module) {
     "use strict";
-    var round2 = Math.round;
-    module.exports = round2;
+    var round3 = Math.round;
+    module.exports = round3;
   }
 });
 
@@ -4759,7 +4759,7 @@ var require_lib92 = __commonJS({
 var require_rempio2_medium = __commonJS({
   "node_modules/@stdlib/math-base-special-rempio2/lib/rempio2_medium.js"(exports, module) {
     "use strict";
-    var round2 = require_lib92();
+    var round3 = require_lib92();
     var getHighWord = require_lib42();
     var INVPIO2 = 0.6366197723675814;
     var PIO2_1 = 1.5707963267341256;
@@ -4777,7 +4777,7 @@ var require_rempio2_medium = __commonJS({
       var w;
       var i;
       var j;
-      n = round2(x * INVPIO2);
+      n = round3(x * INVPIO2);
       r = x - n * PIO2_1;
       w = n * PIO2_1T;
       j = ix >> 20 | 0;
@@ -9483,7 +9483,7 @@ var require_inverse_students_t = __commonJS({
     var erfcinv = require_lib130();
     var floor = require_lib7();
     var ldexp = require_lib50();
-    var round2 = require_lib92();
+    var round3 = require_lib92();
     var acos = require_lib131();
     var sqrt = require_lib54();
     var abs = require_lib46();
@@ -9573,7 +9573,7 @@ var require_inverse_students_t = __commonJS({
                 result = inverseStudentsTTailSeries(df, u);
               }
             } else {
-              crossover = ldexp(1, round2(df / -0.654));
+              crossover = ldexp(1, round3(df / -0.654));
               if (u > crossover) {
                 result = inverseStudentsTHill(df, u);
               } else {
@@ -9591,7 +9591,7 @@ var require_inverse_students_t = __commonJS({
           result = inverseStudentsTTailSeries(df, u);
         }
       } else {
-        crossover = ldexp(1, round2(df / -0.654));
+        crossover = ldexp(1, round3(df / -0.654));
         if (u > crossover) {
           result = inverseStudentsTHill(df, u);
         } else {
@@ -12319,8 +12319,8 @@ var POWERS_OF_TEN = [
   1e14,
   1e15
 ];
-function isDigit(code) {
-  return code >= 48 && code <= 57;
+function isDigit(code2) {
+  return code2 >= 48 && code2 <= 57;
 }
 function parseHorizon(text) {
   const n = text.length;
@@ -12633,36 +12633,36 @@ function alignPanel(input, hooks = {}) {
     timeFormat
   ) : null;
   const hasPath = baseline.path !== null;
-  const path = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
+  const path2 = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
   const originAt = 3;
   const pathAt = hasOrigin ? 4 : 3;
   const horizons = orderHorizons([baseline, candidate]);
   progress(0.1);
-  const keysOf = (table, index, withHorizon) => {
-    const n = table.size;
+  const keysOf = (table2, index, withHorizon) => {
+    const n = table2.size;
     const components = [
-      { values: mapIds(table.series, series.ids[index], n), cardinality: series.names.length },
+      { values: mapIds(table2.series, series.ids[index], n), cardinality: series.names.length },
       {
-        values: mapIds(table.timestamp, time.ranks[index], n),
+        values: mapIds(table2.timestamp, time.ranks[index], n),
         cardinality: time.labels.length
       }
     ];
     if (withHorizon) {
       const values = new Int32Array(n);
-      const h = table.horizon?.values;
+      const h = table2.horizon?.values;
       if (h === void 0) values.fill(horizons.rankOf(1));
       else for (let i = 0; i < n; i++) values[i] = horizons.rankOf(h[i]);
       components.push({ values, cardinality: horizons.values.length });
       if (origin !== null) {
         components.push({
-          values: mapIds(table.origin, origin.ranks[index], n),
+          values: mapIds(table2.origin, origin.ranks[index], n),
           cardinality: origin.labels.length
         });
       }
-      if (path !== null) {
+      if (path2 !== null) {
         components.push({
-          values: mapIds(table.path, path.ids[index], n),
-          cardinality: path.names.length
+          values: mapIds(table2.path, path2.ids[index], n),
+          cardinality: path2.names.length
         });
       }
     }
@@ -12683,21 +12683,21 @@ function alignPanel(input, hooks = {}) {
     if (depth > originAt && origin !== null) {
       parts.push(`origin=${origin.labels[keys[originAt].values[row]]}`);
     }
-    if (depth > pathAt && path !== null) {
-      parts.push(`path=${path.names[keys[pathAt].values[row]]}`);
+    if (depth > pathAt && path2 !== null) {
+      parts.push(`path=${path2.names[keys[pathAt].values[row]]}`);
     }
     return parts.map((part) => echo(part, 80)).join(" ");
   };
-  const checkDuplicates = (table, keys, order) => {
+  const checkDuplicates = (table2, keys, order) => {
     for (let i = 1; i < order.length; i++) {
       const a = order[i - 1];
       const b = order[i];
       if (compareKeys(keys, a, keys, b) === 0) {
-        const first = Math.min(table.lines[a], table.lines[b]);
-        const second = Math.max(table.lines[a], table.lines[b]);
+        const first = Math.min(table2.lines[a], table2.lines[b]);
+        const second = Math.max(table2.lines[a], table2.lines[b]);
         throw new InputError(
           `duplicated key ${describeKey(keys, a)}: lines ${first} and ${second} have the same key`,
-          { file: table.summary.path, line: second, value: describeKey(keys, b) }
+          { file: table2.summary.path, line: second, value: describeKey(keys, b) }
         );
       }
     }
@@ -12709,6 +12709,7 @@ function alignPanel(input, hooks = {}) {
   let matched = 0;
   let baselineOnly = 0;
   let candidateOnly = 0;
+  const baselineOnlyRows = [];
   const examples = { baselineOnly: [], candidateOnly: [] };
   {
     let i = 0;
@@ -12721,6 +12722,7 @@ function alignPanel(input, hooks = {}) {
         matched++;
       } else if (c < 0) {
         if (baselineOnly++ < EXAMPLES) examples.baselineOnly.push(describeKey(bKeys, bOrder[i]));
+        baselineOnlyRows.push(bOrder[i]);
         i++;
       } else {
         if (candidateOnly++ < EXAMPLES) {
@@ -12768,11 +12770,11 @@ function alignPanel(input, hooks = {}) {
     }
     for (let r = 0; r < actuals.size; r++) if (used[r] === 0) actualsUnused++;
   } else {
-    for (const table of [baseline, candidate]) {
-      if (table.actual === null) {
+    for (const table2 of [baseline, candidate]) {
+      if (table2.actual === null) {
         throw new InputError(
           `no actual column and no separate actuals file: each predictions file must then carry the actual values`,
-          { file: table.summary.path, line: 1, column: "actual" }
+          { file: table2.summary.path, line: 1, column: "actual" }
         );
       }
     }
@@ -12843,9 +12845,9 @@ function alignPanel(input, hooks = {}) {
       { file: cFile, line: 1 }
     );
   }
-  const forecasts = (table, rows) => ({
-    prediction: bothPredict ? gather(table.prediction.values, rows) : null,
-    quantiles: table.quantiles.filter((q) => common.includes(q.level)).map(
+  const forecasts = (table2, rows) => ({
+    prediction: bothPredict ? gather(table2.prediction.values, rows) : null,
+    quantiles: table2.quantiles.filter((q) => common.includes(q.level)).map(
       (q) => ({
         level: q.level,
         column: q.column,
@@ -12859,7 +12861,7 @@ function alignPanel(input, hooks = {}) {
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2].values[bRows[p]]];
   const originIds = origin === null ? null : compact(gather32(bKeys[originAt].values, bRows), origin.labels);
-  const pathIds = path === null ? null : compact(gather32(bKeys[pathAt].values, bRows), path.names);
+  const pathIds = path2 === null ? null : compact(gather32(bKeys[pathAt].values, bRows), path2.names);
   progress(1);
   return {
     size,
@@ -12894,9 +12896,55 @@ function alignPanel(input, hooks = {}) {
       candidateOnly,
       withoutActual,
       actualsUnused,
-      examples: { ...examples, withoutActual: withoutActualExamples }
+      examples: { ...examples, withoutActual: withoutActualExamples },
+      lacking: lackingRows(
+        baselineOnlyRows,
+        baseline,
+        bKeys,
+        actuals === void 0 ? null : { table: actuals, keys: () => keysOf(actuals, 2, false) },
+        series.names,
+        time.labels,
+        horizons.values
+      )
     }
   };
+}
+function lackingRows(rows, baseline, bKeys, actuals, seriesNames, timeLabels, horizonValues) {
+  const n = rows.length;
+  const out = {
+    series: new Int32Array(n),
+    seriesNames,
+    time: new Int32Array(n),
+    timestamps: timeLabels,
+    horizon: new Int32Array(n),
+    actual: new Float64Array(n).fill(Number.NaN),
+    prediction: new Float64Array(n).fill(Number.NaN)
+  };
+  let fromActuals = null;
+  const actualColumn = actuals?.table.actual ?? null;
+  if (n > 0 && baseline.actual === null && actuals !== null && actualColumn !== null) {
+    fromActuals = /* @__PURE__ */ new Map();
+    const [aSeries, aTime] = actuals.keys();
+    for (let r = 0; r < actuals.table.size; r++) {
+      fromActuals.set(
+        aSeries.values[r] * timeLabels.length + aTime.values[r],
+        actualColumn.values[r]
+      );
+    }
+  }
+  for (let k = 0; k < n; k++) {
+    const row = rows[k];
+    const s = bKeys[0].values[row];
+    const t = bKeys[1].values[row];
+    out.series[k] = s;
+    out.time[k] = t;
+    out.horizon[k] = horizonValues[bKeys[2].values[row]];
+    if (baseline.prediction !== null) out.prediction[k] = baseline.prediction.values[row];
+    if (baseline.actual !== null) out.actual[k] = baseline.actual.values[row];
+    else if (fromActuals !== null)
+      out.actual[k] = fromActuals.get(s * timeLabels.length + t) ?? Number.NaN;
+  }
+  return out;
 }
 function agreedValues(sources, size, what, describeRow) {
   const first = sources[0];
@@ -12965,16 +13013,16 @@ function numberLabels(columns, names) {
 }
 function orderHorizons(tables) {
   let max = 1;
-  for (const table of tables) {
-    const h = table.horizon?.values;
+  for (const table2 of tables) {
+    const h = table2.horizon?.values;
     if (h !== void 0) {
       for (let i = 0; i < h.length; i++) if (h[i] > max) max = h[i];
     }
   }
   if (max <= 1 << 16) {
     const rank2 = new Int32Array(max + 1).fill(-1);
-    for (const table of tables) {
-      const h = table.horizon?.values;
+    for (const table2 of tables) {
+      const h = table2.horizon?.values;
       if (h === void 0) rank2[1] = 0;
       else for (let i = 0; i < h.length; i++) rank2[h[i]] = 0;
     }
@@ -12983,8 +13031,8 @@ function orderHorizons(tables) {
     return { values: values2, rankOf: (horizon) => rank2[horizon] };
   }
   const seen = /* @__PURE__ */ new Set();
-  for (const table of tables) {
-    const h = table.horizon?.values;
+  for (const table2 of tables) {
+    const h = table2.horizon?.values;
     if (h === void 0) seen.add(1);
     else for (let i = 0; i < h.length; i++) seen.add(h[i]);
   }
@@ -13029,23 +13077,23 @@ function compact(ids, names) {
 }
 
 // src/alignment/historyBySeries.ts
-function historyBySeries(table, timeFormat = "auto") {
+function historyBySeries(table2, timeFormat = "auto") {
   const order = orderLabels(
-    [{ file: table.summary.path, column: table.timestamp }],
+    [{ file: table2.summary.path, column: table2.timestamp }],
     "timestamp",
     timeFormat
   );
   const ranks = order.ranks[0];
-  const actual = table.actual?.values ?? new Float64Array(table.size);
+  const actual = table2.actual?.values ?? new Float64Array(table2.size);
   const bySeries = /* @__PURE__ */ new Map();
-  for (let i = 0; i < table.size; i++) {
-    const name = table.series === null ? "" : table.series.labels[table.series.ids[i]];
+  for (let i = 0; i < table2.size; i++) {
+    const name = table2.series === null ? "" : table2.series.labels[table2.series.ids[i]];
     let list = bySeries.get(name);
     if (list === void 0) {
       list = [];
       bySeries.set(name, list);
     }
-    list.push({ rank: ranks[table.timestamp.ids[i]], value: actual[i] });
+    list.push({ rank: ranks[table2.timestamp.ids[i]], value: actual[i] });
   }
   const out = /* @__PURE__ */ new Map();
   for (const [name, list] of bySeries) {
@@ -13059,25 +13107,25 @@ function historyBySeries(table, timeFormat = "auto") {
 }
 
 // src/alignment/orderLossSeries.ts
-function orderLossSeries(table, timeFormat = "auto") {
-  const file = table.summary.path;
-  const order = orderLabels([{ file, column: table.timestamp }], "timestamp", timeFormat);
+function orderLossSeries(table2, timeFormat = "auto") {
+  const file = table2.summary.path;
+  const order = orderLabels([{ file, column: table2.timestamp }], "timestamp", timeFormat);
   const ranks = order.ranks[0];
-  const n = table.size;
+  const n = table2.size;
   const rowAt = new Int32Array(order.labels.length).fill(-1);
   for (let i = 0; i < n; i++) {
-    const rank = ranks[table.timestamp.ids[i]];
+    const rank = ranks[table2.timestamp.ids[i]];
     const other = rowAt[rank];
     if (other >= 0) {
       throw new InputError(
-        `this timestamp denotes the same time as line ${table.lines[other]} (${JSON.stringify(
-          table.timestamp.labels[table.timestamp.ids[other]]
+        `this timestamp denotes the same time as line ${table2.lines[other]} (${JSON.stringify(
+          table2.timestamp.labels[table2.timestamp.ids[other]]
         )})`,
         {
           file,
-          line: table.lines[i],
-          column: table.timestamp.column,
-          value: table.timestamp.labels[table.timestamp.ids[i]]
+          line: table2.lines[i],
+          column: table2.timestamp.column,
+          value: table2.timestamp.labels[table2.timestamp.ids[i]]
         }
       );
     }
@@ -13094,11 +13142,11 @@ function orderLossSeries(table, timeFormat = "auto") {
     const i = rowAt[rank];
     if (i < 0) continue;
     time[k] = rank;
-    baseline[k] = table.baseline[i];
-    candidate[k] = table.candidate[i];
-    rows[k] = table.rows[i];
-    rowCount += table.rows[i];
-    maxHorizon = Math.max(maxHorizon, table.horizon[i]);
+    baseline[k] = table2.baseline[i];
+    candidate[k] = table2.candidate[i];
+    rows[k] = table2.rows[i];
+    rowCount += table2.rows[i];
+    maxHorizon = Math.max(maxHorizon, table2.horizon[i]);
     k++;
   }
   return {
@@ -13229,7 +13277,9 @@ function formatSignedPercent(x) {
 }
 function formatPValue(p) {
   if (p === null || p === void 0 || !Number.isFinite(p)) return "n/a";
-  return p < 1e-4 ? "< 0.0001" : p.toFixed(4);
+  if (p < 1e-4) return "< 0.0001";
+  if (p > 0.9999) return "> 0.9999";
+  return p.toFixed(4);
 }
 
 // src/settings/defaultConfidence.ts
@@ -13260,11 +13310,11 @@ function pieceText(p) {
 }
 function intervalNote(report) {
   const { confidence, alpha } = report.settings;
-  const pct = `${formatNumber(confidence * 100, 3)}%`;
+  const pct2 = `${formatNumber(confidence * 100, 3)}%`;
   if (confidenceOverridesDefault(confidence, alpha)) {
-    return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
+    return `Intervals are ${pct2}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
   }
-  const base = `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const base = `Intervals are ${pct2} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
   const measured = report.comparisons.flatMap((c) => [
     c.relativeChange?.measuredCoverage,
     c.dieboldMariano.interval?.measuredCoverage,
@@ -13330,7 +13380,7 @@ function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict)
     );
   }
   const f = stability.fluctuation;
-  const stretchWorse = f !== null && f.rejected && f.worsePeriods.length > 0;
+  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
   if (f !== null && stretchWorse) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
@@ -13457,6 +13507,250 @@ function headline(verdict, overall, hypothesis) {
   }
 }
 
+// src/losses/absoluteError.ts
+function absoluteError(actual, prediction) {
+  return Math.abs(actual - prediction);
+}
+
+// src/losses/absolutePercentageError.ts
+function absolutePercentageError(actual, prediction) {
+  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/intervalCoverage.ts
+function intervalCoverage(actual, lower, upper) {
+  const n = actual.length;
+  if (lower.length !== n || upper.length !== n) {
+    throw new RangeError(
+      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
+    );
+  }
+  if (n === 0) return null;
+  let inside = 0;
+  for (let i = 0; i < n; i++) {
+    const y = actual[i];
+    if (lower[i] <= y && y <= upper[i]) inside++;
+  }
+  return inside / n;
+}
+
+// src/losses/intervalScore.ts
+function intervalScore(actual, lower, upper, alpha) {
+  if (!(alpha > 0 && alpha < 1)) {
+    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
+  }
+  const penalty = 2 / alpha;
+  let score = upper - lower;
+  if (actual < lower) score += penalty * (lower - actual);
+  if (actual > upper) score += penalty * (actual - upper);
+  return score;
+}
+
+// src/losses/pinballLoss.ts
+function pinballLoss(actual, quantile, level) {
+  const u = actual - quantile;
+  return u >= 0 ? level * u : (level - 1) * u;
+}
+
+// src/losses/squaredError.ts
+function squaredError(actual, prediction) {
+  const e = actual - prediction;
+  return e * e;
+}
+
+// src/losses/symmetricAbsolutePercentageError.ts
+function symmetricAbsolutePercentageError(actual, prediction) {
+  const denominator = Math.abs(actual) + Math.abs(prediction);
+  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
+}
+
+// src/losses/rowLosses.ts
+var LossUnavailableError = class extends Error {
+};
+var POINT_LOSSES = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError
+};
+function computeRowLosses(panel, loss, zeroActuals, interval = null) {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === "interval") return intervalLosses(panel, interval);
+  if (loss === "pinball") {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
+      );
+    }
+    const y2 = panel.actual;
+    for (const { level, base: base2, cand: cand2 } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y2[i];
+        baseline[i] += pinballLoss(yi, base2[i], level);
+        candidate[i] += pinballLoss(yi, cand2[i], level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i] /= k;
+      candidate[i] /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level),
+      coverage: null
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows = [];
+  let included = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i];
+    if (loss === "ape" && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === "skip") {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]);
+    candidate[i] = f(yi, cand[i]);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
+}
+function intervalLosses(panel, interval) {
+  if (interval === null) {
+    throw new LossUnavailableError(
+      "the interval loss needs the two quantile levels of the interval"
+    );
+  }
+  const [lowLevel, highLevel] = interval;
+  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
+  const bl = find(panel.baseline.quantiles, lowLevel);
+  const bu = find(panel.baseline.quantiles, highLevel);
+  const cl = find(panel.candidate.quantiles, lowLevel);
+  const cu = find(panel.candidate.quantiles, highLevel);
+  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
+    throw new LossUnavailableError(
+      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
+    );
+  }
+  const alpha = 1 - (highLevel - lowLevel);
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const y = panel.actual;
+  for (let i = 0; i < n; i++) {
+    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
+    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
+  }
+  return {
+    loss: "interval",
+    baseline,
+    candidate,
+    included: null,
+    zeroActualRows: [],
+    levels: [lowLevel, highLevel],
+    coverage: {
+      nominal: highLevel - lowLevel,
+      baseline: intervalCoverage(y, bl, bu),
+      candidate: intervalCoverage(y, cl, cu)
+    }
+  };
+}
+function commonQuantiles(baseline, candidate) {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}
+
+// src/report/missingRows.ts
+var GROUPS = 50;
+function missingRowsSummary(lacking, losses) {
+  if (lacking === void 0 || lacking.series.length === 0) return null;
+  const n = lacking.series.length;
+  const lossOf = losses.loss === "pinball" || losses.loss === "interval" ? null : POINT_LOSSES[losses.loss];
+  const loss = new Float64Array(n).fill(Number.NaN);
+  let withoutLoss = 0;
+  for (let k = 0; k < n; k++) {
+    const y = lacking.actual[k];
+    const f = lacking.prediction[k];
+    const value = lossOf !== null && Number.isFinite(y) && Number.isFinite(f) ? lossOf(y, f) : Number.NaN;
+    if (Number.isFinite(value)) loss[k] = value;
+    else withoutLoss++;
+  }
+  const group = (keyOf, order) => {
+    const acc = /* @__PURE__ */ new Map();
+    for (let k = 0; k < n; k++) {
+      const key = keyOf(k);
+      const t = lacking.time[k];
+      const g = acc.get(key) ?? { rows: 0, lo: t, hi: t, sum: 0, m: 0 };
+      g.rows++;
+      g.lo = Math.min(g.lo, t);
+      g.hi = Math.max(g.hi, t);
+      if (Number.isFinite(loss[k])) {
+        g.sum += loss[k];
+        g.m++;
+      }
+      acc.set(key, g);
+    }
+    return [...acc.entries()].sort((a, b) => b[1].rows - a[1].rows || order(a[0], b[0])).slice(0, GROUPS).map(([key, g]) => ({
+      key,
+      rows: g.rows,
+      first: lacking.timestamps[g.lo] ?? null,
+      last: lacking.timestamps[g.hi] ?? null,
+      meanBaselineLoss: g.m === 0 ? null : g.sum / g.m
+    }));
+  };
+  const all = group(
+    () => "all",
+    () => 0
+  )[0];
+  let sum = 0;
+  let m = 0;
+  for (let i = 0; i < losses.baseline.length; i++) {
+    if (losses.included !== null && losses.included[i] === 0) continue;
+    sum += losses.baseline[i];
+    m++;
+  }
+  return {
+    rows: n,
+    first: all.first,
+    last: all.last,
+    meanBaselineLoss: all.meanBaselineLoss,
+    meanBaselineLossCommon: m === 0 ? null : sum / m,
+    rowsWithoutLoss: withoutLoss,
+    bySeries: group(
+      (k) => lacking.seriesNames[lacking.series[k]] ?? "",
+      (a, b) => a < b ? -1 : a > b ? 1 : 0
+    ),
+    byHorizon: group(
+      (k) => String(lacking.horizon[k]),
+      (a, b) => Number(a) - Number(b)
+    )
+  };
+}
+
 // src/report/inputsSummary.ts
 function panelInputsSummary(panel, losses) {
   const horizons = /* @__PURE__ */ new Set();
@@ -13487,7 +13781,8 @@ function panelInputsSummary(panel, losses) {
     series: panel.seriesNames.length,
     horizons: [...horizons].sort((a, b) => a - b),
     quantileLevels: losses.levels,
-    intervalCoverage: losses.coverage
+    intervalCoverage: losses.coverage,
+    missingRows: missingRowsSummary(panel.coverage.lacking, losses)
   };
 }
 function lossFileInputsSummary(file, timestamps, kind, maxHorizon, order = { format: "auto", reason: "" }) {
@@ -13770,19 +14065,19 @@ function fluctuationTest(d, options) {
   if (windowSize < 2) return null;
   const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
   if (!(longRunVariance > 0)) return null;
-  const path = rollingStatistic(d, windowSize, longRunVariance);
+  const path2 = rollingStatistic(d, windowSize, longRunVariance);
   let peakWindow = 0;
   let statistic = Number.NEGATIVE_INFINITY;
-  for (let k = 0; k < path.length; k++) {
-    const value = options.sides === "one" ? path[k] : Math.abs(path[k]);
+  for (let k = 0; k < path2.length; k++) {
+    const value = options.sides === "one" ? path2[k] : Math.abs(path2[k]);
     if (value > statistic) {
       statistic = value;
       peakWindow = k;
     }
   }
   const worseRuns = [];
-  for (let k = 0; k < path.length; k++) {
-    if (!(path[k] > criticalValue)) continue;
+  for (let k = 0; k < path2.length; k++) {
+    if (!(path2[k] > criticalValue)) continue;
     const from = k;
     const to = k + windowSize - 1;
     const last = worseRuns.at(-1);
@@ -13798,7 +14093,7 @@ function fluctuationTest(d, options) {
     worseRuns,
     lag,
     longRunVariance,
-    path
+    path: path2
   };
 }
 
@@ -13947,7 +14242,7 @@ function describeTest(e, rejected, alpha, hypothesis) {
     return `${e.label}: the differential is constant, so its sign decides: ${rejected ? "evidence that" : "no evidence that"} ${hypothesis.alternative}.`;
   }
   const text = formatPValue(e.pValue);
-  const p = text.startsWith("<") ? `p ${text}` : `p = ${text}`;
+  const p = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
@@ -14017,7 +14312,7 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
     if (u <= margin) atOrBelow++;
     if (u >= margin) atOrAbove++;
   }
-  const pValue = (1 + atOrBelow) / (resamples + 1);
+  const pValue2 = (1 + atOrBelow) / (resamples + 1);
   const pAbove = (1 + atOrAbove) / (resamples + 1);
   return {
     interval: {
@@ -14026,9 +14321,9 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
       upper: reflectedSorted[resamples - kTwo]
     },
     oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
-    pValue,
+    pValue: pValue2,
     pValueBelow: pAbove,
-    pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove))
+    pValueTwoSided: Math.min(1, 2 * Math.min(pValue2, pAbove))
   };
 }
 
@@ -14747,8 +15042,8 @@ function createGeometricSampler(mean2) {
     throw new RangeError(`the mean of a geometric length must be a finite number \u2265 1, got ${mean2}`);
   }
   if (mean2 === 1) {
-    const table = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
-    return { mean: mean2, truncation: 1, table, inline: null, sample: () => 1 };
+    const table2 = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
+    return { mean: mean2, truncation: 1, table: table2, inline: null, sample: () => 1 };
   }
   const p = 1 / mean2;
   const q = 1 - p;
@@ -14874,6 +15169,24 @@ function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlock
   }
   into.count = count;
   return into;
+}
+
+// src/statistics/bootstrap/resampleHistogram.ts
+function resampleHistogram(mean2, deviations, bins = 40) {
+  if (deviations.length === 0) return null;
+  let lo2 = Number.POSITIVE_INFINITY;
+  let hi2 = Number.NEGATIVE_INFINITY;
+  for (const t of deviations) {
+    lo2 = Math.min(lo2, mean2 + t);
+    hi2 = Math.max(hi2, mean2 + t);
+  }
+  const counts = new Array(bins).fill(0);
+  const width = hi2 - lo2;
+  for (const t of deviations) {
+    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
+    counts[j]++;
+  }
+  return { lower: lo2, upper: hi2, counts };
 }
 
 // src/statistics/bootstrap/resampleDeviationsInline.ts
@@ -15252,6 +15565,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
       pValue: null,
       pValueBelow: null,
       pValueTwoSided: null,
+      distribution: null,
       notes
     };
   }
@@ -15292,6 +15606,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
     pValue: inference.pValue,
     pValueBelow: inference.pValueBelow,
     pValueTwoSided: inference.pValueTwoSided,
+    distribution: resampleHistogram(mean2, deviations),
     notes
   };
 }
@@ -15444,6 +15759,7 @@ function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,
+    distribution: result.distribution,
     notes: result.notes
   };
   return { summary, resampledDeviations: relative.resampledDeviations };
@@ -15681,7 +15997,7 @@ function meanInterval(result, horizon, level) {
 }
 
 // src/comparison/compareLossSeries.ts
-function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
+function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
   const n = series.baseline.length;
   const meanBaselineLoss = meanOrZero(series.baseline);
   const meanCandidateLoss = meanOrZero(series.candidate);
@@ -15721,15 +16037,15 @@ function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
   const first = series.time[0];
   const last = series.time[n - 1];
   return {
-    loss: scope2.loss,
-    horizon: scope2.horizon,
-    series: scope2.series,
-    ...scope2.path === void 0 ? {} : { path: scope2.path },
+    loss: scope.loss,
+    horizon: scope.horizon,
+    series: scope.series,
+    ...scope.path === void 0 ? {} : { path: scope.path },
     n,
     rows: series.rowCount,
     maxHorizon: series.maxHorizon,
-    firstTimestamp: first === void 0 ? null : scope2.timestamps[first] ?? null,
-    lastTimestamp: last === void 0 ? null : scope2.timestamps[last] ?? null,
+    firstTimestamp: first === void 0 ? null : scope.timestamps[first] ?? null,
+    lastTimestamp: last === void 0 ? null : scope.timestamps[last] ?? null,
     meanBaselineLoss,
     meanCandidateLoss,
     meanDifference: meanCandidateLoss - meanBaselineLoss,
@@ -15784,9 +16100,9 @@ function bootstrapNotRun(settings) {
 // src/stability/recentWindow.ts
 function parseRecentWindow(text, label) {
   if (text === "") return null;
-  const percent = /^(\d+(?:\.\d+)?)%$/.exec(text);
-  if (percent !== null) {
-    const share = Number(percent[1]) / 100;
+  const percent2 = /^(\d+(?:\.\d+)?)%$/.exec(text);
+  if (percent2 !== null) {
+    const share = Number(percent2[1]) / 100;
     if (share > 0 && share < 1) return { kind: "share", share };
   } else if (/^\d+$/.test(text)) {
     const points = Number(text);
@@ -15817,11 +16133,11 @@ function lastPoints(series, count) {
     maxHorizon: series.maxHorizon
   };
 }
-function recentComparison(series, window2, scope2, hypothesis, settings, runner) {
+function recentComparison(series, window2, scope, hypothesis, settings, runner) {
   const count = recentPoints(window2, series.baseline.length);
   return compareLossSeries(
     lastPoints(series, count),
-    scope2,
+    scope,
     hypothesis,
     settings,
     runner === void 0 ? {} : { runner }
@@ -15931,7 +16247,7 @@ function decideAdjusted(input) {
   const rejected = p <= alpha;
   const onKeep = hypothesis.onReject === "fail" ? "pass" : "fail";
   const text = formatPValue(p);
-  const shown = text.startsWith("<") ? `p ${text}` : `p = ${text}`;
+  const shown = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
   const reasons = [
     `${name} Diebold\u2013Mariano ${shown} ${rejected ? "\u2264" : ">"} \u03B1 = ${alpha}: ${rejected ? "evidence" : "no evidence"} that ${hypothesis.alternative}.`
   ];
@@ -15952,183 +16268,6 @@ function firstOversizedLoss(values, included = null) {
     if (!(Math.abs(v) <= MAX_LOSS)) return i;
   }
   return -1;
-}
-
-// src/losses/absoluteError.ts
-function absoluteError(actual, prediction) {
-  return Math.abs(actual - prediction);
-}
-
-// src/losses/absolutePercentageError.ts
-function absolutePercentageError(actual, prediction) {
-  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
-}
-
-// src/losses/intervalCoverage.ts
-function intervalCoverage(actual, lower, upper) {
-  const n = actual.length;
-  if (lower.length !== n || upper.length !== n) {
-    throw new RangeError(
-      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
-    );
-  }
-  if (n === 0) return null;
-  let inside = 0;
-  for (let i = 0; i < n; i++) {
-    const y = actual[i];
-    if (lower[i] <= y && y <= upper[i]) inside++;
-  }
-  return inside / n;
-}
-
-// src/losses/intervalScore.ts
-function intervalScore(actual, lower, upper, alpha) {
-  if (!(alpha > 0 && alpha < 1)) {
-    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
-  }
-  const penalty = 2 / alpha;
-  let score = upper - lower;
-  if (actual < lower) score += penalty * (lower - actual);
-  if (actual > upper) score += penalty * (actual - upper);
-  return score;
-}
-
-// src/losses/pinballLoss.ts
-function pinballLoss(actual, quantile, level) {
-  const u = actual - quantile;
-  return u >= 0 ? level * u : (level - 1) * u;
-}
-
-// src/losses/squaredError.ts
-function squaredError(actual, prediction) {
-  const e = actual - prediction;
-  return e * e;
-}
-
-// src/losses/symmetricAbsolutePercentageError.ts
-function symmetricAbsolutePercentageError(actual, prediction) {
-  const denominator = Math.abs(actual) + Math.abs(prediction);
-  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
-}
-
-// src/losses/rowLosses.ts
-var LossUnavailableError = class extends Error {
-};
-var POINT_LOSSES = {
-  squared: squaredError,
-  absolute: absoluteError,
-  ape: absolutePercentageError,
-  sape: symmetricAbsolutePercentageError
-};
-function computeRowLosses(panel, loss, zeroActuals, interval = null) {
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  if (loss === "interval") return intervalLosses(panel, interval);
-  if (loss === "pinball") {
-    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
-    if (pairs.length === 0) {
-      throw new LossUnavailableError(
-        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
-      );
-    }
-    const y2 = panel.actual;
-    for (const { level, base: base2, cand: cand2 } of pairs) {
-      for (let i = 0; i < n; i++) {
-        const yi = y2[i];
-        baseline[i] += pinballLoss(yi, base2[i], level);
-        candidate[i] += pinballLoss(yi, cand2[i], level);
-      }
-    }
-    const k = pairs.length;
-    for (let i = 0; i < n; i++) {
-      baseline[i] /= k;
-      candidate[i] /= k;
-    }
-    return {
-      loss,
-      baseline,
-      candidate,
-      included: null,
-      zeroActualRows: [],
-      levels: pairs.map((p) => p.level),
-      coverage: null
-    };
-  }
-  const base = panel.baseline.prediction;
-  const cand = panel.candidate.prediction;
-  if (base === null || cand === null) {
-    throw new LossUnavailableError(
-      `the ${loss} loss needs a prediction column in both baseline and candidate`
-    );
-  }
-  const f = POINT_LOSSES[loss];
-  const y = panel.actual;
-  const zeroActualRows = [];
-  let included = null;
-  for (let i = 0; i < n; i++) {
-    const yi = y[i];
-    if (loss === "ape" && yi === 0) {
-      zeroActualRows.push(i);
-      if (zeroActuals === "skip") {
-        included ??= new Uint8Array(n).fill(1);
-        included[i] = 0;
-      }
-      continue;
-    }
-    baseline[i] = f(yi, base[i]);
-    candidate[i] = f(yi, cand[i]);
-  }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
-}
-function intervalLosses(panel, interval) {
-  if (interval === null) {
-    throw new LossUnavailableError(
-      "the interval loss needs the two quantile levels of the interval"
-    );
-  }
-  const [lowLevel, highLevel] = interval;
-  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
-  const bl = find(panel.baseline.quantiles, lowLevel);
-  const bu = find(panel.baseline.quantiles, highLevel);
-  const cl = find(panel.candidate.quantiles, lowLevel);
-  const cu = find(panel.candidate.quantiles, highLevel);
-  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
-    throw new LossUnavailableError(
-      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
-    );
-  }
-  const alpha = 1 - (highLevel - lowLevel);
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const y = panel.actual;
-  for (let i = 0; i < n; i++) {
-    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
-    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
-  }
-  return {
-    loss: "interval",
-    baseline,
-    candidate,
-    included: null,
-    zeroActualRows: [],
-    levels: [lowLevel, highLevel],
-    coverage: {
-      nominal: highLevel - lowLevel,
-      baseline: intervalCoverage(y, bl, bu),
-      candidate: intervalCoverage(y, cl, cu)
-    }
-  };
-}
-function commonQuantiles(baseline, candidate) {
-  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
-  const pairs = [];
-  for (const q of baseline) {
-    const cand = byLevel.get(q.level);
-    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
-  }
-  return pairs;
 }
 
 // src/multiplicity/testFamily.ts
@@ -16315,7 +16454,7 @@ function evaluatePanel(panel, settings, extras = {}) {
   const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
   const runner = extras.resampleRunner === void 0 ? {} : { runner: extras.resampleRunner };
-  const scope2 = (horizon, series) => ({
+  const scope = (horizon, series) => ({
     loss: settings.loss,
     horizon,
     series,
@@ -16323,13 +16462,13 @@ function evaluatePanel(panel, settings, extras = {}) {
   });
   const overallSeries = aggregateByTime(panel, pooled, void 0, weights);
   const comparisons = [
-    compareLossSeries(overallSeries, scope2("all", "all"), hypothesis, settings, runner)
+    compareLossSeries(overallSeries, scope("all", "all"), hypothesis, settings, runner)
   ];
   const byHorizon = groupRows(panel.horizon);
   if (byHorizon.size > 1) {
     for (const h of [...byHorizon.keys()].sort((a, b) => a - b)) {
       const series = aggregateByTime(panel, pooled, byHorizon.get(h), weights);
-      comparisons.push(compareLossSeries(series, scope2(h, "all"), hypothesis, settings, runner));
+      comparisons.push(compareLossSeries(series, scope(h, "all"), hypothesis, settings, runner));
     }
   }
   let pathSummary = null;
@@ -16338,7 +16477,7 @@ function evaluatePanel(panel, settings, extras = {}) {
     const perPath = panel.paths.map(
       (name, id) => compareLossSeries(
         aggregateByTime(panel, pooled, byPath.get(id) ?? [], weights),
-        { ...scope2("all", "all"), path: name },
+        { ...scope("all", "all"), path: name },
         hypothesis,
         settings,
         { bootstrap: false }
@@ -16358,7 +16497,7 @@ function evaluatePanel(panel, settings, extras = {}) {
   }
   let seriesSummary = null;
   if (panel.seriesNames.length > 1) {
-    const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope2);
+    const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
     for (const c of perSeries.comparisons) comparisons.push(c);
     seriesSummary = perSeries.summary;
   }
@@ -16381,20 +16520,24 @@ function evaluatePanel(panel, settings, extras = {}) {
     })
   });
 }
-function seriesComparisons(panel, losses, weights, hypothesis, settings, scope2) {
+function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
   const k = panel.seriesNames.length;
   const rowsOf = groupRows(panel.series);
+  const plain = hypothesisFor("no-regression", 0, "absolute");
+  const upper = [];
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
-    return compareLossSeries(series, scope2("all", name), hypothesis, settings, {
+    const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
+    upper.push(dm.smallSample?.pValue ?? dm.pValue);
+    return compareLossSeries(series, scope("all", name), hypothesis, settings, {
       bootstrap: false
     });
   });
   const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
-  const upper = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
-  const policyP = hypothesis.rejectWhen === "above" ? worseP : betterP;
+  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const policyP = hypothesis.rejectWhen === "above" ? adjust(tested) : adjust(tested.map((p) => p === null ? null : 1 - p));
   let worse = 0;
   let better = 0;
   const comparisons = raw.map((c, j) => {
@@ -16416,7 +16559,8 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope2)
       reasons: decision.reasons,
       rejected: { dieboldMariano: decision.rejected, bootstrap: null },
       adjustedPValue: policyP[j] ?? null,
-      direction
+      direction,
+      directionPValue: direction === "better" ? b : w
     });
   });
   const top = comparisons.filter((c) => c.direction === "worse").sort(
@@ -16583,8 +16727,8 @@ function checkExactPredictions(panel) {
   const flagged = (mine, share, other) => mine.count >= EXACT_RULE.MIN_ROWS && share - other >= EXACT_RULE.MIN_SHARE_GAP && share >= EXACT_RULE.RATIO * other;
   const flagB = flagged(exactB, shareB, shareC);
   const flagC = flagged(exactC, shareC, shareB);
-  const pct = (x) => `${(x * 100).toFixed(2)}%`;
-  const shares = `candidate ${exactC.count} (${pct(shareC)}), baseline ${exactB.count} (${pct(shareB)})`;
+  const pct2 = (x) => `${(x * 100).toFixed(2)}%`;
+  const shares = `candidate ${exactC.count} (${pct2(shareC)}), baseline ${exactB.count} (${pct2(shareB)})`;
   let count = 0;
   let examples = [];
   let summary = `rows where the prediction equals the actual (to 1e-9 relative), of ${n}: ${shares}; no model stands out`;
@@ -17045,14 +17189,14 @@ function timeSpans(b, c, kind) {
 }
 
 // src/integrity/rowKey.ts
-function describeTableRow(table, i) {
+function describeTableRow(table2, i) {
   const parts = [];
-  if (table.series !== null) parts.push(`series=${table.series.labels[table.series.ids[i]]}`);
-  parts.push(`timestamp=${table.timestamp.labels[table.timestamp.ids[i]]}`);
-  if (table.horizon !== null) parts.push(`horizon=${table.horizon.values[i]}`);
-  if (table.origin !== null) parts.push(`origin=${table.origin.labels[table.origin.ids[i]]}`);
-  if (table.path !== null) parts.push(`path=${table.path.labels[table.path.ids[i]]}`);
-  return `${table.summary.role} line ${table.lines[i]}: ${parts.join(" ")}`;
+  if (table2.series !== null) parts.push(`series=${table2.series.labels[table2.series.ids[i]]}`);
+  parts.push(`timestamp=${table2.timestamp.labels[table2.timestamp.ids[i]]}`);
+  if (table2.horizon !== null) parts.push(`horizon=${table2.horizon.values[i]}`);
+  if (table2.origin !== null) parts.push(`origin=${table2.origin.labels[table2.origin.ids[i]]}`);
+  if (table2.path !== null) parts.push(`path=${table2.path.labels[table2.path.ids[i]]}`);
+  return `${table2.summary.role} line ${table2.lines[i]}: ${parts.join(" ")}`;
 }
 
 // src/integrity/rowChecks.ts
@@ -17091,25 +17235,25 @@ function checkRows(input) {
   else if (f === null) notRun.push({ id: "horizon-steps", reason: input.frequencyReason });
   const countSteps = hasHorizon && f !== null;
   let rows = 0;
-  for (const table of tables) {
-    const times = timePointsOf(table.timestamp.labels, kind);
-    const origins = timePointsOf(table.origin.labels, kind);
-    const tIds = table.timestamp.ids;
-    const oIds = table.origin.ids;
-    const h = table.horizon?.values;
-    rows += table.size;
-    for (let i = 0; i < table.size; i++) {
+  for (const table2 of tables) {
+    const times = timePointsOf(table2.timestamp.labels, kind);
+    const origins = timePointsOf(table2.origin.labels, kind);
+    const tIds = table2.timestamp.ids;
+    const oIds = table2.origin.ids;
+    const h = table2.horizon?.values;
+    rows += table2.size;
+    for (let i = 0; i < table2.size; i++) {
       const t = times[tIds[i]];
       const o = origins[oIds[i]];
-      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table, i));
+      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table2, i));
       else if (countSteps && stepsAhead(o, t, f) !== h[i]) {
         horizon.add(() => {
           const steps = stepsAhead(o, t, f);
-          return `${describeTableRow(table, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
+          return `${describeTableRow(table2, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
         });
       }
       if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
-        afterActuals.add(() => describeTableRow(table, i));
+        afterActuals.add(() => describeTableRow(table2, i));
       }
     }
   }
@@ -17263,8 +17407,8 @@ function readableKind(kind, lists) {
 function lastTime(tables, kind) {
   if (kind === "text") return null;
   let best = null;
-  for (const table of tables) {
-    for (const label of table.timestamp.labels) {
+  for (const table2 of tables) {
+    for (const label of table2.timestamp.labels) {
       const point = toTimePoint(label, kind);
       if (point !== null && (best === null || compareTimePoints(point, best.point) > 0)) {
         best = { point, label };
@@ -17983,32 +18127,32 @@ function parseFloat16(bytes) {
 }
 
 // node_modules/hyparquet/src/schema.js
-function schemaTree(schema, rootIndex, path) {
+function schemaTree(schema, rootIndex, path2) {
   const element = schema[rootIndex];
   const children = [];
   let count = 1;
   if (element.num_children) {
     while (children.length < element.num_children) {
       const childElement = schema[rootIndex + count];
-      const child = schemaTree(schema, rootIndex + count, [...path, childElement.name]);
+      const child = schemaTree(schema, rootIndex + count, [...path2, childElement.name]);
       count += child.count;
       children.push(child);
     }
   }
-  return { count, element, children, path };
+  return { count, element, children, path: path2 };
 }
 function getSchemaPath(schema, name) {
   return getTreePath(schemaTree(schema, 0, []), name);
 }
 function getTreePath(tree, name) {
-  const path = [tree];
+  const path2 = [tree];
   for (const part of name) {
     const child = tree.children.find((child2) => child2.element.name === part);
     if (!child) throw new Error(`parquet schema element not found: ${name}`);
-    path.push(child);
+    path2.push(child);
     tree = child;
   }
-  return path;
+  return path2;
 }
 function getPhysicalColumns(schemaTree2) {
   const columns = [];
@@ -18746,7 +18890,7 @@ function pathsNeededForFilter(filter) {
   return [...new Set(paths)];
 }
 function columnsNeededForFilter(filter) {
-  return [...new Set(pathsNeededForFilter(filter).map((path) => path.split(".")[0]))];
+  return [...new Set(pathsNeededForFilter(filter).map((path2) => path2.split(".")[0]))];
 }
 function matchFilter(record, filter, strict = true) {
   if ("$and" in filter && Array.isArray(filter.$and)) {
@@ -18951,9 +19095,9 @@ function unionRanges(a, b) {
   }
   return out;
 }
-function resolve(record, path) {
+function resolve(record, path2) {
   let value = record;
-  for (const part of path.split(".")) {
+  for (const part of path2.split(".")) {
     value = value?.[part];
   }
   return value;
@@ -19613,7 +19757,7 @@ function assembleLists(output, definitionLevels, repetitionLevels, values, schem
   return output;
 }
 function assembleNested(subcolumnData, schema, parsers, depth = 0) {
-  const path = schema.path.join(".");
+  const path2 = schema.path.join(".");
   const optional = schema.element.repetition_type === "OPTIONAL";
   const nextDepth = optional ? depth + 1 : depth;
   if (isListLike(schema)) {
@@ -19628,7 +19772,7 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
     const values = subcolumnData.get(subcolumn);
     if (!values) throw new Error("parquet list column missing values");
     if (optional) flattenAtDepth(values, depth);
-    subcolumnData.set(path, values);
+    subcolumnData.set(path2, values);
     subcolumnData.delete(subcolumn);
     return;
   }
@@ -19636,8 +19780,8 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
     const mapName = schema.children[0].element.name;
     assembleNested(subcolumnData, schema.children[0].children[0], parsers, nextDepth + 1);
     assembleNested(subcolumnData, schema.children[0].children[1], parsers, nextDepth + 1);
-    const keys = subcolumnData.get(`${path}.${mapName}.key`);
-    const values = subcolumnData.get(`${path}.${mapName}.value`);
+    const keys = subcolumnData.get(`${path2}.${mapName}.key`);
+    const values = subcolumnData.get(`${path2}.${mapName}.value`);
     if (!keys) throw new Error("parquet map column missing keys");
     if (!values) throw new Error("parquet map column missing values");
     if (keys.length !== values.length) {
@@ -19645,9 +19789,9 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
     }
     const out = assembleMaps(keys, values, nextDepth);
     if (optional) flattenAtDepth(out, depth);
-    subcolumnData.delete(`${path}.${mapName}.key`);
-    subcolumnData.delete(`${path}.${mapName}.value`);
-    subcolumnData.set(path, out);
+    subcolumnData.delete(`${path2}.${mapName}.key`);
+    subcolumnData.delete(`${path2}.${mapName}.value`);
+    subcolumnData.set(path2, out);
     return;
   }
   if (schema.children.length) {
@@ -19667,7 +19811,7 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
       inverted = decodeVariantColumn(inverted, parsers);
     }
     if (optional) flattenAtDepth(inverted, depth);
-    subcolumnData.set(path, inverted);
+    subcolumnData.set(path2, inverted);
   }
 }
 function flattenAtDepth(arr, depth) {
@@ -21192,8 +21336,8 @@ var rhu = function(dat, bt) {
   for (i = 0; i < wc; ++i) {
     var bits2 = hw[i];
     if (bits2) {
-      var code = ri[bits2];
-      fill(syms, i, code, ri[bits2] = code + (1 << mb - bits2));
+      var code2 = ri[bits2];
+      fill(syms, i, code2, ri[bits2] = code2 + (1 << mb - bits2));
     }
   }
   return [bt, {
@@ -21788,10 +21932,10 @@ function getNextKey(key, len) {
   }
   return (key & step - 1) + step;
 }
-function replicateValue(table, i, step, end, code) {
+function replicateValue(table2, i, step, end, code2) {
   do {
     end -= step;
-    table[i + end] = new HuffmanCode(code.bits, code.value);
+    table2[i + end] = new HuffmanCode(code2.bits, code2.value);
   } while (end > 0);
 }
 function nextTableBitSize(count, len, root_bits) {
@@ -21804,8 +21948,8 @@ function nextTableBitSize(count, len, root_bits) {
   }
   return len - root_bits;
 }
-function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_lengths_size) {
-  const start_table = table;
+function buildHuffmanTable(root_table, table2, root_bits, code_lengths, code_lengths_size) {
+  const start_table = table2;
   const count = new Int32Array(MAX_LENGTH + 1);
   const offset = new Int32Array(MAX_LENGTH + 1);
   const sorted = new Int32Array(code_lengths_size);
@@ -21826,7 +21970,7 @@ function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_leng
   let total_size = table_size;
   if (offset[MAX_LENGTH] === 1) {
     for (let key2 = 0; key2 < total_size; ++key2) {
-      root_table[table + key2] = new HuffmanCode(0, sorted[0] & 65535);
+      root_table[table2 + key2] = new HuffmanCode(0, sorted[0] & 65535);
     }
     return total_size;
   }
@@ -21834,8 +21978,8 @@ function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_leng
   let symbol = 0;
   for (let len = 1, step = 2; len <= root_bits; ++len, step <<= 1) {
     for (; count[len] > 0; --count[len]) {
-      const code = new HuffmanCode(len & 255, sorted[symbol++] & 65535);
-      replicateValue(root_table, table + key, step, table_size, code);
+      const code2 = new HuffmanCode(len & 255, sorted[symbol++] & 65535);
+      replicateValue(root_table, table2 + key, step, table_size, code2);
       key = getNextKey(key, len);
     }
   }
@@ -21844,21 +21988,21 @@ function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_leng
   for (let len = root_bits + 1, step = 2; len <= MAX_LENGTH; ++len, step <<= 1) {
     for (; count[len] > 0; --count[len]) {
       if ((key & mask) !== low) {
-        table += table_size;
+        table2 += table_size;
         table_bits = nextTableBitSize(count, len, root_bits);
         table_size = 1 << table_bits;
         total_size += table_size;
         low = key & mask;
-        root_table[start_table + low] = new HuffmanCode(table_bits + root_bits & 255, table - start_table - low & 65535);
+        root_table[start_table + low] = new HuffmanCode(table_bits + root_bits & 255, table2 - start_table - low & 65535);
       }
-      const code = new HuffmanCode(len - root_bits & 255, sorted[symbol++] & 65535);
-      replicateValue(root_table, table + (key >> root_bits), step, table_size, code);
+      const code2 = new HuffmanCode(len - root_bits & 255, sorted[symbol++] & 65535);
+      replicateValue(root_table, table2 + (key >> root_bits), step, table_size, code2);
       key = getNextKey(key, len);
     }
   }
   return total_size;
 }
-function readHuffmanCode(alphabet_size, tables, table, br) {
+function readHuffmanCode(alphabet_size, tables, table2, br) {
   const code_lengths = new Uint8Array(alphabet_size);
   br.readMoreInput();
   const simple_code_or_skip = br.readBits(2);
@@ -21941,21 +22085,21 @@ function readHuffmanCode(alphabet_size, tables, table, br) {
       throw new Error("[ReadHuffmanCode] invalid num_codes or space");
     readHuffmanCodeLengths(code_length_code_lengths, alphabet_size, code_lengths, br);
   }
-  const table_size = buildHuffmanTable(tables, table, HUFFMAN_TABLE_BITS, code_lengths, alphabet_size);
+  const table_size = buildHuffmanTable(tables, table2, HUFFMAN_TABLE_BITS, code_lengths, alphabet_size);
   if (!table_size) throw new Error("brotli BuildHuffmanTable failed");
   return table_size;
 }
-function readSymbol(table, index, br) {
+function readSymbol(table2, index, br) {
   br.fillBitWindow();
   index += br.val_ >>> br.bit_pos_ & HUFFMAN_TABLE_MASK;
-  const nbits = table[index].bits - HUFFMAN_TABLE_BITS;
+  const nbits = table2[index].bits - HUFFMAN_TABLE_BITS;
   if (nbits > 0) {
     br.bit_pos_ += HUFFMAN_TABLE_BITS;
-    index += table[index].value;
+    index += table2[index].value;
     index += br.val_ >>> br.bit_pos_ & (1 << nbits) - 1;
   }
-  br.bit_pos_ += table[index].bits;
-  return table[index].value;
+  br.bit_pos_ += table2[index].bits;
+  return table2[index].value;
 }
 function readHuffmanCodeLengths(code_length_code_lengths, num_symbols, code_lengths, br) {
   let symbol = 0;
@@ -21963,17 +22107,17 @@ function readHuffmanCodeLengths(code_length_code_lengths, num_symbols, code_leng
   let repeat = 0;
   let repeat_code_len = 0;
   let space = 32768;
-  const table = [];
+  const table2 = [];
   for (let i = 0; i < 32; i++)
-    table.push(new HuffmanCode(0, 0));
-  buildHuffmanTable(table, 0, 5, code_length_code_lengths, CODE_LENGTH_CODES);
+    table2.push(new HuffmanCode(0, 0));
+  buildHuffmanTable(table2, 0, 5, code_length_code_lengths, CODE_LENGTH_CODES);
   while (symbol < num_symbols && space > 0) {
     let p = 0;
     br.readMoreInput();
     br.fillBitWindow();
     p += br.val_ >>> br.bit_pos_ & 31;
-    br.bit_pos_ += table[p].bits;
-    const code_len = table[p].value & 255;
+    br.bit_pos_ += table2[p].bits;
+    const code_len = table2[p].value & 255;
     if (code_len < kCodeLengthRepeatCode) {
       repeat = 0;
       code_lengths[symbol++] = code_len;
@@ -22427,9 +22571,9 @@ function jumpToByteBoundary(br) {
   const new_bit_pos = br.bit_pos_ + 7 & ~7;
   return !br.readBits(new_bit_pos - br.bit_pos_);
 }
-function readBlockLength(table, index, br) {
-  const code = readSymbol(table, index, br);
-  const { offset, nbits } = kBlockLengthPrefixCode[code];
+function readBlockLength(table2, index, br) {
+  const code2 = readSymbol(table2, index, br);
+  const { offset, nbits } = kBlockLengthPrefixCode[code2];
   return offset + br.readBits(nbits);
 }
 
@@ -24269,19 +24413,19 @@ function decodeContextMap(context_map_size, br) {
   if (use_rle_for_zeros) {
     max_run_length_prefix = br.readBits(4) + 1;
   }
-  const table = [];
+  const table2 = [];
   for (let i = 0; i < HUFFMAN_MAX_TABLE_SIZE; i++) {
-    table[i] = new HuffmanCode(0, 0);
+    table2[i] = new HuffmanCode(0, 0);
   }
-  readHuffmanCode(num_htrees + max_run_length_prefix, table, 0, br);
+  readHuffmanCode(num_htrees + max_run_length_prefix, table2, 0, br);
   for (let i = 0; i < context_map_size; ) {
     br.readMoreInput();
-    const code = readSymbol(table, 0, br);
-    if (code === 0) {
+    const code2 = readSymbol(table2, 0, br);
+    if (code2 === 0) {
       context_map[i] = 0;
       i++;
-    } else if (code <= max_run_length_prefix) {
-      let reps = 1 + (1 << code) + br.readBits(code);
+    } else if (code2 <= max_run_length_prefix) {
+      let reps = 1 + (1 << code2) + br.readBits(code2);
       while (--reps) {
         if (i >= context_map_size) {
           throw new Error("[DecodeContextMap] i >= context_map_size");
@@ -24290,7 +24434,7 @@ function decodeContextMap(context_map_size, br) {
         i++;
       }
     } else {
-      context_map[i] = code - max_run_length_prefix;
+      context_map[i] = code2 - max_run_length_prefix;
       i++;
     }
   }
@@ -24473,11 +24617,11 @@ function gunzip(input, output, inputIndex = 0, outputIndex = 0) {
     const lms = (1 << lengthBits) - 1;
     const dms = (1 << distBits) - 1;
     for (; ; ) {
-      const code = lengthMap[bits16(input, pos) & lms];
-      const sym = code >> 4;
-      pos += code & 15;
+      const code2 = lengthMap[bits16(input, pos) & lms];
+      const sym = code2 >> 4;
+      pos += code2 & 15;
       if (pos > totalBits) throw new Error("unexpected EOF");
-      if (!code) throw new Error("invalid length/literal");
+      if (!code2) throw new Error("invalid length/literal");
       if (sym < 256) out[outputIndex++] = sym;
       else if (sym === 256) {
         lengthMap = void 0;
@@ -26054,13 +26198,13 @@ function brotli(input, output) {
   }
   output.write(ringbuffer, pos & ringbuffer_mask);
 }
-function translateShortCodes(code, ringbuffer, index) {
-  if (code < NUM_DISTANCE_SHORT_CODES) {
-    index += kDistanceShortCodeIndexOffset[code];
+function translateShortCodes(code2, ringbuffer, index) {
+  if (code2 < NUM_DISTANCE_SHORT_CODES) {
+    index += kDistanceShortCodeIndexOffset[code2];
     index &= 3;
-    return ringbuffer[index] + kDistanceShortCodeValueOffset[code];
+    return ringbuffer[index] + kDistanceShortCodeValueOffset[code2];
   } else {
-    return code - NUM_DISTANCE_SHORT_CODES + 1;
+    return code2 - NUM_DISTANCE_SHORT_CODES + 1;
   }
 }
 
@@ -26134,17 +26278,17 @@ var compressors = {
 
 // src/reading/streamParquetFile.ts
 var MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
-async function streamParquetFile(path, reader, onProgress) {
+async function streamParquetFile(path2, reader, onProgress) {
   let size;
   try {
-    const info = await stat(path);
-    if (!info.isFile()) throw new InputError("not a regular file", { file: path });
+    const info = await stat(path2);
+    if (!info.isFile()) throw new InputError("not a regular file", { file: path2 });
     size = info.size;
   } catch (error) {
-    throw fileError(error, path);
+    throw fileError(error, path2);
   }
-  const handle = await open(path, "r").catch((error) => {
-    throw fileError(error, path);
+  const handle = await open(path2, "r").catch((error) => {
+    throw fileError(error, path2);
   });
   try {
     const file = fileBuffer(handle, size);
@@ -26152,9 +26296,9 @@ async function streamParquetFile(path, reader, onProgress) {
     try {
       metadata = await parquetMetadataAsync(file);
     } catch (error) {
-      throw notParquet(error, path);
+      throw notParquet(error, path2);
     }
-    const names = topLevelColumns(metadata, path);
+    const names = topLevelColumns(metadata, path2);
     reader.record([...names], names.length, 1);
     const used = reader.usedColumns;
     const usedNames = used.map((i) => names[i]);
@@ -26185,12 +26329,12 @@ async function streamParquetFile(path, reader, onProgress) {
           }
         });
       } catch (error) {
-        throw notParquet(error, path);
+        throw notParquet(error, path2);
       }
       for (let r = 0; r < groupRows2; r++) {
         const line = groupStart + r + 2;
         for (let k = 0; k < used.length; k++) {
-          fields[used[k]] = fieldValue(columns[k][r], path, line, usedNames[k]);
+          fields[used[k]] = fieldValue(columns[k][r], path2, line, usedNames[k]);
         }
         reader.record(fields, names.length, line);
       }
@@ -26200,7 +26344,7 @@ async function streamParquetFile(path, reader, onProgress) {
   } finally {
     await handle.close();
   }
-  return sha256Of(path);
+  return sha256Of(path2);
 }
 function fileBuffer(handle, size) {
   return {
@@ -26219,7 +26363,7 @@ function fileBuffer(handle, size) {
     }
   };
 }
-function topLevelColumns(metadata, path) {
+function topLevelColumns(metadata, path2) {
   const schema = metadata.schema;
   const root = schema[0];
   const names = [];
@@ -26230,7 +26374,7 @@ function topLevelColumns(metadata, path) {
     if ((element.num_children ?? 0) > 0) {
       throw new InputError(
         `the Parquet column "${echo(element.name)}" is nested (a list, struct or map); forecast files need flat columns`,
-        { file: path, column: element.name }
+        { file: path2, column: element.name }
       );
     }
     names.push(element.name);
@@ -26259,7 +26403,7 @@ function isoTimestamp(count, digits) {
   const f = fraction === 0n ? "" : `.${fraction.toString().padStart(digits, "0").replace(/0+$/, "")}`;
   return `${text}${f}Z`;
 }
-function fieldValue(value, path, line, column) {
+function fieldValue(value, path2, line, column) {
   switch (typeof value) {
     case "string":
     case "number":
@@ -26275,39 +26419,39 @@ function fieldValue(value, path, line, column) {
       if (value instanceof Date) return value.toISOString();
       if (value instanceof Uint8Array) {
         throw new InputError("a binary Parquet value that is not UTF-8 text", {
-          file: path,
+          file: path2,
           line,
           column
         });
       }
       throw new InputError(
         "a Parquet value that is neither a number nor text (binary or nested data)",
-        { file: path, line, column }
+        { file: path2, line, column }
       );
     default:
-      throw new InputError("a Parquet value of an unsupported type", { file: path, line, column });
+      throw new InputError("a Parquet value of an unsupported type", { file: path2, line, column });
   }
 }
-async function sha256Of(path) {
+async function sha256Of(path2) {
   const hash = createHash("sha256");
-  await pipeline(createReadStream(path, { highWaterMark: 1 << 20 }), async (source) => {
+  await pipeline(createReadStream(path2, { highWaterMark: 1 << 20 }), async (source) => {
     for await (const chunk of source) hash.update(chunk);
   });
   return `sha256:${hash.digest("hex")}`;
 }
-function notParquet(error, path) {
+function notParquet(error, path2) {
   if (error instanceof InputError) return error;
   const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path });
+  return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path2 });
 }
-function fileError(error, path) {
+function fileError(error, path2) {
   if (error instanceof InputError) return error;
-  const code = error?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path });
+  const code2 = error?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path2 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path2 });
   const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path });
+  return new InputError(`cannot read the file: ${message}`, { file: path2 });
 }
 
 // src/reading/streamTextFile.ts
@@ -26318,14 +26462,14 @@ import { pipeline as pipeline2 } from "node:stream/promises";
 import { TextDecoder as TextDecoder2 } from "node:util";
 import { createGunzip } from "node:zlib";
 var CHUNK_BYTES = 1 << 20;
-async function streamTextFile(path, gzip, sink, onProgress) {
+async function streamTextFile(path2, gzip, sink, onProgress) {
   let totalBytes;
   try {
-    const info = await stat2(path);
-    if (!info.isFile()) throw new InputError("not a regular file", { file: path });
+    const info = await stat2(path2);
+    if (!info.isFile()) throw new InputError("not a regular file", { file: path2 });
     totalBytes = info.size;
   } catch (error) {
-    throw asInputError(error, path);
+    throw asInputError(error, path2);
   }
   const hash = createHash2("sha256");
   const decoder4 = new TextDecoder2("utf-8", { fatal: true });
@@ -26342,12 +26486,12 @@ async function streamTextFile(path, gzip, sink, onProgress) {
   const consume = async (source) => {
     for await (const chunk of source) {
       const nul = chunk.indexOf(0);
-      if (nul >= 0) throw notText(chunk, nul, newlines, path, "a NUL byte");
+      if (nul >= 0) throw notText(chunk, nul, newlines, path2, "a NUL byte");
       let text;
       try {
         text = decoder4.decode(chunk, { stream: true });
       } catch {
-        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path, "bytes that are not UTF-8");
+        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path2, "bytes that are not UTF-8");
       }
       newlines += countByte(chunk, 10);
       sink.push(text);
@@ -26357,20 +26501,20 @@ async function streamTextFile(path, gzip, sink, onProgress) {
     } catch {
       throw new InputError(
         `the file is not valid UTF-8 text: it ends inside a multi-byte character (line ${newlines + 1})`,
-        { file: path, line: newlines + 1 }
+        { file: path2, line: newlines + 1 }
       );
     }
   };
   try {
-    const raw = createReadStream2(path, { highWaterMark: CHUNK_BYTES });
+    const raw = createReadStream2(path2, { highWaterMark: CHUNK_BYTES });
     if (gzip) await pipeline2(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
     else await pipeline2(raw, tap, consume);
   } catch (error) {
-    throw asInputError(error, path);
+    throw asInputError(error, path2);
   }
   return `sha256:${hash.digest("hex")}`;
 }
-function notText(chunk, at, before, path, what) {
+function notText(chunk, at, before, path2, what) {
   const line = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
   const b0 = chunk[0];
   const b1 = chunk[1];
@@ -26378,7 +26522,7 @@ function notText(chunk, at, before, path, what) {
   const byte = chunk[at];
   const hint = utf16 ? "it looks like UTF-16: convert it, e.g. iconv -f UTF-16 -t UTF-8" : byte !== void 0 && byte >= 128 ? `byte 0x${byte.toString(16).toUpperCase()} suggests Latin-1 or Windows-1252: convert it, e.g. iconv -f WINDOWS-1252 -t UTF-8` : "convert it to UTF-8";
   return new InputError(`the file is not UTF-8 text: line ${line} has ${what} (${hint})`, {
-    file: path,
+    file: path2,
     line,
     value: chunk.subarray(Math.max(0, at - 20), at + 20).toString("latin1").replace(/[^\x20-\x7e]/g, "?")
   });
@@ -26410,18 +26554,18 @@ function countByte(bytes, byte) {
   }
   return count;
 }
-function asInputError(error, path) {
+function asInputError(error, path2) {
   if (error instanceof InputError) return error;
-  const code = error?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path });
-  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path });
-  if (typeof code === "string" && code.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error.message})`, { file: path });
+  const code2 = error?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path2 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path2 });
+  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path2 });
+  if (typeof code2 === "string" && code2.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error.message})`, { file: path2 });
   }
   const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path });
+  return new InputError(`cannot read the file: ${message}`, { file: path2 });
 }
 
 // src/reading/rowKeySet.ts
@@ -26478,17 +26622,17 @@ var RowKeySet = class {
   }
   insert(row) {
     const mask = this.mask;
-    const table = this.table;
+    const table2 = this.table;
     let slot = this.hash(row) & mask;
     for (; ; ) {
-      const stored = table[slot];
+      const stored = table2[slot];
       if (stored === 0) break;
       if (this.same(row, stored - 1)) return stored - 1;
       slot = slot + 1 & mask;
     }
-    table[slot] = row + 1;
+    table2[slot] = row + 1;
     this.size++;
-    if (this.size * 2 > table.length) this.grow();
+    if (this.size * 2 > table2.length) this.grow();
     return -1;
   }
   same(a, b) {
@@ -26547,8 +26691,8 @@ var ForecastTableReader = class {
   delimiter;
   decimalComma;
   keys = null;
-  constructor(path, options) {
-    this.path = path;
+  constructor(path2, options) {
+    this.path = path2;
     this.options = options;
     checkDistinctNames(options.columns ?? {});
     const delimiter = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
@@ -26557,13 +26701,13 @@ var ForecastTableReader = class {
     if (this.decimalComma && delimiter === ",") {
       throw new InputError(
         'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path }
+        { file: path2 }
       );
     }
     this.tokenizer = new Tokenizer(
       delimiter,
       (fields, count, line) => this.record(fields, count, line),
-      path,
+      path2,
       options.lineLimit
     );
   }
@@ -26824,7 +26968,7 @@ function resolveHeader(names, file, line, options, delimiter = ",") {
   const timestamp = find(columns.timestamp, true);
   const horizon = find(columns.horizon, predictions);
   const origin = find(columns.origin, predictions);
-  const path = find(columns.path, predictions);
+  const path2 = find(columns.path, predictions);
   const actual = find(columns.actual, true);
   const prediction = find(columns.prediction, predictions);
   const weight = find(columns.weight, true);
@@ -26883,7 +27027,7 @@ function resolveHeader(names, file, line, options, delimiter = ",") {
     timestamp,
     horizon,
     origin,
-    path,
+    path: path2,
     actual,
     prediction,
     weight,
@@ -26942,19 +27086,19 @@ function growFloat(array, capacity) {
 }
 
 // src/reading/readForecastFile.ts
-function formatFromPath(path) {
-  const lower = path.toLowerCase();
+function formatFromPath(path2) {
+  const lower = path2.toLowerCase();
   if (lower.endsWith(".parquet") || lower.endsWith(".pq"))
     return { format: "parquet", gzip: false };
   const gzip = lower.endsWith(".gz");
   const base = gzip ? lower.slice(0, -3) : lower;
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
 }
-async function readForecastFile(path, options) {
-  const implied = formatFromPath(path);
+async function readForecastFile(path2, options) {
+  const implied = formatFromPath(path2);
   const format = options.format ?? implied.format;
   const textFormat = format === "tsv" ? "tsv" : "csv";
-  const reader = new ForecastTableReader(path, {
+  const reader = new ForecastTableReader(path2, {
     role: options.role,
     format: textFormat,
     delimiter: delimiterFor(options.delimiter ?? "auto", textFormat === "tsv"),
@@ -26962,7 +27106,7 @@ async function readForecastFile(path, options) {
     ...options.columns === void 0 ? {} : { columns: options.columns },
     ...options.requireActual === void 0 ? {} : { requireActual: options.requireActual }
   });
-  const sha256 = format === "parquet" ? await streamParquetFile(path, reader, options.onProgress) : await streamTextFile(path, implied.gzip, reader, options.onProgress);
+  const sha256 = format === "parquet" ? await streamParquetFile(path2, reader, options.onProgress) : await streamTextFile(path2, implied.gzip, reader, options.onProgress);
   return reader.finish(sha256);
 }
 function withDialect(options) {
@@ -26973,14 +27117,14 @@ function withDialect(options) {
 }
 
 // src/reading/readFoldLayout.ts
-async function readFoldLayout(path, format) {
-  const implied = formatFromPath(path);
+async function readFoldLayout(path2, format) {
+  const implied = formatFromPath(path2);
   const chosen = format ?? implied.format;
   if (chosen === "parquet") {
-    throw new InputError("a fold layout file is read as CSV or TSV", { file: path });
+    throw new InputError("a fold layout file is read as CSV or TSV", { file: path2 });
   }
-  const reader = new FoldLayoutReader(path, chosen);
-  await streamTextFile(path, implied.gzip, reader);
+  const reader = new FoldLayoutReader(path2, chosen);
+  await streamTextFile(path2, implied.gzip, reader);
   return reader.finish();
 }
 
@@ -27002,21 +27146,21 @@ var LossSeriesReader = class {
   rows = [];
   horizon = [];
   decimalComma;
-  constructor(path, options) {
-    this.path = path;
+  constructor(path2, options) {
+    this.path = path2;
     this.timestampName = options.timestampColumn ?? "timestamp";
     const delimiter = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
     this.decimalComma = options.decimal === ",";
     if (this.decimalComma && delimiter === ",") {
       throw new InputError(
         'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path }
+        { file: path2 }
       );
     }
     this.tokenizer = new Tokenizer(
       delimiter,
       (fields, count, line) => this.record(fields, count, line),
-      path,
+      path2,
       options.lineLimit
     );
   }
@@ -27175,23 +27319,23 @@ var LossSeriesReader = class {
 };
 
 // src/reading/readLossSeriesFile.ts
-async function readLossSeriesFile(path, options = {}) {
-  const implied = formatFromPath(path);
+async function readLossSeriesFile(path2, options = {}) {
+  const implied = formatFromPath(path2);
   const format = options.format ?? implied.format;
   if (format === "parquet") {
     throw new InputError(
       "a pre-aggregated loss file is read as CSV or TSV (Parquet is read for forecast files)",
-      { file: path }
+      { file: path2 }
     );
   }
-  const reader = new LossSeriesReader(path, {
+  const reader = new LossSeriesReader(path2, {
     format,
     delimiter: delimiterFor(options.delimiter ?? "auto", format === "tsv"),
     ...options.decimal === void 0 ? {} : { decimal: options.decimal },
     ...options.lineLimit === void 0 ? {} : { lineLimit: options.lineLimit },
     ...options.timestampColumn === void 0 ? {} : { timestampColumn: options.timestampColumn }
   });
-  const sha256 = await streamTextFile(path, implied.gzip, reader, options.onProgress);
+  const sha256 = await streamTextFile(path2, implied.gzip, reader, options.onProgress);
   return reader.finish(sha256);
 }
 
@@ -27199,7 +27343,7 @@ async function readLossSeriesFile(path, options = {}) {
 async function runComparison(settings, hooks = {}) {
   if (settings.losses !== null)
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
-  const read = (path, role) => readForecastFile(path, {
+  const read = (path2, role) => readForecastFile(path2, {
     role,
     columns: columnsFor(settings, role),
     ...readDialect(settings),
@@ -27238,22 +27382,22 @@ async function runComparison(settings, hooks = {}) {
   hooks.onProgress?.({ stage: "testing", fraction: 1 });
   return { report };
 }
-async function runOnLossFile(path, settings, hooks) {
+async function runOnLossFile(path2, settings, hooks) {
   if (settings.folds !== null || settings.frequency !== "auto" || settings.embargo !== 0) {
     throw new InputError(
       "frequency, folds and embargo configure the backtest checks, which need the forecast files (baseline and candidate), not a loss file",
-      { file: path }
+      { file: path2 }
     );
   }
-  const table = await readLossSeriesFile(path, {
+  const table2 = await readLossSeriesFile(path2, {
     ...readDialect(settings),
     ...settings.columns.timestamp === void 0 ? {} : { timestampColumn: settings.columns.timestamp },
     onProgress: (done, total) => hooks.onProgress?.({ stage: "reading losses", fraction: total > 0 ? done / total : 1 })
   });
-  const { series, timestamps, kind, reason, format } = orderLossSeries(table, settings.timeFormat);
+  const { series, timestamps, kind, reason, format } = orderLossSeries(table2, settings.timeFormat);
   return evaluateLossSeries(
     series,
-    { file: table.summary, timestamps, kind, order: { format, reason } },
+    { file: table2.summary, timestamps, kind, order: { format, reason } },
     settings,
     hooks.resampleRunner
   );
@@ -27262,13 +27406,13 @@ async function readHistory(settings) {
   if (settings.history === null) {
     throw new InputError("--scale seasonal-naive needs --history FILE (series, timestamp, actual)");
   }
-  const table = await readForecastFile(settings.history, {
+  const table2 = await readForecastFile(settings.history, {
     role: "actuals",
     columns: settings.columns,
     ...readDialect(settings),
     requireActual: true
   });
-  return historyBySeries(table, settings.timeFormat);
+  return historyBySeries(table2, settings.timeFormat);
 }
 function columnsFor(settings, role) {
   const own = role === "baseline" ? settings.baselineColumns : role === "candidate" ? settings.candidateColumns : {};
@@ -27418,6 +27562,173 @@ function createResamplePool(options = {}) {
   };
 }
 
+// src/report/cells.ts
+var LOSS_DIGITS = 4;
+var PERCENT_DIGITS = 3;
+function significant(x, digits = LOSS_DIGITS) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  if (x === 0) return "0";
+  const magnitude = Math.abs(x);
+  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
+  return x.toPrecision(digits);
+}
+function percent(x, digits = PERCENT_DIGITS) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  if (x === 0) return "0%";
+  const text = significant(x * 100, digits);
+  return `${x > 0 ? "+" : ""}${text}%`;
+}
+var pValue = formatPValue;
+function relativeInterval(c) {
+  const r = c.relativeChange ?? null;
+  if (r !== null) {
+    return {
+      lower: r.lower,
+      upper: r.upper,
+      level: r.level,
+      method: r.method,
+      ...r.pieces === void 0 ? {} : { pieces: r.pieces },
+      ...r.measuredCoverage === void 0 ? {} : { measuredCoverage: r.measuredCoverage }
+    };
+  }
+  const b = c.bootstrap.relativeInterval;
+  return b === null ? null : { lower: b.lower, upper: b.upper, level: b.level, method: b.method };
+}
+function intervalText(i) {
+  const piece2 = (p) => `[${p.lower === null ? "\u2212\u221E" : percent(p.lower)}, ${p.upper === null ? "+\u221E" : percent(p.upper)}]`;
+  if (i.pieces !== void 0) return i.pieces.length === 0 ? "\u2205" : i.pieces.map(piece2).join(" \u222A ");
+  return piece2(i);
+}
+function changeCell(c) {
+  const point = percent(c.relativeDifference);
+  const i = relativeInterval(c);
+  return i === null ? point : `${point} ${intervalText(i)}${measuredCoverageText(i.measuredCoverage)}`;
+}
+function evidenceOf(c, _report) {
+  if (c.direction !== void 0) {
+    return c.direction === "no evidence" ? "no clear difference" : c.direction;
+  }
+  const i = relativeInterval(c);
+  if (i !== null) return sideOf(i.pieces ?? [i]);
+  const intervals = [c.dieboldMariano.interval, c.bootstrap.interval].filter((x) => x !== null);
+  if (intervals.length === 0) return "n/a";
+  return sideOf(intervals);
+}
+function sideOf(intervals) {
+  if (intervals.every((i) => i.lower !== null && i.lower > 0)) return "worse";
+  if (intervals.every((i) => i.upper !== null && i.upper < 0)) return "better";
+  return "no clear difference";
+}
+
+// src/report/differenceChart.ts
+function differenceSeries(report) {
+  const all = report.stability?.periods ?? [];
+  const periods = all.filter(
+    (p2) => p2.relativeDifference !== null && Number.isFinite(p2.relativeDifference)
+  );
+  if (periods.length < 2) return null;
+  const p = report.policy;
+  const margin = p.marginKind === "relative" && p.margin > 0 ? (p.policy === "superiority" ? -p.margin : p.margin) * 100 : null;
+  return {
+    labels: periods.map((x) => periodLabel(x.start)),
+    values: periods.map((x) => x.relativeDifference * 100),
+    periods,
+    margin,
+    first: all[0].start,
+    last: all.at(-1).end
+  };
+}
+function periodLabel(timestamp) {
+  const t = timestamp.replace(/T00:00(:00(\.0+)?)?Z?$/, "");
+  return t.replace(/[^A-Za-z0-9 .:/+-]/g, "").slice(0, 16);
+}
+var BLOCKS = "\u2581\u2582\u2583\u2584\u2585\u2586\u2587\u2588";
+var PALETTE = "black, darkgray, sienna";
+function sparkline(values) {
+  if (values.length === 0) return "";
+  const lo2 = Math.min(0, ...values);
+  const hi2 = Math.max(0, ...values);
+  const span = hi2 - lo2;
+  return values.map((v) => BLOCKS[span === 0 ? 0 : Math.min(7, Math.floor((v - lo2) / span * 8))]).join("");
+}
+function sparklineText(series) {
+  const lo2 = Math.min(...series.values) / 100;
+  const hi2 = Math.max(...series.values) / 100;
+  return `change per period, ${periodLabel(series.first)} \u2192 ${periodLabel(series.last)}: ${sparkline(series.values)} (from ${percent(lo2)} to ${percent(hi2)})`;
+}
+function mermaidChart(series) {
+  const n = series.values.length;
+  const values = series.values.map(round2);
+  const top = Math.max(0, series.margin ?? 0, ...values);
+  const bottom = Math.min(0, series.margin ?? 0, ...values);
+  const pad = Math.max(0.5, (top - bottom) * 0.08);
+  const lines = [
+    "```mermaid",
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${PALETTE}"}}}}%%`,
+    "xychart-beta",
+    '    title "Candidate vs baseline: change in mean loss per period (%)"',
+    `    x-axis "period, ${periodLabel(series.first)} to ${periodLabel(series.last)}" 1 --> ${n}`,
+    `    y-axis "change in mean loss (%)" ${round2(bottom - pad)} --> ${round2(top + pad)}`,
+    `    line [${values.join(", ")}]`,
+    `    line [${Array(n).fill(0).join(", ")}]`
+  ];
+  if (series.margin !== null)
+    lines.push(`    line [${Array(n).fill(round2(series.margin)).join(", ")}]`);
+  lines.push("```");
+  return lines;
+}
+function chartCaption(series) {
+  return `The first line is the candidate's mean loss against the baseline's in each of ${series.values.length} periods (above 0: the candidate is worse then); the flat line at 0 is no difference${series.margin === null ? "" : `; the flat line at ${percent(series.margin / 100)} is the margin`}.`;
+}
+function round2(x) {
+  return Number(x.toFixed(2));
+}
+
+// src/report/reportTable.ts
+function table(header, align2, rows) {
+  return { header, align: align2, rows };
+}
+
+// src/report/missingRowsSection.ts
+function missingRowsSection(report) {
+  const count = report.inputs.rowsDropped.baseline;
+  if (count === 0) return null;
+  const m = report.inputs.missingRows ?? null;
+  const title = `Rows the candidate lacks (${count})`;
+  const examples = report.inputs.examples.baselineOnly;
+  if (m === null) {
+    return {
+      title,
+      lines: [
+        `The candidate lacks ${count} rows that the baseline scored${examples.length > 0 ? `, e.g. ${examples.join("; ")}` : ""}.`
+      ],
+      tables: []
+    };
+  }
+  const harder = m.meanBaselineLoss !== null && m.meanBaselineLossCommon !== null && m.meanBaselineLossCommon > 0 ? ` (${percent(m.meanBaselineLoss / m.meanBaselineLossCommon - 1)} against its ${significant(m.meanBaselineLossCommon)} on the rows both scored)` : "";
+  const lines = [
+    `The candidate lacks ${m.rows} rows that the baseline scored, from ${m.first ?? "n/a"} to ${m.last ?? "n/a"}. The baseline's mean loss on them is ${significant(m.meanBaselineLoss)}${harder}: a model must not pass by skipping hard cases.`
+  ];
+  if (m.rowsWithoutLoss > 0) {
+    lines.push(
+      `The baseline's loss is unknown on ${m.rowsWithoutLoss} of them (no actual value, or a loss that needs quantiles).`
+    );
+  }
+  if (examples.length > 0) lines.push(`Examples: ${examples.join("; ")}.`);
+  const rows = (groups) => groups.map((g) => [
+    g.key,
+    String(g.rows),
+    `${g.first ?? "n/a"} to ${g.last ?? "n/a"}`,
+    significant(g.meanBaselineLoss)
+  ]);
+  const header = (what) => [what, "rows lacking", "time span", "baseline loss on them"];
+  const align2 = ["left", "right", "left", "right"];
+  const tables = [table(header("series"), align2, rows(m.bySeries))];
+  if (m.byHorizon.length > 1 || report.inputs.horizons.length > 1)
+    tables.push(table(header("horizon"), align2, rows(m.byHorizon)));
+  return { title, lines, tables };
+}
+
 // src/losses/lossName.ts
 var LOSS_NAMES = ["squared", "absolute", "ape", "sape", "pinball", "interval"];
 var LOSS_LABELS = {
@@ -27435,457 +27746,6 @@ var LOSS_ALIASES = {
 };
 function canonicalLoss(name) {
   return LOSS_ALIASES[name] ?? name;
-}
-
-// src/report/escapeMarkdown.ts
-function escapeMarkdown(text) {
-  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
-}
-
-// src/report/inputNotes.ts
-function inputNotes(report) {
-  const notes = [];
-  const order = report.inputs.timestamps.order;
-  if (order !== "") notes.push(`Time order: ${order}.`);
-  const overall = report.comparisons[0];
-  if (overall !== void 0 && report.settings.loss === "squared" && report.settings.pooling === "raw" && overall.meanBaselineLoss >= 0 && overall.meanCandidateLoss >= 0) {
-    notes.push(
-      `RMSE: baseline ${formatNumber(Math.sqrt(overall.meanBaselineLoss))}, candidate ${formatNumber(
-        Math.sqrt(overall.meanCandidateLoss)
-      )} (square roots of the mean squared errors compared above).`
-    );
-  }
-  return notes;
-}
-
-// src/report/renderBacktestChecks.ts
-var SHOWN = 2;
-var MAX_CHARS = 200;
-var clip = (text) => text.length <= MAX_CHARS ? text : `${text.slice(0, MAX_CHARS)}\u2026`;
-var CHECK_LABELS = {
-  "look-ahead": "origin at or after the timestamp",
-  "horizon-steps": "horizon differs from the steps from origin to timestamp",
-  "origin-after-actuals": "issued after the last actual",
-  "origin-sets": "origins in one file only",
-  "path-sets": "paths in one file only",
-  "horizon-sets": "horizons in one file only",
-  "time-spans": "timestamps outside the other file's span",
-  "series-coverage": "series in one file only",
-  "fold-purge": "training within the purge or embargo window",
-  "outside-test-window": "rows outside their fold's test window",
-  "exact-predictions": "predictions equal to the actual far more often than the other model"
-};
-function backtestChecksSection(report) {
-  const integrity = report.integrity;
-  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
-    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
-    return [`**Backtest checks**: not run (${reasons.map(escapeMarkdown).join("; ")}).`, ""];
-  }
-  const mode = integrity.mode === "report" ? " Shown only: they do not change the verdict (backtest-checks report)." : integrity.mode === "warn" ? " Findings warn (backtest-checks warn)." : "";
-  const step = integrity.frequency === null ? "" : ` Steps of ${escapeMarkdown(integrity.frequency.text)} (${integrity.frequency.source}).`;
-  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ""];
-  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
-  for (const n of integrity.notRun) out.push(`- not run \xB7 ${n.id}: ${escapeMarkdown(n.reason)}`);
-  out.push("");
-  return out;
-}
-function checkLine(check) {
-  const shown = check.examples.slice(0, SHOWN).map((e) => escapeMarkdown(clip(e)));
-  const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
-  return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
-}
-function backtestChecksLines(report, clean3) {
-  const integrity = report.integrity;
-  if (integrity.checks.length === 0) return [];
-  const flagged = integrity.checks.filter((c) => c.status !== "ok");
-  const out = [
-    `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
-  ];
-  for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
-    out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
-  }
-  return out;
-}
-
-// src/report/renderStabilitySection.ts
-function renderStabilitySection(report) {
-  const stability = report.stability;
-  const overall = report.comparisons[0];
-  if (stability === null || overall === void 0) return [];
-  const out = ["**Over time**", ""];
-  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
-  out.push(fluctuationSentence(stability, report), "");
-  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
-  if (stability.periods.length > 0) out.push(...periodTable(stability), "");
-  return out;
-}
-function windowTable(overall, recent) {
-  const level = recent.relativeChange?.level;
-  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
-  const row = (name, c) => `| ${name} | ${escapeMarkdown(c.firstTimestamp ?? "n/a")} to ${escapeMarkdown(c.lastTimestamp ?? "n/a")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
-  return [
-    `| window | from \u2013 to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
-    "|---|---|---:|---:|---:|---:|---:|---:|---|",
-    row("whole backtest", overall),
-    row("most recent", recent)
-  ];
-}
-function fluctuationSentence(stability, report) {
-  const f = stability.fluctuation;
-  if (f === null) {
-    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
-  }
-  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
-  if (f.worsePeriods.length > 0) {
-    const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
-    return `${setup} The candidate is significantly worse over ${spans}.`;
-  }
-  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
-}
-function levelsSentence(stability) {
-  const { alpha, fluctuation, recent } = stability.levels;
-  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
-}
-function periodTable(stability) {
-  const out = [
-    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
-    "",
-    "| period | time points | baseline loss | candidate loss | relative |",
-    "|---|---:|---:|---:|---:|"
-  ];
-  for (const p of stability.periods) {
-    const span = p.start === p.end ? escapeMarkdown(p.start) : `${escapeMarkdown(p.start)} to ${escapeMarkdown(p.end)}`;
-    out.push(
-      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`
-    );
-  }
-  out.push("", "</details>");
-  return out;
-}
-
-// src/report/renderMarkdown.ts
-var VERDICT_WORDS = { pass: "PASS", warn: "WARN", fail: "FAIL" };
-function renderMarkdown(report, options = {}) {
-  const lines = [];
-  const title = report.name === "" ? "skillgate" : `skillgate \xB7 ${escapeMarkdown(report.name)}`;
-  lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, "");
-  lines.push(escapeMarkdown(report.headline), "");
-  lines.push(...comparisonTable(report), "");
-  lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
-  lines.push(...seriesSection(report));
-  lines.push(...pathSection(report));
-  lines.push(...renderStabilitySection(report));
-  lines.push(...backtestChecksSection(report));
-  const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
-  if (reasons.length > 0) {
-    lines.push("**Why**", "");
-    for (const r of reasons) lines.push(`- ${escapeMarkdown(r)}`);
-    lines.push("");
-  }
-  lines.push(...testDetails(report), "");
-  lines.push(...inputSection(report), "");
-  lines.push(...settingsSection(report), "");
-  lines.push(
-    `<sub>A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${escapeMarkdown(report.tool.version)}.${options.runUrl === void 0 ? "" : ` [Run details](${options.runUrl})`}</sub>`
-  );
-  return `${lines.join("\n")}
-`;
-}
-function scopeLabel(c) {
-  if (c.horizon === "all" && c.series === "all") return "overall";
-  const parts = [];
-  if (c.horizon !== "all") parts.push(`horizon ${c.horizon}`);
-  if (c.series !== "all") parts.push(`series ${escapeMarkdown(c.series)}`);
-  return parts.join(", ");
-}
-function comparisonTable(report) {
-  const level = report.comparisons[0]?.bootstrap.interval?.level ?? report.settings.confidence;
-  const pct = `${formatNumber(level * 100, 3)}%`;
-  const rows = [
-    `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
-    "|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|"
-  ];
-  for (const c of report.comparisons.filter((x) => x.series === "all" && x.path === void 0)) {
-    const dm = c.dieboldMariano;
-    const bs = c.bootstrap;
-    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
-    rows.push(
-      `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
-        c.meanCandidateLoss
-      )} | ${formatNumber(c.meanDifference)} | ${relativeCell(c)} | ${formatNumber(
-        dm.smallSample?.statistic ?? dm.statistic
-      )} | ${formatPValue(dm.decisionPValue)} | ${formatPValue(bs.decisionPValue)} | ${interval} | ${c.verdict} |`
-    );
-  }
-  return rows;
-}
-function relativeCell(c) {
-  return relativeChangeText(c);
-}
-function seriesSection(report) {
-  const summary = report.seriesSummary;
-  if (summary === null) return [];
-  const method = summary.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
-  const out = [
-    `**Series**: of ${summary.series}, ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} without evidence either way (Diebold\u2013Mariano per series, ${method}-adjusted, \u03B1 = ${summary.alpha}). These locate a regression; the verdict rests on the overall comparison.`,
-    ""
-  ];
-  const byName = new Map(
-    report.comparisons.filter((c) => c.series !== "all").map((c) => [c.series, c])
-  );
-  const top = summary.topRegressions.map((name) => byName.get(name)).filter((c) => c !== void 0);
-  if (top.length > 0) {
-    out.push(
-      `| series (largest significant regressions) | time points | baseline loss | candidate loss | relative | DM statistic | adjusted p |`,
-      "|---|---:|---:|---:|---:|---:|---:|"
-    );
-    for (const c of top) {
-      out.push(
-        `| ${escapeMarkdown(String(c.series))} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(c.dieboldMariano.smallSample?.statistic ?? c.dieboldMariano.statistic)} | ${formatPValue(c.adjustedPValue)} |`
-      );
-    }
-    out.push("");
-  }
-  return out;
-}
-function pathSection(report) {
-  const summary = report.pathSummary;
-  if (summary === null) return [];
-  const out = [
-    `**Backtest paths**: the candidate's mean loss is higher on ${summary.worse} of ${summary.paths} paths (${formatNumber(summary.shareWorse * 100, 3)}%), significantly so (one-sided Diebold\u2013Mariano, p \u2264 ${report.policy.alpha}) on ${summary.significantlyWorse}. The verdict tests the path-averaged differential.`,
-    ""
-  ];
-  const rows = report.comparisons.filter((c) => c.path !== void 0);
-  if (rows.length <= 50) {
-    out.push(
-      "| path | time points | baseline loss | candidate loss | relative | DM statistic | p (DM) |"
-    );
-    out.push("|---|---:|---:|---:|---:|---:|---:|");
-    for (const c of rows) {
-      const dm = c.dieboldMariano;
-      out.push(
-        `| ${escapeMarkdown(c.path ?? "")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(dm.smallSample?.statistic ?? dm.statistic)} | ${formatPValue(dm.smallSample?.pValue ?? dm.pValue)} |`
-      );
-    }
-  }
-  out.push("");
-  return out;
-}
-function testDetails(report) {
-  const c = report.comparisons[0];
-  if (c === void 0) return [];
-  const dm = c.dieboldMariano;
-  const bs = c.bootstrap;
-  const out = ["<details><summary>How the overall comparison was tested</summary>", ""];
-  out.push(
-    `Loss: ${LOSS_LABELS[c.loss]}. Tested differential: d_t = L_candidate \u2212 ${formatNumber(
-      report.policy.baselineFactor,
-      6
-    )} \xB7 L_baseline (mean ${formatNumber(c.meanTestedDifferential)}), H0 boundary \u03B4 = ${formatNumber(
-      report.policy.boundary
-    )}.`,
-    "",
-    `H0: ${escapeMarkdown(report.policy.nullHypothesis)}. H1: ${escapeMarkdown(report.policy.alternative)}. Rejecting H0 makes the gate ${report.policy.onReject}.`,
-    "",
-    "| | value |",
-    "|---|---|",
-    `| Diebold\u2013Mariano variance | ${dm.estimator}${dm.estimator === dm.requestedEstimator ? "" : ` (requested ${dm.requestedEstimator})`} |`,
-    `| statistic | ${formatNumber(dm.statistic)} |`,
-    `| long-run variance \u03C9\u0302\xB2 | ${formatNumber(dm.longRunVariance)} |`,
-    `| lag | ${dm.lag ?? "n/a (fixed-b)"} |`,
-    `| degrees of freedom | ${dm.degreesOfFreedom ?? "normal reference"} |`
-  );
-  if (dm.smallSample !== null) {
-    out.push(
-      `| Harvey\u2013Leybourne\u2013Newbold statistic | ${formatNumber(dm.smallSample.statistic)} (t, ${dm.smallSample.degreesOfFreedom} df) |`
-    );
-  }
-  out.push(
-    `| p one-sided (worse) / two-sided | ${formatPValue(dm.pValue)} / ${formatPValue(dm.pValueTwoSided)} |`
-  );
-  if (dm.interval !== null) {
-    out.push(
-      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`
-    );
-  }
-  out.push(
-    `| bootstrap expected block length | ${formatNumber(bs.expectedBlockLength)} (${bs.blockLengthRule}) |`,
-    `| bootstrap resamples / seed | ${bs.resamples} / ${bs.seed} |`,
-    `| bootstrap standard error of d\u0304 | ${formatNumber(bs.standardError)} |`,
-    `| bootstrap p one-sided (worse) / two-sided | ${formatPValue(bs.pValue)} / ${formatPValue(bs.pValueTwoSided)} |`
-  );
-  const coverage = report.inputs.intervalCoverage;
-  if (coverage !== null) {
-    out.push(
-      `| empirical coverage of the ${formatNumber(coverage.nominal * 100, 3)}% interval, baseline / candidate | ${formatSignedPercent(coverage.baseline).replace("+", "")} / ${formatSignedPercent(coverage.candidate).replace("+", "")} |`
-    );
-  }
-  for (const note of [...dm.notes, ...bs.notes]) out.push("", `Note: ${escapeMarkdown(note)}`);
-  out.push("", "</details>");
-  return out;
-}
-function inputSection(report) {
-  const i = report.inputs;
-  const out = ["<details><summary>Inputs and coverage</summary>", ""];
-  out.push(
-    "| file | role | rows | blank lines skipped | columns not used | sha256 |",
-    "|---|---|---:|---:|---|---|"
-  );
-  for (const f of i.files) {
-    const unused = f.ignoredColumns.length === 0 ? "" : f.ignoredColumns.map(escapeMarkdown).join(", ");
-    out.push(
-      `| ${escapeMarkdown(f.path)} | ${f.role} | ${f.rows} | ${f.blankLines} | ${unused} | \`${f.sha256.replace(/^sha256:/, "").slice(0, 12)}\` |`
-    );
-  }
-  const d = i.rowsDropped;
-  out.push(
-    "",
-    `Rows matched: ${i.rowsMatched} over ${i.timestamps.count} timestamps (${escapeMarkdown(i.timestamps.first ?? "n/a")} to ${escapeMarkdown(
-      i.timestamps.last ?? "n/a"
-    )}), ${i.series} series, horizons ${i.horizons.join(", ") || "1"}.`,
-    `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`
-  );
-  for (const note of inputNotes(report)) out.push(escapeMarkdown(note));
-  if (i.examples.baselineOnly.length > 0) {
-    out.push(
-      `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => escapeMarkdown(k)).join(", ")}.`
-    );
-  }
-  out.push("", "</details>");
-  return out;
-}
-function settingsSection(report) {
-  const out = [
-    "<details><summary>Settings in force</summary>",
-    "",
-    "| setting | value |",
-    "|---|---|"
-  ];
-  for (const [key, value] of Object.entries(report.settings)) {
-    const text = typeof value === "object" && value !== null ? JSON.stringify(value) : String(value);
-    out.push(`| ${key} | ${escapeMarkdown(text)} |`);
-  }
-  out.push("", "</details>");
-  return out;
-}
-
-// src/report/renderStabilityTerminal.ts
-function renderStabilityTerminal(report) {
-  const s = report.stability;
-  if (s === null) return [];
-  const out = [];
-  const r = s.recent;
-  const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
-  if (r !== null) {
-    out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
-    );
-  }
-  const f = s.fluctuation;
-  if (f !== null) {
-    out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
-    );
-  }
-  return out;
-}
-function clean(text) {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
-}
-
-// src/report/renderTerminal.ts
-function renderTerminal(report, options) {
-  const paint = (code, text) => options.color ? `\x1B[${code}m${text}\x1B[0m` : text;
-  const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
-  const title = report.name === "" ? "skillgate" : `skillgate \xB7 ${clean2(report.name)}`;
-  const out = [];
-  out.push(`${paint("1", title)}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`);
-  out.push(wrap(report.headline, 100), "");
-  const header = [
-    "comparison",
-    "n",
-    "baseline",
-    "candidate",
-    "diff",
-    "relative",
-    "p (DM)",
-    "p (boot)",
-    "interval (boot)",
-    "verdict"
-  ];
-  const rows = report.comparisons.filter((c) => c.series === "all" && c.path === void 0).map((c) => [
-    scope(c),
-    String(c.n),
-    formatNumber(c.meanBaselineLoss),
-    formatNumber(c.meanCandidateLoss),
-    formatNumber(c.meanDifference),
-    relativeChangeText(c),
-    formatPValue(c.dieboldMariano.decisionPValue),
-    formatPValue(c.bootstrap.decisionPValue),
-    c.bootstrap.interval === null ? "n/a" : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]${measuredCoverageText(c.bootstrap.interval.measuredCoverage)}`,
-    c.verdict
-  ]);
-  const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length)));
-  const line = (cells) => cells.map((cell, j) => j === 0 || j >= 8 ? cell.padEnd(widths[j]) : cell.padStart(widths[j])).join("  ");
-  out.push(paint("2", line(header)));
-  for (const r of rows) out.push(line(r));
-  out.push(...renderStabilityTerminal(report));
-  out.push(wrap(intervalNote(report), 100), "");
-  for (const reason of [...report.reasons, ...report.comparisons[0]?.reasons ?? []]) {
-    out.push(wrap(`- ${reason}`, 100, "  "));
-  }
-  const summary = report.seriesSummary;
-  if (summary !== null) {
-    const top = summary.topRegressions.slice(0, 5).map(clean2).join(", ");
-    out.push(
-      `series: ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} no evidence (${summary.method}-adjusted)${top === "" ? "" : `; largest regressions: ${top}`}`
-    );
-  }
-  const paths = report.pathSummary;
-  if (paths !== null) {
-    out.push(
-      `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`
-    );
-  }
-  out.push(...backtestChecksLines(report, clean2));
-  const i = report.inputs;
-  out.push(
-    "",
-    paint(
-      "2",
-      `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`
-    )
-  );
-  for (const note of inputNotes(report)) out.push(paint("2", wrap(clean2(note), 100, "  ")));
-  return `${out.join("\n")}
-`;
-}
-function scope(c) {
-  if (c.horizon === "all" && c.series === "all") return "overall";
-  const parts = [];
-  if (c.horizon !== "all") parts.push(`h=${c.horizon}`);
-  if (c.series !== "all") parts.push(clean2(c.series));
-  return parts.join(" ");
-}
-function clean2(text) {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
-}
-function wrap(text, width, indent2 = "") {
-  const words = clean2(text).split(" ");
-  const lines = [];
-  let current = "";
-  for (const w of words) {
-    if (current !== "" && current.length + 1 + w.length > width) {
-      lines.push(current);
-      current = indent2 + w;
-    } else {
-      current = current === "" ? w : `${current} ${w}`;
-    }
-  }
-  if (current !== "") lines.push(current);
-  return lines.join("\n");
 }
 
 // src/settings/options.ts
@@ -28168,8 +28028,1171 @@ var ENGINE_OPTIONS = [
     valueName: "FILE",
     defaultValue: null,
     help: "write the Markdown report to this file (- for standard output)"
+  },
+  {
+    name: "html",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "write the report as one self-contained HTML file (charts as inline SVG; opens offline)"
   }
 ];
+
+// src/settings/settingsAsOptions.ts
+var FILE_OPTIONS = /* @__PURE__ */ new Set([
+  "baseline",
+  "candidate",
+  "losses",
+  "actuals",
+  "history",
+  "json",
+  "markdown",
+  "html"
+]);
+function settingsAsOptions(settings, paths = (f) => f) {
+  const record = settings;
+  const out = [];
+  for (const spec of ENGINE_OPTIONS) {
+    const key = spec.name.replace(/-([a-z])/g, (_, ch) => ch.toUpperCase());
+    if (!(key in record)) continue;
+    const file = FILE_OPTIONS.has(spec.name);
+    const raw = optionText(record[key]);
+    const value = file && raw !== "" ? paths(raw) : raw;
+    const defaultText = spec.defaultValue ?? "";
+    const isDefault = spec.name === "confidence" ? !confidenceOverridesDefault(settings.confidence, settings.alpha) : sameValue(raw, defaultText);
+    out.push({ name: spec.name, value, isDefault, flag: spec.flag === true, file });
+  }
+  return out;
+}
+function asCommandLine(options) {
+  return options.map((o) => {
+    if (o.flag) return o.value === "true" ? `--${o.name}` : `--${o.name}=false`;
+    return `--${o.name} ${shellWord(o.value)}`;
+  }).join(" ");
+}
+function optionText(value) {
+  if (value === null || value === void 0) return "";
+  if (typeof value === "string") return value;
+  if (typeof value === "number" || typeof value === "boolean") return String(value);
+  if (Array.isArray(value)) return value.join(",");
+  const v = value;
+  if (typeof v.kind === "string") {
+    if (v.kind === "auto") return "auto";
+    if (v.kind === "horizon") return "h-1";
+    if (typeof v.lag === "number") return String(v.lag);
+    if (typeof v.length === "number") return String(v.length);
+  }
+  return Object.entries(v).filter(([, header]) => typeof header === "string").map(([role, header]) => `${role}=${header}`).join(",");
+}
+function sameValue(a, b) {
+  if (a === b) return true;
+  const x = Number(a);
+  const y = Number(b);
+  return a !== "" && b !== "" && Number.isFinite(x) && Number.isFinite(y) && x === y;
+}
+function shellWord(text) {
+  if (text === "") return "''";
+  if (/^[A-Za-z0-9_./:=,+@%-]+$/.test(text)) return text;
+  return `'${text.replace(/'/g, `'\\''`)}'`;
+}
+
+// src/report/decidingReason.ts
+var RANK = { pass: 0, warn: 1, fail: 2 };
+function decidingReasons(report) {
+  const overall = report.comparisons[0];
+  const found = [];
+  if (overall !== void 0) found.push(comparisonReason(report));
+  const integrity = report.integrity;
+  for (const check of integrity.checks) {
+    if (check.status === "ok") continue;
+    found.push({
+      kind: check.status === "fail" ? "backtest-check-failed" : "backtest-check-warned",
+      // With --backtest-checks report the findings are shown only.
+      verdict: integrity.affectsVerdict ? check.status : "pass",
+      text: `the backtest check ${check.id} ${check.status === "fail" ? "failed" : "warned"}: ${lowerFirst(
+        check.summary
+      ).replace(/\.$/, "")}`
+    });
+  }
+  const missing = report.inputs.rowsDropped.baseline;
+  if (missing > 0) {
+    const m = report.inputs.missingRows ?? null;
+    const hard = m === null || m.meanBaselineLoss === null || m.meanBaselineLossCommon === null ? "" : `; the baseline's mean loss on them is ${significant(m.meanBaselineLoss)}, against ${significant(m.meanBaselineLossCommon)} on the rows both scored`;
+    found.push({
+      kind: "missing-rows",
+      verdict: report.settings.allowMissing ? "pass" : "fail",
+      text: `the candidate lacks ${missing} ${missing === 1 ? "row" : "rows"} that the baseline scored${report.settings.allowMissing ? " (allowed by --allow-missing)" : ""}${hard}`
+    });
+  }
+  const gateEffect = report.settings.stabilityGate === "off" ? "pass" : report.settings.stabilityGate;
+  const recent = report.stability?.recent ?? null;
+  if (recent !== null && recent.verdict === "fail") {
+    found.push({
+      kind: "worse-lately",
+      verdict: gateEffect,
+      text: `the candidate is worse in the most recent ${recent.n} time points (${recent.firstTimestamp ?? "n/a"} to ${recent.lastTimestamp ?? "n/a"}): mean loss ${percent(recent.relativeDifference)}`
+    });
+  }
+  const f = report.stability?.fluctuation ?? null;
+  if (f?.rejected && f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.slice(0, 3).map((p) => `${p.start} to ${p.end}`).join(", ");
+    found.push({
+      kind: "worse-in-a-stretch",
+      verdict: gateEffect,
+      text: `the candidate is significantly worse over ${spans}${f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more stretches` : ""} (fluctuation test, Giacomini & Rossi 2010)`
+    });
+  }
+  const gate = report.verdict;
+  const overallVerdict = overall?.verdict ?? "pass";
+  const score = (r, index) => (r.verdict === gate ? 100 : 0) + (r.verdict === gate && RANK[gate] > RANK[overallVerdict] && index > 0 ? 10 : 0) - index * 0.01;
+  return found.map((r, i) => ({ r, s: score(r, i) })).sort((a, b) => b.s - a.s).map((x) => x.r);
+}
+function lowerFirst(text) {
+  return text.length === 0 ? text : text[0].toLowerCase() + text.slice(1);
+}
+function comparisonReason(report) {
+  const c = report.comparisons[0];
+  const verdict = c.verdict;
+  const alternative = report.policy.alternative;
+  const { dieboldMariano: dm, bootstrap: bs } = c.rejected;
+  const agreement = report.settings.agreement;
+  if (c.n < report.settings.minPoints) {
+    return {
+      kind: "too-little-data",
+      verdict,
+      text: `too little data: ${c.n} time points, fewer than the ${report.settings.minPoints} needed for a firm verdict`
+    };
+  }
+  if (c.dieboldMariano.state === "identical" && c.bootstrap.state !== "ok") {
+    return {
+      kind: "identical-losses",
+      verdict,
+      text: "the candidate's loss equals the baseline's on every row"
+    };
+  }
+  if (dm === null && bs === null) {
+    return { kind: "no-test", verdict, text: "no test could be computed" };
+  }
+  if (agreement === "both" && dm !== null && bs !== null) {
+    if (dm !== bs) {
+      return {
+        kind: "tests-split",
+        verdict,
+        text: `the tests split: ${dm ? "Diebold\u2013Mariano" : "the bootstrap"} finds evidence that ${alternative}, ${dm ? "the bootstrap" : "Diebold\u2013Mariano"} does not`
+      };
+    }
+    return {
+      kind: "both-tests-agree",
+      verdict,
+      text: dm ? `both tests find evidence that ${alternative}` : `neither test finds evidence that ${alternative}`
+    };
+  }
+  const which = agreement === "dm" || bs === null ? "Diebold\u2013Mariano" : agreement === "bootstrap" || dm === null ? "the bootstrap" : "either test";
+  const rejected = agreement === "either" ? dm === true || bs === true : (dm ?? bs) === true;
+  const finds = agreement === "either" && !rejected ? "neither test finds" : `${which} ${rejected ? "finds" : "does not find"}`;
+  return {
+    kind: "one-test-decides",
+    verdict,
+    text: `${finds} evidence that ${alternative}${agreement === "both" ? " (the other test could not be computed)" : ` (--agreement ${agreement})`}`
+  };
+}
+
+// src/report/displayPath.ts
+import path from "node:path";
+function displayPath(file, workingDirectory) {
+  if (workingDirectory === void 0 || workingDirectory === "" || file === "") return file;
+  if (!path.isAbsolute(file)) return file.split(path.sep).join("/");
+  const relative = path.relative(workingDirectory, file);
+  if (relative === "" || relative.startsWith("..") || path.isAbsolute(relative)) return file;
+  return relative.split(path.sep).join("/");
+}
+
+// src/report/inputNotes.ts
+function inputNotes(report) {
+  const notes = [];
+  const order = report.inputs.timestamps.order;
+  if (order !== "") notes.push(`Time order: ${order}.`);
+  const overall = report.comparisons[0];
+  if (overall !== void 0 && report.settings.loss === "squared" && report.settings.pooling === "raw" && overall.meanBaselineLoss >= 0 && overall.meanCandidateLoss >= 0) {
+    notes.push(
+      `RMSE: baseline ${formatNumber(Math.sqrt(overall.meanBaselineLoss))}, candidate ${formatNumber(
+        Math.sqrt(overall.meanCandidateLoss)
+      )} (square roots of the mean squared errors compared above).`
+    );
+  }
+  return notes;
+}
+
+// src/report/reportSections.ts
+var VERDICT_WORD = { pass: "PASS", warn: "WARN", fail: "FAIL" };
+var GATE_WORD = {
+  pass: "The gate passes",
+  warn: "The gate passes with a warning",
+  fail: "The gate fails"
+};
+function reportSections(report, options = {}) {
+  const overall = report.comparisons[0];
+  if (overall === void 0) throw new Error("a report needs the overall comparison");
+  const paths = (f) => displayPath(f, options.workingDirectory);
+  const reasons = decidingReasons(report);
+  const first = reasons[0];
+  const lead = `${GATE_WORD[report.verdict]}: ${first?.text ?? "no finding"}.`;
+  const interval = relativeInterval(overall);
+  const onCommon = report.inputs.rowsDropped.baseline > 0 ? " on the rows both models scored" : "";
+  const change = overall.relativeDifference === null ? `Mean loss ${significant(overall.meanCandidateLoss)} against the baseline's ${significant(overall.meanBaselineLoss)}${onCommon}, over ${overall.n} time points.` : `Mean loss ${percent(overall.relativeDifference)}${interval === null ? "" : ` (${pct(interval.level)} interval ${percent(interval.lower)} to ${percent(interval.upper)})`} against the baseline${onCommon}, over ${overall.n} time points${overall.firstTimestamp === null ? "" : ` from ${overall.firstTimestamp} to ${overall.lastTimestamp}`}.`;
+  const options_ = settingsAsOptions(report.settings, paths);
+  return {
+    title: report.name === "" ? "skillgate" : `skillgate \xB7 ${report.name}`,
+    verdict: report.verdict,
+    reasons,
+    lead,
+    change,
+    main: mainTable(report, overall),
+    intervalNote: intervalNote(report),
+    notes: mainNotes(reasons),
+    changedSettings: asCommandLine(options_.filter((o) => !o.isDefault && !o.file)),
+    details: detailsTable(report, overall),
+    detailNotes: detailNotes(report, overall),
+    horizons: horizonTable(report),
+    series: seriesSection(report),
+    paths: pathSection(report),
+    inputs: inputSection(report, paths),
+    checks: checksTable(report),
+    settings: settingsTable(options_)
+  };
+}
+function pct(level) {
+  return `${Number((level * 100).toPrecision(3))}%`;
+}
+function changeHeader(rows) {
+  const level = rows.map(relativeInterval).find((i) => i !== null)?.level;
+  return level === void 0 ? "change" : `change [${pct(level)} interval]`;
+}
+function mainTable(report, overall) {
+  const gate = report.verdict;
+  const verdict = gate === overall.verdict ? VERDICT_WORD[gate] : `${VERDICT_WORD[gate]} (tests alone: ${overall.verdict})`;
+  const scope = report.inputs.rowsDropped.baseline > 0 ? "overall, common rows" : "overall";
+  const rows = [
+    [
+      scope,
+      significant(overall.meanBaselineLoss),
+      significant(overall.meanCandidateLoss),
+      changeCell(overall),
+      evidenceOf(overall, report),
+      verdict
+    ]
+  ];
+  const recent = report.stability?.recent ?? null;
+  if (recent !== null) {
+    rows.push([
+      `recent: ${recent.firstTimestamp ?? "n/a"} to ${recent.lastTimestamp ?? "n/a"}`,
+      significant(recent.meanBaselineLoss),
+      significant(recent.meanCandidateLoss),
+      changeCell(recent),
+      evidenceOf(recent, report),
+      `${recent.verdict} on its own`
+    ]);
+  }
+  return table(
+    ["scope", "baseline loss", "candidate loss", changeHeader([overall]), "evidence", "verdict"],
+    ["left", "right", "right", "right", "left", "left"],
+    rows
+  );
+}
+function mainNotes(reasons) {
+  const notes = [];
+  for (const r of reasons.slice(1)) notes.push(`Also: ${r.text}.`);
+  return notes;
+}
+function detailsTable(report, c) {
+  const dm = c.dieboldMariano;
+  const bs = c.bootstrap;
+  const interval = (i) => i === null ? "n/a" : `[${significant(i.lower)}, ${significant(i.upper)}] (${pct(i.level)})${measuredCoverageText(i.measuredCoverage)}`;
+  const rows = [
+    [
+      "statistic",
+      dm.smallSample === null ? significant(dm.statistic) : `${significant(dm.smallSample.statistic)} (Harvey\u2013Leybourne\u2013Newbold; raw ${significant(dm.statistic)})`,
+      bs.standardError === null ? "n/a" : `standard error of d\u0304 ${significant(bs.standardError)}`
+    ],
+    [
+      "p, one-sided: candidate worse",
+      pValue(dm.smallSample?.pValue ?? dm.pValue),
+      pValue(bs.pValue)
+    ],
+    [
+      "p, in the policy\u2019s direction (decides)",
+      pValue(dm.decisionPValue),
+      pValue(bs.decisionPValue)
+    ],
+    [
+      "p, two-sided",
+      pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
+      pValue(bs.pValueTwoSided)
+    ],
+    ["interval for E[L_candidate \u2212 L_baseline]", interval(dm.interval), interval(bs.interval)],
+    [
+      "rejects H0 at \u03B1",
+      c.rejected.dieboldMariano === null ? "n/a" : c.rejected.dieboldMariano ? "yes" : "no",
+      c.rejected.bootstrap === null ? "n/a" : c.rejected.bootstrap ? "yes" : "no"
+    ],
+    [
+      "variance",
+      `${dm.estimator}${dm.estimator === dm.requestedEstimator ? "" : ` (asked: ${dm.requestedEstimator})`}, long-run variance \u03C9\u0302\xB2 ${significant(dm.longRunVariance)}`,
+      `expected block length ${significant(bs.expectedBlockLength, 3)} (${bs.blockLengthRule})`
+    ],
+    [
+      "lag / resamples",
+      `lag ${dm.lag ?? "n/a (fixed-b)"}, ${dm.degreesOfFreedom === null ? "normal reference" : `${significant(dm.degreesOfFreedom, 3)} df`}`,
+      `${bs.resamples} resamples, seed ${bs.seed}`
+    ]
+  ];
+  const coverage = report.inputs.intervalCoverage;
+  if (coverage !== null) {
+    rows.push([
+      `coverage of the ${pct(coverage.nominal)} interval`,
+      `baseline ${percent(coverage.baseline).replace("+", "")}`,
+      `candidate ${percent(coverage.candidate).replace("+", "")}`
+    ]);
+  }
+  return table(["", "Diebold\u2013Mariano", "stationary bootstrap"], ["left", "left", "left"], rows);
+}
+function detailNotes(report, c) {
+  const p = report.policy;
+  const k = p.baselineFactor;
+  const d = k === 1 ? "d_t = L_candidate \u2212 L_baseline" : `d_t = L_candidate \u2212 ${Number(k.toPrecision(6))} \xB7 L_baseline`;
+  const boundary = p.boundary === 0 ? "0" : significant(p.boundary);
+  return [
+    `Loss: ${LOSS_LABELS[c.loss]}. Tested differential ${d} (mean ${significant(c.meanTestedDifferential)}); H0 says E[d] is on the ${p.onReject === "fail" ? "low" : "high"} side of ${boundary}.`,
+    `H0: ${p.nullHypothesis}. H1: ${p.alternative}. Rejecting H0 makes the gate ${p.onReject}; each test is one-sided at \u03B1 = ${p.alpha}.`,
+    ...report.reasons.filter((r) => !r.startsWith("The candidate lacks")),
+    ...c.reasons,
+    ...[...c.dieboldMariano.notes, ...c.bootstrap.notes].map((n) => `Note: ${n}`)
+  ];
+}
+function horizonTable(report) {
+  const rows = report.comparisons.filter(
+    (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
+  );
+  if (rows.length === 0) return null;
+  const adjusted = holmAdjust(rows.map((c) => c.dieboldMariano.decisionPValue));
+  return table(
+    [
+      "horizon",
+      "baseline loss",
+      "candidate loss",
+      changeHeader(rows),
+      "evidence",
+      "policy p, Holm"
+    ],
+    ["left", "right", "right", "right", "left", "right"],
+    rows.map((c, j) => [
+      String(c.horizon),
+      significant(c.meanBaselineLoss),
+      significant(c.meanCandidateLoss),
+      changeCell(c),
+      evidenceOf(c, report),
+      pValue(adjusted[j])
+    ])
+  );
+}
+var SERIES_ROWS = 50;
+function seriesSection(report) {
+  const s = report.seriesSummary;
+  if (s === null) return null;
+  const method = s.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
+  const rows = report.comparisons.filter((c) => c.series !== "all").sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));
+  const shown = rows.length <= SERIES_ROWS ? rows : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
+  const summary = `${s.series} series: ${s.worse} worse, ${s.better} better, ${s.noEvidence} with no clear difference (Diebold\u2013Mariano on L_candidate \u2212 L_baseline per series, ${method}-adjusted, \u03B1 = ${s.alpha}; whatever the policy, "worse" needs evidence of a higher loss and "better" of a lower one).${shown.length < rows.length ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.` : ""}`;
+  return {
+    summary,
+    table: table(
+      ["series", "baseline loss", "candidate loss", "change", "evidence", `adjusted p`],
+      ["left", "right", "right", "right", "left", "right"],
+      shown.map((c) => [
+        String(c.series),
+        significant(c.meanBaselineLoss),
+        significant(c.meanCandidateLoss),
+        percent(c.relativeDifference),
+        evidenceOf(c, report),
+        pValue(c.directionPValue ?? c.adjustedPValue)
+      ])
+    )
+  };
+}
+function pathSection(report) {
+  const s = report.pathSummary;
+  if (s === null) return null;
+  const rows = report.comparisons.filter((c) => c.path !== void 0);
+  return {
+    summary: `The candidate's mean loss is higher on ${s.worse} of ${s.paths} backtest paths (${percent(s.shareWorse).replace("+", "")}), significantly so (one-sided Diebold\u2013Mariano, p \u2264 ${report.policy.alpha}, unadjusted) on ${s.significantlyWorse}. The verdict tests the path-averaged differential.`,
+    table: rows.length > 50 ? null : table(
+      ["path", "baseline loss", "candidate loss", "change", "p, worse"],
+      ["left", "right", "right", "right", "right"],
+      rows.map((c) => [
+        c.path ?? "",
+        significant(c.meanBaselineLoss),
+        significant(c.meanCandidateLoss),
+        percent(c.relativeDifference),
+        pValue(c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue)
+      ])
+    )
+  };
+}
+function inputSection(report, paths) {
+  const i = report.inputs;
+  const d = i.rowsDropped;
+  const lines = [
+    ...inputNotes(report),
+    `Rows matched: ${i.rowsMatched} over ${i.timestamps.count} timestamps (${i.timestamps.first ?? "n/a"} to ${i.timestamps.last ?? "n/a"}), ${i.series} series, horizons ${compactRange(i.horizons)}.`,
+    `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`
+  ];
+  return {
+    table: table(
+      ["file", "role", "rows", "blank lines", "columns not used", "sha256"],
+      ["left", "left", "right", "right", "left", "left"],
+      i.files.map((f) => [
+        paths(f.path),
+        f.role,
+        String(f.rows),
+        String(f.blankLines),
+        f.ignoredColumns.join(", "),
+        f.sha256.replace(/^sha256:/, "").slice(0, 12)
+      ])
+    ),
+    lines
+  };
+}
+function checksTable(report) {
+  const checks = report.integrity.checks;
+  if (checks.length === 0) return null;
+  return table(
+    ["check", "status", "found", "examples"],
+    ["left", "left", "right", "left"],
+    checks.map((c) => [c.id, c.status, String(c.count), c.examples.slice(0, 3).join("; ")])
+  );
+}
+function compactRange(values) {
+  if (values.length === 0) return "1";
+  const contiguous = values.every((v, j) => j === 0 || v === values[j - 1] + 1);
+  if (contiguous && values.length > 2) return `${values[0]}\u2013${values.at(-1)}`;
+  return values.join(", ");
+}
+function settingsTable(options) {
+  return table(
+    ["option", "value", "default"],
+    ["left", "left", "left"],
+    options.map((o) => [
+      `--${o.name}`,
+      o.value === "" ? "(none)" : o.value,
+      o.isDefault ? "yes" : "no"
+    ])
+  );
+}
+
+// src/report/svgCharts.ts
+var COLOURS = { worse: "#b4501a", better: "#2463a6", neutral: "#6b7280", ink: "#1f2328" };
+var W = 640;
+var H = 240;
+var M = { left: 56, right: 16, top: 16, bottom: 40 };
+function xml(text) {
+  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+}
+function linear(lo2, hi2, from, to) {
+  const span = hi2 - lo2 || 1;
+  const f = (x) => from + (x - lo2) / span * (to - from);
+  return Object.assign(f, { ticks: niceTicks(lo2, hi2) });
+}
+function niceTicks(lo2, hi2, count = 5) {
+  const span = hi2 - lo2 || 1;
+  const step0 = span / count;
+  const mag = 10 ** Math.floor(Math.log10(step0));
+  const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= step0) ?? 10 * mag;
+  const out = [];
+  for (let v = Math.ceil(lo2 / step) * step; v <= hi2 + step * 1e-9; v += step) {
+    out.push(Number(v.toPrecision(12)));
+  }
+  return out;
+}
+function fmt(x) {
+  return String(Number(x.toPrecision(3)));
+}
+function frame(title, body, desc) {
+  return [
+    `<svg viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${xml(title)}" xmlns="http://www.w3.org/2000/svg">`,
+    `<title>${xml(title)}</title><desc>${xml(desc)}</desc>`,
+    ...body,
+    "</svg>"
+  ].join("\n");
+}
+function yAxis(y, unit) {
+  return y.ticks.map(
+    (t) => `<line x1="${M.left}" x2="${W - M.right}" y1="${y(t).toFixed(1)}" y2="${y(t).toFixed(1)}" stroke="#e5e7eb"/><text x="${M.left - 6}" y="${(y(t) + 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${COLOURS.neutral}">${xml(fmt(t))}${unit}</text>`
+  );
+}
+function hline(y, colour, dash, label) {
+  return `<line x1="${M.left}" x2="${W - M.right}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${colour}" stroke-width="1.5" stroke-dasharray="${dash}"/><text x="${W - M.right - 2}" y="${(y - 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${colour}">${xml(label)}</text>`;
+}
+function differenceOverTimeSvg(input) {
+  const { labels, values, margin, band } = input;
+  const all = [
+    0,
+    ...values,
+    ...margin === null ? [] : [margin],
+    ...band === null ? [] : [band.lower, band.upper]
+  ];
+  const lo2 = Math.min(...all);
+  const hi2 = Math.max(...all);
+  const pad = (hi2 - lo2) * 0.08 || 1;
+  const y = linear(lo2 - pad, hi2 + pad, H - M.bottom, M.top);
+  const n = values.length;
+  const x = (i) => M.left + (n === 1 ? 0.5 : i / (n - 1)) * (W - M.left - M.right);
+  const body = yAxis(y, "%");
+  if (band !== null) {
+    body.push(
+      `<rect x="${M.left}" y="${y(band.upper).toFixed(1)}" width="${W - M.left - M.right}" height="${Math.max(1, y(band.lower) - y(band.upper)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.15"/>`
+    );
+  }
+  body.push(hline(y(0), COLOURS.ink, "0", "no difference"));
+  if (margin !== null) body.push(hline(y(margin), COLOURS.worse, "6 4", `margin ${fmt(margin)}%`));
+  body.push(
+    `<polyline fill="none" stroke="${COLOURS.ink}" stroke-width="1.5" points="${values.map((v, i) => `${x(i).toFixed(1)},${y(v).toFixed(1)}`).join(" ")}"/>`
+  );
+  values.forEach((v, i) => {
+    body.push(
+      `<circle cx="${x(i).toFixed(1)}" cy="${y(v).toFixed(1)}" r="3" fill="${v > 0 ? COLOURS.worse : COLOURS.better}"><title>${xml(`${labels[i]}: ${fmt(v)}%`)}</title></circle>`
+    );
+  });
+  const step = Math.max(1, Math.ceil(n / 6));
+  for (let i = 0; i < n; i += step) {
+    body.push(
+      `<text x="${x(i).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(labels[i] ?? "")}</text>`
+    );
+  }
+  return frame(
+    "Change in mean loss per period",
+    body,
+    `Candidate's mean loss against the baseline's in each of ${n} periods, in percent; shaded: the overall change's interval.`
+  );
+}
+function intervalsSvg(input) {
+  const { rows, margin } = input;
+  const rowH = 22;
+  const height = M.top + M.bottom + rowH * rows.length;
+  const values = rows.flatMap((r) => [r.estimate, r.lower ?? r.estimate, r.upper ?? r.estimate]);
+  const all = [0, ...values, ...margin === null ? [] : [margin]];
+  const lo2 = Math.min(...all);
+  const hi2 = Math.max(...all);
+  const pad = (hi2 - lo2) * 0.06 || 1;
+  const x = linear(lo2 - pad, hi2 + pad, M.left + 40, W - M.right);
+  const body = [];
+  for (const t of x.ticks) {
+    body.push(
+      `<line x1="${x(t).toFixed(1)}" x2="${x(t).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="#e5e7eb"/><text x="${x(t).toFixed(1)}" y="${height - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+    );
+  }
+  body.push(
+    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.ink}"/>`
+  );
+  if (margin !== null) {
+    body.push(
+      `<line x1="${x(margin).toFixed(1)}" x2="${x(margin).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.worse}" stroke-dasharray="6 4"/>`
+    );
+  }
+  rows.forEach((r, i) => {
+    const cy = M.top + rowH * i + rowH / 2;
+    const colour = r.lower !== null && r.lower > 0 ? COLOURS.worse : r.upper !== null && r.upper < 0 ? COLOURS.better : COLOURS.neutral;
+    body.push(
+      `<text x="${M.left + 32}" y="${cy + 4}" font-size="11" text-anchor="end" fill="${COLOURS.ink}">${xml(r.label)}</text>`
+    );
+    if (r.lower !== null && r.upper !== null) {
+      body.push(
+        `<line x1="${x(r.lower).toFixed(1)}" x2="${x(r.upper).toFixed(1)}" y1="${cy}" y2="${cy}" stroke="${colour}" stroke-width="2"/>`
+      );
+    }
+    body.push(
+      `<circle cx="${x(r.estimate).toFixed(1)}" cy="${cy}" r="4" fill="${colour}"><title>${xml(`${r.label}: ${fmt(r.estimate)}%`)}</title></circle>`
+    );
+  });
+  return frame(
+    input.title,
+    body,
+    "Dots: change in mean loss in percent; bars: its interval; vertical line: no difference."
+  ).replace(`viewBox="0 0 ${W} ${H}"`, `viewBox="0 0 ${W} ${height}"`);
+}
+function seriesDotPlotSvg(input) {
+  const { points, alpha } = input;
+  const sig = (p) => -Math.log10(Math.max(p, 1e-12));
+  const xs = [0, ...points.map((p) => p.change)];
+  const ys = [0, sig(alpha), ...points.map((p) => sig(p.p))];
+  const xPad = (Math.max(...xs) - Math.min(...xs)) * 0.06 || 1;
+  const x = linear(Math.min(...xs) - xPad, Math.max(...xs) + xPad, M.left, W - M.right);
+  const y = linear(0, Math.max(...ys) * 1.1, H - M.bottom, M.top);
+  const body = yAxis(y, "");
+  body.push(hline(y(sig(alpha)), COLOURS.neutral, "4 3", `adjusted p = ${alpha}`));
+  body.push(
+    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${COLOURS.ink}"/>`
+  );
+  for (const t of x.ticks) {
+    body.push(
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+    );
+  }
+  body.push(
+    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">change in mean loss; up: stronger evidence (\u2212log10 adjusted p)</text>`
+  );
+  for (const p of points) {
+    const colour = p.direction === "worse" ? COLOURS.worse : p.direction === "better" ? COLOURS.better : COLOURS.neutral;
+    body.push(
+      `<circle cx="${x(p.change).toFixed(1)}" cy="${y(sig(p.p)).toFixed(1)}" r="4" fill="${colour}" fill-opacity="0.8"><title>${xml(`${p.label}: ${fmt(p.change)}%, adjusted p ${p.p.toPrecision(2)}`)}</title></circle>`
+    );
+  }
+  return frame(
+    "Series: change against evidence",
+    body,
+    "Each dot is a series; right of the vertical line its loss is higher; above the dashed line the adjusted evidence is significant."
+  );
+}
+function bootstrapHistogramSvg(input) {
+  const { histogram, observed, boundary } = input;
+  const lo2 = Math.min(histogram.lower, observed, boundary);
+  const hi2 = Math.max(histogram.upper, observed, boundary);
+  const pad = (hi2 - lo2) * 0.04 || 1;
+  const x = linear(lo2 - pad, hi2 + pad, M.left, W - M.right);
+  const max = Math.max(...histogram.counts);
+  const y = linear(0, max * 1.1, H - M.bottom, M.top);
+  const bins = histogram.counts.length;
+  const width = (histogram.upper - histogram.lower) / bins;
+  const body = [];
+  histogram.counts.forEach((c, j) => {
+    const x0 = x(histogram.lower + j * width);
+    const x1 = x(histogram.lower + (j + 1) * width);
+    body.push(
+      `<rect x="${x0.toFixed(1)}" y="${y(c).toFixed(1)}" width="${Math.max(0.5, x1 - x0 - 0.5).toFixed(1)}" height="${(y(0) - y(c)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.5"/>`
+    );
+  });
+  for (const t of x.ticks) {
+    body.push(
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}</text>`
+    );
+  }
+  const vline = (v, colour, dash, label, side, row) => {
+    const width2 = label.length * 6.2;
+    const anchor = side === "end" && x(v) - width2 < M.left ? "start" : side === "start" && x(v) + width2 > W - M.right ? "end" : side;
+    return `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/><text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml(label)}</text>`;
+  };
+  body.push(
+    vline(
+      boundary,
+      COLOURS.ink,
+      "4 3",
+      ` H0 boundary ${fmt(boundary)} `,
+      observed >= boundary ? "end" : "start",
+      0
+    )
+  );
+  body.push(
+    vline(
+      observed,
+      COLOURS.worse,
+      "0",
+      ` observed ${fmt(observed)} `,
+      observed >= boundary ? "start" : "end",
+      1
+    )
+  );
+  body.push(
+    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">resampled mean of the tested differential d</text>`
+  );
+  return frame(
+    "Bootstrap distribution",
+    body,
+    "Histogram of the stationary-bootstrap resample means of d, with the observed mean and the boundary of H0."
+  );
+}
+
+// src/report/renderHtml.ts
+var STYLE = `
+:root { color-scheme: light; }
+body { font: 15px/1.5 -apple-system, BlinkMacSystemFont, "Segoe UI", "Noto Sans", Helvetica, Arial, sans-serif;
+  color: #1f2328; margin: 0 auto; padding: 16px; max-width: 980px; }
+h1 { font-size: 1.4em; margin: 0 0 8px; } h2 { font-size: 1.15em; margin: 28px 0 8px; border-bottom: 1px solid #d0d7de; padding-bottom: 4px; }
+.verdict { display: inline-block; padding: 1px 10px; border-radius: 12px; color: #fff; font-weight: 600; }
+.pass { background: #2463a6; } .warn { background: #9a6700; } .fail { background: #b4501a; }
+.lead { font-size: 1.05em; }
+.scroll { overflow-x: auto; }
+table { border-collapse: collapse; margin: 8px 0; font-variant-numeric: tabular-nums; }
+th, td { border: 1px solid #d0d7de; padding: 4px 10px; vertical-align: top; }
+th { background: #f6f8fa; text-align: left; }
+td.r, th.r { text-align: right; }
+figure { margin: 12px 0; } figcaption { color: #59636e; font-size: 0.9em; }
+p, li, h1, h2, code { overflow-wrap: anywhere; }
+code, .spark { font-family: ui-monospace, SFMono-Regular, Menlo, Consolas, monospace; font-size: 0.9em; }
+.muted { color: #59636e; font-size: 0.9em; }
+@media (max-width: 600px) { body { font-size: 14px; padding: 8px; } th, td { padding: 3px 6px; } }
+@media print { body { max-width: none; } h2 { break-after: avoid; } figure, table { break-inside: avoid; } }
+`;
+function renderHtml(report, options = {}) {
+  const view = report;
+  const s = reportSections(view, options);
+  const overall = view.comparisons[0];
+  const out = [];
+  out.push(
+    "<!doctype html>",
+    '<html lang="en"><head><meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    `<title>${xml(s.title)}: ${s.verdict.toUpperCase()}</title>`,
+    `<style>${STYLE}</style></head><body>`,
+    `<h1>${xml(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
+    `<p class="lead"><strong>${xml(s.lead)}</strong> ${xml(s.change)}</p>`,
+    htmlTable(s.main),
+    `<p class="muted">${xml(s.intervalNote)}</p>`
+  );
+  if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`);
+  out.push(
+    `<p class="muted">${s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: <code>${xml(s.changedSettings)}</code>`}</p>`
+  );
+  const chart = differenceSeries(view);
+  if (chart !== null) {
+    const interval = relativeInterval(overall);
+    const band = interval === null || interval.lower === null || interval.upper === null ? null : { lower: interval.lower, upper: interval.upper, level: interval.level };
+    out.push(
+      "<h2>Difference over time</h2>",
+      `<figure>${differenceOverTimeSvg({
+        labels: chart.labels,
+        values: chart.values,
+        margin: chart.margin,
+        band: band === null ? null : { lower: band.lower * 100, upper: band.upper * 100 }
+      })}<figcaption>${xml(chartCaption(chart))}${band === null ? "" : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
+      `<p class="spark">${xml(sparklineText(chart))}</p>`
+    );
+  }
+  const horizons = view.comparisons.filter(
+    (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
+  );
+  if (s.horizons !== null) {
+    const rows = horizons.filter((c) => c.relativeDifference !== null).map((c) => {
+      const i = relativeInterval(c);
+      return {
+        label: `h ${c.horizon}`,
+        estimate: c.relativeDifference * 100,
+        lower: i?.lower == null ? null : i.lower * 100,
+        upper: i?.upper == null ? null : i.upper * 100
+      };
+    });
+    out.push("<h2>By horizon (for locating a change only)</h2>");
+    if (rows.length > 0) {
+      out.push(
+        `<figure>${intervalsSvg({ title: "Change in mean loss by horizon", rows, margin: differenceSeries(view)?.margin ?? marginPercent(view) })}<figcaption>Each horizon on its own: the dot is the change in mean loss, the bar its interval; right of the line the candidate is worse.</figcaption></figure>`
+      );
+    }
+    out.push(
+      '<p class="muted">The p-values are Holm-adjusted across horizons; the gate\u2019s verdict rests on the overall comparison.</p>',
+      htmlTable(s.horizons)
+    );
+  }
+  if (s.series !== null) {
+    const points = view.comparisons.filter((c) => c.series !== "all" && c.relativeDifference !== null).map((c) => ({
+      label: String(c.series),
+      change: c.relativeDifference * 100,
+      p: c.directionPValue ?? c.adjustedPValue ?? 1,
+      direction: c.direction ?? "no evidence"
+    }));
+    out.push("<h2>By series</h2>");
+    if (points.length > 0) {
+      out.push(
+        `<figure>${seriesDotPlotSvg({ points, alpha: view.policy.alpha })}<figcaption>Each dot is a series: across, the change in its mean loss; up, the strength of the evidence (\u2212log10 of the multiplicity-adjusted p-value). Rust: worse, blue: better, grey: no clear difference.</figcaption></figure>`
+      );
+    }
+    out.push(`<p>${xml(s.series.summary)}</p>`, htmlTable(s.series.table));
+  }
+  if (s.paths !== null) {
+    out.push("<h2>By backtest path</h2>", `<p>${xml(s.paths.summary)}</p>`);
+    if (s.paths.table !== null) out.push(htmlTable(s.paths.table));
+  }
+  const missing = missingRowsSection(view);
+  if (missing !== null) {
+    out.push(
+      `<h2>${xml(missing.title)}</h2>`,
+      ...missing.lines.map((l) => `<p>${xml(l)}</p>`),
+      ...missing.tables.map(htmlTable)
+    );
+  }
+  out.push("<h2>How the overall comparison was tested</h2>");
+  const histogram = overall.bootstrap.distribution ?? null;
+  if (histogram !== null) {
+    out.push(
+      `<figure>${bootstrapHistogramSvg({ histogram, observed: overall.meanTestedDifferential, boundary: view.policy.boundary })}<figcaption>The stationary bootstrap's resampled means of the tested differential d (${overall.bootstrap.resamples} resamples). The observed mean is marked, and so is the boundary of H0.</figcaption></figure>`
+    );
+  }
+  out.push(
+    htmlTable(s.details),
+    `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`
+  );
+  if (s.checks !== null) out.push("<h2>Backtest checks</h2>", htmlTable(s.checks));
+  out.push(
+    "<h2>Inputs and coverage</h2>",
+    htmlTable(s.inputs.table),
+    ...s.inputs.lines.map((l) => `<p>${xml(l)}</p>`)
+  );
+  out.push("<h2>All settings</h2>", htmlTable(s.settings));
+  out.push(
+    `<p class="muted">A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${xml(report.tool.version)}.</p>`,
+    "</body></html>"
+  );
+  return `${out.join("\n")}
+`;
+}
+function marginPercent(report) {
+  const p = report.policy;
+  if (p.marginKind !== "relative" || p.margin === 0) return null;
+  return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
+}
+function htmlTable(t) {
+  const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text)}</${tag}>`;
+  return [
+    '<div class="scroll"><table>',
+    `<thead><tr>${t.header.map((h, j) => cell("th", h, j)).join("")}</tr></thead>`,
+    `<tbody>${t.rows.map((r) => `<tr>${r.map((c, j) => cell("td", c, j)).join("")}</tr>`).join("")}</tbody>`,
+    "</table></div>"
+  ].join("");
+}
+
+// src/report/escapeMarkdown.ts
+function escapeMarkdown(text) {
+  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
+}
+
+// src/report/renderBacktestChecks.ts
+var SHOWN = 2;
+var MAX_CHARS = 200;
+var clip = (text) => text.length <= MAX_CHARS ? text : `${text.slice(0, MAX_CHARS)}\u2026`;
+var CHECK_LABELS = {
+  "look-ahead": "origin at or after the timestamp",
+  "horizon-steps": "horizon differs from the steps from origin to timestamp",
+  "origin-after-actuals": "issued after the last actual",
+  "origin-sets": "origins in one file only",
+  "path-sets": "paths in one file only",
+  "horizon-sets": "horizons in one file only",
+  "time-spans": "timestamps outside the other file's span",
+  "series-coverage": "series in one file only",
+  "fold-purge": "training within the purge or embargo window",
+  "outside-test-window": "rows outside their fold's test window",
+  "exact-predictions": "predictions equal to the actual far more often than the other model"
+};
+function backtestChecksSection(report) {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
+    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
+    return [`**Backtest checks**: not run (${reasons.map(escapeMarkdown).join("; ")}).`, ""];
+  }
+  const mode = integrity.mode === "report" ? " Shown only: they do not change the verdict (backtest-checks report)." : integrity.mode === "warn" ? " Findings warn (backtest-checks warn)." : "";
+  const step = integrity.frequency === null ? "" : ` Steps of ${escapeMarkdown(integrity.frequency.text)} (${integrity.frequency.source}).`;
+  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ""];
+  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
+  for (const n of integrity.notRun) out.push(`- not run \xB7 ${n.id}: ${escapeMarkdown(n.reason)}`);
+  out.push("");
+  return out;
+}
+function checkLine(check) {
+  const shown = check.examples.slice(0, SHOWN).map((e) => escapeMarkdown(clip(e)));
+  const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
+  return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
+}
+function backtestChecksLines(report, clean3) {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0) return [];
+  const flagged = integrity.checks.filter((c) => c.status !== "ok");
+  const out = [
+    `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
+  ];
+  for (const c of flagged) {
+    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
+    out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
+  }
+  return out;
+}
+
+// src/report/renderStabilitySection.ts
+function renderStabilitySection(report) {
+  const stability = report.stability;
+  const overall = report.comparisons[0];
+  if (stability === null || overall === void 0) return [];
+  const out = ["**Over time**", ""];
+  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
+  out.push(fluctuationSentence(stability, report), "");
+  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
+  if (stability.periods.length > 0) out.push(...periodTable(stability), "");
+  return out;
+}
+function windowTable(overall, recent) {
+  const level = recent.relativeChange?.level;
+  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name, c) => `| ${name} | ${escapeMarkdown(c.firstTimestamp ?? "n/a")} to ${escapeMarkdown(c.lastTimestamp ?? "n/a")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
+  return [
+    `| window | from \u2013 to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
+    "|---|---|---:|---:|---:|---:|---:|---:|---|",
+    row("whole backtest", overall),
+    row("most recent", recent)
+  ];
+}
+function fluctuationSentence(stability, report) {
+  const f = stability.fluctuation;
+  if (f === null) {
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
+  }
+  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
+  if (f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
+    return `${setup} The candidate is significantly worse over ${spans}.`;
+  }
+  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function levelsSentence(stability) {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
+}
+function periodTable(stability) {
+  const out = [
+    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
+    "",
+    "| period | time points | baseline loss | candidate loss | relative |",
+    "|---|---:|---:|---:|---:|"
+  ];
+  for (const p of stability.periods) {
+    const span = p.start === p.end ? escapeMarkdown(p.start) : `${escapeMarkdown(p.start)} to ${escapeMarkdown(p.end)}`;
+    out.push(
+      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`
+    );
+  }
+  out.push("", "</details>");
+  return out;
+}
+
+// src/report/renderMarkdown.ts
+function renderMarkdown(report, options = {}) {
+  const view = report;
+  const s = reportSections(view, options);
+  const lines = [];
+  lines.push(`### ${escapeMarkdown(s.title)}: ${s.verdict.toUpperCase()}`, "");
+  lines.push(`**${escapeMarkdown(s.lead)}** ${escapeMarkdown(s.change)}`, "");
+  lines.push(...markdownTable(s.main), "");
+  lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
+  for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
+  if (s.notes.length > 0) lines.push("");
+  const chart = differenceSeries(view);
+  if (chart !== null) {
+    lines.push(...mermaidChart(chart), "");
+    lines.push(`<sub>${escapeMarkdown(chartCaption(chart))}</sub>`, "");
+    lines.push(`\`${sparklineText(chart).replace(/`/g, "'")}\``, "");
+  }
+  lines.push(
+    s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: ${code(s.changedSettings)}`,
+    ""
+  );
+  lines.push(
+    ...collapsed("How the overall comparison was tested", [
+      ...markdownTable(s.details),
+      "",
+      ...s.detailNotes.map((n) => `- ${escapeMarkdown(n)}`)
+    ])
+  );
+  if (s.horizons !== null) {
+    lines.push(
+      ...collapsed(
+        `By horizon (${s.horizons.rows.length}): for locating a change only, not verdicts`,
+        [
+          "Each horizon is compared on its own; the p-values are Holm-adjusted across horizons. The gate\u2019s verdict rests on the overall comparison.",
+          "",
+          ...markdownTable(s.horizons)
+        ]
+      )
+    );
+  }
+  if (s.series !== null) {
+    lines.push(
+      ...collapsed(
+        `By series (${report.seriesSummary?.series ?? 0}): ${report.seriesSummary?.worse ?? 0} worse, ${report.seriesSummary?.better ?? 0} better`,
+        [escapeMarkdown(s.series.summary), "", ...markdownTable(s.series.table)]
+      )
+    );
+  }
+  if (s.paths !== null) {
+    lines.push(
+      ...collapsed("By backtest path", [
+        escapeMarkdown(s.paths.summary),
+        ...s.paths.table === null ? [] : ["", ...markdownTable(s.paths.table)]
+      ])
+    );
+  }
+  const missing = missingRowsSection(view);
+  if (missing !== null) {
+    lines.push(
+      ...collapsed(missing.title, [
+        ...missing.lines.map((l) => escapeMarkdown(l)),
+        ...missing.tables.flatMap((t) => ["", ...markdownTable(t)])
+      ])
+    );
+  }
+  const overTime = renderStabilitySection(report);
+  if (overTime.length > 0) {
+    lines.push(
+      `<details><summary>${escapeMarkdown(overTimeSummary(view))}</summary>`,
+      "",
+      ...overTime,
+      "</details>",
+      ""
+    );
+  }
+  const checks = backtestChecksSection(report);
+  if (checks.length > 0) {
+    lines.push(
+      `<details><summary>Backtest checks: ${escapeMarkdown(report.integrity.outcome)}</summary>`,
+      "",
+      ...checks,
+      "</details>",
+      ""
+    );
+  }
+  lines.push(
+    ...collapsed("Inputs and coverage", [
+      ...markdownTable(s.inputs.table),
+      "",
+      ...s.inputs.lines.map((l) => escapeMarkdown(l))
+    ])
+  );
+  lines.push(...collapsed("All settings", markdownTable(s.settings)));
+  lines.push(
+    `<sub>A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${escapeMarkdown(report.tool.version)}.${options.runUrl === void 0 ? "" : ` [Run details](${options.runUrl})`}</sub>`
+  );
+  return `${lines.join("\n")}
+`;
+}
+function overTimeSummary(report) {
+  const s = report.stability;
+  const recent = s?.recent?.verdict === "fail";
+  const stretch = (s?.fluctuation?.worsePeriods.length ?? 0) > 0;
+  if (recent && stretch) return "Over time: worse recently and in some stretches";
+  if (recent) return "Over time: worse recently";
+  if (stretch) return "Over time: worse in some stretches";
+  return "Over time: the recent window, the fluctuation test and the mean loss by period";
+}
+function markdownTable(t) {
+  const row = (cells) => `| ${cells.map((c) => escapeMarkdown(c)).join(" | ")} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
+    ...t.rows.map(row)
+  ];
+}
+function collapsed(summary, body) {
+  return [`<details><summary>${escapeMarkdown(summary)}</summary>`, "", ...body, "", "</details>", ""];
+}
+function code(text) {
+  return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : escapeMarkdown(text);
+}
+
+// src/report/renderStabilityTerminal.ts
+function renderStabilityTerminal(report) {
+  const s = report.stability;
+  if (s === null) return [];
+  const out = [];
+  const r = s.recent;
+  const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
+  if (r !== null) {
+    out.push(
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
+    );
+  }
+  const f = s.fluctuation;
+  if (f !== null) {
+    out.push(
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
+    );
+  }
+  return out;
+}
+function clean(text) {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
+}
+
+// src/report/renderTerminal.ts
+function renderTerminal(report, options) {
+  const view = report;
+  const s = reportSections(view, options);
+  const paint = (code2, text) => options.color ? `\x1B[${code2}m${text}\x1B[0m` : text;
+  const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
+  const out = [];
+  out.push(
+    `${paint("1", clean2(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
+  );
+  out.push(wrap(`${s.lead} ${s.change}`, 100), "");
+  out.push(...textTable(s.main, paint));
+  out.push("", paint("2", wrap(s.intervalNote, 100)));
+  const chart = differenceSeries(view);
+  if (chart !== null) out.push("", clean2(sparklineText(chart)));
+  const overTime = renderStabilityTerminal(report);
+  if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, "  ")));
+  if (s.notes.length > 0) out.push("");
+  for (const note of s.notes) out.push(wrap(`- ${note}`, 100, "  "));
+  if (s.horizons !== null) {
+    out.push("", paint("2", "by horizon (for locating only; p Holm-adjusted across horizons):"));
+    out.push(...textTable(s.horizons, paint));
+  }
+  if (s.series !== null) out.push("", wrap(s.series.summary, 100));
+  if (s.paths !== null) out.push("", wrap(s.paths.summary, 100));
+  const checks = backtestChecksLines(report, clean2);
+  if (checks.length > 0) out.push("", ...checks);
+  for (const r of report.reasons) {
+    if (r.startsWith("The candidate lacks")) out.push(wrap(`- ${r}`, 100, "  "));
+  }
+  out.push("");
+  const i = report.inputs;
+  out.push(
+    paint(
+      "2",
+      clean2(
+        `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`
+      )
+    )
+  );
+  for (const l of s.inputs.lines) {
+    if (!l.startsWith("Rows matched") && !l.startsWith("Left out")) {
+      out.push(paint("2", wrap(l, 100, "  ")));
+    }
+  }
+  if (s.changedSettings !== "") out.push(paint("2", clean2(`settings: ${s.changedSettings}`)));
+  return `${out.join("\n")}
+`;
+}
+function textTable(t, paint) {
+  const rows = t.rows.map((r) => r.map(clean2));
+  const widths = t.header.map(
+    (h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length))
+  );
+  const line = (cells) => cells.map(
+    (cell, j) => t.align[j] === "right" ? cell.padStart(widths[j]) : cell.padEnd(widths[j])
+  ).join("  ").trimEnd();
+  return [paint("2", line(t.header)), ...rows.map(line)];
+}
+function clean2(text) {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
+}
+function wrap(text, width, indent2 = "") {
+  const words = clean2(text).split(" ");
+  const lines = [];
+  let current = "";
+  for (const w of words) {
+    if (current !== "" && current.length + 1 + w.length > width) {
+      lines.push(current);
+      current = indent2 + w;
+    } else {
+      current = current === "" ? w : `${current} ${w}`;
+    }
+  }
+  if (current !== "") lines.push(current);
+  return lines.join("\n");
+}
 
 // src/settings/resolveSettings.ts
 function resolveSettings(raw, label) {
@@ -28283,12 +29306,13 @@ function resolveSettings(raw, label) {
     embargo: integer("embargo", 0, 1e6),
     backtestChecks: value("backtest-checks"),
     json: optional("json"),
-    markdown: optional("markdown")
+    markdown: optional("markdown"),
+    html: optional("html")
   };
 }
 function parseMargin(text, kind, label) {
-  const percent = text.endsWith("%");
-  const body = percent ? text.slice(0, -1).trim() : text;
+  const percent2 = text.endsWith("%");
+  const body = percent2 ? text.slice(0, -1).trim() : text;
   const x = body === "" ? Number.NaN : Number(body);
   if (!Number.isFinite(x) || x < 0) {
     throw new InputError(
@@ -28296,7 +29320,7 @@ function parseMargin(text, kind, label) {
       { value: text }
     );
   }
-  if (percent) {
+  if (percent2) {
     if (kind !== "relative") {
       throw new InputError(
         `${label("margin")} as a percentage needs ${label("margin-kind")} relative (an absolute margin is in loss units)`,
@@ -28417,30 +29441,30 @@ import { constants } from "node:fs";
 import { access, stat as stat3 } from "node:fs/promises";
 import { dirname } from "node:path";
 var STANDARD_OUTPUT = "-";
-async function checkWritable(path, option) {
-  if (path === STANDARD_OUTPUT) return;
-  const info = await stat3(path).catch(() => null);
+async function checkWritable(path2, option) {
+  if (path2 === STANDARD_OUTPUT) return;
+  const info = await stat3(path2).catch(() => null);
   if (info !== null) {
     if (info.isDirectory()) {
-      throw new InputError(`${option} names a directory; give a file name`, { file: path });
+      throw new InputError(`${option} names a directory; give a file name`, { file: path2 });
     }
-    await access(path, constants.W_OK).catch(() => {
+    await access(path2, constants.W_OK).catch(() => {
       throw new InputError(`${option}: the file cannot be written (permission denied)`, {
-        file: path
+        file: path2
       });
     });
     return;
   }
-  const folder = dirname(path);
+  const folder = dirname(path2);
   const parent = await stat3(folder).catch(() => null);
   if (parent === null || !parent.isDirectory()) {
     throw new InputError(`${option}: the folder ${JSON.stringify(folder)} does not exist`, {
-      file: path
+      file: path2
     });
   }
   await access(folder, constants.W_OK).catch(() => {
     throw new InputError(`${option}: the folder ${JSON.stringify(folder)} is not writable`, {
-      file: path
+      file: path2
     });
   });
 }
@@ -28581,8 +29605,8 @@ function progressReporter(stream) {
       if (now - last < 100 && p.fraction < 1) return;
       last = now;
       shown = true;
-      const pct = Math.round(Math.max(0, Math.min(1, p.fraction)) * 100);
-      stream.write(`\r\x1B[2K${p.stage} ${pct}%`);
+      const pct2 = Math.round(Math.max(0, Math.min(1, p.fraction)) * 100);
+      stream.write(`\r\x1B[2K${p.stage} ${pct2}%`);
     },
     done: () => {
       if (shown) stream.write("\r\x1B[2K");
@@ -28615,6 +29639,8 @@ async function main(argv) {
     }
     if (settings.json !== null) await checkWritable(settings.json, "--json");
     if (settings.markdown !== null) await checkWritable(settings.markdown, "--markdown");
+    if (settings.html !== null) await checkWritable(settings.html, "--html");
+    const shown = { workingDirectory: process.cwd() };
     const progress = progressReporter(process.stderr);
     const pool = createResamplePool();
     let report;
@@ -28629,13 +29655,14 @@ async function main(argv) {
     }
     if (settings.json !== null) await writeJson(settings.json, report);
     if (settings.markdown !== null) {
-      if (settings.markdown === STANDARD_OUTPUT) await write(renderMarkdown(report));
-      else await writeFile(settings.markdown, renderMarkdown(report));
+      if (settings.markdown === STANDARD_OUTPUT) await write(renderMarkdown(report, shown));
+      else await writeFile(settings.markdown, renderMarkdown(report, shown));
     }
+    if (settings.html !== null) await writeFile(settings.html, renderHtml(report, shown));
     const toStdout = settings.json === STANDARD_OUTPUT || settings.markdown === STANDARD_OUTPUT;
     if (!request.quiet && !toStdout) {
       const color = process.stdout.isTTY === true && process.env.NO_COLOR === void 0;
-      await write(renderTerminal(report, { color }));
+      await write(renderTerminal(report, { color, ...shown }));
     }
     return report.verdict === "fail" ? 1 : 0;
   } catch (error) {
@@ -28656,14 +29683,14 @@ This is a bug in skillgate; set SKILLGATE_DEBUG=1 for details.
     return 3;
   }
 }
-async function writeJson(path, report) {
+async function writeJson(path2, report) {
   const pieces = jsonPieces(report);
-  if (path === STANDARD_OUTPUT) {
+  if (path2 === STANDARD_OUTPUT) {
     for (const piece2 of pieces) await write(piece2);
     await write("\n");
     return;
   }
-  const out = createWriteStream(path);
+  const out = createWriteStream(path2);
   for (const piece2 of pieces) if (!out.write(piece2)) await once(out, "drain");
   out.end("\n");
   await once(out, "finish");
@@ -28671,6 +29698,6 @@ async function writeJson(path, report) {
 async function write(text) {
   if (!process.stdout.write(text)) await once(process.stdout, "drain");
 }
-main(process.argv.slice(2)).then((code) => {
-  process.exitCode = code;
+main(process.argv.slice(2)).then((code2) => {
+  process.exitCode = code2;
 });

@@ -594,10 +594,10 @@ var require_errors = __commonJS({
     };
     var kHTTPParserError = /* @__PURE__ */ Symbol.for("undici.error.UND_ERR_HTTP_PARSER");
     var HTTPParserError = class extends Error {
-      constructor(message, code, data) {
+      constructor(message, code2, data) {
         super(message);
         this.name = "HTTPParserError";
-        this.code = code ? `HPE_${code}` : void 0;
+        this.code = code2 ? `HPE_${code2}` : void 0;
         this.data = data ? data.toString() : void 0;
       }
       static [Symbol.hasInstance](instance) {
@@ -620,12 +620,12 @@ var require_errors = __commonJS({
     };
     var kRequestRetryError = /* @__PURE__ */ Symbol.for("undici.error.UND_ERR_REQ_RETRY");
     var RequestRetryError = class extends UndiciError {
-      constructor(message, code, { headers, data }) {
+      constructor(message, code2, { headers, data }) {
         super(message);
         this.name = "RequestRetryError";
         this.message = message || "Request retry error";
         this.code = "UND_ERR_REQ_RETRY";
-        this.statusCode = code;
+        this.statusCode = code2;
         this.data = data;
         this.headers = headers;
       }
@@ -636,12 +636,12 @@ var require_errors = __commonJS({
     };
     var kResponseError = /* @__PURE__ */ Symbol.for("undici.error.UND_ERR_RESPONSE");
     var ResponseError = class extends UndiciError {
-      constructor(message, code, { headers, data }) {
+      constructor(message, code2, { headers, data }) {
         super(message);
         this.name = "ResponseError";
         this.message = message || "Response error";
         this.code = "UND_ERR_RESPONSE";
-        this.statusCode = code;
+        this.statusCode = code2;
         this.data = data;
         this.headers = headers;
       }
@@ -851,8 +851,8 @@ var require_tree = __commonJS({
         if (index === void 0 || index >= key.length) {
           throw new TypeError("Unreachable");
         }
-        const code = this.code = key.charCodeAt(index);
-        if (code > 127) {
+        const code2 = this.code = key.charCodeAt(index);
+        if (code2 > 127) {
           throw new TypeError("key must be ascii string");
         }
         if (key.length !== ++index) {
@@ -873,11 +873,11 @@ var require_tree = __commonJS({
         let index = 0;
         let node = this;
         while (true) {
-          const code = key.charCodeAt(index);
-          if (code > 127) {
+          const code2 = key.charCodeAt(index);
+          if (code2 > 127) {
             throw new TypeError("key must be ascii string");
           }
-          if (node.code === code) {
+          if (node.code === code2) {
             if (length === ++index) {
               node.value = value;
               break;
@@ -887,7 +887,7 @@ var require_tree = __commonJS({
               node.middle = new _TstNode(key, value, index);
               break;
             }
-          } else if (node.code < code) {
+          } else if (node.code < code2) {
             if (node.left !== null) {
               node = node.left;
             } else {
@@ -911,19 +911,19 @@ var require_tree = __commonJS({
         let index = 0;
         let node = this;
         while (node !== null && index < keylength) {
-          let code = key[index];
-          if (code <= 90 && code >= 65) {
-            code |= 32;
+          let code2 = key[index];
+          if (code2 <= 90 && code2 >= 65) {
+            code2 |= 32;
           }
           while (node !== null) {
-            if (code === node.code) {
+            if (code2 === node.code) {
               if (keylength === ++index) {
                 return node;
               }
               node = node.middle;
               break;
             }
-            node = node.code < code ? node.left : node.right;
+            node = node.code < code2 ? node.left : node.right;
           }
         }
         return null;
@@ -1079,14 +1079,14 @@ var require_util = __commonJS({
         }
         const port = url.port != null ? url.port : url.protocol === "https:" ? 443 : 80;
         let origin = url.origin != null ? url.origin : `${url.protocol || ""}//${url.hostname || ""}:${port}`;
-        let path7 = url.path != null ? url.path : `${url.pathname || ""}${url.search || ""}`;
+        let path8 = url.path != null ? url.path : `${url.pathname || ""}${url.search || ""}`;
         if (origin[origin.length - 1] === "/") {
           origin = origin.slice(0, origin.length - 1);
         }
-        if (path7 && path7[0] !== "/") {
-          path7 = `/${path7}`;
+        if (path8 && path8[0] !== "/") {
+          path8 = `/${path8}`;
         }
-        return new URL(`${origin}${path7}`);
+        return new URL(`${origin}${path8}`);
       }
       if (!isHttpOrHttpsPrefixed(url.origin || url.protocol)) {
         throw new InvalidArgumentError("Invalid URL protocol: the URL must start with `http:` or `https:`.");
@@ -1537,39 +1537,39 @@ var require_diagnostics = __commonJS({
       });
       diagnosticsChannel.channel("undici:client:sendHeaders").subscribe((evt) => {
         const {
-          request: { method, path: path7, origin }
+          request: { method, path: path8, origin }
         } = evt;
-        debuglog("sending request to %s %s/%s", method, origin, path7);
+        debuglog("sending request to %s %s/%s", method, origin, path8);
       });
       diagnosticsChannel.channel("undici:request:headers").subscribe((evt) => {
         const {
-          request: { method, path: path7, origin },
+          request: { method, path: path8, origin },
           response: { statusCode }
         } = evt;
         debuglog(
           "received response to %s %s/%s - HTTP %d",
           method,
           origin,
-          path7,
+          path8,
           statusCode
         );
       });
       diagnosticsChannel.channel("undici:request:trailers").subscribe((evt) => {
         const {
-          request: { method, path: path7, origin }
+          request: { method, path: path8, origin }
         } = evt;
-        debuglog("trailers received from %s %s/%s", method, origin, path7);
+        debuglog("trailers received from %s %s/%s", method, origin, path8);
       });
       diagnosticsChannel.channel("undici:request:error").subscribe((evt) => {
         const {
-          request: { method, path: path7, origin },
+          request: { method, path: path8, origin },
           error: error2
         } = evt;
         debuglog(
           "request to %s %s/%s errored - %s",
           method,
           origin,
-          path7,
+          path8,
           error2.message
         );
       });
@@ -1618,9 +1618,9 @@ var require_diagnostics = __commonJS({
         });
         diagnosticsChannel.channel("undici:client:sendHeaders").subscribe((evt) => {
           const {
-            request: { method, path: path7, origin }
+            request: { method, path: path8, origin }
           } = evt;
-          debuglog("sending request to %s %s/%s", method, origin, path7);
+          debuglog("sending request to %s %s/%s", method, origin, path8);
         });
       }
       diagnosticsChannel.channel("undici:websocket:open").subscribe((evt) => {
@@ -1630,11 +1630,11 @@ var require_diagnostics = __commonJS({
         websocketDebuglog("connection opened %s%s", address, port ? `:${port}` : "");
       });
       diagnosticsChannel.channel("undici:websocket:close").subscribe((evt) => {
-        const { websocket, code, reason } = evt;
+        const { websocket, code: code2, reason } = evt;
         websocketDebuglog(
           "closed connection to %s - %s %s",
           websocket.url,
-          code,
+          code2,
           reason
         );
       });
@@ -1683,7 +1683,7 @@ var require_request = __commonJS({
     var kHandler = /* @__PURE__ */ Symbol("handler");
     var Request = class {
       constructor(origin, {
-        path: path7,
+        path: path8,
         method,
         body,
         headers,
@@ -1698,11 +1698,11 @@ var require_request = __commonJS({
         expectContinue,
         servername
       }, handler2) {
-        if (typeof path7 !== "string") {
+        if (typeof path8 !== "string") {
           throw new InvalidArgumentError("path must be a string");
-        } else if (path7[0] !== "/" && !(path7.startsWith("http://") || path7.startsWith("https://")) && method !== "CONNECT") {
+        } else if (path8[0] !== "/" && !(path8.startsWith("http://") || path8.startsWith("https://")) && method !== "CONNECT") {
           throw new InvalidArgumentError("path must be an absolute URL or start with a slash");
-        } else if (invalidPathRegex.test(path7)) {
+        } else if (invalidPathRegex.test(path8)) {
           throw new InvalidArgumentError("invalid request path");
         }
         if (typeof method !== "string") {
@@ -1768,7 +1768,7 @@ var require_request = __commonJS({
         this.completed = false;
         this.aborted = false;
         this.upgrade = upgrade || null;
-        this.path = query ? buildURL(path7, query) : path7;
+        this.path = query ? buildURL(path8, query) : path8;
         this.origin = origin;
         this.idempotent = idempotent == null ? method === "HEAD" || method === "GET" : idempotent;
         this.blocking = blocking == null ? false : blocking;
@@ -4122,9 +4122,9 @@ var require_util2 = __commonJS({
     }
     function isValidEncodedURL(url) {
       for (let i = 0; i < url.length; ++i) {
-        const code = url.charCodeAt(i);
-        if (code > 126 || // Non-US-ASCII + DEL
-        code < 32) {
+        const code2 = url.charCodeAt(i);
+        if (code2 > 126 || // Non-US-ASCII + DEL
+        code2 < 32) {
           return false;
         }
       }
@@ -4715,8 +4715,8 @@ var require_util2 = __commonJS({
       }
       const rangeStart = collectASequenceOfCodePoints(
         (char) => {
-          const code = char.charCodeAt(0);
-          return code >= 48 && code <= 57;
+          const code2 = char.charCodeAt(0);
+          return code2 >= 48 && code2 <= 57;
         },
         data,
         position
@@ -4742,8 +4742,8 @@ var require_util2 = __commonJS({
       }
       const rangeEnd = collectASequenceOfCodePoints(
         (char) => {
-          const code = char.charCodeAt(0);
-          return code >= 48 && code <= 57;
+          const code2 = char.charCodeAt(0);
+          return code2 >= 48 && code2 <= 57;
         },
         data,
         position
@@ -6461,7 +6461,7 @@ var require_client_h1 = __commonJS({
       return method !== "GET" && method !== "HEAD" && method !== "OPTIONS" && method !== "TRACE" && method !== "CONNECT";
     }
     function writeH1(client, request2) {
-      const { method, path: path7, host, upgrade, blocking, reset } = request2;
+      const { method, path: path8, host, upgrade, blocking, reset } = request2;
       let { body, headers, contentLength } = request2;
       const expectsPayload = method === "PUT" || method === "POST" || method === "PATCH" || method === "QUERY" || method === "PROPFIND" || method === "PROPPATCH";
       if (util.isFormDataLike(body)) {
@@ -6542,7 +6542,7 @@ var require_client_h1 = __commonJS({
       if (blocking) {
         socket[kBlocking] = true;
       }
-      let header2 = `${method} ${path7} HTTP/1.1\r
+      let header2 = `${method} ${path8} HTTP/1.1\r
 `;
       if (typeof host === "string") {
         header2 += `host: ${host}\r
@@ -7034,9 +7034,9 @@ var require_client_h2 = __commonJS({
       this[kSocket][kError] = err2;
       this[kClient][kOnError](err2);
     }
-    function onHttp2FrameError(type, code, id) {
+    function onHttp2FrameError(type, code2, id) {
       if (id === 0) {
-        const err2 = new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code}`);
+        const err2 = new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code2}`);
         this[kSocket][kError] = err2;
         this[kClient][kOnError](err2);
       }
@@ -7046,8 +7046,8 @@ var require_client_h2 = __commonJS({
       this.destroy(err2);
       util.destroy(this[kSocket], err2);
     }
-    function onHTTP2GoAway(code) {
-      const err2 = this[kError] || new SocketError(`HTTP/2: "GOAWAY" frame received with code ${code}`, util.getSocketInfo(this));
+    function onHTTP2GoAway(code2) {
+      const err2 = this[kError] || new SocketError(`HTTP/2: "GOAWAY" frame received with code ${code2}`, util.getSocketInfo(this));
       const client = this[kClient];
       client[kSocket] = null;
       client[kHTTPContext] = null;
@@ -7071,7 +7071,7 @@ var require_client_h2 = __commonJS({
     }
     function writeH2(client, request2) {
       const session = client[kHTTP2Session];
-      const { method, path: path7, host, upgrade, expectContinue, signal, headers: reqHeaders } = request2;
+      const { method, path: path8, host, upgrade, expectContinue, signal, headers: reqHeaders } = request2;
       let { body } = request2;
       if (upgrade) {
         util.errorRequest(client, request2, new Error("Upgrade not supported for H2"));
@@ -7168,7 +7168,7 @@ var require_client_h2 = __commonJS({
         });
         return true;
       }
-      headers[HTTP2_HEADER_PATH] = path7;
+      headers[HTTP2_HEADER_PATH] = path8;
       headers[HTTP2_HEADER_SCHEME] = "https";
       const expectsPayload = method === "PUT" || method === "POST" || method === "PATCH";
       if (body && typeof body.read === "function") {
@@ -7252,8 +7252,8 @@ var require_client_h2 = __commonJS({
       stream.once("error", function(err2) {
         abort(err2);
       });
-      stream.once("frameError", (type, code) => {
-        abort(new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code}`));
+      stream.once("frameError", (type, code2) => {
+        abort(new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code2}`));
       });
       return true;
       function writeBodyH2() {
@@ -7521,9 +7521,9 @@ var require_redirect_handler = __commonJS({
           return this.handler.onHeaders(statusCode, headers, resume, statusText);
         }
         const { origin, pathname, search } = util.parseURL(new URL(this.location, this.opts.origin && new URL(this.opts.path, this.opts.origin)));
-        const path7 = search ? `${pathname}${search}` : pathname;
+        const path8 = search ? `${pathname}${search}` : pathname;
         this.opts.headers = cleanRequestHeaders(this.opts.headers, statusCode === 303, this.opts.origin !== origin);
-        this.opts.path = path7;
+        this.opts.path = path8;
         this.opts.origin = origin;
         this.opts.maxRedirections = 0;
         this.opts.query = null;
@@ -8762,10 +8762,10 @@ var require_proxy_agent = __commonJS({
         };
         const {
           origin,
-          path: path7 = "/",
+          path: path8 = "/",
           headers = {}
         } = opts;
-        opts.path = origin + path7;
+        opts.path = origin + path8;
         if (!("host" in headers) && !("Host" in headers)) {
           const { host } = new URL2(origin);
           headers.host = host;
@@ -9191,7 +9191,7 @@ var require_retry_handler = __commonJS({
         if (this.handler.onBodySent) return this.handler.onBodySent(chunk);
       }
       static [kRetryHandlerDefaultRetry](err2, { state, opts }, cb) {
-        const { statusCode, code, headers } = err2;
+        const { statusCode, code: code2, headers } = err2;
         const { method, retryOptions } = opts;
         const {
           maxRetries,
@@ -9203,7 +9203,7 @@ var require_retry_handler = __commonJS({
           methods
         } = retryOptions;
         const { counter } = state;
-        if (code && code !== "UND_ERR_REQ_RETRY" && !errorCodes.includes(code)) {
+        if (code2 && code2 !== "UND_ERR_REQ_RETRY" && !errorCodes.includes(code2)) {
           cb(err2);
           return;
         }
@@ -10737,20 +10737,20 @@ var require_mock_utils = __commonJS({
       }
       return true;
     }
-    function safeUrl(path7) {
-      if (typeof path7 !== "string") {
-        return path7;
+    function safeUrl(path8) {
+      if (typeof path8 !== "string") {
+        return path8;
       }
-      const pathSegments = path7.split("?");
+      const pathSegments = path8.split("?");
       if (pathSegments.length !== 2) {
-        return path7;
+        return path8;
       }
       const qp = new URLSearchParams(pathSegments.pop());
       qp.sort();
       return [...pathSegments, qp.toString()].join("?");
     }
-    function matchKey(mockDispatch2, { path: path7, method, body, headers }) {
-      const pathMatch = matchValue(mockDispatch2.path, path7);
+    function matchKey(mockDispatch2, { path: path8, method, body, headers }) {
+      const pathMatch = matchValue(mockDispatch2.path, path8);
       const methodMatch = matchValue(mockDispatch2.method, method);
       const bodyMatch = typeof mockDispatch2.body !== "undefined" ? matchValue(mockDispatch2.body, body) : true;
       const headersMatch = matchHeaders(mockDispatch2, headers);
@@ -10772,7 +10772,7 @@ var require_mock_utils = __commonJS({
     function getMockDispatch(mockDispatches, key) {
       const basePath = key.query ? buildURL(key.path, key.query) : key.path;
       const resolvedPath = typeof basePath === "string" ? safeUrl(basePath) : basePath;
-      let matchedMockDispatches = mockDispatches.filter(({ consumed }) => !consumed).filter(({ path: path7 }) => matchValue(safeUrl(path7), resolvedPath));
+      let matchedMockDispatches = mockDispatches.filter(({ consumed }) => !consumed).filter(({ path: path8 }) => matchValue(safeUrl(path8), resolvedPath));
       if (matchedMockDispatches.length === 0) {
         throw new MockNotMatchedError(`Mock dispatch not matched for path '${resolvedPath}'`);
       }
@@ -10810,9 +10810,9 @@ var require_mock_utils = __commonJS({
       }
     }
     function buildKey(opts) {
-      const { path: path7, method, body, headers, query } = opts;
+      const { path: path8, method, body, headers, query } = opts;
       return {
-        path: path7,
+        path: path8,
         method,
         body,
         headers,
@@ -11275,10 +11275,10 @@ var require_pending_interceptors_formatter = __commonJS({
       }
       format(pendingInterceptors) {
         const withPrettyHeaders = pendingInterceptors.map(
-          ({ method, path: path7, data: { statusCode }, persist, times, timesInvoked, origin }) => ({
+          ({ method, path: path8, data: { statusCode }, persist, times, timesInvoked, origin }) => ({
             Method: method,
             Origin: origin,
-            Path: path7,
+            Path: path8,
             "Status code": statusCode,
             Persistent: persist ? PERSISTENT : NOT_PERSISTENT,
             Invocations: timesInvoked,
@@ -11946,8 +11946,8 @@ var require_headers = __commonJS({
     var util = __require("node:util");
     var kHeadersMap = /* @__PURE__ */ Symbol("headers map");
     var kHeadersSortedMap = /* @__PURE__ */ Symbol("headers map sorted");
-    function isHTTPWhiteSpaceCharCode(code) {
-      return code === 10 || code === 13 || code === 9 || code === 32;
+    function isHTTPWhiteSpaceCharCode(code2) {
+      return code2 === 10 || code2 === 13 || code2 === 9 || code2 === 32;
     }
     function headerValueNormalize(potentialValue) {
       let i = 0;
@@ -16102,8 +16102,8 @@ var require_util6 = __commonJS({
     "use strict";
     function isCTLExcludingHtab(value) {
       for (let i = 0; i < value.length; ++i) {
-        const code = value.charCodeAt(i);
-        if (code >= 0 && code <= 8 || code >= 10 && code <= 31 || code === 127) {
+        const code2 = value.charCodeAt(i);
+        if (code2 >= 0 && code2 <= 8 || code2 >= 10 && code2 <= 31 || code2 === 127) {
           return true;
         }
       }
@@ -16111,26 +16111,26 @@ var require_util6 = __commonJS({
     }
     function validateCookieName(name) {
       for (let i = 0; i < name.length; ++i) {
-        const code = name.charCodeAt(i);
-        if (code < 33 || // exclude CTLs (0-31), SP and HT
-        code > 126 || // exclude non-ascii and DEL
-        code === 34 || // "
-        code === 40 || // (
-        code === 41 || // )
-        code === 60 || // <
-        code === 62 || // >
-        code === 64 || // @
-        code === 44 || // ,
-        code === 59 || // ;
-        code === 58 || // :
-        code === 92 || // \
-        code === 47 || // /
-        code === 91 || // [
-        code === 93 || // ]
-        code === 63 || // ?
-        code === 61 || // =
-        code === 123 || // {
-        code === 125) {
+        const code2 = name.charCodeAt(i);
+        if (code2 < 33 || // exclude CTLs (0-31), SP and HT
+        code2 > 126 || // exclude non-ascii and DEL
+        code2 === 34 || // "
+        code2 === 40 || // (
+        code2 === 41 || // )
+        code2 === 60 || // <
+        code2 === 62 || // >
+        code2 === 64 || // @
+        code2 === 44 || // ,
+        code2 === 59 || // ;
+        code2 === 58 || // :
+        code2 === 92 || // \
+        code2 === 47 || // /
+        code2 === 91 || // [
+        code2 === 93 || // ]
+        code2 === 63 || // ?
+        code2 === 61 || // =
+        code2 === 123 || // {
+        code2 === 125) {
           throw new Error("Invalid cookie name");
         }
       }
@@ -16146,31 +16146,31 @@ var require_util6 = __commonJS({
         ++i;
       }
       while (i < len) {
-        const code = value.charCodeAt(i++);
-        if (code < 33 || // exclude CTLs (0-31)
-        code > 126 || // non-ascii and DEL (127)
-        code === 34 || // "
-        code === 44 || // ,
-        code === 59 || // ;
-        code === 92) {
+        const code2 = value.charCodeAt(i++);
+        if (code2 < 33 || // exclude CTLs (0-31)
+        code2 > 126 || // non-ascii and DEL (127)
+        code2 === 34 || // "
+        code2 === 44 || // ,
+        code2 === 59 || // ;
+        code2 === 92) {
           throw new Error("Invalid cookie value");
         }
       }
     }
-    function validateCookiePath(path7) {
-      for (let i = 0; i < path7.length; ++i) {
-        const code = path7.charCodeAt(i);
-        if (code < 32 || // exclude CTLs (0-31)
-        code > 126 || // exclude DEL and non-ascii
-        code === 59) {
+    function validateCookiePath(path8) {
+      for (let i = 0; i < path8.length; ++i) {
+        const code2 = path8.charCodeAt(i);
+        if (code2 < 32 || // exclude CTLs (0-31)
+        code2 > 126 || // exclude DEL and non-ascii
+        code2 === 59) {
           throw new Error("Invalid cookie path");
         }
       }
     }
-    function isLetterOrDigit(code) {
-      return code >= 48 && code <= 57 || // 0-9
-      code >= 65 && code <= 90 || // A-Z
-      code >= 97 && code <= 122;
+    function isLetterOrDigit(code2) {
+      return code2 >= 48 && code2 <= 57 || // 0-9
+      code2 >= 65 && code2 <= 90 || // A-Z
+      code2 >= 97 && code2 <= 122;
     }
     function validateCookieDomain(domain) {
       if (domain === " ") {
@@ -16181,8 +16181,8 @@ var require_util6 = __commonJS({
       }
       let labelLength = 0;
       for (let i = 0; i < domain.length; ++i) {
-        const code = domain.charCodeAt(i);
-        if (code === 46) {
+        const code2 = domain.charCodeAt(i);
+        if (code2 === 46) {
           if (labelLength === 0) {
             throw new Error("Invalid cookie domain");
           }
@@ -16192,10 +16192,10 @@ var require_util6 = __commonJS({
           labelLength = 0;
           continue;
         }
-        if (labelLength === 0 && !isLetterOrDigit(code)) {
+        if (labelLength === 0 && !isLetterOrDigit(code2)) {
           throw new Error("Invalid cookie domain");
         }
-        if (!isLetterOrDigit(code) && code !== 45) {
+        if (!isLetterOrDigit(code2) && code2 !== 45) {
           throw new Error("Invalid cookie domain");
         }
         if (++labelLength > 63) {
@@ -16969,37 +16969,37 @@ var require_util7 = __commonJS({
         return false;
       }
       for (let i = 0; i < protocol.length; ++i) {
-        const code = protocol.charCodeAt(i);
-        if (code < 33 || // CTL, contains SP (0x20) and HT (0x09)
-        code > 126 || code === 34 || // "
-        code === 40 || // (
-        code === 41 || // )
-        code === 44 || // ,
-        code === 47 || // /
-        code === 58 || // :
-        code === 59 || // ;
-        code === 60 || // <
-        code === 61 || // =
-        code === 62 || // >
-        code === 63 || // ?
-        code === 64 || // @
-        code === 91 || // [
-        code === 92 || // \
-        code === 93 || // ]
-        code === 123 || // {
-        code === 125) {
+        const code2 = protocol.charCodeAt(i);
+        if (code2 < 33 || // CTL, contains SP (0x20) and HT (0x09)
+        code2 > 126 || code2 === 34 || // "
+        code2 === 40 || // (
+        code2 === 41 || // )
+        code2 === 44 || // ,
+        code2 === 47 || // /
+        code2 === 58 || // :
+        code2 === 59 || // ;
+        code2 === 60 || // <
+        code2 === 61 || // =
+        code2 === 62 || // >
+        code2 === 63 || // ?
+        code2 === 64 || // @
+        code2 === 91 || // [
+        code2 === 92 || // \
+        code2 === 93 || // ]
+        code2 === 123 || // {
+        code2 === 125) {
           return false;
         }
       }
       return true;
     }
-    function isValidStatusCode(code) {
-      if (code >= 1e3 && code < 1015) {
-        return code !== 1004 && // reserved
-        code !== 1005 && // "MUST NOT be set as a status code"
-        code !== 1006;
+    function isValidStatusCode(code2) {
+      if (code2 >= 1e3 && code2 < 1015) {
+        return code2 !== 1004 && // reserved
+        code2 !== 1005 && // "MUST NOT be set as a status code"
+        code2 !== 1006;
       }
-      return code >= 3e3 && code <= 4999;
+      return code2 >= 3e3 && code2 <= 4999;
     }
     function failWebsocketConnection(ws, reason) {
       const { [kController]: controller, [kResponse]: response } = ws;
@@ -17268,26 +17268,26 @@ var require_connection = __commonJS({
       });
       return controller;
     }
-    function closeWebSocketConnection(ws, code, reason, reasonByteLength) {
+    function closeWebSocketConnection(ws, code2, reason, reasonByteLength) {
       if (isClosing(ws) || isClosed(ws)) {
       } else if (!isEstablished(ws)) {
         failWebsocketConnection(ws, "Connection was closed before it was established.");
         ws[kReadyState] = states.CLOSING;
       } else if (ws[kSentClose] === sentCloseFrameState.NOT_SENT) {
         ws[kSentClose] = sentCloseFrameState.PROCESSING;
-        const frame = new WebsocketFrameSend();
-        if (code !== void 0 && reason === void 0) {
-          frame.frameData = Buffer.allocUnsafe(2);
-          frame.frameData.writeUInt16BE(code, 0);
-        } else if (code !== void 0 && reason !== void 0) {
-          frame.frameData = Buffer.allocUnsafe(2 + reasonByteLength);
-          frame.frameData.writeUInt16BE(code, 0);
-          frame.frameData.write(reason, 2, "utf-8");
+        const frame2 = new WebsocketFrameSend();
+        if (code2 !== void 0 && reason === void 0) {
+          frame2.frameData = Buffer.allocUnsafe(2);
+          frame2.frameData.writeUInt16BE(code2, 0);
+        } else if (code2 !== void 0 && reason !== void 0) {
+          frame2.frameData = Buffer.allocUnsafe(2 + reasonByteLength);
+          frame2.frameData.writeUInt16BE(code2, 0);
+          frame2.frameData.write(reason, 2, "utf-8");
         } else {
-          frame.frameData = emptyBuffer;
+          frame2.frameData = emptyBuffer;
         }
         const socket = ws[kResponse].socket;
-        socket.write(frame.createFrame(opcodes.CLOSE));
+        socket.write(frame2.createFrame(opcodes.CLOSE));
         ws[kSentClose] = sentCloseFrameState.SENT;
         ws[kReadyState] = states.CLOSING;
       } else {
@@ -17306,25 +17306,25 @@ var require_connection = __commonJS({
       response.socket.off("close", onSocketClose);
       response.socket.off("error", onSocketError);
       const wasClean = ws[kSentClose] === sentCloseFrameState.SENT && ws[kReceivedClose];
-      let code = 1005;
+      let code2 = 1005;
       let reason = "";
       const result = ws[kByteParser].closingInfo;
       if (result && !result.error) {
-        code = result.code ?? 1005;
+        code2 = result.code ?? 1005;
         reason = result.reason;
       } else if (!ws[kReceivedClose]) {
-        code = 1006;
+        code2 = 1006;
       }
       ws[kReadyState] = states.CLOSED;
       fireEvent("close", ws, (type, init) => new CloseEvent(type, init), {
         wasClean,
-        code,
+        code: code2,
         reason
       });
       if (channels.close.hasSubscribers) {
         channels.close.publish({
           websocket: ws,
-          code,
+          code: code2,
           reason
         });
       }
@@ -17449,8 +17449,8 @@ var require_receiver = __commonJS({
     var { closeWebSocketConnection } = require_connection();
     var { PerMessageDeflate } = require_permessage_deflate();
     var { MessageSizeExceededError } = require_errors();
-    function failWebsocketConnectionWithCode(ws, code, reason) {
-      closeWebSocketConnection(ws, code, reason, Buffer.byteLength(reason));
+    function failWebsocketConnectionWithCode(ws, code2, reason) {
+      closeWebSocketConnection(ws, code2, reason, Buffer.byteLength(reason));
       failWebsocketConnection(ws, reason);
     }
     var ByteParser = class extends Writable {
@@ -17637,8 +17637,8 @@ var require_receiver = __commonJS({
                   this.#info.fin,
                   (error2, data) => {
                     if (error2) {
-                      const code = error2 instanceof MessageSizeExceededError ? 1009 : 1007;
-                      failWebsocketConnectionWithCode(this.ws, code, error2.message);
+                      const code2 = error2 instanceof MessageSizeExceededError ? 1009 : 1007;
+                      failWebsocketConnectionWithCode(this.ws, code2, error2.message);
                       return;
                     }
                     if (!this.writeFragments(data)) {
@@ -17724,11 +17724,11 @@ var require_receiver = __commonJS({
       }
       parseCloseBody(data) {
         assert(data.length !== 1);
-        let code;
+        let code2;
         if (data.length >= 2) {
-          code = data.readUInt16BE(0);
+          code2 = data.readUInt16BE(0);
         }
-        if (code !== void 0 && !isValidStatusCode(code)) {
+        if (code2 !== void 0 && !isValidStatusCode(code2)) {
           return { code: 1002, reason: "Invalid status code", error: true };
         }
         let reason = data.subarray(2);
@@ -17740,7 +17740,7 @@ var require_receiver = __commonJS({
         } catch {
           return { code: 1007, reason: "Invalid UTF-8", error: true };
         }
-        return { code, reason, error: false };
+        return { code: code2, reason, error: false };
       }
       /**
        * Parses control frames.
@@ -17755,8 +17755,8 @@ var require_receiver = __commonJS({
           }
           this.#info.closeInfo = this.parseCloseBody(body);
           if (this.#info.closeInfo.error) {
-            const { code, reason } = this.#info.closeInfo;
-            closeWebSocketConnection(this.ws, code, reason, reason.length);
+            const { code: code2, reason } = this.#info.closeInfo;
+            closeWebSocketConnection(this.ws, code2, reason, reason.length);
             failWebsocketConnection(this.ws, reason);
             return false;
           }
@@ -17781,8 +17781,8 @@ var require_receiver = __commonJS({
           return false;
         } else if (opcode === opcodes.PING) {
           if (!this.ws[kReceivedClose]) {
-            const frame = new WebsocketFrameSend(body);
-            this.ws[kResponse].socket.write(frame.createFrame(opcodes.PONG));
+            const frame2 = new WebsocketFrameSend(body);
+            this.ws[kResponse].socket.write(frame2.createFrame(opcodes.PONG));
             if (channels.ping.hasSubscribers) {
               channels.ping.publish({
                 payload: body
@@ -17832,14 +17832,14 @@ var require_sender = __commonJS({
       }
       add(item, cb, hint) {
         if (hint !== sendHints.blob) {
-          const frame = createFrame(item, hint);
+          const frame2 = createFrame(item, hint);
           if (!this.#running) {
-            this.#socket.write(frame, cb);
+            this.#socket.write(frame2, cb);
           } else {
             const node2 = {
               promise: null,
               callback: cb,
-              frame
+              frame: frame2
             };
             this.#queue.push(node2);
           }
@@ -17994,17 +17994,17 @@ var require_websocket = __commonJS({
        * @param {number|undefined} code
        * @param {string|undefined} reason
        */
-      close(code = void 0, reason = void 0) {
+      close(code2 = void 0, reason = void 0) {
         webidl.brandCheck(this, _WebSocket);
         const prefix2 = "WebSocket.close";
-        if (code !== void 0) {
-          code = webidl.converters["unsigned short"](code, prefix2, "code", { clamp: true });
+        if (code2 !== void 0) {
+          code2 = webidl.converters["unsigned short"](code2, prefix2, "code", { clamp: true });
         }
         if (reason !== void 0) {
           reason = webidl.converters.USVString(reason, prefix2, "reason");
         }
-        if (code !== void 0) {
-          if (code !== 1e3 && (code < 3e3 || code > 4999)) {
+        if (code2 !== void 0) {
+          if (code2 !== 1e3 && (code2 < 3e3 || code2 > 4999)) {
             throw new DOMException("invalid code", "InvalidAccessError");
           }
         }
@@ -18018,7 +18018,7 @@ var require_websocket = __commonJS({
             );
           }
         }
-        closeWebSocketConnection(this, code, reason, reasonByteLength);
+        closeWebSocketConnection(this, code2, reason, reasonByteLength);
       }
       /**
        * @see https://websockets.spec.whatwg.org/#dom-websocket-send
@@ -18264,15 +18264,15 @@ var require_websocket = __commonJS({
     }
     function onParserError(err2) {
       let message;
-      let code;
+      let code2;
       if (err2 instanceof CloseEvent) {
         message = err2.reason;
-        code = err2.code;
+        code2 = err2.code;
       } else {
         message = err2.message;
       }
       fireEvent("error", this, () => new ErrorEvent("error", { error: err2, message }));
-      closeWebSocketConnection(this, code);
+      closeWebSocketConnection(this, code2);
     }
     module.exports = {
       WebSocket
@@ -19079,11 +19079,11 @@ var require_undici = __commonJS({
           if (typeof opts.path !== "string") {
             throw new InvalidArgumentError("invalid opts.path");
           }
-          let path7 = opts.path;
+          let path8 = opts.path;
           if (!opts.path.startsWith("/")) {
-            path7 = `/${path7}`;
+            path8 = `/${path8}`;
           }
-          url = new URL(util.parseOrigin(url).origin + path7);
+          url = new URL(util.parseOrigin(url).origin + path8);
         } else {
           if (!opts) {
             opts = typeof url === "object" ? url : {};
@@ -19987,12 +19987,12 @@ var require_dist = __commonJS({
         index = skipOWS(header2, index + 1, len);
         const keyStart = index;
         while (index < len) {
-          const code = header2.charCodeAt(index);
-          if (code === stopChar)
+          const code2 = header2.charCodeAt(index);
+          if (code2 === stopChar)
             break parameter;
-          if (code === SEMI)
+          if (code2 === SEMI)
             continue parameter;
-          if (code === EQ) {
+          if (code2 === EQ) {
             const keyEnd = trailingOWS(header2, keyStart, index);
             const key = header2.slice(keyStart, keyEnd).toLowerCase();
             index = skipOWS(header2, index + 1, len);
@@ -20000,18 +20000,18 @@ var require_dist = __commonJS({
               index++;
               let value = "";
               while (index < len) {
-                const code2 = header2.charCodeAt(index++);
-                if (code2 === DQUOTE) {
+                const code3 = header2.charCodeAt(index++);
+                if (code3 === DQUOTE) {
                   index = skipValue(header2, index, len, stopChar);
                   if (parameters[key] === void 0)
                     parameters[key] = value;
                   break;
                 }
-                if (code2 === BSLASH && index < len) {
+                if (code3 === BSLASH && index < len) {
                   value += header2[index++];
                   continue;
                 }
-                value += String.fromCharCode(code2);
+                value += String.fromCharCode(code3);
               }
               continue parameter;
             }
@@ -20030,8 +20030,8 @@ var require_dist = __commonJS({
     }
     function skipValue(str, index, len, stopChar) {
       while (index < len) {
-        const code = str.charCodeAt(index);
-        if (code === SEMI || code === stopChar)
+        const code2 = str.charCodeAt(index);
+        if (code2 === SEMI || code2 === stopChar)
           break;
         index++;
       }
@@ -24769,8 +24769,8 @@ var require_kernel_rempio2 = __commonJS({
 var require_main67 = __commonJS({
   "node_modules/@stdlib/math-base-special-round/lib/main.js"(exports, module) {
     "use strict";
-    var round2 = Math.round;
-    module.exports = round2;
+    var round3 = Math.round;
+    module.exports = round3;
   }
 });
 
@@ -24787,7 +24787,7 @@ var require_lib93 = __commonJS({
 var require_rempio2_medium = __commonJS({
   "node_modules/@stdlib/math-base-special-rempio2/lib/rempio2_medium.js"(exports, module) {
     "use strict";
-    var round2 = require_lib93();
+    var round3 = require_lib93();
     var getHighWord = require_lib43();
     var INVPIO2 = 0.6366197723675814;
     var PIO2_1 = 1.5707963267341256;
@@ -24805,7 +24805,7 @@ var require_rempio2_medium = __commonJS({
       var w;
       var i;
       var j;
-      n = round2(x * INVPIO2);
+      n = round3(x * INVPIO2);
       r = x - n * PIO2_1;
       w = n * PIO2_1T;
       j = ix >> 20 | 0;
@@ -29511,7 +29511,7 @@ var require_inverse_students_t = __commonJS({
     var erfcinv = require_lib131();
     var floor = require_lib8();
     var ldexp = require_lib51();
-    var round2 = require_lib93();
+    var round3 = require_lib93();
     var acos = require_lib132();
     var sqrt = require_lib55();
     var abs = require_lib47();
@@ -29601,7 +29601,7 @@ var require_inverse_students_t = __commonJS({
                 result = inverseStudentsTTailSeries(df, u);
               }
             } else {
-              crossover = ldexp(1, round2(df / -0.654));
+              crossover = ldexp(1, round3(df / -0.654));
               if (u > crossover) {
                 result = inverseStudentsTHill(df, u);
               } else {
@@ -29619,7 +29619,7 @@ var require_inverse_students_t = __commonJS({
           result = inverseStudentsTTailSeries(df, u);
         }
       } else {
-        crossover = ldexp(1, round2(df / -0.654));
+        crossover = ldexp(1, round3(df / -0.654));
         if (u > crossover) {
           result = inverseStudentsTHill(df, u);
         } else {
@@ -32249,7 +32249,7 @@ var require_lib140 = __commonJS({
 // src/action/run.ts
 import { createHash as createHash3 } from "node:crypto";
 import { appendFile as appendFile2, mkdir as mkdir2, readFile as readFile2, writeFile as writeFile2 } from "node:fs/promises";
-import path6 from "node:path";
+import path7 from "node:path";
 
 // src/core/inputError.ts
 var InputError = class extends Error {
@@ -32305,47 +32305,9 @@ function formatSignedPercent(x) {
 }
 function formatPValue(p) {
   if (p === null || p === void 0 || !Number.isFinite(p)) return "n/a";
-  return p < 1e-4 ? "< 0.0001" : p.toFixed(4);
-}
-
-// src/losses/lossName.ts
-var LOSS_NAMES = ["squared", "absolute", "ape", "sape", "pinball", "interval"];
-var LOSS_LABELS = {
-  squared: "squared error",
-  absolute: "absolute error",
-  ape: "absolute percentage error (%)",
-  sape: "symmetric absolute percentage error (%)",
-  pinball: "pinball loss (mean over quantile levels)",
-  interval: "interval score of the central interval (Gneiting & Raftery 2007)"
-};
-var LOSS_ALIASES = {
-  mse: "squared",
-  mae: "absolute",
-  mape: "ape"
-};
-function canonicalLoss(name) {
-  return LOSS_ALIASES[name] ?? name;
-}
-
-// src/report/escapeMarkdown.ts
-function escapeMarkdown(text2) {
-  return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
-}
-
-// src/report/inputNotes.ts
-function inputNotes(report) {
-  const notes = [];
-  const order = report.inputs.timestamps.order;
-  if (order !== "") notes.push(`Time order: ${order}.`);
-  const overall = report.comparisons[0];
-  if (overall !== void 0 && report.settings.loss === "squared" && report.settings.pooling === "raw" && overall.meanBaselineLoss >= 0 && overall.meanCandidateLoss >= 0) {
-    notes.push(
-      `RMSE: baseline ${formatNumber(Math.sqrt(overall.meanBaselineLoss))}, candidate ${formatNumber(
-        Math.sqrt(overall.meanCandidateLoss)
-      )} (square roots of the mean squared errors compared above).`
-    );
-  }
-  return notes;
+  if (p < 1e-4) return "< 0.0001";
+  if (p > 0.9999) return "> 0.9999";
+  return p.toFixed(4);
 }
 
 // src/settings/defaultConfidence.ts
@@ -32376,17 +32338,1423 @@ function pieceText(p) {
 }
 function intervalNote(report) {
   const { confidence, alpha } = report.settings;
-  const pct = `${formatNumber(confidence * 100, 3)}%`;
+  const pct2 = `${formatNumber(confidence * 100, 3)}%`;
   if (confidenceOverridesDefault(confidence, alpha)) {
-    return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
+    return `Intervals are ${pct2}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
   }
-  const base = `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const base = `Intervals are ${pct2} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
   const measured = report.comparisons.flatMap((c) => [
     c.relativeChange?.measuredCoverage,
     c.dieboldMariano.interval?.measuredCoverage,
     c.bootstrap.interval?.measuredCoverage
   ]).find((m) => m !== void 0);
   return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
+}
+
+// src/report/cells.ts
+var LOSS_DIGITS = 4;
+var PERCENT_DIGITS = 3;
+function significant(x, digits = LOSS_DIGITS) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  if (x === 0) return "0";
+  const magnitude = Math.abs(x);
+  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
+  return x.toPrecision(digits);
+}
+function percent(x, digits = PERCENT_DIGITS) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  if (x === 0) return "0%";
+  const text2 = significant(x * 100, digits);
+  return `${x > 0 ? "+" : ""}${text2}%`;
+}
+var pValue = formatPValue;
+function relativeInterval(c) {
+  const r = c.relativeChange ?? null;
+  if (r !== null) {
+    return {
+      lower: r.lower,
+      upper: r.upper,
+      level: r.level,
+      method: r.method,
+      ...r.pieces === void 0 ? {} : { pieces: r.pieces },
+      ...r.measuredCoverage === void 0 ? {} : { measuredCoverage: r.measuredCoverage }
+    };
+  }
+  const b = c.bootstrap.relativeInterval;
+  return b === null ? null : { lower: b.lower, upper: b.upper, level: b.level, method: b.method };
+}
+function intervalText(i) {
+  const piece2 = (p) => `[${p.lower === null ? "\u2212\u221E" : percent(p.lower)}, ${p.upper === null ? "+\u221E" : percent(p.upper)}]`;
+  if (i.pieces !== void 0) return i.pieces.length === 0 ? "\u2205" : i.pieces.map(piece2).join(" \u222A ");
+  return piece2(i);
+}
+function changeCell(c) {
+  const point = percent(c.relativeDifference);
+  const i = relativeInterval(c);
+  return i === null ? point : `${point} ${intervalText(i)}${measuredCoverageText(i.measuredCoverage)}`;
+}
+function evidenceOf(c, _report) {
+  if (c.direction !== void 0) {
+    return c.direction === "no evidence" ? "no clear difference" : c.direction;
+  }
+  const i = relativeInterval(c);
+  if (i !== null) return sideOf(i.pieces ?? [i]);
+  const intervals = [c.dieboldMariano.interval, c.bootstrap.interval].filter((x) => x !== null);
+  if (intervals.length === 0) return "n/a";
+  return sideOf(intervals);
+}
+function sideOf(intervals) {
+  if (intervals.every((i) => i.lower !== null && i.lower > 0)) return "worse";
+  if (intervals.every((i) => i.upper !== null && i.upper < 0)) return "better";
+  return "no clear difference";
+}
+
+// src/report/differenceChart.ts
+function differenceSeries(report) {
+  const all = report.stability?.periods ?? [];
+  const periods = all.filter(
+    (p2) => p2.relativeDifference !== null && Number.isFinite(p2.relativeDifference)
+  );
+  if (periods.length < 2) return null;
+  const p = report.policy;
+  const margin = p.marginKind === "relative" && p.margin > 0 ? (p.policy === "superiority" ? -p.margin : p.margin) * 100 : null;
+  return {
+    labels: periods.map((x) => periodLabel(x.start)),
+    values: periods.map((x) => x.relativeDifference * 100),
+    periods,
+    margin,
+    first: all[0].start,
+    last: all.at(-1).end
+  };
+}
+function periodLabel(timestamp) {
+  const t = timestamp.replace(/T00:00(:00(\.0+)?)?Z?$/, "");
+  return t.replace(/[^A-Za-z0-9 .:/+-]/g, "").slice(0, 16);
+}
+var BLOCKS = "\u2581\u2582\u2583\u2584\u2585\u2586\u2587\u2588";
+var PALETTE = "black, darkgray, sienna";
+function sparkline(values) {
+  if (values.length === 0) return "";
+  const lo2 = Math.min(0, ...values);
+  const hi2 = Math.max(0, ...values);
+  const span = hi2 - lo2;
+  return values.map((v) => BLOCKS[span === 0 ? 0 : Math.min(7, Math.floor((v - lo2) / span * 8))]).join("");
+}
+function sparklineText(series) {
+  const lo2 = Math.min(...series.values) / 100;
+  const hi2 = Math.max(...series.values) / 100;
+  return `change per period, ${periodLabel(series.first)} \u2192 ${periodLabel(series.last)}: ${sparkline(series.values)} (from ${percent(lo2)} to ${percent(hi2)})`;
+}
+function mermaidChart(series) {
+  const n = series.values.length;
+  const values = series.values.map(round);
+  const top = Math.max(0, series.margin ?? 0, ...values);
+  const bottom = Math.min(0, series.margin ?? 0, ...values);
+  const pad = Math.max(0.5, (top - bottom) * 0.08);
+  const lines = [
+    "```mermaid",
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${PALETTE}"}}}}%%`,
+    "xychart-beta",
+    '    title "Candidate vs baseline: change in mean loss per period (%)"',
+    `    x-axis "period, ${periodLabel(series.first)} to ${periodLabel(series.last)}" 1 --> ${n}`,
+    `    y-axis "change in mean loss (%)" ${round(bottom - pad)} --> ${round(top + pad)}`,
+    `    line [${values.join(", ")}]`,
+    `    line [${Array(n).fill(0).join(", ")}]`
+  ];
+  if (series.margin !== null)
+    lines.push(`    line [${Array(n).fill(round(series.margin)).join(", ")}]`);
+  lines.push("```");
+  return lines;
+}
+function chartCaption(series) {
+  return `The first line is the candidate's mean loss against the baseline's in each of ${series.values.length} periods (above 0: the candidate is worse then); the flat line at 0 is no difference${series.margin === null ? "" : `; the flat line at ${percent(series.margin / 100)} is the margin`}.`;
+}
+function round(x) {
+  return Number(x.toFixed(2));
+}
+
+// src/report/reportTable.ts
+function table(header2, align2, rows) {
+  return { header: header2, align: align2, rows };
+}
+
+// src/report/missingRowsSection.ts
+function missingRowsSection(report) {
+  const count = report.inputs.rowsDropped.baseline;
+  if (count === 0) return null;
+  const m = report.inputs.missingRows ?? null;
+  const title = `Rows the candidate lacks (${count})`;
+  const examples = report.inputs.examples.baselineOnly;
+  if (m === null) {
+    return {
+      title,
+      lines: [
+        `The candidate lacks ${count} rows that the baseline scored${examples.length > 0 ? `, e.g. ${examples.join("; ")}` : ""}.`
+      ],
+      tables: []
+    };
+  }
+  const harder = m.meanBaselineLoss !== null && m.meanBaselineLossCommon !== null && m.meanBaselineLossCommon > 0 ? ` (${percent(m.meanBaselineLoss / m.meanBaselineLossCommon - 1)} against its ${significant(m.meanBaselineLossCommon)} on the rows both scored)` : "";
+  const lines = [
+    `The candidate lacks ${m.rows} rows that the baseline scored, from ${m.first ?? "n/a"} to ${m.last ?? "n/a"}. The baseline's mean loss on them is ${significant(m.meanBaselineLoss)}${harder}: a model must not pass by skipping hard cases.`
+  ];
+  if (m.rowsWithoutLoss > 0) {
+    lines.push(
+      `The baseline's loss is unknown on ${m.rowsWithoutLoss} of them (no actual value, or a loss that needs quantiles).`
+    );
+  }
+  if (examples.length > 0) lines.push(`Examples: ${examples.join("; ")}.`);
+  const rows = (groups) => groups.map((g) => [
+    g.key,
+    String(g.rows),
+    `${g.first ?? "n/a"} to ${g.last ?? "n/a"}`,
+    significant(g.meanBaselineLoss)
+  ]);
+  const header2 = (what) => [what, "rows lacking", "time span", "baseline loss on them"];
+  const align2 = ["left", "right", "left", "right"];
+  const tables = [table(header2("series"), align2, rows(m.bySeries))];
+  if (m.byHorizon.length > 1 || report.inputs.horizons.length > 1)
+    tables.push(table(header2("horizon"), align2, rows(m.byHorizon)));
+  return { title, lines, tables };
+}
+
+// src/losses/lossName.ts
+var LOSS_NAMES = ["squared", "absolute", "ape", "sape", "pinball", "interval"];
+var LOSS_LABELS = {
+  squared: "squared error",
+  absolute: "absolute error",
+  ape: "absolute percentage error (%)",
+  sape: "symmetric absolute percentage error (%)",
+  pinball: "pinball loss (mean over quantile levels)",
+  interval: "interval score of the central interval (Gneiting & Raftery 2007)"
+};
+var LOSS_ALIASES = {
+  mse: "squared",
+  mae: "absolute",
+  mape: "ape"
+};
+function canonicalLoss(name) {
+  return LOSS_ALIASES[name] ?? name;
+}
+
+// src/multiplicity/testFamily.ts
+function testFamily(pValues, what) {
+  const positions = [];
+  const values = [];
+  pValues.forEach((p, i) => {
+    if (p === null) return;
+    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
+      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
+    }
+    positions.push(i);
+    values.push(p);
+  });
+  return { positions, values };
+}
+function ascendingOrder(values) {
+  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
+}
+
+// src/multiplicity/holmAdjust.ts
+function holmAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "holmAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  let running = 0;
+  ascendingOrder(values).forEach((k, i) => {
+    running = Math.max(running, Math.min(1, (m - i) * values[k]));
+    adjusted[positions[k]] = running;
+  });
+  return adjusted;
+}
+
+// src/alignment/civilDays.ts
+function daysFromCivil(year, month, day) {
+  const y = month <= 2 ? year - 1 : year;
+  const era = Math.floor(y / 400);
+  const yoe = y - era * 400;
+  const mp = (month + 9) % 12;
+  const doy = Math.floor((153 * mp + 2) / 5) + day - 1;
+  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
+  return era * 146097 + doe - 719468;
+}
+
+// src/alignment/timeFormat.ts
+var TIME_FORMAT_NAMES = [
+  "auto",
+  "number",
+  "iso-8601",
+  "day-month-year",
+  "month-day-year",
+  "text-order"
+];
+var DAY_MONTH = /^(\d{1,2})([/.-])(\d{1,2})\2(\d{2,4})(?:[ T](\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?)?$/;
+function looksLikeDayMonthDate(label) {
+  return DAY_MONTH.test(label);
+}
+function readDayMonthDate(label, dayFirst) {
+  const m = DAY_MONTH.exec(label);
+  const pattern = dayFirst ? "D/M/YYYY [H:MM[:SS]]" : "M/D/YYYY [H:MM[:SS]]";
+  if (m === null) return `not a date of the form ${pattern}`;
+  if (m[4].length !== 4) return `the year ${m[4]} is not written with four digits`;
+  const day = Number(dayFirst ? m[1] : m[3]);
+  const month = Number(dayFirst ? m[3] : m[1]);
+  const year = Number(m[4]);
+  const civil = {
+    year,
+    month,
+    day,
+    hour: m[5] === void 0 ? 0 : Number(m[5]),
+    minute: m[6] === void 0 ? 0 : Number(m[6]),
+    second: m[7] === void 0 ? 0 : Number(m[7]),
+    nanos: m[8] === void 0 ? 0 : Number(m[8].padEnd(9, "0")),
+    offsetSeconds: 0
+  };
+  return checkCivil(civil, pattern) ?? civil;
+}
+function checkCivil(t, pattern) {
+  if (t.month < 1 || t.month > 12) return `month ${t.month} is not 1\u201312 (read as ${pattern})`;
+  if (t.day < 1 || t.day > daysInMonth(t.year, t.month)) {
+    return `day ${t.day} does not exist in month ${t.month} of ${t.year} (read as ${pattern})`;
+  }
+  if (t.hour > 23) return `hour ${t.hour} is not 0\u201323`;
+  if (t.minute > 59) return `minute ${t.minute} is not 0\u201359`;
+  if (t.second > 59) return `second ${t.second} is not 0\u201359`;
+  return null;
+}
+function daysInMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
+function instantOf(t) {
+  const seconds = daysFromCivil(t.year, t.month, t.day) * 86400 + t.hour * 3600 + t.minute * 60 + t.second - t.offsetSeconds;
+  const key = `${String(seconds + 1e12).padStart(13, "0")}.${String(t.nanos).padStart(9, "0")}`;
+  return { key, epochMillis: seconds * 1e3 + t.nanos / 1e6 };
+}
+
+// src/reading/inputFormat.ts
+var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
+var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
+function delimiterFor(name, tsv) {
+  if (name === "auto") return tsv ? "	" : ",";
+  return name === "tab" ? "	" : name;
+}
+function delimiterLabel(delimiter3) {
+  return delimiter3 === "	" ? "tab" : `"${delimiter3}"`;
+}
+
+// src/settings/options.ts
+var ENGINE_OPTIONS = [
+  {
+    name: "baseline",
+    valueName: "FILE",
+    defaultValue: null,
+    required: true,
+    help: "predictions of the model on the main branch (CSV/TSV, optionally .gz)"
+  },
+  {
+    name: "candidate",
+    valueName: "FILE",
+    defaultValue: null,
+    required: true,
+    help: "predictions of the pull request's model"
+  },
+  {
+    name: "losses",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "instead of baseline and candidate: a pre-aggregated file with timestamp, baseline_loss, candidate_loss (optional differential, rows, horizon) per time point"
+  },
+  {
+    name: "actuals",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "observed values keyed by series and timestamp, when the prediction files lack an actual column"
+  },
+  {
+    name: "columns",
+    valueName: "ROLE=HEADER,\u2026",
+    defaultValue: "",
+    help: "rename columns, e.g. actual=observed,prediction=point,series=zone"
+  },
+  {
+    name: "baseline-columns",
+    valueName: "ROLE=HEADER,\u2026",
+    defaultValue: "",
+    help: "renames for the baseline file only, over --columns (two pipelines that name columns differently)"
+  },
+  {
+    name: "candidate-columns",
+    valueName: "ROLE=HEADER,\u2026",
+    defaultValue: "",
+    help: "renames for the candidate file only, over --columns"
+  },
+  {
+    name: "format",
+    defaultValue: "auto",
+    choices: INPUT_FORMATS,
+    help: "input format; auto: Parquet for .parquet, TSV for .tsv/.tsv.gz, else CSV"
+  },
+  {
+    name: "delimiter",
+    defaultValue: "auto",
+    choices: DELIMITER_NAMES,
+    help: "field separator of CSV files: auto (tab for TSV, else comma), or comma , semicolon ; pipe | tab"
+  },
+  {
+    name: "decimal",
+    defaultValue: ".",
+    choices: [".", ","],
+    help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter'
+  },
+  {
+    name: "time-format",
+    defaultValue: "auto",
+    choices: TIME_FORMAT_NAMES,
+    help: "how timestamps read: auto (all numbers or all ISO 8601, else refused), number, iso-8601, day-month-year (31/12/2026 [23:59[:59]]), month-day-year (12/31/2026 [23:59[:59]]), text-order (compare as text: 10 before 9)"
+  },
+  {
+    name: "line-limit",
+    valueName: "BYTES",
+    defaultValue: "1048576",
+    help: "longest line (and field) accepted in a CSV file, in characters; longer is refused"
+  },
+  {
+    name: "loss",
+    defaultValue: "squared",
+    choices: [...LOSS_NAMES, ...Object.keys(LOSS_ALIASES)],
+    help: "loss per row (mse = squared, mae = absolute, mape = ape): squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)"
+  },
+  {
+    name: "zero-actuals",
+    defaultValue: "error",
+    choices: ["error", "skip"],
+    help: "with ape: refuse rows whose actual is 0, or skip and count them"
+  },
+  {
+    name: "alpha",
+    valueName: "NUMBER",
+    defaultValue: "0.05",
+    help: "significance level of each one-sided test"
+  },
+  {
+    name: "margin",
+    valueName: "NUMBER|PERCENT%",
+    defaultValue: "0",
+    help: "allowed margin: with --margin-kind relative, 0.02 or 2% means the candidate may be up to 2% worse (a relative margin above 1 must be written as a percentage)"
+  },
+  {
+    name: "margin-kind",
+    defaultValue: "relative",
+    choices: ["relative", "absolute"],
+    help: "relative (fraction of the baseline loss) or absolute (loss units)"
+  },
+  {
+    name: "policy",
+    defaultValue: "no-regression",
+    choices: ["no-regression", "non-inferiority", "superiority"],
+    help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin"
+  },
+  {
+    name: "agreement",
+    defaultValue: "both",
+    choices: ["both", "either", "dm", "bootstrap"],
+    help: "which tests must reject for the decision; with both, a split verdict is a warning"
+  },
+  {
+    name: "variance",
+    defaultValue: "ewc-ar1",
+    choices: ["ewc-ar1", "ewc", "bartlett", "uniform"],
+    help: "long-run variance for Diebold\u2013Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4\xB7n^(2/3) terms), bartlett (Newey\u2013West), uniform"
+  },
+  {
+    name: "lag",
+    valueName: "auto|h-1|N",
+    defaultValue: "auto",
+    help: "HAC lag for bartlett/uniform: auto (Newey\u2013West 1994, at least h\u22121), h-1, or a number"
+  },
+  {
+    name: "block-length",
+    valueName: "auto|N",
+    defaultValue: "auto",
+    help: "expected block length of the stationary bootstrap: auto (Politis\u2013White) or a number \u2265 1"
+  },
+  { name: "resamples", valueName: "N", defaultValue: "9999", help: "bootstrap resamples" },
+  {
+    name: "seed",
+    valueName: "N",
+    defaultValue: "1729",
+    help: "seed of the bootstrap random numbers (same seed, same numbers on every machine)"
+  },
+  {
+    name: "confidence",
+    valueName: "NUMBER",
+    defaultValue: "",
+    help: "level of the intervals in the report; default 1 \u2212 2\xB7alpha (0.9 for alpha 0.05), so each end is the one-sided bound of the tests and the interval shows the decision at any margin; another level may disagree with the tests"
+  },
+  {
+    name: "min-points",
+    valueName: "N",
+    defaultValue: "30",
+    help: "fewest time points for a firm verdict (fewer: too little data)"
+  },
+  {
+    name: "short-data",
+    defaultValue: "warn",
+    choices: ["warn", "fail"],
+    help: "verdict when there are fewer time points than --min-points"
+  },
+  {
+    name: "allow-missing",
+    defaultValue: "false",
+    flag: true,
+    help: "let the gate pass although the candidate lacks rows the baseline has"
+  },
+  {
+    name: "interval",
+    valueName: "LOWER,UPPER",
+    defaultValue: "",
+    help: "with --loss interval: the two quantile levels of the central interval, e.g. 0.1,0.9 (an 80% interval)"
+  },
+  {
+    name: "pooling",
+    defaultValue: "raw",
+    choices: ["raw", "scaled"],
+    help: "pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)"
+  },
+  {
+    name: "scale",
+    defaultValue: "baseline",
+    choices: ["baseline", "seasonal-naive"],
+    help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)"
+  },
+  {
+    name: "history",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "in-sample history (series, timestamp, actual) for --scale seasonal-naive"
+  },
+  {
+    name: "season",
+    valueName: "N",
+    defaultValue: "1",
+    help: "period m of the seasonal naive forecast for --scale seasonal-naive (1: naive)"
+  },
+  {
+    name: "weights",
+    defaultValue: "false",
+    flag: true,
+    help: "weight rows by the weight column when averaging losses per time point"
+  },
+  {
+    name: "adjust",
+    defaultValue: "holm",
+    choices: ["holm", "bh"],
+    help: "multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)"
+  },
+  {
+    name: "top",
+    valueName: "N",
+    defaultValue: "10",
+    help: "how many series with the largest significant regressions to list"
+  },
+  {
+    name: "recent",
+    valueName: "N|P%",
+    defaultValue: "",
+    help: "also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)"
+  },
+  {
+    name: "fluctuation-window",
+    valueName: "MU",
+    defaultValue: "0.2",
+    help: "window of the fluctuation test (Giacomini\u2013Rossi) as a fraction of the time points, 0.1 to 0.9"
+  },
+  {
+    name: "fluctuation-sides",
+    defaultValue: "one",
+    choices: ["one", "two"],
+    help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
+  },
+  {
+    name: "stability-gate",
+    defaultValue: "warn",
+    choices: ["off", "warn", "fail"],
+    help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
+  },
+  {
+    name: "frequency",
+    valueName: "auto|STEP",
+    defaultValue: "auto",
+    help: "step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, bd for business days, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps"
+  },
+  {
+    name: "folds",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "fold layout (fold or path, role train|test, start, end; one row per segment) to check purging, embargo and that every row lies in its test window"
+  },
+  {
+    name: "embargo",
+    valueName: "N",
+    defaultValue: "0",
+    help: "with --folds: steps after each test window that training must also avoid"
+  },
+  {
+    name: "backtest-checks",
+    defaultValue: "enforce",
+    choices: ["enforce", "warn", "report"],
+    help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
+  },
+  {
+    name: "name",
+    valueName: "TEXT",
+    defaultValue: "",
+    help: "a name for this comparison (report title; keeps two gates apart on one pull request)"
+  },
+  {
+    name: "json",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "write the JSON report to this file (- for standard output)"
+  },
+  {
+    name: "markdown",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "write the Markdown report to this file (- for standard output)"
+  },
+  {
+    name: "html",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "write the report as one self-contained HTML file (charts as inline SVG; opens offline)"
+  }
+];
+
+// src/settings/settingsAsOptions.ts
+var FILE_OPTIONS = /* @__PURE__ */ new Set([
+  "baseline",
+  "candidate",
+  "losses",
+  "actuals",
+  "history",
+  "json",
+  "markdown",
+  "html"
+]);
+function settingsAsOptions(settings, paths = (f) => f) {
+  const record2 = settings;
+  const out = [];
+  for (const spec of ENGINE_OPTIONS) {
+    const key = spec.name.replace(/-([a-z])/g, (_, ch) => ch.toUpperCase());
+    if (!(key in record2)) continue;
+    const file = FILE_OPTIONS.has(spec.name);
+    const raw = optionText(record2[key]);
+    const value = file && raw !== "" ? paths(raw) : raw;
+    const defaultText = spec.defaultValue ?? "";
+    const isDefault = spec.name === "confidence" ? !confidenceOverridesDefault(settings.confidence, settings.alpha) : sameValue(raw, defaultText);
+    out.push({ name: spec.name, value, isDefault, flag: spec.flag === true, file });
+  }
+  return out;
+}
+function asCommandLine(options) {
+  return options.map((o) => {
+    if (o.flag) return o.value === "true" ? `--${o.name}` : `--${o.name}=false`;
+    return `--${o.name} ${shellWord(o.value)}`;
+  }).join(" ");
+}
+function optionText(value) {
+  if (value === null || value === void 0) return "";
+  if (typeof value === "string") return value;
+  if (typeof value === "number" || typeof value === "boolean") return String(value);
+  if (Array.isArray(value)) return value.join(",");
+  const v = value;
+  if (typeof v.kind === "string") {
+    if (v.kind === "auto") return "auto";
+    if (v.kind === "horizon") return "h-1";
+    if (typeof v.lag === "number") return String(v.lag);
+    if (typeof v.length === "number") return String(v.length);
+  }
+  return Object.entries(v).filter(([, header2]) => typeof header2 === "string").map(([role, header2]) => `${role}=${header2}`).join(",");
+}
+function sameValue(a, b) {
+  if (a === b) return true;
+  const x = Number(a);
+  const y = Number(b);
+  return a !== "" && b !== "" && Number.isFinite(x) && Number.isFinite(y) && x === y;
+}
+function shellWord(text2) {
+  if (text2 === "") return "''";
+  if (/^[A-Za-z0-9_./:=,+@%-]+$/.test(text2)) return text2;
+  return `'${text2.replace(/'/g, `'\\''`)}'`;
+}
+
+// src/report/decidingReason.ts
+var RANK = { pass: 0, warn: 1, fail: 2 };
+function decidingReasons(report) {
+  const overall = report.comparisons[0];
+  const found = [];
+  if (overall !== void 0) found.push(comparisonReason(report));
+  const integrity = report.integrity;
+  for (const check of integrity.checks) {
+    if (check.status === "ok") continue;
+    found.push({
+      kind: check.status === "fail" ? "backtest-check-failed" : "backtest-check-warned",
+      // With --backtest-checks report the findings are shown only.
+      verdict: integrity.affectsVerdict ? check.status : "pass",
+      text: `the backtest check ${check.id} ${check.status === "fail" ? "failed" : "warned"}: ${lowerFirst(
+        check.summary
+      ).replace(/\.$/, "")}`
+    });
+  }
+  const missing = report.inputs.rowsDropped.baseline;
+  if (missing > 0) {
+    const m = report.inputs.missingRows ?? null;
+    const hard = m === null || m.meanBaselineLoss === null || m.meanBaselineLossCommon === null ? "" : `; the baseline's mean loss on them is ${significant(m.meanBaselineLoss)}, against ${significant(m.meanBaselineLossCommon)} on the rows both scored`;
+    found.push({
+      kind: "missing-rows",
+      verdict: report.settings.allowMissing ? "pass" : "fail",
+      text: `the candidate lacks ${missing} ${missing === 1 ? "row" : "rows"} that the baseline scored${report.settings.allowMissing ? " (allowed by --allow-missing)" : ""}${hard}`
+    });
+  }
+  const gateEffect = report.settings.stabilityGate === "off" ? "pass" : report.settings.stabilityGate;
+  const recent = report.stability?.recent ?? null;
+  if (recent !== null && recent.verdict === "fail") {
+    found.push({
+      kind: "worse-lately",
+      verdict: gateEffect,
+      text: `the candidate is worse in the most recent ${recent.n} time points (${recent.firstTimestamp ?? "n/a"} to ${recent.lastTimestamp ?? "n/a"}): mean loss ${percent(recent.relativeDifference)}`
+    });
+  }
+  const f = report.stability?.fluctuation ?? null;
+  if (f?.rejected && f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.slice(0, 3).map((p) => `${p.start} to ${p.end}`).join(", ");
+    found.push({
+      kind: "worse-in-a-stretch",
+      verdict: gateEffect,
+      text: `the candidate is significantly worse over ${spans}${f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more stretches` : ""} (fluctuation test, Giacomini & Rossi 2010)`
+    });
+  }
+  const gate2 = report.verdict;
+  const overallVerdict = overall?.verdict ?? "pass";
+  const score = (r, index) => (r.verdict === gate2 ? 100 : 0) + (r.verdict === gate2 && RANK[gate2] > RANK[overallVerdict] && index > 0 ? 10 : 0) - index * 0.01;
+  return found.map((r, i) => ({ r, s: score(r, i) })).sort((a, b) => b.s - a.s).map((x) => x.r);
+}
+function lowerFirst(text2) {
+  return text2.length === 0 ? text2 : text2[0].toLowerCase() + text2.slice(1);
+}
+function comparisonReason(report) {
+  const c = report.comparisons[0];
+  const verdict = c.verdict;
+  const alternative = report.policy.alternative;
+  const { dieboldMariano: dm, bootstrap: bs } = c.rejected;
+  const agreement = report.settings.agreement;
+  if (c.n < report.settings.minPoints) {
+    return {
+      kind: "too-little-data",
+      verdict,
+      text: `too little data: ${c.n} time points, fewer than the ${report.settings.minPoints} needed for a firm verdict`
+    };
+  }
+  if (c.dieboldMariano.state === "identical" && c.bootstrap.state !== "ok") {
+    return {
+      kind: "identical-losses",
+      verdict,
+      text: "the candidate's loss equals the baseline's on every row"
+    };
+  }
+  if (dm === null && bs === null) {
+    return { kind: "no-test", verdict, text: "no test could be computed" };
+  }
+  if (agreement === "both" && dm !== null && bs !== null) {
+    if (dm !== bs) {
+      return {
+        kind: "tests-split",
+        verdict,
+        text: `the tests split: ${dm ? "Diebold\u2013Mariano" : "the bootstrap"} finds evidence that ${alternative}, ${dm ? "the bootstrap" : "Diebold\u2013Mariano"} does not`
+      };
+    }
+    return {
+      kind: "both-tests-agree",
+      verdict,
+      text: dm ? `both tests find evidence that ${alternative}` : `neither test finds evidence that ${alternative}`
+    };
+  }
+  const which2 = agreement === "dm" || bs === null ? "Diebold\u2013Mariano" : agreement === "bootstrap" || dm === null ? "the bootstrap" : "either test";
+  const rejected = agreement === "either" ? dm === true || bs === true : (dm ?? bs) === true;
+  const finds = agreement === "either" && !rejected ? "neither test finds" : `${which2} ${rejected ? "finds" : "does not find"}`;
+  return {
+    kind: "one-test-decides",
+    verdict,
+    text: `${finds} evidence that ${alternative}${agreement === "both" ? " (the other test could not be computed)" : ` (--agreement ${agreement})`}`
+  };
+}
+
+// src/report/displayPath.ts
+import path from "node:path";
+function displayPath(file, workingDirectory) {
+  if (workingDirectory === void 0 || workingDirectory === "" || file === "") return file;
+  if (!path.isAbsolute(file)) return file.split(path.sep).join("/");
+  const relative2 = path.relative(workingDirectory, file);
+  if (relative2 === "" || relative2.startsWith("..") || path.isAbsolute(relative2)) return file;
+  return relative2.split(path.sep).join("/");
+}
+
+// src/report/inputNotes.ts
+function inputNotes(report) {
+  const notes = [];
+  const order = report.inputs.timestamps.order;
+  if (order !== "") notes.push(`Time order: ${order}.`);
+  const overall = report.comparisons[0];
+  if (overall !== void 0 && report.settings.loss === "squared" && report.settings.pooling === "raw" && overall.meanBaselineLoss >= 0 && overall.meanCandidateLoss >= 0) {
+    notes.push(
+      `RMSE: baseline ${formatNumber(Math.sqrt(overall.meanBaselineLoss))}, candidate ${formatNumber(
+        Math.sqrt(overall.meanCandidateLoss)
+      )} (square roots of the mean squared errors compared above).`
+    );
+  }
+  return notes;
+}
+
+// src/report/reportSections.ts
+var VERDICT_WORD = { pass: "PASS", warn: "WARN", fail: "FAIL" };
+var GATE_WORD = {
+  pass: "The gate passes",
+  warn: "The gate passes with a warning",
+  fail: "The gate fails"
+};
+function reportSections(report, options = {}) {
+  const overall = report.comparisons[0];
+  if (overall === void 0) throw new Error("a report needs the overall comparison");
+  const paths = (f) => displayPath(f, options.workingDirectory);
+  const reasons = decidingReasons(report);
+  const first = reasons[0];
+  const lead = `${GATE_WORD[report.verdict]}: ${first?.text ?? "no finding"}.`;
+  const interval = relativeInterval(overall);
+  const onCommon = report.inputs.rowsDropped.baseline > 0 ? " on the rows both models scored" : "";
+  const change = overall.relativeDifference === null ? `Mean loss ${significant(overall.meanCandidateLoss)} against the baseline's ${significant(overall.meanBaselineLoss)}${onCommon}, over ${overall.n} time points.` : `Mean loss ${percent(overall.relativeDifference)}${interval === null ? "" : ` (${pct(interval.level)} interval ${percent(interval.lower)} to ${percent(interval.upper)})`} against the baseline${onCommon}, over ${overall.n} time points${overall.firstTimestamp === null ? "" : ` from ${overall.firstTimestamp} to ${overall.lastTimestamp}`}.`;
+  const options_ = settingsAsOptions(report.settings, paths);
+  return {
+    title: report.name === "" ? "skillgate" : `skillgate \xB7 ${report.name}`,
+    verdict: report.verdict,
+    reasons,
+    lead,
+    change,
+    main: mainTable(report, overall),
+    intervalNote: intervalNote(report),
+    notes: mainNotes(reasons),
+    changedSettings: asCommandLine(options_.filter((o) => !o.isDefault && !o.file)),
+    details: detailsTable(report, overall),
+    detailNotes: detailNotes(report, overall),
+    horizons: horizonTable(report),
+    series: seriesSection(report),
+    paths: pathSection(report),
+    inputs: inputSection(report, paths),
+    checks: checksTable(report),
+    settings: settingsTable(options_)
+  };
+}
+function pct(level) {
+  return `${Number((level * 100).toPrecision(3))}%`;
+}
+function changeHeader(rows) {
+  const level = rows.map(relativeInterval).find((i) => i !== null)?.level;
+  return level === void 0 ? "change" : `change [${pct(level)} interval]`;
+}
+function mainTable(report, overall) {
+  const gate2 = report.verdict;
+  const verdict = gate2 === overall.verdict ? VERDICT_WORD[gate2] : `${VERDICT_WORD[gate2]} (tests alone: ${overall.verdict})`;
+  const scope = report.inputs.rowsDropped.baseline > 0 ? "overall, common rows" : "overall";
+  const rows = [
+    [
+      scope,
+      significant(overall.meanBaselineLoss),
+      significant(overall.meanCandidateLoss),
+      changeCell(overall),
+      evidenceOf(overall, report),
+      verdict
+    ]
+  ];
+  const recent = report.stability?.recent ?? null;
+  if (recent !== null) {
+    rows.push([
+      `recent: ${recent.firstTimestamp ?? "n/a"} to ${recent.lastTimestamp ?? "n/a"}`,
+      significant(recent.meanBaselineLoss),
+      significant(recent.meanCandidateLoss),
+      changeCell(recent),
+      evidenceOf(recent, report),
+      `${recent.verdict} on its own`
+    ]);
+  }
+  return table(
+    ["scope", "baseline loss", "candidate loss", changeHeader([overall]), "evidence", "verdict"],
+    ["left", "right", "right", "right", "left", "left"],
+    rows
+  );
+}
+function mainNotes(reasons) {
+  const notes = [];
+  for (const r of reasons.slice(1)) notes.push(`Also: ${r.text}.`);
+  return notes;
+}
+function detailsTable(report, c) {
+  const dm = c.dieboldMariano;
+  const bs = c.bootstrap;
+  const interval = (i) => i === null ? "n/a" : `[${significant(i.lower)}, ${significant(i.upper)}] (${pct(i.level)})${measuredCoverageText(i.measuredCoverage)}`;
+  const rows = [
+    [
+      "statistic",
+      dm.smallSample === null ? significant(dm.statistic) : `${significant(dm.smallSample.statistic)} (Harvey\u2013Leybourne\u2013Newbold; raw ${significant(dm.statistic)})`,
+      bs.standardError === null ? "n/a" : `standard error of d\u0304 ${significant(bs.standardError)}`
+    ],
+    [
+      "p, one-sided: candidate worse",
+      pValue(dm.smallSample?.pValue ?? dm.pValue),
+      pValue(bs.pValue)
+    ],
+    [
+      "p, in the policy\u2019s direction (decides)",
+      pValue(dm.decisionPValue),
+      pValue(bs.decisionPValue)
+    ],
+    [
+      "p, two-sided",
+      pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
+      pValue(bs.pValueTwoSided)
+    ],
+    ["interval for E[L_candidate \u2212 L_baseline]", interval(dm.interval), interval(bs.interval)],
+    [
+      "rejects H0 at \u03B1",
+      c.rejected.dieboldMariano === null ? "n/a" : c.rejected.dieboldMariano ? "yes" : "no",
+      c.rejected.bootstrap === null ? "n/a" : c.rejected.bootstrap ? "yes" : "no"
+    ],
+    [
+      "variance",
+      `${dm.estimator}${dm.estimator === dm.requestedEstimator ? "" : ` (asked: ${dm.requestedEstimator})`}, long-run variance \u03C9\u0302\xB2 ${significant(dm.longRunVariance)}`,
+      `expected block length ${significant(bs.expectedBlockLength, 3)} (${bs.blockLengthRule})`
+    ],
+    [
+      "lag / resamples",
+      `lag ${dm.lag ?? "n/a (fixed-b)"}, ${dm.degreesOfFreedom === null ? "normal reference" : `${significant(dm.degreesOfFreedom, 3)} df`}`,
+      `${bs.resamples} resamples, seed ${bs.seed}`
+    ]
+  ];
+  const coverage = report.inputs.intervalCoverage;
+  if (coverage !== null) {
+    rows.push([
+      `coverage of the ${pct(coverage.nominal)} interval`,
+      `baseline ${percent(coverage.baseline).replace("+", "")}`,
+      `candidate ${percent(coverage.candidate).replace("+", "")}`
+    ]);
+  }
+  return table(["", "Diebold\u2013Mariano", "stationary bootstrap"], ["left", "left", "left"], rows);
+}
+function detailNotes(report, c) {
+  const p = report.policy;
+  const k = p.baselineFactor;
+  const d = k === 1 ? "d_t = L_candidate \u2212 L_baseline" : `d_t = L_candidate \u2212 ${Number(k.toPrecision(6))} \xB7 L_baseline`;
+  const boundary = p.boundary === 0 ? "0" : significant(p.boundary);
+  return [
+    `Loss: ${LOSS_LABELS[c.loss]}. Tested differential ${d} (mean ${significant(c.meanTestedDifferential)}); H0 says E[d] is on the ${p.onReject === "fail" ? "low" : "high"} side of ${boundary}.`,
+    `H0: ${p.nullHypothesis}. H1: ${p.alternative}. Rejecting H0 makes the gate ${p.onReject}; each test is one-sided at \u03B1 = ${p.alpha}.`,
+    ...report.reasons.filter((r) => !r.startsWith("The candidate lacks")),
+    ...c.reasons,
+    ...[...c.dieboldMariano.notes, ...c.bootstrap.notes].map((n) => `Note: ${n}`)
+  ];
+}
+function horizonTable(report) {
+  const rows = report.comparisons.filter(
+    (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
+  );
+  if (rows.length === 0) return null;
+  const adjusted = holmAdjust(rows.map((c) => c.dieboldMariano.decisionPValue));
+  return table(
+    [
+      "horizon",
+      "baseline loss",
+      "candidate loss",
+      changeHeader(rows),
+      "evidence",
+      "policy p, Holm"
+    ],
+    ["left", "right", "right", "right", "left", "right"],
+    rows.map((c, j) => [
+      String(c.horizon),
+      significant(c.meanBaselineLoss),
+      significant(c.meanCandidateLoss),
+      changeCell(c),
+      evidenceOf(c, report),
+      pValue(adjusted[j])
+    ])
+  );
+}
+var SERIES_ROWS = 50;
+function seriesSection(report) {
+  const s = report.seriesSummary;
+  if (s === null) return null;
+  const method = s.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
+  const rows = report.comparisons.filter((c) => c.series !== "all").sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));
+  const shown = rows.length <= SERIES_ROWS ? rows : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
+  const summary2 = `${s.series} series: ${s.worse} worse, ${s.better} better, ${s.noEvidence} with no clear difference (Diebold\u2013Mariano on L_candidate \u2212 L_baseline per series, ${method}-adjusted, \u03B1 = ${s.alpha}; whatever the policy, "worse" needs evidence of a higher loss and "better" of a lower one).${shown.length < rows.length ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.` : ""}`;
+  return {
+    summary: summary2,
+    table: table(
+      ["series", "baseline loss", "candidate loss", "change", "evidence", `adjusted p`],
+      ["left", "right", "right", "right", "left", "right"],
+      shown.map((c) => [
+        String(c.series),
+        significant(c.meanBaselineLoss),
+        significant(c.meanCandidateLoss),
+        percent(c.relativeDifference),
+        evidenceOf(c, report),
+        pValue(c.directionPValue ?? c.adjustedPValue)
+      ])
+    )
+  };
+}
+function pathSection(report) {
+  const s = report.pathSummary;
+  if (s === null) return null;
+  const rows = report.comparisons.filter((c) => c.path !== void 0);
+  return {
+    summary: `The candidate's mean loss is higher on ${s.worse} of ${s.paths} backtest paths (${percent(s.shareWorse).replace("+", "")}), significantly so (one-sided Diebold\u2013Mariano, p \u2264 ${report.policy.alpha}, unadjusted) on ${s.significantlyWorse}. The verdict tests the path-averaged differential.`,
+    table: rows.length > 50 ? null : table(
+      ["path", "baseline loss", "candidate loss", "change", "p, worse"],
+      ["left", "right", "right", "right", "right"],
+      rows.map((c) => [
+        c.path ?? "",
+        significant(c.meanBaselineLoss),
+        significant(c.meanCandidateLoss),
+        percent(c.relativeDifference),
+        pValue(c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue)
+      ])
+    )
+  };
+}
+function inputSection(report, paths) {
+  const i = report.inputs;
+  const d = i.rowsDropped;
+  const lines = [
+    ...inputNotes(report),
+    `Rows matched: ${i.rowsMatched} over ${i.timestamps.count} timestamps (${i.timestamps.first ?? "n/a"} to ${i.timestamps.last ?? "n/a"}), ${i.series} series, horizons ${compactRange(i.horizons)}.`,
+    `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`
+  ];
+  return {
+    table: table(
+      ["file", "role", "rows", "blank lines", "columns not used", "sha256"],
+      ["left", "left", "right", "right", "left", "left"],
+      i.files.map((f) => [
+        paths(f.path),
+        f.role,
+        String(f.rows),
+        String(f.blankLines),
+        f.ignoredColumns.join(", "),
+        f.sha256.replace(/^sha256:/, "").slice(0, 12)
+      ])
+    ),
+    lines
+  };
+}
+function checksTable(report) {
+  const checks = report.integrity.checks;
+  if (checks.length === 0) return null;
+  return table(
+    ["check", "status", "found", "examples"],
+    ["left", "left", "right", "left"],
+    checks.map((c) => [c.id, c.status, String(c.count), c.examples.slice(0, 3).join("; ")])
+  );
+}
+function compactRange(values) {
+  if (values.length === 0) return "1";
+  const contiguous = values.every((v, j) => j === 0 || v === values[j - 1] + 1);
+  if (contiguous && values.length > 2) return `${values[0]}\u2013${values.at(-1)}`;
+  return values.join(", ");
+}
+function settingsTable(options) {
+  return table(
+    ["option", "value", "default"],
+    ["left", "left", "left"],
+    options.map((o) => [
+      `--${o.name}`,
+      o.value === "" ? "(none)" : o.value,
+      o.isDefault ? "yes" : "no"
+    ])
+  );
+}
+
+// src/report/svgCharts.ts
+var COLOURS = { worse: "#b4501a", better: "#2463a6", neutral: "#6b7280", ink: "#1f2328" };
+var W = 640;
+var H = 240;
+var M = { left: 56, right: 16, top: 16, bottom: 40 };
+function xml(text2) {
+  return text2.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+}
+function linear(lo2, hi2, from, to) {
+  const span = hi2 - lo2 || 1;
+  const f = (x) => from + (x - lo2) / span * (to - from);
+  return Object.assign(f, { ticks: niceTicks(lo2, hi2) });
+}
+function niceTicks(lo2, hi2, count = 5) {
+  const span = hi2 - lo2 || 1;
+  const step0 = span / count;
+  const mag = 10 ** Math.floor(Math.log10(step0));
+  const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= step0) ?? 10 * mag;
+  const out = [];
+  for (let v = Math.ceil(lo2 / step) * step; v <= hi2 + step * 1e-9; v += step) {
+    out.push(Number(v.toPrecision(12)));
+  }
+  return out;
+}
+function fmt(x) {
+  return String(Number(x.toPrecision(3)));
+}
+function frame(title, body, desc) {
+  return [
+    `<svg viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${xml(title)}" xmlns="http://www.w3.org/2000/svg">`,
+    `<title>${xml(title)}</title><desc>${xml(desc)}</desc>`,
+    ...body,
+    "</svg>"
+  ].join("\n");
+}
+function yAxis(y, unit) {
+  return y.ticks.map(
+    (t) => `<line x1="${M.left}" x2="${W - M.right}" y1="${y(t).toFixed(1)}" y2="${y(t).toFixed(1)}" stroke="#e5e7eb"/><text x="${M.left - 6}" y="${(y(t) + 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${COLOURS.neutral}">${xml(fmt(t))}${unit}</text>`
+  );
+}
+function hline(y, colour, dash, label) {
+  return `<line x1="${M.left}" x2="${W - M.right}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${colour}" stroke-width="1.5" stroke-dasharray="${dash}"/><text x="${W - M.right - 2}" y="${(y - 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${colour}">${xml(label)}</text>`;
+}
+function differenceOverTimeSvg(input) {
+  const { labels, values, margin, band } = input;
+  const all = [
+    0,
+    ...values,
+    ...margin === null ? [] : [margin],
+    ...band === null ? [] : [band.lower, band.upper]
+  ];
+  const lo2 = Math.min(...all);
+  const hi2 = Math.max(...all);
+  const pad = (hi2 - lo2) * 0.08 || 1;
+  const y = linear(lo2 - pad, hi2 + pad, H - M.bottom, M.top);
+  const n = values.length;
+  const x = (i) => M.left + (n === 1 ? 0.5 : i / (n - 1)) * (W - M.left - M.right);
+  const body = yAxis(y, "%");
+  if (band !== null) {
+    body.push(
+      `<rect x="${M.left}" y="${y(band.upper).toFixed(1)}" width="${W - M.left - M.right}" height="${Math.max(1, y(band.lower) - y(band.upper)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.15"/>`
+    );
+  }
+  body.push(hline(y(0), COLOURS.ink, "0", "no difference"));
+  if (margin !== null) body.push(hline(y(margin), COLOURS.worse, "6 4", `margin ${fmt(margin)}%`));
+  body.push(
+    `<polyline fill="none" stroke="${COLOURS.ink}" stroke-width="1.5" points="${values.map((v, i) => `${x(i).toFixed(1)},${y(v).toFixed(1)}`).join(" ")}"/>`
+  );
+  values.forEach((v, i) => {
+    body.push(
+      `<circle cx="${x(i).toFixed(1)}" cy="${y(v).toFixed(1)}" r="3" fill="${v > 0 ? COLOURS.worse : COLOURS.better}"><title>${xml(`${labels[i]}: ${fmt(v)}%`)}</title></circle>`
+    );
+  });
+  const step = Math.max(1, Math.ceil(n / 6));
+  for (let i = 0; i < n; i += step) {
+    body.push(
+      `<text x="${x(i).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(labels[i] ?? "")}</text>`
+    );
+  }
+  return frame(
+    "Change in mean loss per period",
+    body,
+    `Candidate's mean loss against the baseline's in each of ${n} periods, in percent; shaded: the overall change's interval.`
+  );
+}
+function intervalsSvg(input) {
+  const { rows, margin } = input;
+  const rowH = 22;
+  const height = M.top + M.bottom + rowH * rows.length;
+  const values = rows.flatMap((r) => [r.estimate, r.lower ?? r.estimate, r.upper ?? r.estimate]);
+  const all = [0, ...values, ...margin === null ? [] : [margin]];
+  const lo2 = Math.min(...all);
+  const hi2 = Math.max(...all);
+  const pad = (hi2 - lo2) * 0.06 || 1;
+  const x = linear(lo2 - pad, hi2 + pad, M.left + 40, W - M.right);
+  const body = [];
+  for (const t of x.ticks) {
+    body.push(
+      `<line x1="${x(t).toFixed(1)}" x2="${x(t).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="#e5e7eb"/><text x="${x(t).toFixed(1)}" y="${height - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+    );
+  }
+  body.push(
+    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.ink}"/>`
+  );
+  if (margin !== null) {
+    body.push(
+      `<line x1="${x(margin).toFixed(1)}" x2="${x(margin).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.worse}" stroke-dasharray="6 4"/>`
+    );
+  }
+  rows.forEach((r, i) => {
+    const cy = M.top + rowH * i + rowH / 2;
+    const colour = r.lower !== null && r.lower > 0 ? COLOURS.worse : r.upper !== null && r.upper < 0 ? COLOURS.better : COLOURS.neutral;
+    body.push(
+      `<text x="${M.left + 32}" y="${cy + 4}" font-size="11" text-anchor="end" fill="${COLOURS.ink}">${xml(r.label)}</text>`
+    );
+    if (r.lower !== null && r.upper !== null) {
+      body.push(
+        `<line x1="${x(r.lower).toFixed(1)}" x2="${x(r.upper).toFixed(1)}" y1="${cy}" y2="${cy}" stroke="${colour}" stroke-width="2"/>`
+      );
+    }
+    body.push(
+      `<circle cx="${x(r.estimate).toFixed(1)}" cy="${cy}" r="4" fill="${colour}"><title>${xml(`${r.label}: ${fmt(r.estimate)}%`)}</title></circle>`
+    );
+  });
+  return frame(
+    input.title,
+    body,
+    "Dots: change in mean loss in percent; bars: its interval; vertical line: no difference."
+  ).replace(`viewBox="0 0 ${W} ${H}"`, `viewBox="0 0 ${W} ${height}"`);
+}
+function seriesDotPlotSvg(input) {
+  const { points, alpha } = input;
+  const sig = (p) => -Math.log10(Math.max(p, 1e-12));
+  const xs = [0, ...points.map((p) => p.change)];
+  const ys = [0, sig(alpha), ...points.map((p) => sig(p.p))];
+  const xPad = (Math.max(...xs) - Math.min(...xs)) * 0.06 || 1;
+  const x = linear(Math.min(...xs) - xPad, Math.max(...xs) + xPad, M.left, W - M.right);
+  const y = linear(0, Math.max(...ys) * 1.1, H - M.bottom, M.top);
+  const body = yAxis(y, "");
+  body.push(hline(y(sig(alpha)), COLOURS.neutral, "4 3", `adjusted p = ${alpha}`));
+  body.push(
+    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${COLOURS.ink}"/>`
+  );
+  for (const t of x.ticks) {
+    body.push(
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+    );
+  }
+  body.push(
+    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">change in mean loss; up: stronger evidence (\u2212log10 adjusted p)</text>`
+  );
+  for (const p of points) {
+    const colour = p.direction === "worse" ? COLOURS.worse : p.direction === "better" ? COLOURS.better : COLOURS.neutral;
+    body.push(
+      `<circle cx="${x(p.change).toFixed(1)}" cy="${y(sig(p.p)).toFixed(1)}" r="4" fill="${colour}" fill-opacity="0.8"><title>${xml(`${p.label}: ${fmt(p.change)}%, adjusted p ${p.p.toPrecision(2)}`)}</title></circle>`
+    );
+  }
+  return frame(
+    "Series: change against evidence",
+    body,
+    "Each dot is a series; right of the vertical line its loss is higher; above the dashed line the adjusted evidence is significant."
+  );
+}
+function bootstrapHistogramSvg(input) {
+  const { histogram, observed, boundary } = input;
+  const lo2 = Math.min(histogram.lower, observed, boundary);
+  const hi2 = Math.max(histogram.upper, observed, boundary);
+  const pad = (hi2 - lo2) * 0.04 || 1;
+  const x = linear(lo2 - pad, hi2 + pad, M.left, W - M.right);
+  const max = Math.max(...histogram.counts);
+  const y = linear(0, max * 1.1, H - M.bottom, M.top);
+  const bins = histogram.counts.length;
+  const width = (histogram.upper - histogram.lower) / bins;
+  const body = [];
+  histogram.counts.forEach((c, j) => {
+    const x0 = x(histogram.lower + j * width);
+    const x1 = x(histogram.lower + (j + 1) * width);
+    body.push(
+      `<rect x="${x0.toFixed(1)}" y="${y(c).toFixed(1)}" width="${Math.max(0.5, x1 - x0 - 0.5).toFixed(1)}" height="${(y(0) - y(c)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.5"/>`
+    );
+  });
+  for (const t of x.ticks) {
+    body.push(
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}</text>`
+    );
+  }
+  const vline = (v, colour, dash, label, side, row) => {
+    const width2 = label.length * 6.2;
+    const anchor = side === "end" && x(v) - width2 < M.left ? "start" : side === "start" && x(v) + width2 > W - M.right ? "end" : side;
+    return `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/><text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml(label)}</text>`;
+  };
+  body.push(
+    vline(
+      boundary,
+      COLOURS.ink,
+      "4 3",
+      ` H0 boundary ${fmt(boundary)} `,
+      observed >= boundary ? "end" : "start",
+      0
+    )
+  );
+  body.push(
+    vline(
+      observed,
+      COLOURS.worse,
+      "0",
+      ` observed ${fmt(observed)} `,
+      observed >= boundary ? "start" : "end",
+      1
+    )
+  );
+  body.push(
+    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">resampled mean of the tested differential d</text>`
+  );
+  return frame(
+    "Bootstrap distribution",
+    body,
+    "Histogram of the stationary-bootstrap resample means of d, with the observed mean and the boundary of H0."
+  );
+}
+
+// src/report/renderHtml.ts
+var STYLE = `
+:root { color-scheme: light; }
+body { font: 15px/1.5 -apple-system, BlinkMacSystemFont, "Segoe UI", "Noto Sans", Helvetica, Arial, sans-serif;
+  color: #1f2328; margin: 0 auto; padding: 16px; max-width: 980px; }
+h1 { font-size: 1.4em; margin: 0 0 8px; } h2 { font-size: 1.15em; margin: 28px 0 8px; border-bottom: 1px solid #d0d7de; padding-bottom: 4px; }
+.verdict { display: inline-block; padding: 1px 10px; border-radius: 12px; color: #fff; font-weight: 600; }
+.pass { background: #2463a6; } .warn { background: #9a6700; } .fail { background: #b4501a; }
+.lead { font-size: 1.05em; }
+.scroll { overflow-x: auto; }
+table { border-collapse: collapse; margin: 8px 0; font-variant-numeric: tabular-nums; }
+th, td { border: 1px solid #d0d7de; padding: 4px 10px; vertical-align: top; }
+th { background: #f6f8fa; text-align: left; }
+td.r, th.r { text-align: right; }
+figure { margin: 12px 0; } figcaption { color: #59636e; font-size: 0.9em; }
+p, li, h1, h2, code { overflow-wrap: anywhere; }
+code, .spark { font-family: ui-monospace, SFMono-Regular, Menlo, Consolas, monospace; font-size: 0.9em; }
+.muted { color: #59636e; font-size: 0.9em; }
+@media (max-width: 600px) { body { font-size: 14px; padding: 8px; } th, td { padding: 3px 6px; } }
+@media print { body { max-width: none; } h2 { break-after: avoid; } figure, table { break-inside: avoid; } }
+`;
+function renderHtml(report, options = {}) {
+  const view = report;
+  const s = reportSections(view, options);
+  const overall = view.comparisons[0];
+  const out = [];
+  out.push(
+    "<!doctype html>",
+    '<html lang="en"><head><meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    `<title>${xml(s.title)}: ${s.verdict.toUpperCase()}</title>`,
+    `<style>${STYLE}</style></head><body>`,
+    `<h1>${xml(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
+    `<p class="lead"><strong>${xml(s.lead)}</strong> ${xml(s.change)}</p>`,
+    htmlTable(s.main),
+    `<p class="muted">${xml(s.intervalNote)}</p>`
+  );
+  if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`);
+  out.push(
+    `<p class="muted">${s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: <code>${xml(s.changedSettings)}</code>`}</p>`
+  );
+  const chart = differenceSeries(view);
+  if (chart !== null) {
+    const interval = relativeInterval(overall);
+    const band = interval === null || interval.lower === null || interval.upper === null ? null : { lower: interval.lower, upper: interval.upper, level: interval.level };
+    out.push(
+      "<h2>Difference over time</h2>",
+      `<figure>${differenceOverTimeSvg({
+        labels: chart.labels,
+        values: chart.values,
+        margin: chart.margin,
+        band: band === null ? null : { lower: band.lower * 100, upper: band.upper * 100 }
+      })}<figcaption>${xml(chartCaption(chart))}${band === null ? "" : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
+      `<p class="spark">${xml(sparklineText(chart))}</p>`
+    );
+  }
+  const horizons = view.comparisons.filter(
+    (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
+  );
+  if (s.horizons !== null) {
+    const rows = horizons.filter((c) => c.relativeDifference !== null).map((c) => {
+      const i = relativeInterval(c);
+      return {
+        label: `h ${c.horizon}`,
+        estimate: c.relativeDifference * 100,
+        lower: i?.lower == null ? null : i.lower * 100,
+        upper: i?.upper == null ? null : i.upper * 100
+      };
+    });
+    out.push("<h2>By horizon (for locating a change only)</h2>");
+    if (rows.length > 0) {
+      out.push(
+        `<figure>${intervalsSvg({ title: "Change in mean loss by horizon", rows, margin: differenceSeries(view)?.margin ?? marginPercent(view) })}<figcaption>Each horizon on its own: the dot is the change in mean loss, the bar its interval; right of the line the candidate is worse.</figcaption></figure>`
+      );
+    }
+    out.push(
+      '<p class="muted">The p-values are Holm-adjusted across horizons; the gate\u2019s verdict rests on the overall comparison.</p>',
+      htmlTable(s.horizons)
+    );
+  }
+  if (s.series !== null) {
+    const points = view.comparisons.filter((c) => c.series !== "all" && c.relativeDifference !== null).map((c) => ({
+      label: String(c.series),
+      change: c.relativeDifference * 100,
+      p: c.directionPValue ?? c.adjustedPValue ?? 1,
+      direction: c.direction ?? "no evidence"
+    }));
+    out.push("<h2>By series</h2>");
+    if (points.length > 0) {
+      out.push(
+        `<figure>${seriesDotPlotSvg({ points, alpha: view.policy.alpha })}<figcaption>Each dot is a series: across, the change in its mean loss; up, the strength of the evidence (\u2212log10 of the multiplicity-adjusted p-value). Rust: worse, blue: better, grey: no clear difference.</figcaption></figure>`
+      );
+    }
+    out.push(`<p>${xml(s.series.summary)}</p>`, htmlTable(s.series.table));
+  }
+  if (s.paths !== null) {
+    out.push("<h2>By backtest path</h2>", `<p>${xml(s.paths.summary)}</p>`);
+    if (s.paths.table !== null) out.push(htmlTable(s.paths.table));
+  }
+  const missing = missingRowsSection(view);
+  if (missing !== null) {
+    out.push(
+      `<h2>${xml(missing.title)}</h2>`,
+      ...missing.lines.map((l) => `<p>${xml(l)}</p>`),
+      ...missing.tables.map(htmlTable)
+    );
+  }
+  out.push("<h2>How the overall comparison was tested</h2>");
+  const histogram = overall.bootstrap.distribution ?? null;
+  if (histogram !== null) {
+    out.push(
+      `<figure>${bootstrapHistogramSvg({ histogram, observed: overall.meanTestedDifferential, boundary: view.policy.boundary })}<figcaption>The stationary bootstrap's resampled means of the tested differential d (${overall.bootstrap.resamples} resamples). The observed mean is marked, and so is the boundary of H0.</figcaption></figure>`
+    );
+  }
+  out.push(
+    htmlTable(s.details),
+    `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`
+  );
+  if (s.checks !== null) out.push("<h2>Backtest checks</h2>", htmlTable(s.checks));
+  out.push(
+    "<h2>Inputs and coverage</h2>",
+    htmlTable(s.inputs.table),
+    ...s.inputs.lines.map((l) => `<p>${xml(l)}</p>`)
+  );
+  out.push("<h2>All settings</h2>", htmlTable(s.settings));
+  out.push(
+    `<p class="muted">A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${xml(report.tool.version)}.</p>`,
+    "</body></html>"
+  );
+  return `${out.join("\n")}
+`;
+}
+function marginPercent(report) {
+  const p = report.policy;
+  if (p.marginKind !== "relative" || p.margin === 0) return null;
+  return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
+}
+function htmlTable(t) {
+  const cell = (tag, text2, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text2)}</${tag}>`;
+  return [
+    '<div class="scroll"><table>',
+    `<thead><tr>${t.header.map((h, j) => cell("th", h, j)).join("")}</tr></thead>`,
+    `<tbody>${t.rows.map((r) => `<tr>${r.map((c, j) => cell("td", c, j)).join("")}</tr>`).join("")}</tbody>`,
+    "</table></div>"
+  ].join("");
+}
+
+// src/report/escapeMarkdown.ts
+function escapeMarkdown(text2) {
+  return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
 }
 
 // src/report/renderBacktestChecks.ts
@@ -32484,209 +33852,126 @@ function periodTable(stability) {
 }
 
 // src/report/renderMarkdown.ts
-var VERDICT_WORDS = { pass: "PASS", warn: "WARN", fail: "FAIL" };
 function renderMarkdown(report, options = {}) {
+  const view = report;
+  const s = reportSections(view, options);
   const lines = [];
-  const title = report.name === "" ? "skillgate" : `skillgate \xB7 ${escapeMarkdown(report.name)}`;
-  lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, "");
-  lines.push(escapeMarkdown(report.headline), "");
-  lines.push(...comparisonTable(report), "");
-  lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
-  lines.push(...seriesSection(report));
-  lines.push(...pathSection(report));
-  lines.push(...renderStabilitySection(report));
-  lines.push(...backtestChecksSection(report));
-  const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
-  if (reasons.length > 0) {
-    lines.push("**Why**", "");
-    for (const r of reasons) lines.push(`- ${escapeMarkdown(r)}`);
-    lines.push("");
+  lines.push(`### ${escapeMarkdown(s.title)}: ${s.verdict.toUpperCase()}`, "");
+  lines.push(`**${escapeMarkdown(s.lead)}** ${escapeMarkdown(s.change)}`, "");
+  lines.push(...markdownTable(s.main), "");
+  lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
+  for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
+  if (s.notes.length > 0) lines.push("");
+  const chart = differenceSeries(view);
+  if (chart !== null) {
+    lines.push(...mermaidChart(chart), "");
+    lines.push(`<sub>${escapeMarkdown(chartCaption(chart))}</sub>`, "");
+    lines.push(`\`${sparklineText(chart).replace(/`/g, "'")}\``, "");
   }
-  lines.push(...testDetails(report), "");
-  lines.push(...inputSection(report), "");
-  lines.push(...settingsSection(report), "");
+  lines.push(
+    s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: ${code(s.changedSettings)}`,
+    ""
+  );
+  lines.push(
+    ...collapsed("How the overall comparison was tested", [
+      ...markdownTable(s.details),
+      "",
+      ...s.detailNotes.map((n) => `- ${escapeMarkdown(n)}`)
+    ])
+  );
+  if (s.horizons !== null) {
+    lines.push(
+      ...collapsed(
+        `By horizon (${s.horizons.rows.length}): for locating a change only, not verdicts`,
+        [
+          "Each horizon is compared on its own; the p-values are Holm-adjusted across horizons. The gate\u2019s verdict rests on the overall comparison.",
+          "",
+          ...markdownTable(s.horizons)
+        ]
+      )
+    );
+  }
+  if (s.series !== null) {
+    lines.push(
+      ...collapsed(
+        `By series (${report.seriesSummary?.series ?? 0}): ${report.seriesSummary?.worse ?? 0} worse, ${report.seriesSummary?.better ?? 0} better`,
+        [escapeMarkdown(s.series.summary), "", ...markdownTable(s.series.table)]
+      )
+    );
+  }
+  if (s.paths !== null) {
+    lines.push(
+      ...collapsed("By backtest path", [
+        escapeMarkdown(s.paths.summary),
+        ...s.paths.table === null ? [] : ["", ...markdownTable(s.paths.table)]
+      ])
+    );
+  }
+  const missing = missingRowsSection(view);
+  if (missing !== null) {
+    lines.push(
+      ...collapsed(missing.title, [
+        ...missing.lines.map((l) => escapeMarkdown(l)),
+        ...missing.tables.flatMap((t) => ["", ...markdownTable(t)])
+      ])
+    );
+  }
+  const overTime = renderStabilitySection(report);
+  if (overTime.length > 0) {
+    lines.push(
+      `<details><summary>${escapeMarkdown(overTimeSummary(view))}</summary>`,
+      "",
+      ...overTime,
+      "</details>",
+      ""
+    );
+  }
+  const checks = backtestChecksSection(report);
+  if (checks.length > 0) {
+    lines.push(
+      `<details><summary>Backtest checks: ${escapeMarkdown(report.integrity.outcome)}</summary>`,
+      "",
+      ...checks,
+      "</details>",
+      ""
+    );
+  }
+  lines.push(
+    ...collapsed("Inputs and coverage", [
+      ...markdownTable(s.inputs.table),
+      "",
+      ...s.inputs.lines.map((l) => escapeMarkdown(l))
+    ])
+  );
+  lines.push(...collapsed("All settings", markdownTable(s.settings)));
   lines.push(
     `<sub>A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${escapeMarkdown(report.tool.version)}.${options.runUrl === void 0 ? "" : ` [Run details](${options.runUrl})`}</sub>`
   );
   return `${lines.join("\n")}
 `;
 }
-function scopeLabel(c) {
-  if (c.horizon === "all" && c.series === "all") return "overall";
-  const parts = [];
-  if (c.horizon !== "all") parts.push(`horizon ${c.horizon}`);
-  if (c.series !== "all") parts.push(`series ${escapeMarkdown(c.series)}`);
-  return parts.join(", ");
+function overTimeSummary(report) {
+  const s = report.stability;
+  const recent = s?.recent?.verdict === "fail";
+  const stretch = (s?.fluctuation?.worsePeriods.length ?? 0) > 0;
+  if (recent && stretch) return "Over time: worse recently and in some stretches";
+  if (recent) return "Over time: worse recently";
+  if (stretch) return "Over time: worse in some stretches";
+  return "Over time: the recent window, the fluctuation test and the mean loss by period";
 }
-function comparisonTable(report) {
-  const level = report.comparisons[0]?.bootstrap.interval?.level ?? report.settings.confidence;
-  const pct = `${formatNumber(level * 100, 3)}%`;
-  const rows = [
-    `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
-    "|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|"
+function markdownTable(t) {
+  const row = (cells) => `| ${cells.map((c) => escapeMarkdown(c)).join(" | ")} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
+    ...t.rows.map(row)
   ];
-  for (const c of report.comparisons.filter((x) => x.series === "all" && x.path === void 0)) {
-    const dm = c.dieboldMariano;
-    const bs = c.bootstrap;
-    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
-    rows.push(
-      `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
-        c.meanCandidateLoss
-      )} | ${formatNumber(c.meanDifference)} | ${relativeCell(c)} | ${formatNumber(
-        dm.smallSample?.statistic ?? dm.statistic
-      )} | ${formatPValue(dm.decisionPValue)} | ${formatPValue(bs.decisionPValue)} | ${interval} | ${c.verdict} |`
-    );
-  }
-  return rows;
 }
-function relativeCell(c) {
-  return relativeChangeText(c);
+function collapsed(summary2, body) {
+  return [`<details><summary>${escapeMarkdown(summary2)}</summary>`, "", ...body, "", "</details>", ""];
 }
-function seriesSection(report) {
-  const summary2 = report.seriesSummary;
-  if (summary2 === null) return [];
-  const method = summary2.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
-  const out = [
-    `**Series**: of ${summary2.series}, ${summary2.worse} worse, ${summary2.better} better, ${summary2.noEvidence} without evidence either way (Diebold\u2013Mariano per series, ${method}-adjusted, \u03B1 = ${summary2.alpha}). These locate a regression; the verdict rests on the overall comparison.`,
-    ""
-  ];
-  const byName = new Map(
-    report.comparisons.filter((c) => c.series !== "all").map((c) => [c.series, c])
-  );
-  const top = summary2.topRegressions.map((name) => byName.get(name)).filter((c) => c !== void 0);
-  if (top.length > 0) {
-    out.push(
-      `| series (largest significant regressions) | time points | baseline loss | candidate loss | relative | DM statistic | adjusted p |`,
-      "|---|---:|---:|---:|---:|---:|---:|"
-    );
-    for (const c of top) {
-      out.push(
-        `| ${escapeMarkdown(String(c.series))} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(c.dieboldMariano.smallSample?.statistic ?? c.dieboldMariano.statistic)} | ${formatPValue(c.adjustedPValue)} |`
-      );
-    }
-    out.push("");
-  }
-  return out;
-}
-function pathSection(report) {
-  const summary2 = report.pathSummary;
-  if (summary2 === null) return [];
-  const out = [
-    `**Backtest paths**: the candidate's mean loss is higher on ${summary2.worse} of ${summary2.paths} paths (${formatNumber(summary2.shareWorse * 100, 3)}%), significantly so (one-sided Diebold\u2013Mariano, p \u2264 ${report.policy.alpha}) on ${summary2.significantlyWorse}. The verdict tests the path-averaged differential.`,
-    ""
-  ];
-  const rows = report.comparisons.filter((c) => c.path !== void 0);
-  if (rows.length <= 50) {
-    out.push(
-      "| path | time points | baseline loss | candidate loss | relative | DM statistic | p (DM) |"
-    );
-    out.push("|---|---:|---:|---:|---:|---:|---:|");
-    for (const c of rows) {
-      const dm = c.dieboldMariano;
-      out.push(
-        `| ${escapeMarkdown(c.path ?? "")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(dm.smallSample?.statistic ?? dm.statistic)} | ${formatPValue(dm.smallSample?.pValue ?? dm.pValue)} |`
-      );
-    }
-  }
-  out.push("");
-  return out;
-}
-function testDetails(report) {
-  const c = report.comparisons[0];
-  if (c === void 0) return [];
-  const dm = c.dieboldMariano;
-  const bs = c.bootstrap;
-  const out = ["<details><summary>How the overall comparison was tested</summary>", ""];
-  out.push(
-    `Loss: ${LOSS_LABELS[c.loss]}. Tested differential: d_t = L_candidate \u2212 ${formatNumber(
-      report.policy.baselineFactor,
-      6
-    )} \xB7 L_baseline (mean ${formatNumber(c.meanTestedDifferential)}), H0 boundary \u03B4 = ${formatNumber(
-      report.policy.boundary
-    )}.`,
-    "",
-    `H0: ${escapeMarkdown(report.policy.nullHypothesis)}. H1: ${escapeMarkdown(report.policy.alternative)}. Rejecting H0 makes the gate ${report.policy.onReject}.`,
-    "",
-    "| | value |",
-    "|---|---|",
-    `| Diebold\u2013Mariano variance | ${dm.estimator}${dm.estimator === dm.requestedEstimator ? "" : ` (requested ${dm.requestedEstimator})`} |`,
-    `| statistic | ${formatNumber(dm.statistic)} |`,
-    `| long-run variance \u03C9\u0302\xB2 | ${formatNumber(dm.longRunVariance)} |`,
-    `| lag | ${dm.lag ?? "n/a (fixed-b)"} |`,
-    `| degrees of freedom | ${dm.degreesOfFreedom ?? "normal reference"} |`
-  );
-  if (dm.smallSample !== null) {
-    out.push(
-      `| Harvey\u2013Leybourne\u2013Newbold statistic | ${formatNumber(dm.smallSample.statistic)} (t, ${dm.smallSample.degreesOfFreedom} df) |`
-    );
-  }
-  out.push(
-    `| p one-sided (worse) / two-sided | ${formatPValue(dm.pValue)} / ${formatPValue(dm.pValueTwoSided)} |`
-  );
-  if (dm.interval !== null) {
-    out.push(
-      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`
-    );
-  }
-  out.push(
-    `| bootstrap expected block length | ${formatNumber(bs.expectedBlockLength)} (${bs.blockLengthRule}) |`,
-    `| bootstrap resamples / seed | ${bs.resamples} / ${bs.seed} |`,
-    `| bootstrap standard error of d\u0304 | ${formatNumber(bs.standardError)} |`,
-    `| bootstrap p one-sided (worse) / two-sided | ${formatPValue(bs.pValue)} / ${formatPValue(bs.pValueTwoSided)} |`
-  );
-  const coverage = report.inputs.intervalCoverage;
-  if (coverage !== null) {
-    out.push(
-      `| empirical coverage of the ${formatNumber(coverage.nominal * 100, 3)}% interval, baseline / candidate | ${formatSignedPercent(coverage.baseline).replace("+", "")} / ${formatSignedPercent(coverage.candidate).replace("+", "")} |`
-    );
-  }
-  for (const note of [...dm.notes, ...bs.notes]) out.push("", `Note: ${escapeMarkdown(note)}`);
-  out.push("", "</details>");
-  return out;
-}
-function inputSection(report) {
-  const i = report.inputs;
-  const out = ["<details><summary>Inputs and coverage</summary>", ""];
-  out.push(
-    "| file | role | rows | blank lines skipped | columns not used | sha256 |",
-    "|---|---|---:|---:|---|---|"
-  );
-  for (const f of i.files) {
-    const unused = f.ignoredColumns.length === 0 ? "" : f.ignoredColumns.map(escapeMarkdown).join(", ");
-    out.push(
-      `| ${escapeMarkdown(f.path)} | ${f.role} | ${f.rows} | ${f.blankLines} | ${unused} | \`${f.sha256.replace(/^sha256:/, "").slice(0, 12)}\` |`
-    );
-  }
-  const d = i.rowsDropped;
-  out.push(
-    "",
-    `Rows matched: ${i.rowsMatched} over ${i.timestamps.count} timestamps (${escapeMarkdown(i.timestamps.first ?? "n/a")} to ${escapeMarkdown(
-      i.timestamps.last ?? "n/a"
-    )}), ${i.series} series, horizons ${i.horizons.join(", ") || "1"}.`,
-    `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`
-  );
-  for (const note of inputNotes(report)) out.push(escapeMarkdown(note));
-  if (i.examples.baselineOnly.length > 0) {
-    out.push(
-      `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => escapeMarkdown(k)).join(", ")}.`
-    );
-  }
-  out.push("", "</details>");
-  return out;
-}
-function settingsSection(report) {
-  const out = [
-    "<details><summary>Settings in force</summary>",
-    "",
-    "| setting | value |",
-    "|---|---|"
-  ];
-  for (const [key, value] of Object.entries(report.settings)) {
-    const text2 = typeof value === "object" && value !== null ? JSON.stringify(value) : String(value);
-    out.push(`| ${key} | ${escapeMarkdown(text2)} |`);
-  }
-  out.push("", "</details>");
-  return out;
+function code(text2) {
+  return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text2) ? `\`${text2}\`` : escapeMarkdown(text2);
 }
 
 // src/action/commentTarget.ts
@@ -32893,7 +34178,7 @@ function prepareKeyValueMessage(key, value) {
 
 // node_modules/@actions/core/lib/core.js
 import * as os5 from "os";
-import * as path5 from "path";
+import * as path6 from "path";
 
 // node_modules/@actions/http-client/lib/index.js
 import * as http from "http";
@@ -33896,9 +35181,9 @@ var Summary = class {
    *
    * @returns {Summary} summary instance
    */
-  addCodeBlock(code, lang) {
+  addCodeBlock(code2, lang) {
     const attrs = Object.assign({}, lang && { lang });
-    const element = this.wrap("pre", this.wrap("code", code), attrs);
+    const element = this.wrap("pre", this.wrap("code", code2), attrs);
     return this.addRaw(element).addEOL();
   }
   /**
@@ -34028,7 +35313,7 @@ var markdownSummary = _summary;
 var summary = _summary;
 
 // node_modules/@actions/core/lib/path-utils.js
-import * as path from "path";
+import * as path2 from "path";
 function toPosixPath(pth) {
   return pth.replace(/[\\]/g, "/");
 }
@@ -34036,7 +35321,7 @@ function toWin32Path(pth) {
   return pth.replace(/[/]/g, "\\");
 }
 function toPlatformPath(pth) {
-  return pth.replace(/[/\\]/g, path.sep);
+  return pth.replace(/[/\\]/g, path2.sep);
 }
 
 // node_modules/@actions/core/lib/platform.js
@@ -34058,14 +35343,14 @@ import { StringDecoder } from "string_decoder";
 import * as os3 from "os";
 import * as events from "events";
 import * as child from "child_process";
-import * as path4 from "path";
+import * as path5 from "path";
 
 // node_modules/@actions/io/lib/io.js
-import * as path3 from "path";
+import * as path4 from "path";
 
 // node_modules/@actions/io/lib/io-util.js
 import * as fs2 from "fs";
-import * as path2 from "path";
+import * as path3 from "path";
 var __awaiter5 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
     return value instanceof P ? value : new P(function(resolve3) {
@@ -34131,7 +35416,7 @@ function tryGetExecutablePath(filePath, extensions) {
     }
     if (stats && stats.isFile()) {
       if (IS_WINDOWS) {
-        const upperExt = path2.extname(filePath).toUpperCase();
+        const upperExt = path3.extname(filePath).toUpperCase();
         if (extensions.some((validExt) => validExt.toUpperCase() === upperExt)) {
           return filePath;
         }
@@ -34155,11 +35440,11 @@ function tryGetExecutablePath(filePath, extensions) {
       if (stats && stats.isFile()) {
         if (IS_WINDOWS) {
           try {
-            const directory = path2.dirname(filePath);
-            const upperName = path2.basename(filePath).toUpperCase();
+            const directory = path3.dirname(filePath);
+            const upperName = path3.basename(filePath).toUpperCase();
             for (const actualName of yield readdir(directory)) {
               if (upperName === actualName.toUpperCase()) {
-                filePath = path2.join(directory, actualName);
+                filePath = path3.join(directory, actualName);
                 break;
               }
             }
@@ -34247,7 +35532,7 @@ function findInPath(tool) {
     }
     const extensions = [];
     if (IS_WINDOWS && process.env["PATHEXT"]) {
-      for (const extension of process.env["PATHEXT"].split(path3.delimiter)) {
+      for (const extension of process.env["PATHEXT"].split(path4.delimiter)) {
         if (extension) {
           extensions.push(extension);
         }
@@ -34260,12 +35545,12 @@ function findInPath(tool) {
       }
       return [];
     }
-    if (tool.includes(path3.sep)) {
+    if (tool.includes(path4.sep)) {
       return [];
     }
     const directories = [];
     if (process.env.PATH) {
-      for (const p of process.env.PATH.split(path3.delimiter)) {
+      for (const p of process.env.PATH.split(path4.delimiter)) {
         if (p) {
           directories.push(p);
         }
@@ -34273,7 +35558,7 @@ function findInPath(tool) {
     }
     const matches = [];
     for (const directory of directories) {
-      const filePath = yield tryGetExecutablePath(path3.join(directory, tool), extensions);
+      const filePath = yield tryGetExecutablePath(path4.join(directory, tool), extensions);
       if (filePath) {
         matches.push(filePath);
       }
@@ -34522,7 +35807,7 @@ var ToolRunner = class extends events.EventEmitter {
   exec() {
     return __awaiter7(this, void 0, void 0, function* () {
       if (!isRooted(this.toolPath) && (this.toolPath.includes("/") || IS_WINDOWS2 && this.toolPath.includes("\\"))) {
-        this.toolPath = path4.resolve(process.cwd(), this.options.cwd || process.cwd(), this.toolPath);
+        this.toolPath = path5.resolve(process.cwd(), this.options.cwd || process.cwd(), this.toolPath);
       }
       this.toolPath = yield which(this.toolPath, true);
       return new Promise((resolve3, reject) => __awaiter7(this, void 0, void 0, function* () {
@@ -34584,14 +35869,14 @@ var ToolRunner = class extends events.EventEmitter {
           state.processClosed = true;
           state.CheckComplete();
         });
-        cp.on("exit", (code) => {
-          state.processExitCode = code;
+        cp.on("exit", (code2) => {
+          state.processExitCode = code2;
           state.processExited = true;
-          this._debug(`Exit code ${code} received from tool '${this.toolPath}'`);
+          this._debug(`Exit code ${code2} received from tool '${this.toolPath}'`);
           state.CheckComplete();
         });
-        cp.on("close", (code) => {
-          state.processExitCode = code;
+        cp.on("close", (code2) => {
+          state.processExitCode = code2;
           state.processExited = true;
           state.processClosed = true;
           this._debug(`STDIO streams have closed for tool '${this.toolPath}'`);
@@ -34932,7 +36217,7 @@ function addPath(inputPath) {
   } else {
     issueCommand("add-path", {}, inputPath);
   }
-  process.env["PATH"] = `${inputPath}${path5.delimiter}${process.env["PATH"]}`;
+  process.env["PATH"] = `${inputPath}${path6.delimiter}${process.env["PATH"]}`;
 }
 function getInput(name, options) {
   const val = process.env[`INPUT_${name.replace(/ /g, "_").toUpperCase()}`] || "";
@@ -35043,8 +36328,8 @@ var Context = class {
       if (existsSync2(process.env.GITHUB_EVENT_PATH)) {
         this.payload = JSON.parse(readFileSync(process.env.GITHUB_EVENT_PATH, { encoding: "utf8" }));
       } else {
-        const path7 = process.env.GITHUB_EVENT_PATH;
-        process.stdout.write(`GITHUB_EVENT_PATH ${path7} does not exist${EOL6}`);
+        const path8 = process.env.GITHUB_EVENT_PATH;
+        process.stdout.write(`GITHUB_EVENT_PATH ${path8} does not exist${EOL6}`);
       }
     }
     this.eventName = process.env.GITHUB_EVENT_NAME;
@@ -39070,8 +40355,8 @@ var POWERS_OF_TEN = [
   1e14,
   1e15
 ];
-function isDigit(code) {
-  return code >= 48 && code <= 57;
+function isDigit(code2) {
+  return code2 >= 48 && code2 <= 57;
 }
 function parseHorizon(text2) {
   const n = text2.length;
@@ -39120,70 +40405,6 @@ function compareKeys(components, a, other, b, depth = components.length) {
     if (d !== 0) return d;
   }
   return 0;
-}
-
-// src/alignment/civilDays.ts
-function daysFromCivil(year, month, day) {
-  const y = month <= 2 ? year - 1 : year;
-  const era = Math.floor(y / 400);
-  const yoe = y - era * 400;
-  const mp = (month + 9) % 12;
-  const doy = Math.floor((153 * mp + 2) / 5) + day - 1;
-  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
-  return era * 146097 + doe - 719468;
-}
-
-// src/alignment/timeFormat.ts
-var TIME_FORMAT_NAMES = [
-  "auto",
-  "number",
-  "iso-8601",
-  "day-month-year",
-  "month-day-year",
-  "text-order"
-];
-var DAY_MONTH = /^(\d{1,2})([/.-])(\d{1,2})\2(\d{2,4})(?:[ T](\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?)?$/;
-function looksLikeDayMonthDate(label) {
-  return DAY_MONTH.test(label);
-}
-function readDayMonthDate(label, dayFirst) {
-  const m = DAY_MONTH.exec(label);
-  const pattern = dayFirst ? "D/M/YYYY [H:MM[:SS]]" : "M/D/YYYY [H:MM[:SS]]";
-  if (m === null) return `not a date of the form ${pattern}`;
-  if (m[4].length !== 4) return `the year ${m[4]} is not written with four digits`;
-  const day = Number(dayFirst ? m[1] : m[3]);
-  const month = Number(dayFirst ? m[3] : m[1]);
-  const year = Number(m[4]);
-  const civil = {
-    year,
-    month,
-    day,
-    hour: m[5] === void 0 ? 0 : Number(m[5]),
-    minute: m[6] === void 0 ? 0 : Number(m[6]),
-    second: m[7] === void 0 ? 0 : Number(m[7]),
-    nanos: m[8] === void 0 ? 0 : Number(m[8].padEnd(9, "0")),
-    offsetSeconds: 0
-  };
-  return checkCivil(civil, pattern) ?? civil;
-}
-function checkCivil(t, pattern) {
-  if (t.month < 1 || t.month > 12) return `month ${t.month} is not 1\u201312 (read as ${pattern})`;
-  if (t.day < 1 || t.day > daysInMonth(t.year, t.month)) {
-    return `day ${t.day} does not exist in month ${t.month} of ${t.year} (read as ${pattern})`;
-  }
-  if (t.hour > 23) return `hour ${t.hour} is not 0\u201323`;
-  if (t.minute > 59) return `minute ${t.minute} is not 0\u201359`;
-  if (t.second > 59) return `second ${t.second} is not 0\u201359`;
-  return null;
-}
-function daysInMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
-}
-function instantOf(t) {
-  const seconds = daysFromCivil(t.year, t.month, t.day) * 86400 + t.hour * 3600 + t.minute * 60 + t.second - t.offsetSeconds;
-  const key = `${String(seconds + 1e12).padStart(13, "0")}.${String(t.nanos).padStart(9, "0")}`;
-  return { key, epochMillis: seconds * 1e3 + t.nanos / 1e6 };
 }
 
 // src/alignment/timeOrder.ts
@@ -39384,36 +40605,36 @@ function alignPanel(input, hooks = {}) {
     timeFormat
   ) : null;
   const hasPath = baseline.path !== null;
-  const path7 = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
+  const path8 = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
   const originAt = 3;
   const pathAt = hasOrigin ? 4 : 3;
   const horizons = orderHorizons([baseline, candidate]);
   progress(0.1);
-  const keysOf = (table, index, withHorizon) => {
-    const n = table.size;
+  const keysOf = (table2, index, withHorizon) => {
+    const n = table2.size;
     const components = [
-      { values: mapIds(table.series, series.ids[index], n), cardinality: series.names.length },
+      { values: mapIds(table2.series, series.ids[index], n), cardinality: series.names.length },
       {
-        values: mapIds(table.timestamp, time.ranks[index], n),
+        values: mapIds(table2.timestamp, time.ranks[index], n),
         cardinality: time.labels.length
       }
     ];
     if (withHorizon) {
       const values = new Int32Array(n);
-      const h = table.horizon?.values;
+      const h = table2.horizon?.values;
       if (h === void 0) values.fill(horizons.rankOf(1));
       else for (let i = 0; i < n; i++) values[i] = horizons.rankOf(h[i]);
       components.push({ values, cardinality: horizons.values.length });
       if (origin !== null) {
         components.push({
-          values: mapIds(table.origin, origin.ranks[index], n),
+          values: mapIds(table2.origin, origin.ranks[index], n),
           cardinality: origin.labels.length
         });
       }
-      if (path7 !== null) {
+      if (path8 !== null) {
         components.push({
-          values: mapIds(table.path, path7.ids[index], n),
-          cardinality: path7.names.length
+          values: mapIds(table2.path, path8.ids[index], n),
+          cardinality: path8.names.length
         });
       }
     }
@@ -39434,21 +40655,21 @@ function alignPanel(input, hooks = {}) {
     if (depth > originAt && origin !== null) {
       parts.push(`origin=${origin.labels[keys[originAt].values[row]]}`);
     }
-    if (depth > pathAt && path7 !== null) {
-      parts.push(`path=${path7.names[keys[pathAt].values[row]]}`);
+    if (depth > pathAt && path8 !== null) {
+      parts.push(`path=${path8.names[keys[pathAt].values[row]]}`);
     }
     return parts.map((part) => echo(part, 80)).join(" ");
   };
-  const checkDuplicates = (table, keys, order) => {
+  const checkDuplicates = (table2, keys, order) => {
     for (let i = 1; i < order.length; i++) {
       const a = order[i - 1];
       const b = order[i];
       if (compareKeys(keys, a, keys, b) === 0) {
-        const first = Math.min(table.lines[a], table.lines[b]);
-        const second = Math.max(table.lines[a], table.lines[b]);
+        const first = Math.min(table2.lines[a], table2.lines[b]);
+        const second = Math.max(table2.lines[a], table2.lines[b]);
         throw new InputError(
           `duplicated key ${describeKey(keys, a)}: lines ${first} and ${second} have the same key`,
-          { file: table.summary.path, line: second, value: describeKey(keys, b) }
+          { file: table2.summary.path, line: second, value: describeKey(keys, b) }
         );
       }
     }
@@ -39460,6 +40681,7 @@ function alignPanel(input, hooks = {}) {
   let matched = 0;
   let baselineOnly = 0;
   let candidateOnly = 0;
+  const baselineOnlyRows = [];
   const examples = { baselineOnly: [], candidateOnly: [] };
   {
     let i = 0;
@@ -39472,6 +40694,7 @@ function alignPanel(input, hooks = {}) {
         matched++;
       } else if (c < 0) {
         if (baselineOnly++ < EXAMPLES) examples.baselineOnly.push(describeKey(bKeys, bOrder[i]));
+        baselineOnlyRows.push(bOrder[i]);
         i++;
       } else {
         if (candidateOnly++ < EXAMPLES) {
@@ -39519,11 +40742,11 @@ function alignPanel(input, hooks = {}) {
     }
     for (let r = 0; r < actuals.size; r++) if (used[r] === 0) actualsUnused++;
   } else {
-    for (const table of [baseline, candidate]) {
-      if (table.actual === null) {
+    for (const table2 of [baseline, candidate]) {
+      if (table2.actual === null) {
         throw new InputError(
           `no actual column and no separate actuals file: each predictions file must then carry the actual values`,
-          { file: table.summary.path, line: 1, column: "actual" }
+          { file: table2.summary.path, line: 1, column: "actual" }
         );
       }
     }
@@ -39594,9 +40817,9 @@ function alignPanel(input, hooks = {}) {
       { file: cFile, line: 1 }
     );
   }
-  const forecasts = (table, rows) => ({
-    prediction: bothPredict ? gather2(table.prediction.values, rows) : null,
-    quantiles: table.quantiles.filter((q) => common.includes(q.level)).map(
+  const forecasts = (table2, rows) => ({
+    prediction: bothPredict ? gather2(table2.prediction.values, rows) : null,
+    quantiles: table2.quantiles.filter((q) => common.includes(q.level)).map(
       (q) => ({
         level: q.level,
         column: q.column,
@@ -39610,7 +40833,7 @@ function alignPanel(input, hooks = {}) {
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2].values[bRows[p]]];
   const originIds = origin === null ? null : compact(gather32(bKeys[originAt].values, bRows), origin.labels);
-  const pathIds = path7 === null ? null : compact(gather32(bKeys[pathAt].values, bRows), path7.names);
+  const pathIds = path8 === null ? null : compact(gather32(bKeys[pathAt].values, bRows), path8.names);
   progress(1);
   return {
     size,
@@ -39645,9 +40868,55 @@ function alignPanel(input, hooks = {}) {
       candidateOnly,
       withoutActual,
       actualsUnused,
-      examples: { ...examples, withoutActual: withoutActualExamples }
+      examples: { ...examples, withoutActual: withoutActualExamples },
+      lacking: lackingRows(
+        baselineOnlyRows,
+        baseline,
+        bKeys,
+        actuals === void 0 ? null : { table: actuals, keys: () => keysOf(actuals, 2, false) },
+        series.names,
+        time.labels,
+        horizons.values
+      )
     }
   };
+}
+function lackingRows(rows, baseline, bKeys, actuals, seriesNames, timeLabels, horizonValues) {
+  const n = rows.length;
+  const out = {
+    series: new Int32Array(n),
+    seriesNames,
+    time: new Int32Array(n),
+    timestamps: timeLabels,
+    horizon: new Int32Array(n),
+    actual: new Float64Array(n).fill(Number.NaN),
+    prediction: new Float64Array(n).fill(Number.NaN)
+  };
+  let fromActuals = null;
+  const actualColumn = actuals?.table.actual ?? null;
+  if (n > 0 && baseline.actual === null && actuals !== null && actualColumn !== null) {
+    fromActuals = /* @__PURE__ */ new Map();
+    const [aSeries, aTime] = actuals.keys();
+    for (let r = 0; r < actuals.table.size; r++) {
+      fromActuals.set(
+        aSeries.values[r] * timeLabels.length + aTime.values[r],
+        actualColumn.values[r]
+      );
+    }
+  }
+  for (let k = 0; k < n; k++) {
+    const row = rows[k];
+    const s = bKeys[0].values[row];
+    const t = bKeys[1].values[row];
+    out.series[k] = s;
+    out.time[k] = t;
+    out.horizon[k] = horizonValues[bKeys[2].values[row]];
+    if (baseline.prediction !== null) out.prediction[k] = baseline.prediction.values[row];
+    if (baseline.actual !== null) out.actual[k] = baseline.actual.values[row];
+    else if (fromActuals !== null)
+      out.actual[k] = fromActuals.get(s * timeLabels.length + t) ?? Number.NaN;
+  }
+  return out;
 }
 function agreedValues(sources, size, what, describeRow) {
   const first = sources[0];
@@ -39716,16 +40985,16 @@ function numberLabels(columns, names) {
 }
 function orderHorizons(tables) {
   let max = 1;
-  for (const table of tables) {
-    const h = table.horizon?.values;
+  for (const table2 of tables) {
+    const h = table2.horizon?.values;
     if (h !== void 0) {
       for (let i = 0; i < h.length; i++) if (h[i] > max) max = h[i];
     }
   }
   if (max <= 1 << 16) {
     const rank2 = new Int32Array(max + 1).fill(-1);
-    for (const table of tables) {
-      const h = table.horizon?.values;
+    for (const table2 of tables) {
+      const h = table2.horizon?.values;
       if (h === void 0) rank2[1] = 0;
       else for (let i = 0; i < h.length; i++) rank2[h[i]] = 0;
     }
@@ -39734,8 +41003,8 @@ function orderHorizons(tables) {
     return { values: values2, rankOf: (horizon) => rank2[horizon] };
   }
   const seen = /* @__PURE__ */ new Set();
-  for (const table of tables) {
-    const h = table.horizon?.values;
+  for (const table2 of tables) {
+    const h = table2.horizon?.values;
     if (h === void 0) seen.add(1);
     else for (let i = 0; i < h.length; i++) seen.add(h[i]);
   }
@@ -39780,23 +41049,23 @@ function compact(ids, names) {
 }
 
 // src/alignment/historyBySeries.ts
-function historyBySeries(table, timeFormat = "auto") {
+function historyBySeries(table2, timeFormat = "auto") {
   const order = orderLabels(
-    [{ file: table.summary.path, column: table.timestamp }],
+    [{ file: table2.summary.path, column: table2.timestamp }],
     "timestamp",
     timeFormat
   );
   const ranks = order.ranks[0];
-  const actual = table.actual?.values ?? new Float64Array(table.size);
+  const actual = table2.actual?.values ?? new Float64Array(table2.size);
   const bySeries = /* @__PURE__ */ new Map();
-  for (let i = 0; i < table.size; i++) {
-    const name = table.series === null ? "" : table.series.labels[table.series.ids[i]];
+  for (let i = 0; i < table2.size; i++) {
+    const name = table2.series === null ? "" : table2.series.labels[table2.series.ids[i]];
     let list = bySeries.get(name);
     if (list === void 0) {
       list = [];
       bySeries.set(name, list);
     }
-    list.push({ rank: ranks[table.timestamp.ids[i]], value: actual[i] });
+    list.push({ rank: ranks[table2.timestamp.ids[i]], value: actual[i] });
   }
   const out = /* @__PURE__ */ new Map();
   for (const [name, list] of bySeries) {
@@ -39810,25 +41079,25 @@ function historyBySeries(table, timeFormat = "auto") {
 }
 
 // src/alignment/orderLossSeries.ts
-function orderLossSeries(table, timeFormat = "auto") {
-  const file = table.summary.path;
-  const order = orderLabels([{ file, column: table.timestamp }], "timestamp", timeFormat);
+function orderLossSeries(table2, timeFormat = "auto") {
+  const file = table2.summary.path;
+  const order = orderLabels([{ file, column: table2.timestamp }], "timestamp", timeFormat);
   const ranks = order.ranks[0];
-  const n = table.size;
+  const n = table2.size;
   const rowAt = new Int32Array(order.labels.length).fill(-1);
   for (let i = 0; i < n; i++) {
-    const rank = ranks[table.timestamp.ids[i]];
+    const rank = ranks[table2.timestamp.ids[i]];
     const other = rowAt[rank];
     if (other >= 0) {
       throw new InputError(
-        `this timestamp denotes the same time as line ${table.lines[other]} (${JSON.stringify(
-          table.timestamp.labels[table.timestamp.ids[other]]
+        `this timestamp denotes the same time as line ${table2.lines[other]} (${JSON.stringify(
+          table2.timestamp.labels[table2.timestamp.ids[other]]
         )})`,
         {
           file,
-          line: table.lines[i],
-          column: table.timestamp.column,
-          value: table.timestamp.labels[table.timestamp.ids[i]]
+          line: table2.lines[i],
+          column: table2.timestamp.column,
+          value: table2.timestamp.labels[table2.timestamp.ids[i]]
         }
       );
     }
@@ -39845,11 +41114,11 @@ function orderLossSeries(table, timeFormat = "auto") {
     const i = rowAt[rank];
     if (i < 0) continue;
     time[k] = rank;
-    baseline[k] = table.baseline[i];
-    candidate[k] = table.candidate[i];
-    rows[k] = table.rows[i];
-    rowCount += table.rows[i];
-    maxHorizon = Math.max(maxHorizon, table.horizon[i]);
+    baseline[k] = table2.baseline[i];
+    candidate[k] = table2.candidate[i];
+    rows[k] = table2.rows[i];
+    rowCount += table2.rows[i];
+    maxHorizon = Math.max(maxHorizon, table2.horizon[i]);
     k++;
   }
   return {
@@ -40022,7 +41291,7 @@ function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict)
     );
   }
   const f = stability.fluctuation;
-  const stretchWorse = f !== null && f.rejected && f.worsePeriods.length > 0;
+  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
   if (f !== null && stretchWorse) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
@@ -40149,6 +41418,250 @@ function headline(verdict, overall, hypothesis) {
   }
 }
 
+// src/losses/absoluteError.ts
+function absoluteError(actual, prediction) {
+  return Math.abs(actual - prediction);
+}
+
+// src/losses/absolutePercentageError.ts
+function absolutePercentageError(actual, prediction) {
+  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/intervalCoverage.ts
+function intervalCoverage(actual, lower, upper) {
+  const n = actual.length;
+  if (lower.length !== n || upper.length !== n) {
+    throw new RangeError(
+      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
+    );
+  }
+  if (n === 0) return null;
+  let inside = 0;
+  for (let i = 0; i < n; i++) {
+    const y = actual[i];
+    if (lower[i] <= y && y <= upper[i]) inside++;
+  }
+  return inside / n;
+}
+
+// src/losses/intervalScore.ts
+function intervalScore(actual, lower, upper, alpha) {
+  if (!(alpha > 0 && alpha < 1)) {
+    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
+  }
+  const penalty = 2 / alpha;
+  let score = upper - lower;
+  if (actual < lower) score += penalty * (lower - actual);
+  if (actual > upper) score += penalty * (actual - upper);
+  return score;
+}
+
+// src/losses/pinballLoss.ts
+function pinballLoss(actual, quantile, level) {
+  const u = actual - quantile;
+  return u >= 0 ? level * u : (level - 1) * u;
+}
+
+// src/losses/squaredError.ts
+function squaredError(actual, prediction) {
+  const e = actual - prediction;
+  return e * e;
+}
+
+// src/losses/symmetricAbsolutePercentageError.ts
+function symmetricAbsolutePercentageError(actual, prediction) {
+  const denominator = Math.abs(actual) + Math.abs(prediction);
+  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
+}
+
+// src/losses/rowLosses.ts
+var LossUnavailableError = class extends Error {
+};
+var POINT_LOSSES = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError
+};
+function computeRowLosses(panel, loss, zeroActuals, interval = null) {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === "interval") return intervalLosses(panel, interval);
+  if (loss === "pinball") {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
+      );
+    }
+    const y2 = panel.actual;
+    for (const { level, base: base2, cand: cand2 } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y2[i];
+        baseline[i] += pinballLoss(yi, base2[i], level);
+        candidate[i] += pinballLoss(yi, cand2[i], level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i] /= k;
+      candidate[i] /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level),
+      coverage: null
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows = [];
+  let included = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i];
+    if (loss === "ape" && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === "skip") {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]);
+    candidate[i] = f(yi, cand[i]);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
+}
+function intervalLosses(panel, interval) {
+  if (interval === null) {
+    throw new LossUnavailableError(
+      "the interval loss needs the two quantile levels of the interval"
+    );
+  }
+  const [lowLevel, highLevel] = interval;
+  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
+  const bl = find(panel.baseline.quantiles, lowLevel);
+  const bu = find(panel.baseline.quantiles, highLevel);
+  const cl = find(panel.candidate.quantiles, lowLevel);
+  const cu = find(panel.candidate.quantiles, highLevel);
+  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
+    throw new LossUnavailableError(
+      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
+    );
+  }
+  const alpha = 1 - (highLevel - lowLevel);
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const y = panel.actual;
+  for (let i = 0; i < n; i++) {
+    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
+    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
+  }
+  return {
+    loss: "interval",
+    baseline,
+    candidate,
+    included: null,
+    zeroActualRows: [],
+    levels: [lowLevel, highLevel],
+    coverage: {
+      nominal: highLevel - lowLevel,
+      baseline: intervalCoverage(y, bl, bu),
+      candidate: intervalCoverage(y, cl, cu)
+    }
+  };
+}
+function commonQuantiles(baseline, candidate) {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}
+
+// src/report/missingRows.ts
+var GROUPS = 50;
+function missingRowsSummary(lacking, losses) {
+  if (lacking === void 0 || lacking.series.length === 0) return null;
+  const n = lacking.series.length;
+  const lossOf = losses.loss === "pinball" || losses.loss === "interval" ? null : POINT_LOSSES[losses.loss];
+  const loss = new Float64Array(n).fill(Number.NaN);
+  let withoutLoss = 0;
+  for (let k = 0; k < n; k++) {
+    const y = lacking.actual[k];
+    const f = lacking.prediction[k];
+    const value = lossOf !== null && Number.isFinite(y) && Number.isFinite(f) ? lossOf(y, f) : Number.NaN;
+    if (Number.isFinite(value)) loss[k] = value;
+    else withoutLoss++;
+  }
+  const group2 = (keyOf, order) => {
+    const acc = /* @__PURE__ */ new Map();
+    for (let k = 0; k < n; k++) {
+      const key = keyOf(k);
+      const t = lacking.time[k];
+      const g = acc.get(key) ?? { rows: 0, lo: t, hi: t, sum: 0, m: 0 };
+      g.rows++;
+      g.lo = Math.min(g.lo, t);
+      g.hi = Math.max(g.hi, t);
+      if (Number.isFinite(loss[k])) {
+        g.sum += loss[k];
+        g.m++;
+      }
+      acc.set(key, g);
+    }
+    return [...acc.entries()].sort((a, b) => b[1].rows - a[1].rows || order(a[0], b[0])).slice(0, GROUPS).map(([key, g]) => ({
+      key,
+      rows: g.rows,
+      first: lacking.timestamps[g.lo] ?? null,
+      last: lacking.timestamps[g.hi] ?? null,
+      meanBaselineLoss: g.m === 0 ? null : g.sum / g.m
+    }));
+  };
+  const all = group2(
+    () => "all",
+    () => 0
+  )[0];
+  let sum = 0;
+  let m = 0;
+  for (let i = 0; i < losses.baseline.length; i++) {
+    if (losses.included !== null && losses.included[i] === 0) continue;
+    sum += losses.baseline[i];
+    m++;
+  }
+  return {
+    rows: n,
+    first: all.first,
+    last: all.last,
+    meanBaselineLoss: all.meanBaselineLoss,
+    meanBaselineLossCommon: m === 0 ? null : sum / m,
+    rowsWithoutLoss: withoutLoss,
+    bySeries: group2(
+      (k) => lacking.seriesNames[lacking.series[k]] ?? "",
+      (a, b) => a < b ? -1 : a > b ? 1 : 0
+    ),
+    byHorizon: group2(
+      (k) => String(lacking.horizon[k]),
+      (a, b) => Number(a) - Number(b)
+    )
+  };
+}
+
 // src/report/inputsSummary.ts
 function panelInputsSummary(panel, losses) {
   const horizons = /* @__PURE__ */ new Set();
@@ -40179,7 +41692,8 @@ function panelInputsSummary(panel, losses) {
     series: panel.seriesNames.length,
     horizons: [...horizons].sort((a, b) => a - b),
     quantileLevels: losses.levels,
-    intervalCoverage: losses.coverage
+    intervalCoverage: losses.coverage,
+    missingRows: missingRowsSummary(panel.coverage.lacking, losses)
   };
 }
 function lossFileInputsSummary(file, timestamps, kind, maxHorizon, order = { format: "auto", reason: "" }) {
@@ -40462,19 +41976,19 @@ function fluctuationTest(d, options) {
   if (windowSize < 2) return null;
   const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
   if (!(longRunVariance > 0)) return null;
-  const path7 = rollingStatistic(d, windowSize, longRunVariance);
+  const path8 = rollingStatistic(d, windowSize, longRunVariance);
   let peakWindow = 0;
   let statistic = Number.NEGATIVE_INFINITY;
-  for (let k = 0; k < path7.length; k++) {
-    const value = options.sides === "one" ? path7[k] : Math.abs(path7[k]);
+  for (let k = 0; k < path8.length; k++) {
+    const value = options.sides === "one" ? path8[k] : Math.abs(path8[k]);
     if (value > statistic) {
       statistic = value;
       peakWindow = k;
     }
   }
   const worseRuns = [];
-  for (let k = 0; k < path7.length; k++) {
-    if (!(path7[k] > criticalValue)) continue;
+  for (let k = 0; k < path8.length; k++) {
+    if (!(path8[k] > criticalValue)) continue;
     const from = k;
     const to = k + windowSize - 1;
     const last = worseRuns.at(-1);
@@ -40490,7 +42004,7 @@ function fluctuationTest(d, options) {
     worseRuns,
     lag,
     longRunVariance,
-    path: path7
+    path: path8
   };
 }
 
@@ -40639,7 +42153,7 @@ function describeTest(e, rejected, alpha, hypothesis) {
     return `${e.label}: the differential is constant, so its sign decides: ${rejected ? "evidence that" : "no evidence that"} ${hypothesis.alternative}.`;
   }
   const text2 = formatPValue(e.pValue);
-  const p = text2.startsWith("<") ? `p ${text2}` : `p = ${text2}`;
+  const p = /^[<>]/.test(text2) ? `p ${text2}` : `p = ${text2}`;
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
@@ -40709,7 +42223,7 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
     if (u <= margin) atOrBelow++;
     if (u >= margin) atOrAbove++;
   }
-  const pValue = (1 + atOrBelow) / (resamples + 1);
+  const pValue2 = (1 + atOrBelow) / (resamples + 1);
   const pAbove = (1 + atOrAbove) / (resamples + 1);
   return {
     interval: {
@@ -40718,9 +42232,9 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
       upper: reflectedSorted[resamples - kTwo]
     },
     oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
-    pValue,
+    pValue: pValue2,
     pValueBelow: pAbove,
-    pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove))
+    pValueTwoSided: Math.min(1, 2 * Math.min(pValue2, pAbove))
   };
 }
 
@@ -41439,8 +42953,8 @@ function createGeometricSampler(mean2) {
     throw new RangeError(`the mean of a geometric length must be a finite number \u2265 1, got ${mean2}`);
   }
   if (mean2 === 1) {
-    const table = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
-    return { mean: mean2, truncation: 1, table, inline: null, sample: () => 1 };
+    const table2 = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
+    return { mean: mean2, truncation: 1, table: table2, inline: null, sample: () => 1 };
   }
   const p = 1 / mean2;
   const q = 1 - p;
@@ -41566,6 +43080,24 @@ function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlock
   }
   into.count = count;
   return into;
+}
+
+// src/statistics/bootstrap/resampleHistogram.ts
+function resampleHistogram(mean2, deviations, bins = 40) {
+  if (deviations.length === 0) return null;
+  let lo2 = Number.POSITIVE_INFINITY;
+  let hi2 = Number.NEGATIVE_INFINITY;
+  for (const t of deviations) {
+    lo2 = Math.min(lo2, mean2 + t);
+    hi2 = Math.max(hi2, mean2 + t);
+  }
+  const counts = new Array(bins).fill(0);
+  const width = hi2 - lo2;
+  for (const t of deviations) {
+    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
+    counts[j]++;
+  }
+  return { lower: lo2, upper: hi2, counts };
 }
 
 // src/statistics/bootstrap/resampleDeviationsInline.ts
@@ -41944,6 +43476,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
       pValue: null,
       pValueBelow: null,
       pValueTwoSided: null,
+      distribution: null,
       notes
     };
   }
@@ -41984,6 +43517,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
     pValue: inference.pValue,
     pValueBelow: inference.pValueBelow,
     pValueTwoSided: inference.pValueTwoSided,
+    distribution: resampleHistogram(mean2, deviations),
     notes
   };
 }
@@ -42136,6 +43670,7 @@ function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,
+    distribution: result.distribution,
     notes: result.notes
   };
   return { summary: summary2, resampledDeviations: relative2.resampledDeviations };
@@ -42476,9 +44011,9 @@ function bootstrapNotRun(settings) {
 // src/stability/recentWindow.ts
 function parseRecentWindow(text2, label) {
   if (text2 === "") return null;
-  const percent = /^(\d+(?:\.\d+)?)%$/.exec(text2);
-  if (percent !== null) {
-    const share = Number(percent[1]) / 100;
+  const percent2 = /^(\d+(?:\.\d+)?)%$/.exec(text2);
+  if (percent2 !== null) {
+    const share = Number(percent2[1]) / 100;
     if (share > 0 && share < 1) return { kind: "share", share };
   } else if (/^\d+$/.test(text2)) {
     const points = Number(text2);
@@ -42623,7 +44158,7 @@ function decideAdjusted(input) {
   const rejected = p <= alpha;
   const onKeep = hypothesis.onReject === "fail" ? "pass" : "fail";
   const text2 = formatPValue(p);
-  const shown = text2.startsWith("<") ? `p ${text2}` : `p = ${text2}`;
+  const shown = /^[<>]/.test(text2) ? `p ${text2}` : `p = ${text2}`;
   const reasons = [
     `${name} Diebold\u2013Mariano ${shown} ${rejected ? "\u2264" : ">"} \u03B1 = ${alpha}: ${rejected ? "evidence" : "no evidence"} that ${hypothesis.alternative}.`
   ];
@@ -42646,201 +44181,6 @@ function firstOversizedLoss(values, included = null) {
   return -1;
 }
 
-// src/losses/absoluteError.ts
-function absoluteError(actual, prediction) {
-  return Math.abs(actual - prediction);
-}
-
-// src/losses/absolutePercentageError.ts
-function absolutePercentageError(actual, prediction) {
-  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
-}
-
-// src/losses/intervalCoverage.ts
-function intervalCoverage(actual, lower, upper) {
-  const n = actual.length;
-  if (lower.length !== n || upper.length !== n) {
-    throw new RangeError(
-      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
-    );
-  }
-  if (n === 0) return null;
-  let inside = 0;
-  for (let i = 0; i < n; i++) {
-    const y = actual[i];
-    if (lower[i] <= y && y <= upper[i]) inside++;
-  }
-  return inside / n;
-}
-
-// src/losses/intervalScore.ts
-function intervalScore(actual, lower, upper, alpha) {
-  if (!(alpha > 0 && alpha < 1)) {
-    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
-  }
-  const penalty = 2 / alpha;
-  let score = upper - lower;
-  if (actual < lower) score += penalty * (lower - actual);
-  if (actual > upper) score += penalty * (actual - upper);
-  return score;
-}
-
-// src/losses/pinballLoss.ts
-function pinballLoss(actual, quantile, level) {
-  const u = actual - quantile;
-  return u >= 0 ? level * u : (level - 1) * u;
-}
-
-// src/losses/squaredError.ts
-function squaredError(actual, prediction) {
-  const e = actual - prediction;
-  return e * e;
-}
-
-// src/losses/symmetricAbsolutePercentageError.ts
-function symmetricAbsolutePercentageError(actual, prediction) {
-  const denominator = Math.abs(actual) + Math.abs(prediction);
-  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
-}
-
-// src/losses/rowLosses.ts
-var LossUnavailableError = class extends Error {
-};
-var POINT_LOSSES = {
-  squared: squaredError,
-  absolute: absoluteError,
-  ape: absolutePercentageError,
-  sape: symmetricAbsolutePercentageError
-};
-function computeRowLosses(panel, loss, zeroActuals, interval = null) {
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  if (loss === "interval") return intervalLosses(panel, interval);
-  if (loss === "pinball") {
-    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
-    if (pairs.length === 0) {
-      throw new LossUnavailableError(
-        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
-      );
-    }
-    const y2 = panel.actual;
-    for (const { level, base: base2, cand: cand2 } of pairs) {
-      for (let i = 0; i < n; i++) {
-        const yi = y2[i];
-        baseline[i] += pinballLoss(yi, base2[i], level);
-        candidate[i] += pinballLoss(yi, cand2[i], level);
-      }
-    }
-    const k = pairs.length;
-    for (let i = 0; i < n; i++) {
-      baseline[i] /= k;
-      candidate[i] /= k;
-    }
-    return {
-      loss,
-      baseline,
-      candidate,
-      included: null,
-      zeroActualRows: [],
-      levels: pairs.map((p) => p.level),
-      coverage: null
-    };
-  }
-  const base = panel.baseline.prediction;
-  const cand = panel.candidate.prediction;
-  if (base === null || cand === null) {
-    throw new LossUnavailableError(
-      `the ${loss} loss needs a prediction column in both baseline and candidate`
-    );
-  }
-  const f = POINT_LOSSES[loss];
-  const y = panel.actual;
-  const zeroActualRows = [];
-  let included = null;
-  for (let i = 0; i < n; i++) {
-    const yi = y[i];
-    if (loss === "ape" && yi === 0) {
-      zeroActualRows.push(i);
-      if (zeroActuals === "skip") {
-        included ??= new Uint8Array(n).fill(1);
-        included[i] = 0;
-      }
-      continue;
-    }
-    baseline[i] = f(yi, base[i]);
-    candidate[i] = f(yi, cand[i]);
-  }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
-}
-function intervalLosses(panel, interval) {
-  if (interval === null) {
-    throw new LossUnavailableError(
-      "the interval loss needs the two quantile levels of the interval"
-    );
-  }
-  const [lowLevel, highLevel] = interval;
-  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
-  const bl = find(panel.baseline.quantiles, lowLevel);
-  const bu = find(panel.baseline.quantiles, highLevel);
-  const cl = find(panel.candidate.quantiles, lowLevel);
-  const cu = find(panel.candidate.quantiles, highLevel);
-  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
-    throw new LossUnavailableError(
-      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
-    );
-  }
-  const alpha = 1 - (highLevel - lowLevel);
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const y = panel.actual;
-  for (let i = 0; i < n; i++) {
-    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
-    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
-  }
-  return {
-    loss: "interval",
-    baseline,
-    candidate,
-    included: null,
-    zeroActualRows: [],
-    levels: [lowLevel, highLevel],
-    coverage: {
-      nominal: highLevel - lowLevel,
-      baseline: intervalCoverage(y, bl, bu),
-      candidate: intervalCoverage(y, cl, cu)
-    }
-  };
-}
-function commonQuantiles(baseline, candidate) {
-  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
-  const pairs = [];
-  for (const q of baseline) {
-    const cand = byLevel.get(q.level);
-    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
-  }
-  return pairs;
-}
-
-// src/multiplicity/testFamily.ts
-function testFamily(pValues, what) {
-  const positions = [];
-  const values = [];
-  pValues.forEach((p, i) => {
-    if (p === null) return;
-    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
-      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
-    }
-    positions.push(i);
-    values.push(p);
-  });
-  return { positions, values };
-}
-function ascendingOrder(values) {
-  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
-}
-
 // src/multiplicity/benjaminiHochbergAdjust.ts
 function benjaminiHochbergAdjust(pValues) {
   const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
@@ -42853,19 +44193,6 @@ function benjaminiHochbergAdjust(pValues) {
     running = Math.min(running, m / (i + 1) * values[k]);
     adjusted[positions[k]] = running;
   }
-  return adjusted;
-}
-
-// src/multiplicity/holmAdjust.ts
-function holmAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "holmAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  let running = 0;
-  ascendingOrder(values).forEach((k, i) => {
-    running = Math.max(running, Math.min(1, (m - i) * values[k]));
-    adjusted[positions[k]] = running;
-  });
   return adjusted;
 }
 
@@ -43076,17 +44403,21 @@ function evaluatePanel(panel, settings, extras = {}) {
 function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
   const k = panel.seriesNames.length;
   const rowsOf = groupRows(panel.series);
+  const plain = hypothesisFor("no-regression", 0, "absolute");
+  const upper = [];
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
+    const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
+    upper.push(dm.smallSample?.pValue ?? dm.pValue);
     return compareLossSeries(series, scope("all", name), hypothesis, settings, {
       bootstrap: false
     });
   });
   const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
-  const upper = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
-  const policyP = hypothesis.rejectWhen === "above" ? worseP : betterP;
+  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const policyP = hypothesis.rejectWhen === "above" ? adjust(tested) : adjust(tested.map((p) => p === null ? null : 1 - p));
   let worse = 0;
   let better = 0;
   const comparisons = raw.map((c, j) => {
@@ -43108,7 +44439,8 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
       reasons: decision.reasons,
       rejected: { dieboldMariano: decision.rejected, bootstrap: null },
       adjustedPValue: policyP[j] ?? null,
-      direction
+      direction,
+      directionPValue: direction === "better" ? b : w
     });
   });
   const top = comparisons.filter((c) => c.direction === "worse").sort(
@@ -43275,8 +44607,8 @@ function checkExactPredictions(panel) {
   const flagged = (mine, share, other) => mine.count >= EXACT_RULE.MIN_ROWS && share - other >= EXACT_RULE.MIN_SHARE_GAP && share >= EXACT_RULE.RATIO * other;
   const flagB = flagged(exactB, shareB, shareC);
   const flagC = flagged(exactC, shareC, shareB);
-  const pct = (x) => `${(x * 100).toFixed(2)}%`;
-  const shares = `candidate ${exactC.count} (${pct(shareC)}), baseline ${exactB.count} (${pct(shareB)})`;
+  const pct2 = (x) => `${(x * 100).toFixed(2)}%`;
+  const shares = `candidate ${exactC.count} (${pct2(shareC)}), baseline ${exactB.count} (${pct2(shareB)})`;
   let count = 0;
   let examples = [];
   let summary2 = `rows where the prediction equals the actual (to 1e-9 relative), of ${n}: ${shares}; no model stands out`;
@@ -43737,14 +45069,14 @@ function timeSpans(b, c, kind) {
 }
 
 // src/integrity/rowKey.ts
-function describeTableRow(table, i) {
+function describeTableRow(table2, i) {
   const parts = [];
-  if (table.series !== null) parts.push(`series=${table.series.labels[table.series.ids[i]]}`);
-  parts.push(`timestamp=${table.timestamp.labels[table.timestamp.ids[i]]}`);
-  if (table.horizon !== null) parts.push(`horizon=${table.horizon.values[i]}`);
-  if (table.origin !== null) parts.push(`origin=${table.origin.labels[table.origin.ids[i]]}`);
-  if (table.path !== null) parts.push(`path=${table.path.labels[table.path.ids[i]]}`);
-  return `${table.summary.role} line ${table.lines[i]}: ${parts.join(" ")}`;
+  if (table2.series !== null) parts.push(`series=${table2.series.labels[table2.series.ids[i]]}`);
+  parts.push(`timestamp=${table2.timestamp.labels[table2.timestamp.ids[i]]}`);
+  if (table2.horizon !== null) parts.push(`horizon=${table2.horizon.values[i]}`);
+  if (table2.origin !== null) parts.push(`origin=${table2.origin.labels[table2.origin.ids[i]]}`);
+  if (table2.path !== null) parts.push(`path=${table2.path.labels[table2.path.ids[i]]}`);
+  return `${table2.summary.role} line ${table2.lines[i]}: ${parts.join(" ")}`;
 }
 
 // src/integrity/rowChecks.ts
@@ -43783,25 +45115,25 @@ function checkRows(input) {
   else if (f === null) notRun.push({ id: "horizon-steps", reason: input.frequencyReason });
   const countSteps = hasHorizon && f !== null;
   let rows = 0;
-  for (const table of tables) {
-    const times = timePointsOf(table.timestamp.labels, kind);
-    const origins = timePointsOf(table.origin.labels, kind);
-    const tIds = table.timestamp.ids;
-    const oIds = table.origin.ids;
-    const h = table.horizon?.values;
-    rows += table.size;
-    for (let i = 0; i < table.size; i++) {
+  for (const table2 of tables) {
+    const times = timePointsOf(table2.timestamp.labels, kind);
+    const origins = timePointsOf(table2.origin.labels, kind);
+    const tIds = table2.timestamp.ids;
+    const oIds = table2.origin.ids;
+    const h = table2.horizon?.values;
+    rows += table2.size;
+    for (let i = 0; i < table2.size; i++) {
       const t = times[tIds[i]];
       const o = origins[oIds[i]];
-      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table, i));
+      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table2, i));
       else if (countSteps && stepsAhead(o, t, f) !== h[i]) {
         horizon.add(() => {
           const steps = stepsAhead(o, t, f);
-          return `${describeTableRow(table, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
+          return `${describeTableRow(table2, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
         });
       }
       if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
-        afterActuals.add(() => describeTableRow(table, i));
+        afterActuals.add(() => describeTableRow(table2, i));
       }
     }
   }
@@ -43955,8 +45287,8 @@ function readableKind(kind, lists) {
 function lastTime(tables, kind) {
   if (kind === "text") return null;
   let best = null;
-  for (const table of tables) {
-    for (const label of table.timestamp.labels) {
+  for (const table2 of tables) {
+    for (const label of table2.timestamp.labels) {
       const point = toTimePoint(label, kind);
       if (point !== null && (best === null || compareTimePoints(point, best.point) > 0)) {
         best = { point, label };
@@ -44049,17 +45381,6 @@ function checkDistinctNames(mapping, source = "--columns") {
 }
 function isRole(text2) {
   return COLUMN_ROLES.includes(text2);
-}
-
-// src/reading/inputFormat.ts
-var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
-var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
-function delimiterFor(name, tsv) {
-  if (name === "auto") return tsv ? "	" : ",";
-  return name === "tab" ? "	" : name;
-}
-function delimiterLabel(delimiter3) {
-  return delimiter3 === "	" ? "tab" : `"${delimiter3}"`;
 }
 
 // src/reading/tokenizer.ts
@@ -44675,32 +45996,32 @@ function parseFloat16(bytes) {
 }
 
 // node_modules/hyparquet/src/schema.js
-function schemaTree(schema, rootIndex, path7) {
+function schemaTree(schema, rootIndex, path8) {
   const element = schema[rootIndex];
   const children = [];
   let count = 1;
   if (element.num_children) {
     while (children.length < element.num_children) {
       const childElement = schema[rootIndex + count];
-      const child2 = schemaTree(schema, rootIndex + count, [...path7, childElement.name]);
+      const child2 = schemaTree(schema, rootIndex + count, [...path8, childElement.name]);
       count += child2.count;
       children.push(child2);
     }
   }
-  return { count, element, children, path: path7 };
+  return { count, element, children, path: path8 };
 }
 function getSchemaPath(schema, name) {
   return getTreePath(schemaTree(schema, 0, []), name);
 }
 function getTreePath(tree, name) {
-  const path7 = [tree];
+  const path8 = [tree];
   for (const part of name) {
     const child2 = tree.children.find((child3) => child3.element.name === part);
     if (!child2) throw new Error(`parquet schema element not found: ${name}`);
-    path7.push(child2);
+    path8.push(child2);
     tree = child2;
   }
-  return path7;
+  return path8;
 }
 function getPhysicalColumns(schemaTree2) {
   const columns = [];
@@ -45185,13 +46506,13 @@ var PRIME5 = 0x27d4eb2f165667c5n;
 function rotl64(x, r) {
   return (x << r | x >> 64n - r) & MASK;
 }
-function round(acc, val) {
+function round2(acc, val) {
   acc = acc + val * PRIME2 & MASK;
   acc = rotl64(acc, 31n);
   return acc * PRIME1 & MASK;
 }
 function mergeRound(acc, val) {
-  acc ^= round(0n, val);
+  acc ^= round2(0n, val);
   return acc * PRIME1 + PRIME4 & MASK;
 }
 function xxhash64(input, seed = 0n) {
@@ -45205,13 +46526,13 @@ function xxhash64(input, seed = 0n) {
     let v3 = seed;
     let v4 = seed - PRIME1 & MASK;
     while (offset + 32 <= len) {
-      v1 = round(v1, view.getBigUint64(offset, true));
+      v1 = round2(v1, view.getBigUint64(offset, true));
       offset += 8;
-      v2 = round(v2, view.getBigUint64(offset, true));
+      v2 = round2(v2, view.getBigUint64(offset, true));
       offset += 8;
-      v3 = round(v3, view.getBigUint64(offset, true));
+      v3 = round2(v3, view.getBigUint64(offset, true));
       offset += 8;
-      v4 = round(v4, view.getBigUint64(offset, true));
+      v4 = round2(v4, view.getBigUint64(offset, true));
       offset += 8;
     }
     h64 = rotl64(v1, 1n) + rotl64(v2, 7n) + rotl64(v3, 12n) + rotl64(v4, 18n) & MASK;
@@ -45224,7 +46545,7 @@ function xxhash64(input, seed = 0n) {
   }
   h64 = h64 + BigInt(len) & MASK;
   while (offset + 8 <= len) {
-    h64 ^= round(0n, view.getBigUint64(offset, true));
+    h64 ^= round2(0n, view.getBigUint64(offset, true));
     h64 = rotl64(h64, 27n) * PRIME1 + PRIME4 & MASK;
     offset += 8;
   }
@@ -45438,7 +46759,7 @@ function pathsNeededForFilter(filter) {
   return [...new Set(paths)];
 }
 function columnsNeededForFilter(filter) {
-  return [...new Set(pathsNeededForFilter(filter).map((path7) => path7.split(".")[0]))];
+  return [...new Set(pathsNeededForFilter(filter).map((path8) => path8.split(".")[0]))];
 }
 function matchFilter(record2, filter, strict = true) {
   if ("$and" in filter && Array.isArray(filter.$and)) {
@@ -45643,9 +46964,9 @@ function unionRanges(a, b) {
   }
   return out;
 }
-function resolve2(record2, path7) {
+function resolve2(record2, path8) {
   let value = record2;
-  for (const part of path7.split(".")) {
+  for (const part of path8.split(".")) {
     value = value?.[part];
   }
   return value;
@@ -46305,7 +47626,7 @@ function assembleLists(output, definitionLevels, repetitionLevels, values, schem
   return output;
 }
 function assembleNested(subcolumnData, schema, parsers, depth = 0) {
-  const path7 = schema.path.join(".");
+  const path8 = schema.path.join(".");
   const optional = schema.element.repetition_type === "OPTIONAL";
   const nextDepth = optional ? depth + 1 : depth;
   if (isListLike(schema)) {
@@ -46320,7 +47641,7 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
     const values = subcolumnData.get(subcolumn);
     if (!values) throw new Error("parquet list column missing values");
     if (optional) flattenAtDepth(values, depth);
-    subcolumnData.set(path7, values);
+    subcolumnData.set(path8, values);
     subcolumnData.delete(subcolumn);
     return;
   }
@@ -46328,8 +47649,8 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
     const mapName = schema.children[0].element.name;
     assembleNested(subcolumnData, schema.children[0].children[0], parsers, nextDepth + 1);
     assembleNested(subcolumnData, schema.children[0].children[1], parsers, nextDepth + 1);
-    const keys = subcolumnData.get(`${path7}.${mapName}.key`);
-    const values = subcolumnData.get(`${path7}.${mapName}.value`);
+    const keys = subcolumnData.get(`${path8}.${mapName}.key`);
+    const values = subcolumnData.get(`${path8}.${mapName}.value`);
     if (!keys) throw new Error("parquet map column missing keys");
     if (!values) throw new Error("parquet map column missing values");
     if (keys.length !== values.length) {
@@ -46337,9 +47658,9 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
     }
     const out = assembleMaps(keys, values, nextDepth);
     if (optional) flattenAtDepth(out, depth);
-    subcolumnData.delete(`${path7}.${mapName}.key`);
-    subcolumnData.delete(`${path7}.${mapName}.value`);
-    subcolumnData.set(path7, out);
+    subcolumnData.delete(`${path8}.${mapName}.key`);
+    subcolumnData.delete(`${path8}.${mapName}.value`);
+    subcolumnData.set(path8, out);
     return;
   }
   if (schema.children.length) {
@@ -46359,7 +47680,7 @@ function assembleNested(subcolumnData, schema, parsers, depth = 0) {
       inverted = decodeVariantColumn(inverted, parsers);
     }
     if (optional) flattenAtDepth(inverted, depth);
-    subcolumnData.set(path7, inverted);
+    subcolumnData.set(path8, inverted);
   }
 }
 function flattenAtDepth(arr, depth) {
@@ -47884,8 +49205,8 @@ var rhu = function(dat, bt) {
   for (i = 0; i < wc; ++i) {
     var bits2 = hw[i];
     if (bits2) {
-      var code = ri[bits2];
-      fill(syms, i, code, ri[bits2] = code + (1 << mb - bits2));
+      var code2 = ri[bits2];
+      fill(syms, i, code2, ri[bits2] = code2 + (1 << mb - bits2));
     }
   }
   return [bt, {
@@ -48480,10 +49801,10 @@ function getNextKey(key, len) {
   }
   return (key & step - 1) + step;
 }
-function replicateValue(table, i, step, end, code) {
+function replicateValue(table2, i, step, end, code2) {
   do {
     end -= step;
-    table[i + end] = new HuffmanCode(code.bits, code.value);
+    table2[i + end] = new HuffmanCode(code2.bits, code2.value);
   } while (end > 0);
 }
 function nextTableBitSize(count, len, root_bits) {
@@ -48496,8 +49817,8 @@ function nextTableBitSize(count, len, root_bits) {
   }
   return len - root_bits;
 }
-function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_lengths_size) {
-  const start_table = table;
+function buildHuffmanTable(root_table, table2, root_bits, code_lengths, code_lengths_size) {
+  const start_table = table2;
   const count = new Int32Array(MAX_LENGTH + 1);
   const offset = new Int32Array(MAX_LENGTH + 1);
   const sorted = new Int32Array(code_lengths_size);
@@ -48518,7 +49839,7 @@ function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_leng
   let total_size = table_size;
   if (offset[MAX_LENGTH] === 1) {
     for (let key2 = 0; key2 < total_size; ++key2) {
-      root_table[table + key2] = new HuffmanCode(0, sorted[0] & 65535);
+      root_table[table2 + key2] = new HuffmanCode(0, sorted[0] & 65535);
     }
     return total_size;
   }
@@ -48526,8 +49847,8 @@ function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_leng
   let symbol = 0;
   for (let len = 1, step = 2; len <= root_bits; ++len, step <<= 1) {
     for (; count[len] > 0; --count[len]) {
-      const code = new HuffmanCode(len & 255, sorted[symbol++] & 65535);
-      replicateValue(root_table, table + key, step, table_size, code);
+      const code2 = new HuffmanCode(len & 255, sorted[symbol++] & 65535);
+      replicateValue(root_table, table2 + key, step, table_size, code2);
       key = getNextKey(key, len);
     }
   }
@@ -48536,21 +49857,21 @@ function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_leng
   for (let len = root_bits + 1, step = 2; len <= MAX_LENGTH; ++len, step <<= 1) {
     for (; count[len] > 0; --count[len]) {
       if ((key & mask) !== low) {
-        table += table_size;
+        table2 += table_size;
         table_bits = nextTableBitSize(count, len, root_bits);
         table_size = 1 << table_bits;
         total_size += table_size;
         low = key & mask;
-        root_table[start_table + low] = new HuffmanCode(table_bits + root_bits & 255, table - start_table - low & 65535);
+        root_table[start_table + low] = new HuffmanCode(table_bits + root_bits & 255, table2 - start_table - low & 65535);
       }
-      const code = new HuffmanCode(len - root_bits & 255, sorted[symbol++] & 65535);
-      replicateValue(root_table, table + (key >> root_bits), step, table_size, code);
+      const code2 = new HuffmanCode(len - root_bits & 255, sorted[symbol++] & 65535);
+      replicateValue(root_table, table2 + (key >> root_bits), step, table_size, code2);
       key = getNextKey(key, len);
     }
   }
   return total_size;
 }
-function readHuffmanCode(alphabet_size, tables, table, br) {
+function readHuffmanCode(alphabet_size, tables, table2, br) {
   const code_lengths = new Uint8Array(alphabet_size);
   br.readMoreInput();
   const simple_code_or_skip = br.readBits(2);
@@ -48633,21 +49954,21 @@ function readHuffmanCode(alphabet_size, tables, table, br) {
       throw new Error("[ReadHuffmanCode] invalid num_codes or space");
     readHuffmanCodeLengths(code_length_code_lengths, alphabet_size, code_lengths, br);
   }
-  const table_size = buildHuffmanTable(tables, table, HUFFMAN_TABLE_BITS, code_lengths, alphabet_size);
+  const table_size = buildHuffmanTable(tables, table2, HUFFMAN_TABLE_BITS, code_lengths, alphabet_size);
   if (!table_size) throw new Error("brotli BuildHuffmanTable failed");
   return table_size;
 }
-function readSymbol(table, index, br) {
+function readSymbol(table2, index, br) {
   br.fillBitWindow();
   index += br.val_ >>> br.bit_pos_ & HUFFMAN_TABLE_MASK;
-  const nbits = table[index].bits - HUFFMAN_TABLE_BITS;
+  const nbits = table2[index].bits - HUFFMAN_TABLE_BITS;
   if (nbits > 0) {
     br.bit_pos_ += HUFFMAN_TABLE_BITS;
-    index += table[index].value;
+    index += table2[index].value;
     index += br.val_ >>> br.bit_pos_ & (1 << nbits) - 1;
   }
-  br.bit_pos_ += table[index].bits;
-  return table[index].value;
+  br.bit_pos_ += table2[index].bits;
+  return table2[index].value;
 }
 function readHuffmanCodeLengths(code_length_code_lengths, num_symbols, code_lengths, br) {
   let symbol = 0;
@@ -48655,17 +49976,17 @@ function readHuffmanCodeLengths(code_length_code_lengths, num_symbols, code_leng
   let repeat = 0;
   let repeat_code_len = 0;
   let space = 32768;
-  const table = [];
+  const table2 = [];
   for (let i = 0; i < 32; i++)
-    table.push(new HuffmanCode(0, 0));
-  buildHuffmanTable(table, 0, 5, code_length_code_lengths, CODE_LENGTH_CODES);
+    table2.push(new HuffmanCode(0, 0));
+  buildHuffmanTable(table2, 0, 5, code_length_code_lengths, CODE_LENGTH_CODES);
   while (symbol < num_symbols && space > 0) {
     let p = 0;
     br.readMoreInput();
     br.fillBitWindow();
     p += br.val_ >>> br.bit_pos_ & 31;
-    br.bit_pos_ += table[p].bits;
-    const code_len = table[p].value & 255;
+    br.bit_pos_ += table2[p].bits;
+    const code_len = table2[p].value & 255;
     if (code_len < kCodeLengthRepeatCode) {
       repeat = 0;
       code_lengths[symbol++] = code_len;
@@ -49119,9 +50440,9 @@ function jumpToByteBoundary(br) {
   const new_bit_pos = br.bit_pos_ + 7 & ~7;
   return !br.readBits(new_bit_pos - br.bit_pos_);
 }
-function readBlockLength(table, index, br) {
-  const code = readSymbol(table, index, br);
-  const { offset, nbits } = kBlockLengthPrefixCode[code];
+function readBlockLength(table2, index, br) {
+  const code2 = readSymbol(table2, index, br);
+  const { offset, nbits } = kBlockLengthPrefixCode[code2];
   return offset + br.readBits(nbits);
 }
 
@@ -50961,19 +52282,19 @@ function decodeContextMap(context_map_size, br) {
   if (use_rle_for_zeros) {
     max_run_length_prefix = br.readBits(4) + 1;
   }
-  const table = [];
+  const table2 = [];
   for (let i = 0; i < HUFFMAN_MAX_TABLE_SIZE; i++) {
-    table[i] = new HuffmanCode(0, 0);
+    table2[i] = new HuffmanCode(0, 0);
   }
-  readHuffmanCode(num_htrees + max_run_length_prefix, table, 0, br);
+  readHuffmanCode(num_htrees + max_run_length_prefix, table2, 0, br);
   for (let i = 0; i < context_map_size; ) {
     br.readMoreInput();
-    const code = readSymbol(table, 0, br);
-    if (code === 0) {
+    const code2 = readSymbol(table2, 0, br);
+    if (code2 === 0) {
       context_map[i] = 0;
       i++;
-    } else if (code <= max_run_length_prefix) {
-      let reps = 1 + (1 << code) + br.readBits(code);
+    } else if (code2 <= max_run_length_prefix) {
+      let reps = 1 + (1 << code2) + br.readBits(code2);
       while (--reps) {
         if (i >= context_map_size) {
           throw new Error("[DecodeContextMap] i >= context_map_size");
@@ -50982,7 +52303,7 @@ function decodeContextMap(context_map_size, br) {
         i++;
       }
     } else {
-      context_map[i] = code - max_run_length_prefix;
+      context_map[i] = code2 - max_run_length_prefix;
       i++;
     }
   }
@@ -51165,11 +52486,11 @@ function gunzip(input, output, inputIndex = 0, outputIndex = 0) {
     const lms = (1 << lengthBits) - 1;
     const dms = (1 << distBits) - 1;
     for (; ; ) {
-      const code = lengthMap[bits16(input, pos) & lms];
-      const sym = code >> 4;
-      pos += code & 15;
+      const code2 = lengthMap[bits16(input, pos) & lms];
+      const sym = code2 >> 4;
+      pos += code2 & 15;
       if (pos > totalBits) throw new Error("unexpected EOF");
-      if (!code) throw new Error("invalid length/literal");
+      if (!code2) throw new Error("invalid length/literal");
       if (sym < 256) out[outputIndex++] = sym;
       else if (sym === 256) {
         lengthMap = void 0;
@@ -52746,13 +54067,13 @@ function brotli(input, output) {
   }
   output.write(ringbuffer, pos & ringbuffer_mask);
 }
-function translateShortCodes(code, ringbuffer, index) {
-  if (code < NUM_DISTANCE_SHORT_CODES) {
-    index += kDistanceShortCodeIndexOffset[code];
+function translateShortCodes(code2, ringbuffer, index) {
+  if (code2 < NUM_DISTANCE_SHORT_CODES) {
+    index += kDistanceShortCodeIndexOffset[code2];
     index &= 3;
-    return ringbuffer[index] + kDistanceShortCodeValueOffset[code];
+    return ringbuffer[index] + kDistanceShortCodeValueOffset[code2];
   } else {
-    return code - NUM_DISTANCE_SHORT_CODES + 1;
+    return code2 - NUM_DISTANCE_SHORT_CODES + 1;
   }
 }
 
@@ -52826,17 +54147,17 @@ var compressors = {
 
 // src/reading/streamParquetFile.ts
 var MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
-async function streamParquetFile(path7, reader, onProgress) {
+async function streamParquetFile(path8, reader, onProgress) {
   let size;
   try {
-    const info2 = await stat2(path7);
-    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
+    const info2 = await stat2(path8);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
     size = info2.size;
   } catch (error2) {
-    throw fileError(error2, path7);
+    throw fileError(error2, path8);
   }
-  const handle = await open2(path7, "r").catch((error2) => {
-    throw fileError(error2, path7);
+  const handle = await open2(path8, "r").catch((error2) => {
+    throw fileError(error2, path8);
   });
   try {
     const file = fileBuffer(handle, size);
@@ -52844,9 +54165,9 @@ async function streamParquetFile(path7, reader, onProgress) {
     try {
       metadata = await parquetMetadataAsync(file);
     } catch (error2) {
-      throw notParquet(error2, path7);
+      throw notParquet(error2, path8);
     }
-    const names = topLevelColumns(metadata, path7);
+    const names = topLevelColumns(metadata, path8);
     reader.record([...names], names.length, 1);
     const used = reader.usedColumns;
     const usedNames = used.map((i) => names[i]);
@@ -52877,12 +54198,12 @@ async function streamParquetFile(path7, reader, onProgress) {
           }
         });
       } catch (error2) {
-        throw notParquet(error2, path7);
+        throw notParquet(error2, path8);
       }
       for (let r = 0; r < groupRows2; r++) {
         const line = groupStart + r + 2;
         for (let k = 0; k < used.length; k++) {
-          fields[used[k]] = fieldValue(columns[k][r], path7, line, usedNames[k]);
+          fields[used[k]] = fieldValue(columns[k][r], path8, line, usedNames[k]);
         }
         reader.record(fields, names.length, line);
       }
@@ -52892,7 +54213,7 @@ async function streamParquetFile(path7, reader, onProgress) {
   } finally {
     await handle.close();
   }
-  return sha256Of(path7);
+  return sha256Of(path8);
 }
 function fileBuffer(handle, size) {
   return {
@@ -52911,7 +54232,7 @@ function fileBuffer(handle, size) {
     }
   };
 }
-function topLevelColumns(metadata, path7) {
+function topLevelColumns(metadata, path8) {
   const schema = metadata.schema;
   const root = schema[0];
   const names = [];
@@ -52922,7 +54243,7 @@ function topLevelColumns(metadata, path7) {
     if ((element.num_children ?? 0) > 0) {
       throw new InputError(
         `the Parquet column "${echo(element.name)}" is nested (a list, struct or map); forecast files need flat columns`,
-        { file: path7, column: element.name }
+        { file: path8, column: element.name }
       );
     }
     names.push(element.name);
@@ -52951,7 +54272,7 @@ function isoTimestamp(count, digits) {
   const f = fraction === 0n ? "" : `.${fraction.toString().padStart(digits, "0").replace(/0+$/, "")}`;
   return `${text2}${f}Z`;
 }
-function fieldValue(value, path7, line, column) {
+function fieldValue(value, path8, line, column) {
   switch (typeof value) {
     case "string":
     case "number":
@@ -52967,39 +54288,39 @@ function fieldValue(value, path7, line, column) {
       if (value instanceof Date) return value.toISOString();
       if (value instanceof Uint8Array) {
         throw new InputError("a binary Parquet value that is not UTF-8 text", {
-          file: path7,
+          file: path8,
           line,
           column
         });
       }
       throw new InputError(
         "a Parquet value that is neither a number nor text (binary or nested data)",
-        { file: path7, line, column }
+        { file: path8, line, column }
       );
     default:
-      throw new InputError("a Parquet value of an unsupported type", { file: path7, line, column });
+      throw new InputError("a Parquet value of an unsupported type", { file: path8, line, column });
   }
 }
-async function sha256Of(path7) {
+async function sha256Of(path8) {
   const hash = createHash("sha256");
-  await pipeline(createReadStream(path7, { highWaterMark: 1 << 20 }), async (source) => {
+  await pipeline(createReadStream(path8, { highWaterMark: 1 << 20 }), async (source) => {
     for await (const chunk of source) hash.update(chunk);
   });
   return `sha256:${hash.digest("hex")}`;
 }
-function notParquet(error2, path7) {
+function notParquet(error2, path8) {
   if (error2 instanceof InputError) return error2;
   const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path7 });
+  return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path8 });
 }
-function fileError(error2, path7) {
+function fileError(error2, path8) {
   if (error2 instanceof InputError) return error2;
-  const code = error2?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path7 });
+  const code2 = error2?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path8 });
   const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+  return new InputError(`cannot read the file: ${message}`, { file: path8 });
 }
 
 // src/reading/streamTextFile.ts
@@ -53010,14 +54331,14 @@ import { pipeline as pipeline2 } from "node:stream/promises";
 import { TextDecoder as TextDecoder2 } from "node:util";
 import { createGunzip } from "node:zlib";
 var CHUNK_BYTES = 1 << 20;
-async function streamTextFile(path7, gzip, sink, onProgress) {
+async function streamTextFile(path8, gzip, sink, onProgress) {
   let totalBytes;
   try {
-    const info2 = await stat3(path7);
-    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
+    const info2 = await stat3(path8);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
     totalBytes = info2.size;
   } catch (error2) {
-    throw asInputError(error2, path7);
+    throw asInputError(error2, path8);
   }
   const hash = createHash2("sha256");
   const decoder4 = new TextDecoder2("utf-8", { fatal: true });
@@ -53034,12 +54355,12 @@ async function streamTextFile(path7, gzip, sink, onProgress) {
   const consume = async (source) => {
     for await (const chunk of source) {
       const nul = chunk.indexOf(0);
-      if (nul >= 0) throw notText(chunk, nul, newlines, path7, "a NUL byte");
+      if (nul >= 0) throw notText(chunk, nul, newlines, path8, "a NUL byte");
       let text2;
       try {
         text2 = decoder4.decode(chunk, { stream: true });
       } catch {
-        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path7, "bytes that are not UTF-8");
+        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path8, "bytes that are not UTF-8");
       }
       newlines += countByte(chunk, 10);
       sink.push(text2);
@@ -53049,20 +54370,20 @@ async function streamTextFile(path7, gzip, sink, onProgress) {
     } catch {
       throw new InputError(
         `the file is not valid UTF-8 text: it ends inside a multi-byte character (line ${newlines + 1})`,
-        { file: path7, line: newlines + 1 }
+        { file: path8, line: newlines + 1 }
       );
     }
   };
   try {
-    const raw = createReadStream2(path7, { highWaterMark: CHUNK_BYTES });
+    const raw = createReadStream2(path8, { highWaterMark: CHUNK_BYTES });
     if (gzip) await pipeline2(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
     else await pipeline2(raw, tap, consume);
   } catch (error2) {
-    throw asInputError(error2, path7);
+    throw asInputError(error2, path8);
   }
   return `sha256:${hash.digest("hex")}`;
 }
-function notText(chunk, at, before, path7, what) {
+function notText(chunk, at, before, path8, what) {
   const line = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
   const b0 = chunk[0];
   const b1 = chunk[1];
@@ -53070,7 +54391,7 @@ function notText(chunk, at, before, path7, what) {
   const byte = chunk[at];
   const hint = utf16 ? "it looks like UTF-16: convert it, e.g. iconv -f UTF-16 -t UTF-8" : byte !== void 0 && byte >= 128 ? `byte 0x${byte.toString(16).toUpperCase()} suggests Latin-1 or Windows-1252: convert it, e.g. iconv -f WINDOWS-1252 -t UTF-8` : "convert it to UTF-8";
   return new InputError(`the file is not UTF-8 text: line ${line} has ${what} (${hint})`, {
-    file: path7,
+    file: path8,
     line,
     value: chunk.subarray(Math.max(0, at - 20), at + 20).toString("latin1").replace(/[^\x20-\x7e]/g, "?")
   });
@@ -53102,18 +54423,18 @@ function countByte(bytes, byte) {
   }
   return count;
 }
-function asInputError(error2, path7) {
+function asInputError(error2, path8) {
   if (error2 instanceof InputError) return error2;
-  const code = error2?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path7 });
-  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
-  if (typeof code === "string" && code.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
+  const code2 = error2?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path8 });
+  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path8 });
+  if (typeof code2 === "string" && code2.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error2.message})`, { file: path8 });
   }
   const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+  return new InputError(`cannot read the file: ${message}`, { file: path8 });
 }
 
 // src/reading/rowKeySet.ts
@@ -53170,17 +54491,17 @@ var RowKeySet = class {
   }
   insert(row) {
     const mask = this.mask;
-    const table = this.table;
+    const table2 = this.table;
     let slot = this.hash(row) & mask;
     for (; ; ) {
-      const stored = table[slot];
+      const stored = table2[slot];
       if (stored === 0) break;
       if (this.same(row, stored - 1)) return stored - 1;
       slot = slot + 1 & mask;
     }
-    table[slot] = row + 1;
+    table2[slot] = row + 1;
     this.size++;
-    if (this.size * 2 > table.length) this.grow();
+    if (this.size * 2 > table2.length) this.grow();
     return -1;
   }
   same(a, b) {
@@ -53239,8 +54560,8 @@ var ForecastTableReader = class {
   delimiter;
   decimalComma;
   keys = null;
-  constructor(path7, options) {
-    this.path = path7;
+  constructor(path8, options) {
+    this.path = path8;
     this.options = options;
     checkDistinctNames(options.columns ?? {});
     const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
@@ -53249,13 +54570,13 @@ var ForecastTableReader = class {
     if (this.decimalComma && delimiter3 === ",") {
       throw new InputError(
         'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path7 }
+        { file: path8 }
       );
     }
     this.tokenizer = new Tokenizer(
       delimiter3,
       (fields, count, line) => this.record(fields, count, line),
-      path7,
+      path8,
       options.lineLimit
     );
   }
@@ -53516,7 +54837,7 @@ function resolveHeader(names, file, line, options, delimiter3 = ",") {
   const timestamp = find(columns.timestamp, true);
   const horizon = find(columns.horizon, predictions);
   const origin = find(columns.origin, predictions);
-  const path7 = find(columns.path, predictions);
+  const path8 = find(columns.path, predictions);
   const actual = find(columns.actual, true);
   const prediction = find(columns.prediction, predictions);
   const weight = find(columns.weight, true);
@@ -53575,7 +54896,7 @@ function resolveHeader(names, file, line, options, delimiter3 = ",") {
     timestamp,
     horizon,
     origin,
-    path: path7,
+    path: path8,
     actual,
     prediction,
     weight,
@@ -53634,19 +54955,19 @@ function growFloat(array, capacity) {
 }
 
 // src/reading/readForecastFile.ts
-function formatFromPath(path7) {
-  const lower = path7.toLowerCase();
+function formatFromPath(path8) {
+  const lower = path8.toLowerCase();
   if (lower.endsWith(".parquet") || lower.endsWith(".pq"))
     return { format: "parquet", gzip: false };
   const gzip = lower.endsWith(".gz");
   const base = gzip ? lower.slice(0, -3) : lower;
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
 }
-async function readForecastFile(path7, options) {
-  const implied = formatFromPath(path7);
+async function readForecastFile(path8, options) {
+  const implied = formatFromPath(path8);
   const format = options.format ?? implied.format;
   const textFormat = format === "tsv" ? "tsv" : "csv";
-  const reader = new ForecastTableReader(path7, {
+  const reader = new ForecastTableReader(path8, {
     role: options.role,
     format: textFormat,
     delimiter: delimiterFor(options.delimiter ?? "auto", textFormat === "tsv"),
@@ -53654,7 +54975,7 @@ async function readForecastFile(path7, options) {
     ...options.columns === void 0 ? {} : { columns: options.columns },
     ...options.requireActual === void 0 ? {} : { requireActual: options.requireActual }
   });
-  const sha256 = format === "parquet" ? await streamParquetFile(path7, reader, options.onProgress) : await streamTextFile(path7, implied.gzip, reader, options.onProgress);
+  const sha256 = format === "parquet" ? await streamParquetFile(path8, reader, options.onProgress) : await streamTextFile(path8, implied.gzip, reader, options.onProgress);
   return reader.finish(sha256);
 }
 function withDialect(options) {
@@ -53665,14 +54986,14 @@ function withDialect(options) {
 }
 
 // src/reading/readFoldLayout.ts
-async function readFoldLayout(path7, format) {
-  const implied = formatFromPath(path7);
+async function readFoldLayout(path8, format) {
+  const implied = formatFromPath(path8);
   const chosen = format ?? implied.format;
   if (chosen === "parquet") {
-    throw new InputError("a fold layout file is read as CSV or TSV", { file: path7 });
+    throw new InputError("a fold layout file is read as CSV or TSV", { file: path8 });
   }
-  const reader = new FoldLayoutReader(path7, chosen);
-  await streamTextFile(path7, implied.gzip, reader);
+  const reader = new FoldLayoutReader(path8, chosen);
+  await streamTextFile(path8, implied.gzip, reader);
   return reader.finish();
 }
 
@@ -53694,21 +55015,21 @@ var LossSeriesReader = class {
   rows = [];
   horizon = [];
   decimalComma;
-  constructor(path7, options) {
-    this.path = path7;
+  constructor(path8, options) {
+    this.path = path8;
     this.timestampName = options.timestampColumn ?? "timestamp";
     const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
     this.decimalComma = options.decimal === ",";
     if (this.decimalComma && delimiter3 === ",") {
       throw new InputError(
         'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path7 }
+        { file: path8 }
       );
     }
     this.tokenizer = new Tokenizer(
       delimiter3,
       (fields, count, line) => this.record(fields, count, line),
-      path7,
+      path8,
       options.lineLimit
     );
   }
@@ -53867,23 +55188,23 @@ var LossSeriesReader = class {
 };
 
 // src/reading/readLossSeriesFile.ts
-async function readLossSeriesFile(path7, options = {}) {
-  const implied = formatFromPath(path7);
+async function readLossSeriesFile(path8, options = {}) {
+  const implied = formatFromPath(path8);
   const format = options.format ?? implied.format;
   if (format === "parquet") {
     throw new InputError(
       "a pre-aggregated loss file is read as CSV or TSV (Parquet is read for forecast files)",
-      { file: path7 }
+      { file: path8 }
     );
   }
-  const reader = new LossSeriesReader(path7, {
+  const reader = new LossSeriesReader(path8, {
     format,
     delimiter: delimiterFor(options.delimiter ?? "auto", format === "tsv"),
     ...options.decimal === void 0 ? {} : { decimal: options.decimal },
     ...options.lineLimit === void 0 ? {} : { lineLimit: options.lineLimit },
     ...options.timestampColumn === void 0 ? {} : { timestampColumn: options.timestampColumn }
   });
-  const sha256 = await streamTextFile(path7, implied.gzip, reader, options.onProgress);
+  const sha256 = await streamTextFile(path8, implied.gzip, reader, options.onProgress);
   return reader.finish(sha256);
 }
 
@@ -53891,7 +55212,7 @@ async function readLossSeriesFile(path7, options = {}) {
 async function runComparison(settings, hooks = {}) {
   if (settings.losses !== null)
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
-  const read = (path7, role) => readForecastFile(path7, {
+  const read = (path8, role) => readForecastFile(path8, {
     role,
     columns: columnsFor(settings, role),
     ...readDialect(settings),
@@ -53930,22 +55251,22 @@ async function runComparison(settings, hooks = {}) {
   hooks.onProgress?.({ stage: "testing", fraction: 1 });
   return { report };
 }
-async function runOnLossFile(path7, settings, hooks) {
+async function runOnLossFile(path8, settings, hooks) {
   if (settings.folds !== null || settings.frequency !== "auto" || settings.embargo !== 0) {
     throw new InputError(
       "frequency, folds and embargo configure the backtest checks, which need the forecast files (baseline and candidate), not a loss file",
-      { file: path7 }
+      { file: path8 }
     );
   }
-  const table = await readLossSeriesFile(path7, {
+  const table2 = await readLossSeriesFile(path8, {
     ...readDialect(settings),
     ...settings.columns.timestamp === void 0 ? {} : { timestampColumn: settings.columns.timestamp },
     onProgress: (done, total) => hooks.onProgress?.({ stage: "reading losses", fraction: total > 0 ? done / total : 1 })
   });
-  const { series, timestamps, kind, reason, format } = orderLossSeries(table, settings.timeFormat);
+  const { series, timestamps, kind, reason, format } = orderLossSeries(table2, settings.timeFormat);
   return evaluateLossSeries(
     series,
-    { file: table.summary, timestamps, kind, order: { format, reason } },
+    { file: table2.summary, timestamps, kind, order: { format, reason } },
     settings,
     hooks.resampleRunner
   );
@@ -53954,13 +55275,13 @@ async function readHistory(settings) {
   if (settings.history === null) {
     throw new InputError("--scale seasonal-naive needs --history FILE (series, timestamp, actual)");
   }
-  const table = await readForecastFile(settings.history, {
+  const table2 = await readForecastFile(settings.history, {
     role: "actuals",
     columns: settings.columns,
     ...readDialect(settings),
     requireActual: true
   });
-  return historyBySeries(table, settings.timeFormat);
+  return historyBySeries(table2, settings.timeFormat);
 }
 function columnsFor(settings, role) {
   const own = role === "baseline" ? settings.baselineColumns : role === "candidate" ? settings.candidateColumns : {};
@@ -54496,289 +55817,6 @@ function describeFailure(error2) {
   return error2 instanceof Error ? error2.message : String(error2);
 }
 
-// src/settings/options.ts
-var ENGINE_OPTIONS = [
-  {
-    name: "baseline",
-    valueName: "FILE",
-    defaultValue: null,
-    required: true,
-    help: "predictions of the model on the main branch (CSV/TSV, optionally .gz)"
-  },
-  {
-    name: "candidate",
-    valueName: "FILE",
-    defaultValue: null,
-    required: true,
-    help: "predictions of the pull request's model"
-  },
-  {
-    name: "losses",
-    valueName: "FILE",
-    defaultValue: null,
-    help: "instead of baseline and candidate: a pre-aggregated file with timestamp, baseline_loss, candidate_loss (optional differential, rows, horizon) per time point"
-  },
-  {
-    name: "actuals",
-    valueName: "FILE",
-    defaultValue: null,
-    help: "observed values keyed by series and timestamp, when the prediction files lack an actual column"
-  },
-  {
-    name: "columns",
-    valueName: "ROLE=HEADER,\u2026",
-    defaultValue: "",
-    help: "rename columns, e.g. actual=observed,prediction=point,series=zone"
-  },
-  {
-    name: "baseline-columns",
-    valueName: "ROLE=HEADER,\u2026",
-    defaultValue: "",
-    help: "renames for the baseline file only, over --columns (two pipelines that name columns differently)"
-  },
-  {
-    name: "candidate-columns",
-    valueName: "ROLE=HEADER,\u2026",
-    defaultValue: "",
-    help: "renames for the candidate file only, over --columns"
-  },
-  {
-    name: "format",
-    defaultValue: "auto",
-    choices: INPUT_FORMATS,
-    help: "input format; auto: Parquet for .parquet, TSV for .tsv/.tsv.gz, else CSV"
-  },
-  {
-    name: "delimiter",
-    defaultValue: "auto",
-    choices: DELIMITER_NAMES,
-    help: "field separator of CSV files: auto (tab for TSV, else comma), or comma , semicolon ; pipe | tab"
-  },
-  {
-    name: "decimal",
-    defaultValue: ".",
-    choices: [".", ","],
-    help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter'
-  },
-  {
-    name: "time-format",
-    defaultValue: "auto",
-    choices: TIME_FORMAT_NAMES,
-    help: "how timestamps read: auto (all numbers or all ISO 8601, else refused), number, iso-8601, day-month-year (31/12/2026 [23:59[:59]]), month-day-year (12/31/2026 [23:59[:59]]), text-order (compare as text: 10 before 9)"
-  },
-  {
-    name: "line-limit",
-    valueName: "BYTES",
-    defaultValue: "1048576",
-    help: "longest line (and field) accepted in a CSV file, in characters; longer is refused"
-  },
-  {
-    name: "loss",
-    defaultValue: "squared",
-    choices: [...LOSS_NAMES, ...Object.keys(LOSS_ALIASES)],
-    help: "loss per row (mse = squared, mae = absolute, mape = ape): squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)"
-  },
-  {
-    name: "zero-actuals",
-    defaultValue: "error",
-    choices: ["error", "skip"],
-    help: "with ape: refuse rows whose actual is 0, or skip and count them"
-  },
-  {
-    name: "alpha",
-    valueName: "NUMBER",
-    defaultValue: "0.05",
-    help: "significance level of each one-sided test"
-  },
-  {
-    name: "margin",
-    valueName: "NUMBER|PERCENT%",
-    defaultValue: "0",
-    help: "allowed margin: with --margin-kind relative, 0.02 or 2% means the candidate may be up to 2% worse (a relative margin above 1 must be written as a percentage)"
-  },
-  {
-    name: "margin-kind",
-    defaultValue: "relative",
-    choices: ["relative", "absolute"],
-    help: "relative (fraction of the baseline loss) or absolute (loss units)"
-  },
-  {
-    name: "policy",
-    defaultValue: "no-regression",
-    choices: ["no-regression", "non-inferiority", "superiority"],
-    help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin"
-  },
-  {
-    name: "agreement",
-    defaultValue: "both",
-    choices: ["both", "either", "dm", "bootstrap"],
-    help: "which tests must reject for the decision; with both, a split verdict is a warning"
-  },
-  {
-    name: "variance",
-    defaultValue: "ewc-ar1",
-    choices: ["ewc-ar1", "ewc", "bartlett", "uniform"],
-    help: "long-run variance for Diebold\u2013Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4\xB7n^(2/3) terms), bartlett (Newey\u2013West), uniform"
-  },
-  {
-    name: "lag",
-    valueName: "auto|h-1|N",
-    defaultValue: "auto",
-    help: "HAC lag for bartlett/uniform: auto (Newey\u2013West 1994, at least h\u22121), h-1, or a number"
-  },
-  {
-    name: "block-length",
-    valueName: "auto|N",
-    defaultValue: "auto",
-    help: "expected block length of the stationary bootstrap: auto (Politis\u2013White) or a number \u2265 1"
-  },
-  { name: "resamples", valueName: "N", defaultValue: "9999", help: "bootstrap resamples" },
-  {
-    name: "seed",
-    valueName: "N",
-    defaultValue: "1729",
-    help: "seed of the bootstrap random numbers (same seed, same numbers on every machine)"
-  },
-  {
-    name: "confidence",
-    valueName: "NUMBER",
-    defaultValue: "",
-    help: "level of the intervals in the report; default 1 \u2212 2\xB7alpha (0.9 for alpha 0.05), so each end is the one-sided bound of the tests and the interval shows the decision at any margin; another level may disagree with the tests"
-  },
-  {
-    name: "min-points",
-    valueName: "N",
-    defaultValue: "30",
-    help: "fewest time points for a firm verdict (fewer: too little data)"
-  },
-  {
-    name: "short-data",
-    defaultValue: "warn",
-    choices: ["warn", "fail"],
-    help: "verdict when there are fewer time points than --min-points"
-  },
-  {
-    name: "allow-missing",
-    defaultValue: "false",
-    flag: true,
-    help: "let the gate pass although the candidate lacks rows the baseline has"
-  },
-  {
-    name: "interval",
-    valueName: "LOWER,UPPER",
-    defaultValue: "",
-    help: "with --loss interval: the two quantile levels of the central interval, e.g. 0.1,0.9 (an 80% interval)"
-  },
-  {
-    name: "pooling",
-    defaultValue: "raw",
-    choices: ["raw", "scaled"],
-    help: "pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)"
-  },
-  {
-    name: "scale",
-    defaultValue: "baseline",
-    choices: ["baseline", "seasonal-naive"],
-    help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)"
-  },
-  {
-    name: "history",
-    valueName: "FILE",
-    defaultValue: null,
-    help: "in-sample history (series, timestamp, actual) for --scale seasonal-naive"
-  },
-  {
-    name: "season",
-    valueName: "N",
-    defaultValue: "1",
-    help: "period m of the seasonal naive forecast for --scale seasonal-naive (1: naive)"
-  },
-  {
-    name: "weights",
-    defaultValue: "false",
-    flag: true,
-    help: "weight rows by the weight column when averaging losses per time point"
-  },
-  {
-    name: "adjust",
-    defaultValue: "holm",
-    choices: ["holm", "bh"],
-    help: "multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)"
-  },
-  {
-    name: "top",
-    valueName: "N",
-    defaultValue: "10",
-    help: "how many series with the largest significant regressions to list"
-  },
-  {
-    name: "recent",
-    valueName: "N|P%",
-    defaultValue: "",
-    help: "also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)"
-  },
-  {
-    name: "fluctuation-window",
-    valueName: "MU",
-    defaultValue: "0.2",
-    help: "window of the fluctuation test (Giacomini\u2013Rossi) as a fraction of the time points, 0.1 to 0.9"
-  },
-  {
-    name: "fluctuation-sides",
-    defaultValue: "one",
-    choices: ["one", "two"],
-    help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
-  },
-  {
-    name: "stability-gate",
-    defaultValue: "warn",
-    choices: ["off", "warn", "fail"],
-    help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
-  },
-  {
-    name: "frequency",
-    valueName: "auto|STEP",
-    defaultValue: "auto",
-    help: "step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, bd for business days, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps"
-  },
-  {
-    name: "folds",
-    valueName: "FILE",
-    defaultValue: null,
-    help: "fold layout (fold or path, role train|test, start, end; one row per segment) to check purging, embargo and that every row lies in its test window"
-  },
-  {
-    name: "embargo",
-    valueName: "N",
-    defaultValue: "0",
-    help: "with --folds: steps after each test window that training must also avoid"
-  },
-  {
-    name: "backtest-checks",
-    defaultValue: "enforce",
-    choices: ["enforce", "warn", "report"],
-    help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
-  },
-  {
-    name: "name",
-    valueName: "TEXT",
-    defaultValue: "",
-    help: "a name for this comparison (report title; keeps two gates apart on one pull request)"
-  },
-  {
-    name: "json",
-    valueName: "FILE",
-    defaultValue: null,
-    help: "write the JSON report to this file (- for standard output)"
-  },
-  {
-    name: "markdown",
-    valueName: "FILE",
-    defaultValue: null,
-    help: "write the Markdown report to this file (- for standard output)"
-  }
-];
-
 // src/action/names.ts
 var INPUT = {
   githubToken: "github-token",
@@ -54814,7 +55852,8 @@ var ALL_INPUTS = [...ENGINE_OPTIONS, ...ACTION_INPUTS];
 var OUTPUT = {
   verdict: "verdict",
   report: "report",
-  commentUrl: "comment-url"
+  commentUrl: "comment-url",
+  htmlReport: "html-report"
 };
 
 // src/settings/resolveSettings.ts
@@ -54929,12 +55968,13 @@ function resolveSettings(raw, label) {
     embargo: integer("embargo", 0, 1e6),
     backtestChecks: value("backtest-checks"),
     json: optional("json"),
-    markdown: optional("markdown")
+    markdown: optional("markdown"),
+    html: optional("html")
   };
 }
 function parseMargin(text2, kind, label) {
-  const percent = text2.endsWith("%");
-  const body = percent ? text2.slice(0, -1).trim() : text2;
+  const percent2 = text2.endsWith("%");
+  const body = percent2 ? text2.slice(0, -1).trim() : text2;
   const x = body === "" ? Number.NaN : Number(body);
   if (!Number.isFinite(x) || x < 0) {
     throw new InputError(
@@ -54942,7 +55982,7 @@ function parseMargin(text2, kind, label) {
       { value: text2 }
     );
   }
-  if (percent) {
+  if (percent2) {
     if (kind !== "relative") {
       throw new InputError(
         `${label("margin")} as a percentage needs ${label("margin-kind")} relative (an absolute margin is in loss units)`,
@@ -55026,7 +56066,7 @@ function readActionSettings(getInput2) {
 function compareSource(raw) {
   return { kind: "compare", settings: resolveSettings(raw, inputLabel) };
 }
-function reportFileSource(path7, raw) {
+function reportFileSource(path8, raw) {
   for (const name of ["baseline", "candidate", "actuals"]) {
     if ((raw[name] ?? "").trim() !== "") {
       throw new InputError(
@@ -55040,10 +56080,11 @@ function reportFileSource(path7, raw) {
   };
   return {
     kind: "report-file",
-    path: path7,
+    path: path8,
     name: (raw.name ?? "").trim(),
     json: optional("json"),
-    markdown: optional("markdown")
+    markdown: optional("markdown"),
+    html: optional("html")
   };
 }
 function readBoolean(name, text2, fallback) {
@@ -55143,9 +56184,9 @@ function parseUntrustedReport(text2, source) {
   return readReport(new Reader(parsed, "$", source));
 }
 var Reader = class _Reader {
-  constructor(value, path7, source) {
+  constructor(value, path8, source) {
     this.value = value;
-    this.path = path7;
+    this.path = path8;
     this.source = source;
   }
   value;
@@ -55335,7 +56376,8 @@ function readComparison(r) {
       bootstrap: rejected.field("bootstrap").booleanOrNull()
     },
     ...r.field("adjustedPValue").value === void 0 ? {} : { adjustedPValue: r.field("adjustedPValue").numberOrNull() },
-    ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) }
+    ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) },
+    ...r.field("directionPValue").value === void 0 ? {} : { directionPValue: r.field("directionPValue").numberOrNull() }
   };
 }
 var CHECK_MODES = ["enforce", "warn", "report"];
@@ -55474,7 +56516,21 @@ function readBootstrap(r) {
     pValue: r.field("pValue").numberOrNull(),
     pValueTwoSided: r.field("pValueTwoSided").numberOrNull(),
     decisionPValue: r.field("decisionPValue").numberOrNull(),
+    ...r.field("distribution").value === void 0 ? {} : { distribution: readHistogram(r.field("distribution")) },
     notes: r.field("notes").strings()
+  };
+}
+var MAX_HISTOGRAM_BINS = 200;
+function readHistogram(r) {
+  if (r.value === null) return null;
+  const counts = r.field("counts").items();
+  if (counts.length === 0 || counts.length > MAX_HISTOGRAM_BINS) {
+    r.field("counts").fail(`an array of 1 to ${MAX_HISTOGRAM_BINS} counts`);
+  }
+  return {
+    lower: r.field("lower").number(),
+    upper: r.field("upper").number(),
+    counts: counts.map((c) => c.integer())
   };
 }
 function readFile(r) {
@@ -55517,7 +56573,29 @@ function readInputs(r) {
     series: r.field("series").integer(),
     horizons: r.field("horizons").items().map((h) => h.integer(1)),
     quantileLevels: r.field("quantileLevels").items().map((q) => q.number()),
-    intervalCoverage: readIntervalCoverage(r.field("intervalCoverage"))
+    intervalCoverage: readIntervalCoverage(r.field("intervalCoverage")),
+    ...r.field("missingRows").value === void 0 ? {} : { missingRows: readMissingRows(r.field("missingRows")) }
+  };
+}
+var MAX_MISSING_GROUPS = 50;
+function readMissingRows(r) {
+  if (r.value === null || r.value === void 0) return null;
+  const groups = (g) => g.items().slice(0, MAX_MISSING_GROUPS).map((x) => ({
+    key: x.field("key").string(),
+    rows: x.field("rows").integer(),
+    first: x.field("first").stringOrNull(),
+    last: x.field("last").stringOrNull(),
+    meanBaselineLoss: x.field("meanBaselineLoss").numberOrNull()
+  }));
+  return {
+    rows: r.field("rows").integer(),
+    first: r.field("first").stringOrNull(),
+    last: r.field("last").stringOrNull(),
+    meanBaselineLoss: r.field("meanBaselineLoss").numberOrNull(),
+    meanBaselineLossCommon: r.field("meanBaselineLossCommon").numberOrNull(),
+    rowsWithoutLoss: r.field("rowsWithoutLoss").integer(),
+    bySeries: groups(r.field("bySeries")),
+    byHorizon: groups(r.field("byHorizon"))
   };
 }
 function readIntervalCoverage(r) {
@@ -55587,7 +56665,8 @@ function readSettings(r) {
     embargo: r.field("embargo").value === void 0 ? 0 : r.field("embargo").integer(),
     backtestChecks: r.field("backtestChecks").value === void 0 ? "enforce" : r.field("backtestChecks").oneOf(CHECK_MODES),
     json: r.field("json").stringOrNull(),
-    markdown: r.field("markdown").stringOrNull()
+    markdown: r.field("markdown").stringOrNull(),
+    html: r.field("html").value === void 0 ? null : r.field("html").stringOrNull()
   };
 }
 function absent(r, name) {
@@ -55617,8 +56696,7 @@ function readLevels(r) {
 async function run(deps = runnerDependencies()) {
   try {
     const report = await gate(deps);
-    if (report.verdict === "fail")
-      deps.log.setFailed(`skillgate: the gate failed. ${report.headline}`);
+    if (report.verdict === "fail") deps.log.setFailed(`skillgate: ${summaryLine(report)}`);
   } catch (error2) {
     if (error2 instanceof InputError) {
       deps.log.setFailed(`skillgate: ${error2.describe()}`);
@@ -55640,14 +56718,23 @@ async function gate(deps) {
   const report = action.source.kind === "compare" ? obtained : { ...obtained, name: action.source.name };
   const name = report.name;
   const link = runUrl(env, plan.kind === "workflow-run" ? plan.runId : env.runId);
-  const render = (r) => renderMarkdown(r, link === void 0 ? {} : { runUrl: link });
+  const workingDirectory = deps.env.GITHUB_WORKSPACE ?? process.cwd();
+  const render = (r) => renderMarkdown(r, { workingDirectory, ...link === void 0 ? {} : { runUrl: link } });
   const jsonTarget = jsonPath(action, env, name);
   await writeText(jsonTarget, `${JSON.stringify(report, null, 2)}
 `);
   const markdownTarget = action.source.kind === "compare" ? action.source.settings.markdown : action.source.markdown;
   if (markdownTarget !== null) await writeText(markdownTarget, render(report));
+  const htmlTarget = reportPath(
+    action.source.kind === "compare" ? action.source.settings.html : action.source.html,
+    env,
+    name,
+    "html"
+  );
+  await writeText(htmlTarget, renderHtml(report, { workingDirectory }));
   deps.log.setOutput(OUTPUT.verdict, report.verdict);
   deps.log.setOutput(OUTPUT.report, jsonTarget);
+  deps.log.setOutput(OUTPUT.htmlReport, htmlTarget);
   if (env.stepSummary !== null) {
     const summary2 = fitReport(report, {
       render,
@@ -55676,6 +56763,10 @@ async function gate(deps) {
   }
   return report;
 }
+function summaryLine(report) {
+  const s = reportSections(report);
+  return `${s.lead} ${s.change}`;
+}
 async function obtainReport(deps, action) {
   const source = action.source;
   if (source.kind === "compare") {
@@ -55701,19 +56792,22 @@ async function readEventPayload(eventPath) {
 }
 function jsonPath(action, env, name) {
   const given = action.source.kind === "compare" ? action.source.settings.json : action.source.json;
+  return reportPath(given, env, name, "json");
+}
+function reportPath(given, env, name, extension) {
   if (given !== null) return given;
-  if (name === "") return path6.join(env.tempDir, "skillgate-report.json");
+  if (name === "") return path7.join(env.tempDir, `skillgate-report.${extension}`);
   const encoded = encodeName(name);
   const slug = encoded.length <= 80 ? encoded : createHash3("sha256").update(name).digest("hex").slice(0, 16);
-  return path6.join(env.tempDir, `skillgate-report-${slug}.json`);
+  return path7.join(env.tempDir, `skillgate-report-${slug}.${extension}`);
 }
 async function writeText(file, text2) {
-  await mkdir2(path6.dirname(path6.resolve(file)), { recursive: true });
+  await mkdir2(path7.dirname(path7.resolve(file)), { recursive: true });
   await writeFile2(file, text2);
 }
 function annotate(deps, report, name) {
   const title = name === "" ? "skillgate" : `skillgate \xB7 ${name}`;
-  const message = `${report.verdict.toUpperCase()}: ${report.headline}`;
+  const message = `${report.verdict.toUpperCase()}: ${summaryLine(report)}`;
   if (report.verdict === "fail") deps.log.error(message, { title });
   else if (report.verdict === "warn") deps.log.warning(message, { title });
   else deps.log.notice(message, { title });

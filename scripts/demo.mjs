@@ -36,6 +36,8 @@ function compare(candidate, label, extra = []) {
       path.join(out, `${label}.json`),
       '--markdown',
       path.join(out, `${label}.md`),
+      '--html',
+      path.join(out, `${label}.html`),
       ...extra,
     ],
     { stdio: 'inherit' },
@@ -54,7 +56,9 @@ console.log(
 );
 const late = compare('candidate-late.csv', 'demand-late', ['--recent', '15%']);
 const lateReport = JSON.parse(readFileSync(path.join(out, 'demand-late.json'), 'utf8'));
-console.log(`\nReports written to ${path.relative(process.cwd(), out)}/ (JSON and Markdown).`);
+console.log(
+  `\nReports written to ${path.relative(process.cwd(), out)}/ (JSON, Markdown and a self-contained HTML report to open in a browser).`,
+);
 if (
   improved !== 0 ||
   regressed !== 1 ||

@@ -14,6 +14,7 @@ export type ReportSource =
       readonly name: string;
       readonly json: string | null;
       readonly markdown: string | null;
+      readonly html: string | null;
     };
 
 /** Everything the action's inputs say, validated. */
@@ -66,6 +67,7 @@ function reportFileSource(path: string, raw: RawOptions): ReportSource {
     name: (raw.name ?? '').trim(),
     json: optional('json'),
     markdown: optional('markdown'),
+    html: optional('html'),
   };
 }
 

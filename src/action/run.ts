@@ -2,8 +2,10 @@ import { createHash } from 'node:crypto';
 import { appendFile, mkdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { InputError } from '../core/inputError.js';
+import { renderHtml } from '../report/renderHtml.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import type { Report } from '../report/reportModel.js';
+import { reportSections } from '../report/reportSections.js';
 import { type CommentPlan, planComment } from './commentTarget.js';
 import { type ActionDependencies, runnerDependencies } from './dependencies.js';
 import {
@@ -46,8 +48,7 @@ import { MAX_REPORT_BYTES, parseUntrustedReport } from './untrustedReport.js';
 export async function run(deps: ActionDependencies = runnerDependencies()): Promise<void> {
   try {
     const report = await gate(deps);
-    if (report.verdict === 'fail')
-      deps.log.setFailed(`skillgate: the gate failed. ${report.headline}`);
+    if (report.verdict === 'fail') deps.log.setFailed(`skillgate: ${summaryLine(report)}`);
   } catch (error) {
     if (error instanceof InputError) {
       deps.log.setFailed(`skillgate: ${error.describe()}`);
@@ -76,16 +77,25 @@ async function gate(deps: ActionDependencies): Promise<Report> {
   const name = report.name;
   // A report posted from an earlier run links to that run, where its summary is.
   const link = runUrl(env, plan.kind === 'workflow-run' ? plan.runId : env.runId);
+  const workingDirectory = deps.env.GITHUB_WORKSPACE ?? process.cwd();
   const render = (r: Report): string =>
-    renderMarkdown(r, link === undefined ? {} : { runUrl: link });
+    renderMarkdown(r, { workingDirectory, ...(link === undefined ? {} : { runUrl: link }) });
 
   const jsonTarget = jsonPath(action, env, name);
   await writeText(jsonTarget, `${JSON.stringify(report, null, 2)}\n`);
   const markdownTarget =
     action.source.kind === 'compare' ? action.source.settings.markdown : action.source.markdown;
   if (markdownTarget !== null) await writeText(markdownTarget, render(report));
+  const htmlTarget = reportPath(
+    action.source.kind === 'compare' ? action.source.settings.html : action.source.html,
+    env,
+    name,
+    'html',
+  );
+  await writeText(htmlTarget, renderHtml(report, { workingDirectory }));
   deps.log.setOutput(OUTPUT.verdict, report.verdict);
   deps.log.setOutput(OUTPUT.report, jsonTarget);
+  deps.log.setOutput(OUTPUT.htmlReport, htmlTarget);
 
   if (env.stepSummary !== null) {
     const summary = fitReport(report, {
@@ -116,6 +126,12 @@ async function gate(deps: ActionDependencies): Promise<Report> {
   return report;
 }
 
+/** The comment's first paragraph as one line: the verdict, what decided it, the change. */
+function summaryLine(report: Report): string {
+  const s = reportSections(report);
+  return `${s.lead} ${s.change}`;
+}
+
 async function obtainReport(deps: ActionDependencies, action: ActionSettings): Promise<Report> {
   const source = action.source;
   if (source.kind === 'compare') {
@@ -143,12 +159,22 @@ async function readEventPayload(eventPath: string | null): Promise<unknown> {
 
 function jsonPath(action: ActionSettings, env: RunnerEnvironment, name: string): string {
   const given = action.source.kind === 'compare' ? action.source.settings.json : action.source.json;
+  return reportPath(given, env, name, 'json');
+}
+
+/** The given path, else a file under RUNNER_TEMP named after the comparison. */
+function reportPath(
+  given: string | null,
+  env: RunnerEnvironment,
+  name: string,
+  extension: 'json' | 'html',
+): string {
   if (given !== null) return given;
-  if (name === '') return path.join(env.tempDir, 'skillgate-report.json');
+  if (name === '') return path.join(env.tempDir, `skillgate-report.${extension}`);
   const encoded = encodeName(name);
   const slug =
     encoded.length <= 80 ? encoded : createHash('sha256').update(name).digest('hex').slice(0, 16);
-  return path.join(env.tempDir, `skillgate-report-${slug}.json`);
+  return path.join(env.tempDir, `skillgate-report-${slug}.${extension}`);
 }
 
 async function writeText(file: string, text: string): Promise<void> {
@@ -158,7 +184,7 @@ async function writeText(file: string, text: string): Promise<void> {
 
 function annotate(deps: ActionDependencies, report: Report, name: string): void {
   const title = name === '' ? 'skillgate' : `skillgate · ${name}`;
-  const message = `${report.verdict.toUpperCase()}: ${report.headline}`;
+  const message = `${report.verdict.toUpperCase()}: ${summaryLine(report)}`;
   if (report.verdict === 'fail') deps.log.error(message, { title });
   else if (report.verdict === 'warn') deps.log.warning(message, { title });
   else deps.log.notice(message, { title });

@@ -6,6 +6,7 @@ import { CHECK_IDS, type IntegrityReport } from '../integrity/checkResult.js';
 import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
 import { COLUMN_ROLES, type ColumnMapping } from '../reading/columnMapping.js';
 import { DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
+import type { MissingRowsGroup, MissingRowsSummary } from '../report/missingRows.js';
 import type {
   BootstrapSummary,
   Comparison,
@@ -28,6 +29,7 @@ import type {
   StabilityLevels,
   TimeSpan,
 } from '../stability/stabilityModel.js';
+import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 
 /** Larger report files are refused before parsing. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -255,6 +257,9 @@ function readComparison(r: Reader): Comparison {
     ...(r.field('direction').value === undefined
       ? {}
       : { direction: r.field('direction').oneOf(['worse', 'better', 'no evidence'] as const) }),
+    ...(r.field('directionPValue').value === undefined
+      ? {}
+      : { directionPValue: r.field('directionPValue').numberOrNull() }),
   };
 }
 
@@ -428,7 +433,26 @@ function readBootstrap(r: Reader): BootstrapSummary {
     pValue: r.field('pValue').numberOrNull(),
     pValueTwoSided: r.field('pValueTwoSided').numberOrNull(),
     decisionPValue: r.field('decisionPValue').numberOrNull(),
+    ...(r.field('distribution').value === undefined
+      ? {}
+      : { distribution: readHistogram(r.field('distribution')) }),
     notes: r.field('notes').strings(),
+  };
+}
+
+/** At most this many bins of a bootstrap histogram are accepted from an untrusted report. */
+const MAX_HISTOGRAM_BINS = 200;
+
+function readHistogram(r: Reader): ResampleHistogram | null {
+  if (r.value === null) return null;
+  const counts = r.field('counts').items();
+  if (counts.length === 0 || counts.length > MAX_HISTOGRAM_BINS) {
+    r.field('counts').fail(`an array of 1 to ${MAX_HISTOGRAM_BINS} counts`);
+  }
+  return {
+    lower: r.field('lower').number(),
+    upper: r.field('upper').number(),
+    counts: counts.map((c) => c.integer()),
   };
 }
 
@@ -484,6 +508,37 @@ function readInputs(r: Reader): InputsSummary {
       .items()
       .map((q) => q.number()),
     intervalCoverage: readIntervalCoverage(r.field('intervalCoverage')),
+    ...(r.field('missingRows').value === undefined
+      ? {}
+      : { missingRows: readMissingRows(r.field('missingRows')) }),
+  };
+}
+
+/** At most this many groups per breakdown are kept from an untrusted report. */
+const MAX_MISSING_GROUPS = 50;
+
+function readMissingRows(r: Reader): MissingRowsSummary | null {
+  if (r.value === null || r.value === undefined) return null;
+  const groups = (g: Reader): MissingRowsGroup[] =>
+    g
+      .items()
+      .slice(0, MAX_MISSING_GROUPS)
+      .map((x) => ({
+        key: x.field('key').string(),
+        rows: x.field('rows').integer(),
+        first: x.field('first').stringOrNull(),
+        last: x.field('last').stringOrNull(),
+        meanBaselineLoss: x.field('meanBaselineLoss').numberOrNull(),
+      }));
+  return {
+    rows: r.field('rows').integer(),
+    first: r.field('first').stringOrNull(),
+    last: r.field('last').stringOrNull(),
+    meanBaselineLoss: r.field('meanBaselineLoss').numberOrNull(),
+    meanBaselineLossCommon: r.field('meanBaselineLossCommon').numberOrNull(),
+    rowsWithoutLoss: r.field('rowsWithoutLoss').integer(),
+    bySeries: groups(r.field('bySeries')),
+    byHorizon: groups(r.field('byHorizon')),
   };
 }
 
@@ -575,6 +630,7 @@ function readSettings(r: Reader): Settings {
         : r.field('backtestChecks').oneOf(CHECK_MODES),
     json: r.field('json').stringOrNull(),
     markdown: r.field('markdown').stringOrNull(),
+    html: r.field('html').value === undefined ? null : r.field('html').stringOrNull(),
   };
 }
 

@@ -1,5 +1,5 @@
 import { echo, InputError } from '../core/inputError.js';
-import type { AlignedPanel, QuantileColumn } from '../core/panel.js';
+import type { AlignedPanel, LackingRows, QuantileColumn } from '../core/panel.js';
 import type { ForecastTable, LabelColumn, ValueColumn } from '../reading/forecastTable.js';
 import { parseDecimal } from '../reading/numbers.js';
 import { compareKeys, type KeyComponent, sortByKey } from './keyOrder.js';
@@ -152,6 +152,7 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
   let matched = 0;
   let baselineOnly = 0;
   let candidateOnly = 0;
+  const baselineOnlyRows: number[] = [];
   const examples = { baselineOnly: [] as string[], candidateOnly: [] as string[] };
   {
     let i = 0;
@@ -169,6 +170,7 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
         matched++;
       } else if (c < 0) {
         if (baselineOnly++ < EXAMPLES) examples.baselineOnly.push(describeKey(bKeys, bOrder[i]!));
+        baselineOnlyRows.push(bOrder[i]!);
         i++;
       } else {
         if (candidateOnly++ < EXAMPLES) {
@@ -369,8 +371,68 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
       withoutActual,
       actualsUnused,
       examples: { ...examples, withoutActual: withoutActualExamples },
+      lacking: lackingRows(
+        baselineOnlyRows,
+        baseline,
+        bKeys,
+        actuals === undefined ? null : { table: actuals, keys: () => keysOf(actuals, 2, false) },
+        series.names,
+        time.labels,
+        horizons.values,
+      ),
     },
   };
+}
+
+/**
+ * The baseline rows the candidate lacks, described for the report: series, timestamp, horizon,
+ * and the baseline's prediction and the actual where known (from the baseline file, else the
+ * actuals file), so the report can show where they are and how hard they were for the baseline.
+ */
+function lackingRows(
+  rows: readonly number[],
+  baseline: ForecastTable,
+  bKeys: readonly KeyComponent[],
+  actuals: { readonly table: ForecastTable; readonly keys: () => KeyComponent[] } | null,
+  seriesNames: readonly string[],
+  timeLabels: readonly string[],
+  horizonValues: readonly number[],
+): LackingRows {
+  const n = rows.length;
+  const out: LackingRows = {
+    series: new Int32Array(n),
+    seriesNames,
+    time: new Int32Array(n),
+    timestamps: timeLabels,
+    horizon: new Int32Array(n),
+    actual: new Float64Array(n).fill(Number.NaN),
+    prediction: new Float64Array(n).fill(Number.NaN),
+  };
+  let fromActuals: Map<number, number> | null = null;
+  const actualColumn = actuals?.table.actual ?? null;
+  if (n > 0 && baseline.actual === null && actuals !== null && actualColumn !== null) {
+    fromActuals = new Map();
+    const [aSeries, aTime] = actuals.keys();
+    for (let r = 0; r < actuals.table.size; r++) {
+      fromActuals.set(
+        aSeries!.values[r]! * timeLabels.length + aTime!.values[r]!,
+        actualColumn.values[r]!,
+      );
+    }
+  }
+  for (let k = 0; k < n; k++) {
+    const row = rows[k]!;
+    const s = bKeys[0]!.values[row]!;
+    const t = bKeys[1]!.values[row]!;
+    out.series[k] = s;
+    out.time[k] = t;
+    out.horizon[k] = horizonValues[bKeys[2]!.values[row]!]!;
+    if (baseline.prediction !== null) out.prediction[k] = baseline.prediction.values[row]!;
+    if (baseline.actual !== null) out.actual[k] = baseline.actual.values[row]!;
+    else if (fromActuals !== null)
+      out.actual[k] = fromActuals.get(s * timeLabels.length + t) ?? Number.NaN;
+  }
+  return out;
 }
 
 interface ValueSource {

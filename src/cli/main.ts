@@ -6,6 +6,7 @@ import { runComparison } from '../app/runComparison.js';
 import { InputError, printable } from '../core/inputError.js';
 import { VERSION } from '../core/version.js';
 import { createResamplePool } from '../parallel/resamplePool.js';
+import { renderHtml } from '../report/renderHtml.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
 import { renderTerminal } from '../report/renderTerminal.js';
 import type { Report } from '../report/reportModel.js';
@@ -39,6 +40,8 @@ async function main(argv: readonly string[]): Promise<number> {
     }
     if (settings.json !== null) await checkWritable(settings.json, '--json');
     if (settings.markdown !== null) await checkWritable(settings.markdown, '--markdown');
+    if (settings.html !== null) await checkWritable(settings.html, '--html');
+    const shown = { workingDirectory: process.cwd() };
     const progress = progressReporter(process.stderr);
     const pool = createResamplePool();
     let report: Report;
@@ -53,13 +56,14 @@ async function main(argv: readonly string[]): Promise<number> {
     }
     if (settings.json !== null) await writeJson(settings.json, report);
     if (settings.markdown !== null) {
-      if (settings.markdown === STANDARD_OUTPUT) await write(renderMarkdown(report));
-      else await writeFile(settings.markdown, renderMarkdown(report));
+      if (settings.markdown === STANDARD_OUTPUT) await write(renderMarkdown(report, shown));
+      else await writeFile(settings.markdown, renderMarkdown(report, shown));
     }
+    if (settings.html !== null) await writeFile(settings.html, renderHtml(report, shown));
     const toStdout = settings.json === STANDARD_OUTPUT || settings.markdown === STANDARD_OUTPUT;
     if (!request.quiet && !toStdout) {
       const color = process.stdout.isTTY === true && process.env.NO_COLOR === undefined;
-      await write(renderTerminal(report, { color }));
+      await write(renderTerminal(report, { color, ...shown }));
     }
     return report.verdict === 'fail' ? 1 : 0;
   } catch (error) {

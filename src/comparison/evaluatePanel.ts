@@ -1,4 +1,4 @@
-import { aggregateByTime } from '../aggregation/lossSeries.js';
+import { aggregateByTime, lossDifferential } from '../aggregation/lossSeries.js';
 import { InputError } from '../core/inputError.js';
 import type { AlignedPanel } from '../core/panel.js';
 import { VERSION } from '../core/version.js';
@@ -20,6 +20,7 @@ import type { Settings } from '../settings/settings.js';
 import { assessStability } from '../stability/assessStability.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { type ComparisonScope, compareLossSeries } from './compareLossSeries.js';
+import { runDieboldMariano } from './runDieboldMariano.js';
 
 export interface PanelExtras {
   /** In-sample actuals per series name, for the seasonal naive scale. */
@@ -135,19 +136,31 @@ function seriesComparisons(
 ): { comparisons: Comparison[]; summary: SeriesSummary } {
   const k = panel.seriesNames.length;
   const rowsOf = groupRows(panel.series);
+  // The direction of each series (worse / better / no evidence) comes from the plain loss
+  // difference d_t = L_c,t − L_b,t, whatever the policy and margin: "worse" means evidence the
+  // candidate's loss is higher, "better" evidence it is lower. The policy's own (margin-shifted)
+  // p-value still gives each series' verdict.
+  const plain = hypothesisFor('no-regression', 0, 'absolute');
+  const upper: (number | null)[] = [];
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
+    const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
+    upper.push(dm.smallSample?.pValue ?? dm.pValue);
     return compareLossSeries(series, scope('all', name), hypothesis, settings, {
       bootstrap: false,
     });
   });
   const adjust = settings.adjust === 'holm' ? holmAdjust : benjaminiHochbergAdjust;
-  // One-sided p-values in each direction, as the decision uses them (HLN-corrected for
-  // bartlett/uniform), then adjusted across the series family.
-  const upper = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  // One-sided p-values of the plain difference in each direction (HLN-corrected for
+  // bartlett/uniform), adjusted across the series family.
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => (p === null ? null : 1 - p)));
-  const policyP = hypothesis.rejectWhen === 'above' ? worseP : betterP;
+  // The policy's direction, on the tested (margin-shifted) differential, for the verdicts.
+  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const policyP =
+    hypothesis.rejectWhen === 'above'
+      ? adjust(tested)
+      : adjust(tested.map((p) => (p === null ? null : 1 - p)));
   let worse = 0;
   let better = 0;
   const comparisons = raw.map((c, j) => {
@@ -177,6 +190,7 @@ function seriesComparisons(
       rejected: { dieboldMariano: decision.rejected, bootstrap: null },
       adjustedPValue: policyP[j] ?? null,
       direction,
+      directionPValue: direction === 'better' ? b : w,
     }) as Comparison;
   });
   const top = comparisons

@@ -66,6 +66,7 @@ export function runBootstrap(
     pValue: result.pValue,
     pValueTwoSided: result.pValueTwoSided,
     decisionPValue,
+    distribution: result.distribution,
     notes: result.notes,
   };
   return { summary, resampledDeviations: relative.resampledDeviations };

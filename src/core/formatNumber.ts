@@ -18,8 +18,10 @@ export function formatSignedPercent(x: number | null | undefined): string {
   return `${x > 0 ? '+' : ''}${text}%`;
 }
 
-/** A p-value: four decimals, "< 0.0001" below that. */
+/** A p-value: four decimals, with its ends as "< 0.0001" and "> 0.9999". */
 export function formatPValue(p: number | null | undefined): string {
   if (p === null || p === undefined || !Number.isFinite(p)) return 'n/a';
-  return p < 0.0001 ? '< 0.0001' : p.toFixed(4);
+  if (p < 0.0001) return '< 0.0001';
+  if (p > 0.9999) return '> 0.9999';
+  return p.toFixed(4);
 }

@@ -47,6 +47,23 @@ export interface InputCoverage {
     /** Matched prediction keys that had no actual (at most 5). */
     readonly withoutActual: readonly string[];
   };
+  /** Every baseline row the candidate lacks, for the report's breakdown of them. */
+  readonly lacking?: LackingRows;
+}
+
+/** Baseline rows without a candidate row: where they are, and the baseline's forecast on them. */
+export interface LackingRows {
+  /** Index into seriesNames, per row. */
+  readonly series: Int32Array;
+  readonly seriesNames: readonly string[];
+  /** Index into timestamps (in time order), per row. */
+  readonly time: Int32Array;
+  readonly timestamps: readonly string[];
+  readonly horizon: Int32Array;
+  /** NaN where unknown. */
+  readonly actual: Float64Array;
+  /** The baseline's point forecast; NaN when the baseline has none. */
+  readonly prediction: Float64Array;
 }
 
 export interface FileSummary {

@@ -28,7 +28,7 @@ export function decideAdjusted(input: {
   const rejected = p <= alpha;
   const onKeep: Verdict = hypothesis.onReject === 'fail' ? 'pass' : 'fail';
   const text = formatPValue(p);
-  const shown = text.startsWith('<') ? `p ${text}` : `p = ${text}`;
+  const shown = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
   const reasons = [
     `${name} Diebold–Mariano ${shown} ${rejected ? '≤' : '>'} α = ${alpha}: ${rejected ? 'evidence' : 'no evidence'} that ${hypothesis.alternative}.`,
   ];

@@ -126,7 +126,7 @@ function describeTest(
     } ${hypothesis.alternative}.`;
   }
   const text = formatPValue(e.pValue);
-  const p = text.startsWith('<') ? `p ${text}` : `p = ${text}`;
+  const p = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
   return rejected
     ? `${e.label}: ${p} ≤ α = ${alpha}: evidence that ${hypothesis.alternative}.`
     : `${e.label}: ${p} > α = ${alpha}: no evidence that ${hypothesis.alternative}.`;

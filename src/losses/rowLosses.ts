@@ -37,7 +37,7 @@ export interface IntervalCoverage {
 /** Why losses cannot be computed for this panel, in plain words; the edge names the files. */
 export class LossUnavailableError extends Error {}
 
-const POINT_LOSSES: Record<Exclude<LossName, 'pinball' | 'interval'>, PointLossFunction> = {
+export const POINT_LOSSES: Record<Exclude<LossName, 'pinball' | 'interval'>, PointLossFunction> = {
   squared: squaredError,
   absolute: absoluteError,
   ape: absolutePercentageError,

@@ -1,6 +1,6 @@
 /**
  * The Parquet file edge: reads a Parquet file one row group at a time with hyparquet (a pure
- * JavaScript reader; docs/decisions/0010-parquet-reading.md) and hands each row, as the fields a
+ * JavaScript reader; docs/decisions/0013-parquet-input.md) and hands each row, as the fields a
  * CSV of the same data would hold, to the same ForecastTableReader that reads CSV. So every check
  * and message is the one CSV gets; numbers match because a CSV writer prints a double as its shortest
  * round-trip decimal text, which parses back to the same double, so a double is handed over as it

@@ -1,6 +1,7 @@
 import type { TimeFormatName } from '../alignment/timeFormat.js';
 import type { AlignedPanel, FileSummary, TimestampKind } from '../core/panel.js';
 import type { RowLosses } from '../losses/rowLosses.js';
+import { missingRowsSummary } from './missingRows.js';
 import type { InputsSummary } from './reportModel.js';
 
 /** The report's account of the inputs of a panel comparison: files, matches and what was left out. */
@@ -34,6 +35,7 @@ export function panelInputsSummary(panel: AlignedPanel, losses: RowLosses): Inpu
     horizons: [...horizons].sort((a, b) => a - b),
     quantileLevels: losses.levels,
     intervalCoverage: losses.coverage,
+    missingRows: missingRowsSummary(panel.coverage.lacking, losses),
   };
 }
 

@@ -1,44 +1,123 @@
-import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
-import { LOSS_LABELS } from '../losses/lossName.js';
+import { chartCaption, differenceSeries, mermaidChart, sparklineText } from './differenceChart.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
-import { inputNotes } from './inputNotes.js';
-import { intervalNote, measuredCoverageText, relativeChangeText } from './relativeChangeText.js';
+import { missingRowsSection } from './missingRowsSection.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
 import { renderStabilitySection } from './renderStabilitySection.js';
-import type { Comparison, Report } from './reportModel.js';
-
-const VERDICT_WORDS = { pass: 'PASS', warn: 'WARN', fail: 'FAIL' } as const;
+import type { Report } from './reportModel.js';
+import { reportSections } from './reportSections.js';
+import type { ReportTable } from './reportTable.js';
+import type { ReportView } from './reportView.js';
 
 export interface MarkdownOptions {
   /** Link to the run, shown in the footer when present. */
   readonly runUrl?: string;
+  /** File paths are shown relative to this directory (the workspace in the action). */
+  readonly workingDirectory?: string;
 }
 
 /**
- * Renders the report as GitHub-flavoured Markdown: verdict and headline, the comparison table,
- * the reasons, then test details, inputs and settings in collapsed sections. Pure: the same
- * report gives the same text. Every string that came from an input file is escaped.
+ * Renders the report as GitHub-flavoured Markdown for a pull-request comment a reviewer reads in
+ * seconds: the verdict with the deciding reason and the change with its interval first, then a
+ * table of at most six columns, the difference over time (a Mermaid chart and a one-line
+ * sparkline for renderers without Mermaid), and everything else in collapsed sections. Pure:
+ * the same report gives the same text. Every string that came from an input file is escaped.
  */
 export function renderMarkdown(report: Report, options: MarkdownOptions = {}): string {
+  const view = report as ReportView;
+  const s = reportSections(view, options);
   const lines: string[] = [];
-  const title = report.name === '' ? 'skillgate' : `skillgate · ${esc(report.name)}`;
-  lines.push(`### ${title}: ${VERDICT_WORDS[report.verdict]}`, '');
-  lines.push(esc(report.headline), '');
-  lines.push(...comparisonTable(report), '');
-  lines.push(`<sub>${esc(intervalNote(report))}</sub>`, '');
-  lines.push(...seriesSection(report));
-  lines.push(...pathSection(report));
-  lines.push(...renderStabilitySection(report));
-  lines.push(...backtestChecksSection(report));
-  const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
-  if (reasons.length > 0) {
-    lines.push('**Why**', '');
-    for (const r of reasons) lines.push(`- ${esc(r)}`);
-    lines.push('');
+  lines.push(`### ${esc(s.title)}: ${s.verdict.toUpperCase()}`, '');
+  lines.push(`**${esc(s.lead)}** ${esc(s.change)}`, '');
+  lines.push(...markdownTable(s.main), '');
+  lines.push(`<sub>${esc(s.intervalNote)}</sub>`, '');
+  for (const note of s.notes) lines.push(`- ${esc(note)}`);
+  if (s.notes.length > 0) lines.push('');
+
+  const chart = differenceSeries(view);
+  if (chart !== null) {
+    lines.push(...mermaidChart(chart), '');
+    lines.push(`<sub>${esc(chartCaption(chart))}</sub>`, '');
+    lines.push(`\`${sparklineText(chart).replace(/`/g, "'")}\``, '');
   }
-  lines.push(...testDetails(report), '');
-  lines.push(...inputSection(report), '');
-  lines.push(...settingsSection(report), '');
+  lines.push(
+    s.changedSettings === ''
+      ? 'Settings: the defaults.'
+      : `Settings that differ from the defaults: ${code(s.changedSettings)}`,
+    '',
+  );
+
+  lines.push(
+    ...collapsed('How the overall comparison was tested', [
+      ...markdownTable(s.details),
+      '',
+      ...s.detailNotes.map((n) => `- ${esc(n)}`),
+    ]),
+  );
+  if (s.horizons !== null) {
+    lines.push(
+      ...collapsed(
+        `By horizon (${s.horizons.rows.length}): for locating a change only, not verdicts`,
+        [
+          'Each horizon is compared on its own; the p-values are Holm-adjusted across horizons. The gate’s verdict rests on the overall comparison.',
+          '',
+          ...markdownTable(s.horizons),
+        ],
+      ),
+    );
+  }
+  if (s.series !== null) {
+    lines.push(
+      ...collapsed(
+        `By series (${report.seriesSummary?.series ?? 0}): ${report.seriesSummary?.worse ?? 0} worse, ${report.seriesSummary?.better ?? 0} better`,
+        [esc(s.series.summary), '', ...markdownTable(s.series.table)],
+      ),
+    );
+  }
+  if (s.paths !== null) {
+    lines.push(
+      ...collapsed('By backtest path', [
+        esc(s.paths.summary),
+        ...(s.paths.table === null ? [] : ['', ...markdownTable(s.paths.table)]),
+      ]),
+    );
+  }
+  const missing = missingRowsSection(view);
+  if (missing !== null) {
+    lines.push(
+      ...collapsed(missing.title, [
+        ...missing.lines.map((l) => esc(l)),
+        ...missing.tables.flatMap((t) => ['', ...markdownTable(t)]),
+      ]),
+    );
+  }
+  const overTime = renderStabilitySection(report);
+  if (overTime.length > 0) {
+    lines.push(
+      `<details><summary>${esc(overTimeSummary(view))}</summary>`,
+      '',
+      ...overTime,
+      '</details>',
+      '',
+    );
+  }
+  const checks = backtestChecksSection(report);
+  if (checks.length > 0) {
+    lines.push(
+      `<details><summary>Backtest checks: ${esc(report.integrity.outcome)}</summary>`,
+      '',
+      ...checks,
+      '</details>',
+      '',
+    );
+  }
+  lines.push(
+    ...collapsed('Inputs and coverage', [
+      ...markdownTable(s.inputs.table),
+      '',
+      ...s.inputs.lines.map((l) => esc(l)),
+    ]),
+  );
+  lines.push(...collapsed('All settings', markdownTable(s.settings)));
   lines.push(
     '<sub>A pass is evidence, not proof: it is only as good as the backtest behind it. ' +
       `Generated by skillgate ${esc(report.tool.version)}.${
@@ -48,197 +127,36 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   return `${lines.join('\n')}\n`;
 }
 
-function scopeLabel(c: Comparison): string {
-  if (c.horizon === 'all' && c.series === 'all') return 'overall';
-  const parts: string[] = [];
-  if (c.horizon !== 'all') parts.push(`horizon ${c.horizon}`);
-  if (c.series !== 'all') parts.push(`series ${esc(c.series)}`);
-  return parts.join(', ');
+/** "Over time: worse recently" and the like, for the folded stability section. */
+function overTimeSummary(report: ReportView): string {
+  const s = report.stability;
+  const recent = s?.recent?.verdict === 'fail';
+  const stretch = (s?.fluctuation?.worsePeriods.length ?? 0) > 0;
+  if (recent && stretch) return 'Over time: worse recently and in some stretches';
+  if (recent) return 'Over time: worse recently';
+  if (stretch) return 'Over time: worse in some stretches';
+  return 'Over time: the recent window, the fluctuation test and the mean loss by period';
 }
 
-function comparisonTable(report: Report): string[] {
-  const level = report.comparisons[0]?.bootstrap.interval?.level ?? report.settings.confidence;
-  const pct = `${formatNumber(level * 100, 3)}%`;
-  const rows = [
-    `| comparison | time points | baseline loss | candidate loss | difference | relative | DM statistic | p (DM) | p (bootstrap) | ${pct} interval (bootstrap) | verdict |`,
-    '|---|---:|---:|---:|---:|---:|---:|---:|---:|---|---|',
+/** A GFM table with every cell escaped. */
+export function markdownTable(t: ReportTable): string[] {
+  const row = (cells: readonly string[]) => `| ${cells.map((c) => esc(c)).join(' | ')} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => (a === 'right' ? '---:' : '---')).join('|')}|`,
+    ...t.rows.map(row),
   ];
-  for (const c of report.comparisons.filter((x) => x.series === 'all' && x.path === undefined)) {
-    const dm = c.dieboldMariano;
-    const bs = c.bootstrap;
-    const interval =
-      bs.interval === null
-        ? 'n/a'
-        : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
-    rows.push(
-      `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
-        c.meanCandidateLoss,
-      )} | ${formatNumber(c.meanDifference)} | ${relativeCell(c)} | ${formatNumber(
-        dm.smallSample?.statistic ?? dm.statistic,
-      )} | ${formatPValue(dm.decisionPValue)} | ${formatPValue(bs.decisionPValue)} | ${interval} | ${c.verdict} |`,
-    );
-  }
-  return rows;
 }
 
-/** The relative change with the interval of margins at which the gate would not reject. */
-function relativeCell(c: Comparison): string {
-  return relativeChangeText(c);
+function collapsed(summary: string, body: readonly string[]): string[] {
+  return [`<details><summary>${esc(summary)}</summary>`, '', ...body, '', '</details>', ''];
 }
 
 /**
- * Where regressions live: counts of series by what their adjusted one-sided tests found, and a
- * table of the series with the largest significant regressions (top N).
+ * Inline code when the text is made of plain characters only, else escaped text: a code span
+ * would show HTML or a mention literally, but a reader (or a check) should never see raw markup
+ * from an input in the comment's source.
  */
-function seriesSection(report: Report): string[] {
-  const summary = report.seriesSummary;
-  if (summary === null) return [];
-  const method = summary.method === 'holm' ? 'Holm' : 'Benjamini–Hochberg';
-  const out = [
-    `**Series**: of ${summary.series}, ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} without evidence either way (Diebold–Mariano per series, ${method}-adjusted, α = ${summary.alpha}). These locate a regression; the verdict rests on the overall comparison.`,
-    '',
-  ];
-  const byName = new Map(
-    report.comparisons.filter((c) => c.series !== 'all').map((c) => [c.series, c]),
-  );
-  const top = summary.topRegressions.map((name) => byName.get(name)).filter((c) => c !== undefined);
-  if (top.length > 0) {
-    out.push(
-      `| series (largest significant regressions) | time points | baseline loss | candidate loss | relative | DM statistic | adjusted p |`,
-      '|---|---:|---:|---:|---:|---:|---:|',
-    );
-    for (const c of top) {
-      out.push(
-        `| ${esc(String(c.series))} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(c.dieboldMariano.smallSample?.statistic ?? c.dieboldMariano.statistic)} | ${formatPValue(c.adjustedPValue)} |`,
-      );
-    }
-    out.push('');
-  }
-  return out;
-}
-
-/** Backtest paths: the share on which the candidate is worse, and one row per path. */
-function pathSection(report: Report): string[] {
-  const summary = report.pathSummary;
-  if (summary === null) return [];
-  const out = [
-    `**Backtest paths**: the candidate's mean loss is higher on ${summary.worse} of ${summary.paths} paths (${formatNumber(summary.shareWorse * 100, 3)}%), significantly so (one-sided Diebold–Mariano, p ≤ ${report.policy.alpha}) on ${summary.significantlyWorse}. The verdict tests the path-averaged differential.`,
-    '',
-  ];
-  const rows = report.comparisons.filter((c) => c.path !== undefined);
-  if (rows.length <= 50) {
-    out.push(
-      '| path | time points | baseline loss | candidate loss | relative | DM statistic | p (DM) |',
-    );
-    out.push('|---|---:|---:|---:|---:|---:|---:|');
-    for (const c of rows) {
-      const dm = c.dieboldMariano;
-      out.push(
-        `| ${esc(c.path ?? '')} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${formatSignedPercent(c.relativeDifference)} | ${formatNumber(dm.smallSample?.statistic ?? dm.statistic)} | ${formatPValue(dm.smallSample?.pValue ?? dm.pValue)} |`,
-      );
-    }
-  }
-  out.push('');
-  return out;
-}
-
-function testDetails(report: Report): string[] {
-  const c = report.comparisons[0];
-  if (c === undefined) return [];
-  const dm = c.dieboldMariano;
-  const bs = c.bootstrap;
-  const out = ['<details><summary>How the overall comparison was tested</summary>', ''];
-  out.push(
-    `Loss: ${LOSS_LABELS[c.loss]}. Tested differential: d_t = L_candidate − ${formatNumber(
-      report.policy.baselineFactor,
-      6,
-    )} · L_baseline (mean ${formatNumber(c.meanTestedDifferential)}), H0 boundary δ = ${formatNumber(
-      report.policy.boundary,
-    )}.`,
-    '',
-    `H0: ${esc(report.policy.nullHypothesis)}. H1: ${esc(report.policy.alternative)}. Rejecting H0 makes the gate ${report.policy.onReject}.`,
-    '',
-    '| | value |',
-    '|---|---|',
-    `| Diebold–Mariano variance | ${dm.estimator}${dm.estimator === dm.requestedEstimator ? '' : ` (requested ${dm.requestedEstimator})`} |`,
-    `| statistic | ${formatNumber(dm.statistic)} |`,
-    `| long-run variance ω̂² | ${formatNumber(dm.longRunVariance)} |`,
-    `| lag | ${dm.lag ?? 'n/a (fixed-b)'} |`,
-    `| degrees of freedom | ${dm.degreesOfFreedom ?? 'normal reference'} |`,
-  );
-  if (dm.smallSample !== null) {
-    out.push(
-      `| Harvey–Leybourne–Newbold statistic | ${formatNumber(dm.smallSample.statistic)} (t, ${dm.smallSample.degreesOfFreedom} df) |`,
-    );
-  }
-  out.push(
-    `| p one-sided (worse) / two-sided | ${formatPValue(dm.pValue)} / ${formatPValue(dm.pValueTwoSided)} |`,
-  );
-  if (dm.interval !== null) {
-    out.push(
-      `| DM interval for E[L_candidate − L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`,
-    );
-  }
-  out.push(
-    `| bootstrap expected block length | ${formatNumber(bs.expectedBlockLength)} (${bs.blockLengthRule}) |`,
-    `| bootstrap resamples / seed | ${bs.resamples} / ${bs.seed} |`,
-    `| bootstrap standard error of d̄ | ${formatNumber(bs.standardError)} |`,
-    `| bootstrap p one-sided (worse) / two-sided | ${formatPValue(bs.pValue)} / ${formatPValue(bs.pValueTwoSided)} |`,
-  );
-  const coverage = report.inputs.intervalCoverage;
-  if (coverage !== null) {
-    out.push(
-      `| empirical coverage of the ${formatNumber(coverage.nominal * 100, 3)}% interval, baseline / candidate | ${formatSignedPercent(coverage.baseline).replace('+', '')} / ${formatSignedPercent(coverage.candidate).replace('+', '')} |`,
-    );
-  }
-  for (const note of [...dm.notes, ...bs.notes]) out.push('', `Note: ${esc(note)}`);
-  out.push('', '</details>');
-  return out;
-}
-
-function inputSection(report: Report): string[] {
-  const i = report.inputs;
-  const out = ['<details><summary>Inputs and coverage</summary>', ''];
-  out.push(
-    '| file | role | rows | blank lines skipped | columns not used | sha256 |',
-    '|---|---|---:|---:|---|---|',
-  );
-  for (const f of i.files) {
-    const unused = f.ignoredColumns.length === 0 ? '' : f.ignoredColumns.map(esc).join(', ');
-    out.push(
-      `| ${esc(f.path)} | ${f.role} | ${f.rows} | ${f.blankLines} | ${unused} | \`${f.sha256.replace(/^sha256:/, '').slice(0, 12)}\` |`,
-    );
-  }
-  const d = i.rowsDropped;
-  out.push(
-    '',
-    `Rows matched: ${i.rowsMatched} over ${i.timestamps.count} timestamps (${esc(i.timestamps.first ?? 'n/a')} to ${esc(
-      i.timestamps.last ?? 'n/a',
-    )}), ${i.series} series, horizons ${i.horizons.join(', ') || '1'}.`,
-    `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`,
-  );
-  for (const note of inputNotes(report)) out.push(esc(note));
-  if (i.examples.baselineOnly.length > 0) {
-    out.push(
-      `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => esc(k)).join(', ')}.`,
-    );
-  }
-  out.push('', '</details>');
-  return out;
-}
-
-function settingsSection(report: Report): string[] {
-  const out = [
-    '<details><summary>Settings in force</summary>',
-    '',
-    '| setting | value |',
-    '|---|---|',
-  ];
-  for (const [key, value] of Object.entries(report.settings)) {
-    const text =
-      typeof value === 'object' && value !== null ? JSON.stringify(value) : String(value);
-    out.push(`| ${key} | ${esc(text)} |`);
-  }
-  out.push('', '</details>');
-  return out;
+function code(text: string): string {
+  return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : esc(text);
 }

@@ -1,100 +1,86 @@
-import { formatNumber, formatPValue } from '../core/formatNumber.js';
-import { inputNotes } from './inputNotes.js';
-import { intervalNote, measuredCoverageText, relativeChangeText } from './relativeChangeText.js';
+import { differenceSeries, sparklineText } from './differenceChart.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
 import { renderStabilityTerminal } from './renderStabilityTerminal.js';
-import type { Comparison, Report } from './reportModel.js';
+import type { Report } from './reportModel.js';
+import { reportSections } from './reportSections.js';
+import type { ReportTable } from './reportTable.js';
+import type { ReportView } from './reportView.js';
 
 export interface TerminalOptions {
   /** Use ANSI colours (only when stdout is a terminal and NO_COLOR is unset). */
   readonly color: boolean;
+  /** File paths are shown relative to this directory. */
+  readonly workingDirectory?: string;
 }
 
 /**
- * Renders the report for a terminal: the verdict, the headline, an aligned table of the
- * comparisons and the reasons. Input strings are stripped of control characters so a hostile
- * series name cannot move the cursor or recolour the screen.
+ * Renders the report for a terminal: the verdict with its deciding reason, the change with its
+ * interval, the main table, a one-line sparkline of the difference over time, the per-horizon
+ * rows (for locating only) and what was left out. Input strings are stripped of control
+ * characters so a hostile series name cannot move the cursor or recolour the screen.
  */
 export function renderTerminal(report: Report, options: TerminalOptions): string {
+  const view = report as ReportView;
+  const s = reportSections(view, options);
   const paint = (code: string, text: string) =>
     options.color ? `\x1b[${code}m${text}\x1b[0m` : text;
   const verdictColor = { pass: '32', warn: '33', fail: '31' }[report.verdict];
-  const title = report.name === '' ? 'skillgate' : `skillgate · ${clean(report.name)}`;
   const out: string[] = [];
-  out.push(`${paint('1', title)}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`);
-  out.push(wrap(report.headline, 100), '');
-  const header = [
-    'comparison',
-    'n',
-    'baseline',
-    'candidate',
-    'diff',
-    'relative',
-    'p (DM)',
-    'p (boot)',
-    'interval (boot)',
-    'verdict',
-  ];
-  const rows = report.comparisons
-    .filter((c) => c.series === 'all' && c.path === undefined)
-    .map((c) => [
-      scope(c),
-      String(c.n),
-      formatNumber(c.meanBaselineLoss),
-      formatNumber(c.meanCandidateLoss),
-      formatNumber(c.meanDifference),
-      relativeChangeText(c),
-      formatPValue(c.dieboldMariano.decisionPValue),
-      formatPValue(c.bootstrap.decisionPValue),
-      c.bootstrap.interval === null
-        ? 'n/a'
-        : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]${measuredCoverageText(c.bootstrap.interval.measuredCoverage)}`,
-      c.verdict,
-    ]);
-  const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)));
-  const line = (cells: string[]) =>
-    cells
-      .map((cell, j) => (j === 0 || j >= 8 ? cell.padEnd(widths[j]!) : cell.padStart(widths[j]!)))
-      .join('  ');
-  out.push(paint('2', line(header)));
-  for (const r of rows) out.push(line(r));
-  out.push(...renderStabilityTerminal(report));
-  out.push(wrap(intervalNote(report), 100), '');
-  for (const reason of [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])]) {
-    out.push(wrap(`- ${reason}`, 100, '  '));
+  out.push(
+    `${paint('1', clean(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`,
+  );
+  out.push(wrap(`${s.lead} ${s.change}`, 100), '');
+  out.push(...textTable(s.main, paint));
+  out.push('', paint('2', wrap(s.intervalNote, 100)));
+  const chart = differenceSeries(view);
+  if (chart !== null) out.push('', clean(sparklineText(chart)));
+  const overTime = renderStabilityTerminal(report);
+  if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, '  ')));
+  if (s.notes.length > 0) out.push('');
+  for (const note of s.notes) out.push(wrap(`- ${note}`, 100, '  '));
+  if (s.horizons !== null) {
+    out.push('', paint('2', 'by horizon (for locating only; p Holm-adjusted across horizons):'));
+    out.push(...textTable(s.horizons, paint));
   }
-  const summary = report.seriesSummary;
-  if (summary !== null) {
-    const top = summary.topRegressions.slice(0, 5).map(clean).join(', ');
-    out.push(
-      `series: ${summary.worse} worse, ${summary.better} better, ${summary.noEvidence} no evidence (${summary.method}-adjusted)${top === '' ? '' : `; largest regressions: ${top}`}`,
-    );
+  if (s.series !== null) out.push('', wrap(s.series.summary, 100));
+  if (s.paths !== null) out.push('', wrap(s.paths.summary, 100));
+  const checks = backtestChecksLines(report, clean);
+  if (checks.length > 0) out.push('', ...checks);
+  for (const r of report.reasons) {
+    if (r.startsWith('The candidate lacks')) out.push(wrap(`- ${r}`, 100, '  '));
   }
-  const paths = report.pathSummary;
-  if (paths !== null) {
-    out.push(
-      `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`,
-    );
-  }
-  out.push(...backtestChecksLines(report, clean));
+  out.push('');
   const i = report.inputs;
   out.push(
-    '',
     paint(
       '2',
-      `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`,
+      clean(
+        `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`,
+      ),
     ),
   );
-  for (const note of inputNotes(report)) out.push(paint('2', wrap(clean(note), 100, '  ')));
+  for (const l of s.inputs.lines) {
+    if (!l.startsWith('Rows matched') && !l.startsWith('Left out')) {
+      out.push(paint('2', wrap(l, 100, '  ')));
+    }
+  }
+  if (s.changedSettings !== '') out.push(paint('2', clean(`settings: ${s.changedSettings}`)));
   return `${out.join('\n')}\n`;
 }
 
-function scope(c: Comparison): string {
-  if (c.horizon === 'all' && c.series === 'all') return 'overall';
-  const parts: string[] = [];
-  if (c.horizon !== 'all') parts.push(`h=${c.horizon}`);
-  if (c.series !== 'all') parts.push(clean(c.series));
-  return parts.join(' ');
+function textTable(t: ReportTable, paint: (code: string, text: string) => string): string[] {
+  const rows = t.rows.map((r) => r.map(clean));
+  const widths = t.header.map((h, j) =>
+    Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)),
+  );
+  const line = (cells: readonly string[]) =>
+    cells
+      .map((cell, j) =>
+        t.align[j] === 'right' ? cell.padStart(widths[j]!) : cell.padEnd(widths[j]!),
+      )
+      .join('  ')
+      .trimEnd();
+  return [paint('2', line(t.header)), ...rows.map(line)];
 }
 
 function clean(text: string): string {

@@ -8,7 +8,9 @@ import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
 import type { Stability } from '../stability/stabilityModel.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
+import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
+import type { MissingRowsSummary } from './missingRows.js';
 
 export type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 export type { RelativeChange } from '../intervals/relativeChange.js';
@@ -126,6 +128,11 @@ export interface Comparison {
   readonly adjustedPValue?: number | null;
   /** Per-series comparisons: what the adjusted one-sided tests found. */
   readonly direction?: 'worse' | 'better' | 'no evidence';
+  /**
+   * Per-series comparisons: the adjusted one-sided p-value of the plain difference L_c − L_b
+   * behind `direction` (upper tail for worse and no evidence, lower tail for better).
+   */
+  readonly directionPValue?: number | null;
 }
 
 export interface DieboldMarianoSummary {
@@ -179,6 +186,8 @@ export interface BootstrapSummary {
   readonly pValue: number | null;
   readonly pValueTwoSided: number | null;
   readonly decisionPValue: number | null;
+  /** The resample means of the tested differential in equal-width bins, for drawing. */
+  readonly distribution?: ResampleHistogram | null;
   readonly notes: readonly string[];
 }
 
@@ -229,4 +238,6 @@ export interface InputsSummary {
     readonly baseline: number | null;
     readonly candidate: number | null;
   } | null;
+  /** Where the rows the candidate lacks are (null or absent when it lacks none). */
+  readonly missingRows?: MissingRowsSummary | null;
 }

@@ -300,4 +300,10 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     defaultValue: null,
     help: 'write the Markdown report to this file (- for standard output)',
   },
+  {
+    name: 'html',
+    valueName: 'FILE',
+    defaultValue: null,
+    help: 'write the report as one self-contained HTML file (charts as inline SVG; opens offline)',
+  },
 ];

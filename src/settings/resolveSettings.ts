@@ -132,6 +132,7 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     backtestChecks: value('backtest-checks') as Settings['backtestChecks'],
     json: optional('json'),
     markdown: optional('markdown'),
+    html: optional('html'),
   };
 }
 

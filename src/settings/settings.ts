@@ -77,4 +77,6 @@ export interface Settings {
   readonly backtestChecks: 'enforce' | 'warn' | 'report';
   readonly json: string | null;
   readonly markdown: string | null;
+  /** Where to write the self-contained HTML report, or null. */
+  readonly html: string | null;
 }

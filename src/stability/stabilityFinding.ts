@@ -52,7 +52,7 @@ export function stabilityFinding(
     );
   }
   const f = stability.fluctuation;
-  const stretchWorse = f !== null && f.rejected && f.worsePeriods.length > 0;
+  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
   if (f !== null && stretchWorse) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(', ');
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : '';

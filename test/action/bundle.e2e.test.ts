@@ -56,6 +56,13 @@ describe("pull_request: the gate's own comment", () => {
     const report = JSON.parse(readFileSync(first.outputs.report!, 'utf8'));
     expect(report.verdict).toBe('pass');
     expect(path.dirname(first.outputs.report!)).toBe(first.dir);
+    // The self-contained HTML report, for upload as an artifact, and the chart in the summary.
+    expect(path.dirname(first.outputs['html-report']!)).toBe(first.dir);
+    const html = readFileSync(first.outputs['html-report']!, 'utf8');
+    expect(html).toMatch(/^<!doctype html>/);
+    expect(html).toContain('<svg');
+    expect(html).not.toMatch(/<script|<link/i);
+    expect(first.summary).toContain('```mermaid\n');
 
     api.requests.length = 0;
     const second = await runBundle({
@@ -85,7 +92,7 @@ describe("pull_request: the gate's own comment", () => {
     expect(third.code).toBe(1);
     expect(third.outputs.verdict).toBe('fail');
     expect(third.stdout).toMatch(/^::error title=skillgate::FAIL: /m);
-    expect(third.stdout).toMatch(/^::error::skillgate: the gate failed\./m);
+    expect(third.stdout).toMatch(/^::error::skillgate: The gate fails: both tests find evidence/m);
     expect(gateCommentsOn(7)).toHaveLength(1);
     expect(gateCommentsOn(7)[0]!.id).toBe(created.id);
     expect(gateCommentsOn(7)[0]!.body).toContain('### skillgate: FAIL');

@@ -65,6 +65,7 @@ describe('readActionSettings', () => {
       name: 'n',
       json: 'out.json',
       markdown: null,
+      html: null,
     });
     expect(errorOf({ 'report-file': 'r.json', baseline: 'b.csv' })).toMatch(
       /^input 'report-file' posts an existing report and cannot be combined with input 'baseline'/,

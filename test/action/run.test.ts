@@ -89,7 +89,7 @@ describe('run', () => {
     for (const verdict of ['pass', 'warn', 'fail'] as const) {
       const h = harness(sampleReport({ verdict }));
       await run(h.deps);
-      expect(h.log.some((l) => l.startsWith('failed skillgate: the gate failed.'))).toBe(
+      expect(h.log.some((l) => l.startsWith('failed skillgate: The gate fails'))).toBe(
         verdict === 'fail',
       );
       const annotation = { pass: 'notice', warn: 'warning', fail: 'error' }[verdict];

@@ -218,6 +218,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       backtestChecks: 'enforce',
       json: null,
       markdown: null,
+      html: null,
     },
     reasons: [],
     seriesSummary: null,

@@ -30,6 +30,56 @@ describe('parseUntrustedReport', () => {
     });
   });
 
+  it('reads the bootstrap histogram, and refuses an oversized one', () => {
+    const report = sampleReport();
+    const c = report.comparisons[0]!;
+    const distribution = { lower: -1, upper: 1, counts: [1, 5, 2] };
+    const withHistogram = {
+      ...report,
+      comparisons: [{ ...c, bootstrap: { ...c.bootstrap, distribution } }],
+    };
+    const parsed = parseUntrustedReport(JSON.stringify(withHistogram), 'report.json');
+    expect(parsed.comparisons[0]?.bootstrap.distribution).toEqual(distribution);
+    const huge = {
+      ...report,
+      comparisons: [
+        {
+          ...c,
+          bootstrap: {
+            ...c.bootstrap,
+            distribution: { ...distribution, counts: Array(201).fill(1) },
+          },
+        },
+      ],
+    };
+    expect(describeError(JSON.stringify(huge))).toMatch(
+      /distribution\.counts must be an array of 1 to 200 counts/,
+    );
+  });
+
+  it('reads the breakdown of the rows the candidate lacks', () => {
+    const report = sampleReport();
+    const group = { key: 'hard', rows: 10, first: '10', last: '19', meanBaselineLoss: 5 };
+    const missingRows = {
+      rows: 10,
+      first: '10',
+      last: '19',
+      meanBaselineLoss: 5,
+      meanBaselineLossCommon: 1,
+      rowsWithoutLoss: 0,
+      bySeries: [group],
+      byHorizon: [{ ...group, key: '2' }],
+    };
+    const withMissing = { ...report, inputs: { ...report.inputs, missingRows } };
+    const parsed = parseUntrustedReport(JSON.stringify(withMissing), 'report.json');
+    expect(parsed.inputs.missingRows).toEqual(missingRows);
+    const bad = {
+      ...withMissing,
+      inputs: { ...withMissing.inputs, missingRows: { ...missingRows, rows: -1 } },
+    };
+    expect(describeError(JSON.stringify(bad))).toMatch(/missingRows\.rows must be an integer/);
+  });
+
   it('reads the relative change with unbounded ends and pieces, and refuses too many pieces', () => {
     const report = sampleReport();
     const c = report.comparisons[0]!;

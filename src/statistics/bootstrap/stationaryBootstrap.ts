@@ -5,6 +5,7 @@ import {
 import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
 import { meanOf } from './centring.js';
+import { type ResampleHistogram, resampleHistogram } from './resampleHistogram.js';
 import { type ResampleRunner, runResampleJob } from './resampleJob.js';
 import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 
@@ -54,6 +55,8 @@ export interface StationaryBootstrapResult {
   pValueBelow: number | null;
   /** min(1, 2·min of the two one-sided p-values): H0 E[d] = δ. */
   pValueTwoSided: number | null;
+  /** The resample means d̄*_b in equal-width bins, for drawing (null when not resampled). */
+  distribution: ResampleHistogram | null;
   notes: string[];
 }
 
@@ -106,6 +109,7 @@ export function stationaryBootstrap(
       pValue: null,
       pValueBelow: null,
       pValueTwoSided: null,
+      distribution: null,
       notes,
     };
   }
@@ -149,6 +153,7 @@ export function stationaryBootstrap(
     pValue: inference.pValue,
     pValueBelow: inference.pValueBelow,
     pValueTwoSided: inference.pValueTwoSided,
+    distribution: resampleHistogram(mean, deviations),
     notes,
   };
 }
