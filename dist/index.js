@@ -33133,7 +33133,7 @@ function reportSections(report, options = {}) {
   const lead = `${GATE_WORD[report.verdict]}: ${first?.text ?? "no finding"}.`;
   const interval = relativeInterval(overall);
   const onCommon = report.inputs.rowsDropped.baseline > 0 ? " on the rows both models scored" : "";
-  const change = overall.relativeDifference === null ? `Mean loss ${significant(overall.meanCandidateLoss)} against the baseline's ${significant(overall.meanBaselineLoss)}${onCommon}, over ${overall.n} time points.` : `Mean loss ${percent(overall.relativeDifference)}${interval === null ? "" : ` (${pct(interval.level)} interval ${percent(interval.lower)} to ${percent(interval.upper)})`} against the baseline${onCommon}, over ${overall.n} time points${overall.firstTimestamp === null ? "" : ` from ${overall.firstTimestamp} to ${overall.lastTimestamp}`}.`;
+  const change = overall.relativeDifference === null ? `Mean loss ${significant(overall.meanCandidateLoss)} against the baseline's ${significant(overall.meanBaselineLoss)}${onCommon}, over ${overall.n} time points.` : `Mean loss ${percent(overall.relativeDifference)}${interval === null ? "" : ` (${pct(interval.level)} interval ${interval.pieces === void 0 && interval.lower !== null && interval.upper !== null ? `${percent(interval.lower)} to ${percent(interval.upper)}` : intervalText(interval)})`} against the baseline${onCommon}, over ${overall.n} time points${overall.firstTimestamp === null ? "" : ` from ${overall.firstTimestamp} to ${overall.lastTimestamp}`}.`;
   const options_ = settingsAsOptions(report.settings, paths);
   return {
     title: report.name === "" ? "skillgate" : `skillgate \xB7 ${report.name}`,

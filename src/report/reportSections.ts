@@ -5,7 +5,15 @@ import {
   type OptionValue,
   settingsAsOptions,
 } from '../settings/settingsAsOptions.js';
-import { changeCell, evidenceOf, percent, pValue, relativeInterval, significant } from './cells.js';
+import {
+  changeCell,
+  evidenceOf,
+  intervalText,
+  percent,
+  pValue,
+  relativeInterval,
+  significant,
+} from './cells.js';
 import { type DecidingReason, decidingReasons } from './decidingReason.js';
 import { displayPath } from './displayPath.js';
 import { inputNotes } from './inputNotes.js';
@@ -72,7 +80,11 @@ export function reportSections(report: ReportView, options: SectionOptions = {})
       : `Mean loss ${percent(overall.relativeDifference)}${
           interval === null
             ? ''
-            : ` (${pct(interval.level)} interval ${percent(interval.lower)} to ${percent(interval.upper)})`
+            : ` (${pct(interval.level)} interval ${
+                interval.pieces === undefined && interval.lower !== null && interval.upper !== null
+                  ? `${percent(interval.lower)} to ${percent(interval.upper)}`
+                  : intervalText(interval)
+              })`
         } against the baseline${onCommon}, over ${overall.n} time points${
           overall.firstTimestamp === null
             ? ''

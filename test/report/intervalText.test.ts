@@ -8,7 +8,9 @@ describe('intervals in the rendered report', () => {
   it('prints the relative-change interval beside the relative change, in both renderers', () => {
     const report = sampleReport();
     const md = renderMarkdown(report);
-    expect(md).toContain('-16.5% [-20.1%, -12.9%]');
+    // The comment escapes brackets (\[ … \]); the headline writes the interval in words.
+    expect(md).toContain('-16.5% \\[-20.1%, -12.9%\\]');
+    expect(md).toContain('Mean loss -16.5% (90% interval -20.1% to -12.9%)');
     expect(md).toContain('Intervals are 90% (1 − 2α)');
     expect(md).not.toContain('may disagree');
     const term = renderTerminal(report, { color: false });
@@ -45,8 +47,10 @@ describe('intervals in the rendered report', () => {
       },
     };
     const md = renderMarkdown({ ...report, comparisons: [edited] });
-    expect(md).toContain('-16.5% [−∞, -50%] ∪ [-10%, +∞]');
-    expect(md).toMatch(/\[-?[\d.]+, -?[\d.]+\] \(measured coverage 84%\) \|/);
+    expect(md).toContain('-16.5% \\[−∞, -50.0%\\] ∪ \\[-10.0%, +∞\\]');
+    expect(md).toContain('Mean loss -16.5% (90% interval \\[−∞, -50.0%\\] ∪ \\[-10.0%, +∞\\])');
+    // The bootstrap's interval for the difference, in the test details, carries its coverage.
+    expect(md).toMatch(/\\\[-?[\d.]+, -?[\d.]+\\\] \(90%\) \(measured coverage 84%\) \|/);
     expect(md).toContain('the validation study (docs/validation.md) found at n = 100 time points');
   });
 });
