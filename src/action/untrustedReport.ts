@@ -121,6 +121,8 @@ const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
 const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
 const ESTIMATORS = ['ewc', 'bartlett', 'uniform'] as const;
 const MARGIN_KINDS = ['relative', 'absolute'] as const;
+const SELECTION_RULES = ['preferred-in-set', 'none-worse', 'some-better'] as const;
+const SET_STATISTICS = ['range', 'max'] as const;
 
 function readReport(r: Reader): Report {
   const tool = r.field('tool');
@@ -412,6 +414,7 @@ function readSettings(r: Reader): Settings {
     name: r.field('name').string(),
     baseline: r.field('baseline').string(),
     candidate: r.field('candidate').string(),
+    ...readCandidateSettings(r),
     losses: r.field('losses').value === undefined ? null : r.field('losses').stringOrNull(),
     actuals: r.field('actuals').stringOrNull(),
     columns: columns as ColumnMapping,
@@ -446,6 +449,36 @@ function readSettings(r: Reader): Settings {
     top: r.field('top').integer(),
     json: r.field('json').stringOrNull(),
     markdown: r.field('markdown').stringOrNull(),
+  };
+}
+
+/** The several-candidates settings; absent in reports of earlier versions (then the defaults). */
+function readCandidateSettings(r: Reader): Pick<
+  Settings,
+  | 'candidates'
+  | 'modelColumn'
+  | 'baselineModel'
+  | 'preferred'
+  | 'selectionRule'
+  | 'setAlpha'
+  | 'setStatistic'
+> {
+  const present = (name: string) => r.field(name).value !== undefined;
+  return {
+    candidates: present('candidates')
+      ? r
+          .field('candidates')
+          .items()
+          .map((c) => ({ name: c.field('name').string(), path: c.field('path').string() }))
+      : [],
+    modelColumn: present('modelColumn') ? r.field('modelColumn').stringOrNull() : null,
+    baselineModel: present('baselineModel') ? r.field('baselineModel').stringOrNull() : null,
+    preferred: present('preferred') ? r.field('preferred').stringOrNull() : null,
+    selectionRule: present('selectionRule')
+      ? r.field('selectionRule').oneOf(SELECTION_RULES)
+      : 'preferred-in-set',
+    setAlpha: present('setAlpha') ? r.field('setAlpha').number() : 0.1,
+    setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'range',
   };
 }
 

@@ -1,4 +1,5 @@
 import { alignPanel } from '../alignment/alignPanel.js';
+import { runCandidates } from '../candidates/runCandidates.js';
 import { historyBySeries } from '../alignment/historyBySeries.js';
 import { orderLossSeries } from '../alignment/orderLossSeries.js';
 import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
@@ -28,6 +29,8 @@ export async function runComparison(
 ): Promise<{ report: Report }> {
   if (settings.losses !== null)
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
+  if (settings.candidates.length > 1 || settings.modelColumn !== null)
+    return { report: await runCandidates(settings, hooks) };
   const read = (path: string, role: 'baseline' | 'candidate' | 'actuals') =>
     readForecastFile(path, {
       role,

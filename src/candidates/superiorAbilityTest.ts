@@ -14,6 +14,16 @@ import {
  */
 export type SpaHypothesis = 'none-better' | 'none-worse';
 
+/**
+ * The margin as the policies apply it (docs/design.md, "Margins"): X_k = ±(f·L_baseline − L_k) − s,
+ * with f = 1 ± r for a relative margin r (1 + r for 'none-worse': "worse by more than r";
+ * 1 − r for 'none-better': "better by more than r") and s = δ for an absolute margin δ.
+ */
+export interface SpaMargin {
+  readonly factor: number;
+  readonly shift: number;
+}
+
 export interface SuperiorAbilityTest {
   readonly hypothesis: SpaHypothesis;
   readonly spa: SuperiorPredictiveAbilityResult;
@@ -35,19 +45,21 @@ export function superiorAbilityTest(
   deviations: readonly Float64Array[],
   expectedBlockLength: number,
   hypothesis: SpaHypothesis,
+  margin: SpaMargin = { factor: 1, shift: 0 },
 ): SuperiorAbilityTest {
   const sign = hypothesis === 'none-better' ? 1 : -1;
+  const { factor, shift } = margin;
   const n = baseline.length;
   const base = deviations[0]!;
   const performance = candidates.map((c) => {
     const x = new Float64Array(n);
-    for (let t = 0; t < n; t++) x[t] = sign * (baseline[t]! - c[t]!);
+    for (let t = 0; t < n; t++) x[t] = sign * (factor * baseline[t]! - c[t]!) - shift;
     return x;
   });
   const resampled = candidates.map((_, k) => {
     const own = deviations[k + 1]!;
     const x = new Float64Array(own.length);
-    for (let b = 0; b < x.length; b++) x[b] = sign * (base[b]! - own[b]!);
+    for (let b = 0; b < x.length; b++) x[b] = sign * (factor * base[b]! - own[b]!);
     return x;
   });
   const means = performance.map(meanOf);

@@ -1,3 +1,9 @@
+import type {
+  CandidateSummary,
+  ConfidenceSetSummary,
+  SelectionSummary,
+  SpaSummary,
+} from '../candidates/candidatesModel.js';
 import type { FileSummary } from '../core/panel.js';
 import type { Verdict } from '../decision/verdict.js';
 import type { RelativeChange } from '../intervals/relativeChange.js';
@@ -33,6 +39,14 @@ export interface Report {
   readonly pathSummary: PathSummary | null;
   /** Whether the difference holds over time (fluctuation test, recent window, periods), or null. */
   readonly stability: Stability | null;
+  /** Several candidates (src/candidates/): each one's overall comparison, set membership, ranks. */
+  readonly candidates?: readonly CandidateSummary[];
+  /** Several candidates: Hansen's (2005) SPA test over them, in the selection rule's direction. */
+  readonly spa?: SpaSummary;
+  /** Several candidates: the model confidence set over the baseline and every candidate. */
+  readonly confidenceSet?: ConfidenceSetSummary;
+  /** Several candidates: the rule that decided the gate and why. */
+  readonly selection?: SelectionSummary;
 }
 
 /**

@@ -14,7 +14,8 @@
  *   T*_max,b = max_i (ζ*_b,i − ζ*_b,·)/√var̂(d̄_i·); the model eliminated is argmax_i t_i·.
  *
  * The test of H0,M (all models in M equally accurate) has p-value P_M = (1 + #{T*_b ≥ T})/(B + 1)
- * (the project's bootstrap p-value, decision 0005; the paper writes B⁻¹ #{T*_b > T}). The
+ * (the project's bootstrap p-value, decision 0005; the paper writes B⁻¹ #{T*_b > T}); "≥" allows
+ * a relative 10⁻¹⁰ for rounding (see `reaches`). The
  * procedure tests and eliminates until one model is left; the MCS p-value of the model eliminated
  * at step j is max_{i≤j} P_M_i, and the last model's is 1. So MCS p-values never decrease along
  * the elimination order. The set at level 1 − α is {i : p̂_i ≥ α} (the paper's definition).
@@ -88,6 +89,15 @@ export function modelConfidenceSet(input: ModelConfidenceSetInput): ModelConfide
   };
 }
 
+/**
+ * T*_b counts as reaching T when T*_b ≥ T·(1 − 10⁻¹⁰): a resample statistic equal to T in exact
+ * arithmetic (common with discrete losses) must not be decided by the order of a floating-point
+ * sum, which depends on the order the models are listed in.
+ */
+function reaches(resampled: number, observed: number): boolean {
+  return resampled >= observed - Math.abs(observed) * 1e-10;
+}
+
 interface Step {
   readonly eliminate: number;
   readonly exceedances: number;
@@ -127,7 +137,7 @@ function rangeStep(
       const t = Math.abs(deviations[i]![b]! - deviations[j]![b]!) * scale;
       if (t > max) max = t;
     }
-    if (max >= observed) exceedances++;
+    if (reaches(max, observed)) exceedances++;
   }
   return { eliminate: alive[argmax(worst)]!, exceedances };
 }
@@ -169,7 +179,7 @@ function maxStep(
       const x = (deviations[alive[a]!]![b]! - average[b]!) * scales[a]!;
       if (x > max) max = x;
     }
-    if (max >= observed) exceedances++;
+    if (reaches(max, observed)) exceedances++;
   }
   return { eliminate: alive[argmax(t)]!, exceedances };
 }

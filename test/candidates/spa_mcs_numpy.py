@@ -91,7 +91,8 @@ def mcs(means, zeta, statistic, alpha):
             observed = t.max()
             stars = (Zc * scale[:, None]).max(axis=0)
             eliminate = int(np.argmax(t))
-        p = (1 + np.sum(stars >= observed)) / (B + 1)
+        # ties within a relative 1e-10 count as reaching the statistic (rounding, not data)
+        p = (1 + np.sum(stars >= observed - abs(observed) * 1e-10)) / (B + 1)
         running = max(running, p)
         model = alive[eliminate]
         order.append(model)
