@@ -1,3 +1,10 @@
+import { MAX_CANDIDATES, MAX_NAME_LENGTH } from '../candidates/candidateList.js';
+import type {
+  CandidateSummary,
+  ConfidenceSetSummary,
+  SelectionSummary,
+  SpaSummary,
+} from '../candidates/candidatesModel.js';
 import { InputError } from '../core/inputError.js';
 import type { FileSummary } from '../core/panel.js';
 import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
@@ -145,6 +152,7 @@ function readReport(r: Reader): Report {
     stability: readStability(r.field('stability')),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
+    ...readCandidateSections(r),
   };
 }
 
@@ -453,7 +461,9 @@ function readSettings(r: Reader): Settings {
 }
 
 /** The several-candidates settings; absent in reports of earlier versions (then the defaults). */
-function readCandidateSettings(r: Reader): Pick<
+function readCandidateSettings(
+  r: Reader,
+): Pick<
   Settings,
   | 'candidates'
   | 'modelColumn'
@@ -487,4 +497,90 @@ function readLevels(r: Reader): readonly [number, number] | null {
   const [lower, upper, ...rest] = r.items().map((x) => x.number());
   if (lower === undefined || upper === undefined || rest.length > 0) r.fail('two quantile levels');
   return [lower, upper];
+}
+
+const MODEL_NAME = new RegExp(`^[A-Za-z0-9][A-Za-z0-9._+-]{0,${MAX_NAME_LENGTH - 1}}$`);
+
+/**
+ * The several-candidates sections (absent in a two-model report: then absent here too). Names
+ * must be model names as the engine accepts them; at most MAX_CANDIDATES candidates and as many
+ * names in the set and the elimination order as there are models.
+ */
+function readCandidateSections(r: Reader): {
+  candidates?: CandidateSummary[];
+  spa?: SpaSummary;
+  confidenceSet?: ConfidenceSetSummary;
+  selection?: SelectionSummary;
+} {
+  const field = r.field('candidates');
+  if (field.value === undefined) return {};
+  const name = (x: Reader) => x.matching(MODEL_NAME, 'a model name (letters, digits, . _ + -)');
+  const items = field.items();
+  if (items.length === 0 || items.length > MAX_CANDIDATES) {
+    field.fail(`an array of 1 to ${MAX_CANDIDATES} candidates`);
+  }
+  const candidates = items.map((c) => ({
+    name: name(c.field('name')),
+    file: c.field('file').string(),
+    comparison: readComparison(c.field('comparison')),
+    inConfidenceSet: c.field('inConfidenceSet').boolean(),
+    mcsPValue: readProbability(c.field('mcsPValue')),
+    spaPValue: readProbability(c.field('spaPValue')),
+    rank: c.field('rank').integer(1),
+  }));
+  const s = r.field('spa');
+  const rc = s.field('realityCheck');
+  const spa: SpaSummary = {
+    hypothesis: s.field('hypothesis').oneOf(['none-better', 'none-worse']),
+    statistic: s.field('statistic').number(),
+    pValueLower: readProbability(s.field('pValueLower')),
+    pValueConsistent: readProbability(s.field('pValueConsistent')),
+    pValueUpper: readProbability(s.field('pValueUpper')),
+    resamples: s.field('resamples').integer(1),
+    expectedBlockLength: s.field('expectedBlockLength').number(),
+    realityCheck: {
+      statistic: rc.field('statistic').number(),
+      pValue: readProbability(rc.field('pValue')),
+    },
+  };
+  const m = r.field('confidenceSet');
+  const names = (x: Reader) => {
+    const list = x.items();
+    if (list.length > MAX_CANDIDATES + 1) x.fail(`at most ${MAX_CANDIDATES + 1} names`);
+    return list.map(name);
+  };
+  const b = m.field('baseline');
+  const steps = m.field('stepPValues').items();
+  if (steps.length > MAX_CANDIDATES + 1) m.field('stepPValues').fail('one p-value per model');
+  const confidenceSet: ConfidenceSetSummary = {
+    level: readProbability(m.field('level')),
+    statistic: m.field('statistic').oneOf(['range', 'max']),
+    members: names(m.field('members')),
+    eliminationOrder: names(m.field('eliminationOrder')),
+    stepPValues: steps.map(readProbability),
+    baseline: {
+      name: name(b.field('name')),
+      meanLoss: b.field('meanLoss').number(),
+      inConfidenceSet: b.field('inConfidenceSet').boolean(),
+      mcsPValue: readProbability(b.field('mcsPValue')),
+    },
+  };
+  const sel = r.field('selection');
+  const selection: SelectionSummary = {
+    rule: sel.field('rule').oneOf(SELECTION_RULES),
+    preferred: name(sel.field('preferred')),
+    preferredBy: sel.field('preferredBy').oneOf(['option', 'lowest-mean-loss']),
+    verdict: sel.field('verdict').oneOf(VERDICTS),
+    reasons: sel.field('reasons').strings(),
+    timePoints: sel.field('timePoints').integer(2),
+    expectedBlockLength: sel.field('expectedBlockLength').number(),
+    blockLengthRule: sel.field('blockLengthRule').oneOf(['auto', 'fixed']),
+  };
+  return { candidates, spa, confidenceSet, selection };
+}
+
+function readProbability(r: Reader): number {
+  const x = r.number();
+  if (x < 0 || x > 1) r.fail('a number from 0 to 1');
+  return x;
 }

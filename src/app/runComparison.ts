@@ -1,7 +1,7 @@
 import { alignPanel } from '../alignment/alignPanel.js';
-import { runCandidates } from '../candidates/runCandidates.js';
 import { historyBySeries } from '../alignment/historyBySeries.js';
 import { orderLossSeries } from '../alignment/orderLossSeries.js';
+import { runCandidates } from '../candidates/runCandidates.js';
 import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';

@@ -66,7 +66,12 @@ export function evaluateCandidates(
     return { ...c, panel, own, series: overallLossSeries(panel, own, extras) };
   });
   const joint = jointLossSeries(
-    pairs.map((p) => ({ name: p.name, file: p.file, series: p.series, timestamps: p.panel.timestamps })),
+    pairs.map((p) => ({
+      name: p.name,
+      file: p.file,
+      series: p.series,
+      timestamps: p.panel.timestamps,
+    })),
   );
   const n = joint.baseline.length;
   if (n < MINIMUM_JOINT_POINTS) {
@@ -86,7 +91,8 @@ export function evaluateCandidates(
     createRandomSource,
     extras.resampleRunner,
   );
-  const hypothesis: SpaHypothesis = settings.selectionRule === 'none-worse' ? 'none-worse' : 'none-better';
+  const hypothesis: SpaHypothesis =
+    settings.selectionRule === 'none-worse' ? 'none-worse' : 'none-better';
   const test = superiorAbilityTest(
     joint.baseline,
     joint.candidates,
@@ -180,7 +186,10 @@ export function evaluateCandidates(
 
 function spaMargin(settings: Settings, hypothesis: SpaHypothesis): SpaMargin {
   if (settings.marginKind === 'absolute') return { factor: 1, shift: settings.margin };
-  return { factor: hypothesis === 'none-worse' ? 1 + settings.margin : 1 - settings.margin, shift: 0 };
+  return {
+    factor: hypothesis === 'none-worse' ? 1 + settings.margin : 1 - settings.margin,
+    shift: 0,
+  };
 }
 
 function preferredCandidate(

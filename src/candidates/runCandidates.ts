@@ -1,7 +1,7 @@
 import type { RunHooks } from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
-import { readForecastFile } from '../reading/readForecastFile.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
+import { readForecastFile } from '../reading/readForecastFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { fileStem } from './candidateList.js';
@@ -19,7 +19,11 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
       file: 'scale',
     });
   }
-  const read = (path: string, role: 'baseline' | 'candidate' | 'actuals', columns = settings.columns) =>
+  const read = (
+    path: string,
+    role: 'baseline' | 'candidate' | 'actuals',
+    columns = settings.columns,
+  ) =>
     readForecastFile(path, {
       role,
       columns,
@@ -40,7 +44,10 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
         column: settings.columns.path,
       });
     }
-    const table = await read(file, 'candidate', { ...settings.columns, path: settings.modelColumn });
+    const table = await read(file, 'candidate', {
+      ...settings.columns,
+      path: settings.modelColumn,
+    });
     if (table.summary.ignoredColumns.includes('path')) {
       throw new InputError('--model-column cannot be combined with a path column yet', {
         file,

@@ -1,7 +1,4 @@
-import {
-  createRandomSource,
-  type SequentialRandomSourceFactory,
-} from '../random/randomSource.js';
+import { createRandomSource, type SequentialRandomSourceFactory } from '../random/randomSource.js';
 import { meanOf } from '../statistics/bootstrap/centring.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { stationaryResampleDeviations } from '../statistics/bootstrap/stationaryBootstrap.js';
@@ -20,7 +17,11 @@ import { stationaryResampleDeviations } from '../statistics/bootstrap/stationary
  */
 export function sharedResampleDeviations(
   series: readonly Float64Array[],
-  options: { readonly expectedBlockLength: number; readonly resamples: number; readonly seed: number },
+  options: {
+    readonly expectedBlockLength: number;
+    readonly resamples: number;
+    readonly seed: number;
+  },
   random: SequentialRandomSourceFactory = createRandomSource,
   runner?: ResampleRunner,
 ): Float64Array[] {

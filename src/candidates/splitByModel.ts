@@ -17,7 +17,10 @@ export function splitByModel(table: ForecastTable): Map<string, ForecastTable> {
   for (let i = 0; i < table.size; i++) {
     const id = models.ids[i]!;
     let rows = rowsOf.get(id);
-    if (rows === undefined) rowsOf.set(id, (rows = []));
+    if (rows === undefined) {
+      rows = [];
+      rowsOf.set(id, rows);
+    }
     rows.push(i);
   }
   const out = new Map<string, ForecastTable>();
@@ -73,15 +76,24 @@ function subset(table: ForecastTable, rows: readonly number[]): ForecastTable {
     horizon:
       table.horizon === null
         ? null
-        : { column: table.horizon.column, values: Int32Array.from(rows, (i) => table.horizon!.values[i]!) },
+        : {
+            column: table.horizon.column,
+            values: Int32Array.from(rows, (i) => table.horizon!.values[i]!),
+          },
     origin: labels(table.origin),
     path: null,
-    actual: table.actual === null ? null : { column: table.actual.column, values: pick(table.actual.values) },
+    actual:
+      table.actual === null
+        ? null
+        : { column: table.actual.column, values: pick(table.actual.values) },
     prediction:
       table.prediction === null
         ? null
         : { column: table.prediction.column, values: pick(table.prediction.values) },
-    weight: table.weight === null ? null : { column: table.weight.column, values: pick(table.weight.values) },
+    weight:
+      table.weight === null
+        ? null
+        : { column: table.weight.column, values: pick(table.weight.values) },
     quantiles: table.quantiles.map((q) => ({ ...q, values: pick(q.values) })),
   };
 }

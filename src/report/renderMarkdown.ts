@@ -2,6 +2,7 @@ import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatN
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
 import type { Comparison, Report } from './reportModel.js';
 
 const VERDICT_WORDS = { pass: 'PASS', warn: 'WARN', fail: 'FAIL' } as const;
@@ -23,6 +24,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(esc(report.headline), '');
   lines.push(...comparisonTable(report), '');
   lines.push(`<sub>${esc(intervalNote(report))}</sub>`, '');
+  lines.push(...renderCandidatesMarkdown(report));
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];

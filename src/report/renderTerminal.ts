@@ -1,5 +1,6 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -56,6 +57,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   out.push(paint('2', line(header)));
   for (const r of rows) out.push(line(r));
   out.push(wrap(intervalNote(report), 100), '');
+  out.push(...renderCandidatesTerminal(report));
   for (const reason of [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])]) {
     out.push(wrap(`- ${reason}`, 100, '  '));
   }

@@ -59,7 +59,9 @@ export function superiorPredictiveAbility(
   const { means, standardErrors, deviations, n } = input;
   const k = means.length;
   if (k === 0 || standardErrors.length !== k || deviations.length !== k) {
-    throw new RangeError('superior predictive ability needs one mean, error and resample row per candidate');
+    throw new RangeError(
+      'superior predictive ability needs one mean, error and resample row per candidate',
+    );
   }
   const resamples = deviations[0]!.length;
   const studentised = means.map((m, i) => ratio(m, standardErrors[i]!));

@@ -3,10 +3,7 @@ import path from 'node:path';
 
 /** Squared-error loss series per model from the co2 rolling-origin fixture (baseline first). */
 export function co2Losses(): { names: string[]; losses: Float64Array[]; timestamps: string[] } {
-  const file = path.join(
-    import.meta.dirname,
-    '../reference/fixtures/candidates_co2_rolling.csv',
-  );
+  const file = path.join(import.meta.dirname, '../reference/fixtures/candidates_co2_rolling.csv');
   const lines = readFileSync(file, 'utf8').trim().split('\n').slice(1);
   const byModel = new Map<string, number[]>();
   const timestamps: string[] = [];

@@ -32,7 +32,10 @@ const fromIndices = losses.map((x) => deviationsFromIndices(x, indices, B));
 
 function runNumpy(): {
   spa: Record<'better' | 'worse', Record<string, number | number[]>>;
-  mcs: Record<'range' | 'max', { order: number[]; steps: number[]; pvalues: number[]; members: number[] }>;
+  mcs: Record<
+    'range' | 'max',
+    { order: number[]; steps: number[]; pvalues: number[]; members: number[] }
+  >;
 } {
   const indicesFile = path.join(dir, 'indices.txt');
   const rows: string[] = [];
@@ -49,7 +52,11 @@ function runNumpy(): {
       alpha: ALPHA,
     }),
   );
-  execFileSync('/usr/bin/python3', [path.join(import.meta.dirname, 'spa_mcs_numpy.py'), input, output]);
+  execFileSync('/usr/bin/python3', [
+    path.join(import.meta.dirname, 'spa_mcs_numpy.py'),
+    input,
+    output,
+  ]);
   return JSON.parse(readFileSync(output, 'utf8'));
 }
 
@@ -73,13 +80,7 @@ describe('k candidates against numpy on the same bootstrap indices (co2, 6 model
   for (const hypothesis of ['none-better', 'none-worse'] as const) {
     it(`SPA (${hypothesis}): statistic, lower, consistent and upper p-values, reality check`, () => {
       const expected = reference.spa[hypothesis === 'none-better' ? 'better' : 'worse'];
-      const got = superiorAbilityTest(
-        losses[0]!,
-        losses.slice(1),
-        fromIndices,
-        BLOCK,
-        hypothesis,
-      );
+      const got = superiorAbilityTest(losses[0]!, losses.slice(1), fromIndices, BLOCK, hypothesis);
       expect(Math.abs(got.spa.statistic - (expected.statistic as number))).toBeLessThan(TOLERANCE);
       expect(Math.abs(got.spa.pValueLower - (expected.p_lower as number))).toBeLessThan(TOLERANCE);
       expect(Math.abs(got.spa.pValueConsistent - (expected.p_consistent as number))).toBeLessThan(
