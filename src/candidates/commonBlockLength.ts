@@ -15,11 +15,14 @@ export function commonBlockLength(
 ): number {
   if (rule.kind === 'fixed') return rule.length;
   if (baseline.length < 2) return 1;
-  let sum = 0;
-  for (const c of candidates) {
+  const lengths = candidates.map((c) => {
     const d = new Float64Array(baseline.length);
     for (let t = 0; t < d.length; t++) d[t] = c[t]! - baseline[t]!;
-    sum += automaticBlockLength(d).blockLength;
-  }
-  return sum / candidates.length;
+    return automaticBlockLength(d).blockLength;
+  });
+  // Summed in ascending order, so the same set gives the same b to the last bit in any order.
+  lengths.sort((a, b) => a - b);
+  let sum = 0;
+  for (const b of lengths) sum += b;
+  return sum / lengths.length;
 }
