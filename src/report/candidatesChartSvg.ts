@@ -15,9 +15,11 @@ const BOTTOM = 34;
  * HTML report: one row per candidate (lowest mean loss first), the point estimate
  * E[L_k]/E[L_baseline] − 1 as a dot and the relative-change set of its comparison as a bar, a
  * vertical line at no change and, with a relative margin, a dashed line at the margin. Filled
- * dots are candidates in the model confidence set, hollow ones are out. An end of the set beyond
- * the plotted range (or unbounded) is drawn to the edge with an arrow head. Returns '' for a
- * two-model report.
+ * dots are candidates in the model confidence set, hollow ones are out. The axis is logarithmic in
+ * the loss ratio 1 + change (so "half the loss" and "twice the loss" lie equally far from 0, and
+ * one very poor candidate does not squash the others); ratios below 10⁻³ are drawn at 10⁻³. An
+ * end of the set beyond the plotted range (or unbounded) is drawn to the edge with an arrow
+ * head. Returns '' for a two-model report.
  *
  * Safe to inline in HTML: every text is escaped for XML (&, <, >, ", '), names come from files.
  * Pure: the same report gives the same string.
@@ -28,13 +30,13 @@ export function candidatesChartSvg(report: Report): string {
   const rows = [...candidates].sort((a, b) => a.rank - b.rank);
   const margin = report.settings.marginKind === 'relative' ? report.settings.margin : null;
   const [lo, hi] = axisRange(rows, margin);
-  const x = (v: number) => LEFT + ((v - lo) / (hi - lo)) * PLOT;
+  const x = (v: number) => LEFT + ((logRatio(v) - logRatio(lo)) / (logRatio(hi) - logRatio(lo))) * PLOT;
   const width = LEFT + PLOT + RIGHT;
   const height = TOP + rows.length * ROW + BOTTOM;
   const parts: string[] = [
     `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="${width}" height="${height}" role="img" aria-label="Relative change of each candidate against the baseline">`,
     `<title>Relative change against the baseline, with the ${pct(report.settings.confidence)} set of each comparison</title>`,
-    `<text x="${LEFT}" y="18" font-size="12" font-family="sans-serif">change in mean loss against the baseline (filled: in the model confidence set)</text>`,
+    `<text x="${LEFT}" y="18" font-size="12" font-family="sans-serif">change in mean loss against the baseline (● in the set, ○ out)</text>`,
     line(x(0), TOP - 6, x(0), TOP + rows.length * ROW, '#555', ''),
   ];
   if (margin !== null && margin > 0 && margin <= hi) {
@@ -73,7 +75,7 @@ export function candidatesChartSvg(report: Report): string {
   return parts.join('\n');
 }
 
-/** The plotted range: every estimate and finite interval end, 0 and the margin, padded by 5%. */
+/** The plotted range: every estimate and finite interval end, 0 and the margin, padded by 5% (log scale). */
 function axisRange(rows: readonly CandidateSummary[], margin: number | null): [number, number] {
   const values = [0];
   if (margin !== null) values.push(margin);
@@ -85,20 +87,34 @@ function axisRange(rows: readonly CandidateSummary[], margin: number | null): [n
       if (p.upper !== null) values.push(p.upper);
     }
   }
-  const lo = Math.min(...values);
-  const hi = Math.max(...values);
+  const lo = Math.min(...values.map(logRatio));
+  const hi = Math.max(...values.map(logRatio));
   const pad = hi > lo ? (hi - lo) * 0.05 : 0.01;
-  return [lo - pad, hi + pad];
+  return [Math.expm1(lo - pad), Math.expm1(hi + pad)];
 }
 
-/** About five round ticks inside [lo, hi]. */
+/** log(1 + change), with the ratio floored at 10⁻³. */
+function logRatio(change: number): number {
+  return Math.log(Math.max(1e-3, 1 + change));
+}
+
+const TICKS = [
+  -0.99, -0.9, -0.5, -0.2, -0.1, -0.05, -0.02, -0.01, 0, 0.01, 0.02, 0.05, 0.1, 0.2, 0.5, 1, 2, 5,
+  10, 20, 50, 100, 200, 500, 1000,
+];
+
+/** Round changes inside [lo, hi], thinned so that neighbours are at least a sixth of the axis apart. */
 function ticks(lo: number, hi: number): number[] {
-  const raw = (hi - lo) / 5;
-  const step = 10 ** Math.floor(Math.log10(raw));
-  const nice = [1, 2, 5, 10].map((m) => m * step).find((s) => s >= raw) ?? raw;
+  const span = logRatio(hi) - logRatio(lo);
   const out: number[] = [];
-  for (let t = Math.ceil(lo / nice) * nice; t <= hi; t += nice)
-    out.push(Math.abs(t) < nice / 1e6 ? 0 : t);
+  for (const t of TICKS) {
+    if (t < lo || t > hi) continue;
+    const last = out.at(-1);
+    if (last === undefined || logRatio(t) - logRatio(last) >= span / 6 || t === 0) {
+      if (t === 0 && last !== undefined && logRatio(0) - logRatio(last) < span / 6) out.pop();
+      out.push(t);
+    }
+  }
   return out;
 }
 
