@@ -10,6 +10,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
+import { candidatesSection } from './candidatesCase.mjs';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
@@ -329,6 +330,9 @@ for (const [n, resamples] of [
     `     ${draws.toExponential(1)} block draws (n = ${n}, B = ${resamples}): 1 thread ${fmt(one.wall)} ms, pool ${fmt(two.wall)} ms (${fmt(one.wall / two.wall)}×)`,
   );
 }
+log();
+log('3. several candidates');
+const candidates = await candidatesSection({ cli, work, runs: SCALING_RUNS, log });
 const after = machine();
 log();
 log(`load average at end: ${after.load}`);
@@ -352,6 +356,7 @@ const results = {
     bootstrapSlope,
     threshold,
   },
+  candidates,
 };
 writeFileSync(path.join(work, 'results.json'), `${JSON.stringify(results, null, 2)}\n`);
 log(`results written to ${path.relative(root, path.join(work, 'results.json'))}`);

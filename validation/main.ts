@@ -3,11 +3,20 @@
  * designs of DESIGN.md ("Why ewc is the default") through the gate's own code on both cores
  * (worker threads, replications split by index, so the numbers do not depend on the split) and
  * writes the table. Options: --replications N (default 2000), --resamples B (default 9999),
- * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples).
+ * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
+ * --study all|two-models|candidates (default all; candidates runs validation/candidatesStudy.ts
+ * alone, with 999 shared resamples, and replaces its section of the file).
  */
-import { writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
+import {
+  type CandidatesDesign,
+  type CandidatesResult,
+  mergeCandidatesResults,
+  renderCandidatesSection,
+  runCandidatesStudy,
+} from './candidatesStudy.js';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
 
@@ -22,9 +31,18 @@ interface Job {
   seed: number;
 }
 
+interface CandidatesJob {
+  candidates: CandidatesDesign;
+  options: Parameters<typeof runCandidatesStudy>[1];
+}
+
 if (!isMainThread) {
-  const jobs = workerData as Job[];
-  parentPort!.postMessage(jobs.map((j) => runStudy(j.design, j)));
+  const data = workerData as Job[] | CandidatesJob;
+  if ('candidates' in data) {
+    parentPort!.postMessage(runCandidatesStudy(data.candidates, data.options));
+  } else {
+    parentPort!.postMessage(data.map((j) => runStudy(j.design, j)));
+  }
 } else {
   await main();
 }
@@ -40,6 +58,17 @@ async function main(): Promise<void> {
   const resamples = option('resamples', quick ? 999 : 9999);
   const outIndex = args.indexOf('--out');
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
+  const studyIndex = args.indexOf('--study');
+  const study = studyIndex >= 0 ? args[studyIndex + 1]! : 'all';
+  if (study === 'all' || study === 'two-models') {
+    await twoModelStudy(replications, resamples, out);
+  }
+  if (study === 'all' || study === 'candidates') {
+    await candidatesStudy(option('replications', quick ? 200 : 1000), quick ? 499 : 999, out);
+  }
+}
+
+async function twoModelStudy(replications: number, resamples: number, out: string): Promise<void> {
   const designs: SimulationDesign[] = [];
   for (const innovationCorrelation of [0.5, 0.8]) {
     for (const n of [100, 200]) {
@@ -68,8 +97,80 @@ async function main(): Promise<void> {
     );
   }
   const seconds = (Date.now() - started) / 1000;
-  writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }));
+  const kept = existsSync(out) ? candidatesSectionOf(readFileSync(out, 'utf8')) : '';
+  writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }) + kept);
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
+}
+
+const CANDIDATES_HEADING = '## Several candidates';
+
+/** The several-candidates section of a validation.md (from its heading to the end), or ''. */
+function candidatesSectionOf(text: string): string {
+  const at = text.indexOf(CANDIDATES_HEADING);
+  return at < 0 ? '' : text.slice(at);
+}
+
+/** Runs validation/candidatesStudy.ts and puts its section at the end of `out`, replacing an older one. */
+async function candidatesStudy(
+  replications: number,
+  resamples: number,
+  out: string,
+): Promise<void> {
+  const design = (n: number, betterScale: number): CandidatesDesign => ({
+    n,
+    candidates: 5,
+    phi: 0.6,
+    correlation: 0.5,
+    betterScale,
+  });
+  const designs = [design(200, 1), design(200, 0.9), design(200, 0.8), design(500, 1)];
+  const threads = Math.max(1, Math.min(2, availableParallelism()));
+  const started = Date.now();
+  const alpha = 0.05;
+  const setAlpha = 0.1;
+  const results: CandidatesResult[] = [];
+  for (const design of designs) {
+    const per = Math.ceil(replications / threads);
+    const parts = await Promise.all(
+      Array.from({ length: threads }, (_, k) => {
+        const first = k * per;
+        const count = Math.max(0, Math.min(per, replications - first));
+        const job: CandidatesJob = {
+          candidates: design,
+          options: {
+            replications: count,
+            firstReplication: first,
+            resamples,
+            seed: SEED,
+            alpha,
+            setAlpha,
+          },
+        };
+        return new Promise<CandidatesResult>((resolve, reject) => {
+          const worker = new Worker(new URL(import.meta.url), { workerData: job });
+          worker.once('message', resolve);
+          worker.once('error', reject);
+        });
+      }),
+    );
+    results.push(mergeCandidatesResults(parts.filter((p) => p.replications > 0)));
+    process.stderr.write(`validated candidates σ1=${design.betterScale}\n`);
+  }
+  const seconds = (Date.now() - started) / 1000;
+  const section = renderCandidatesSection(results, {
+    replications,
+    resamples,
+    seconds,
+    threads,
+    seed: SEED,
+    alpha,
+    setAlpha,
+  });
+  const text = existsSync(out) ? readFileSync(out, 'utf8') : '';
+  const at = text.indexOf(CANDIDATES_HEADING);
+  const before = at < 0 ? text : text.slice(0, at);
+  writeFileSync(out, `${before}${before.endsWith('\n\n') || before === '' ? '' : '\n'}${section}`);
+  process.stderr.write(`wrote the candidates section of ${out} in ${seconds.toFixed(0)} s\n`);
 }
 
 function runInWorker(jobs: Job[]): Promise<StudyResult[]> {

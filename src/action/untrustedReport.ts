@@ -488,7 +488,7 @@ function readCandidateSettings(
       ? r.field('selectionRule').oneOf(SELECTION_RULES)
       : 'preferred-in-set',
     setAlpha: present('setAlpha') ? r.field('setAlpha').number() : 0.1,
-    setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'range',
+    setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'max',
   };
 }
 

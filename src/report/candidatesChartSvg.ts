@@ -30,7 +30,8 @@ export function candidatesChartSvg(report: Report): string {
   const rows = [...candidates].sort((a, b) => a.rank - b.rank);
   const margin = report.settings.marginKind === 'relative' ? report.settings.margin : null;
   const [lo, hi] = axisRange(rows, margin);
-  const x = (v: number) => LEFT + ((logRatio(v) - logRatio(lo)) / (logRatio(hi) - logRatio(lo))) * PLOT;
+  const x = (v: number) =>
+    LEFT + ((logRatio(v) - logRatio(lo)) / (logRatio(hi) - logRatio(lo))) * PLOT;
   const width = LEFT + PLOT + RIGHT;
   const height = TOP + rows.length * ROW + BOTTOM;
   const parts: string[] = [

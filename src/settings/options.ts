@@ -65,9 +65,9 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   },
   {
     name: 'set-statistic',
-    defaultValue: 'range',
+    defaultValue: 'max',
     choices: ['range', 'max'],
-    help: 'with several candidates: statistic of the model confidence set, range (T_R) or max (T_max)',
+    help: 'with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)',
   },
   {
     name: 'losses',
