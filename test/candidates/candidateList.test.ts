@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fileStem, parseCandidateList } from '../../src/candidates/candidateList.js';
 import { parseArguments } from '../../src/cli/parseArguments.js';
-import { InputError } from '../../src/core/inputError.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
 
 describe('candidate list', () => {
