@@ -12229,16 +12229,30 @@ var InputError = class extends Error {
     this.name = "InputError";
     this.location = location;
   }
-  /** One paragraph: "file:line: message (column "c", value "v")". */
+  /**
+   * One line: "file:line: message (column "c", value "v")". Everything echoed from the input
+   * (file and column names, values, and whatever the message quotes, such as a series name) is
+   * passed through `printable`, so the line cannot be broken into several, and a name cannot
+   * start a line that the Actions runner would read as a workflow command (`::error::…`).
+   */
   describe() {
     const { file, line, column, value } = this.location;
     const where = file === void 0 ? "" : line === void 0 ? `${file}: ` : `${file}:${line}: `;
     const details = [];
     if (column !== void 0) details.push(`column "${column}"`);
     if (value !== void 0) details.push(`value ${JSON.stringify(truncate(value, 80))}`);
-    return `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`;
+    return printable(
+      `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`
+    );
   }
 };
+function printable(text) {
+  return text.replace(
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are the target
+    /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g,
+    (ch) => ch === "\n" ? "\\n" : ch === "\r" ? "\\r" : ch === "	" ? "\\t" : `\\u{${ch.codePointAt(0)?.toString(16).toUpperCase().padStart(4, "0")}}`
+  );
+}
 function truncate(text, max) {
   return text.length <= max ? text : `${text.slice(0, max)}\u2026`;
 }
@@ -16537,7 +16551,7 @@ var LOSS_LABELS = {
 
 // src/report/escapeMarkdown.ts
 function escapeMarkdown(text) {
-  return text.replace(/[\r\n\t]+/g, " ").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B");
+  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
 }
 
 // src/settings/defaultConfidence.ts
@@ -17314,7 +17328,7 @@ async function main(argv) {
 `);
       return 2;
     }
-    const message = error instanceof Error ? error.message : String(error);
+    const message = printable(error instanceof Error ? error.message : String(error));
     process.stderr.write(
       `skillgate: internal error: ${message}
 This is a bug in skillgate; set SKILLGATE_DEBUG=1 for details.

@@ -1787,11 +1787,11 @@ var require_request = __commonJS({
           }
         } else if (headers && typeof headers === "object") {
           if (headers[Symbol.iterator]) {
-            for (const header of headers) {
-              if (!Array.isArray(header) || header.length !== 2) {
+            for (const header2 of headers) {
+              if (!Array.isArray(header2) || header2.length !== 2) {
                 throw new InvalidArgumentError("headers must be in key-value pair format");
               }
-              processHeader(this, header[0], header[1]);
+              processHeader(this, header2[0], header2[1]);
             }
           } else {
             const keys = Object.keys(headers);
@@ -4188,9 +4188,9 @@ var require_util2 = __commonJS({
       return "success";
     }
     function appendFetchMetadata(httpRequest) {
-      let header = null;
-      header = httpRequest.mode;
-      httpRequest.headersList.set("sec-fetch-mode", header, true);
+      let header2 = null;
+      header2 = httpRequest.mode;
+      httpRequest.headersList.set("sec-fetch-mode", header2, true);
     }
     function appendRequestOriginHeader(request2) {
       let serializedOrigin = request2.origin;
@@ -5790,7 +5790,7 @@ var require_client_h1 = __commonJS({
       kResume,
       kHTTPContext
     } = require_symbols();
-    var constants3 = require_constants2();
+    var constants4 = require_constants2();
     var EMPTY_BUF = Buffer.alloc(0);
     var FastBuffer = Buffer[Symbol.species];
     var addListener = util.addListener;
@@ -5865,7 +5865,7 @@ var require_client_h1 = __commonJS({
       constructor(client, socket, { exports: exports2 }) {
         assert(Number.isFinite(client[kMaxHeadersSize]) && client[kMaxHeadersSize] > 0);
         this.llhttp = exports2;
-        this.ptr = this.llhttp.llhttp_alloc(constants3.TYPE.RESPONSE);
+        this.ptr = this.llhttp.llhttp_alloc(constants4.TYPE.RESPONSE);
         this.client = client;
         this.socket = socket;
         this.timeout = null;
@@ -5960,11 +5960,11 @@ var require_client_h1 = __commonJS({
             currentBufferRef = null;
           }
           const offset = llhttp.llhttp_get_error_pos(this.ptr) - currentBufferPtr;
-          if (ret !== constants3.ERROR.OK) {
+          if (ret !== constants4.ERROR.OK) {
             const body = data.subarray(offset);
-            if (ret === constants3.ERROR.PAUSED_UPGRADE) {
+            if (ret === constants4.ERROR.PAUSED_UPGRADE) {
               this.onUpgrade(body);
-            } else if (ret === constants3.ERROR.PAUSED) {
+            } else if (ret === constants4.ERROR.PAUSED) {
               this.paused = true;
               socket.unshift(body);
             } else {
@@ -5987,10 +5987,10 @@ var require_client_h1 = __commonJS({
         } finally {
           currentParser = null;
         }
-        if (ret === constants3.ERROR.OK) {
+        if (ret === constants4.ERROR.OK) {
           return null;
         }
-        if (ret === constants3.ERROR.PAUSED || ret === constants3.ERROR.PAUSED_UPGRADE) {
+        if (ret === constants4.ERROR.PAUSED || ret === constants4.ERROR.PAUSED_UPGRADE) {
           this.paused = true;
           return null;
         }
@@ -6007,7 +6007,7 @@ var require_client_h1 = __commonJS({
           const len = new Uint8Array(llhttp.memory.buffer, ptr).indexOf(0);
           message = "Response does not match the HTTP/1.1 protocol (" + Buffer.from(llhttp.memory.buffer, ptr, len).toString() + ")";
         }
-        return new HTTPParserError(message, constants3.ERROR[ret], data);
+        return new HTTPParserError(message, constants4.ERROR[ret], data);
       }
       destroy() {
         assert(this.ptr != null);
@@ -6187,7 +6187,7 @@ var require_client_h1 = __commonJS({
           socket[kBlocking] = false;
           client[kResume]();
         }
-        return pause ? constants3.ERROR.PAUSED : 0;
+        return pause ? constants4.ERROR.PAUSED : 0;
       }
       onBody(buf) {
         const { client, socket, statusCode, maxResponseSize } = this;
@@ -6209,7 +6209,7 @@ var require_client_h1 = __commonJS({
         }
         this.bytesRead += buf.length;
         if (request2.onData(buf) === false) {
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         }
       }
       onMessageComplete() {
@@ -6245,13 +6245,13 @@ var require_client_h1 = __commonJS({
         if (socket[kWriting]) {
           assert(client[kRunning] === 0);
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (!shouldKeepAlive) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (socket[kReset] && client[kRunning] === 0) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (client[kPipelining] == null || client[kPipelining] === 1) {
           setImmediate(() => client[kResume]());
         } else {
@@ -6542,22 +6542,22 @@ var require_client_h1 = __commonJS({
       if (blocking) {
         socket[kBlocking] = true;
       }
-      let header = `${method} ${path7} HTTP/1.1\r
+      let header2 = `${method} ${path7} HTTP/1.1\r
 `;
       if (typeof host === "string") {
-        header += `host: ${host}\r
+        header2 += `host: ${host}\r
 `;
       } else {
-        header += client[kHostHeader];
+        header2 += client[kHostHeader];
       }
       if (upgrade) {
-        header += `connection: upgrade\r
+        header2 += `connection: upgrade\r
 upgrade: ${upgrade}\r
 `;
       } else if (client[kPipelining] && !socket[kReset]) {
-        header += "connection: keep-alive\r\n";
+        header2 += "connection: keep-alive\r\n";
       } else {
-        header += "connection: close\r\n";
+        header2 += "connection: close\r\n";
       }
       if (Array.isArray(headers)) {
         for (let n = 0; n < headers.length; n += 2) {
@@ -6565,41 +6565,41 @@ upgrade: ${upgrade}\r
           const val = headers[n + 1];
           if (Array.isArray(val)) {
             for (let i = 0; i < val.length; i++) {
-              header += `${key}: ${val[i]}\r
+              header2 += `${key}: ${val[i]}\r
 `;
             }
           } else {
-            header += `${key}: ${val}\r
+            header2 += `${key}: ${val}\r
 `;
           }
         }
       }
       if (channels.sendHeaders.hasSubscribers) {
-        channels.sendHeaders.publish({ request: request2, headers: header, socket });
+        channels.sendHeaders.publish({ request: request2, headers: header2, socket });
       }
       if (!body || bodyLength === 0) {
-        writeBuffer(abort, null, client, request2, socket, contentLength, header, expectsPayload);
+        writeBuffer(abort, null, client, request2, socket, contentLength, header2, expectsPayload);
       } else if (util.isBuffer(body)) {
-        writeBuffer(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+        writeBuffer(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
       } else if (util.isBlobLike(body)) {
         if (typeof body.stream === "function") {
-          writeIterable(abort, body.stream(), client, request2, socket, contentLength, header, expectsPayload);
+          writeIterable(abort, body.stream(), client, request2, socket, contentLength, header2, expectsPayload);
         } else {
-          writeBlob(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+          writeBlob(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
         }
       } else if (util.isStream(body)) {
-        writeStream(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+        writeStream(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
       } else if (util.isIterable(body)) {
-        writeIterable(abort, body, client, request2, socket, contentLength, header, expectsPayload);
+        writeIterable(abort, body, client, request2, socket, contentLength, header2, expectsPayload);
       } else {
         assert(false);
       }
       return true;
     }
-    function writeStream(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    function writeStream(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       assert(contentLength !== 0 || client[kRunning] === 0, "stream body cannot be pipelined");
       let finished = false;
-      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header });
+      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header: header2 });
       const onData = function(chunk) {
         if (finished) {
           return;
@@ -6665,22 +6665,22 @@ upgrade: ${upgrade}\r
         setImmediate(onClose);
       }
     }
-    function writeBuffer(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    function writeBuffer(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       try {
         if (!body) {
           if (contentLength === 0) {
-            socket.write(`${header}content-length: 0\r
+            socket.write(`${header2}content-length: 0\r
 \r
 `, "latin1");
           } else {
             assert(contentLength === null, "no body must not have content length");
-            socket.write(`${header}\r
+            socket.write(`${header2}\r
 `, "latin1");
           }
         } else if (util.isBuffer(body)) {
           assert(contentLength === body.byteLength, "buffer body must have content length");
           socket.cork();
-          socket.write(`${header}content-length: ${contentLength}\r
+          socket.write(`${header2}content-length: ${contentLength}\r
 \r
 `, "latin1");
           socket.write(body);
@@ -6696,7 +6696,7 @@ upgrade: ${upgrade}\r
         abort(err);
       }
     }
-    async function writeBlob(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    async function writeBlob(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       assert(contentLength === body.size, "blob body must have content length");
       try {
         if (contentLength != null && contentLength !== body.size) {
@@ -6704,7 +6704,7 @@ upgrade: ${upgrade}\r
         }
         const buffer = Buffer.from(await body.arrayBuffer());
         socket.cork();
-        socket.write(`${header}content-length: ${contentLength}\r
+        socket.write(`${header2}content-length: ${contentLength}\r
 \r
 `, "latin1");
         socket.write(buffer);
@@ -6719,7 +6719,7 @@ upgrade: ${upgrade}\r
         abort(err);
       }
     }
-    async function writeIterable(abort, body, client, request2, socket, contentLength, header, expectsPayload) {
+    async function writeIterable(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
       assert(contentLength !== 0 || client[kRunning] === 0, "iterator body cannot be pipelined");
       let callback = null;
       function onDrain() {
@@ -6738,7 +6738,7 @@ upgrade: ${upgrade}\r
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
-      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header });
+      const writer = new AsyncWriter({ abort, socket, request: request2, contentLength, client, expectsPayload, header: header2 });
       try {
         for await (const chunk of body) {
           if (socket[kError]) {
@@ -6756,19 +6756,19 @@ upgrade: ${upgrade}\r
       }
     }
     var AsyncWriter = class {
-      constructor({ abort, socket, request: request2, contentLength, client, expectsPayload, header }) {
+      constructor({ abort, socket, request: request2, contentLength, client, expectsPayload, header: header2 }) {
         this.socket = socket;
         this.request = request2;
         this.contentLength = contentLength;
         this.client = client;
         this.bytesWritten = 0;
         this.expectsPayload = expectsPayload;
-        this.header = header;
+        this.header = header2;
         this.abort = abort;
         socket[kWriting] = true;
       }
       write(chunk) {
-        const { socket, request: request2, contentLength, client, bytesWritten, expectsPayload, header } = this;
+        const { socket, request: request2, contentLength, client, bytesWritten, expectsPayload, header: header2 } = this;
         if (socket[kError]) {
           throw socket[kError];
         }
@@ -6791,10 +6791,10 @@ upgrade: ${upgrade}\r
             socket[kReset] = true;
           }
           if (contentLength === null) {
-            socket.write(`${header}transfer-encoding: chunked\r
+            socket.write(`${header2}transfer-encoding: chunked\r
 `, "latin1");
           } else {
-            socket.write(`${header}content-length: ${contentLength}\r
+            socket.write(`${header2}content-length: ${contentLength}\r
 \r
 `, "latin1");
           }
@@ -6818,7 +6818,7 @@ ${len.toString(16)}\r
         return ret;
       }
       end() {
-        const { socket, contentLength, client, bytesWritten, expectsPayload, header, request: request2 } = this;
+        const { socket, contentLength, client, bytesWritten, expectsPayload, header: header2, request: request2 } = this;
         request2.onRequestSent();
         socket[kWriting] = false;
         if (socket[kError]) {
@@ -6829,11 +6829,11 @@ ${len.toString(16)}\r
         }
         if (bytesWritten === 0) {
           if (expectsPayload) {
-            socket.write(`${header}content-length: 0\r
+            socket.write(`${header2}content-length: 0\r
 \r
 `, "latin1");
           } else {
-            socket.write(`${header}\r
+            socket.write(`${header2}\r
 `, "latin1");
           }
         } else if (contentLength === null) {
@@ -7563,15 +7563,15 @@ var require_redirect_handler = __commonJS({
         }
       }
     }
-    function shouldRemoveHeader(header, removeContent, unknownOrigin) {
-      if (header.length === 4) {
-        return util.headerNameToString(header) === "host";
+    function shouldRemoveHeader(header2, removeContent, unknownOrigin) {
+      if (header2.length === 4) {
+        return util.headerNameToString(header2) === "host";
       }
-      if (removeContent && util.headerNameToString(header).startsWith("content-")) {
+      if (removeContent && util.headerNameToString(header2).startsWith("content-")) {
         return true;
       }
-      if (unknownOrigin && (header.length === 13 || header.length === 6 || header.length === 19)) {
-        const name = util.headerNameToString(header);
+      if (unknownOrigin && (header2.length === 13 || header2.length === 6 || header2.length === 19)) {
+        const name = util.headerNameToString(header2);
         return name === "authorization" || name === "cookie" || name === "proxy-authorization";
       }
       return false;
@@ -11959,14 +11959,14 @@ var require_headers = __commonJS({
     function fill(headers, object) {
       if (Array.isArray(object)) {
         for (let i = 0; i < object.length; ++i) {
-          const header = object[i];
-          if (header.length !== 2) {
+          const header2 = object[i];
+          if (header2.length !== 2) {
             throw webidl.errors.exception({
               header: "Headers constructor",
-              message: `expected name/value pair to be length 2, found ${header.length}.`
+              message: `expected name/value pair to be length 2, found ${header2.length}.`
             });
           }
-          appendHeader(headers, header[0], header[1]);
+          appendHeader(headers, header2[0], header2[1]);
         }
       } else if (typeof object === "object" && object !== null) {
         const keys = Object.keys(object);
@@ -15410,10 +15410,10 @@ var require_util5 = __commonJS({
       const serializedB = URLSerializer(B, excludeFragment);
       return serializedA === serializedB;
     }
-    function getFieldValues(header) {
-      assert(header !== null);
+    function getFieldValues(header2) {
+      assert(header2 !== null);
       const values = [];
-      for (let value of header.split(",")) {
+      for (let value of header2.split(",")) {
         value = value.trim();
         if (isValidHeaderName(value)) {
           values.push(value);
@@ -16312,20 +16312,20 @@ var require_parse = __commonJS({
     var { isCTLExcludingHtab } = require_util6();
     var { collectASequenceOfCodePointsFast } = require_data_url();
     var assert = __require("node:assert");
-    function parseSetCookie(header) {
-      if (isCTLExcludingHtab(header)) {
+    function parseSetCookie(header2) {
+      if (isCTLExcludingHtab(header2)) {
         return null;
       }
       let nameValuePair = "";
       let unparsedAttributes = "";
       let name = "";
       let value = "";
-      if (header.includes(";")) {
+      if (header2.includes(";")) {
         const position = { position: 0 };
-        nameValuePair = collectASequenceOfCodePointsFast(";", header, position);
-        unparsedAttributes = header.slice(position.position);
+        nameValuePair = collectASequenceOfCodePointsFast(";", header2, position);
+        unparsedAttributes = header2.slice(position.position);
       } else {
-        nameValuePair = header;
+        nameValuePair = header2;
       }
       if (!nameValuePair.includes("=")) {
         value = nameValuePair;
@@ -19574,9 +19574,9 @@ var require_lib = __commonJS({
               }
               yield response.readBody();
               if (parsedRedirectUrl.hostname !== parsedUrl.hostname) {
-                for (const header in headers) {
-                  if (header.toLowerCase() === "authorization") {
-                    delete headers[header];
+                for (const header2 in headers) {
+                  if (header2.toLowerCase() === "authorization") {
+                    delete headers[header2];
                   }
                 }
               }
@@ -19729,15 +19729,15 @@ var require_lib = __commonJS({
        * For headers that must always be a single string (like Content-Type), use the
        * specialized _getExistingOrDefaultContentTypeHeader method instead.
        */
-      _getExistingOrDefaultHeader(additionalHeaders, header, _default) {
+      _getExistingOrDefaultHeader(additionalHeaders, header2, _default) {
         let clientHeader;
         if (this.requestOptions && this.requestOptions.headers) {
-          const headerValue = lowercaseKeys3(this.requestOptions.headers)[header];
+          const headerValue = lowercaseKeys3(this.requestOptions.headers)[header2];
           if (headerValue) {
             clientHeader = typeof headerValue === "number" ? headerValue.toString() : headerValue;
           }
         }
-        const additionalValue = additionalHeaders[header];
+        const additionalValue = additionalHeaders[header2];
         if (additionalValue !== void 0) {
           return typeof additionalValue === "number" ? additionalValue.toString() : additionalValue;
         }
@@ -19923,6 +19923,145 @@ var require_lib = __commonJS({
     };
     exports.HttpClient = HttpClient3;
     var lowercaseKeys3 = (obj) => Object.keys(obj).reduce((c, k) => (c[k.toLowerCase()] = obj[k], c), {});
+  }
+});
+
+// node_modules/@octokit/request/node_modules/content-type/dist/index.js
+var require_dist = __commonJS({
+  "node_modules/@octokit/request/node_modules/content-type/dist/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.format = format;
+    exports.parse = parse3;
+    var TEXT_REGEXP = /^[\u0009\u0020-\u007e\u0080-\u00ff]*$/;
+    var TOKEN_REGEXP = /^[!#$%&'*+.^_`|~0-9A-Za-z-]+$/;
+    var QUOTE_REGEXP = /[\\"]/g;
+    var TYPE_REGEXP = /^[!#$%&'*+.^_`|~0-9A-Za-z-]+\/[!#$%&'*+.^_`|~0-9A-Za-z-]+$/;
+    var NullObject = /* @__PURE__ */ (() => {
+      const C = function() {
+      };
+      C.prototype = /* @__PURE__ */ Object.create(null);
+      return C;
+    })();
+    function format(obj) {
+      const { type, parameters } = obj;
+      if (!type || !TYPE_REGEXP.test(type)) {
+        throw new TypeError(`Invalid type: ${type}`);
+      }
+      let result = type;
+      if (parameters) {
+        for (const param of Object.keys(parameters)) {
+          if (!TOKEN_REGEXP.test(param)) {
+            throw new TypeError(`Invalid parameter name: ${param}`);
+          }
+          result += `; ${param}=${qstring(parameters[param])}`;
+        }
+      }
+      return result;
+    }
+    function parse3(header2, options) {
+      const stopChar = options?.comma === true ? COMMA : 65536;
+      const len = header2.length;
+      let index = skipOWS(header2, options?.start ?? 0, len);
+      const valueStart = index;
+      index = skipValue(header2, index, len, stopChar);
+      const valueEnd = trailingOWS(header2, valueStart, index);
+      const type = header2.slice(valueStart, valueEnd).toLowerCase();
+      if (options?.parameters === false) {
+        return { type, index, parameters: new NullObject() };
+      }
+      return parseParameters(header2, type, index, len, stopChar);
+    }
+    var SP = 32;
+    var HTAB = 9;
+    var SEMI = 59;
+    var EQ = 61;
+    var DQUOTE = 34;
+    var BSLASH = 92;
+    var COMMA = 44;
+    function parseParameters(header2, type, index, len, stopChar) {
+      const parameters = new NullObject();
+      parameter: while (index < len) {
+        if (header2.charCodeAt(index) === stopChar)
+          break;
+        index = skipOWS(header2, index + 1, len);
+        const keyStart = index;
+        while (index < len) {
+          const code = header2.charCodeAt(index);
+          if (code === stopChar)
+            break parameter;
+          if (code === SEMI)
+            continue parameter;
+          if (code === EQ) {
+            const keyEnd = trailingOWS(header2, keyStart, index);
+            const key = header2.slice(keyStart, keyEnd).toLowerCase();
+            index = skipOWS(header2, index + 1, len);
+            if (index < len && header2.charCodeAt(index) === DQUOTE) {
+              index++;
+              let value = "";
+              while (index < len) {
+                const code2 = header2.charCodeAt(index++);
+                if (code2 === DQUOTE) {
+                  index = skipValue(header2, index, len, stopChar);
+                  if (parameters[key] === void 0)
+                    parameters[key] = value;
+                  break;
+                }
+                if (code2 === BSLASH && index < len) {
+                  value += header2[index++];
+                  continue;
+                }
+                value += String.fromCharCode(code2);
+              }
+              continue parameter;
+            }
+            const valueStart = index;
+            index = skipValue(header2, index, len, stopChar);
+            if (parameters[key] === void 0) {
+              const valueEnd = trailingOWS(header2, valueStart, index);
+              parameters[key] = header2.slice(valueStart, valueEnd);
+            }
+            continue parameter;
+          }
+          index++;
+        }
+      }
+      return { type, index, parameters };
+    }
+    function skipValue(str, index, len, stopChar) {
+      while (index < len) {
+        const code = str.charCodeAt(index);
+        if (code === SEMI || code === stopChar)
+          break;
+        index++;
+      }
+      return index;
+    }
+    function skipOWS(header2, index, len) {
+      while (index < len) {
+        const char = header2.charCodeAt(index);
+        if (char !== SP && char !== HTAB)
+          break;
+        index++;
+      }
+      return index;
+    }
+    function trailingOWS(header2, start, end) {
+      while (end > start) {
+        const char = header2.charCodeAt(end - 1);
+        if (char !== SP && char !== HTAB)
+          break;
+        end--;
+      }
+      return end;
+    }
+    function qstring(str) {
+      if (TOKEN_REGEXP.test(str))
+        return str;
+      if (TEXT_REGEXP.test(str))
+        return `"${str.replace(QUOTE_REGEXP, "\\$&")}"`;
+      throw new TypeError(`Invalid parameter value: ${str}`);
+    }
   }
 });
 
@@ -32109,7 +32248,7 @@ var require_lib140 = __commonJS({
 
 // src/action/run.ts
 import { createHash as createHash2 } from "node:crypto";
-import { appendFile as appendFile2, mkdir as mkdir2, readFile as readFile2, stat as stat3, writeFile as writeFile2 } from "node:fs/promises";
+import { appendFile as appendFile2, mkdir as mkdir2, readFile as readFile2, writeFile as writeFile2 } from "node:fs/promises";
 import path6 from "node:path";
 
 // src/core/inputError.ts
@@ -32120,16 +32259,30 @@ var InputError = class extends Error {
     this.name = "InputError";
     this.location = location;
   }
-  /** One paragraph: "file:line: message (column "c", value "v")". */
+  /**
+   * One line: "file:line: message (column "c", value "v")". Everything echoed from the input
+   * (file and column names, values, and whatever the message quotes, such as a series name) is
+   * passed through `printable`, so the line cannot be broken into several, and a name cannot
+   * start a line that the Actions runner would read as a workflow command (`::error::…`).
+   */
   describe() {
     const { file, line, column, value } = this.location;
     const where = file === void 0 ? "" : line === void 0 ? `${file}: ` : `${file}:${line}: `;
     const details = [];
     if (column !== void 0) details.push(`column "${column}"`);
     if (value !== void 0) details.push(`value ${JSON.stringify(truncate(value, 80))}`);
-    return `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`;
+    return printable(
+      `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`
+    );
   }
 };
+function printable(text2) {
+  return text2.replace(
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are the target
+    /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g,
+    (ch) => ch === "\n" ? "\\n" : ch === "\r" ? "\\r" : ch === "	" ? "\\t" : `\\u{${ch.codePointAt(0)?.toString(16).toUpperCase().padStart(4, "0")}}`
+  );
+}
 function truncate(text2, max) {
   return text2.length <= max ? text2 : `${text2.slice(0, max)}\u2026`;
 }
@@ -32165,7 +32318,7 @@ var LOSS_LABELS = {
 
 // src/report/escapeMarkdown.ts
 function escapeMarkdown(text2) {
-  return text2.replace(/[\r\n\t]+/g, " ").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B");
+  return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
 }
 
 // src/settings/defaultConfidence.ts
@@ -32442,6 +32595,9 @@ function planComment(eventName, payload, pullRequestInput, envSha) {
       };
     }
     case "push": {
+      const ref = text(event.ref) ?? "";
+      if (ref.startsWith("refs/tags/"))
+        return { kind: "none", reason: `a tag push (${ref}) belongs to no pull request` };
       if (pullRequestInput !== null) return { kind: "pull-request", number: pullRequestInput };
       const sha = text(event.after) ?? envSha;
       if (sha === null || /^0+$/.test(sha))
@@ -32964,9 +33120,9 @@ var HttpClient = class {
           }
           yield response.readBody();
           if (parsedRedirectUrl.hostname !== parsedUrl.hostname) {
-            for (const header in headers) {
-              if (header.toLowerCase() === "authorization") {
-                delete headers[header];
+            for (const header2 in headers) {
+              if (header2.toLowerCase() === "authorization") {
+                delete headers[header2];
               }
             }
           }
@@ -33119,15 +33275,15 @@ var HttpClient = class {
    * For headers that must always be a single string (like Content-Type), use the
    * specialized _getExistingOrDefaultContentTypeHeader method instead.
    */
-  _getExistingOrDefaultHeader(additionalHeaders, header, _default) {
+  _getExistingOrDefaultHeader(additionalHeaders, header2, _default) {
     let clientHeader;
     if (this.requestOptions && this.requestOptions.headers) {
-      const headerValue = lowercaseKeys(this.requestOptions.headers)[header];
+      const headerValue = lowercaseKeys(this.requestOptions.headers)[header2];
       if (headerValue) {
         clientHeader = typeof headerValue === "number" ? headerValue.toString() : headerValue;
       }
     }
-    const additionalValue = additionalHeaders[header];
+    const additionalValue = additionalHeaders[header2];
     if (additionalValue !== void 0) {
       return typeof additionalValue === "number" ? additionalValue.toString() : additionalValue;
     }
@@ -33638,8 +33794,8 @@ var Summary = class {
         if (typeof cell === "string") {
           return this.wrap("td", cell);
         }
-        const { header, data, colspan, rowspan } = cell;
-        const tag = header ? "th" : "td";
+        const { header: header2, data, colspan, rowspan } = cell;
+        const tag = header2 ? "th" : "td";
         const attrs = Object.assign(Object.assign({}, colspan && { colspan }), rowspan && { rowspan });
         return this.wrap(tag, data, attrs);
       }).join("");
@@ -35290,189 +35446,8 @@ function withDefaults(oldDefaults, newDefaults) {
 }
 var endpoint = withDefaults(null, DEFAULTS);
 
-// node_modules/content-type/dist/index.js
-var SP = 32;
-var HTAB = 9;
-var SEMI = 59;
-var EQ = 61;
-var DQUOTE = 34;
-var BSLASH = 92;
-var COMMA = 44;
-var LOWER_CASE = 1;
-var OWS = 2;
-var SEMI_FLAG = 4;
-var COMMA_FLAG = 8;
-var TOKEN_FLAG = 16;
-var NON_ASCII = 65280;
-var CASE_FLAGS = LOWER_CASE | NON_ASCII;
-var CHAR_MAP = new Uint8Array(256);
-CHAR_MAP[HTAB] |= OWS;
-CHAR_MAP[SP] |= OWS;
-CHAR_MAP[SEMI] |= SEMI_FLAG;
-CHAR_MAP[COMMA] |= COMMA_FLAG;
-for (let code = 128; code <= 255; code++) {
-  CHAR_MAP[code] |= LOWER_CASE;
-}
-for (const char of "!#$%&'*+-.^_`|~") {
-  CHAR_MAP[char.charCodeAt(0)] |= TOKEN_FLAG;
-}
-for (let code = 48; code <= 57; code++) {
-  CHAR_MAP[code] |= TOKEN_FLAG;
-}
-for (let code = 65; code <= 90; code++) {
-  CHAR_MAP[code] |= LOWER_CASE | TOKEN_FLAG;
-}
-for (let code = 97; code <= 122; code++) {
-  CHAR_MAP[code] |= TOKEN_FLAG;
-}
-var NullObject = /* @__PURE__ */ (() => {
-  const C = function() {
-  };
-  C.prototype = /* @__PURE__ */ Object.create(null);
-  return C;
-})();
-function parse2(header, options) {
-  const stopFlags = SEMI_FLAG | (options?.comma === true ? COMMA_FLAG : 0);
-  const len = header.length;
-  let valueStart = options?.start ?? 0;
-  while ((CHAR_MAP[header.charCodeAt(valueStart)] & OWS) !== 0) {
-    valueStart++;
-  }
-  let index = valueStart;
-  let typeFlags = 0;
-  let whitespace = -1;
-  let stop = options?.parameters === false ? COMMA_FLAG : 0;
-  while (index < len) {
-    const code = header.charCodeAt(index);
-    const flags = CHAR_MAP[code];
-    if ((flags & stopFlags) !== 0) {
-      stop |= flags & COMMA_FLAG;
-      break;
-    }
-    if ((flags & OWS) !== 0) {
-      if (whitespace === -1)
-        whitespace = index;
-    } else {
-      whitespace = -1;
-    }
-    typeFlags |= code & NON_ASCII | flags;
-    index++;
-  }
-  const valueEnd = whitespace === -1 ? index : whitespace;
-  const value = header.slice(valueStart, valueEnd);
-  const type = (typeFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
-  if (index === len || stop !== 0) {
-    return { type, index, parameters: new NullObject() };
-  }
-  return parseParameters(header, type, index, len, stopFlags);
-}
-function parseParameters(header, type, index, len, stopFlags) {
-  const parameters = new NullObject();
-  parameter: while (index < len) {
-    index++;
-    while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
-      index++;
-    }
-    const keyStart = index;
-    let keyFlags = 0;
-    let keyWhitespace = -1;
-    while (index < len) {
-      const code = header.charCodeAt(index);
-      const flags = CHAR_MAP[code];
-      if ((flags & stopFlags) !== 0) {
-        if ((flags & COMMA_FLAG) !== 0)
-          break parameter;
-        continue parameter;
-      }
-      if (code === EQ) {
-        const keyEnd = keyWhitespace === -1 ? index : keyWhitespace;
-        const value = header.slice(keyStart, keyEnd);
-        const key = (keyFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
-        index++;
-        while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
-          index++;
-        }
-        if (index < len && header.charCodeAt(index) === DQUOTE) {
-          const quotedStart = ++index;
-          let escaped = false;
-          while (index < len) {
-            const code2 = header.charCodeAt(index);
-            if (code2 === DQUOTE) {
-              if (parameters[key] === void 0) {
-                parameters[key] = escaped ? unescapeQuotedPairs(header, quotedStart, index) : header.slice(quotedStart, index);
-              }
-              index++;
-              let stop2 = 0;
-              while (index < len) {
-                const code3 = header.charCodeAt(index);
-                const flags2 = CHAR_MAP[code3];
-                if ((flags2 & stopFlags) !== 0) {
-                  stop2 = flags2 & COMMA_FLAG;
-                  break;
-                }
-                index++;
-              }
-              if (stop2 !== 0)
-                break parameter;
-              continue parameter;
-            }
-            if (code2 === BSLASH && index + 1 < len) {
-              escaped = true;
-              index += 2;
-              continue;
-            }
-            index++;
-          }
-          continue parameter;
-        }
-        const valueStart = index;
-        let stop = 0;
-        let valueWhitespace = -1;
-        while (index < len) {
-          const code2 = header.charCodeAt(index);
-          const flags2 = CHAR_MAP[code2];
-          if ((flags2 & stopFlags) !== 0) {
-            stop = flags2 & COMMA_FLAG;
-            break;
-          }
-          if ((flags2 & OWS) !== 0) {
-            if (valueWhitespace === -1)
-              valueWhitespace = index;
-          } else {
-            valueWhitespace = -1;
-          }
-          index++;
-        }
-        if (parameters[key] === void 0) {
-          const valueEnd = valueWhitespace === -1 ? index : valueWhitespace;
-          parameters[key] = header.slice(valueStart, valueEnd);
-        }
-        if (stop !== 0)
-          break parameter;
-        continue parameter;
-      }
-      if ((flags & OWS) !== 0) {
-        if (keyWhitespace === -1)
-          keyWhitespace = index;
-      } else {
-        keyWhitespace = -1;
-      }
-      keyFlags |= code & NON_ASCII | flags;
-      index++;
-    }
-  }
-  return { type, index, parameters };
-}
-function unescapeQuotedPairs(str, start, end) {
-  let result = "";
-  for (let index = start; index < end; index++) {
-    if (str.charCodeAt(index) === BSLASH) {
-      result += str.slice(start, index);
-      start = ++index;
-    }
-  }
-  return result + str.slice(start, end);
-}
+// node_modules/@octokit/request/dist-bundle/index.js
+var import_content_type = __toESM(require_dist(), 1);
 
 // node_modules/json-with-bigint/json-with-bigint.js
 var intRegex = /^-?\d+$/;
@@ -35967,7 +35942,7 @@ async function getResponseData(response) {
   if (!contentType) {
     return response.text().catch(noop);
   }
-  const mimetype = parse2(contentType);
+  const mimetype = (0, import_content_type.parse)(contentType);
   if (isJSONResponse(mimetype)) {
     let text2 = "";
     try {
@@ -40165,24 +40140,24 @@ function bootstrapMarginSet(input) {
   const unique = [];
   for (const p of points) if (unique[unique.length - 1] !== p) unique.push(p);
   const pieces = [];
-  let open2;
+  let open3;
   const close = (upper) => {
-    if (open2 !== void 0) pieces.push({ lower: open2, upper });
-    open2 = void 0;
+    if (open3 !== void 0) pieces.push({ lower: open3, upper });
+    open3 = void 0;
   };
   const m = unique.length;
-  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open2 = null;
+  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open3 = null;
   for (let i = 0; i < m; i++) {
     const p = unique[i];
     if (accepted(p)) {
-      if (open2 === void 0) open2 = p;
+      if (open3 === void 0) open3 = p;
     } else {
       close(p);
     }
     const next = unique[i + 1];
     const between = next === void 0 ? p + 1 + Math.abs(p) : p + (next - p) / 2;
     if (accepted(between)) {
-      if (open2 === void 0) open2 = p;
+      if (open3 === void 0) open3 = p;
     } else {
       close(p);
     }
@@ -42513,8 +42488,8 @@ var ForecastTableReader = class {
   /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
   finish(sha256 = "") {
     this.tokenizer.end();
-    const header = this.header;
-    if (header === null) {
+    const header2 = this.header;
+    if (header2 === null) {
       throw new InputError("the file is empty (expected a header line and data rows)", {
         file: this.path,
         line: 1
@@ -42532,8 +42507,8 @@ var ForecastTableReader = class {
       path: this.path,
       rows: n,
       sha256,
-      columns: header.names,
-      ignoredColumns: header.ignored,
+      columns: header2.names,
+      ignoredColumns: header2.ignored,
       blankLines: this.tokenizer.blankLines
     };
     const label = (interner, ids, column) => ({
@@ -42542,7 +42517,7 @@ var ForecastTableReader = class {
       labels: interner.labels,
       firstLines: Int32Array.from(interner.firstLines)
     });
-    const quantiles = header.quantiles.map((q, k) => ({
+    const quantiles = header2.quantiles.map((q, k) => ({
       level: q.level,
       column: q.column,
       values: this.quantileValues[k].slice(0, n)
@@ -42551,14 +42526,14 @@ var ForecastTableReader = class {
       summary: summary2,
       size: n,
       lines: this.lines.slice(0, n),
-      series: header.series < 0 ? null : label(this.seriesLabels, this.seriesIds, header.names[header.series]),
-      timestamp: label(this.timeLabels, this.timeIds, header.names[header.timestamp]),
-      horizon: header.horizon < 0 ? null : { column: header.names[header.horizon], values: this.horizons.slice(0, n) },
-      origin: header.origin < 0 ? null : label(this.originLabels, this.originIds, header.names[header.origin]),
-      path: header.path < 0 ? null : label(this.pathLabels, this.pathIds, header.names[header.path]),
-      actual: header.actual < 0 ? null : { column: header.names[header.actual], values: this.actual.slice(0, n) },
-      prediction: header.prediction < 0 ? null : { column: header.names[header.prediction], values: this.prediction.slice(0, n) },
-      weight: header.weight < 0 ? null : { column: header.names[header.weight], values: this.weight.slice(0, n) },
+      series: header2.series < 0 ? null : label(this.seriesLabels, this.seriesIds, header2.names[header2.series]),
+      timestamp: label(this.timeLabels, this.timeIds, header2.names[header2.timestamp]),
+      horizon: header2.horizon < 0 ? null : { column: header2.names[header2.horizon], values: this.horizons.slice(0, n) },
+      origin: header2.origin < 0 ? null : label(this.originLabels, this.originIds, header2.names[header2.origin]),
+      path: header2.path < 0 ? null : label(this.pathLabels, this.pathIds, header2.names[header2.path]),
+      actual: header2.actual < 0 ? null : { column: header2.names[header2.actual], values: this.actual.slice(0, n) },
+      prediction: header2.prediction < 0 ? null : { column: header2.names[header2.prediction], values: this.prediction.slice(0, n) },
+      weight: header2.weight < 0 ? null : { column: header2.names[header2.weight], values: this.weight.slice(0, n) },
       quantiles
     };
   }
@@ -42712,9 +42687,9 @@ function resolveHeader(names, file, line, options) {
     });
     quantiles.sort((a, b) => a.level - b.level);
   }
-  const header = names.map((n) => JSON.stringify(n)).join(", ");
+  const header2 = names.map((n) => JSON.stringify(n)).join(", ");
   const missing = (role, name, why) => new InputError(
-    `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)`,
+    `missing the ${role} column "${name}" ${why}; the header has ${header2} (map another column with e.g. ${role}=NAME)`,
     { file, line, column: name }
   );
   if (timestamp < 0) throw missing("timestamp", columns.timestamp, "(required)");
@@ -43095,7 +43070,7 @@ function workOnSharedTask(task, reportFailure = () => {
     }
   }
 }
-function waitForSharedTask(task, describeFailure) {
+function waitForSharedTask(task, describeFailure2) {
   const control = new Int32Array(task.control);
   const total = streamCount(task.resamples);
   for (; ; ) {
@@ -43104,7 +43079,7 @@ function waitForSharedTask(task, describeFailure) {
     Atomics.wait(control, FINISHED_STREAMS, finished);
   }
   if (Atomics.load(control, FAILED) !== 0) {
-    throw new Error(`a resampling thread failed: ${describeFailure()}`);
+    throw new Error(`a resampling thread failed: ${describeFailure2()}`);
   }
 }
 
@@ -43179,29 +43154,58 @@ function defaultRetryPolicy(log) {
     log
   };
 }
+var DEFAULT_API_TIMEOUTS = { requestMs: 3e4, budgetMs: 12e4 };
+var ApiTimeoutError = class extends Error {
+  constructor(request2, limitMs) {
+    super(`GitHub did not answer ${request2} within ${formatSeconds(limitMs)}`);
+    this.request = request2;
+    this.limitMs = limitMs;
+    this.name = "ApiTimeoutError";
+  }
+  request;
+  limitMs;
+};
+var ApiBudgetError = class extends Error {
+  constructor(budgetMs) {
+    super(`the API calls took longer than their budget of ${formatSeconds(budgetMs)}`);
+    this.budgetMs = budgetMs;
+    this.name = "ApiBudgetError";
+  }
+  budgetMs;
+};
+var formatSeconds = (ms) => ms >= 1e3 ? `${Math.round(ms / 1e3)} s` : `${ms} ms`;
 function httpFailure(error2) {
   if (typeof error2 !== "object" || error2 === null) return null;
   const status = error2.status;
   if (typeof status !== "number") return null;
   const response = error2.response;
   const headers = typeof response?.headers === "object" && response.headers !== null ? response.headers : {};
-  return { status, headers };
+  const data = response?.data;
+  const message = typeof data?.message === "string" ? data.message : error2 instanceof Error ? error2.message : "";
+  return { status, headers, message };
+}
+var header = (failure, name) => {
+  const value = failure.headers[name] ?? failure.headers[name.toLowerCase()];
+  return value === void 0 ? void 0 : String(value);
+};
+function isRateLimited(error2) {
+  const failure = httpFailure(error2);
+  if (failure === null) return false;
+  if (failure.status === 429) return true;
+  return failure.status === 403 && (header(failure, "retry-after") !== void 0 || header(failure, "x-ratelimit-remaining") === "0" || /rate limit/i.test(failure.message));
 }
 function retryDelay(error2, attempt, policy) {
+  const backoff = policy.baseDelayMs * 2 ** attempt;
+  if (error2 instanceof ApiTimeoutError) return backoff;
   const failure = httpFailure(error2);
   if (failure === null) return null;
-  const header = (name) => {
-    const value = failure.headers[name] ?? failure.headers[name.toLowerCase()];
-    return value === void 0 ? void 0 : String(value);
-  };
-  const retryAfter = header("retry-after");
-  const remaining = header("x-ratelimit-remaining");
-  const reset = header("x-ratelimit-reset");
-  const rateLimited = (failure.status === 403 || failure.status === 429) && (retryAfter !== void 0 || remaining === "0" || failure.status === 429);
+  const retryAfter = header(failure, "retry-after");
+  const remaining = header(failure, "x-ratelimit-remaining");
+  const reset = header(failure, "x-ratelimit-reset");
+  const rateLimited = isRateLimited(error2);
   const serverError = failure.status >= 500 && failure.status <= 599;
   if (!rateLimited && !serverError) return null;
-  const backoff = policy.baseDelayMs * 2 ** attempt;
-  let wait = backoff;
+  let wait = rateLimited && retryAfter === void 0 && remaining !== "0" ? 6e4 : backoff;
   if (retryAfter !== void 0 && /^\d+$/.test(retryAfter.trim())) {
     wait = Number(retryAfter) * 1e3;
   } else if (retryAfter !== void 0 && !Number.isNaN(Date.parse(retryAfter))) {
@@ -43211,27 +43215,43 @@ function retryDelay(error2, attempt, policy) {
   }
   return wait > policy.maxWaitMs ? null : wait;
 }
-async function withRetries(call, policy) {
-  for (let attempt = 0; ; attempt += 1) {
-    try {
-      return await call();
-    } catch (error2) {
-      const wait = attempt < policy.maxRetries ? retryDelay(error2, attempt, policy) : null;
-      if (wait === null) throw error2;
-      const status = httpFailure(error2)?.status;
-      policy.log(
-        `GitHub answered ${status}; retrying in ${Math.ceil(wait / 1e3)} s (retry ${attempt + 1} of ${policy.maxRetries})`
-      );
-      await policy.sleep(wait);
+function installRetries(client, policy, timeouts = DEFAULT_API_TIMEOUTS) {
+  const deadline = policy.now() + timeouts.budgetMs;
+  client.hook.wrap("request", async (request2, options) => {
+    const idempotent = String(options.method).toUpperCase() !== "POST";
+    const name = `${String(options.method).toUpperCase()} ${String(options.url)}`;
+    for (let attempt = 0; ; attempt += 1) {
+      const remaining = deadline - policy.now();
+      if (remaining <= 0) throw new ApiBudgetError(timeouts.budgetMs);
+      const limit = Math.min(timeouts.requestMs, remaining);
+      const signal = AbortSignal.timeout(limit);
+      options.request = { ...options.request, signal };
+      try {
+        return await request2(options);
+      } catch (error2) {
+        const failure = signal.aborted ? new ApiTimeoutError(name, limit) : error2;
+        if (!idempotent) throw failure;
+        const wait = attempt < policy.maxRetries ? retryDelay(failure, attempt, policy) : null;
+        if (wait === null || wait >= deadline - policy.now()) throw failure;
+        policy.log(
+          `${retryReason(failure)}; retrying in ${Math.ceil(wait / 1e3)} s (retry ${attempt + 1} of ${policy.maxRetries})`
+        );
+        await policy.sleep(wait);
+      }
     }
-  }
-}
-function installRetries(client, policy) {
-  client.hook.wrap(
-    "request",
-    (request2, options) => withRetries(async () => request2(options), policy)
-  );
+  });
   return client;
+}
+function createRetryWait(policy, timeouts, start) {
+  const deadline = start + timeouts.budgetMs;
+  return (error2, attempt) => {
+    const wait = attempt < policy.maxRetries ? retryDelay(error2, attempt, policy) : null;
+    return wait === null || wait >= deadline - policy.now() ? null : wait;
+  };
+}
+function retryReason(error2) {
+  if (error2 instanceof ApiTimeoutError) return error2.message;
+  return `GitHub answered ${httpFailure(error2)?.status}`;
 }
 
 // src/action/dependencies.ts
@@ -43297,10 +43317,10 @@ function shortenedNote(options, what) {
 function cutAtLines(text2, budget, measure) {
   const kept = [];
   let used = 0;
-  let open2 = 0;
+  let open3 = 0;
   for (const line of text2.split("\n")) {
     const cost = measure(line) + 1;
-    const closing = measure("\n</details>\n") * (open2 + 1);
+    const closing = measure("\n</details>\n") * (open3 + 1);
     if (used + cost + closing > budget) {
       if (kept.length === 0)
         kept.push(sliceCodePoints(line, Math.max(0, budget - closing - 1), measure));
@@ -43308,9 +43328,9 @@ function cutAtLines(text2, budget, measure) {
     }
     kept.push(line);
     used += cost;
-    open2 += (line.match(/<details>/g) ?? []).length - (line.match(/<\/details>/g) ?? []).length;
+    open3 += (line.match(/<details>/g) ?? []).length - (line.match(/<\/details>/g) ?? []).length;
   }
-  for (; open2 > 0; open2 -= 1) kept.push("", "</details>");
+  for (; open3 > 0; open3 -= 1) kept.push("", "</details>");
   return `${kept.join("\n")}
 `;
 }
@@ -43327,8 +43347,9 @@ function sliceCodePoints(line, budget, measure) {
 
 // src/action/githubApi.ts
 var COMMENTS_PER_PAGE = 100;
-async function findIssueComment(client, repository, issueNumber, matches, maxPages = 500) {
+async function listIssueComments(client, repository, issueNumber, matches, maxPages = 500) {
   let pages = 0;
+  const found = [];
   const iterator2 = client.paginate.iterator(client.rest.issues.listComments, {
     ...repository,
     issue_number: issueNumber,
@@ -43337,12 +43358,15 @@ async function findIssueComment(client, repository, issueNumber, matches, maxPag
   for await (const page of iterator2) {
     for (const comment2 of page.data) {
       const body = comment2.body ?? "";
-      if (matches(body)) return { id: comment2.id, body, url: comment2.html_url };
+      if (matches(body)) found.push(toComment(comment2));
     }
     pages += 1;
     if (pages >= maxPages) break;
   }
-  return null;
+  return found;
+}
+function toComment(data) {
+  return { id: data.id, body: data.body ?? "", url: data.html_url, author: data.user?.login ?? "" };
 }
 async function createIssueComment(client, repository, issueNumber, body) {
   const { data } = await client.rest.issues.createComment({
@@ -43350,7 +43374,7 @@ async function createIssueComment(client, repository, issueNumber, body) {
     issue_number: issueNumber,
     body
   });
-  return { id: data.id, body: data.body ?? "", url: data.html_url };
+  return toComment(data);
 }
 async function updateIssueComment(client, repository, commentId, body) {
   const { data } = await client.rest.issues.updateComment({
@@ -43358,7 +43382,24 @@ async function updateIssueComment(client, repository, commentId, body) {
     comment_id: commentId,
     body
   });
-  return { id: data.id, body: data.body ?? "", url: data.html_url };
+  return toComment(data);
+}
+async function deleteIssueComment(client, repository, commentId) {
+  try {
+    await client.rest.issues.deleteComment({ ...repository, comment_id: commentId });
+  } catch (error2) {
+    if (error2.status !== 404) throw error2;
+  }
+}
+async function authenticatedLogin(client) {
+  try {
+    const { data } = await client.rest.users.getAuthenticated();
+    return data.login;
+  } catch (error2) {
+    const status = error2.status;
+    if (status === 401 || status === 403 || status === 404) return null;
+    throw error2;
+  }
 }
 async function pullRequestsOfCommit(client, repository, sha) {
   const { data } = await client.rest.repos.listPullRequestsAssociatedWithCommit({
@@ -43380,6 +43421,111 @@ async function openPullRequestsFromHead(client, repository, head) {
     per_page: 100
   });
   return data.map((p) => ({ number: p.number, state: p.state, headSha: p.head.sha }));
+}
+
+// src/action/postingIdentity.ts
+var WORKFLOW_TOKEN_LOGIN = "github-actions[bot]";
+async function postingIdentity(client) {
+  return await authenticatedLogin(client) ?? WORKFLOW_TOKEN_LOGIN;
+}
+function sameLogin(a, b) {
+  return a.toLowerCase() === b.toLowerCase();
+}
+
+// src/action/gateComment.ts
+function commentMarker(name) {
+  return `<!-- skillgate:gate=${encodeName(name)} -->`;
+}
+function encodeName(name) {
+  let out = "";
+  for (const byte of new TextEncoder().encode(name)) {
+    const ch = String.fromCharCode(byte);
+    out += /[A-Za-z0-9._]/.test(ch) ? ch : `%${byte.toString(16).toUpperCase().padStart(2, "0")}`;
+  }
+  return out;
+}
+function carriesMarker(body, marker) {
+  if (!body.startsWith(marker)) return false;
+  const rest = body.slice(marker.length);
+  return rest === "" || rest.startsWith("\n") || rest.startsWith("\r\n");
+}
+async function publishGateComment(client, repository, issueNumber, marker, body, options) {
+  const listOwn = async () => {
+    const marked = await listIssueComments(
+      client,
+      repository,
+      issueNumber,
+      (b) => carriesMarker(b, marker)
+    );
+    const own2 = marked.filter((c) => sameLogin(c.author, options.author));
+    const foreign = marked.length - own2.length;
+    if (foreign > 0) {
+      options.info(
+        `skillgate: ignored ${foreign} comment${foreign === 1 ? "" : "s"} carrying this gate's marker but not written by ${options.author}`
+      );
+    }
+    return own2;
+  };
+  let own = await listOwn();
+  let created = null;
+  if (own.length === 0) {
+    const outcome = await createOnce(client, repository, issueNumber, body, listOwn, options);
+    if (outcome.kind === "created") {
+      created = outcome.comment;
+      if (!sameLogin(created.author, options.author)) {
+        options.warning(
+          `skillgate: the comment was written as ${created.author || "an unknown user"}, not as ${options.author}; later runs will not recognise it and will post again. Use the workflow's token or a personal access token for github-token.`
+        );
+        return { action: "created", id: created.id, url: created.url, removed: 0 };
+      }
+      own = await listOwn();
+      if (!own.some((c) => c.id === created?.id)) own = [...own, created];
+    } else {
+      own = outcome.own;
+    }
+  }
+  const newest = own.reduce((a, b) => b.id > a.id ? b : a);
+  let kept = newest;
+  if (created === null || newest.id !== created.id) {
+    kept = await updateIssueComment(client, repository, newest.id, body);
+  }
+  const older = own.filter((c) => c.id !== newest.id);
+  for (const comment2 of older) await deleteIssueComment(client, repository, comment2.id);
+  if (older.length > 0) {
+    options.info(
+      `skillgate: removed ${older.length} older comment${older.length === 1 ? "" : "s"} of this gate`
+    );
+  }
+  return {
+    action: created !== null && newest.id === created.id ? "created" : "updated",
+    id: kept.id,
+    url: kept.url,
+    removed: older.length
+  };
+}
+async function createOnce(client, repository, issueNumber, body, listOwn, options) {
+  for (let attempt = 0; ; attempt += 1) {
+    try {
+      return {
+        kind: "created",
+        comment: await createIssueComment(client, repository, issueNumber, body)
+      };
+    } catch (error2) {
+      const wait = options.retryWait(error2, attempt);
+      if (wait === null) throw error2;
+      options.info(
+        `skillgate: creating the comment failed (${describeFailure(error2)}); checking whether it was created before trying again`
+      );
+      await options.sleep(wait);
+      const own = await listOwn();
+      if (own.length > 0) return { kind: "found", own };
+    }
+  }
+}
+function describeFailure(error2) {
+  const status = error2.status;
+  if (typeof status === "number") return `GitHub answered ${status}`;
+  return error2 instanceof Error ? error2.message : String(error2);
 }
 
 // src/settings/options.ts
@@ -43599,7 +43745,7 @@ var ACTION_INPUTS = [
     name: INPUT.comment,
     defaultValue: "true",
     flag: true,
-    help: "post or update the sticky pull-request comment"
+    help: "post the gate's own pull-request comment, or edit it in place"
   },
   {
     name: INPUT.pullRequest,
@@ -43609,7 +43755,7 @@ var ACTION_INPUTS = [
   {
     name: INPUT.reportFile,
     defaultValue: "",
-    help: "post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered"
+    help: "post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered, and named by the name input, never by the report"
   }
 ];
 var ALL_INPUTS = [...ENGINE_OPTIONS, ...ACTION_INPUTS];
@@ -43808,6 +43954,37 @@ function readPullRequest(text2) {
   return n;
 }
 
+// src/action/readRegularFile.ts
+import { constants as constants3 } from "node:fs";
+import { lstat as lstat2, open as open2 } from "node:fs/promises";
+async function readRegularFile(file, maxBytes, label) {
+  const refuse = (why) => {
+    throw new InputError(`${label}: ${why}`, { value: file });
+  };
+  const link = await lstat2(file).catch(() => refuse("cannot read the file"));
+  if (link.isSymbolicLink()) refuse("is a symbolic link; only a regular file is read");
+  if (!link.isFile()) refuse("is not a regular file");
+  const handle = await open2(
+    file,
+    constants3.O_RDONLY | constants3.O_NOFOLLOW | constants3.O_NONBLOCK
+  ).catch(() => refuse("cannot read the file"));
+  try {
+    const opened = await handle.stat();
+    if (!opened.isFile()) refuse("is not a regular file");
+    if (opened.size > maxBytes) refuse(`the report is larger than ${maxBytes} bytes`);
+    const buffer = Buffer.alloc(opened.size);
+    let read = 0;
+    while (read < opened.size) {
+      const { bytesRead } = await handle.read(buffer, read, opened.size - read, read);
+      if (bytesRead === 0) break;
+      read += bytesRead;
+    }
+    return buffer.subarray(0, read).toString("utf8");
+  } finally {
+    await handle.close();
+  }
+}
+
 // src/action/runnerEnvironment.ts
 import { tmpdir } from "node:os";
 function readRunnerEnvironment(env) {
@@ -43838,37 +44015,6 @@ function parseRepository(text2) {
 function runUrl(env, runId = env.runId) {
   if (env.repository === null || runId === null) return void 0;
   return `${env.serverUrl}/${env.repository.owner}/${env.repository.repo}/actions/runs/${runId}`;
-}
-
-// src/action/stickyComment.ts
-function commentMarker(name) {
-  return `<!-- skillgate:gate=${encodeName(name)} -->`;
-}
-function encodeName(name) {
-  let out = "";
-  for (const byte of new TextEncoder().encode(name)) {
-    const ch = String.fromCharCode(byte);
-    out += /[A-Za-z0-9._]/.test(ch) ? ch : `%${byte.toString(16).toUpperCase().padStart(2, "0")}`;
-  }
-  return out;
-}
-function isStickyComment(body, marker) {
-  return body.startsWith(`${marker}
-`) || body === marker;
-}
-async function upsertStickyComment(client, repository, issueNumber, marker, body) {
-  const existing = await findIssueComment(
-    client,
-    repository,
-    issueNumber,
-    (b) => isStickyComment(b, marker)
-  );
-  if (existing === null) {
-    const created = await createIssueComment(client, repository, issueNumber, body);
-    return { action: "created", id: created.id, url: created.url };
-  }
-  const updated = await updateIssueComment(client, repository, existing.id, body);
-  return { action: "updated", id: updated.id, url: updated.url };
 }
 
 // src/action/untrustedReport.ts
@@ -44286,8 +44432,9 @@ async function gate(deps) {
   const action = readActionSettings(deps.getInput);
   const payload = await readEventPayload(env.eventPath);
   const plan = planComment(env.eventName, payload, action.pullRequest, env.sha);
-  const report = await obtainReport(deps, action);
-  const name = action.source.kind === "compare" ? action.source.settings.name : action.source.name || report.name;
+  const obtained = await obtainReport(deps, action);
+  const report = action.source.kind === "compare" ? obtained : { ...obtained, name: action.source.name };
+  const name = report.name;
   const link = runUrl(env, plan.kind === "workflow-run" ? plan.runId : env.runId);
   const render = (r) => renderMarkdown(r, link === void 0 ? {} : { runUrl: link });
   const jsonTarget = jsonPath(action, env, name);
@@ -44337,19 +44484,8 @@ async function obtainReport(deps, action) {
     });
     return report;
   }
-  const label = inputLabel("report-file");
-  const size = await stat3(source.path).then(
-    (s) => s.size,
-    () => {
-      throw new InputError(`${label}: cannot read the file`, { value: source.path });
-    }
-  );
-  if (size > MAX_REPORT_BYTES) {
-    throw new InputError(`${label}: the report is larger than ${MAX_REPORT_BYTES} bytes`, {
-      value: source.path
-    });
-  }
-  return parseUntrustedReport(await readFile2(source.path, "utf8"), source.path);
+  const text2 = await readRegularFile(source.path, MAX_REPORT_BYTES, inputLabel("report-file"));
+  return parseUntrustedReport(text2, source.path);
 }
 async function readEventPayload(eventPath) {
   if (eventPath === null) return {};
@@ -44398,21 +44534,39 @@ async function comment(deps, env, action, plan, marker, body) {
   }
   const repository = env.repository;
   try {
-    const client = installRetries(deps.createClient(action.token, env.apiUrl), {
+    const policy = {
       ...defaultRetryPolicy((m) => deps.log.info(`skillgate: ${m}`)),
       sleep: deps.sleep,
       now: deps.now
-    });
+    };
+    const timeouts = apiTimeouts(deps.env);
+    const start = deps.now();
+    const client = installRetries(deps.createClient(action.token, env.apiUrl), policy, timeouts);
     const number = await resolvePullRequest(deps, client, repository, plan);
     if (number === null) return null;
-    const result = await upsertStickyComment(client, repository, number, marker, body);
+    const author = await postingIdentity(client);
+    const result = await publishGateComment(client, repository, number, marker, body, {
+      author,
+      retryWait: createRetryWait(policy, timeouts, start),
+      sleep: deps.sleep,
+      info: (m) => deps.log.info(m),
+      warning: (m) => deps.log.warning(m)
+    });
     deps.log.info(
-      `skillgate: ${result.action} the comment on pull request #${number}: ${result.url}`
+      `skillgate: ${result.action} the comment on pull request #${number} (as ${author}): ${result.url}`
     );
     return result.url;
   } catch (error2) {
     const status = error2.status;
-    if (status === 403) {
+    if (isRateLimited(error2)) {
+      deps.log.warning(
+        `skillgate: GitHub's rate limit stopped the comment (${status}); it was not retried past the wait limits. The report is in the job summary.`
+      );
+    } else if (error2 instanceof ApiTimeoutError || error2 instanceof ApiBudgetError) {
+      deps.log.warning(
+        `skillgate: could not post the comment: ${error2.message}. The report is in the job summary.`
+      );
+    } else if (status === 403) {
       deps.log.warning(
         "skillgate: GitHub refused to write the comment (403): this token is read-only here (a pull request from a fork or from Dependabot) or the job lacks `permissions: pull-requests: write`. " + READ_ONLY_HINT
       );
@@ -44423,18 +44577,24 @@ async function comment(deps, env, action, plan, marker, body) {
     return null;
   }
 }
+function apiTimeouts(env) {
+  const text2 = env.SKILLGATE_API_TIMEOUT_MS?.trim() ?? "";
+  const ms = Number(text2);
+  if (!/^\d+$/.test(text2) || ms < 1) return DEFAULT_API_TIMEOUTS;
+  return { requestMs: ms, budgetMs: 4 * ms };
+}
 async function resolvePullRequest(deps, client, repository, plan) {
   switch (plan.kind) {
     case "pull-request":
       return plan.number;
     case "commit": {
-      const open2 = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
+      const open3 = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
         (p) => p.state === "open"
       );
-      const chosen = open2.find((p) => p.headSha === plan.sha) ?? open2[0];
+      const chosen = open3.find((p) => p.headSha === plan.sha);
       if (chosen === void 0) {
         deps.log.info(
-          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} belongs to no open pull request`
+          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} is the head of no open pull request`
         );
         return null;
       }

@@ -1,7 +1,8 @@
 // Writes the demo backtest under examples/data/: an invented water utility, "Harbour Valley
 // Water", forecasting daily demand (megalitres) in four pressure zones, 1 to 3 days ahead, over
-// 240 days. Three models: the current one on main (baseline.csv), a pull request that improves
-// it (candidate.csv) and one that regresses in two zones (candidate-regressed.csv). Invented
+// 240 days. Four models: the current one on main (baseline.csv), a pull request that improves
+// it (candidate.csv), one that regresses in two zones (candidate-regressed.csv) and one whose
+// backtest peeks at the future (candidate-peeking.csv). Invented
 // data, for the demo and examples only. Fixed seed: the files are the same on every run.
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
@@ -49,7 +50,7 @@ for (let i = 0; i < days + 3; i++) {
 }
 
 const header = 'zone,target_date,horizon,issued,observed,forecast';
-const rows = { baseline: [header], candidate: [header], regressed: [header] };
+const rows = { baseline: [header], candidate: [header], regressed: [header], peeking: [header] };
 for (const zone of zones) {
   const actual = [];
   let noise = 0;
@@ -78,12 +79,21 @@ for (const zone of zones) {
       rows.baseline.push(`${key},${baseline.toFixed(3)}`);
       rows.candidate.push(`${key},${candidate.toFixed(3)}`);
       rows.regressed.push(`${key},${regressed.toFixed(3)}`);
+      // A pull request whose backtest peeks: its one-day-ahead forecasts are issued on the
+      // target date itself, after the demand was observed, and simply repeat it. No new random
+      // draws, so the other files stay the same.
+      rows.peeking.push(
+        horizon === 1
+          ? `${zone.name},${date(i)},${horizon},${date(i)},${y.toFixed(3)},${y.toFixed(3)}`
+          : `${key},${candidate.toFixed(3)}`,
+      );
     }
   }
 }
 writeFileSync(path.join(out, 'baseline.csv'), `${rows.baseline.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate.csv'), `${rows.candidate.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate-regressed.csv'), `${rows.regressed.join('\n')}\n`);
+writeFileSync(path.join(out, 'candidate-peeking.csv'), `${rows.peeking.join('\n')}\n`);
 console.log(
   `wrote ${rows.baseline.length - 1} rows per model to ${path.relative(process.cwd(), out)}/`,
 );

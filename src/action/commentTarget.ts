@@ -3,7 +3,8 @@
  *
  * - pull_request / pull_request_target: the event's pull request. A pull_request from a fork
  *   runs with a read-only token, so the plan says so instead of attempting a doomed write.
- * - push: the pull requests of the pushed commit must be looked up.
+ * - push: the open pull request whose head is the pushed commit must be looked up; a tag push
+ *   comments nowhere.
  * - workflow_run (the fork-safe poster): the pull request whose head is the triggering run's
  *   commit; an explicit number is only accepted once its head commit is checked to match.
  * - workflow_dispatch and anything else: the `pull-request` input, or no comment.
@@ -68,6 +69,9 @@ export function planComment(
       };
     }
     case 'push': {
+      const ref = text(event.ref) ?? '';
+      if (ref.startsWith('refs/tags/'))
+        return { kind: 'none', reason: `a tag push (${ref}) belongs to no pull request` };
       if (pullRequestInput !== null) return { kind: 'pull-request', number: pullRequestInput };
       const sha = text(event.after) ?? envSha;
       if (sha === null || /^0+$/.test(sha))

@@ -11,6 +11,8 @@ export interface IssueComment {
   readonly id: number;
   readonly body: string;
   readonly url: string;
+  /** Login of the comment's author ('' when GitHub gives none, e.g. a deleted account). */
+  readonly author: string;
 }
 
 export interface PullRequestRef {
@@ -24,17 +26,18 @@ export const COMMENTS_PER_PAGE = 100;
 
 /**
  * Walks ALL comments of an issue or pull request, page by page (the client follows the Link
- * headers), and returns the first whose body satisfies `matches`, or null. At most `maxPages`
+ * headers), and returns those whose body satisfies `matches`, oldest first. At most `maxPages`
  * pages are read, so a runaway listing cannot loop forever.
  */
-export async function findIssueComment(
+export async function listIssueComments(
   client: GitHubClient,
   repository: RepositoryRef,
   issueNumber: number,
   matches: (body: string) => boolean,
   maxPages = 500,
-): Promise<IssueComment | null> {
+): Promise<IssueComment[]> {
   let pages = 0;
+  const found: IssueComment[] = [];
   const iterator = client.paginate.iterator(client.rest.issues.listComments, {
     ...repository,
     issue_number: issueNumber,
@@ -43,12 +46,21 @@ export async function findIssueComment(
   for await (const page of iterator) {
     for (const comment of page.data) {
       const body = comment.body ?? '';
-      if (matches(body)) return { id: comment.id, body, url: comment.html_url };
+      if (matches(body)) found.push(toComment(comment));
     }
     pages += 1;
     if (pages >= maxPages) break;
   }
-  return null;
+  return found;
+}
+
+function toComment(data: {
+  id: number;
+  body?: string | undefined;
+  html_url: string;
+  user?: { login?: string } | null;
+}): IssueComment {
+  return { id: data.id, body: data.body ?? '', url: data.html_url, author: data.user?.login ?? '' };
 }
 
 export async function createIssueComment(
@@ -62,7 +74,7 @@ export async function createIssueComment(
     issue_number: issueNumber,
     body,
   });
-  return { id: data.id, body: data.body ?? '', url: data.html_url };
+  return toComment(data);
 }
 
 export async function updateIssueComment(
@@ -76,7 +88,35 @@ export async function updateIssueComment(
     comment_id: commentId,
     body,
   });
-  return { id: data.id, body: data.body ?? '', url: data.html_url };
+  return toComment(data);
+}
+
+/** DELETE /repos/{owner}/{repo}/issues/comments/{comment_id}; a comment already gone is fine. */
+export async function deleteIssueComment(
+  client: GitHubClient,
+  repository: RepositoryRef,
+  commentId: number,
+): Promise<void> {
+  try {
+    await client.rest.issues.deleteComment({ ...repository, comment_id: commentId });
+  } catch (error) {
+    if ((error as { status?: unknown }).status !== 404) throw error;
+  }
+}
+
+/**
+ * GET /user: the login the token acts as, or null when GitHub refuses to say (401, 403 or 404,
+ * as it does for the workflow's installation token, which is not a user).
+ */
+export async function authenticatedLogin(client: GitHubClient): Promise<string | null> {
+  try {
+    const { data } = await client.rest.users.getAuthenticated();
+    return data.login;
+  } catch (error) {
+    const status = (error as { status?: unknown }).status;
+    if (status === 401 || status === 403 || status === 404) return null;
+    throw error;
+  }
 }
 
 /** GET /repos/{owner}/{repo}/commits/{sha}/pulls: the pull requests a commit belongs to. */

@@ -23,7 +23,7 @@ export const ACTION_INPUTS: readonly OptionSpec[] = [
     name: INPUT.comment,
     defaultValue: 'true',
     flag: true,
-    help: 'post or update the sticky pull-request comment',
+    help: "post the gate's own pull-request comment, or edit it in place",
   },
   {
     name: INPUT.pullRequest,
@@ -33,7 +33,7 @@ export const ACTION_INPUTS: readonly OptionSpec[] = [
   {
     name: INPUT.reportFile,
     defaultValue: '',
-    help: 'post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered',
+    help: 'post a JSON report written by an earlier run instead of comparing (fork-safe pattern); treated as untrusted and re-rendered, and named by the name input, never by the report',
   },
 ];
 

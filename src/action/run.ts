@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { appendFile, mkdir, readFile, stat, writeFile } from 'node:fs/promises';
+import { appendFile, mkdir, readFile, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { InputError } from '../core/inputError.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
@@ -13,6 +13,7 @@ import {
   measureChars,
   SUMMARY_LIMIT_BYTES,
 } from './fitReport.js';
+import { commentMarker, encodeName, publishGateComment } from './gateComment.js';
 import {
   type GitHubClient,
   getPullRequest,
@@ -20,10 +21,20 @@ import {
   pullRequestsOfCommit,
 } from './githubApi.js';
 import { OUTPUT } from './names.js';
+import { postingIdentity } from './postingIdentity.js';
 import { type ActionSettings, inputLabel, readActionSettings } from './readInputs.js';
-import { defaultRetryPolicy, installRetries } from './retry.js';
+import { readRegularFile } from './readRegularFile.js';
+import {
+  ApiBudgetError,
+  ApiTimeoutError,
+  type ApiTimeouts,
+  createRetryWait,
+  DEFAULT_API_TIMEOUTS,
+  defaultRetryPolicy,
+  installRetries,
+  isRateLimited,
+} from './retry.js';
 import { type RunnerEnvironment, readRunnerEnvironment, runUrl } from './runnerEnvironment.js';
-import { commentMarker, encodeName, upsertStickyComment } from './stickyComment.js';
 import { MAX_REPORT_BYTES, parseUntrustedReport } from './untrustedReport.js';
 
 /**
@@ -57,11 +68,12 @@ async function gate(deps: ActionDependencies): Promise<Report> {
   const payload = await readEventPayload(env.eventPath);
   const plan = planComment(env.eventName, payload, action.pullRequest, env.sha);
 
-  const report = await obtainReport(deps, action);
-  const name =
-    action.source.kind === 'compare'
-      ? action.source.settings.name
-      : action.source.name || report.name;
+  // A posted report is untrusted: its name must not pick the comment (the marker) nor the
+  // title, so the trusted `name` input replaces it.
+  const obtained = await obtainReport(deps, action);
+  const report =
+    action.source.kind === 'compare' ? obtained : { ...obtained, name: action.source.name };
+  const name = report.name;
   // A report posted from an earlier run links to that run, where its summary is.
   const link = runUrl(env, plan.kind === 'workflow-run' ? plan.runId : env.runId);
   const render = (r: Report): string =>
@@ -116,19 +128,8 @@ async function obtainReport(deps: ActionDependencies, action: ActionSettings): P
     });
     return report;
   }
-  const label = inputLabel('report-file');
-  const size = await stat(source.path).then(
-    (s) => s.size,
-    () => {
-      throw new InputError(`${label}: cannot read the file`, { value: source.path });
-    },
-  );
-  if (size > MAX_REPORT_BYTES) {
-    throw new InputError(`${label}: the report is larger than ${MAX_REPORT_BYTES} bytes`, {
-      value: source.path,
-    });
-  }
-  return parseUntrustedReport(await readFile(source.path, 'utf8'), source.path);
+  const text = await readRegularFile(source.path, MAX_REPORT_BYTES, inputLabel('report-file'));
+  return parseUntrustedReport(text, source.path);
 }
 
 async function readEventPayload(eventPath: string | null): Promise<unknown> {
@@ -166,7 +167,10 @@ function annotate(deps: ActionDependencies, report: Report, name: string): void 
 const READ_ONLY_HINT =
   'The report is in the job summary. To comment on pull requests from forks, use the workflow_run pattern in the README (Pull requests from forks).';
 
-/** Posts or updates the sticky comment; returns its URL, or null (with a warning or a note). */
+/**
+ * Posts the gate's own comment, or edits it in place; returns its URL, or null (with a warning
+ * or a note).
+ */
 async function comment(
   deps: ActionDependencies,
   env: RunnerEnvironment,
@@ -193,21 +197,39 @@ async function comment(
   }
   const repository = env.repository;
   try {
-    const client = installRetries(deps.createClient(action.token, env.apiUrl), {
+    const policy = {
       ...defaultRetryPolicy((m) => deps.log.info(`skillgate: ${m}`)),
       sleep: deps.sleep,
       now: deps.now,
-    });
+    };
+    const timeouts = apiTimeouts(deps.env);
+    const start = deps.now();
+    const client = installRetries(deps.createClient(action.token, env.apiUrl), policy, timeouts);
     const number = await resolvePullRequest(deps, client, repository, plan);
     if (number === null) return null;
-    const result = await upsertStickyComment(client, repository, number, marker, body);
+    const author = await postingIdentity(client);
+    const result = await publishGateComment(client, repository, number, marker, body, {
+      author,
+      retryWait: createRetryWait(policy, timeouts, start),
+      sleep: deps.sleep,
+      info: (m) => deps.log.info(m),
+      warning: (m) => deps.log.warning(m),
+    });
     deps.log.info(
-      `skillgate: ${result.action} the comment on pull request #${number}: ${result.url}`,
+      `skillgate: ${result.action} the comment on pull request #${number} (as ${author}): ${result.url}`,
     );
     return result.url;
   } catch (error) {
     const status = (error as { status?: unknown }).status;
-    if (status === 403) {
+    if (isRateLimited(error)) {
+      deps.log.warning(
+        `skillgate: GitHub's rate limit stopped the comment (${status}); it was not retried past the wait limits. The report is in the job summary.`,
+      );
+    } else if (error instanceof ApiTimeoutError || error instanceof ApiBudgetError) {
+      deps.log.warning(
+        `skillgate: could not post the comment: ${error.message}. The report is in the job summary.`,
+      );
+    } else if (status === 403) {
       deps.log.warning(
         'skillgate: GitHub refused to write the comment (403): this token is read-only here (a pull request from a fork or from Dependabot) or the job lacks `permissions: pull-requests: write`. ' +
           READ_ONLY_HINT,
@@ -218,6 +240,17 @@ async function comment(
     }
     return null;
   }
+}
+
+/**
+ * The time limits of API calls: DEFAULT_API_TIMEOUTS, or SKILLGATE_API_TIMEOUT_MS for each
+ * request with four times that for all of them (for slow GitHub Enterprise servers, and tests).
+ */
+function apiTimeouts(env: Readonly<Record<string, string | undefined>>): ApiTimeouts {
+  const text = env.SKILLGATE_API_TIMEOUT_MS?.trim() ?? '';
+  const ms = Number(text);
+  if (!/^\d+$/.test(text) || ms < 1) return DEFAULT_API_TIMEOUTS;
+  return { requestMs: ms, budgetMs: 4 * ms };
 }
 
 async function resolvePullRequest(
@@ -233,10 +266,12 @@ async function resolvePullRequest(
       const open = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
         (p) => p.state === 'open',
       );
-      const chosen = open.find((p) => p.headSha === plan.sha) ?? open[0];
+      // Only a pull request whose head IS the pushed commit: a commit that merely appears in
+      // some pull request's history says nothing about that pull request's model.
+      const chosen = open.find((p) => p.headSha === plan.sha);
       if (chosen === undefined) {
         deps.log.info(
-          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} belongs to no open pull request`,
+          `skillgate: no comment: commit ${plan.sha.slice(0, 12)} is the head of no open pull request`,
         );
         return null;
       }

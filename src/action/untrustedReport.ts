@@ -7,6 +7,8 @@ import type {
 } from '../candidates/candidatesModel.js';
 import { InputError } from '../core/inputError.js';
 import type { FileSummary } from '../core/panel.js';
+import { noChecks } from '../integrity/checkPolicy.js';
+import { CHECK_IDS, type IntegrityReport } from '../integrity/checkResult.js';
 import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
 import { COLUMN_ROLES, type ColumnMapping } from '../reading/columnMapping.js';
 import type {
@@ -124,6 +126,7 @@ class Reader {
 }
 
 const VERDICTS = ['pass', 'warn', 'fail'] as const;
+const CHECK_STATUSES = ['ok', 'warn', 'fail'] as const;
 const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
 const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
 const ESTIMATORS = ['ewc', 'bartlett', 'uniform'] as const;
@@ -149,6 +152,7 @@ function readReport(r: Reader): Report {
     inputs: readInputs(r.field('inputs')),
     seriesSummary: readSeriesSummary(r.field('seriesSummary')),
     pathSummary: readPathSummary(r.field('pathSummary')),
+    integrity: readIntegrity(r.field('integrity')),
     stability: readStability(r.field('stability')),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
@@ -239,6 +243,44 @@ function readComparison(r: Reader): Comparison {
     ...(r.field('direction').value === undefined
       ? {}
       : { direction: r.field('direction').oneOf(['worse', 'better', 'no evidence'] as const) }),
+  };
+}
+
+const CHECK_MODES = ['enforce', 'warn', 'report'] as const;
+
+/** Backtest checks; a report written before they existed reads as having none. */
+function readIntegrity(r: Reader): IntegrityReport {
+  if (r.value === undefined) {
+    return noChecks('report', 'the report was written without backtest checks');
+  }
+  const frequency = r.field('frequency');
+  return {
+    mode: r.field('mode').oneOf(CHECK_MODES),
+    outcome: r.field('outcome').oneOf(CHECK_STATUSES),
+    affectsVerdict: r.field('affectsVerdict').boolean(),
+    frequency:
+      frequency.value === null
+        ? null
+        : {
+            text: frequency
+              .field('text')
+              .matching(/^[0-9A-Za-z.]{1,20}$/, 'a frequency such as 1h'),
+            source: frequency.field('source').oneOf(['inferred', 'given']),
+          },
+    checks: r
+      .field('checks')
+      .items()
+      .map((c) => ({
+        id: c.field('id').oneOf(CHECK_IDS),
+        status: c.field('status').oneOf(CHECK_STATUSES),
+        count: c.field('count').integer(),
+        examples: c.field('examples').strings(),
+        summary: c.field('summary').string(),
+      })),
+    notRun: r
+      .field('notRun')
+      .items()
+      .map((c) => ({ id: c.field('id').oneOf(CHECK_IDS), reason: c.field('reason').string() })),
   };
 }
 
@@ -455,6 +497,17 @@ function readSettings(r: Reader): Settings {
     weights: r.field('weights').boolean(),
     adjust: r.field('adjust').oneOf(['holm', 'bh']),
     top: r.field('top').integer(),
+    // Absent from reports written before the backtest checks: their defaults.
+    frequency:
+      r.field('frequency').value === undefined
+        ? 'auto'
+        : r.field('frequency').matching(/^[0-9A-Za-z.]{1,20}$/, 'a frequency such as 1h'),
+    folds: r.field('folds').value === undefined ? null : r.field('folds').stringOrNull(),
+    embargo: r.field('embargo').value === undefined ? 0 : r.field('embargo').integer(),
+    backtestChecks:
+      r.field('backtestChecks').value === undefined
+        ? 'enforce'
+        : r.field('backtestChecks').oneOf(CHECK_MODES),
     json: r.field('json').stringOrNull(),
     markdown: r.field('markdown').stringOrNull(),
   };

@@ -5,6 +5,8 @@ import { runCandidates } from '../candidates/runCandidates.js';
 import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
+import { checkBacktest } from '../integrity/checkBacktest.js';
+import { readFoldLayout } from '../reading/readFoldLayout.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
 import type { Report } from '../report/reportModel.js';
@@ -49,12 +51,25 @@ export async function runComparison(
     { onProgress: (fraction) => hooks.onProgress?.({ stage: 'aligning', fraction }) },
   );
 
+  const folds = settings.folds === null ? undefined : await readFoldLayout(settings.folds);
+  const integrity = checkBacktest(
+    {
+      panel,
+      baseline,
+      candidate,
+      ...(actuals === undefined ? {} : { actuals }),
+      ...(folds === undefined ? {} : { folds }),
+    },
+    { frequency: settings.frequency, embargo: settings.embargo, mode: settings.backtestChecks },
+  );
+
   const history =
     settings.pooling === 'scaled' && settings.scale === 'seasonal-naive'
       ? await readHistory(settings)
       : undefined;
   hooks.onProgress?.({ stage: 'testing', fraction: 0 });
   const report = evaluatePanel(panel, settings, {
+    integrity,
     ...(history === undefined ? {} : { history }),
     ...(hooks.resampleRunner === undefined ? {} : { resampleRunner: hooks.resampleRunner }),
   });
@@ -63,6 +78,13 @@ export async function runComparison(
 }
 
 async function runOnLossFile(path: string, settings: Settings, hooks: RunHooks): Promise<Report> {
+  if (settings.folds !== null || settings.frequency !== 'auto' || settings.embargo !== 0) {
+    // The backtest checks need forecast rows; a loss file has none, so these would do nothing.
+    throw new InputError(
+      'frequency, folds and embargo configure the backtest checks, which need the forecast files (baseline and candidate), not a loss file',
+      { file: path },
+    );
+  }
   const table = await readLossSeriesFile(path, {
     ...(settings.format === 'auto' ? {} : { format: settings.format }),
     ...(settings.columns.timestamp === undefined

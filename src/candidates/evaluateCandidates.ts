@@ -1,6 +1,7 @@
 import { alignPanel } from '../alignment/alignPanel.js';
 import { evaluatePanel, overallLossSeries, type PanelExtras } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
+import { checkBacktest } from '../integrity/checkBacktest.js';
 import { createRandomSource } from '../random/randomSource.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import type { Report } from '../report/reportModel.js';
@@ -30,6 +31,8 @@ export interface CandidatesInput {
   readonly baseline: ForecastTable;
   readonly candidates: readonly CandidateTable[];
   readonly actuals?: ForecastTable;
+  /** The fold layout for the backtest checks, when given. */
+  readonly folds?: Parameters<typeof checkBacktest>[0]['folds'];
 }
 
 /** Fewest time points for the joint tests (the bootstrap's own minimum is 2). */
@@ -63,7 +66,19 @@ export function evaluateCandidates(
       ...(input.actuals === undefined ? {} : { actuals: input.actuals }),
     });
     const own = { ...settings, candidate: c.file };
-    return { ...c, panel, own, series: overallLossSeries(panel, own, extras) };
+    // The backtest checks of each candidate's own comparison, as in the two-model run.
+    const integrity = checkBacktest(
+      {
+        panel,
+        baseline: input.baseline,
+        candidate: c.table,
+        ...(input.actuals === undefined ? {} : { actuals: input.actuals }),
+        ...(input.folds === undefined ? {} : { folds: input.folds }),
+      },
+      { frequency: settings.frequency, embargo: settings.embargo, mode: settings.backtestChecks },
+    );
+    const extrasOf = { ...extras, integrity };
+    return { ...c, panel, own, extrasOf, series: overallLossSeries(panel, own, extras) };
   });
   const joint = jointLossSeries(
     pairs.map((p) => ({
@@ -81,7 +96,7 @@ export function evaluateCandidates(
   }
   const block = commonBlockLength(joint.baseline, joint.candidates, settings.blockLength);
   const reports = pairs.map((p) =>
-    evaluatePanel(p.panel, { ...p.own, blockLength: { kind: 'fixed', length: block } }, extras),
+    evaluatePanel(p.panel, { ...p.own, blockLength: { kind: 'fixed', length: block } }, p.extrasOf),
   );
 
   const models = [joint.baseline, ...joint.candidates];

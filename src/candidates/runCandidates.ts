@@ -1,6 +1,7 @@
 import type { RunHooks } from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
+import { readFoldLayout } from '../reading/readFoldLayout.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
@@ -87,9 +88,16 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
   }
   baseline ??= await read(settings.baseline, 'baseline');
   const actuals = settings.actuals === null ? undefined : await read(settings.actuals, 'actuals');
+  const folds = settings.folds === null ? undefined : await readFoldLayout(settings.folds);
   hooks.onProgress?.({ stage: 'testing', fraction: 0 });
   const report = evaluateCandidates(
-    { baselineName, baseline, candidates, ...(actuals === undefined ? {} : { actuals }) },
+    {
+      baselineName,
+      baseline,
+      candidates,
+      ...(actuals === undefined ? {} : { actuals }),
+      ...(folds === undefined ? {} : { folds }),
+    },
     settings,
     hooks.resampleRunner === undefined ? {} : { resampleRunner: hooks.resampleRunner },
   );

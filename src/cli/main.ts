@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 import { writeFile } from 'node:fs/promises';
 import { runComparison } from '../app/runComparison.js';
-import { InputError } from '../core/inputError.js';
+import { InputError, printable } from '../core/inputError.js';
 import { VERSION } from '../core/version.js';
 import { createResamplePool } from '../parallel/resamplePool.js';
 import { renderMarkdown } from '../report/renderMarkdown.js';
@@ -45,7 +45,7 @@ async function main(argv: readonly string[]): Promise<number> {
       process.stderr.write(`skillgate: ${error.describe()}\n`);
       return 2;
     }
-    const message = error instanceof Error ? error.message : String(error);
+    const message = printable(error instanceof Error ? error.message : String(error));
     process.stderr.write(
       `skillgate: internal error: ${message}\nThis is a bug in skillgate; set SKILLGATE_DEBUG=1 for details.\n`,
     );

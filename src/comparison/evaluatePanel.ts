@@ -4,6 +4,7 @@ import type { AlignedPanel } from '../core/panel.js';
 import { VERSION } from '../core/version.js';
 import { decideAdjusted } from '../decision/decideAdjusted.js';
 import { type Hypothesis, hypothesisFor } from '../decision/hypothesis.js';
+import type { IntegrityReport } from '../integrity/checkResult.js';
 import { computeRowLosses, LossUnavailableError, type RowLosses } from '../losses/rowLosses.js';
 import { benjaminiHochbergAdjust } from '../multiplicity/benjaminiHochbergAdjust.js';
 import { holmAdjust } from '../multiplicity/holmAdjust.js';
@@ -24,6 +25,8 @@ export interface PanelExtras {
   readonly history?: ReadonlyMap<string, Float64Array>;
   /** Where bootstrap resamples are computed (default: this thread); same numbers either way. */
   readonly resampleRunner?: ResampleRunner;
+  /** The backtest checks' result (checkBacktest), carried into the report. */
+  readonly integrity?: IntegrityReport;
 }
 
 /**
@@ -101,6 +104,7 @@ export function evaluatePanel(
     comparisons,
     seriesSummary,
     pathSummary,
+    ...(extras.integrity === undefined ? {} : { integrity: extras.integrity }),
     stability: assessStability({
       series: overallSeries,
       timestamps: panel.timestamps,

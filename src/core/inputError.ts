@@ -23,15 +23,43 @@ export class InputError extends Error {
     this.location = location;
   }
 
-  /** One paragraph: "file:line: message (column "c", value "v")". */
+  /**
+   * One line: "file:line: message (column "c", value "v")". Everything echoed from the input
+   * (file and column names, values, and whatever the message quotes, such as a series name) is
+   * passed through `printable`, so the line cannot be broken into several, and a name cannot
+   * start a line that the Actions runner would read as a workflow command (`::error::…`).
+   */
   describe(): string {
     const { file, line, column, value } = this.location;
     const where = file === undefined ? '' : line === undefined ? `${file}: ` : `${file}:${line}: `;
     const details: string[] = [];
     if (column !== undefined) details.push(`column "${column}"`);
     if (value !== undefined) details.push(`value ${JSON.stringify(truncate(value, 80))}`);
-    return `${where}${this.message}${details.length > 0 ? ` (${details.join(', ')})` : ''}`;
+    return printable(
+      `${where}${this.message}${details.length > 0 ? ` (${details.join(', ')})` : ''}`,
+    );
   }
+}
+
+/**
+ * Shows control characters instead of obeying them: LF, CR and tab as `\n`, `\r`, `\t`, every
+ * other C0/C1 control, U+2028/U+2029 and the bidirectional embedding, override and isolate
+ * controls (U+202A–U+202E, U+2066–U+2069) as `\u{XXXX}`. Other text is unchanged (a backslash
+ * already in the text stays as it is).
+ */
+export function printable(text: string): string {
+  return text.replace(
+    // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are the target
+    /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g,
+    (ch) =>
+      ch === '\n'
+        ? '\\n'
+        : ch === '\r'
+          ? '\\r'
+          : ch === '\t'
+            ? '\\t'
+            : `\\u{${ch.codePointAt(0)?.toString(16).toUpperCase().padStart(4, '0')}}`,
+  );
 }
 
 function truncate(text: string, max: number): string {

@@ -1,5 +1,7 @@
 import type { Hypothesis } from '../decision/hypothesis.js';
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
+import { noChecks } from '../integrity/checkPolicy.js';
+import type { IntegrityReport } from '../integrity/checkResult.js';
 import type { Settings } from '../settings/settings.js';
 import type { Stability } from '../stability/stabilityModel.js';
 import type {
@@ -19,13 +21,16 @@ export interface ReportParts {
   readonly comparisons: readonly Comparison[];
   readonly seriesSummary?: SeriesSummary | null;
   readonly pathSummary?: PathSummary | null;
+  /** Backtest checks; absent for inputs with no rows to check (a pre-aggregated loss file). */
+  readonly integrity?: IntegrityReport;
   readonly stability?: Stability | null;
 }
 
 /**
  * Assembles the report from the pieces of a run. The gate's verdict is the overall comparison's,
  * made a failure when the candidate lacks rows the baseline has (unless allowed): a candidate must
- * not pass by skipping hard cases.
+ * not pass by skipping hard cases. A failed backtest check fails the gate and a warning one makes
+ * it warn (unless the checks' mode is 'report').
  */
 export function buildReport(parts: ReportParts): Report {
   const { inputs, settings, hypothesis } = parts;
@@ -45,6 +50,18 @@ export function buildReport(parts: ReportParts): Report {
         `The candidate lacks ${missing} rows that the baseline has. A candidate must not pass by skipping hard cases; set allow-missing to compare on the common rows only.`,
       );
     }
+  }
+  const integrity =
+    parts.integrity ??
+    noChecks(settings.backtestChecks, 'a pre-aggregated loss file has no forecast rows to check');
+  if (integrity.affectsVerdict && integrity.outcome !== 'ok') {
+    verdicts.push(integrity.outcome === 'fail' ? 'fail' : 'warn');
+    const which = integrity.checks.filter((c) => c.status === integrity.outcome).map((c) => c.id);
+    reasons.push(
+      integrity.outcome === 'fail'
+        ? `A backtest check failed (${which.join(', ')}): the comparison cannot be trusted until the backtest is fixed.`
+        : `A backtest check warns (${which.join(', ')}): look at the backtest checks before trusting the comparison.`,
+    );
   }
   const verdict = worstVerdict(verdicts);
   return {
@@ -70,6 +87,7 @@ export function buildReport(parts: ReportParts): Report {
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
+    integrity,
     stability: parts.stability ?? null,
   };
 }

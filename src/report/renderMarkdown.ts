@@ -2,6 +2,7 @@ import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatN
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { backtestChecksSection } from './renderBacktestChecks.js';
 import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
 import type { Comparison, Report } from './reportModel.js';
 
@@ -27,6 +28,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(...renderCandidatesMarkdown(report));
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
   if (reasons.length > 0) {
     lines.push('**Why**', '');

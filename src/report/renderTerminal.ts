@@ -1,5 +1,6 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { backtestChecksLines } from './renderBacktestChecks.js';
 import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
 import type { Comparison, Report } from './reportModel.js';
 
@@ -74,6 +75,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       `paths: candidate worse on ${paths.worse} of ${paths.paths} (${paths.significantlyWorse} significantly)`,
     );
   }
+  out.push(...backtestChecksLines(report, clean));
   const i = report.inputs;
   out.push(
     '',

@@ -6,6 +6,7 @@ import type {
 } from '../candidates/candidatesModel.js';
 import type { FileSummary } from '../core/panel.js';
 import type { Verdict } from '../decision/verdict.js';
+import type { IntegrityReport } from '../integrity/checkResult.js';
 import type { RelativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
@@ -37,6 +38,11 @@ export interface Report {
   readonly seriesSummary: SeriesSummary | null;
   /** Per-path findings when the files have a path column with several paths, else null. */
   readonly pathSummary: PathSummary | null;
+  /**
+   * Backtest checks (look-ahead, like for like, folds, exactness): each check's status, count
+   * and examples, and `outcome`, the worst status (a 'fail' fails the gate).
+   */
+  readonly integrity: IntegrityReport;
   /** Whether the difference holds over time (fluctuation test, recent window, periods), or null. */
   readonly stability: Stability | null;
   /** Several candidates (src/candidates/): each one's overall comparison, set membership, ranks. */

@@ -233,6 +233,30 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     help: 'how many series with the largest significant regressions to list',
   },
   {
+    name: 'frequency',
+    valueName: 'auto|STEP',
+    defaultValue: 'auto',
+    help: 'step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, bd for business days, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps',
+  },
+  {
+    name: 'folds',
+    valueName: 'FILE',
+    defaultValue: null,
+    help: 'fold layout (fold or path, role train|test, start, end; one row per segment) to check purging, embargo and that every row lies in its test window',
+  },
+  {
+    name: 'embargo',
+    valueName: 'N',
+    defaultValue: '0',
+    help: 'with --folds: steps after each test window that training must also avoid',
+  },
+  {
+    name: 'backtest-checks',
+    defaultValue: 'enforce',
+    choices: ['enforce', 'warn', 'report'],
+    help: 'enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone',
+  },
+  {
     name: 'name',
     valueName: 'TEXT',
     defaultValue: '',

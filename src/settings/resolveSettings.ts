@@ -1,5 +1,6 @@
 import { parseCandidateList } from '../candidates/candidateList.js';
 import { InputError } from '../core/inputError.js';
+import { FREQUENCY_SYNTAX, parseFrequency } from '../integrity/frequency.js';
 import type { LossName } from '../losses/lossName.js';
 import { parseColumnMapping } from '../reading/columnMapping.js';
 import { defaultConfidence } from './defaultConfidence.js';
@@ -130,6 +131,10 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     weights: bool('weights'),
     adjust: value('adjust') as Settings['adjust'],
     top: integer('top', 0, 10_000),
+    frequency: parseFrequencyOption(value('frequency'), label('frequency')),
+    folds: optional('folds'),
+    embargo: integer('embargo', 0, 1_000_000),
+    backtestChecks: value('backtest-checks') as Settings['backtestChecks'],
     json: optional('json'),
     markdown: optional('markdown'),
   };
@@ -184,4 +189,9 @@ function parseBlockLength(text: string, label: string): BlockLengthRule {
     throw new InputError(`${label} must be auto or a number ≥ 1`, { value: text });
   }
   return { kind: 'fixed', length };
+}
+
+function parseFrequencyOption(text: string, label: string): string {
+  if (text === 'auto' || parseFrequency(text) !== null) return text;
+  throw new InputError(`${label} must be ${FREQUENCY_SYNTAX}`, { value: text });
 }

@@ -61,6 +61,14 @@ export interface Settings {
   readonly weights: boolean;
   readonly adjust: 'holm' | 'bh';
   readonly top: number;
+  /** Step of the time grid for the backtest checks: 'auto' or e.g. '1h', '1mo', '1'. */
+  readonly frequency: string;
+  /** Fold layout file for the fold checks, or null. */
+  readonly folds: string | null;
+  /** Steps after each test window that training must avoid (with folds). */
+  readonly embargo: number;
+  /** How backtest-check findings act on the verdict. */
+  readonly backtestChecks: 'enforce' | 'warn' | 'report';
   readonly json: string | null;
   readonly markdown: string | null;
 }

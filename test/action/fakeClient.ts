@@ -34,6 +34,7 @@ export function fakeClient(
   const toApi = (c: FakeComment) => ({
     id: c.id,
     body: c.body,
+    user: { login: c.user },
     html_url: `https://example.test/c/${c.id}`,
   });
   const listComments = async (params: { per_page: number; page?: number }) => {
@@ -60,7 +61,7 @@ export function fakeClient(
         createComment: async (params: { issue_number: number; body: string }) => {
           calls.push(`create on ${params.issue_number}`);
           fail();
-          const comment = { id: nextId++, body: params.body, user: 'bot' };
+          const comment = { id: nextId++, body: params.body, user: 'github-actions[bot]' };
           state.comments.push(comment);
           return { data: toApi(comment) };
         },
@@ -71,6 +72,23 @@ export function fakeClient(
           if (comment === undefined) throw Object.assign(new Error('Not Found'), { status: 404 });
           comment.body = params.body;
           return { data: toApi(comment) };
+        },
+        deleteComment: async (params: { comment_id: number }) => {
+          calls.push(`delete ${params.comment_id}`);
+          fail();
+          const index = state.comments.findIndex((c) => c.id === params.comment_id);
+          if (index < 0) throw Object.assign(new Error('Not Found'), { status: 404 });
+          state.comments.splice(index, 1);
+          return { data: undefined };
+        },
+      },
+      users: {
+        getAuthenticated: async () => {
+          calls.push('get user');
+          throw Object.assign(new Error('Resource not accessible by integration'), {
+            status: 403,
+            response: { headers: {} },
+          });
         },
       },
       repos: {

@@ -19,10 +19,31 @@ export interface StoredPull {
 export interface ServedFailure {
   /** "GET /repos/acme/models/issues/7/comments" style prefix of the request to fail. */
   readonly match: string;
-  readonly status: number;
+  /**
+   * status (default): answer `status`; reset: drop the connection without an answer; hang:
+   * never answer.
+   */
+  readonly kind?: 'status' | 'reset' | 'hang';
+  readonly status?: number;
   readonly headers?: Record<string, string>;
+  /** The `message` of the error body (default "simulated failure"). */
+  readonly message?: string;
+  /** after: carry the request out first, then fail the answer (a write that did happen). */
+  readonly when?: 'before' | 'after';
   /** How many matching requests fail before the fake answers normally. */
   times: number;
+}
+
+export interface ServedDelay {
+  readonly match: string;
+  readonly ms: number;
+}
+
+/** Holds matching requests until `count` of them have arrived (or `timeoutMs` passed). */
+export interface ServedBarrier {
+  readonly match: string;
+  readonly count: number;
+  readonly timeoutMs: number;
 }
 
 export interface RecordedRequest {
@@ -44,7 +65,15 @@ export class FakeGitHub {
   readonly commitPulls = new Map<string, number[]>();
   readonly requests: RecordedRequest[] = [];
   readonly failures: ServedFailure[] = [];
+  readonly delays: ServedDelay[] = [];
+  barrier: ServedBarrier | null = null;
+  private readonly held: (() => void)[] = [];
   forbidWrites = false;
+  /**
+   * What GET /user answers: null (as for the workflow's installation token) is a 403; a login
+   * (as for a personal access token) is that user, who then also writes the comments.
+   */
+  userLogin: string | null = null;
   /** Path prefix of the API (e.g. "/api/v3" for GitHub Enterprise Server). */
   prefix = '';
   token = 'test-token';
@@ -69,6 +98,11 @@ export class FakeGitHub {
     await new Promise<void>((resolve) => this.server.close(() => resolve()));
   }
 
+  /** Whom comments created through the API are written by. */
+  get writer(): string {
+    return this.userLogin ?? this.botUser;
+  }
+
   addComment(issue: number, body: string, user = this.botUser): StoredComment {
     const comment = { id: this.nextId++, issue, body, user };
     this.comments.push(comment);
@@ -80,7 +114,7 @@ export class FakeGitHub {
   }
 
   writes(): RecordedRequest[] {
-    return this.requests.filter((r) => r.method === 'POST' || r.method === 'PATCH');
+    return this.requests.filter((r) => ['POST', 'PATCH', 'DELETE'].includes(r.method));
   }
 
   private async handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
@@ -104,15 +138,66 @@ export class FakeGitHub {
     if (req.headers.authorization !== `token ${this.token}`) {
       return send(res, 401, { message: 'Bad credentials' });
     }
-    const failure = this.failures.find(
-      (f) => f.times > 0 && `${method} ${path}`.startsWith(f.match),
-    );
-    if (failure !== undefined) {
-      failure.times -= 1;
-      return send(res, failure.status, { message: 'simulated failure' }, failure.headers);
+    const route = `${method} ${path}`;
+    const delay = this.delays.find((d) => route.startsWith(d.match));
+    if (delay !== undefined) await new Promise((resolve) => setTimeout(resolve, delay.ms));
+    const barrier = this.barrier;
+    if (barrier !== null && route.startsWith(barrier.match)) {
+      await new Promise<void>((resolve) => {
+        const timer = setTimeout(resolve, barrier.timeoutMs);
+        this.held.push(() => {
+          clearTimeout(timer);
+          resolve();
+        });
+        if (this.held.length >= barrier.count) for (const release of this.held.splice(0)) release();
+      });
     }
-    if ((method === 'POST' || method === 'PATCH') && this.forbidWrites) {
+    const failure = this.failures.find((f) => f.times > 0 && route.startsWith(f.match));
+    if (failure !== undefined) failure.times -= 1;
+    const fail = (): void => {
+      if (failure?.kind === 'hang') return;
+      if (failure?.kind === 'reset') {
+        res.socket?.destroy();
+        return;
+      }
+      send(
+        res,
+        failure?.status ?? 500,
+        { message: failure?.message ?? 'simulated failure' },
+        failure?.headers,
+      );
+    };
+    if (failure !== undefined && failure.when !== 'after') return fail();
+    if (['POST', 'PATCH', 'DELETE'].includes(method) && this.forbidWrites) {
       return send(res, 403, { message: 'Resource not accessible by integration' });
+    }
+    // With a failure `after`, the request is carried out and its answer replaced.
+    const respond =
+      failure === undefined
+        ? send
+        : (): void => {
+            fail();
+          };
+    return this.route(method, path, url, body, res, respond);
+  }
+
+  private route(
+    method: string,
+    path: string,
+    url: URL,
+    body: unknown,
+    res: ServerResponse,
+    send: (
+      res: ServerResponse,
+      status: number,
+      data: unknown,
+      headers?: Record<string, string>,
+    ) => void,
+  ) {
+    if (path === '/user' && method === 'GET') {
+      return this.userLogin === null
+        ? send(res, 403, { message: 'Resource not accessible by integration' })
+        : send(res, 200, { login: this.userLogin, id: 1, type: 'User' });
     }
 
     let m = /^\/repos\/acme\/models\/issues\/(\d+)\/comments$/.exec(path);
@@ -141,13 +226,26 @@ export class FakeGitHub {
       return send(res, 200, data, links.length > 0 ? { link: links.join(', ') } : {});
     }
     if (m !== null && method === 'POST') {
-      const comment = this.addComment(Number(m[1]), String((body as { body: string }).body));
+      const comment = this.addComment(
+        Number(m[1]),
+        String((body as { body: string }).body),
+        this.writer,
+      );
       return send(res, 201, this.toApi(comment));
     }
     m = /^\/repos\/acme\/models\/issues\/comments\/(\d+)$/.exec(path);
+    if (m !== null && method === 'DELETE') {
+      const index = this.comments.findIndex((c) => c.id === Number(m?.[1]));
+      if (index < 0) return send(res, 404, { message: 'Not Found' });
+      this.comments.splice(index, 1);
+      return send(res, 204, undefined);
+    }
     if (m !== null && method === 'PATCH') {
       const comment = this.comments.find((c) => c.id === Number(m?.[1]));
       if (comment === undefined) return send(res, 404, { message: 'Not Found' });
+      if (comment.user !== this.writer) {
+        return send(res, 403, { message: 'Resource not accessible by integration' });
+      }
       comment.body = String((body as { body: string }).body);
       return send(res, 200, this.toApi(comment));
     }
@@ -194,6 +292,11 @@ function send(
   data: unknown,
   headers: Record<string, string> = {},
 ): void {
+  if (status === 204) {
+    res.writeHead(204, headers);
+    res.end();
+    return;
+  }
   res.writeHead(status, { 'content-type': 'application/json; charset=utf-8', ...headers });
   res.end(JSON.stringify(data));
 }

@@ -206,12 +206,40 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       weights: false,
       adjust: 'holm',
       top: 10,
+      frequency: 'auto',
+      folds: null,
+      embargo: 0,
+      backtestChecks: 'enforce',
       json: null,
       markdown: null,
     },
     reasons: [],
     seriesSummary: null,
     pathSummary: null,
+    integrity: {
+      mode: 'enforce',
+      outcome: 'ok',
+      affectsVerdict: true,
+      frequency: { text: '1d', source: 'inferred' },
+      checks: [
+        {
+          id: 'look-ahead',
+          status: 'ok',
+          count: 0,
+          examples: [],
+          summary:
+            '0 of 5760 predictions rows have an origin at or after the timestamp they forecast',
+        },
+        {
+          id: 'series-coverage',
+          status: 'ok',
+          count: 0,
+          examples: [],
+          summary: '0 of 4 series values only in the baseline, 0 of 4 only in the candidate',
+        },
+      ],
+      notRun: [{ id: 'path-sets', reason: 'the files have no path column' }],
+    },
     stability: {
       fluctuation: {
         statistic: 1.8421,

@@ -126,3 +126,32 @@ describe('parseUntrustedReport', () => {
     expect(parsed.stability?.recent?.n).toBe(240);
   });
 });
+
+describe('parseUntrustedReport: backtest checks', () => {
+  it('refuses an unknown check id or status', () => {
+    const report = sampleReport();
+    const bad = (check: object) =>
+      JSON.stringify({ ...report, integrity: { ...report.integrity, checks: [check] } });
+    const check = report.integrity.checks[0]!;
+    expect(() => parseUntrustedReport(bad({ ...check, id: '<b>x</b>' }), 'r.json')).toThrow(
+      /field \$\.integrity\.checks\[0\]\.id must be one of look-ahead/,
+    );
+    expect(() => parseUntrustedReport(bad({ ...check, status: 'maybe' }), 'r.json')).toThrow(
+      /\$\.integrity\.checks\[0\]\.status/,
+    );
+  });
+
+  it('reads a report written before the checks existed as having none, outside the verdict', () => {
+    const { integrity: _dropped, ...older } = sampleReport();
+    const {
+      frequency: _f,
+      folds: _d,
+      embargo: _e,
+      backtestChecks: _b,
+      ...settings
+    } = older.settings;
+    const parsed = parseUntrustedReport(JSON.stringify({ ...older, settings }), 'r.json');
+    expect(parsed.integrity).toMatchObject({ checks: [], affectsVerdict: false, outcome: 'ok' });
+    expect(parsed.settings).toMatchObject({ frequency: 'auto', folds: null, embargo: 0 });
+  });
+});

@@ -98,3 +98,27 @@ describe('resolveSettings', () => {
     );
   });
 });
+
+describe('resolveSettings: backtest checks', () => {
+  it('defaults and accepted values', () => {
+    expect(resolveSettings(base, label)).toMatchObject({
+      frequency: 'auto',
+      folds: null,
+      embargo: 0,
+      backtestChecks: 'enforce',
+    });
+    expect(
+      resolveSettings(
+        { ...base, frequency: '15min', folds: 'f.csv', embargo: '3', 'backtest-checks': 'report' },
+        label,
+      ),
+    ).toMatchObject({ frequency: '15min', folds: 'f.csv', embargo: 3, backtestChecks: 'report' });
+  });
+
+  it('refuses a bad frequency, embargo or mode, naming the option and value', () => {
+    fails({ frequency: 'hourly' }, /--frequency must be auto, a count and unit .*value "hourly"/);
+    fails({ frequency: '0h' }, /--frequency/);
+    fails({ embargo: '-1' }, /--embargo must be an integer from 0/);
+    fails({ 'backtest-checks': 'off' }, /--backtest-checks must be one of enforce, warn, report/);
+  });
+});

@@ -1,0 +1,12 @@
+import type { FoldLayout } from '../integrity/foldLayout.js';
+import { FoldLayoutReader } from './foldLayoutReader.js';
+import { formatFromPath } from './readForecastFile.js';
+import { streamTextFile } from './streamTextFile.js';
+
+/** Reads the fold layout file given to `--folds` (CSV or TSV, optionally .gz). */
+export async function readFoldLayout(path: string, format?: 'csv' | 'tsv'): Promise<FoldLayout> {
+  const implied = formatFromPath(path);
+  const reader = new FoldLayoutReader(path, format ?? implied.format);
+  await streamTextFile(path, implied.gzip, reader);
+  return reader.finish();
+}
