@@ -21,7 +21,7 @@ describe("the action's candidate input", () => {
   it('names the input when a line is bad', () => {
     const inputs: Record<string, string> = { baseline: 'b.csv', candidate: 'a=x.csv\na=y.csv' };
     expect(() => readActionSettings((name) => inputs[name] ?? '')).toThrow(
-      "input 'candidate': two candidates are named \"a\"",
+      'input \'candidate\': two candidates are named "a"',
     );
   });
 });

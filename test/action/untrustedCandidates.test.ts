@@ -20,8 +20,15 @@ describe('the several-candidates sections of an uploaded report', () => {
     expect(parseUntrustedReport(JSON.stringify(report), 'report.json')).toEqual(report);
   });
 
-  const mutate = (change: (r: Record<string, any>) => void): string => {
-    const r = JSON.parse(JSON.stringify(sampleCandidatesReport()));
+  /** The parsed JSON of an uploaded report, as an attacker may change it. */
+  interface Uploaded {
+    candidates: { name: string }[];
+    confidenceSet: { members: string[] };
+    spa: Record<string, unknown>;
+    selection: Record<string, unknown>;
+  }
+  const mutate = (change: (r: Uploaded) => void): string => {
+    const r = JSON.parse(JSON.stringify(sampleCandidatesReport())) as Uploaded;
     change(r);
     return JSON.stringify(r);
   };
@@ -29,16 +36,16 @@ describe('the several-candidates sections of an uploaded report', () => {
   it.each([
     [
       'a name with markup',
-      (r: any) => (r.candidates[0].name = '<img src=x>'),
+      (r: Uploaded) => (r.candidates[0]!.name = '<img src=x>'),
       'candidates[0].name',
     ],
-    ['a name that mentions', (r: any) => (r.confidenceSet.members[0] = '@team'), 'members[0]'],
-    ['a p-value above 1', (r: any) => (r.spa.pValueUpper = 1.5), 'spa.pValueUpper'],
-    ['an unknown hypothesis', (r: any) => (r.spa.hypothesis = 'all'), 'spa.hypothesis'],
-    ['an unknown rule', (r: any) => (r.selection.rule = 'best'), 'selection.rule'],
+    ['a name that mentions', (r: Uploaded) => (r.confidenceSet.members[0] = '@team'), 'members[0]'],
+    ['a p-value above 1', (r: Uploaded) => (r.spa.pValueUpper = 1.5), 'spa.pValueUpper'],
+    ['an unknown hypothesis', (r: Uploaded) => (r.spa.hypothesis = 'all'), 'spa.hypothesis'],
+    ['an unknown rule', (r: Uploaded) => (r.selection.rule = 'best'), 'selection.rule'],
     [
       'too many candidates',
-      (r: any) => (r.candidates = Array.from({ length: 51 }, () => r.candidates[0])),
+      (r: Uploaded) => (r.candidates = Array.from({ length: 51 }, () => r.candidates[0]!)),
       '$.candidates',
     ],
   ])('refuses %s, naming the field', (_, change, where) => {
