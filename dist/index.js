@@ -3673,8 +3673,8 @@ var require_webidl = __commonJS({
       return new TypeError(`${message.header}: ${message.message}`);
     };
     webidl.errors.conversionFailed = function(context3) {
-      const plural = context3.types.length === 1 ? "" : " one of";
-      const message = `${context3.argument} could not be converted to${plural}: ${context3.types.join(", ")}.`;
+      const plural2 = context3.types.length === 1 ? "" : " one of";
+      const message = `${context3.argument} could not be converted to${plural2}: ${context3.types.join(", ")}.`;
       return webidl.errors.exception({
         header: context3.prefix,
         message
@@ -11237,9 +11237,9 @@ var require_pluralizer = __commonJS({
       this: "these"
     };
     module.exports = class Pluralizer {
-      constructor(singular, plural) {
+      constructor(singular, plural2) {
         this.singular = singular;
-        this.plural = plural;
+        this.plural = plural2;
       }
       pluralize(count) {
         const one = count === 1;
@@ -30258,9 +30258,9 @@ var require_ms = __commonJS({
       return ms + "ms";
     }
     function fmtLong(ms) {
-      return plural(ms, d, "day") || plural(ms, h, "hour") || plural(ms, m, "minute") || plural(ms, s, "second") || ms + " ms";
+      return plural2(ms, d, "day") || plural2(ms, h, "hour") || plural2(ms, m, "minute") || plural2(ms, s, "second") || ms + " ms";
     }
-    function plural(ms, n, name) {
+    function plural2(ms, n, name) {
       if (ms < n) {
         return;
       }
@@ -32352,6 +32352,95 @@ function intervalNote(report) {
   return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
 }
 
+// src/report/renderBacktestChecks.ts
+var SHOWN = 2;
+var MAX_CHARS = 200;
+var clip = (text2) => text2.length <= MAX_CHARS ? text2 : `${text2.slice(0, MAX_CHARS)}\u2026`;
+var CHECK_LABELS = {
+  "look-ahead": "origin at or after the timestamp",
+  "horizon-steps": "horizon differs from the steps from origin to timestamp",
+  "origin-after-actuals": "issued after the last actual",
+  "origin-sets": "origins in one file only",
+  "path-sets": "paths in one file only",
+  "horizon-sets": "horizons in one file only",
+  "time-spans": "timestamps outside the other file's span",
+  "series-coverage": "series in one file only",
+  "fold-purge": "training within the purge or embargo window",
+  "outside-test-window": "rows outside their fold's test window",
+  "exact-predictions": "predictions equal to the actual far more often than the other model"
+};
+function backtestChecksSection(report) {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
+    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
+    return [`**Backtest checks**: not run (${reasons.map(escapeMarkdown).join("; ")}).`, ""];
+  }
+  const mode = integrity.mode === "report" ? " Shown only: they do not change the verdict (backtest-checks report)." : integrity.mode === "warn" ? " Findings warn (backtest-checks warn)." : "";
+  const step = integrity.frequency === null ? "" : ` Steps of ${escapeMarkdown(integrity.frequency.text)} (${integrity.frequency.source}).`;
+  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ""];
+  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
+  for (const n of integrity.notRun) out.push(`- not run \xB7 ${n.id}: ${escapeMarkdown(n.reason)}`);
+  out.push("");
+  return out;
+}
+function checkLine(check) {
+  const shown = check.examples.slice(0, SHOWN).map((e) => escapeMarkdown(clip(e)));
+  const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
+  return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
+}
+
+// src/report/renderStabilitySection.ts
+function renderStabilitySection(report) {
+  const stability = report.stability;
+  const overall = report.comparisons[0];
+  if (stability === null || overall === void 0) return [];
+  const out = ["**Over time**", ""];
+  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
+  out.push(fluctuationSentence(stability, report), "");
+  if (stability.periods.length > 0) out.push(...periodTable(stability), "");
+  return out;
+}
+function windowTable(overall, recent) {
+  const level = recent.relativeChange?.level;
+  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name, c) => `| ${name} | ${escapeMarkdown(c.firstTimestamp ?? "n/a")} to ${escapeMarkdown(c.lastTimestamp ?? "n/a")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
+  return [
+    `| window | from \u2013 to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
+    "|---|---|---:|---:|---:|---:|---:|---:|---|",
+    row("whole backtest", overall),
+    row("most recent", recent)
+  ];
+}
+function fluctuationSentence(stability, report) {
+  const f = stability.fluctuation;
+  if (f === null) {
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+  }
+  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  if (f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
+    return `${setup} The candidate is significantly worse over ${spans}.`;
+  }
+  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function periodTable(stability) {
+  const out = [
+    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
+    "",
+    "| period | time points | baseline loss | candidate loss | relative |",
+    "|---|---:|---:|---:|---:|"
+  ];
+  for (const p of stability.periods) {
+    const span = p.start === p.end ? escapeMarkdown(p.start) : `${escapeMarkdown(p.start)} to ${escapeMarkdown(p.end)}`;
+    out.push(
+      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`
+    );
+  }
+  out.push("", "</details>");
+  return out;
+}
+
 // src/report/renderMarkdown.ts
 var VERDICT_WORDS = { pass: "PASS", warn: "WARN", fail: "FAIL" };
 function renderMarkdown(report, options = {}) {
@@ -32363,6 +32452,8 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(intervalNote(report))}</sub>`, "");
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...renderStabilitySection(report));
+  lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...report.comparisons[0]?.reasons ?? []];
   if (reasons.length > 0) {
     lines.push("**Why**", "");
@@ -39648,6 +39739,157 @@ function worstVerdict(verdicts) {
   return "pass";
 }
 
+// src/integrity/checkResult.ts
+var CHECK_IDS = [
+  "look-ahead",
+  "horizon-steps",
+  "origin-after-actuals",
+  "origin-sets",
+  "path-sets",
+  "horizon-sets",
+  "time-spans",
+  "series-coverage",
+  "fold-purge",
+  "outside-test-window",
+  "exact-predictions"
+];
+var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
+var MAX_EXAMPLES = 5;
+var FindingCollector = class {
+  count = 0;
+  examples = [];
+  add(example) {
+    if (this.count++ < MAX_EXAMPLES) this.examples.push(example());
+  }
+};
+
+// src/integrity/checkPolicy.ts
+function applyCheckPolicy(findings, notRun, mode, frequency) {
+  const checks = findings.map((f) => ({
+    id: f.id,
+    status: statusOf(f, mode),
+    count: f.count,
+    examples: f.examples,
+    summary: f.summary
+  }));
+  const outcome = checks.some((c) => c.status === "fail") ? "fail" : checks.some((c) => c.status === "warn") ? "warn" : "ok";
+  return { mode, outcome, affectsVerdict: mode !== "report", frequency, checks, notRun };
+}
+function statusOf(f, mode) {
+  if (f.count === 0) return "ok";
+  return mode === "enforce" && FAILING_CHECKS.includes(f.id) ? "fail" : "warn";
+}
+function noChecks(mode, reason) {
+  return {
+    mode,
+    outcome: "ok",
+    affectsVerdict: mode !== "report",
+    frequency: null,
+    checks: [],
+    notRun: CHECK_IDS.map((id) => ({ id, reason }))
+  };
+}
+
+// src/stability/calendarDate.ts
+function calendarDateOf(label) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== "datetime") return null;
+  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
+  const dayNumber = Math.floor(seconds / 86400);
+  return { ...civilFromDays(dayNumber), dayNumber };
+}
+function civilFromDays(days) {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+// src/stability/describeSpan.ts
+function describeSpan(first, last, points, kind) {
+  const a = kind === "datetime" ? calendarDateOf(first) : null;
+  const b = kind === "datetime" ? calendarDateOf(last) : null;
+  if (a !== null && b !== null) {
+    const days = b.dayNumber - a.dayNumber + 1;
+    if (days >= 90) return plural(Math.round(days / 30.44), "month");
+    if (days >= 14) return plural(Math.round(days / 7), "week");
+    if (days >= 2) return plural(days, "day");
+  }
+  return plural(points, "time point");
+}
+function plural(count, unit) {
+  return `${count} ${unit}${count === 1 ? "" : "s"}`;
+}
+
+// src/stability/stabilityFinding.ts
+function stabilityFinding(stability, hypothesis, settings, kind) {
+  if (stability === null) return { effect: null, headline: "", reasons: [] };
+  const sentences = [];
+  const reasons = [];
+  const recent = stability.recent;
+  const recentWorse = recent !== null && recent.verdict === "fail";
+  if (recent !== null && recentWorse) {
+    const where = recentWords(recent, kind);
+    const change = changeWords(recent);
+    sentences.push(
+      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
+    );
+    reasons.push(
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+    );
+  }
+  const f = stability.fluctuation;
+  const stretchWorse = f !== null && f.rejected && f.worsePeriods.length > 0;
+  if (f !== null && stretchWorse) {
+    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
+    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
+    sentences.push(
+      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+    );
+    reasons.push(
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+    );
+  }
+  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
+  const gate2 = settings.stabilityGate;
+  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  return {
+    effect: gate2 === "off" ? null : gate2,
+    headline: [...sentences, response].join(" "),
+    reasons
+  };
+}
+function recentWords(c, kind) {
+  const first = c.firstTimestamp ?? "?";
+  const last = c.lastTimestamp ?? "?";
+  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
+}
+function changeWords(c) {
+  const rel = c.relativeDifference;
+  if (rel === null) {
+    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
+  }
+  const rc = c.relativeChange;
+  const shown = `${formatSignedPercent(rel)} mean loss`;
+  if (rc === null) return shown;
+  const single = rc.pieces === void 0 || rc.pieces.length === 1;
+  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
+  if (single && rc.lower !== null && rc.upper !== null) {
+    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
+  }
+  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function spanWords(span) {
+  return `${span.start} to ${span.end}`;
+}
+
 // src/report/buildReport.ts
 function buildReport(parts) {
   const { inputs, settings, hypothesis } = parts;
@@ -39668,12 +39910,24 @@ function buildReport(parts) {
       );
     }
   }
-  const verdict = worstVerdict(verdicts);
+  const integrity = parts.integrity ?? noChecks(settings.backtestChecks, "a pre-aggregated loss file has no forecast rows to check");
+  if (integrity.affectsVerdict && integrity.outcome !== "ok") {
+    verdicts.push(integrity.outcome === "fail" ? "fail" : "warn");
+    const which2 = integrity.checks.filter((c) => c.status === integrity.outcome).map((c) => c.id);
+    reasons.push(
+      integrity.outcome === "fail" ? `A backtest check failed (${which2.join(", ")}): the comparison cannot be trusted until the backtest is fixed.` : `A backtest check warns (${which2.join(", ")}): look at the backtest checks before trusting the comparison.`
+    );
+  }
+  const stability = parts.stability ?? null;
+  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  reasons.push(...finding.reasons);
+  const gateVerdict = worstVerdict(verdicts);
+  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
   return {
     tool: { name: "skillgate", version: parts.version },
     name: settings.name,
     verdict,
-    headline: headline(verdict, overall, hypothesis),
+    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(" ").trim(),
     policy: {
       policy: settings.policy,
       agreement: settings.agreement,
@@ -39692,7 +39946,8 @@ function buildReport(parts) {
     reasons,
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
-    stability: parts.stability ?? null
+    integrity,
+    stability
   };
 }
 function headline(verdict, overall, hypothesis) {
@@ -39765,6 +40020,57 @@ function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
   };
 }
 
+// src/aggregation/lossSeries.ts
+function aggregateByTime(panel, losses, rows, weights = null) {
+  const points = panel.timestamps.length;
+  const sumB = new Float64Array(points);
+  const sumC = new Float64Array(points);
+  const count = new Int32Array(points);
+  const weightSum = weights === null ? null : new Float64Array(points);
+  let maxHorizon = 1;
+  let rowCount = 0;
+  const included = losses.included;
+  const total = rows === void 0 ? panel.size : rows.length;
+  for (let r = 0; r < total; r++) {
+    const i = rows === void 0 ? r : rows[r];
+    if (included !== null && included[i] === 0) continue;
+    const t = panel.time[i];
+    const w = weights === null ? 1 : weights[i];
+    sumB[t] += w * losses.baseline[i];
+    sumC[t] += w * losses.candidate[i];
+    if (weightSum !== null) weightSum[t] += w;
+    count[t]++;
+    rowCount++;
+    const h = panel.horizon[i];
+    if (h > maxHorizon) maxHorizon = h;
+  }
+  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
+  let n = 0;
+  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
+  const time = new Int32Array(n);
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const rowsAt = new Int32Array(n);
+  let k = 0;
+  for (let t = 0; t < points; t++) {
+    const m = denominator(t);
+    if (count[t] === 0 || m <= 0) continue;
+    time[k] = t;
+    baseline[k] = sumB[t] / m;
+    candidate[k] = sumC[t] / m;
+    rowsAt[k] = count[t];
+    k++;
+  }
+  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
+}
+function lossDifferential(series, relativeMargin) {
+  const n = series.baseline.length;
+  const d = new Float64Array(n);
+  const factor = 1 + relativeMargin;
+  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
+  return d;
+}
+
 // src/statistics/mean.ts
 function mean(x) {
   const n = x.length;
@@ -39777,26 +40083,226 @@ function mean(x) {
   return first + residual / n;
 }
 
-// src/stability/calendarDate.ts
-function calendarDateOf(label) {
-  const reading = readLabel(label);
-  if (typeof reading === "string" || reading.kind !== "datetime") return null;
-  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
-  const dayNumber = Math.floor(seconds / 86400);
-  return { ...civilFromDays(dayNumber), dayNumber };
+// src/statistics/autocovariance.ts
+function autocovariances(x, maxLag) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("autocovariances: the series is empty");
+  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
+    throw new RangeError(
+      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
+    );
+  }
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) {
+    let sum = 0;
+    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
+    gamma[k] = sum / n;
+  }
+  return gamma;
 }
-function civilFromDays(days) {
-  const z = days + 719468;
-  const era = Math.floor(z / 146097);
-  const doe = z - era * 146097;
-  const yoe = Math.floor(
-    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
-  );
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
-  const month = mp < 10 ? mp + 3 : mp - 9;
-  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+
+// src/statistics/bartlettLongRunVariance.ts
+function bartlettLongRunVariance(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
+  return sum;
+}
+
+// src/statistics/neweyWestLag.ts
+function neweyWestBandwidth(x) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
+  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
+  const sigma = autocovariances(x, pilotLag);
+  let sum = 0;
+  let weighted = 0;
+  for (let j = 1; j <= pilotLag; j++) {
+    sum += sigma[j];
+    weighted += j * sigma[j];
+  }
+  const s0 = sigma[0] + 2 * sum;
+  const s1 = 2 * weighted;
+  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
+  return { pilotLag, s0, s1, bandwidth };
+}
+function selectLag(x, rule, horizon) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
+  if (!Number.isInteger(horizon) || horizon < 1) {
+    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
+  }
+  const notes = [];
+  const cap = (lag, what) => {
+    if (lag <= n - 1) return lag;
+    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
+    return n - 1;
+  };
+  switch (rule.kind) {
+    case "auto": {
+      const bandwidth = neweyWestBandwidth(x);
+      let lag = Math.floor(bandwidth.bandwidth);
+      if (bandwidth.s0 === 0) {
+        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
+      }
+      if (lag < horizon - 1) {
+        notes.push(
+          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
+        );
+        lag = horizon - 1;
+      }
+      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
+    }
+    case "horizon":
+      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
+    case "fixed": {
+      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
+        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
+      }
+      if (rule.lag < horizon - 1) {
+        notes.push(
+          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
+        );
+      }
+      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
+    }
+  }
+}
+
+// src/statistics/prewhitenedLongRunVariance.ts
+var PREWHITENING_CAP = 0.97;
+function prewhitenedLongRunVariance(y, rule, horizon) {
+  const n = y.length;
+  if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
+  const centre = mean(y);
+  let cross = 0;
+  let square = 0;
+  for (let t = 1; t < n; t++) {
+    const previous = y[t - 1] - centre;
+    cross += (y[t] - centre) * previous;
+    square += previous * previous;
+  }
+  const raw = square === 0 ? 0 : cross / square;
+  const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
+  const residuals = new Float64Array(n - 1);
+  for (let t = 1; t < n; t++) {
+    residuals[t - 1] = y[t] - centre - coefficient * (y[t - 1] - centre);
+  }
+  const lag = selectLag(residuals, rule, horizon).lag;
+  const recolour = (1 - coefficient) ** 2;
+  return {
+    longRunVariance: bartlettLongRunVariance(residuals, lag) / recolour,
+    coefficient,
+    lag
+  };
+}
+
+// src/stability/fluctuationCriticalValues.ts
+var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var TABLE = {
+  two: [
+    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
+    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
+    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
+  ],
+  one: [
+    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
+    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
+    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
+  ]
+};
+function fluctuationCriticalValue(mu, alpha, sides) {
+  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
+  const columns = TABLE[sides];
+  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
+  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
+  for (let i = 0; i + 1 < columns.length; i++) {
+    const lo2 = columns[i];
+    const hi2 = columns[i + 1];
+    if (alpha > lo2.alpha && alpha < hi2.alpha) {
+      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
+      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
+    }
+  }
+  return null;
+}
+function interpolateInMu(values, mu) {
+  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
+  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
+  const w = Math.min(Math.max(position - i, 0), 1);
+  return (1 - w) * values[i] + w * values[i + 1];
+}
+
+// src/stability/rollingStatistic.ts
+function rollingStatistic(d, m, longRunVariance) {
+  const n = d.length;
+  if (!Number.isInteger(m) || m < 1 || m > n) {
+    throw new RangeError(`rollingStatistic: window ${m} must be an integer in 1..${n}`);
+  }
+  if (!(longRunVariance > 0)) {
+    throw new RangeError(
+      `rollingStatistic: the long-run variance must be > 0, got ${longRunVariance}`
+    );
+  }
+  const scale = 1 / Math.sqrt(m * longRunVariance);
+  const out = new Float64Array(n - m + 1);
+  let sum = 0;
+  for (let k = 0; k <= n - m; k++) {
+    if (k % 1024 === 0) {
+      sum = 0;
+      for (let j = k; j < k + m; j++) sum += d[j];
+    } else {
+      sum += d[k + m - 1] - d[k - 1];
+    }
+    out[k] = sum * scale;
+  }
+  return out;
+}
+
+// src/stability/fluctuationTest.ts
+var FLUCTUATION_MIN_POINTS = 20;
+function fluctuationTest(d, options) {
+  const n = d.length;
+  if (n < FLUCTUATION_MIN_POINTS) return null;
+  const criticalValue = fluctuationCriticalValue(options.mu, options.alpha, options.sides);
+  if (criticalValue === null) return null;
+  const windowSize = Math.round(options.mu * n);
+  if (windowSize < 2) return null;
+  const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
+  if (!(longRunVariance > 0)) return null;
+  const path7 = rollingStatistic(d, windowSize, longRunVariance);
+  let peakWindow = 0;
+  let statistic = Number.NEGATIVE_INFINITY;
+  for (let k = 0; k < path7.length; k++) {
+    const value = options.sides === "one" ? path7[k] : Math.abs(path7[k]);
+    if (value > statistic) {
+      statistic = value;
+      peakWindow = k;
+    }
+  }
+  const worseRuns = [];
+  for (let k = 0; k < path7.length; k++) {
+    if (!(path7[k] > criticalValue)) continue;
+    const from = k;
+    const to = k + windowSize - 1;
+    const last = worseRuns.at(-1);
+    if (last !== void 0 && from <= last[1] + 1) last[1] = to;
+    else worseRuns.push([from, to]);
+  }
+  return {
+    statistic,
+    criticalValue,
+    windowSize,
+    rejected: statistic > criticalValue,
+    peakWindow,
+    worseRuns,
+    lag,
+    longRunVariance,
+    path: path7
+  };
 }
 
 // src/stability/periodBuckets.ts
@@ -39880,63 +40386,6 @@ function periodBreakdown(series, timestamps, kind) {
     });
   }
   return { buckets, periods };
-}
-
-// src/stability/assessStability.ts
-function assessStability(inputs) {
-  const { periods } = periodBreakdown(inputs.series, inputs.timestamps, inputs.kind);
-  return { fluctuation: null, recent: null, periods };
-}
-
-// src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, rows, weights = null) {
-  const points = panel.timestamps.length;
-  const sumB = new Float64Array(points);
-  const sumC = new Float64Array(points);
-  const count = new Int32Array(points);
-  const weightSum = weights === null ? null : new Float64Array(points);
-  let maxHorizon = 1;
-  let rowCount = 0;
-  const included = losses.included;
-  const total = rows === void 0 ? panel.size : rows.length;
-  for (let r = 0; r < total; r++) {
-    const i = rows === void 0 ? r : rows[r];
-    if (included !== null && included[i] === 0) continue;
-    const t = panel.time[i];
-    const w = weights === null ? 1 : weights[i];
-    sumB[t] += w * losses.baseline[i];
-    sumC[t] += w * losses.candidate[i];
-    if (weightSum !== null) weightSum[t] += w;
-    count[t]++;
-    rowCount++;
-    const h = panel.horizon[i];
-    if (h > maxHorizon) maxHorizon = h;
-  }
-  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
-  let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
-  const time = new Int32Array(n);
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const rowsAt = new Int32Array(n);
-  let k = 0;
-  for (let t = 0; t < points; t++) {
-    const m = denominator(t);
-    if (count[t] === 0 || m <= 0) continue;
-    time[k] = t;
-    baseline[k] = sumB[t] / m;
-    candidate[k] = sumC[t] / m;
-    rowsAt[k] = count[t];
-    k++;
-  }
-  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
-}
-function lossDifferential(series, relativeMargin) {
-  const n = series.baseline.length;
-  const d = new Float64Array(n);
-  const factor = 1 + relativeMargin;
-  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
-  return d;
 }
 
 // src/decision/decideComparison.ts
@@ -40186,35 +40635,6 @@ function countBelow(sorted, r) {
   return lo2;
 }
 
-// src/statistics/autocovariance.ts
-function autocovariances(x, maxLag) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("autocovariances: the series is empty");
-  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
-    throw new RangeError(
-      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
-    );
-  }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
-  }
-  return gamma;
-}
-
-// src/statistics/bartlettLongRunVariance.ts
-function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
-}
-
 // src/statistics/distributions.ts
 var import_stats_base_dists_normal_cdf = __toESM(require_lib58(), 1);
 var import_stats_base_dists_normal_quantile = __toESM(require_lib63(), 1);
@@ -40292,66 +40712,6 @@ function harveyLeybourneNewbold(statistic, n, horizon) {
     pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
     degreesOfFreedom
   };
-}
-
-// src/statistics/neweyWestLag.ts
-function neweyWestBandwidth(x) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
-  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
-  const sigma = autocovariances(x, pilotLag);
-  let sum = 0;
-  let weighted = 0;
-  for (let j = 1; j <= pilotLag; j++) {
-    sum += sigma[j];
-    weighted += j * sigma[j];
-  }
-  const s0 = sigma[0] + 2 * sum;
-  const s1 = 2 * weighted;
-  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
-  return { pilotLag, s0, s1, bandwidth };
-}
-function selectLag(x, rule, horizon) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
-  if (!Number.isInteger(horizon) || horizon < 1) {
-    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
-  }
-  const notes = [];
-  const cap = (lag, what) => {
-    if (lag <= n - 1) return lag;
-    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
-    return n - 1;
-  };
-  switch (rule.kind) {
-    case "auto": {
-      const bandwidth = neweyWestBandwidth(x);
-      let lag = Math.floor(bandwidth.bandwidth);
-      if (bandwidth.s0 === 0) {
-        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
-      }
-      if (lag < horizon - 1) {
-        notes.push(
-          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
-        );
-        lag = horizon - 1;
-      }
-      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
-    }
-    case "horizon":
-      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
-    case "fixed": {
-      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
-        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
-      }
-      if (rule.lag < horizon - 1) {
-        notes.push(
-          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
-        );
-      }
-      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
-    }
-  }
 }
 
 // src/statistics/varianceTolerance.ts
@@ -41491,6 +41851,94 @@ function bootstrapNotRun(settings) {
   };
 }
 
+// src/stability/recentWindow.ts
+function parseRecentWindow(text2, label) {
+  if (text2 === "") return null;
+  const percent = /^(\d+(?:\.\d+)?)%$/.exec(text2);
+  if (percent !== null) {
+    const share = Number(percent[1]) / 100;
+    if (share > 0 && share < 1) return { kind: "share", share };
+  } else if (/^\d+$/.test(text2)) {
+    const points = Number(text2);
+    if (Number.isSafeInteger(points) && points >= 2) return { kind: "points", points };
+  }
+  throw new InputError(
+    `${label} must be a number of time points (an integer \u2265 2) or a percentage such as 15%`,
+    { value: text2 }
+  );
+}
+function recentPoints(window2, n) {
+  const k = window2.kind === "points" ? window2.points : Math.ceil(window2.share * n - 1e-9);
+  return Math.min(n, Math.max(k, 0));
+}
+
+// src/stability/recentComparison.ts
+function lastPoints(series, count) {
+  const from = series.baseline.length - count;
+  const rows = series.rows.subarray(from);
+  let rowCount = 0;
+  for (let t = 0; t < rows.length; t++) rowCount += rows[t];
+  return {
+    time: series.time.subarray(from),
+    baseline: series.baseline.subarray(from),
+    candidate: series.candidate.subarray(from),
+    rows,
+    rowCount,
+    maxHorizon: series.maxHorizon
+  };
+}
+function recentComparison(series, window2, scope, hypothesis, settings, runner) {
+  const count = recentPoints(window2, series.baseline.length);
+  return compareLossSeries(
+    lastPoints(series, count),
+    scope,
+    hypothesis,
+    settings,
+    runner === void 0 ? {} : { runner }
+  );
+}
+
+// src/stability/assessStability.ts
+function assessStability(inputs) {
+  const { series, timestamps, settings } = inputs;
+  const label = (i) => timestamps[series.time[i]] ?? String(i);
+  const { periods } = periodBreakdown(series, timestamps, inputs.kind);
+  const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
+  const d = lossDifferential(series, worse.baselineFactor - 1);
+  if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const test = fluctuationTest(d, {
+    mu: settings.fluctuationWindow,
+    alpha: settings.alpha,
+    sides: settings.fluctuationSides,
+    lag: settings.lag,
+    horizon: series.maxHorizon
+  });
+  const fluctuation = test === null ? null : {
+    statistic: test.statistic,
+    criticalValue: test.criticalValue,
+    mu: settings.fluctuationWindow,
+    windowSize: test.windowSize,
+    rejected: test.rejected,
+    peak: {
+      start: label(test.peakWindow),
+      end: label(test.peakWindow + test.windowSize - 1)
+    },
+    worsePeriods: test.worseRuns.map(([from, to]) => ({
+      start: label(from),
+      end: label(to)
+    }))
+  };
+  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+    series,
+    settings.recent,
+    { loss: settings.loss, horizon: "all", series: "all", timestamps },
+    inputs.hypothesis,
+    settings,
+    inputs.runner
+  );
+  return { fluctuation, recent, periods };
+}
+
 // src/comparison/evaluateLossSeries.ts
 function evaluateLossSeries(series, source, settings, resampleRunner) {
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
@@ -41961,6 +42409,7 @@ function evaluatePanel(panel, settings, extras = {}) {
     comparisons,
     seriesSummary,
     pathSummary,
+    ...extras.integrity === void 0 ? {} : { integrity: extras.integrity },
     stability: assessStability({
       series: overallSeries,
       timestamps: panel.timestamps,
@@ -42114,154 +42563,736 @@ function rowLossesOrInputError(panel, settings) {
   return losses;
 }
 
-// src/reading/streamTextFile.ts
-import { createHash } from "node:crypto";
-import { createReadStream } from "node:fs";
-import { stat as stat2 } from "node:fs/promises";
-import { pipeline } from "node:stream/promises";
-import { TextDecoder as TextDecoder2 } from "node:util";
-import { createGunzip } from "node:zlib";
-var CHUNK_BYTES = 1 << 20;
-async function streamTextFile(path7, gzip, sink, onProgress) {
-  let totalBytes;
-  try {
-    const info2 = await stat2(path7);
-    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
-    totalBytes = info2.size;
-  } catch (error2) {
-    throw asInputError(error2, path7);
+// src/integrity/panelRowKey.ts
+function describePanelRow(panel, p) {
+  const parts = [];
+  if (panel.seriesNames.length > 1 || panel.seriesNames[0] !== "") {
+    parts.push(`series=${panel.seriesNames[panel.series[p]]}`);
   }
-  const hash = createHash("sha256");
-  const decoder = new TextDecoder2("utf-8", { fatal: true });
-  let bytesRead = 0;
-  const tap = async function* (source) {
-    for await (const chunk of source) {
-      hash.update(chunk);
-      bytesRead += chunk.length;
-      onProgress?.(bytesRead, totalBytes);
-      yield chunk;
-    }
-  };
-  const consume = async (source) => {
-    for await (const chunk of source) sink.push(decode(decoder, chunk, true, path7, sink));
-    sink.push(decode(decoder, void 0, false, path7, sink));
-  };
-  try {
-    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
-    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
-    else await pipeline(raw, tap, consume);
-  } catch (error2) {
-    throw asInputError(error2, path7);
-  }
-  return `sha256:${hash.digest("hex")}`;
-}
-function decode(decoder, chunk, stream, path7, sink) {
-  try {
-    return decoder.decode(chunk, { stream });
-  } catch {
-    throw new InputError(
-      `the file is not valid UTF-8 text (the first invalid bytes come after line ${sink.linesRead})`,
-      { file: path7 }
-    );
-  }
-}
-function asInputError(error2, path7) {
-  if (error2 instanceof InputError) return error2;
-  const code = error2?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path7 });
-  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
-  if (typeof code === "string" && code.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
-  }
-  const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+  parts.push(`timestamp=${panel.timestamps[panel.time[p]]}`);
+  parts.push(`horizon=${panel.horizon[p]}`);
+  if (panel.origin !== null) parts.push(`origin=${panel.origins[panel.origin[p]]}`);
+  if (panel.path !== null) parts.push(`path=${panel.paths[panel.path[p]]}`);
+  return parts.join(" ");
 }
 
-// src/reading/columnMapping.ts
-var COLUMN_ROLES = [
-  "series",
-  "timestamp",
-  "horizon",
-  "origin",
-  "path",
-  "actual",
-  "prediction",
-  "weight",
-  "quantile"
-];
-var DEFAULT_COLUMNS = {
-  series: "series",
-  timestamp: "timestamp",
-  horizon: "horizon",
-  origin: "origin",
-  path: "path",
-  actual: "actual",
-  prediction: "prediction",
-  weight: "weight",
-  quantile: "q"
+// src/integrity/exactPredictions.ts
+var EXACT_TOLERANCE = 1e-9;
+var EXACT_RULE = { MIN_ROWS: 5, MIN_SHARE_GAP: 0.05, RATIO: 5 };
+function isExact(prediction, actual) {
+  return Math.abs(prediction - actual) <= EXACT_TOLERANCE * Math.max(Math.abs(prediction), Math.abs(actual));
+}
+function checkExactPredictions(panel) {
+  const b = panel.baseline.prediction;
+  const c = panel.candidate.prediction;
+  if (b === null || c === null) {
+    return {
+      findings: [],
+      notRun: [{ id: "exact-predictions", reason: "the models have no point forecasts in common" }]
+    };
+  }
+  const exactB = new FindingCollector();
+  const exactC = new FindingCollector();
+  for (let p = 0; p < panel.size; p++) {
+    const a = panel.actual[p];
+    if (isExact(b[p], a)) exactB.add(() => `baseline: ${describePanelRow(panel, p)}`);
+    if (isExact(c[p], a)) exactC.add(() => `candidate: ${describePanelRow(panel, p)}`);
+  }
+  const n = panel.size;
+  const shareB = exactB.count / n;
+  const shareC = exactC.count / n;
+  const flagged = (mine, share, other) => mine.count >= EXACT_RULE.MIN_ROWS && share - other >= EXACT_RULE.MIN_SHARE_GAP && share >= EXACT_RULE.RATIO * other;
+  const flagB = flagged(exactB, shareB, shareC);
+  const flagC = flagged(exactC, shareC, shareB);
+  const pct = (x) => `${(x * 100).toFixed(2)}%`;
+  const shares = `candidate ${exactC.count} (${pct(shareC)}), baseline ${exactB.count} (${pct(shareB)})`;
+  let count = 0;
+  let examples = [];
+  let summary2 = `rows where the prediction equals the actual (to 1e-9 relative), of ${n}: ${shares}; no model stands out`;
+  if (flagC || flagB) {
+    const who = flagC && flagB ? "both models" : flagC ? "the candidate" : "the baseline";
+    count = (flagC ? exactC.count : 0) + (flagB ? exactB.count : 0);
+    examples = [...flagC ? exactC.examples : [], ...flagB ? exactB.examples : []].slice(0, 5);
+    summary2 = `${who} reproduce${flagC && flagB ? "" : "s"} the actual far more often than the other model, a sign of target leakage: ${shares} of ${n} rows`;
+  }
+  return { findings: [{ id: "exact-predictions", count, examples, summary: summary2 }], notRun: [] };
+}
+
+// src/integrity/frequency.ts
+var UNITS = {
+  s: { unit: "second", factor: 1 },
+  min: { unit: "second", factor: 60 },
+  h: { unit: "second", factor: 3600 },
+  d: { unit: "day", factor: 1 },
+  bd: { unit: "businessDay", factor: 1 },
+  w: { unit: "day", factor: 7 },
+  mo: { unit: "month", factor: 1 },
+  q: { unit: "month", factor: 3 },
+  y: { unit: "month", factor: 12 }
 };
-function resolveColumns(mapping = {}) {
-  const resolved = { ...DEFAULT_COLUMNS };
-  for (const role of COLUMN_ROLES) {
-    const name = mapping[role];
-    if (name !== void 0) resolved[role] = name;
+var FREQUENCY_SYNTAX = "auto, a count and unit (s, min, h, d, bd, w, mo, q, y), e.g. 1h, 15min, 1d, 1bd, 1w, 1mo, or a number > 0 for numeric timestamps";
+function parseFrequency(text2) {
+  const m = /^(\d{1,6})(s|min|h|d|bd|w|mo|q|y)$/.exec(text2);
+  if (m !== null) {
+    const count = Number(m[1]);
+    const { unit, factor } = UNITS[m[2]];
+    return count > 0 ? { unit, size: count * factor } : null;
   }
-  return resolved;
+  if (!/^\d*\.?\d+(?:[eE][-+]?\d+)?$/.test(text2)) return null;
+  const size = Number(text2);
+  return Number.isFinite(size) && size > 0 ? { unit: "number", size } : null;
 }
-function parseColumnMapping(text2, source = "--columns") {
-  const mapping = {};
-  if (text2.trim() === "") return mapping;
-  for (const rawPair of text2.split(",")) {
-    const pair = rawPair.trim();
-    const eq = pair.indexOf("=");
-    if (eq < 0) {
-      throw new InputError(
-        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
-        { file: source, value: pair }
-      );
+function formatFrequency(f) {
+  switch (f.unit) {
+    case "number":
+      return String(f.size);
+    case "second":
+      if (f.size % 3600 === 0) return `${f.size / 3600}h`;
+      if (f.size % 60 === 0) return `${f.size / 60}min`;
+      return `${f.size}s`;
+    case "day":
+      return f.size % 7 === 0 ? `${f.size / 7}w` : `${f.size}d`;
+    case "businessDay":
+      return `${f.size}bd`;
+    case "month":
+      return f.size % 12 === 0 ? `${f.size / 12}y` : `${f.size}mo`;
+  }
+}
+
+// src/integrity/timePoint.ts
+var INSTANT_KEY = /^(\d{13})\.(\d{9})$/;
+var WRITTEN_FIELDS = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?/;
+function toTimePoint(label, kind) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== kind) return null;
+  if (reading.kind === "number") {
+    return {
+      seconds: reading.key,
+      nanos: 0,
+      wallDay: 0,
+      wallSecond: 0,
+      month: 0,
+      dayOfMonth: 0,
+      monthLength: 0
+    };
+  }
+  if (reading.kind !== "datetime") return null;
+  const instant = INSTANT_KEY.exec(reading.key);
+  const written = WRITTEN_FIELDS.exec(label);
+  if (instant === null || written === null) {
+    throw new Error(`cannot take the instant and written date of ${JSON.stringify(label)}`);
+  }
+  const seconds = Number(instant[1]) - 1e12;
+  const nanos = Number(instant[2]);
+  const year = Number(written[1]);
+  const month = Number(written[2]);
+  const day = Number(written[3]);
+  const wallSecond = written[4] === void 0 ? 0 : Number(written[4]) * 3600 + Number(written[5]) * 60 + (written[6] === void 0 ? 0 : Number(written[6])) + nanos / 1e9;
+  return {
+    seconds,
+    nanos,
+    wallDay: daysFromCivil(year, month, day),
+    wallSecond,
+    month: year * 12 + month - 1,
+    dayOfMonth: day,
+    monthLength: lengthOfMonth(year, month)
+  };
+}
+function compareTimePoints(a, b) {
+  return a.seconds - b.seconds || a.nanos - b.nanos;
+}
+function timePointsOf(labels, kind) {
+  return labels.map((label) => toTimePoint(label, kind));
+}
+function lengthOfMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
+
+// src/integrity/stepCount.ts
+var SLACK = 1e-9;
+function stepsAhead(from, target, f) {
+  if (compareTimePoints(target, from) <= 0) return 0;
+  switch (f.unit) {
+    case "number":
+    case "second": {
+      const diff = target.seconds - from.seconds + (target.nanos - from.nanos) / 1e9;
+      return Math.max(0, Math.ceil(diff / f.size - SLACK));
     }
-    const role = pair.slice(0, eq).trim();
-    const name = pair.slice(eq + 1).trim();
-    if (!isRole(role)) {
-      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
-        file: source,
-        value: pair
+    case "day": {
+      const days = target.wallDay - from.wallDay;
+      const later = target.wallSecond > from.wallSecond;
+      return gridCount(later ? days : days - 1, f.size);
+    }
+    case "businessDay": {
+      const later = target.wallSecond > from.wallSecond && isWeekday(from.wallDay);
+      const n = weekdaysUpTo(target.wallDay) - weekdaysUpTo(from.wallDay) + (later ? 1 : 0);
+      return gridCount(n - 1, f.size);
+    }
+    case "month": {
+      const months = target.month - from.month;
+      const day = Math.min(target.dayOfMonth, from.monthLength);
+      const later = day > from.dayOfMonth || day === from.dayOfMonth && target.wallSecond > from.wallSecond;
+      return gridCount(later ? months : months - 1, f.size);
+    }
+  }
+}
+function gridCount(span, size) {
+  return span < 0 ? 0 : Math.floor(span / size) + 1;
+}
+function isWeekday(day) {
+  const weekday = ((day + 4) % 7 + 7) % 7;
+  return weekday !== 0 && weekday !== 6;
+}
+function weekdaysUpTo(day) {
+  const m = day - 4;
+  const weeks = Math.floor(m / 7);
+  const r = m - 7 * weeks;
+  return 5 * weeks + Math.min(r + 1, 5);
+}
+
+// src/integrity/foldChecks.ts
+function checkFolds(input) {
+  const { panel, layout } = input;
+  const kind = panel.timestampKind;
+  if (kind === "text") {
+    throw new InputError(
+      "--folds needs timestamps that are all numbers or all ISO 8601 date-times; these are in text order",
+      { file: layout.file }
+    );
+  }
+  const folds = /* @__PURE__ */ new Map();
+  for (const s of layout.segments) {
+    const point = (label, column) => {
+      const p = toTimePoint(label, kind);
+      if (p === null) {
+        throw new InputError(
+          `${column} is not a ${kind === "number" ? "number" : "ISO 8601 date-time"} like the predictions' timestamps`,
+          { file: layout.file, line: s.line, column, value: label }
+        );
+      }
+      return p;
+    };
+    const from = point(s.start, "start");
+    const to = point(s.end, "end");
+    if (compareTimePoints(from, to) > 0) {
+      throw new InputError(`the segment ends (${s.end}) before it starts (${s.start})`, {
+        file: layout.file,
+        line: s.line,
+        value: s.end
       });
     }
-    if (name === "") {
-      throw new InputError(`the column name for role "${role}" is empty`, {
-        file: source,
-        value: pair
-      });
+    let fold = folds.get(s.fold);
+    if (fold === void 0) {
+      fold = { train: [], test: [] };
+      folds.set(s.fold, fold);
     }
-    if (mapping[role] !== void 0) {
-      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
-    }
-    mapping[role] = name;
+    fold[s.role].push({ ...s, from, to });
   }
-  checkDistinctNames(mapping, source);
-  return mapping;
-}
-function checkDistinctNames(mapping, source = "--columns") {
-  const resolved = resolveColumns(mapping);
-  const seen = /* @__PURE__ */ new Map();
-  for (const role of COLUMN_ROLES) {
-    if (role === "quantile") continue;
-    const name = resolved[role];
-    const other = seen.get(name);
-    if (other !== void 0) {
-      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
-        file: source,
+  for (const [name, fold] of folds) {
+    if (fold.test.length === 0) {
+      const line = fold.train[0].line;
+      throw new InputError(`fold "${name}" has no test segment`, {
+        file: layout.file,
+        line,
         value: name
       });
     }
-    seen.set(name, role);
   }
+  const findings = [];
+  const notRun = [];
+  let maxHorizon = 1;
+  for (let p = 0; p < panel.size; p++) maxHorizon = Math.max(maxHorizon, panel.horizon[p]);
+  const f = input.frequency;
+  if (f === null) {
+    notRun.push({ id: "fold-purge", reason: input.frequencyReason });
+  } else {
+    const purge = new FindingCollector();
+    let pairs = 0;
+    for (const [name, fold] of folds) {
+      for (const test of fold.test) {
+        for (const train of fold.train) {
+          pairs++;
+          if (touches(train, test, maxHorizon, input.embargo, f)) {
+            purge.add(
+              () => `fold ${name}: train ${train.start} to ${train.end} (line ${train.line}) touches test ${test.start} to ${test.end} (line ${test.line})`
+            );
+          }
+        }
+      }
+    }
+    findings.push({
+      id: "fold-purge",
+      count: purge.count,
+      examples: purge.examples,
+      summary: `${purge.count} of ${pairs} (training, test) segment pairs overlap the test window widened by ${maxHorizon} steps before (largest horizon) and ${input.embargo} after (embargo), at ${formatFrequency(f)}`
+    });
+  }
+  const times = panel.timestamps.map((label) => toTimePoint(label, kind));
+  const windows = /* @__PURE__ */ new Map();
+  for (const [name, fold] of folds) windows.set(name, mergeWindows(fold.test));
+  const anyFold = mergeWindows([...folds.values()].flatMap((fold) => fold.test));
+  const outside = new FindingCollector();
+  for (let p = 0; p < panel.size; p++) {
+    const tests = panel.path === null ? anyFold : windows.get(panel.paths[panel.path[p]]);
+    if (tests === void 0 || !insideAny(tests, times[panel.time[p]])) {
+      outside.add(
+        () => `${describePanelRow(panel, p)}${tests === void 0 ? " (no such fold in the layout)" : ""}`
+      );
+    }
+  }
+  findings.push({
+    id: "outside-test-window",
+    count: outside.count,
+    examples: outside.examples,
+    summary: `${outside.count} of ${panel.size} evaluated rows lie outside the test segments of their fold${panel.path === null ? " (no path column: any fold)" : ""}`
+  });
+  return { findings, notRun };
 }
-function isRole(text2) {
-  return COLUMN_ROLES.includes(text2);
+function touches(train, test, h, n, f) {
+  const endsLate = compareTimePoints(train.to, test.from) >= 0 || stepsAhead(train.to, test.from, f) <= h;
+  const startsEarly = compareTimePoints(train.from, test.to) <= 0 || stepsAhead(test.to, train.from, f) <= n;
+  return endsLate && startsEarly;
+}
+function mergeWindows(segments) {
+  const sorted = [...segments].sort((a, b) => compareTimePoints(a.from, b.from));
+  const out = [];
+  for (const s of sorted) {
+    const last = out[out.length - 1];
+    if (last !== void 0 && compareTimePoints(s.from, last.to) <= 0) {
+      if (compareTimePoints(s.to, last.to) > 0) last.to = s.to;
+    } else {
+      out.push({ from: s.from, to: s.to });
+    }
+  }
+  return out;
+}
+function insideAny(windows, t) {
+  let lo2 = 0;
+  let hi2 = windows.length - 1;
+  let found = -1;
+  while (lo2 <= hi2) {
+    const mid = lo2 + hi2 >> 1;
+    if (compareTimePoints(windows[mid].from, t) <= 0) {
+      found = mid;
+      lo2 = mid + 1;
+    } else {
+      hi2 = mid - 1;
+    }
+  }
+  return found >= 0 && compareTimePoints(t, windows[found].to) <= 0;
+}
+
+// src/integrity/inferFrequency.ts
+var BUSINESS_DAILY = { frequency: { unit: "businessDay", size: 1 } };
+function isBusinessDaily(series) {
+  let crossesWeekend = false;
+  for (const points of series) {
+    for (let i = 0; i < points.length; i++) {
+      if (!isWeekday(points[i].wallDay)) return false;
+      const from = points[i - 1]?.wallDay;
+      if (from !== void 0 && points[i].wallDay - from === 3 && ((from - 1) % 7 + 7) % 7 === 0) {
+        crossesWeekend = true;
+      }
+    }
+  }
+  return crossesWeekend;
+}
+var SLACK2 = 1e-6;
+function inferFrequency(kind, series) {
+  if (!series.some((points) => points.length >= 2)) {
+    return { frequency: null, reason: "no series has two different timestamps" };
+  }
+  if (kind === "number") {
+    return fromGaps(series, "number", (a, b) => b.seconds - a.seconds);
+  }
+  const first = series.find((points) => points.length > 0)[0];
+  const every = (test) => series.every((points) => points.every(test));
+  const oneTimeOfDay = every((p) => p.wallSecond === first.wallSecond);
+  if (oneTimeOfDay) {
+    const oneDay = every((p) => p.dayOfMonth === first.dayOfMonth);
+    const monthEnds = every((p) => p.dayOfMonth === p.monthLength);
+    if (oneDay || monthEnds) return fromGaps(series, "month", (a, b) => b.month - a.month);
+    const daily = fromGaps(series, "day", (a, b) => b.wallDay - a.wallDay);
+    return daily.frequency?.size === 1 && isBusinessDaily(series) ? BUSINESS_DAILY : daily;
+  }
+  return fromGaps(series, "second", (a, b) => b.seconds - a.seconds + (b.nanos - a.nanos) / 1e9);
+}
+function fromGaps(series, unit, gap) {
+  let step = Number.POSITIVE_INFINITY;
+  for (const points of series) {
+    for (let i = 1; i < points.length; i++) {
+      const g = gap(points[i - 1], points[i]);
+      if (g > 0 && g < step) step = g;
+    }
+  }
+  if (!Number.isFinite(step)) {
+    return { frequency: null, reason: "no two timestamps of a series are a step apart" };
+  }
+  const frequency = { unit, size: step };
+  for (const points of series) {
+    for (let i = 1; i < points.length; i++) {
+      const g = gap(points[i - 1], points[i]);
+      const ratio = g / step;
+      if (Math.abs(ratio - Math.round(ratio)) > SLACK2 * Math.max(1, ratio)) {
+        const other = { unit, size: g };
+        return {
+          frequency: null,
+          reason: `irregular timestamps: gaps of ${formatFrequency(frequency)} and ${formatFrequency(other)} (not a multiple of it)`
+        };
+      }
+    }
+  }
+  return { frequency };
+}
+
+// src/integrity/likeForLike.ts
+function checkLikeForLike(input) {
+  const { baseline: b, candidate: c } = input;
+  const findings = [];
+  const notRun = [];
+  const labelSets = (id, what, pick, keyOf) => {
+    const bc = pick(b);
+    const cc = pick(c);
+    if (bc === null || cc === null) {
+      notRun.push({ id, reason: `the files have no ${what} column` });
+      return;
+    }
+    findings.push(compareSets(id, what, keyed(bc.labels, keyOf), keyed(cc.labels, keyOf)));
+  };
+  labelSets("origin-sets", "origin", (t) => t.origin, timeKey(input.originKind));
+  labelSets(
+    "path-sets",
+    "path",
+    (t) => t.path,
+    (label) => label
+  );
+  if (b.horizon === null || c.horizon === null) {
+    notRun.push({ id: "horizon-sets", reason: "the files have no horizon column" });
+  } else {
+    findings.push(
+      compareSets(
+        "horizon-sets",
+        "horizon",
+        new Map([...distinct(b.horizon.values)].map((h) => [String(h), String(h)])),
+        new Map([...distinct(c.horizon.values)].map((h) => [String(h), String(h)]))
+      )
+    );
+  }
+  if (input.timestampKind === "text") {
+    notRun.push({ id: "time-spans", reason: "timestamps are in text order" });
+  } else {
+    findings.push(timeSpans(b, c, input.timestampKind));
+  }
+  labelSets(
+    "series-coverage",
+    "series",
+    (t) => t.series,
+    (label) => label
+  );
+  return { findings, notRun };
+}
+function timeKey(kind) {
+  if (kind === "text") return (label) => label;
+  return (label) => {
+    const r = readLabel(label);
+    return typeof r === "string" || r.kind === "text" ? label : String(r.key);
+  };
+}
+function keyed(labels, keyOf) {
+  const out = /* @__PURE__ */ new Map();
+  for (const label of labels) {
+    const key = keyOf(label);
+    if (!out.has(key)) out.set(key, label);
+  }
+  return out;
+}
+function distinct(values) {
+  const out = /* @__PURE__ */ new Set();
+  for (let i = 0; i < values.length; i++) out.add(values[i]);
+  return out;
+}
+function compareSets(id, what, baseline, candidate) {
+  const onlyIn = (mine, other, role) => {
+    const found = new FindingCollector();
+    for (const [key, label] of mine) {
+      if (!other.has(key)) found.add(() => `${what}=${label} only in the ${role}`);
+    }
+    return found;
+  };
+  const b = onlyIn(baseline, candidate, "baseline");
+  const c = onlyIn(candidate, baseline, "candidate");
+  const examples = [...b.examples.slice(0, c.count > 0 ? 3 : MAX_EXAMPLES), ...c.examples].slice(
+    0,
+    MAX_EXAMPLES
+  );
+  return {
+    id,
+    count: b.count + c.count,
+    examples,
+    summary: `${b.count} of ${baseline.size} ${what} values only in the baseline, ${c.count} of ${candidate.size} only in the candidate`
+  };
+}
+function timeSpans(b, c, kind) {
+  const keyOf = timeKey(kind);
+  const order = (x, y) => kind === "number" ? Number(x) - Number(y) : x < y ? -1 : x > y ? 1 : 0;
+  const span = (t) => {
+    const keys = keyed(t.timestamp.labels, keyOf);
+    const sorted = [...keys.keys()].sort(order);
+    return { keys, first: sorted[0], last: sorted[sorted.length - 1] };
+  };
+  const sb = span(b);
+  const sc = span(c);
+  const found = new FindingCollector();
+  const outside = (mine, other, role, otherRole) => {
+    let n = 0;
+    for (const [key, label2] of mine.keys) {
+      if (order(key, other.first) < 0 || order(key, other.last) > 0) {
+        n++;
+        found.add(() => `timestamp=${label2} in the ${role}, outside the ${otherRole}'s span`);
+      }
+    }
+    return n;
+  };
+  const nb = outside(sb, sc, "baseline", "candidate");
+  const nc = outside(sc, sb, "candidate", "baseline");
+  const label = (s) => `${s.keys.get(s.first)} to ${s.keys.get(s.last)}`;
+  return {
+    id: "time-spans",
+    count: found.count,
+    examples: found.examples,
+    summary: `baseline spans ${label(sb)}, candidate ${label(sc)}: ${nb} baseline and ${nc} candidate timestamps lie outside the other's span`
+  };
+}
+
+// src/integrity/rowKey.ts
+function describeTableRow(table, i) {
+  const parts = [];
+  if (table.series !== null) parts.push(`series=${table.series.labels[table.series.ids[i]]}`);
+  parts.push(`timestamp=${table.timestamp.labels[table.timestamp.ids[i]]}`);
+  if (table.horizon !== null) parts.push(`horizon=${table.horizon.values[i]}`);
+  if (table.origin !== null) parts.push(`origin=${table.origin.labels[table.origin.ids[i]]}`);
+  if (table.path !== null) parts.push(`path=${table.path.labels[table.path.ids[i]]}`);
+  return `${table.summary.role} line ${table.lines[i]}: ${parts.join(" ")}`;
+}
+
+// src/integrity/rowChecks.ts
+function checkRows(input) {
+  const { tables } = input;
+  if (tables.some((t) => t.origin === null)) {
+    const reason = "the predictions files have no origin column";
+    return {
+      findings: [],
+      notRun: [
+        { id: "look-ahead", reason },
+        { id: "horizon-steps", reason },
+        { id: "origin-after-actuals", reason }
+      ]
+    };
+  }
+  if (input.timestampKind === "text" || input.originKind !== input.timestampKind) {
+    const reason = input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`;
+    return {
+      findings: [],
+      notRun: [
+        { id: "look-ahead", reason },
+        { id: "horizon-steps", reason },
+        { id: "origin-after-actuals", reason }
+      ]
+    };
+  }
+  const kind = input.timestampKind;
+  const lookAhead = new FindingCollector();
+  const horizon = new FindingCollector();
+  const afterActuals = new FindingCollector();
+  const notRun = [];
+  const f = input.frequency;
+  const hasHorizon = tables.every((t) => t.horizon !== null);
+  if (!hasHorizon) notRun.push({ id: "horizon-steps", reason: "the files have no horizon column" });
+  else if (f === null) notRun.push({ id: "horizon-steps", reason: input.frequencyReason });
+  const countSteps = hasHorizon && f !== null;
+  let rows = 0;
+  for (const table of tables) {
+    const times = timePointsOf(table.timestamp.labels, kind);
+    const origins = timePointsOf(table.origin.labels, kind);
+    const tIds = table.timestamp.ids;
+    const oIds = table.origin.ids;
+    const h = table.horizon?.values;
+    rows += table.size;
+    for (let i = 0; i < table.size; i++) {
+      const t = times[tIds[i]];
+      const o = origins[oIds[i]];
+      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table, i));
+      else if (countSteps && stepsAhead(o, t, f) !== h[i]) {
+        horizon.add(() => {
+          const steps = stepsAhead(o, t, f);
+          return `${describeTableRow(table, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
+        });
+      }
+      if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
+        afterActuals.add(() => describeTableRow(table, i));
+      }
+    }
+  }
+  const findings = [
+    {
+      id: "look-ahead",
+      ...lookAhead,
+      summary: `${lookAhead.count} of ${rows} predictions rows have an origin at or after the timestamp they forecast`
+    }
+  ];
+  if (countSteps) {
+    findings.push({
+      id: "horizon-steps",
+      ...horizon,
+      summary: `${horizon.count} of ${rows} rows have a horizon that differs from the steps of ${formatFrequency(f)} from origin to timestamp`
+    });
+  }
+  if (input.lastActual === null) {
+    notRun.push({ id: "origin-after-actuals", reason: "no actual has a comparable timestamp" });
+  } else {
+    findings.push({
+      id: "origin-after-actuals",
+      ...afterActuals,
+      summary: `${afterActuals.count} of ${rows} rows were issued after the last actual (${input.lastActualLabel})`
+    });
+  }
+  return { findings, notRun };
+}
+
+// src/integrity/checkBacktest.ts
+function checkBacktest(input, settings) {
+  const timestampKind = readableKind(input.panel.timestampKind, [
+    input.panel.timestamps,
+    input.baseline.timestamp.labels,
+    input.candidate.timestamp.labels,
+    ...input.actuals === void 0 ? [] : [input.actuals.timestamp.labels]
+  ]);
+  const originKind = readableKind(input.panel.originKind, [
+    input.baseline.origin?.labels ?? [],
+    input.candidate.origin?.labels ?? []
+  ]);
+  const panel = { ...input.panel, timestampKind, originKind };
+  const frequency = chooseFrequency(panel, settings.frequency);
+  const findings = [];
+  const notRun = [];
+  const add = (part) => {
+    findings.push(...part.findings);
+    notRun.push(...part.notRun);
+  };
+  const actualTables = input.actuals === void 0 ? [input.baseline, input.candidate] : [input.actuals];
+  const last = lastTime(actualTables, panel.timestampKind);
+  add(
+    checkRows({
+      tables: [input.baseline, input.candidate],
+      timestampKind: panel.timestampKind,
+      originKind: panel.originKind,
+      lastActual: last?.point ?? null,
+      lastActualLabel: last?.label ?? "",
+      frequency: frequency.frequency,
+      frequencyReason: frequency.reason
+    })
+  );
+  add(
+    checkLikeForLike({
+      baseline: input.baseline,
+      candidate: input.candidate,
+      timestampKind: panel.timestampKind,
+      originKind: panel.originKind
+    })
+  );
+  if (input.folds === void 0) {
+    const reason = "no fold layout given (--folds FILE)";
+    notRun.push({ id: "fold-purge", reason }, { id: "outside-test-window", reason });
+  } else {
+    add(
+      checkFolds({
+        panel,
+        layout: input.folds,
+        embargo: settings.embargo,
+        frequency: frequency.frequency,
+        frequencyReason: frequency.reason
+      })
+    );
+  }
+  add(checkExactPredictions(panel));
+  const rank = (id) => CHECK_IDS.indexOf(id);
+  findings.sort((a, b) => rank(a.id) - rank(b.id));
+  notRun.sort((a, b) => rank(a.id) - rank(b.id));
+  return applyCheckPolicy(
+    findings,
+    notRun,
+    settings.mode,
+    frequency.frequency === null ? null : { text: formatFrequency(frequency.frequency), source: frequency.source }
+  );
+}
+function chooseFrequency(panel, text2) {
+  const kind = panel.timestampKind;
+  if (text2 !== "auto") {
+    const f = parseFrequency(text2);
+    if (f === null) throw new InputError("frequency is not a frequency", { value: text2 });
+    if (kind === "text") {
+      return { frequency: null, reason: "timestamps are in text order", source: "given" };
+    }
+    if (f.unit === "number" !== (kind === "number")) {
+      throw new InputError(
+        kind === "number" ? `the frequency ${text2} has a unit, but the timestamps are numbers: give a plain step such as 1` : `the frequency ${text2} is a plain number, but the timestamps are ISO 8601 date-times: give a unit such as 1h, 1d or 1mo`,
+        { value: text2 }
+      );
+    }
+    return { frequency: f, reason: "", source: "given" };
+  }
+  if (kind === "text") {
+    return {
+      frequency: null,
+      reason: "timestamps are in text order, so steps cannot be counted",
+      source: "inferred"
+    };
+  }
+  const inferred = inferFrequency(kind, pointsBySeries(panel, kind));
+  return inferred.frequency === null ? {
+    frequency: null,
+    reason: `no frequency: ${inferred.reason}; give --frequency`,
+    source: "inferred"
+  } : { frequency: inferred.frequency, reason: "", source: "inferred" };
+}
+function pointsBySeries(panel, kind) {
+  const points = panel.timestamps.map((label) => toTimePoint(label, kind));
+  const out = panel.seriesNames.map(() => []);
+  let lastSeries = -1;
+  let lastTime2 = -1;
+  for (let p = 0; p < panel.size; p++) {
+    const series = panel.series[p];
+    const time = panel.time[p];
+    if (series === lastSeries && time === lastTime2) continue;
+    if (series === lastSeries && time < lastTime2) {
+      throw new Error("the aligned panel is not sorted by series and timestamp");
+    }
+    out[series].push(points[time]);
+    lastSeries = series;
+    lastTime2 = time;
+  }
+  return out;
+}
+function readableKind(kind, lists) {
+  if (kind === "text") return kind;
+  for (const labels of lists) {
+    for (const label of labels) if (toTimePoint(label, kind) === null) return "text";
+  }
+  return kind;
+}
+function lastTime(tables, kind) {
+  if (kind === "text") return null;
+  let best = null;
+  for (const table of tables) {
+    for (const label of table.timestamp.labels) {
+      const point = toTimePoint(label, kind);
+      if (point !== null && (best === null || compareTimePoints(point, best.point) > 0)) {
+        best = { point, label };
+      }
+    }
+  }
+  return best;
 }
 
 // src/reading/tokenizer.ts
@@ -42439,6 +43470,239 @@ function countNewlines(text2, from, to) {
 }
 function truncateValue(text2) {
   return text2.length <= 60 ? text2 : `${text2.slice(0, 60)}\u2026`;
+}
+
+// src/reading/foldLayoutReader.ts
+var FOLD_NAMES = ["fold", "path"];
+var REQUIRED = ["role", "start", "end"];
+var MAX_SEGMENTS = 1e4;
+var FoldLayoutReader = class {
+  tokenizer;
+  file;
+  index = null;
+  segments = [];
+  constructor(file, format) {
+    this.file = file;
+    this.tokenizer = new Tokenizer(
+      format === "tsv" ? "	" : ",",
+      (fields, count, line) => this.record(fields.slice(0, count), line),
+      file
+    );
+  }
+  push(chunk) {
+    this.tokenizer.push(chunk);
+  }
+  get linesRead() {
+    return this.tokenizer.lines;
+  }
+  finish() {
+    this.tokenizer.end();
+    if (this.index === null) {
+      throw new InputError("the fold layout is empty (expected a header: fold,role,start,end)", {
+        file: this.file
+      });
+    }
+    if (this.segments.length === 0) {
+      throw new InputError("the fold layout has a header but no segments", {
+        file: this.file,
+        line: 2
+      });
+    }
+    return { file: this.file, segments: this.segments };
+  }
+  record(fields, line) {
+    if (this.index === null) {
+      const index = /* @__PURE__ */ new Map();
+      fields.forEach((name, i) => {
+        const key = name.trim().toLowerCase();
+        if (!index.has(key)) index.set(key, i);
+      });
+      const fold = FOLD_NAMES.find((n) => index.has(n));
+      for (const name of [...REQUIRED, fold ?? "fold"]) {
+        if (!index.has(name)) {
+          throw new InputError(
+            `the fold layout needs the columns fold (or path), role, start and end; "${name}" is missing`,
+            { file: this.file, line, value: fields.join(",") }
+          );
+        }
+      }
+      index.set("fold", index.get(fold));
+      this.index = index;
+      return;
+    }
+    if (this.segments.length >= MAX_SEGMENTS) {
+      throw new InputError(`the fold layout has more than ${MAX_SEGMENTS} segments`, {
+        file: this.file,
+        line
+      });
+    }
+    const at = (name) => (fields[this.index.get(name)] ?? "").trim();
+    const role = at("role");
+    if (role !== "train" && role !== "test") {
+      throw new InputError("role must be train or test", {
+        file: this.file,
+        line,
+        column: "role",
+        value: role
+      });
+    }
+    for (const name of ["fold", "start", "end"]) {
+      if (at(name) === "") {
+        throw new InputError(`empty ${name}`, { file: this.file, line, column: name, value: "" });
+      }
+    }
+    this.segments.push({ fold: at("fold"), role, start: at("start"), end: at("end"), line });
+  }
+};
+
+// src/reading/streamTextFile.ts
+import { createHash } from "node:crypto";
+import { createReadStream } from "node:fs";
+import { stat as stat2 } from "node:fs/promises";
+import { pipeline } from "node:stream/promises";
+import { TextDecoder as TextDecoder2 } from "node:util";
+import { createGunzip } from "node:zlib";
+var CHUNK_BYTES = 1 << 20;
+async function streamTextFile(path7, gzip, sink, onProgress) {
+  let totalBytes;
+  try {
+    const info2 = await stat2(path7);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
+    totalBytes = info2.size;
+  } catch (error2) {
+    throw asInputError(error2, path7);
+  }
+  const hash = createHash("sha256");
+  const decoder = new TextDecoder2("utf-8", { fatal: true });
+  let bytesRead = 0;
+  const tap = async function* (source) {
+    for await (const chunk of source) {
+      hash.update(chunk);
+      bytesRead += chunk.length;
+      onProgress?.(bytesRead, totalBytes);
+      yield chunk;
+    }
+  };
+  const consume = async (source) => {
+    for await (const chunk of source) sink.push(decode(decoder, chunk, true, path7, sink));
+    sink.push(decode(decoder, void 0, false, path7, sink));
+  };
+  try {
+    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
+    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
+    else await pipeline(raw, tap, consume);
+  } catch (error2) {
+    throw asInputError(error2, path7);
+  }
+  return `sha256:${hash.digest("hex")}`;
+}
+function decode(decoder, chunk, stream, path7, sink) {
+  try {
+    return decoder.decode(chunk, { stream });
+  } catch {
+    throw new InputError(
+      `the file is not valid UTF-8 text (the first invalid bytes come after line ${sink.linesRead})`,
+      { file: path7 }
+    );
+  }
+}
+function asInputError(error2, path7) {
+  if (error2 instanceof InputError) return error2;
+  const code = error2?.code;
+  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
+  if (code === "EACCES" || code === "EPERM")
+    return new InputError("permission denied", { file: path7 });
+  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path7 });
+  if (typeof code === "string" && code.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error2.message})`, { file: path7 });
+  }
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+}
+
+// src/reading/columnMapping.ts
+var COLUMN_ROLES = [
+  "series",
+  "timestamp",
+  "horizon",
+  "origin",
+  "path",
+  "actual",
+  "prediction",
+  "weight",
+  "quantile"
+];
+var DEFAULT_COLUMNS = {
+  series: "series",
+  timestamp: "timestamp",
+  horizon: "horizon",
+  origin: "origin",
+  path: "path",
+  actual: "actual",
+  prediction: "prediction",
+  weight: "weight",
+  quantile: "q"
+};
+function resolveColumns(mapping = {}) {
+  const resolved = { ...DEFAULT_COLUMNS };
+  for (const role of COLUMN_ROLES) {
+    const name = mapping[role];
+    if (name !== void 0) resolved[role] = name;
+  }
+  return resolved;
+}
+function parseColumnMapping(text2, source = "--columns") {
+  const mapping = {};
+  if (text2.trim() === "") return mapping;
+  for (const rawPair of text2.split(",")) {
+    const pair = rawPair.trim();
+    const eq = pair.indexOf("=");
+    if (eq < 0) {
+      throw new InputError(
+        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
+        { file: source, value: pair }
+      );
+    }
+    const role = pair.slice(0, eq).trim();
+    const name = pair.slice(eq + 1).trim();
+    if (!isRole(role)) {
+      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (name === "") {
+      throw new InputError(`the column name for role "${role}" is empty`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (mapping[role] !== void 0) {
+      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
+    }
+    mapping[role] = name;
+  }
+  checkDistinctNames(mapping, source);
+  return mapping;
+}
+function checkDistinctNames(mapping, source = "--columns") {
+  const resolved = resolveColumns(mapping);
+  const seen = /* @__PURE__ */ new Map();
+  for (const role of COLUMN_ROLES) {
+    if (role === "quantile") continue;
+    const name = resolved[role];
+    const other = seen.get(name);
+    if (other !== void 0) {
+      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
+        file: source,
+        value: name
+      });
+    }
+    seen.set(name, role);
+  }
+}
+function isRole(text2) {
+  return COLUMN_ROLES.includes(text2);
 }
 
 // src/reading/tableBuilder.ts
@@ -42774,8 +44038,16 @@ async function readForecastFile(path7, options) {
   return reader.finish(sha256);
 }
 
+// src/reading/readFoldLayout.ts
+async function readFoldLayout(path7, format) {
+  const implied = formatFromPath(path7);
+  const reader = new FoldLayoutReader(path7, format ?? implied.format);
+  await streamTextFile(path7, implied.gzip, reader);
+  return reader.finish();
+}
+
 // src/reading/lossSeriesReader.ts
-var REQUIRED = ["baseline_loss", "candidate_loss"];
+var REQUIRED2 = ["baseline_loss", "candidate_loss"];
 var KNOWN = ["baseline_loss", "candidate_loss", "differential", "rows", "horizon"];
 var LossSeriesReader = class {
   path;
@@ -42850,7 +44122,7 @@ var LossSeriesReader = class {
         }
         index2[n] = i;
       });
-      for (const need of [this.timestampName, ...REQUIRED]) {
+      for (const need of [this.timestampName, ...REQUIRED2]) {
         if (!(need in index2)) {
           throw new InputError(
             `a loss file needs the columns ${this.timestampName}, baseline_loss and candidate_loss; "${need}" is missing`,
@@ -42973,9 +44245,21 @@ async function runComparison(settings, hooks = {}) {
     { baseline, candidate, ...actuals === void 0 ? {} : { actuals } },
     { onProgress: (fraction) => hooks.onProgress?.({ stage: "aligning", fraction }) }
   );
+  const folds = settings.folds === null ? void 0 : await readFoldLayout(settings.folds);
+  const integrity = checkBacktest(
+    {
+      panel,
+      baseline,
+      candidate,
+      ...actuals === void 0 ? {} : { actuals },
+      ...folds === void 0 ? {} : { folds }
+    },
+    { frequency: settings.frequency, embargo: settings.embargo, mode: settings.backtestChecks }
+  );
   const history = settings.pooling === "scaled" && settings.scale === "seasonal-naive" ? await readHistory(settings) : void 0;
   hooks.onProgress?.({ stage: "testing", fraction: 0 });
   const report = evaluatePanel(panel, settings, {
+    integrity,
     ...history === void 0 ? {} : { history },
     ...hooks.resampleRunner === void 0 ? {} : { resampleRunner: hooks.resampleRunner }
   });
@@ -42983,6 +44267,12 @@ async function runComparison(settings, hooks = {}) {
   return { report };
 }
 async function runOnLossFile(path7, settings, hooks) {
+  if (settings.folds !== null || settings.frequency !== "auto" || settings.embargo !== 0) {
+    throw new InputError(
+      "frequency, folds and embargo configure the backtest checks, which need the forecast files (baseline and candidate), not a loss file",
+      { file: path7 }
+    );
+  }
   const table = await readLossSeriesFile(path7, {
     ...settings.format === "auto" ? {} : { format: settings.format },
     ...settings.columns.timestamp === void 0 ? {} : { timestampColumn: settings.columns.timestamp },
@@ -43708,6 +44998,54 @@ var ENGINE_OPTIONS = [
     help: "how many series with the largest significant regressions to list"
   },
   {
+    name: "recent",
+    valueName: "N|P%",
+    defaultValue: "",
+    help: "also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)"
+  },
+  {
+    name: "fluctuation-window",
+    valueName: "MU",
+    defaultValue: "0.2",
+    help: "window of the fluctuation test (Giacomini\u2013Rossi) as a fraction of the time points, 0.1 to 0.9"
+  },
+  {
+    name: "fluctuation-sides",
+    defaultValue: "one",
+    choices: ["one", "two"],
+    help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
+  },
+  {
+    name: "stability-gate",
+    defaultValue: "warn",
+    choices: ["off", "warn", "fail"],
+    help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
+  },
+  {
+    name: "frequency",
+    valueName: "auto|STEP",
+    defaultValue: "auto",
+    help: "step of the time grid for the backtest checks: auto (inferred from the timestamps), a count and unit (s, min, h, d, bd for business days, w, mo, q, y; e.g. 1h, 1d, 1mo), or a number for numeric timestamps"
+  },
+  {
+    name: "folds",
+    valueName: "FILE",
+    defaultValue: null,
+    help: "fold layout (fold or path, role train|test, start, end; one row per segment) to check purging, embargo and that every row lies in its test window"
+  },
+  {
+    name: "embargo",
+    valueName: "N",
+    defaultValue: "0",
+    help: "with --folds: steps after each test window that training must also avoid"
+  },
+  {
+    name: "backtest-checks",
+    defaultValue: "enforce",
+    choices: ["enforce", "warn", "report"],
+    help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
+  },
+  {
     name: "name",
     valueName: "TEXT",
     defaultValue: "",
@@ -43854,6 +45192,18 @@ function resolveSettings(raw, label) {
     weights: bool("weights"),
     adjust: value("adjust"),
     top: integer("top", 0, 1e4),
+    recent: parseRecentWindow(value("recent"), label("recent")),
+    fluctuationWindow: number(
+      "fluctuation-window",
+      (x) => x >= 0.1 && x <= 0.9,
+      "a number from 0.1 to 0.9 (the window as a fraction of the time points)"
+    ),
+    fluctuationSides: value("fluctuation-sides"),
+    stabilityGate: value("stability-gate"),
+    frequency: parseFrequencyOption(value("frequency"), label("frequency")),
+    folds: optional("folds"),
+    embargo: integer("embargo", 0, 1e6),
+    backtestChecks: value("backtest-checks"),
     json: optional("json"),
     markdown: optional("markdown")
   };
@@ -43894,6 +45244,10 @@ function parseBlockLength(text2, label) {
     throw new InputError(`${label} must be auto or a number \u2265 1`, { value: text2 });
   }
   return { kind: "fixed", length };
+}
+function parseFrequencyOption(text2, label) {
+  if (text2 === "auto" || parseFrequency(text2) !== null) return text2;
+  throw new InputError(`${label} must be ${FREQUENCY_SYNTAX}`, { value: text2 });
 }
 
 // src/action/readInputs.ts
@@ -44107,6 +45461,7 @@ var Reader = class _Reader {
   }
 };
 var VERDICTS = ["pass", "warn", "fail"];
+var CHECK_STATUSES = ["ok", "warn", "fail"];
 var POLICIES = ["no-regression", "non-inferiority", "superiority"];
 var AGREEMENTS = ["both", "either", "dm", "bootstrap"];
 var ESTIMATORS = ["ewc", "bartlett", "uniform"];
@@ -44129,6 +45484,7 @@ function readReport(r) {
     inputs: readInputs(r.field("inputs")),
     seriesSummary: readSeriesSummary(r.field("seriesSummary")),
     pathSummary: readPathSummary(r.field("pathSummary")),
+    integrity: readIntegrity(r.field("integrity")),
     stability: readStability(r.field("stability")),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
@@ -44208,6 +45564,30 @@ function readComparison(r) {
     },
     ...r.field("adjustedPValue").value === void 0 ? {} : { adjustedPValue: r.field("adjustedPValue").numberOrNull() },
     ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) }
+  };
+}
+var CHECK_MODES = ["enforce", "warn", "report"];
+function readIntegrity(r) {
+  if (r.value === void 0) {
+    return noChecks("report", "the report was written without backtest checks");
+  }
+  const frequency = r.field("frequency");
+  return {
+    mode: r.field("mode").oneOf(CHECK_MODES),
+    outcome: r.field("outcome").oneOf(CHECK_STATUSES),
+    affectsVerdict: r.field("affectsVerdict").boolean(),
+    frequency: frequency.value === null ? null : {
+      text: frequency.field("text").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
+      source: frequency.field("source").oneOf(["inferred", "given"])
+    },
+    checks: r.field("checks").items().map((c) => ({
+      id: c.field("id").oneOf(CHECK_IDS),
+      status: c.field("status").oneOf(CHECK_STATUSES),
+      count: c.field("count").integer(),
+      examples: c.field("examples").strings(),
+      summary: c.field("summary").string()
+    })),
+    notRun: r.field("notRun").items().map((c) => ({ id: c.field("id").oneOf(CHECK_IDS), reason: c.field("reason").string() }))
   };
 }
 function readPathSummary(r) {
@@ -44398,9 +45778,22 @@ function readSettings(r) {
     weights: r.field("weights").boolean(),
     adjust: r.field("adjust").oneOf(["holm", "bh"]),
     top: r.field("top").integer(),
+    recent: readRecentWindow(r.field("recent")),
+    fluctuationWindow: r.field("fluctuationWindow").value === void 0 ? 0.2 : r.field("fluctuationWindow").number(),
+    fluctuationSides: r.field("fluctuationSides").value === void 0 ? "one" : r.field("fluctuationSides").oneOf(["one", "two"]),
+    stabilityGate: r.field("stabilityGate").value === void 0 ? "warn" : r.field("stabilityGate").oneOf(["off", "warn", "fail"]),
+    // Absent from reports written before the backtest checks: their defaults.
+    frequency: r.field("frequency").value === void 0 ? "auto" : r.field("frequency").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
+    folds: r.field("folds").value === void 0 ? null : r.field("folds").stringOrNull(),
+    embargo: r.field("embargo").value === void 0 ? 0 : r.field("embargo").integer(),
+    backtestChecks: r.field("backtestChecks").value === void 0 ? "enforce" : r.field("backtestChecks").oneOf(CHECK_MODES),
     json: r.field("json").stringOrNull(),
     markdown: r.field("markdown").stringOrNull()
   };
+}
+function readRecentWindow(r) {
+  if (r.value === null || r.value === void 0) return null;
+  return r.field("kind").oneOf(["points", "share"]) === "points" ? { kind: "points", points: r.field("points").integer(2) } : { kind: "share", share: r.field("share").number() };
 }
 function readLevels(r) {
   if (r.value === null) return null;

@@ -1,8 +1,9 @@
 // Writes the demo backtest under examples/data/: an invented water utility, "Harbour Valley
 // Water", forecasting daily demand (megalitres) in four pressure zones, 1 to 3 days ahead, over
-// 240 days. Four models: the current one on main (baseline.csv), a pull request that improves
-// it (candidate.csv), one that regresses in two zones (candidate-regressed.csv) and one whose
-// backtest peeks at the future (candidate-peeking.csv). Invented
+// 240 days. Five models: the current one on main (baseline.csv), a pull request that improves
+// it (candidate.csv), one that regresses in two zones (candidate-regressed.csv), one whose
+// backtest peeks at the future (candidate-peeking.csv), and one that is better for most of the
+// backtest but worse in its last six weeks (candidate-late.csv). Invented
 // data, for the demo and examples only. Fixed seed: the files are the same on every run.
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
@@ -24,6 +25,16 @@ function mulberry32(seed) {
   };
 }
 const random = mulberry32(20261201);
+// A second stream for the late-regressing candidate, so the other files stay as they were.
+const lateRandom = mulberry32(20261202);
+const lateNormal = () => {
+  const u = 1 - lateRandom();
+  const v = lateRandom();
+  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
+};
+// From this day on (the last 42 of 240) the late candidate's errors are about 30% larger in
+// squared loss than the baseline's; before, it is the improved candidate.
+const lateFrom = 240 - 42;
 const normal = () => {
   const u = 1 - random();
   const v = random();
@@ -50,7 +61,13 @@ for (let i = 0; i < days + 3; i++) {
 }
 
 const header = 'zone,target_date,horizon,issued,observed,forecast';
-const rows = { baseline: [header], candidate: [header], regressed: [header], peeking: [header] };
+const rows = {
+  baseline: [header],
+  candidate: [header],
+  regressed: [header],
+  peeking: [header],
+  late: [header],
+};
 for (const zone of zones) {
   const actual = [];
   let noise = 0;
@@ -65,6 +82,7 @@ for (const zone of zones) {
     let shared = 0;
     let ownB = 0;
     let ownC = 0;
+    let ownL = 0;
     for (let i = 3; i < days + 3; i++) {
       const scale = 0.8 + 0.35 * horizon;
       shared = 0.6 * shared + normal();
@@ -75,10 +93,13 @@ for (const zone of zones) {
       const candidate = y + scale * (0.93 * shared + 0.45 * ownC);
       const worse = zone.name === 'old-town' || zone.name === 'harbourside' ? 1.1 : 1.0;
       const regressed = y + scale * worse * (shared + 0.55 * ownC);
+      ownL = 0.5 * ownL + lateNormal();
+      const late = i - 3 < lateFrom ? candidate : y + scale * (1.15 * shared + 0.6 * ownL);
       const key = `${zone.name},${date(i)},${horizon},${date(i - horizon)},${y.toFixed(3)}`;
       rows.baseline.push(`${key},${baseline.toFixed(3)}`);
       rows.candidate.push(`${key},${candidate.toFixed(3)}`);
       rows.regressed.push(`${key},${regressed.toFixed(3)}`);
+      rows.late.push(`${key},${late.toFixed(3)}`);
       // A pull request whose backtest peeks: its one-day-ahead forecasts are issued on the
       // target date itself, after the demand was observed, and simply repeat it. No new random
       // draws, so the other files stay the same.
@@ -93,6 +114,7 @@ for (const zone of zones) {
 writeFileSync(path.join(out, 'baseline.csv'), `${rows.baseline.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate.csv'), `${rows.candidate.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate-regressed.csv'), `${rows.regressed.join('\n')}\n`);
+writeFileSync(path.join(out, 'candidate-late.csv'), `${rows.late.join('\n')}\n`);
 writeFileSync(path.join(out, 'candidate-peeking.csv'), `${rows.peeking.join('\n')}\n`);
 console.log(
   `wrote ${rows.baseline.length - 1} rows per model to ${path.relative(process.cwd(), out)}/`,

@@ -4,8 +4,10 @@
  * (worker threads, replications split by index, so the numbers do not depend on the split) and
  * writes the table. Options: --replications N (default 2000), --resamples B (default 9999),
  * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
- * --study all|two-models|candidates (default all; candidates runs validation/candidatesStudy.ts
- * alone, with 999 shared resamples, and replaces its section of the file).
+ * --stability-replications N (default 4000) and --stability-only (the stability study of
+ * validation/stabilityStudy.ts alone, replacing its section of the existing document),
+ * --candidates-only (the several-candidates study of validation/candidatesStudy.ts alone, with
+ * 999 shared resamples and --replications N, default 1000, replacing its section).
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
@@ -19,6 +21,13 @@ import {
 } from './candidatesStudy.js';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
+import {
+  renderStabilityValidation,
+  runStabilityJobs,
+  runStabilityValidation,
+  type StabilityJob,
+  withStabilitySection,
+} from './stabilityValidation.js';
 
 /** Seed of the simulated errors (the bootstrap keeps the gate's default seed). */
 const SEED = 20261201;
@@ -36,13 +45,16 @@ interface CandidatesJob {
   options: Parameters<typeof runCandidatesStudy>[1];
 }
 
-if (!isMainThread) {
-  const data = workerData as Job[] | CandidatesJob;
-  if ('candidates' in data) {
-    parentPort!.postMessage(runCandidatesStudy(data.candidates, data.options));
-  } else {
-    parentPort!.postMessage(data.map((j) => runStudy(j.design, j)));
-  }
+if (!isMainThread && 'candidates' in (workerData as object)) {
+  const job = workerData as CandidatesJob;
+  parentPort!.postMessage(runCandidatesStudy(job.candidates, job.options));
+} else if (!isMainThread) {
+  const jobs = workerData as (Job | StabilityJob)[];
+  parentPort!.postMessage(
+    jobs[0] !== undefined && 'kind' in jobs[0]
+      ? runStabilityJobs(jobs as StabilityJob[])
+      : (jobs as Job[]).map((j) => runStudy(j.design, j)),
+  );
 } else {
   await main();
 }
@@ -58,17 +70,6 @@ async function main(): Promise<void> {
   const resamples = option('resamples', quick ? 999 : 9999);
   const outIndex = args.indexOf('--out');
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
-  const studyIndex = args.indexOf('--study');
-  const study = studyIndex >= 0 ? args[studyIndex + 1]! : 'all';
-  if (study === 'all' || study === 'two-models') {
-    await twoModelStudy(replications, resamples, out);
-  }
-  if (study === 'all' || study === 'candidates') {
-    await candidatesStudy(option('replications', quick ? 200 : 1000), quick ? 499 : 999, out);
-  }
-}
-
-async function twoModelStudy(replications: number, resamples: number, out: string): Promise<void> {
   const designs: SimulationDesign[] = [];
   for (const innovationCorrelation of [0.5, 0.8]) {
     for (const n of [100, 200]) {
@@ -78,6 +79,24 @@ async function twoModelStudy(replications: number, resamples: number, out: strin
     }
   }
   const threads = Math.max(1, Math.min(2, availableParallelism()));
+  // --stability-only: regenerate the stability section of an existing document alone.
+  const stabilityReplications = option('stability-replications', quick ? 400 : 4000);
+  const stability = async (document: string) => {
+    const run = { replications: stabilityReplications, resamples, seed: SEED };
+    const { results, seconds } = await runStabilityValidation(
+      new URL(import.meta.url),
+      threads,
+      run,
+    );
+    const section = renderStabilityValidation(results, { ...run, seconds, threads });
+    writeFileSync(out, withStabilitySection(document, section));
+    process.stderr.write(`wrote the stability section of ${out} in ${seconds.toFixed(0)} s\n`);
+  };
+  if (args.includes('--stability-only')) return stability(readFileSync(out, 'utf8'));
+  const candidateReplications = option('replications', quick ? 200 : 1000);
+  if (args.includes('--candidates-only')) {
+    return candidatesStudy(candidateReplications, quick ? 499 : 999, out);
+  }
   const started = Date.now();
   const results: StudyResult[] = [];
   for (const design of designs) {
@@ -97,17 +116,26 @@ async function twoModelStudy(replications: number, resamples: number, out: strin
     );
   }
   const seconds = (Date.now() - started) / 1000;
-  const kept = existsSync(out) ? candidatesSectionOf(readFileSync(out, 'utf8')) : '';
-  writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }) + kept);
+  writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }));
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
+  await stability(readFileSync(out, 'utf8'));
+  await candidatesStudy(candidateReplications, quick ? 499 : 999, out);
 }
 
-const CANDIDATES_HEADING = '## Several candidates';
-
-/** The several-candidates section of a validation.md (from its heading to the end), or ''. */
-function candidatesSectionOf(text: string): string {
-  const at = text.indexOf(CANDIDATES_HEADING);
-  return at < 0 ? '' : text.slice(at);
+/**
+ * `document` with its several-candidates section (from its heading to the next top-level
+ * heading or section marker, or the end) replaced by `section`, or with `section` appended.
+ */
+function withCandidatesSection(document: string, section: string): string {
+  // Local: module-level constants below the top-level `await main()` are not initialised yet.
+  const CANDIDATES_HEADING = '## Several candidates';
+  const at = document.indexOf(CANDIDATES_HEADING);
+  if (at < 0) return `${document.trimEnd()}\n\n${section}`;
+  const rest = document.slice(at + CANDIDATES_HEADING.length);
+  const next = [rest.indexOf('\n## '), rest.indexOf('\n<!--')].filter((i) => i >= 0);
+  const end =
+    next.length === 0 ? document.length : at + CANDIDATES_HEADING.length + Math.min(...next) + 1;
+  return `${document.slice(0, at)}${section}${end < document.length ? `\n${document.slice(end)}` : ''}`;
 }
 
 /** Runs validation/candidatesStudy.ts and puts its section at the end of `out`, replacing an older one. */
@@ -167,9 +195,7 @@ async function candidatesStudy(
     setAlpha,
   });
   const text = existsSync(out) ? readFileSync(out, 'utf8') : '';
-  const at = text.indexOf(CANDIDATES_HEADING);
-  const before = at < 0 ? text : text.slice(0, at);
-  writeFileSync(out, `${before}${before.endsWith('\n\n') || before === '' ? '' : '\n'}${section}`);
+  writeFileSync(out, withCandidatesSection(text, section));
   process.stderr.write(`wrote the candidates section of ${out} in ${seconds.toFixed(0)} s\n`);
 }
 

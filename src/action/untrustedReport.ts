@@ -25,6 +25,7 @@ import type {
 } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { MAX_PERIODS } from '../stability/periodBuckets.js';
+import type { RecentWindow } from '../stability/recentWindow.js';
 import type { FluctuationSummary, Stability, TimeSpan } from '../stability/stabilityModel.js';
 
 /** Larger report files are refused before parsing. */
@@ -497,6 +498,19 @@ function readSettings(r: Reader): Settings {
     weights: r.field('weights').boolean(),
     adjust: r.field('adjust').oneOf(['holm', 'bh']),
     top: r.field('top').integer(),
+    recent: readRecentWindow(r.field('recent')),
+    fluctuationWindow:
+      r.field('fluctuationWindow').value === undefined
+        ? 0.2
+        : r.field('fluctuationWindow').number(),
+    fluctuationSides:
+      r.field('fluctuationSides').value === undefined
+        ? 'one'
+        : r.field('fluctuationSides').oneOf(['one', 'two']),
+    stabilityGate:
+      r.field('stabilityGate').value === undefined
+        ? 'warn'
+        : r.field('stabilityGate').oneOf(['off', 'warn', 'fail']),
     // Absent from reports written before the backtest checks: their defaults.
     frequency:
       r.field('frequency').value === undefined
@@ -543,6 +557,14 @@ function readCandidateSettings(
     setAlpha: present('setAlpha') ? r.field('setAlpha').number() : 0.1,
     setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'max',
   };
+}
+
+/** settings.recent; absent in reports from before it existed. */
+function readRecentWindow(r: Reader): RecentWindow | null {
+  if (r.value === null || r.value === undefined) return null;
+  return r.field('kind').oneOf(['points', 'share']) === 'points'
+    ? { kind: 'points', points: r.field('points').integer(2) }
+    : { kind: 'share', share: r.field('share').number() };
 }
 
 function readLevels(r: Reader): readonly [number, number] | null {

@@ -3,6 +3,7 @@ import { type Verdict, worstVerdict } from '../decision/verdict.js';
 import { noChecks } from '../integrity/checkPolicy.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
 import type { Settings } from '../settings/settings.js';
+import { stabilityFinding } from '../stability/stabilityFinding.js';
 import type { Stability } from '../stability/stabilityModel.js';
 import type {
   Comparison,
@@ -63,12 +64,16 @@ export function buildReport(parts: ReportParts): Report {
         : `A backtest check warns (${which.join(', ')}): look at the backtest checks before trusting the comparison.`,
     );
   }
-  const verdict = worstVerdict(verdicts);
+  const stability = parts.stability ?? null;
+  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  reasons.push(...finding.reasons);
+  const gateVerdict = worstVerdict(verdicts);
+  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
   return {
     tool: { name: 'skillgate', version: parts.version },
     name: settings.name,
     verdict,
-    headline: headline(verdict, overall, hypothesis),
+    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(' ').trim(),
     policy: {
       policy: settings.policy,
       agreement: settings.agreement,
@@ -88,7 +93,7 @@ export function buildReport(parts: ReportParts): Report {
     seriesSummary: parts.seriesSummary ?? null,
     pathSummary: parts.pathSummary ?? null,
     integrity,
-    stability: parts.stability ?? null,
+    stability,
   };
 }
 

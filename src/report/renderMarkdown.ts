@@ -4,6 +4,7 @@ import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
 import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
+import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Comparison, Report } from './reportModel.js';
 
 const VERDICT_WORDS = { pass: 'PASS', warn: 'WARN', fail: 'FAIL' } as const;
@@ -28,6 +29,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(...renderCandidatesMarkdown(report));
   lines.push(...seriesSection(report));
   lines.push(...pathSection(report));
+  lines.push(...renderStabilitySection(report));
   lines.push(...backtestChecksSection(report));
   const reasons = [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])];
   if (reasons.length > 0) {

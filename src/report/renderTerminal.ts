@@ -2,6 +2,7 @@ import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
 import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
+import { renderStabilityTerminal } from './renderStabilityTerminal.js';
 import type { Comparison, Report } from './reportModel.js';
 
 export interface TerminalOptions {
@@ -57,6 +58,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       .join('  ');
   out.push(paint('2', line(header)));
   for (const r of rows) out.push(line(r));
+  out.push(...renderStabilityTerminal(report));
   out.push(wrap(intervalNote(report), 100), '');
   out.push(...renderCandidatesTerminal(report));
   for (const reason of [...report.reasons, ...(report.comparisons[0]?.reasons ?? [])]) {

@@ -233,6 +233,30 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     help: 'how many series with the largest significant regressions to list',
   },
   {
+    name: 'recent',
+    valueName: 'N|P%',
+    defaultValue: '',
+    help: 'also compare on the most recent window: the last N time points, or the last P% of them (e.g. 15%)',
+  },
+  {
+    name: 'fluctuation-window',
+    valueName: 'MU',
+    defaultValue: '0.2',
+    help: 'window of the fluctuation test (Giacomini–Rossi) as a fraction of the time points, 0.1 to 0.9',
+  },
+  {
+    name: 'fluctuation-sides',
+    defaultValue: 'one',
+    choices: ['one', 'two'],
+    help: 'fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)',
+  },
+  {
+    name: 'stability-gate',
+    defaultValue: 'warn',
+    choices: ['off', 'warn', 'fail'],
+    help: 'what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail',
+  },
+  {
     name: 'frequency',
     valueName: 'auto|STEP',
     defaultValue: 'auto',

@@ -3,6 +3,7 @@ import { InputError } from '../core/inputError.js';
 import { FREQUENCY_SYNTAX, parseFrequency } from '../integrity/frequency.js';
 import type { LossName } from '../losses/lossName.js';
 import { parseColumnMapping } from '../reading/columnMapping.js';
+import { parseRecentWindow } from '../stability/recentWindow.js';
 import { defaultConfidence } from './defaultConfidence.js';
 import { ENGINE_OPTIONS, type OptionSpec } from './options.js';
 import type { BlockLengthRule, LagRule, Settings } from './settings.js';
@@ -131,6 +132,14 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     weights: bool('weights'),
     adjust: value('adjust') as Settings['adjust'],
     top: integer('top', 0, 10_000),
+    recent: parseRecentWindow(value('recent'), label('recent')),
+    fluctuationWindow: number(
+      'fluctuation-window',
+      (x) => x >= 0.1 && x <= 0.9,
+      'a number from 0.1 to 0.9 (the window as a fraction of the time points)',
+    ),
+    fluctuationSides: value('fluctuation-sides') as Settings['fluctuationSides'],
+    stabilityGate: value('stability-gate') as Settings['stabilityGate'],
     frequency: parseFrequencyOption(value('frequency'), label('frequency')),
     folds: optional('folds'),
     embargo: integer('embargo', 0, 1_000_000),

@@ -1,6 +1,7 @@
 import type { CandidateFile } from '../candidates/candidateList.js';
 import type { LossName } from '../losses/lossName.js';
 import type { ColumnMapping } from '../reading/columnMapping.js';
+import type { RecentWindow } from '../stability/recentWindow.js';
 
 /** Which way the gate leans: what a pull request must show to pass. */
 export type Policy = 'no-regression' | 'non-inferiority' | 'superiority';
@@ -61,6 +62,13 @@ export interface Settings {
   readonly weights: boolean;
   readonly adjust: 'holm' | 'bh';
   readonly top: number;
+  /** The most recent window to compare on as well, or null. */
+  readonly recent: RecentWindow | null;
+  /** μ of the fluctuation test, the window as a fraction of the time points. */
+  readonly fluctuationWindow: number;
+  readonly fluctuationSides: 'one' | 'two';
+  /** What a significantly worse recent window or stretch does to the gate. */
+  readonly stabilityGate: 'off' | 'warn' | 'fail';
   /** Step of the time grid for the backtest checks: 'auto' or e.g. '1h', '1mo', '1'. */
   readonly frequency: string;
   /** Fold layout file for the fold checks, or null. */

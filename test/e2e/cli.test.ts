@@ -54,6 +54,42 @@ describe('skillgate compare on the demo backtest', () => {
     expect(report.comparisons[0].dieboldMariano.pValue).toBeLessThan(0.05);
   });
 
+  it('points out the candidate that gets worse late, and warns without failing', () => {
+    const json = path.join(work, 'late.json');
+    const md = path.join(work, 'late.md');
+    const r = runCli(
+      demoArgs('candidate-late.csv', ['--recent', '15%', '--json', json, '--markdown', md]),
+    );
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const report = JSON.parse(readFileSync(json, 'utf8'));
+    expect(validate(report), JSON.stringify(validate.errors)).toBe(true);
+    expect(report.verdict).toBe('warn');
+    expect(report.comparisons[0].verdict).toBe('pass');
+    expect(report.stability.recent).toMatchObject({
+      n: 36,
+      firstTimestamp: '2026-09-24',
+      lastTimestamp: '2026-10-29',
+      verdict: 'fail',
+    });
+    expect(report.headline).toMatch(
+      /worse in the most recent 5 weeks \(2026-09-24 to 2026-10-29\): \+\d+(\.\d+)?% mean loss \(\d+% interval \+[\d.]+% to \+[\d.]+%\)/,
+    );
+    expect(report.headline).toMatch(/it does not fail it \(stability-gate warn\)/);
+    expect(report.stability.periods).toHaveLength(35);
+    expect(readFileSync(md, 'utf8')).toMatch(/\| most recent \| 2026-09-24 to 2026-10-29 \| 36 \|/);
+    const failing = runCli(
+      demoArgs('candidate-late.csv', ['--recent', '15%', '--stability-gate', 'fail']),
+    );
+    expect(failing.status).toBe(1);
+  });
+
+  it('refuses a malformed --recent with exit 2 and names the option', () => {
+    const r = runCli(demoArgs('candidate.csv', ['--recent', '150%']));
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/--recent must be a number of time points .* \(value "?150%"?\)/);
+  });
+
   it('gives byte-identical JSON for the same seed and another interval for another seed', () => {
     // The report records its own --json path among the settings, so all runs write one file.
     const out = path.join(work, 'seeded.json');

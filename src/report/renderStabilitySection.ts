@@ -1,0 +1,69 @@
+import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
+import type { Stability } from '../stability/stabilityModel.js';
+import { escapeMarkdown as esc } from './escapeMarkdown.js';
+import { relativeChangeText } from './relativeChangeText.js';
+import type { Comparison, Report } from './reportModel.js';
+
+/**
+ * The comment's "Over time" section from `report.stability`: the recent window beside the
+ * overall comparison, the fluctuation test in one sentence, and the mean losses by period in a
+ * collapsed table. Every timestamp label is escaped (it came from an input file). Empty when the
+ * report has no stability part.
+ */
+export function renderStabilitySection(report: Report): string[] {
+  const stability = report.stability;
+  const overall = report.comparisons[0];
+  if (stability === null || overall === undefined) return [];
+  const out = ['**Over time**', ''];
+  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), '');
+  out.push(fluctuationSentence(stability, report), '');
+  if (stability.periods.length > 0) out.push(...periodTable(stability), '');
+  return out;
+}
+
+function windowTable(overall: Comparison, recent: Comparison): string[] {
+  const level = recent.relativeChange?.level;
+  const head =
+    level === undefined ? 'relative' : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name: string, c: Comparison) =>
+    `| ${name} | ${esc(c.firstTimestamp ?? 'n/a')} to ${esc(c.lastTimestamp ?? 'n/a')} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
+  return [
+    `| window | from – to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
+    '|---|---|---:|---:|---:|---:|---:|---:|---|',
+    row('whole backtest', overall),
+    row('most recent', recent),
+  ];
+}
+
+function fluctuationSentence(stability: Stability, report: Report): string {
+  const f = stability.fluctuation;
+  if (f === null) {
+    return 'Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and α between 0.01 and 0.10).';
+  }
+  const sides = report.settings.fluctuationSides === 'one' ? 'one-sided' : 'two-sided';
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold–Mariano statistic over rolling windows of ${f.windowSize} time points (μ = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at α = ${report.policy.alpha}, over ${esc(f.peak.start)} to ${esc(f.peak.end)}.`;
+  if (f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.map((s) => `${esc(s.start)} to ${esc(s.end)}`).join(', ');
+    return `${setup} The candidate is significantly worse over ${spans}.`;
+  }
+  return f.rejected
+    ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.`
+    : `${setup} No stretch where the candidate is significantly worse.`;
+}
+
+function periodTable(stability: Stability): string[] {
+  const out = [
+    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
+    '',
+    '| period | time points | baseline loss | candidate loss | relative |',
+    '|---|---:|---:|---:|---:|',
+  ];
+  for (const p of stability.periods) {
+    const span = p.start === p.end ? esc(p.start) : `${esc(p.start)} to ${esc(p.end)}`;
+    out.push(
+      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`,
+    );
+  }
+  out.push('', '</details>');
+  return out;
+}
