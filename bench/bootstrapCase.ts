@@ -3,16 +3,24 @@
  *   node bootstrapCase.mjs <implementation> <series.f64> <blockLength> <resamples> <seed> [workerUrl]
  * implementation: 'single' (stationaryBootstrap in this thread), 'threads' (the same with the
  * worker-thread runner, worker start included in the time), 'observations' (a plain
- * per-observation resampler: one coin and possibly one start per observation). Prints one JSON
+ * per-observation resampler: one coin and possibly one start per observation), 'previous' (the
+ * block draws as they were before the inlined kernel: the same block algorithm through the
+ * RandomSource interface, over pure-rand's xoroshiro128+ with one 32-bit word per 64-bit step, as
+ * a baseline in the same run). Prints one JSON
  * line: wall milliseconds of the bootstrap call alone (after a small warm-up call), CPU
  * milliseconds, and a checksum.
  * implementation 'block-length' prints the automatic block length of the series instead.
  */
 import { readFileSync } from 'node:fs';
+import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
 import { createResamplePool } from '../src/parallel/resamplePool.js';
-import { createRandomSource } from '../src/random/randomSource.js';
+import { createGeometricSampler } from '../src/random/geometricSampler.js';
+import { createRandomSource, type RandomSource } from '../src/random/randomSource.js';
+import { splitMix64Words } from '../src/random/splitMix64.js';
 import { uniformIndex } from '../src/random/uniformIndex.js';
 import { automaticBlockLength } from '../src/statistics/bootstrap/automaticBlockLength.js';
+import { centredPrefixSums } from '../src/statistics/bootstrap/centredPrefixSums.js';
+import { resampleDeviationsGeneric } from '../src/statistics/bootstrap/resampleJob.js';
 import { stationaryBootstrap } from '../src/statistics/bootstrap/stationaryBootstrap.js';
 
 const [implementation, file, blockText, resamplesText, seedText, workerUrl] = process.argv.slice(2);
@@ -44,6 +52,38 @@ function perObservation(): number {
   return Math.sqrt(sumOfSquares / resamples);
 }
 
+/** The random source as it was: a closure over pure-rand's generator, low 32 bits per step. */
+function previousSource(): RandomSource {
+  const [a, b, c, e] = splitMix64Words(seed, 2);
+  const generator = xoroshiro128plusFromState([a!, b!, c!, e!]);
+  return {
+    nextUint32: () => generator.next() >>> 0,
+    nextDouble: () => {
+      const x = generator.next() >>> 5;
+      const y = generator.next() >>> 6;
+      return (x * 67108864 + y) / 9007199254740992;
+    },
+  };
+}
+
+/** The B resample deviations through the interface path, with the previous source. */
+function previous(): number {
+  let mean = 0;
+  for (let t = 0; t < d.length; t++) mean += d[t]!;
+  mean /= d.length;
+  const prefix = centredPrefixSums(d, mean);
+  const deviations = resampleDeviationsGeneric(
+    prefix,
+    d.length,
+    createGeometricSampler(expectedBlockLength),
+    previousSource(),
+    resamples,
+  );
+  let sumOfSquares = 0;
+  for (const x of deviations) sumOfSquares += x * x;
+  return Math.sqrt(sumOfSquares / resamples);
+}
+
 if (implementation === 'block-length') {
   process.stdout.write(`${JSON.stringify({ blockLength: automaticBlockLength(d).blockLength })}\n`);
   process.exit(0);
@@ -58,6 +98,8 @@ const t0 = performance.now();
 let checksum: number;
 if (implementation === 'observations') {
   checksum = perObservation();
+} else if (implementation === 'previous') {
+  checksum = previous();
 } else if (implementation === 'threads') {
   const pool = createResamplePool(workerUrl === undefined ? {} : { workerUrl: new URL(workerUrl) });
   checksum = stationaryBootstrap(d, options, createRandomSource, pool.runner).standardError!;

@@ -1,5 +1,6 @@
 // The benchmark behind docs/performance.md: `npm run bench` (add `-- --large` for the 10M-row
-// case, `-- --runs N` to change the repetitions). Inputs are generated deterministically under
+// case, `-- --runs N` to change the repetitions, `-- --sweep-only` for the block-length sweep
+// alone). Inputs are generated deterministically under
 // bench/.work/ (gitignored) and reused; every case runs several times in child processes and is
 // reported as a median, with ratios against references measured in the same run, so a loaded
 // machine shifts both sides alike. Nothing here is a test: nothing fails on a slow machine.
@@ -10,6 +11,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
+import { blockLengthSweep } from './blockLengthSweep.mjs';
 import { candidatesSection } from './candidatesCase.mjs';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
 
@@ -20,6 +22,7 @@ const large = args.includes('--large');
 const runsIndex = args.indexOf('--runs');
 const RUNS = runsIndex >= 0 ? Number(args[runsIndex + 1]) : 5;
 const SCALING_RUNS = Math.max(3, Math.floor(RUNS / 2) + 1);
+const sweepOnly = args.includes('--sweep-only');
 mkdirSync(work, { recursive: true });
 
 const median = (xs) => {
@@ -107,6 +110,28 @@ log(
   `peak memory from ${TIME === null ? 'none available (install GNU time)' : '/usr/bin/time (maximum resident set)'}`,
 );
 log();
+
+const hasNumpyForSweep =
+  spawnSync('/usr/bin/python3', ['-c', 'import numpy'], { encoding: 'utf8' }).status === 0;
+if (sweepOnly) {
+  log('3. stationary bootstrap by block length');
+  const sweep = blockLengthSweep({
+    work,
+    root,
+    bootstrapCase,
+    runs: SCALING_RUNS,
+    log,
+    hasNumpy: hasNumpyForSweep,
+  });
+  const end = machine();
+  log();
+  log(`load average at end: ${end.load}`);
+  writeFileSync(
+    path.join(work, 'sweep.json'),
+    `${JSON.stringify({ date: new Date().toISOString(), machine: { ...before, loadAtEnd: end.load }, sweep }, null, 2)}\n`,
+  );
+  process.exit(0);
+}
 
 // ── 1. reading + aligning through the CLI, against a bare split ────────────────────────────────
 async function panelFiles(series, times) {
@@ -331,7 +356,17 @@ for (const [n, resamples] of [
   );
 }
 log();
-log('3. several candidates');
+log('3. stationary bootstrap by block length');
+const sweep = blockLengthSweep({
+  work,
+  root,
+  bootstrapCase,
+  runs: SCALING_RUNS,
+  log,
+  hasNumpy: hasNumpyForSweep,
+});
+log();
+log('4. several candidates');
 const candidates = await candidatesSection({ cli, work, runs: SCALING_RUNS, log });
 const after = machine();
 log();
@@ -356,6 +391,7 @@ const results = {
     bootstrapSlope,
     threshold,
   },
+  sweep,
   candidates,
 };
 writeFileSync(path.join(work, 'results.json'), `${JSON.stringify(results, null, 2)}\n`);

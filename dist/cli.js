@@ -14127,7 +14127,7 @@ function dieboldMarianoMarginSet(input) {
   const fieller = (v) => fiellerSet({ meanD, meanB, varDD: v.dd / n, varDB: v.db / n, varBB: v.bb / n, critical });
   let covariance;
   let set;
-  if (estimator === "ewc") {
+  if (estimator === "ewc" || estimator === "ewc-ar1") {
     const nu = input.degreesOfFreedom;
     if (nu === null) return null;
     covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
@@ -14362,15 +14362,50 @@ function createRandomStreams(seed, first = 0) {
     }
   };
 }
-function sourceOf(generator) {
-  return {
-    nextUint32: () => generator.next() >>> 0,
-    nextDouble: () => {
-      const a = generator.next() >>> 5;
-      const b = generator.next() >>> 6;
-      return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
+var TWO_POW_32 = 4294967296;
+var Xoroshiro128PlusSource = class {
+  s01;
+  s00;
+  s11;
+  s10;
+  pending = 0;
+  hasPending = false;
+  constructor(state) {
+    this.s01 = state[0] | 0;
+    this.s00 = state[1] | 0;
+    this.s11 = state[2] | 0;
+    this.s10 = state[3] | 0;
+  }
+  nextUint32() {
+    if (this.hasPending) {
+      this.hasPending = false;
+      return this.pending >>> 0;
     }
-  };
+    const s00 = this.s00;
+    const s01 = this.s01;
+    const s10 = this.s10;
+    const s11 = this.s11;
+    const low = (s00 >>> 0) + (s10 >>> 0);
+    const carry = low >= TWO_POW_32 ? 1 : 0;
+    this.pending = low | 0;
+    this.hasPending = true;
+    const high = s01 + s11 + carry >>> 0;
+    const a0 = s10 ^ s00;
+    const a1 = s11 ^ s01;
+    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+    this.s10 = a1 << 5 ^ a0 >>> 27;
+    this.s11 = a0 << 5 ^ a1 >>> 27;
+    return high;
+  }
+  nextDouble() {
+    const a = this.nextUint32() >>> 5;
+    const b = this.nextUint32() >>> 6;
+    return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
+  }
+};
+function sourceOf(generator) {
+  return new Xoroshiro128PlusSource(generator.getState());
 }
 
 // src/statistics/bootstrap/flatTopWindow.ts
@@ -14512,7 +14547,7 @@ function createGeometricSampler(mean2) {
   }
   if (mean2 === 1) {
     const table = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
-    return { mean: mean2, truncation: 1, table, sample: () => 1 };
+    return { mean: mean2, truncation: 1, table, inline: null, sample: () => 1 };
   }
   const p = 1 / mean2;
   const q = 1 - p;
@@ -14539,6 +14574,7 @@ function createGeometricSampler(mean2) {
     mean: mean2,
     truncation,
     table: { threshold, alias },
+    inline: { shift, coinMask, edge, edgeFraction, alias, truncation },
     sample(random, cap) {
       let total = 0;
       for (; ; ) {
@@ -14595,20 +14631,20 @@ function sampleStandardDeviation(values) {
 }
 
 // src/random/uniformIndex.ts
-var TWO_POW_32 = 4294967296;
+var TWO_POW_322 = 4294967296;
 var LEMIRE_LIMIT = 2097152;
 function uniformIndex(random, n) {
   if (n <= 1) return 0;
   if (n <= LEMIRE_LIMIT) {
     let m = random.nextUint32() * n;
-    let high = Math.floor(m / TWO_POW_32);
-    let low = m - high * TWO_POW_32;
+    let high = Math.floor(m / TWO_POW_322);
+    let low = m - high * TWO_POW_322;
     if (low < n) {
-      const threshold = TWO_POW_32 % n;
+      const threshold = TWO_POW_322 % n;
       while (low < threshold) {
         m = random.nextUint32() * n;
-        high = Math.floor(m / TWO_POW_32);
-        low = m - high * TWO_POW_32;
+        high = Math.floor(m / TWO_POW_322);
+        low = m - high * TWO_POW_322;
       }
     }
     return high;
@@ -14639,6 +14675,319 @@ function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlock
   return into;
 }
 
+// src/statistics/bootstrap/resampleDeviationsInline.ts
+var TWO_POW_323 = 4294967296;
+var TWO_POW_MINUS_32 = 1 / TWO_POW_323;
+var LEMIRE_LIMIT2 = 2097152;
+function resampleDeviationsInline(prefix, n, sampler, source, count) {
+  if (sampler.inline === null) return unitBlocks(prefix, n, source, count);
+  return geometricBlocks(prefix, n, sampler, source, count);
+}
+function unitBlocks(prefix, n, source, count) {
+  const P32 = 4294967296;
+  const INV32 = 1 / 4294967296;
+  const out = new Float64Array(count);
+  const lemire = n <= LEMIRE_LIMIT2;
+  const threshold = P32 % n;
+  const maskShift = Math.clz32(n - 1);
+  let s00 = source.s00;
+  let s01 = source.s01;
+  let s10 = source.s10;
+  let s11 = source.s11;
+  let pend = source.pending;
+  let has = source.hasPending;
+  const step = new Float64Array(n);
+  for (let s = 0; s < n; s++) step[s] = prefix[s + 1] - prefix[s];
+  for (let r = 0; r < count; r++) {
+    let filled = 0;
+    let sum = 0;
+    while (filled < n) {
+      if (lemire && !has) {
+        const stop = n - 1;
+        let rejected = false;
+        while (filled < stop) {
+          const lo2 = (s00 >>> 0) + (s10 >>> 0);
+          const c = lo2 >= P32 ? 1 : 0;
+          const low = lo2 | 0;
+          const high = s01 + s11 + c >>> 0;
+          const a0 = s10 ^ s00;
+          const a1 = s11 ^ s01;
+          const t00 = s00;
+          s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+          s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+          s10 = a1 << 5 ^ a0 >>> 27;
+          s11 = a0 << 5 ^ a1 >>> 27;
+          const m1 = high * n;
+          const first = Math.floor(m1 * INV32);
+          if (m1 - first * P32 < threshold) {
+            pend = low;
+            has = true;
+            rejected = true;
+            break;
+          }
+          sum += step[first];
+          filled++;
+          const m2 = (low >>> 0) * n;
+          const second = Math.floor(m2 * INV32);
+          if (m2 - second * P32 < threshold) {
+            rejected = true;
+            break;
+          }
+          sum += step[second];
+          filled++;
+        }
+        if (rejected) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          sum += step[rejectedStart(source, n, threshold)];
+          filled++;
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+          continue;
+        }
+        if (filled >= n) break;
+      }
+      let x;
+      if (has) {
+        x = pend >>> 0;
+        has = false;
+      } else {
+        const lo2 = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo2 >= P32 ? 1 : 0;
+        pend = lo2 | 0;
+        has = true;
+        x = s01 + s11 + c >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+      let start;
+      if (lemire) {
+        const m = x * n;
+        start = Math.floor(m * INV32);
+        if (m - start * P32 < threshold) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = rejectedStart(source, n, threshold);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      } else {
+        start = maskShift === 0 ? x : x >>> maskShift;
+        if (start >= n) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = bitmaskStart(source, n, maskShift);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      }
+      sum += step[start];
+      filled++;
+    }
+    out[r] = sum / n;
+  }
+  source.s00 = s00;
+  source.s01 = s01;
+  source.s10 = s10;
+  source.s11 = s11;
+  source.pending = pend;
+  source.hasPending = has;
+  return out;
+}
+function geometricBlocks(prefix, n, sampler, source, count) {
+  const P32 = 4294967296;
+  const INV32 = 1 / 4294967296;
+  const out = new Float64Array(count);
+  const inline = sampler.inline;
+  const lemire = n <= LEMIRE_LIMIT2;
+  const threshold = P32 % n;
+  const maskShift = Math.clz32(n - 1);
+  let s00 = source.s00;
+  let s01 = source.s01;
+  let s10 = source.s10;
+  let s11 = source.s11;
+  let pend = source.pending;
+  let has = source.hasPending;
+  const { shift, coinMask, edge, alias, truncation } = inline;
+  const starts = new Int32Array(n);
+  const lengths = new Int32Array(n);
+  for (let r = 0; r < count; r++) {
+    let filled = 0;
+    let blocks = 0;
+    while (filled < n) {
+      let x;
+      if (has) {
+        x = pend >>> 0;
+        has = false;
+      } else {
+        const lo2 = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo2 >= P32 ? 1 : 0;
+        pend = lo2 | 0;
+        has = true;
+        x = s01 + s11 + c >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+      let start;
+      if (lemire) {
+        const m = x * n;
+        start = Math.floor(m * INV32);
+        if (m - start * P32 < threshold) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = rejectedStart(source, n, threshold);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      } else {
+        start = maskShift === 0 ? x : x >>> maskShift;
+        if (start >= n) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = bitmaskStart(source, n, maskShift);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      }
+      let y;
+      if (has) {
+        y = pend >>> 0;
+        has = false;
+      } else {
+        const lo2 = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo2 >= P32 ? 1 : 0;
+        pend = lo2 | 0;
+        has = true;
+        y = s01 + s11 + c >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+      const column = y >>> shift;
+      const coin = y & coinMask;
+      const cut = edge[column];
+      let length;
+      if (coin !== cut) {
+        const outcome = coin < cut ? column : alias[column];
+        length = outcome !== truncation ? outcome + 1 : -1;
+      } else {
+        length = -1;
+      }
+      const left = n - filled;
+      if (length < 0) {
+        source.s00 = s00;
+        source.s01 = s01;
+        source.s10 = s10;
+        source.s11 = s11;
+        source.pending = pend;
+        source.hasPending = has;
+        length = finishLength(source, sampler, column, coin, cut, left);
+        s00 = source.s00;
+        s01 = source.s01;
+        s10 = source.s10;
+        s11 = source.s11;
+        pend = source.pending;
+        has = source.hasPending;
+      } else if (length > left) {
+        length = left;
+      }
+      starts[blocks] = start;
+      lengths[blocks] = length;
+      blocks++;
+      filled += length;
+    }
+    let sum = 0;
+    for (let i = 0; i < blocks; i++) {
+      const s = starts[i];
+      sum += prefix[s + lengths[i]] - prefix[s];
+    }
+    out[r] = sum / n;
+  }
+  source.s00 = s00;
+  source.s01 = s01;
+  source.s10 = s10;
+  source.s11 = s11;
+  source.pending = pend;
+  source.hasPending = has;
+  return out;
+}
+function rejectedStart(source, n, threshold) {
+  for (; ; ) {
+    const m = source.nextUint32() * n;
+    const high = Math.floor(m * TWO_POW_MINUS_32);
+    if (m - high * TWO_POW_323 >= threshold) return high;
+  }
+}
+function bitmaskStart(source, n, maskShift) {
+  for (; ; ) {
+    const x = source.nextUint32();
+    const candidate = maskShift === 0 ? x : x >>> maskShift;
+    if (candidate < n) return candidate;
+  }
+}
+function finishLength(source, sampler, column, coin, cut, cap) {
+  const { edgeFraction, alias, truncation } = sampler.inline;
+  const keep = coin !== cut ? coin < cut : source.nextDouble() < edgeFraction[column];
+  const outcome = keep ? column : alias[column];
+  if (outcome !== truncation) return Math.min(outcome + 1, cap);
+  if (truncation >= cap) return cap;
+  return truncation + sampler.sample(source, cap - truncation);
+}
+
 // src/statistics/bootstrap/resampleJob.ts
 var RESAMPLES_PER_STREAM = 256;
 function streamCount(resamples) {
@@ -14660,6 +15009,12 @@ function runResampleJob(job, random = createRandomSource) {
   return out;
 }
 function resampleDeviationsOfStream(prefix, n, sampler, random, count) {
+  if (random instanceof Xoroshiro128PlusSource && n >= 2) {
+    return resampleDeviationsInline(prefix, n, sampler, random, count);
+  }
+  return resampleDeviationsGeneric(prefix, n, sampler, random, count);
+}
+function resampleDeviationsGeneric(prefix, n, sampler, random, count) {
   const out = new Float64Array(count);
   const blocks = allocateStationaryBlocks(n);
   for (let b = 0; b < count; b++) {
@@ -14904,6 +15259,32 @@ function differenceInterval(difference, deviations, level) {
   return { ...interval, method: "basic" };
 }
 
+// src/statistics/ewcCosineTermsRule.ts
+var CALIBRATION_AUTOCORRELATION = 0.7;
+var AUTOCORRELATION_FLOOR = 0.05;
+var AUTOCORRELATION_CEILING = 0.97;
+function ar1SpectralCurvature(rho) {
+  return 2 * rho / (1 - rho) ** 2;
+}
+function ar1PluginCosineTerms(x) {
+  const n = x.length;
+  if (n < 4) return { terms: ewcDegreesOfFreedom(n), autocorrelation: 0, pluginAutocorrelation: 0 };
+  const [gamma0, gamma1] = autocovariances(x, 1);
+  const rho = gamma0 > 0 ? gamma1 / gamma0 : 0;
+  const corrected = rho + (1 + 3 * rho) / n;
+  const plugin = Math.min(Math.max(corrected, AUTOCORRELATION_FLOOR), AUTOCORRELATION_CEILING);
+  return {
+    terms: cosineTermsForAutocorrelation(n, plugin),
+    autocorrelation: rho,
+    pluginAutocorrelation: plugin
+  };
+}
+function cosineTermsForAutocorrelation(n, rho) {
+  const ratio = ar1SpectralCurvature(CALIBRATION_AUTOCORRELATION) / ar1SpectralCurvature(rho);
+  const raw = Math.round(0.4 * n ** (2 / 3) * Math.cbrt(ratio));
+  return Math.min(Math.max(2, raw), Math.max(2, Math.floor(n / 2)));
+}
+
 // src/statistics/dieboldMariano.ts
 var MINIMUM_LENGTH = 3;
 function dieboldMariano(d, options) {
@@ -14955,8 +15336,16 @@ function dieboldMariano(d, options) {
   let longRunVariance;
   let estimator = requestedEstimator;
   let lagChoice = null;
-  if (requestedEstimator === "ewc") {
-    const ewc = ewcLongRunVariance(d);
+  if (requestedEstimator === "ewc" || requestedEstimator === "ewc-ar1") {
+    let terms;
+    if (requestedEstimator === "ewc-ar1") {
+      const choice = ar1PluginCosineTerms(options.lagSeries ?? d);
+      terms = choice.terms;
+      base.notes.push(
+        `${terms} cosine terms chosen from the first-order autocorrelation ${choice.autocorrelation.toFixed(3)} (AR(1) plug-in, Lazarus et al. 2018).`
+      );
+    }
+    const ewc = ewcLongRunVariance(d, terms);
     longRunVariance = ewc.value;
     base.degreesOfFreedom = ewc.degreesOfFreedom;
   } else {
@@ -14995,7 +15384,7 @@ function dieboldMariano(d, options) {
     return base;
   }
   base.statistic = statistic;
-  if (estimator === "ewc") {
+  if (estimator === "ewc" || estimator === "ewc-ar1") {
     const nu = base.degreesOfFreedom;
     base.pValue = studentTUpperTail(statistic, nu);
     base.pValueTwoSided = studentTTwoSided(statistic, nu);
@@ -18290,9 +18679,9 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "variance",
-    defaultValue: "ewc",
-    choices: ["ewc", "bartlett", "uniform"],
-    help: "long-run variance for Diebold\u2013Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey\u2013West), uniform"
+    defaultValue: "ewc-ar1",
+    choices: ["ewc-ar1", "ewc", "bartlett", "uniform"],
+    help: "long-run variance for Diebold\u2013Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4\xB7n^(2/3) terms), bartlett (Newey\u2013West), uniform"
   },
   {
     name: "lag",

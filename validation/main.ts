@@ -7,7 +7,8 @@
  * --stability-replications N (default 4000) and --stability-only (the stability study of
  * validation/stabilityStudy.ts alone, replacing its section of the existing document),
  * --candidates-only (the several-candidates study of validation/candidatesStudy.ts alone, with
- * 999 shared resamples and --replications N, default 1000, replacing its section).
+ * 999 shared resamples and --replications N, default 1000, replacing its section),
+ * --section cosine-terms (run only that study and replace its section in the existing FILE).
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
@@ -19,6 +20,13 @@ import {
   renderCandidatesSection,
   runCandidatesStudy,
 } from './candidatesStudy.js';
+import {
+  COSINE_TERMS_SECTION_END,
+  COSINE_TERMS_SECTION_START,
+  cosineTermsDesigns,
+  renderCosineTermsSection,
+} from './cosineTermsSection.js';
+import { type CosineTermsStudyResult, runCosineTermsStudy } from './cosineTermsStudy.js';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
 import {
@@ -33,6 +41,7 @@ import {
 const SEED = 20261201;
 
 interface Job {
+  study?: 'size-power' | 'cosine-terms';
   design: SimulationDesign;
   firstReplication: number;
   replications: number;
@@ -53,7 +62,9 @@ if (!isMainThread && 'candidates' in (workerData as object)) {
   parentPort!.postMessage(
     jobs[0] !== undefined && 'kind' in jobs[0]
       ? runStabilityJobs(jobs as StabilityJob[])
-      : (jobs as Job[]).map((j) => runStudy(j.design, j)),
+      : (jobs as Job[]).map((j) =>
+          j.study === 'cosine-terms' ? runCosineTermsStudy(j.design, j) : runStudy(j.design, j),
+        ),
   );
 } else {
   await main();
@@ -70,6 +81,17 @@ async function main(): Promise<void> {
   const resamples = option('resamples', quick ? 999 : 9999);
   const outIndex = args.indexOf('--out');
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
+  const threads = Math.max(1, Math.min(2, availableParallelism()));
+  const sectionIndex = args.indexOf('--section');
+  if (sectionIndex >= 0) {
+    if (args[sectionIndex + 1] !== 'cosine-terms') {
+      throw new Error(`unknown section ${args[sectionIndex + 1]}; known: cosine-terms`);
+    }
+    const section = await cosineTermsStudy(replications, resamples, threads);
+    writeFileSync(out, spliceSection(readFileSync(out, 'utf8'), section));
+    process.stderr.write(`replaced the cosine-terms section of ${out}\n`);
+    return;
+  }
   const designs: SimulationDesign[] = [];
   for (const innovationCorrelation of [0.5, 0.8]) {
     for (const n of [100, 200]) {
@@ -78,7 +100,6 @@ async function main(): Promise<void> {
       }
     }
   }
-  const threads = Math.max(1, Math.min(2, availableParallelism()));
   // --stability-only: regenerate the stability section of an existing document alone.
   const stabilityReplications = option('stability-replications', quick ? 400 : 4000);
   const stability = async (document: string) => {
@@ -116,7 +137,11 @@ async function main(): Promise<void> {
     );
   }
   const seconds = (Date.now() - started) / 1000;
-  writeFileSync(out, renderTable(results, { replications, resamples, seconds, threads }));
+  const section = await cosineTermsStudy(replications, resamples, threads);
+  writeFileSync(
+    out,
+    `${renderTable(results, { replications, resamples, seconds, threads })}${section}`,
+  );
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
   await stability(readFileSync(out, 'utf8'));
   await candidatesStudy(candidateReplications, quick ? 499 : 999, out);
@@ -199,6 +224,72 @@ async function candidatesStudy(
   process.stderr.write(`wrote the candidates section of ${out} in ${seconds.toFixed(0)} s\n`);
 }
 
+/** The cosine-terms study on `threads` worker threads, rendered as its section. */
+async function cosineTermsStudy(
+  replications: number,
+  resamples: number,
+  threads: number,
+): Promise<string> {
+  const started = Date.now();
+  const results: CosineTermsStudyResult[] = [];
+  for (const design of cosineTermsDesigns()) {
+    const per = Math.ceil(replications / threads);
+    const parts = (await Promise.all(
+      Array.from({ length: threads }, (_, k) => {
+        const first = k * per;
+        const count = Math.max(0, Math.min(per, replications - first));
+        return runInWorker([
+          {
+            study: 'cosine-terms',
+            design,
+            firstReplication: first,
+            replications: count,
+            resamples,
+            seed: SEED,
+          },
+        ]);
+      }),
+    )) as unknown as CosineTermsStudyResult[][];
+    const flat = parts.flat();
+    const total = flat.reduce((s, p) => s + p.replications, 0);
+    const weighted = (pick: (p: CosineTermsStudyResult) => number) =>
+      flat.reduce((s, p) => s + pick(p) * p.replications, 0) / total;
+    results.push({
+      design,
+      replications: total,
+      rejectionRate: Object.fromEntries(
+        Object.keys(flat[0]!.rejectionRate).map((k) => [
+          k,
+          weighted((p) => p.rejectionRate[k as keyof typeof p.rejectionRate]),
+        ]),
+      ) as CosineTermsStudyResult['rejectionRate'],
+      meanTerms: {
+        fixed: weighted((p) => p.meanTerms.fixed),
+        ar1: weighted((p) => p.meanTerms.ar1),
+      },
+    });
+    process.stderr.write(
+      `cosine terms: n=${design.n} φ=${design.phi} ${JSON.stringify(results.at(-1)!.rejectionRate)}\n`,
+    );
+  }
+  const seconds = (Date.now() - started) / 1000;
+  return renderCosineTermsSection(results, {
+    replications,
+    resamples,
+    seed: SEED,
+    seconds,
+    note: `${threads} worker threads, under nice -n 10 on a machine shared with other work`,
+  });
+}
+
+/** Replaces the cosine-terms section of a validation document (appends it when absent). */
+function spliceSection(document: string, section: string): string {
+  const start = document.indexOf(COSINE_TERMS_SECTION_START);
+  const end = document.indexOf(COSINE_TERMS_SECTION_END);
+  if (start < 0 || end < 0) return `${document.trimEnd()}\n\n${section}`;
+  return `${document.slice(0, start)}${section}${document.slice(end + COSINE_TERMS_SECTION_END.length + 1)}`;
+}
+
 function runInWorker(jobs: Job[]): Promise<StudyResult[]> {
   return new Promise((resolve, reject) => {
     const worker = new Worker(new URL(import.meta.url), { workerData: jobs });
@@ -239,7 +330,7 @@ function renderTable(
     '',
     'Generated by `npm run validate` (validation/main.ts); do not edit by hand.',
     '',
-    `Design (DESIGN.md, "Why ewc is the default"): both models' errors are AR(1) with φ = 0.6,`,
+    `Design (docs/design.md, "Why ewc is the default"): both models' errors are AR(1) with φ = 0.6,`,
     'innovations correlated ρ between the models, squared loss, one series, one-sided α = 0.05,',
     'H0 "candidate not worse" (margin 0). Size: equal accuracy. Power: candidate error scale 1.2.',
     `${run.replications} replications per design (replication r uses random stream r of seed ${SEED}),`,

@@ -15,11 +15,21 @@ export interface SimulationDesign {
   readonly phi: number;
   readonly innovationCorrelation: number;
   readonly candidateScale: number;
+  /**
+   * 'normal' (default) or 't3': Student t with 3 degrees of freedom, z/√(χ²₃/3) with χ²₃ the sum
+   * of three squared normals, scaled by 1/√3 to unit variance (heavy tails: E[e⁴] is infinite,
+   * so the squared-loss differential has no finite variance).
+   */
+  readonly innovations?: 'normal' | 't3';
+  /** When true, the innovation standard deviation of both models doubles from t = ⌊n/2⌋ on. */
+  readonly varianceBreak?: boolean;
 }
 
 export function simulateLossSeries(design: SimulationDesign, random: RandomSource): LossSeries {
   const { n, phi, innovationCorrelation: rho, candidateScale } = design;
-  const normal = normalSampler(random);
+  const gaussian = normalSampler(random);
+  const normal = design.innovations === 't3' ? studentT3Sampler(gaussian) : gaussian;
+  const breakAt = design.varianceBreak === true ? Math.floor(n / 2) : n;
   const stationarySd = 1 / Math.sqrt(1 - phi * phi);
   const mix = Math.sqrt(1 - rho * rho);
   let eb = stationarySd * normal();
@@ -28,8 +38,9 @@ export function simulateLossSeries(design: SimulationDesign, random: RandomSourc
   const candidate = new Float64Array(n);
   for (let t = 0; t < n; t++) {
     if (t > 0) {
-      const zb = normal();
-      const zc = rho * zb + mix * normal();
+      const scale = t >= breakAt ? 2 : 1;
+      const zb = scale * normal();
+      const zc = rho * zb + scale * mix * normal();
       eb = phi * eb + zb;
       ec = phi * ec + zc;
     }
@@ -42,7 +53,10 @@ export function simulateLossSeries(design: SimulationDesign, random: RandomSourc
   return { time, baseline, candidate, rows: new Int32Array(n).fill(1), rowCount: n, maxHorizon: 1 };
 }
 
-/** E[d_t] = (s² − 1)·σ²/(1 − φ²) for squared loss: the true mean the intervals should cover. */
+/**
+ * E[d_t] = (s² − 1)·σ²/(1 − φ²) for squared loss: the true mean the intervals should cover (for
+ * the designs with a variance break, the mean over t differs, but is 0 under equal accuracy).
+ */
 export function trueMeanDifferential(design: SimulationDesign): number {
   return (design.candidateScale ** 2 - 1) / (1 - design.phi * design.phi);
 }
@@ -60,5 +74,16 @@ function normalSampler(random: RandomSource): () => number {
     const r = Math.sqrt(-2 * Math.log(u));
     spare = r * Math.sin(2 * Math.PI * v);
     return r * Math.cos(2 * Math.PI * v);
+  };
+}
+
+/** Unit-variance Student t with 3 degrees of freedom from a normal sampler (see SimulationDesign). */
+function studentT3Sampler(normal: () => number): () => number {
+  return () => {
+    const z = normal();
+    const a = normal();
+    const b = normal();
+    const c = normal();
+    return z / Math.sqrt(a * a + b * b + c * c); // = (z/√(χ²₃/3))/√3
   };
 }

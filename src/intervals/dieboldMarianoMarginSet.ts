@@ -32,7 +32,7 @@ export interface DieboldMarianoMarginSet {
  * with the long-run covariance of (D, B) estimated once (`longRunCovariance`, with the gate's
  * estimator, its ν or its lag chosen on D), the condition is the Fieller (1954) quadratic
  * (`fiellerSet`) with c the (1 − tail) quantile of the gate's reference: Student t with ν df for
- * `ewc` (Lazarus et al. 2018); for `bartlett` / `uniform` Student t with n − 1 df divided by the
+ * `ewc` and `ewc-ar1` (Lazarus et al. 2018; the test's own ν); for `bartlett` / `uniform` Student t with n − 1 df divided by the
  * Harvey–Leybourne–Newbold (1997) factor, or N(0, 1) when that correction is undefined (h ≥ n).
  *
  * `uniform` follows the gate's fallback margin by margin: where the uniform-weight ω(D − r·B) is
@@ -65,7 +65,7 @@ export function dieboldMarianoMarginSet(input: {
     fiellerSet({ meanD, meanB, varDD: v.dd / n, varDB: v.db / n, varBB: v.bb / n, critical });
   let covariance: { dd: number; db: number; bb: number };
   let set: IntervalSet;
-  if (estimator === 'ewc') {
+  if (estimator === 'ewc' || estimator === 'ewc-ar1') {
     const nu = input.degreesOfFreedom;
     if (nu === null) return null;
     covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);

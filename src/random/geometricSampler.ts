@@ -32,6 +32,19 @@ export interface GeometricSampler {
   readonly truncation: number;
   /** The alias table over outcomes 0..L (length outcome + 1; L = overflow), 2^j = L + 1 columns. */
   readonly table: { readonly threshold: Float64Array; readonly alias: Int32Array };
+  /**
+   * What `sample` reads, for loops that inline it (`resampleDeviationsInline`): column = x >>> shift,
+   * coin = x & coinMask, kept when coin < edge[column] (coin = edge[column]: one `nextDouble`
+   * against edgeFraction[column]); outcome `truncation` is the overflow. null when b = 1.
+   */
+  readonly inline: {
+    readonly shift: number;
+    readonly coinMask: number;
+    readonly edge: Float64Array;
+    readonly edgeFraction: Float64Array;
+    readonly alias: Int32Array;
+    readonly truncation: number;
+  } | null;
   sample(random: RandomSource, cap: number): number;
 }
 
@@ -44,7 +57,7 @@ export function createGeometricSampler(mean: number): GeometricSampler {
   }
   if (mean === 1) {
     const table = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
-    return { mean, truncation: 1, table, sample: () => 1 };
+    return { mean, truncation: 1, table, inline: null, sample: () => 1 };
   }
   const p = 1 / mean;
   const q = 1 - p;
@@ -72,6 +85,7 @@ export function createGeometricSampler(mean: number): GeometricSampler {
     mean,
     truncation,
     table: { threshold, alias },
+    inline: { shift, coinMask, edge, edgeFraction, alias, truncation },
     sample(random: RandomSource, cap: number): number {
       let total = 0;
       for (;;) {

@@ -6,11 +6,11 @@ import { splitMix64Words } from './splitMix64.js';
  * these as a parameter; nothing reads a global generator.
  */
 export interface RandomSource {
-  /** A uniform integer on 0..2^32 − 1 (one generator step). */
+  /** A uniform integer on 0..2^32 − 1 (one 32-bit word). */
   nextUint32(): number;
   /**
-   * A uniform double on [0, 1) with 53 random bits, built from two steps:
-   * (a >>> 5) · 2^26 + (b >>> 6), divided by 2^53. The high bits of each step are kept, because
+   * A uniform double on [0, 1) with 53 random bits, built from two words:
+   * (a >>> 5) · 2^26 + (b >>> 6), divided by 2^53. The high bits of each word are kept, because
    * the lowest bits of xoroshiro128+ are its weakest (Blackman & Vigna 2021).
    */
   nextDouble(): number;
@@ -63,8 +63,9 @@ export function randomStreams(
  * Conventions: `seed` is an integer 0 ≤ seed ≤ 2^53 − 1 (every such seed gives its own state);
  * `stream` an integer ≥ 0. Creating stream k on its own costs k jumps (about 1.5 µs each);
  * walking streams in order with `createRandomStreams` (or `randomStreams(createRandomSource, …)`)
- * costs one jump per stream, so S streams cost O(S) jumps, not O(S²). Each `nextUint32` is the
- * low 32 bits of one 64-bit xoroshiro128+ output. The numbers depend on nothing but
+ * costs one jump per stream, so S streams cost O(S) jumps, not O(S²). Every 64-bit xoroshiro128+
+ * output gives two `nextUint32` words, its high half then its low half (`Xoroshiro128PlusSource`).
+ * The numbers depend on nothing but
  * (seed, stream): same on every machine and platform.
  *
  * Example: `createRandomSource(42).nextUint32()` is always the same number (see the golden-value
@@ -103,15 +104,70 @@ export function createRandomStreams(seed: number, first = 0): RandomStreams {
   };
 }
 
-type Generator = ReturnType<typeof xoroshiro128plusFromState>;
+const TWO_POW_32 = 4294967296;
 
-function sourceOf(generator: Generator): RandomSource {
-  return {
-    nextUint32: () => generator.next() >>> 0,
-    nextDouble: () => {
-      const a = generator.next() >>> 5;
-      const b = generator.next() >>> 6;
-      return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
-    },
-  };
+/**
+ * The project's random source as a plain class over the xoroshiro128+ state, so that hot loops
+ * (the stationary bootstrap's kernel, `resampleDeviationsInline`) can run the same generator
+ * inlined, with the state in local variables, and hand it back here afterwards.
+ *
+ * Words: each 64-bit output x_k = s0 + s1 (mod 2^64) gives two 32-bit words, its high half first,
+ * then its low half: word 2k is ⌊x_k / 2^32⌋, word 2k + 1 is x_k mod 2^32. `nextUint32` returns
+ * the next word; `nextDouble` builds a double from the next two words a, b as
+ * ((a >>> 5)·2^26 + (b >>> 6))/2^53. Using both halves of every output halves the generator's
+ * work per word; the high half is xoroshiro128+'s best, and of the low half the block bootstrap
+ * uses the top bits (Lemire's product, the alias column), never the weak lowest bits alone
+ * (Blackman & Vigna 2021, §10: only the lowest bits fail linearity tests).
+ *
+ * State layout as pure-rand's: s01/s00 are the high/low words of s0, s11/s10 those of s1
+ * (signed 32-bit integers); `pending` holds the low word of the last output (as a signed 32-bit
+ * integer, so it never needs a heap number) while `hasPending`.
+ */
+export class Xoroshiro128PlusSource implements RandomSource {
+  s01: number;
+  s00: number;
+  s11: number;
+  s10: number;
+  pending = 0;
+  hasPending = false;
+
+  constructor(state: readonly number[]) {
+    this.s01 = state[0]! | 0;
+    this.s00 = state[1]! | 0;
+    this.s11 = state[2]! | 0;
+    this.s10 = state[3]! | 0;
+  }
+
+  nextUint32(): number {
+    if (this.hasPending) {
+      this.hasPending = false;
+      return this.pending >>> 0;
+    }
+    const s00 = this.s00;
+    const s01 = this.s01;
+    const s10 = this.s10;
+    const s11 = this.s11;
+    const low = (s00 >>> 0) + (s10 >>> 0);
+    const carry = low >= TWO_POW_32 ? 1 : 0;
+    this.pending = low | 0;
+    this.hasPending = true;
+    const high = (s01 + s11 + carry) >>> 0;
+    const a0 = s10 ^ s00;
+    const a1 = s11 ^ s01;
+    this.s00 = (s00 << 24) ^ (s01 >>> 8) ^ a0 ^ (a0 << 16);
+    this.s01 = (s01 << 24) ^ (s00 >>> 8) ^ a1 ^ ((a1 << 16) | (a0 >>> 16));
+    this.s10 = (a1 << 5) ^ (a0 >>> 27);
+    this.s11 = (a0 << 5) ^ (a1 >>> 27);
+    return high;
+  }
+
+  nextDouble(): number {
+    const a = this.nextUint32() >>> 5;
+    const b = this.nextUint32() >>> 6;
+    return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
+  }
+}
+
+function sourceOf(generator: ReturnType<typeof xoroshiro128plusFromState>): RandomSource {
+  return new Xoroshiro128PlusSource(generator.getState());
 }

@@ -137,9 +137,9 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   },
   {
     name: 'variance',
-    defaultValue: 'ewc',
-    choices: ['ewc', 'bartlett', 'uniform'],
-    help: 'long-run variance for Diebold–Mariano: ewc (equal-weighted cosine, fixed-b), bartlett (Newey–West), uniform',
+    defaultValue: 'ewc-ar1',
+    choices: ['ewc-ar1', 'ewc', 'bartlett', 'uniform'],
+    help: 'long-run variance for Diebold–Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4·n^(2/3) terms), bartlett (Newey–West), uniform',
   },
   {
     name: 'lag',

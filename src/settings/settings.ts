@@ -7,7 +7,7 @@ import type { RecentWindow } from '../stability/recentWindow.js';
 export type Policy = 'no-regression' | 'non-inferiority' | 'superiority';
 /** Which tests must reject for the policy's decision; a split gives `warn`. */
 export type Agreement = 'both' | 'either' | 'dm' | 'bootstrap';
-export type VarianceEstimator = 'ewc' | 'bartlett' | 'uniform';
+export type VarianceEstimator = 'ewc' | 'ewc-ar1' | 'bartlett' | 'uniform';
 export type LagRule = { kind: 'auto' } | { kind: 'horizon' } | { kind: 'fixed'; lag: number };
 export type BlockLengthRule = { kind: 'auto' } | { kind: 'fixed'; length: number };
 export type MarginKind = 'relative' | 'absolute';

@@ -6,6 +6,7 @@ import {
   studentTTwoSided,
   studentTUpperTail,
 } from './distributions.js';
+import { ar1PluginCosineTerms } from './ewcCosineTermsRule.js';
 import { ewcLongRunVariance } from './ewcLongRunVariance.js';
 import { harveyLeybourneNewbold } from './harveyLeybourneNewbold.js';
 import { mean } from './mean.js';
@@ -15,8 +16,11 @@ import { isEffectivelyNonPositive } from './varianceTolerance.js';
 
 export type { LagRule } from './neweyWestLag.js';
 
-/** The long-run variance estimator (`--variance`). */
-export type VarianceEstimator = 'ewc' | 'bartlett' | 'uniform';
+/**
+ * The long-run variance estimator (`--variance`): `ewc` with ν = max(2, round(0.4 n^{2/3})),
+ * `ewc-ar1` the same estimator with ν chosen from the data (`ar1PluginCosineTerms`).
+ */
+export type VarianceEstimator = 'ewc' | 'ewc-ar1' | 'bartlett' | 'uniform';
 
 export interface DieboldMarianoOptions {
   estimator: VarianceEstimator;
@@ -27,9 +31,9 @@ export interface DieboldMarianoOptions {
   /** Absolute margin δ in loss units: H0 is E[d] ≤ δ. */
   margin: number;
   /**
-   * The series on which `bartlett` / `uniform` choose their lag (default d). The gate passes the
-   * unshifted differential L_c − L_b, so the lag, and with it the test's variance, is the same
-   * quadratic form at every relative margin (docs/decisions/0008-intervals-from-the-tests.md).
+   * The series on which `bartlett` / `uniform` choose their lag and `ewc-ar1` its ν (default d).
+   * The gate passes the unshifted differential L_c − L_b, so the lag or ν, and with it the test's
+   * variance, is the same quadratic form at every relative margin (docs/decisions/0008-intervals-from-the-tests.md).
    */
   lagSeries?: Float64Array;
 }
@@ -95,7 +99,8 @@ export const MINIMUM_LENGTH = 3;
  *   DM = (d̄ − δ) / √(ω̂²/n),   d_t = loss(candidate)_t − loss(baseline)_t,
  *
  * with ω̂² the long-run variance of d from the chosen estimator:
- * - `ewc` (Lazarus, Lewis, Stock & Watson 2018): DM compared with Student t, ν df;
+ * - `ewc` (Lazarus, Lewis, Stock & Watson 2018): DM compared with Student t, ν df; `ewc-ar1`
+ *   the same with ν from the data (`ar1PluginCosineTerms`);
  * - `bartlett` (Newey & West 1987) or `uniform` (Diebold & Mariano 1995; falls back to Bartlett
  *   with the same lag when not positive): DM compared with N(0, 1), plus the Harvey, Leybourne &
  *   Newbold (1997) correction compared with Student t, n − 1 df. The lag comes from `selectLag`.
@@ -168,8 +173,17 @@ export function dieboldMariano(
   let longRunVariance: number;
   let estimator: VarianceEstimator = requestedEstimator;
   let lagChoice: LagChoice | null = null;
-  if (requestedEstimator === 'ewc') {
-    const ewc = ewcLongRunVariance(d);
+  if (requestedEstimator === 'ewc' || requestedEstimator === 'ewc-ar1') {
+    let terms: number | undefined;
+    if (requestedEstimator === 'ewc-ar1') {
+      const choice = ar1PluginCosineTerms(options.lagSeries ?? d);
+      terms = choice.terms;
+      base.notes.push(
+        `${terms} cosine terms chosen from the first-order autocorrelation ` +
+          `${choice.autocorrelation.toFixed(3)} (AR(1) plug-in, Lazarus et al. 2018).`,
+      );
+    }
+    const ewc = ewcLongRunVariance(d, terms);
     longRunVariance = ewc.value;
     base.degreesOfFreedom = ewc.degreesOfFreedom;
   } else {
@@ -210,7 +224,7 @@ export function dieboldMariano(
     return base;
   }
   base.statistic = statistic;
-  if (estimator === 'ewc') {
+  if (estimator === 'ewc' || estimator === 'ewc-ar1') {
     const nu = base.degreesOfFreedom!;
     base.pValue = studentTUpperTail(statistic, nu);
     base.pValueTwoSided = studentTTwoSided(statistic, nu);

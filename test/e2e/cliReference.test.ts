@@ -80,8 +80,11 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       );
       expectClose(dm.smallSample.pValue, hac!.smallSample.pValue, 1e-6, `${what}: HLN p`);
     });
-    it(`${name}: ewc (the default) against the published formula evaluated in R/Python`, () => {
-      const c = run(name, fixture, []);
+    it(`${name}: the default is ewc-ar1`, () => {
+      expect(run(name, fixture, []).dieboldMariano.estimator).toBe('ewc-ar1');
+    });
+    it(`${name}: ewc against the published formula evaluated in R/Python`, () => {
+      const c = run(name, fixture, ['--variance', 'ewc']);
       const dm = c.dieboldMariano;
       const what = `${name} vs ${fixture.ewc.source}`;
       expect(dm.estimator).toBe('ewc');

@@ -109,9 +109,9 @@ describe.each(cases)('Seatbelts panel, %s loss, against R', (loss, expected) => 
     }
   });
 
-  it('ewc (the default), with Holm and Benjamini–Hochberg adjusted per-series p-values', () => {
+  it('ewc, with Holm and Benjamini–Hochberg adjusted per-series p-values', () => {
     for (const method of ['holm', 'bh'] as const) {
-      const report = run(loss, ['--adjust', method]);
+      const report = run(loss, ['--adjust', method, '--variance', 'ewc']);
       const overall = report.comparisons[0];
       expect(overall.dieboldMariano.degreesOfFreedom).toBe(expected.overall.ewc.degreesOfFreedom);
       expectClose(

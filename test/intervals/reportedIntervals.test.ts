@@ -65,7 +65,7 @@ describe('every interval is for the quantity printed beside it', () => {
     expect(rc.level).toBe(0.9);
     expect(rc.lower!).toBeLessThan(rc.estimate);
     expect(rc.upper!).toBeGreaterThan(rc.estimate);
-    expect(rc.method).toBe('Fieller (ewc) ∪ inverted bootstrap');
+    expect(rc.method).toBe('Fieller (ewc-ar1) ∪ inverted bootstrap');
     expect(relativeChangeText(margin)).toMatch(/^[−+-]?\d.*% \[.*%, .*%\]$/);
   });
 
@@ -82,7 +82,7 @@ describe('every interval is for the quantity printed beside it', () => {
       settings({ agreement: 'dm' }),
     );
     const rc = c.relativeChange!;
-    expect(rc.method).toBe('Fieller (ewc)');
+    expect(rc.method).toBe('Fieller (ewc-ar1)');
     // Two rays: the tests reject only for margins between the pieces; the hull is unbounded.
     expect(rc.lower).toBeNull();
     expect(rc.upper).toBeNull();

@@ -37,7 +37,7 @@ describe('createRandomStreams', () => {
     const zero = streams.next();
     for (let i = 0; i < 1000; i++) zero.nextUint32();
     // Literal golden value: the first word of seed 42, stream 1 (see randomSource.test.ts).
-    expect(streams.next().nextUint32()).toBe(3031792765);
+    expect(streams.next().nextUint32()).toBe(1328408338);
   });
 
   it('is what randomStreams uses for the project factory, and rejects bad arguments', () => {

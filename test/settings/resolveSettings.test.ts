@@ -26,7 +26,7 @@ describe('resolveSettings', () => {
       marginKind: 'relative',
       policy: 'no-regression',
       agreement: 'both',
-      variance: 'ewc',
+      variance: 'ewc-ar1',
       lag: { kind: 'auto' },
       blockLength: { kind: 'auto' },
       resamples: 9999,

@@ -4,7 +4,9 @@ import {
   type RandomSource,
   randomStreams,
   type SequentialRandomSourceFactory,
+  Xoroshiro128PlusSource,
 } from '../../random/randomSource.js';
+import { resampleDeviationsInline } from './resampleDeviationsInline.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';
 import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
 
@@ -72,9 +74,25 @@ export function runResampleJob(
 
 /**
  * `count` consecutive resample deviations drawn from one random source: the unit of work that a
- * thread can take (stream k yields resamples k·RESAMPLES_PER_STREAM onwards).
+ * thread can take (stream k yields resamples k·RESAMPLES_PER_STREAM onwards). The project's own
+ * generator goes through the inlined kernel (`resampleDeviationsInline`, same numbers); any other
+ * source through `drawStationaryBlocks` and `resampleMeanDeviation`.
  */
 export function resampleDeviationsOfStream(
+  prefix: Float64Array,
+  n: number,
+  sampler: GeometricSampler,
+  random: RandomSource,
+  count: number,
+): Float64Array {
+  if (random instanceof Xoroshiro128PlusSource && n >= 2) {
+    return resampleDeviationsInline(prefix, n, sampler, random, count);
+  }
+  return resampleDeviationsGeneric(prefix, n, sampler, random, count);
+}
+
+/** `resampleDeviationsOfStream` through the RandomSource interface, for any source. */
+export function resampleDeviationsGeneric(
   prefix: Float64Array,
   n: number,
   sampler: GeometricSampler,

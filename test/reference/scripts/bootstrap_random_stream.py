@@ -5,8 +5,8 @@ published algorithms in plain Python integers (no library generator):
   128-bit state (s0, s1) from the seed;
 - xoroshiro128+ (Blackman & Vigna 2021, parameters a=24, b=16, c=37) and its jump function
   (JUMP = 0xdf900294d8f554a5, 0x170865df4b3201fc, equivalent to 2^64 steps);
-- nextUint32 = low 32 bits of one 64-bit output; nextDouble = ((a >> 5) * 2^26 + (b >> 6)) / 2^53
-  from two consecutive nextUint32 values a, b.
+- every 64-bit output gives two nextUint32 words, its high 32 bits first, then its low 32 bits;
+  nextDouble = ((a >> 5) * 2^26 + (b >> 6)) / 2^53 from two consecutive words a, b.
 
 Usage: python3 bootstrap_random_stream.py OUTDIR  -> OUTDIR/bootstrap_random_stream.json
 """
@@ -70,18 +70,24 @@ def main():
     for seed in (0, 1, 42, 20240601, 2**53 - 1):
         for stream in (0, 1, 3):
             gen = source(seed, stream)
-            uint32 = [gen.next64() & 0xFFFFFFFF for _ in range(8)]
+            words = []
+            for _ in range(9):
+                x = gen.next64()
+                words += [x >> 32, x & 0xFFFFFFFF]
+            # 9 words for nextUint32 (an odd count, so the doubles start mid-output), then
+            # 4 doubles from the next 8 words.
+            uint32 = words[:9]
             doubles = []
-            for _ in range(4):
-                a = gen.next64() & 0xFFFFFFFF
-                b = gen.next64() & 0xFFFFFFFF
+            for i in range(4):
+                a = words[9 + 2 * i]
+                b = words[10 + 2 * i]
                 doubles.append(((a >> 5) * 67108864 + (b >> 6)) / 9007199254740992.0)
             cases.append({"seed": seed, "stream": stream, "uint32": uint32,
                           "doubles": [repr(x) for x in doubles]})
     doc = {
         "source": "test/reference/scripts/bootstrap_random_stream.py: SplitMix64 seeding + "
                   "xoroshiro128+ (Blackman & Vigna 2021) with jump, plain Python integers",
-        "note": "doubles are repr() strings so every digit survives; first 8 nextUint32 then 4 nextDouble",
+        "note": "doubles are repr() strings so every digit survives; first 9 nextUint32 then 4 nextDouble",
         "cases": cases,
     }
     with open(os.path.join(outdir, "bootstrap_random_stream.json"), "w") as f:
