@@ -14,6 +14,7 @@ import { build } from 'esbuild';
 import { blockLengthSweep } from './blockLengthSweep.mjs';
 import { candidatesSection } from './candidatesCase.mjs';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
+import { parquetReadingSection } from './parquetReading.mjs';
 
 const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
 const work = path.join(root, 'bench', '.work');
@@ -368,8 +369,19 @@ const sweep = blockLengthSweep({
 log();
 log('4. several candidates');
 const candidates = await candidatesSection({ cli, work, runs: SCALING_RUNS, log });
-const after = machine();
 log();
+const parquetReading = await parquetReadingSection({
+  root,
+  work,
+  cli,
+  files: await panelFiles(1000, 1000),
+  runs: SCALING_RUNS,
+  measure,
+  log,
+  fmt,
+  median,
+});
+const after = machine();
 log(`load average at end: ${after.load}`);
 
 const results = {
@@ -379,6 +391,7 @@ const results = {
   reading,
   readingSlope,
   largeReading,
+  parquetReading,
   bootstrap: {
     n: N,
     resamples: B,

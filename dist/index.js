@@ -116,7 +116,7 @@ var require_tunnel = __commonJS({
         function onFree() {
           self.emit("free", socket, options);
         }
-        function onCloseOrRemove(err) {
+        function onCloseOrRemove(err2) {
           self.removeSocket(socket);
           socket.removeListener("free", onFree);
           socket.removeListener("close", onCloseOrRemove);
@@ -1146,7 +1146,7 @@ var require_util = __commonJS({
     function isDestroyed(body) {
       return body && !!(body.destroyed || body[kDestroyed] || stream.isDestroyed?.(body));
     }
-    function destroy(stream2, err) {
+    function destroy(stream2, err2) {
       if (stream2 == null || !isStream(stream2) || isDestroyed(stream2)) {
         return;
       }
@@ -1154,10 +1154,10 @@ var require_util = __commonJS({
         if (Object.getPrototypeOf(stream2).constructor === IncomingMessage) {
           stream2.socket = null;
         }
-        stream2.destroy(err);
-      } else if (err) {
+        stream2.destroy(err2);
+      } else if (err2) {
         queueMicrotask(() => {
-          stream2.emit("error", err);
+          stream2.emit("error", err2);
         });
       }
       if (stream2.destroyed !== true) {
@@ -1388,12 +1388,12 @@ var require_util = __commonJS({
       }
       obj[kListeners] = null;
     }
-    function errorRequest(client, request2, err) {
+    function errorRequest(client, request2, err2) {
       try {
-        request2.onError(err);
+        request2.onError(err2);
         assert(request2.aborted);
-      } catch (err2) {
-        client.emit("error", err2);
+      } catch (err3) {
+        client.emit("error", err3);
       }
     }
     var kEnumerableProperty = /* @__PURE__ */ Object.create(null);
@@ -1638,8 +1638,8 @@ var require_diagnostics = __commonJS({
           reason
         );
       });
-      diagnosticsChannel.channel("undici:websocket:socket_error").subscribe((err) => {
-        websocketDebuglog("connection errored - %s", err.message);
+      diagnosticsChannel.channel("undici:websocket:socket_error").subscribe((err2) => {
+        websocketDebuglog("connection errored - %s", err2.message);
       });
       diagnosticsChannel.channel("undici:websocket:ping").subscribe((evt) => {
         websocketDebuglog("ping received");
@@ -1744,11 +1744,11 @@ var require_request = __commonJS({
             };
             this.body.on("end", this.endHandler);
           }
-          this.errorHandler = (err) => {
+          this.errorHandler = (err2) => {
             if (this.abort) {
-              this.abort(err);
+              this.abort(err2);
             } else {
-              this.error = err;
+              this.error = err2;
             }
           };
           this.body.on("error", this.errorHandler);
@@ -1813,8 +1813,8 @@ var require_request = __commonJS({
         if (this[kHandler].onBodySent) {
           try {
             return this[kHandler].onBodySent(chunk);
-          } catch (err) {
-            this.abort(err);
+          } catch (err2) {
+            this.abort(err2);
           }
         }
       }
@@ -1825,8 +1825,8 @@ var require_request = __commonJS({
         if (this[kHandler].onRequestSent) {
           try {
             return this[kHandler].onRequestSent();
-          } catch (err) {
-            this.abort(err);
+          } catch (err2) {
+            this.abort(err2);
           }
         }
       }
@@ -1851,8 +1851,8 @@ var require_request = __commonJS({
         }
         try {
           return this[kHandler].onHeaders(statusCode, headers, resume, statusText);
-        } catch (err) {
-          this.abort(err);
+        } catch (err2) {
+          this.abort(err2);
         }
       }
       onData(chunk) {
@@ -1860,8 +1860,8 @@ var require_request = __commonJS({
         assert(!this.completed);
         try {
           return this[kHandler].onData(chunk);
-        } catch (err) {
-          this.abort(err);
+        } catch (err2) {
+          this.abort(err2);
           return false;
         }
       }
@@ -1935,8 +1935,8 @@ var require_request = __commonJS({
         }
         try {
           return this[kHandler].onComplete(trailers);
-        } catch (err) {
-          this.onError(err);
+        } catch (err2) {
+          this.onError(err2);
         }
       }
       onError(error2) {
@@ -2165,9 +2165,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve2, reject) => {
-            this.close((err, data) => {
-              return err ? reject(err) : resolve2(data);
+          return new Promise((resolve3, reject) => {
+            this.close((err2, data) => {
+              return err2 ? reject(err2) : resolve3(data);
             });
           });
         }
@@ -2199,18 +2199,18 @@ var require_dispatcher_base = __commonJS({
           queueMicrotask(onClosed);
         });
       }
-      destroy(err, callback) {
-        if (typeof err === "function") {
-          callback = err;
-          err = null;
+      destroy(err2, callback) {
+        if (typeof err2 === "function") {
+          callback = err2;
+          err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve2, reject) => {
-            this.destroy(err, (err2, data) => {
-              return err2 ? (
+          return new Promise((resolve3, reject) => {
+            this.destroy(err2, (err3, data) => {
+              return err3 ? (
                 /* istanbul ignore next: should never error */
-                reject(err2)
-              ) : resolve2(data);
+                reject(err3)
+              ) : resolve3(data);
             });
           });
         }
@@ -2225,8 +2225,8 @@ var require_dispatcher_base = __commonJS({
           }
           return;
         }
-        if (!err) {
-          err = new ClientDestroyedError();
+        if (!err2) {
+          err2 = new ClientDestroyedError();
         }
         this[kDestroyed] = true;
         this[kOnDestroyed] = this[kOnDestroyed] || [];
@@ -2238,7 +2238,7 @@ var require_dispatcher_base = __commonJS({
             callbacks[i](null, null);
           }
         };
-        this[kDestroy](err).then(() => {
+        this[kDestroy](err2).then(() => {
           queueMicrotask(onDestroyed);
         });
       }
@@ -2269,11 +2269,11 @@ var require_dispatcher_base = __commonJS({
             throw new ClientClosedError();
           }
           return this[kInterceptedDispatch](opts, handler2);
-        } catch (err) {
+        } catch (err2) {
           if (typeof handler2.onError !== "function") {
             throw new InvalidArgumentError("invalid onError method");
           }
-          handler2.onError(err);
+          handler2.onError(err2);
           return false;
         }
       }
@@ -2634,12 +2634,12 @@ var require_connect = __commonJS({
             callback = null;
             cb(null, this);
           }
-        }).on("error", function(err) {
+        }).on("error", function(err2) {
           queueMicrotask(clearConnectTimeout);
           if (callback) {
             const cb = callback;
             callback = null;
-            cb(err);
+            cb(err2);
           }
         });
         return socket;
@@ -3311,7 +3311,7 @@ var require_data_url = __commonJS({
   "node_modules/undici/lib/web/fetch/data-url.js"(exports, module) {
     "use strict";
     var assert = __require("node:assert");
-    var encoder = new TextEncoder();
+    var encoder2 = new TextEncoder();
     var HTTP_TOKEN_CODEPOINTS = /^[!#$%&'*+\-.^_|~A-Za-z0-9]+$/;
     var HTTP_WHITESPACE_REGEX = /[\u000A\u000D\u0009\u0020]/;
     var ASCII_WHITESPACE_REPLACE_REGEX = /[\u0009\u000A\u000C\u000D\u0020]/g;
@@ -3384,7 +3384,7 @@ var require_data_url = __commonJS({
       return input.slice(start, position.position);
     }
     function stringPercentDecode(input) {
-      const bytes = encoder.encode(input);
+      const bytes = encoder2.encode(input);
       return percentDecode(bytes);
     }
     function isHexCharByte(byte) {
@@ -3689,15 +3689,15 @@ var require_webidl = __commonJS({
     webidl.brandCheck = function(V, I, opts) {
       if (opts?.strict !== false) {
         if (!(V instanceof I)) {
-          const err = new TypeError("Illegal invocation");
-          err.code = "ERR_INVALID_THIS";
-          throw err;
+          const err2 = new TypeError("Illegal invocation");
+          err2.code = "ERR_INVALID_THIS";
+          throw err2;
         }
       } else {
         if (V?.[Symbol.toStringTag] !== I.prototype[Symbol.toStringTag]) {
-          const err = new TypeError("Illegal invocation");
-          err.code = "ERR_INVALID_THIS";
-          throw err;
+          const err2 = new TypeError("Illegal invocation");
+          err2.code = "ERR_INVALID_THIS";
+          throw err2;
         }
       }
     };
@@ -3817,10 +3817,10 @@ var require_webidl = __commonJS({
       }
     };
     webidl.sequenceConverter = function(converter) {
-      return (V, prefix, argument, Iterable) => {
+      return (V, prefix2, argument, Iterable) => {
         if (webidl.util.Type(V) !== "Object") {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: `${argument} (${webidl.util.Stringify(V)}) is not iterable.`
           });
         }
@@ -3829,7 +3829,7 @@ var require_webidl = __commonJS({
         let index = 0;
         if (method === void 0 || typeof method.next !== "function") {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: `${argument} is not iterable.`
           });
         }
@@ -3838,16 +3838,16 @@ var require_webidl = __commonJS({
           if (done) {
             break;
           }
-          seq.push(converter(value, prefix, `${argument}[${index++}]`));
+          seq.push(converter(value, prefix2, `${argument}[${index++}]`));
         }
         return seq;
       };
     };
     webidl.recordConverter = function(keyConverter, valueConverter) {
-      return (O, prefix, argument) => {
+      return (O, prefix2, argument) => {
         if (webidl.util.Type(O) !== "Object") {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: `${argument} ("${webidl.util.Type(O)}") is not an Object.`
           });
         }
@@ -3855,8 +3855,8 @@ var require_webidl = __commonJS({
         if (!types.isProxy(O)) {
           const keys2 = [...Object.getOwnPropertyNames(O), ...Object.getOwnPropertySymbols(O)];
           for (const key of keys2) {
-            const typedKey = keyConverter(key, prefix, argument);
-            const typedValue = valueConverter(O[key], prefix, argument);
+            const typedKey = keyConverter(key, prefix2, argument);
+            const typedValue = valueConverter(O[key], prefix2, argument);
             result[typedKey] = typedValue;
           }
           return result;
@@ -3865,8 +3865,8 @@ var require_webidl = __commonJS({
         for (const key of keys) {
           const desc = Reflect.getOwnPropertyDescriptor(O, key);
           if (desc?.enumerable) {
-            const typedKey = keyConverter(key, prefix, argument);
-            const typedValue = valueConverter(O[key], prefix, argument);
+            const typedKey = keyConverter(key, prefix2, argument);
+            const typedValue = valueConverter(O[key], prefix2, argument);
             result[typedKey] = typedValue;
           }
         }
@@ -3874,10 +3874,10 @@ var require_webidl = __commonJS({
       };
     };
     webidl.interfaceConverter = function(i) {
-      return (V, prefix, argument, opts) => {
+      return (V, prefix2, argument, opts) => {
         if (opts?.strict !== false && !(V instanceof i)) {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: `Expected ${argument} ("${webidl.util.Stringify(V)}") to be an instance of ${i.name}.`
           });
         }
@@ -3885,37 +3885,37 @@ var require_webidl = __commonJS({
       };
     };
     webidl.dictionaryConverter = function(converters) {
-      return (dictionary, prefix, argument) => {
-        const type = webidl.util.Type(dictionary);
+      return (dictionary2, prefix2, argument) => {
+        const type = webidl.util.Type(dictionary2);
         const dict = {};
         if (type === "Null" || type === "Undefined") {
           return dict;
         } else if (type !== "Object") {
           throw webidl.errors.exception({
-            header: prefix,
-            message: `Expected ${dictionary} to be one of: Null, Undefined, Object.`
+            header: prefix2,
+            message: `Expected ${dictionary2} to be one of: Null, Undefined, Object.`
           });
         }
         for (const options of converters) {
           const { key, defaultValue, required, converter } = options;
           if (required === true) {
-            if (!Object.hasOwn(dictionary, key)) {
+            if (!Object.hasOwn(dictionary2, key)) {
               throw webidl.errors.exception({
-                header: prefix,
+                header: prefix2,
                 message: `Missing required key "${key}".`
               });
             }
           }
-          let value = dictionary[key];
+          let value = dictionary2[key];
           const hasDefault = Object.hasOwn(options, "defaultValue");
           if (hasDefault && value !== null) {
             value ??= defaultValue();
           }
           if (required || hasDefault || value !== void 0) {
-            value = converter(value, prefix, `${argument}.${key}`);
+            value = converter(value, prefix2, `${argument}.${key}`);
             if (options.allowedValues && !options.allowedValues.includes(value)) {
               throw webidl.errors.exception({
-                header: prefix,
+                header: prefix2,
                 message: `${value} is not an accepted type. Expected one of ${options.allowedValues.join(", ")}.`
               });
             }
@@ -3926,27 +3926,27 @@ var require_webidl = __commonJS({
       };
     };
     webidl.nullableConverter = function(converter) {
-      return (V, prefix, argument) => {
+      return (V, prefix2, argument) => {
         if (V === null) {
           return V;
         }
-        return converter(V, prefix, argument);
+        return converter(V, prefix2, argument);
       };
     };
-    webidl.converters.DOMString = function(V, prefix, argument, opts) {
+    webidl.converters.DOMString = function(V, prefix2, argument, opts) {
       if (V === null && opts?.legacyNullToEmptyString) {
         return "";
       }
       if (typeof V === "symbol") {
         throw webidl.errors.exception({
-          header: prefix,
+          header: prefix2,
           message: `${argument} is a symbol, which cannot be converted to a DOMString.`
         });
       }
       return String(V);
     };
-    webidl.converters.ByteString = function(V, prefix, argument) {
-      const x = webidl.converters.DOMString(V, prefix, argument);
+    webidl.converters.ByteString = function(V, prefix2, argument) {
+      const x = webidl.converters.DOMString(V, prefix2, argument);
       for (let index = 0; index < x.length; index++) {
         if (x.charCodeAt(index) > 255) {
           throw new TypeError(
@@ -3964,26 +3964,26 @@ var require_webidl = __commonJS({
     webidl.converters.any = function(V) {
       return V;
     };
-    webidl.converters["long long"] = function(V, prefix, argument) {
-      const x = webidl.util.ConvertToInt(V, 64, "signed", void 0, prefix, argument);
+    webidl.converters["long long"] = function(V, prefix2, argument) {
+      const x = webidl.util.ConvertToInt(V, 64, "signed", void 0, prefix2, argument);
       return x;
     };
-    webidl.converters["unsigned long long"] = function(V, prefix, argument) {
-      const x = webidl.util.ConvertToInt(V, 64, "unsigned", void 0, prefix, argument);
+    webidl.converters["unsigned long long"] = function(V, prefix2, argument) {
+      const x = webidl.util.ConvertToInt(V, 64, "unsigned", void 0, prefix2, argument);
       return x;
     };
-    webidl.converters["unsigned long"] = function(V, prefix, argument) {
-      const x = webidl.util.ConvertToInt(V, 32, "unsigned", void 0, prefix, argument);
+    webidl.converters["unsigned long"] = function(V, prefix2, argument) {
+      const x = webidl.util.ConvertToInt(V, 32, "unsigned", void 0, prefix2, argument);
       return x;
     };
-    webidl.converters["unsigned short"] = function(V, prefix, argument, opts) {
-      const x = webidl.util.ConvertToInt(V, 16, "unsigned", opts, prefix, argument);
+    webidl.converters["unsigned short"] = function(V, prefix2, argument, opts) {
+      const x = webidl.util.ConvertToInt(V, 16, "unsigned", opts, prefix2, argument);
       return x;
     };
-    webidl.converters.ArrayBuffer = function(V, prefix, argument, opts) {
+    webidl.converters.ArrayBuffer = function(V, prefix2, argument, opts) {
       if (webidl.util.Type(V) !== "Object" || !types.isAnyArrayBuffer(V)) {
         throw webidl.errors.conversionFailed({
-          prefix,
+          prefix: prefix2,
           argument: `${argument} ("${webidl.util.Stringify(V)}")`,
           types: ["ArrayBuffer"]
         });
@@ -4002,10 +4002,10 @@ var require_webidl = __commonJS({
       }
       return V;
     };
-    webidl.converters.TypedArray = function(V, T, prefix, name, opts) {
+    webidl.converters.TypedArray = function(V, T, prefix2, name, opts) {
       if (webidl.util.Type(V) !== "Object" || !types.isTypedArray(V) || V.constructor.name !== T.name) {
         throw webidl.errors.conversionFailed({
-          prefix,
+          prefix: prefix2,
           argument: `${name} ("${webidl.util.Stringify(V)}")`,
           types: [T.name]
         });
@@ -4024,10 +4024,10 @@ var require_webidl = __commonJS({
       }
       return V;
     };
-    webidl.converters.DataView = function(V, prefix, name, opts) {
+    webidl.converters.DataView = function(V, prefix2, name, opts) {
       if (webidl.util.Type(V) !== "Object" || !types.isDataView(V)) {
         throw webidl.errors.exception({
-          header: prefix,
+          header: prefix2,
           message: `${name} is not a DataView.`
         });
       }
@@ -4045,18 +4045,18 @@ var require_webidl = __commonJS({
       }
       return V;
     };
-    webidl.converters.BufferSource = function(V, prefix, name, opts) {
+    webidl.converters.BufferSource = function(V, prefix2, name, opts) {
       if (types.isAnyArrayBuffer(V)) {
-        return webidl.converters.ArrayBuffer(V, prefix, name, { ...opts, allowShared: false });
+        return webidl.converters.ArrayBuffer(V, prefix2, name, { ...opts, allowShared: false });
       }
       if (types.isTypedArray(V)) {
-        return webidl.converters.TypedArray(V, V.constructor, prefix, name, { ...opts, allowShared: false });
+        return webidl.converters.TypedArray(V, V.constructor, prefix2, name, { ...opts, allowShared: false });
       }
       if (types.isDataView(V)) {
-        return webidl.converters.DataView(V, prefix, name, { ...opts, allowShared: false });
+        return webidl.converters.DataView(V, prefix2, name, { ...opts, allowShared: false });
       }
       throw webidl.errors.conversionFailed({
-        prefix,
+        prefix: prefix2,
         argument: `${name} ("${webidl.util.Stringify(V)}")`,
         types: ["BufferSource"]
       });
@@ -4081,7 +4081,7 @@ var require_webidl = __commonJS({
 var require_util2 = __commonJS({
   "node_modules/undici/lib/web/fetch/util.js"(exports, module) {
     "use strict";
-    var { Transform } = __require("node:stream");
+    var { Transform: Transform2 } = __require("node:stream");
     var zlib = __require("node:zlib");
     var { redirectStatusSet, referrerPolicySet: referrerPolicyTokens, badPortsSet } = require_constants3();
     var { getGlobalOrigin } = require_global();
@@ -4477,8 +4477,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve2, reject) => {
-        res = resolve2;
+      const promise = new Promise((resolve3, reject) => {
+        res = resolve3;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -4650,9 +4650,9 @@ var require_util2 = __commonJS({
       try {
         controller.close();
         controller.byobRequest?.respond(0);
-      } catch (err) {
-        if (!err.message.includes("Controller is already closed") && !err.message.includes("ReadableStream is already closed")) {
-          throw err;
+      } catch (err2) {
+        if (!err2.message.includes("Controller is already closed") && !err2.message.includes("ReadableStream is already closed")) {
+          throw err2;
         }
       }
     }
@@ -4769,7 +4769,7 @@ var require_util2 = __commonJS({
       contentRange += isomorphicEncode(`${fullLength}`);
       return contentRange;
     }
-    var InflateStream = class extends Transform {
+    var InflateStream = class extends Transform2 {
       #zlibOptions;
       /** @param {zlib.ZlibOptions} [zlibOptions] */
       constructor(zlibOptions) {
@@ -4785,7 +4785,7 @@ var require_util2 = __commonJS({
           this._inflateStream = (chunk[0] & 15) === 8 ? zlib.createInflate(this.#zlibOptions) : zlib.createInflateRaw(this.#zlibOptions);
           this._inflateStream.on("data", this.push.bind(this));
           this._inflateStream.on("end", () => this.push(null));
-          this._inflateStream.on("error", (err) => this.destroy(err));
+          this._inflateStream.on("error", (err2) => this.destroy(err2));
         }
         this._inflateStream.write(chunk, encoding, callback);
       }
@@ -5050,31 +5050,31 @@ var require_formdata = __commonJS({
       }
       append(name, value, filename = void 0) {
         webidl.brandCheck(this, _FormData);
-        const prefix = "FormData.append";
-        webidl.argumentLengthCheck(arguments, 2, prefix);
+        const prefix2 = "FormData.append";
+        webidl.argumentLengthCheck(arguments, 2, prefix2);
         if (arguments.length === 3 && !isBlobLike(value)) {
           throw new TypeError(
             "Failed to execute 'append' on 'FormData': parameter 2 is not of type 'Blob'"
           );
         }
-        name = webidl.converters.USVString(name, prefix, "name");
-        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix, "value", { strict: false }) : webidl.converters.USVString(value, prefix, "value");
-        filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix, "filename") : void 0;
+        name = webidl.converters.USVString(name, prefix2, "name");
+        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix2, "value", { strict: false }) : webidl.converters.USVString(value, prefix2, "value");
+        filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix2, "filename") : void 0;
         const entry = makeEntry(name, value, filename);
         this[kState].push(entry);
       }
       delete(name) {
         webidl.brandCheck(this, _FormData);
-        const prefix = "FormData.delete";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        name = webidl.converters.USVString(name, prefix, "name");
+        const prefix2 = "FormData.delete";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        name = webidl.converters.USVString(name, prefix2, "name");
         this[kState] = this[kState].filter((entry) => entry.name !== name);
       }
       get(name) {
         webidl.brandCheck(this, _FormData);
-        const prefix = "FormData.get";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        name = webidl.converters.USVString(name, prefix, "name");
+        const prefix2 = "FormData.get";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        name = webidl.converters.USVString(name, prefix2, "name");
         const idx = this[kState].findIndex((entry) => entry.name === name);
         if (idx === -1) {
           return null;
@@ -5083,30 +5083,30 @@ var require_formdata = __commonJS({
       }
       getAll(name) {
         webidl.brandCheck(this, _FormData);
-        const prefix = "FormData.getAll";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        name = webidl.converters.USVString(name, prefix, "name");
+        const prefix2 = "FormData.getAll";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        name = webidl.converters.USVString(name, prefix2, "name");
         return this[kState].filter((entry) => entry.name === name).map((entry) => entry.value);
       }
       has(name) {
         webidl.brandCheck(this, _FormData);
-        const prefix = "FormData.has";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        name = webidl.converters.USVString(name, prefix, "name");
+        const prefix2 = "FormData.has";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        name = webidl.converters.USVString(name, prefix2, "name");
         return this[kState].findIndex((entry) => entry.name === name) !== -1;
       }
       set(name, value, filename = void 0) {
         webidl.brandCheck(this, _FormData);
-        const prefix = "FormData.set";
-        webidl.argumentLengthCheck(arguments, 2, prefix);
+        const prefix2 = "FormData.set";
+        webidl.argumentLengthCheck(arguments, 2, prefix2);
         if (arguments.length === 3 && !isBlobLike(value)) {
           throw new TypeError(
             "Failed to execute 'set' on 'FormData': parameter 2 is not of type 'Blob'"
           );
         }
-        name = webidl.converters.USVString(name, prefix, "name");
-        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix, "name", { strict: false }) : webidl.converters.USVString(value, prefix, "name");
-        filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix, "name") : void 0;
+        name = webidl.converters.USVString(name, prefix2, "name");
+        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix2, "name", { strict: false }) : webidl.converters.USVString(value, prefix2, "name");
+        filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix2, "name") : void 0;
         const entry = makeEntry(name, value, filename);
         const idx = this[kState].findIndex((entry2) => entry2.name === name);
         if (idx !== -1) {
@@ -5453,7 +5453,7 @@ var require_body = __commonJS({
     } catch {
       random = (max) => Math.floor(Math.random(max));
     }
-    var textEncoder = new TextEncoder();
+    var textEncoder2 = new TextEncoder();
     function noop3() {
     }
     var hasFinalizationRegistry = globalThis.FinalizationRegistry && process.version.indexOf("v18") !== 0;
@@ -5475,7 +5475,7 @@ var require_body = __commonJS({
       } else {
         stream = new ReadableStream({
           async pull(controller) {
-            const buffer = typeof source === "string" ? textEncoder.encode(source) : source;
+            const buffer = typeof source === "string" ? textEncoder2.encode(source) : source;
             if (buffer.byteLength) {
               controller.enqueue(buffer);
             }
@@ -5503,7 +5503,7 @@ var require_body = __commonJS({
         source = new Uint8Array(object.buffer.slice(object.byteOffset, object.byteOffset + object.byteLength));
       } else if (util.isFormDataLike(object)) {
         const boundary = `----formdata-undici-0${`${random(1e11)}`.padStart(11, "0")}`;
-        const prefix = `--${boundary}\r
+        const prefix2 = `--${boundary}\r
 Content-Disposition: form-data`;
         const escape = (str) => str.replace(/\n/g, "%0A").replace(/\r/g, "%0D").replace(/"/g, "%22");
         const normalizeLinefeeds = (value) => value.replace(/\r?\n|\r/g, "\r\n");
@@ -5513,14 +5513,14 @@ Content-Disposition: form-data`;
         let hasUnknownSizeValue = false;
         for (const [name, value] of object) {
           if (typeof value === "string") {
-            const chunk2 = textEncoder.encode(prefix + `; name="${escape(normalizeLinefeeds(name))}"\r
+            const chunk2 = textEncoder2.encode(prefix2 + `; name="${escape(normalizeLinefeeds(name))}"\r
 \r
 ${normalizeLinefeeds(value)}\r
 `);
             blobParts.push(chunk2);
             length += chunk2.byteLength;
           } else {
-            const chunk2 = textEncoder.encode(`${prefix}; name="${escape(normalizeLinefeeds(name))}"` + (value.name ? `; filename="${escape(value.name)}"` : "") + `\r
+            const chunk2 = textEncoder2.encode(`${prefix2}; name="${escape(normalizeLinefeeds(name))}"` + (value.name ? `; filename="${escape(value.name)}"` : "") + `\r
 Content-Type: ${value.type || "application/octet-stream"}\r
 \r
 `);
@@ -5532,7 +5532,7 @@ Content-Type: ${value.type || "application/octet-stream"}\r
             }
           }
         }
-        const chunk = textEncoder.encode(`--${boundary}--\r
+        const chunk = textEncoder2.encode(`--${boundary}--\r
 `);
         blobParts.push(chunk);
         length += chunk.byteLength;
@@ -5953,8 +5953,8 @@ var require_client_h1 = __commonJS({
             currentBufferRef = data;
             currentParser = this;
             ret = llhttp.llhttp_execute(this.ptr, currentBufferPtr, data.length);
-          } catch (err) {
-            throw err;
+          } catch (err2) {
+            throw err2;
           } finally {
             currentParser = null;
             currentBufferRef = null;
@@ -5971,8 +5971,8 @@ var require_client_h1 = __commonJS({
               throw this.createError(ret, body);
             }
           }
-        } catch (err) {
-          util.destroy(socket, err);
+        } catch (err2) {
+          util.destroy(socket, err2);
         }
       }
       finish() {
@@ -6289,9 +6289,9 @@ var require_client_h1 = __commonJS({
       socket[kIdleSocketValidationTimeout] = null;
       socket[kSocketUsed] = false;
       socket[kParser] = new Parser(client, socket, llhttpInstance);
-      addListener(socket, "error", function(err) {
+      addListener(socket, "error", function(err2) {
         const parser = this[kParser];
-        if (err.code === "ECONNRESET" && parser.statusCode && !parser.shouldKeepAlive) {
+        if (err2.code === "ECONNRESET" && parser.statusCode && !parser.shouldKeepAlive) {
           const parserErr = parser.finish();
           if (parserErr) {
             this[kError] = parserErr;
@@ -6299,8 +6299,8 @@ var require_client_h1 = __commonJS({
           }
           return;
         }
-        this[kError] = err;
-        this[kClient][kOnError](err);
+        this[kError] = err2;
+        this[kClient][kOnError](err2);
       });
       addListener(socket, "readable", function() {
         const parser = this[kParser];
@@ -6330,7 +6330,7 @@ var require_client_h1 = __commonJS({
           this[kParser].destroy();
           this[kParser] = null;
         }
-        const err = this[kError] || new SocketError("closed", util.getSocketInfo(this));
+        const err2 = this[kError] || new SocketError("closed", util.getSocketInfo(this));
         client2[kSocket] = null;
         client2[kHTTPContext] = null;
         if (client2.destroyed) {
@@ -6338,16 +6338,16 @@ var require_client_h1 = __commonJS({
           const requests = client2[kQueue].splice(client2[kRunningIdx]);
           for (let i = 0; i < requests.length; i++) {
             const request2 = requests[i];
-            util.errorRequest(client2, request2, err);
+            util.errorRequest(client2, request2, err2);
           }
-        } else if (client2[kRunning] > 0 && err.code !== "UND_ERR_INFO") {
+        } else if (client2[kRunning] > 0 && err2.code !== "UND_ERR_INFO") {
           const request2 = client2[kQueue][client2[kRunningIdx]];
           client2[kQueue][client2[kRunningIdx]++] = null;
-          util.errorRequest(client2, request2, err);
+          util.errorRequest(client2, request2, err2);
         }
         client2[kPendingIdx] = client2[kRunningIdx];
         assert(client2[kRunning] === 0);
-        client2.emit("disconnect", client2[kUrl], [client2], err);
+        client2.emit("disconnect", client2[kUrl], [client2], err2);
         client2[kResume]();
       });
       let closed = false;
@@ -6363,11 +6363,11 @@ var require_client_h1 = __commonJS({
         resume() {
           resumeH1(client);
         },
-        destroy(err, callback) {
+        destroy(err2, callback) {
           if (closed) {
             queueMicrotask(callback);
           } else {
-            socket.destroy(err).on("close", callback);
+            socket.destroy(err2).on("close", callback);
           }
         },
         get destroyed() {
@@ -6521,8 +6521,8 @@ var require_client_h1 = __commonJS({
       };
       try {
         request2.onConnect(abort);
-      } catch (err) {
-        util.errorRequest(client, request2, err);
+      } catch (err2) {
+        util.errorRequest(client, request2, err2);
       }
       if (request2.aborted) {
         return false;
@@ -6608,8 +6608,8 @@ upgrade: ${upgrade}\r
           if (!writer.write(chunk) && this.pause) {
             this.pause();
           }
-        } catch (err) {
-          util.destroy(this, err);
+        } catch (err2) {
+          util.destroy(this, err2);
         }
       };
       const onDrain = function() {
@@ -6625,11 +6625,11 @@ upgrade: ${upgrade}\r
           body.removeListener("error", onFinished);
         });
         if (!finished) {
-          const err = new RequestAbortedError();
-          queueMicrotask(() => onFinished(err));
+          const err2 = new RequestAbortedError();
+          queueMicrotask(() => onFinished(err2));
         }
       };
-      const onFinished = function(err) {
+      const onFinished = function(err2) {
         if (finished) {
           return;
         }
@@ -6637,16 +6637,16 @@ upgrade: ${upgrade}\r
         assert(socket.destroyed || socket[kWriting] && client[kRunning] <= 1);
         socket.off("drain", onDrain).off("error", onFinished);
         body.removeListener("data", onData).removeListener("end", onFinished).removeListener("close", onClose);
-        if (!err) {
+        if (!err2) {
           try {
             writer.end();
           } catch (er) {
-            err = er;
+            err2 = er;
           }
         }
-        writer.destroy(err);
-        if (err && (err.code !== "UND_ERR_INFO" || err.message !== "reset")) {
-          util.destroy(body, err);
+        writer.destroy(err2);
+        if (err2 && (err2.code !== "UND_ERR_INFO" || err2.message !== "reset")) {
+          util.destroy(body, err2);
         } else {
           util.destroy(body);
         }
@@ -6692,8 +6692,8 @@ upgrade: ${upgrade}\r
         }
         request2.onRequestSent();
         client[kResume]();
-      } catch (err) {
-        abort(err);
+      } catch (err2) {
+        abort(err2);
       }
     }
     async function writeBlob(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
@@ -6715,8 +6715,8 @@ upgrade: ${upgrade}\r
           socket[kReset] = true;
         }
         client[kResume]();
-      } catch (err) {
-        abort(err);
+      } catch (err2) {
+        abort(err2);
       }
     }
     async function writeIterable(abort, body, client, request2, socket, contentLength, header2, expectsPayload) {
@@ -6729,12 +6729,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve2, reject) => {
+      const waitForDrain = () => new Promise((resolve3, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve2;
+          callback = resolve3;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -6749,8 +6749,8 @@ upgrade: ${upgrade}\r
           }
         }
         writer.end();
-      } catch (err) {
-        writer.destroy(err);
+      } catch (err2) {
+        writer.destroy(err2);
       } finally {
         socket.off("close", onDrain).off("drain", onDrain);
       }
@@ -6853,12 +6853,12 @@ ${len.toString(16)}\r
         }
         client[kResume]();
       }
-      destroy(err) {
+      destroy(err2) {
         const { socket, client, abort } = this;
         socket[kWriting] = false;
-        if (err) {
+        if (err2) {
           assert(client[kRunning] <= 1, "pipeline should only contain this request");
-          abort(err);
+          abort(err2);
         }
       }
     };
@@ -6872,7 +6872,7 @@ var require_client_h2 = __commonJS({
     "use strict";
     var assert = __require("node:assert");
     var { errorMonitor } = __require("node:events");
-    var { pipeline: pipeline2 } = __require("node:stream");
+    var { pipeline: pipeline3 } = __require("node:stream");
     var util = require_util();
     var {
       RequestContentLengthMismatchError,
@@ -6958,36 +6958,36 @@ var require_client_h2 = __commonJS({
       util.addListener(session, "close", function() {
         const { [kClient]: client2 } = this;
         const { [kSocket]: socket2 } = client2;
-        const err = this[kSocket][kError] || this[kError] || new SocketError("closed", util.getSocketInfo(socket2));
+        const err2 = this[kSocket][kError] || this[kError] || new SocketError("closed", util.getSocketInfo(socket2));
         client2[kHTTP2Session] = null;
         if (client2.destroyed) {
           assert(client2[kPending] === 0);
           const requests = client2[kQueue].splice(client2[kRunningIdx]);
           for (let i = 0; i < requests.length; i++) {
             const request2 = requests[i];
-            util.errorRequest(client2, request2, err);
+            util.errorRequest(client2, request2, err2);
           }
         }
       });
       session.unref();
       client[kHTTP2Session] = session;
       socket[kHTTP2Session] = session;
-      util.addListener(socket, "error", function(err) {
-        this[kError] = err;
-        this[kClient][kOnError](err);
+      util.addListener(socket, "error", function(err2) {
+        this[kError] = err2;
+        this[kClient][kOnError](err2);
       });
       util.addListener(socket, "end", function() {
         util.destroy(this, new SocketError("other side closed", util.getSocketInfo(this)));
       });
       util.addListener(socket, "close", function() {
-        const err = this[kError] || new SocketError("closed", util.getSocketInfo(this));
+        const err2 = this[kError] || new SocketError("closed", util.getSocketInfo(this));
         client[kSocket] = null;
         if (this[kHTTP2Session] != null) {
-          this[kHTTP2Session].destroy(err);
+          this[kHTTP2Session].destroy(err2);
         }
         client[kPendingIdx] = client[kRunningIdx];
         assert(client[kRunning] === 0);
-        client.emit("disconnect", client[kUrl], [client], err);
+        client.emit("disconnect", client[kUrl], [client], err2);
         client[kResume]();
       });
       let closed = false;
@@ -7003,11 +7003,11 @@ var require_client_h2 = __commonJS({
         resume() {
           resumeH2(client);
         },
-        destroy(err, callback) {
+        destroy(err2, callback) {
           if (closed) {
             queueMicrotask(callback);
           } else {
-            socket.destroy(err).on("close", callback);
+            socket.destroy(err2).on("close", callback);
           }
         },
         get destroyed() {
@@ -7030,40 +7030,40 @@ var require_client_h2 = __commonJS({
         }
       }
     }
-    function onHttp2SessionError(err) {
-      this[kSocket][kError] = err;
-      this[kClient][kOnError](err);
+    function onHttp2SessionError(err2) {
+      this[kSocket][kError] = err2;
+      this[kClient][kOnError](err2);
     }
     function onHttp2FrameError(type, code, id) {
       if (id === 0) {
-        const err = new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code}`);
-        this[kSocket][kError] = err;
-        this[kClient][kOnError](err);
+        const err2 = new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code}`);
+        this[kSocket][kError] = err2;
+        this[kClient][kOnError](err2);
       }
     }
     function onHttp2SessionEnd() {
-      const err = new SocketError("other side closed", util.getSocketInfo(this[kSocket]));
-      this.destroy(err);
-      util.destroy(this[kSocket], err);
+      const err2 = new SocketError("other side closed", util.getSocketInfo(this[kSocket]));
+      this.destroy(err2);
+      util.destroy(this[kSocket], err2);
     }
     function onHTTP2GoAway(code) {
-      const err = this[kError] || new SocketError(`HTTP/2: "GOAWAY" frame received with code ${code}`, util.getSocketInfo(this));
+      const err2 = this[kError] || new SocketError(`HTTP/2: "GOAWAY" frame received with code ${code}`, util.getSocketInfo(this));
       const client = this[kClient];
       client[kSocket] = null;
       client[kHTTPContext] = null;
       if (this[kHTTP2Session] != null) {
-        this[kHTTP2Session].destroy(err);
+        this[kHTTP2Session].destroy(err2);
         this[kHTTP2Session] = null;
       }
-      util.destroy(this[kSocket], err);
+      util.destroy(this[kSocket], err2);
       if (client[kRunningIdx] < client[kQueue].length) {
         const request2 = client[kQueue][client[kRunningIdx]];
         client[kQueue][client[kRunningIdx]++] = null;
-        util.errorRequest(client, request2, err);
+        util.errorRequest(client, request2, err2);
         client[kPendingIdx] = client[kRunningIdx];
       }
       assert(client[kRunning] === 0);
-      client.emit("disconnect", client[kUrl], [client], err);
+      client.emit("disconnect", client[kUrl], [client], err2);
       client[kResume]();
     }
     function shouldSendContentLength(method) {
@@ -7118,8 +7118,8 @@ var require_client_h2 = __commonJS({
       };
       try {
         request2.onConnect(abort);
-      } catch (err) {
-        util.errorRequest(client, request2, err);
+      } catch (err2) {
+        util.errorRequest(client, request2, err2);
       }
       if (request2.aborted) {
         return false;
@@ -7217,9 +7217,9 @@ var require_client_h2 = __commonJS({
         const { [HTTP2_HEADER_STATUS]: statusCode, ...realHeaders } = headers2;
         request2.onResponseStarted();
         if (request2.aborted) {
-          const err = new RequestAbortedError();
-          util.errorRequest(client, request2, err);
-          util.destroy(stream, err);
+          const err2 = new RequestAbortedError();
+          util.errorRequest(client, request2, err2);
+          util.destroy(stream, err2);
           return;
         }
         if (request2.onHeaders(Number(statusCode), parseH2Headers(realHeaders), stream.resume.bind(stream), "") === false) {
@@ -7249,8 +7249,8 @@ var require_client_h2 = __commonJS({
           session.unref();
         }
       });
-      stream.once("error", function(err) {
-        abort(err);
+      stream.once("error", function(err2) {
+        abort(err2);
       });
       stream.once("frameError", (type, code) => {
         abort(new InformationalError(`HTTP/2: "frameError" received - type ${type}, code ${code}`));
@@ -7351,13 +7351,13 @@ var require_client_h2 = __commonJS({
     }
     function writeStream(abort, socket, expectsPayload, h2stream, body, client, request2, contentLength) {
       assert(contentLength !== 0 || client[kRunning] === 0, "stream body cannot be pipelined");
-      const pipe = pipeline2(
+      const pipe = pipeline3(
         body,
         h2stream,
-        (err) => {
-          if (err) {
-            util.destroy(pipe, err);
-            abort(err);
+        (err2) => {
+          if (err2) {
+            util.destroy(pipe, err2);
+            abort(err2);
           } else {
             util.removeAllListeners(pipe);
             request2.onRequestSent();
@@ -7390,8 +7390,8 @@ var require_client_h2 = __commonJS({
           socket[kReset] = true;
         }
         client[kResume]();
-      } catch (err) {
-        abort(err);
+      } catch (err2) {
+        abort(err2);
       }
     }
     async function writeIterable(abort, h2stream, body, client, request2, socket, contentLength, expectsPayload) {
@@ -7404,12 +7404,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve2, reject) => {
+      const waitForDrain = () => new Promise((resolve3, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve2;
+          callback = resolve3;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7430,8 +7430,8 @@ var require_client_h2 = __commonJS({
           socket[kReset] = true;
         }
         client[kResume]();
-      } catch (err) {
-        abort(err);
+      } catch (err2) {
+        abort(err2);
       } finally {
         h2stream.off("close", onDrain).off("drain", onDrain);
       }
@@ -7840,7 +7840,7 @@ var require_client = __commonJS({
         this[kRunningIdx] = 0;
         this[kPendingIdx] = 0;
         this[kResume] = (sync) => resume(this, sync);
-        this[kOnError] = (err) => onError(this, err);
+        this[kOnError] = (err2) => onError(this, err2);
       }
       get pipelining() {
         return this[kPipelining];
@@ -7888,30 +7888,30 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve2) => {
+        return new Promise((resolve3) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve2;
+            this[kClosedResolve] = resolve3;
           } else {
-            resolve2(null);
+            resolve3(null);
           }
         });
       }
-      async [kDestroy](err) {
-        return new Promise((resolve2) => {
+      async [kDestroy](err2) {
+        return new Promise((resolve3) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i = 0; i < requests.length; i++) {
             const request2 = requests[i];
-            util.errorRequest(this, request2, err);
+            util.errorRequest(this, request2, err2);
           }
           const callback = () => {
             if (this[kClosedResolve]) {
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve2(null);
+            resolve3(null);
           };
           if (this[kHTTPContext]) {
-            this[kHTTPContext].destroy(err, callback);
+            this[kHTTPContext].destroy(err2, callback);
             this[kHTTPContext] = null;
           } else {
             queueMicrotask(callback);
@@ -7921,13 +7921,13 @@ var require_client = __commonJS({
       }
     };
     var createRedirectInterceptor = require_redirect_interceptor();
-    function onError(client, err) {
-      if (client[kRunning] === 0 && err.code !== "UND_ERR_INFO" && err.code !== "UND_ERR_SOCKET") {
+    function onError(client, err2) {
+      if (client[kRunning] === 0 && err2.code !== "UND_ERR_INFO" && err2.code !== "UND_ERR_SOCKET") {
         assert(client[kPendingIdx] === client[kRunningIdx]);
         const requests = client[kQueue].splice(client[kRunningIdx]);
         for (let i = 0; i < requests.length; i++) {
           const request2 = requests[i];
-          util.errorRequest(client, request2, err);
+          util.errorRequest(client, request2, err2);
         }
         assert(client[kSize] === 0);
       }
@@ -7959,7 +7959,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve2, reject) => {
+        const socket = await new Promise((resolve3, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7967,11 +7967,11 @@ var require_client = __commonJS({
             port,
             servername: client[kServerName],
             localAddress: client[kLocalAddress]
-          }, (err, socket2) => {
-            if (err) {
-              reject(err);
+          }, (err2, socket2) => {
+            if (err2) {
+              reject(err2);
             } else {
-              resolve2(socket2);
+              resolve3(socket2);
             }
           });
         });
@@ -7982,9 +7982,9 @@ var require_client = __commonJS({
         assert(socket);
         try {
           client[kHTTPContext] = socket.alpnProtocol === "h2" ? await connectH2(client, socket) : await connectH1(client, socket);
-        } catch (err) {
+        } catch (err2) {
           socket.destroy().on("error", noop3);
-          throw err;
+          throw err2;
         }
         client[kConnecting] = false;
         socket[kCounter] = 0;
@@ -8007,7 +8007,7 @@ var require_client = __commonJS({
           });
         }
         client.emit("connect", client[kUrl], [client]);
-      } catch (err) {
+      } catch (err2) {
         if (client.destroyed) {
           return;
         }
@@ -8024,19 +8024,19 @@ var require_client = __commonJS({
               localAddress: client[kLocalAddress]
             },
             connector: client[kConnector],
-            error: err
+            error: err2
           });
         }
-        if (err.code === "ERR_TLS_CERT_ALTNAME_INVALID") {
+        if (err2.code === "ERR_TLS_CERT_ALTNAME_INVALID") {
           assert(client[kRunning] === 0);
           while (client[kPending] > 0 && client[kQueue][client[kPendingIdx]].servername === client[kServerName]) {
             const request2 = client[kQueue][client[kPendingIdx]++];
-            util.errorRequest(client, request2, err);
+            util.errorRequest(client, request2, err2);
           }
         } else {
-          onError(client, err);
+          onError(client, err2);
         }
-        client.emit("connectionError", client[kUrl], [client], err);
+        client.emit("connectionError", client[kUrl], [client], err2);
       }
       client[kResume]();
     }
@@ -8262,11 +8262,11 @@ var require_pool_base = __commonJS({
         this[kOnConnect] = (origin, targets) => {
           pool.emit("connect", origin, [pool, ...targets]);
         };
-        this[kOnDisconnect] = (origin, targets, err) => {
-          pool.emit("disconnect", origin, [pool, ...targets], err);
+        this[kOnDisconnect] = (origin, targets, err2) => {
+          pool.emit("disconnect", origin, [pool, ...targets], err2);
         };
-        this[kOnConnectionError] = (origin, targets, err) => {
-          pool.emit("connectionError", origin, [pool, ...targets], err);
+        this[kOnConnectionError] = (origin, targets, err2) => {
+          pool.emit("connectionError", origin, [pool, ...targets], err2);
         };
         this[kStats] = new PoolStats(this);
       }
@@ -8307,20 +8307,20 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve2) => {
-            this[kClosedResolve] = resolve2;
+          await new Promise((resolve3) => {
+            this[kClosedResolve] = resolve3;
           });
         }
       }
-      async [kDestroy](err) {
+      async [kDestroy](err2) {
         while (true) {
           const item = this[kQueue].shift();
           if (!item) {
             break;
           }
-          item.handler.onError(err);
+          item.handler.onError(err2);
         }
-        await Promise.all(this[kClients].map((c) => c.destroy(err)));
+        await Promise.all(this[kClients].map((c) => c.destroy(err2)));
       }
       [kDispatch](opts, handler2) {
         const dispatcher = this[kGetDispatcher]();
@@ -8533,8 +8533,8 @@ var require_balanced_pool = __commonJS({
           this._updateBalancedPoolStats();
         });
         pool.on("disconnect", (...args) => {
-          const err = args[2];
-          if (err && err.code === "UND_ERR_SOCKET") {
+          const err2 = args[2];
+          if (err2 && err2.code === "UND_ERR_SOCKET") {
             pool[kWeight] = Math.max(1, pool[kWeight] - this[kErrorPenalty]);
             this._updateBalancedPoolStats();
           }
@@ -8653,11 +8653,11 @@ var require_agent = __commonJS({
         this[kOnConnect] = (origin, targets) => {
           this.emit("connect", origin, [this, ...targets]);
         };
-        this[kOnDisconnect] = (origin, targets, err) => {
-          this.emit("disconnect", origin, [this, ...targets], err);
+        this[kOnDisconnect] = (origin, targets, err2) => {
+          this.emit("disconnect", origin, [this, ...targets], err2);
         };
-        this[kOnConnectionError] = (origin, targets, err) => {
-          this.emit("connectionError", origin, [this, ...targets], err);
+        this[kOnConnectionError] = (origin, targets, err2) => {
+          this.emit("connectionError", origin, [this, ...targets], err2);
         };
       }
       get [kRunning]() {
@@ -8689,10 +8689,10 @@ var require_agent = __commonJS({
         this[kClients].clear();
         await Promise.all(closePromises);
       }
-      async [kDestroy](err) {
+      async [kDestroy](err2) {
         const destroyPromises = [];
         for (const client of this[kClients].values()) {
-          destroyPromises.push(client.destroy(err));
+          destroyPromises.push(client.destroy(err2));
         }
         this[kClients].clear();
         await Promise.all(destroyPromises);
@@ -8776,8 +8776,8 @@ var require_proxy_agent = __commonJS({
       async [kClose]() {
         return this.#client.close();
       }
-      async [kDestroy](err) {
-        return this.#client.destroy(err);
+      async [kDestroy](err2) {
+        return this.#client.destroy(err2);
       }
     };
     var ProxyAgent2 = class extends DispatcherBase {
@@ -8858,11 +8858,11 @@ var require_proxy_agent = __commonJS({
                 servername = opts2.servername;
               }
               this[kConnectEndpoint]({ ...opts2, servername, httpSocket: socket }, callback);
-            } catch (err) {
-              if (err.code === "ERR_TLS_CERT_ALTNAME_INVALID") {
-                callback(new SecureProxyConnectionError(err));
+            } catch (err2) {
+              if (err2.code === "ERR_TLS_CERT_ALTNAME_INVALID") {
+                callback(new SecureProxyConnectionError(err2));
               } else {
-                callback(err);
+                callback(err2);
               }
             }
           }
@@ -8981,13 +8981,13 @@ var require_env_http_proxy_agent = __commonJS({
           await this[kHttpsProxyAgent].close();
         }
       }
-      async [kDestroy](err) {
-        await this[kNoProxyAgent].destroy(err);
+      async [kDestroy](err2) {
+        await this[kNoProxyAgent].destroy(err2);
         if (!this[kHttpProxyAgent][kDestroyed]) {
-          await this[kHttpProxyAgent].destroy(err);
+          await this[kHttpProxyAgent].destroy(err2);
         }
         if (!this[kHttpsProxyAgent][kDestroyed]) {
-          await this[kHttpsProxyAgent].destroy(err);
+          await this[kHttpsProxyAgent].destroy(err2);
         }
       }
       #getProxyAgentForUrl(url) {
@@ -9190,8 +9190,8 @@ var require_retry_handler = __commonJS({
       onBodySent(chunk) {
         if (this.handler.onBodySent) return this.handler.onBodySent(chunk);
       }
-      static [kRetryHandlerDefaultRetry](err, { state, opts }, cb) {
-        const { statusCode, code, headers } = err;
+      static [kRetryHandlerDefaultRetry](err2, { state, opts }, cb) {
+        const { statusCode, code, headers } = err2;
         const { method, retryOptions } = opts;
         const {
           maxRetries,
@@ -9204,19 +9204,19 @@ var require_retry_handler = __commonJS({
         } = retryOptions;
         const { counter } = state;
         if (code && code !== "UND_ERR_REQ_RETRY" && !errorCodes.includes(code)) {
-          cb(err);
+          cb(err2);
           return;
         }
         if (Array.isArray(methods) && !methods.includes(method)) {
-          cb(err);
+          cb(err2);
           return;
         }
         if (statusCode != null && Array.isArray(statusCodes) && !statusCodes.includes(statusCode)) {
-          cb(err);
+          cb(err2);
           return;
         }
         if (counter > maxRetries) {
-          cb(err);
+          cb(err2);
           return;
         }
         let retryAfterHeader = headers?.["retry-after"];
@@ -9348,11 +9348,11 @@ var require_retry_handler = __commonJS({
             statusMessage
           );
         }
-        const err = new RequestRetryError("Request failed", statusCode, {
+        const err2 = new RequestRetryError("Request failed", statusCode, {
           headers,
           data: { count: this.retryCount }
         });
-        this.abort(err);
+        this.abort(err2);
         return false;
       }
       onData(chunk) {
@@ -9363,9 +9363,9 @@ var require_retry_handler = __commonJS({
         this.retryCount = 0;
         return this.handler.onComplete(rawTrailers);
       }
-      onError(err) {
+      onError(err2) {
         if (this.aborted || isDisturbed(this.opts.body) || this.headersSent && this.resume == null) {
-          return this.handler.onError(err);
+          return this.handler.onError(err2);
         }
         if (this.retryCount - this.retryCountCheckpoint > 0) {
           this.retryCount = this.retryCountCheckpoint + (this.retryCount - this.retryCountCheckpoint);
@@ -9373,16 +9373,16 @@ var require_retry_handler = __commonJS({
           this.retryCount += 1;
         }
         this.retryOpts.retry(
-          err,
+          err2,
           {
             state: { counter: this.retryCount },
             opts: { retryOptions: this.retryOpts, ...this.opts }
           },
           onRetry.bind(this)
         );
-        function onRetry(err2) {
-          if (err2 != null || this.aborted || isDisturbed(this.opts.body)) {
-            return this.handler.onError(err2);
+        function onRetry(err3) {
+          if (err3 != null || this.aborted || isDisturbed(this.opts.body)) {
+            return this.handler.onError(err3);
           }
           if (this.start !== 0) {
             const headers = { range: `bytes=${this.start}-${this.end ?? ""}` };
@@ -9400,8 +9400,8 @@ var require_retry_handler = __commonJS({
           try {
             this.retryCountCheckpoint = this.retryCount;
             this.dispatch(this.opts, this);
-          } catch (err3) {
-            this.handler.onError(err3);
+          } catch (err4) {
+            this.handler.onError(err4);
           }
         }
       }
@@ -9484,22 +9484,22 @@ var require_readable = __commonJS({
         this[kContentLength] = contentLength;
         this[kReading] = false;
       }
-      destroy(err) {
-        if (!err && !this._readableState.endEmitted) {
-          err = new RequestAbortedError();
+      destroy(err2) {
+        if (!err2 && !this._readableState.endEmitted) {
+          err2 = new RequestAbortedError();
         }
-        if (err) {
+        if (err2) {
           this[kAbort]();
         }
-        return super.destroy(err);
+        return super.destroy(err2);
       }
-      _destroy(err, callback) {
+      _destroy(err2, callback) {
         if (!this[kReading]) {
           setImmediate(() => {
-            callback(err);
+            callback(err2);
           });
         } else {
-          callback(err);
+          callback(err2);
         }
       }
       on(ev, ...args) {
@@ -9577,7 +9577,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve2, reject) => {
+        return await new Promise((resolve3, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9590,7 +9590,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve2(null);
+              resolve3(null);
             }
           }).on("error", noop3).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9609,12 +9609,12 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve2, reject) => {
+      return new Promise((resolve3, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
-            stream.on("error", (err) => {
-              reject(err);
+            stream.on("error", (err2) => {
+              reject(err2);
             }).on("close", () => {
               reject(new TypeError("unusable"));
             });
@@ -9626,13 +9626,13 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve2,
+              resolve: resolve3,
               reject,
               length: 0,
               body: []
             };
-            stream.on("error", function(err) {
-              consumeFinish(this[kConsume], err);
+            stream.on("error", function(err2) {
+              consumeFinish(this[kConsume], err2);
             }).on("close", function() {
               if (this[kConsume].body !== null) {
                 consumeFinish(this[kConsume], new RequestAbortedError());
@@ -9696,34 +9696,34 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve2, stream, length } = consume2;
+      const { type, body, resolve: resolve3, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve2(chunksDecode(body, length));
+          resolve3(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve2(JSON.parse(chunksDecode(body, length)));
+          resolve3(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve2(chunksConcat(body, length).buffer);
+          resolve3(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve2(new Blob(body, { type: stream[kContentType] }));
+          resolve3(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve2(chunksConcat(body, length));
+          resolve3(chunksConcat(body, length));
         }
         consumeFinish(consume2);
-      } catch (err) {
-        stream.destroy(err);
+      } catch (err2) {
+        stream.destroy(err2);
       }
     }
     function consumePush(consume2, chunk) {
       consume2.length += chunk.length;
       consume2.body.push(chunk);
     }
-    function consumeFinish(consume2, err) {
+    function consumeFinish(consume2, err2) {
       if (consume2.body === null) {
         return;
       }
-      if (err) {
-        consume2.reject(err);
+      if (err2) {
+        consume2.reject(err2);
       } else {
         consume2.resolve();
       }
@@ -9832,11 +9832,11 @@ var require_api_request = __commonJS({
             throw new InvalidArgumentError("invalid onInfo callback");
           }
           super("UNDICI_REQUEST");
-        } catch (err) {
+        } catch (err2) {
           if (util.isStream(body)) {
-            util.destroy(body.on("error", util.nop), err);
+            util.destroy(body.on("error", util.nop), err2);
           }
-          throw err;
+          throw err2;
         }
         this.method = method;
         this.responseHeaders = responseHeaders || null;
@@ -9854,8 +9854,8 @@ var require_api_request = __commonJS({
         this.reason = null;
         this.removeAbortListener = null;
         if (util.isStream(body)) {
-          body.on("error", (err) => {
-            this.onError(err);
+          body.on("error", (err2) => {
+            this.onError(err2);
           });
         }
         if (this.signal) {
@@ -9937,23 +9937,23 @@ var require_api_request = __commonJS({
         util.parseHeaders(trailers, this.trailers);
         this.res.push(null);
       }
-      onError(err) {
+      onError(err2) {
         const { res, callback, body, opaque } = this;
         if (callback) {
           this.callback = null;
           queueMicrotask(() => {
-            this.runInAsyncScope(callback, null, err, { opaque });
+            this.runInAsyncScope(callback, null, err2, { opaque });
           });
         }
         if (res) {
           this.res = null;
           queueMicrotask(() => {
-            util.destroy(res, err);
+            util.destroy(res, err2);
           });
         }
         if (body) {
           this.body = null;
-          util.destroy(body, err);
+          util.destroy(body, err2);
         }
         if (this.removeAbortListener) {
           res?.off("close", this.removeAbortListener);
@@ -9964,20 +9964,20 @@ var require_api_request = __commonJS({
     };
     function request2(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve2, reject) => {
-          request2.call(this, opts, (err, data) => {
-            return err ? reject(err) : resolve2(data);
+        return new Promise((resolve3, reject) => {
+          request2.call(this, opts, (err2, data) => {
+            return err2 ? reject(err2) : resolve3(data);
           });
         });
       }
       try {
         this.dispatch(opts, new RequestHandler(opts, callback));
-      } catch (err) {
+      } catch (err2) {
         if (typeof callback !== "function") {
-          throw err;
+          throw err2;
         }
         const opaque = opts?.opaque;
-        queueMicrotask(() => callback(err, { opaque }));
+        queueMicrotask(() => callback(err2, { opaque }));
       }
     }
     module.exports = request2;
@@ -10070,11 +10070,11 @@ var require_api_stream = __commonJS({
             throw new InvalidArgumentError("invalid onInfo callback");
           }
           super("UNDICI_STREAM");
-        } catch (err) {
+        } catch (err2) {
           if (util.isStream(body)) {
-            util.destroy(body.on("error", util.nop), err);
+            util.destroy(body.on("error", util.nop), err2);
           }
-          throw err;
+          throw err2;
         }
         this.responseHeaders = responseHeaders || null;
         this.opaque = opaque || null;
@@ -10088,8 +10088,8 @@ var require_api_stream = __commonJS({
         this.onInfo = onInfo || null;
         this.throwOnError = throwOnError || false;
         if (util.isStream(body)) {
-          body.on("error", (err) => {
-            this.onError(err);
+          body.on("error", (err2) => {
+            this.onError(err2);
           });
         }
         addSignal(this, signal);
@@ -10137,15 +10137,15 @@ var require_api_stream = __commonJS({
           if (!res || typeof res.write !== "function" || typeof res.end !== "function" || typeof res.on !== "function") {
             throw new InvalidReturnValueError("expected Writable");
           }
-          finished(res, { readable: false }, (err) => {
+          finished(res, { readable: false }, (err2) => {
             const { callback: callback2, res: res2, opaque: opaque2, trailers, abort } = this;
             this.res = null;
-            if (err || !res2.readable) {
-              util.destroy(res2, err);
+            if (err2 || !res2.readable) {
+              util.destroy(res2, err2);
             }
             this.callback = null;
-            this.runInAsyncScope(callback2, null, err || null, { opaque: opaque2, trailers });
-            if (err) {
+            this.runInAsyncScope(callback2, null, err2 || null, { opaque: opaque2, trailers });
+            if (err2) {
               abort();
             }
           });
@@ -10168,41 +10168,41 @@ var require_api_stream = __commonJS({
         this.trailers = util.parseHeaders(trailers);
         res.end();
       }
-      onError(err) {
+      onError(err2) {
         const { res, callback, opaque, body } = this;
         removeSignal(this);
         this.factory = null;
         if (res) {
           this.res = null;
-          util.destroy(res, err);
+          util.destroy(res, err2);
         } else if (callback) {
           this.callback = null;
           queueMicrotask(() => {
-            this.runInAsyncScope(callback, null, err, { opaque });
+            this.runInAsyncScope(callback, null, err2, { opaque });
           });
         }
         if (body) {
           this.body = null;
-          util.destroy(body, err);
+          util.destroy(body, err2);
         }
       }
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve2, reject) => {
-          stream.call(this, opts, factory, (err, data) => {
-            return err ? reject(err) : resolve2(data);
+        return new Promise((resolve3, reject) => {
+          stream.call(this, opts, factory, (err2, data) => {
+            return err2 ? reject(err2) : resolve3(data);
           });
         });
       }
       try {
         this.dispatch(opts, new StreamHandler(opts, factory, callback));
-      } catch (err) {
+      } catch (err2) {
         if (typeof callback !== "function") {
-          throw err;
+          throw err2;
         }
         const opaque = opts?.opaque;
-        queueMicrotask(() => callback(err, { opaque }));
+        queueMicrotask(() => callback(err2, { opaque }));
       }
     }
     module.exports = stream;
@@ -10240,9 +10240,9 @@ var require_api_pipeline = __commonJS({
           resume();
         }
       }
-      _destroy(err, callback) {
+      _destroy(err2, callback) {
         this._read();
-        callback(err);
+        callback(err2);
       }
     };
     var PipelineResponse = class extends Readable {
@@ -10253,11 +10253,11 @@ var require_api_pipeline = __commonJS({
       _read() {
         this[kResume]();
       }
-      _destroy(err, callback) {
-        if (!err && !this._readableState.endEmitted) {
-          err = new RequestAbortedError();
+      _destroy(err2, callback) {
+        if (!err2 && !this._readableState.endEmitted) {
+          err2 = new RequestAbortedError();
         }
-        callback(err);
+        callback(err2);
       }
     };
     var PipelineHandler = class extends AsyncResource {
@@ -10303,19 +10303,19 @@ var require_api_pipeline = __commonJS({
               req[kResume] = callback;
             }
           },
-          destroy: (err, callback) => {
+          destroy: (err2, callback) => {
             const { body, req, res, ret, abort } = this;
-            if (!err && !ret._readableState.endEmitted) {
-              err = new RequestAbortedError();
+            if (!err2 && !ret._readableState.endEmitted) {
+              err2 = new RequestAbortedError();
             }
-            if (abort && err) {
+            if (abort && err2) {
               abort();
             }
-            util.destroy(body, err);
-            util.destroy(req, err);
-            util.destroy(res, err);
+            util.destroy(body, err2);
+            util.destroy(req, err2);
+            util.destroy(res, err2);
             removeSignal(this);
-            callback(err);
+            callback(err2);
           }
         }).on("prefinish", () => {
           const { req } = this;
@@ -10356,9 +10356,9 @@ var require_api_pipeline = __commonJS({
             body: this.res,
             context: context3
           });
-        } catch (err) {
+        } catch (err2) {
           this.res.on("error", util.nop);
-          throw err;
+          throw err2;
         }
         if (!body || typeof body.on !== "function") {
           throw new InvalidReturnValueError("expected Readable");
@@ -10368,9 +10368,9 @@ var require_api_pipeline = __commonJS({
           if (!ret.push(chunk) && body2.pause) {
             body2.pause();
           }
-        }).on("error", (err) => {
+        }).on("error", (err2) => {
           const { ret } = this;
-          util.destroy(ret, err);
+          util.destroy(ret, err2);
         }).on("end", () => {
           const { ret } = this;
           ret.push(null);
@@ -10390,22 +10390,22 @@ var require_api_pipeline = __commonJS({
         const { res } = this;
         res.push(null);
       }
-      onError(err) {
+      onError(err2) {
         const { ret } = this;
         this.handler = null;
-        util.destroy(ret, err);
+        util.destroy(ret, err2);
       }
     };
-    function pipeline2(opts, handler2) {
+    function pipeline3(opts, handler2) {
       try {
         const pipelineHandler = new PipelineHandler(opts, handler2);
         this.dispatch({ ...opts, body: pipelineHandler.req }, pipelineHandler);
         return pipelineHandler.ret;
-      } catch (err) {
-        return new PassThrough().destroy(err);
+      } catch (err2) {
+        return new PassThrough().destroy(err2);
       }
     }
-    module.exports = pipeline2;
+    module.exports = pipeline3;
   }
 });
 
@@ -10463,22 +10463,22 @@ var require_api_upgrade = __commonJS({
           context: context3
         });
       }
-      onError(err) {
+      onError(err2) {
         const { callback, opaque } = this;
         removeSignal(this);
         if (callback) {
           this.callback = null;
           queueMicrotask(() => {
-            this.runInAsyncScope(callback, null, err, { opaque });
+            this.runInAsyncScope(callback, null, err2, { opaque });
           });
         }
       }
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve2, reject) => {
-          upgrade.call(this, opts, (err, data) => {
-            return err ? reject(err) : resolve2(data);
+        return new Promise((resolve3, reject) => {
+          upgrade.call(this, opts, (err2, data) => {
+            return err2 ? reject(err2) : resolve3(data);
           });
         });
       }
@@ -10489,12 +10489,12 @@ var require_api_upgrade = __commonJS({
           method: opts.method || "GET",
           upgrade: opts.protocol || "Websocket"
         }, upgradeHandler);
-      } catch (err) {
+      } catch (err2) {
         if (typeof callback !== "function") {
-          throw err;
+          throw err2;
         }
         const opaque = opts?.opaque;
-        queueMicrotask(() => callback(err, { opaque }));
+        queueMicrotask(() => callback(err2, { opaque }));
       }
     }
     module.exports = upgrade;
@@ -10557,34 +10557,34 @@ var require_api_connect = __commonJS({
           context: context3
         });
       }
-      onError(err) {
+      onError(err2) {
         const { callback, opaque } = this;
         removeSignal(this);
         if (callback) {
           this.callback = null;
           queueMicrotask(() => {
-            this.runInAsyncScope(callback, null, err, { opaque });
+            this.runInAsyncScope(callback, null, err2, { opaque });
           });
         }
       }
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve2, reject) => {
-          connect.call(this, opts, (err, data) => {
-            return err ? reject(err) : resolve2(data);
+        return new Promise((resolve3, reject) => {
+          connect.call(this, opts, (err2, data) => {
+            return err2 ? reject(err2) : resolve3(data);
           });
         });
       }
       try {
         const connectHandler = new ConnectHandler(opts, callback);
         this.dispatch({ ...opts, method: "CONNECT" }, connectHandler);
-      } catch (err) {
+      } catch (err2) {
         if (typeof callback !== "function") {
-          throw err;
+          throw err2;
         }
         const opaque = opts?.opaque;
-        queueMicrotask(() => callback(err, { opaque }));
+        queueMicrotask(() => callback(err2, { opaque }));
       }
     }
     module.exports = connect;
@@ -10879,7 +10879,7 @@ var require_mock_utils = __commonJS({
         const responseData = getResponseData2(body);
         const responseHeaders = generateKeyValues(headers);
         const responseTrailers = generateKeyValues(trailers);
-        handler2.onConnect?.((err) => handler2.onError(err), null);
+        handler2.onConnect?.((err2) => handler2.onError(err2), null);
         handler2.onHeaders?.(statusCode, responseHeaders, resume, getStatusText(statusCode));
         handler2.onData?.(Buffer.from(responseData));
         handler2.onComplete?.(responseTrailers);
@@ -11255,13 +11255,13 @@ var require_pluralizer = __commonJS({
 var require_pending_interceptors_formatter = __commonJS({
   "node_modules/undici/lib/mock/pending-interceptors-formatter.js"(exports, module) {
     "use strict";
-    var { Transform } = __require("node:stream");
+    var { Transform: Transform2 } = __require("node:stream");
     var { Console } = __require("node:console");
     var PERSISTENT = process.versions.icu ? "\u2705" : "Y ";
     var NOT_PERSISTENT = process.versions.icu ? "\u274C" : "N ";
     module.exports = class PendingInterceptorsFormatter {
       constructor({ disableColors } = {}) {
-        this.transform = new Transform({
+        this.transform = new Transform2({
           transform(chunk, _enc, cb) {
             cb(null, chunk);
           }
@@ -11593,12 +11593,12 @@ var require_dump = __commonJS({
           statusMessage
         );
       }
-      onError(err) {
+      onError(err2) {
         if (this.#dumped) {
           return;
         }
-        err = this.#reason ?? err;
-        this.#handler.onError(err);
+        err2 = this.#reason ?? err2;
+        this.#handler.onError(err2);
       }
       onData(chunk) {
         this.#size = this.#size + chunk.length;
@@ -11646,7 +11646,7 @@ var require_dns = __commonJS({
   "node_modules/undici/lib/interceptor/dns.js"(exports, module) {
     "use strict";
     var { isIP } = __require("node:net");
-    var { lookup } = __require("node:dns");
+    var { lookup: lookup2 } = __require("node:dns");
     var DecoratorHandler = require_decorator_handler();
     var { InvalidArgumentError, InformationalError } = require_errors();
     var maxInt = Math.pow(2, 31) - 1;
@@ -11685,9 +11685,9 @@ var require_dns = __commonJS({
           maxItems: this.#maxItems
         };
         if (ips == null) {
-          this.lookup(origin, newOpts, (err, addresses) => {
-            if (err || addresses == null || addresses.length === 0) {
-              cb(err ?? new InformationalError("No DNS entries found"));
+          this.lookup(origin, newOpts, (err2, addresses) => {
+            if (err2 || addresses == null || addresses.length === 0) {
+              cb(err2 ?? new InformationalError("No DNS entries found"));
               return;
             }
             this.setRecords(origin, addresses);
@@ -11736,16 +11736,16 @@ var require_dns = __commonJS({
         }
       }
       #defaultLookup(origin, opts, cb) {
-        lookup(
+        lookup2(
           origin.hostname,
           {
             all: true,
             family: this.dualStack === false ? this.affinity : 0,
             order: "ipv4first"
           },
-          (err, addresses) => {
-            if (err) {
-              return cb(err);
+          (err2, addresses) => {
+            if (err2) {
+              return cb(err2);
             }
             const results = /* @__PURE__ */ new Map();
             for (const addr of addresses) {
@@ -11830,14 +11830,14 @@ var require_dns = __commonJS({
         this.#state = state;
         this.#dispatch = dispatch;
       }
-      onError(err) {
-        switch (err.code) {
+      onError(err2) {
+        switch (err2.code) {
           case "ETIMEDOUT":
           case "ECONNREFUSED": {
             if (this.#state.dualStack) {
-              this.#state.runLookup(this.#origin, this.#opts, (err2, newOrigin) => {
-                if (err2) {
-                  return this.#handler.onError(err2);
+              this.#state.runLookup(this.#origin, this.#opts, (err3, newOrigin) => {
+                if (err3) {
+                  return this.#handler.onError(err3);
                 }
                 const dispatchOpts = {
                   ...this.#opts,
@@ -11847,14 +11847,14 @@ var require_dns = __commonJS({
               });
               return;
             }
-            this.#handler.onError(err);
+            this.#handler.onError(err2);
             return;
           }
           case "ENOTFOUND":
             this.#state.deleteRecord(this.#origin);
           // eslint-disable-next-line no-fallthrough
           default:
-            this.#handler.onError(err);
+            this.#handler.onError(err2);
             break;
         }
       }
@@ -11903,9 +11903,9 @@ var require_dns = __commonJS({
           if (isIP(origin.hostname) !== 0) {
             return dispatch(origDispatchOpts, handler2);
           }
-          instance.runLookup(origin, origDispatchOpts, (err, newOrigin) => {
-            if (err) {
-              return handler2.onError(err);
+          instance.runLookup(origin, origDispatchOpts, (err2, newOrigin) => {
+            if (err2) {
+              return handler2.onError(err2);
             }
             let dispatchOpts = null;
             dispatchOpts = {
@@ -11956,7 +11956,7 @@ var require_headers = __commonJS({
       while (j > i && isHTTPWhiteSpaceCharCode(potentialValue.charCodeAt(i))) ++i;
       return i === 0 && j === potentialValue.length ? potentialValue : potentialValue.substring(i, j);
     }
-    function fill(headers, object) {
+    function fill2(headers, object) {
       if (Array.isArray(object)) {
         for (let i = 0; i < object.length; ++i) {
           const header2 = object[i];
@@ -12169,7 +12169,7 @@ var require_headers = __commonJS({
         }
       }
     };
-    var Headers2 = class _Headers {
+    var Headers3 = class _Headers {
       #guard;
       #headersList;
       constructor(init = void 0) {
@@ -12181,24 +12181,24 @@ var require_headers = __commonJS({
         this.#guard = "none";
         if (init !== void 0) {
           init = webidl.converters.HeadersInit(init, "Headers contructor", "init");
-          fill(this, init);
+          fill2(this, init);
         }
       }
       // https://fetch.spec.whatwg.org/#dom-headers-append
       append(name, value) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 2, "Headers.append");
-        const prefix = "Headers.append";
-        name = webidl.converters.ByteString(name, prefix, "name");
-        value = webidl.converters.ByteString(value, prefix, "value");
+        const prefix2 = "Headers.append";
+        name = webidl.converters.ByteString(name, prefix2, "name");
+        value = webidl.converters.ByteString(value, prefix2, "value");
         return appendHeader(this, name, value);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-delete
       delete(name) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 1, "Headers.delete");
-        const prefix = "Headers.delete";
-        name = webidl.converters.ByteString(name, prefix, "name");
+        const prefix2 = "Headers.delete";
+        name = webidl.converters.ByteString(name, prefix2, "name");
         if (!isValidHeaderName(name)) {
           throw webidl.errors.invalidArgument({
             prefix: "Headers.delete",
@@ -12218,11 +12218,11 @@ var require_headers = __commonJS({
       get(name) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 1, "Headers.get");
-        const prefix = "Headers.get";
-        name = webidl.converters.ByteString(name, prefix, "name");
+        const prefix2 = "Headers.get";
+        name = webidl.converters.ByteString(name, prefix2, "name");
         if (!isValidHeaderName(name)) {
           throw webidl.errors.invalidArgument({
-            prefix,
+            prefix: prefix2,
             value: name,
             type: "header name"
           });
@@ -12233,11 +12233,11 @@ var require_headers = __commonJS({
       has(name) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 1, "Headers.has");
-        const prefix = "Headers.has";
-        name = webidl.converters.ByteString(name, prefix, "name");
+        const prefix2 = "Headers.has";
+        name = webidl.converters.ByteString(name, prefix2, "name");
         if (!isValidHeaderName(name)) {
           throw webidl.errors.invalidArgument({
-            prefix,
+            prefix: prefix2,
             value: name,
             type: "header name"
           });
@@ -12248,19 +12248,19 @@ var require_headers = __commonJS({
       set(name, value) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 2, "Headers.set");
-        const prefix = "Headers.set";
-        name = webidl.converters.ByteString(name, prefix, "name");
-        value = webidl.converters.ByteString(value, prefix, "value");
+        const prefix2 = "Headers.set";
+        name = webidl.converters.ByteString(name, prefix2, "name");
+        value = webidl.converters.ByteString(value, prefix2, "value");
         value = headerValueNormalize(value);
         if (!isValidHeaderName(name)) {
           throw webidl.errors.invalidArgument({
-            prefix,
+            prefix: prefix2,
             value: name,
             type: "header name"
           });
         } else if (!isValidHeaderValue(value)) {
           throw webidl.errors.invalidArgument({
-            prefix,
+            prefix: prefix2,
             value,
             type: "header value"
           });
@@ -12319,13 +12319,13 @@ var require_headers = __commonJS({
         o.#headersList = list;
       }
     };
-    var { getHeadersGuard, setHeadersGuard, getHeadersList, setHeadersList } = Headers2;
-    Reflect.deleteProperty(Headers2, "getHeadersGuard");
-    Reflect.deleteProperty(Headers2, "setHeadersGuard");
-    Reflect.deleteProperty(Headers2, "getHeadersList");
-    Reflect.deleteProperty(Headers2, "setHeadersList");
-    iteratorMixin("Headers", Headers2, kHeadersSortedMap, 0, 1);
-    Object.defineProperties(Headers2.prototype, {
+    var { getHeadersGuard, setHeadersGuard, getHeadersList, setHeadersList } = Headers3;
+    Reflect.deleteProperty(Headers3, "getHeadersGuard");
+    Reflect.deleteProperty(Headers3, "setHeadersGuard");
+    Reflect.deleteProperty(Headers3, "getHeadersList");
+    Reflect.deleteProperty(Headers3, "setHeadersList");
+    iteratorMixin("Headers", Headers3, kHeadersSortedMap, 0, 1);
+    Object.defineProperties(Headers3.prototype, {
       append: kEnumerableProperty,
       delete: kEnumerableProperty,
       get: kEnumerableProperty,
@@ -12340,19 +12340,19 @@ var require_headers = __commonJS({
         enumerable: false
       }
     });
-    webidl.converters.HeadersInit = function(V, prefix, argument) {
+    webidl.converters.HeadersInit = function(V, prefix2, argument) {
       if (webidl.util.Type(V) === "Object") {
         const iterator2 = Reflect.get(V, Symbol.iterator);
-        if (!util.types.isProxy(V) && iterator2 === Headers2.prototype.entries) {
+        if (!util.types.isProxy(V) && iterator2 === Headers3.prototype.entries) {
           try {
             return getHeadersList(V).entriesList;
           } catch {
           }
         }
         if (typeof iterator2 === "function") {
-          return webidl.converters["sequence<sequence<ByteString>>"](V, prefix, argument, iterator2.bind(V));
+          return webidl.converters["sequence<sequence<ByteString>>"](V, prefix2, argument, iterator2.bind(V));
         }
-        return webidl.converters["record<ByteString, ByteString>"](V, prefix, argument);
+        return webidl.converters["record<ByteString, ByteString>"](V, prefix2, argument);
       }
       throw webidl.errors.conversionFailed({
         prefix: "Headers constructor",
@@ -12361,10 +12361,10 @@ var require_headers = __commonJS({
       });
     };
     module.exports = {
-      fill,
+      fill: fill2,
       // for test.
       compareHeaderName,
-      Headers: Headers2,
+      Headers: Headers3,
       HeadersList,
       getHeadersGuard,
       setHeadersGuard,
@@ -12378,7 +12378,7 @@ var require_headers = __commonJS({
 var require_response = __commonJS({
   "node_modules/undici/lib/web/fetch/response.js"(exports, module) {
     "use strict";
-    var { Headers: Headers2, HeadersList, fill, getHeadersGuard, setHeadersGuard, setHeadersList } = require_headers();
+    var { Headers: Headers3, HeadersList, fill: fill2, getHeadersGuard, setHeadersGuard, setHeadersList } = require_headers();
     var { extractBody, cloneBody, mixinBody, hasFinalizationRegistry, streamRegistry, bodyUnusable } = require_body();
     var util = require_util();
     var nodeUtil = __require("node:util");
@@ -12404,7 +12404,7 @@ var require_response = __commonJS({
     var { kConstruct } = require_symbols();
     var assert = __require("node:assert");
     var { types } = __require("node:util");
-    var textEncoder = new TextEncoder("utf-8");
+    var textEncoder2 = new TextEncoder("utf-8");
     var Response = class _Response {
       // Creates network error Response.
       static error() {
@@ -12417,7 +12417,7 @@ var require_response = __commonJS({
         if (init !== null) {
           init = webidl.converters.ResponseInit(init);
         }
-        const bytes = textEncoder.encode(
+        const bytes = textEncoder2.encode(
           serializeJavascriptValueToJSONString(data)
         );
         const body = extractBody(bytes);
@@ -12433,8 +12433,8 @@ var require_response = __commonJS({
         let parsedURL;
         try {
           parsedURL = new URL(url, relevantRealm.settingsObject.baseUrl);
-        } catch (err) {
-          throw new TypeError(`Failed to parse URL from ${url}`, { cause: err });
+        } catch (err2) {
+          throw new TypeError(`Failed to parse URL from ${url}`, { cause: err2 });
         }
         if (!redirectStatusSet.has(status)) {
           throw new RangeError(`Invalid status code ${status}`);
@@ -12456,7 +12456,7 @@ var require_response = __commonJS({
         }
         init = webidl.converters.ResponseInit(init);
         this[kState] = makeResponse({});
-        this[kHeaders] = new Headers2(kConstruct);
+        this[kHeaders] = new Headers3(kConstruct);
         setHeadersGuard(this[kHeaders], "response");
         setHeadersList(this[kHeaders], this[kState].headersList);
         let bodyWithType = null;
@@ -12662,9 +12662,9 @@ var require_response = __commonJS({
         assert(false);
       }
     }
-    function makeAppropriateNetworkError(fetchParams, err = null) {
+    function makeAppropriateNetworkError(fetchParams, err2 = null) {
       assert(isCancelled(fetchParams));
-      return isAborted(fetchParams) ? makeNetworkError(Object.assign(new DOMException("The operation was aborted.", "AbortError"), { cause: err })) : makeNetworkError(Object.assign(new DOMException("Request was cancelled."), { cause: err }));
+      return isAborted(fetchParams) ? makeNetworkError(Object.assign(new DOMException("The operation was aborted.", "AbortError"), { cause: err2 })) : makeNetworkError(Object.assign(new DOMException("Request was cancelled."), { cause: err2 }));
     }
     function initializeResponse(response, init, body) {
       if (init.status !== null && (init.status < 200 || init.status > 599)) {
@@ -12682,7 +12682,7 @@ var require_response = __commonJS({
         response[kState].statusText = init.statusText;
       }
       if ("headers" in init && init.headers != null) {
-        fill(response[kHeaders], init.headers);
+        fill2(response[kHeaders], init.headers);
       }
       if (body) {
         if (nullBodyStatus.includes(response.status)) {
@@ -12700,7 +12700,7 @@ var require_response = __commonJS({
     function fromInnerResponse(innerResponse, guard) {
       const response = new Response(kConstruct);
       response[kState] = innerResponse;
-      response[kHeaders] = new Headers2(kConstruct);
+      response[kHeaders] = new Headers3(kConstruct);
       setHeadersList(response[kHeaders], innerResponse.headersList);
       setHeadersGuard(response[kHeaders], guard);
       if (hasFinalizationRegistry && innerResponse.body?.stream) {
@@ -12717,32 +12717,32 @@ var require_response = __commonJS({
     webidl.converters.URLSearchParams = webidl.interfaceConverter(
       URLSearchParams
     );
-    webidl.converters.XMLHttpRequestBodyInit = function(V, prefix, name) {
+    webidl.converters.XMLHttpRequestBodyInit = function(V, prefix2, name) {
       if (typeof V === "string") {
-        return webidl.converters.USVString(V, prefix, name);
+        return webidl.converters.USVString(V, prefix2, name);
       }
       if (isBlobLike(V)) {
-        return webidl.converters.Blob(V, prefix, name, { strict: false });
+        return webidl.converters.Blob(V, prefix2, name, { strict: false });
       }
       if (ArrayBuffer.isView(V) || types.isArrayBuffer(V)) {
-        return webidl.converters.BufferSource(V, prefix, name);
+        return webidl.converters.BufferSource(V, prefix2, name);
       }
       if (util.isFormDataLike(V)) {
-        return webidl.converters.FormData(V, prefix, name, { strict: false });
+        return webidl.converters.FormData(V, prefix2, name, { strict: false });
       }
       if (V instanceof URLSearchParams) {
-        return webidl.converters.URLSearchParams(V, prefix, name);
+        return webidl.converters.URLSearchParams(V, prefix2, name);
       }
-      return webidl.converters.DOMString(V, prefix, name);
+      return webidl.converters.DOMString(V, prefix2, name);
     };
-    webidl.converters.BodyInit = function(V, prefix, argument) {
+    webidl.converters.BodyInit = function(V, prefix2, argument) {
       if (V instanceof ReadableStream) {
-        return webidl.converters.ReadableStream(V, prefix, argument);
+        return webidl.converters.ReadableStream(V, prefix2, argument);
       }
       if (V?.[Symbol.asyncIterator]) {
         return V;
       }
-      return webidl.converters.XMLHttpRequestBodyInit(V, prefix, argument);
+      return webidl.converters.XMLHttpRequestBodyInit(V, prefix2, argument);
     };
     webidl.converters.ResponseInit = webidl.dictionaryConverter([
       {
@@ -12820,7 +12820,7 @@ var require_request2 = __commonJS({
   "node_modules/undici/lib/web/fetch/request.js"(exports, module) {
     "use strict";
     var { extractBody, mixinBody, cloneBody, bodyUnusable } = require_body();
-    var { Headers: Headers2, fill: fillHeaders, HeadersList, setHeadersGuard, getHeadersGuard, setHeadersList, getHeadersList } = require_headers();
+    var { Headers: Headers3, fill: fillHeaders, HeadersList, setHeadersGuard, getHeadersGuard, setHeadersList, getHeadersList } = require_headers();
     var { FinalizationRegistry: FinalizationRegistry2 } = require_dispatcher_weakref()();
     var util = require_util();
     var nodeUtil = __require("node:util");
@@ -12883,10 +12883,10 @@ var require_request2 = __commonJS({
         if (input === kConstruct) {
           return;
         }
-        const prefix = "Request constructor";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        input = webidl.converters.RequestInfo(input, prefix, "input");
-        init = webidl.converters.RequestInit(init, prefix, "init");
+        const prefix2 = "Request constructor";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        input = webidl.converters.RequestInfo(input, prefix2, "input");
+        init = webidl.converters.RequestInit(init, prefix2, "init");
         let request2 = null;
         let fallbackMode = null;
         const baseUrl2 = environmentSettingsObject.settingsObject.baseUrl;
@@ -12896,8 +12896,8 @@ var require_request2 = __commonJS({
           let parsedURL;
           try {
             parsedURL = new URL(input, baseUrl2);
-          } catch (err) {
-            throw new TypeError("Failed to parse URL from " + input, { cause: err });
+          } catch (err2) {
+            throw new TypeError("Failed to parse URL from " + input, { cause: err2 });
           }
           if (parsedURL.username || parsedURL.password) {
             throw new TypeError(
@@ -12987,8 +12987,8 @@ var require_request2 = __commonJS({
             let parsedReferrer;
             try {
               parsedReferrer = new URL(referrer, baseUrl2);
-            } catch (err) {
-              throw new TypeError(`Referrer "${referrer}" is not a valid URL.`, { cause: err });
+            } catch (err2) {
+              throw new TypeError(`Referrer "${referrer}" is not a valid URL.`, { cause: err2 });
             }
             if (parsedReferrer.protocol === "about:" && parsedReferrer.hostname === "client" || origin && !sameOrigin(parsedReferrer, environmentSettingsObject.settingsObject.baseUrl)) {
               request2.referrer = "client";
@@ -13088,7 +13088,7 @@ var require_request2 = __commonJS({
             requestFinalizer.register(ac, { signal, abort }, abort);
           }
         }
-        this[kHeaders] = new Headers2(kConstruct);
+        this[kHeaders] = new Headers3(kConstruct);
         setHeadersList(this[kHeaders], request2.headersList);
         setHeadersGuard(this[kHeaders], "request");
         if (mode === "no-cors") {
@@ -13377,7 +13377,7 @@ var require_request2 = __commonJS({
       const request2 = new Request(kConstruct);
       request2[kState] = innerRequest;
       request2[kSignal] = signal;
-      request2[kHeaders] = new Headers2(kConstruct);
+      request2[kHeaders] = new Headers3(kConstruct);
       setHeadersList(request2[kHeaders], innerRequest.headersList);
       setHeadersGuard(request2[kHeaders], guard);
       return request2;
@@ -13411,14 +13411,14 @@ var require_request2 = __commonJS({
     webidl.converters.Request = webidl.interfaceConverter(
       Request
     );
-    webidl.converters.RequestInfo = function(V, prefix, argument) {
+    webidl.converters.RequestInfo = function(V, prefix2, argument) {
       if (typeof V === "string") {
-        return webidl.converters.USVString(V, prefix, argument);
+        return webidl.converters.USVString(V, prefix2, argument);
       }
       if (V instanceof Request) {
-        return webidl.converters.Request(V, prefix, argument);
+        return webidl.converters.Request(V, prefix2, argument);
       }
-      return webidl.converters.USVString(V, prefix, argument);
+      return webidl.converters.USVString(V, prefix2, argument);
     };
     webidl.converters.AbortSignal = webidl.interfaceConverter(
       AbortSignal
@@ -13570,7 +13570,7 @@ var require_fetch = __commonJS({
       subresourceSet
     } = require_constants3();
     var EE = __require("node:events");
-    var { Readable, pipeline: pipeline2, finished } = __require("node:stream");
+    var { Readable, pipeline: pipeline3, finished } = __require("node:stream");
     var { addAbortListener, isErrored, isReadable, bufferToLowerCasedHeaderName } = require_util();
     var { dataURLProcessor, serializeAMimeType, minimizeSupportedMimeType } = require_data_url();
     var { getGlobalDispatcher } = require_global2();
@@ -13707,11 +13707,11 @@ var require_fetch = __commonJS({
         p.reject(error2);
       }
       if (request2.body != null && isReadable(request2.body?.stream)) {
-        request2.body.stream.cancel(error2).catch((err) => {
-          if (err.code === "ERR_INVALID_STATE") {
+        request2.body.stream.cancel(error2).catch((err2) => {
+          if (err2.code === "ERR_INVALID_STATE") {
             return;
           }
-          throw err;
+          throw err2;
         });
       }
       if (responseObject == null) {
@@ -13719,11 +13719,11 @@ var require_fetch = __commonJS({
       }
       const response = responseObject[kState];
       if (response.body != null && isReadable(response.body?.stream)) {
-        response.body.stream.cancel(error2).catch((err) => {
-          if (err.code === "ERR_INVALID_STATE") {
+        response.body.stream.cancel(error2).catch((err2) => {
+          if (err2.code === "ERR_INVALID_STATE") {
             return;
           }
-          throw err;
+          throw err2;
         });
       }
     }
@@ -13788,8 +13788,8 @@ var require_fetch = __commonJS({
       }
       if (subresourceSet.has(request2.destination)) {
       }
-      mainFetch(fetchParams).catch((err) => {
-        fetchParams.controller.terminate(err);
+      mainFetch(fetchParams).catch((err2) => {
+        fetchParams.controller.terminate(err2);
       });
       return fetchParams.controller;
     }
@@ -13974,7 +13974,7 @@ var require_fetch = __commonJS({
         }
         case "http:":
         case "https:": {
-          return httpFetch(fetchParams).catch((err) => makeNetworkError(err));
+          return httpFetch(fetchParams).catch((err2) => makeNetworkError(err2));
         }
         default: {
           return Promise.resolve(makeNetworkError("unknown scheme"));
@@ -14099,8 +14099,8 @@ var require_fetch = __commonJS({
         if (locationURL == null) {
           return response;
         }
-      } catch (err) {
-        return Promise.resolve(makeNetworkError(err));
+      } catch (err2) {
+        return Promise.resolve(makeNetworkError(err2));
       }
       if (!urlIsHttpHttpsScheme(locationURL)) {
         return Promise.resolve(makeNetworkError("URL scheme must be a HTTP(S) scheme"));
@@ -14271,11 +14271,11 @@ var require_fetch = __commonJS({
       fetchParams.controller.connection = {
         abort: null,
         destroyed: false,
-        destroy(err, abort = true) {
+        destroy(err2, abort = true) {
           if (!this.destroyed) {
             this.destroyed = true;
             if (abort) {
-              this.abort?.(err ?? new DOMException("The operation was aborted.", "AbortError"));
+              this.abort?.(err2 ?? new DOMException("The operation was aborted.", "AbortError"));
             }
           }
         }
@@ -14326,8 +14326,8 @@ var require_fetch = __commonJS({
               yield* processBodyChunk(bytes);
             }
             processEndOfBody();
-          } catch (err) {
-            processBodyError(err);
+          } catch (err2) {
+            processBodyError(err2);
           }
         })();
       }
@@ -14340,12 +14340,12 @@ var require_fetch = __commonJS({
           fetchParams.controller.next = () => iterator2.next();
           response = makeResponse({ status, statusText, headersList });
         }
-      } catch (err) {
-        if (err.name === "AbortError") {
+      } catch (err2) {
+        if (err2.name === "AbortError") {
           fetchParams.controller.connection.destroy();
-          return makeAppropriateNetworkError(fetchParams, err);
+          return makeAppropriateNetworkError(fetchParams, err2);
         }
-        return makeNetworkError(err);
+        return makeNetworkError(err2);
       }
       const pullAlgorithm = async () => {
         await fetchParams.controller.resume();
@@ -14383,11 +14383,11 @@ var require_fetch = __commonJS({
               break;
             }
             bytes = done ? void 0 : value;
-          } catch (err) {
+          } catch (err2) {
             if (fetchParams.controller.ended && !timingInfo.encodedBodySize) {
               bytes = void 0;
             } else {
-              bytes = err;
+              bytes = err2;
               isFailure = true;
             }
           }
@@ -14435,7 +14435,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request2);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve2, reject) => agent.dispatch(
+        return new Promise((resolve3, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14511,13 +14511,13 @@ var require_fetch = __commonJS({
               }
               this.body = new Readable({ read: resume });
               const onError = this.onError.bind(this);
-              resolve2({
+              resolve3({
                 status,
                 statusText,
                 headersList,
-                body: decoders.length ? pipeline2(this.body, ...decoders, (err) => {
-                  if (err) {
-                    this.onError(err);
+                body: decoders.length ? pipeline3(this.body, ...decoders, (err2) => {
+                  if (err2) {
+                    this.onError(err2);
                   }
                 }).on("error", onError) : this.body.on("error", onError)
               });
@@ -14554,7 +14554,7 @@ var require_fetch = __commonJS({
               for (let i = 0; i < rawHeaders.length; i += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i]), rawHeaders[i + 1].toString("latin1"), true);
               }
-              resolve2({
+              resolve3({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -15050,11 +15050,11 @@ var require_util4 = __commonJS({
             dataURL += serializeAMimeType(parsed);
           }
           dataURL += ";base64,";
-          const decoder = new StringDecoder2("latin1");
+          const decoder4 = new StringDecoder2("latin1");
           for (const chunk of bytes) {
-            dataURL += btoa(decoder.write(chunk));
+            dataURL += btoa(decoder4.write(chunk));
           }
-          dataURL += btoa(decoder.end());
+          dataURL += btoa(decoder4.end());
           return dataURL;
         }
         case "Text": {
@@ -15079,11 +15079,11 @@ var require_util4 = __commonJS({
         }
         case "BinaryString": {
           let binaryString = "";
-          const decoder = new StringDecoder2("latin1");
+          const decoder4 = new StringDecoder2("latin1");
           for (const chunk of bytes) {
-            binaryString += decoder.write(chunk);
+            binaryString += decoder4.write(chunk);
           }
-          binaryString += decoder.end();
+          binaryString += decoder4.end();
           return binaryString;
         }
       }
@@ -15457,10 +15457,10 @@ var require_cache = __commonJS({
       }
       async match(request2, options = {}) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.match";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        request2 = webidl.converters.RequestInfo(request2, prefix, "request");
-        options = webidl.converters.CacheQueryOptions(options, prefix, "options");
+        const prefix2 = "Cache.match";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        request2 = webidl.converters.RequestInfo(request2, prefix2, "request");
+        options = webidl.converters.CacheQueryOptions(options, prefix2, "options");
         const p = this.#internalMatchAll(request2, options, 1);
         if (p.length === 0) {
           return;
@@ -15469,30 +15469,30 @@ var require_cache = __commonJS({
       }
       async matchAll(request2 = void 0, options = {}) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.matchAll";
-        if (request2 !== void 0) request2 = webidl.converters.RequestInfo(request2, prefix, "request");
-        options = webidl.converters.CacheQueryOptions(options, prefix, "options");
+        const prefix2 = "Cache.matchAll";
+        if (request2 !== void 0) request2 = webidl.converters.RequestInfo(request2, prefix2, "request");
+        options = webidl.converters.CacheQueryOptions(options, prefix2, "options");
         return this.#internalMatchAll(request2, options);
       }
       async add(request2) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.add";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        request2 = webidl.converters.RequestInfo(request2, prefix, "request");
+        const prefix2 = "Cache.add";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        request2 = webidl.converters.RequestInfo(request2, prefix2, "request");
         const requests = [request2];
         const responseArrayPromise = this.addAll(requests);
         return await responseArrayPromise;
       }
       async addAll(requests) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.addAll";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
+        const prefix2 = "Cache.addAll";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
         const responsePromises = [];
         const requestList = [];
         for (let request2 of requests) {
           if (request2 === void 0) {
             throw webidl.errors.conversionFailed({
-              prefix,
+              prefix: prefix2,
               argument: "Argument 1",
               types: ["undefined is not allowed"]
             });
@@ -15504,7 +15504,7 @@ var require_cache = __commonJS({
           const r = request2[kState];
           if (!urlIsHttpHttpsScheme(r.url) || r.method !== "GET") {
             throw webidl.errors.exception({
-              header: prefix,
+              header: prefix2,
               message: "Expected http/s scheme when method is not GET."
             });
           }
@@ -15514,7 +15514,7 @@ var require_cache = __commonJS({
           const r = new Request(request2)[kState];
           if (!urlIsHttpHttpsScheme(r.url)) {
             throw webidl.errors.exception({
-              header: prefix,
+              header: prefix2,
               message: "Expected http/s scheme."
             });
           }
@@ -15532,8 +15532,8 @@ var require_cache = __commonJS({
                 }));
               } else if (response.headersList.contains("vary")) {
                 const fieldValues = getFieldValues(response.headersList.get("vary"));
-                for (const fieldValue of fieldValues) {
-                  if (fieldValue === "*") {
+                for (const fieldValue2 of fieldValues) {
+                  if (fieldValue2 === "*") {
                     responsePromise.reject(webidl.errors.exception({
                       header: "Cache.addAll",
                       message: "invalid vary field value"
@@ -15590,10 +15590,10 @@ var require_cache = __commonJS({
       }
       async put(request2, response) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.put";
-        webidl.argumentLengthCheck(arguments, 2, prefix);
-        request2 = webidl.converters.RequestInfo(request2, prefix, "request");
-        response = webidl.converters.Response(response, prefix, "response");
+        const prefix2 = "Cache.put";
+        webidl.argumentLengthCheck(arguments, 2, prefix2);
+        request2 = webidl.converters.RequestInfo(request2, prefix2, "request");
+        response = webidl.converters.Response(response, prefix2, "response");
         let innerRequest = null;
         if (request2 instanceof Request) {
           innerRequest = request2[kState];
@@ -15602,23 +15602,23 @@ var require_cache = __commonJS({
         }
         if (!urlIsHttpHttpsScheme(innerRequest.url) || innerRequest.method !== "GET") {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: "Expected an http/s scheme when method is not GET"
           });
         }
         const innerResponse = response[kState];
         if (innerResponse.status === 206) {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: "Got 206 status"
           });
         }
         if (innerResponse.headersList.contains("vary")) {
           const fieldValues = getFieldValues(innerResponse.headersList.get("vary"));
-          for (const fieldValue of fieldValues) {
-            if (fieldValue === "*") {
+          for (const fieldValue2 of fieldValues) {
+            if (fieldValue2 === "*") {
               throw webidl.errors.exception({
-                header: prefix,
+                header: prefix2,
                 message: "Got * vary field value"
               });
             }
@@ -15626,7 +15626,7 @@ var require_cache = __commonJS({
         }
         if (innerResponse.body && (isDisturbed(innerResponse.body.stream) || innerResponse.body.stream.locked)) {
           throw webidl.errors.exception({
-            header: prefix,
+            header: prefix2,
             message: "Response body is locked or disturbed"
           });
         }
@@ -15671,10 +15671,10 @@ var require_cache = __commonJS({
       }
       async delete(request2, options = {}) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.delete";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        request2 = webidl.converters.RequestInfo(request2, prefix, "request");
-        options = webidl.converters.CacheQueryOptions(options, prefix, "options");
+        const prefix2 = "Cache.delete";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        request2 = webidl.converters.RequestInfo(request2, prefix2, "request");
+        options = webidl.converters.CacheQueryOptions(options, prefix2, "options");
         let r = null;
         if (request2 instanceof Request) {
           r = request2[kState];
@@ -15717,9 +15717,9 @@ var require_cache = __commonJS({
        */
       async keys(request2 = void 0, options = {}) {
         webidl.brandCheck(this, _Cache);
-        const prefix = "Cache.keys";
-        if (request2 !== void 0) request2 = webidl.converters.RequestInfo(request2, prefix, "request");
-        options = webidl.converters.CacheQueryOptions(options, prefix, "options");
+        const prefix2 = "Cache.keys";
+        if (request2 !== void 0) request2 = webidl.converters.RequestInfo(request2, prefix2, "request");
+        options = webidl.converters.CacheQueryOptions(options, prefix2, "options");
         let r = null;
         if (request2 !== void 0) {
           if (request2 instanceof Request) {
@@ -15879,12 +15879,12 @@ var require_cache = __commonJS({
           return true;
         }
         const fieldValues = getFieldValues(response.headersList.get("vary"));
-        for (const fieldValue of fieldValues) {
-          if (fieldValue === "*") {
+        for (const fieldValue2 of fieldValues) {
+          if (fieldValue2 === "*") {
             return false;
           }
-          const requestValue = request2.headersList.get(fieldValue);
-          const queryValue = requestQuery.headersList.get(fieldValue);
+          const requestValue = request2.headersList.get(fieldValue2);
+          const queryValue = requestQuery.headersList.get(fieldValue2);
           if (requestValue !== queryValue) {
             return false;
           }
@@ -16021,9 +16021,9 @@ var require_cachestorage = __commonJS({
        */
       async has(cacheName) {
         webidl.brandCheck(this, _CacheStorage);
-        const prefix = "CacheStorage.has";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        cacheName = webidl.converters.DOMString(cacheName, prefix, "cacheName");
+        const prefix2 = "CacheStorage.has";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        cacheName = webidl.converters.DOMString(cacheName, prefix2, "cacheName");
         return this.#caches.has(cacheName);
       }
       /**
@@ -16033,9 +16033,9 @@ var require_cachestorage = __commonJS({
        */
       async open(cacheName) {
         webidl.brandCheck(this, _CacheStorage);
-        const prefix = "CacheStorage.open";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        cacheName = webidl.converters.DOMString(cacheName, prefix, "cacheName");
+        const prefix2 = "CacheStorage.open";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        cacheName = webidl.converters.DOMString(cacheName, prefix2, "cacheName");
         if (this.#caches.has(cacheName)) {
           const cache2 = this.#caches.get(cacheName);
           return new Cache(kConstruct, cache2);
@@ -16051,9 +16051,9 @@ var require_cachestorage = __commonJS({
        */
       async delete(cacheName) {
         webidl.brandCheck(this, _CacheStorage);
-        const prefix = "CacheStorage.delete";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        cacheName = webidl.converters.DOMString(cacheName, prefix, "cacheName");
+        const prefix2 = "CacheStorage.delete";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        cacheName = webidl.converters.DOMString(cacheName, prefix2, "cacheName");
         return this.#caches.delete(cacheName);
       }
       /**
@@ -16447,10 +16447,10 @@ var require_cookies = __commonJS({
     var { parseSetCookie } = require_parse();
     var { stringify } = require_util6();
     var { webidl } = require_webidl();
-    var { Headers: Headers2 } = require_headers();
+    var { Headers: Headers3 } = require_headers();
     function getCookies(headers) {
       webidl.argumentLengthCheck(arguments, 1, "getCookies");
-      webidl.brandCheck(headers, Headers2, { strict: false });
+      webidl.brandCheck(headers, Headers3, { strict: false });
       const cookie = headers.get("cookie");
       const out = {};
       if (!cookie) {
@@ -16463,10 +16463,10 @@ var require_cookies = __commonJS({
       return out;
     }
     function deleteCookie(headers, name, attributes) {
-      webidl.brandCheck(headers, Headers2, { strict: false });
-      const prefix = "deleteCookie";
-      webidl.argumentLengthCheck(arguments, 2, prefix);
-      name = webidl.converters.DOMString(name, prefix, "name");
+      webidl.brandCheck(headers, Headers3, { strict: false });
+      const prefix2 = "deleteCookie";
+      webidl.argumentLengthCheck(arguments, 2, prefix2);
+      name = webidl.converters.DOMString(name, prefix2, "name");
       attributes = webidl.converters.DeleteCookieAttributes(attributes);
       setCookie(headers, {
         name,
@@ -16477,7 +16477,7 @@ var require_cookies = __commonJS({
     }
     function getSetCookies(headers) {
       webidl.argumentLengthCheck(arguments, 1, "getSetCookies");
-      webidl.brandCheck(headers, Headers2, { strict: false });
+      webidl.brandCheck(headers, Headers3, { strict: false });
       const cookies = headers.getSetCookie();
       if (!cookies) {
         return [];
@@ -16486,7 +16486,7 @@ var require_cookies = __commonJS({
     }
     function setCookie(headers, cookie) {
       webidl.argumentLengthCheck(arguments, 2, "setCookie");
-      webidl.brandCheck(headers, Headers2, { strict: false });
+      webidl.brandCheck(headers, Headers3, { strict: false });
       cookie = webidl.converters.Cookie(cookie);
       const str = stringify(cookie);
       if (str) {
@@ -16585,10 +16585,10 @@ var require_events = __commonJS({
           webidl.util.markAsUncloneable(this);
           return;
         }
-        const prefix = "MessageEvent constructor";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        type = webidl.converters.DOMString(type, prefix, "type");
-        eventInitDict = webidl.converters.MessageEventInit(eventInitDict, prefix, "eventInitDict");
+        const prefix2 = "MessageEvent constructor";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        type = webidl.converters.DOMString(type, prefix2, "type");
+        eventInitDict = webidl.converters.MessageEventInit(eventInitDict, prefix2, "eventInitDict");
         super(type, eventInitDict);
         this.#eventInit = eventInitDict;
         webidl.util.markAsUncloneable(this);
@@ -16645,9 +16645,9 @@ var require_events = __commonJS({
     var CloseEvent = class _CloseEvent extends Event {
       #eventInit;
       constructor(type, eventInitDict = {}) {
-        const prefix = "CloseEvent constructor";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        type = webidl.converters.DOMString(type, prefix, "type");
+        const prefix2 = "CloseEvent constructor";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        type = webidl.converters.DOMString(type, prefix2, "type");
         eventInitDict = webidl.converters.CloseEventInit(eventInitDict);
         super(type, eventInitDict);
         this.#eventInit = eventInitDict;
@@ -16669,11 +16669,11 @@ var require_events = __commonJS({
     var ErrorEvent = class _ErrorEvent extends Event {
       #eventInit;
       constructor(type, eventInitDict) {
-        const prefix = "ErrorEvent constructor";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
+        const prefix2 = "ErrorEvent constructor";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
         super(type, eventInitDict);
         webidl.util.markAsUncloneable(this);
-        type = webidl.converters.DOMString(type, prefix, "type");
+        type = webidl.converters.DOMString(type, prefix2, "type");
         eventInitDict = webidl.converters.ErrorEventInit(eventInitDict ?? {});
         this.#eventInit = eventInitDict;
       }
@@ -17176,7 +17176,7 @@ var require_connection = __commonJS({
     var { CloseEvent } = require_events();
     var { makeRequest } = require_request2();
     var { fetching } = require_fetch();
-    var { Headers: Headers2, getHeadersList } = require_headers();
+    var { Headers: Headers3, getHeadersList } = require_headers();
     var { getDecodeSplit } = require_util2();
     var { WebsocketFrameSend } = require_frame();
     var crypto2;
@@ -17198,7 +17198,7 @@ var require_connection = __commonJS({
         redirect: "error"
       });
       if (options.headers) {
-        const headersList = getHeadersList(new Headers2(options.headers));
+        const headersList = getHeadersList(new Headers3(options.headers));
         request2.headersList = headersList;
       }
       const keyValue = crypto2.randomBytes(16).toString("base64");
@@ -17385,8 +17385,8 @@ var require_permessage_deflate = __commonJS({
           }
           try {
             this.#inflate = createInflateRaw({ windowBits });
-          } catch (err) {
-            callback(err);
+          } catch (err2) {
+            callback(err2);
             return;
           }
           this.#inflate[kBuffer] = [];
@@ -17402,9 +17402,9 @@ var require_permessage_deflate = __commonJS({
             }
             this.#inflate[kBuffer].push(data);
           });
-          this.#inflate.on("error", (err) => {
+          this.#inflate.on("error", (err2) => {
             this.#inflate = null;
-            callback(err);
+            callback(err2);
           });
         }
         this.#inflate.write(chunk);
@@ -17769,8 +17769,8 @@ var require_receiver = __commonJS({
             const closeFrame = new WebsocketFrameSend(body2);
             this.ws[kResponse].socket.write(
               closeFrame.createFrame(opcodes.CLOSE),
-              (err) => {
-                if (!err) {
+              (err2) => {
+                if (!err2) {
                   this.ws[kSentClose] = sentCloseFrameState.SENT;
                 }
               }
@@ -17846,9 +17846,9 @@ var require_sender = __commonJS({
           return;
         }
         const node = {
-          promise: item.arrayBuffer().then((ab) => {
+          promise: item.arrayBuffer().then((ab2) => {
             node.promise = null;
-            node.frame = createFrame(ab, hint);
+            node.frame = createFrame(ab2, hint);
           }),
           callback: cb,
           frame: null
@@ -17940,10 +17940,10 @@ var require_websocket = __commonJS({
       constructor(url, protocols = []) {
         super();
         webidl.util.markAsUncloneable(this);
-        const prefix = "WebSocket constructor";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        const options = webidl.converters["DOMString or sequence<DOMString> or WebSocketInit"](protocols, prefix, "options");
-        url = webidl.converters.USVString(url, prefix, "url");
+        const prefix2 = "WebSocket constructor";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        const options = webidl.converters["DOMString or sequence<DOMString> or WebSocketInit"](protocols, prefix2, "options");
+        url = webidl.converters.USVString(url, prefix2, "url");
         protocols = options.protocols;
         const baseURL = environmentSettingsObject.settingsObject.baseUrl;
         let urlRecord;
@@ -17996,12 +17996,12 @@ var require_websocket = __commonJS({
        */
       close(code = void 0, reason = void 0) {
         webidl.brandCheck(this, _WebSocket);
-        const prefix = "WebSocket.close";
+        const prefix2 = "WebSocket.close";
         if (code !== void 0) {
-          code = webidl.converters["unsigned short"](code, prefix, "code", { clamp: true });
+          code = webidl.converters["unsigned short"](code, prefix2, "code", { clamp: true });
         }
         if (reason !== void 0) {
-          reason = webidl.converters.USVString(reason, prefix, "reason");
+          reason = webidl.converters.USVString(reason, prefix2, "reason");
         }
         if (code !== void 0) {
           if (code !== 1e3 && (code < 3e3 || code > 4999)) {
@@ -18026,9 +18026,9 @@ var require_websocket = __commonJS({
        */
       send(data) {
         webidl.brandCheck(this, _WebSocket);
-        const prefix = "WebSocket.send";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
-        data = webidl.converters.WebSocketSendData(data, prefix, "data");
+        const prefix2 = "WebSocket.send";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
+        data = webidl.converters.WebSocketSendData(data, prefix2, "data");
         if (isConnecting(this)) {
           throw new DOMException("Sent before connected.", "InvalidStateError");
         }
@@ -18220,11 +18220,11 @@ var require_websocket = __commonJS({
     webidl.converters["sequence<DOMString>"] = webidl.sequenceConverter(
       webidl.converters.DOMString
     );
-    webidl.converters["DOMString or sequence<DOMString>"] = function(V, prefix, argument) {
+    webidl.converters["DOMString or sequence<DOMString>"] = function(V, prefix2, argument) {
       if (webidl.util.Type(V) === "Object" && Symbol.iterator in V) {
         return webidl.converters["sequence<DOMString>"](V);
       }
-      return webidl.converters.DOMString(V, prefix, argument);
+      return webidl.converters.DOMString(V, prefix2, argument);
     };
     webidl.converters.WebSocketInit = webidl.dictionaryConverter([
       {
@@ -18262,16 +18262,16 @@ var require_websocket = __commonJS({
     function onParserDrain() {
       this.ws[kResponse].socket.resume();
     }
-    function onParserError(err) {
+    function onParserError(err2) {
       let message;
       let code;
-      if (err instanceof CloseEvent) {
-        message = err.reason;
-        code = err.code;
+      if (err2 instanceof CloseEvent) {
+        message = err2.reason;
+        code = err2.code;
       } else {
-        message = err.message;
+        message = err2.message;
       }
-      fireEvent("error", this, () => new ErrorEvent("error", { error: err, message }));
+      fireEvent("error", this, () => new ErrorEvent("error", { error: err2, message }));
       closeWebSocketConnection(this, code);
     }
     module.exports = {
@@ -18295,8 +18295,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve2) => {
-        setTimeout(resolve2, ms).unref();
+      return new Promise((resolve3) => {
+        setTimeout(resolve3, ms).unref();
       });
     }
     module.exports = {
@@ -18312,7 +18312,7 @@ var require_eventsource_stream = __commonJS({
   "node_modules/undici/lib/web/eventsource/eventsource-stream.js"(exports, module) {
     "use strict";
     var buffer = __require("node:buffer");
-    var { Transform } = __require("node:stream");
+    var { Transform: Transform2 } = __require("node:stream");
     var { isASCIINumber, isValidLastEventId } = require_util8();
     var BOM = [239, 187, 191];
     var LF = 10;
@@ -18362,7 +18362,7 @@ var require_eventsource_stream = __commonJS({
       error2.aborted = false;
       return error2;
     }
-    var EventSourceStream = class extends Transform {
+    var EventSourceStream = class extends Transform2 {
       /**
        * @type {eventSourceSettings}
        */
@@ -18716,7 +18716,7 @@ ${value}`;
 var require_eventsource = __commonJS({
   "node_modules/undici/lib/web/eventsource/eventsource.js"(exports, module) {
     "use strict";
-    var { pipeline: pipeline2 } = __require("node:stream");
+    var { pipeline: pipeline3 } = __require("node:stream");
     var { fetching } = require_fetch();
     var { makeRequest } = require_request2();
     var { webidl } = require_webidl();
@@ -18760,16 +18760,16 @@ var require_eventsource = __commonJS({
       constructor(url, eventSourceInitDict = {}) {
         super();
         webidl.util.markAsUncloneable(this);
-        const prefix = "EventSource constructor";
-        webidl.argumentLengthCheck(arguments, 1, prefix);
+        const prefix2 = "EventSource constructor";
+        webidl.argumentLengthCheck(arguments, 1, prefix2);
         if (!experimentalWarned) {
           experimentalWarned = true;
           process.emitWarning("EventSource is experimental, expect them to change at any time.", {
             code: "UNDICI-ES"
           });
         }
-        url = webidl.converters.USVString(url, prefix, "url");
-        eventSourceInitDict = webidl.converters.EventSourceInitDict(eventSourceInitDict, prefix, "eventSourceInitDict");
+        url = webidl.converters.USVString(url, prefix2, "url");
+        eventSourceInitDict = webidl.converters.EventSourceInitDict(eventSourceInitDict, prefix2, "eventSourceInitDict");
         this.#dispatcher = eventSourceInitDict.dispatcher;
         this.#state = {
           lastEventId: "",
@@ -18876,7 +18876,7 @@ var require_eventsource = __commonJS({
               ));
             }
           });
-          pipeline2(
+          pipeline3(
             response.body.stream,
             eventSourceStream,
             (error2) => {
@@ -19108,11 +19108,11 @@ var require_undici = __commonJS({
     module.exports.fetch = async function fetch2(init, options = void 0) {
       try {
         return await fetchImpl(init, options);
-      } catch (err) {
-        if (err && typeof err === "object") {
-          Error.captureStackTrace(err);
+      } catch (err2) {
+        if (err2 && typeof err2 === "object") {
+          Error.captureStackTrace(err2);
         }
-        throw err;
+        throw err2;
       }
     };
     module.exports.Headers = require_headers().Headers;
@@ -19278,11 +19278,11 @@ var require_lib = __commonJS({
     })();
     var __awaiter12 = exports && exports.__awaiter || function(thisArg, _arguments, P, generator) {
       function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve2) {
-          resolve2(value);
+        return value instanceof P ? value : new P(function(resolve3) {
+          resolve3(value);
         });
       }
-      return new (P || (P = Promise))(function(resolve2, reject) {
+      return new (P || (P = Promise))(function(resolve3, reject) {
         function fulfilled(value) {
           try {
             step(generator.next(value));
@@ -19298,7 +19298,7 @@ var require_lib = __commonJS({
           }
         }
         function step(result) {
-          result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -19342,11 +19342,11 @@ var require_lib = __commonJS({
       HttpCodes3[HttpCodes3["ServiceUnavailable"] = 503] = "ServiceUnavailable";
       HttpCodes3[HttpCodes3["GatewayTimeout"] = 504] = "GatewayTimeout";
     })(HttpCodes2 || (exports.HttpCodes = HttpCodes2 = {}));
-    var Headers2;
-    (function(Headers3) {
-      Headers3["Accept"] = "accept";
-      Headers3["ContentType"] = "content-type";
-    })(Headers2 || (exports.Headers = Headers2 = {}));
+    var Headers3;
+    (function(Headers4) {
+      Headers4["Accept"] = "accept";
+      Headers4["ContentType"] = "content-type";
+    })(Headers3 || (exports.Headers = Headers3 = {}));
     var MediaTypes2;
     (function(MediaTypes3) {
       MediaTypes3["ApplicationJson"] = "application/json";
@@ -19385,26 +19385,26 @@ var require_lib = __commonJS({
       }
       readBody() {
         return __awaiter12(this, void 0, void 0, function* () {
-          return new Promise((resolve2) => __awaiter12(this, void 0, void 0, function* () {
+          return new Promise((resolve3) => __awaiter12(this, void 0, void 0, function* () {
             let output = Buffer.alloc(0);
             this.message.on("data", (chunk) => {
               output = Buffer.concat([output, chunk]);
             });
             this.message.on("end", () => {
-              resolve2(output.toString());
+              resolve3(output.toString());
             });
           }));
         });
       }
       readBodyBuffer() {
         return __awaiter12(this, void 0, void 0, function* () {
-          return new Promise((resolve2) => __awaiter12(this, void 0, void 0, function* () {
+          return new Promise((resolve3) => __awaiter12(this, void 0, void 0, function* () {
             const chunks = [];
             this.message.on("data", (chunk) => {
               chunks.push(chunk);
             });
             this.message.on("end", () => {
-              resolve2(Buffer.concat(chunks));
+              resolve3(Buffer.concat(chunks));
             });
           }));
         });
@@ -19499,7 +19499,7 @@ var require_lib = __commonJS({
        */
       getJson(requestUrl_1) {
         return __awaiter12(this, arguments, void 0, function* (requestUrl, additionalHeaders = {}) {
-          additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers3.Accept, MediaTypes2.ApplicationJson);
           const res = yield this.get(requestUrl, additionalHeaders);
           return this._processResponse(res, this.requestOptions);
         });
@@ -19507,8 +19507,8 @@ var require_lib = __commonJS({
       postJson(requestUrl_1, obj_1) {
         return __awaiter12(this, arguments, void 0, function* (requestUrl, obj, additionalHeaders = {}) {
           const data = JSON.stringify(obj, null, 2);
-          additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes2.ApplicationJson);
-          additionalHeaders[Headers2.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers3.Accept, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes2.ApplicationJson);
           const res = yield this.post(requestUrl, data, additionalHeaders);
           return this._processResponse(res, this.requestOptions);
         });
@@ -19516,8 +19516,8 @@ var require_lib = __commonJS({
       putJson(requestUrl_1, obj_1) {
         return __awaiter12(this, arguments, void 0, function* (requestUrl, obj, additionalHeaders = {}) {
           const data = JSON.stringify(obj, null, 2);
-          additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes2.ApplicationJson);
-          additionalHeaders[Headers2.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers3.Accept, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes2.ApplicationJson);
           const res = yield this.put(requestUrl, data, additionalHeaders);
           return this._processResponse(res, this.requestOptions);
         });
@@ -19525,8 +19525,8 @@ var require_lib = __commonJS({
       patchJson(requestUrl_1, obj_1) {
         return __awaiter12(this, arguments, void 0, function* (requestUrl, obj, additionalHeaders = {}) {
           const data = JSON.stringify(obj, null, 2);
-          additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes2.ApplicationJson);
-          additionalHeaders[Headers2.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers3.Accept, MediaTypes2.ApplicationJson);
+          additionalHeaders[Headers3.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes2.ApplicationJson);
           const res = yield this.patch(requestUrl, data, additionalHeaders);
           return this._processResponse(res, this.requestOptions);
         });
@@ -19612,14 +19612,14 @@ var require_lib = __commonJS({
        */
       requestRaw(info2, data) {
         return __awaiter12(this, void 0, void 0, function* () {
-          return new Promise((resolve2, reject) => {
-            function callbackForResult(err, res) {
-              if (err) {
-                reject(err);
+          return new Promise((resolve3, reject) => {
+            function callbackForResult(err2, res) {
+              if (err2) {
+                reject(err2);
               } else if (!res) {
                 reject(new Error("Unknown error"));
               } else {
-                resolve2(res);
+                resolve3(res);
               }
             }
             this.requestRawWithCallback(info2, data, callbackForResult);
@@ -19640,10 +19640,10 @@ var require_lib = __commonJS({
           info2.options.headers["Content-Length"] = Buffer.byteLength(data, "utf8");
         }
         let callbackCalled = false;
-        function handleResult(err, res) {
+        function handleResult(err2, res) {
           if (!callbackCalled) {
             callbackCalled = true;
-            onResult(err, res);
+            onResult(err2, res);
           }
         }
         const req = info2.httpModule.request(info2.options, (msg) => {
@@ -19660,8 +19660,8 @@ var require_lib = __commonJS({
           }
           handleResult(new Error(`Request timeout: ${info2.options.path}`));
         });
-        req.on("error", function(err) {
-          handleResult(err);
+        req.on("error", function(err2) {
+          handleResult(err2);
         });
         if (data && typeof data === "string") {
           req.write(data, "utf8");
@@ -19756,7 +19756,7 @@ var require_lib = __commonJS({
       _getExistingOrDefaultContentTypeHeader(additionalHeaders, _default) {
         let clientHeader;
         if (this.requestOptions && this.requestOptions.headers) {
-          const headerValue = lowercaseKeys3(this.requestOptions.headers)[Headers2.ContentType];
+          const headerValue = lowercaseKeys3(this.requestOptions.headers)[Headers3.ContentType];
           if (headerValue) {
             if (typeof headerValue === "number") {
               clientHeader = String(headerValue);
@@ -19767,7 +19767,7 @@ var require_lib = __commonJS({
             }
           }
         }
-        const additionalValue = additionalHeaders[Headers2.ContentType];
+        const additionalValue = additionalHeaders[Headers3.ContentType];
         if (additionalValue !== void 0) {
           if (typeof additionalValue === "number") {
             return String(additionalValue);
@@ -19863,12 +19863,12 @@ var require_lib = __commonJS({
         return __awaiter12(this, void 0, void 0, function* () {
           retryNumber = Math.min(ExponentialBackoffCeiling2, retryNumber);
           const ms = ExponentialBackoffTimeSlice2 * Math.pow(2, retryNumber);
-          return new Promise((resolve2) => setTimeout(() => resolve2(), ms));
+          return new Promise((resolve3) => setTimeout(() => resolve3(), ms));
         });
       }
       _processResponse(res, options) {
         return __awaiter12(this, void 0, void 0, function* () {
-          return new Promise((resolve2, reject) => __awaiter12(this, void 0, void 0, function* () {
+          return new Promise((resolve3, reject) => __awaiter12(this, void 0, void 0, function* () {
             const statusCode = res.message.statusCode || 0;
             const response = {
               statusCode,
@@ -19876,7 +19876,7 @@ var require_lib = __commonJS({
               headers: {}
             };
             if (statusCode === HttpCodes2.NotFound) {
-              resolve2(response);
+              resolve3(response);
             }
             function dateTimeDeserializer(key, value) {
               if (typeof value === "string") {
@@ -19900,7 +19900,7 @@ var require_lib = __commonJS({
                 response.result = obj;
               }
               response.headers = res.message.headers;
-            } catch (err) {
+            } catch (err2) {
             }
             if (statusCode > 299) {
               let msg;
@@ -19911,11 +19911,11 @@ var require_lib = __commonJS({
               } else {
                 msg = `Failed request: (${statusCode})`;
               }
-              const err = new HttpClientError2(msg, statusCode);
-              err.result = response.result;
-              reject(err);
+              const err2 = new HttpClientError2(msg, statusCode);
+              err2.result = response.result;
+              reject(err2);
             } else {
-              resolve2(response);
+              resolve3(response);
             }
           }));
         });
@@ -20083,7 +20083,7 @@ var require_has_define_property_support = __commonJS({
       try {
         defineProperty({}, "x", {});
         return true;
-      } catch (err) {
+      } catch (err2) {
         return false;
       }
     }
@@ -21017,7 +21017,7 @@ var require_polyfill2 = __commonJS({
       isOwn = hasOwnProp(v, toStringTag);
       try {
         v[toStringTag] = void 0;
-      } catch (err) {
+      } catch (err2) {
         return toStr.call(v);
       }
       out = toStr.call(v);
@@ -21110,7 +21110,7 @@ var require_main17 = __commonJS({
         arr[2] === UINT32_MAX - 2 && // truncation and wrap around
         arr[3] === 0 && // wrap around
         arr[4] === 1;
-      } catch (err) {
+      } catch (err2) {
         bool = false;
       }
       return bool;
@@ -21212,7 +21212,7 @@ var require_main20 = __commonJS({
       try {
         arr = new GlobalFloat64Array([1, 3.14, -3.14, NaN]);
         bool = isFloat64Array(arr) && arr[0] === 1 && arr[1] === 3.14 && arr[2] === -3.14 && arr[3] !== arr[3];
-      } catch (err) {
+      } catch (err2) {
         bool = false;
       }
       return bool;
@@ -21328,7 +21328,7 @@ var require_main23 = __commonJS({
         arr[2] === UINT8_MAX - 2 && // truncation and wrap around
         arr[3] === 0 && // wrap around
         arr[4] === 1;
-      } catch (err) {
+      } catch (err2) {
         bool = false;
       }
       return bool;
@@ -21444,7 +21444,7 @@ var require_main26 = __commonJS({
         arr[2] === UINT16_MAX - 2 && // truncation and wrap around
         arr[3] === 0 && // wrap around
         arr[4] === 1;
-      } catch (err) {
+      } catch (err2) {
         bool = false;
       }
       return bool;
@@ -24769,8 +24769,8 @@ var require_kernel_rempio2 = __commonJS({
 var require_main67 = __commonJS({
   "node_modules/@stdlib/math-base-special-round/lib/main.js"(exports, module) {
     "use strict";
-    var round = Math.round;
-    module.exports = round;
+    var round2 = Math.round;
+    module.exports = round2;
   }
 });
 
@@ -24787,7 +24787,7 @@ var require_lib93 = __commonJS({
 var require_rempio2_medium = __commonJS({
   "node_modules/@stdlib/math-base-special-rempio2/lib/rempio2_medium.js"(exports, module) {
     "use strict";
-    var round = require_lib93();
+    var round2 = require_lib93();
     var getHighWord = require_lib43();
     var INVPIO2 = 0.6366197723675814;
     var PIO2_1 = 1.5707963267341256;
@@ -24805,7 +24805,7 @@ var require_rempio2_medium = __commonJS({
       var w;
       var i;
       var j;
-      n = round(x * INVPIO2);
+      n = round2(x * INVPIO2);
       r = x - n * PIO2_1;
       w = n * PIO2_1T;
       j = ix >> 20 | 0;
@@ -24847,7 +24847,7 @@ var require_main68 = __commonJS({
     var fromWords = require_lib44();
     var rempio2Kernel = require_kernel_rempio2();
     var rempio2Medium = require_rempio2_medium();
-    var ZERO = 0;
+    var ZERO2 = 0;
     var TWO24 = 16777216;
     var PIO2_1 = 1.5707963267341256;
     var PIO2_1T = 6077100506506192e-26;
@@ -24955,7 +24955,7 @@ var require_main68 = __commonJS({
       }
       TX[2] = z;
       nx = 3;
-      while (TX[nx - 1] === ZERO) {
+      while (TX[nx - 1] === ZERO2) {
         nx -= 1;
       }
       n = rempio2Kernel(TX, TY, e0, nx, 1);
@@ -26094,7 +26094,7 @@ var require_main77 = __commonJS({
       try {
         evil('"use strict"; (function* () {})');
         bool = true;
-      } catch (err) {
+      } catch (err2) {
         bool = false;
       }
       return bool;
@@ -26316,27 +26316,27 @@ var require_full_igamma_prefix = __commonJS({
     var MAX_LN = require_lib107();
     var MIN_LN = require_lib112();
     function fullIGammaPrefix(a, z) {
-      var prefix;
+      var prefix2;
       var alz;
       alz = a * ln(z);
       if (z >= 1) {
         if (alz < MAX_LN && -z > MIN_LN) {
-          prefix = pow(z, a) * exp(-z);
+          prefix2 = pow(z, a) * exp(-z);
         } else if (a >= 1) {
-          prefix = pow(z / exp(z / a), a);
+          prefix2 = pow(z / exp(z / a), a);
         } else {
-          prefix = exp(alz - z);
+          prefix2 = exp(alz - z);
         }
       } else {
         if (alz > MIN_LN) {
-          prefix = pow(z, a) * exp(-z);
+          prefix2 = pow(z, a) * exp(-z);
         } else if (z / a < MAX_LN) {
-          prefix = pow(z / exp(z / a), a);
+          prefix2 = pow(z / exp(z / a), a);
         } else {
-          prefix = exp(alz - z);
+          prefix2 = exp(alz - z);
         }
       }
-      return prefix;
+      return prefix2;
     }
     module.exports = fullIGammaPrefix;
   }
@@ -26804,7 +26804,7 @@ var require_regularised_gamma_prefix = __commonJS({
     var G = require_lib102();
     var E = require_lib77();
     function regularisedGammaPrefix(a, z) {
-      var prefix;
+      var prefix2;
       var amza;
       var agh;
       var alz;
@@ -26820,8 +26820,8 @@ var require_regularised_gamma_prefix = __commonJS({
         return pow(z, a) * exp(-z) / gamma(a);
       }
       if (abs(d * d * a) <= 100 && a > 150) {
-        prefix = a * log1pmx(d) + z * (0.5 - G) / agh;
-        prefix = exp(prefix);
+        prefix2 = a * log1pmx(d) + z * (0.5 - G) / agh;
+        prefix2 = exp(prefix2);
       } else {
         alz = a * ln(z / agh);
         amz = a - z;
@@ -26829,22 +26829,22 @@ var require_regularised_gamma_prefix = __commonJS({
           amza = amz / a;
           if (min(alz, amz) / 2 > MIN_LN && max(alz, amz) / 2 < MAX_LN) {
             sq = pow(z / agh, a / 2) * exp(amz / 2);
-            prefix = sq * sq;
+            prefix2 = sq * sq;
           } else if (min(alz, amz) / 4 > MIN_LN && max(alz, amz) / 4 < MAX_LN && z > a) {
             sq = pow(z / agh, a / 4) * exp(amz / 4);
-            prefix = sq * sq;
-            prefix *= prefix;
+            prefix2 = sq * sq;
+            prefix2 *= prefix2;
           } else if (amza > MIN_LN && amza < MAX_LN) {
-            prefix = pow(z * exp(amza) / agh, a);
+            prefix2 = pow(z * exp(amza) / agh, a);
           } else {
-            prefix = exp(alz + amz);
+            prefix2 = exp(alz + amz);
           }
         } else {
-          prefix = pow(z / agh, a) * exp(amz);
+          prefix2 = pow(z / agh, a) * exp(amz);
         }
       }
-      prefix *= sqrt(agh / E) / lanczosSumExpGScaled(a);
-      return prefix;
+      prefix2 *= sqrt(agh / E) / lanczosSumExpGScaled(a);
+      return prefix2;
     }
     module.exports = regularisedGammaPrefix;
   }
@@ -27008,7 +27008,7 @@ var require_lgamma_small_imp = __commonJS({
     var Y2 = 0.5281534194946289;
     var Y3 = 0.45201730728149414;
     function lgammaSmallImp(z, zm1, zm2) {
-      var prefix;
+      var prefix2;
       var result;
       var r;
       var R;
@@ -27041,8 +27041,8 @@ var require_lgamma_small_imp = __commonJS({
       }
       if (z <= 1.5) {
         r = rateval2(zm1);
-        prefix = zm1 * zm2;
-        result += prefix * Y2 + prefix * r;
+        prefix2 = zm1 * zm2;
+        result += prefix2 * Y2 + prefix2 * r;
         return result;
       }
       r = zm2 * zm1;
@@ -27693,25 +27693,25 @@ var require_full_igamma_prefix2 = __commonJS({
     var MAX_LN = require_lib107();
     var MIN_LN = require_lib112();
     function fullIGammaPrefix(a, z) {
-      var prefix;
+      var prefix2;
       var alz;
       alz = a * ln(z);
       if (z >= 1) {
         if (alz < MAX_LN && -z > MIN_LN) {
-          prefix = pow(z, a) * exp(-z);
+          prefix2 = pow(z, a) * exp(-z);
         } else if (a >= 1) {
-          prefix = pow(z / exp(z / a), a);
+          prefix2 = pow(z / exp(z / a), a);
         } else {
-          prefix = exp(alz - z);
+          prefix2 = exp(alz - z);
         }
       } else if (alz > MIN_LN) {
-        prefix = pow(z, a) * exp(-z);
+        prefix2 = pow(z, a) * exp(-z);
       } else if (z / a < MAX_LN) {
-        prefix = pow(z / exp(z / a), a);
+        prefix2 = pow(z / exp(z / a), a);
       } else {
-        prefix = exp(alz - z);
+        prefix2 = exp(alz - z);
       }
-      return prefix;
+      return prefix2;
     }
     module.exports = fullIGammaPrefix;
   }
@@ -27737,7 +27737,7 @@ var require_regularized_gamma_prefix = __commonJS({
     var G = require_lib102();
     var E = require_lib77();
     function regularizedGammaPrefix(a, z) {
-      var prefix;
+      var prefix2;
       var amza;
       var agh;
       var alz;
@@ -27753,8 +27753,8 @@ var require_regularized_gamma_prefix = __commonJS({
         return pow(z, a) * exp(-z) / gamma(a);
       }
       if (abs(d * d * a) <= 100 && a > 150) {
-        prefix = a * (log1p(d) - d) + z * (0.5 - G) / agh;
-        prefix = exp(prefix);
+        prefix2 = a * (log1p(d) - d) + z * (0.5 - G) / agh;
+        prefix2 = exp(prefix2);
       } else {
         alz = a * ln(z / agh);
         amz = a - z;
@@ -27762,22 +27762,22 @@ var require_regularized_gamma_prefix = __commonJS({
           amza = amz / a;
           if (min(alz, amz) / 2 > MIN_LN && max(alz, amz) / 2 < MAX_LN) {
             sq = pow(z / agh, a / 2) * exp(amz / 2);
-            prefix = sq * sq;
+            prefix2 = sq * sq;
           } else if (min(alz, amz) / 4 > MIN_LN && max(alz, amz) / 4 < MAX_LN && z > a) {
             sq = pow(z / agh, a / 4) * exp(amz / 4);
-            prefix = sq * sq;
-            prefix *= prefix;
+            prefix2 = sq * sq;
+            prefix2 *= prefix2;
           } else if (amza > MIN_LN && amza < MAX_LN) {
-            prefix = pow(z * exp(amza) / agh, a);
+            prefix2 = pow(z * exp(amza) / agh, a);
           } else {
-            prefix = exp(alz + amz);
+            prefix2 = exp(alz + amz);
           }
         } else {
-          prefix = pow(z / agh, a) * exp(amz);
+          prefix2 = pow(z / agh, a) * exp(amz);
         }
       }
-      prefix *= sqrt(agh / E) / lanczosSumExpGScaled(a);
-      return prefix;
+      prefix2 *= sqrt(agh / E) / lanczosSumExpGScaled(a);
+      return prefix2;
     }
     module.exports = regularizedGammaPrefix;
   }
@@ -27800,7 +27800,7 @@ var require_beta_small_b_large_a_series = __commonJS({
     var regularizedGammaPrefix = require_regularized_gamma_prefix();
     var p = new Array(30);
     function betaSmallBLargeASeries(a, b, x, y, s0, mult, normalized) {
-      var prefix;
+      var prefix2;
       var tmp1;
       var tnp1;
       var sum;
@@ -27831,16 +27831,16 @@ var require_beta_small_b_large_a_series = __commonJS({
         return s0;
       }
       if (normalized) {
-        prefix = h / gammaDeltaRatio(a, b);
-        prefix /= pow(t, b);
+        prefix2 = h / gammaDeltaRatio(a, b);
+        prefix2 /= pow(t, b);
       } else {
-        prefix = fullIGammaPrefix(b, u) / pow(t, b);
+        prefix2 = fullIGammaPrefix(b, u) / pow(t, b);
       }
-      prefix *= mult;
+      prefix2 *= mult;
       p[0] = 1;
       j = gammainc(u, b, true, true);
       j /= h;
-      sum = s0 + prefix * j;
+      sum = s0 + prefix2 * j;
       tnp1 = 1;
       lx2 = lx / 2;
       lx2 *= lx2;
@@ -27862,7 +27862,7 @@ var require_beta_small_b_large_a_series = __commonJS({
         j = (b2n * (b2n + 1) * j + (u + b2n + 1) * lxp) / t4;
         lxp *= lx2;
         b2n += 2;
-        r = prefix * p[n] * j;
+        r = prefix2 * p[n] * j;
         sum += r;
         if (r > 1) {
           if (abs(r) < abs(EPSILON * sum)) {
@@ -28398,17 +28398,17 @@ var require_ibeta_a_step = __commonJS({
     "use strict";
     var ibetaPowerTerms = require_ibeta_power_terms();
     function ibetaAStep(a, b, x, y, k, normalized, out) {
-      var prefix;
+      var prefix2;
       var term;
       var sum;
       var i;
-      prefix = ibetaPowerTerms(a, b, x, y, normalized);
+      prefix2 = ibetaPowerTerms(a, b, x, y, normalized);
       if (out) {
-        out[1] = prefix;
+        out[1] = prefix2;
       }
-      prefix /= a;
-      if (prefix === 0) {
-        return prefix;
+      prefix2 /= a;
+      if (prefix2 === 0) {
+        return prefix2;
       }
       sum = 1;
       term = 1;
@@ -28416,8 +28416,8 @@ var require_ibeta_a_step = __commonJS({
         term *= (a + b + i) * x / (a + i + 1);
         sum += term;
       }
-      prefix *= sum;
-      return prefix;
+      prefix2 *= sum;
+      return prefix2;
     }
     module.exports = ibetaAStep;
   }
@@ -28534,7 +28534,7 @@ var require_assign3 = __commonJS({
     var ONE_OVER_PI = 1 / PI;
     function ibetaImp(x, a, b, regularized, upper, out, stride, offset) {
       var lambda;
-      var prefix;
+      var prefix2;
       var fract;
       var bbar;
       var div;
@@ -28681,17 +28681,17 @@ var require_assign3 = __commonJS({
               }
             } else {
               if (regularized) {
-                prefix = 1;
+                prefix2 = 1;
               } else {
-                prefix = risingFactorialRatio(a + b, a, 20);
+                prefix2 = risingFactorialRatio(a + b, a, 20);
               }
               fract = ibetaAStep(a, b, x, y, 20, regularized, out);
               if (upper) {
                 fract -= regularized ? 1 : beta(a, b);
                 upper = false;
-                fract = -betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix, regularized);
+                fract = -betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix2, regularized);
               } else {
-                fract = betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix, regularized);
+                fract = betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix2, regularized);
               }
             }
           }
@@ -28729,17 +28729,17 @@ var require_assign3 = __commonJS({
             }
           } else {
             if (regularized) {
-              prefix = 1;
+              prefix2 = 1;
             } else {
-              prefix = risingFactorialRatio(a + b, a, 20);
+              prefix2 = risingFactorialRatio(a + b, a, 20);
             }
             fract = ibetaAStep(a, b, x, y, 20, regularized, out);
             if (upper) {
               fract -= regularized ? 1 : beta(a, b);
               upper = false;
-              fract = -betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix, regularized);
+              fract = -betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix2, regularized);
             } else {
-              fract = betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix, regularized);
+              fract = betaSmallBLargeASeries(a + 20, b, x, y, fract, prefix2, regularized);
             }
           }
         }
@@ -28781,13 +28781,13 @@ var require_assign3 = __commonJS({
             }
             bbar = b - n;
             if (regularized) {
-              prefix = 1;
+              prefix2 = 1;
             } else {
-              prefix = risingFactorialRatio(a + bbar, bbar, n);
+              prefix2 = risingFactorialRatio(a + bbar, bbar, n);
             }
             fract = ibetaAStep(bbar, a, y, x, n, regularized);
             fract = betaSmallBLargeASeries(a, bbar, x, y, fract, 1, regularized);
-            fract /= prefix;
+            fract /= prefix2;
           } else if (regularized) {
             n = floor(b);
             bbar = b - n;
@@ -29511,7 +29511,7 @@ var require_inverse_students_t = __commonJS({
     var erfcinv = require_lib131();
     var floor = require_lib8();
     var ldexp = require_lib51();
-    var round = require_lib93();
+    var round2 = require_lib93();
     var acos = require_lib132();
     var sqrt = require_lib55();
     var abs = require_lib47();
@@ -29601,7 +29601,7 @@ var require_inverse_students_t = __commonJS({
                 result = inverseStudentsTTailSeries(df, u);
               }
             } else {
-              crossover = ldexp(1, round(df / -0.654));
+              crossover = ldexp(1, round2(df / -0.654));
               if (u > crossover) {
                 result = inverseStudentsTHill(df, u);
               } else {
@@ -29619,7 +29619,7 @@ var require_inverse_students_t = __commonJS({
           result = inverseStudentsTTailSeries(df, u);
         }
       } else {
-        crossover = ldexp(1, round(df / -0.654));
+        crossover = ldexp(1, round2(df / -0.654));
         if (u > crossover) {
           result = inverseStudentsTHill(df, u);
         } else {
@@ -30408,8 +30408,8 @@ var require_browser = __commonJS({
     exports.formatters.j = function(v) {
       try {
         return JSON.stringify(v);
-      } catch (err) {
-        return "[UnexpectedJSONParseError]: " + err.message;
+      } catch (err2) {
+        return "[UnexpectedJSONParseError]: " + err2.message;
       }
     };
     function formatArgs(args) {
@@ -30514,8 +30514,8 @@ var require_node = __commonJS({
       var useColors2 = this.useColors;
       if (useColors2) {
         var c = this.color;
-        var prefix = "  \x1B[3" + c + ";1m" + name + " \x1B[0m";
-        args[0] = prefix + args[0].split("\n").join("\n" + prefix);
+        var prefix2 = "  \x1B[3" + c + ";1m" + name + " \x1B[0m";
+        args[0] = prefix2 + args[0].split("\n").join("\n" + prefix2);
         args.push("\x1B[3" + c + "m+" + exports.humanize(this.diff) + "\x1B[0m");
       } else {
         args[0] = (/* @__PURE__ */ new Date()).toUTCString() + " " + name + " " + args[0];
@@ -32247,7 +32247,7 @@ var require_lib140 = __commonJS({
 });
 
 // src/action/run.ts
-import { createHash as createHash2 } from "node:crypto";
+import { createHash as createHash3 } from "node:crypto";
 import { appendFile as appendFile2, mkdir as mkdir2, readFile as readFile2, writeFile as writeFile2 } from "node:fs/promises";
 import path6 from "node:path";
 
@@ -32267,24 +32267,27 @@ var InputError = class extends Error {
    */
   describe() {
     const { file, line, column, value } = this.location;
-    const where = file === void 0 ? "" : line === void 0 ? `${file}: ` : `${file}:${line}: `;
+    const name = file === void 0 ? "" : echo(file);
+    const where = file === void 0 ? "" : line === void 0 ? `${name}: ` : `${name}:${line}: `;
     const details = [];
-    if (column !== void 0) details.push(`column "${column}"`);
-    if (value !== void 0) details.push(`value ${JSON.stringify(truncate(value, 80))}`);
-    return printable(
-      `${where}${this.message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`
-    );
+    if (column !== void 0) details.push(`column "${echo(column)}"`);
+    if (value !== void 0) details.push(`value ${JSON.stringify(echo(value))}`);
+    const message = echo(this.message, MESSAGE_LIMIT);
+    return printable(`${where}${message}${details.length > 0 ? ` (${details.join(", ")})` : ""}`);
   }
 };
+var ECHO_LIMIT = 200;
+var MESSAGE_LIMIT = 2e3;
+function echo(text2, max = ECHO_LIMIT) {
+  if (text2.length <= max) return text2;
+  return `${text2.slice(0, max)}\u2026 (${text2.length} characters)`;
+}
 function printable(text2) {
   return text2.replace(
     // biome-ignore lint/suspicious/noControlCharactersInRegex: control characters are the target
     /[\u0000-\u001f\u007f-\u009f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g,
     (ch) => ch === "\n" ? "\\n" : ch === "\r" ? "\\r" : ch === "	" ? "\\t" : `\\u{${ch.codePointAt(0)?.toString(16).toUpperCase().padStart(4, "0")}}`
   );
-}
-function truncate(text2, max) {
-  return text2.length <= max ? text2 : `${text2.slice(0, max)}\u2026`;
 }
 
 // src/core/formatNumber.ts
@@ -32315,10 +32318,34 @@ var LOSS_LABELS = {
   pinball: "pinball loss (mean over quantile levels)",
   interval: "interval score of the central interval (Gneiting & Raftery 2007)"
 };
+var LOSS_ALIASES = {
+  mse: "squared",
+  mae: "absolute",
+  mape: "ape"
+};
+function canonicalLoss(name) {
+  return LOSS_ALIASES[name] ?? name;
+}
 
 // src/report/escapeMarkdown.ts
 function escapeMarkdown(text2) {
   return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
+}
+
+// src/report/inputNotes.ts
+function inputNotes(report) {
+  const notes = [];
+  const order = report.inputs.timestamps.order;
+  if (order !== "") notes.push(`Time order: ${order}.`);
+  const overall = report.comparisons[0];
+  if (overall !== void 0 && report.settings.loss === "squared" && report.settings.pooling === "raw" && overall.meanBaselineLoss >= 0 && overall.meanCandidateLoss >= 0) {
+    notes.push(
+      `RMSE: baseline ${formatNumber(Math.sqrt(overall.meanBaselineLoss))}, candidate ${formatNumber(
+        Math.sqrt(overall.meanCandidateLoss)
+      )} (square roots of the mean squared errors compared above).`
+    );
+  }
+  return notes;
 }
 
 // src/settings/defaultConfidence.ts
@@ -32623,6 +32650,7 @@ function inputSection(report) {
     )}), ${i.series} series, horizons ${i.horizons.join(", ") || "1"}.`,
     `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`
   );
+  for (const note of inputNotes(report)) out.push(escapeMarkdown(note));
   if (i.examples.baselineOnly.length > 0) {
     out.push(
       `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => escapeMarkdown(k)).join(", ")}.`
@@ -32934,11 +32962,11 @@ var tunnel = __toESM(require_tunnel2(), 1);
 var import_undici = __toESM(require_undici(), 1);
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -32954,7 +32982,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -32989,11 +33017,11 @@ var HttpCodes;
   HttpCodes2[HttpCodes2["ServiceUnavailable"] = 503] = "ServiceUnavailable";
   HttpCodes2[HttpCodes2["GatewayTimeout"] = 504] = "GatewayTimeout";
 })(HttpCodes || (HttpCodes = {}));
-var Headers;
-(function(Headers2) {
-  Headers2["Accept"] = "accept";
-  Headers2["ContentType"] = "content-type";
-})(Headers || (Headers = {}));
+var Headers2;
+(function(Headers3) {
+  Headers3["Accept"] = "accept";
+  Headers3["ContentType"] = "content-type";
+})(Headers2 || (Headers2 = {}));
 var MediaTypes;
 (function(MediaTypes2) {
   MediaTypes2["ApplicationJson"] = "application/json";
@@ -33027,26 +33055,26 @@ var HttpClientResponse = class {
   }
   readBody() {
     return __awaiter(this, void 0, void 0, function* () {
-      return new Promise((resolve2) => __awaiter(this, void 0, void 0, function* () {
+      return new Promise((resolve3) => __awaiter(this, void 0, void 0, function* () {
         let output = Buffer.alloc(0);
         this.message.on("data", (chunk) => {
           output = Buffer.concat([output, chunk]);
         });
         this.message.on("end", () => {
-          resolve2(output.toString());
+          resolve3(output.toString());
         });
       }));
     });
   }
   readBodyBuffer() {
     return __awaiter(this, void 0, void 0, function* () {
-      return new Promise((resolve2) => __awaiter(this, void 0, void 0, function* () {
+      return new Promise((resolve3) => __awaiter(this, void 0, void 0, function* () {
         const chunks = [];
         this.message.on("data", (chunk) => {
           chunks.push(chunk);
         });
         this.message.on("end", () => {
-          resolve2(Buffer.concat(chunks));
+          resolve3(Buffer.concat(chunks));
         });
       }));
     });
@@ -33136,7 +33164,7 @@ var HttpClient = class {
    */
   getJson(requestUrl_1) {
     return __awaiter(this, arguments, void 0, function* (requestUrl, additionalHeaders = {}) {
-      additionalHeaders[Headers.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers.Accept, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes.ApplicationJson);
       const res = yield this.get(requestUrl, additionalHeaders);
       return this._processResponse(res, this.requestOptions);
     });
@@ -33144,8 +33172,8 @@ var HttpClient = class {
   postJson(requestUrl_1, obj_1) {
     return __awaiter(this, arguments, void 0, function* (requestUrl, obj, additionalHeaders = {}) {
       const data = JSON.stringify(obj, null, 2);
-      additionalHeaders[Headers.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers.Accept, MediaTypes.ApplicationJson);
-      additionalHeaders[Headers.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes.ApplicationJson);
       const res = yield this.post(requestUrl, data, additionalHeaders);
       return this._processResponse(res, this.requestOptions);
     });
@@ -33153,8 +33181,8 @@ var HttpClient = class {
   putJson(requestUrl_1, obj_1) {
     return __awaiter(this, arguments, void 0, function* (requestUrl, obj, additionalHeaders = {}) {
       const data = JSON.stringify(obj, null, 2);
-      additionalHeaders[Headers.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers.Accept, MediaTypes.ApplicationJson);
-      additionalHeaders[Headers.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes.ApplicationJson);
       const res = yield this.put(requestUrl, data, additionalHeaders);
       return this._processResponse(res, this.requestOptions);
     });
@@ -33162,8 +33190,8 @@ var HttpClient = class {
   patchJson(requestUrl_1, obj_1) {
     return __awaiter(this, arguments, void 0, function* (requestUrl, obj, additionalHeaders = {}) {
       const data = JSON.stringify(obj, null, 2);
-      additionalHeaders[Headers.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers.Accept, MediaTypes.ApplicationJson);
-      additionalHeaders[Headers.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.Accept] = this._getExistingOrDefaultHeader(additionalHeaders, Headers2.Accept, MediaTypes.ApplicationJson);
+      additionalHeaders[Headers2.ContentType] = this._getExistingOrDefaultContentTypeHeader(additionalHeaders, MediaTypes.ApplicationJson);
       const res = yield this.patch(requestUrl, data, additionalHeaders);
       return this._processResponse(res, this.requestOptions);
     });
@@ -33249,14 +33277,14 @@ var HttpClient = class {
    */
   requestRaw(info2, data) {
     return __awaiter(this, void 0, void 0, function* () {
-      return new Promise((resolve2, reject) => {
-        function callbackForResult(err, res) {
-          if (err) {
-            reject(err);
+      return new Promise((resolve3, reject) => {
+        function callbackForResult(err2, res) {
+          if (err2) {
+            reject(err2);
           } else if (!res) {
             reject(new Error("Unknown error"));
           } else {
-            resolve2(res);
+            resolve3(res);
           }
         }
         this.requestRawWithCallback(info2, data, callbackForResult);
@@ -33277,10 +33305,10 @@ var HttpClient = class {
       info2.options.headers["Content-Length"] = Buffer.byteLength(data, "utf8");
     }
     let callbackCalled = false;
-    function handleResult(err, res) {
+    function handleResult(err2, res) {
       if (!callbackCalled) {
         callbackCalled = true;
-        onResult(err, res);
+        onResult(err2, res);
       }
     }
     const req = info2.httpModule.request(info2.options, (msg) => {
@@ -33297,8 +33325,8 @@ var HttpClient = class {
       }
       handleResult(new Error(`Request timeout: ${info2.options.path}`));
     });
-    req.on("error", function(err) {
-      handleResult(err);
+    req.on("error", function(err2) {
+      handleResult(err2);
     });
     if (data && typeof data === "string") {
       req.write(data, "utf8");
@@ -33393,7 +33421,7 @@ var HttpClient = class {
   _getExistingOrDefaultContentTypeHeader(additionalHeaders, _default) {
     let clientHeader;
     if (this.requestOptions && this.requestOptions.headers) {
-      const headerValue = lowercaseKeys(this.requestOptions.headers)[Headers.ContentType];
+      const headerValue = lowercaseKeys(this.requestOptions.headers)[Headers2.ContentType];
       if (headerValue) {
         if (typeof headerValue === "number") {
           clientHeader = String(headerValue);
@@ -33404,7 +33432,7 @@ var HttpClient = class {
         }
       }
     }
-    const additionalValue = additionalHeaders[Headers.ContentType];
+    const additionalValue = additionalHeaders[Headers2.ContentType];
     if (additionalValue !== void 0) {
       if (typeof additionalValue === "number") {
         return String(additionalValue);
@@ -33500,12 +33528,12 @@ var HttpClient = class {
     return __awaiter(this, void 0, void 0, function* () {
       retryNumber = Math.min(ExponentialBackoffCeiling, retryNumber);
       const ms = ExponentialBackoffTimeSlice * Math.pow(2, retryNumber);
-      return new Promise((resolve2) => setTimeout(() => resolve2(), ms));
+      return new Promise((resolve3) => setTimeout(() => resolve3(), ms));
     });
   }
   _processResponse(res, options) {
     return __awaiter(this, void 0, void 0, function* () {
-      return new Promise((resolve2, reject) => __awaiter(this, void 0, void 0, function* () {
+      return new Promise((resolve3, reject) => __awaiter(this, void 0, void 0, function* () {
         const statusCode = res.message.statusCode || 0;
         const response = {
           statusCode,
@@ -33513,7 +33541,7 @@ var HttpClient = class {
           headers: {}
         };
         if (statusCode === HttpCodes.NotFound) {
-          resolve2(response);
+          resolve3(response);
         }
         function dateTimeDeserializer(key, value) {
           if (typeof value === "string") {
@@ -33537,7 +33565,7 @@ var HttpClient = class {
             response.result = obj;
           }
           response.headers = res.message.headers;
-        } catch (err) {
+        } catch (err2) {
         }
         if (statusCode > 299) {
           let msg;
@@ -33548,11 +33576,11 @@ var HttpClient = class {
           } else {
             msg = `Failed request: (${statusCode})`;
           }
-          const err = new HttpClientError(msg, statusCode);
-          err.result = response.result;
-          reject(err);
+          const err2 = new HttpClientError(msg, statusCode);
+          err2.result = response.result;
+          reject(err2);
         } else {
-          resolve2(response);
+          resolve3(response);
         }
       }));
     });
@@ -33563,11 +33591,11 @@ var lowercaseKeys = (obj) => Object.keys(obj).reduce((c, k) => (c[k.toLowerCase(
 // node_modules/@actions/http-client/lib/auth.js
 var __awaiter2 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -33583,7 +33611,7 @@ var __awaiter2 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -33614,11 +33642,11 @@ var BearerCredentialHandler = class {
 // node_modules/@actions/core/lib/oidc-utils.js
 var __awaiter3 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -33634,7 +33662,7 @@ var __awaiter3 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -33703,11 +33731,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter4 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -33723,7 +33751,7 @@ var __awaiter4 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -34025,11 +34053,11 @@ import * as fs2 from "fs";
 import * as path2 from "path";
 var __awaiter5 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -34045,7 +34073,7 @@ var __awaiter5 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -34057,11 +34085,11 @@ function exists(fsPath) {
   return __awaiter5(this, void 0, void 0, function* () {
     try {
       yield stat(fsPath);
-    } catch (err) {
-      if (err.code === "ENOENT") {
+    } catch (err2) {
+      if (err2.code === "ENOENT") {
         return false;
       }
-      throw err;
+      throw err2;
     }
     return true;
   });
@@ -34081,9 +34109,9 @@ function tryGetExecutablePath(filePath, extensions) {
     let stats = void 0;
     try {
       stats = yield stat(filePath);
-    } catch (err) {
-      if (err.code !== "ENOENT") {
-        console.log(`Unexpected error attempting to determine if executable file exists '${filePath}': ${err}`);
+    } catch (err2) {
+      if (err2.code !== "ENOENT") {
+        console.log(`Unexpected error attempting to determine if executable file exists '${filePath}': ${err2}`);
       }
     }
     if (stats && stats.isFile()) {
@@ -34104,9 +34132,9 @@ function tryGetExecutablePath(filePath, extensions) {
       stats = void 0;
       try {
         stats = yield stat(filePath);
-      } catch (err) {
-        if (err.code !== "ENOENT") {
-          console.log(`Unexpected error attempting to determine if executable file exists '${filePath}': ${err}`);
+      } catch (err2) {
+        if (err2.code !== "ENOENT") {
+          console.log(`Unexpected error attempting to determine if executable file exists '${filePath}': ${err2}`);
         }
       }
       if (stats && stats.isFile()) {
@@ -34120,8 +34148,8 @@ function tryGetExecutablePath(filePath, extensions) {
                 break;
               }
             }
-          } catch (err) {
-            console.log(`Unexpected error attempting to determine the actual case of the file '${filePath}': ${err}`);
+          } catch (err2) {
+            console.log(`Unexpected error attempting to determine the actual case of the file '${filePath}': ${err2}`);
           }
           return filePath;
         } else {
@@ -34149,11 +34177,11 @@ function isUnixExecutable(stats) {
 // node_modules/@actions/io/lib/io.js
 var __awaiter6 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -34169,7 +34197,7 @@ var __awaiter6 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -34243,11 +34271,11 @@ function findInPath(tool) {
 import { setTimeout as setTimeout2 } from "timers";
 var __awaiter7 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -34263,7 +34291,7 @@ var __awaiter7 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -34324,8 +34352,8 @@ var ToolRunner = class extends events.EventEmitter {
         n = s.indexOf(os3.EOL);
       }
       return s;
-    } catch (err) {
-      this._debug(`error processing line. Failed with error ${err}`);
+    } catch (err2) {
+      this._debug(`error processing line. Failed with error ${err2}`);
       return "";
     }
   }
@@ -34482,7 +34510,7 @@ var ToolRunner = class extends events.EventEmitter {
         this.toolPath = path4.resolve(process.cwd(), this.options.cwd || process.cwd(), this.toolPath);
       }
       this.toolPath = yield which(this.toolPath, true);
-      return new Promise((resolve2, reject) => __awaiter7(this, void 0, void 0, function* () {
+      return new Promise((resolve3, reject) => __awaiter7(this, void 0, void 0, function* () {
         this._debug(`exec tool: ${this.toolPath}`);
         this._debug("arguments:");
         for (const arg of this.args) {
@@ -34535,8 +34563,8 @@ var ToolRunner = class extends events.EventEmitter {
             });
           });
         }
-        cp.on("error", (err) => {
-          state.processError = err.message;
+        cp.on("error", (err2) => {
+          state.processError = err2.message;
           state.processExited = true;
           state.processClosed = true;
           state.CheckComplete();
@@ -34565,7 +34593,7 @@ var ToolRunner = class extends events.EventEmitter {
           if (error2) {
             reject(error2);
           } else {
-            resolve2(exitCode);
+            resolve3(exitCode);
           }
         });
         if (this.options.input) {
@@ -34688,11 +34716,11 @@ var ExecState = class _ExecState extends events.EventEmitter {
 // node_modules/@actions/exec/lib/exec.js
 var __awaiter8 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -34708,7 +34736,7 @@ var __awaiter8 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -34761,11 +34789,11 @@ function getExecOutput(commandLine, args, options) {
 // node_modules/@actions/core/lib/platform.js
 var __awaiter9 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -34781,7 +34809,7 @@ var __awaiter9 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -34840,11 +34868,11 @@ function getDetails() {
 // node_modules/@actions/core/lib/core.js
 var __awaiter10 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -34860,7 +34888,7 @@ var __awaiter10 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -35042,11 +35070,11 @@ var httpClient = __toESM(require_lib(), 1);
 var import_undici2 = __toESM(require_undici(), 1);
 var __awaiter11 = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve2) {
-      resolve2(value);
+    return value instanceof P ? value : new P(function(resolve3) {
+      resolve3(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve2, reject) {
+  return new (P || (P = Promise))(function(resolve3, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -35062,7 +35090,7 @@ var __awaiter11 = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve2(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve3(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -36039,7 +36067,7 @@ async function getResponseData(response) {
     try {
       text2 = await response.text();
       return JSONParse(text2);
-    } catch (err) {
+    } catch (err2) {
       return text2;
     }
   } else if (mimetype.type.startsWith("text/") || // `application/octet-stream` is the canonical "arbitrary binary" type
@@ -39079,6 +39107,70 @@ function compareKeys(components, a, other, b, depth = components.length) {
   return 0;
 }
 
+// src/alignment/civilDays.ts
+function daysFromCivil(year, month, day) {
+  const y = month <= 2 ? year - 1 : year;
+  const era = Math.floor(y / 400);
+  const yoe = y - era * 400;
+  const mp = (month + 9) % 12;
+  const doy = Math.floor((153 * mp + 2) / 5) + day - 1;
+  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
+  return era * 146097 + doe - 719468;
+}
+
+// src/alignment/timeFormat.ts
+var TIME_FORMAT_NAMES = [
+  "auto",
+  "number",
+  "iso-8601",
+  "day-month-year",
+  "month-day-year",
+  "text-order"
+];
+var DAY_MONTH = /^(\d{1,2})([/.-])(\d{1,2})\2(\d{2,4})(?:[ T](\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?)?$/;
+function looksLikeDayMonthDate(label) {
+  return DAY_MONTH.test(label);
+}
+function readDayMonthDate(label, dayFirst) {
+  const m = DAY_MONTH.exec(label);
+  const pattern = dayFirst ? "D/M/YYYY [H:MM[:SS]]" : "M/D/YYYY [H:MM[:SS]]";
+  if (m === null) return `not a date of the form ${pattern}`;
+  if (m[4].length !== 4) return `the year ${m[4]} is not written with four digits`;
+  const day = Number(dayFirst ? m[1] : m[3]);
+  const month = Number(dayFirst ? m[3] : m[1]);
+  const year = Number(m[4]);
+  const civil = {
+    year,
+    month,
+    day,
+    hour: m[5] === void 0 ? 0 : Number(m[5]),
+    minute: m[6] === void 0 ? 0 : Number(m[6]),
+    second: m[7] === void 0 ? 0 : Number(m[7]),
+    nanos: m[8] === void 0 ? 0 : Number(m[8].padEnd(9, "0")),
+    offsetSeconds: 0
+  };
+  return checkCivil(civil, pattern) ?? civil;
+}
+function checkCivil(t, pattern) {
+  if (t.month < 1 || t.month > 12) return `month ${t.month} is not 1\u201312 (read as ${pattern})`;
+  if (t.day < 1 || t.day > daysInMonth(t.year, t.month)) {
+    return `day ${t.day} does not exist in month ${t.month} of ${t.year} (read as ${pattern})`;
+  }
+  if (t.hour > 23) return `hour ${t.hour} is not 0\u201323`;
+  if (t.minute > 59) return `minute ${t.minute} is not 0\u201359`;
+  if (t.second > 59) return `second ${t.second} is not 0\u201359`;
+  return null;
+}
+function daysInMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
+function instantOf(t) {
+  const seconds = daysFromCivil(t.year, t.month, t.day) * 86400 + t.hour * 3600 + t.minute * 60 + t.second - t.offsetSeconds;
+  const key = `${String(seconds + 1e12).padStart(13, "0")}.${String(t.nanos).padStart(9, "0")}`;
+  return { key, epochMillis: seconds * 1e3 + t.nanos / 1e6 };
+}
+
 // src/alignment/timeOrder.ts
 var DATE_PREFIX = /^\d{4}-\d{2}-\d{2}/;
 var ISO = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?(Z|[+-]\d{2}:\d{2})?)?$/;
@@ -39086,20 +39178,22 @@ function readLabel(label) {
   const number = parseDecimal(label);
   if (!Number.isNaN(number)) return { kind: "number", key: number === 0 ? 0 : number };
   if (!DATE_PREFIX.test(label)) return { kind: "text" };
+  return readIsoLabel(label);
+}
+function readIsoLabel(label) {
   const m = ISO.exec(label);
   if (m === null) {
     return "starts like a date but is not YYYY-MM-DD[THH:MM[:SS[.fff]]][Z|\xB1HH:MM]";
   }
-  const year = Number(m[1]);
   const month = Number(m[2]);
   const day = Number(m[3]);
+  const year = Number(m[1]);
+  if (month < 1 || month > 12) return `month ${m[2]} is not 01\u201312`;
+  if (day < 1 || day > 31 || checkCivil({ ...ZERO, year, month, day }, "") !== null)
+    return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
   const hour = m[4] === void 0 ? 0 : Number(m[4]);
   const minute = m[5] === void 0 ? 0 : Number(m[5]);
   const second = m[6] === void 0 ? 0 : Number(m[6]);
-  const nanos = m[7] === void 0 ? 0 : Number(m[7].padEnd(9, "0"));
-  if (month < 1 || month > 12) return `month ${m[2]} is not 01\u201312`;
-  if (day < 1 || day > daysInMonth(year, month))
-    return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
   if (hour > 23) return `hour ${m[4]} is not 00\u201323`;
   if (minute > 59) return `minute ${m[5]} is not 00\u201359`;
   if (second > 59) return `second ${m[6]} is not 00\u201359`;
@@ -39111,62 +39205,89 @@ function readLabel(label) {
     if (oh > 23 || om > 59) return `offset ${zone} is not a valid \xB1HH:MM`;
     offsetSeconds = (zone[0] === "-" ? -1 : 1) * (oh * 3600 + om * 60);
   }
-  const seconds = daysFromCivil(year, month, day) * 86400 + hour * 3600 + minute * 60 + second - offsetSeconds;
-  const key = `${String(seconds + 1e12).padStart(13, "0")}.${String(nanos).padStart(9, "0")}`;
-  return { kind: "datetime", key };
+  const civil = {
+    year,
+    month,
+    day,
+    hour,
+    minute,
+    second,
+    nanos: m[7] === void 0 ? 0 : Number(m[7].padEnd(9, "0")),
+    offsetSeconds
+  };
+  const { key, epochMillis } = instantOf(civil);
+  return { kind: "datetime", key, epochMillis };
 }
-function daysInMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+var ZERO = {
+  year: 0,
+  month: 1,
+  day: 1,
+  hour: 0,
+  minute: 0,
+  second: 0,
+  nanos: 0,
+  offsetSeconds: 0
+};
+function readAs(label, format) {
+  switch (format) {
+    case "auto":
+      return readLabel(label);
+    case "text-order":
+      return { kind: "text" };
+    case "number": {
+      const x = parseDecimal(label);
+      return Number.isNaN(x) ? "not a decimal number" : { kind: "number", key: x === 0 ? 0 : x };
+    }
+    case "iso-8601":
+      return DATE_PREFIX.test(label) ? readIsoLabel(label) : "not an ISO 8601 date (YYYY-MM-DD[THH:MM[:SS]][Z|\xB1HH:MM])";
+    case "day-month-year":
+    case "month-day-year": {
+      const civil = readDayMonthDate(label, format === "day-month-year");
+      if (typeof civil === "string") return civil;
+      const { key, epochMillis } = instantOf(civil);
+      return { kind: "datetime", key, epochMillis };
+    }
+  }
 }
-function daysFromCivil(year, month, day) {
-  const y = month <= 2 ? year - 1 : year;
-  const era = Math.floor(y / 400);
-  const yoe = y - era * 400;
-  const mp = (month + 9) % 12;
-  const doy = Math.floor((153 * mp + 2) / 5) + day - 1;
-  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
-  return era * 146097 + doe - 719468;
-}
-function orderLabels(sources, what) {
+function orderLabels(sources, what, format = "auto", option = "--time-format") {
   const readings = /* @__PURE__ */ new Map();
-  const example = { number: "", datetime: "", text: "" };
-  const exampleFile = { number: "", datetime: "", text: "" };
+  const first = {
+    number: null,
+    datetime: null,
+    text: null
+  };
   const counts = { number: 0, datetime: 0, text: 0 };
   for (const { file, column } of sources) {
-    column.labels.forEach((label, id) => {
-      if (readings.has(label)) return;
-      const reading = readLabel(label);
+    const labels2 = column.labels;
+    for (let id = 0; id < labels2.length; id++) {
+      const label = labels2[id];
+      if (readings.has(label)) continue;
+      const reading = readAs(label, format);
       if (typeof reading === "string") {
-        throw new InputError(`not a valid ISO 8601 ${what}: ${reading}`, {
-          file,
-          line: column.firstLines[id],
-          column: column.column,
-          value: label
-        });
+        throw new InputError(
+          format === "auto" ? `not a valid ISO 8601 ${what}: ${reading}` : `not a ${what} in the ${format} format of ${option}: ${reading}`,
+          { file, line: column.firstLines[id], column: column.column, value: label }
+        );
       }
       readings.set(label, reading);
-      const kind2 = reading.kind;
-      counts[kind2]++;
-      if (counts[kind2] === 1 || label < example[kind2]) {
-        example[kind2] = label;
-        exampleFile[kind2] = file;
-      }
-    });
+      counts[reading.kind]++;
+      first[reading.kind] ??= { file, line: column.firstLines[id], column: column.column, label };
+    }
   }
   const total = readings.size;
   let kind;
   let reason;
-  const eg = (k) => `${JSON.stringify(example[k])} in ${exampleFile[k]}`;
-  if (counts.number === total) {
+  if (format === "text-order") {
+    kind = "text";
+    reason = `text order (UTF-16 code units, so "10" comes before "9"), as ${option} text-order asks`;
+  } else if (counts.number === total) {
     kind = "number";
     reason = `every ${what} is a decimal number: numeric order`;
   } else if (counts.datetime === total) {
     kind = "datetime";
-    reason = `every ${what} is an ISO 8601 date or date-time: chronological order (no offset means UTC)`;
+    reason = format === "day-month-year" || format === "month-day-year" ? `every ${what} is a ${format} date: chronological order (times are UTC)` : `every ${what} is an ISO 8601 date or date-time: chronological order (no offset means UTC)`;
   } else {
-    kind = "text";
-    reason = counts.text > 0 ? `text order: ${eg("text")} is neither a decimal number nor an ISO 8601 date/time` : `text order: the ${what}s mix numbers (e.g. ${eg("number")}) and dates (e.g. ${eg("datetime")})`;
+    throw mixedKinds(first, counts, what, option);
   }
   const keyOf = (label) => {
     const reading = readings.get(label);
@@ -39189,7 +39310,33 @@ function orderLabels(sources, what) {
   const ranks = sources.map(
     ({ column }) => Int32Array.from(column.labels, (label) => rankOfKey.get(keyOf(label)))
   );
-  return { kind, reason, ranks, labels: keys.map((key) => representative.get(key)) };
+  const labels = keys.map((key) => representative.get(key));
+  let instants = null;
+  if (kind === "number") instants = Float64Array.from(keys);
+  else if (kind === "datetime") {
+    instants = Float64Array.from(labels, (label) => {
+      const reading = readings.get(label);
+      return reading.kind === "datetime" ? reading.epochMillis : Number.NaN;
+    });
+  }
+  return { kind, format, reason, ranks, labels, instants };
+}
+function mixedKinds(first, counts, what, option) {
+  const odd = first.text ?? (counts.number <= counts.datetime ? first.number : first.datetime) ?? first.number;
+  const others = odd === first.text ? counts.number >= counts.datetime ? first.number : first.datetime : odd === first.number ? first.datetime : first.number;
+  const context3 = others === null ? "" : ` while ${JSON.stringify(others.label)} (${others.file}:${others.line}) is ${others === first.number ? "a number" : "an ISO 8601 date"}`;
+  let hint;
+  if (looksLikeDayMonthDate(odd.label)) {
+    hint = `it looks like a date with day and month first: say how to read it with ${option} day-month-year (31/12/2026) or ${option} month-day-year (12/31/2026)`;
+  } else if (odd === first.text) {
+    hint = `a ${what} must be a number or an ISO 8601 date (YYYY-MM-DD[THH:MM[:SS]]); if the labels are names with no time order, ${option} text-order compares them as text (then "10" sorts before "9")`;
+  } else {
+    hint = `one file (or column) must use one kind of ${what} throughout; convert them, or use ${option} text-order to compare them as text`;
+  }
+  return new InputError(
+    `the ${what}s cannot be put in a reliable time order: this one is ${odd === first.text ? "neither a number nor an ISO 8601 date" : odd === first.number ? "a number" : "an ISO 8601 date"}${context3}; ${hint}`,
+    { file: odd.file, line: odd.line, column: odd.column, value: odd.label }
+  );
 }
 function compareCodeUnits(a, b) {
   return a < b ? -1 : a > b ? 1 : 0;
@@ -39209,14 +39356,17 @@ function alignPanel(input, hooks = {}) {
   if (actuals !== void 0) checkSameShape(baseline, actuals, "series", (t) => t.series);
   const tables = actuals === void 0 ? [baseline, candidate] : [baseline, candidate, actuals];
   const series = orderSeries(tables.map((t) => t.series));
+  const timeFormat = hooks.timeFormat ?? "auto";
   const time = orderLabels(
     tables.map((t) => ({ file: t.summary.path, column: t.timestamp })),
-    "timestamp"
+    "timestamp",
+    timeFormat
   );
   const hasOrigin = baseline.origin !== null;
   const origin = hasOrigin ? orderLabels(
     [baseline, candidate].map((t) => ({ file: t.summary.path, column: t.origin })),
-    "origin"
+    "origin",
+    timeFormat
   ) : null;
   const hasPath = baseline.path !== null;
   const path7 = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
@@ -39272,7 +39422,7 @@ function alignPanel(input, hooks = {}) {
     if (depth > pathAt && path7 !== null) {
       parts.push(`path=${path7.names[keys[pathAt].values[row]]}`);
     }
-    return parts.join(" ");
+    return parts.map((part) => echo(part, 80)).join(" ");
   };
   const checkDuplicates = (table, keys, order) => {
     for (let i = 1; i < order.length; i++) {
@@ -39441,6 +39591,7 @@ function alignPanel(input, hooks = {}) {
   });
   const seriesIds = compact(gather32(bKeys[0].values, bRows), series.names);
   const timeIds = compact(gather32(bKeys[1].values, bRows), time.labels);
+  const timeInstants = time.instants === null ? null : Float64Array.from(timeIds.kept, (rank) => time.instants[rank]);
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2].values[bRows[p]]];
   const originIds = origin === null ? null : compact(gather32(bKeys[originAt].values, bRows), origin.labels);
@@ -39454,6 +39605,8 @@ function alignPanel(input, hooks = {}) {
     timestamps: timeIds.names,
     timestampKind: time.kind,
     timestampKindReason: time.reason,
+    timeFormat: time.format,
+    timeInstants,
     horizon,
     origin: originIds === null ? null : originIds.ids,
     origins: originIds === null ? [] : originIds.names,
@@ -39598,20 +39751,26 @@ function gather32(values, rows) {
 function compact(ids, names) {
   const remap = new Int32Array(names.length).fill(-1);
   for (let p = 0; p < ids.length; p++) remap[ids[p]] = 0;
+  const keptNames = [];
   const kept = [];
   for (let id = 0; id < names.length; id++) {
     if (remap[id] === 0) {
-      remap[id] = kept.length;
-      kept.push(names[id]);
+      remap[id] = keptNames.length;
+      keptNames.push(names[id]);
+      kept.push(id);
     }
   }
   for (let p = 0; p < ids.length; p++) ids[p] = remap[ids[p]];
-  return { ids, names: kept };
+  return { ids, names: keptNames, kept };
 }
 
 // src/alignment/historyBySeries.ts
-function historyBySeries(table) {
-  const order = orderLabels([{ file: table.summary.path, column: table.timestamp }], "timestamp");
+function historyBySeries(table, timeFormat = "auto") {
+  const order = orderLabels(
+    [{ file: table.summary.path, column: table.timestamp }],
+    "timestamp",
+    timeFormat
+  );
   const ranks = order.ranks[0];
   const actual = table.actual?.values ?? new Float64Array(table.size);
   const bySeries = /* @__PURE__ */ new Map();
@@ -39636,9 +39795,9 @@ function historyBySeries(table) {
 }
 
 // src/alignment/orderLossSeries.ts
-function orderLossSeries(table) {
+function orderLossSeries(table, timeFormat = "auto") {
   const file = table.summary.path;
-  const order = orderLabels([{ file, column: table.timestamp }], "timestamp");
+  const order = orderLabels([{ file, column: table.timestamp }], "timestamp", timeFormat);
   const ranks = order.ranks[0];
   const n = table.size;
   const rowAt = new Int32Array(order.labels.length).fill(-1);
@@ -39682,7 +39841,8 @@ function orderLossSeries(table) {
     series: { time, baseline, candidate, rows, rowCount, maxHorizon },
     timestamps: [...order.labels],
     kind: order.kind,
-    reason: order.reason
+    reason: order.reason,
+    format: order.format
   };
 }
 
@@ -39987,7 +40147,9 @@ function panelInputsSummary(panel, losses) {
       count: ts.length,
       kind: panel.timestampKind,
       first: ts[0] ?? null,
-      last: ts.at(-1) ?? null
+      last: ts.at(-1) ?? null,
+      format: panel.timeFormat,
+      order: panel.timestampKindReason
     },
     series: panel.seriesNames.length,
     horizons: [...horizons].sort((a, b) => a - b),
@@ -39995,7 +40157,7 @@ function panelInputsSummary(panel, losses) {
     intervalCoverage: losses.coverage
   };
 }
-function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
+function lossFileInputsSummary(file, timestamps, kind, maxHorizon, order = { format: "auto", reason: "" }) {
   return {
     files: [file],
     rowsMatched: file.rows,
@@ -40011,7 +40173,9 @@ function lossFileInputsSummary(file, timestamps, kind, maxHorizon) {
       count: timestamps.length,
       kind,
       first: timestamps[0] ?? null,
-      last: timestamps.at(-1) ?? null
+      last: timestamps.at(-1) ?? null,
+      format: order.format,
+      order: order.reason
     },
     series: 1,
     horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),
@@ -40589,24 +40753,24 @@ function bootstrapMarginSet(input) {
   const unique = [];
   for (const p of points) if (unique[unique.length - 1] !== p) unique.push(p);
   const pieces = [];
-  let open3;
+  let open4;
   const close = (upper) => {
-    if (open3 !== void 0) pieces.push({ lower: open3, upper });
-    open3 = void 0;
+    if (open4 !== void 0) pieces.push({ lower: open4, upper });
+    open4 = void 0;
   };
   const m = unique.length;
-  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open3 = null;
+  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open4 = null;
   for (let i = 0; i < m; i++) {
     const p = unique[i];
     if (accepted(p)) {
-      if (open3 === void 0) open3 = p;
+      if (open4 === void 0) open4 = p;
     } else {
       close(p);
     }
     const next = unique[i + 1];
     const between = next === void 0 ? p + 1 + Math.abs(p) : p + (next - p) / 2;
     if (accepted(between)) {
-      if (open3 === void 0) open3 = p;
+      if (open4 === void 0) open4 = p;
     } else {
       close(p);
     }
@@ -41215,15 +41379,15 @@ function createGeometricSampler(mean2) {
   }
   const p = 1 / mean2;
   const q = 1 - p;
-  let bits = 1;
-  while (bits < MAX_COLUMNS_LOG2 && q ** (2 ** bits - 1) > OVERFLOW_PROBABILITY) bits++;
-  const columns = 2 ** bits;
+  let bits2 = 1;
+  while (bits2 < MAX_COLUMNS_LOG2 && q ** (2 ** bits2 - 1) > OVERFLOW_PROBABILITY) bits2++;
+  const columns = 2 ** bits2;
   const truncation = columns - 1;
   const probabilities = new Float64Array(columns);
   for (let k = 1; k <= truncation; k++) probabilities[k - 1] = p * q ** (k - 1);
   probabilities[truncation] = q ** truncation;
   const { threshold, alias } = buildAliasTable(probabilities);
-  const shift = 32 - bits;
+  const shift = 32 - bits2;
   const coinMask = 2 ** shift - 1;
   const coinScale = 2 ** shift;
   const edge = new Float64Array(columns);
@@ -41262,22 +41426,22 @@ function createGeometricSampler(mean2) {
 // src/statistics/bootstrap/centredPrefixSums.ts
 function centredPrefixSums(d, mean2) {
   const n = d.length;
-  const prefix = new Float64Array(2 * n + 1);
+  const prefix2 = new Float64Array(2 * n + 1);
   let running = 0;
   for (let i = 0; i < 2 * n; i++) {
     running += d[i < n ? i : i - n] - mean2;
-    prefix[i + 1] = running;
+    prefix2[i + 1] = running;
   }
-  return prefix;
+  return prefix2;
 }
 
 // src/statistics/bootstrap/resampleMeanDeviation.ts
-function resampleMeanDeviation(prefix, n, blocks) {
+function resampleMeanDeviation(prefix2, n, blocks) {
   const { starts, lengths, count } = blocks;
   let sum = 0;
   for (let i = 0; i < count; i++) {
     const s = starts[i];
-    sum += prefix[s + lengths[i]] - prefix[s];
+    sum += prefix2[s + lengths[i]] - prefix2[s];
   }
   return sum / n;
 }
@@ -41343,11 +41507,11 @@ function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlock
 var TWO_POW_323 = 4294967296;
 var TWO_POW_MINUS_32 = 1 / TWO_POW_323;
 var LEMIRE_LIMIT2 = 2097152;
-function resampleDeviationsInline(prefix, n, sampler, source, count) {
-  if (sampler.inline === null) return unitBlocks(prefix, n, source, count);
-  return geometricBlocks(prefix, n, sampler, source, count);
+function resampleDeviationsInline(prefix2, n, sampler, source, count) {
+  if (sampler.inline === null) return unitBlocks(prefix2, n, source, count);
+  return geometricBlocks(prefix2, n, sampler, source, count);
 }
-function unitBlocks(prefix, n, source, count) {
+function unitBlocks(prefix2, n, source, count) {
   const P32 = 4294967296;
   const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
@@ -41361,7 +41525,7 @@ function unitBlocks(prefix, n, source, count) {
   let pend = source.pending;
   let has = source.hasPending;
   const step = new Float64Array(n);
-  for (let s = 0; s < n; s++) step[s] = prefix[s + 1] - prefix[s];
+  for (let s = 0; s < n; s++) step[s] = prefix2[s + 1] - prefix2[s];
   for (let r = 0; r < count; r++) {
     let filled = 0;
     let sum = 0;
@@ -41487,7 +41651,7 @@ function unitBlocks(prefix, n, source, count) {
   source.hasPending = has;
   return out;
 }
-function geometricBlocks(prefix, n, sampler, source, count) {
+function geometricBlocks(prefix2, n, sampler, source, count) {
   const P32 = 4294967296;
   const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
@@ -41617,7 +41781,7 @@ function geometricBlocks(prefix, n, sampler, source, count) {
     let sum = 0;
     for (let i = 0; i < blocks; i++) {
       const s = starts[i];
-      sum += prefix[s + lengths[i]] - prefix[s];
+      sum += prefix2[s + lengths[i]] - prefix2[s];
     }
     out[r] = sum / n;
   }
@@ -41672,18 +41836,18 @@ function runResampleJob(job, random = createRandomSource) {
   }
   return out;
 }
-function resampleDeviationsOfStream(prefix, n, sampler, random, count) {
+function resampleDeviationsOfStream(prefix2, n, sampler, random, count) {
   if (random instanceof Xoroshiro128PlusSource && n >= 2) {
-    return resampleDeviationsInline(prefix, n, sampler, random, count);
+    return resampleDeviationsInline(prefix2, n, sampler, random, count);
   }
-  return resampleDeviationsGeneric(prefix, n, sampler, random, count);
+  return resampleDeviationsGeneric(prefix2, n, sampler, random, count);
 }
-function resampleDeviationsGeneric(prefix, n, sampler, random, count) {
+function resampleDeviationsGeneric(prefix2, n, sampler, random, count) {
   const out = new Float64Array(count);
   const blocks = allocateStationaryBlocks(n);
   for (let b = 0; b < count; b++) {
     drawStationaryBlocks(n, sampler, random, blocks);
-    out[b] = resampleMeanDeviation(prefix, n, blocks);
+    out[b] = resampleMeanDeviation(prefix2, n, blocks);
   }
   return out;
 }
@@ -41759,8 +41923,8 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
   };
 }
 function stationaryResampleDeviations(d, mean2, expectedBlockLength, resamples, seed, random = createRandomSource, runner = runResampleJob) {
-  const prefix = centredPrefixSums(d, mean2);
-  return runner({ prefix, n: d.length, expectedBlockLength, resamples, seed }, random);
+  const prefix2 = centredPrefixSums(d, mean2);
+  return runner({ prefix: prefix2, n: d.length, expectedBlockLength, resamples, seed }, random);
 }
 function validateStationaryBootstrapOptions(options) {
   const { resamples, expectedBlockLength, seed, confidence, margin } = options;
@@ -42343,7 +42507,13 @@ function evaluateLossSeries(series, source, settings, resampleRunner) {
     version: VERSION7,
     settings,
     hypothesis,
-    inputs: lossFileInputsSummary(source.file, source.timestamps, source.kind, series.maxHorizon),
+    inputs: lossFileInputsSummary(
+      source.file,
+      source.timestamps,
+      source.kind,
+      series.maxHorizon,
+      source.order
+    ),
     comparisons: [overall],
     stability: assessStability({
       series,
@@ -42380,6 +42550,17 @@ function decideAdjusted(input) {
     reasons.push(`Too little data: ${input.n} time points, fewer than ${input.minPoints}.`);
   }
   return { verdict, reasons, rejected };
+}
+
+// src/losses/lossMagnitude.ts
+var MAX_LOSS = 1e100;
+function firstOversizedLoss(values, included = null) {
+  for (let i = 0; i < values.length; i++) {
+    if (included !== null && included[i] === 0) continue;
+    const v = values[i];
+    if (!(Math.abs(v) <= MAX_LOSS)) return i;
+  }
+  return -1;
 }
 
 // src/losses/absoluteError.ts
@@ -42772,7 +42953,7 @@ function evaluatePanel(panel, settings, extras = {}) {
         { bootstrap: false }
       )
     );
-    comparisons.push(...perPath);
+    for (const c of perPath) comparisons.push(c);
     const worse = perPath.filter((c) => c.meanDifference > 0).length;
     pathSummary = {
       paths: perPath.length,
@@ -42787,7 +42968,7 @@ function evaluatePanel(panel, settings, extras = {}) {
   let seriesSummary = null;
   if (panel.seriesNames.length > 1) {
     const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
-    comparisons.push(...perSeries.comparisons);
+    for (const c of perSeries.comparisons) comparisons.push(c);
     seriesSummary = perSeries.summary;
   }
   return buildReport({
@@ -42839,14 +43020,13 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
       n: c.n,
       minPoints: settings.minPoints
     });
-    return {
-      ...c,
+    return Object.assign(c, {
       verdict: decision.verdict,
       reasons: decision.reasons,
       rejected: { dieboldMariano: decision.rejected, bootstrap: null },
       adjustedPValue: policyP[j] ?? null,
       direction
-    };
+    });
   });
   const top = comparisons.filter((c) => c.direction === "worse").sort(
     (a, b) => (b.relativeDifference ?? b.meanDifference) - (a.relativeDifference ?? a.meanDifference)
@@ -42934,6 +43114,25 @@ function rowLossesOrInputError(panel, settings) {
       });
     }
     throw error2;
+  }
+  for (const [model, values] of [
+    ["baseline", losses.baseline],
+    ["candidate", losses.candidate]
+  ]) {
+    const row = firstOversizedLoss(values, losses.included);
+    if (row >= 0) {
+      const series = panel.seriesNames[panel.series[row]];
+      throw new InputError(
+        `the ${model}'s ${settings.loss} loss for series ${JSON.stringify(series)}, timestamp ${JSON.stringify(
+          panel.timestamps[panel.time[row]]
+        )} is ${values[row]}: beyond ${MAX_LOSS}, means and variances would overflow double precision; rescale the data (e.g. to thousands) or check this row`,
+        {
+          file: panel.actualSource.file,
+          line: panel.actualSource.lines[row],
+          value: String(values[row])
+        }
+      );
+    }
   }
   if (settings.zeroActuals === "error" && losses.zeroActualRows.length > 0) {
     const row = losses.zeroActualRows[0];
@@ -43684,6 +43883,102 @@ function lastTime(tables, kind) {
   return best;
 }
 
+// src/reading/columnMapping.ts
+var COLUMN_ROLES = [
+  "series",
+  "timestamp",
+  "horizon",
+  "origin",
+  "path",
+  "actual",
+  "prediction",
+  "weight",
+  "quantile"
+];
+var DEFAULT_COLUMNS = {
+  series: "series",
+  timestamp: "timestamp",
+  horizon: "horizon",
+  origin: "origin",
+  path: "path",
+  actual: "actual",
+  prediction: "prediction",
+  weight: "weight",
+  quantile: "q"
+};
+function resolveColumns(mapping = {}) {
+  const resolved = { ...DEFAULT_COLUMNS };
+  for (const role of COLUMN_ROLES) {
+    const name = mapping[role];
+    if (name !== void 0) resolved[role] = name;
+  }
+  return resolved;
+}
+function parseColumnMapping(text2, source = "--columns") {
+  const mapping = {};
+  if (text2.trim() === "") return mapping;
+  for (const rawPair of text2.split(",")) {
+    const pair = rawPair.trim();
+    const eq = pair.indexOf("=");
+    if (eq < 0) {
+      throw new InputError(
+        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
+        { file: source, value: pair }
+      );
+    }
+    const role = pair.slice(0, eq).trim();
+    const name = pair.slice(eq + 1).trim();
+    if (!isRole(role)) {
+      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (name === "") {
+      throw new InputError(`the column name for role "${role}" is empty`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (mapping[role] !== void 0) {
+      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
+    }
+    mapping[role] = name;
+  }
+  checkDistinctNames(mapping, source);
+  return mapping;
+}
+function checkDistinctNames(mapping, source = "--columns") {
+  const resolved = resolveColumns(mapping);
+  const seen = /* @__PURE__ */ new Map();
+  for (const role of COLUMN_ROLES) {
+    if (role === "quantile") continue;
+    const name = resolved[role];
+    const other = seen.get(name);
+    if (other !== void 0) {
+      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
+        file: source,
+        value: name
+      });
+    }
+    seen.set(name, role);
+  }
+}
+function isRole(text2) {
+  return COLUMN_ROLES.includes(text2);
+}
+
+// src/reading/inputFormat.ts
+var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
+var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
+function delimiterFor(name, tsv) {
+  if (name === "auto") return tsv ? "	" : ",";
+  return name === "tab" ? "	" : name;
+}
+function delimiterLabel(delimiter3) {
+  return delimiter3 === "	" ? "tab" : `"${delimiter3}"`;
+}
+
 // src/reading/tokenizer.ts
 var Tokenizer = class {
   /** Empty lines skipped so far. */
@@ -43696,11 +43991,13 @@ var Tokenizer = class {
   carry = "";
   linesDone = 0;
   started = false;
-  constructor(delimiter3, sink, file) {
+  lineLimit;
+  constructor(delimiter3, sink, file, lineLimit = DEFAULT_LINE_LIMIT) {
     this.delimiter = delimiter3;
     this.delimiterCode = delimiter3.charCodeAt(0);
     this.sink = sink;
     this.file = file;
+    this.lineLimit = lineLimit;
   }
   /** Physical lines consumed so far (complete records and blank lines). */
   get lines() {
@@ -43731,6 +44028,7 @@ var Tokenizer = class {
         continue;
       }
       if (nl === -1) break;
+      if (nl - pos > this.lineLimit) this.tooLong(buf, pos, this.linesDone + 1);
       let lineEnd = nl;
       if (lineEnd > pos && buf.charCodeAt(lineEnd - 1) === 13) lineEnd--;
       this.linesDone++;
@@ -43753,7 +44051,20 @@ var Tokenizer = class {
       sink(fields, count, this.linesDone);
       pos = nl + 1;
     }
-    if (pos < n) this.carry = buf.slice(pos);
+    if (pos < n) {
+      if (n - pos > this.lineLimit) this.tooLong(buf, pos, this.linesDone + 1);
+      this.carry = buf.slice(pos);
+    }
+  }
+  tooLong(buf, pos, line) {
+    throw new InputError(
+      `the line is longer than the limit of ${this.lineLimit} characters (raise it with --line-limit if the file is right; a file without line breaks, or with an unclosed quote, also ends here)`,
+      { file: this.file, line, value: buf.slice(pos, pos + 200) }
+    );
+  }
+  /** How the delimiter is named in messages. */
+  get delimiterName() {
+    return delimiterLabel(this.delimiter);
   }
   /** Flushes the last record (which need not end with a line break). */
   end() {
@@ -43843,6 +44154,7 @@ var Tokenizer = class {
       break;
     }
     const line = this.linesDone + 1;
+    if (i - pos > this.lineLimit) this.tooLong(buf, pos, line);
     this.linesDone += 1 + newlines;
     this.sink(fields, count, line);
     return i;
@@ -43858,8 +44170,9 @@ function countNewlines(text2, from, to) {
   return count;
 }
 function truncateValue(text2) {
-  return text2.length <= 60 ? text2 : `${text2.slice(0, 60)}\u2026`;
+  return echo(text2, 60);
 }
+var DEFAULT_LINE_LIMIT = 1 << 20;
 
 // src/reading/foldLayoutReader.ts
 var FOLD_NAMES = ["fold", "path"];
@@ -43944,25 +44257,8687 @@ var FoldLayoutReader = class {
   }
 };
 
-// src/reading/streamTextFile.ts
+// src/reading/streamParquetFile.ts
 import { createHash } from "node:crypto";
 import { createReadStream } from "node:fs";
-import { stat as stat2 } from "node:fs/promises";
+import { open as open2, stat as stat2 } from "node:fs/promises";
 import { pipeline } from "node:stream/promises";
+
+// node_modules/hyparquet/src/constants.js
+var ParquetTypes = [
+  "BOOLEAN",
+  "INT32",
+  "INT64",
+  "INT96",
+  // deprecated
+  "FLOAT",
+  "DOUBLE",
+  "BYTE_ARRAY",
+  "FIXED_LEN_BYTE_ARRAY"
+];
+var Encodings = [
+  "PLAIN",
+  "GROUP_VAR_INT",
+  // deprecated
+  "PLAIN_DICTIONARY",
+  "RLE",
+  "BIT_PACKED",
+  // deprecated
+  "DELTA_BINARY_PACKED",
+  "DELTA_LENGTH_BYTE_ARRAY",
+  "DELTA_BYTE_ARRAY",
+  "RLE_DICTIONARY",
+  "BYTE_STREAM_SPLIT",
+  "ALP"
+];
+var FieldRepetitionTypes = [
+  "REQUIRED",
+  "OPTIONAL",
+  "REPEATED"
+];
+var ConvertedTypes = [
+  "UTF8",
+  "MAP",
+  "MAP_KEY_VALUE",
+  "LIST",
+  "ENUM",
+  "DECIMAL",
+  "DATE",
+  "TIME_MILLIS",
+  "TIME_MICROS",
+  "TIMESTAMP_MILLIS",
+  "TIMESTAMP_MICROS",
+  "UINT_8",
+  "UINT_16",
+  "UINT_32",
+  "UINT_64",
+  "INT_8",
+  "INT_16",
+  "INT_32",
+  "INT_64",
+  "JSON",
+  "BSON",
+  "INTERVAL"
+];
+var CompressionCodecs = [
+  "UNCOMPRESSED",
+  "SNAPPY",
+  "GZIP",
+  "LZO",
+  "BROTLI",
+  "LZ4",
+  "ZSTD",
+  "LZ4_RAW"
+];
+var PageTypes = [
+  "DATA_PAGE",
+  "INDEX_PAGE",
+  "DICTIONARY_PAGE",
+  "DATA_PAGE_V2"
+];
+var BoundaryOrders = [
+  "UNORDERED",
+  "ASCENDING",
+  "DESCENDING"
+];
+var EdgeInterpolationAlgorithms = [
+  "SPHERICAL",
+  "VINCENTY",
+  "THOMAS",
+  "ANDOYER",
+  "KARNEY"
+];
+
+// node_modules/hyparquet/src/wkb.js
+function wkbToGeojson(reader) {
+  const flags = getFlags(reader);
+  if (flags.type === 1) {
+    return { type: "Point", coordinates: readPosition(reader, flags) };
+  } else if (flags.type === 2) {
+    return { type: "LineString", coordinates: readLine(reader, flags) };
+  } else if (flags.type === 3) {
+    return { type: "Polygon", coordinates: readPolygon(reader, flags) };
+  } else if (flags.type === 4) {
+    const points = [];
+    for (let i = 0; i < flags.count; i++) {
+      points.push(readPosition(reader, getFlags(reader)));
+    }
+    return { type: "MultiPoint", coordinates: points };
+  } else if (flags.type === 5) {
+    const lines = [];
+    for (let i = 0; i < flags.count; i++) {
+      lines.push(readLine(reader, getFlags(reader)));
+    }
+    return { type: "MultiLineString", coordinates: lines };
+  } else if (flags.type === 6) {
+    const polygons = [];
+    for (let i = 0; i < flags.count; i++) {
+      polygons.push(readPolygon(reader, getFlags(reader)));
+    }
+    return { type: "MultiPolygon", coordinates: polygons };
+  } else if (flags.type === 7) {
+    const geometries = [];
+    for (let i = 0; i < flags.count; i++) {
+      geometries.push(wkbToGeojson(reader));
+    }
+    return { type: "GeometryCollection", geometries };
+  } else {
+    throw new Error(`Unsupported geometry type: ${flags.type}`);
+  }
+}
+function getFlags(reader) {
+  const { view } = reader;
+  const littleEndian = view.getUint8(reader.offset++) === 1;
+  const rawType = view.getUint32(reader.offset, littleEndian);
+  reader.offset += 4;
+  const type = rawType % 1e3;
+  const flags = Math.floor(rawType / 1e3);
+  let count = 0;
+  if (type > 1 && type <= 7) {
+    count = view.getUint32(reader.offset, littleEndian);
+    reader.offset += 4;
+  }
+  let dim = 2;
+  if (flags) dim++;
+  if (flags === 3) dim++;
+  return { littleEndian, type, dim, count };
+}
+function readPosition(reader, flags) {
+  const points = [];
+  for (let i = 0; i < flags.dim; i++) {
+    const coord = reader.view.getFloat64(reader.offset, flags.littleEndian);
+    reader.offset += 8;
+    points.push(coord);
+  }
+  return points;
+}
+function readLine(reader, flags) {
+  const points = [];
+  for (let i = 0; i < flags.count; i++) {
+    points.push(readPosition(reader, flags));
+  }
+  return points;
+}
+function readPolygon(reader, flags) {
+  const { view } = reader;
+  const rings = [];
+  for (let r = 0; r < flags.count; r++) {
+    const count = view.getUint32(reader.offset, flags.littleEndian);
+    reader.offset += 4;
+    rings.push(readLine(reader, { ...flags, count }));
+  }
+  return rings;
+}
+
+// node_modules/hyparquet/src/convert.js
+var decoder = new TextDecoder();
+var DEFAULT_PARSERS = {
+  timestampFromMilliseconds(millis) {
+    return new Date(Number(millis));
+  },
+  timestampFromMicroseconds(micros) {
+    return new Date(Number(micros / 1000n));
+  },
+  timestampFromNanoseconds(nanos) {
+    return new Date(Number(nanos / 1000000n));
+  },
+  dateFromDays(days) {
+    return new Date(days * 864e5);
+  },
+  stringFromBytes(bytes) {
+    return bytes && decoder.decode(bytes);
+  },
+  jsonFromBytes(bytes) {
+    return bytes && JSON.parse(decoder.decode(bytes));
+  },
+  geometryFromBytes(bytes) {
+    return bytes && wkbToGeojson({ view: new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength), offset: 0 });
+  },
+  geographyFromBytes(bytes) {
+    return bytes && wkbToGeojson({ view: new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength), offset: 0 });
+  },
+  uuidFromBytes(bytes) {
+    if (!bytes) return void 0;
+    const hex = Array.from(bytes, (b) => b.toString(16).padStart(2, "0")).join("");
+    return hex.slice(0, 8) + "-" + hex.slice(8, 12) + "-" + hex.slice(12, 16) + "-" + hex.slice(16, 20) + "-" + hex.slice(20, 32);
+  }
+};
+function convertWithDictionary(data, dictionary2, encoding, columnDecoder) {
+  if (dictionary2 && encoding.endsWith("_DICTIONARY")) {
+    let output = data;
+    if (data instanceof Uint8Array && !(dictionary2 instanceof Uint8Array)) {
+      output = new dictionary2.constructor(data.length);
+    }
+    for (let i = 0; i < data.length; i++) {
+      output[i] = dictionary2[data[i]];
+    }
+    return output;
+  } else {
+    return convert(data, columnDecoder);
+  }
+}
+function convert(data, columnDecoder) {
+  const { element, parsers, utf8 = true, schemaPath } = columnDecoder;
+  const { type, converted_type: ctype, logical_type: ltype } = element;
+  const nullable = element.repetition_type !== "REQUIRED";
+  if (type === "BYTE_ARRAY" && element.name === "inline" && schemaPath?.at(-2)?.element.logical_type?.type === "FILE") {
+    return data;
+  }
+  const isVariant = schemaPath?.some((s) => s.element.logical_type?.type === "VARIANT");
+  if (isVariant && type === "BYTE_ARRAY" && ctype !== "UTF8" && ltype?.type !== "STRING") {
+    return data;
+  }
+  if (ctype === "DECIMAL") {
+    const scale = element.scale || 0;
+    const factor = 10 ** scale;
+    const arr = new Array(data.length);
+    for (let i = 0; i < arr.length; i++) {
+      if (data[i] instanceof Uint8Array) {
+        arr[i] = scale > 308 ? parseDecimal2(data[i]) * 10 ** -scale : parseDecimal2(data[i]) / factor;
+      } else {
+        arr[i] = Number(data[i]) / factor;
+      }
+    }
+    return arr;
+  }
+  if (!ctype && type === "INT96") {
+    return Array.from(data).map((v) => parsers.timestampFromNanoseconds(parseInt96Nanos(v)));
+  }
+  if (ctype === "DATE") {
+    return Array.from(data).map((v) => parsers.dateFromDays(v));
+  }
+  if (ctype === "TIMESTAMP_MILLIS") {
+    return Array.from(data).map((v) => parsers.timestampFromMilliseconds(v));
+  }
+  if (ctype === "TIMESTAMP_MICROS") {
+    return Array.from(data).map((v) => parsers.timestampFromMicroseconds(v));
+  }
+  if (ctype === "JSON") {
+    return data.map((v) => parsers.jsonFromBytes(v));
+  }
+  if (ctype === "BSON") {
+    throw new Error("parquet bson not supported");
+  }
+  if (ctype === "INTERVAL") {
+    throw new Error("parquet interval not supported");
+  }
+  if (ltype?.type === "GEOMETRY") {
+    return data.map((v) => parsers.geometryFromBytes(v));
+  }
+  if (ltype?.type === "GEOGRAPHY") {
+    return data.map((v) => parsers.geographyFromBytes(v));
+  }
+  if (ltype?.type === "UUID") {
+    return data.map((v) => parsers.uuidFromBytes(v));
+  }
+  if (ctype === "UTF8" || ltype?.type === "STRING" || utf8 && type === "BYTE_ARRAY") {
+    return data.map((v) => parsers.stringFromBytes(v));
+  }
+  if (ctype === "UINT_64" || ltype?.type === "INTEGER" && ltype.bitWidth === 64 && !ltype.isSigned) {
+    if (data instanceof BigInt64Array) return new BigUint64Array(data.buffer, data.byteOffset, data.length);
+    const arr = nullable ? new Array(data.length) : new BigUint64Array(data.length);
+    for (let i = 0; i < arr.length; i++) arr[i] = data[i];
+    return arr;
+  }
+  if (ctype === "UINT_32" || ltype?.type === "INTEGER" && ltype.bitWidth === 32 && !ltype.isSigned) {
+    if (data instanceof Int32Array) return new Uint32Array(data.buffer, data.byteOffset, data.length);
+    const arr = nullable ? new Array(data.length) : new Uint32Array(data.length);
+    for (let i = 0; i < arr.length; i++) {
+      arr[i] = data[i] < 0 ? 4294967296 + data[i] : data[i];
+    }
+    return arr;
+  }
+  if (ltype?.type === "FLOAT16") {
+    return Array.from(data).map(parseFloat16);
+  }
+  if (ltype?.type === "TIMESTAMP") {
+    const { unit } = ltype;
+    let parser = parsers.timestampFromMilliseconds;
+    if (unit === "MICROS") parser = parsers.timestampFromMicroseconds;
+    if (unit === "NANOS") parser = parsers.timestampFromNanoseconds;
+    const arr = new Array(data.length);
+    for (let i = 0; i < arr.length; i++) {
+      arr[i] = parser(data[i]);
+    }
+    return arr;
+  }
+  return data;
+}
+function parseDecimal2(bytes) {
+  if (!bytes.length) return 0;
+  let value = 0n;
+  for (const byte of bytes) {
+    value = value * 256n + BigInt(byte);
+  }
+  const bits2 = bytes.length * 8;
+  if (value >= 2n ** BigInt(bits2 - 1)) {
+    value -= 2n ** BigInt(bits2);
+  }
+  return Number(value);
+}
+function parseInt96Nanos(value) {
+  const days = (value >> 64n) - 2440588n;
+  const nano = value & 0xffffffffffffffffn;
+  return days * 86400000000000n + nano;
+}
+function parseFloat16(bytes) {
+  if (!bytes) return void 0;
+  const int16 = bytes[1] << 8 | bytes[0];
+  const sign = int16 >> 15 ? -1 : 1;
+  const exp = int16 >> 10 & 31;
+  const frac = int16 & 1023;
+  if (exp === 0) return sign * 2 ** -14 * (frac / 1024);
+  if (exp === 31) return frac ? NaN : sign * Infinity;
+  return sign * 2 ** (exp - 15) * (1 + frac / 1024);
+}
+
+// node_modules/hyparquet/src/schema.js
+function schemaTree(schema, rootIndex, path7) {
+  const element = schema[rootIndex];
+  const children = [];
+  let count = 1;
+  if (element.num_children) {
+    while (children.length < element.num_children) {
+      const childElement = schema[rootIndex + count];
+      const child2 = schemaTree(schema, rootIndex + count, [...path7, childElement.name]);
+      count += child2.count;
+      children.push(child2);
+    }
+  }
+  return { count, element, children, path: path7 };
+}
+function getSchemaPath(schema, name) {
+  return getTreePath(schemaTree(schema, 0, []), name);
+}
+function getTreePath(tree, name) {
+  const path7 = [tree];
+  for (const part of name) {
+    const child2 = tree.children.find((child3) => child3.element.name === part);
+    if (!child2) throw new Error(`parquet schema element not found: ${name}`);
+    path7.push(child2);
+    tree = child2;
+  }
+  return path7;
+}
+function getPhysicalColumns(schemaTree2) {
+  const columns = [];
+  function traverse(node) {
+    if (node.children.length) {
+      for (const child2 of node.children) {
+        traverse(child2);
+      }
+    } else {
+      columns.push(node.path.join("."));
+    }
+  }
+  traverse(schemaTree2);
+  return columns;
+}
+function getMaxRepetitionLevel(schemaPath) {
+  let maxLevel = 0;
+  for (const { element } of schemaPath) {
+    if (element.repetition_type === "REPEATED") {
+      maxLevel++;
+    }
+  }
+  return maxLevel;
+}
+function getMaxDefinitionLevel(schemaPath) {
+  let maxLevel = 0;
+  for (const { element } of schemaPath.slice(1)) {
+    if (element.repetition_type !== "REQUIRED") {
+      maxLevel++;
+    }
+  }
+  return maxLevel;
+}
+function isListLike(schema) {
+  if (!schema) return false;
+  if (schema.element.converted_type !== "LIST") return false;
+  if (schema.children.length > 1) return false;
+  const firstChild = schema.children[0];
+  if (firstChild.children.length > 1) return false;
+  if (firstChild.element.repetition_type !== "REPEATED") return false;
+  return true;
+}
+function isMapLike(schema) {
+  if (!schema) return false;
+  if (schema.element.converted_type !== "MAP") return false;
+  if (schema.children.length > 1) return false;
+  const firstChild = schema.children[0];
+  if (firstChild.children.length !== 2) return false;
+  if (firstChild.element.repetition_type !== "REPEATED") return false;
+  const keyChild = firstChild.children.find((child2) => child2.element.name === "key");
+  if (keyChild?.element.repetition_type === "REPEATED") return false;
+  const valueChild = firstChild.children.find((child2) => child2.element.name === "value");
+  if (valueChild?.element.repetition_type === "REPEATED") return false;
+  return true;
+}
+function isFlatColumn(schemaPath) {
+  if (schemaPath.length !== 2) return false;
+  const [, column] = schemaPath;
+  if (column.element.repetition_type === "REPEATED") return false;
+  if (column.children.length) return false;
+  return true;
+}
+
+// node_modules/hyparquet/src/thrift.js
+var STOP = 0;
+var TRUE = 1;
+var FALSE = 2;
+var BYTE = 3;
+var I16 = 4;
+var I32 = 5;
+var I64 = 6;
+var DOUBLE = 7;
+var BINARY = 8;
+var LIST = 9;
+var STRUCT = 12;
+function deserializeTCompactProtocol(reader) {
+  const value = {};
+  let fid = 0;
+  while (true) {
+    if (reader.offset >= reader.view.byteLength) throw new Error("thrift struct ended without STOP");
+    const byte = reader.view.getUint8(reader.offset++);
+    const type = byte & 15;
+    if (type === STOP) break;
+    const delta = byte >> 4;
+    fid = delta ? fid + delta : readZigZag(reader);
+    value[`field_${fid}`] = readElement(reader, type);
+  }
+  return value;
+}
+function readElement(reader, type) {
+  switch (type) {
+    case TRUE:
+      return true;
+    case FALSE:
+      return false;
+    case BYTE:
+      return reader.view.getInt8(reader.offset++);
+    case I16:
+    case I32:
+      return readZigZag(reader);
+    case I64:
+      return readZigZagBigInt(reader);
+    case DOUBLE: {
+      const value = reader.view.getFloat64(reader.offset, true);
+      reader.offset += 8;
+      return value;
+    }
+    case BINARY: {
+      const stringLength = readVarInt(reader);
+      if (reader.offset + stringLength > reader.view.byteLength) {
+        throw new Error(`thrift binary length ${stringLength} exceeds remaining ${reader.view.byteLength - reader.offset} bytes`);
+      }
+      const strBytes = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, stringLength);
+      reader.offset += stringLength;
+      return strBytes;
+    }
+    case LIST: {
+      const byte = reader.view.getUint8(reader.offset++);
+      const elemType = byte & 15;
+      let listSize = byte >> 4;
+      if (listSize === 15) {
+        listSize = readVarInt(reader);
+      }
+      const boolType = elemType === TRUE || elemType === FALSE;
+      const values = new Array(listSize);
+      for (let i = 0; i < listSize; i++) {
+        values[i] = boolType ? readElement(reader, BYTE) === 1 : readElement(reader, elemType);
+      }
+      return values;
+    }
+    case STRUCT:
+      return deserializeTCompactProtocol(reader);
+    default:
+      throw new Error(`thrift unhandled type: ${type}`);
+  }
+}
+function readVarInt(reader) {
+  let result = 0;
+  let shift = 0;
+  while (true) {
+    const byte = reader.view.getUint8(reader.offset++);
+    result |= (byte & 127) << shift;
+    if (!(byte & 128)) {
+      return result;
+    }
+    shift += 7;
+  }
+}
+function readVarBigInt(reader) {
+  let result = 0n;
+  let shift = 0n;
+  while (true) {
+    const byte = reader.view.getUint8(reader.offset++);
+    result |= BigInt(byte & 127) << shift;
+    if (!(byte & 128)) {
+      return result;
+    }
+    shift += 7n;
+  }
+}
+function readZigZag(reader) {
+  const zigzag = readVarInt(reader);
+  return zigzag >>> 1 ^ -(zigzag & 1);
+}
+function readZigZagBigInt(reader) {
+  const zigzag = readVarBigInt(reader);
+  return zigzag >> 1n ^ -(zigzag & 1n);
+}
+
+// node_modules/hyparquet/src/geoparquet.js
+function markGeoColumns(schema, key_value_metadata) {
+  const columns = /* @__PURE__ */ new Map();
+  const geo = key_value_metadata?.find(({ key }) => key === "geo")?.value;
+  const decodedColumns = (geo && JSON.parse(geo)?.columns) ?? {};
+  for (const [name, column] of Object.entries(decodedColumns)) {
+    if (column.encoding !== "WKB") continue;
+    const type = column.edges === "spherical" ? "GEOGRAPHY" : "GEOMETRY";
+    const id = column.crs?.id ?? column.crs?.ids?.[0];
+    const crs = id ? `${id.authority}:${id.code.toString()}` : void 0;
+    columns.set(name, { type, crs });
+  }
+  for (let i = 1; i < schema.length; i++) {
+    const { logical_type, name, num_children, type } = schema[i];
+    if (num_children) {
+      i += num_children;
+      continue;
+    }
+    if (type === "BYTE_ARRAY" && !logical_type) {
+      schema[i].logical_type = columns.get(name);
+    }
+  }
+}
+
+// node_modules/hyparquet/src/metadata.js
+var defaultInitialFetchSize = 1 << 19;
+var decoder2 = new TextDecoder();
+function decode(value) {
+  return value && decoder2.decode(value);
+}
+async function parquetMetadataAsync(asyncBuffer, { parsers, initialFetchSize = defaultInitialFetchSize, geoparquet = true } = {}) {
+  if (!asyncBuffer || !(asyncBuffer.byteLength >= 0)) throw new Error("parquet expected AsyncBuffer");
+  const footerOffset = Math.max(0, asyncBuffer.byteLength - initialFetchSize);
+  const footerBuffer = await asyncBuffer.slice(footerOffset, asyncBuffer.byteLength);
+  const footerView = new DataView(footerBuffer);
+  if (footerView.getUint32(footerBuffer.byteLength - 4, true) !== 827474256) {
+    throw new Error("parquet file invalid (footer != PAR1)");
+  }
+  const metadataLength = footerView.getUint32(footerBuffer.byteLength - 8, true);
+  if (metadataLength > asyncBuffer.byteLength - 8) {
+    throw new Error(`parquet metadata length ${metadataLength} exceeds available buffer ${asyncBuffer.byteLength - 8}`);
+  }
+  if (metadataLength + 8 > initialFetchSize) {
+    const metadataOffset = asyncBuffer.byteLength - metadataLength - 8;
+    const metadataBuffer = await asyncBuffer.slice(metadataOffset, footerOffset);
+    const combinedBuffer = new ArrayBuffer(metadataLength + 8);
+    const combinedView = new Uint8Array(combinedBuffer);
+    combinedView.set(new Uint8Array(metadataBuffer));
+    combinedView.set(new Uint8Array(footerBuffer), footerOffset - metadataOffset);
+    return parquetMetadata(combinedBuffer, { parsers, geoparquet });
+  } else {
+    return parquetMetadata(footerBuffer, { parsers, geoparquet });
+  }
+}
+function parquetMetadata(arrayBuffer, { parsers, geoparquet = true } = {}) {
+  let view;
+  if (arrayBuffer instanceof ArrayBuffer) {
+    view = new DataView(arrayBuffer);
+  } else if (arrayBuffer instanceof Uint8Array) {
+    view = new DataView(arrayBuffer.buffer, arrayBuffer.byteOffset, arrayBuffer.byteLength);
+  } else {
+    throw new Error("parquet expected ArrayBuffer or Uint8Array");
+  }
+  const allParsers = { ...DEFAULT_PARSERS, ...parsers };
+  if (view.byteLength < 8) {
+    throw new Error("parquet file is too short");
+  }
+  if (view.getUint32(view.byteLength - 4, true) !== 827474256) {
+    throw new Error("parquet file invalid (footer != PAR1)");
+  }
+  const metadataLengthOffset = view.byteLength - 8;
+  const metadataLength = view.getUint32(metadataLengthOffset, true);
+  if (metadataLength > view.byteLength - 8) {
+    throw new Error(`parquet metadata length ${metadataLength} exceeds available buffer ${view.byteLength - 8}`);
+  }
+  const metadataOffset = metadataLengthOffset - metadataLength;
+  const reader = { view, offset: metadataOffset };
+  const metadata = deserializeTCompactProtocol(reader);
+  const version = metadata.field_1;
+  const schema = metadata.field_2.map((field) => ({
+    type: ParquetTypes[field.field_1],
+    type_length: field.field_2,
+    repetition_type: FieldRepetitionTypes[field.field_3],
+    name: decode(field.field_4),
+    num_children: field.field_5,
+    converted_type: ConvertedTypes[field.field_6],
+    scale: field.field_7,
+    precision: field.field_8,
+    field_id: field.field_9,
+    logical_type: logicalType(field.field_10)
+  }));
+  const columnSchema = schema.filter((e) => e.type);
+  const num_rows = metadata.field_3;
+  const row_groups = metadata.field_4.map((rowGroup) => ({
+    columns: rowGroup.field_1.map((column, columnIndex) => ({
+      file_path: decode(column.field_1),
+      file_offset: column.field_2,
+      meta_data: column.field_3 && {
+        type: ParquetTypes[column.field_3.field_1],
+        encodings: column.field_3.field_2?.map((e) => Encodings[e]),
+        path_in_schema: column.field_3.field_3.map(decode),
+        codec: CompressionCodecs[column.field_3.field_4],
+        num_values: column.field_3.field_5,
+        total_uncompressed_size: column.field_3.field_6,
+        total_compressed_size: column.field_3.field_7,
+        key_value_metadata: column.field_3.field_8?.map((kv) => ({
+          key: decode(kv.field_1),
+          value: decode(kv.field_2)
+        })),
+        data_page_offset: column.field_3.field_9,
+        index_page_offset: column.field_3.field_10,
+        dictionary_page_offset: column.field_3.field_11,
+        statistics: convertStats(column.field_3.field_12, columnSchema[columnIndex], allParsers),
+        encoding_stats: column.field_3.field_13?.map((encodingStat) => ({
+          page_type: PageTypes[encodingStat.field_1],
+          encoding: Encodings[encodingStat.field_2],
+          count: encodingStat.field_3
+        })),
+        bloom_filter_offset: column.field_3.field_14,
+        bloom_filter_length: column.field_3.field_15,
+        size_statistics: column.field_3.field_16 && {
+          unencoded_byte_array_data_bytes: column.field_3.field_16.field_1,
+          repetition_level_histogram: column.field_3.field_16.field_2,
+          definition_level_histogram: column.field_3.field_16.field_3
+        },
+        geospatial_statistics: column.field_3.field_17 && {
+          bbox: column.field_3.field_17.field_1 && {
+            xmin: column.field_3.field_17.field_1.field_1,
+            xmax: column.field_3.field_17.field_1.field_2,
+            ymin: column.field_3.field_17.field_1.field_3,
+            ymax: column.field_3.field_17.field_1.field_4,
+            zmin: column.field_3.field_17.field_1.field_5,
+            zmax: column.field_3.field_17.field_1.field_6,
+            mmin: column.field_3.field_17.field_1.field_7,
+            mmax: column.field_3.field_17.field_1.field_8
+          },
+          geospatial_types: column.field_3.field_17.field_2
+        }
+      },
+      offset_index_offset: column.field_4,
+      offset_index_length: column.field_5,
+      column_index_offset: column.field_6,
+      column_index_length: column.field_7,
+      crypto_metadata: column.field_8,
+      encrypted_column_metadata: column.field_9
+    })),
+    total_byte_size: rowGroup.field_2,
+    num_rows: rowGroup.field_3,
+    sorting_columns: rowGroup.field_4?.map((sortingColumn) => ({
+      column_idx: sortingColumn.field_1,
+      descending: sortingColumn.field_2,
+      nulls_first: sortingColumn.field_3
+    })),
+    file_offset: rowGroup.field_5,
+    total_compressed_size: rowGroup.field_6,
+    ordinal: rowGroup.field_7
+  }));
+  const key_value_metadata = metadata.field_5?.map((kv) => ({
+    key: decode(kv.field_1),
+    value: decode(kv.field_2)
+  }));
+  const created_by = decode(metadata.field_6);
+  if (geoparquet) {
+    markGeoColumns(schema, key_value_metadata);
+  }
+  return {
+    version,
+    schema,
+    num_rows,
+    row_groups,
+    key_value_metadata,
+    created_by,
+    metadata_length: metadataLength
+  };
+}
+function parquetSchema({ schema }) {
+  return getSchemaPath(schema, [])[0];
+}
+function logicalType(logicalType2) {
+  if (logicalType2?.field_1) return { type: "STRING" };
+  if (logicalType2?.field_2) return { type: "MAP" };
+  if (logicalType2?.field_3) return { type: "LIST" };
+  if (logicalType2?.field_4) return { type: "ENUM" };
+  if (logicalType2?.field_5) return {
+    type: "DECIMAL",
+    scale: logicalType2.field_5.field_1,
+    precision: logicalType2.field_5.field_2
+  };
+  if (logicalType2?.field_6) return { type: "DATE" };
+  if (logicalType2?.field_7) return {
+    type: "TIME",
+    isAdjustedToUTC: logicalType2.field_7.field_1,
+    unit: timeUnit(logicalType2.field_7.field_2)
+  };
+  if (logicalType2?.field_8) return {
+    type: "TIMESTAMP",
+    isAdjustedToUTC: logicalType2.field_8.field_1,
+    unit: timeUnit(logicalType2.field_8.field_2)
+  };
+  if (logicalType2?.field_10) return {
+    type: "INTEGER",
+    bitWidth: logicalType2.field_10.field_1,
+    isSigned: logicalType2.field_10.field_2
+  };
+  if (logicalType2?.field_11) return { type: "NULL" };
+  if (logicalType2?.field_12) return { type: "JSON" };
+  if (logicalType2?.field_13) return { type: "BSON" };
+  if (logicalType2?.field_14) return { type: "UUID" };
+  if (logicalType2?.field_15) return { type: "FLOAT16" };
+  if (logicalType2?.field_16) return {
+    type: "VARIANT",
+    specification_version: logicalType2.field_16.field_1
+  };
+  if (logicalType2?.field_17) return {
+    type: "GEOMETRY",
+    crs: decode(logicalType2.field_17.field_1)
+  };
+  if (logicalType2?.field_18) return {
+    type: "GEOGRAPHY",
+    crs: decode(logicalType2.field_18.field_1),
+    algorithm: EdgeInterpolationAlgorithms[logicalType2.field_18.field_2]
+  };
+  if (logicalType2?.field_19) return { type: "FILE" };
+  return logicalType2;
+}
+function timeUnit(unit) {
+  if (unit.field_1) return "MILLIS";
+  if (unit.field_2) return "MICROS";
+  if (unit.field_3) return "NANOS";
+  throw new Error("parquet time unit required");
+}
+function convertStats(stats, schema, parsers) {
+  return stats && {
+    max: convertMetadata(stats.field_1, schema, parsers),
+    min: convertMetadata(stats.field_2, schema, parsers),
+    null_count: stats.field_3,
+    distinct_count: stats.field_4,
+    max_value: convertMetadata(stats.field_5, schema, parsers),
+    min_value: convertMetadata(stats.field_6, schema, parsers),
+    is_max_value_exact: stats.field_7,
+    is_min_value_exact: stats.field_8
+  };
+}
+function convertMetadata(value, schema, parsers) {
+  const { type, converted_type, logical_type } = schema;
+  if (value === void 0) return value;
+  if (type === "BOOLEAN") return value[0] === 1;
+  if (type === "BYTE_ARRAY") return parsers.stringFromBytes(value);
+  const view = new DataView(value.buffer, value.byteOffset, value.byteLength);
+  if (type === "FLOAT" && view.byteLength === 4) return view.getFloat32(0, true);
+  if (type === "DOUBLE" && view.byteLength === 8) return view.getFloat64(0, true);
+  if (type === "INT32" && converted_type === "DECIMAL" && view.byteLength === 4) {
+    return view.getInt32(0, true) / 10 ** (schema.scale || 0);
+  }
+  if (type === "INT64" && converted_type === "DECIMAL" && view.byteLength === 8) {
+    return Number(view.getBigInt64(0, true)) / 10 ** (schema.scale || 0);
+  }
+  if (type === "INT32" && converted_type === "DATE") return parsers.dateFromDays(view.getInt32(0, true));
+  if (type === "INT64" && converted_type === "TIMESTAMP_MILLIS") return parsers.timestampFromMilliseconds(view.getBigInt64(0, true));
+  if (type === "INT64" && converted_type === "TIMESTAMP_MICROS") return parsers.timestampFromMicroseconds(view.getBigInt64(0, true));
+  if (type === "INT64" && logical_type?.type === "TIMESTAMP" && logical_type?.unit === "NANOS") return parsers.timestampFromNanoseconds(view.getBigInt64(0, true));
+  if (type === "INT64" && logical_type?.type === "TIMESTAMP" && logical_type?.unit === "MICROS") return parsers.timestampFromMicroseconds(view.getBigInt64(0, true));
+  if (type === "INT64" && logical_type?.type === "TIMESTAMP") return parsers.timestampFromMilliseconds(view.getBigInt64(0, true));
+  const unsigned = converted_type?.startsWith("UINT_") || logical_type?.type === "INTEGER" && !logical_type.isSigned;
+  if (type === "INT32" && unsigned && view.byteLength === 4) return view.getUint32(0, true);
+  if (type === "INT64" && unsigned && view.byteLength === 8) return view.getBigUint64(0, true);
+  if (type === "INT32" && view.byteLength === 4) return view.getInt32(0, true);
+  if (type === "INT64" && view.byteLength === 8) return view.getBigInt64(0, true);
+  if (converted_type === "DECIMAL") {
+    const scale = schema.scale || 0;
+    return scale > 308 ? parseDecimal2(value) * 10 ** -scale : parseDecimal2(value) / 10 ** scale;
+  }
+  if (logical_type?.type === "FLOAT16") return parseFloat16(value);
+  if (logical_type?.type === "UUID") return parsers.uuidFromBytes(value);
+  if (type === "FIXED_LEN_BYTE_ARRAY") return value;
+  return value;
+}
+
+// node_modules/hyparquet/src/indexes.js
+function readColumnIndex(reader, schema, parsers = void 0) {
+  const allParsers = { ...DEFAULT_PARSERS, ...parsers };
+  const thrift = deserializeTCompactProtocol(reader);
+  return {
+    null_pages: thrift.field_1,
+    min_values: thrift.field_2.map((m) => convertMetadata(m, schema, allParsers)),
+    max_values: thrift.field_3.map((m) => convertMetadata(m, schema, allParsers)),
+    boundary_order: BoundaryOrders[thrift.field_4],
+    null_counts: thrift.field_5,
+    repetition_level_histograms: thrift.field_6,
+    definition_level_histograms: thrift.field_7
+  };
+}
+function readOffsetIndex(reader) {
+  const thrift = deserializeTCompactProtocol(reader);
+  return {
+    // @ts-ignore
+    page_locations: thrift.field_1.map((loc) => ({
+      offset: loc.field_1,
+      compressed_page_size: loc.field_2,
+      first_row_index: loc.field_3
+    })),
+    unencoded_byte_array_data_bytes: thrift.field_2
+  };
+}
+
+// node_modules/hyparquet/src/xxhash.js
+var MASK = 0xffffffffffffffffn;
+var PRIME1 = 0x9e3779b185ebca87n;
+var PRIME2 = 0xc2b2ae3d27d4eb4fn;
+var PRIME3 = 0x165667b19e3779f9n;
+var PRIME4 = 0x85ebca77c2b2ae63n;
+var PRIME5 = 0x27d4eb2f165667c5n;
+function rotl64(x, r) {
+  return (x << r | x >> 64n - r) & MASK;
+}
+function round(acc, val) {
+  acc = acc + val * PRIME2 & MASK;
+  acc = rotl64(acc, 31n);
+  return acc * PRIME1 & MASK;
+}
+function mergeRound(acc, val) {
+  acc ^= round(0n, val);
+  return acc * PRIME1 + PRIME4 & MASK;
+}
+function xxhash64(input, seed = 0n) {
+  const view = new DataView(input.buffer, input.byteOffset, input.byteLength);
+  const len = input.byteLength;
+  let offset = 0;
+  let h64;
+  if (len >= 32) {
+    let v1 = seed + PRIME1 + PRIME2 & MASK;
+    let v2 = seed + PRIME2 & MASK;
+    let v3 = seed;
+    let v4 = seed - PRIME1 & MASK;
+    while (offset + 32 <= len) {
+      v1 = round(v1, view.getBigUint64(offset, true));
+      offset += 8;
+      v2 = round(v2, view.getBigUint64(offset, true));
+      offset += 8;
+      v3 = round(v3, view.getBigUint64(offset, true));
+      offset += 8;
+      v4 = round(v4, view.getBigUint64(offset, true));
+      offset += 8;
+    }
+    h64 = rotl64(v1, 1n) + rotl64(v2, 7n) + rotl64(v3, 12n) + rotl64(v4, 18n) & MASK;
+    h64 = mergeRound(h64, v1);
+    h64 = mergeRound(h64, v2);
+    h64 = mergeRound(h64, v3);
+    h64 = mergeRound(h64, v4);
+  } else {
+    h64 = seed + PRIME5 & MASK;
+  }
+  h64 = h64 + BigInt(len) & MASK;
+  while (offset + 8 <= len) {
+    h64 ^= round(0n, view.getBigUint64(offset, true));
+    h64 = rotl64(h64, 27n) * PRIME1 + PRIME4 & MASK;
+    offset += 8;
+  }
+  if (offset + 4 <= len) {
+    h64 ^= BigInt(view.getUint32(offset, true)) * PRIME1 & MASK;
+    h64 = rotl64(h64, 23n) * PRIME2 + PRIME3 & MASK;
+    offset += 4;
+  }
+  while (offset < len) {
+    h64 ^= BigInt(view.getUint8(offset)) * PRIME5 & MASK;
+    h64 = rotl64(h64, 11n) * PRIME1 & MASK;
+    offset += 1;
+  }
+  h64 ^= h64 >> 33n;
+  h64 = h64 * PRIME2 & MASK;
+  h64 ^= h64 >> 29n;
+  h64 = h64 * PRIME3 & MASK;
+  h64 ^= h64 >> 32n;
+  return h64;
+}
+
+// node_modules/hyparquet/src/bloom.js
+var textEncoder = new TextEncoder();
+var SALT = new Uint32Array([
+  1203114875,
+  1150766481,
+  2284105051,
+  2729912477,
+  1884591559,
+  770785867,
+  2667333959,
+  1550580529
+]);
+function blockIndex(hash, numBlocks) {
+  return Number((hash >> 32n) * BigInt(numBlocks) >> 32n);
+}
+function blockMask(hash) {
+  const m = new Uint32Array(8);
+  const low = Number(hash & 0xffffffffn) | 0;
+  for (let i = 0; i < 8; i++) {
+    m[i] = 1 << (Math.imul(low, SALT[i]) >>> 27);
+  }
+  return m;
+}
+function sbbfContains(blocks, hash) {
+  const offset = blockIndex(hash, blocks.length >> 3) << 3;
+  const m = blockMask(hash);
+  for (let i = 0; i < 8; i++) {
+    if ((blocks[offset + i] & m[i]) === 0) return false;
+  }
+  return true;
+}
+function readBloomFilter(reader) {
+  const header2 = deserializeTCompactProtocol(reader);
+  const numBytes = header2.field_1;
+  if (typeof numBytes !== "number" || numBytes <= 0 || numBytes % 32 !== 0) return void 0;
+  if (!header2.field_2?.field_1) return void 0;
+  if (!header2.field_3?.field_1) return void 0;
+  if (!header2.field_4?.field_1) return void 0;
+  const { view, offset } = reader;
+  if (offset + numBytes > view.byteLength) {
+    throw new Error(`parquet bloom filter truncated: need ${numBytes} bytes, have ${view.byteLength - offset}`);
+  }
+  const blocks = new Uint32Array(numBytes >> 2);
+  for (let i = 0; i < blocks.length; i++) {
+    blocks[i] = view.getUint32(offset + i * 4, true);
+  }
+  reader.offset = offset + numBytes;
+  return { numBytes, blocks };
+}
+function hashParquetValue(value, element) {
+  if (value === null || value === void 0) return void 0;
+  const { type, converted_type, logical_type } = element;
+  if (type === "BOOLEAN") {
+    if (typeof value !== "boolean") return void 0;
+    return xxhash64(new Uint8Array([value ? 1 : 0]));
+  }
+  if (type === "FLOAT") {
+    if (typeof value !== "number") return void 0;
+    const buf = new ArrayBuffer(4);
+    new DataView(buf).setFloat32(0, value, true);
+    return xxhash64(new Uint8Array(buf));
+  }
+  if (type === "DOUBLE") {
+    if (typeof value !== "number") return void 0;
+    const buf = new ArrayBuffer(8);
+    new DataView(buf).setFloat64(0, value, true);
+    return xxhash64(new Uint8Array(buf));
+  }
+  if (type === "INT32") {
+    if (converted_type === "DATE" || converted_type === "DECIMAL" || converted_type === "TIME_MILLIS") return void 0;
+    if (logical_type?.type === "DATE" || logical_type?.type === "TIME" || logical_type?.type === "DECIMAL") return void 0;
+    if (typeof value !== "number" || !Number.isInteger(value)) return void 0;
+    const buf = new ArrayBuffer(4);
+    new DataView(buf).setInt32(0, value | 0, true);
+    return xxhash64(new Uint8Array(buf));
+  }
+  if (type === "INT64") {
+    if (converted_type === "TIMESTAMP_MILLIS" || converted_type === "TIMESTAMP_MICROS") return void 0;
+    if (converted_type === "TIME_MICROS" || converted_type === "DECIMAL") return void 0;
+    if (logical_type?.type === "TIMESTAMP" || logical_type?.type === "TIME" || logical_type?.type === "DECIMAL") return void 0;
+    let bigValue;
+    if (typeof value === "bigint") bigValue = value;
+    else if (typeof value === "number" && Number.isSafeInteger(value)) bigValue = BigInt(value);
+    else return void 0;
+    const buf = new ArrayBuffer(8);
+    new DataView(buf).setBigUint64(0, BigInt.asUintN(64, bigValue), true);
+    return xxhash64(new Uint8Array(buf));
+  }
+  if (type === "BYTE_ARRAY") {
+    if (converted_type === "JSON" || converted_type === "BSON" || converted_type === "DECIMAL") return void 0;
+    if (logical_type?.type === "JSON" || logical_type?.type === "BSON" || logical_type?.type === "VARIANT") return void 0;
+    if (logical_type?.type === "GEOMETRY" || logical_type?.type === "GEOGRAPHY") return void 0;
+    if (typeof value === "string") return xxhash64(textEncoder.encode(value));
+    if (value instanceof Uint8Array) return xxhash64(value);
+    return void 0;
+  }
+  if (type === "FIXED_LEN_BYTE_ARRAY") {
+    if (converted_type === "DECIMAL" || converted_type === "INTERVAL") return void 0;
+    if (logical_type?.type === "DECIMAL" || logical_type?.type === "UUID" || logical_type?.type === "FLOAT16") return void 0;
+    if (logical_type?.type === "GEOMETRY" || logical_type?.type === "GEOGRAPHY") return void 0;
+    if (value instanceof Uint8Array) return xxhash64(value);
+    return void 0;
+  }
+  return void 0;
+}
+function bloomEligibleColumns(filter) {
+  const out = /* @__PURE__ */ new Set();
+  walkBloomEligible(filter, out);
+  return out;
+}
+function walkBloomEligible(filter, out) {
+  if (!filter) return;
+  if ("$and" in filter && Array.isArray(filter.$and)) {
+    for (const sub of filter.$and) walkBloomEligible(sub, out);
+    return;
+  }
+  if ("$or" in filter && Array.isArray(filter.$or)) {
+    for (const sub of filter.$or) walkBloomEligible(sub, out);
+    return;
+  }
+  if ("$nor" in filter) return;
+  for (const [field, condition] of Object.entries(filter)) {
+    if (field.startsWith("$")) continue;
+    if (typeof condition === "object" && condition !== null && !Array.isArray(condition)) {
+      if ("$eq" in condition || "$in" in condition) out.add(field);
+    } else {
+      out.add(field);
+    }
+  }
+}
+
+// node_modules/hyparquet/src/utils.js
+function concat(aaa, bbb) {
+  const chunk = 1e4;
+  for (let i = 0; i < bbb.length; i += chunk) {
+    aaa.push(...bbb.slice(i, i + chunk));
+  }
+}
+function equals(a, b, strict = true) {
+  if (strict ? a === b : a == b) return true;
+  if (!a || !b || typeof a !== "object" || typeof b !== "object") return false;
+  if (a instanceof Uint8Array && b instanceof Uint8Array) {
+    if (a.length !== b.length) return false;
+    for (let i = 0; i < a.length; i++) {
+      if (a[i] !== b[i]) return false;
+    }
+    return true;
+  }
+  if (a instanceof Date || b instanceof Date) {
+    return a instanceof Date && b instanceof Date && a.getTime() === b.getTime();
+  }
+  if (Array.isArray(a) && Array.isArray(b)) {
+    if (a.length !== b.length) return false;
+    for (let i = 0; i < a.length; i++) {
+      if (!equals(a[i], b[i], strict)) return false;
+    }
+    return true;
+  }
+  const aKeys = Object.keys(a);
+  if (aKeys.length !== Object.keys(b).length) return false;
+  for (const k of aKeys) {
+    if (!equals(a[k], b[k], strict)) return false;
+  }
+  return true;
+}
+function flatten(chunks) {
+  if (!chunks) return [];
+  if (chunks.length === 1) return chunks[0];
+  const output = [];
+  for (const chunk of chunks) {
+    concat(output, chunk);
+  }
+  return output;
+}
+
+// node_modules/hyparquet/src/filter.js
+var encoder = new TextEncoder();
+function pathsNeededForFilter(filter) {
+  if (!filter) return [];
+  const paths = [];
+  if ("$and" in filter && Array.isArray(filter.$and)) {
+    paths.push(...filter.$and.flatMap(pathsNeededForFilter));
+  } else if ("$or" in filter && Array.isArray(filter.$or)) {
+    paths.push(...filter.$or.flatMap(pathsNeededForFilter));
+  } else if ("$nor" in filter && Array.isArray(filter.$nor)) {
+    paths.push(...filter.$nor.flatMap(pathsNeededForFilter));
+  } else {
+    paths.push(...Object.keys(filter));
+  }
+  return [...new Set(paths)];
+}
+function columnsNeededForFilter(filter) {
+  return [...new Set(pathsNeededForFilter(filter).map((path7) => path7.split(".")[0]))];
+}
+function matchFilter(record2, filter, strict = true) {
+  if ("$and" in filter && Array.isArray(filter.$and)) {
+    return filter.$and.every((subQuery) => matchFilter(record2, subQuery, strict));
+  }
+  if ("$or" in filter && Array.isArray(filter.$or)) {
+    return filter.$or.some((subQuery) => matchFilter(record2, subQuery, strict));
+  }
+  if ("$nor" in filter && Array.isArray(filter.$nor)) {
+    return !filter.$nor.some((subQuery) => matchFilter(record2, subQuery, strict));
+  }
+  return Object.entries(filter).every(([field, condition]) => {
+    const value = resolve2(record2, field);
+    if (typeof condition !== "object" || condition === null || Array.isArray(condition)) {
+      return equals(value, condition, strict);
+    }
+    return Object.entries(condition || {}).every(([operator, target]) => {
+      if (operator === "$gt") return value !== null && value !== void 0 && value > target;
+      if (operator === "$gte") return value !== null && value !== void 0 && value >= target;
+      if (operator === "$lt") return value !== null && value !== void 0 && value < target;
+      if (operator === "$lte") return value !== null && value !== void 0 && value <= target;
+      if (operator === "$eq") return equals(value, target, strict);
+      if (operator === "$ne") return !equals(value, target, strict);
+      if (operator === "$in") return Array.isArray(target) && matchesIn(value, target, strict);
+      if (operator === "$nin") return Array.isArray(target) && !matchesIn(value, target, strict);
+      if (operator === "$not") return !matchFilter({ value }, { value: target }, strict);
+      return true;
+    });
+  });
+}
+function matchesIn(value, targets, strict) {
+  return targets.some((target) => equals(value, target, strict) || Array.isArray(value) && value.some((element) => equals(element, target, strict)));
+}
+function canSkipRowGroup({ rowGroup, physicalColumns, filter, strict = true, bloomFilters, schemaElements }) {
+  if (!filter) return false;
+  if ("$and" in filter && Array.isArray(filter.$and)) {
+    return filter.$and.some((subFilter) => canSkipRowGroup({ rowGroup, physicalColumns, filter: subFilter, strict, bloomFilters, schemaElements }));
+  }
+  if ("$or" in filter && Array.isArray(filter.$or)) {
+    return filter.$or.every((subFilter) => canSkipRowGroup({ rowGroup, physicalColumns, filter: subFilter, strict, bloomFilters, schemaElements }));
+  }
+  if ("$nor" in filter && Array.isArray(filter.$nor)) {
+    return false;
+  }
+  for (const [field, condition] of Object.entries(filter)) {
+    const columnIndex = physicalColumns.indexOf(field);
+    if (columnIndex === -1) continue;
+    const stats = rowGroup.columns[columnIndex].meta_data?.statistics;
+    const { min, max, min_value, max_value, null_count: nullCount } = stats || {};
+    const minVal = min_value !== void 0 ? min_value : min;
+    const maxVal = max_value !== void 0 ? max_value : max;
+    const haveStats = minVal !== void 0 && maxVal !== void 0;
+    const bloom = bloomFilters?.[field];
+    const element = schemaElements?.[field];
+    const matchingNulls = matchFilter({ value: null }, { value: condition }, strict) && (nullCount === void 0 || nullCount > 0);
+    if (haveStats && !matchingNulls && canSkipStats(condition, minVal, maxVal, strict, element)) {
+      return true;
+    }
+    for (const [operator, target] of Object.entries(condition || {})) {
+      if (bloom && element) {
+        if (operator === "$eq") {
+          const hash = hashParquetValue(target, element);
+          if (hash !== void 0 && !sbbfContains(bloom.blocks, hash)) return true;
+        }
+        if (operator === "$in" && Array.isArray(target) && target.length > 0) {
+          let allAbsent = true;
+          for (const v of target) {
+            const h = hashParquetValue(v, element);
+            if (h === void 0 || sbbfContains(bloom.blocks, h)) {
+              allAbsent = false;
+              break;
+            }
+          }
+          if (allAbsent) return true;
+        }
+      }
+    }
+  }
+  return false;
+}
+function canSkipStats(condition, minVal, maxVal, strict, element) {
+  if (minVal === void 0 || maxVal === void 0) return false;
+  const mayContainNaN = element?.type === "FLOAT" || element?.type === "DOUBLE" || element?.logical_type?.type === "FLOAT16";
+  for (const [operator, target] of Object.entries(condition || {})) {
+    const minComparison = compareParquetValues(minVal, target, strict, element);
+    const maxComparison = compareParquetValues(maxVal, target, strict, element);
+    const binaryBounds = minVal instanceof Uint8Array || maxVal instanceof Uint8Array;
+    const relationalBoundsAreSafe = !binaryBounds && (element?.type !== "BYTE_ARRAY" || typeof target === "string" && [...target].every((character) => character.charCodeAt(0) <= 127));
+    if (operator === "$gt" && relationalBoundsAreSafe && maxComparison !== void 0 && maxComparison <= 0) return true;
+    if (operator === "$gte" && relationalBoundsAreSafe && maxComparison !== void 0 && maxComparison < 0) return true;
+    if (operator === "$lt" && relationalBoundsAreSafe && minComparison !== void 0 && minComparison >= 0) return true;
+    if (operator === "$lte" && relationalBoundsAreSafe && minComparison !== void 0 && minComparison > 0) return true;
+    if (operator === "$eq") {
+      const targetMinComparison = compareParquetValues(target, minVal, strict, element);
+      const targetMaxComparison = compareParquetValues(target, maxVal, strict, element);
+      if (targetMinComparison !== void 0 && targetMinComparison < 0 || targetMaxComparison !== void 0 && targetMaxComparison > 0) return true;
+    }
+    if (operator === "$ne" && !mayContainNaN && equals(minVal, maxVal, strict) && equals(minVal, target, strict)) return true;
+    if (operator === "$in" && Array.isArray(target) && target.every((value) => {
+      const valueMinComparison = compareParquetValues(value, minVal, strict, element);
+      const valueMaxComparison = compareParquetValues(value, maxVal, strict, element);
+      return valueMinComparison !== void 0 && valueMinComparison < 0 || valueMaxComparison !== void 0 && valueMaxComparison > 0;
+    })) return true;
+    if (operator === "$nin" && !mayContainNaN && Array.isArray(target) && equals(minVal, maxVal, strict) && target.some((value) => equals(minVal, value, strict))) return true;
+  }
+  return false;
+}
+function compareParquetValues(a, b, strict, element) {
+  if (element?.type === "BYTE_ARRAY") {
+    if (typeof a !== "string" || typeof b !== "string") return void 0;
+    return compareBytes(encoder.encode(a), encoder.encode(b));
+  }
+  if (a instanceof Uint8Array || b instanceof Uint8Array) {
+    if (!(a instanceof Uint8Array) || !(b instanceof Uint8Array)) return void 0;
+    return compareBytes(a, b);
+  }
+  if (a < b) return -1;
+  if (a > b) return 1;
+  if (equals(a, b, strict)) return 0;
+  return void 0;
+}
+function compareBytes(a, b) {
+  const length = Math.min(a.length, b.length);
+  for (let i = 0; i < length; i++) {
+    if (a[i] < b[i]) return -1;
+    if (a[i] > b[i]) return 1;
+  }
+  if (a.length < b.length) return -1;
+  if (a.length > b.length) return 1;
+  return 0;
+}
+function matchesNull(condition, strict) {
+  return matchFilter({ value: null }, { value: condition }, strict);
+}
+function filterPageRanges(filter, columnPages, groupRows2, strict = true) {
+  if (!filter) return void 0;
+  if ("$and" in filter && Array.isArray(filter.$and)) {
+    let ranges;
+    for (const subFilter of filter.$and) {
+      ranges = intersectRanges(ranges, filterPageRanges(subFilter, columnPages, groupRows2, strict));
+    }
+    return ranges;
+  }
+  if ("$or" in filter && Array.isArray(filter.$or)) {
+    let ranges = [];
+    for (const subFilter of filter.$or) {
+      const subRanges = filterPageRanges(subFilter, columnPages, groupRows2, strict);
+      if (!subRanges) return void 0;
+      ranges = unionRanges(ranges, subRanges);
+    }
+    return ranges;
+  }
+  if ("$nor" in filter && Array.isArray(filter.$nor)) {
+    return void 0;
+  }
+  let result;
+  for (const [field, condition] of Object.entries(filter)) {
+    const pages = columnPages[field];
+    if (!pages) continue;
+    const nullCanMatch = matchesNull(condition, strict);
+    const keep = [];
+    for (let i = 0; i < pages.pageStarts.length; i++) {
+      const start = pages.pageStarts[i];
+      const end = i + 1 < pages.pageStarts.length ? pages.pageStarts[i + 1] : groupRows2;
+      const nullCount = pages.nullCounts?.[i];
+      const matchingNulls = nullCanMatch && (nullCount === void 0 || nullCount > 0);
+      const skip = !pages.nullPages[i] && !matchingNulls && canSkipStats(condition, pages.minValues[i], pages.maxValues[i], strict, pages.element);
+      if (!skip) {
+        const last = keep[keep.length - 1];
+        if (last && last[1] === start) last[1] = end;
+        else keep.push([start, end]);
+      }
+    }
+    result = intersectRanges(result, keep);
+  }
+  return result;
+}
+function intersectRanges(a, b) {
+  if (!a) return b;
+  if (!b) return a;
+  const out = [];
+  let i = 0;
+  let j = 0;
+  while (i < a.length && j < b.length) {
+    const start = Math.max(a[i][0], b[j][0]);
+    const end = Math.min(a[i][1], b[j][1]);
+    if (start < end) out.push([start, end]);
+    if (a[i][1] < b[j][1]) i++;
+    else j++;
+  }
+  return out;
+}
+function unionRanges(a, b) {
+  const out = [];
+  let i = 0;
+  let j = 0;
+  while (i < a.length || j < b.length) {
+    const next = j >= b.length || i < a.length && a[i][0] <= b[j][0] ? a[i++] : b[j++];
+    const last = out[out.length - 1];
+    if (last && next[0] <= last[1]) last[1] = Math.max(last[1], next[1]);
+    else out.push([next[0], next[1]]);
+  }
+  return out;
+}
+function resolve2(record2, path7) {
+  let value = record2;
+  for (const part of path7.split(".")) {
+    value = value?.[part];
+  }
+  return value;
+}
+
+// node_modules/hyparquet/src/plan.js
+var runLimit = 1 << 21;
+var columnGapLimit = 1 << 13;
+function parquetPlan(options) {
+  const { metadata, rowStart = 0, columns, useOffsetIndex = false } = options;
+  if (!metadata) throw new Error("parquetPlan requires metadata");
+  const groups = [];
+  const fetches = [];
+  const indexes = [];
+  const scanPlan = parquetPlanGroups(options);
+  for (const group2 of scanPlan.groups) {
+    const groupPlan = parquetPlanGroup({ ...group2, columns, useOffsetIndex });
+    groups.push(...groupPlan.groups);
+    fetches.push(...groupPlan.fetches);
+    indexes.push(...groupPlan.indexes);
+  }
+  fetches.push(...indexes);
+  return { metadata, rowStart, rowEnd: scanPlan.rowEnd, columns, fetches, groups };
+}
+function parquetPlanGroups({ metadata, rowStart = 0, rowEnd = Infinity, columns, filter, filterStrict = true, bloomFiltersByGroup, schemaElements, pageRangesByGroup, pageLocationsByGroup }) {
+  if (!metadata) throw new Error("parquetPlan requires metadata");
+  const schemaTree2 = parquetSchema(metadata);
+  const physicalColumns = getPhysicalColumns(schemaTree2);
+  const elementsByPath = filter ? {
+    ...physicalSchemaElements(schemaTree2),
+    ...schemaElements
+  } : schemaElements;
+  const groups = [];
+  let groupStart = 0;
+  for (let groupIndex = 0; groupIndex < metadata.row_groups.length; groupIndex++) {
+    const rowGroup = metadata.row_groups[groupIndex];
+    const groupRows2 = Number(rowGroup.num_rows);
+    const groupEnd = groupStart + groupRows2;
+    if (groupRows2 > 0 && groupEnd > rowStart && groupStart < rowEnd && !canSkipRowGroup({
+      rowGroup,
+      physicalColumns,
+      filter,
+      strict: filterStrict,
+      bloomFilters: bloomFiltersByGroup?.[groupIndex],
+      schemaElements: elementsByPath
+    })) {
+      const selectStart = Math.max(rowStart - groupStart, 0);
+      const selectEnd = Math.min(rowEnd - groupStart, groupRows2);
+      const pageRanges = pageRangesByGroup?.[groupIndex];
+      const pageLocations = pageLocationsByGroup?.[groupIndex];
+      let ranges = pageRanges ? pageRanges.map(([start, end]) => {
+        const range = [Math.max(start, selectStart), Math.min(end, selectEnd)];
+        return range;
+      }).filter(([start, end]) => start < end) : [[selectStart, selectEnd]];
+      if (ranges.length > 1) {
+        const canSplit = rowGroup.columns.every((chunk) => {
+          const columnName = chunk.meta_data?.path_in_schema[0];
+          const columnPath = chunk.meta_data?.path_in_schema.join(".");
+          if (columns && columnName && !columns.includes(columnName)) return true;
+          return !!(chunk.offset_index_offset && chunk.offset_index_length) || !!(columnPath && pageLocations?.[columnPath]);
+        });
+        ranges = canSplit ? coalesceOverlappingPageRanges(ranges, rowGroup, columns, pageLocations) : [[ranges[0][0], ranges[ranges.length - 1][1]]];
+      }
+      if (ranges.length) {
+        groups.push({ rowGroup, groupIndex, groupStart, groupRows: groupRows2, ranges, pageRanges, pageLocations });
+      }
+    }
+    groupStart = groupEnd;
+  }
+  return { groups, rowEnd: isFinite(rowEnd) ? rowEnd : groupStart };
+}
+function parquetPlanGroup({ rowGroup, groupStart, groupRows: groupRows2, ranges, columns, useOffsetIndex = false, pageRanges, pageLocations }) {
+  const chunks = [];
+  const fetches = [];
+  const indexes = [];
+  const narrowed = ranges.length > 1 || ranges[0][0] > 0 || ranges[0][1] < groupRows2;
+  for (const chunk of rowGroup.columns) {
+    const meta = chunk.meta_data;
+    if (chunk.file_path) throw new Error("parquet file_path not supported");
+    if (!meta) throw new Error("parquet column metadata is undefined");
+    if (columns && !columns.includes(meta.path_in_schema[0])) continue;
+    const columnOffset = meta.dictionary_page_offset || meta.data_page_offset;
+    const startByte = Number(columnOffset);
+    const endByte = Number(columnOffset + meta.total_compressed_size);
+    const chunkPageLocations = pageLocations?.[meta.path_in_schema.join(".")];
+    if (chunkPageLocations && narrowed) {
+      chunks.push({ columnMetadata: meta, pageLocations: chunkPageLocations, range: { startByte, endByte } });
+    } else if ((useOffsetIndex || pageRanges) && chunk.offset_index_offset && chunk.offset_index_length && narrowed) {
+      const startByte2 = Number(chunk.offset_index_offset);
+      chunks.push({
+        columnMetadata: meta,
+        offsetIndex: { startByte: startByte2, endByte: startByte2 + chunk.offset_index_length },
+        range: { startByte: Number(columnOffset), endByte }
+      });
+    } else {
+      chunks.push({ columnMetadata: meta, range: { startByte, endByte } });
+    }
+  }
+  const columnRanges = [];
+  let run2;
+  for (const chunk of chunks) {
+    if ("pageLocations" in chunk) continue;
+    if ("offsetIndex" in chunk) {
+      indexes.push(chunk.offsetIndex);
+    } else if (columns) {
+      columnRanges.push(chunk.range);
+    } else if (run2 && chunk.range.endByte - run2.startByte <= runLimit) {
+      run2.endByte = chunk.range.endByte;
+    } else {
+      if (run2) fetches.push(run2);
+      run2 = { ...chunk.range };
+    }
+  }
+  if (run2) fetches.push(run2);
+  fetches.push(...coalesceByteRanges(columnRanges, columnGapLimit, runLimit));
+  const groups = ranges.map(([selectStart, selectEnd]) => ({
+    chunks,
+    rowGroup,
+    groupStart,
+    groupRows: groupRows2,
+    selectStart,
+    selectEnd
+  }));
+  return { groups, fetches, indexes };
+}
+function coalesceOverlappingPageRanges(ranges, rowGroup, columns, pageLocations) {
+  const selectedPageLayouts = rowGroup.columns.filter((chunk) => !columns || columns.includes(chunk.meta_data?.path_in_schema[0] || "")).map((chunk) => pageLocations?.[chunk.meta_data?.path_in_schema.join(".") || ""]);
+  const merged = [];
+  for (const range of ranges) {
+    const last = merged[merged.length - 1];
+    const overlapsPage = last && selectedPageLayouts.some((pages) => {
+      if (!pages) return true;
+      const lastPages = pagesForRange(last, pages, Number(rowGroup.num_rows));
+      const rangePages = pagesForRange(range, pages, Number(rowGroup.num_rows));
+      return lastPages[0] <= rangePages[1] && rangePages[0] <= lastPages[1];
+    });
+    if (last && overlapsPage) last[1] = range[1];
+    else merged.push([...range]);
+  }
+  return merged;
+}
+function pagesForRange([rangeStart, rangeEnd], pages, groupRows2) {
+  let first = Infinity;
+  let last = -Infinity;
+  for (let i = 0; i < pages.length; i++) {
+    const pageStart = Number(pages[i].first_row_index);
+    const pageEnd = i + 1 < pages.length ? Number(pages[i + 1].first_row_index) : groupRows2;
+    if (pageEnd > rangeStart && pageStart < rangeEnd) {
+      first = Math.min(first, i);
+      last = i;
+    }
+  }
+  return [first, last];
+}
+async function prefetchBloomFilters({ file, metadata, filter, filterStrict = true }) {
+  const result = metadata.row_groups.map(() => (
+    /** @type {Record<string, BloomFilter>} */
+    {}
+  ));
+  const eligibleCols = bloomEligibleColumns(filter);
+  if (eligibleCols.size === 0) return result;
+  const physicalColumns = getPhysicalColumns(parquetSchema(metadata));
+  const tasks = [];
+  metadata.row_groups.forEach((rowGroup, rgIdx) => {
+    if (canSkipRowGroup({ rowGroup, physicalColumns, filter, strict: filterStrict })) return;
+    for (const colName of eligibleCols) {
+      const columnIdx = physicalColumns.indexOf(colName);
+      if (columnIdx === -1) continue;
+      const meta = rowGroup.columns[columnIdx]?.meta_data;
+      if (!meta?.bloom_filter_offset || !meta.bloom_filter_length) continue;
+      const start = Number(meta.bloom_filter_offset);
+      const end = start + meta.bloom_filter_length;
+      tasks.push((async () => {
+        const buffer = await file.slice(start, end);
+        const bloom = readBloomFilter({ view: new DataView(buffer), offset: 0 });
+        if (bloom) result[rgIdx][colName] = bloom;
+      })());
+    }
+  });
+  if (tasks.length) await Promise.all(tasks);
+  return result;
+}
+async function prefetchPageIndexes({ file, metadata, filter, filterStrict = true, rowStart = 0, rowEnd = Infinity, columns, bloomFiltersByGroup, schemaElements, parsers }) {
+  const pageRangesByGroup = metadata.row_groups.map(() => void 0);
+  const pageLocationsByGroup = metadata.row_groups.map(() => (
+    /** @type {Record<string, PageLocation[]>} */
+    {}
+  ));
+  if (filter && "$nor" in filter && Array.isArray(filter.$nor)) {
+    return { pageRangesByGroup, pageLocationsByGroup };
+  }
+  const filterColumns = pathsNeededForFilter(filter);
+  if (!filterColumns.length) return { pageRangesByGroup, pageLocationsByGroup };
+  const schemaTree2 = parquetSchema(metadata);
+  const physicalColumns = getPhysicalColumns(schemaTree2);
+  const elementsByPath = {
+    ...physicalSchemaElements(schemaTree2),
+    ...schemaElements
+  };
+  const indexRanges = [];
+  const indexTasks = [];
+  const candidateGroups = [];
+  let groupStart = 0;
+  metadata.row_groups.forEach((rowGroup, rgIdx) => {
+    const groupRows2 = Number(rowGroup.num_rows);
+    const groupEnd = groupStart + groupRows2;
+    const overlaps = groupRows2 > 0 && groupEnd > rowStart && groupStart < rowEnd;
+    groupStart = groupEnd;
+    if (!overlaps) return;
+    if (canSkipRowGroup({ rowGroup, physicalColumns, filter, strict: filterStrict, bloomFilters: bloomFiltersByGroup?.[rgIdx], schemaElements: elementsByPath })) return;
+    const columnPages = {};
+    let columnTaskCount = 0;
+    const scheduledOffsetPaths = /* @__PURE__ */ new Set();
+    let hasFilterIndex = false;
+    for (const columnName of filterColumns) {
+      const columnIdx = physicalColumns.indexOf(columnName);
+      if (columnIdx === -1) continue;
+      const chunk = rowGroup.columns[columnIdx];
+      const meta = chunk?.meta_data;
+      if (!meta) continue;
+      if (!chunk.column_index_offset || !chunk.column_index_length) continue;
+      if (!chunk.offset_index_offset || !chunk.offset_index_length) continue;
+      const element = elementsByPath[columnName];
+      if (!element) continue;
+      hasFilterIndex = true;
+      scheduledOffsetPaths.add(columnName);
+      const columnIndexStart = Number(chunk.column_index_offset);
+      const offsetIndexStart = Number(chunk.offset_index_offset);
+      const columnIndexEnd = columnIndexStart + chunk.column_index_length;
+      const offsetIndexEnd = offsetIndexStart + chunk.offset_index_length;
+      indexRanges.push(
+        { startByte: columnIndexStart, endByte: columnIndexEnd },
+        { startByte: offsetIndexStart, endByte: offsetIndexEnd }
+      );
+      columnTaskCount++;
+      indexTasks.push(async (prefetchedFile) => {
+        const [columnIndexBuffer, offsetIndexBuffer] = await Promise.all([
+          prefetchedFile.slice(columnIndexStart, columnIndexEnd),
+          prefetchedFile.slice(offsetIndexStart, offsetIndexEnd)
+        ]);
+        const columnIndex = readColumnIndex({ view: new DataView(columnIndexBuffer), offset: 0 }, element, parsers);
+        const offsetIndex = readOffsetIndex({ view: new DataView(offsetIndexBuffer), offset: 0 });
+        pageLocationsByGroup[rgIdx][columnName] = offsetIndex.page_locations;
+        columnPages[columnName] = {
+          minValues: columnIndex.min_values,
+          maxValues: columnIndex.max_values,
+          nullPages: columnIndex.null_pages,
+          nullCounts: columnIndex.null_counts,
+          pageStarts: offsetIndex.page_locations.map((page) => Number(page.first_row_index)),
+          element
+        };
+      });
+    }
+    if (hasFilterIndex) {
+      for (const chunk of rowGroup.columns) {
+        const meta = chunk.meta_data;
+        if (!meta) continue;
+        const columnName = meta.path_in_schema[0];
+        const columnPath = meta.path_in_schema.join(".");
+        if (columns && !columns.includes(columnName)) continue;
+        if (scheduledOffsetPaths.has(columnPath)) continue;
+        if (!chunk.offset_index_offset || !chunk.offset_index_length) continue;
+        scheduledOffsetPaths.add(columnPath);
+        const offsetIndexStart = Number(chunk.offset_index_offset);
+        const offsetIndexEnd = offsetIndexStart + chunk.offset_index_length;
+        indexRanges.push({ startByte: offsetIndexStart, endByte: offsetIndexEnd });
+        columnTaskCount++;
+        indexTasks.push(async (prefetchedFile) => {
+          const offsetIndexBuffer = await prefetchedFile.slice(offsetIndexStart, offsetIndexEnd);
+          const offsetIndex = readOffsetIndex({ view: new DataView(offsetIndexBuffer), offset: 0 });
+          pageLocationsByGroup[rgIdx][columnPath] = offsetIndex.page_locations;
+        });
+      }
+    }
+    if (columnTaskCount) {
+      candidateGroups.push({ rgIdx, groupRows: groupRows2, columnPages });
+    }
+  });
+  if (indexTasks.length) {
+    const prefetchedFile = prefetchAsyncBuffer(file, { fetches: coalesceByteRanges(indexRanges) });
+    await Promise.all(indexTasks.map((task) => task(prefetchedFile)));
+    for (const { rgIdx, groupRows: groupRows2, columnPages } of candidateGroups) {
+      pageRangesByGroup[rgIdx] = filterPageRanges(filter, columnPages, groupRows2, filterStrict);
+    }
+  }
+  return { pageRangesByGroup, pageLocationsByGroup };
+}
+function coalesceByteRanges(ranges, maxGap = 0, maxSize = Infinity) {
+  const sorted = ranges.map((range) => ({ ...range })).sort((a, b) => a.startByte - b.startByte || a.endByte - b.endByte);
+  const merged = [];
+  for (const range of sorted) {
+    const last = merged[merged.length - 1];
+    if (last && range.startByte <= last.endByte + maxGap && Math.max(last.endByte, range.endByte) - last.startByte <= maxSize) {
+      last.endByte = Math.max(last.endByte, range.endByte);
+    } else {
+      merged.push(range);
+    }
+  }
+  return merged;
+}
+function physicalSchemaElements(schemaTree2) {
+  const elements = {};
+  function traverse(node) {
+    if (node.children.length) {
+      for (const child2 of node.children) traverse(child2);
+    } else {
+      elements[node.path.join(".")] = node.element;
+    }
+  }
+  traverse(schemaTree2);
+  return elements;
+}
+function prefetchAsyncBuffer(file, { fetches }) {
+  const promises3 = fetches.map(({ startByte, endByte }) => file.slice(startByte, endByte));
+  return {
+    byteLength: file.byteLength,
+    slice(start, end = file.byteLength) {
+      const index = fetches.findIndex(({ startByte, endByte }) => startByte <= start && end <= endByte);
+      if (index < 0) {
+        return file.slice(start, end);
+      }
+      if (fetches[index].startByte !== start || fetches[index].endByte !== end) {
+        const startOffset = start - fetches[index].startByte;
+        const endOffset = end - fetches[index].startByte;
+        if (promises3[index] instanceof Promise) {
+          return promises3[index].then((buffer) => buffer.slice(startOffset, endOffset));
+        } else {
+          return promises3[index].slice(startOffset, endOffset);
+        }
+      } else {
+        return promises3[index];
+      }
+    }
+  };
+}
+
+// node_modules/hyparquet/src/variant.js
+var decoder3 = new TextDecoder();
+var metadataCache = /* @__PURE__ */ new WeakMap();
+function decodeVariantColumn(value, parsers = DEFAULT_PARSERS) {
+  if (Array.isArray(value)) {
+    return value.map((entry) => decodeVariantColumn(entry, parsers));
+  }
+  if (typeof value !== "object") return value;
+  if ("metadata" in value) {
+    const metadata = parseVariantMetadata(value.metadata);
+    const shreddedFields = value.typed_value && decodeTypedValue(value.typed_value, metadata, parsers);
+    const binaryValue = value.value && readVariant(makeReader(value.value), metadata, parsers);
+    if (shreddedFields && binaryValue) {
+      return { ...binaryValue, ...shreddedFields };
+    }
+    return shreddedFields ?? binaryValue;
+  }
+  return value;
+}
+function decodeTypedValue(typedValue, metadata, parsers) {
+  if (typedValue instanceof Date) return typedValue;
+  if (typedValue && typeof typedValue === "object" && !Array.isArray(typedValue) && !(typedValue instanceof Uint8Array)) {
+    if ("typed_value" in typedValue && typedValue.typed_value !== null && typedValue.typed_value !== void 0) {
+      return decodeTypedValue(typedValue.typed_value, metadata, parsers);
+    }
+    if ("value" in typedValue && typedValue.value instanceof Uint8Array) {
+      return readVariant(makeReader(typedValue.value), metadata, parsers);
+    }
+    if ("typed_value" in typedValue || "value" in typedValue) {
+      return null;
+    }
+    const result = {};
+    for (const [key, field] of Object.entries(typedValue)) {
+      if (!metadata.dictionary.includes(key)) continue;
+      result[key] = decodeTypedValue(field, metadata, parsers);
+    }
+    return result;
+  }
+  if (typedValue instanceof Uint8Array) {
+    return readVariant(makeReader(typedValue), metadata, parsers);
+  }
+  if (Array.isArray(typedValue)) {
+    return typedValue.map((element) => decodeTypedValue(element, metadata, parsers));
+  }
+  return typedValue;
+}
+function makeReader(bytes) {
+  return { view: new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength), offset: 0 };
+}
+function parseVariantMetadata(bytes) {
+  let bufferCache = metadataCache.get(bytes.buffer);
+  if (!bufferCache) {
+    bufferCache = /* @__PURE__ */ new Map();
+    metadataCache.set(bytes.buffer, bufferCache);
+  }
+  const key = `${bytes.byteOffset}:${bytes.byteLength}`;
+  const cached = bufferCache.get(key);
+  if (cached) return cached;
+  const reader = makeReader(bytes);
+  const header2 = reader.view.getUint8(reader.offset++);
+  const version = header2 & 15;
+  if (version !== 1) throw new Error(`parquet unsupported variant metadata version: ${version}`);
+  const sorted = (header2 >> 4 & 1) === 1;
+  const offsetSize = (header2 >> 6 & 3) + 1;
+  const dictionarySize = readUnsigned(reader, offsetSize);
+  const offsets = new Array(dictionarySize + 1);
+  for (let i = 0; i < offsets.length; i++) {
+    offsets[i] = readUnsigned(reader, offsetSize);
+  }
+  const base = reader.offset;
+  const dictionary2 = new Array(dictionarySize);
+  for (let i = 0; i < dictionarySize; i++) {
+    const start = offsets[i];
+    const end = offsets[i + 1];
+    const strBytes = new Uint8Array(bytes.buffer, bytes.byteOffset + base + start, end - start);
+    dictionary2[i] = decoder3.decode(strBytes);
+  }
+  const metadata = { dictionary: dictionary2, sorted };
+  bufferCache.set(key, metadata);
+  return metadata;
+}
+function readUnsigned(reader, byteWidth2) {
+  let value = 0;
+  for (let i = 0; i < byteWidth2; i++) {
+    value |= reader.view.getUint8(reader.offset + i) << i * 8;
+  }
+  reader.offset += byteWidth2;
+  return value;
+}
+function readVariant(reader, metadata, parsers) {
+  const typeByte = reader.view.getUint8(reader.offset++);
+  const basicType = typeByte & 3;
+  const header2 = typeByte >> 2;
+  if (basicType === 0) return readVariantPrimitive(reader, header2, parsers);
+  if (basicType === 2) return readVariantObject(reader, header2, metadata, parsers);
+  if (basicType === 3) return readVariantArray(reader, header2, metadata, parsers);
+  const bytes = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, header2);
+  reader.offset += header2;
+  return decoder3.decode(bytes);
+}
+function readVariantPrimitive(reader, typeId, parsers) {
+  switch (typeId) {
+    case 0:
+      return null;
+    case 1:
+      return true;
+    case 2:
+      return false;
+    case 3: {
+      const value = reader.view.getInt8(reader.offset);
+      reader.offset += 1;
+      return value;
+    }
+    case 4: {
+      const value = reader.view.getInt16(reader.offset, true);
+      reader.offset += 2;
+      return value;
+    }
+    case 5: {
+      const value = reader.view.getInt32(reader.offset, true);
+      reader.offset += 4;
+      return value;
+    }
+    case 6: {
+      const value = reader.view.getBigInt64(reader.offset, true);
+      reader.offset += 8;
+      return value;
+    }
+    case 7: {
+      const value = reader.view.getFloat64(reader.offset, true);
+      reader.offset += 8;
+      return value;
+    }
+    case 8:
+      return readVariantDecimal(reader, 4);
+    case 9:
+      return readVariantDecimal(reader, 8);
+    case 10:
+      return readVariantDecimal(reader, 16);
+    case 11: {
+      const value = reader.view.getInt32(reader.offset, true);
+      reader.offset += 4;
+      return parsers.dateFromDays(value);
+    }
+    case 12:
+    // timestamp_micros (utc)
+    case 13: {
+      const value = reader.view.getBigInt64(reader.offset, true);
+      reader.offset += 8;
+      return parsers.timestampFromMicroseconds(value);
+    }
+    case 14: {
+      const value = reader.view.getFloat32(reader.offset, true);
+      reader.offset += 4;
+      return value;
+    }
+    case 15:
+      return readVariantBinary(reader);
+    case 16: {
+      const bytes = readVariantBinary(reader);
+      return decoder3.decode(bytes);
+    }
+    case 17: {
+      const value = reader.view.getBigInt64(reader.offset, true);
+      reader.offset += 8;
+      return value;
+    }
+    case 18:
+    // timestamp_nanos (utc)
+    case 19: {
+      const value = reader.view.getBigInt64(reader.offset, true);
+      reader.offset += 8;
+      return parsers.timestampFromNanoseconds(value);
+    }
+    case 20: {
+      const bytes = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, 16);
+      reader.offset += 16;
+      const hex = Array.from(bytes, (b) => b.toString(16).padStart(2, "0")).join("");
+      return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
+    }
+    default:
+      throw new Error(`parquet unsupported variant primitive type: ${typeId}`);
+  }
+}
+function readVariantObject(reader, header2, metadata, parsers) {
+  const offsetWidth = (header2 & 3) + 1;
+  const idWidth = (header2 >> 2 & 3) + 1;
+  const isLarge = header2 >> 4 & 1;
+  const numElements = isLarge ? readUnsigned(reader, 4) : reader.view.getUint8(reader.offset++);
+  const fieldIds = new Array(numElements);
+  for (let i = 0; i < numElements; i++) {
+    fieldIds[i] = readUnsigned(reader, idWidth);
+  }
+  const offsets = new Array(numElements + 1);
+  for (let i = 0; i < offsets.length; i++) {
+    offsets[i] = readUnsigned(reader, offsetWidth);
+  }
+  const out = {};
+  for (let i = 0; i < numElements; i++) {
+    const key = metadata.dictionary[fieldIds[i]];
+    const valueReader = {
+      view: reader.view,
+      offset: reader.offset + offsets[i]
+    };
+    out[key] = readVariant(valueReader, metadata, parsers);
+  }
+  reader.offset += offsets[offsets.length - 1];
+  return out;
+}
+function readVariantArray(reader, header2, metadata, parsers) {
+  const fieldOffsetSize = header2 & 3;
+  const isLarge = header2 >> 2 & 1;
+  const offsetWidth = fieldOffsetSize + 1;
+  const numElements = readUnsigned(reader, isLarge ? 4 : 1);
+  const offsets = new Array(numElements + 1);
+  for (let i = 0; i < offsets.length; i++) {
+    offsets[i] = readUnsigned(reader, offsetWidth);
+  }
+  const valuesStart = reader.offset;
+  const result = new Array(numElements);
+  for (let i = 0; i < numElements; i++) {
+    const valueReader = {
+      view: reader.view,
+      offset: valuesStart + offsets[i]
+    };
+    result[i] = readVariant(valueReader, metadata, parsers);
+  }
+  reader.offset = valuesStart + offsets[offsets.length - 1];
+  return result;
+}
+function readVariantDecimal(reader, width) {
+  const scale = reader.view.getUint8(reader.offset);
+  reader.offset += 1;
+  let unscaled;
+  if (width === 4) {
+    unscaled = BigInt(reader.view.getInt32(reader.offset, true));
+    reader.offset += 4;
+  } else if (width === 8) {
+    unscaled = reader.view.getBigInt64(reader.offset, true);
+    reader.offset += 8;
+  } else {
+    const low = reader.view.getBigUint64(reader.offset, true);
+    const high = reader.view.getBigInt64(reader.offset + 8, true);
+    unscaled = high << 64n | low;
+    reader.offset += 16;
+  }
+  return Number(unscaled) / 10 ** scale;
+}
+function readVariantBinary(reader) {
+  const length = reader.view.getUint32(reader.offset, true);
+  reader.offset += 4;
+  const bytes = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, length);
+  reader.offset += length;
+  return bytes;
+}
+
+// node_modules/hyparquet/src/assemble.js
+function assembleLists(output, definitionLevels, repetitionLevels, values, schemaPath) {
+  const maxDefinitionLevel = getMaxDefinitionLevel(schemaPath);
+  if (!definitionLevels?.length && !repetitionLevels.length) {
+    if (!maxDefinitionLevel || !values.length) return values;
+    definitionLevels = new Array(values.length).fill(maxDefinitionLevel);
+  }
+  const n = definitionLevels?.length || repetitionLevels.length;
+  const repetitionPath = schemaPath.map(({ element }) => element.repetition_type);
+  let valueIndex = 0;
+  const containerStack = [output];
+  let currentContainer = output;
+  let currentDepth = 0;
+  let currentDefLevel = 0;
+  let currentRepLevel = 0;
+  if (repetitionLevels[0]) {
+    while (currentDepth < repetitionPath.length - 2 && currentRepLevel < repetitionLevels[0]) {
+      currentDepth++;
+      if (repetitionPath[currentDepth] !== "REQUIRED") {
+        currentContainer = currentContainer.at(-1);
+        containerStack.push(currentContainer);
+        currentDefLevel++;
+      }
+      if (repetitionPath[currentDepth] === "REPEATED") currentRepLevel++;
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    const def = definitionLevels?.length ? definitionLevels[i] : maxDefinitionLevel;
+    const rep = repetitionLevels[i];
+    while (currentDepth && (rep < currentRepLevel || repetitionPath[currentDepth] !== "REPEATED")) {
+      if (repetitionPath[currentDepth] !== "REQUIRED") {
+        containerStack.pop();
+        currentDefLevel--;
+      }
+      if (repetitionPath[currentDepth] === "REPEATED") currentRepLevel--;
+      currentDepth--;
+    }
+    currentContainer = containerStack.at(-1);
+    while ((currentDepth < repetitionPath.length - 2 || repetitionPath[currentDepth + 1] === "REPEATED") && (currentDefLevel < def || repetitionPath[currentDepth + 1] === "REQUIRED")) {
+      currentDepth++;
+      if (repetitionPath[currentDepth] !== "REQUIRED") {
+        const newList = [];
+        currentContainer.push(newList);
+        currentContainer = newList;
+        containerStack.push(newList);
+        currentDefLevel++;
+      }
+      if (repetitionPath[currentDepth] === "REPEATED") currentRepLevel++;
+    }
+    if (def === maxDefinitionLevel) {
+      currentContainer.push(values[valueIndex++]);
+    } else if (currentDepth === repetitionPath.length - 2) {
+      currentContainer.push(repetitionPath[currentDepth + 1] === "REPEATED" ? [] : null);
+    } else {
+      currentContainer.push([]);
+    }
+  }
+  if (!output.length) {
+    for (let i = 0; i < maxDefinitionLevel; i++) {
+      const newList = [];
+      currentContainer.push(newList);
+      currentContainer = newList;
+    }
+  }
+  return output;
+}
+function assembleNested(subcolumnData, schema, parsers, depth = 0) {
+  const path7 = schema.path.join(".");
+  const optional = schema.element.repetition_type === "OPTIONAL";
+  const nextDepth = optional ? depth + 1 : depth;
+  if (isListLike(schema)) {
+    let sublist = schema.children[0];
+    let subDepth = nextDepth;
+    if (sublist.children.length === 1) {
+      sublist = sublist.children[0];
+      subDepth++;
+    }
+    assembleNested(subcolumnData, sublist, parsers, subDepth);
+    const subcolumn = sublist.path.join(".");
+    const values = subcolumnData.get(subcolumn);
+    if (!values) throw new Error("parquet list column missing values");
+    if (optional) flattenAtDepth(values, depth);
+    subcolumnData.set(path7, values);
+    subcolumnData.delete(subcolumn);
+    return;
+  }
+  if (isMapLike(schema)) {
+    const mapName = schema.children[0].element.name;
+    assembleNested(subcolumnData, schema.children[0].children[0], parsers, nextDepth + 1);
+    assembleNested(subcolumnData, schema.children[0].children[1], parsers, nextDepth + 1);
+    const keys = subcolumnData.get(`${path7}.${mapName}.key`);
+    const values = subcolumnData.get(`${path7}.${mapName}.value`);
+    if (!keys) throw new Error("parquet map column missing keys");
+    if (!values) throw new Error("parquet map column missing values");
+    if (keys.length !== values.length) {
+      throw new Error("parquet map column key/value length mismatch");
+    }
+    const out = assembleMaps(keys, values, nextDepth);
+    if (optional) flattenAtDepth(out, depth);
+    subcolumnData.delete(`${path7}.${mapName}.key`);
+    subcolumnData.delete(`${path7}.${mapName}.value`);
+    subcolumnData.set(path7, out);
+    return;
+  }
+  if (schema.children.length) {
+    const invertDepth = schema.element.repetition_type === "REQUIRED" ? depth : depth + 1;
+    const struct = {};
+    for (const child2 of schema.children) {
+      assembleNested(subcolumnData, child2, parsers, invertDepth);
+      const childData = subcolumnData.get(child2.path.join("."));
+      if (!childData) throw new Error("parquet struct missing child data");
+      struct[child2.element.name] = childData;
+    }
+    for (const child2 of schema.children) {
+      subcolumnData.delete(child2.path.join("."));
+    }
+    let inverted = invertStruct(struct, invertDepth);
+    if (schema.element.logical_type?.type === "VARIANT") {
+      inverted = decodeVariantColumn(inverted, parsers);
+    }
+    if (optional) flattenAtDepth(inverted, depth);
+    subcolumnData.set(path7, inverted);
+  }
+}
+function flattenAtDepth(arr, depth) {
+  for (let i = 0; i < arr.length; i++) {
+    if (depth) {
+      flattenAtDepth(arr[i], depth - 1);
+    } else {
+      arr[i] = arr[i].length ? arr[i][0] : null;
+    }
+  }
+}
+function assembleMaps(keys, values, depth) {
+  const out = [];
+  for (let i = 0; i < keys.length; i++) {
+    if (depth) {
+      out.push(assembleMaps(keys[i], values[i], depth - 1));
+    } else {
+      if (keys[i]) {
+        const obj = {};
+        for (let j = 0; j < keys[i].length; j++) {
+          const value = values[i][j];
+          obj[keys[i][j]] = value === void 0 ? null : value;
+        }
+        out.push(obj);
+      } else {
+        out.push(void 0);
+      }
+    }
+  }
+  return out;
+}
+function invertStruct(struct, depth) {
+  const keys = Object.keys(struct);
+  const length = struct[keys[0]]?.length;
+  const out = [];
+  for (let i = 0; i < length; i++) {
+    const obj = {};
+    for (const key of keys) {
+      if (struct[key].length !== length) throw new Error("parquet struct parsing error");
+      obj[key] = struct[key][i];
+    }
+    if (depth) {
+      out.push(invertStruct(obj, depth - 1));
+    } else {
+      out.push(obj);
+    }
+  }
+  return out;
+}
+
+// node_modules/hyparquet/src/alp.js
+var POW10 = [
+  1,
+  10,
+  100,
+  1e3,
+  1e4,
+  1e5,
+  1e6,
+  1e7,
+  1e8,
+  1e9,
+  1e10,
+  1e11,
+  1e12,
+  1e13,
+  1e14,
+  1e15,
+  1e16,
+  1e17,
+  1e18
+];
+var POW10_NEG = [
+  1,
+  0.1,
+  0.01,
+  1e-3,
+  1e-4,
+  1e-5,
+  1e-6,
+  1e-7,
+  1e-8,
+  1e-9,
+  1e-10,
+  1e-11,
+  1e-12,
+  1e-13,
+  1e-14,
+  1e-15,
+  1e-16,
+  1e-17,
+  1e-18
+];
+var POW10F = POW10.slice(0, 11).map(Math.fround);
+var POW10F_NEG = POW10_NEG.slice(0, 11).map(Math.fround);
+function alpDecode(reader, count, type) {
+  if (type === "FLOAT") {
+    return alpDecodeFloat(reader, count);
+  } else if (type === "DOUBLE") {
+    return alpDecodeDouble(reader, count);
+  } else {
+    throw new Error(`ALP encoding unsupported type: ${type}`);
+  }
+}
+function readAlpHeader(reader) {
+  const { view } = reader;
+  const compressionMode = view.getUint8(reader.offset++);
+  if (compressionMode !== 0) {
+    throw new Error(`ALP unsupported compression mode: ${compressionMode}`);
+  }
+  const integerEncoding = view.getUint8(reader.offset++);
+  if (integerEncoding !== 0) {
+    throw new Error(`ALP unsupported integer encoding: ${integerEncoding}`);
+  }
+  const logVectorSize = view.getUint8(reader.offset++);
+  if (logVectorSize < 3 || logVectorSize > 15) {
+    throw new Error(`ALP invalid log_vector_size: ${logVectorSize}`);
+  }
+  const vectorSize = 1 << logVectorSize;
+  const numElements = view.getInt32(reader.offset, true);
+  reader.offset += 4;
+  const numVectors = Math.ceil(numElements / vectorSize);
+  const offsetArrayStart = reader.offset;
+  reader.offset += numVectors * 4;
+  return { vectorSize, numElements, numVectors, offsetArrayStart };
+}
+function alpDecodeFloat(reader, count) {
+  const { view } = reader;
+  const { vectorSize, numElements, numVectors, offsetArrayStart } = readAlpHeader(reader);
+  if (numElements !== count) {
+    throw new Error(`ALP num_elements ${numElements} does not match expected ${count}`);
+  }
+  const output = new Float32Array(count);
+  const outputBytes = new Uint8Array(output.buffer);
+  for (let v = 0; v < numVectors; v++) {
+    reader.offset = offsetArrayStart + view.getUint32(offsetArrayStart + v * 4, true);
+    const outputOffset = v * vectorSize;
+    const n = Math.min(vectorSize, numElements - outputOffset);
+    const exponent = view.getUint8(reader.offset++);
+    const factor = view.getUint8(reader.offset++);
+    const numExceptions = view.getUint16(reader.offset, true);
+    reader.offset += 2;
+    const frameOfReference = view.getInt32(reader.offset, true);
+    reader.offset += 4;
+    const bitWidth2 = view.getUint8(reader.offset++);
+    const deltas = unpackBits(reader, n, bitWidth2);
+    const mulFactor = POW10F[factor];
+    const mulExponent = POW10F_NEG[exponent];
+    for (let i = 0; i < n; i++) {
+      const encoded = deltas[i] + frameOfReference | 0;
+      output[outputOffset + i] = Math.fround(Math.fround(encoded) * mulFactor) * mulExponent;
+    }
+    patchExceptions(reader, numExceptions, 4, outputBytes, outputOffset);
+  }
+  return output;
+}
+function alpDecodeDouble(reader, count) {
+  const { view } = reader;
+  const { vectorSize, numElements, numVectors, offsetArrayStart } = readAlpHeader(reader);
+  if (numElements !== count) {
+    throw new Error(`ALP num_elements ${numElements} does not match expected ${count}`);
+  }
+  const output = new Float64Array(count);
+  const outputBytes = new Uint8Array(output.buffer);
+  for (let v = 0; v < numVectors; v++) {
+    reader.offset = offsetArrayStart + view.getUint32(offsetArrayStart + v * 4, true);
+    const outputOffset = v * vectorSize;
+    const n = Math.min(vectorSize, numElements - outputOffset);
+    const exponent = view.getUint8(reader.offset++);
+    const factor = view.getUint8(reader.offset++);
+    const numExceptions = view.getUint16(reader.offset, true);
+    reader.offset += 2;
+    const frameOfReference = view.getBigInt64(reader.offset, true);
+    reader.offset += 8;
+    const bitWidth2 = view.getUint8(reader.offset++);
+    const mulFactor = POW10[factor];
+    const mulExponent = POW10_NEG[exponent];
+    const forNumber = Number(frameOfReference);
+    if (bitWidth2 <= 32 && Number.isSafeInteger(forNumber)) {
+      const deltas = unpackBits(reader, n, bitWidth2);
+      for (let i = 0; i < n; i++) {
+        output[outputOffset + i] = (deltas[i] + forNumber) * mulFactor * mulExponent;
+      }
+    } else {
+      const deltas = unpackBitsBig(reader, n, bitWidth2);
+      for (let i = 0; i < n; i++) {
+        const encoded = BigInt.asIntN(64, deltas[i] + frameOfReference);
+        output[outputOffset + i] = Number(encoded) * mulFactor * mulExponent;
+      }
+    }
+    patchExceptions(reader, numExceptions, 8, outputBytes, outputOffset);
+  }
+  return output;
+}
+function patchExceptions(reader, numExceptions, byteSize, outputBytes, outputOffset) {
+  if (!numExceptions) return;
+  const { view } = reader;
+  const positionsStart = reader.offset;
+  const valuesStart = positionsStart + numExceptions * 2;
+  const source = new Uint8Array(view.buffer, view.byteOffset + valuesStart, numExceptions * byteSize);
+  for (let e = 0; e < numExceptions; e++) {
+    const pos = view.getUint16(positionsStart + e * 2, true);
+    const dest = (outputOffset + pos) * byteSize;
+    outputBytes.set(source.subarray(e * byteSize, (e + 1) * byteSize), dest);
+  }
+  reader.offset = valuesStart + numExceptions * byteSize;
+}
+function unpackBits(reader, count, bitWidth2) {
+  const output = new Uint32Array(count);
+  if (!bitWidth2) return output;
+  const { view } = reader;
+  const start = reader.offset;
+  const modulus = 2 ** bitWidth2;
+  let bitPos = 0;
+  for (let i = 0; i < count; i++) {
+    let byteIndex = start + (bitPos >>> 3);
+    const shift = bitPos & 7;
+    let value = view.getUint8(byteIndex++) >>> shift;
+    let bits2 = 8 - shift;
+    while (bits2 < bitWidth2) {
+      value += view.getUint8(byteIndex++) * 2 ** bits2;
+      bits2 += 8;
+    }
+    output[i] = value % modulus;
+    bitPos += bitWidth2;
+  }
+  reader.offset = start + Math.ceil(count * bitWidth2 / 8);
+  return output;
+}
+function unpackBitsBig(reader, count, bitWidth2) {
+  const output = new BigUint64Array(count);
+  if (!bitWidth2) return output;
+  const { view } = reader;
+  const start = reader.offset;
+  const mask = (1n << BigInt(bitWidth2)) - 1n;
+  let buffer = 0n;
+  let bitsInBuffer = 0;
+  let byteIndex = start;
+  for (let i = 0; i < count; i++) {
+    while (bitsInBuffer < bitWidth2) {
+      buffer |= BigInt(view.getUint8(byteIndex++)) << BigInt(bitsInBuffer);
+      bitsInBuffer += 8;
+    }
+    output[i] = buffer & mask;
+    buffer >>= BigInt(bitWidth2);
+    bitsInBuffer -= bitWidth2;
+  }
+  reader.offset = start + Math.ceil(count * bitWidth2 / 8);
+  return output;
+}
+
+// node_modules/hyparquet/src/delta.js
+function deltaBinaryUnpack(reader, count, output) {
+  if (output instanceof Int32Array) {
+    deltaBinaryUnpackInt32(reader, count, output);
+    return;
+  }
+  const blockSize = readVarInt(reader);
+  const miniblockPerBlock = readVarInt(reader);
+  readVarInt(reader);
+  let value = readZigZagBigInt(reader);
+  let outputIndex = 0;
+  output[outputIndex++] = value;
+  const valuesPerMiniblock = blockSize / miniblockPerBlock;
+  while (outputIndex < count) {
+    const minDelta = readZigZagBigInt(reader);
+    const bitWidths = new Uint8Array(miniblockPerBlock);
+    for (let i = 0; i < miniblockPerBlock; i++) {
+      bitWidths[i] = reader.view.getUint8(reader.offset++);
+    }
+    for (let i = 0; i < miniblockPerBlock && outputIndex < count; i++) {
+      const bitWidth2 = bitWidths[i];
+      if (bitWidth2) {
+        let bitpackPos = 0;
+        let miniblockCount = valuesPerMiniblock;
+        const mask = (1n << BigInt(bitWidth2)) - 1n;
+        while (miniblockCount && outputIndex < count) {
+          let bits2 = BigInt(reader.view.getUint32(reader.offset, true) >>> bitpackPos) & mask;
+          bitpackPos += bitWidth2;
+          while (bitpackPos >= 32) {
+            bitpackPos -= 32;
+            reader.offset += 4;
+            if (bitpackPos) {
+              bits2 |= BigInt(reader.view.getUint32(reader.offset, true)) << BigInt(bitWidth2 - bitpackPos) & mask;
+            }
+          }
+          const delta = minDelta + bits2;
+          value += delta;
+          output[outputIndex++] = value;
+          miniblockCount--;
+        }
+        if (miniblockCount) {
+          reader.offset += Math.ceil((miniblockCount * bitWidth2 + bitpackPos) / 8);
+        }
+      } else {
+        for (let j = 0; j < valuesPerMiniblock && outputIndex < count; j++) {
+          value += minDelta;
+          output[outputIndex++] = value;
+        }
+      }
+    }
+  }
+}
+function deltaBinaryUnpackInt32(reader, count, output) {
+  const blockSize = readVarInt(reader);
+  const miniblockPerBlock = readVarInt(reader);
+  readVarInt(reader);
+  let value = readZigZag(reader);
+  let outputIndex = 0;
+  output[outputIndex++] = value;
+  const valuesPerMiniblock = blockSize / miniblockPerBlock;
+  const { view } = reader;
+  while (outputIndex < count) {
+    const minDelta = readZigZagInt33(reader);
+    const bitWidthsOffset = reader.offset;
+    let offset = bitWidthsOffset + miniblockPerBlock;
+    for (let i = 0; i < miniblockPerBlock && outputIndex < count; i++) {
+      const bitWidth2 = view.getUint8(bitWidthsOffset + i);
+      const end = offset + valuesPerMiniblock * bitWidth2 / 8;
+      let bitOffset = 0;
+      for (let j = 0; j < valuesPerMiniblock && outputIndex < count; j++) {
+        let residual = 0;
+        let bitsRead = 0;
+        while (bitsRead < bitWidth2) {
+          const bitsToRead = Math.min(8 - bitOffset, bitWidth2 - bitsRead);
+          if (bitsRead < 32) {
+            residual |= (view.getUint8(offset) >>> bitOffset & (1 << bitsToRead) - 1) << bitsRead;
+          }
+          bitsRead += bitsToRead;
+          bitOffset += bitsToRead;
+          if (bitOffset === 8) {
+            bitOffset = 0;
+            offset++;
+          }
+        }
+        value = value + minDelta + residual | 0;
+        output[outputIndex++] = value;
+      }
+      offset = end;
+    }
+    reader.offset = offset;
+  }
+}
+function readZigZagInt33(reader) {
+  const start = reader.offset;
+  const low = readVarInt(reader);
+  const high = reader.offset - start === 5 ? reader.view.getUint8(start + 4) >>> 4 & 1 : 0;
+  return (low >>> 1 | high << 31) ^ -(low & 1);
+}
+function deltaLengthByteArray(reader, count, output) {
+  const lengths = new Int32Array(count);
+  deltaBinaryUnpack(reader, count, lengths);
+  for (let i = 0; i < count; i++) {
+    output[i] = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, lengths[i]);
+    reader.offset += lengths[i];
+  }
+}
+function deltaByteArray(reader, count, output) {
+  const prefixData = new Int32Array(count);
+  deltaBinaryUnpack(reader, count, prefixData);
+  const suffixData = new Int32Array(count);
+  deltaBinaryUnpack(reader, count, suffixData);
+  for (let i = 0; i < count; i++) {
+    const suffix = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, suffixData[i]);
+    if (prefixData[i]) {
+      output[i] = new Uint8Array(prefixData[i] + suffixData[i]);
+      output[i].set(output[i - 1].subarray(0, prefixData[i]));
+      output[i].set(suffix, prefixData[i]);
+    } else {
+      output[i] = suffix;
+    }
+    reader.offset += suffixData[i];
+  }
+}
+
+// node_modules/hyparquet/src/encoding.js
+function readRleBitPackedHybrid(reader, width, output, length) {
+  if (length === void 0) {
+    length = reader.view.getUint32(reader.offset, true);
+    reader.offset += 4;
+  }
+  const startOffset = reader.offset;
+  let seen = 0;
+  while (seen < output.length) {
+    const header2 = readVarInt(reader);
+    if (header2 & 1) {
+      seen = readBitPacked(reader, header2, width, output, seen);
+    } else {
+      const count = header2 >>> 1;
+      readRle(reader, count, width, output, seen);
+      seen += count;
+    }
+  }
+  reader.offset = startOffset + length;
+}
+function readRle(reader, count, bitWidth2, output, seen) {
+  const width = bitWidth2 + 7 >> 3;
+  let value = 0;
+  for (let i = 0; i < width; i++) {
+    value |= reader.view.getUint8(reader.offset++) << (i << 3);
+  }
+  for (let i = 0; i < count; i++) {
+    output[seen + i] = value;
+  }
+}
+function readBitPacked(reader, header2, bitWidth2, output, seen) {
+  let count = header2 >> 1 << 3;
+  const mask = (1 << bitWidth2) - 1;
+  let data = 0;
+  if (reader.offset < reader.view.byteLength) {
+    data = reader.view.getUint8(reader.offset++);
+  } else if (mask) {
+    throw new Error(`parquet bitpack offset ${reader.offset} out of range`);
+  }
+  let left = 8;
+  let right = 0;
+  while (count) {
+    if (right > 8) {
+      right -= 8;
+      left -= 8;
+      data >>>= 8;
+    } else if (left - right < bitWidth2) {
+      data |= reader.view.getUint8(reader.offset) << left;
+      reader.offset++;
+      left += 8;
+    } else {
+      if (seen < output.length) {
+        output[seen++] = data >> right & mask;
+      }
+      count--;
+      right += bitWidth2;
+    }
+  }
+  return seen;
+}
+function byteStreamSplit(reader, count, type, typeLength) {
+  const width = byteWidth(type, typeLength);
+  const bytes = new Uint8Array(count * width);
+  for (let b = 0; b < width; b++) {
+    for (let i = 0; i < count; i++) {
+      bytes[i * width + b] = reader.view.getUint8(reader.offset++);
+    }
+  }
+  if (type === "FLOAT") return new Float32Array(bytes.buffer);
+  else if (type === "DOUBLE") return new Float64Array(bytes.buffer);
+  else if (type === "INT32") return new Int32Array(bytes.buffer);
+  else if (type === "INT64") return new BigInt64Array(bytes.buffer);
+  else if (type === "FIXED_LEN_BYTE_ARRAY") {
+    const split = new Array(count);
+    for (let i = 0; i < count; i++) {
+      split[i] = bytes.subarray(i * width, (i + 1) * width);
+    }
+    return split;
+  }
+  throw new Error(`parquet byte_stream_split unsupported type: ${type}`);
+}
+function byteWidth(type, typeLength) {
+  switch (type) {
+    case "INT32":
+    case "FLOAT":
+      return 4;
+    case "INT64":
+    case "DOUBLE":
+      return 8;
+    case "FIXED_LEN_BYTE_ARRAY":
+      if (!typeLength) throw new Error("parquet byteWidth missing type_length");
+      return typeLength;
+    default:
+      throw new Error(`parquet unsupported type: ${type}`);
+  }
+}
+
+// node_modules/hyparquet/src/plain.js
+function readPlain(reader, type, count, fixedLength2) {
+  if (count === 0) return [];
+  if (type === "BOOLEAN") {
+    return readPlainBoolean(reader, count);
+  } else if (type === "INT32") {
+    return readPlainInt32(reader, count);
+  } else if (type === "INT64") {
+    return readPlainInt64(reader, count);
+  } else if (type === "INT96") {
+    return readPlainInt96(reader, count);
+  } else if (type === "FLOAT") {
+    return readPlainFloat(reader, count);
+  } else if (type === "DOUBLE") {
+    return readPlainDouble(reader, count);
+  } else if (type === "BYTE_ARRAY") {
+    return readPlainByteArray(reader, count);
+  } else if (type === "FIXED_LEN_BYTE_ARRAY") {
+    if (!fixedLength2) throw new Error("parquet missing fixed length");
+    return readPlainByteArrayFixed(reader, count, fixedLength2);
+  } else {
+    throw new Error(`parquet unhandled type: ${type}`);
+  }
+}
+function readPlainBoolean(reader, count) {
+  const values = new Array(count);
+  for (let i = 0; i < count; i++) {
+    const byteOffset = reader.offset + (i / 8 | 0);
+    const bitOffset = i % 8;
+    const byte = reader.view.getUint8(byteOffset);
+    values[i] = (byte & 1 << bitOffset) !== 0;
+  }
+  reader.offset += Math.ceil(count / 8);
+  return values;
+}
+function readPlainInt32(reader, count) {
+  const values = (reader.view.byteOffset + reader.offset) % 4 ? new Int32Array(align(reader.view.buffer, reader.view.byteOffset + reader.offset, count * 4)) : new Int32Array(reader.view.buffer, reader.view.byteOffset + reader.offset, count);
+  reader.offset += count * 4;
+  return values;
+}
+function readPlainInt64(reader, count) {
+  const values = (reader.view.byteOffset + reader.offset) % 8 ? new BigInt64Array(align(reader.view.buffer, reader.view.byteOffset + reader.offset, count * 8)) : new BigInt64Array(reader.view.buffer, reader.view.byteOffset + reader.offset, count);
+  reader.offset += count * 8;
+  return values;
+}
+function readPlainInt96(reader, count) {
+  const values = new Array(count);
+  for (let i = 0; i < count; i++) {
+    const low = reader.view.getBigInt64(reader.offset + i * 12, true);
+    const high = reader.view.getInt32(reader.offset + i * 12 + 8, true);
+    values[i] = BigInt(high) << 64n | low;
+  }
+  reader.offset += count * 12;
+  return values;
+}
+function readPlainFloat(reader, count) {
+  const values = (reader.view.byteOffset + reader.offset) % 4 ? new Float32Array(align(reader.view.buffer, reader.view.byteOffset + reader.offset, count * 4)) : new Float32Array(reader.view.buffer, reader.view.byteOffset + reader.offset, count);
+  reader.offset += count * 4;
+  return values;
+}
+function readPlainDouble(reader, count) {
+  const values = (reader.view.byteOffset + reader.offset) % 8 ? new Float64Array(align(reader.view.buffer, reader.view.byteOffset + reader.offset, count * 8)) : new Float64Array(reader.view.buffer, reader.view.byteOffset + reader.offset, count);
+  reader.offset += count * 8;
+  return values;
+}
+function readPlainByteArray(reader, count) {
+  const values = new Array(count);
+  for (let i = 0; i < count; i++) {
+    const length = reader.view.getUint32(reader.offset, true);
+    reader.offset += 4;
+    values[i] = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, length);
+    reader.offset += length;
+  }
+  return values;
+}
+function readPlainByteArrayFixed(reader, count, fixedLength2) {
+  const values = new Array(count);
+  for (let i = 0; i < count; i++) {
+    values[i] = new Uint8Array(reader.view.buffer, reader.view.byteOffset + reader.offset, fixedLength2);
+    reader.offset += fixedLength2;
+  }
+  return values;
+}
+function align(buffer, offset, size) {
+  const aligned = new ArrayBuffer(size);
+  new Uint8Array(aligned).set(new Uint8Array(buffer, offset, size));
+  return aligned;
+}
+
+// node_modules/hyparquet/src/snappy.js
+var WORD_MASK = [0, 255, 65535, 16777215, 4294967295];
+function copyBytes(fromArray, fromPos, toArray, toPos, length) {
+  for (let i = 0; i < length; i++) {
+    toArray[toPos + i] = fromArray[fromPos + i];
+  }
+}
+function snappyUncompress(input, output) {
+  const inputLength = input.byteLength;
+  const outputLength = output.byteLength;
+  let pos = 0;
+  let outPos = 0;
+  while (pos < inputLength) {
+    const c = input[pos];
+    pos++;
+    if (c < 128) {
+      break;
+    }
+  }
+  if (outputLength && pos >= inputLength) {
+    throw new Error("invalid snappy length header");
+  }
+  while (pos < inputLength) {
+    const c = input[pos];
+    let len = 0;
+    pos++;
+    if (pos >= inputLength) {
+      throw new Error("missing eof marker");
+    }
+    if ((c & 3) === 0) {
+      let len2 = (c >>> 2) + 1;
+      if (len2 > 60) {
+        if (pos + 3 >= inputLength) {
+          throw new Error("snappy error literal pos + 3 >= inputLength");
+        }
+        const lengthSize = len2 - 60;
+        len2 = input[pos] + (input[pos + 1] << 8) + (input[pos + 2] << 16) + (input[pos + 3] << 24);
+        len2 = (len2 & WORD_MASK[lengthSize]) + 1;
+        pos += lengthSize;
+      }
+      if (pos + len2 > inputLength) {
+        throw new Error("snappy error literal exceeds input length");
+      }
+      copyBytes(input, pos, output, outPos, len2);
+      pos += len2;
+      outPos += len2;
+    } else {
+      let offset = 0;
+      switch (c & 3) {
+        case 1:
+          len = (c >>> 2 & 7) + 4;
+          offset = input[pos] + (c >>> 5 << 8);
+          pos++;
+          break;
+        case 2:
+          if (inputLength <= pos + 1) {
+            throw new Error("snappy error end of input");
+          }
+          len = (c >>> 2) + 1;
+          offset = input[pos] + (input[pos + 1] << 8);
+          pos += 2;
+          break;
+        case 3:
+          if (inputLength <= pos + 3) {
+            throw new Error("snappy error end of input");
+          }
+          len = (c >>> 2) + 1;
+          offset = input[pos] + (input[pos + 1] << 8) + (input[pos + 2] << 16) + (input[pos + 3] << 24);
+          pos += 4;
+          break;
+        default:
+          break;
+      }
+      if (offset === 0 || isNaN(offset)) {
+        throw new Error(`invalid offset ${offset} pos ${pos} inputLength ${inputLength}`);
+      }
+      if (offset > outPos) {
+        throw new Error("cannot copy from before start of buffer");
+      }
+      copyBytes(output, outPos - offset, output, outPos, len);
+      outPos += len;
+    }
+  }
+  if (outPos !== outputLength) throw new Error("premature end of input");
+}
+
+// node_modules/hyparquet/src/datapage.js
+function readDataPage(bytes, daph, { type, element, schemaPath }) {
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  const reader = { view, offset: 0 };
+  let dataPage;
+  const repetitionLevels = readRepetitionLevels(reader, daph, schemaPath);
+  const { definitionLevels, numNulls } = readDefinitionLevels(reader, daph, schemaPath);
+  const nValues = daph.num_values - numNulls;
+  if (daph.encoding === "PLAIN") {
+    dataPage = readPlain(reader, type, nValues, element.type_length);
+  } else if (daph.encoding === "PLAIN_DICTIONARY" || daph.encoding === "RLE_DICTIONARY" || daph.encoding === "RLE") {
+    const bitWidth2 = type === "BOOLEAN" ? 1 : view.getUint8(reader.offset++);
+    if (bitWidth2) {
+      dataPage = new Array(nValues);
+      if (type === "BOOLEAN") {
+        readRleBitPackedHybrid(reader, bitWidth2, dataPage);
+        dataPage = dataPage.map((x) => !!x);
+      } else {
+        readRleBitPackedHybrid(reader, bitWidth2, dataPage, view.byteLength - reader.offset);
+      }
+    } else {
+      dataPage = new Uint8Array(nValues);
+    }
+  } else if (daph.encoding === "BYTE_STREAM_SPLIT") {
+    dataPage = byteStreamSplit(reader, nValues, type, element.type_length);
+  } else if (daph.encoding === "ALP") {
+    dataPage = alpDecode(reader, nValues, type);
+  } else if (daph.encoding === "DELTA_BINARY_PACKED") {
+    const int32 = type === "INT32";
+    dataPage = int32 ? new Int32Array(nValues) : new BigInt64Array(nValues);
+    deltaBinaryUnpack(reader, nValues, dataPage);
+  } else if (daph.encoding === "DELTA_LENGTH_BYTE_ARRAY") {
+    dataPage = new Array(nValues);
+    deltaLengthByteArray(reader, nValues, dataPage);
+  } else if (daph.encoding === "DELTA_BYTE_ARRAY") {
+    dataPage = new Array(nValues);
+    deltaByteArray(reader, nValues, dataPage);
+  } else {
+    throw new Error(`parquet unsupported encoding: ${daph.encoding}`);
+  }
+  return { definitionLevels, repetitionLevels, dataPage };
+}
+function readRepetitionLevels(reader, daph, schemaPath) {
+  if (schemaPath.length > 1) {
+    const maxRepetitionLevel = getMaxRepetitionLevel(schemaPath);
+    if (maxRepetitionLevel) {
+      const values = new Array(daph.num_values);
+      readRleBitPackedHybrid(reader, bitWidth(maxRepetitionLevel), values);
+      return values;
+    }
+  }
+  return [];
+}
+function readDefinitionLevels(reader, daph, schemaPath) {
+  const maxDefinitionLevel = getMaxDefinitionLevel(schemaPath);
+  if (!maxDefinitionLevel) return { definitionLevels: [], numNulls: 0 };
+  const definitionLevels = new Array(daph.num_values);
+  readRleBitPackedHybrid(reader, bitWidth(maxDefinitionLevel), definitionLevels);
+  let numNulls = daph.num_values;
+  for (const def of definitionLevels) {
+    if (def === maxDefinitionLevel) numNulls--;
+  }
+  if (numNulls === 0) definitionLevels.length = 0;
+  return { definitionLevels, numNulls };
+}
+function decompressPage(compressedBytes, uncompressed_page_size, codec, compressors2) {
+  let page;
+  const customDecompressor = compressors2?.[codec];
+  if (codec === "UNCOMPRESSED") {
+    page = compressedBytes;
+  } else if (customDecompressor) {
+    page = customDecompressor(compressedBytes, uncompressed_page_size);
+  } else if (codec === "SNAPPY") {
+    page = new Uint8Array(uncompressed_page_size);
+    snappyUncompress(compressedBytes, page);
+  } else {
+    throw new Error(`parquet unsupported compression codec: ${codec}`);
+  }
+  if (page?.length !== uncompressed_page_size) {
+    throw new Error(`parquet decompressed page length ${page?.length} does not match header ${uncompressed_page_size}`);
+  }
+  return page;
+}
+function readDataPageV2(compressedBytes, ph, columnDecoder) {
+  const view = new DataView(compressedBytes.buffer, compressedBytes.byteOffset, compressedBytes.byteLength);
+  const reader = { view, offset: 0 };
+  const { type, element, schemaPath, codec, compressors: compressors2 } = columnDecoder;
+  const daph2 = ph.data_page_header_v2;
+  if (!daph2) throw new Error("parquet data page header v2 is undefined");
+  const repetitionLevels = readRepetitionLevelsV2(reader, daph2, schemaPath);
+  reader.offset = daph2.repetition_levels_byte_length;
+  const definitionLevels = readDefinitionLevelsV2(reader, daph2, schemaPath);
+  const uncompressedPageSize = ph.uncompressed_page_size - daph2.definition_levels_byte_length - daph2.repetition_levels_byte_length;
+  let page = compressedBytes.subarray(reader.offset);
+  if (daph2.is_compressed !== false && uncompressedPageSize) {
+    page = decompressPage(page, uncompressedPageSize, codec, compressors2);
+  }
+  const pageView = new DataView(page.buffer, page.byteOffset, page.byteLength);
+  const pageReader = { view: pageView, offset: 0 };
+  let dataPage;
+  const nValues = daph2.num_values - daph2.num_nulls;
+  if (daph2.encoding === "PLAIN") {
+    dataPage = readPlain(pageReader, type, nValues, element.type_length);
+  } else if (daph2.encoding === "RLE") {
+    dataPage = new Array(nValues);
+    readRleBitPackedHybrid(pageReader, 1, dataPage);
+    dataPage = dataPage.map((x) => !!x);
+  } else if (daph2.encoding === "PLAIN_DICTIONARY" || daph2.encoding === "RLE_DICTIONARY") {
+    const bitWidth2 = pageView.getUint8(pageReader.offset++);
+    dataPage = new Array(nValues);
+    readRleBitPackedHybrid(pageReader, bitWidth2, dataPage, uncompressedPageSize - 1);
+  } else if (daph2.encoding === "DELTA_BINARY_PACKED") {
+    const int32 = type === "INT32";
+    dataPage = int32 ? new Int32Array(nValues) : new BigInt64Array(nValues);
+    deltaBinaryUnpack(pageReader, nValues, dataPage);
+  } else if (daph2.encoding === "DELTA_LENGTH_BYTE_ARRAY") {
+    dataPage = new Array(nValues);
+    deltaLengthByteArray(pageReader, nValues, dataPage);
+  } else if (daph2.encoding === "DELTA_BYTE_ARRAY") {
+    dataPage = new Array(nValues);
+    deltaByteArray(pageReader, nValues, dataPage);
+  } else if (daph2.encoding === "BYTE_STREAM_SPLIT") {
+    dataPage = byteStreamSplit(pageReader, nValues, type, element.type_length);
+  } else if (daph2.encoding === "ALP") {
+    dataPage = alpDecode(pageReader, nValues, type);
+  } else {
+    throw new Error(`parquet unsupported encoding: ${daph2.encoding}`);
+  }
+  return { definitionLevels, repetitionLevels, dataPage };
+}
+function readRepetitionLevelsV2(reader, daph2, schemaPath) {
+  const maxRepetitionLevel = getMaxRepetitionLevel(schemaPath);
+  if (!maxRepetitionLevel) return [];
+  const values = new Array(daph2.num_values);
+  readRleBitPackedHybrid(reader, bitWidth(maxRepetitionLevel), values, daph2.repetition_levels_byte_length);
+  return values;
+}
+function readDefinitionLevelsV2(reader, daph2, schemaPath) {
+  const maxDefinitionLevel = getMaxDefinitionLevel(schemaPath);
+  if (maxDefinitionLevel) {
+    const values = new Array(daph2.num_values);
+    readRleBitPackedHybrid(reader, bitWidth(maxDefinitionLevel), values, daph2.definition_levels_byte_length);
+    return values;
+  }
+}
+function bitWidth(value) {
+  return 32 - Math.clz32(value);
+}
+
+// node_modules/hyparquet/src/column.js
+function readColumn(reader, { groupStart, selectStart, selectEnd }, columnDecoder, onPage) {
+  const { pathInSchema, schemaPath } = columnDecoder;
+  const isFlat = isFlatColumn(schemaPath);
+  const chunks = [];
+  let dictionary2 = void 0;
+  let lastChunk = void 0;
+  let rowCount = 0;
+  let skipped = 0;
+  const emitLastChunk = onPage && (() => {
+    lastChunk && onPage({
+      pathInSchema,
+      columnData: lastChunk,
+      rowStart: groupStart + rowCount - lastChunk.length,
+      rowEnd: groupStart + rowCount
+    });
+  });
+  while (isFlat ? rowCount < selectEnd : reader.offset < reader.view.byteLength - 1) {
+    if (reader.offset >= reader.view.byteLength - 1) break;
+    const header2 = parquetHeader(reader);
+    if (header2.type === "DICTIONARY_PAGE") {
+      const { data } = readPage(reader, header2, columnDecoder, dictionary2, void 0, 0);
+      if (data) dictionary2 = convert(data, columnDecoder);
+    } else {
+      const lastChunkLength = lastChunk?.length || 0;
+      const result = readPage(reader, header2, columnDecoder, dictionary2, lastChunk, selectStart - rowCount);
+      if (result.skipped) {
+        if (!chunks.length) {
+          skipped += result.skipped;
+        }
+        rowCount += result.skipped;
+      } else if (result.data && lastChunk === result.data) {
+        rowCount += result.data.length - lastChunkLength;
+      } else if (result.data && result.data.length) {
+        emitLastChunk?.();
+        chunks.push(result.data);
+        rowCount += result.data.length;
+        lastChunk = result.data;
+      }
+    }
+  }
+  emitLastChunk?.();
+  return { data: chunks, skipped };
+}
+function readPage(reader, header2, columnDecoder, dictionary2, previousChunk, pageStart) {
+  const { type, element, schemaPath, codec, compressors: compressors2 } = columnDecoder;
+  const compressedBytes = new Uint8Array(
+    reader.view.buffer,
+    reader.view.byteOffset + reader.offset,
+    header2.compressed_page_size
+  );
+  reader.offset += header2.compressed_page_size;
+  if (header2.type === "DATA_PAGE") {
+    const daph = header2.data_page_header;
+    if (!daph) throw new Error("parquet data page header is undefined");
+    if (pageStart > daph.num_values && isFlatColumn(schemaPath)) {
+      return { skipped: daph.num_values };
+    }
+    const page = decompressPage(compressedBytes, Number(header2.uncompressed_page_size), codec, compressors2);
+    const { definitionLevels, repetitionLevels, dataPage } = readDataPage(page, daph, columnDecoder);
+    const values = convertWithDictionary(dataPage, dictionary2, daph.encoding, columnDecoder);
+    const output = Array.isArray(previousChunk) ? previousChunk : [];
+    const assembled = assembleLists(output, definitionLevels, repetitionLevels, values, schemaPath);
+    return { skipped: 0, data: assembled };
+  } else if (header2.type === "DATA_PAGE_V2") {
+    const daph2 = header2.data_page_header_v2;
+    if (!daph2) throw new Error("parquet data page header v2 is undefined");
+    if (pageStart > daph2.num_rows) {
+      return { skipped: daph2.num_rows };
+    }
+    const { definitionLevels, repetitionLevels, dataPage } = readDataPageV2(compressedBytes, header2, columnDecoder);
+    const values = convertWithDictionary(dataPage, dictionary2, daph2.encoding, columnDecoder);
+    const output = Array.isArray(previousChunk) ? previousChunk : [];
+    const assembled = assembleLists(output, definitionLevels, repetitionLevels, values, schemaPath);
+    return { skipped: 0, data: assembled };
+  } else if (header2.type === "DICTIONARY_PAGE") {
+    const diph = header2.dictionary_page_header;
+    if (!diph) throw new Error("parquet dictionary page header is undefined");
+    const page = decompressPage(
+      compressedBytes,
+      Number(header2.uncompressed_page_size),
+      codec,
+      compressors2
+    );
+    const reader2 = { view: new DataView(page.buffer, page.byteOffset, page.byteLength), offset: 0 };
+    const dictArray = readPlain(reader2, type, diph.num_values, element.type_length);
+    return { skipped: 0, data: dictArray };
+  } else {
+    throw new Error(`parquet unsupported page type: ${header2.type}`);
+  }
+}
+function parquetHeader(reader) {
+  const header2 = deserializeTCompactProtocol(reader);
+  const type = PageTypes[header2.field_1];
+  const uncompressed_page_size = header2.field_2;
+  const compressed_page_size = header2.field_3;
+  const crc = header2.field_4;
+  const data_page_header = header2.field_5 && {
+    num_values: header2.field_5.field_1,
+    encoding: Encodings[header2.field_5.field_2],
+    definition_level_encoding: Encodings[header2.field_5.field_3],
+    repetition_level_encoding: Encodings[header2.field_5.field_4],
+    statistics: pageStatistics(header2.field_5.field_5)
+  };
+  const index_page_header = header2.field_6;
+  const dictionary_page_header = header2.field_7 && {
+    num_values: header2.field_7.field_1,
+    encoding: Encodings[header2.field_7.field_2],
+    is_sorted: header2.field_7.field_3
+  };
+  const data_page_header_v2 = header2.field_8 && {
+    num_values: header2.field_8.field_1,
+    num_nulls: header2.field_8.field_2,
+    num_rows: header2.field_8.field_3,
+    encoding: Encodings[header2.field_8.field_4],
+    definition_levels_byte_length: header2.field_8.field_5,
+    repetition_levels_byte_length: header2.field_8.field_6,
+    is_compressed: header2.field_8.field_7 === void 0 ? true : header2.field_8.field_7,
+    // default true
+    statistics: pageStatistics(header2.field_8.field_8)
+  };
+  return {
+    type,
+    uncompressed_page_size,
+    compressed_page_size,
+    crc,
+    data_page_header,
+    index_page_header,
+    dictionary_page_header,
+    data_page_header_v2
+  };
+}
+function pageStatistics(stats) {
+  return stats && {
+    max: stats.field_1,
+    min: stats.field_2,
+    null_count: stats.field_3,
+    distinct_count: stats.field_4,
+    max_value: stats.field_5,
+    min_value: stats.field_6,
+    is_max_value_exact: stats.field_7,
+    is_min_value_exact: stats.field_8
+  };
+}
+
+// node_modules/hyparquet/src/rowgroup.js
+function readRowGroup(options, { metadata }, groupPlan) {
+  const asyncColumns = [];
+  const schemaTree2 = parquetSchema(metadata);
+  for (const chunk of groupPlan.chunks) {
+    const { path_in_schema: pathInSchema } = chunk.columnMetadata;
+    const schemaPath = getTreePath(schemaTree2, pathInSchema);
+    const columnDecoder = {
+      pathInSchema,
+      element: schemaPath[schemaPath.length - 1].element,
+      schemaPath,
+      ...options,
+      ...chunk.columnMetadata,
+      // merge after options, so a partial parsers object keeps the defaults
+      parsers: { ...DEFAULT_PARSERS, ...options.parsers }
+    };
+    const { startByte, endByte } = chunk.range;
+    if ("pageLocations" in chunk) {
+      asyncColumns.push({
+        pathInSchema,
+        data: readSelectedPages(options, groupPlan, chunk, chunk.pageLocations, columnDecoder)
+      });
+    } else if ("offsetIndex" in chunk) {
+      asyncColumns.push({
+        pathInSchema,
+        // fetch offset index
+        data: Promise.resolve(options.file.slice(chunk.offsetIndex.startByte, chunk.offsetIndex.endByte)).then((arrayBuffer) => {
+          const pages = readOffsetIndex({ view: new DataView(arrayBuffer), offset: 0 }).page_locations;
+          return readSelectedPages(options, groupPlan, chunk, pages, columnDecoder);
+        })
+      });
+    } else {
+      asyncColumns.push({
+        pathInSchema,
+        data: Promise.resolve(options.file.slice(startByte, endByte)).then((buffer) => {
+          const reader = { view: new DataView(buffer), offset: 0 };
+          return readColumn(reader, groupPlan, columnDecoder, options.onPage);
+        })
+      });
+    }
+  }
+  return {
+    groupStart: groupPlan.groupStart,
+    groupRows: groupPlan.groupRows,
+    selectStart: groupPlan.selectStart,
+    selectEnd: groupPlan.selectEnd,
+    asyncColumns
+  };
+}
+async function readSelectedPages(options, groupPlan, chunk, pages, columnDecoder) {
+  const { data_page_offset, dictionary_page_offset } = chunk.columnMetadata;
+  const { selectStart, selectEnd } = groupPlan;
+  let { startByte, endByte } = chunk.range;
+  let skipped = -1;
+  const hasDict = dictionary_page_offset || data_page_offset < pages[0].offset;
+  for (let i = 0; i < pages.length; i++) {
+    const page = pages[i];
+    const pageStart = Number(page.first_row_index);
+    const pageEnd = i + 1 < pages.length ? Number(pages[i + 1].first_row_index) : groupPlan.groupRows;
+    if (skipped < 0 && pageEnd > selectStart) {
+      startByte = Number(page.offset);
+      skipped = pageStart;
+    }
+    if (pageStart < selectEnd) {
+      endByte = Number(page.offset) + page.compressed_page_size;
+    }
+  }
+  if (skipped < 0) skipped = 0;
+  let view;
+  if (hasDict && skipped) {
+    const dictLength = Number(pages[0].offset) - chunk.range.startByte;
+    const [dictBuffer, dataBuffer] = await Promise.all([
+      options.file.slice(chunk.range.startByte, Number(pages[0].offset)),
+      options.file.slice(startByte, endByte)
+    ]);
+    const combined = new Uint8Array(dictLength + dataBuffer.byteLength);
+    combined.set(new Uint8Array(dictBuffer, 0, dictLength));
+    combined.set(new Uint8Array(dataBuffer), dictLength);
+    view = new DataView(combined.buffer);
+  } else if (hasDict) {
+    view = new DataView(await options.file.slice(chunk.range.startByte, endByte));
+  } else {
+    view = new DataView(await options.file.slice(startByte, endByte));
+  }
+  const reader = { view, offset: 0 };
+  const adjustedGroupPlan = skipped ? {
+    ...groupPlan,
+    groupStart: groupPlan.groupStart + skipped,
+    selectStart: groupPlan.selectStart - skipped,
+    selectEnd: groupPlan.selectEnd - skipped
+  } : groupPlan;
+  const { data, skipped: columnSkipped } = readColumn(reader, adjustedGroupPlan, columnDecoder, options.onPage);
+  return {
+    data,
+    skipped: skipped + columnSkipped
+  };
+}
+async function asyncGroupToRows({ asyncColumns }, selectStart, selectEnd, columns, rowFormat) {
+  const asyncPages = await Promise.all(asyncColumns.map(
+    (column) => column.data.then(({ skipped, data }) => ({ skipped, data: flatten(data) }))
+  ));
+  const selectCount = selectEnd - selectStart;
+  if (rowFormat === "object") {
+    const groupData2 = Array(selectCount);
+    for (let selectRow = 0; selectRow < selectCount; selectRow++) {
+      const rowData = {};
+      for (let i = 0; i < asyncColumns.length; i++) {
+        const { data, skipped } = asyncPages[i];
+        rowData[asyncColumns[i].pathInSchema[0]] = data[selectStart + selectRow - skipped];
+      }
+      groupData2[selectRow] = rowData;
+    }
+    return groupData2;
+  }
+  const includedColumnNames = asyncColumns.map((child2) => child2.pathInSchema[0]).filter((name) => !columns || columns.includes(name));
+  const columnOrder = columns ?? includedColumnNames;
+  const columnIndexes = columnOrder.map((name) => asyncColumns.findIndex((column) => column.pathInSchema[0] === name));
+  const groupData = Array(selectCount);
+  for (let selectRow = 0; selectRow < selectCount; selectRow++) {
+    const rowData = Array(asyncColumns.length);
+    for (let i = 0; i < columnOrder.length; i++) {
+      const colIdx = columnIndexes[i];
+      if (colIdx < 0) throw new Error(`parquet column not found: ${columnOrder[i]}`);
+      const { data, skipped } = asyncPages[colIdx];
+      rowData[i] = data[selectStart + selectRow - skipped];
+    }
+    groupData[selectRow] = rowData;
+  }
+  return groupData;
+}
+function assembleAsync(asyncRowGroup, schemaTree2, parsers) {
+  const { asyncColumns } = asyncRowGroup;
+  const allParsers = { ...DEFAULT_PARSERS, ...parsers };
+  const assembled = [];
+  for (const child2 of schemaTree2.children) {
+    if (child2.children.length) {
+      const childColumns = asyncColumns.filter((column) => column.pathInSchema[0] === child2.element.name);
+      if (!childColumns.length) continue;
+      assembled.push({
+        pathInSchema: child2.path,
+        data: (async () => {
+          const resolved = await Promise.all(childColumns.map((c) => c.data));
+          const subcolumnData = /* @__PURE__ */ new Map();
+          const flattened = resolved.map(({ data }) => flatten(data));
+          const skipped = Math.max(asyncRowGroup.selectStart ?? 0, ...resolved.map((result) => result.skipped));
+          const end = Math.min(asyncRowGroup.selectEnd ?? Infinity, ...resolved.map((result, i) => result.skipped + flattened[i].length));
+          for (let i = 0; i < childColumns.length; i++) {
+            const start = skipped - resolved[i].skipped;
+            const length = Math.max(0, end - skipped);
+            subcolumnData.set(
+              childColumns[i].pathInSchema.join("."),
+              flattened[i].slice(start, start + length)
+            );
+          }
+          assembleNested(subcolumnData, child2, allParsers);
+          const assembled2 = subcolumnData.get(child2.element.name);
+          if (!assembled2) throw new Error("parquet column data not assembled");
+          return { data: [assembled2], skipped };
+        })()
+      });
+    } else {
+      const asyncColumn = asyncColumns.find((column) => column.pathInSchema[0] === child2.element.name);
+      if (asyncColumn) assembled.push(asyncColumn);
+    }
+  }
+  return { ...asyncRowGroup, asyncColumns: assembled };
+}
+
+// node_modules/hyparquet/src/scan.js
+async function prepareParquetRead(options) {
+  const prepared = await prepareParquetOptions(options);
+  return {
+    options: prepared,
+    plan: parquetPlan(prepared)
+  };
+}
+async function prepareParquetOptions(options) {
+  const metadata = options.metadata ?? await parquetMetadataAsync(options.file, options);
+  const schemaColumns = parquetSchema(metadata).children.map((child2) => child2.element.name);
+  const filterColumns = columnsNeededForFilter(options.filter);
+  const missingFilterColumns = filterColumns.filter((column) => !schemaColumns.includes(column));
+  if (missingFilterColumns.length) {
+    throw new Error(`parquet filter columns not found: ${missingFilterColumns.join(", ")}`);
+  }
+  if (options.columns) {
+    const missingColumns = options.columns.filter((column) => !schemaColumns.includes(column));
+    if (missingColumns.length) throw new Error(`parquet column not found: ${missingColumns[0]}`);
+  }
+  let prepared = { ...options, metadata };
+  prepared = await withBloomFilters(prepared);
+  prepared = await withPageIndexes(prepared);
+  return prepared;
+}
+function readParquetPlan(options, plan) {
+  const readOptions = { ...options, file: prefetchAsyncBuffer(options.file, plan) };
+  return plan.groups.map((group2) => readRowGroup(readOptions, plan, group2));
+}
+async function withBloomFilters(options) {
+  if (!options.useBloomFilters || !options.filter || !options.metadata) return options;
+  const schemaTree2 = parquetSchema(options.metadata);
+  const schemaElements = {};
+  for (const child2 of schemaTree2.children) schemaElements[child2.element.name] = child2.element;
+  const bloomFiltersByGroup = await prefetchBloomFilters({
+    file: options.file,
+    metadata: options.metadata,
+    filter: options.filter,
+    filterStrict: options.filterStrict
+  });
+  return { ...options, bloomFiltersByGroup, schemaElements };
+}
+async function withPageIndexes(options) {
+  if (!options.usePageIndex || !options.filter || !options.metadata) return options;
+  const { pageRangesByGroup, pageLocationsByGroup } = await prefetchPageIndexes({
+    file: options.file,
+    metadata: options.metadata,
+    filter: options.filter,
+    filterStrict: options.filterStrict,
+    rowStart: options.rowStart,
+    rowEnd: options.rowEnd,
+    columns: options.columns,
+    bloomFiltersByGroup: options.bloomFiltersByGroup,
+    schemaElements: options.schemaElements,
+    parsers: options.parsers
+  });
+  return { ...options, pageRangesByGroup, pageLocationsByGroup };
+}
+
+// node_modules/hyparquet/src/read.js
+var rowIndex = (
+  /** @type {typeof import('../src/types.js').rowIndex} */
+  /* @__PURE__ */ Symbol("rowIndex")
+);
+async function parquetRead(options) {
+  options.metadata ??= await parquetMetadataAsync(options.file, options);
+  const { rowStart = 0, rowEnd, columns, onChunk, onComplete, rowFormat, filter, filterStrict = true } = options;
+  if (filter && rowFormat !== "object") {
+    throw new Error('parquet filter requires rowFormat: "object"');
+  }
+  if (options.includeRowIndex && rowFormat !== "object") {
+    throw new Error('parquet includeRowIndex requires rowFormat: "object"');
+  }
+  const filterColumns = columnsNeededForFilter(filter);
+  let readColumns = columns;
+  if (columns && filterColumns.length) {
+    const selectedColumns = new Set(columns);
+    const extraColumns = filterColumns.filter((column) => !selectedColumns.has(column));
+    if (extraColumns.length) readColumns = [...columns, ...extraColumns];
+  }
+  const readOptions = readColumns === columns ? options : { ...options, columns: readColumns };
+  const prepared = await prepareParquetRead(readOptions);
+  const preparedOptions = prepared.options;
+  const requiresProjection = readColumns !== columns;
+  const asyncGroups = readParquetPlan(preparedOptions, prepared.plan);
+  if (!onComplete && !onChunk) {
+    await awaitAllColumns(asyncGroups);
+    return;
+  }
+  if (!preparedOptions.metadata) throw new Error("parquet requires metadata");
+  const schemaTree2 = parquetSchema(preparedOptions.metadata);
+  const assembled = asyncGroups.map((arg) => assembleAsync(arg, schemaTree2, options.parsers));
+  if (onChunk) {
+    for (const asyncGroup of assembled) {
+      for (const asyncColumn of asyncGroup.asyncColumns) {
+        asyncColumn.data.then(({ data, skipped }) => {
+          let rowStart2 = asyncGroup.groupStart + skipped;
+          for (const columnData of data) {
+            onChunk({
+              columnName: asyncColumn.pathInSchema[0],
+              columnData,
+              rowStart: rowStart2,
+              rowEnd: rowStart2 + columnData.length
+            });
+            rowStart2 += columnData.length;
+          }
+        }, () => {
+        });
+      }
+    }
+  }
+  if (onComplete) {
+    await awaitAllColumns(assembled);
+    const rows = [];
+    for (const asyncGroup of assembled) {
+      const selectStart = asyncGroup.selectStart ?? Math.max(rowStart - asyncGroup.groupStart, 0);
+      const selectEnd = asyncGroup.selectEnd ?? Math.min((rowEnd ?? Infinity) - asyncGroup.groupStart, asyncGroup.groupRows);
+      const groupData = rowFormat === "object" ? await asyncGroupToRows(asyncGroup, selectStart, selectEnd, readColumns, "object") : await asyncGroupToRows(asyncGroup, selectStart, selectEnd, columns, "array");
+      if (options.includeRowIndex) {
+        for (let i = 0; i < groupData.length; i++) {
+          Object.defineProperty(groupData[i], rowIndex, {
+            value: asyncGroup.groupStart + selectStart + i
+          });
+        }
+      }
+      if (filter) {
+        for (
+          const row of
+          /** @type {Record<string, any>[]} */
+          groupData
+        ) {
+          if (matchFilter(row, filter, filterStrict)) {
+            if (requiresProjection && columns) {
+              for (const col of filterColumns) {
+                if (!columns.includes(col)) delete row[col];
+              }
+            }
+            rows.push(row);
+          }
+        }
+      } else {
+        concat(rows, groupData);
+      }
+    }
+    onComplete(rows);
+  } else {
+    await awaitAllColumns(assembled);
+  }
+}
+async function awaitAllColumns(asyncGroups) {
+  const all = asyncGroups.flatMap((g) => g.asyncColumns.map((c) => c.data));
+  const results = await Promise.allSettled(all);
+  const failed = results.find((r) => r.status === "rejected");
+  if (failed) throw failed.reason;
+}
+
+// node_modules/fzstd/esm/index.mjs
+var ab = ArrayBuffer;
+var u8 = Uint8Array;
+var u16 = Uint16Array;
+var i16 = Int16Array;
+var i32 = Int32Array;
+var slc = function(v, s, e) {
+  if (u8.prototype.slice)
+    return u8.prototype.slice.call(v, s, e);
+  if (s == null || s < 0)
+    s = 0;
+  if (e == null || e > v.length)
+    e = v.length;
+  var n = new u8(e - s);
+  n.set(v.subarray(s, e));
+  return n;
+};
+var fill = function(v, n, s, e) {
+  if (u8.prototype.fill)
+    return u8.prototype.fill.call(v, n, s, e);
+  if (s == null || s < 0)
+    s = 0;
+  if (e == null || e > v.length)
+    e = v.length;
+  for (; s < e; ++s)
+    v[s] = n;
+  return v;
+};
+var cpw = function(v, t, s, e) {
+  if (u8.prototype.copyWithin)
+    return u8.prototype.copyWithin.call(v, t, s, e);
+  if (s == null || s < 0)
+    s = 0;
+  if (e == null || e > v.length)
+    e = v.length;
+  while (s < e) {
+    v[t++] = v[s++];
+  }
+};
+var ec = [
+  "invalid zstd data",
+  "window size too large (>2046MB)",
+  "invalid block type",
+  "FSE accuracy too high",
+  "match distance too far back",
+  "unexpected EOF"
+];
+var err = function(ind, msg, nt) {
+  var e = new Error(msg || ec[ind]);
+  e.code = ind;
+  if (Error.captureStackTrace)
+    Error.captureStackTrace(e, err);
+  if (!nt)
+    throw e;
+  return e;
+};
+var rb = function(d, b, n) {
+  var i = 0, o = 0;
+  for (; i < n; ++i)
+    o |= d[b++] << (i << 3);
+  return o;
+};
+var b4 = function(d, b) {
+  return (d[b] | d[b + 1] << 8 | d[b + 2] << 16 | d[b + 3] << 24) >>> 0;
+};
+var rzfh = function(dat, w) {
+  var n3 = dat[0] | dat[1] << 8 | dat[2] << 16;
+  if (n3 == 3126568 && dat[3] == 253) {
+    var flg = dat[4];
+    var ss = flg >> 5 & 1, cc = flg >> 2 & 1, df = flg & 3, fcf = flg >> 6;
+    if (flg & 8)
+      err(0);
+    var bt = 6 - ss;
+    var db = df == 3 ? 4 : df;
+    var di = rb(dat, bt, db);
+    bt += db;
+    var fsb = fcf ? 1 << fcf : ss;
+    var fss = rb(dat, bt, fsb) + (fcf == 1 && 256);
+    var ws = fss;
+    if (!ss) {
+      var wb = 1 << 10 + (dat[5] >> 3);
+      ws = wb + (wb >> 3) * (dat[5] & 7);
+    }
+    if (ws > 2145386496)
+      err(1);
+    var buf = new u8((w == 1 ? fss || ws : w ? 0 : ws) + 12);
+    buf[0] = 1, buf[4] = 4, buf[8] = 8;
+    return {
+      b: bt + fsb,
+      y: 0,
+      l: 0,
+      d: di,
+      w: w && w != 1 ? w : buf.subarray(12),
+      e: ws,
+      o: new i32(buf.buffer, 0, 3),
+      u: fss,
+      c: cc,
+      m: Math.min(131072, ws)
+    };
+  } else if ((n3 >> 4 | dat[3] << 20) == 25481893) {
+    return b4(dat, 4) + 8;
+  }
+  err(0);
+};
+var msb = function(val) {
+  var bits2 = 0;
+  for (; 1 << bits2 <= val; ++bits2)
+    ;
+  return bits2 - 1;
+};
+var rfse = function(dat, bt, mal) {
+  var tpos = (bt << 3) + 4;
+  var al = (dat[bt] & 15) + 5;
+  if (al > mal)
+    err(3);
+  var sz = 1 << al;
+  var probs = sz, sym = -1, re = -1, i = -1, ht = sz;
+  var buf = new ab(512 + (sz << 2));
+  var freq = new i16(buf, 0, 256);
+  var dstate = new u16(buf, 0, 256);
+  var nstate = new u16(buf, 512, sz);
+  var bb1 = 512 + (sz << 1);
+  var syms = new u8(buf, bb1, sz);
+  var nbits = new u8(buf, bb1 + sz);
+  while (sym < 255 && probs > 0) {
+    var bits2 = msb(probs + 1);
+    var cbt = tpos >> 3;
+    var msk = (1 << bits2 + 1) - 1;
+    var val = (dat[cbt] | dat[cbt + 1] << 8 | dat[cbt + 2] << 16) >> (tpos & 7) & msk;
+    var msk1fb = (1 << bits2) - 1;
+    var msv = msk - probs - 1;
+    var sval = val & msk1fb;
+    if (sval < msv)
+      tpos += bits2, val = sval;
+    else {
+      tpos += bits2 + 1;
+      if (val > msk1fb)
+        val -= msv;
+    }
+    freq[++sym] = --val;
+    if (val == -1) {
+      probs += val;
+      syms[--ht] = sym;
+    } else
+      probs -= val;
+    if (!val) {
+      do {
+        var rbt = tpos >> 3;
+        re = (dat[rbt] | dat[rbt + 1] << 8) >> (tpos & 7) & 3;
+        tpos += 2;
+        sym += re;
+      } while (re == 3);
+    }
+  }
+  if (sym > 255 || probs)
+    err(0);
+  var sympos = 0;
+  var sstep = (sz >> 1) + (sz >> 3) + 3;
+  var smask = sz - 1;
+  for (var s = 0; s <= sym; ++s) {
+    var sf = freq[s];
+    if (sf < 1) {
+      dstate[s] = -sf;
+      continue;
+    }
+    for (i = 0; i < sf; ++i) {
+      syms[sympos] = s;
+      do {
+        sympos = sympos + sstep & smask;
+      } while (sympos >= ht);
+    }
+  }
+  if (sympos)
+    err(0);
+  for (i = 0; i < sz; ++i) {
+    var ns = dstate[syms[i]]++;
+    var nb = nbits[i] = al - msb(ns);
+    nstate[i] = (ns << nb) - sz;
+  }
+  return [tpos + 7 >> 3, {
+    b: al,
+    s: syms,
+    n: nbits,
+    t: nstate
+  }];
+};
+var rhu = function(dat, bt) {
+  var i = 0, wc = -1;
+  var buf = new u8(292), hb = dat[bt];
+  var hw = buf.subarray(0, 256);
+  var rc = buf.subarray(256, 268);
+  var ri = new u16(buf.buffer, 268);
+  if (hb < 128) {
+    var _a = rfse(dat, bt + 1, 6), ebt = _a[0], fdt = _a[1];
+    bt += hb;
+    var epos = ebt << 3;
+    var lb = dat[bt];
+    if (!lb)
+      err(0);
+    var st1 = 0, st2 = 0, btr1 = fdt.b, btr2 = btr1;
+    var fpos = (++bt << 3) - 8 + msb(lb);
+    for (; ; ) {
+      fpos -= btr1;
+      if (fpos < epos)
+        break;
+      var cbt = fpos >> 3;
+      st1 += (dat[cbt] | dat[cbt + 1] << 8) >> (fpos & 7) & (1 << btr1) - 1;
+      hw[++wc] = fdt.s[st1];
+      fpos -= btr2;
+      if (fpos < epos)
+        break;
+      cbt = fpos >> 3;
+      st2 += (dat[cbt] | dat[cbt + 1] << 8) >> (fpos & 7) & (1 << btr2) - 1;
+      hw[++wc] = fdt.s[st2];
+      btr1 = fdt.n[st1];
+      st1 = fdt.t[st1];
+      btr2 = fdt.n[st2];
+      st2 = fdt.t[st2];
+    }
+    if (++wc > 255)
+      err(0);
+  } else {
+    wc = hb - 127;
+    for (; i < wc; i += 2) {
+      var byte = dat[++bt];
+      hw[i] = byte >> 4;
+      hw[i + 1] = byte & 15;
+    }
+    ++bt;
+  }
+  var wes = 0;
+  for (i = 0; i < wc; ++i) {
+    var wt = hw[i];
+    if (wt > 11)
+      err(0);
+    wes += wt && 1 << wt - 1;
+  }
+  var mb = msb(wes) + 1;
+  var ts = 1 << mb;
+  var rem = ts - wes;
+  if (rem & rem - 1)
+    err(0);
+  hw[wc++] = msb(rem) + 1;
+  for (i = 0; i < wc; ++i) {
+    var wt = hw[i];
+    ++rc[hw[i] = wt && mb + 1 - wt];
+  }
+  var hbuf = new u8(ts << 1);
+  var syms = hbuf.subarray(0, ts), nb = hbuf.subarray(ts);
+  ri[mb] = 0;
+  for (i = mb; i > 0; --i) {
+    var pv = ri[i];
+    fill(nb, i, pv, ri[i - 1] = pv + rc[i] * (1 << mb - i));
+  }
+  if (ri[0] != ts)
+    err(0);
+  for (i = 0; i < wc; ++i) {
+    var bits2 = hw[i];
+    if (bits2) {
+      var code = ri[bits2];
+      fill(syms, i, code, ri[bits2] = code + (1 << mb - bits2));
+    }
+  }
+  return [bt, {
+    n: nb,
+    b: mb,
+    s: syms
+  }];
+};
+var dllt = rfse(/* @__PURE__ */ new u8([
+  81,
+  16,
+  99,
+  140,
+  49,
+  198,
+  24,
+  99,
+  12,
+  33,
+  196,
+  24,
+  99,
+  102,
+  102,
+  134,
+  70,
+  146,
+  4
+]), 0, 6)[1];
+var dmlt = rfse(/* @__PURE__ */ new u8([
+  33,
+  20,
+  196,
+  24,
+  99,
+  140,
+  33,
+  132,
+  16,
+  66,
+  8,
+  33,
+  132,
+  16,
+  66,
+  8,
+  33,
+  68,
+  68,
+  68,
+  68,
+  68,
+  68,
+  68,
+  68,
+  36,
+  9
+]), 0, 6)[1];
+var doct = rfse(/* @__PURE__ */ new u8([
+  32,
+  132,
+  16,
+  66,
+  102,
+  70,
+  68,
+  68,
+  68,
+  68,
+  36,
+  73,
+  2
+]), 0, 5)[1];
+var b2bl = function(b, s) {
+  var len = b.length, bl = new i32(len);
+  for (var i = 0; i < len; ++i) {
+    bl[i] = s;
+    s += 1 << b[i];
+  }
+  return bl;
+};
+var llb = /* @__PURE__ */ new u8((/* @__PURE__ */ new i32([
+  0,
+  0,
+  0,
+  0,
+  16843009,
+  50528770,
+  134678020,
+  202050057,
+  269422093
+])).buffer, 0, 36);
+var llbl = /* @__PURE__ */ b2bl(llb, 0);
+var mlb = /* @__PURE__ */ new u8((/* @__PURE__ */ new i32([
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  16843009,
+  50528770,
+  117769220,
+  185207048,
+  252579084,
+  16
+])).buffer, 0, 53);
+var mlbl = /* @__PURE__ */ b2bl(mlb, 3);
+var dhu = function(dat, out, hu) {
+  var len = dat.length, ss = out.length, lb = dat[len - 1], msk = (1 << hu.b) - 1, eb = -hu.b;
+  if (!lb)
+    err(0);
+  var st = 0, btr = hu.b, pos = (len << 3) - 8 + msb(lb) - btr, i = -1;
+  for (; pos > eb && i < ss; ) {
+    var cbt = pos >> 3;
+    var val = (dat[cbt] | dat[cbt + 1] << 8 | dat[cbt + 2] << 16) >> (pos & 7);
+    st = (st << btr | val) & msk;
+    out[++i] = hu.s[st];
+    pos -= btr = hu.n[st];
+  }
+  if (pos != eb || i + 1 != ss)
+    err(0);
+};
+var dhu4 = function(dat, out, hu) {
+  var bt = 6;
+  var ss = out.length, sz1 = ss + 3 >> 2, sz2 = sz1 << 1, sz3 = sz1 + sz2;
+  dhu(dat.subarray(bt, bt += dat[0] | dat[1] << 8), out.subarray(0, sz1), hu);
+  dhu(dat.subarray(bt, bt += dat[2] | dat[3] << 8), out.subarray(sz1, sz2), hu);
+  dhu(dat.subarray(bt, bt += dat[4] | dat[5] << 8), out.subarray(sz2, sz3), hu);
+  dhu(dat.subarray(bt), out.subarray(sz3), hu);
+};
+var rzb = function(dat, st, out) {
+  var _a;
+  var bt = st.b;
+  var b0 = dat[bt], btype = b0 >> 1 & 3;
+  st.l = b0 & 1;
+  var sz = b0 >> 3 | dat[bt + 1] << 5 | dat[bt + 2] << 13;
+  var ebt = (bt += 3) + sz;
+  if (btype == 1) {
+    if (bt >= dat.length)
+      return;
+    st.b = bt + 1;
+    if (out) {
+      fill(out, dat[bt], st.y, st.y += sz);
+      return out;
+    }
+    return fill(new u8(sz), dat[bt]);
+  }
+  if (ebt > dat.length)
+    return;
+  if (btype == 0) {
+    st.b = ebt;
+    if (out) {
+      out.set(dat.subarray(bt, ebt), st.y);
+      st.y += sz;
+      return out;
+    }
+    return slc(dat, bt, ebt);
+  }
+  if (btype == 2) {
+    var b3 = dat[bt], lbt = b3 & 3, sf = b3 >> 2 & 3;
+    var lss = b3 >> 4, lcs = 0, s4 = 0;
+    if (lbt < 2) {
+      if (sf & 1)
+        lss |= dat[++bt] << 4 | (sf & 2 && dat[++bt] << 12);
+      else
+        lss = b3 >> 3;
+    } else {
+      s4 = sf;
+      if (sf < 2)
+        lss |= (dat[++bt] & 63) << 4, lcs = dat[bt] >> 6 | dat[++bt] << 2;
+      else if (sf == 2)
+        lss |= dat[++bt] << 4 | (dat[++bt] & 3) << 12, lcs = dat[bt] >> 2 | dat[++bt] << 6;
+      else
+        lss |= dat[++bt] << 4 | (dat[++bt] & 63) << 12, lcs = dat[bt] >> 6 | dat[++bt] << 2 | dat[++bt] << 10;
+    }
+    ++bt;
+    var buf = out ? out.subarray(st.y, st.y + st.m) : new u8(st.m);
+    var spl = buf.length - lss;
+    if (lbt == 0)
+      buf.set(dat.subarray(bt, bt += lss), spl);
+    else if (lbt == 1)
+      fill(buf, dat[bt++], spl);
+    else {
+      var hu = st.h;
+      if (lbt == 2) {
+        var hud = rhu(dat, bt);
+        lcs += bt - (bt = hud[0]);
+        st.h = hu = hud[1];
+      } else if (!hu)
+        err(0);
+      (s4 ? dhu4 : dhu)(dat.subarray(bt, bt += lcs), buf.subarray(spl), hu);
+    }
+    var ns = dat[bt++];
+    if (ns) {
+      if (ns == 255)
+        ns = (dat[bt++] | dat[bt++] << 8) + 32512;
+      else if (ns > 127)
+        ns = ns - 128 << 8 | dat[bt++];
+      var scm = dat[bt++];
+      if (scm & 3)
+        err(0);
+      var dts = [dmlt, doct, dllt];
+      for (var i = 2; i > -1; --i) {
+        var md = scm >> (i << 1) + 2 & 3;
+        if (md == 1) {
+          var rbuf = new u8([0, 0, dat[bt++]]);
+          dts[i] = {
+            s: rbuf.subarray(2, 3),
+            n: rbuf.subarray(0, 1),
+            t: new u16(rbuf.buffer, 0, 1),
+            b: 0
+          };
+        } else if (md == 2) {
+          _a = rfse(dat, bt, 9 - (i & 1)), bt = _a[0], dts[i] = _a[1];
+        } else if (md == 3) {
+          if (!st.t)
+            err(0);
+          dts[i] = st.t[i];
+        }
+      }
+      var _b = st.t = dts, mlt = _b[0], oct = _b[1], llt = _b[2];
+      var lb = dat[ebt - 1];
+      if (!lb)
+        err(0);
+      var spos = (ebt << 3) - 8 + msb(lb) - llt.b, cbt = spos >> 3, oubt = 0;
+      var lst = (dat[cbt] | dat[cbt + 1] << 8) >> (spos & 7) & (1 << llt.b) - 1;
+      cbt = (spos -= oct.b) >> 3;
+      var ost = (dat[cbt] | dat[cbt + 1] << 8) >> (spos & 7) & (1 << oct.b) - 1;
+      cbt = (spos -= mlt.b) >> 3;
+      var mst = (dat[cbt] | dat[cbt + 1] << 8) >> (spos & 7) & (1 << mlt.b) - 1;
+      for (++ns; --ns; ) {
+        var llc = llt.s[lst];
+        var lbtr = llt.n[lst];
+        var mlc = mlt.s[mst];
+        var mbtr = mlt.n[mst];
+        var ofc = oct.s[ost];
+        var obtr = oct.n[ost];
+        cbt = (spos -= ofc) >> 3;
+        var ofp = 1 << ofc;
+        var off = ofp + ((dat[cbt] | dat[cbt + 1] << 8 | dat[cbt + 2] << 16 | dat[cbt + 3] << 24) >>> (spos & 7) & ofp - 1);
+        cbt = (spos -= mlb[mlc]) >> 3;
+        var ml = mlbl[mlc] + ((dat[cbt] | dat[cbt + 1] << 8 | dat[cbt + 2] << 16) >> (spos & 7) & (1 << mlb[mlc]) - 1);
+        cbt = (spos -= llb[llc]) >> 3;
+        var ll = llbl[llc] + ((dat[cbt] | dat[cbt + 1] << 8 | dat[cbt + 2] << 16) >> (spos & 7) & (1 << llb[llc]) - 1);
+        cbt = (spos -= lbtr) >> 3;
+        lst = llt.t[lst] + ((dat[cbt] | dat[cbt + 1] << 8) >> (spos & 7) & (1 << lbtr) - 1);
+        cbt = (spos -= mbtr) >> 3;
+        mst = mlt.t[mst] + ((dat[cbt] | dat[cbt + 1] << 8) >> (spos & 7) & (1 << mbtr) - 1);
+        cbt = (spos -= obtr) >> 3;
+        ost = oct.t[ost] + ((dat[cbt] | dat[cbt + 1] << 8) >> (spos & 7) & (1 << obtr) - 1);
+        if (off > 3) {
+          st.o[2] = st.o[1];
+          st.o[1] = st.o[0];
+          st.o[0] = off -= 3;
+        } else {
+          var idx = off - (ll != 0);
+          if (idx) {
+            off = idx == 3 ? st.o[0] - 1 : st.o[idx];
+            if (idx > 1)
+              st.o[2] = st.o[1];
+            st.o[1] = st.o[0];
+            st.o[0] = off;
+          } else
+            off = st.o[0];
+        }
+        for (var i = 0; i < ll; ++i) {
+          buf[oubt + i] = buf[spl + i];
+        }
+        oubt += ll, spl += ll;
+        var stin = oubt - off;
+        if (stin < 0) {
+          var len = -stin;
+          var bs = st.e + stin;
+          if (len > ml)
+            len = ml;
+          for (var i = 0; i < len; ++i) {
+            buf[oubt + i] = st.w[bs + i];
+          }
+          oubt += len, ml -= len, stin = 0;
+        }
+        for (var i = 0; i < ml; ++i) {
+          buf[oubt + i] = buf[stin + i];
+        }
+        oubt += ml;
+      }
+      if (oubt != spl) {
+        while (spl < buf.length) {
+          buf[oubt++] = buf[spl++];
+        }
+      } else
+        oubt = buf.length;
+      if (out)
+        st.y += oubt;
+      else
+        buf = slc(buf, 0, oubt);
+    } else if (out) {
+      st.y += lss;
+      if (spl) {
+        for (var i = 0; i < lss; ++i) {
+          buf[i] = buf[spl + i];
+        }
+      }
+    } else if (spl)
+      buf = slc(buf, spl);
+    st.b = ebt;
+    return buf;
+  }
+  err(2);
+};
+var cct = function(bufs, ol) {
+  if (bufs.length == 1)
+    return bufs[0];
+  var buf = new u8(ol);
+  for (var i = 0, b = 0; i < bufs.length; ++i) {
+    var chk = bufs[i];
+    buf.set(chk, b);
+    b += chk.length;
+  }
+  return buf;
+};
+function decompress(dat, buf) {
+  var bufs = [], nb = +!buf;
+  var bt = 0, ol = 0;
+  for (; dat.length; ) {
+    var st = rzfh(dat, nb || buf);
+    if (typeof st == "object") {
+      if (nb) {
+        buf = null;
+        if (st.w.length == st.u) {
+          bufs.push(buf = st.w);
+          ol += st.u;
+        }
+      } else {
+        bufs.push(buf);
+        st.e = 0;
+      }
+      for (; !st.l; ) {
+        var blk = rzb(dat, st, buf);
+        if (!blk)
+          err(5);
+        if (buf)
+          st.e = st.y;
+        else {
+          bufs.push(blk);
+          ol += blk.length;
+          cpw(st.w, 0, blk.length);
+          st.w.set(blk, st.w.length - blk.length);
+        }
+      }
+      bt = st.b + st.c * 4;
+    } else
+      bt = st;
+    dat = dat.subarray(bt);
+  }
+  return cct(bufs, ol);
+}
+
+// node_modules/hysnappy/js/uncompress.js
+function snappyUncompressor() {
+  const wasm = instantiateWasm();
+  return (input, outputLength) => {
+    const { memory, uncompress } = wasm.exports;
+    const inputStart = 68e3;
+    const outputStart = inputStart + input.byteLength;
+    const totalSize = inputStart + input.byteLength + outputLength;
+    if (memory.buffer.byteLength < totalSize) {
+      const pageSize = 64 * 1024;
+      const currentPages = memory.buffer.byteLength / pageSize;
+      const requiredPages = Math.ceil(totalSize / pageSize);
+      const pagesToGrow = requiredPages - currentPages;
+      memory.grow(pagesToGrow);
+    }
+    const byteArray = new Uint8Array(memory.buffer);
+    byteArray.set(input, inputStart);
+    const result = uncompress(inputStart, input.byteLength, outputStart);
+    if (result === -1) throw new Error("invalid snappy length header");
+    if (result === -2) throw new Error("missing eof marker");
+    if (result === -3) throw new Error("premature end of input");
+    if (result) throw new Error(`failed to uncompress data ${result}`);
+    return byteArray.slice(outputStart, outputStart + outputLength);
+  };
+}
+function instantiateWasm() {
+  const binaryString = atob(wasm64);
+  const byteArray = new Uint8Array(binaryString.length);
+  for (let i = 0; i < binaryString.length; i += 1) {
+    byteArray[i] = binaryString.charCodeAt(i);
+  }
+  const mod = new WebAssembly.Module(byteArray);
+  return new WebAssembly.Instance(mod);
+}
+var wasm64 = "AGFzbQEAAAABEANgAABgA39/fwF/YAF/AX8DBgUAAQEBAgUDAQACBj8KfwFBoIwEC38AQYAIC38AQaAMC38AQaAMC38AQaCMBAt/AEGACAt/AEGgjAQLfwBBgIAIC38AQQALfwBBAQsHwQEOBm1lbW9yeQIAEV9fd2FzbV9jYWxsX2N0b3JzAAAGbWVtY3B5AAEHbWVtbW92ZQACCnVuY29tcHJlc3MAAwxfX2Rzb19oYW5kbGUDAQpfX2RhdGFfZW5kAwILX19zdGFja19sb3cDAwxfX3N0YWNrX2hpZ2gDBA1fX2dsb2JhbF9iYXNlAwULX19oZWFwX2Jhc2UDBgpfX2hlYXBfZW5kAwcNX19tZW1vcnlfYmFzZQMIDF9fdGFibGVfYmFzZQMJCuASBQIAC8sBAQN/AkAgAkUNAAJAAkAgAkEHcSIDDQAgACEEIAIhBQwBCyAAIQQgAiEFA0AgBCABLQAAOgAAIARBAWohBCABQQFqIQEgBUF/aiEFIANBf2oiAw0ACwsgAkEISQ0AA0AgBCABLQAAOgAAIAQgAS0AAToAASAEIAEtAAI6AAIgBCABLQADOgADIAQgAS0ABDoABCAEIAEtAAU6AAUgBCABLQAGOgAGIAQgAS0ABzoAByAEQQhqIQQgAUEIaiEBIAVBeGoiBQ0ACwsgAAugAwEEfwJAIAAgAUYNAAJAAkAgACABSQ0AIAEgAmoiAyAASw0BCyACRQ0BAkACQCACQQdxIgMNACAAIQQgAiEFDAELIAAhBCACIQUDQCAEIAEtAAA6AAAgBEEBaiEEIAFBAWohASAFQX9qIQUgA0F/aiIDDQALCyACQQhJDQEDQCAEIAEtAAA6AAAgBCABLQABOgABIAQgAS0AAjoAAiAEIAEtAAM6AAMgBCABLQAEOgAEIAQgAS0ABToABSAEIAEtAAY6AAYgBCABLQAHOgAHIARBCGohBCABQQhqIQEgBUF4aiIFDQAMAgsLIAJFDQACQAJAIAJBA3EiBA0AIAAgAmohBiACIQUMAQsgAiEFA0AgBUF/aiIFIABqIgYgBSABaiIDLQAAOgAAIARBf2oiBA0ACwsgAkEESQ0AIAZBfGohASADQXxqIQQDQCABQQNqIARBA2otAAA6AAAgAUECaiAEQQJqLQAAOgAAIAFBAWogBEEBai0AADoAACABIAQtAAA6AAAgAUF8aiEBIARBfGohBCAFQXxqIgUNAAsLIAALswoBCX8jgICAgABBIGsiAySAgICAACADQQlqQgA3AAAgA0IANwIEIAMgA0EYajYCAEF/IQQCQCABRQ0AIAMgAUF/aiIFNgIcIAMgAEEBajYCGCAALAAAIgZB/wBxIQcCQCAGQX9KDQAgBUUNASADIAFBfmoiBTYCHCADIABBAmo2AhggACwAASIGQf8AcUEHdCAHciEHQX8hBCAGQX9KDQAgBUUNASADIAFBfWoiBTYCHCADIABBA2o2AhggACwAAiIGQf8AcUEOdCAHciEHQX8hBCAGQX9KDQAgBUUNASADIAFBfGoiBTYCHCADIABBBGo2AhggACwAAyIGQf8AcUEVdCAHciEHQX8hBCAGQX9KDQAgBUUNASADIAFBe2o2AhwgAyAAQQVqNgIYIAAsAAQiAUEASA0BIAFBHHQgB3IhBwsgAiAHaiEIAkACQCADEISAgIAADQAgAiEADAELIAMoAgQhASACIQADQAJAIAMoAgggAWtBBEoNACADIAE2AgQgAxCEgICAAEUNAiADKAIEIQELIAFBAWohBQJAAkAgAS0AACIGQQNxDQAgCCAAayEJIAMoAggiCiAFayEEIAZBAnYiC0EBaiEHAkAgBkE/Sw0AIARBEEkNACAJQRBIDQAgACABKAIBNgIAIAAgASgCBTYCBCAAIAEoAgk2AgggACABKAINNgIMIAAgB2ohACADKAIIIAUgB2oiAWtBBEoNAyADIAE2AgQgAxCEgICAAEUNBAwCCwJAAkAgBkHwAU8NACAFIQYMAQsgCiAFIAtBRWoiAWoiBmshBCABQQJ0QYCIgIAAaigCACAFKAIAcUEBaiEHCwJAIAcgBE0NAANAIAggAGsgBEkNBSAAIAYgBBCBgICAACEAIAMoAgAiASABKAIAIgkgAygCDCIFaiIGNgIAIAFBBGoiASABKAIAIgogBWsiATYCACADIAE2AgwgACAEaiEAIAFFDQUgAyAJIApqNgIIIAcgBGshByABIQQgByABSw0ACyAIIABrIQkLIAkgB0kNAyAAIAYgBxCBgICAACAHaiEAIAMoAgggBiAHaiIBa0EESg0CIAMgATYCBCADEISAgIAADQEMAwsgACACayAGQQF0QaCIgIAAai8BACIBQQt2IgpBAnRBgIiAgABqKAIAIAUoAgBxIAFBgA5xaiIHQX9qTQ0CIAggAGshBAJAAkAgAUH/AXEiCUEQSw0AIAdBCEkNACAEQRBJDQAgACAAIAdrIgEoAgA2AgAgACABKAIENgIEIAAgASgCCDYCCCAAIAFBDGooAgA2AgwMAQsCQAJAAkAgBCAJQQpqSQ0AIAAgB2shBCAAIQEgCSEGIAdBB0wNAQwCCyAEIAlJDQUgCUEBaiEEQQAgB2shByAAIQEDQCABIAEgB2otAAA6AAAgAUEBaiEBIARBf2oiBEEBSw0ADAMLCwNAIAEgBCgCADYCACABIAQoAgQ2AgQgBiAHayEGIAEgB2oiASAEayIHQQhIDQALCyAGQQFIDQAgBkEIaiEHA0AgASAEKAIANgIAIAEgBCgCBDYCBCABQQhqIQEgBEEIaiEEIAdBeGoiB0EISw0ACwsgACAJaiEAIAMoAgggBSAKaiIBa0EESg0BIAMgATYCBCADEISAgIAARQ0CCyADKAIEIQEMAAsLIAMoAgAiASABKAIEIAMoAgwiBGs2AgQgASAEIAEoAgBqNgIAAkAgAy0AEA0AQX4hBAwBC0EAQX0gCCAARhshBAsgA0EgaiSAgICAACAEC7YDAQd/AkAgACgCBCIBIAAoAggiAkcNACAAKAIAIgIgAigCACIDIAAoAgwiBGoiATYCACACQQRqIgIgAigCACICIARrIgU2AgAgACAFNgIMAkAgAiAERw0AIABBAToAEEEADwsgACADIAJqIgI2AggLAkACQAJAIAIgAWsiAiABLQAAQQF0QaCIgIAAai8BAEELdkEBaiIFTw0AIABBEWogASACEIKAgIAAIQYgACgCDCEEQQAhByAAQQA2AgwgACgCACIBIAEoAgQgBGs2AgQgASAEIAEoAgBqIgM2AgADQCABQQRqKAIAIgFFDQMgBiACaiADIAUgAmsiBCABIAQgAUkbIgQQgYCAgAAaIAAoAgAiASABKAIEIARrNgIEIAEgASgCACAEaiIDNgIAIAQgAmoiAiAFSQ0ACyAAIAY2AgQgACAGIAVqNgIIDAELAkAgAkEESw0AIAAgAEERaiABIAIQgoCAgAAiASACajYCCCAAIAE2AgQgACgCDCECIABBADYCDCAAKAIAIgEgASgCBCACazYCBCABIAIgASgCAGo2AgAMAQsgACABNgIEC0EBIQcLIAcLC6gEAQBBgAgLoAQAAAAA/wAAAP//AAD///8A/////wAAAAAAAAAAAAAAAAEABAgBEAEgAgAFCAIQAiADAAYIAxADIAQABwgEEAQgBQAICAUQBSAGAAkIBhAGIAcACggHEAcgCAALCAgQCCAJAAQJCRAJIAoABQkKEAogCwAGCQsQCyAMAAcJDBAMIA0ACAkNEA0gDgAJCQ4QDiAPAAoJDxAPIBAACwkQEBAgEQAEChEQESASAAUKEhASIBMABgoTEBMgFAAHChQQFCAVAAgKFRAVIBYACQoWEBYgFwAKChcQFyAYAAsKGBAYIBkABAsZEBkgGgAFCxoQGiAbAAYLGxAbIBwABwscEBwgHQAICx0QHSAeAAkLHhAeIB8ACgsfEB8gIAALCyAQICAhAAQMIRAhICIABQwiECIgIwAGDCMQIyAkAAcMJBAkICUACAwlECUgJgAJDCYQJiAnAAoMJxAnICgACwwoECggKQAEDSkQKSAqAAUNKhAqICsABg0rECsgLAAHDSwQLCAtAAgNLRAtIC4ACQ0uEC4gLwAKDS8QLyAwAAsNMBAwIDEABA4xEDEgMgAFDjIQMiAzAAYOMxAzIDQABw40EDQgNQAIDjUQNSA2AAkONhA2IDcACg43EDcgOAALDjgQOCA5AAQPORA5IDoABQ86EDogOwAGDzsQOyA8AAcPPBA8IAEICA89ED0gARAJDz4QPiABGAoPPxA/IAEgCw9AEEAgAGQEbmFtZQE9BQARX193YXNtX2NhbGxfY3RvcnMBBm1lbWNweQIHbWVtbW92ZQMKdW5jb21wcmVzcwQKcmVmaWxsX3RhZwcSAQAPX19zdGFja19wb2ludGVyCQoBAAcucm9kYXRhADIJcHJvZHVjZXJzAQxwcm9jZXNzZWQtYnkBDFVidW50dSBjbGFuZwsxNi4wLjYgKDE1KQAsD3RhcmdldF9mZWF0dXJlcwIrD211dGFibGUtZ2xvYmFscysIc2lnbi1leHQ=";
+
+// node_modules/hyparquet-compressors/src/brotli.bitreader.js
+var BROTLI_READ_SIZE = 4096;
+var BROTLI_IBUF_SIZE = 2 * BROTLI_READ_SIZE + 32;
+var BROTLI_IBUF_MASK = 2 * BROTLI_READ_SIZE - 1;
+var kBitMask = new Uint32Array([
+  0,
+  1,
+  3,
+  7,
+  15,
+  31,
+  63,
+  127,
+  255,
+  511,
+  1023,
+  2047,
+  4095,
+  8191,
+  16383,
+  32767,
+  65535,
+  131071,
+  262143,
+  524287,
+  1048575,
+  2097151,
+  4194303,
+  8388607,
+  16777215
+]);
+var BrotliBitReader = class {
+  /**
+   * Input byte buffer, consist of a ringbuffer and a "slack" region where
+   * bytes from the start of the ringbuffer are copied.
+   *
+   * @typedef {import('./brotli.streams.js').BrotliInput} BrotliInput
+   * @param {BrotliInput} input
+   */
+  constructor(input) {
+    this.buf_ = new Uint8Array(BROTLI_IBUF_SIZE);
+    this.input_ = input;
+    this.buf_ptr_ = 0;
+    this.val_ = 0;
+    this.pos_ = 0;
+    this.bit_pos_ = 0;
+    this.bit_end_pos_ = 0;
+    this.eos_ = 0;
+    this.reset();
+  }
+  static READ_SIZE = BROTLI_READ_SIZE;
+  static IBUF_MASK = BROTLI_IBUF_MASK;
+  reset() {
+    this.buf_ptr_ = 0;
+    this.val_ = 0;
+    this.pos_ = 0;
+    this.bit_pos_ = 0;
+    this.bit_end_pos_ = 0;
+    this.eos_ = 0;
+    this.readMoreInput();
+    for (let i = 0; i < 4; i++) {
+      this.val_ |= this.buf_[this.pos_] << 8 * i;
+      this.pos_++;
+    }
+    return this.bit_end_pos_ > 0;
+  }
+  /**
+   * Fills up the input ringbuffer by calling the input callback.
+   *
+   * Does nothing if there are at least 32 bytes present after current position.
+   *
+   * Returns 0 if either:
+   *  - the input callback returned an error, or
+   *  - there is no more input and the position is past the end of the stream.
+   *
+   * After encountering the end of the input stream, 32 additional zero bytes are
+   * copied to the ringbuffer, therefore it is safe to call this function after
+   * every 32 bytes of input is read.
+   */
+  readMoreInput() {
+    if (this.bit_end_pos_ > 256) {
+    } else if (this.eos_) {
+      if (this.bit_pos_ > this.bit_end_pos_)
+        throw new Error("Unexpected end of input " + this.bit_pos_ + " " + this.bit_end_pos_);
+    } else {
+      const dst = this.buf_ptr_;
+      const bytes_read = this.input_.read(this.buf_, dst, BROTLI_READ_SIZE);
+      if (bytes_read < 0) {
+        throw new Error("Unexpected end of input");
+      }
+      if (bytes_read < BROTLI_READ_SIZE) {
+        this.eos_ = 1;
+        for (let p = 0; p < 32; p++)
+          this.buf_[dst + bytes_read + p] = 0;
+      }
+      if (dst === 0) {
+        for (let p = 0; p < 32; p++)
+          this.buf_[(BROTLI_READ_SIZE << 1) + p] = this.buf_[p];
+        this.buf_ptr_ = BROTLI_READ_SIZE;
+      } else {
+        this.buf_ptr_ = 0;
+      }
+      this.bit_end_pos_ += bytes_read << 3;
+    }
+  }
+  /* Guarantees that there are at least 24 bits in the buffer. */
+  fillBitWindow() {
+    while (this.bit_pos_ >= 8) {
+      this.val_ >>>= 8;
+      this.val_ |= this.buf_[this.pos_ & BROTLI_IBUF_MASK] << 24;
+      this.pos_++;
+      this.bit_pos_ = this.bit_pos_ - 8 >>> 0;
+      this.bit_end_pos_ = this.bit_end_pos_ - 8 >>> 0;
+    }
+  }
+  /**
+   * Reads the specified number of bits from Read Buffer.
+   *
+   * @param {number} n_bits
+   * @returns {number}
+   */
+  readBits(n_bits) {
+    if (32 - this.bit_pos_ < n_bits) this.fillBitWindow();
+    const val = this.val_ >>> this.bit_pos_ & kBitMask[n_bits];
+    this.bit_pos_ += n_bits;
+    return val;
+  }
+};
+
+// node_modules/hyparquet-compressors/src/brotli.huffman.js
+var kDefaultCodeLength = 8;
+var HUFFMAN_TABLE_BITS = 8;
+var HUFFMAN_TABLE_MASK = 255;
+var CODE_LENGTH_CODES = 18;
+var kCodeLengthCodeOrder = new Uint8Array([
+  1,
+  2,
+  3,
+  4,
+  0,
+  5,
+  17,
+  6,
+  16,
+  7,
+  8,
+  9,
+  10,
+  11,
+  12,
+  13,
+  14,
+  15
+]);
+var kMaxHuffmanTableSize = new Uint16Array([
+  256,
+  402,
+  436,
+  468,
+  500,
+  534,
+  566,
+  598,
+  630,
+  662,
+  694,
+  726,
+  758,
+  790,
+  822,
+  854,
+  886,
+  920,
+  952,
+  984,
+  1016,
+  1048,
+  1080
+]);
+var HuffmanCode = class {
+  /**
+   * @param {number} bits
+   * @param {number} value
+   */
+  constructor(bits2, value) {
+    this.bits = bits2;
+    this.value = value;
+  }
+};
+var kCodeLengthRepeatCode = 16;
+var MAX_LENGTH = 15;
+function getNextKey(key, len) {
+  let step = 1 << len - 1;
+  while (key & step) {
+    step >>= 1;
+  }
+  return (key & step - 1) + step;
+}
+function replicateValue(table, i, step, end, code) {
+  do {
+    end -= step;
+    table[i + end] = new HuffmanCode(code.bits, code.value);
+  } while (end > 0);
+}
+function nextTableBitSize(count, len, root_bits) {
+  let left = 1 << len - root_bits;
+  while (len < MAX_LENGTH) {
+    left -= count[len];
+    if (left <= 0) break;
+    ++len;
+    left <<= 1;
+  }
+  return len - root_bits;
+}
+function buildHuffmanTable(root_table, table, root_bits, code_lengths, code_lengths_size) {
+  const start_table = table;
+  const count = new Int32Array(MAX_LENGTH + 1);
+  const offset = new Int32Array(MAX_LENGTH + 1);
+  const sorted = new Int32Array(code_lengths_size);
+  for (let i = 0; i < code_lengths_size; i++) {
+    count[code_lengths[i]]++;
+  }
+  offset[1] = 0;
+  for (let i = 1; i < MAX_LENGTH; i++) {
+    offset[i + 1] = offset[i] + count[i];
+  }
+  for (let i = 0; i < code_lengths_size; i++) {
+    if (code_lengths[i] !== 0) {
+      sorted[offset[code_lengths[i]]++] = i;
+    }
+  }
+  let table_bits = root_bits;
+  let table_size = 1 << table_bits;
+  let total_size = table_size;
+  if (offset[MAX_LENGTH] === 1) {
+    for (let key2 = 0; key2 < total_size; ++key2) {
+      root_table[table + key2] = new HuffmanCode(0, sorted[0] & 65535);
+    }
+    return total_size;
+  }
+  let key = 0;
+  let symbol = 0;
+  for (let len = 1, step = 2; len <= root_bits; ++len, step <<= 1) {
+    for (; count[len] > 0; --count[len]) {
+      const code = new HuffmanCode(len & 255, sorted[symbol++] & 65535);
+      replicateValue(root_table, table + key, step, table_size, code);
+      key = getNextKey(key, len);
+    }
+  }
+  const mask = total_size - 1;
+  let low = -1;
+  for (let len = root_bits + 1, step = 2; len <= MAX_LENGTH; ++len, step <<= 1) {
+    for (; count[len] > 0; --count[len]) {
+      if ((key & mask) !== low) {
+        table += table_size;
+        table_bits = nextTableBitSize(count, len, root_bits);
+        table_size = 1 << table_bits;
+        total_size += table_size;
+        low = key & mask;
+        root_table[start_table + low] = new HuffmanCode(table_bits + root_bits & 255, table - start_table - low & 65535);
+      }
+      const code = new HuffmanCode(len - root_bits & 255, sorted[symbol++] & 65535);
+      replicateValue(root_table, table + (key >> root_bits), step, table_size, code);
+      key = getNextKey(key, len);
+    }
+  }
+  return total_size;
+}
+function readHuffmanCode(alphabet_size, tables, table, br) {
+  const code_lengths = new Uint8Array(alphabet_size);
+  br.readMoreInput();
+  const simple_code_or_skip = br.readBits(2);
+  if (simple_code_or_skip === 1) {
+    let max_bits_counter = alphabet_size - 1;
+    let max_bits = 0;
+    const symbols = new Int32Array(4);
+    const num_symbols = br.readBits(2) + 1;
+    while (max_bits_counter) {
+      max_bits_counter >>= 1;
+      max_bits++;
+    }
+    for (let i = 0; i < num_symbols; i++) {
+      symbols[i] = br.readBits(max_bits) % alphabet_size;
+      code_lengths[symbols[i]] = 2;
+    }
+    code_lengths[symbols[0]] = 1;
+    switch (num_symbols) {
+      case 1:
+        break;
+      case 3:
+        if (symbols[0] === symbols[1] || symbols[0] === symbols[2] || symbols[1] === symbols[2]) {
+          throw new Error("[ReadHuffmanCode] invalid symbols");
+        }
+        break;
+      case 2:
+        if (symbols[0] === symbols[1]) {
+          throw new Error("[ReadHuffmanCode] invalid symbols");
+        }
+        code_lengths[symbols[1]] = 1;
+        break;
+      case 4:
+        if (symbols[0] === symbols[1] || symbols[0] === symbols[2] || symbols[0] === symbols[3] || symbols[1] === symbols[2] || symbols[1] === symbols[3] || symbols[2] === symbols[3]) {
+          throw new Error("[ReadHuffmanCode] invalid symbols");
+        }
+        if (br.readBits(1)) {
+          code_lengths[symbols[2]] = 3;
+          code_lengths[symbols[3]] = 3;
+        } else {
+          code_lengths[symbols[0]] = 2;
+        }
+        break;
+    }
+  } else {
+    const code_length_code_lengths = new Uint8Array(CODE_LENGTH_CODES);
+    let space = 32;
+    let num_codes = 0;
+    const huff = [
+      new HuffmanCode(2, 0),
+      new HuffmanCode(2, 4),
+      new HuffmanCode(2, 3),
+      new HuffmanCode(3, 2),
+      new HuffmanCode(2, 0),
+      new HuffmanCode(2, 4),
+      new HuffmanCode(2, 3),
+      new HuffmanCode(4, 1),
+      new HuffmanCode(2, 0),
+      new HuffmanCode(2, 4),
+      new HuffmanCode(2, 3),
+      new HuffmanCode(3, 2),
+      new HuffmanCode(2, 0),
+      new HuffmanCode(2, 4),
+      new HuffmanCode(2, 3),
+      new HuffmanCode(4, 5)
+    ];
+    for (let i = simple_code_or_skip; i < CODE_LENGTH_CODES && space > 0; i++) {
+      const code_len_idx = kCodeLengthCodeOrder[i];
+      let p = 0;
+      br.fillBitWindow();
+      p += br.val_ >>> br.bit_pos_ & 15;
+      br.bit_pos_ += huff[p].bits;
+      const v = huff[p].value;
+      code_length_code_lengths[code_len_idx] = v;
+      if (v !== 0) {
+        space -= 32 >> v;
+        num_codes++;
+      }
+    }
+    if (!(num_codes === 1 || space === 0))
+      throw new Error("[ReadHuffmanCode] invalid num_codes or space");
+    readHuffmanCodeLengths(code_length_code_lengths, alphabet_size, code_lengths, br);
+  }
+  const table_size = buildHuffmanTable(tables, table, HUFFMAN_TABLE_BITS, code_lengths, alphabet_size);
+  if (!table_size) throw new Error("brotli BuildHuffmanTable failed");
+  return table_size;
+}
+function readSymbol(table, index, br) {
+  br.fillBitWindow();
+  index += br.val_ >>> br.bit_pos_ & HUFFMAN_TABLE_MASK;
+  const nbits = table[index].bits - HUFFMAN_TABLE_BITS;
+  if (nbits > 0) {
+    br.bit_pos_ += HUFFMAN_TABLE_BITS;
+    index += table[index].value;
+    index += br.val_ >>> br.bit_pos_ & (1 << nbits) - 1;
+  }
+  br.bit_pos_ += table[index].bits;
+  return table[index].value;
+}
+function readHuffmanCodeLengths(code_length_code_lengths, num_symbols, code_lengths, br) {
+  let symbol = 0;
+  let prev_code_len = kDefaultCodeLength;
+  let repeat = 0;
+  let repeat_code_len = 0;
+  let space = 32768;
+  const table = [];
+  for (let i = 0; i < 32; i++)
+    table.push(new HuffmanCode(0, 0));
+  buildHuffmanTable(table, 0, 5, code_length_code_lengths, CODE_LENGTH_CODES);
+  while (symbol < num_symbols && space > 0) {
+    let p = 0;
+    br.readMoreInput();
+    br.fillBitWindow();
+    p += br.val_ >>> br.bit_pos_ & 31;
+    br.bit_pos_ += table[p].bits;
+    const code_len = table[p].value & 255;
+    if (code_len < kCodeLengthRepeatCode) {
+      repeat = 0;
+      code_lengths[symbol++] = code_len;
+      if (code_len !== 0) {
+        prev_code_len = code_len;
+        space -= 32768 >> code_len;
+      }
+    } else {
+      const extra_bits = code_len - 14;
+      let new_len = 0;
+      if (code_len === kCodeLengthRepeatCode) {
+        new_len = prev_code_len;
+      }
+      if (repeat_code_len !== new_len) {
+        repeat = 0;
+        repeat_code_len = new_len;
+      }
+      const old_repeat = repeat;
+      if (repeat > 0) {
+        repeat -= 2;
+        repeat <<= extra_bits;
+      }
+      repeat += br.readBits(extra_bits) + 3;
+      const repeat_delta = repeat - old_repeat;
+      if (symbol + repeat_delta > num_symbols) {
+        throw new Error("[ReadHuffmanCodeLengths] symbol + repeat_delta > num_symbols");
+      }
+      for (let x = 0; x < repeat_delta; x++)
+        code_lengths[symbol + x] = repeat_code_len;
+      symbol += repeat_delta;
+      if (repeat_code_len !== 0) {
+        space -= repeat_delta << 15 - repeat_code_len;
+      }
+    }
+  }
+  if (space !== 0) {
+    throw new Error("[ReadHuffmanCodeLengths] space = " + space);
+  }
+  for (; symbol < num_symbols; symbol++)
+    code_lengths[symbol] = 0;
+}
+var HuffmanTreeGroup = class {
+  /**
+   * Contains a collection of huffman trees with the same alphabet size.
+   *
+   * @param {number} alphabet_size
+   * @param {number} num_htrees
+   */
+  constructor(alphabet_size, num_htrees) {
+    this.alphabet_size = alphabet_size;
+    this.num_htrees = num_htrees;
+    this.codes = new Array(num_htrees + num_htrees * kMaxHuffmanTableSize[alphabet_size + 31 >>> 5]);
+    this.htrees = new Uint32Array(num_htrees);
+  }
+  /**
+   * @param {BrotliBitReader} br
+   */
+  decode(br) {
+    let next = 0;
+    for (let i = 0; i < this.num_htrees; i++) {
+      this.htrees[i] = next;
+      next += readHuffmanCode(this.alphabet_size, this.codes, next, br);
+    }
+  }
+};
+
+// node_modules/hyparquet-compressors/src/brotli.prefix.js
+function prefix([offset, nbits]) {
+  return { offset, nbits };
+}
+var kBlockLengthPrefixCode = [
+  [1, 2],
+  [5, 2],
+  [9, 2],
+  [13, 2],
+  [17, 3],
+  [25, 3],
+  [33, 3],
+  [41, 3],
+  [49, 4],
+  [65, 4],
+  [81, 4],
+  [97, 4],
+  [113, 5],
+  [145, 5],
+  [177, 5],
+  [209, 5],
+  [241, 6],
+  [305, 6],
+  [369, 7],
+  [497, 8],
+  [753, 9],
+  [1265, 10],
+  [2289, 11],
+  [4337, 12],
+  [8433, 13],
+  [16625, 24]
+].map(prefix);
+var kInsertLengthPrefixCode = [
+  [0, 0],
+  [1, 0],
+  [2, 0],
+  [3, 0],
+  [4, 0],
+  [5, 0],
+  [6, 1],
+  [8, 1],
+  [10, 2],
+  [14, 2],
+  [18, 3],
+  [26, 3],
+  [34, 4],
+  [50, 4],
+  [66, 5],
+  [98, 5],
+  [130, 6],
+  [194, 7],
+  [322, 8],
+  [578, 9],
+  [1090, 10],
+  [2114, 12],
+  [6210, 14],
+  [22594, 24]
+].map(prefix);
+var kCopyLengthPrefixCode = [
+  [2, 0],
+  [3, 0],
+  [4, 0],
+  [5, 0],
+  [6, 0],
+  [7, 0],
+  [8, 0],
+  [9, 0],
+  [10, 1],
+  [12, 1],
+  [14, 2],
+  [18, 2],
+  [22, 3],
+  [30, 3],
+  [38, 4],
+  [54, 4],
+  [70, 5],
+  [102, 5],
+  [134, 6],
+  [198, 7],
+  [326, 8],
+  [582, 9],
+  [1094, 10],
+  [2118, 24]
+].map(prefix);
+var kInsertRangeLut = [
+  0,
+  0,
+  8,
+  8,
+  0,
+  16,
+  8,
+  16,
+  16
+];
+var kCopyRangeLut = [
+  0,
+  8,
+  0,
+  8,
+  16,
+  0,
+  16,
+  8,
+  16
+];
+
+// node_modules/hyparquet-compressors/src/gzip.huffman.js
+var HUFFMAN_MAX_TABLE_SIZE = 1080;
+var fixedLengthExtraBits = new Uint8Array([
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  1,
+  1,
+  1,
+  1,
+  2,
+  2,
+  2,
+  2,
+  3,
+  3,
+  3,
+  3,
+  4,
+  4,
+  4,
+  4,
+  5,
+  5,
+  5,
+  5,
+  0,
+  /* unused */
+  0,
+  0,
+  /* impossible */
+  0
+]);
+var fixedDistanceExtraBits = new Uint8Array([
+  0,
+  0,
+  0,
+  0,
+  1,
+  1,
+  2,
+  2,
+  3,
+  3,
+  4,
+  4,
+  5,
+  5,
+  6,
+  6,
+  7,
+  7,
+  8,
+  8,
+  9,
+  9,
+  10,
+  10,
+  11,
+  11,
+  12,
+  12,
+  13,
+  13,
+  /* unused */
+  0,
+  0
+]);
+function freb(eb, start) {
+  const base = new Uint16Array(31);
+  for (let i = 0; i < 31; i++) {
+    base[i] = start += 1 << eb[i - 1];
+  }
+  const rev2 = new Int32Array(base[30]);
+  for (let i = 1; i < 30; i++) {
+    for (let j = base[i]; j < base[i + 1]; ++j) {
+      rev2[j] = j - base[i] << 5 | i;
+    }
+  }
+  return { base, rev: rev2 };
+}
+var { base: fixedLength, rev: revfl } = freb(fixedLengthExtraBits, 2);
+fixedLength[28] = 258;
+revfl[258] = 28;
+var { base: fixedDistance } = freb(fixedDistanceExtraBits, 0);
+var rev = new Uint16Array(32768);
+for (let i = 0; i < 32768; i++) {
+  let x = (i & 43690) >> 1 | (i & 21845) << 1;
+  x = (x & 52428) >> 2 | (x & 13107) << 2;
+  x = (x & 61680) >> 4 | (x & 3855) << 4;
+  rev[i] = ((x & 65280) >> 8 | (x & 255) << 8) >> 1;
+}
+function huffMap(cd, maxBits, r) {
+  const l = new Uint16Array(maxBits);
+  for (let i = 0; i < cd.length; i++) {
+    if (cd[i]) ++l[cd[i] - 1];
+  }
+  const le = new Uint16Array(maxBits);
+  for (let i = 1; i < maxBits; i++) {
+    le[i] = le[i - 1] + l[i - 1] << 1;
+  }
+  let co;
+  if (r) {
+    co = new Uint16Array(1 << maxBits);
+    const rvb = 15 - maxBits;
+    for (let i = 0; i < cd.length; i++) {
+      if (cd[i]) {
+        const sv = i << 4 | cd[i];
+        const freeBits = maxBits - cd[i];
+        let startValue = le[cd[i] - 1]++ << freeBits;
+        for (const endValue = startValue | (1 << freeBits) - 1; startValue <= endValue; startValue++) {
+          co[rev[startValue] >> rvb] = sv;
+        }
+      }
+    }
+  } else {
+    co = new Uint16Array(cd.length);
+    for (let i = 0; i < cd.length; i++) {
+      if (cd[i]) {
+        co[i] = rev[le[cd[i] - 1]++] >> 15 - cd[i];
+      }
+    }
+  }
+  return co;
+}
+var fixedLengthTree = new Uint8Array(288);
+for (let i = 0; i < 144; i++) fixedLengthTree[i] = 8;
+for (let i = 144; i < 256; i++) fixedLengthTree[i] = 9;
+for (let i = 256; i < 280; i++) fixedLengthTree[i] = 7;
+for (let i = 280; i < 288; i++) fixedLengthTree[i] = 8;
+var fixedDistanceTree = new Uint8Array(32);
+for (let i = 0; i < 32; i++) fixedDistanceTree[i] = 5;
+var fixedLengthMap = /* @__PURE__ */ huffMap(fixedLengthTree, 9, 1);
+var fixedDistanceMap = /* @__PURE__ */ huffMap(fixedDistanceTree, 5, 1);
+
+// node_modules/hyparquet-compressors/src/brotli.blocks.js
+function decodeBlockType(max_block_type, trees, tree_type, block_types, ringbuffers, indexes, br) {
+  const ringbuffer = tree_type * 2;
+  const index = tree_type;
+  const type_code = readSymbol(trees, tree_type * HUFFMAN_MAX_TABLE_SIZE, br);
+  let block_type;
+  if (type_code === 0) {
+    block_type = ringbuffers[ringbuffer + (indexes[index] & 1)];
+  } else if (type_code === 1) {
+    block_type = ringbuffers[ringbuffer + (indexes[index] - 1 & 1)] + 1;
+  } else {
+    block_type = type_code - 2;
+  }
+  if (block_type >= max_block_type) {
+    block_type -= max_block_type;
+  }
+  block_types[tree_type] = block_type;
+  ringbuffers[ringbuffer + (indexes[index] & 1)] = block_type;
+  indexes[index]++;
+}
+function decodeMetaBlockLength(br) {
+  const out = {
+    meta_block_length: 0,
+    input_end: 0,
+    is_uncompressed: 0,
+    is_metadata: false
+  };
+  out.input_end = br.readBits(1);
+  if (out.input_end && br.readBits(1)) {
+    return out;
+  }
+  const size_nibbles = br.readBits(2) + 4;
+  if (size_nibbles === 7) {
+    out.is_metadata = true;
+    if (br.readBits(1) !== 0)
+      throw new Error("Invalid reserved bit");
+    const size_bytes = br.readBits(2);
+    if (size_bytes === 0)
+      return out;
+    for (let i = 0; i < size_bytes; i++) {
+      const next_byte = br.readBits(8);
+      if (i + 1 === size_bytes && size_bytes > 1 && next_byte === 0)
+        throw new Error("Invalid size byte");
+      out.meta_block_length |= next_byte << i * 8;
+    }
+  } else {
+    for (let i = 0; i < size_nibbles; i++) {
+      const next_nibble = br.readBits(4);
+      if (i + 1 === size_nibbles && size_nibbles > 4 && next_nibble === 0)
+        throw new Error("Invalid size nibble");
+      out.meta_block_length |= next_nibble << i * 4;
+    }
+  }
+  out.meta_block_length++;
+  if (!out.input_end && !out.is_metadata) {
+    out.is_uncompressed = br.readBits(1);
+  }
+  return out;
+}
+function copyUncompressedBlockToOutput(output, len, pos, ringbuffer, ringbuffer_mask, br) {
+  const rb_size = ringbuffer_mask + 1;
+  let rb_pos = pos & ringbuffer_mask;
+  let br_pos = br.pos_ & BrotliBitReader.IBUF_MASK;
+  if (len < 8 || br.bit_pos_ + (len << 3) < br.bit_end_pos_) {
+    while (len-- > 0) {
+      br.readMoreInput();
+      ringbuffer[rb_pos++] = br.readBits(8);
+      if (rb_pos === rb_size) {
+        output.write(ringbuffer, rb_size);
+        rb_pos = 0;
+      }
+    }
+    return;
+  }
+  if (br.bit_end_pos_ < 32) {
+    throw new Error("copyUncompressedBlockToOutput: br.bit_end_pos_ < 32");
+  }
+  while (br.bit_pos_ < 32) {
+    ringbuffer[rb_pos] = br.val_ >>> br.bit_pos_;
+    br.bit_pos_ += 8;
+    rb_pos++;
+    len--;
+  }
+  let nbytes = br.bit_end_pos_ - br.bit_pos_ >> 3;
+  if (br_pos + nbytes > BrotliBitReader.IBUF_MASK) {
+    const tail = BrotliBitReader.IBUF_MASK + 1 - br_pos;
+    for (let x = 0; x < tail; x++)
+      ringbuffer[rb_pos + x] = br.buf_[br_pos + x];
+    nbytes -= tail;
+    rb_pos += tail;
+    len -= tail;
+    br_pos = 0;
+  }
+  for (let x = 0; x < nbytes; x++)
+    ringbuffer[rb_pos + x] = br.buf_[br_pos + x];
+  rb_pos += nbytes;
+  len -= nbytes;
+  if (rb_pos >= rb_size) {
+    output.write(ringbuffer, rb_size);
+    rb_pos -= rb_size;
+    for (let x = 0; x < rb_pos; x++)
+      ringbuffer[x] = ringbuffer[rb_size + x];
+  }
+  while (rb_pos + len >= rb_size) {
+    nbytes = rb_size - rb_pos;
+    if (br.input_.read(ringbuffer, rb_pos, nbytes) < nbytes) {
+      throw new Error("copyUncompressedBlockToOutput: not enough bytes");
+    }
+    output.write(ringbuffer, rb_size);
+    len -= nbytes;
+    rb_pos = 0;
+  }
+  if (br.input_.read(ringbuffer, rb_pos, len) < len) {
+    throw new Error("copyUncompressedBlockToOutput: not enough bytes");
+  }
+  br.reset();
+}
+function decodeVarLenUint8(br) {
+  if (br.readBits(1)) {
+    const nbits = br.readBits(3);
+    if (nbits === 0) {
+      return 1;
+    } else {
+      return br.readBits(nbits) + (1 << nbits);
+    }
+  }
+  return 0;
+}
+function decodeWindowBits(br) {
+  if (br.readBits(1) === 0) return 16;
+  let n = br.readBits(3);
+  if (n > 0) return 17 + n;
+  n = br.readBits(3);
+  if (n > 0) return 8 + n;
+  return 17;
+}
+function jumpToByteBoundary(br) {
+  const new_bit_pos = br.bit_pos_ + 7 & ~7;
+  return !br.readBits(new_bit_pos - br.bit_pos_);
+}
+function readBlockLength(table, index, br) {
+  const code = readSymbol(table, index, br);
+  const { offset, nbits } = kBlockLengthPrefixCode[code];
+  return offset + br.readBits(nbits);
+}
+
+// node_modules/hyparquet-compressors/src/brotli.context.js
+var lookup = new Uint8Array([
+  /* CONTEXT_UTF8, last byte. */
+  /* ASCII range. */
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  4,
+  4,
+  0,
+  0,
+  4,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  8,
+  12,
+  16,
+  12,
+  12,
+  20,
+  12,
+  16,
+  24,
+  28,
+  12,
+  12,
+  32,
+  12,
+  36,
+  12,
+  44,
+  44,
+  44,
+  44,
+  44,
+  44,
+  44,
+  44,
+  44,
+  44,
+  32,
+  32,
+  24,
+  40,
+  28,
+  12,
+  12,
+  48,
+  52,
+  52,
+  52,
+  48,
+  52,
+  52,
+  52,
+  48,
+  52,
+  52,
+  52,
+  52,
+  52,
+  48,
+  52,
+  52,
+  52,
+  52,
+  52,
+  48,
+  52,
+  52,
+  52,
+  52,
+  52,
+  24,
+  12,
+  28,
+  12,
+  12,
+  12,
+  56,
+  60,
+  60,
+  60,
+  56,
+  60,
+  60,
+  60,
+  56,
+  60,
+  60,
+  60,
+  60,
+  60,
+  56,
+  60,
+  60,
+  60,
+  60,
+  60,
+  56,
+  60,
+  60,
+  60,
+  60,
+  60,
+  24,
+  12,
+  28,
+  12,
+  0,
+  /* UTF8 continuation byte range. */
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  /* UTF8 lead byte range. */
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  2,
+  3,
+  /* CONTEXT_UTF8 second last byte. */
+  /* ASCII range. */
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  1,
+  1,
+  1,
+  1,
+  0,
+  /* UTF8 continuation byte range. */
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  /* UTF8 lead byte range. */
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  /* CONTEXT_SIGNED, second last byte. */
+  0,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  1,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  4,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  5,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  6,
+  7,
+  /* CONTEXT_SIGNED, last byte, same as the above values shifted by 3 bits. */
+  0,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  8,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  16,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  24,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  32,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  40,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  48,
+  56,
+  /* CONTEXT_LSB6, last byte. */
+  0,
+  1,
+  2,
+  3,
+  4,
+  5,
+  6,
+  7,
+  8,
+  9,
+  10,
+  11,
+  12,
+  13,
+  14,
+  15,
+  16,
+  17,
+  18,
+  19,
+  20,
+  21,
+  22,
+  23,
+  24,
+  25,
+  26,
+  27,
+  28,
+  29,
+  30,
+  31,
+  32,
+  33,
+  34,
+  35,
+  36,
+  37,
+  38,
+  39,
+  40,
+  41,
+  42,
+  43,
+  44,
+  45,
+  46,
+  47,
+  48,
+  49,
+  50,
+  51,
+  52,
+  53,
+  54,
+  55,
+  56,
+  57,
+  58,
+  59,
+  60,
+  61,
+  62,
+  63,
+  0,
+  1,
+  2,
+  3,
+  4,
+  5,
+  6,
+  7,
+  8,
+  9,
+  10,
+  11,
+  12,
+  13,
+  14,
+  15,
+  16,
+  17,
+  18,
+  19,
+  20,
+  21,
+  22,
+  23,
+  24,
+  25,
+  26,
+  27,
+  28,
+  29,
+  30,
+  31,
+  32,
+  33,
+  34,
+  35,
+  36,
+  37,
+  38,
+  39,
+  40,
+  41,
+  42,
+  43,
+  44,
+  45,
+  46,
+  47,
+  48,
+  49,
+  50,
+  51,
+  52,
+  53,
+  54,
+  55,
+  56,
+  57,
+  58,
+  59,
+  60,
+  61,
+  62,
+  63,
+  0,
+  1,
+  2,
+  3,
+  4,
+  5,
+  6,
+  7,
+  8,
+  9,
+  10,
+  11,
+  12,
+  13,
+  14,
+  15,
+  16,
+  17,
+  18,
+  19,
+  20,
+  21,
+  22,
+  23,
+  24,
+  25,
+  26,
+  27,
+  28,
+  29,
+  30,
+  31,
+  32,
+  33,
+  34,
+  35,
+  36,
+  37,
+  38,
+  39,
+  40,
+  41,
+  42,
+  43,
+  44,
+  45,
+  46,
+  47,
+  48,
+  49,
+  50,
+  51,
+  52,
+  53,
+  54,
+  55,
+  56,
+  57,
+  58,
+  59,
+  60,
+  61,
+  62,
+  63,
+  0,
+  1,
+  2,
+  3,
+  4,
+  5,
+  6,
+  7,
+  8,
+  9,
+  10,
+  11,
+  12,
+  13,
+  14,
+  15,
+  16,
+  17,
+  18,
+  19,
+  20,
+  21,
+  22,
+  23,
+  24,
+  25,
+  26,
+  27,
+  28,
+  29,
+  30,
+  31,
+  32,
+  33,
+  34,
+  35,
+  36,
+  37,
+  38,
+  39,
+  40,
+  41,
+  42,
+  43,
+  44,
+  45,
+  46,
+  47,
+  48,
+  49,
+  50,
+  51,
+  52,
+  53,
+  54,
+  55,
+  56,
+  57,
+  58,
+  59,
+  60,
+  61,
+  62,
+  63,
+  /* CONTEXT_MSB6, last byte. */
+  0,
+  0,
+  0,
+  0,
+  1,
+  1,
+  1,
+  1,
+  2,
+  2,
+  2,
+  2,
+  3,
+  3,
+  3,
+  3,
+  4,
+  4,
+  4,
+  4,
+  5,
+  5,
+  5,
+  5,
+  6,
+  6,
+  6,
+  6,
+  7,
+  7,
+  7,
+  7,
+  8,
+  8,
+  8,
+  8,
+  9,
+  9,
+  9,
+  9,
+  10,
+  10,
+  10,
+  10,
+  11,
+  11,
+  11,
+  11,
+  12,
+  12,
+  12,
+  12,
+  13,
+  13,
+  13,
+  13,
+  14,
+  14,
+  14,
+  14,
+  15,
+  15,
+  15,
+  15,
+  16,
+  16,
+  16,
+  16,
+  17,
+  17,
+  17,
+  17,
+  18,
+  18,
+  18,
+  18,
+  19,
+  19,
+  19,
+  19,
+  20,
+  20,
+  20,
+  20,
+  21,
+  21,
+  21,
+  21,
+  22,
+  22,
+  22,
+  22,
+  23,
+  23,
+  23,
+  23,
+  24,
+  24,
+  24,
+  24,
+  25,
+  25,
+  25,
+  25,
+  26,
+  26,
+  26,
+  26,
+  27,
+  27,
+  27,
+  27,
+  28,
+  28,
+  28,
+  28,
+  29,
+  29,
+  29,
+  29,
+  30,
+  30,
+  30,
+  30,
+  31,
+  31,
+  31,
+  31,
+  32,
+  32,
+  32,
+  32,
+  33,
+  33,
+  33,
+  33,
+  34,
+  34,
+  34,
+  34,
+  35,
+  35,
+  35,
+  35,
+  36,
+  36,
+  36,
+  36,
+  37,
+  37,
+  37,
+  37,
+  38,
+  38,
+  38,
+  38,
+  39,
+  39,
+  39,
+  39,
+  40,
+  40,
+  40,
+  40,
+  41,
+  41,
+  41,
+  41,
+  42,
+  42,
+  42,
+  42,
+  43,
+  43,
+  43,
+  43,
+  44,
+  44,
+  44,
+  44,
+  45,
+  45,
+  45,
+  45,
+  46,
+  46,
+  46,
+  46,
+  47,
+  47,
+  47,
+  47,
+  48,
+  48,
+  48,
+  48,
+  49,
+  49,
+  49,
+  49,
+  50,
+  50,
+  50,
+  50,
+  51,
+  51,
+  51,
+  51,
+  52,
+  52,
+  52,
+  52,
+  53,
+  53,
+  53,
+  53,
+  54,
+  54,
+  54,
+  54,
+  55,
+  55,
+  55,
+  55,
+  56,
+  56,
+  56,
+  56,
+  57,
+  57,
+  57,
+  57,
+  58,
+  58,
+  58,
+  58,
+  59,
+  59,
+  59,
+  59,
+  60,
+  60,
+  60,
+  60,
+  61,
+  61,
+  61,
+  61,
+  62,
+  62,
+  62,
+  62,
+  63,
+  63,
+  63,
+  63,
+  /* CONTEXT_{M,L}SB6, second last byte, */
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0
+]);
+var lookupOffsets = new Uint16Array([
+  /* CONTEXT_LSB6 */
+  1024,
+  1536,
+  /* CONTEXT_MSB6 */
+  1280,
+  1536,
+  /* CONTEXT_UTF8 */
+  0,
+  256,
+  /* CONTEXT_SIGNED */
+  768,
+  512
+]);
+
+// node_modules/hyparquet-compressors/src/brotli.contextmap.js
+function decodeContextMap(context_map_size, br) {
+  let max_run_length_prefix = 0;
+  br.readMoreInput();
+  const num_htrees = decodeVarLenUint8(br) + 1;
+  const context_map = new Uint8Array(context_map_size);
+  if (num_htrees <= 1) {
+    return [num_htrees, context_map];
+  }
+  const use_rle_for_zeros = br.readBits(1);
+  if (use_rle_for_zeros) {
+    max_run_length_prefix = br.readBits(4) + 1;
+  }
+  const table = [];
+  for (let i = 0; i < HUFFMAN_MAX_TABLE_SIZE; i++) {
+    table[i] = new HuffmanCode(0, 0);
+  }
+  readHuffmanCode(num_htrees + max_run_length_prefix, table, 0, br);
+  for (let i = 0; i < context_map_size; ) {
+    br.readMoreInput();
+    const code = readSymbol(table, 0, br);
+    if (code === 0) {
+      context_map[i] = 0;
+      i++;
+    } else if (code <= max_run_length_prefix) {
+      let reps = 1 + (1 << code) + br.readBits(code);
+      while (--reps) {
+        if (i >= context_map_size) {
+          throw new Error("[DecodeContextMap] i >= context_map_size");
+        }
+        context_map[i] = 0;
+        i++;
+      }
+    } else {
+      context_map[i] = code - max_run_length_prefix;
+      i++;
+    }
+  }
+  if (br.readBits(1)) {
+    inverseMoveToFrontTransform(context_map, context_map_size);
+  }
+  return [num_htrees, context_map];
+}
+function moveToFront(v, index) {
+  const value = v[index];
+  for (let i = index; i; i--) v[i] = v[i - 1];
+  v[0] = value;
+}
+function inverseMoveToFrontTransform(v, v_len) {
+  const mtf = new Uint8Array(256);
+  for (let i = 0; i < 256; i++) {
+    mtf[i] = i;
+  }
+  for (let i = 0; i < v_len; i++) {
+    const index = v[i];
+    v[i] = mtf[index];
+    if (index) moveToFront(mtf, index);
+  }
+}
+
+// node_modules/hyparquet-compressors/src/brotli.streams.js
+var BrotliInput = class {
+  /**
+   * @param {Uint8Array} buffer
+   */
+  constructor(buffer) {
+    this.buffer = buffer;
+    this.pos = 0;
+  }
+  /**
+   * @param {Uint8Array} buf
+   * @param {number} i
+   * @param {number} count
+   * @returns {number}
+   */
+  read(buf, i, count) {
+    if (this.pos + count > this.buffer.length) {
+      count = this.buffer.length - this.pos;
+    }
+    for (let p = 0; p < count; p++)
+      buf[i + p] = this.buffer[this.pos + p];
+    this.pos += count;
+    return count;
+  }
+};
+var BrotliOutput = class {
+  /**
+   * @param {Uint8Array} buf
+   */
+  constructor(buf) {
+    this.buffer = buf;
+    this.pos = 0;
+  }
+  /**
+   * @param {Uint8Array} buf
+   * @param {number} count
+   * @returns {number}
+   */
+  write(buf, count) {
+    if (this.pos + count > this.buffer.length) throw new Error("brotli output buffer is not large enough");
+    this.buffer.set(buf.subarray(0, count), this.pos);
+    this.pos += count;
+    return count;
+  }
+};
+
+// node_modules/hyparquet-compressors/src/gzip.js
+var codeLengthIndexMap = new Uint8Array([16, 17, 18, 0, 8, 7, 9, 6, 10, 5, 11, 4, 12, 3, 13, 2, 14, 1, 15]);
+function bits(input, pos, mask) {
+  const o = pos / 8 | 0;
+  return (input[o] | input[o + 1] << 8) >> (pos & 7) & mask;
+}
+function bits16(d, p) {
+  const o = p / 8 | 0;
+  return (d[o] | d[o + 1] << 8 | d[o + 2] << 16) >> (p & 7);
+}
+function shft(p) {
+  return (p + 7) / 8 | 0;
+}
+function gzipStart(input, i) {
+  if (input[i++] !== 31 || input[i++] !== 139 || input[i++] !== 8) return 0;
+  const flag = input[i++];
+  i += 6;
+  if (flag & 4) i += (input[i + 10] | input[i + 11] << 8) + 2;
+  for (let zs = (flag >> 3 & 1) + (flag >> 4 & 1); zs > 0; zs -= Number(!input[i++])) ;
+  return i + (flag & 2);
+}
+function gunzip(input, output, inputIndex = 0, outputIndex = 0) {
+  let out = output ?? new Uint8Array(1024);
+  if (!(input.length - inputIndex)) return out;
+  const payloadStart = gzipStart(input, inputIndex);
+  if (payloadStart === input.length - 8) return out;
+  if (payloadStart > input.length - 8) throw new Error("unexpected EOF");
+  let pos = payloadStart * 8;
+  let final = 0;
+  let lengthBits = 0;
+  let distBits = 0;
+  let lengthMap;
+  let distMap;
+  const totalBits = input.length * 8;
+  function ensureSize(length) {
+    if (!output && length > out.length) {
+      const old = out;
+      out = new Uint8Array(Math.max(old.length * 2, length));
+      out.set(old);
+    }
+  }
+  do {
+    if (!lengthMap) {
+      final = bits(input, pos, 1);
+      const type = bits(input, pos + 1, 3);
+      pos += 3;
+      if (!type) {
+        const s = shft(pos) + 4;
+        const l = input[s - 4] | input[s - 3] << 8;
+        const t = s + l;
+        if (t > input.length) throw new Error("unexpected EOF");
+        ensureSize(outputIndex + l);
+        out.set(input.subarray(s, t), outputIndex);
+        outputIndex += l;
+        pos = t * 8;
+        continue;
+      } else if (type === 1) {
+        lengthMap = fixedLengthMap;
+        distMap = fixedDistanceMap;
+        lengthBits = 9;
+        distBits = 5;
+      } else if (type === 2) {
+        const hLiteral = bits(input, pos, 31) + 257;
+        const hcLengths = bits(input, pos + 10, 15) + 4;
+        const tl = hLiteral + bits(input, pos + 5, 31) + 1;
+        pos += 14;
+        const lengthDistanceTree = new Uint8Array(tl);
+        const codeLengthTree = new Uint8Array(19);
+        for (let i = 0; i < hcLengths; ++i) {
+          codeLengthTree[codeLengthIndexMap[i]] = bits(input, pos + i * 3, 7);
+        }
+        pos += hcLengths * 3;
+        const codeLengthBits = Math.max(...codeLengthTree);
+        const clbMask = (1 << codeLengthBits) - 1;
+        const codeLengthMap = huffMap(codeLengthTree, codeLengthBits, 1);
+        for (let i = 0; i < tl; ) {
+          const r = codeLengthMap[bits(input, pos, clbMask)];
+          pos += r & 15;
+          const symbol = r >> 4;
+          if (symbol < 16) {
+            lengthDistanceTree[i++] = symbol;
+          } else {
+            let copy = 0;
+            let n = 0;
+            if (symbol === 16) {
+              n = 3 + bits(input, pos, 3);
+              pos += 2;
+              copy = lengthDistanceTree[i - 1];
+            } else if (symbol === 17) {
+              n = 3 + bits(input, pos, 7);
+              pos += 3;
+            } else if (symbol === 18) {
+              n = 11 + bits(input, pos, 127);
+              pos += 7;
+            }
+            while (n--) lengthDistanceTree[i++] = copy;
+          }
+        }
+        const lengthTree = lengthDistanceTree.subarray(0, hLiteral);
+        const distanceTree = lengthDistanceTree.subarray(hLiteral);
+        lengthBits = Math.max(...lengthTree);
+        distBits = Math.max(...distanceTree);
+        lengthMap = huffMap(lengthTree, lengthBits, 1);
+        distMap = huffMap(distanceTree, distBits, 1);
+      } else throw new Error("invalid block type");
+      if (pos > totalBits) throw new Error("unexpected EOF");
+    }
+    ensureSize(outputIndex + 131072);
+    const lms = (1 << lengthBits) - 1;
+    const dms = (1 << distBits) - 1;
+    for (; ; ) {
+      const code = lengthMap[bits16(input, pos) & lms];
+      const sym = code >> 4;
+      pos += code & 15;
+      if (pos > totalBits) throw new Error("unexpected EOF");
+      if (!code) throw new Error("invalid length/literal");
+      if (sym < 256) out[outputIndex++] = sym;
+      else if (sym === 256) {
+        lengthMap = void 0;
+        break;
+      } else {
+        let add = sym - 254;
+        if (sym > 264) {
+          const index = sym - 257;
+          const b = fixedLengthExtraBits[index];
+          add = bits(input, pos, (1 << b) - 1) + fixedLength[index];
+          pos += b;
+        }
+        if (!distMap) throw new Error("invalid distance map");
+        const d = distMap[bits16(input, pos) & dms];
+        const dsym = d >> 4;
+        if (!d) throw new Error("invalid distance");
+        pos += d & 15;
+        let dt = fixedDistance[dsym];
+        if (dsym > 3) {
+          const b = fixedDistanceExtraBits[dsym];
+          dt += bits16(input, pos) & (1 << b) - 1;
+          pos += b;
+        }
+        if (pos > totalBits) throw new Error("unexpected EOF");
+        const end = outputIndex + add;
+        if (outputIndex < dt) throw new Error("unexpected dictionary case");
+        ensureSize(end);
+        for (; outputIndex < end; outputIndex++) out[outputIndex] = out[outputIndex - dt];
+      }
+    }
+    if (lengthMap) final = 1;
+  } while (!final);
+  if (outputIndex < out.length) {
+    const nextBlock = Math.ceil(pos / 8) + 8;
+    gunzip(input, out, nextBlock, outputIndex);
+  }
+  if (!output) return out.subarray(0, outputIndex);
+  return out;
+}
+
+// node_modules/hyparquet-compressors/src/brotli.dictionary.js
+var dictionaryGz64 = `
+H4sIAAAAAAAAAzy96XIcx7Uu+tuI4DuU2meLxDbRAElNJgYHR0neGrgFyr7bPg5FdlV2dwHVVa3KKoBN
+SRHggIHgAFKcBc4zJQIgOGIggYjDF6D+kf8U56K6GxH3Ie73rYRsGRLQnZWVwxq+tXKtlYlf0V40GAZ+
+UQe6mBSU2+9GnvZUokw5GozCoGb8RLt+UouqOuxLTRL4/boYaz0Yxf2J3pfUtIqjAR0XIq8W4JdiFFcK
+UdRfDVQt8Ad04Ie6rINqOapo43u6EsV81guisJSUdWXA14NFP/SqqoT31kwxDYKyVl6i44pWblnFWhXj
+qJLEqa6ouF8VAp1Wo7Dsl8oYpw5U6IV60OgBHYYYj6uMLkRJuRqZJDXaqyhPl9GmrPHeskpCVdGf+WF/
+IYhKxt+vC2iP8aFdP/r3QzwTr291/lSOAk+Hnhn0k/IX6B/D8AbRh/FLYYK2ZTWgS+jLaB26KgiqKikP
+avw3SE1Fh2nRDypVFSd9kR8mZd8EvklKUYSxam8Q8xzUBt8VTAVzV4GJMJwo9t0y3m8CZZJEK0y3Uivi
+mX4/LA36QaDx+aCKvQKeLfqx3oM16w+jQYUO89WwVMH6J5hsECmvhLU3OiiGUaIrqVsuaq5FWIsjt993
+ozAKXR1gn8rYE8/X3ifYnzgNdBnrpvrUPj8sRm6QFgI1aAJtTFkFRcM9RF/7o1Bv6uj4D/zHuNigvaCj
+WLm6EKTY/zQe1Lq/iL/LIJoS1gmbiP3G2Ms6xJr09+tqUlUGnfrVOIoqn+z9/DPQS7i3VgU9olM80691
+tRioEuinH6vjFTGfBOONsecJaLYvrVQTrJaH/jAGfA8KBi1i9LV+rBXWISliX1SaRKCNOO+ChlTQD7qu
+DmBNPPRfAa1jR5MkjcNChB/QCTghiCOj0zjYYLDwcRRoPApSTAyWG3ursY+Bl++rlsAalQEV1/BMAloO
+DQjGi6Pq30DTblStbcp35LraVY9JsBABdsPHy7A+VfBZvuQXsQaJa8xfSrGq4Q3hu6WkM8Z+YIxJgHka
+5aM75eEdDvYv6IvKIWikvxrFmJtJ1n+9rc0DXXa1F3qqURQXOG+s4df53vwg6KYCft1c3df5KfYyVmH/
+IPoeVCFoKCAxef/s+FdnVaXBINbbpLH+XxvW/3FQ+UkFewPaM6VImxJ4AltTqmIs77S1OQHoJw39BPvG
+fvpBh5VByI99lSBnyNOY4uaO6j4sHcY+iPlGQTEK0acfGFXEt+hZVY0LORCj72IQDRZUoWaqKjTgi/cw
+3g/wA9YxoP0EfBcM+v0+ZEJiEhBO7GP6pfYAPDioVX+CvdgNmQO+x5qEBnvYj+2uxWlo+tKgBknWvwn9
+lSIVlCACDN6nvZL2ve6c0Yl5H9/l+8xf3sOY/aKzwUQR9hFyAnSYpAW9X5MaQoxDe6DpBNwcYetAXnFl
+00fVfS5kQBnrXsA49oOWByIssjK1GDwLmgyqGKOP9XJB/1vwrj7sfaJKpuAnBrQVgPmSfgiwELTbhQUu
+YdH+2vvlF16a1L6gfFGBrkUp1j3BEvlhn9q/36VsqmlT9E15cHAwH/sGfRZMNdYDmzAP/K03Y2LbwY8e
+xrGlo2NjAXsOKsDY4hCyxCtE+/JF5ccBxoP1Yt9xX4o5a7fsFze8UwWd6QE/+F8bcqCJuBLgWQ/0UIV8
+3tjR0cFZerEaLKdgimqUFNPQK4CPyrEuQrIE/bpmEvRRBr2D9yHXdbAJxGhSP8GjwVe9vTmKfOxJ7eNd
+e3NYM6180ByH5HsGS9sZqoFaCQyR+FXzxz//+c8YB2SjVwO/m9ZO54dqufoXyO4AfB0MQsHsL2/N/rN9
+XYsD4QR5FeRbWrZ9iH6qqSlDkyRYmk4XNPCf7V3tZWi4D7FGkDFJDBnmvPuuA20SYD+hXUBVGETFh4zq
+96sJ9h86Cvoh0CXQTBWb8R7WdF3LuhaX9A2ZkMdgugpxjwaDVrDXpdSHnA6wUQavBpMoSqSo0u5XSu/+
+8aPNQQpdi36xlJ0gqloJ9FZOKpQSgRenpd1f7doVQj6FWMO/gFgDUiHWfoA6ALyF9XNA/3Gsg1oBOsiA
+Vry0X4fKKFdV9SBoo5QGxb2bt2wtg9ZA90kJMgXCH7ovjSGvapsw//XrWztbO3M9FQOh5YN//NgzkC8F
+Dc6BHN+76aOt2HpDBsD8gw+wiEXQw/8dumgKUc1AhuTRRW7Pl717CxhPP/autfOHH6C8alg3b8PX/9X6
+bao87E29DQq3Df+D0K/imXXAHcneTX/eOuC7kH5ezdOFpAcTgywLQs1xRoN7N32w1YNs0wMq2Lvpw60B
+1h90C3JUQRX8E0YDCvxgSjrUzv8dOmOiImRTRSe+yHHTVd4C2ZjGReCAKnRJVxL3QOf6rd+/swH/1RhX
+swB6gnyJOzpaOyt+0O+0tfX4cRQC53geeGsQ+2QiP6imiWnvM+3ABrW9mzdv/bR3+xd7N3dsVZ6qYK3w
+rs09fRCC6zc666Fik72bN211MB/oWYh6X1UgW7raqz0mSoPPPv1iF/gReCXGGry3tau8qecjrC1EQNef
+Qad7O97bWgHW2vreB/8ADWg/dMv/A8wF8uKYV9a3toKuY+xJSUOngrRC4J7Q27rlw398ExW/Wf+v1k7Q
+1ka0bSSQiTXihmgwKIAXtr7/wT/+qgbUFryv5fsfWv5jx5b/2LrlvX/06WJx1/+z51PI0vKAD3UH0jbA
+F+hj9duUOhT8APqBrkqwdvkC6NADvZaBRSAvgJHCZOuWD/7xyd69e9o2d2wqRtDU6GPXFzudfRA4W99/
+7x/bv9z5Px766Gz5oUXv89H+/X9AvxnQTrL+h9ZOYJEErN6pgOZ++KGr/Z/+v/KfQf/0V/7Po0G8JwHN
+Kc8zkBYB2HFfZ8sffoDIikLsZR6KoaPj/VasRa0Pot6AqMCxkLNREWvR6mzu6ACNg4exGIB/wKngibjm
+Yl+TGihLA1P4UZiHMnOh50p4L3Ri/n2s055yfifkAaCe4KsQfN0PWoGmUSH04T7QiQu6b/Ggc93Ar7ZC
++HyI57AOHTv/ttN8+K+ergR8SQTs/+lPrYPYN4CMqArlEVUTqPxA79723wZ0ErZt/mBvQHkOWv/6q8+c
+QhoAl0f9nT+sa/lk17ad4LlWVShAXqtww6Y/fwR8VqZQ6Gr3QVuQJSlxNHCCX9Xft7W809GxuTUE0P/n
+pn91/vNfnS2fRSUHeiVZ1/KHP0BflqBTKwXIp9bv1rV0kCawD/3R1v8Pcg1r3bPObG1vd/AgpCLxbWlD
+63ctaOpAb67H9KpeqqD/VJL/656PW7Gx36ZRgv+2gMchIX9YB1J4Dz/v4+cD/HyIn4/w8+fNHfLPJvxs
+xs8W/KDdZrTbjHab0W4z2m1Guy1otwXttqDdFrTbgnZb0G4L2m1hf/hsE77bhDab0LYDz3Tg2Q5814E2
+HWjbgWfQARYDP2iHf4HQ8PMRfj7Ezwf4eR8/7+FnC34242cTftDuI7T7CO0+QruP0O4jtPsI7T5Cu4/Q
+7iO0+wjtPkS7D9HuQ7T7EO0+RLsP0e5DtPsQ7T5Euw/R7gO0+wDtPkC7D9DuA7T7AO0+QLsP0O4DtPsA
+7d5Hu/fR7n20ex/t3ke799HufbR7H+3eR7v3MeMOzvq9TVv+DLWEyeN/wKxR5dV1WBOJJuiqAsckkReV
+gctdCCz1ajYq+BDQr6aUMq+mBnwPesMQcUWQSxEtEvyuXOyt5/dFsN0i4NQQupgWBaQpODYoRd+mr+4T
+1YboEzoCUACcAx1UUH18H8k5UqVUVVNAzDACSwJ7Q4YFqU9VByOnFsGeUBCOcdXH+wt4Z8AGQeT5Efgi
+5rj8189fP3z9Ej9Lr1/8OvT64a9Dvx769aB89vT1Mj5dwl9zaPUSvz+Rv5ZeP8N3S/hk7tfh15fR9in+
+mf31KHo4+vrHX4/+egDfPsLvj/Dfy+zj9ezrq/j3InrCU6+vvb6Fz5++voS2B9Huinz6Av0/fH0eP2fw
+c/nXQ/h8Fu97+voC3v/09fzrl/jsBf65gecOvX729sDb8Tc33468HX5zFz/zbw+9PYy/x97MvpnBN3fx
+/ZG3o2/H3h5+O4yfQ/iEv4++uffmMX4//OY2nh2VPsbfHsQzo/jsF/R0j79J23H8fhht+d9Db55Ir8No
+P/x25M3P+GwcbUbeTMkTw/jmCd7+BNjdJNh4HQWwphOY5bCDsTtAdbT6CTkKxIcxvzXU/rTsAX9AQ7At
+fLfow3ImqIyrNHOhooHyYG0BkcFMh0iIPeA/owFq0yo9BobuAgNypBEHc38Qv9Bki60ABjCk5Q47uwqJ
+DuyD9+o4hmEcQveqQpQm9AsAWCYBrcFAzP4ENgmkGYxQoMO4JO4FI7Y5qYew2YVZ6qbGhdET0+gLCjRj
+CNFggwiVKXolYLcr2jsVvLvmU7PSW2AAv0PaoewerwfagJ4BHAI+gJJ/F4CxE/OAiR3Frq5SQdOQhkYr
++aEq4gnoUj8Blkw1vRn4ArgGqlPvSyJAVyJk9IxP8WyYAMQbU0j9IBHTF0pAA32lXg3M6NG8Dj1DUxP/
+xdKVYQrT5WLAmlBrUMdoDOhDV4BHP0WIVRvQQLmmXPT3wbzGgMII6C+m5wXYFDgLOlIFMQzsmBat+TaF
+fsaSVHU5ragQWpquC1/8C9DO0PZeARzpwrRxKVqw4sDo5QB2USjGzyBEjaZDx9CbYjx2DRER6wKmD2s+
+Tcowk/AsXmew2El5kO4ZTtoD6bnEYgmXM60ksCcoVOKEzpTaDkiGflpwMX1L2FBYqoGqaSKPuMZ31FIx
+07lMLhY2webFDkAt6aqaVmkeG1WtBrVPub8F4KpSWoVwpJ+E1IResKaG5rjBBsUQUNhaCsJ+ulpophFw
+AxqYFI9VlTyL7klbIb0uIYmGviPt7SWxcuDmY3IARFsIfEBvToSFLSrQL/1KNZWCCLlbBtMPNH0V7Zyg
+R2+W8QB3a7DKAhpLKulLYb4mZfooYFeakIMu0E3gRvQn0BnHCWp6RIxbc/lvgGM6WAwla/8gtxl4TodV
+X7uE9X5QxEQ1zUpyHvS8X4HJqkgdPoxAwh40BynTZadJPWC/1C0XuM5xVAMqMv0amwcUg/mRLMBgDlcC
+YD0py44SXdWiYhEk4UZVzcWEiQUWB3rgTluvHMRCTH8I9EecxERTCrY4phqF2FARMjAxCHd7KTI+I9WB
+Vqu1yHVhaupishW43ZRBxQnXACYlGYd+N5PGgDtFvpIEjI3mWqVJ1IndSXSe9leFTAJjTwX/Q8oxeBmm
+CnSLJR7Ep3gvzd4QUtCnc8Itf8X+6IqEhIzdMsGPpqfP0M1ovCgtwJKqhW4CbqIVHg1iL3WxRjaA9QKz
+mHYpKGEAGwrepbfS7CBf9lJyEXjX+sTTCDsqAM5zdQct8F6KzSr4M6DfBSCXEkEkNQx4CnPrBDX09Bi6
+5IyicwKbZzSRK+V4KIPGBlSxhPgzoYvV0MfGb2tkMNjk2HxDXy8Fd0zuDkswoLf0cMtKBN3tlRTyl5vs
+7SFzol3oJRGkD2CE722gA7RAjwg9fuylCCPNJ3kHgXh8a8U1/xqMJrR12tthgimPBlqpVk12UcrTWu3c
+RWKlLzjn0rqDdAwTceXCvMj1kImB+NUAnRiwhP392pQAPBIM972eOKJjGN/W2MFG0R2ENJ4bU3f4JRjR
+g5DQngIBY0GM7qFHRofffN377h+3/LmTWHffNyRqKAIMLewD5fepfXlFq8GAZcp0vTn0HRO8Q56G0Kah
+Gsj10AkQiteL3kSQBVYD8j6Ke6l7iDKxgxAK9BObPlUV8RDA7PZBc+CUWFHlYB6bexRsOGAvMCO4KFa5
+tvb2v9MFauiHMnQcmz1kYswyKVPnhXRO/MVgAAmYlyQI8EUJl9D9WsTOaKiywVwP1h+MHaeUsVD0f6M+
+303JkA91wi1pgflcc75roUeSHnNDtxZJBavtgQa+5WInsfgMC1FMxz9kB4YLYUu/SEKq1H68mSaV+LPp
+0zM7yNjgbkg4SnSeExg6lOgIxVrT510hu1CrUZ76RtzbXkrRrPcpU4zB7XSPbPz+ezFUqjmMFZtHt0Qu
+onuhqxC39xQxr9jQJ+fpalJ27AkA2NSllOdpgzgvOyFjSiHdVGaQo+JoOyFcunN0X0NlYUafY+ZOPp/v
+agd0DUsFTpqHIA49h508VgB5x3EN0gLErovUFSX9Dc9B8hXSBmCIwrfYripPUOSgoKs9iXvo/jEcvKNA
+IRRANHUDiLB94BI6Dco8pTFUuC59zY6BEDeAaqG4ho2zAZRKJ7r3DTEEXZ9GsDtJqF9OYoQZyecenQCd
+g1QnmJvRG1o7c852wiM8mu7rozu+CpkY0MnT09rpFze0Uch6CsAR8Mro3YRWmD3PXfZps5eqEkqCk9GV
+noKKcz15E7vdCSUDBFh3ziU6LIPWapvfE9GXpFUfdFkjDquC6TEJkIb4qg1lRx4CXfP4QAf0D5p215h2
+nkB08ogCAiUtFgs+OqVn39D919EPTlOwY9e10KsPTKNT3e1890PnR+IF5JHKd7R/FQ+bXM7XB1mVebzl
+xORnglRDz3KupspR1Epn+TYiUJ5WGTDiph7YQGmJDmax0rtps5gfWrGCdHR2VilV6FI0PF8wHfs+6Ojg
+qUFO/LgFqo5EYcEqPkQZ0VsAButqp3MZM4JwauPmkaTymEfLHypkEgf2/p93b/vvrvY4Kum4SLf+DvLM
+ZjpMechj6EnqAmMmCX3xZjPHAggW9rc633/vBPQM8jQn+GMHRJoDcnJ4bucNcsUp4Dr71Nb/96DxQdVd
+9NzHgA41HnvAfiP8xYJVE+qZ7ZSdrc473Y5HzEqvB10tFaijfl2rwLwMeKKWpxvbqRI7g6fDGj2Jhggn
+t4nLMUhATg9WpXfvtq/2krYcHzg23OjAlqc7oYUANz/gAwyIKxXyJQRfQsvwAIzQOgqr5F/yTEvUBtzC
+Uwk5ajHUlA6dbyG9Lt8pLyro9dxM3+ve1EGF0MnjOie/OV/xeYiWo9sbUAPbs4OYqwBxqDdzpNjk1j/x
+l+/pxAb/QROXyeKbNnfkHKpYiL6edS1UEN2eDxBAjscXWHDKzpY/FotFMBEgCxFejvAByhqPtdL7vEl4
+ATirGlqHM+whbsUhHlW4XMQcJy2nQ6YNvNbm0dBqeTdIOul5NVvf++gfXTy7bYtTMBpPnhwqSKD1fjEV
+qqbbyeU6oQygj7hqm3giAfGvQrrRI0rD7qj7PzbvdiiNYJoXdJdfKTn4yfVsdIp9hr85Oa7f53uj6nae
+2OVCPRjUdmJP+t39WrCyHxArk0ne7ymqb3M9+8ttbripA7vZtinX2kkU3s3TQui3NKhRlhg6kzqxel3v
+0GMRODz0gLJbJ7vv9NGWIMc73K08OHddyyBxCc8+TEpx4/GoowCm6U/IW+CjnMMzWuBnDI1OEPD3t6DR
+NKr4JoItAhnqaTnboWfEVFMaoK9mIzpNXl1PfEhcoIBE0SciMJ6nk6DMFHKGfpSYQ1PorAKRCrhagcqK
+1Lfpqyl6VYx59TiIVC31VFHz+IHeEACjhHZmhFElkaGHxQgF84w2UvR2BGmJR2S1iEeT1gGCFSECAF0Y
++lQ5PoUBvZoyHIsCQEs9cdrQeo+AfHVIvAi7ySPDEuzp+NV1wCLO2PXjvsiI20bFRFaAFmk1KtONKmSA
+t0FnAJpHUO/KhDzGJzTTnKoCB2oerfniB4IocX1VBLTk8ZEPuIeFrUJSRIUU0yS6jhVILOCfiigSKCfe
+j34LNOIwBJABXvTqcSXiJKM+/glc82qhzCZcgxrgv6sqaR8wMtBQXEypSPCiqAT7QPkl4OIBrgsdWAB8
+WHzuJZa3gveAtqCvsXd0WYVhBAEGAOVizOAeumANFsenU6oMTRabCKAXK4VVBTO+ehxCcu2P6FgQ35QZ
+4JhVNaphpCFBFhiOn0Uu2DmW4yPYSBgLhYjLx+jWMvSShCSa8NV12ny+2ECwnUBGrgxX0ZYMSBuYO+wA
+DAOrAXStCZN1FZoYapHd4GnGQtAtBnRLLxpoqBTQ88ZXYyEqCiKZ1rFdwNAHVX9r32EUjSA3KtOpN+Cr
+PghfIOhX96lzSPIxbGLQTZ8CeYOeYX6pgBpZB5pmMNCckj0EWI1MkPK4HpuMrgKuG56ghR3TTyiExDAG
+lwedA3g5RgUi8aIBYCZDt59RlULEQ1uP7XxFbCu8oEwKqx0AuQ+rC9lPIw7T812FxXg11RfxVdgypYWn
+KArABn5sUh1wBJEpiseGHkZut0yQ6wjLnf4o7qqCRRYRlinSbkLdEGif4ReFKKALE6sGIgT44oBeHZB9
+cxkHgydga4AY2CMHdJ07jQ54LkXXJyXIfVInmZ18gplQKSkCZvzmir2VgOHRFSULaK2GdcMmBRWgy4gA
+UpypNCuAUHxMi9OH7AJlYxIQ+JQlwPNVccaKwaZEqBmfx7jcMtobAOYQPPhY033TR+SoFV2y5l3aqp1e
+RC2NjqHwCXpS61QDDRk652qGwxd1UeChTBxrgeEuT6/TKg1fkB4MW8qetAK1hadCmLqUPIQ1oEBYBtW0
+AH2JpxgvAzxlSOcVsGCsGCRE55gBn8YuJhTLIWssHidYFVqghGYojlsW9wT2h07HWJcwKj9hnAvYFpYS
+xwnejYK0EtLSiiEWaXGLw7BH+/RcAEiXknIR8g1mZ0wXOBYOuA5UDFlLLsYEtHjH0koFK0DLPObqaq9q
+nU37YJ55Vcg6tyYqIKGVTxYFhLfSBHoXkgTWHLBEyRPjUhxdRpyEQFI+dnpQzPWqBjFqMl6pBgmZEuvS
+kVAEc8eMM0IPrlBSVCwCBoMNMUA6EKFi00KFbgj6AsXJatIqo3+A0QKYS3QTeeLgBTwr86Q6lf7LoNRB
+EA1mKj5b82WhT7uJuAWN9faCrCFb3HIscVsVjBAET59dWWgspLLFODFHiHuQGucKfvs2VXTkJZQ5dLAZ
+OiC5g5yFxLTwoArjh1lJKxtrFfFwGRYU+sHSf0aZg+kkdEphbSm2K0TwGrJZM2pIe0lUKgVa3NCga54e
+k25914UiBRURV1Vq1GSDKklgjcjhdVIUJ3dZsCWjm3I9jGnTHui9mAbCyTWxVcVjwn0HLYC2XAyH0qlk
+/ZBG73MZhkIPQIn7ivGUZTGKUPOJuMSth9tgvzA2KAfoJ8Z5RPEAKVN/JStGNgeBkSkJLqiHXczEMHoA
+gFs2I+cQ/NEpo5OSeHjIUyQg0CTQWZEgoQYRGlRE0NBb7MJMJrf6ocTbKVLLDnHeRbLL4s+FVPG8QO/i
+CSTF4SAdmCXl1irC49jstFRmbJcWsK3pgy/5IcetoJl8vgsKwSUWhwCRswJP/GSE9ox9URx/JOepQj81
+MREZDgE159LehBwAv5c9TUkdCy2BY4kBUoiLpMJYwZovnknhNS2ue/OFyBYvpXyw3kQ5OzCM+tIeIYV1
+LMEU8gNwLlavRG87z3cLwjt05TEaC6xjPhbZRZ8sLSN6Vl1Zq4J4WYFiY1UFHWD3rC8MwoN0DkiX1DAL
+0l4VlmPSZgdRpbytMOSnRI8jFHwKcQxZz/gWgB/03evGfjXBGOicJ5HSqoHI83xyKh1hJHvOsU28CFhH
+rAOoEAJBCQ3wJEV7dK5ob4esIRaYDrQynRUqYHwh4wlzDuwbyA2uCWz37+i1wQCL/r5Ijgs+ETrPMzxm
+gwvhQQogvgBcw+QDBdRV/kokYSIz4jkG+TyBDPKE/rcLp8P6SJOauIYp30pR0isSTFHSA6kJRUMqcbRW
+I4hFnHAHY81vPhcJL1oItE33fK/oAhHzhiPQ3rthwVQ76dQ3Wgxxh6o69LrotnV4Pu7LeU13DswKbCHR
+fcBKAxI9QWtoq7O3rB2PHrWSnEuZ7bs+/vQL53OwBPUyHfWu2ANlkcxKTIpP5S0UPInZVcFm616RpeB3
+cIOHv93EHguAd8DpvcIX+ZaWL0Nx6miPJkuuZw9wuF8VZ5YpS2QCdg09fClSIpa1FyI2ofgTe0XaeJpO
+G7pvg5qzQedL+YIuM+4iIp1gIiAcngNoiQLED0+dxLWbGMJCmZVv7PGTt4UG/veEdJ6it9Wt8QQISk5i
+X2HQ72eUHqW90E9PQdcg/drE/0/pVE1EG3rEM6HeHUV0CChGf4pDpOUbiuyceGBFDhuTc9phw+XFGosk
+MlUoIf5yH6PROD5sMKSZPyCcGxYlymqndcfSHs2papXaDMyT65HDRcMY137DCGAxwVx6bKFtMGeMVm+D
+UgdK5LIRBGM/94iG7SrEGMsglUssp3Til9He99/TLcT553p8q8XAY6pGzs/1MNYI8kSHsD8h11LKEIC4
+UNz8ZhM9g9+L+uEa4iM5TcnRc4O3k4g6ORMlukwFm+SMgZ+AyGMelBSxHMlWcTw4cuKV3yZaQA6WjLHH
+fZQb3ifWuU9/YPz13t1tH+Xk6NHZLlog7/wd6IYHhX4k/mLgt5CxQTHQZtL336lEqpA+xdcCBAUBnwAF
+gQ9g2ZS442RNekmc73wTKyy0qgl6cfFKeg1zPWWRGFwMHuaRv+UIych5aqcsgyfO1y5YCsLd3MO2Nka2
+QkL5SQ2TYbQInlepeMOcTXKaERUS+qeJ04wSV9dG59PQpaNEezXhIAc6BPpFDo7zlOjakxOh2jck1vxu
+QXR0XGvvc9GYgdGOX9wjmA173a9rrZ0SSyumdUmwmRwvm52CgX9gkO53YB80344+u9qLQuFyspkvCh6W
+MwrTJZ5eHtw4HVV8VlEgOgxLTOAYZgBsN8EnnpzHGUbN+OH74oyiUwicRTsgzBMQbVADKhEbAKv3jUxJ
+KMEIbyo5Kd5YFO0m6Eti0WkBY5gbhDviXsGBpF327NVyPS3/SWG3t8xthubBTPsIaWqMZe9q51FvsQYc
+iy582DNxTY5wu3eIFBVHnKPkhOUbgXE8hlUe5dIAdLGLtZXzlpZesQ6cnXQGuwQmsZz8G/Foe9vovnYY
+wRvUvH+fL+d6mAPAcVLgyWm6odmcGolHoJPyn//qlDiEfCmF8RMDHzDSlSPcytNZ7X1JcOHwWCPnQMql
+PJHBJsNE4GGYnDVjlQBTisAu0Gg7rCUGgxlSVI6Ee0X7tLT8HVI5USCbWKIDtuJBRlfHRCeJrF6u1fmT
+k5Md7ymk5Ag5xzWfi46mxiGSrAoEpEzmMVWuZ0DCDsQGjuUsExoKYIWWYELXWiLYHpsHzRSqgZ5+hj8b
+yo1cjxxNm245H5YDYacsvXVYhm9p+TR0HAmT2AM7td9vk0XEOyAHt4vGl7NBp01oabPIHOZI5Ho6xOX6
+pUi5NhFPFdIVCIN0y3hGp0PY0ZHgCCPWQasW64/o248ZG5dzHGskSM9twvzQX7v2VbfKkSpzJvyQRjsQ
+IwM5jJxrrJOjb6flD+TBHgaH/QGfez0t8m1LQZUZNxRzk0qMtAVPlmDRVmWOJq7i3xIxM7YyN1U/N9qY
+Hlp5eboxf2D1lzMry9frB2bweTb5sj52amXxwcrc0Mrcz9nwg2xirjF9vXFypDm9kF2ezCZmVhZv1y8d
+z8av188/Wz3/BM1WFhZWFu5mpw80R3/Ons+uvDiwMvdT/ertxqWj2fPbKy8vNQ+caTxerD+6Xr90pPHy
+VOOXi/UjQ/i9OXMY3fK9y4c4pF+uNc7cq489X71zbvX6Uz44NFwfR8uZ1fPTqzcuNCbnsuHHK3NHmy9f
+1k9eajy5sfJyGY80X2JUz7JL9xoLyytzi2jZfHq4fu5i8+7I6o1T2eSV7Nbx+uN72cgxvn3xUv3Ms+b5
+iWxkOJuer5+41zx+Mps7mF1aqD8bwzo07i9gXtnEqWzu0Mri0Mr8WHb7ZTZxtHHmav3JYja51Dgyym9n
+z2Z3DtavXKofOVrHs+cerp5frF8awi/1c/PZi4ns2PmVhQf1iZMrS5Mc9sKJ+uST7NZPzeWLWDQsSGPx
+auPq7dUDp+tzc/WxiWx+OTs1ng0/W1k8h/6b1+9l00ey4XuNB7IdL37KTl1oLk82rx9rHJzPRhcbR8bq
+lw81zjzNpk6uzJ1rnD3WnF5qTl/Pho83n8zXz15sHnyUjV/Lhm9z2OP30C12Njs7gp3Kjv+UTd9onHiI
+RVuZG68/fY65rLw8mz1/1FicaODZe0PNmTuNxZHGraXs2ELj4mL28mz90gPs3eqloeadAyuLz+vXXtTP
+zNSPHQDZrF4cXj29VD9xG79n08+yxQUMpg4CmDi6emG4ObNYf3w2Wzq68vJ44+U0XlF/emJ16Ej96H2s
+Rv3a8+zl6ezI8WxspDG7WD/xI+aYTV5bmQNd3apfOI1VzU6eWL36eGUeMz3ePPRydQjLOIpmoLTG3VMg
+ElAmPsdLs1uj2ckxEE926y5GgvFj6RrXzjTuP1uZO432WNLVQ/dWr883Jqfx9tXRY83lC/ULM9mLoezu
+0fqh4WzkKVa1efgUaJJ0dfpA48ixbG46G7+PT7Jj50hdCyfZ/9Qd/H9l/lp26WF2eaj+dKJ5d6w+fhYN
+QPmNe0exUPXZg/WhE6Ai8Es2dDEbv4pxgkrxFQaAWaNxc3omu3oCRAjKwUJxT1/O1o9ONg9cyG4+rF84
+sbK4yN05cDtbeF4/+7B+fLqxdILcOvuy+fLOyuLRxuLxlZcjmAVX7OkB0CpYElwGbuVcZi7XLyw1bi2Q
+kBYms+NnsRFgW1AU1rx+5STHP7lUPz8MUsTIs+HnmBc6AZVmY+fBNdjHbO4cKC2bGWlcOwC2It2euJuN
+PeOzxxayqwsgD6wtRoX2IKrV0eOcI6h34Vh27lL9wQ1QL6gRXWGRyQULk82hQ82Zs6B2kuLV+eb0FAZM
+gjyznC1cqo9huxcaJ2ayG4dW71ysz81kJ49xGe/NghLw1OoQRM1QNv0T927iFDf99IH6tdFsdERed6J5
+92Y28hgjxMKKTDuK/rOJ8eaTm1jS+tg5SBgwAmTOyuJNcFzj7gwWJLsNbl3AOnOmZ4ayM9PZKIbxsHFn
+ERImWzgDmYNlQXtQI4bUeHGuuQTBchXcB7nXnLlBKsXWXwL/PqZwuHI4WxoD79d/nKqfWWosHm4sjmKO
+jalzjckn4BqQRDY+Wb98G3RVv3hw9dxpCs+xh41DU6vn76GT1TPToF6s8+rlK9ncXPPobHNmqnFxKVu4
+k80dq1+aJD3cflyfOdNcOtTgGEaadw9zZciJ0yT48/fqh0GfBxqPlrKX9+vnIcYpnVZ/uUBpcw+Ca371
+8g3s4+roqezWYch8iJfViydBipB4q6efgd3IKZjU2MjKwi+NI/fJGosTzZO3688hYa5xhNPPsLONu8dB
+ciKHn2NSZLrx69Qmp8ab0w8hSah9Fo82n9xbHZ1onHlOUnw5m50+nr04SxUwfhstMWbuxfIvq0NXsx/v
+YVW59Q9/giTHRBpnHjdnSKX1a9exI82Z29mJkWziUTbxM7iguXwGYr/5ZGpl/mF28njj7kMRJiOgKDLg
+zBPyFMTywpls6r7Iz9PUL/eOZgsToJPm2IP6pUPZ6evsjZv4LJs+tLJ8uT5+qzkEmXNmZXE8u3W/8fP5
+bOImRGt96EBj/Bn/fWQ+G/ulOX0Lr8uWh1evL0LmQyNkDyf40rFT2RCplN/+/CP0b3ZsuH70werBm5AP
+eC8lIeTnyDDF0UlMbZ6cDv69O4KZrl68Acak3lwexVAbZ2ahU0iokJyjC7LOx/FVfeompDomWL9wtX52
+eGXhKOiH+vfaKOZI+T9+vbl0GpyIN4L8sOON60PQFxRlCyNkmcWFxhTo+TS0GxXQyUOQtyQqKJexH7OZ
+eby3eQT8PkONPHKM/AtZcelq46fDfPaXo42pI42FuxDm2RWIponVn49l01fI42PPMH0MFVAB42lMLQm/
+H81OXM3GJuvnr1FNQAMCEgwdJa4Ad4+N1o+NZsfPkwvOT61OjmSTN0QnCnNBrU9eq0/dagzfBZXWn89m
+lx5jjiQ56NPnV4TOr4LIMR7okeYy5vUCCoLMTnl4GpwreoS6hmpl5jBUW/PukWzpPDnl+Amqs4WpbPoY
+iKd++Cq/mj7SvDmMBuDQ1YPT1BEQgwt3Vm9eJQq6+LJx+Fnz5QOilPHb7G36IZEMZPt1vPcYGJ+79vAU
+xchpSLBLzdvL4ERs4urwj9nCeTwOfbeyeKH+YAkSAOqeUgu7PH2MApbI5Bw0HTTp6o2RbOYFURbme2wR
+FAK5wf8vTmTDc1zVyWvZ/ONsAlxwGFyZ3bgCPq1fPgl0RLK8cWVl/ije1TxATVo/O4YdJ23PPwEwg7Ij
+xYIgwbYzR4A3oLZWlqfrZ+aziYMrcyfqR05nxx+CQyGNKeVuPGzePUhwMnWBYOzRUuP2leaJ57JQ9zHZ
+xuLdxuLUystrwCGU/9CJ964DKUGUEW9ABt66ujo53Lx4on4a6uzS6s0TwBjkx6fPoeVJny9PA9U0rk4R
+sl6+jpWvP1psnDvfXD5JhLNwF7OAuofEw7I0x4Bgx0CZxJ+TV4EQyFZnJ1aBoEjbh/EKoseHhyi0H48S
+MQLBjt9rPrkKBZGNgE/R1TLAJ6i3fu4l4c3E+eb0PSwOeRYIeeL46p0xoqwXCxS/Q3ebxw5lYHkg5KMX
+V16cWj3/COsJIqSWuXS8eXeIgn3iIB4Bs0BIkgexv8uXmzPAUUsr83fA4NyIp0ehGRt3idzA4FwcKLLp
+n5oHrzduU+/Uz00BiQFdUAdhhcevgHewm8Cuq6OjnNfJ21BeRCPYu8lpstvYLDRv/dRhootLR6h/b402
+b74kqoEgvbSApYPWy6bOg7yx0ZCfFPIjYNhTRE2Xb5AjgB4pD69AsLC3h09AYKBe4aZxYJjmwxv4f/3i
+NLiJUmUOZDO+8uIapcHYL/WpY/XJR/Wjt0WPTBI2Dx8nB038TI15/hkV8ePR5r3x5tIS+Aucwh2cvkEY
+OXQAvQF4410wGWiVPHkC6d149gi4lMgfGmr0Z7APmB3vgpYB1AG5rl6+z/1aoIalHAbdvoACugn9no1d
+W714i4s/NtccP4iFAm7BjtQfXK+fnYPKzh6eoiYd+xE4DZqxfkRGBX48eYIIcPievPcpZMvKy8dQOo2p
+M1ANRBrLl1d/ugShhxfVbw6BxrAX2DvoAkyz/uhHbjRk9dxc48xPzdHHHM/JEWJCID3oSkCaW4DEz/DS
+5pXj2fxc484EMT9Q1ssbVGSjI8C6lCeArLBxxh7Why7XD4EIT1CPHJ8AF0ATYWrEz7dfgjtowhw7AlFJ
+UoQEm4e5dIkE9uIX0Ay2m8bLEUiPwyBFbHf98jJoFSANIguMRnPpwmnMjpBvHJwySRENm+L4KBacanrh
+DvfryH3y1NknAKIY3urQNUpO0tj51av3IU+aT+bYDyaIrZycWz1/idIY2uHlLDUdrCrIc+CZ6XmuMJZr
+XKyky9chD2kqAj1Oc2tA8AJynmWzw2AcSM7m8hUwKRRQdhx24hIepGnw/G52+zZEBK0YaD0YsJdvW5MW
+NAzaI81AmULpQNqPX+Hig6nvjEGjYYPAX6tnLmKjOYWTY8B7EOnZ0AsQGCc7eapx+Sb0MkQTrbCFn6Ge
+Vi9QnVGiHlmuHx2GmF09uywct0AUAYsJWhi2yeITcBmEc31+KXt+J5t4DO5eWXwJEoKmAIvBqoL2h6yj
+UQbaOHM1OwXz6ia4CfCVNjjo5wWoYr555BFIDvPCvtNUBDdBYsDAPwz6OU5RP3yX2wdNCsG4fJJkA6G0
+fL75+CYx2zMA8tHs0lVC5acX67NXYdlRAZ24R+gLow/jvzxFfXrkLq0zkOXQNUgbgha0mV8WW3KhPjHR
+XH6YTVyAlUSWX7xKfj8ivHDxfnNmiRDrGCU2cSMsOLz0xCJ10JHjsMppHcw/ARXVLx/E2EADK3MvQb1U
+3xeh3Ubql37mHCFvaaTAzr0JCUMsdGQsu3y+ufALdgHzzRZGMGzgdhKe8Avt8UtXm7Py+SHYApcIdw9O
+N6ZnAS1op88ehBLMJs5BllIbwlCdnMPKg7WJisdGVn+8CrsGfzauTxNXQ1YvHaVldHkIVkP9CiyFi80Z
+IKJpoqDpy80nlyFRCVpunsDc6yfEWoeFNfNjNn0NPAKxQ7h1/2zzl3ONc0v4CoYJJQNGAsH7y0Vq0sPL
+jV9u12cmRKRMZbcsR4/gE2qfW/frT26DrYgkJx42DtwERQGjYsr0n8z9DH2UTV+gOwImA5D/5BzV9NiF
+xtnbhL54aglm3RiNo6VlAunJKVAg7dCx5Wz2aP3aBMURjESsNshm9Enj5wOkqAOnBYg+EHfKaTBF/fpN
+Uuz4YwiTbOJOdusc+Xf4EPA8TQAChgvAbNnkpGjn682fgdJPrP50snH3ANaKy3X3MFRn/dlY88l8NjwL
+LsuWLwA40UkFI3TuDvf95HFMtnHxBX0jL4ZgSVGNUrOfF01BSoPEgE1By1EsOPyO3mCtiIl6FTqagJ9o
+kz4oohQggctXoaqw1+ACyrFh+iiwOFRGLy407g5hGQH8sCYQoasHxutjj0hFEzfp21m4lT2cJepYvgzz
+XCwIMPJBvJqyhZiKLrJsdpYkB3V5+Cq4tT49Toq6fqV+8lL28Gg2C2V6ggba2PPmkxu0lW4+XL0K2EZ3
+ED4hnLv8E+XG/COYRZgdRRww1eQ4LeiLp/DJKvj92DCkuvjQntESfDpJCAdD4OikCJxjGAxl2oWZxqUX
+jcvYC0CUJ9k9KIhJIkmsz/Ff6Dp4caF+6BrIMrs5SmE4PNs8MkMn2PAwXTQP7mDHVy8CJz/DXIhegEAm
+ZmCT4nXQkvQ8wHKBdUkbZIkegxsv0M/Ki/MAvfXzE/SDwVrEpmDjsNFT6HAGlLM6dJAC9sRV7DVAF8Ug
+Ojk3CloCtG4sLkPKNe4RBTUWx7BiNDqO3IcdRx/LyUuNowCBk9jxlbnbFHoP55rLl7KRi5zypSOwZBu/
+YJ2PwH5pzl4HmWGhOPLbLxuLl/FhdvwADdvlQ83lSUwKhgD0EZ1OLy5k48tsicE/uNl8OpHNw0I5Q2cm
+cAKY6+Qp0Q4PKaiBu6aXgBUhc/iWp4eBYMk1156s/jTRuDxE6XTrLp2BF2bqM2dJIRcXKKuPnSOXTR8j
+42Czrp6A8KT5A/ELpX/kNORt48wN+jfuHBQP1T1af8uXG4BYk9caT65RPgBbAnsfvEdcNLlEb+ThSVE9
+4JGbUFsCmWjjU4NPH6mf+LEO4Dd7ZHX0mEi5SZhvNGzvL6zeOQfwTIvj3OHV+7NE13NH0YbrMALrnvwC
+M3xl/sjqhcfZ8BHsPv1RLw6uLExnIwAGRxsn7lPHLd3CvhNDPjwFpQw6oT1+b5Zae/g5um2cWQRoIXp5
+TKMV6p5YFED60EvQNh131x9QR8OyuHS0Pjdcv/1T/eSVxoNT9BJfO7C6SFQGyiHZz15tHp3AdhOdzi02
+pq+vXnhWn37avLeYjYw3lhebM6cghME42YGfiIhevFiZP0Gjb3qGW/b8duPoUH346Mo8AOdc48QMmfoq
+xNEi13z5KdHIFTp7geK4krCUjy1jOm7KMA4dDviM6/Ni35MQydgPfdePEl9XqlE1ir9NtZsyUIUnnl4k
+AbOhBGwa1juIlQTOhmFUKcRa4mfDqo6ZhKUYvyohpcb1U095cs4eqTREn9KP8eQTiZqPq7HGe40uvVoI
+JY7UDESM5ZDAUsN0klCVVYG5yyU5SGNIrpHQQg6b0Sjfpn7VBj4aia01KiiloXKjONaRTe5kSK8fqzj2
+C4w+RG9lGbnmATgPMjhOVSn4axGJjDtlqLlhoN+rqVArxu242gbhSuyohOYWFENwY4mFxXhSxulJbE9U
+YcBmMMBoQH6O+coqGQnANRKkG0pVACWRvIbnUIxm5im7p5nPHRV5xiaRnkbiYSJmTvhKgjM5R6yYG1Wq
+NnNbG4n24a7FeIEv4Zk8v7WRkLHEfxqP8TeYY+z6qhp5GASztZPI8zlQ/F4IJKiYUQKYa8D6HX7kxr7x
+sZvMQ8JOpewBv+siKQSrEmNlJb1KawZGRRJALRHKnpIeVFTk6mEF0FS38eCcK6OMnJUbiVWLGLNk+2c0
+KFYqkrhBI1HXBpP1GWXLnBEJozax2v/qMd5Z8DnTlDFuUaC9KNEh9heTfbVgJDqP0bJ+qBjXhPFyZZTL
+sKbIfXXd8/dL3Cdj//CUZHsp7v5+UrgfRNhFjpkkH7+6v8/HO149rur9pCpPDbya8nSkB3h2WVXMAq5o
+hpAzlJVpQEyXKL667vqBqwp4SCKCJXzVQ594OupTVcxCgmFNQShEIqeNhNHGEi0cFmW1sdfccYb6GknX
+5Uwx94IfFFREjgDhkCsNY5iUxDd60esnrxd/nfh1VLLkF14/xM8cs95/PS6fPPr1gOTKP8bvy78O4fOD
+0ubpr0fwc0jy6n+ST2bx23PJqV+0mfavf5RnlyULf4q9SY8vfh3Fpy+YrY+/F/lvZvHj2SXJ6n+M1mvf
+vz7Dsb2+yvfyO/QnGfySYf/i9YL091j6f8TeZWwvXl9/fe/1Sfz3IZ69a2chzz6Sb/Ekxn1DxvxEPuNb
+X8h8Zdb49kf5BG/5dVhmzb5ZY4Atn+Cfl+j5R/vGtbEx1//H30eIZw+s9cA2Q+hx9t8VA+bwxEtZ0yvy
+D9d6RN7+UNrYOgasLLAklQOW0DPHaesXLP16AL09+e3W2d9uj/52a/6322Py+9Bvt+bkk7O/3VqST47+
+duvMb7ce/nbrZ/n3Pfl2Qhrg/8u/3ZqSp0b5ID9Bm1vy1Lz8e0QenJc2M/yF/15iGza+jd/7FHlaWl7i
+//nU8G+3Hvx26478fv63W2Py1ZL8PiGdTMsb7/126+lanxzV7d//jXddkJFc+r2fIXmd9MPfn0rLe/LJ
+vd/7RPsjMovp31dgWlpiDI/kkznpbVqeuiOfnJanRuTDB9JgSj55IN3+xAf51T1pc17Wdkh6G3oz//bw
+2yNvbvPfb0ffPHxz982NN9NvZt/Mv5nBP3d//xw/T6Wuw8Lb8TezUslhhPUZ0J41GEbQfvbNM7Q7/PbQ
+21H8fRefjr0dfntQ6jzMSyWHu/I5W7Biw8/o+SCrO6DfqTf30RPe+/YAPnuO3u7h7bPS8jZHhd+G0eIu
+Ws5wtFJbYlwqScy/eYZvx98ewO9Tb36Rt3Jso+j3Jt/45sHaTEbx+2PWosB4Rt7MyJgey7tmMTvOlFUl
+HrKWBFrelNoUw+jRjvhnmQlGgKdYo+IpnnqCnyl8MibVKlgN466Mlk/wPbOc1+/PYoQ30fcY5nkXT99c
++3yEb5OxcCZj+Ocgx4uWI2+mudry28/S5zDeePfNdZnduLRh66fcG1mf2bcHWR2Dq8Q1ln2ZkXHclPZY
+Z+zdz1xdPDGCzx6gj2EZw8/ckzcP8Nt9rNIIWo7jrcNoz1ksvHmET0Ywh8fccRnPYanSwRW2ozuI9bkn
+877LFUZPN4VGWLXjOvdExjG8tneHWNED35LmfsY3HNW9f6/6Y1mZQ/KueaGKGYwP45K3ch3mpbdR6X+U
+MwfdzL55zjFIbJjkBjFGkrGnaZCUGeQaFG0EtsA6BjylVYlGlDAlj5U1pLqDRKoVlSn7UdhlY+wl5CSu
+Ae5ITq9E0zNdn7rbZgKYOA1DyX6O+DirETCSV2KTmV3DPM5BHUjRReAzN9BpKKUXQs2s9n6iGxXWvBrU
+qk3LNxLQN6DcGvpktHmvnRHL0aBTz5fciFhLdnIs88UbCiw/UfalaITNAzBr4cp8C8Nddcx4V0bIsPhA
+mZHRgY27zytPch6lsof2BrVEOwu2dJlU7aUuy9zwL4AZhnwync1VoU2e8Ewq0xXQzNwit8y0hTSWOhbM
+MmHBkQLARU2ilKV0p2K+pxRui5mYgO8qimnu2oYlGlkCAoKQWAGDKDHODyBHJzWbjyFrzVQyicn3EkCf
+EtMUGGlrGJbJeLhAcncJ1kJCd4Yo1wjiMVymjDPMSYK+mFJXldSEgLFMNpdkYx86wyN4u2wn666hb/ul
+3sfgWbOWW1FgvKard3GmprzD0llSjhlytUfCpR1gRFv2gaHxiRqQ6DsaCJi7pBuVdC9IgZXuiGfjmqdd
+RjYxWZXJI77h/rHuB5aYxRP8hHU2GbxYkoS6gPTBlAEtLY0NdJL6GKxRIfmuLN4IeG2zHIxNyjA2PptF
+u7hmJDDsAGOAfckOIWl4fonIvOq7XJ5ttuZKhcYGV14x6DewO23TZKxFpAIQLinSZk+027B4I3GdAI1a
+4sYYKcv5pSZxCtpmdpi/WWpNmWwQ1DSTzjzmSDBgjQH+wmMDfgRIiYXE5xylJB0IzXe1p0HPuhYGvbKo
+QCB1SSSezw8ZwcfQTabylbSyU2EBNIB6icDXXlXSDMLUvn+nnburJK3775bVGEmbMikHbOSCysEj2tvG
+8iFMyaB9A9IocascG+dmg3oZx0dq2JYy6ywp6UTmLqkthkPBX3vsFrtK+NcmyDDPQJJdiOpdzfwBbrCs
+tSHVwTLp3iRv+sQKAafbCfWgs8Pug01t8npJISr4wsoeyhBfSjiQScDX5IcdzG4rST2iAgsyMmTTFLTk
+kkgsuPZ26jQxTOkJSfMSvx/bOjssJpMM6rXk/qBm7PxAUpx0r2VfyJcqyXNf2S/4CRN+32lr22GFh9TA
+YUL1APchSiUKdC3vZS05ZoMVWtWUNqAWOd2dsyH3DgPOpTCHUMinYktyT0AFzCICm9VsYotp28Sagi2S
+iBBXdlhhxeK0oc0KIoFVmVpTYoEUhklawSkx/Nr7mNQfQgozC8hjaG1c6fFhuaSeHixrS1LMBPF67Y65
+KmGg/jarA2xOkS3wBG4IfT4v0kbXmOeCld/B7MBSVGbJEVX72HI4M4ZAtButCBKSAilq1qUukRkHSLuG
+gYmSewXCpwAKavmWFiYL4LUOiMwD7YADtkMyYHN3UOpCSWKJHZab9NFKfxpLLeqcIxnYNo3D0L71pSgz
+sxU+syK9nErCox86bAVJoPzY7MAKMp2ZGYYqKMQ2PNuXPKtAWpe2sg5vd85mTzhrSUqM9MeagZkrfsos
+kH7MdluFZUjVLk9y4/9l5/651dpMS3GSSCI7u3NUpoHex6hpUkEimQcFRs4OaKn4peM2m35n0+kMazLg
+cZb3xdx3gxmK0T4qNwYmQ1fRaBZhBZW1z6+klbIVcpArvhfUIJ8rUoUUVAIFj3Gy7LfEexupbYWpYATa
+5lanrPYaKpPUQJ54q9NrcUjMDMVUU5ZEldpXFlZgzUQ3UiZTwKFnvE8JeeftEmyzqGSXR43sGF0iF38V
+QZQnjk3nMHuU61vRzNyAtOoMSvkihrtuHdQOy35vEy25lqVhvrHZeiy5hEkrVwQEKyhj36Xohva2OhLK
+m1gwVKDWNUkBO1H0E8ZFY4C9VsCzMinWDBIYHZpKJPKFdfLwH984LGjOucdGi6cEW8H61N05UXUgaFYW
+GmDMP1MRuA9SubSiuaL78P6KzQeOtU0M2qrFreZhkRzWBWJ4tgIPi0oeVDUuubMtZR6rzTIzOyz4slll
+RorAQY+zaJqR1BAMQipgrGupsqY1NHosqZEu641XE8FuDCSOJVnNBm3bNE4WAmOKnLN+PRkPAoRzhzIN
+JIcVwhwyxKp5C7C0AlmCKZlWLeKCyWqmNS9JPpJx7K7lIUGTiGvH+sI8G9Tv2BycWIquMU6ftYr0Lgny
+hzAWbb+WZLnDQj9ffGZBCFlO6JDKNn5jUyKY0kE6Y0B0rodCPCAslM6oCPBdGyBn/1oamfb+mrI8MvVR
+VSrEQQtXzN4yVJxxKtF+ohtuoy9lWZjWqC0zQ8BT3G0VitpYZvkt7X0Z1CoAGt9YIWkTWY0Up8LEAKlC
+313LorTpjIzPB1IUH24iwkN2xObHSpGxoFayibBSIgv0Z4vUUPGxG6sULeXnWZWi7FdZsMdnaq2ILsnO
+IUxhQSIvTWSrmB3KbEQLGRP5viS8FjAZgTmE2y2eB/rle39wpDDPHgsnoSIprViyHiS2G4QBQW/TE41k
+0mlvF3mHGqdIbc9UXAAe3lcAadOrZS5tdpV2WyjNPLKoyCImLB8kpYuorkPmXLJc1oaO1naWku6T6toU
+F9aM6E10taxDJhDo0IkKYlRIeaZ1LZ9L5pnDFcNQc44UvbEpywZ6ZTeIvKXlc7CRY3OzjMTyYx+s1Cv6
+AslYJANDo8NUyhsy6wIWiqwSCya5PowRgHRj+iwtfaxZLMDZziI5acWWJupJBn1BZhETM2qs7s7ycwq4
+PNaOTaNgDRnaY+WYTkQyLdlRcrIEXEKUsmrxuhZnhzXuQOvgSZb0Nxgg3+4oI2/3wT6SWthFtujpYuV7
+AAlBDutabL6esWPRdkG2EsyiF9ci4002/UDKi7U4xu5YwdbMsgmnzqCWtLyODluvDfQOIgQMpQSTyh8Q
+nj5VuFPwea1CjddbOCxq6nADWRwdf70bK6iETl7XwMrbrLwWljZY4t2JfwFVMXmP9OkzNYSlgPiGbVaU
+/A2wDPbnAIiRX6YUMsZlCUIViGp1uv9uhYdUCYOIdUSd2mQVr0tJYi8TkbCYzjbI39gXHVfWO383VxMo
+Eo/pLgOcEdOWOwuKgsWwMDdHBglIoxgiA2tKHe4o2pS0PoFH2dlfmZIIyCGZJpLwRjVh0zRsGoizW3Jd
+HKIZsm+tSnKT0ocubcWKL3URQ8cvWqMpsQlhHgkIr223UqBgs23axG7ZyoqcYvczLTsv+VO5HowMb01g
+gwRarD3SvOT84Dsscuonu+WyAY95T+QL6gFlpD5ergez5DrbNFkASN4Y0MNrMZyC3DKCTVWOSK0KDdS4
+1i6ZU/mihQAe9gTqjMVpoNlci9ml5IHYMrS+/ES0fZiKSPqr1FB3RFSahNAPfxal+CRlAbiSZb1Ye9MK
+FGewHHG4JNKURTSkMIUByMd4ZelYMlPy3W1Ct+mVmgUOy/hzN6MKt5NICURF/YcX2aTFrkKNm+l8YSHq
+HuvssCmvLKdJ9mDiEnR5L9gD/UlNt6C2h5oJEjJyeIJFyyallUyj1NgqCcwZpnYykpVseIUKlon1hGhl
+KclrosUOoWOTCDe02UQsMSNyPbR6Er/aa01nW+nA7E3jfgxCCqfqOC8lNDcILmhpKVgalNJ1vIaDeZpr
+lR+6v2JdjNiTbPKgVuU9KL6Yxf7vKUQtkuq09Y9pIAwkh2ZGLlIQCQZTwJXy8AIdtJuu+UOMFFPFxHZa
+J5dd1patjlQClLpvPMZKIRwqYlBhq+iewvj2SXU7SW9d12KrHOT/sq8SOANyr43YaqwAxzoC3CTeqYA2
+Gvi4ra2nNQ+OjTfYjD3Dy1XwAOtA4X9iVu/Xf2MaKAhF0kRB47HbnWvfY31IHrPL6UkSzJdYILhHSmk4
+vLXG8cO/snJbWd5MgGlttS7JRu9RjsBg3tsQrpcrReKNzi7r4SnCtiMqI8NE8ScpzaHaNj+2NQ5kKiAb
+Wi6fS5mVwOb6mT1rjqWNQFWe49i8wTX3D0vUSiZ9ESzdYktgmI/lJh1nm7Vz+GxFiZ6zlTEAEGsscSc6
+QEQz2xtKLyBe37B2HCxz1smPmIQGHJzEO2y1ks9TA2Ri/m7NKxhUFcGm4r2jtsZ6fip5ohuldmZQa6ed
++40Cy8idAlKLYMO2VMoskkVBbta7tfHTUDgOkJg79ol2eEmPTQU32+Qwttbyhz+w4thOGJUaQsjaapIM
+l+thajdYRnDPfr0Ndl9ZVTbY0hHfWQaqptJ1q6ixDTbrsWXntr3b/un8J3EicIXYRTQqEoxeEtfphWN1
+xZrzjdT7Wy9iBrJMUjmNX9xA2PBpIsN9l5fQdDq5HqlDyxtuQC9fWh+ntkCXV+KI7GHuZlgS9ONEoZT7
+FVhRrLmUfOQq65dKoPMHQ1rVrPkZDpA8hVHDEjcM3/EKEJBwzoFF3J3zmLIdVe0bEsyBFGAzZA2Mf46C
+1SnBzSpwaby3doqksMmCChiCcn5A1L/4DqFet1nvK2vz6jRW1ockR9pglSAgJhpcm5ioGSPOv2JNBJFU
+Xyn6ZG0M2k12WqxIkxXL0yJ76tiCK5KPiV4+k5IHznZq2KhIbSjuxZAXx1ANglL66aTsTyQ5eb1NjMw5
+tpRN96CVptTyX/mlzhaZH8thcIbbsFEbHTdOpX4N6xrkeujHRL9ScNOwmB2NbBoG6e+GprFZwQ7YkC4K
+wYrdTss6KXqZRFJk4Ctrse+xfuHdFmvsoaOApXmkdMXf/JiktVaQYYd1a+2xaNTmwndWCRVY60LR5fmZ
+WKuOrWNitoUATGHN6nfnK+va2WWtcmt+GNdSOTYdlGKhGB0oYvW02UI0X1g8KLmgAJm/V4dQLCdkS3IY
+3rJEcCLFgoxIvkKN+lbqdsf96BP0CYKsAXzSFcjv0Lmy8owXRmHjWlp6oSid9VIFeb2tumH6dY0Fw0X3
+BwFT1NFSKta2dtI7qQcdW63HkVrZEKaxwwRmKaXQuTbaTvG9Qh9JnrexCbAOvRE6KPZar8puLUnbA6KE
+tdRDMmV6YKGWEvqXgGRdqZlAde6wShS1p9mZ9lMq2jJBG8Ug9pNBK/J4CxE2QDmSYpzbmisnSZVvBifa
+qhMtUnYoqNlaNLFrDQcyOnsXXBf22uME+jvxooDlnJNa0doWFPIANdraVSalo0n3ihXplC1dfyUlTkKp
+H2CSbQHdKUqUjXg9aF4J9s315AWGel4kOKtoF4T1V9GG/hCVlHdajbfDuo5tzRvTapUNhrAG03gjHFGC
+FV30yX1qDc2iX0w0L8FxeBlbXkp35uVagtAr2nLysNVYSgg8FUi+dgny2+12PsfL82JkQ/pZZFy1BUCU
+I3WtWX8NS8AK9hQC4v9yCmK2xLzZzKH1TDXvsFaCw+AWwfqxVCVZK3LECgqJaKdE6gEHUeoVY7pa0Nnn
+4qzYxMMu+ntgQULpbbfuYaL+SB5giNGA5VupEA/wLDXsPF6zApFhazo4UmhEe59Zv/cnUhDKkRufarw4
+CH/VxNsEaSoFMyRqiBCDlehzPUZGUOJVP6DB7ZKV3cqqddjs2NZe+hjKmGdn2AAHmiZl7TXP1iMwLA7s
+gFisS49lNrnF1I1YCSV2jqVIKQCAR6G5vMhNZSHLrK0vxfRZmaaYWg+UY4te9OxmuTdTo7YXONWHzfS+
+tsceHK64FCIe8tgzRUecAa5OBVw4n1t72ubzt2gaE2FS0OJbgyzYwfpo/j4SEbV9xXf/2CH/I+HF9Et5
+gKaOLTTmiLYFYgGxyAoCmzrdUl+Y50Cs2mH2WFDKewyIIxN5bzEV5/SA3LlUsrWYoAPExmdsFCxZqeKt
+1+q8GPKYppdONIq40VzyB6tw2NJnbbwlhv4CFZJZbGY9ltIhGmvNQ2tuaBWnUWunFA62jEetbaUNT1Op
+jmKfdflsySPD8qv4sZ5Z8LpDYbdD0Lax1aec7akYmms1jPZaqwDsK/Rd1axaUYo8VqXbq0qkz23CVFup
+tiBYvpIKLaB0hmDJDZQQSLb0wbufsSBQEA5qhyyxw57H/TWFVDcVa6/QtUJdJScTDiS+4Vgg4mjASdXw
+9RuF+GBNRWwdtIiGZDla1iehtUGrcA0mQFUQhtryVrZqmNnOGg+x1P/hATj5HqLZ0iAvz3RYfj6G3o53
+WzdTH0+vYX2KLs/nrXlMaBKy3I3Dq1NsaSLWwwHfh/KfxMYk5hw5vokd1gimBMXrwkhuKBOqgwypVUCB
+YhDwdgsdd9iyEIQHQL8Wj+fa/9PpeuefO8RIc7ojcY44tF3BR3K1m+dY9EuzxfxbvRjHGhcQhnhgUA4H
+XWOrn/HaSpZO4Y2QFICYP5duzUcq0s1xbKm4H8Rrt8EWEiyz2Foh2jdoVZ2dmMdabfvBY44XwTSJrXM8
+74iCHhzM57CfBTGIS1LxPdrKdcNa5x1xnFl3kfn+++9+6Bz0BQJERVML7fLwnNRITVJNDyeJnVVX9sYq
+FUHqGFvAzhoqXWCnXkClbdYLbs3cvLUGkx3WGhSCzDl/9wOAj4pJYcUWeOdYit0q+FJbNy9XAmywxRAd
+W3fQSJ2YqBiyJpoKdtiTbNayC5TcVYAFkdsAglqbdfG02SKLXe2B39PSknfEvQjGIxVD/NLRv2vNJy51
+vpwBX4mtVmW1ygCkR89enAaCnmNxxrmWGwkKWK8vDSgIy2T6qN9WT9zYbYlow1rhNPGzAgFLkXfWasby
+fS6VS5z/4j2rXm2tGhSL97Mz8aV72+WKVyPV+7vaCeqIbWw9RwJ4SOGyXyHV0IwoYBvFjsuzzj9Lg8Pe
+5LWOnFYSmby959ET50OVxdKSmqWvrb4QdO0ze9KrHGGFT3RcEB6N/X5Qsq2HmF8r9yjF/9aOvqu8BBLs
+JJ602LHy06GPEyYd0AXveKRTFEwSW0wkZ+OOw1OPCu8u9WORtNBxfvJfFvkDC0ehH9l6jc5aecA1PWFL
+EtI1Sm9orpUXqW0QZ0DAw21KFFtVbW3QG/fYqAEsI+8YdOgT7845Vp/5oTgDuuwxhq1s87eerv/dDpFI
+FxBPpC1YNyzIGgPeihKWO1aUeafbWY+/6Q6Va2vjBCtha8Fs3RarApAcpTDm7lp3EauLcbZyCthmKwZu
+BClRb7D6Mr6jygSr7Qi4ciFLqdEZVxJ9a523UhWfYmbtLNJqPEydtbh3WAvTFq8yPdZslZWg1w/YsxDY
+knqORFZgKmIV5Ktma875i2NvjklATjzqYsl2bKqtt2ikyD5GxjtE6MbwSDeEFYIS0Hl3jorInkkxzmO7
+KsCeCe352JqYEXcDz2ATOYLbZgS+2kp0htznx2Rd+glpdoN+PmHF4SjcvOa5dF2iC1sk1GE5fh6dWpjW
+KrfobahSmqF765MFm/01DWpYxj85OSJcHnDS7Qq0RqcT6FEsYbr6HLntdP2f1kMdWkTs2BpqVDYcjq2z
+Z3i5MneFZ95qrRCo02VJimBLDiHZcgNLtoERSC4wMcC0vBI678i5mlxgIiU68Xut3fJvoSTIB4qBG/6p
+vfNCLhsB9LPwYHN1n7Oluq9PbjPJy61IjrIVVPMwVIhYLD23dYtPrpP0SdUkBWPztk9HVKTTbWu3bqSt
+w5vpbGFAW2CKTjIGIPE6TEcZW7PUkwKCsa3N3+JQCUdSZZWIumjphfoxpMfXoduDS051Zc8PBy2sGCyL
+F5ZnXeDiQtzD+z6tL8exJ8TdoqSAIFLa9to34j9TskXONq/ix+Lu3ae9Tlv91vncxijtIV1vdChJYj8i
+luIRYiwKFvzO0ondObn2hIWg7GEw0a+SmYiQFfQrwlhuPXCwWBUif96L5bCmGXgyTQzkkinW0G1RiggC
+v0D2RGKk2UJpRogvpMMM7F8hbOLBii8g0fPFqb2bh7MwXsUzt8EWz6Q/sopubJyHQ2KgUqA1wSNXnjsb
+dy3MgMWsfi8m10ZDDVsFKxm6uWZrT5p2q0Z3xBEGrBxb75FXMHBiiZiDIiCwD1o0Xet3jB2DjBOAFVhT
+j5dVQaPtlv/lLE/n5IoH5TDJI6oZIimHd8XwEo3QHgbHFSvB0oJcwRBriWUjFANFWpjWI8GPmJiWG3a/
+sEcGfmjLAUeyGH9nSdb15gt7rCpFJlUoxwm0A0Q7QmYRtNlyvTUiK7keVzSercv5HWE/KwFKDVXwoESG
+5K3v35FKYRvk3qZcT8oa+rkep5cOZTotBkQFQPtCW0F/Yv8IfVnwGMIGk7anco5jjyPoMgFZbcjt/PLz
+HZENOBQ+Z1yEmDnOf9mwDVtTkIfIEk8UUf0OWgjdaWFa4q0JapEhYQUGFX0ezOohHhbPl6We9aJFocGl
+vq+3nSFcsG+jxJYKk1ph1i7eXBJfTHWHDSHJr9WhtmVfJVihzANYnjsy6JCyzpVeRLfxpMKxIVyMHTA0
+FcpSzJDxWZwAZIONhesuWD8fDSlozO5uh26VLkuuLVJulGdZclQrzLhWfDQvGD0KqdihPvPWh8gzLFo2
+oN9iFNsCsY6tVYhpyz1jkZWRtuhfnnJQSEwitHZYb72xlYA5aMyGRAqOJsrCjlpxz70jCZNOfMzInv9h
+YVmUkbQL+CclDBl6IjDNHlt9U7DwADiYVz18asG6LQG+UTlyhsPHsRRfSP0/R24A0TFvfWfZbHatfq+L
+OxiJ33yDLWJsUYWIGsy1zTLgHql7KUsrsCLmVlkr6Rtb/3qjxFlI2KkfeRvpc7fnt9avJoGDcri+FuPJ
+2pUErrVtNhAlkXPDWr/FGqKC17WQm7AriqFXURimLFoa7LABjuLsZ0KRUGsUC5Cg1waLiuYb8aEby31l
+tkRem41rNl+6PCrjZQ000iwHOPR84YGd1uug6dQjYjFlnqvxnraAJ3eBdTPhz24/kZgVBlgNUE7Y0FJR
+KGvFDY0luhZrpOV9mo7Qg9b0snrzG+Xw0jGAoX6WvLehUBuJqDGxbyyBymVhvH+EK7DRRttBwcrCFITx
+KnKHHNSn1IF37BmfQz4TNWGIjW0NZcfSmRE0EddskXTj2EOiPTZ+CUKGW2djyL2i3HrIg3VyhxzD+yGj
+9ABUqKDpMbMucV5nxMViiV9YPvZgWmKCgkBu2HOULd7p2IrfeXZNDfaZElzBI+E0+QQLCCoQ67pQ4/Ga
+tXp4Gub5Uji6IGFMNTF9AmX1mJFal4khj5VIHvS+hrEupub3utJO99e9fKbXHpPZsphGzmhBjrICeUoL
+vM+etG/kdZA8h02lXqSwUxBY8NRu5co339i6rJ+oGCLPa5c7l6yME0xJ7ypjvRhwwTLzQIf9NWye+poZ
+cJ6WA811LdsSVv5VcoSd2nu1aht5T3RAYwt/5XrWqmDKbYuOAlynNxzUw4WVCvbYvLWAbRECDquiOt+1
+2Pgj3gfNSW8UZqT2oneUltrfef+05o67SmjiE9ZapiSSoIW1upLfWaJlHB19HkWJTeWC8I5yzA8jq9i3
+MyBpkLE4ScwcR16yhZUVXcoBVOi45tpH8deGkS5d1E4E1qxL65s2GyVWtp49lsPEW2h9yh2MmgcIvI6N
+/t1EbBlqbdpLcophfBtcVrQqYXtaBLiKbHnOLnG+Q17H3P9ohz0yECvHD20N0LXgcVGfAN6wbgcA9m11
+fOcHXqLFEzaHHcmNOirg0VnI8F/KwfYk5bWPLGbLg/BesF5F4n95DNjmdCmnHNvrFqCsnS++3OvYcvob
+ZU8UhF/s2Jr5dNMnVsOKKbmuxSr7fNlyh4yQp2A+j2dyZM5cT1QAfmL5Yp5oRzmqh6Ivih1rtIvBWjDE
+pJq7H4olT9kM0lcsIp/ov/I2Lx3/D33v7ziEU1hthiBI+C/ltGNslB5GSqDxFxuMavMl1tS1U/Dl7kpR
+sN05LIbMKBG7+itJt9hoK0A7toC2Y+NRBuUeWFAn/SbKqVqfVWQFfJvdwE4bemSLqTu2KrKNr9CDVauL
+5YImR8qeY9LKkXiKDb4otzXHQqc9+9bh/hqDk8QxQXlF8vnOHgtxlKpawzDIV/TsiFedPvsWuWiNOlB8
+6f877ejYskOJz9BREunwhz/YaFXhTEjSrt4dX326Z+9XNoDFVltvl6DzaN/22qfehtw+SQA1GwftMSfG
+YoQoiw64zJbldyxANc7XdOjK2WFZSTly7JFscaHG8to8ULMHHdaw9dptIX57PVc4EAXEKHgDT/mUZdiC
+Pb7/1B7Di8e4FPHAHgO1bOTYOLIu67NQnSwL3dVuy6Abia9SiUUONgUg1o6tAS783V5WjtjsVRtd+wn1
+UTc9ZFxn5kUDCfxNSchf9z//1bmhmNra5Ka9R9zhdL1Bo35q10X4oesdewBkHBsSsl37fRJZBSX46ppn
+w/YlI1unEKj9kNElpf0AJgqEI/62jjdFU0v1aWY/4P2JvQSmwtRgN6q+ul6S2yhhcjBIWi5Uidwk5RVU
+qYQIswuSvzRQ9i4HJrWbf2fEK559vrrP+AnXV8Z+p2wOVWTT8Vmlnem+Nu5Cha8W8FykmPvtMUuYsboV
+DKLASx+p2WxKfGRvkoI93Cc2kWDicrSWby5ZRV7EcuolxojKpRtMJecVfrydkTh/wIarcpzRqwVexRyJ
+7oiMTW2KbJKQvcJJsk5iFqDntU5+hAHxlqSK5LhHNmPcaOsMkmu1mPeCpYppfepXs1EiYTq8MsrzS5Fc
+SeHJPqAzcQ34SllnHFaC2VOllA782BYAMGu1BfiXr8XM54VETOSC8Hs1laS8SCnkvUzMOucNSBS9fVFR
+9IqSbCuet/E7JRFyENKS4W6wYAyGxuj9V49DCZtKJF8WA7RJ+fbKA8Nbf1xWL3BdtoTtg6nHcnGX3J/L
+qERe6hO/uk5bJ/bXKhOYytq+M0t/CjgPdBMqu+RSlAFj4e1CPu+2qjBznBLn1UIoV4RFciFYhdeEYVmV
+VASQeH/GWsht2RV7bTNtMZ7W8zCdfxPkMy4LPKmAo9bSkHhpppwA8qSLThe5ozjmHaL2loDfb7LR+2za
+jXjksR90olJKcqsSOdn3GIJTW0tENGtTDtYS6cz+Nol22LqWdgOcUGTujbbJCwnvx2LaPSuuJyLfbMqI
+WcvW8Yhf+aAE7sp8fcnbov+JjkdGkZGemVnFUHQbR6YCGvdEnzboSMdruVxAj0YS6GjLgzoCXt9MrL+W
+uyPCjup0LZfOSDIBgUZYk3QlVTASXSk5ejzXHbC3ccOYV/sZOyYRFIwvtMf04vXEiwesbHO61s6SaYAz
+NoPHDwxES6KSiMK1pByvILcHsR79oFgaa/smnjY68sxadtJna/tsvTvMm7T5bXLrNd8PecsYiQo4kIEz
+vycWWIUd1ORgnRk0crtrTLZQVAZFLvcAs1m0uG8lKlRuppEY+4RpRv8/W2/aJNd5XgnKu1Hd6H1fr1Pt
+ZmFcqALk6Qk3qlAOECRFyNxCgKye8fQoblXeqrpEVmZ13kwASUkRAEhwEynKtkjJMm2KIkhCEAGCAAEC
+IAl+gP2d/GQw5os7goSoiZnfMPOcc57nvW+yRwuqKpd73/uuz3LOedA2iFUgTqdk7CrKRPK4IFuuZAUp
+0p+c3dn0bSuiEr1D0VChzEYsmGJdpVA6y1sojWIvMM5I/ilG1+YpDHz7vm07rBwIfx9mEau0DlnichPj
+D6gponOw+jEPiMW3uRnsRgQB7MojZBExH/lc9syen5sQvmVDqNoGVXeveCCIbc4irqEcCrwK1UbAfB5j
+6neJcpiU9XAV1WMVquJ8I6oMzBkgI5091TjQvLsxaIiaAGAH7QfIFW5YubWFc2DDSZ2qDbO8ZJvSmGEy
+EQY6he/SPW2iZl04CdFj8BPC1NfsQxWJp+vS5QccGzHm1ZGQYnbf9XrnSt1fcMJZrENNN/KLZIx4u229
+4LCxCXDM+h4BIuLdUHS0i4fEclCRt9VVds39vk4AGOACY42T/roH+JYdjd/dUwTxdMRy7EDwYwEdjP1D
+VQGGiKyT/4lKWuujDXGfbZ4zjEggKvdR8GoRthBRd3XCcvGQt8dCtU+yMOla5fsq5ydjFRsofICeRORY
+63/Qw0CLHdbFvLUVO1JAplMIIY2ixRMmbZwq1KgiT1Q16U0AAMF6Va7R9jkg8rbAlTMvdYStg/Ojy8ro
+RHRpn/4PgjfNOwppdXnJDM6lETgw3I9E9apQ0JmhNrYWFG9H3bJ4oT37vdZ5sMycS904QbtBMBNRSkEm
+MI6bA+znwRtHQMBO0UrJsc4yrDG4QqK+1uXXxZspCqcq3uf7hjSGVkc8rFm1Q/savB7YzR7om3GOb0P7
+3CxEcqVQ2q8vupMqE1jXMQbfc3Q8cJY0uBued2IEcr/4auz/4sl0nbbdIK+D/WCltn0P+RVUBavWhbWq
+gV4ilBtQBaZ//ZyZMKFj8+4hGWo9AkbsfixtX2p12dzqqj7KwrLzvBvSS2aKwiFrjVevmwTzzRHkXdXq
+wvoXChXgUOzztsrMA7X9y+6GZ9S8sflmxoEQeAzXL9MFtpFhyXb+DzumWTwYdOs0R7kt3CfqRqE6Up3l
+TqH6S8Ws1h1qNuJ+HpWd4fk9XEW40jqrLnV+YBBq7pOLzrODyY26f7QasK6BCgFKw9w+bOVONlbtkD3F
+F0VVaqhSwJiU7b96nnEPmawlZ4445gAgKp7D9JPs51Kv5rwmrcmGjnW7SbxD4Gq1WlJkb1nzD/FFwUKF
+cqh2IICLc8+B0sWmSh+OVuFh2r0dR7aH68/OY0cKdHr1I5xhHkYsdrjb6GSrrurmzMxwsdnCYfXjTZRz
+73NeuIpA47B5hhOwJ+GcBNvHI4oTnMU47x8ed8l4dAr2PNLQuE7hC1gcd1TcI0i+A7epNDdJhd5Y2m1E
+egbPT9RAKnlOzRcKi3ZrglUKUR9Wq50y/3Z2CjFXHRhFEiG2P4fuuZMg9iOBUpXcRe4ztiCdlQzFKRqG
+Mn96kz3FHcwB3iEw0B182tqrwmGfJRYNnDJyNwqdq2uTe8yHwZnPILCNULB4HAXdOH22T1QDAf5HOD++
+DkJzuRnEruE3XB1D+8DqxPUDEKjgyl7rVcdgV+53O7lXHh1yPqm9y6o7yQpXHO8io8xiPZnTimm87HIW
+5qZvAgrTd6GIgnW8cAKIn9gseFBgwQ1gyVlg3xmOxutOTNrb6XAe2h9HsTsTl8GNtsuKYLZ+lPXsFL6P
+drG7NqL9cV/8j6gWXW8tgi1/lz1bx710+A6oUy08W6fA3MIMErIFtEizwFX1kfsehguhW9d5aEhFH9SN
+wxpntrmmiAtx2OFhq8P2WYSUsL+BrkobmLkHVmxkiFIsFK6DLTh6ezuC79ztIBm3ExtVz+wU1dDZ4V2P
+cU42t4D+hmgJonhw2MBP8fNlidX8cMAI2Nu4iMg86p4hxlIovrQ3xFO0fXSW5x2ArH0PKiC1mHDj3jqO
+qHlPQ3n7u05hL5w829wt/iOqHGEeNg/6Pt9xkLyWG+taDhEXdcWTpnQ7iBxJa+BdbjfRQbUHmC9Edp8Q
+0dBbc5hSYSbZRm1ei2t0FGQMrdTw9OHHTZgtxfoYaj9ENgxBU+1iYCny+QvHHjcOFC6cR1bt/L3f+0//
+eefuDpgT8CXdeR8WodXByo17dnkGYQQfCXPZBUGanc5BYgjA+tGxPgXduPa8t2mDoDjYLsy3dHx/m/fz
+outU5WYdjEbzR2dm9hGggBpI2McYPFqCCMDqoJvwmp1lRJdwLrnADIDbI2w0D9vkRhCNoGx7Dgexz0Oc
+hFxO28exjzpbsRFZcmabyDuYF1Lb8Wj84mggZMbSAnHUy4PDPcQDSie/IR5HVvcup5q6AkLzVZ+3rn3R
+LWaP2ka3UcwXej7YIdjHaE/ViWw9dImVwudT4QSLjgtWFK6vgiAN7cNFlyRYdHJWoCG0r5W9OZ9/gaCf
+F3WiY94FKTfLHt4DSmDVdneg3qBNMdqw+WgP0qVD01T/Eaa33c58OsLyWLzW7s/VxvZLGMXBpIGmKdis
+sjtw6ksHcQyzc3pLng53LuHSkidRvgHJmK3mWy4d0rh4REzLwpmdBctu92HfK8+5tKL4ZM/pUIVvuIWz
+5p2/3CwpllqEzoIrsYAWaHu8QFmwq+Tf9yY7XIxiVB4jtQI0ELzv7Z5xzYkGu/z45tlGtZkPDQp3VDW/
+ts+Y2YT6qhPbNa0L64ZetdnRazbJJ0BoDoa97h1AN/W6YGr4cO0NeRz3tze3ji0C9L2zcF62i/40/jzd
+I6XsdTs3NrdYBVnxAaR5SKoSfTy2yV28D+e30NFLTqjcH/EdBFDW6mMzvlD8eCuWfMN3mYyG+THA5iUH
+UxRuWLl5U5Bibvs20z+QNnA1mOAiMhOGeSTdn/VguwvWYd9xGaXCet5sgmXZQcjjqv4eFg3tI5FLFZdA
+UzUtG9+35lW18wBrk1r/T+AUxPt2747rJe1glqRuClf1aNhPNk4uPYB5Yz5KH06vbfY2I4UN2oudDjbi
+wyUyvsgCQR+lcQ2VzvJ6uakbirZcIFuC9ebzqUBSnehX7EKMK23t2b11rJj3DzhbpXGs8Zd65SMT7Kx9
+xNmsg9i/5L9wG+jQ2rHzXECtpQV3N/39PV9a8ECfa4cV7rcWymx3Che88XS07RQOI3MRmZlZlYLbMati
+cDs2zLgZNYfr2u3G4WDz5k/6f/Xo6OZ7w8M3X6+gAAdlN4ZIb/60T5SYmZUexPfa3aiZzkh400dkGROc
+dlg98HEceLQ/1kW5Plip4SB5GL/xADeq6MGwKrEP4fxEyGZ886d2fdrb+P6ECqnqhsHWzetwy22tNwPo
+hsq+wLnLfQJx0x7CDqyR2Ec8CsHoEaLe9C8Q2YAWrcfL0JBRba3zhEJDe+vmJfoZ5pmaMcWIfFNu3vwp
+DN8jjJbYxgD1oS7lSrfoqJGwWg6dhDnYAmENzBDc156HSQuEQX2Be7Kh4fegpXvz0rBrrskjyKIMHikj
+MSIALquI2sBK4QftK3t24gD8pJSJtmMbJ4/7srImPud/l540aLz/SmrH1kcGJf6wNlLT2J4Lf1AXVXkI
++PHQnIlkhdmFRJ4A1zFAmL1EJ/brEnFJ3M9THLZXr1JRt7RW91gBu+b7a4iy4HVG4GHXhL/BUFEjggHH
+HdmbZqVkeKsKRS75YeXQ4zEDRWnwNzxLzT8YeA/fvHQECQPF30aD0c2frsLAsPcfhlAya8pb+5WOKuG6
+juE+IQGCBoidCvKC9d7Nc0gSHGH/SMfOv4d5xMwO4q4DzGeKc6A6ckXqKfYE/GLz8+Ylc2AGiPSw30gv
+QlF4rDL4V1LntR2J/cTxsH4abKn/mUeocX/auwOQKY/YdVANEtcDWKVeqYceFyxp13BdESBblpqm9qmb
+5xCI7N68BBql62Ng3TGjAk3qm+cGSH2vQvPGVi72XbN7YC+bg4D+WUEkBspOgJ2TvG/nYanxh9+FfmQx
+8+F6KXr2gMYZZhfjnUAfajw8k3POnIMj1BmmDNgjkJGGZNSI8W6y/5RoAjrl5jmoA1Mpu+LyXR/b54/g
+a9YuW6ZQPA5138aeyc6GR5ifuflWifwI4M6egFK8reJJwMqonl9sRJm0dWmLF3BpPQcgR9J/FuW38lyX
+zQP1T+nquxc+vPzRCSjZ4udHJz96JukA20/87WrC7334vD6XlHuhxws1XeoMf3TKP3eN14S2sK5zVfeB
+8i0/79ez/+v9C1Qafsuug9ZctU/wb3yWir03qMd7zVrymKsQvy9NY6oC37D26Oc13Omj42iz/YX7S//4
+Pb3/0XfZ9if9/lehDuyqyW+7BrBUey+4zu8Ftv0t3pO6w/YNKAI/B0Vf/MWnPgnFZbs2Wo7ne5fXwPcv
+83v2XN4+a48+Qw1ltJ/tQPvwChWQcZ/vfPQ4++k7GA22AvrBb1u7pZx8mVd7m8+pfrpovz/p/fUex+eq
+PdsFV2x+lCrIF+xbVCu2327wiS/4uHznw3eoz/xd6hVfwjhR9fiS9981b/VJqku/b5/R92/4817wn5g9
+x9mjV+1anBd87RnMG84jKUVTs9nae5U6sI9JD/bWWaizfnyKurBSjP0pX79ARdTHqH77hp32T0vd9tZP
+pK4LCwBarlSLvfzxCdd8bVVo8c2n7d0n7ZW3ocFq70tLV5qzr/PbT0Jn9tYr9u7P7Irnqbir/5+jeiyu
+8hg1ep+EVuutK7eu33rH2szrugLwo3wH98dV36QC8GP2qTPe/kdvvU11WWgFn4LGrivRvg5dXbTL3nsN
+Gr1oqf18h8qy0Iulmq7aj1Zbi6Xi+5a1/JQ/7wko2H58ktq8p3i9i67K+1Mo5NrPN12x9mn2KNRwpXH8
+UyjJ4rtU28U330B/2GdfoUbxU64g/Drvfc566Br74Yr99bbf45J95zH1J3R8+e03qb37unRv7W4/DR1e
+qvNekWYyx/SE7u9avWft/RO3rvC66L3z7FuMyxlv3+t6n+rE0DGmTi/1d9Hnp2QV2mi94v37JjWbX/cx
+fRzPQ/3msxyZU9QfPo/fNC5f8P/8kv/3l/2/v+r//cIv/fKv/Oqv/fpv/Mav/9qv/sov/9IXfnPbzN/5
+u9v/3t//+39v+9/9OzPbfvMf/MN/9I//yT/9Z//8n/+zf/pP/vE/+of/4F/8y3/1r//Nv/13//7f/7t/
++2/+9b/6l//i/7X/xD3w+y/Zz1/2//+S//9X+F786b/9pv/3C2zUr1hTfu0Lv/6F34i4lqKsYKBEhlzl
+ExQr3twEA2hih0/dQ5SF4kow3O86dNfCMWowEVJmjgJomuB7otJBNdpo2dnVUDEvCkut8Bg3T87degSv
+AZIddsJhNj+DMedlSnPAiO8Uztax83qstAyTloDoDTyspbBF3ZvIn5Nmbw8xocpFKCCbD4YgNME8x1zE
+L410haEGOxqOmegH6IUZ/E5korbA1AdNCCByNcNzyK6sZh4g2EuMFCb4RHUMgA4o/CKmzUyaPJftM0Rn
+4/tIaVB46856wLzR5NsBvIz0W0NMGxzofe5YNoGkaLpwZBHLbkqqxIza5KgrDZgFQ5yVGRPELQDSb45t
+jxFZV8NaWpDWJ6QLFXu02zCpaa21EbNmIP2LV3ApQaceqbpxiy4l6/rgjdmzEFM32jCfuW9T5wFPphXz
+a9ayZnbHIux3Ps5mva7xKvswalZDos9cRimmUNS1IZsG0nxwP49UQrLB/UcwBYlHpA6QGJwonlinSDl0
+J232IDatHHXdbFKrBp+pWGXdzLV9veoYQ/flliJv3QCiNMRtIzTl6mg2kdbWEKtEckth9mUyWPG+wMX2
+y0IEGkHvYfLB0bZ7OysxyszcHYXMH3kz9hlAOW++XtbNvTaxJ0cHA+TvSnncDsRpbIFQ4GeGbAbc/i6z
+ZeF7gyJHFEN3v7kfJNNAMw4Xbu50nA8Cf2tjXHB5xkPs4VqG3hFABhVlxQpGhUB7p5u3pqr2jgWuEHPY
+Al1VmYqZgDw0ZNlgcD2/UPYkfkvZQMcBON2is+Cg/Kp7dyyrLTCgDvRHsyinwqDyuO98UrsXmzyjNKU1
+4wGbLMQOVky8Qr5aSnpVd3R0UECxoREpZiSsIJnrLnXcWSaHvF+ClqM8Z/dOIpbJih4qRT9iQhA0efgM
+CBJThxTcwnia5m44Uyt2gyUHSy5Hoty+24yJ0A0+6qII4XadL1c+E+AKMf1rbpJdnHn3TRKvmgBGzdd9
+YgkofyYM0P7Ynx28NG4CZUM5F4j/VYF3akiMwHD2BSgHYXZdQpucNZLdJVV+BfBmpmsmLgnXm4DdyTGN
+BPGikAIOUVJ6TXLZtm/Yvk7dFHyBs7xmxsquLB1OSDJgtSFES60nPCoAhVsbA0hRVpvWeVtVgIMaopoA
+o9gR8WZI8vHKSshRT2pzsIpUHEn/nH7HRtoumrFnBT26jjS+0pBNOgP8XqAP1l3OKGsz2B0roVNuG7dt
+cYpiepa6G/CqJvLnM824UcbdMxjFrmarHuLk6kUufGazhmyHeWrKkluPuboG4slgzdoEkoSZNd4DXg9T
+ra2C7LjLMGPvFcipi02fO7aLalG9VgNGAAQeUOLUSOlDPSZIK2Mc/V/xYGFBpD0lHTz82i176zhpNzYD
+4NQAk0JxZ2HD+xVzI+OhwFpYBpF9URpdeBinpBHYp8zTbEBFBE2TwSDx/B2MSq5uFIEW6e6MvOg91coQ
+qoZFJHCLyCTuIeQBm50tQOa6cfiCQQdLpodIxd6OZuYqlFxLHUD7HDBXyB6CusExpxrfi874A/wTWeNA
+2RSbBCjYUUL4DsVZ19Y02SIyuc1D7NTx4HE8b3PWxdJIsC1BUhxYtx/dGARO0QNDjXgqNZx0pSqZixQK
+EhPgCPa0rtR+a0ACPCA77wItsy5lByQIMhfWQqwzSi4mzBM+wfBTZOG6EAWmwbEztsiqjzECEL7nc8Mh
+bsAoLEt0KpLmhWvLVt0HPBxcxGm1tAZwAyyrA44ALIpBf6U3HppdN2Z2mQ9Yb0kLpKEWWXG/9R9ZNOXK
+QGaGq/s6vxCw9QpdAPNCktK2a/UhfkCUX/cI1SibrWMO/F/1jbFrRunejtkzHUfYsUSFRG2LAEd6lYvB
+MNBijaf7qu5BoPfwhGW3y4TUbMyRwkP0Fakt1EJyoxTa0fYc2N4PxvYO7SLrFhbNGlHdLVTdug7tGjZf
+QVgdjwfdAxJVtH1BW8vTqc6Js9YC8IzAkj3KSg3xEEJB1mGrHaUiNXQ4ji26kONGBfF7KDARLjoeRvat
+igRf146Jsi/dBt+akLurgQNlFQK0R0xkWxF3Oaxn4nsvCytA8MgMMwlYmolOSBoxT8JmNSJ2gZ3vKN75
+2E6X1ojGg1QGVjcEoSA/3lBYigL5NYj34AfZEVQEaoaoHAie8MSCQQ6LrxSwVF1YjPuuAWjr9DCFNjqF
+y9dFsquSPAs1pTcrKk8Fbmmygp0TqY6ycO1zjg5mJXaA/mh5aeGBwfCoHbIwmYku4jDZFue4Wngnw9lA
+UsCeBzJ74hrAEGcayUomdIvoBj9u5r1aAjZ8eTdDm1hHOHBAUGiUzWUgl1FcSsjVS7ATDOYVwXRKVVaw
+xctTyz6zrz0CiBRCeT6HAu6rhzh3bZKR5wZeplQpjlQgnKODKxdrqEfUevHMFk4wicZC9qLHLa6LShzD
+wVGqQ3F3By1LEhM23wJ/22wOepBMqRpi8G0Poy1KSxzymmRYEny+YdYy6XLUW6h8Q6M0+hZ2YaqNAo9A
+AhFZW4LwikEGBRAm9THK3FtwnX6Yl8Jr2sXujnOZAmqY+Czv12iKbtKJeEjg8rJHkXSMP/bMVVho5qhC
+dHgIk0b4CElbAS7zW3+0nxqQnWVHYRx0cFnhKgu2VVY4r+1b88UBaigh16ZOE+FhhBSsoITzwkAJFEVQ
+YuOi2L3JznBQZbPR+B+5MI6N/07BbNbcyEauEJ2wXo32k01Krx/jtbSgxOIyKVCbTnauJckpi7qR0gBN
+R2CBaapxv++PqHKI9J5gSXV19Ou1G29m/+lJpcdgZwSelmoff2ib3iNj20tnJeDQm9Amgzut9B38OuEx
+od5zxLa1Aop6RzRtvl4frrcwW2VdEFwiSbWJrI6jIIpY83HSRx7aAWSwD6XVXI6YQOMpQ3WkISidPcn7
+ONuddh2lebviXMEeq1wvcDlSogdoj+ERDkn2lGRXblJOUNpsSObCgXEPdh07bClMwdOcNjb2KYTs2TD0
+iiRyMWsxpofC7BG9ATlFbMKYPX3b99eBGPKEum0OW+CAARNJNXdKAvfE/JQyuF3w23Guo8VdiPdpKmLf
+KJ1i6aoqkHdXEryQrifkNOzT3PTLwjXAe9jHGsolMTQzWHvQJ23h0ke2lunf1arjtImDw8zcHtc54SsN
+zRKvhkI9DGras3CAzaVvBhZTVGqq9K3rXl7SCYlbJiTNH9xcF6CGWnOQ7IL9De3JSvVn+PVIkuMkH5Wb
+Wyiwwb0Xg/LlIWV510t6SSA2q/oGBEm6RQnWIEZs0KcELgYO3/o6fDRngNMWFR750Abt82FUigICCcRk
+QOUdQttIh82+tT9sv3iurotWV1iLFSX7lwLZ6Mi27TPuxq0CIaejJEAJyyWJ+vZ7UUSJB8eZAgeyRhtp
+Z0DYXXIRUlITqaBQe2dgXUfTFIemNIexM4ptDhWAIamOzdfCU3APyPb5dTLQRhV1ALBEwVDUIYlNHRd3
+rfS5AIB0lv1ehI4rrFdJ9NGWMAtacE8A2oAuML1Ks3KRB4YNu38DEmA1VDvEHLCZSoQfNNqaGosZSXs9
++0zAFBRDo4CEh+koIFOagcE4E6MQlJg4Agccuul2QagwHkY1A6xpkEOi4IBZuZA3A8i9DOjMktkRPWg8
+qIWb0NFDANc2mZkZly52Lb3RQLQcBK+cN9EsB4MoLGGHdtcsFTXe4lgg9YdhYkVb2N2lA/d6pPz6tgMl
+rKNeY4vmrqtU7beRXVmp0AW+bwRLpDmKqIjZhf2IVASVdg+19FYQ35A0un3DBeyL3TCoEBRcdkurN5GG
+LeYkdn4c2wHgLoLRRpYxmxpxl0JaVdCyqWxfQa82ERqyPWu4b10AaYV9pCC/tWGWWnBJbM6uA2UUJIy5
+NbPdGGKiwQDrI3BKSxCh4jaItcMadhIsgMVIg+FwBTKAGdGIKMJuwYYf0Z456RzZAx5kiS+dgwiam01C
+Jhcs4DjEAzxtloxGYHnkCk6gQWtBBAC3CZ+oeyjsVYjqcauMQdkrNQtAinH0w8hxyVSorTSE+iemgd3C
+o0QRo54kUO4qt0yIGHqIyDqq2ye/HQNH9awiqH4x3F8ixx7XKYu2CpnibO4dD4aSkQI6BuKGNsGLSDdA
+zYQQrRnZdaPusuyNgtLXRMnOmG2x6tYFlE/BK48g2AgidyizIGMAB1uc2QGSWlpy5YZl8bOtDYHT6QfQ
+ejlOm10UuOD27hy9OQa+wWDmIU6vxgxyyuWqehd2LSdUzjEeLZlGQaeLiMHucdnr3mQ/j087KXBBye+C
+3Y4+wvTjUYu3aH4LIkgzzJUxoMPTpOFGuD08etQskRviYtMb1f22VMabFAuG1JWt8tmIi22icEEzGJVb
+QcMsCx+xu5AcwBUlH83T00tSqGCLNRGqyt/CcUQyugwquxm2p05Bc8NsElh56A3Hs9aJUdS4+MPqIGKe
+RZCDSmojiGoEJSCblCXZ8Kwb4ZBL1zStR1yswMYVAb6PdVFIjcZmiODxjmukuctYOPZdTgC0cHsE2Pe6
+UOZ8t5JdXQXqvFAwAbuEXYe1cJYWnHHinaoZDmGSihw8tMGWvr7PQhH3Hrr/PspCwHed7HHt7v0bCA76
+DsnDhEpkyOCFO1DsDPSqH/Tm+gZ/D5QbUmvKOJuIjQO5ei2SFD3Qtqq/fnlsx9hofKT+60t/9Yz9iYLZ
+f/Ws//K31x7726s/+NurP7n9g1dvv/jGZ2f/UoC9T8/9QIg9++X/ef7F/+vyuf/7hbc/uXr9k3ePf3Lt
+yc/Ov/zz8z9Arfo3vv/Z+Qv44pnvfvazFz599vjtF5/99OmXP/2zM59c/5PPTnz/5+//8e0nP/j0xQuf
+XH/9kw/e+uTa937x6JlPn7j+86ee/PnpG7e/+yefvfzM7ddetBc/+977t3/83mcf/PknV4/fPvfq7e+/
++cm7P/z0/F/84uwzn7154uc/PvHp69//9I9/+Ml7P7r9/IXbz57/9Pqf3r7y5GdvX/vs+KlPn/7LT0+9
+8en505+dP/PZ+eufPnP99jtvffripU+vnrz9J+duf/+GtefTZ37wyfU37JVPT7/+6bnXfv79lz678vTt
+v3jV/v25Pc73HsfFP3j59ok3rc0BJ2xs7t08Zz7DAKYbJnK5UgK2jQzJmCC4augYsG4CCZp91RPMCbYW
+8rY2w92psSU9JsJr5eZ15HTJPhdaiJXaqRIg7wbBWKEHHX5adwdhvA2PhJOVkIQAXgHUR5kUgqH6MGbJ
+Tde53MIZEy6yqT3ANRAzmtC71THhd+I63zxX1ps3X4Z9ESjZchjwqiFzLkBagm7Pm5oZd/Ona2Dpo0SW
+Y7IEIhOZVrcgTg4z9eUeatU7/9w2XQdQNR4xq0vb/pGqKBvnbA8aB2VF1VrreWvMzZdXR+KVEBjpfVg7
+ksxeQS+zV7Fw2NR4Ckd5E65GGF/Zc94LlRfsBWghULUSXnoJFac+6hn2H7HmV49EANm8/B5nSxkwvsbN
+MkyBIZCVfSDxXmYmA5BcYsTQZk6SrdK/FWjBJmCS0fODJopqn2RJ7A+85DaKjp9kYWwVBb/Kf1/lu5f5
+1gV+7ImoRK4i5Sf+9vSf+1v4/Bv89zVW7L4W11FV8mv88HNxneNshm76GptxJr5+ultDqWKw2ngJcDTp
+wt++epL1y8/wM+f5+2n+/jN+/QKLo1/li6ejSRejbLnu/njc4kJUDb8Sb1lLXuArF3k7Nen5uJeKlL/B
+eurHvan45Ud8imd4R/XYxahQ/gILnD8Vdcpf4/9Oq846r6BOuBL1zk/xuz/gTc/FXX4Q5d7Vkxeyeu0a
+uKeiSDwHzvvZOuqElznHWy95b+MBv8NC7M9HJ5yKe/0gCrefZm+kausvRUed5IfVnu/FTc9Hj6nlN2LQ
+7c+no0r9j+Je34su0gVVEv4Dvqjevsi+0nx4IwZaj6O5eiN69Tg74Q027wxbq68/EQ17HK97XXnNZ81V
+jc5TbO25KGN/IZ7iRZ8q3s/n/bnw7ln++2I84Ktxr+Ns/7Woaq9G/jj+1IdP8JG1gk7zxTRbTkfzXmOb
+9ftZbzDa/Awf4Uq057WYWm/GTdXUNzm4vJG3+bjrd6DAF8rHkOwS2fXtM/sDx1I8XB4pRVlMABZWZpOa
+xdJWYHOYWGPJNdhAqt2wVMa7UpTEFuZ1ab60azeufFBXDhBQA7WI7upwvLkCa9I2ZLOugfR5BLtTT44q
+rrIfJV1QIbN0vY2aSGgP/TygkFbNI6AvW9mj2fZbP72r+GiZPfnSZvAsOkVKYkfFRH2jFKjEq0yYmTiG
+0Hxxx9f27RwmtnxCITUIOiiSzbbQUf56SQ3i0aANvs0XyUisySDANxBUWBkio6H8LnU05W3XSXl3b+eL
+gbmnzpsbcm4q4Hmro43KIrtmCPoKidta2BpVp6q3DqURfAjFrEtHgG2VjFiPezGW83SMH1yb7cBV7hFL
+4ulr9rMnYRtV4INf+NWUVfxGwoQx/W8u06DbHzgldokRbF4F5Di5pBSF2qI3C9lNu8vezlIW4KRzgc40
+Q3meprenxOwq+wd99+noXsH/HWHQdtLCT4lx1LQYi84ZKRM9kZ0z1lQoZoh1PRvn8Bx1M0tfPcOoIA7g
+CN6+M60ArzCJFE6fA1A31SwLtUC+OmWgOqGy0ikcxWDndzLpFxJaZSZqj7NlZucB2751bNFdzS1zGcHw
+2JhEYnc18u6SswOYhhx5Twh2txL0A0JhUnqNcGLFOMEKjI3JxmQLo9GgJBez0bM7FqnSxRA2USNePRga
+nXjee9hD7NPAoHUoaLnlKjCujwG+wVjcvIjuok+RLRkpFyoxxW696flEmwf7BaQKDiPSPXDiaCKtro63
+NKwDOGxrpHOBI8nS9sOBo8ycD15LIQEkB2iLxC617sCcerWTmEysIseyVinHvtCtYvRX01zbGkMZBVep
+etR+EIvYx4PVbAUY2Ao/nhsJ5yRZqWxBchW7G7tj5UFRXKgShx+sSq2T06BB3HaFueAvp31yZuYueqnF
+KOUJ4XHU8v+QjiE/aeSxnBF4u5u+BhmJ4HMspYyAwkqIGT2AAj6siLZSTQYa89BKqrrOCrS/HEkkxRJf
+C1IEqPqdhA7YPhO6KIuFY3TI6WTZYrBOqe0KIf0Efoq4FrSWmMFnSx2Ltn2mSJCPwGMUhSJofLYV192l
+Kp3CRRT9ZP+FZkHVf4js+TFoTciYMlEPrIT5MeCDboZ6FHEhzICWPQZ2wOQ8VjQg4xZfZDiE8QxXbYD6
+Zb9wWJGjEh/BTATgEYEJsI9Z2LKJKBsUHZB1w+Mx5klA6caXYm7YbuE41dkU1KaqKOYRTjCWj4cOUce1
+07ueZh5OiHTbEkYoduq1dv0eS9ocgkOsjXuBoxo24KNBaWy8SXgJc6ton+IT/YEdinbIjhZd/wOBXSl+
+1STGCTfkVcAxPcb9iE4EoG91kkJzEBFHMgWDZPszqykPsX5lmPgcpzpHb1VBaWozcp33bHZ6IhtjSbn7
+XQlbHIAn23N6vbGyh2tQPGZ4l7OPW/9D2s3sy7vTd7caxKNxchKZxRyK6KJ4IpvZeAGZ5wFrAdgGBhnX
+imsmAY6byDP0JssJRDigWjKUjRF8G7J3601iZlHce61QIYK5UsUj7B73JUvha/3AYSIOqmTjTII+1wo+
+2rv7B5EYJRiApR4eUuFTYu4oC4QsZ6ARioMRhZ+TygP5sILl2FW2p5vA7hGAcyQpVmsf5hfQKbYPKXvv
+QDJdWfq70OP5n1I2PKDLq5CcdHdXQV/YNLG6lxaSXXJHbcbUrsWiLpYCjrtKZJPALwn82ygajPUWake9
+yWggnV6issEBGyHcvNPFf789EzuW889hq4hR/Qg1hCrtBwCx89GWfc0QzzHwkOT9Vdkn63Yu1kIlDAI5
+6Ag4q3CGMBkIJR5KViSgjMK5rpTN4YpabgQ8UtbbY6GMSxYeg11KqUxBDjDXWCOO9hUCDRuVFI485d0o
+eovN1VX3bI9QYquhKChLAEMdNuWS0hnffEU7P09sx6+F5UF1I2w0xPygFylCs62dkwgosU+XkwOSMP8N
+w7ZMkkSGp2ruSntYAtM3ylOOWTdG9FH0SeHZBUoxUmo6YYm3MaBAFIybp9g7q6hT2iKZXOubo0OWIpZ3
+gnUrjY9MTkI7F46GsY6+b3zMbDfrnPVQGikRxSk0sZRZQsatI2O4s2PRgRRHS6HRWMmdFAozv/Z2BJu4
+G1FjV+ix+eU7Z2/iEDR4HYMtP3XHaT9IzIr+g9npEnvsjMNUkRCmnUitXyJ7bZLDpNE6csi8beQqV43O
+35dm2BpAF9w7Z1Jy1BEhDPmDD0pQ4u/GLqqTriGqqOcemmBO9N+Y0sY+PhvzZTahghsVgsCukPIwzRI1
+aWFC6whCnoTqKcRyy7OhlCOzIHhflZp4+vktcFoRWEbr5oiDzr3+H3Zvyh/jvk5JeQS23pqLDFB8mZYi
+dla7uu3unH8IXFZbARIqqCZDMVhA1nXlhHP9UihPDNaaow64mnfvybq/z6QB7I2jQ2Rz+8XKJIFpmgQL
+3Y19pzssj5a9td6gHO2BmG+NkjbEvST8eQvrb1RJGyfSXcm6XkENMVqqW8lHhC0gkAHtqz4J5a4iCZil
+EyIKgcawyrDDCdQHj7REDqV0XbUe5poTUxqqUdq0J2hYp333oeSL9+qYOQflOUC9Sy+Y2YFdngZTk7CJ
+rN+nIgz3gcWsCAGS8YIKqBAj0+VEyAuiIbxWd19atSnDu3mfwJyD4STBXb+USCuoPux2DjzNiiOovkdZ
+vrDLcTdobKAnCUtcMVcRiJqeKg0dTPa9K/lZx0DazE9dV8foIOFbKE8AAWZPSgvNVAlCS/jQnNdJ40x0
+cMfMFqtVAs0hGw6Z55QPt7kWGnLJsCxaclVZIJg+JEnD4eAdwIVQAEsroE/L13ZgV+RI2ctCSHvgQhKB
+oVClVB4HUrUwC57oprJYq45CP18YJ80f9J9QyECzJGTE8j5UpWdptiJNCe0RFIR3TcyKCsc19TpSFGJG
+MX/k6YX+xz3uZsXkolpfT8BvKBsgHWs7yEMpJrM/WUEBIe4spytvX2ghBarEZDNi58NN0z18x44di151
+hb5Bq26L9Qmf3V/BPQKY0iQMclESog89nYStNMsc8TvMqYdSLMjOEy/S+VCKFUhJkDGFiiW8rQVeYoFg
+laOsk7hRJWBxwrMTjA3Rn127dkEUbVCsg2WVPEjHDMAep9iKz3YBrLqNPcFOABLXBv3D1YR7yGLUXd1z
+bxX2qYgiLAEcZJRCNWHpBw1Xvah5WFpHqgTqKBJmq3B9SlhGUnpE/ERVQeGRMrOKTQLoPoGWQmFn2zb2
+PaIiYV/ZRHX9O6CPaQMhr4MCE5LB644rr3Snks0YVVhk0vIzWwoSTw4TUzkuLy9nrx0KktIc0lmyn7/q
+ap1lX4gBkD/uTlbBYRtK+XlpXQbzj5GxSt8YwnNdB56/aRmZ8IVq81uHVKbcqkGgkQYqK4b1u47qK9Hm
+Li23wA77CsDFV5MPAe4O4khmbbpHD2tki1qU8mHp+ZRh/R+pVNiZmjSusdubyFNCqMdzctY+9uQqWkDf
+lGNEK9Lszmpkq2esdcZjUQdzcj9nE51qf+aHFo5y4AzjVoUiDSO6bTZaLtkUsAtMQV++v59grzNel9hG
+FWejIouhDVSUnSJoBvfVlfUFFHtmEvJOgHGiETTMhGJ0UTxXQMhKT8ldXuXEhuvjyrEktgRowQdQ5I7G
+NXfpaQ435f+KSTHegiITELjr9CEUhRisJRQ6dbDlp8wnFNmdQkRw9K1XWFg8sSpZkJS8zKppz99gpM2v
+qogzoJv9QnXBZNDvPOpzUvbAQYL48eRuD9UwRXx27mHdUBRwGHg1FKzXB6qjxf8KWFwZZklTJ9ZnN52r
+4+CNBjbHtg4AEXnAlhEBP1IR/QcRb/Fwqfq2XwAoe/xgtcIWKbuTg4SfOLaYZZRifTSBIyHcUJQOmCw6
+rZKlQLtzBB8RzAbhuOaKUGMS1wLnfoLKYh9x0UnX8Mb4AhvC430hRSHWq4i3M0EjH6zqydKpEgG4AINM
+OxzkHJNYmdnAe80gI3CVw4WKcTVL2kH7RSBx2AcAHUBvkWsVKx5I4VQrT/6M9pzxEP58KIZysnKPdXAj
+Ip/BNikSqXouMjXcqcfaDwivI/Yb91DZr8TQbhJIrbhL+y4QxgIV7t61i9Bp3txLmAUmhgrFXjEbG/Kg
+8FsnVgOhN/fA5tpwzDBqFbqSemcZVbdkwkQUp+y5H9Udb3ohOSz6InY2wN21+osEb04c23kkJHaS90Jr
+rlfaoeX4InvsbqLI91RKryhHUofGZUqWryIIC5vwQMUGRHYUPl4oZj8Ei4HAmTyZEjI1eeBHKmHnYGM2
+2G0pB69RRpFNL4VcwKZC1RTMAWhx8soofk60J9AHgy1HQQqJrLXPiVr2BaTGOcNcDAOAybpR4USWsFNc
+iqrEE+JjmRiCQYF1wOLjLFMqwhTeXRkGdN3jrHAxyP/gLrrqcTgW7ml0FZ+TUnwV2AyzHdVtoIaPmdaF
+doAKPWudrwo3u6vYXW3i/4t3ppjMQgpw4CSBs0QH0jMSC0lVAMVmZBeOUqzAds6RbS3D9Y1ko28P3djZ
+NelroqCj15tlhI+2yvaZwryEUtGmFSHxYYRAI90pQapuwBgjMZKFw7wwRvtjb59rCSegYKN1VP6mqTNu
+kgRB4bhV+2U5nWqJn77kQTOUvkMchdC1eZX+6ywsQOncc6QUugPMMdTe7ayFD7ZaOutRCPpuEUDDfso+
+SN8Wyod/85O/+eO/OfM3f/Y3Zz8+QZW3S//nMxBQGsKthL9fqcImdxrCcxp4ao5ooqqZTVeePXx3vFL7
+52R71a6GRiRNiwxq0s5aqfYFXkuoLrA46f5i7jswC/lGVyljdIv3CAhvPWDVFd4tuGb1gHoHastgxcFX
+iXZdJfBWwwgkvtAoH48dOuyXVLODalrKGDNrbrYBziMp7+spFQuqUcurZ89jr65ApxCudyn0l+BWqr1h
+bQ48WhM6dKD9OGipceZf9UgZogpV9AvgV9b8m5dQdCGJS6DeizXTbJ1HFIusmXZ32Jhnm1k8JW28a0hX
+SIENHAlprIWsQsUiqXRZqFd0hUpEb0ld6qOT/hp+uwgNpg/f++g5qihd56tPUBMJulNv2c937f3LH96g
+HlPSpaIq0nX+hI7VB9SZejepSV1q9aik5MS7vBPaSR+dTO9CA+sqtZWuUrXpCjWw2FJ87sOXXLvqun3m
+bVdKcoUoaVt99Jy9Az2sR/WUSUfqmitO4Te07zj74D3+K00vaU9dSwpZp5IG1AXvDehlvSfFL3yCLcS3
+vM3WllB5wt0etZ6DwtQH/rxv25Nf4Hevxm+u7yS9LHwPqlTtfdH6G+x1tVmKYlQQ452fYF+8y7/5XXvt
+UbxCJSqNyLvU/pKG1NvpOS77qMVoPUH9q5di3PxzV7MrX4unpuYW34Wal/Sp7H4vU6PquiuOQQvrvQ9/
+lO5xnSN6ydt7A33qilYYj/d99EOV7Kr0xzCW1qcYN/ZB6r8bvO9l6of9iPpZ6JPTcV/omaEtPlLSJPsg
+Zo61ECphz9nVNJbPffS4q4edtG+e5DXepsLaBSqLnUrXu/DhX6TeYFv4JDEjLtiTQ9fsGY7RBVzLR/k4
+nzY+p3l2nb+7qpeN+XuatVI3Y79f1W8ffdfnxnucR5c4d6FBxvZRrezZpFqGsX0fT5Pm/Xtst+bu96xN
+p+yqF6GidevsrTc/furWqzgpXBVMP6Uhdg2qUFKXku4XVbhO3XqDylpPf/wklLbsc9LDCpWx+O4Ve/VV
+6lWd0Gsfn7x1yb9xzfW4zkG5jApSj/HEOovf7N+T1iqodb1J/TB8421qT0FZi2pW9u47dv+n7TdXCbMr
+23PgKnafd6CqRY0yapndum4tOItv2TfO8DXoWulZoRl2PvXG096+t/xzJ29dtv/aM7Adp5KmGvXP+Pmf
+hR5bPBufxvuN6mJSLXtUuma4EpTU+GzooTf5PD+l5tdbaIv6FIpo9hoUwrwP7HlPUnvrcfvuKbZGCl34
+3GX25CnrobfwROwHqsDZ+3waKYlRse0MtM3SKOBzl6gldgpKZlAdY9/jjk9JzwzqaP453O0N9YSPtLXU
+78bWuLKZ971r0r2exvgVzAyoxoXKmV/lPMeS8+/Wa/68JzWKVFR709p+yp7/9VvvoIcxE601j3Hc3rHX
+NcPU55rJb1Dp7G2Mu/rePvWmK+W9gxnT3Dk5VK5DFWlWpUaYIdzdghbm1+s1f1XnMoFvUeVaWLieO92d
+NguWGGMw/iXyZaab8FO8WNU/Ug8HRKd4jo2wGIRktwDIqogr2uyWzcZiYpWDFuGpxqUFpcHpSSJm5ulu
+T/4Haq0aMcjMyP4Gi2S32eg9Saars7yrBfhUEiGA5+AAHwFxwF316K7EeWqVw3G/e59HNAlrCmgIdYS3
+3IusRl4veXY87M06/GITT8F0SCNMz05ILdMJYUoGZDWa/HbdHW0kq82zN/NfeejL36LG1reSlTSqlLxb
+gph2m+lZXGqzJRtmKVl3we2ambk3aJOqFyOoJMJNe5BUXlwdJCSj6i8Xyrybiwqzfm9HohpsOsIy/1tV
+wipPQiVVd2tjMHKRo1CQQdihN1psxluANirxA1zO5AGyo2jWhy6Tdd9meUz8vb2dxhrxiD5xVzvcSWWq
+B/V+F5UplhaiZNPyaIMRvpV62B1WSe1K+DXOM4xU5Bk9glVXDQAjjWf8Uqy1mdmWPJ0WKdINxhv8W1ci
+Q2jYderq0OkFnKD7v7RTro2BLzLYS1YyCM9RvoR9pjhpeP1ruKLChuZ/71tbZz5ipNCwO3P32+RCZeTB
+cLYxpw4ePFExfXlsK5XKZLkgBgUVShasVu1au/FSCy1iZEWUx5olQxlCq/tH6Ghag3fMr2uKz+6gGU5P
+q3dXhYpkjCt0Wu+wVpCZnXqsjHyrqiv5qwh8aJG1wQWFI+jkRkUQ0ncDltOspFhlgcryvsjuatdQ6FbZ
+yppvAUACmgqhmXCAjacgmfJ2VBg7qj8pFAfqpjhTocJLij0OCA9AyuV+lokokDdaagGu7b5j12GZbFwi
+GDLcQIoQcwOdoy80IiNJClSFM4eKcR5XAxMPSXn50klvsDdhbUGbaP3RZGeb7IP4ug+syrRydqD3bWPp
+gRs7AJygj5lIMGXN2IDQiAQ5fdUmS424hm3bRcI5OSQM01O1JDyBTwiBj3G3EnmTkJRmuLq3s7DUwhs9
+xREiLT5T3VNFZn1pISX4onwi9oeaalTiLZMcSDk4HFSrnjvwfEFVqEg1g4HzOtAeABd4fVir/l21r913
+UgVLwJQZ+yb7UVE9BtoSb7aYbSHY6F9PurvIzu5du34bMRTXvFhqIQ+keWKU93Z2zCchobTmB/0H+5Gh
+KqJgH3ITrkqEAPRQ+B3RDbPEgiJn1HrqlTEWAaZoDrTHeMDSOX/lsbMsZ8GdnSiflPFuN67dbfS/UKkc
+XmHHoi1STfYkCIIah1B+Q2n3vgNIETEC0rmv7TOhwjvLLU6fwVcv34QvOL7ht1K8ZXHr2GLhZ2eUwUOk
+0XMpjOduuj5Et80LFA6gUza/GXjIemnjf45h6VKuYlV95jICK5OWfdDyQbEFFZH8PyqBQcXjtgBJQ4St
+XP1v49oPVsXDGNxlxaKxUIvCn9iv32RpDWDJ9sQBUACNhEg0EDFVy9XoclMAogeoli62NereJCB+cM44
+gRJyfT5p4vUmB7LNfFSE5qMT5yaMnZKRD6ihlyXj0wPrWBKErmJ2juhWKIbQ0WHkzrDe7C+cIBgsT+5y
+21SsEaFxV7QpKblD2yeKeSAWmlCRBQq9KDjdRLVQKWR4l6gmHKT5qMaRsmeVAM/U6yxT3DMS9GYQ2ZSG
+ot8A1aFUbVQAoTWvLcQotoabPFyhK7T5s2qFNTXwOs2AN2XTlTIA5TiqdEIxh6hcUuij5g8hOyyWzn6Q
+Aim6+sDBB6NOEsVvBkOA5Np0ViF1EaqJeMEuipTaR0NAjYxlTss9SepwFhOOXWK2sqPGYyeQhNDCw00U
+2rCLBSEakXtgvXDnNi4MaUc3RtqjbsZj05hc22eiCM2Sw4IP6dzcqrXvALblibkomwn5mEAosFicK3jQ
+IOoLfiixQuVAieYS6GpQNOWEg3B3a5SVRQIihUYqjroED21ci4O6PslkbaJqnF3hXhX6wmqKbDxTY5IE
+rXsTKaII7hpyO71J1AVDmhT+QElc5Zrv75i/Dt+zr22I6iCwWUDCmqjcaustivfYwHL5yyhrNrB0RHEv
+JVUKESAmyfhy1BTDkiZIkVmpTgszJqYAG2izhxJ6+prNdUn/bVQtertweVzkHwY88ZnvpcZBNJ0VX6WG
+K9AqsrsuqWbN25A1CY0NO8oPeEG6Tth31qp+yvG2YElOGCdbzMxk9mSSTG3PniVxF+4+QsiaSnXZXTsF
+EuiVHV/fQJnHWk/BsmwO51PRJywaZl5rvrO/PZ2CG2NPoUQVp+f942RE4pBCqsL+bA/LL2FH9w+49Yq/
+NutjIeSxUo2OVhLPiEJvmBpJaLqXXNojMGICBBoJAqJt/cw6Ui3cdeiu4r9AFcDFWgnp4bLpr06EuqNW
+oH3NIWJYv93WXm8T+kU4QdbQ+aQ2UFB4QqbEvtZ4wh7l9X8CYsVThKrUwJJx35Q+xVzr+gTVxdr50FRE
+wMl5TaiB1i6WoRuXKys4G5SWXo+IQJNyREXrjRdRDTXsVOEzmZ+XuRhgbx5fcQbvjiLe9rV7200X2Sov
+u6qNnhMFZYKpWzR0S4GbGAdAULUWY54BnRstSOpywEwi1G2lavl5dtcv339INeD2tdY2DGi3Vu5OIYM5
+eoA0KFPdX9wL03CFGWHNEhDHNijWskFbLNhY7rxWQi3eT/NWgEjATryjEmqmL2E/msMtspJwQ8/Q22ok
+1sKOoAOtPRloQsrwoD5iF7sctjBP+CW/+0jG5WuKllfKvU+nq2YUc6qjkLyhfU+hiyrnH1FRppCPxgdy
+CNGGsuAUdENqt2ZZrY2EpliZpDEOwhlWuDn2o50QQk0l5My4cEsXi0Dp6xqcwEFrxeOcA0ig7CocYreU
+GjHFA8A5EboAU641OOeWFtLJWsk/p1uddpjfPdD6Fy1DtKEPsJN5uvkiRUaiRNdog9qObrWJysTjK2pq
+Q0EKgGQZcBnT0faf4OHwFlp6XgoT452E0UEldpE9a4Tz4ezSVLgTlj5EnmVM2+olDoBF24I6CcMmUE+K
+cBQlMYb2v62tOinz91BTNSo4r5DzypZRUIgz46j4BOyAzcrMT1UtPhScEHMIEnS+OdS6RgGio0KPM1KR
+Ek6zpOV3NkE+Qs67TN6inYiYWBTyUQ1llExtIaG/n7BxdT/p7lddx0HCUdFPzp3E+iOMjdoWdt37mUOm
+jRJywhkWDEZ64xqMNmlbOmOoDpIOl0inQa97BDaXamdjX3ddTOIZu4UjjQha0zqBzF0jaIicE47bQ1So
+YN1takc5L3OU7D4uaSwDILILmmjQHSRJj62jCqSEN0Mo1WyuA4kRNNdCEJsR5YzouNlMDSMkxeXKXgpq
+lr2UIzY3itpJNp05jUBFP6w5SYfNRjJVmyjK4thmr9/sGazvNbsl0dwTF/7YaH/iGrqIOLsNKEXINALw
+SToVQcktinsminBgT7XmuI/C7qQEbRmoDurfbla+DSqqxhOnJelBmAsWDHZ6xvDUvzSbGx5cOHAchtSG
+KhZbKv+cHHVieKwNh6tqS2McTOcGG2DBGuiNZjJqgnT2uxNv4xV1Mm00GXAlCHPRMbhYUkKeMSrm4TSU
+y7QGQTwQUyMqytKU4EQkx9r7ARBlwkeocRtVyP9bh3UORLIblIXQGgQaSZ2rWAB6S5CH3uTuNiexvaW/
++BDadJhbbg3OXS2nArd1GUSH7mOMgsngjq7L50T98SmgIxC0UJJ3AKFTOZo9fTsxFikRuEQHtICMOWVd
+BRKV3Ye1NYAngJllHppgXDQoeLgLNuaUcUyYKJqALiFUc8CK84mXVhyI+P6IHFMnqCbtWrAMtFXYzq1n
+Yyy9XtPZimC7bQprYhSVNvFHClhtn9kmt3v7DPrXT7I1gerzarnYXrkuaPA5R4drflAk21uhCPbZUXm/
+OCSGCQhJn0aJiSFr43puRohw+N3ALzXyg6hiSJXAlpFRrLZnVsjmYaGE+7wji9MUFGgc9B2F5d7vEmsr
+iMHRKmjsCWgodAhC+c3OYFQ6rFeG9XiTDHkddbUrpNqShqqo76ktAZbxB+DmUJ97WAX6lAaknjVKYmMT
+gxCgb69w4hVxCcWMutU9RQC+u578IXOWWVUZk1YxLLu2j/rObjlJqv4gTuqABPpurDrw0PJoU2byybSO
+G28MEOHAkAuunbTxvVYE1d25Ban6h7wAjB+Bt461H/Tvxwp4ECcRYGRiYEZdV+s+6EQhb2J+gSYtKxyH
+Z6kTMk4ynbyMD5RF0s1G/3obks5oPXJyAfXPqZtHUwhT3adBoB8ZxqL0Rrt42bJUcUeHj6MWA9Btn32o
+9ZpVs8NXS8K6H4Va6DrZ8SsTdY3D9h1+6spcjiLeAhHJHj74/l69YyTyDW9FMfBeG1Wb59ITcdAlp2GM
+hC9WiKwC35QwP66fr80fDI2EKTQmxIF7kWlbawUB8B0/x1MZDsDtiw0ImBJRyqrtXWpvelSGmUYdgoM1
+YVrd0PLYymiw27rgbttUgdaUiwrjNKmfIavsHNBCO5jmHdVTld7xy8PniwrCFImtQvTdjULuRt3uPVIZ
+q2K336i3uC49lukBQWVSw+4V7pgShkp92292QrJ+NmcJu5RbVJEwuxvaaUU+jI0Jo9mLCFDSosGkdTfB
+zi50KvxXFLNIxLjSoz8cIYeDKvaqCHLdD63qUXe575ZTLelpihdDRjGp+NADZPYlZZpWRn0UJfeOCgQ1
+NokNGVRMgyk9zIi3rDds0JDlbWeJh8jus13QX000ShzCDZYlRGnvbkMnUYkci6EN9bQKM3Ne+2DoC8ct
+LApoKlWUYvHKZ/HIqfvAYR7WlgULzwsXj6LMzh2ob1ogeEz2whrOYJA2vPA1xqJ18KD90/d+kK0iF63F
+x7eaQVQPdQoHooY+uZbjhN22zXlX7DNPgpjR7IEwirmatyM9Prvbw7EbJbXM/qTVcpiLQixj1J3ZiogA
+yE1eMwQKsz4EbtaFartYEBC2OewhRfD1EYLv1ctaVAVqjdMYYf21rsrjfh0GliOycbf72ohACuPixJGc
+KpWDm9jBsSZ83GCHx5TTUcuRl63DuevxKkxWhU1IHFESgpOLs5CGFf8RI225dZNo/evXUVKsmovKNgUm
+bRmlj0atk8kERyKbhn1Kjku1H9t/CtnasFTJhzzYWvytvtOcszSEiw6tp8ZF2OnlU4Cf+5kI+HyHpruT
+V0Q+wwQN1gf6zItAmXmQYCI4/b02BhQcML+5YrnIjjG+lR6+ppHjdgmWk1srkqfhesMguEyBG/kQrW77
+dAEfkEzkxD1UnGvSzmXWSziIJHnraXX44f7ELnQPi1g6E25ahpjZPFcsFRBkG03C/IpcBA0SGadaklAF
+hqPb9+7jBwhN7iXpWTC5FD+zWQ7D2EfInwKmz+bnU8lpl/u6mnOojWipOgONp4Ot7x8aN18qvsV4VMEA
+TJhATIZsRYBCMjPcBoMXQtcoES6iKpDsM5Qc6SlWDPeFIhRi//Qpgc8FYwYkNdn9SfqDIhJzrsjSKMGh
+IKqdItwtUdm+Iu1hE9z9BTfr4LS7wwQHVuEQ9larfjZHQ1YuDT+rIAWnUV/V36K9qD6SdntxpzjtAYyK
+pVck/e7NNoTvOzh8/1Zmbo7y9MizmbmVtu1514Fo8ohL3d+WQYRGLWvHxbqxGJrkMKWEF2I3KXXolfjY
+dNvUPWfpq5BdonMFv27LhMJQVoEk3a7bGioWROuC9S24TyIm22C1eHQaT+w7EmzEgXYOj1iC1tgelvP7
+naFh7pHfQlVxyp7LgzB8o4gL7mZbNQI+ZVteS6F5VYorx326BNxWjvi+48AarMnETJJn6TZXypYcHbji
+BhMn8lZh4bWre4496jIafRp7Xp7B9+p5J/JiTiSY4+okXEVkPQcF5HqUBmO6V/mhFDTjuuj5cko6JMqj
+I84ygDz5AYnTRE5tA5q0RezyjC9X0LRrtO8wWeyyg9zX19O5eahNnrORipM6KZflSZPpPufm+NdVCGni
+dOimZ1O1/1fPQog+sWKaEIrrluo+UTxa0d5WJxIpl1UGiG6eKzV/nSbTDzZLSdiFCqarH1A7vOWfNEG4
+AY+QRRR4LAIMUm7WFCSr7OpCh0QFKd7NTfcQZeQtWgZOIuNYI+GxIp7dLbtuWuITq1DO1S2ScK/tNmMv
+L9/AHYVOL+V7EzemkdzPqnNOxt26FJGHcAG4htJ+5AdslXfNFnq4hPZ68IqagedK2b+eTIVMClPNa/Zs
+YLkN1RxEjs0awhOHfiR7En4WB4DerUZIgFto8pCK5JgbRbb4a9+2gPU0FhS1sZtAXCzkvxnNkOzDnk6x
+JymEZQjfBuHiqI8VpRawoywsJKGmmQdVE1ZYosA72u/QrfNUxZ5UuNNco24FdfWdDKdxxwwtswxgGj1I
+PGCbBZlZyMKNLpwJAuJskeGDsvYvtACs1Wph4ejRo/Prg8F6zyvsqM0YgbCWsyy2Ys9D50XS4VOUUZnN
+Sl0tHBLAtnt2/57ZlyquOIFwXjQoA/q12UviHNtsnlf8ERYV4hTett3/Obtm1CixEzHLf3e/tKv9zM4M
+U8XjGVmvFRuv5RYEg1I7a95BdyT5jjt23DNmMg2ewhxxEUc8JJXyv3sRRRkM/QTqQujbfTChK2qvlyre
+MIfbDixn1zcsa1Wg6Am4923A+qGq328mvSPWAeW+1iyeW8IouyYfkMMLDh2GSkrI/AMtYkunZz/LFiDT
+m2SItBmHHwlondCeZc/ciH0h9pXhmJoUCK+liRVJvL1ZJNBLWqtO8Xx31EUlHWtwqyBZ9vYP2oG/Yy6D
+4UQ1UqDWUhodZl3biAwU2WRRx91l0arKLLWU1c7ddnitstx1XQrdIaBlhrbryt8SSD/pg9oz3mWf8UY3
+Wb8tpWJqNqapzDcOHRiia4q2tJphiKq0RkucyrNfO7gDfnS/S/9m1sFGyifOF5mDEWiB1aqToYyEZWea
+YHE/Y4dH6WkAJBvRvWSd06Vx3wTF1jJvqcr6ZzFL9T88NjM4JBFHbojZ/MjTOwegGyDDYi5D5/+O60o6
+fpw66gryNEUqpT3stNq8CYTuSHhQATCf/VWx5ROP1/oT+4MnHVr1YmAlN1EPW/fdKDe3fF8laWJvx75q
+xmewbGn3O9qJEQkVPBqOq8WDZGsvLNz9gPU4xsWLrUhHSkk1hIljr8jQo0VSebP5sz9rQ9Iugbbdb/0R
+Ssut/dedO5e/3cb/Z5LrwUruCTQ45yWl5Ck7l1xpZ6ZmOTiyLRUVnA35BBqK9KEJpB33W2VQrNtU1CQ0
+F61PsnOkSKXMC2Zn+zHumZO/EFgJNEg6R64nJnkqto3nhVfbWcqyzF8e08KVW3qEgNEeQrsewI3Ug1xJ
+W25zM/N95EPpm7SAfWoFOrp0Jsd2KrRkm8PWsSJLUexO1cnteTO+y+5NAODSmLbnI2Ez7ouvMxyouLN5
+ATgLVFo3eD7W/q8kJe9O0ccypoPSNC3McLW6M6qo2+eXs2hidkzNZMNYJBWwIkq0aHfBZhbo/mwtmKPT
+W4v9OTOGi7gVobihF5flPiZK7ARpwXzLEVygHmGvcNSl0mt70bHN3h6dQa2qBlRtkb5UyZYknkpHqkoD
+loNnU9Fte8Kv2PHWuAP+ULbPg/8R4haIYe3kTfYMs6Njh7tCXF9waW27xRxGVjNJtKDcH4qSEybQFEkD
+R/o89L4XsshDwSrKG3XXJsGiDaldf4U4XO11UsJK9bsxLgjgu0OK70dl320ZO8qr2fLBAojESp0ANyhK
+3LCQfZ2qjqqaj62TBwaoDs6pNJcxvZqZba3Pa3t5CvVULXSOUowh8jtrLm/BGoY75jtFq1eyle0z+Hw8
+Msfd8+Lb2nTOzEzm2COQ1gsNuRYoWdzrWY174PW2Z0STwey1r6atGINxB4Z5QXDOUJwtUiiZ09RDHd9s
+YVB7soBikYW2Q8aE5zW5GE4OifrIVR6ftdf3FS24NYMGFxlaoSvUltq/nFNalKljfHWlzckTWS58TxXj
+zvxqBJkZsul2qzaK0TLUWlpP2TuIEjOj4msolmJPHtZH18PSvHufZVuVC6GGTyS527BmkdEDmwN91sqc
+Y862vW1Zb7b+DiRFOP0Jn0nBIchKD8Jf2MpyUdzkeneOV/Cd7IDMgnyFPH4upe6wjepKusaa36NASpFk
+3Q5kthCNON/3MneqnbQFCvmm8RpujO0vlT6m7xbnl3+eOC8Ge4aaQFnctwhFMyom8TqEqTTsZ29zOaxS
+AhC/B+C82WS5TZ0XhehKgMCzkKUjX4G+C5iyDWjClzv8gDAIrhFnfxL4X0n94yClKrHzl/3Wk9k+E9A8
+h7Wk6tW44AOeCUqLdwvbK1wL7cOtYh2KGJYQ/B83nuYLvBQ0F+PMZa7WnzcyRggV6azRv23cr1NIF2mL
+66g/KFLebVgFRbQ3iX0Pc3U5Q8wzmeY5OX4x6jBmNljkMJRFS0BAduYBbJu1AMSsy6AQHd5ibUhPW/GF
+/ZnfkSUVnGuo1YzbcE+nHrMbhwx/CmBk+++x4KjiubLtqsjOMuXpXH0WdkbhuSOBeRQCpgab01VS3l1n
+DWOnKizo+SumLomraZCQdb4Pt4lUq3TkYCFPOcxmftyBUSsWiIxonL/WLC5x2OHKPQlhvC/zwR1pyGmc
+0faazIbpS1tM7UylhKEcRV/YU5klGVU8TMzaSBpBR7XWVwa97mLSlmNomMXoCRdKRCXsaS29rlatCUU8
+WFq2+Ho5LA4cGHGFUFy1iXUs+1nznblKV9ljDr9FqHM+R+iS665h5LeINYi+bm3pFQZTI/q9P8VSVJgV
+1kQ3fBM/C7L8ewGF6MIdmofagHO27w36niknQCaDb5IzE3uLvGXhXgKY6Kg6ojYTNHw48vPLq8wr7LsV
+XAo/W9k3bm8TrZVx2YOLyk2TmSnfITLwg6tUixGWimNiHdnsi71xOTucEuPJ+ZVOkW0yOn3TyWI7Oh+J
+F7B9tfVZog4EYw7MoRWcsANs8m5EuxpcZzTY6iRVcCJf2TXUkc1icdtDxxXJBrdbCFdQ9pp5g8YriIxU
+hDoxexrVNIx+9sIjyAeoP50c1XL6uB86FZA+msc9RBWWn4UGBJAy8YXsatortF/xrK9CB0+1dsOOJYK4
+HLKYZuwdPEN9EaSyv8wIJrJmwxyyr03zpyBi9uBq1fqRyAOE/hrmUvgxWJsCsmvmMKFwNPzZ4Pk6xtiv
+n9G9fJ9UqQweOgm+1QatMrd7Bp+nBKm0ZlmlPUu8cEtqUCsOzs6uznKrOS8lOdWbJwFAFWnp/9oDuMyB
+A7Mi+dQEAj+0svvY1UNVHRnCVVkbWFQpe4xzfFilJCzWW+Tt60wFPzBy/ryjWDuwV5EEgr+QAfRndHXF
+EAZRLNl2ISAsPT64l55RQhN5lVL2VTpz50LRj+uoAX5OZSmaLM4T9P8Jc6N22HqaOcrTwhzpJAuG9Uko
+Kqa90ZU0PWOWUDfZOZVUH7B1+JpFABqfl9+OYjq9NOdtfyO5GTHG1kogLHxTBznLpidEzlHWdNfaCIwG
+0EWOtyURvd2HocY6TrlV71su/lTI2967l/bkV2mXBuNRMIgEQGyCeY35wOhwJepkyuKOHP7kTB8vTEub
+AP1WMs/vdHC/vtYXynGs+xpXWzNXtRHaQzuYMo867LJteI3P48aH9ljt7SG/jSPPmRIeQWljkpmdOWR4
+xg/2QKajPW21gc7yV2HRF3dvAtod+XjtLUVkF+eSXcRsfJEkktE/3EbqtWo2ozkvZw+cwQ+LKkH8zSYx
+0yf288S80t7o5O3+gHsOFo1so9hxquTg2HgdaEFucytZ/Ed16rWeU11pWJUCNXE/2WTFCM+1al8S83A1
+PJPeBMIqJPQhhoZRcTj3kXpVvWkdM5sFslv1ZuQp3M7Bhhtxm5L5mtQtXLP+ZMFBI27XOSqc50PN8aNg
+fgw2E0sExIbwf53F5GdZ2kPmWe9sNArNb9jhjdAKyVedC7oPxmUkyDX50GE7Mc4TFcbF0S2oksB9QzMC
+a0D7pHpSh/io53GAUeAswq6XtEbrI7RqFzXLSbe2XwL3qsy924ot36mp6BdECfK0lut+kotQ3D7BukTA
+Gvl6dxCUdZk9nTiwjiVykMskzmpVXhB7+5AtIu1dOvuDber7zDjitCUBXW57ExVcEzydDoW2H8zOaqoE
+b4MUNuLSA6/dHLkGO91lG0NzAf3T+k0HPYlNiDvxhLI/M+2f3Qv/x//e/M637P//YWG92vFNeAJHi+rb
+i26T8CwHISvpZAeiBIW/NwaJTJPoLfCDbMfcSGeZbSGiEDbbMgJQYqcn+0d7UaajBJVoz+P8wY4qy+l8
++CL19S5Rae/lj45/+AHVCa9Soe5//P1G6ItBkev2uVd+8bPvf3L13O0XnlBVaP/92on0++0Xn/rFn30P
+xZefu/rJ9eu3L/zx7e9/8On1F3/xww9+8cQzn77ztv3v56dvfPLejz65+u4n1566/afPfvL+iz+/9O7P
+333JPvnzcy/cvvT8Z68/5uuOaXDriaFgBlFbBSCC1YHH65Qqty2ScbAua+MOAjTg+Th+JpQwyy44lLj+
+zZdVlDleHzSqTMfoMioPrZQPlyyyLBR4qWT9BDWYdX0gA+wT99UrQ9rDrDpspraUGFx3cwzjNXASQRR3
+Lc+mjlR/Qx1MKGy2z1gGMgPXUcEgNKM7UJw2ngt6K/rd9sX0Oy4WubMK5e42K4crRLxukKNEovSzwCEp
+gg+0xUqUHy2p3AfNQCj0/ZjKhieg/NfqQobu5kfPSE0S6n+uxdjqdkJd8jhVH6nKKPVJu8Jl6m+GWmGo
+cUKRMd3ro+cwhzk7L+bXcd1Oag1KjTLuzb/f//B9alW+zZl/BX8l5UKoFaZr2qdwxbeoU3ktu1emjUh9
+xavUFNU9QxPzcrr+ZaojhrblVb5HZU3ru7+k6qZUDpNOpn267cNHoXNJzch37XnxLFA0fQqqoa7YeSnT
+Cr3kPXwBCp1QF/U+gQZlq2552Z6e/WPjEn0D9caL6Fd7onddefECVUy/Y89+0V5zBdAPL/EqH9j3vpNp
+SF7Onv0C+0nKne+6iii1J6li+q637m3psHLE9JmrfKa3XEcVMwBPRh1P6kFKLfN9u8N1tuCqX8fHEcqV
+VJa0e9sT4u8n2ALMz9S2D3/SzlvpYHJuvWc/T/qsuZZ9F8/yAfU3b0D5kqN4BZqynIF8cvvuB9Q0vcD+
+UXulzfqB5rqN19WkFIt3P3Ad2vf4HP6ZqWe5kY3FVd2Pc+5GO4d5Z82Aq7G+qM958sOXs7XznjRioSWa
+VFQvcR69j+fj07br5TL62kaY6yvTAL3caoRaWx7lpy9aK56TjqqvKSncanzf5xrAvP2uzdz3uW6O22/v
+uf7uk3n7uR4v+Aq8xvG/QJXYk7wO7vuO3audwxjHdh0lPVTNOvY39p8/dy1b65+sNvdJVmG+ELWkT3n9
+cdVAR8npKC3tJaRVI9s+8Czfej5+uRHVse0zL7clyNvrqJD0a9k1z0b5cpaZxusn+cq5qKZ9OmvPcZZo
+v9F+Hv9ebtuGot6pWrfue43Vvc/E9Z+Pz7wR9dBTiWoWEPfP6yle9ArmuqaXbn+pvVd7X5Xwfoq/PM/P
+v5kVxb7K26m1eq53+O/jfK7noyr3B1Ga/AobpkLw0Wy8/kN2zkvTz3i8fS7Vzvaa46mXno8C6K9HqfdT
+WX151Z3Xw57nff8ivqX+fyX6JD2vjex7vG96xpPxmZf4IFdYNf7ZKNKdxvrFGMEz0bdxzVefzAqan427
+p7E+HgXBz0SN8pPx7GdjjI57jXjvqxhHvP4Gr/9jXjb1uVpyge18J0b8JF9Mn/lOlG6/ODUfvN+usetO
++y++LtIcOB5PrcLur8W9XuSTnkS9eG//1agFf7V95DRv/Qrsf3z+xayvLscKusrLnon+POMF7ts2q69+
+GCXUL7bP5b16nO15Ij7P5uHKp9nmC+zJk+yli+3Y+Tq6EaXkH8/2jcvx+pl2DqvfMMfeiK9ci8/rM1dj
+nV5j807zk5pvmv8vRZ+cjkG5EnNAbb7iDda4t3M19eETsd6f5NWuRJ+8lu0Px7NnzPYcf6LoUtw3tecC
+q9WnfYb3xdXOZ/Mnzc/jMUsv8y0WsvfxeiGbY6dizrzKm6a1prXwwvT+eZzf0lo7z2f/IK6j+a9N/vnp
+Pf9afOa1bM5oYl/M9oGfRZ+8ETv5ad+j8JXz0bAf8InS9S/ECnqv7Qe89Xi8dTZG/EyMAluibmnX+wtT
+e0U7uLHWfJ5f9odN+4P/qbHQ3HuG1+e08V36QnvG+fOmfj7FP6/yM29EI5/zZ/TPXI0Bupg94xPx7wu8
+wmW+/k52Vl7w72Lf0Hn3ahp3qkVDF/tpKiS/TT3pR5Pq86Vb74Ri88cnoC798Sm+foWKyK1Ws5SUT926
+SDXvpAOeFJZfzzSW37QrvAldcOhphzI4Xp3SEH9Myti438cn/V7hAVNVmrrXev0NtMnVpi+46jh+P4fP
++jXPfXySV1J73qLudVzzdXvvFBSp7TpX/fNQ6H6cn4K+9ROhUU4V6VeSNvlbt37Cp4DW+Jnsvk9Sn5tt
+c4VzKVJfomq3FL+hzX0Kz88+DWXst6hv/rj0xqVdTR3xS9Sf1uuPUsX8rPfb43zKM1KsvnUWz4/r8NUr
+1Et/mq9Dxfws+iB9lxrdrtd9ht94068v3XK1B9d+x5/xvM2Dp29d4hXfSnrdP8v+vUwFbe/zVuvcZkbb
+J+ehh+7j/oara7fa8U/E62lMoe99DXMvxiKe8dZraI36wa7qiuPWX49TuTzUvWNcMPPe8vnzpv32JK+M
++X/d/oJO+mW2IObGGSq+n/W2XcXrjCsi8ge3vS0nisj/3gxmJm1wx55SUmN9PPToZb99h3LTEVam+DDY
+eIPN2R1MhkivZQIUDyJ7KqK1Wg9Xx5secZzPscE5Jr9Z+hwSs81tZ2JWwHlAB8Fztq2eUu1y1p1U5D20
+NMlAP4KSuvP2TyeERIdKtYd8IsJh9yO/s7oxhuyJyBae+d3L5F9kZhhkjzDs1hBlrT2hkWEgvrgWIHQy
+Be7JUK/FprJQZb+yRyHOPQGDo8C4C/5kwRTkSToCkXUYelZRpb0dRDaT0tnB8RbSg8V+1OTKocVFW9e0
+N5l7gAFvh8luHVtsG95K/dVVc3c+d+ZHg/uQld1vXTbbIpCoLNDC61wm2YP+92QgkjmPZIs0iXFIct+O
+UV6DCgd0whuqkKDy8/3gFyKK169KZBOHpWQxhlkurqZOXko+FqrY513F2HaIqY0kYkssissMbgh10vK2
+AavIMUAph81UhOvBziOdwaxxpIIO2ty9Byp2gJvmeJNWUIY0R1yInE7AfJIyvDUnxGi4whzcoEh7Uut1
+KIXDhuuQuhYOm0WrU2HZ2RxmfSiDwiDrxfSFTQ2RHSIwXrRadPbKl5FWpCov6Il50hT5lCPMUYM12sru
+7+0sFhlx4eFx05JOnFziQmxjpgCU1nPonlAdIDu2IAHhjLUFZD1afJMpoEhHzuQB7iJHDYfOQCXtisAw
+WV97hQIVtS9brJWUBVyP2rWqPKVh02WotAMF1oecly6fSVyCY0Qy/fKlBZVWiK0zZ2m42k/AIEnSWrHZ
+dZiKSUOvzlok5jvuk1Gve5O2LLOtBeZepAUynAILLWbIUQiXJtm73kTotW/lUDZvN0c7YAFLOd5ikJMb
+Wj1/1W2m7Il9Zn3PwrGdzYY9y1GbjTtbPgrXqTTqmU15IEOQzzkKQniSDF9UtXJ2jsr0Eouc9lnepcU4
+ItmbI0Ziq1Z+B/RpiC9BfSjHuM21CU376IILYfO4SzJ5EvSI2uY9F+woV4UyaCWZAe+RLrznvPuZRmUi
+UlCqBalOfAq6qhuDTcTVVQZcBP5SIN40o7Al5ejPRttZwtVIa4dAwcSQJAq+amueNzlU74u9EP5RQlIK
+nTrpigwj3ClaPYvlqURqAg65/lAMXtVVisxhSAfsbNkZgJIj417fh1e1wYlYDHHohF8n5jvAYqka6H6A
+JTQhBR8ITU/hU+zkS+V+2x22LvsusKKi7g5x0h/5wxUtGcy25fmcZiIN9tAVCZwWhj7jvWyfORCCGISn
+E/JYcL5UOQ503gsbqwSwr586OtEVMjE7He/NrPShEArAHhVIUkH4kooqPpyVvEhI5MaRV1pZToPcGMR2
+m+FJexPs8VtboSrsguE8Xbi/JUy+mVbEpOJjS1PoYwd+iwWvNKgyrIeQLA4RFclas3wrspBewpmX1OKV
+kEDUOeWkSKQqIkLAiJhxSkSC/GD7btUxC4paueZlzWpxXsm3CIn9EM2wbSKVZ26pZPYxaWS7VDZSsymP
+LW5QEBOCLLNJ/WmcjgHhbCkCnSKWmbTNErDGJsK+fPdvQXvWgm05cTZT+etNciZpE+ck9xDikZ3n2i2y
+ejtFW0emluZlEvUpW+4bJXUIp2GPpo0uoNcyL6a5BNYcCdXhZLBTsWUKQPBu0kdNSHLRkn4D5k4Sk8QU
+G1E32nX8ihwPT+pyXeo4bAsZF61kWwH7YDQYHC4C4xPaUZw7GWGoN1nyPZU/QixbWye0bGMqEGBVgIJq
+n8gEBKEgGoRW23Ltda/nY//kBN253DxuQkd8Iq6CzwNXL2PBYAIg25qettrvcraiC362XK7mENVKHckF
+AzDQtXv2Z3C8uQPT7oufp+wVDGeUmHE5Iz+DMdPsTjwPVwZmUof81WxOAc3QaJ0iE/cEILypm6RcleSc
+HYoSlPEm5EcJgBO9KvQ5IDABTCD+yGmbTWsJ8YI+4cZmlOCQOIRVKGWGXouJy7CBFB7HLJObulb3NotQ
+2N4pFqIIvlE1gZMiiJTaKVqjpG686H2I8XlNZuztDlgTkGwMHslqxUqegHC1im1tURG7iGPFCqLA6yi0
+7Me72WKBD3RVJq7IthCvXW1bTkXEeZqwYtive7WTVu/NgPbFvnw5J5F9fMxlM3QyZRW5ipLMoipRvmJe
+E38bujMw90NEgEyaUJCCuTpleybOaiPZDqlyAM335VY9a7DWCkUTe3WkSuCr6HgCAInAExXSOiTnqR2p
+ofr0/0O2nxOEjehIFH2whRGUCOwh6bRlrZxUFaQpnE1vq4SOWZgePP42KX46WFvOmduZAwV6op8j4L+E
+fh4JbbnQQMHKyEG9j3MOIMcmV7WvZvJDQpa7/5FoA85XbqFbSXyeyMJgMkjTPKab3WdmalYlVdF6kFCu
+/EFtxNCCai0hgJCJON7p0zmnwpIOxJneVFKi3fLiA4lsi/Mnm7C2J1ZRE979eskIQVCDqD6P6eRblfbw
+wBbP5ENS9rh1SYwWSyZRK1sxbJgREQsgmdTlsrkacgWHxsNJUDLrd6P8CHVhQGPzo63uZ8ShhWXBsYKu
+nIs3ZPLsjU6FkPtyv127WB4923SyHop5c6tp1emdwqThx/6cZNN79RGxpHz2RgWQ3uSeQYYV/mpu+2fC
+dpQ1ag804Th9sQeX2gGBAel2Yfgwi5ZbaasaqNooFFZIRwn4WjrD8ufou40awf8kMjQJ15eeNKzktKsJ
+UemaMjmVpfTCVY9wBS/kDNsy5xcTpBW1SaJ+B3HHIHXIhbQ2eqWtsgvt8UMJQmwWo714pI7N28GV8jeJ
+XgwfvZWfwobvhfwYFnGCshiPGZPZHjtBKR0vnQDZ9m7NlmHWS4mWao2EkyVXZE44yzRYRWA2bcaLiaNJ
+kVs1dF9S9Ks3KLv7zYI0a5ja7W2cWRJe6qmcw1L2JHTpTBQJLuGQIcozUa5Q3TzzKJOVivFivDeqigQE
+n9ot91Td9pCgFFYAUpPTRQ3jIiPwo88eCoIOQ0Duo3RRCb4Aj+coMG2y+QJzGRwbB9EnsGhpG0mCrS9m
+nIylnPcwyapZ4bAggvZoNTSLMheHLL8W2h3YCNI2CEa3I4XV6vQOLDsiucMfss6te+Hwcoft9+1F0C3g
+T4ZuTf7YzbKHfhhHHbnynYyzux4sHnjwULHvvkN3f9VF4mV5jliSaeH3G7veXh2hDlVtobY2BTfywEAA
+b8esPNMqQfcmbUQGe1/SDBg0mYtguxL0uTZDC8+lBzX9c/2ZPo2FMCxa6LeouMEybqrFnL3Y7sg2cRaz
+yhR75LmGAmvSdxlR+K/NEPj5orNcPevfWSmtF8riftuZJ+P+YNgcNovv8ObNV3v6oz/hT2l4/fXLVPHy
+NAQhpz0s1bVWfEt5kAQJRcP5h5dkbCuelZsr9fqYq+OuAc5M1Ia9Y664o+yqNr0H1+pNUFSYozCTIyq2
+u4ZE5k9EQkU+wh7HZrsfkyuC2CpYzo2IJGLlst1r4Dl4fycnX+FjFR/1OyzlwbnlvfANf/t39/32l+6x
+/y1NpUbip00O804WptJA396RL8v5JpMGmt031RN7i755FfuGw3ICksFUrGfqxFn8GrDBozHLZUzmOsu5
+JsXU3Zf33sGZYXtnNbqj8OpTbiPPFXnwfqlXZ6okLOyZKhdmkqLYq0csreRPpPSHCgh1ipmpAHoq26rs
+GLpMzDYIcUZJCs8w5BpF82z0vD90MRWskJxE6PJnWvMIfrTCJd3J/FQcu9ifp/AajVQ0JjiSigLt3Jn3
+/UMQdSpUCYMilX4wILkC46lIcj5Y8xttUa+p+ATea40YdXJi0pYtc1mKiq0dE97xqvdSO1uPkM3WHllT
+K2BGMbbGrdOpfR07faYlWEylVnyTxAYVXMS0/nKFB9t58nTEzqwWnI37nW1NCbvalKs7szSVksiUesF7
+8CoO+t6SpphnZkgzSwxynkfJZqjbWBIY0DsWi4eb+bpb7LUZ31ZX2LXrtztT22khPtR+czYHALEzeh7B
+ybXcGC2mMiy7R3k4BNV1raEpmo05kqq4bHH2bPrsmX+4yZZOVugVj6XtLTLjZNvdrX1r9uh8Vn9sVib7
+qIt/hsspboWpVB7Ic7lzxVTUZP8jlZ09UWvOU+d/gCJOg8026wQbBck/miR0rKWJF9zx2akQGJQH2wpZ
+mT5eSo4EF65NzTHpxee6Qz1xh+sP2Q40swQVYVtAyV9dnrqM1010h2Z2KkW+bWoLW57KKLXsSrQ1q9iH
+oz6nJy9L2DliQx6b871ntRyuUKLKtpVuNTPlBcdzMlOwc2EqYJzVtVMhyGwnWppKyIajqOoph+r/fv0D
+u/Uf1v/93SdGCv80biT7wmOJyj1f3DWVWphK4yzRYHR1oqobuX1YH51i6nCamXJ2i2rVLN+mLiUNLGs2
+IlWt2gX6c2nKn6FSC3VlwyCTCY7IaE2/NEpiTkUbCvfvPZGtmHLsbh5L91HpTDmuU+G3wkuA+Ug37Ruj
+EKveiU0c2AtMxCJyC+5A+P4SoAqhNzKtndgVUWdLL3C6Jea1l2y1g7U/GLWOGSZq8gdoUZvXB2UTBw2o
+omakyVszE7Muad4Tb9BmbNDQTOjOfbK24Pu+PPVUZHV+zJ1NJwn9v6Wpo7mYMmdUTy7aQ98hyR1wx3S6
+dy3DNyW12x2FyifhB4gnp/WmytXLVIxKjhnDHXiF8TVIt9RQtuEiz6LVNj2m7JDtU6u4yCrNMoQSezUu
+un1q3Xq1Zz9NppLN0k4bho4+a7ylxEQWkoArWeRaeFnRjxR7WImjxFe4Fm7upUH3I54UplnYVNrBYCXX
+aXttSy0gwpIVxS5QXhJAoWDQVqkqCe9e5JbxFO6mmPIli8Up/FKm1MAVkIGemlYdiugBwANSIetMu92m
+UatVRottamfPSvd9/uyoi6kJM2WXAxrlQtFoIXX7WYoSczDSwFJ7GlY8h30fYQ+mHPkfol5ccstV3TH6
+DSoqnLiMmvJ7yZPNRPF2bx3LdDQ8Wuh63ggPSGLC1+226QfM46TYIG0v6nmkx4N8cgebKJ4gju2Uo5cC
+xAraZTqfhVRAMj6tazN5tC9FYbgXTIVzp5o5mp1C4gm2QroteLZthI1zMFS9saqosZGCOPnqa6pI/alf
+dmdqgp7nSX3tzHEPG7hsvrv9Wd1B7/k2LzszldLMyhIWKuDBjB1TLy2PFnuZh2BS3joJ5hMFotSw52J8
+SSNQtGclq0gFvaW2LhMLkSCMhNq2WAHfgHnaAl3KrXpUxrrdPpPhjRpXpgxusdAcY6VJj91/3712+ny1
+okQJ85AJptZgR+tG7XZaVqk/pxImTTMerqlCSrLkkpYakAO2ABm7W518w87O1qNPqeiQnM8MvQNTdnl4
+WaluQVa5T9WEQp2ckWTv4qp7V1txPtZtFaHd/VP+kU5RHGYYNS6lVOptaiavZuo69skpp3V7vaYi1yx8
+tQa9aNUdQMuAHKtTGj7h4jiablE/4P2pOeGyaoM2n4V43FaVjfu+VqnC7jIztb3Faa9dgP2SzpXZqeU/
+Bdgja7+FAqmw9WhDxS6UVYsdemE5n2jFFESS62g8BOjTV1Wrm7Polufa2tq3Z+ZnpjeKjVRQhtHLVHsW
+Kaqpic3ES9qXaEGkgJ17iuERtXXF7SpTqQKmuFvs7lRTVrLajdYjsu1H1D+xQ28QyUO8tDzlQk9F1HZ6
+9bF2L4g8g2fgXGCMZ2PgthiRaAuC292TiBzvmWVj7ZOy1QPDyVqNyZLzowcLHgGGjarIrsvseqjU5FAD
++5HjJYrMWJrZPjMVI1c1r1QeJ8E7uStm7bQ104bcfUYiheJIh6NeXEEGv1cm8b2nvSaKsHWm8BZZ5doC
+hy33rIjYe+nDvZ3+oFOo0FuUXj5wYM7sX2sXHXm0pS0FHGHYeojyTW3ylCOWoxUFZk3+ZskgQyA0rF+y
+arFJxC2Uu7x0t6zDKkty5Wp6drR7yrt2BaZWKbAoUx0GooGTLMxg4AVo2t6X3yYvIPPx+GPqbMTmkVl5
+rRfFfaItVG6WQiuTLfuMSTvPqtJXSwUeA5+aVahJ5xUjWK5varPAT+Ym+X+tGmgWVIRlHJ2uWnqDIhNM
+c2iyr5UomurLrMhPdEVjAveR+TkbrPK6qtLZKkBfFUmffNKi2dMTYUtmiaepPWRLvnJUAt227fN3b8ub
+Z8eW9e4ULDAStG6fedbCF8VU8Hw1dgEl5Kbw+XOtRhYgf1P++9IUhtxW2FZzeLABbbzmsE33PJbw4Y/B
+/ZeaxofXwF1u/0rWfaazUG/pL7LTyUcnz/sGVQiCgZ+/d4088nedI389Z6Xbu38hLvr/+D0oALTX/OiZ
+Dy9SY0AqCNkn7f3nXHuBegP867rY8c7yzu/wirUAfPCr5Kdnygv2V3tNqBGcmNICyDjwH32XqiPQc8A1
+L1LvQBxzaCOcSNd4nzz0J1KvUE2CvfE++fB/Snb7RTLJn/NeuUGVgatT3H2oBlwmG/19akq8PPV8YOo/
+m3QZTlAL4u2PHsXdWpUDfNKZ/RecGX+d/Hq0533eNd0Bo5T1xGX+vETuu38vvffehz/mp9+lqsEFZ6M9
+fuvsrTc/fir99nQwhMjiukIml/OpWnabWHOJx/YWeUevkU0WjLvgGb1in7lif708xeISn+rsrcsZO+n1
+/JNsjV3TWVWviE3lvCdw/N6w7z3m750kZ0pXuXLrOthd/gwnwAGzTz7p33uL7LEzU0y2aAsYbNGWV26d
+J//tLedsncgYZK9M/XWWz/s0eIP46+OTLVcrOGB+v/NkjL2ja7Inz9q/15zJ9TRYcH4/8dHO2VWu2XfF
+YXvMOWJnQzXH+/PJjM/2CniI7d3zZ7A7nQV/Lb13XXxAFEUze1CAmuFiKoSpkygqvfiB35mO6mYlhbGd
+evmVIMFgu8OG5rlS5Fy+1RbMW/qt7mCVmlQMPrqyp22JFbJES9MB46nMnFm+01v5dHKnaQNh6xXSelMh
+3RmCSFZRmHaVUNtIPcHPB3RR8cOUrMwTN01EdrxVHt1Q3rtTZNZeOlyg0ylQ4sz04ReXivh4G0ag8zwV
+2qYvmvlrOxanXNUp07+zvGM6C7cyldNpn3d1MDhcfy6CuPBt9NU3ZTvv2bWY1xCxC0Qdc7/U/HSyA8ds
+5h1Nob5mZvLksZ2dS9OjkqXfcOXOFLag0/I2+G5bS5B/ehI15pU8thSW7CxPRQ2nra8lc3T1+aODYbeZ
+i2xtoXStF/COG+UVH+y1hWlrzVp1tOr12rIFRa7ivn06mOG94sWwZ7Kq7WHSePRX1o2Av14x1o29xFqZ
+cnj2TKeqlorpVHwkA9x6+TJr3idJ3ukQ5xc982qz8SHr7kkrNKdmtGkL8IE8DRZBIE7ktpZ3p5haKy3c
+TDMeTm1rUz44xOodHCv2b4yHqxtZ4WJ8eNrvJb4rWzwCsmwQamZG3Ld3zOaWlsY6HrdJOFZd2qdZbGe4
+3APMChCml5am8MsZ1GM87M0yxty6pM3nvJ9Iy8kcnmJX9pNXmwWs2jQF75v5PZkkID7fei4KhBVTSRXG
+jdr+C3aVez4toLcAYnJ6N1s+mmpac6pQCvUbEC/HpfdmNbwzoz+82dD+9ZLIZpiGpqT7nrmQexZNwru5
+RrFwaKnsC6IpU3m2KA8+bt2BIlRyGXLKw5BF7tvZiOYIKsZher1yK22U5ES20ddUu1LvquiMI2ZXJlkd
+eY0glrNuRLTzuqrTa2tgq1pqQFrHAjGU07zTe6c3RonAJ78wC5OFK5vFmb7WV6lFe0IM3vL0FpSDHBkK
+HWw9NBxsleuOtkk1mHnlrFhAEYSdRMiQrJy58ut9QEKrPuI/BxEvtWds88660QHmpdKotFsVt8KMGHvE
+5qz82COhOjmNZ5Fn2cb7pzjU1u5pdI/iuQlOl5NdfLFnWfCpTXT7jDn4eSmrNFe1yTAn4nhJrDLNULck
+9tRNkYOM44gRp3OxmIbhYGlkNXekfFjMShNxR6oyqGKG7ZGq4oc5+AubW+KjYkVT7uMsZTok0JRUgJ4N
+RY7zmd7UxdD/+Y4rw0Cu5EzICiVtE2mkXA0ZkNB1wYcvumLV6RdcxsQVfn4UGikfUAzknMvm+LtXXIXJ
+VV/yViVVmR+EsFISFQmtLdw3Pu8aStbUp/iV86FC80EIy1zLtGWszY9CYwRf+TGv/BPKnpzOVKdeDKmc
+5/3KfqmXQjNHSiwvZJf9GZVhngk1lTPRjKQPIwWk1+LdN6ZEh1z5JJR/klBYGhTvydMu6+SSXCf41hsh
++fJmfP1kaLy8lmnghCQUbvTn0SrdVxov70TjXwyZsqdC1+g035Ls1Une8UleWYph3wlBp7MhovUKf/9J
+6BHl8i9SK/pZKMA8y57RlV+I+57iPHyW7byBf1+lnJerDF11CR38fjr68LlQptITnYv580M0BpeSGthr
+vNTVGMTXfGL7I1yL542e9Mn2LL+SlK9eD7GjD0JG6XJ03el43tcoJfRSfPdMXOdKjJHmRtKRey0m7emQ
+JHoxVIDOZipn78Rk1i2OxwpK8lNJRed0rKYTsRs8kY3CjVAEkr7Qyy49hA8/HyP+ZqgSnYm18KhfytfR
+d+KCL7Gf035yst0ivDPVpB/FbA9dL7+ytH0uxodjxnpPJtGw6Dp87Hn/Ct6SZFNoeeHPN+NGL8bWBBWp
+YdP8Tl5jY+doOsvDl3Mtd/fuYLAhAzltcM8sfQ6GUUzxynr18ue84pFzRudtL+el5lftEDrcZraK6fNk
+5+dM2pm4fvKry2mXfcfi53JDQC93zdyRgbKn+Jyt2uKTaA7tCT12D8UWdwqXDLp2HyijqOsYVvUSI7Go
+kQaJgGqvEHitt/A5z28GcIy83liSdYnas90u4XP30feohgk/LEJs0XxuABY+FytwDWSzTJuJXWGzM21C
+7h5ROHxv5xvI3B/uLFOTpmiRlxnaG3C8xZnPRQzmiulsfkkTW9Ya+JKfc9aX0v09w7j4uQ4QTqE1VYnV
+yemZxTTiKXN+xMvM6nDBCgpXM3zN5ONS/6Gz3PmcRzVTFFNpVVx493/KiB2eb7qrWivNDpsVoStJqBR3
+Th5RVXDXq4dw0LdGG/b+t9B/3zoC+GrmGma/CujyOT8kw8AC59HkuuD4wkFlnVJJm7zesDg4Wj5uJ+5x
+pEYyIKcoI7gme6E/kK3YWZar0mIlc4ojx7uYxoNOz65du3x97DTzsETBD5E0QXlRfCjzoyk6Quc/q62H
+WqyrmMGrcsM70w7/zntIoGWGuWwG/bnPLYdtzZ2TQ+U6Mv6zzY4/2vVfP2faLs1/7oV2JihAdgeb9f/V
+dXW/TZ5X/LqW+B/euqqSaHEMo5pW4rgKga5MbUFdUDvtYnJsJxicOPPrkETVpIUApe0orVRGhaaWrrSk
+GdAUmuFQQqTtHpE7LuFm0v6LPefrec7zgZBCYr+fz+c5v/M7vzMwwH7DgIqPYQMyKGRBQMfvY177PPoe
+WVahXwIfpMdwhh2/U8H6YjXGqaj10KPLj342/+492n609ej+o5u750ANGDFzioPcR6R7BxHwPiLwd1Dr
+GBF28//nGKkAJB/1fv14B2v+3qNv8ewvUCEY9IS3MSbwJUYRNvFbiliQojJqPuP//vEagWc9ZdbA7e+e
+xzgGRAc2OTqxyVGBh/gEl3bPsQ4vqUZDDGYH9YZXSc3WPD+/3+4n/H7bGC9BpWxzxqbfHnj0Nj4rtc9m
+EB2RqICvice6ZArXPg9IN+PKCvGHnxa//lFFElZBqe3JGp9/98kWaObR9Z7cApUyvIPTJqOzPrJafRdQ
+702+x/uj3t66xBE8nbNvzROcpU+CZ3Sad3y/bmeq09PFWmwsn2K5RUy99ATLKuEehWscktx4pQsnVcUK
+QwFbpmM2V9T6UXM/p3VYAYrhRKroSiGY/E2IAZJe6FciwSNXZ46RNUZyxRstBsub485Zhv4ihESbbsHH
+qvOdOZzCOJmlumd2GEpKds2KOOIpN+wpeEgL5CpX/Mgo7DqCOXMTemYLUOLtKdwxRSmPY//XIBItPdIv
+wur1tZLMEYXQ+uC11NEBOXdBrJmx4jgUzRvO3mi2T2O+6zD2i46COAiDT3ZJ7Oj5m82GOf/mB0Aj1Ypn
+oUHVp4CbDGXQAN20OUBRoGKgwmzoseJCb7r062K14FialpB4ullrK1gSYCzqzSxvIjoe7nZZaA4h0Udw
+PeSY6HQqeHRgcExTySXaBvzMGyQkqKRxxNqEet+sdadbS8Vq0LV7CpBq0yw1oC47CWMQFgxvBhsqMBmn
+M8JRJ4zFZTatWg5V5ZvZqVYbmDVdkBIMTEfiGtV7dsRYPSQB4Y6d6CCElY1zxVyp4GFfn2MCbfsuB5tz
+J2tQuQTU3U6ZBzHfNktgYkGrzdRmm7x+uEwec/C7VACKK2hJDaVMjINj3Q6SsH5j/pibgoxhLYRDVB+W
+nkB1JGS8KCkwokUhO0VXU2VlN4mNiMvh8HHB1ISCKeQQZ93bpQ8xxbwsqWm2PbisFNhYiD7mfioUMIPI
+QnUwJkpILEBaHqRKtOq5p/yFmCmTval4U22mw/N4j0zkPaFZUAD+WKYLPZsxM5zpFcGThYK7vNUyrhAk
+8mbvYiQzt0aJrIWOhsbjQBkztLR5+mHYHh2iw0GRJATPoawTdSILVYowhaIy+S7EiDHt6kgVk2JIrbzT
+tlkxcKCX/C2A5lFjEVuxE85ydbXPW1B/UfgoCAFzro29qC6BjfnQs8jJa/VsWoEuxEtMq64ZJlxhk0iL
+NmmlDBUcoe5a0w9KjYeLtHcC7Ip1KIoEvGcZ2r3FTsnYvF1bmPHQApfDA6YWVCVsyAdwuW6r0/ATGTJq
+IN+xYn08jtu1lz1RQp77TnkStl0sTNhV64enXwen0OghvByb2tPchLiFdUxqUzkIJxifLFyELch9QPDw
+UeWVkqM0erK2ZOb7VM54QnnfiAtRSbYRdYbCucs8rbX5gyYIrPIlFCIZK5r1/HStbtwvZBHD9tccLL68
+f0Kl+Q1Ez1w9quq+YRHNYeUJkq30y4ojT8peqkQ3jFNc6x0wG5rZt4CPJpMwmvuFyCDL4wbS1hNp52TR
+yHPsTKnwWMxCQ60YeZRK14xvD4/1SrndMesyZ0821AClAekyAcUqQDW79rIS45A6iS4PazQyAnWgnPhu
+nrghHg85FLXGMoosUDaaHwqCfdjaF9ZUzbyACvm6KDlGJVTRY6+8eOjoxOTvjx3OpCu0aA/9LFZDTMrr
+YERVfL4f3GwsMjSATydimwttyCoNFhezVvhZT9Cvb9S65nkbGtFxRhVnTZOpDPm1AgYcXYLSXnrbZqv8
+VHMZuQJmxvBbqJGmPAXOz5xGpYm2yiHWI5zM8ywy2/2cDPioEm00I9Hu7edS4IrehnHSVsF1YK7iqLeq
+H2AT+pmNohzl8k5kU0P6AO5sniIVPrPN2bHmhc5wowQ6b4qCwVj32aJwpM8whn6vZSHGNBk9c+TX9By/
+GICoZrfTZREfsxG3F3IUkPCSLxF90dXZyNszQ41ShK32zcSRcYabXjdjZarTOWW5AU4pY45GTs3GbiXv
+2i3KmPbanFXZ+3Cd8V4b8LM6VYyl4Ld5E4GPhqUvuLZwz3HVaRXImfF/tNdTVSOr0RI5PpcFoXYldpKJ
+3Cc4MAtdZxJMdOZoSBszgZxhGC0zxspZyDkVLz8GZF/Q7ZhxAXHNqmbzBFV8FMGASAKzLjtHR0IzdAhq
+jZM15NTYMYa4lwcIGyM/ZwGiTFRPlSYsKd2Y6+JCawPzJ0iYVBTKMZ+RmRIWbj0EyCPaUJKLbWWBM8pQ
+FVkjnakkWaROkZiMSK2bAHhkp6tRNbgOX50SsOooG0ID2AyPLkr8gsCh0M48p8BOK4s2gnUDzdkhzo8Z
+X5YGk0Vuss/v1isATv5F02p5oIVg5inznRRD5WAHVl4QhGH1vDzIITMunaIE8sgMcuHBMKccSujfTg+S
+P3KptikSTKDPo3Tf0U/ws39xFY38THtvUBBYGpk/MR9w7czoixbaglPHFOmjGohzdXCJYF/XR2mhrKPP
+MYezRAjK2fGTOsMB313odUW6eXFo1Mn4tEhftulR7bCJcVPNtEQcp2khJEPaantHsyAY5euT4DjEHRZ9
+vfJSCRBhdRPuxyxy5/W3hKLZ8IP9hdZMfJ75Fmq6PP5s96PHPwN3GeuFUZ2y8JPrVAUMmeTnAd/lym73
+gypsUtWOMU7/k91LjKre5QpvgKsCrruDfzMy/PhHPHOHWOXIp36AvxHKu2HuR2jsPWSVM8aMDG/mdfPd
+CVH+Gev6UV0zujvwvu/zWwTPA5gyIrjbjBj/dfcTZJ6fQ958n7FeqGz3I6PJ28j+3sYabZt4f3pTOIZ4
++PLJfXoLrtIGd/8Uj7+PNeW2ocofxlsvCmFgQwKyFzCiuoKx6TsY7aX4siUwqLpjXMLpnJzynYRrtyS8
+flGi1RTS/VrVuvpOMQEo3q0rcAk7Aj6XsyDufBV//4pZHFxLiBgXV1Xw94wKu6/hM6yo6j8P1XtZtox9
+i75c5zM85Y7UPlsTcsiG8Ar+gtff4Lg5cwmIV0NlcW4JReSBvOYFPEWfRS2j2pnbcF1OUVV4HMfgosTT
+NbliRzE31qWRP5SO2FL8HNWGjkBiuQSaCvJQul7YCI6N83dHIfBq3q0oFoqtNvUB8jGoxXakd+4JKUKR
+izymx0WpgbWOv+wgw+Qh129yT3tGqukRe+SqT025IwffwBPPuDd191qXHrmMZ91mggoX46MBdkPa5LZU
+4KKmuy5ltqSmG9/9tjd64ZjzyJ9Zx88vCY3hYyEFUZE7ep6/qfY/L4/3gYxn2843mZfiaEUPZPSuyfRZ
+kxJUdowJ68Z9Qt20ptp5012HyCE8L9ZkxtnCW2v4hD+oYnBYMRD+vG2vE8eRvNwUl5Gyao5aw2yOdZvV
+INWM4Jgt8/8PXnUe94nUaQrjQ99znsgFjFD9hFEqujLktKxhxSJ+HqlxpD65i9GuszYydROfawWyObiO
+z43wXnjspvymHEqBYBb3j3S6M+V9r776ankJRXzARwhBIXR74dvRzIYCIhRGVJtUfY4iqLeI6vdYsTM9
+XdSSdizjNwrlNiBUL6R/Y7FEgFL2UpAfAmagDllxDMdaWS9ZY6EYeyS6oAd/VKhE8Zhy+fDbxUzfcBFE
+SxrN4+8cmYAU0zm0lviGJ43VTZc4EAaeQfsgjKnkdYvqZBaP03JWfNsstu5if9wzyPjGcddmYIUGiJYE
+KrDdCYgqJ/o2Bp6wJbCTKSj0WrWwGIVBXgtCb4itYKzfu1YWeawHYrylgGihV92jV4khqSyNlQRkdgXM
+yMn++MaX8kpIkKqDl3COemGZL2HgIHsP8Nfp2NLQ4TMBXO1TluFkJb4kQzSLYon7bJ4JInJmIsxMQT1v
+BgWMLz0DjJZoIrRmhVSlXJjxeq3RnCVcgpgjuUKShNWjvUp+/BEzaNiJOLh8pDHYagyRktxJIWaDSyxu
+hkh7DY2y4ozXt7GJXvD6mTCyaowYC1e56bJcmCaOhS9YA0PXdODQtRcBp5/xytHyqkEQrBhohWFouwNp
+z17hBwjFgfc/N9MDYcVDIxMj8bgvkQ6DaEEAsDGsS5OJuofzChsq3TpIG1IBM4E6OUMM4n+CP2YxADnb
+yv3ybJ3pSQHWhrMT7BTmMbo5YZax2alWTV2suWQGJIuicHLKQk7VCVS7MRDoRX8BrvFBu9r0NBRd6KkX
+Qu45tzFPKwfeKYW4CAIXYAWOOwKXmGtoqiPPNBeFs962LhnAk/uoxC4Xm1PmnZuoLFKDYGO355IWabcD
+DMgG3YBnJLiijbaKCIJVuXidkV31yExl0hWAWBVeD5O3jT/s+gub0EtxquG6U6/N16QgiWi7+MCtN+Qg
+NYWG3PRCF8epWsdce1EVA8jvkHIWbikFCGzZtMEMCMCRsFncQRU/NPRe6fh4af7Eck5sB1ukBniAZkuF
+JUxGn8Wm6vBFHdh2g/IaLjiKywA2PPJG6B1zVuWwOBfnnFmLBqryaPiHgEgoddVFjSmYJhjOwH6sQ23B
+LghFQLu8vP/wy/sneIyZP4pDQ6MhIgU7pCdSKBi2GVZ/DPIeQ34t0CyDRRqpl3Gc7b0S6MgeMjNpcAgW
+7cnWrPktiyGYoretsGXhLCRn8wQJuViVzr6DMo1QqlZmF6/nctyAagM/dZb5xpaOo6J4CZOJEXq9PvXE
+QNJ3ZmlW3xSBynqLk6gxXIPtepmH3oRNjcQe0PXuZOHxyLd8I1+7g5N6Ap5zj2QrZrq1WeS/WAaELnAk
+5CV7Pce28BJr5bjEjh1vn38qVhIGjdqOrI3qxS/4aGrloKd+Va3Ai+ohLIpyegSiURdkYod8a2gXsc90
+JLmY2DcT1luR+rLn9WWesPz2FOLnq6YGPi8GUpAO6o+NJjYNpxjmCqbYylVSnaQFxQy4bIPmYBPn3yNY
+BZHPCvz0qklwXIzex1c/VlPvdKfVGNw7NFr0FMdtqnPsqrmYg1u6qwmT2+cf0m9BhjqSS4gDhTVHSfMO
+3lcpW8lkqMQgc52j2rBztFvT2LzDXh1EIaPES1jmNCjhODIPGq35NgmLWgWb3On6uPfFgRHw37JEG3Dw
+OhcbB+OLCfPRq3alTDevXBdpfEUeHZVSw2i3/U2XbpKqFGYE98LIirFxT9FIdGOrIcUieP2ypDMpiMRt
+amv1qOM4ruW5R0GCNFIJsE9PA48IZJCboI6Uk2U3D/FOq3Q1aB1k50OotrIRUaeC7eyjRBdVs4QDiRwc
+IiUgcQiejcqX+XQIHJFYFsjxK1V1KrRXFls5cOkwmo7TUNKTYX0Jbu4nXtK8pPphTYwpthr0fvxC8IeN
+OtqomtogoEM6s2bkKsPLK5fIPTCdWF+Qj8lloZgfhGL6CzML/1nPs0GKrS8MiR7O7pXH27srGO3YwBhC
+8Nnjaxg1WEGNIIqNbIWxC2KYm3POYhTggcRTzPUkCuJiCNukGSTRB9DWic9lrnz42TWKopjrAoe9bzn6
+FA/ZtKo88fU+oeeFJ3ZaO+b+pA60gZ+hHo7omyDmdxMrr59nfO0nRgpXFXf8DH325BZ85u9Rxydfh7Uk
+J+vLLJQqF8ZP3eVyrN6qI6MJZU3GsgEca7LYR8sOWFQBkkXoULh7435dTG0GiiPuliRrjRSUOYLTLZx+
+lZSRIl96Fo7LChElMGNxRTYjXDgDDfJW/ZS3yw2KZasM2z8rwVCxdIrZMTTdB3LtV2WRQQiNFRraaM1H
+23QPU1K8rYv+C9d2dWTw8yXQ/YTp+L6ZyiVO2yqkbFwSran64jW0eQVwhBxa0McGJkWh8mKp9AdfwGO8
+1YUnqRYSLZKyTBef9q897d952v8efm6dfdq/8rT/j2er3z5b/fTZ6rVnq1eerX7zbPXqs9Uv/nvrm//9
+83Obcr61Yv4akrjYhgQvKMrwNeL2H3IIjAM9ErXhjMuLEm6zWaVBBMeGJ2xQwGahrksSaJ+jkHCWDfz1
+Ve6wzSy2ybNXVPgmCAh+LEnQOxLD+lIe75zkk26oIKPNGrbxyjVJ+NWBm5UoNfsyZ5hyUEzHs4I07euS
+zHuRk9a5TdYwf3ZHvlqXANllOXJHQn5fqdOpfc7gM+sP1yV718+C56fdUFHI6ypCZPudzvpGTrwtrWru
+/rVXuNR6wTGbEPgHyoxQaWnRsIf/2DsJLQgQW1G3kfwbXLBC/zK16xer4RpI0yWByy/NttWxbjEL5KVk
+9VSaNMqbMbtAwoZK2cPlaghpkFczkl65lcfpJr1eSN3qGvMvYfkM3FDOBlWru3LxSuXyu/snyuVDk4ey
+996YfOvNbN/I3sx3ugSRCRwelsoyj8s6Tei6QY6EaaiCt3vKKQ7J+K1p9N9xo6faMT84k/L/sqCx2KPF
+uwwEvTkQY1BIIPKvwP2aJbessYFfJCJQleSWWYBAz3DWA+VOePVhDL2prC+Vjubnkcs4Sy796Qngb2fW
+QEghRabnu61aibrAvHl3wThK/75XobYP50F7bO8o5aEr8+h95fjj0D6QgTJScqCeeOGFFJ5W60EF+fBJ
+YjwI3jj5Ful9tZlshrFu8nbNsZSxoq3xRic72DVGentIaS32UbeRuDx3kBMENvK/HH/H0528I9mYmHt5
+l9QjFacpcQXzKVzhEulDAsOHck/91TM7dvzgm0cmsuJcrzQZCBlA98WYygR8D2gM0850fJVWYrMQzuW6
+7dPLwaT5k9bOfaWed0Fl2k6+w4eUExaymY2jOgNSbS0IFfXeNpNshPJWDiL9Nbl+zNVO5vGYNVey7uzQ
+CPLhefDGNiyegGM43mti1BG/TiFdxrtVu4I26ivp3SJGrfCh1B6iJfcSnACcJemVMkZHsJFrI0lnJdms
+s6lwLLwmV4gKR4seJzhMXhnZuy+b9Hd/G3B8zj0TLgY+ZDEEUnkHS7w8hj3Hkm3YGxzI0vvCc9qr2Egb
+MTkwg9sJOkT8/jQ3KmnzBOLJyS9wLo3ELR3NZZ75gRlhN8fndGHhOc1ZSa3T8F7PabYqsjMvqRWKVy/i
+YEruPHv9jvnYZxalzUMH9iWulTvIaLTXEa5ZX8xVa61fFraX9QCIAKg5bh8rVRiy7m8o4pJl5O0ogZ8d
+vmbCnCfH5TJKTBFva0O4Wl+l/Ix13xO6KCJPD5H51fete+aO/R8EyzZRoN8BAA==`;
+var dictionary;
+function getDictionary() {
+  if (!dictionary) {
+    dictionary = new Uint8Array(122784);
+    const gzipString = atob(dictionaryGz64);
+    const gzipBytes = new Uint8Array(gzipString.length);
+    for (let i = 0; i < gzipString.length; i++) {
+      gzipBytes[i] = gzipString.charCodeAt(i);
+    }
+    gunzip(gzipBytes, dictionary);
+  }
+  return dictionary;
+}
+
+// node_modules/hyparquet-compressors/src/brotli.transform.js
+var kIdentity = 0;
+var kOmitLast1 = 1;
+var kOmitLast2 = 2;
+var kOmitLast3 = 3;
+var kOmitLast4 = 4;
+var kOmitLast5 = 5;
+var kOmitLast6 = 6;
+var kOmitLast7 = 7;
+var kOmitLast8 = 8;
+var kOmitLast9 = 9;
+var kUppercaseFirst = 10;
+var kUppercaseAll = 11;
+var kOmitFirst1 = 12;
+var kOmitFirst2 = 13;
+var kOmitFirst3 = 14;
+var kOmitFirst4 = 15;
+var kOmitFirst5 = 16;
+var kOmitFirst6 = 17;
+var kOmitFirst7 = 18;
+var kOmitFirst9 = 20;
+var Transform = class {
+  /**
+   * @param {string} prefix
+   * @param {number} transform
+   * @param {string} suffix
+   */
+  constructor(prefix2, transform, suffix) {
+    this.prefix = new Uint8Array(prefix2.length);
+    this.transform = transform;
+    this.suffix = new Uint8Array(suffix.length);
+    for (let i = 0; i < prefix2.length; i++) this.prefix[i] = prefix2.charCodeAt(i);
+    for (let i = 0; i < suffix.length; i++) this.suffix[i] = suffix.charCodeAt(i);
+  }
+};
+var kTransforms = [
+  new Transform("", kIdentity, ""),
+  new Transform("", kIdentity, " "),
+  new Transform(" ", kIdentity, " "),
+  new Transform("", kOmitFirst1, ""),
+  new Transform("", kUppercaseFirst, " "),
+  new Transform("", kIdentity, " the "),
+  new Transform(" ", kIdentity, ""),
+  new Transform("s ", kIdentity, " "),
+  new Transform("", kIdentity, " of "),
+  new Transform("", kUppercaseFirst, ""),
+  new Transform("", kIdentity, " and "),
+  new Transform("", kOmitFirst2, ""),
+  new Transform("", kOmitLast1, ""),
+  new Transform(", ", kIdentity, " "),
+  new Transform("", kIdentity, ", "),
+  new Transform(" ", kUppercaseFirst, " "),
+  new Transform("", kIdentity, " in "),
+  new Transform("", kIdentity, " to "),
+  new Transform("e ", kIdentity, " "),
+  new Transform("", kIdentity, '"'),
+  new Transform("", kIdentity, "."),
+  new Transform("", kIdentity, '">'),
+  new Transform("", kIdentity, "\n"),
+  new Transform("", kOmitLast3, ""),
+  new Transform("", kIdentity, "]"),
+  new Transform("", kIdentity, " for "),
+  new Transform("", kOmitFirst3, ""),
+  new Transform("", kOmitLast2, ""),
+  new Transform("", kIdentity, " a "),
+  new Transform("", kIdentity, " that "),
+  new Transform(" ", kUppercaseFirst, ""),
+  new Transform("", kIdentity, ". "),
+  new Transform(".", kIdentity, ""),
+  new Transform(" ", kIdentity, ", "),
+  new Transform("", kOmitFirst4, ""),
+  new Transform("", kIdentity, " with "),
+  new Transform("", kIdentity, "'"),
+  new Transform("", kIdentity, " from "),
+  new Transform("", kIdentity, " by "),
+  new Transform("", kOmitFirst5, ""),
+  new Transform("", kOmitFirst6, ""),
+  new Transform(" the ", kIdentity, ""),
+  new Transform("", kOmitLast4, ""),
+  new Transform("", kIdentity, ". The "),
+  new Transform("", kUppercaseAll, ""),
+  new Transform("", kIdentity, " on "),
+  new Transform("", kIdentity, " as "),
+  new Transform("", kIdentity, " is "),
+  new Transform("", kOmitLast7, ""),
+  new Transform("", kOmitLast1, "ing "),
+  new Transform("", kIdentity, "\n	"),
+  new Transform("", kIdentity, ":"),
+  new Transform(" ", kIdentity, ". "),
+  new Transform("", kIdentity, "ed "),
+  new Transform("", kOmitFirst9, ""),
+  new Transform("", kOmitFirst7, ""),
+  new Transform("", kOmitLast6, ""),
+  new Transform("", kIdentity, "("),
+  new Transform("", kUppercaseFirst, ", "),
+  new Transform("", kOmitLast8, ""),
+  new Transform("", kIdentity, " at "),
+  new Transform("", kIdentity, "ly "),
+  new Transform(" the ", kIdentity, " of "),
+  new Transform("", kOmitLast5, ""),
+  new Transform("", kOmitLast9, ""),
+  new Transform(" ", kUppercaseFirst, ", "),
+  new Transform("", kUppercaseFirst, '"'),
+  new Transform(".", kIdentity, "("),
+  new Transform("", kUppercaseAll, " "),
+  new Transform("", kUppercaseFirst, '">'),
+  new Transform("", kIdentity, '="'),
+  new Transform(" ", kIdentity, "."),
+  new Transform(".com/", kIdentity, ""),
+  new Transform(" the ", kIdentity, " of the "),
+  new Transform("", kUppercaseFirst, "'"),
+  new Transform("", kIdentity, ". This "),
+  new Transform("", kIdentity, ","),
+  new Transform(".", kIdentity, " "),
+  new Transform("", kUppercaseFirst, "("),
+  new Transform("", kUppercaseFirst, "."),
+  new Transform("", kIdentity, " not "),
+  new Transform(" ", kIdentity, '="'),
+  new Transform("", kIdentity, "er "),
+  new Transform(" ", kUppercaseAll, " "),
+  new Transform("", kIdentity, "al "),
+  new Transform(" ", kUppercaseAll, ""),
+  new Transform("", kIdentity, "='"),
+  new Transform("", kUppercaseAll, '"'),
+  new Transform("", kUppercaseFirst, ". "),
+  new Transform(" ", kIdentity, "("),
+  new Transform("", kIdentity, "ful "),
+  new Transform(" ", kUppercaseFirst, ". "),
+  new Transform("", kIdentity, "ive "),
+  new Transform("", kIdentity, "less "),
+  new Transform("", kUppercaseAll, "'"),
+  new Transform("", kIdentity, "est "),
+  new Transform(" ", kUppercaseFirst, "."),
+  new Transform("", kUppercaseAll, '">'),
+  new Transform(" ", kIdentity, "='"),
+  new Transform("", kUppercaseFirst, ","),
+  new Transform("", kIdentity, "ize "),
+  new Transform("", kUppercaseAll, "."),
+  new Transform("\xC2\xA0", kIdentity, ""),
+  new Transform(" ", kIdentity, ","),
+  new Transform("", kUppercaseFirst, '="'),
+  new Transform("", kUppercaseAll, '="'),
+  new Transform("", kIdentity, "ous "),
+  new Transform("", kUppercaseAll, ", "),
+  new Transform("", kUppercaseFirst, "='"),
+  new Transform(" ", kUppercaseFirst, ","),
+  new Transform(" ", kUppercaseAll, '="'),
+  new Transform(" ", kUppercaseAll, ", "),
+  new Transform("", kUppercaseAll, ","),
+  new Transform("", kUppercaseAll, "("),
+  new Transform("", kUppercaseAll, ". "),
+  new Transform(" ", kUppercaseAll, "."),
+  new Transform("", kUppercaseAll, "='"),
+  new Transform(" ", kUppercaseAll, ". "),
+  new Transform(" ", kUppercaseFirst, '="'),
+  new Transform(" ", kUppercaseAll, "='"),
+  new Transform(" ", kUppercaseFirst, "='")
+];
+var kNumTransforms = kTransforms.length;
+function ToUpperCase(p, i) {
+  if (p[i] < 192) {
+    if (p[i] >= 97 && p[i] <= 122) {
+      p[i] ^= 32;
+    }
+    return 1;
+  }
+  if (p[i] < 224) {
+    p[i + 1] ^= 32;
+    return 2;
+  }
+  p[i + 2] ^= 5;
+  return 3;
+}
+function transformDictionaryWord(dst, idx, word, len, transform) {
+  const dictionary2 = getDictionary();
+  const { prefix: prefix2 } = kTransforms[transform];
+  const { suffix } = kTransforms[transform];
+  const t = kTransforms[transform].transform;
+  let skip = t < kOmitFirst1 ? 0 : t - (kOmitFirst1 - 1);
+  const start_idx = idx;
+  if (skip > len) skip = len;
+  let prefix_pos = 0;
+  while (prefix_pos < prefix2.length) {
+    dst[idx++] = prefix2[prefix_pos++];
+  }
+  word += skip;
+  len -= skip;
+  if (t <= kOmitLast9) len -= t;
+  for (let i = 0; i < len; i++) {
+    dst[idx++] = dictionary2[word + i];
+  }
+  let uppercase = idx - len;
+  if (t === kUppercaseFirst) {
+    ToUpperCase(dst, uppercase);
+  } else if (t === kUppercaseAll) {
+    while (len > 0) {
+      const step = ToUpperCase(dst, uppercase);
+      uppercase += step;
+      len -= step;
+    }
+  }
+  let suffix_pos = 0;
+  while (suffix_pos < suffix.length) {
+    dst[idx++] = suffix[suffix_pos++];
+  }
+  return idx - start_idx;
+}
+
+// node_modules/hyparquet-compressors/src/brotli.js
+var kNumLiteralCodes = 256;
+var kNumInsertAndCopyCodes = 704;
+var kNumBlockLengthCodes = 26;
+var kLiteralContextBits = 6;
+var kDistanceContextBits = 2;
+var NUM_DISTANCE_SHORT_CODES = 16;
+var kDistanceShortCodeIndexOffset = new Uint8Array([
+  3,
+  2,
+  1,
+  0,
+  3,
+  3,
+  3,
+  3,
+  3,
+  3,
+  2,
+  2,
+  2,
+  2,
+  2,
+  2
+]);
+var kDistanceShortCodeValueOffset = new Int8Array([
+  0,
+  0,
+  0,
+  0,
+  -1,
+  1,
+  -2,
+  2,
+  -3,
+  3,
+  -1,
+  1,
+  -2,
+  2,
+  -3,
+  3
+]);
+var offsetsByLength = new Uint32Array([
+  0,
+  0,
+  0,
+  0,
+  0,
+  4096,
+  9216,
+  21504,
+  35840,
+  44032,
+  53248,
+  63488,
+  74752,
+  87040,
+  93696,
+  100864,
+  104704,
+  106752,
+  108928,
+  113536,
+  115968,
+  118528,
+  119872,
+  121280,
+  122016
+]);
+var sizeBitsByLength = new Uint8Array([
+  0,
+  0,
+  0,
+  0,
+  10,
+  10,
+  11,
+  11,
+  10,
+  10,
+  10,
+  10,
+  10,
+  9,
+  9,
+  8,
+  7,
+  7,
+  8,
+  7,
+  7,
+  6,
+  6,
+  5,
+  5
+]);
+var minDictionaryWordLength = 4;
+var maxDictionaryWordLength = 24;
+function decompressBrotli(input, outputLength) {
+  const output = new Uint8Array(outputLength);
+  const brotliInput = new BrotliInput(input);
+  const brotliOutput = new BrotliOutput(output);
+  brotli(brotliInput, brotliOutput);
+  return output;
+}
+function brotli(input, output) {
+  let pos = 0;
+  let input_end = 0;
+  let max_distance = 0;
+  const dist_rb = [16, 15, 11, 4];
+  let dist_rb_idx = 0;
+  const hgroup = [new HuffmanTreeGroup(0, 0), new HuffmanTreeGroup(0, 0), new HuffmanTreeGroup(0, 0)];
+  const kRingBufferWriteAheadSlack = 128 + BrotliBitReader.READ_SIZE;
+  const br = new BrotliBitReader(input);
+  const window_bits = decodeWindowBits(br);
+  const max_backward_distance = (1 << window_bits) - 16;
+  const ringbuffer_size = 1 << window_bits;
+  const ringbuffer_mask = ringbuffer_size - 1;
+  const ringbuffer = new Uint8Array(ringbuffer_size + kRingBufferWriteAheadSlack + maxDictionaryWordLength);
+  const ringbuffer_end = ringbuffer_size;
+  const block_type_trees = [];
+  const block_len_trees = [];
+  for (let x = 0; x < 3 * HUFFMAN_MAX_TABLE_SIZE; x++) {
+    block_type_trees[x] = new HuffmanCode(0, 0);
+    block_len_trees[x] = new HuffmanCode(0, 0);
+  }
+  while (!input_end) {
+    const block_length = [1 << 28, 1 << 28, 1 << 28];
+    const block_type = [0];
+    const num_block_types = [1, 1, 1];
+    const block_type_rb = [0, 1, 0, 1, 0, 1];
+    const block_type_rb_index = [0];
+    for (let i = 0; i < 3; i++) {
+      hgroup[i].codes = [];
+      hgroup[i].htrees = new Uint32Array();
+    }
+    br.readMoreInput();
+    const _out = decodeMetaBlockLength(br);
+    let meta_block_remaining_len = _out.meta_block_length;
+    if (pos + meta_block_remaining_len > output.buffer.length) {
+      const tmp = new Uint8Array(pos + meta_block_remaining_len);
+      tmp.set(output.buffer);
+      output.buffer = tmp;
+    }
+    input_end = _out.input_end;
+    if (_out.is_metadata) {
+      jumpToByteBoundary(br);
+      for (; meta_block_remaining_len > 0; --meta_block_remaining_len) {
+        br.readMoreInput();
+        br.readBits(8);
+      }
+      continue;
+    }
+    if (meta_block_remaining_len === 0) continue;
+    if (_out.is_uncompressed) {
+      br.bit_pos_ = br.bit_pos_ + 7 & ~7;
+      copyUncompressedBlockToOutput(output, meta_block_remaining_len, pos, ringbuffer, ringbuffer_mask, br);
+      pos += meta_block_remaining_len;
+      continue;
+    }
+    for (let i = 0; i < 3; i++) {
+      num_block_types[i] = decodeVarLenUint8(br) + 1;
+      if (num_block_types[i] >= 2) {
+        readHuffmanCode(num_block_types[i] + 2, block_type_trees, i * HUFFMAN_MAX_TABLE_SIZE, br);
+        readHuffmanCode(kNumBlockLengthCodes, block_len_trees, i * HUFFMAN_MAX_TABLE_SIZE, br);
+        block_length[i] = readBlockLength(block_len_trees, i * HUFFMAN_MAX_TABLE_SIZE, br);
+        block_type_rb_index[i] = 1;
+      }
+    }
+    br.readMoreInput();
+    const distance_postfix_bits = br.readBits(2);
+    const num_direct_distance_codes = NUM_DISTANCE_SHORT_CODES + (br.readBits(4) << distance_postfix_bits);
+    const distance_postfix_mask = (1 << distance_postfix_bits) - 1;
+    const num_distance_codes = num_direct_distance_codes + (48 << distance_postfix_bits);
+    const context_modes = new Uint8Array(num_block_types[0]);
+    for (let i = 0; i < num_block_types[0]; i++) {
+      br.readMoreInput();
+      context_modes[i] = br.readBits(2) << 1;
+    }
+    const [num_literal_htrees, context_map] = decodeContextMap(num_block_types[0] << kLiteralContextBits, br);
+    const [num_dist_htrees, dist_context_map] = decodeContextMap(num_block_types[2] << kDistanceContextBits, br);
+    hgroup[0] = new HuffmanTreeGroup(kNumLiteralCodes, num_literal_htrees);
+    hgroup[1] = new HuffmanTreeGroup(kNumInsertAndCopyCodes, num_block_types[1]);
+    hgroup[2] = new HuffmanTreeGroup(num_distance_codes, num_dist_htrees);
+    for (let i = 0; i < 3; ++i) {
+      hgroup[i].decode(br);
+    }
+    let context_map_slice = 0;
+    let dist_context_map_slice = 0;
+    let context_mode = context_modes[block_type[0]];
+    let context_lookup_offset1 = lookupOffsets[context_mode];
+    let context_lookup_offset2 = lookupOffsets[context_mode + 1];
+    let htree_command = hgroup[1].htrees[0];
+    while (meta_block_remaining_len > 0) {
+      let distance_code;
+      br.readMoreInput();
+      if (block_length[1] === 0) {
+        decodeBlockType(
+          num_block_types[1],
+          block_type_trees,
+          1,
+          block_type,
+          block_type_rb,
+          block_type_rb_index,
+          br
+        );
+        block_length[1] = readBlockLength(block_len_trees, HUFFMAN_MAX_TABLE_SIZE, br);
+        htree_command = hgroup[1].htrees[block_type[1]];
+      }
+      block_length[1]--;
+      const cmd_code = readSymbol(hgroup[1].codes, htree_command, br);
+      let range_idx = cmd_code >> 6;
+      if (range_idx >= 2) {
+        range_idx -= 2;
+        distance_code = -1;
+      } else {
+        distance_code = 0;
+      }
+      const insertIndex = kInsertRangeLut[range_idx] + (cmd_code >> 3 & 7);
+      const insertPrefix = kInsertLengthPrefixCode[insertIndex];
+      const insertLength = insertPrefix.offset + br.readBits(insertPrefix.nbits);
+      const copyIndex = kCopyRangeLut[range_idx] + (cmd_code & 7);
+      const copyCode = kCopyLengthPrefixCode[copyIndex];
+      const copyLength = copyCode.offset + br.readBits(copyCode.nbits);
+      let prev_byte1 = ringbuffer[pos - 1 & ringbuffer_mask];
+      let prev_byte2 = ringbuffer[pos - 2 & ringbuffer_mask];
+      for (let j = 0; j < insertLength; j++) {
+        br.readMoreInput();
+        if (block_length[0] === 0) {
+          decodeBlockType(
+            num_block_types[0],
+            block_type_trees,
+            0,
+            block_type,
+            block_type_rb,
+            block_type_rb_index,
+            br
+          );
+          block_length[0] = readBlockLength(block_len_trees, 0, br);
+          const context_offset = block_type[0] << kLiteralContextBits;
+          context_map_slice = context_offset;
+          context_mode = context_modes[block_type[0]];
+          context_lookup_offset1 = lookupOffsets[context_mode];
+          context_lookup_offset2 = lookupOffsets[context_mode + 1];
+        }
+        const context3 = lookup[context_lookup_offset1 + prev_byte1] | lookup[context_lookup_offset2 + prev_byte2];
+        const literal_htree_index = context_map[context_map_slice + context3];
+        block_length[0]--;
+        prev_byte2 = prev_byte1;
+        prev_byte1 = readSymbol(hgroup[0].codes, hgroup[0].htrees[literal_htree_index], br);
+        ringbuffer[pos & ringbuffer_mask] = prev_byte1;
+        if ((pos & ringbuffer_mask) === ringbuffer_mask) {
+          output.write(ringbuffer, ringbuffer_size);
+        }
+        pos++;
+      }
+      meta_block_remaining_len -= insertLength;
+      if (meta_block_remaining_len <= 0) break;
+      if (distance_code < 0) {
+        br.readMoreInput();
+        if (block_length[2] === 0) {
+          decodeBlockType(
+            num_block_types[2],
+            block_type_trees,
+            2,
+            block_type,
+            block_type_rb,
+            block_type_rb_index,
+            br
+          );
+          block_length[2] = readBlockLength(block_len_trees, 2 * HUFFMAN_MAX_TABLE_SIZE, br);
+          dist_context_map_slice = block_type[2] << kDistanceContextBits;
+        }
+        block_length[2]--;
+        const context3 = (copyLength > 4 ? 3 : copyLength - 2) & 255;
+        const dist_htree_index = dist_context_map[dist_context_map_slice + context3];
+        distance_code = readSymbol(hgroup[2].codes, hgroup[2].htrees[dist_htree_index], br);
+        if (distance_code >= num_direct_distance_codes) {
+          distance_code -= num_direct_distance_codes;
+          const postfix = distance_code & distance_postfix_mask;
+          distance_code >>= distance_postfix_bits;
+          const nbits = (distance_code >> 1) + 1;
+          const offset = (2 + (distance_code & 1) << nbits) - 4;
+          distance_code = num_direct_distance_codes + (offset + br.readBits(nbits) << distance_postfix_bits) + postfix;
+        }
+      }
+      const distance = translateShortCodes(distance_code, dist_rb, dist_rb_idx);
+      if (distance < 0) throw new Error("[BrotliDecompress] invalid distance");
+      if (pos < max_backward_distance && max_distance !== max_backward_distance) {
+        max_distance = pos;
+      } else {
+        max_distance = max_backward_distance;
+      }
+      let copy_dst = pos & ringbuffer_mask;
+      if (distance > max_distance) {
+        if (copyLength >= minDictionaryWordLength && copyLength <= maxDictionaryWordLength) {
+          let offset = offsetsByLength[copyLength];
+          const word_id = distance - max_distance - 1;
+          const shift = sizeBitsByLength[copyLength];
+          const mask = (1 << shift) - 1;
+          const word_idx = word_id & mask;
+          const transform_idx = word_id >> shift;
+          offset += word_idx * copyLength;
+          if (transform_idx < kNumTransforms) {
+            const len = transformDictionaryWord(ringbuffer, copy_dst, offset, copyLength, transform_idx);
+            copy_dst += len;
+            pos += len;
+            meta_block_remaining_len -= len;
+            if (copy_dst >= ringbuffer_end) {
+              output.write(ringbuffer, ringbuffer_size);
+              for (let _x = 0; _x < copy_dst - ringbuffer_end; _x++)
+                ringbuffer[_x] = ringbuffer[ringbuffer_end + _x];
+            }
+          } else {
+            throw new Error("Invalid backward reference");
+          }
+        } else {
+          throw new Error("Invalid backward reference");
+        }
+      } else {
+        if (distance_code > 0) {
+          dist_rb[dist_rb_idx & 3] = distance;
+          dist_rb_idx++;
+        }
+        if (copyLength > meta_block_remaining_len) {
+          throw new Error("Invalid backward reference");
+        }
+        for (let j = 0; j < copyLength; j++) {
+          ringbuffer[pos & ringbuffer_mask] = ringbuffer[pos - distance & ringbuffer_mask];
+          if ((pos & ringbuffer_mask) === ringbuffer_mask) {
+            output.write(ringbuffer, ringbuffer_size);
+          }
+          pos++;
+          meta_block_remaining_len--;
+        }
+      }
+    }
+    pos &= 1073741823;
+  }
+  output.write(ringbuffer, pos & ringbuffer_mask);
+}
+function translateShortCodes(code, ringbuffer, index) {
+  if (code < NUM_DISTANCE_SHORT_CODES) {
+    index += kDistanceShortCodeIndexOffset[code];
+    index &= 3;
+    return ringbuffer[index] + kDistanceShortCodeValueOffset[code];
+  } else {
+    return code - NUM_DISTANCE_SHORT_CODES + 1;
+  }
+}
+
+// node_modules/hyparquet-compressors/src/lz4.js
+function decompressLz4(input, outputLength) {
+  const output = new Uint8Array(outputLength);
+  try {
+    let i = 0;
+    let o = 0;
+    while (i < input.length - 8) {
+      const expectedOutputLength = input[i++] << 24 | input[i++] << 16 | input[i++] << 8 | input[i++];
+      const expectedInputLength = input[i++] << 24 | input[i++] << 16 | input[i++] << 8 | input[i++];
+      if (input.length - i < expectedInputLength) throw new Error("lz4 not hadoop");
+      if (output.length < expectedOutputLength) throw new Error("lz4 not hadoop");
+      const chunk = lz4basic(input.subarray(i, i + expectedInputLength), output, o);
+      if (chunk !== expectedOutputLength) throw new Error("lz4 not hadoop");
+      i += expectedInputLength;
+      o += expectedOutputLength;
+      if (i === input.length) return output;
+    }
+    if (i < input.length) throw new Error("lz4 not hadoop");
+  } catch (error2) {
+    if (error2 instanceof Error && error2.message !== "lz4 not hadoop") throw error2;
+    lz4basic(input, output, 0);
+  }
+  return output;
+}
+function decompressLz4Raw(input, outputLength) {
+  const output = new Uint8Array(outputLength);
+  lz4basic(input, output, 0);
+  return output;
+}
+function lz4basic(input, output, outputIndex) {
+  let len = outputIndex;
+  for (let i = 0; i < input.length; ) {
+    const token = input[i++];
+    let literals = token >> 4;
+    if (literals) {
+      let byte2 = literals + 240;
+      while (byte2 === 255) literals += byte2 = input[i++];
+      output.set(input.subarray(i, i + literals), len);
+      len += literals;
+      i += literals;
+      if (i >= input.length) return len - outputIndex;
+    }
+    const offset = input[i++] | input[i++] << 8;
+    if (!offset || offset > len) {
+      throw new Error(`lz4 offset out of range ${offset}`);
+    }
+    let matchLength = token & 15;
+    let byte = matchLength + 240;
+    while (byte === 255) matchLength += byte = input[i++];
+    matchLength += 4;
+    let pos = len - offset;
+    const end = len + matchLength;
+    while (len < end) output[len++] = output[pos++];
+  }
+  return len - outputIndex;
+}
+
+// node_modules/hyparquet-compressors/src/compressors.js
+var compressors = {
+  SNAPPY: snappyUncompressor(),
+  // loads wasm
+  GZIP: (input, length) => gunzip(input, new Uint8Array(length)),
+  BROTLI: decompressBrotli,
+  ZSTD: (input) => decompress(input),
+  LZ4: decompressLz4,
+  LZ4_RAW: decompressLz4Raw
+};
+
+// src/reading/streamParquetFile.ts
+var MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
+async function streamParquetFile(path7, reader, onProgress) {
+  let size;
+  try {
+    const info2 = await stat2(path7);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
+    size = info2.size;
+  } catch (error2) {
+    throw fileError(error2, path7);
+  }
+  const handle = await open2(path7, "r").catch((error2) => {
+    throw fileError(error2, path7);
+  });
+  try {
+    const file = fileBuffer(handle, size);
+    let metadata;
+    try {
+      metadata = await parquetMetadataAsync(file);
+    } catch (error2) {
+      throw notParquet(error2, path7);
+    }
+    const names = topLevelColumns(metadata, path7);
+    reader.record([...names], names.length, 1);
+    const used = reader.usedColumns;
+    const usedNames = used.map((i) => names[i]);
+    const fields = new Array(names.length).fill("");
+    const total = Number(metadata.num_rows);
+    let groupStart = 0;
+    for (const group2 of metadata.row_groups) {
+      const groupRows2 = Number(group2.num_rows);
+      const groupEnd = groupStart + groupRows2;
+      const columns = usedNames.map(() => new Array(groupRows2));
+      const slot = new Map(usedNames.map((name, k) => [name, k]));
+      try {
+        await parquetRead({
+          file,
+          metadata,
+          columns: usedNames,
+          rowStart: groupStart,
+          rowEnd: groupEnd,
+          compressors,
+          parsers: TEXT_PARSERS,
+          onChunk: ({ columnName, columnData, rowStart }) => {
+            const target = columns[slot.get(columnName)];
+            const offset = rowStart - groupStart;
+            for (let i = 0; i < columnData.length; i++) {
+              const at = offset + i;
+              if (at >= 0 && at < groupRows2) target[at] = columnData[i];
+            }
+          }
+        });
+      } catch (error2) {
+        throw notParquet(error2, path7);
+      }
+      for (let r = 0; r < groupRows2; r++) {
+        const line = groupStart + r + 2;
+        for (let k = 0; k < used.length; k++) {
+          fields[used[k]] = fieldValue(columns[k][r], path7, line, usedNames[k]);
+        }
+        reader.record(fields, names.length, line);
+      }
+      groupStart = groupEnd;
+      onProgress?.(total > 0 ? Math.round(size * groupStart / total) : size, size);
+    }
+  } finally {
+    await handle.close();
+  }
+  return sha256Of(path7);
+}
+function fileBuffer(handle, size) {
+  return {
+    byteLength: size,
+    async slice(start, end) {
+      const stop = Math.min(end ?? size, size);
+      const length = Math.max(0, stop - start);
+      const bytes = new Uint8Array(length);
+      let done = 0;
+      while (done < length) {
+        const { bytesRead } = await handle.read(bytes, done, length - done, start + done);
+        if (bytesRead === 0) break;
+        done += bytesRead;
+      }
+      return bytes.buffer;
+    }
+  };
+}
+function topLevelColumns(metadata, path7) {
+  const schema = metadata.schema;
+  const root = schema[0];
+  const names = [];
+  let i = 1;
+  const count = root?.num_children ?? 0;
+  for (let c = 0; c < count && i < schema.length; c++) {
+    const element = schema[i];
+    if ((element.num_children ?? 0) > 0) {
+      throw new InputError(
+        `the Parquet column "${echo(element.name)}" is nested (a list, struct or map); forecast files need flat columns`,
+        { file: path7, column: element.name }
+      );
+    }
+    names.push(element.name);
+    i++;
+  }
+  return names;
+}
+var TEXT_PARSERS = {
+  dateFromDays: (days) => isoDate(days),
+  timestampFromMilliseconds: (ms) => isoTimestamp(ms, 3),
+  timestampFromMicroseconds: (us) => isoTimestamp(us, 6),
+  timestampFromNanoseconds: (ns) => isoTimestamp(ns, 9)
+};
+function isoDate(days) {
+  return new Date(days * 864e5).toISOString().slice(0, 10);
+}
+function isoTimestamp(count, digits) {
+  const unit = 10n ** BigInt(digits);
+  let seconds = count / unit;
+  let fraction = count % unit;
+  if (fraction < 0n) {
+    fraction += unit;
+    seconds -= 1n;
+  }
+  const text2 = new Date(Number(seconds) * 1e3).toISOString().slice(0, 19);
+  const f = fraction === 0n ? "" : `.${fraction.toString().padStart(digits, "0").replace(/0+$/, "")}`;
+  return `${text2}${f}Z`;
+}
+function fieldValue(value, path7, line, column) {
+  switch (typeof value) {
+    case "string":
+    case "number":
+      return value;
+    case "bigint":
+      return value >= -MAX_EXACT && value <= MAX_EXACT ? Number(value) : value.toString();
+    case "boolean":
+      return value ? "true" : "false";
+    case "undefined":
+      return "";
+    case "object":
+      if (value === null) return "";
+      if (value instanceof Date) return value.toISOString();
+      if (value instanceof Uint8Array) {
+        throw new InputError("a binary Parquet value that is not UTF-8 text", {
+          file: path7,
+          line,
+          column
+        });
+      }
+      throw new InputError(
+        "a Parquet value that is neither a number nor text (binary or nested data)",
+        { file: path7, line, column }
+      );
+    default:
+      throw new InputError("a Parquet value of an unsupported type", { file: path7, line, column });
+  }
+}
+async function sha256Of(path7) {
+  const hash = createHash("sha256");
+  await pipeline(createReadStream(path7, { highWaterMark: 1 << 20 }), async (source) => {
+    for await (const chunk of source) hash.update(chunk);
+  });
+  return `sha256:${hash.digest("hex")}`;
+}
+function notParquet(error2, path7) {
+  if (error2 instanceof InputError) return error2;
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path7 });
+}
+function fileError(error2, path7) {
+  if (error2 instanceof InputError) return error2;
+  const code = error2?.code;
+  if (code === "ENOENT") return new InputError("no such file", { file: path7 });
+  if (code === "EACCES" || code === "EPERM")
+    return new InputError("permission denied", { file: path7 });
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`cannot read the file: ${message}`, { file: path7 });
+}
+
+// src/reading/streamTextFile.ts
+import { createHash as createHash2 } from "node:crypto";
+import { createReadStream as createReadStream2 } from "node:fs";
+import { stat as stat3 } from "node:fs/promises";
+import { pipeline as pipeline2 } from "node:stream/promises";
 import { TextDecoder as TextDecoder2 } from "node:util";
 import { createGunzip } from "node:zlib";
 var CHUNK_BYTES = 1 << 20;
 async function streamTextFile(path7, gzip, sink, onProgress) {
   let totalBytes;
   try {
-    const info2 = await stat2(path7);
+    const info2 = await stat3(path7);
     if (!info2.isFile()) throw new InputError("not a regular file", { file: path7 });
     totalBytes = info2.size;
   } catch (error2) {
     throw asInputError(error2, path7);
   }
-  const hash = createHash("sha256");
-  const decoder = new TextDecoder2("utf-8", { fatal: true });
+  const hash = createHash2("sha256");
+  const decoder4 = new TextDecoder2("utf-8", { fatal: true });
   let bytesRead = 0;
   const tap = async function* (source) {
     for await (const chunk of source) {
@@ -43972,28 +52947,77 @@ async function streamTextFile(path7, gzip, sink, onProgress) {
       yield chunk;
     }
   };
+  let newlines = 0;
   const consume = async (source) => {
-    for await (const chunk of source) sink.push(decode(decoder, chunk, true, path7, sink));
-    sink.push(decode(decoder, void 0, false, path7, sink));
+    for await (const chunk of source) {
+      const nul = chunk.indexOf(0);
+      if (nul >= 0) throw notText(chunk, nul, newlines, path7, "a NUL byte");
+      let text2;
+      try {
+        text2 = decoder4.decode(chunk, { stream: true });
+      } catch {
+        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path7, "bytes that are not UTF-8");
+      }
+      newlines += countByte(chunk, 10);
+      sink.push(text2);
+    }
+    try {
+      sink.push(decoder4.decode(void 0, { stream: false }));
+    } catch {
+      throw new InputError(
+        `the file is not valid UTF-8 text: it ends inside a multi-byte character (line ${newlines + 1})`,
+        { file: path7, line: newlines + 1 }
+      );
+    }
   };
   try {
-    const raw = createReadStream(path7, { highWaterMark: CHUNK_BYTES });
-    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
-    else await pipeline(raw, tap, consume);
+    const raw = createReadStream2(path7, { highWaterMark: CHUNK_BYTES });
+    if (gzip) await pipeline2(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
+    else await pipeline2(raw, tap, consume);
   } catch (error2) {
     throw asInputError(error2, path7);
   }
   return `sha256:${hash.digest("hex")}`;
 }
-function decode(decoder, chunk, stream, path7, sink) {
-  try {
-    return decoder.decode(chunk, { stream });
-  } catch {
-    throw new InputError(
-      `the file is not valid UTF-8 text (the first invalid bytes come after line ${sink.linesRead})`,
-      { file: path7 }
-    );
+function notText(chunk, at, before, path7, what) {
+  const line = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
+  const b0 = chunk[0];
+  const b1 = chunk[1];
+  const utf16 = before === 0 && (b0 === 255 && b1 === 254 || b0 === 254 && b1 === 255) || what === "a NUL byte";
+  const byte = chunk[at];
+  const hint = utf16 ? "it looks like UTF-16: convert it, e.g. iconv -f UTF-16 -t UTF-8" : byte !== void 0 && byte >= 128 ? `byte 0x${byte.toString(16).toUpperCase()} suggests Latin-1 or Windows-1252: convert it, e.g. iconv -f WINDOWS-1252 -t UTF-8` : "convert it to UTF-8";
+  return new InputError(`the file is not UTF-8 text: line ${line} has ${what} (${hint})`, {
+    file: path7,
+    line,
+    value: chunk.subarray(Math.max(0, at - 20), at + 20).toString("latin1").replace(/[^\x20-\x7e]/g, "?")
+  });
+}
+function firstInvalidUtf8(bytes) {
+  let i = 0;
+  const n = bytes.length;
+  while (i < 3 && i < n && (bytes[i] & 192) === 128) i++;
+  while (i < n) {
+    const b = bytes[i];
+    if (b < 128) {
+      i++;
+      continue;
+    }
+    const length = b >= 194 && b <= 223 ? 2 : b >= 224 && b <= 239 ? 3 : b >= 240 && b <= 244 ? 4 : 0;
+    if (length === 0) return i;
+    if (i + length > n) return i;
+    for (let k = 1; k < length; k++) if ((bytes[i + k] & 192) !== 128) return i;
+    i += length;
   }
+  return n;
+}
+function countByte(bytes, byte) {
+  let count = 0;
+  let i = bytes.indexOf(byte);
+  while (i !== -1) {
+    count++;
+    i = bytes.indexOf(byte, i + 1);
+  }
+  return count;
 }
 function asInputError(error2, path7) {
   if (error2 instanceof InputError) return error2;
@@ -44009,92 +53033,104 @@ function asInputError(error2, path7) {
   return new InputError(`cannot read the file: ${message}`, { file: path7 });
 }
 
-// src/reading/columnMapping.ts
-var COLUMN_ROLES = [
-  "series",
-  "timestamp",
-  "horizon",
-  "origin",
-  "path",
-  "actual",
-  "prediction",
-  "weight",
-  "quantile"
-];
-var DEFAULT_COLUMNS = {
-  series: "series",
-  timestamp: "timestamp",
-  horizon: "horizon",
-  origin: "origin",
-  path: "path",
-  actual: "actual",
-  prediction: "prediction",
-  weight: "weight",
-  quantile: "q"
+// src/reading/rowKeySet.ts
+var RowKeySet = class {
+  table = new Int32Array(1024);
+  mask = 1023;
+  size = 0;
+  columns;
+  c0 = EMPTY;
+  c1 = EMPTY;
+  c2 = EMPTY;
+  c3 = EMPTY;
+  c4 = EMPTY;
+  /** Rows so far strictly increasing in column order, or with the first two columns swapped. */
+  ascending = true;
+  ascendingSwapped = true;
+  hashing = false;
+  /**
+   * `columns` (one to five) return the reader's current arrays; call refresh() whenever the
+   * reader replaces them (it grows them by copying).
+   */
+  constructor(columns) {
+    if (columns.length < 1 || columns.length > 5) throw new Error("a key has 1 to 5 columns");
+    this.columns = columns;
+    this.refresh();
+  }
+  /** Takes the reader's current arrays again (after they grew). */
+  refresh() {
+    const cols = this.columns.map((c) => c());
+    const first = cols[0];
+    this.c0 = first;
+    this.c1 = cols[1] ?? first;
+    this.c2 = cols[2] ?? first;
+    this.c3 = cols[3] ?? first;
+    this.c4 = cols[4] ?? first;
+  }
+  /** Adds row `row` (its key already written to the columns); returns an earlier row with the same key, or −1. */
+  add(row) {
+    if (!this.hashing) {
+      if (row === 0) return -1;
+      if (this.ascending) this.ascending = this.compare(row - 1, row, false) < 0;
+      if (this.ascendingSwapped) this.ascendingSwapped = this.compare(row - 1, row, true) < 0;
+      if (this.ascending || this.ascendingSwapped) return -1;
+      this.hashing = true;
+      for (let r = 0; r < row; r++) this.insert(r);
+    }
+    return this.insert(row);
+  }
+  /** Sign of key(a) − key(b), lexicographic in column order (or with c0 and c1 swapped). */
+  compare(a, b, swapped) {
+    const first = swapped ? this.c1 : this.c0;
+    const second = swapped ? this.c0 : this.c1;
+    return first[a] - first[b] || second[a] - second[b] || this.c2[a] - this.c2[b] || this.c3[a] - this.c3[b] || this.c4[a] - this.c4[b];
+  }
+  insert(row) {
+    const mask = this.mask;
+    const table = this.table;
+    let slot = this.hash(row) & mask;
+    for (; ; ) {
+      const stored = table[slot];
+      if (stored === 0) break;
+      if (this.same(row, stored - 1)) return stored - 1;
+      slot = slot + 1 & mask;
+    }
+    table[slot] = row + 1;
+    this.size++;
+    if (this.size * 2 > table.length) this.grow();
+    return -1;
+  }
+  same(a, b) {
+    return this.c0[a] === this.c0[b] && this.c1[a] === this.c1[b] && this.c2[a] === this.c2[b] && this.c3[a] === this.c3[b] && this.c4[a] === this.c4[b];
+  }
+  /** A 32-bit mix of the key (multiply–xorshift steps, as in MurmurHash3's finaliser). */
+  hash(row) {
+    let h = Math.imul(this.c0[row] ^ 2654435769, 2246822507);
+    h = Math.imul(h ^ h >>> 15 ^ this.c1[row], 3266489909);
+    h = Math.imul(h ^ h >>> 13 ^ this.c2[row], 2246822507);
+    h = Math.imul(h ^ h >>> 15 ^ this.c3[row], 3266489909);
+    h = Math.imul(h ^ h >>> 13 ^ this.c4[row], 668265263);
+    return (h ^ h >>> 16) >>> 0;
+  }
+  grow() {
+    const old = this.table;
+    const next = new Int32Array(old.length * 2);
+    const mask = next.length - 1;
+    for (let i = 0; i < old.length; i++) {
+      const stored = old[i];
+      if (stored === 0) continue;
+      let slot = this.hash(stored - 1) & mask;
+      while (next[slot] !== 0) slot = slot + 1 & mask;
+      next[slot] = stored;
+    }
+    this.table = next;
+    this.mask = mask;
+  }
 };
-function resolveColumns(mapping = {}) {
-  const resolved = { ...DEFAULT_COLUMNS };
-  for (const role of COLUMN_ROLES) {
-    const name = mapping[role];
-    if (name !== void 0) resolved[role] = name;
-  }
-  return resolved;
-}
-function parseColumnMapping(text2, source = "--columns") {
-  const mapping = {};
-  if (text2.trim() === "") return mapping;
-  for (const rawPair of text2.split(",")) {
-    const pair = rawPair.trim();
-    const eq = pair.indexOf("=");
-    if (eq < 0) {
-      throw new InputError(
-        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
-        { file: source, value: pair }
-      );
-    }
-    const role = pair.slice(0, eq).trim();
-    const name = pair.slice(eq + 1).trim();
-    if (!isRole(role)) {
-      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
-        file: source,
-        value: pair
-      });
-    }
-    if (name === "") {
-      throw new InputError(`the column name for role "${role}" is empty`, {
-        file: source,
-        value: pair
-      });
-    }
-    if (mapping[role] !== void 0) {
-      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
-    }
-    mapping[role] = name;
-  }
-  checkDistinctNames(mapping, source);
-  return mapping;
-}
-function checkDistinctNames(mapping, source = "--columns") {
-  const resolved = resolveColumns(mapping);
-  const seen = /* @__PURE__ */ new Map();
-  for (const role of COLUMN_ROLES) {
-    if (role === "quantile") continue;
-    const name = resolved[role];
-    const other = seen.get(name);
-    if (other !== void 0) {
-      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
-        file: source,
-        value: name
-      });
-    }
-    seen.set(name, role);
-  }
-}
-function isRole(text2) {
-  return COLUMN_ROLES.includes(text2);
-}
+var EMPTY = new Int32Array(0);
 
 // src/reading/tableBuilder.ts
+var MAX_LABEL = 512;
 var ForecastTableReader = class {
   tokenizer;
   path;
@@ -44117,19 +53153,44 @@ var ForecastTableReader = class {
   timeLabels = new Interner();
   originLabels = new Interner();
   pathLabels = new Interner();
+  delimiter;
+  decimalComma;
+  keys = null;
   constructor(path7, options) {
     this.path = path7;
     this.options = options;
     checkDistinctNames(options.columns ?? {});
-    const delimiter3 = options.format === "tsv" ? "	" : ",";
+    const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
+    this.delimiter = delimiter3;
+    this.decimalComma = options.decimal === ",";
+    if (this.decimalComma && delimiter3 === ",") {
+      throw new InputError(
+        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
+        { file: path7 }
+      );
+    }
     this.tokenizer = new Tokenizer(
       delimiter3,
-      (fields, count, line) => {
-        if (this.header === null) this.readHeader(fields, count, line);
-        else this.readRow(fields, count, line);
-      },
-      path7
+      (fields, count, line) => this.record(fields, count, line),
+      path7,
+      options.lineLimit
     );
+  }
+  /**
+   * Takes one record (the header first, then rows) from a source other than text, such as a
+   * Parquet file's rows; `line` is what messages call the record's line. A field may be a number
+   * already (a Parquet double): it is taken as the double a CSV's shortest round-trip text of it
+   * parses to, that is, as it is.
+   */
+  record(fields, count, line) {
+    if (this.header === null) this.readHeader(fields.map(String), count, line);
+    else this.readRow(fields, count, line);
+  }
+  /** Header indices of the columns that play a role (after the header was read). */
+  get usedColumns() {
+    const h = this.header;
+    if (h === null) return [];
+    return h.names.map((_, i) => i).filter((i) => !h.ignored.includes(h.names[i]));
   }
   push(chunk) {
     this.tokenizer.push(chunk);
@@ -44191,9 +53252,25 @@ var ForecastTableReader = class {
     };
   }
   readHeader(fields, count, line) {
-    this.header = resolveHeader(fields.slice(0, count), this.path, line, this.options);
+    this.header = resolveHeader(
+      fields.slice(0, count),
+      this.path,
+      line,
+      this.options,
+      this.delimiter
+    );
     this.headerLine = line;
     this.quantileValues = this.header.quantiles.map(() => new Float64Array(0));
+    const h = this.header;
+    const key = [];
+    if (h.series >= 0) key.push(() => this.seriesIds);
+    key.push(() => this.timeIds);
+    if (this.options.role !== "actuals") {
+      if (h.horizon >= 0) key.push(() => this.horizons);
+      if (h.origin >= 0) key.push(() => this.originIds);
+      if (h.path >= 0) key.push(() => this.pathIds);
+    }
+    this.keys = new RowKeySet(key);
   }
   grow() {
     const capacity = Math.max(1024, this.capacity * 2);
@@ -44209,6 +53286,7 @@ var ForecastTableReader = class {
     if (h.weight >= 0) this.weight = growFloat(this.weight, capacity);
     this.quantileValues = this.quantileValues.map((v) => growFloat(v, capacity));
     this.capacity = capacity;
+    this.keys?.refresh();
   }
   readRow(fields, count, line) {
     const h = this.header;
@@ -44216,7 +53294,7 @@ var ForecastTableReader = class {
       throw new InputError(`expected ${h.names.length} fields as in the header, found ${count}`, {
         file: this.path,
         line,
-        value: fields.slice(0, count).join(this.options.format === "tsv" ? "	" : ",")
+        value: echo(fields.slice(0, Math.min(count, 50)).join(this.delimiter))
       });
     }
     const r = this.rows;
@@ -44234,13 +53312,13 @@ var ForecastTableReader = class {
     }
     if (h.horizon >= 0) {
       const text2 = fields[h.horizon];
-      const value = parseHorizon(text2);
+      const value = typeof text2 === "number" ? Number.isInteger(text2) && text2 >= 1 && text2 <= 2147483647 ? text2 : 0 : parseHorizon(text2);
       if (value === 0) {
         throw new InputError("the horizon must be a whole number \u2265 1", {
           file: this.path,
           line,
           column: h.names[h.horizon],
-          value: text2
+          value: String(text2)
         });
       }
       this.horizons[r] = value;
@@ -44256,7 +53334,7 @@ var ForecastTableReader = class {
           file: this.path,
           line,
           column: h.names[h.weight],
-          value: fields[h.weight]
+          value: String(fields[h.weight])
         });
       }
       this.weight[r] = value;
@@ -44266,9 +53344,38 @@ var ForecastTableReader = class {
       const index = qs[k].index;
       this.quantileValues[k][r] = this.number(fields[index], index, line);
     }
+    const earlier = this.keys.add(r);
+    if (earlier >= 0) this.duplicate(earlier, r, line);
     this.rows = r + 1;
   }
-  keyLabel(interner, text2, index, line) {
+  /** A key seen twice in this file: refused at once, naming both lines. */
+  duplicate(earlier, row, line) {
+    const h = this.header;
+    const parts = [];
+    const label = (role, interner, ids, index) => {
+      if (index >= 0) parts.push(`${role}=${interner.labels[ids[row]]}`);
+    };
+    label("series", this.seriesLabels, this.seriesIds, h.series);
+    label("timestamp", this.timeLabels, this.timeIds, h.timestamp);
+    if (this.options.role !== "actuals") {
+      parts.push(`horizon=${h.horizon >= 0 ? this.horizons[row] : 1}`);
+      label("origin", this.originLabels, this.originIds, h.origin);
+      label("path", this.pathLabels, this.pathIds, h.path);
+    }
+    const key = echo(parts.join(" "));
+    throw new InputError(
+      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line} have the same key`,
+      { file: this.path, line, value: key }
+    );
+  }
+  keyLabel(interner, field, index, line) {
+    const text2 = typeof field === "string" ? field : String(field);
+    if (text2.length > MAX_LABEL) {
+      throw new InputError(
+        `a key value longer than ${MAX_LABEL} characters (${text2.length}); series names, timestamps, origins and paths are kept in memory for every distinct value, so they must be short`,
+        { file: this.path, line, column: this.header.names[index], value: text2 }
+      );
+    }
     if (text2.length === 0) {
       throw new InputError("empty value in a key column", {
         file: this.path,
@@ -44279,16 +53386,32 @@ var ForecastTableReader = class {
     }
     return interner.id(text2, line);
   }
-  number(text2, index, line) {
-    const value = parseDecimal(text2);
+  number(field, index, line) {
+    if (typeof field === "number") {
+      if (Number.isFinite(field)) return field;
+      throw new InputError("not a finite number", {
+        file: this.path,
+        line,
+        column: this.header.names[index],
+        value: String(field)
+      });
+    }
+    const text2 = field;
+    const value = this.decimalComma ? parseDecimalComma(text2) : parseDecimal(text2);
     if (!Number.isNaN(value)) return value;
+    let hint = "";
+    if (!this.decimalComma && /^[-+]?\d*,\d+$/.test(text2)) {
+      hint = ` (a decimal comma? add --decimal , with a separator other than the comma, e.g. --delimiter ";")`;
+    } else if (this.decimalComma && text2.includes(".")) {
+      hint = " (with --decimal , a point is not a decimal mark, and thousands separators are not read)";
+    }
     throw new InputError(
-      text2.length === 0 ? "empty value where a number is required" : "not a finite decimal number",
+      text2.length === 0 ? "empty value where a number is required" : `not a finite decimal number${hint}`,
       { file: this.path, line, column: this.header.names[index], value: text2 }
     );
   }
 };
-function resolveHeader(names, file, line, options) {
+function resolveHeader(names, file, line, options, delimiter3 = ",") {
   const columns = resolveColumns(options.columns);
   const predictions = options.role !== "actuals";
   const used = /* @__PURE__ */ new Set();
@@ -44316,15 +53439,15 @@ function resolveHeader(names, file, line, options) {
   const weight = find(columns.weight, true);
   const quantiles = [];
   if (predictions) {
-    const prefix = columns.quantile;
+    const prefix2 = columns.quantile;
     names.forEach((name, index) => {
-      if (used.has(index) || !name.startsWith(prefix)) return;
-      const levelText = name.slice(prefix.length);
+      if (used.has(index) || !name.startsWith(prefix2)) return;
+      const levelText = name.slice(prefix2.length);
       const level = parseDecimal(levelText);
       if (Number.isNaN(level)) return;
       if (!(level > 0 && level < 1)) {
         throw new InputError(
-          `quantile level ${levelText} is not strictly between 0 and 1 (write e.g. ${prefix}0.1 for the 10% quantile)`,
+          `quantile level ${levelText} is not strictly between 0 and 1 (write e.g. ${prefix2}0.1 for the 10% quantile)`,
           { file, line, column: name, value: name }
         );
       }
@@ -44340,9 +53463,10 @@ function resolveHeader(names, file, line, options) {
     });
     quantiles.sort((a, b) => a.level - b.level);
   }
-  const header2 = names.map((n) => JSON.stringify(n)).join(", ");
+  const shown = names.slice(0, 20).map((n) => JSON.stringify(echo(n, 60)));
+  const header2 = `${shown.join(", ")}${names.length > 20 ? `, \u2026 (${names.length} columns)` : ""}`;
   const missing = (role, name, why) => new InputError(
-    `missing the ${role} column "${name}" ${why}; the header has ${header2} (map another column with e.g. ${role}=NAME)`,
+    `missing the ${role} column "${name}" ${why}; the header has ${header2} (map another column with e.g. ${role}=NAME)${delimiterHint(names, delimiter3)}`,
     { file, line, column: name }
   );
   if (timestamp < 0) throw missing("timestamp", columns.timestamp, "(required)");
@@ -44374,6 +53498,25 @@ function resolveHeader(names, file, line, options) {
     weight,
     quantiles
   };
+}
+function delimiterHint(names, delimiter3) {
+  if (names.length !== 1) return "";
+  const only = names[0];
+  for (const [candidate, option] of [
+    [";", '";"'],
+    ["	", "tab"],
+    ["|", '"|"'],
+    [",", '","']
+  ]) {
+    if (candidate !== delimiter3 && only.includes(candidate)) {
+      return `; the header is one field that contains ${candidate === "	" ? "tabs" : `"${candidate}"`} but the separator is ${delimiterLabel(delimiter3)}: add --delimiter ${option}`;
+    }
+  }
+  return "";
+}
+function parseDecimalComma(text2) {
+  if (text2.includes(".")) return Number.NaN;
+  return parseDecimal(text2.replace(",", "."));
 }
 var Interner = class {
   labels = [];
@@ -44410,6 +53553,8 @@ function growFloat(array, capacity) {
 // src/reading/readForecastFile.ts
 function formatFromPath(path7) {
   const lower = path7.toLowerCase();
+  if (lower.endsWith(".parquet") || lower.endsWith(".pq"))
+    return { format: "parquet", gzip: false };
   const gzip = lower.endsWith(".gz");
   const base = gzip ? lower.slice(0, -3) : lower;
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
@@ -44417,20 +53562,33 @@ function formatFromPath(path7) {
 async function readForecastFile(path7, options) {
   const implied = formatFromPath(path7);
   const format = options.format ?? implied.format;
+  const textFormat = format === "tsv" ? "tsv" : "csv";
   const reader = new ForecastTableReader(path7, {
     role: options.role,
-    format,
+    format: textFormat,
+    delimiter: delimiterFor(options.delimiter ?? "auto", textFormat === "tsv"),
+    ...format === "parquet" ? {} : withDialect(options),
     ...options.columns === void 0 ? {} : { columns: options.columns },
     ...options.requireActual === void 0 ? {} : { requireActual: options.requireActual }
   });
-  const sha256 = await streamTextFile(path7, implied.gzip, reader, options.onProgress);
+  const sha256 = format === "parquet" ? await streamParquetFile(path7, reader, options.onProgress) : await streamTextFile(path7, implied.gzip, reader, options.onProgress);
   return reader.finish(sha256);
+}
+function withDialect(options) {
+  return {
+    ...options.decimal === void 0 ? {} : { decimal: options.decimal },
+    ...options.lineLimit === void 0 ? {} : { lineLimit: options.lineLimit }
+  };
 }
 
 // src/reading/readFoldLayout.ts
 async function readFoldLayout(path7, format) {
   const implied = formatFromPath(path7);
-  const reader = new FoldLayoutReader(path7, format ?? implied.format);
+  const chosen = format ?? implied.format;
+  if (chosen === "parquet") {
+    throw new InputError("a fold layout file is read as CSV or TSV", { file: path7 });
+  }
+  const reader = new FoldLayoutReader(path7, chosen);
   await streamTextFile(path7, implied.gzip, reader);
   return reader.finish();
 }
@@ -44452,13 +53610,23 @@ var LossSeriesReader = class {
   candidate = [];
   rows = [];
   horizon = [];
+  decimalComma;
   constructor(path7, options) {
     this.path = path7;
     this.timestampName = options.timestampColumn ?? "timestamp";
+    const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
+    this.decimalComma = options.decimal === ",";
+    if (this.decimalComma && delimiter3 === ",") {
+      throw new InputError(
+        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
+        { file: path7 }
+      );
+    }
     this.tokenizer = new Tokenizer(
-      options.format === "tsv" ? "	" : ",",
+      delimiter3,
       (fields, count, line) => this.record(fields, count, line),
-      path7
+      path7,
+      options.lineLimit
     );
   }
   get linesRead() {
@@ -44532,7 +53700,7 @@ var LossSeriesReader = class {
     const at = (name) => fields[index[name]];
     const number = (name) => {
       const text2 = at(name);
-      const x = parseDecimal(text2);
+      const x = this.decimalComma ? text2.includes(".") ? Number.NaN : parseDecimal(text2.replace(",", ".")) : parseDecimal(text2);
       if (Number.isNaN(x)) {
         throw new InputError("not a finite decimal number", {
           file: this.path,
@@ -44566,6 +53734,17 @@ var LossSeriesReader = class {
     }
     const b = number("baseline_loss");
     const c = number("candidate_loss");
+    for (const [name, x] of [
+      ["baseline_loss", b],
+      ["candidate_loss", c]
+    ]) {
+      if (Math.abs(x) > MAX_LOSS) {
+        throw new InputError(
+          `a loss beyond ${MAX_LOSS} would overflow means and variances in double precision; rescale the data`,
+          { file: this.path, line, column: name, value: at(name) }
+        );
+      }
+    }
     if ("differential" in index) {
       const d = number("differential");
       const scale = Math.max(1, Math.abs(b), Math.abs(c));
@@ -44607,8 +53786,18 @@ var LossSeriesReader = class {
 // src/reading/readLossSeriesFile.ts
 async function readLossSeriesFile(path7, options = {}) {
   const implied = formatFromPath(path7);
+  const format = options.format ?? implied.format;
+  if (format === "parquet") {
+    throw new InputError(
+      "a pre-aggregated loss file is read as CSV or TSV (Parquet is read for forecast files)",
+      { file: path7 }
+    );
+  }
   const reader = new LossSeriesReader(path7, {
-    format: options.format ?? implied.format,
+    format,
+    delimiter: delimiterFor(options.delimiter ?? "auto", format === "tsv"),
+    ...options.decimal === void 0 ? {} : { decimal: options.decimal },
+    ...options.lineLimit === void 0 ? {} : { lineLimit: options.lineLimit },
     ...options.timestampColumn === void 0 ? {} : { timestampColumn: options.timestampColumn }
   });
   const sha256 = await streamTextFile(path7, implied.gzip, reader, options.onProgress);
@@ -44621,8 +53810,8 @@ async function runComparison(settings, hooks = {}) {
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
   const read = (path7, role) => readForecastFile(path7, {
     role,
-    columns: settings.columns,
-    ...settings.format === "auto" ? {} : { format: settings.format },
+    columns: columnsFor(settings, role),
+    ...readDialect(settings),
     requireActual: role === "actuals" || settings.actuals === null,
     onProgress: (done, total) => hooks.onProgress?.({ stage: `reading ${role}`, fraction: total > 0 ? done / total : 1 })
   });
@@ -44632,7 +53821,10 @@ async function runComparison(settings, hooks = {}) {
   hooks.onProgress?.({ stage: "aligning", fraction: 0 });
   const panel = alignPanel(
     { baseline, candidate, ...actuals === void 0 ? {} : { actuals } },
-    { onProgress: (fraction) => hooks.onProgress?.({ stage: "aligning", fraction }) }
+    {
+      onProgress: (fraction) => hooks.onProgress?.({ stage: "aligning", fraction }),
+      timeFormat: settings.timeFormat
+    }
   );
   const folds = settings.folds === null ? void 0 : await readFoldLayout(settings.folds);
   const integrity = checkBacktest(
@@ -44663,14 +53855,14 @@ async function runOnLossFile(path7, settings, hooks) {
     );
   }
   const table = await readLossSeriesFile(path7, {
-    ...settings.format === "auto" ? {} : { format: settings.format },
+    ...readDialect(settings),
     ...settings.columns.timestamp === void 0 ? {} : { timestampColumn: settings.columns.timestamp },
     onProgress: (done, total) => hooks.onProgress?.({ stage: "reading losses", fraction: total > 0 ? done / total : 1 })
   });
-  const { series, timestamps, kind } = orderLossSeries(table);
+  const { series, timestamps, kind, reason, format } = orderLossSeries(table, settings.timeFormat);
   return evaluateLossSeries(
     series,
-    { file: table.summary, timestamps, kind },
+    { file: table.summary, timestamps, kind, order: { format, reason } },
     settings,
     hooks.resampleRunner
   );
@@ -44682,10 +53874,24 @@ async function readHistory(settings) {
   const table = await readForecastFile(settings.history, {
     role: "actuals",
     columns: settings.columns,
-    ...settings.format === "auto" ? {} : { format: settings.format },
+    ...readDialect(settings),
     requireActual: true
   });
-  return historyBySeries(table);
+  return historyBySeries(table, settings.timeFormat);
+}
+function columnsFor(settings, role) {
+  const own = role === "baseline" ? settings.baselineColumns : role === "candidate" ? settings.candidateColumns : {};
+  const merged = { ...settings.columns, ...own };
+  checkDistinctNames(merged, `--columns with --${role}-columns`);
+  return merged;
+}
+function readDialect(settings) {
+  return {
+    ...settings.format === "auto" ? {} : { format: settings.format },
+    delimiter: settings.delimiter,
+    decimal: settings.decimal,
+    lineLimit: settings.lineLimit
+  };
 }
 
 // src/parallel/resamplePool.ts
@@ -44702,10 +53908,10 @@ var FINISHED_STREAMS = 1;
 var FAILED = 2;
 var CONTROL_SLOTS = 3;
 function shareResampleJob(job) {
-  const prefix = new SharedArrayBuffer(job.prefix.length * Float64Array.BYTES_PER_ELEMENT);
-  new Float64Array(prefix).set(job.prefix);
+  const prefix2 = new SharedArrayBuffer(job.prefix.length * Float64Array.BYTES_PER_ELEMENT);
+  new Float64Array(prefix2).set(job.prefix);
   return {
-    prefix,
+    prefix: prefix2,
     out: new SharedArrayBuffer(job.resamples * Float64Array.BYTES_PER_ELEMENT),
     control: new SharedArrayBuffer(CONTROL_SLOTS * Int32Array.BYTES_PER_ELEMENT),
     n: job.n,
@@ -44717,7 +53923,7 @@ function shareResampleJob(job) {
 function workOnSharedTask(task, reportFailure = () => {
 }) {
   const control = new Int32Array(task.control);
-  const prefix = new Float64Array(task.prefix);
+  const prefix2 = new Float64Array(task.prefix);
   const out = new Float64Array(task.out);
   const total = streamCount(task.resamples);
   let sampler = null;
@@ -44737,7 +53943,7 @@ function workOnSharedTask(task, reportFailure = () => {
       const source = streams.next();
       nextIndex++;
       const { first, count } = streamShare(task.resamples, stream);
-      out.set(resampleDeviationsOfStream(prefix, task.n, sampler, source, count), first);
+      out.set(resampleDeviationsOfStream(prefix2, task.n, sampler, source, count), first);
       done++;
     } catch (error2) {
       reportFailure(error2 instanceof Error ? error2.message : String(error2));
@@ -44822,7 +54028,7 @@ function createResamplePool(options = {}) {
 }
 
 // src/action/retry.ts
-var realSleep = (ms) => new Promise((resolve2) => setTimeout(resolve2, ms));
+var realSleep = (ms) => new Promise((resolve3) => setTimeout(resolve3, ms));
 function defaultRetryPolicy(log) {
   return {
     maxRetries: 3,
@@ -44959,10 +54165,10 @@ var SUMMARY_LIMIT_BYTES = 1024 * 1024;
 var measureChars = (text2) => text2.length;
 var measureBytes = (text2) => Buffer.byteLength(text2, "utf8");
 function fitReport(report, options) {
-  const prefix = options.prefix ?? "";
-  const budget = options.limit - options.measure(prefix);
+  const prefix2 = options.prefix ?? "";
+  const budget = options.limit - options.measure(prefix2);
   const full = options.render(report);
-  if (options.measure(full) <= budget) return { text: prefix + full, shortened: false };
+  if (options.measure(full) <= budget) return { text: prefix2 + full, shortened: false };
   const total = report.comparisons.length;
   const reduced = (k) => {
     const kept = { ...report, comparisons: report.comparisons.slice(0, k) };
@@ -44977,12 +54183,12 @@ function fitReport(report, options) {
       if (fits(mid)) lo2 = mid;
       else hi2 = mid - 1;
     }
-    return { text: prefix + reduced(lo2), shortened: true };
+    return { text: prefix2 + reduced(lo2), shortened: true };
   }
   const note = shortenedNote(options, "It was cut short.");
   const source = options.render({ ...report, comparisons: report.comparisons.slice(0, 1) });
   return {
-    text: prefix + cutAtLines(source, budget - options.measure(note) - 64, options.measure) + note,
+    text: prefix2 + cutAtLines(source, budget - options.measure(note) - 64, options.measure) + note,
     shortened: true
   };
 }
@@ -44996,10 +54202,10 @@ function shortenedNote(options, what) {
 function cutAtLines(text2, budget, measure) {
   const kept = [];
   let used = 0;
-  let open3 = 0;
+  let open4 = 0;
   for (const line of text2.split("\n")) {
     const cost = measure(line) + 1;
-    const closing = measure("\n</details>\n") * (open3 + 1);
+    const closing = measure("\n</details>\n") * (open4 + 1);
     if (used + cost + closing > budget) {
       if (kept.length === 0)
         kept.push(sliceCodePoints(line, Math.max(0, budget - closing - 1), measure));
@@ -45007,9 +54213,9 @@ function cutAtLines(text2, budget, measure) {
     }
     kept.push(line);
     used += cost;
-    open3 += (line.match(/<details>/g) ?? []).length - (line.match(/<\/details>/g) ?? []).length;
+    open4 += (line.match(/<details>/g) ?? []).length - (line.match(/<\/details>/g) ?? []).length;
   }
-  for (; open3 > 0; open3 -= 1) kept.push("", "</details>");
+  for (; open4 > 0; open4 -= 1) kept.push("", "</details>");
   return `${kept.join("\n")}
 `;
 }
@@ -45242,16 +54448,52 @@ var ENGINE_OPTIONS = [
     help: "rename columns, e.g. actual=observed,prediction=point,series=zone"
   },
   {
+    name: "baseline-columns",
+    valueName: "ROLE=HEADER,\u2026",
+    defaultValue: "",
+    help: "renames for the baseline file only, over --columns (two pipelines that name columns differently)"
+  },
+  {
+    name: "candidate-columns",
+    valueName: "ROLE=HEADER,\u2026",
+    defaultValue: "",
+    help: "renames for the candidate file only, over --columns"
+  },
+  {
     name: "format",
     defaultValue: "auto",
-    choices: ["auto", "csv", "tsv"],
-    help: "input format; auto: TSV for .tsv/.tsv.gz, else CSV"
+    choices: INPUT_FORMATS,
+    help: "input format; auto: Parquet for .parquet, TSV for .tsv/.tsv.gz, else CSV"
+  },
+  {
+    name: "delimiter",
+    defaultValue: "auto",
+    choices: DELIMITER_NAMES,
+    help: "field separator of CSV files: auto (tab for TSV, else comma), or comma , semicolon ; pipe | tab"
+  },
+  {
+    name: "decimal",
+    defaultValue: ".",
+    choices: [".", ","],
+    help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter'
+  },
+  {
+    name: "time-format",
+    defaultValue: "auto",
+    choices: TIME_FORMAT_NAMES,
+    help: "how timestamps read: auto (all numbers or all ISO 8601, else refused), number, iso-8601, day-month-year (31/12/2026 [23:59[:59]]), month-day-year (12/31/2026 [23:59[:59]]), text-order (compare as text: 10 before 9)"
+  },
+  {
+    name: "line-limit",
+    valueName: "BYTES",
+    defaultValue: "1048576",
+    help: "longest line (and field) accepted in a CSV file, in characters; longer is refused"
   },
   {
     name: "loss",
     defaultValue: "squared",
-    choices: LOSS_NAMES,
-    help: "loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)"
+    choices: [...LOSS_NAMES, ...Object.keys(LOSS_ALIASES)],
+    help: "loss per row (mse = squared, mae = absolute, mape = ape): squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)"
   },
   {
     name: "zero-actuals",
@@ -45267,9 +54509,9 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "margin",
-    valueName: "NUMBER",
+    valueName: "NUMBER|PERCENT%",
     defaultValue: "0",
-    help: "allowed margin: with --margin-kind relative, 0.02 means the candidate may be up to 2% worse"
+    help: "allowed margin: with --margin-kind relative, 0.02 or 2% means the candidate may be up to 2% worse (a relative margin above 1 must be written as a percentage)"
   },
   {
     name: "margin-kind",
@@ -45444,13 +54686,13 @@ var ENGINE_OPTIONS = [
     name: "json",
     valueName: "FILE",
     defaultValue: null,
-    help: "write the JSON report to this file"
+    help: "write the JSON report to this file (- for standard output)"
   },
   {
     name: "markdown",
     valueName: "FILE",
     defaultValue: null,
-    help: "write the Markdown report to this file"
+    help: "write the Markdown report to this file (- for standard output)"
   }
 ];
 
@@ -45556,11 +54798,17 @@ function resolveSettings(raw, label) {
     losses,
     actuals: optional("actuals"),
     columns: parseColumnMapping(value("columns"), label("columns")),
+    baselineColumns: parseColumnMapping(value("baseline-columns"), label("baseline-columns")),
+    candidateColumns: parseColumnMapping(value("candidate-columns"), label("candidate-columns")),
     format: value("format"),
-    loss: value("loss"),
+    delimiter: value("delimiter"),
+    decimal: parseDecimalMark(value("decimal"), value("delimiter"), label),
+    timeFormat: value("time-format"),
+    lineLimit: integer("line-limit", 1024, 1 << 28),
+    loss: canonicalLoss(value("loss")),
     zeroActuals: value("zero-actuals"),
     alpha,
-    margin: number("margin", (x) => x >= 0, "a number \u2265 0 (0.02 = 2% with --margin-kind relative)"),
+    margin: parseMargin(value("margin"), value("margin-kind"), label),
     marginKind: value("margin-kind"),
     policy: value("policy"),
     agreement: value("agreement"),
@@ -45573,7 +54821,11 @@ function resolveSettings(raw, label) {
     minPoints: integer("min-points", 1),
     shortData: value("short-data"),
     allowMissing: bool("allow-missing"),
-    interval: parseInterval(value("interval"), label("interval"), value("loss") === "interval"),
+    interval: parseInterval(
+      value("interval"),
+      label("interval"),
+      canonicalLoss(value("loss")) === "interval"
+    ),
     pooling: value("pooling"),
     scale: value("scale"),
     history: optional("history"),
@@ -45596,6 +54848,42 @@ function resolveSettings(raw, label) {
     json: optional("json"),
     markdown: optional("markdown")
   };
+}
+function parseMargin(text2, kind, label) {
+  const percent = text2.endsWith("%");
+  const body = percent ? text2.slice(0, -1).trim() : text2;
+  const x = body === "" ? Number.NaN : Number(body);
+  if (!Number.isFinite(x) || x < 0) {
+    throw new InputError(
+      `${label("margin")} must be a number \u2265 0 or a percentage (0.02 or 2% with ${label("margin-kind")} relative)`,
+      { value: text2 }
+    );
+  }
+  if (percent) {
+    if (kind !== "relative") {
+      throw new InputError(
+        `${label("margin")} as a percentage needs ${label("margin-kind")} relative (an absolute margin is in loss units)`,
+        { value: text2 }
+      );
+    }
+    return x / 100;
+  }
+  if (kind === "relative" && x > 1) {
+    throw new InputError(
+      `${label("margin")} ${text2} with ${label("margin-kind")} relative would allow the candidate to be ${x * 100}% worse; write ${text2}% for ${text2} percent, ${x / 100} for the same as a fraction, or set ${label("margin-kind")} absolute for loss units`,
+      { value: text2 }
+    );
+  }
+  return x;
+}
+function parseDecimalMark(text2, delimiter3, label) {
+  if (text2 === "," && delimiter3 === ",") {
+    throw new InputError(
+      `${label("decimal")} , (decimal comma) needs a field separator other than the comma: add ${label("delimiter")} ";" (or tab, |)`,
+      { value: text2 }
+    );
+  }
+  return text2;
 }
 function specOf(name) {
   const spec = ENGINE_OPTIONS.find((o) => o.name === name);
@@ -45699,7 +54987,7 @@ function readPullRequest(text2) {
 
 // src/action/readRegularFile.ts
 import { constants as constants3 } from "node:fs";
-import { lstat as lstat2, open as open2 } from "node:fs/promises";
+import { lstat as lstat2, open as open3 } from "node:fs/promises";
 async function readRegularFile(file, maxBytes, label) {
   const refuse = (why) => {
     throw new InputError(`${label}: ${why}`, { value: file });
@@ -45707,7 +54995,7 @@ async function readRegularFile(file, maxBytes, label) {
   const link = await lstat2(file).catch(() => refuse("cannot read the file"));
   if (link.isSymbolicLink()) refuse("is a symbolic link; only a regular file is read");
   if (!link.isFile()) refuse("is not a regular file");
-  const handle = await open2(
+  const handle = await open3(
     file,
     constants3.O_RDONLY | constants3.O_NOFOLLOW | constants3.O_NONBLOCK
   ).catch(() => refuse("cannot read the file"));
@@ -46108,7 +55396,9 @@ function readInputs(r) {
       count: timestamps.field("count").integer(),
       kind: timestamps.field("kind").oneOf(["number", "datetime", "text"]),
       first: timestamps.field("first").stringOrNull(),
-      last: timestamps.field("last").stringOrNull()
+      last: timestamps.field("last").stringOrNull(),
+      format: timestamps.field("format").value === void 0 ? "auto" : timestamps.field("format").oneOf(TIME_FORMAT_NAMES),
+      order: timestamps.field("order").value === void 0 ? "" : timestamps.field("order").string()
     },
     series: r.field("series").integer(),
     horizons: r.field("horizons").items().map((h) => h.integer(1)),
@@ -46142,7 +55432,13 @@ function readSettings(r) {
     losses: r.field("losses").value === void 0 ? null : r.field("losses").stringOrNull(),
     actuals: r.field("actuals").stringOrNull(),
     columns,
-    format: r.field("format").oneOf(["auto", "csv", "tsv"]),
+    baselineColumns: readMapping(r.field("baselineColumns")),
+    candidateColumns: readMapping(r.field("candidateColumns")),
+    format: r.field("format").oneOf(INPUT_FORMATS),
+    delimiter: absent(r, "delimiter") ? "auto" : r.field("delimiter").oneOf(DELIMITER_NAMES),
+    decimal: absent(r, "decimal") ? "." : r.field("decimal").oneOf([".", ","]),
+    timeFormat: absent(r, "timeFormat") ? "auto" : r.field("timeFormat").oneOf(TIME_FORMAT_NAMES),
+    lineLimit: absent(r, "lineLimit") ? 1 << 20 : r.field("lineLimit").integer(1),
     loss: r.field("loss").oneOf(LOSS_NAMES),
     zeroActuals: r.field("zeroActuals").oneOf(["error", "skip"]),
     alpha: r.field("alpha").number(),
@@ -46179,6 +55475,18 @@ function readSettings(r) {
     json: r.field("json").stringOrNull(),
     markdown: r.field("markdown").stringOrNull()
   };
+}
+function absent(r, name) {
+  return r.field(name).value === void 0;
+}
+function readMapping(r) {
+  const columns = {};
+  if (r.value === void 0) return columns;
+  for (const role of COLUMN_ROLES) {
+    const name = r.field(role);
+    if (name.value !== void 0) columns[role] = name.string();
+  }
+  return columns;
 }
 function readRecentWindow(r) {
   if (r.value === null || r.value === void 0) return null;
@@ -46282,7 +55590,7 @@ function jsonPath(action, env, name) {
   if (given !== null) return given;
   if (name === "") return path6.join(env.tempDir, "skillgate-report.json");
   const encoded = encodeName(name);
-  const slug = encoded.length <= 80 ? encoded : createHash2("sha256").update(name).digest("hex").slice(0, 16);
+  const slug = encoded.length <= 80 ? encoded : createHash3("sha256").update(name).digest("hex").slice(0, 16);
   return path6.join(env.tempDir, `skillgate-report-${slug}.json`);
 }
 async function writeText(file, text2) {
@@ -46370,10 +55678,10 @@ async function resolvePullRequest(deps, client, repository, plan) {
     case "pull-request":
       return plan.number;
     case "commit": {
-      const open3 = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
+      const open4 = (await pullRequestsOfCommit(client, repository, plan.sha)).filter(
         (p) => p.state === "open"
       );
-      const chosen = open3.find((p) => p.headSha === plan.sha);
+      const chosen = open4.find((p) => p.headSha === plan.sha);
       if (chosen === void 0) {
         deps.log.info(
           `skillgate: no comment: commit ${plan.sha.slice(0, 12)} is the head of no open pull request`

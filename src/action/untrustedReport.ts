@@ -1,3 +1,4 @@
+import { TIME_FORMAT_NAMES } from '../alignment/timeFormat.js';
 import { MAX_CANDIDATES, MAX_NAME_LENGTH } from '../candidates/candidateList.js';
 import type {
   CandidateSummary,
@@ -11,6 +12,7 @@ import { noChecks } from '../integrity/checkPolicy.js';
 import { CHECK_IDS, type IntegrityReport } from '../integrity/checkResult.js';
 import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
 import { COLUMN_ROLES, type ColumnMapping } from '../reading/columnMapping.js';
+import { DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
 import type {
   BootstrapSummary,
   Comparison,
@@ -427,6 +429,12 @@ function readInputs(r: Reader): InputsSummary {
       kind: timestamps.field('kind').oneOf(['number', 'datetime', 'text']),
       first: timestamps.field('first').stringOrNull(),
       last: timestamps.field('last').stringOrNull(),
+      format:
+        timestamps.field('format').value === undefined
+          ? 'auto'
+          : timestamps.field('format').oneOf(TIME_FORMAT_NAMES),
+      order:
+        timestamps.field('order').value === undefined ? '' : timestamps.field('order').string(),
     },
     series: r.field('series').integer(),
     horizons: r
@@ -469,7 +477,13 @@ function readSettings(r: Reader): Settings {
     losses: r.field('losses').value === undefined ? null : r.field('losses').stringOrNull(),
     actuals: r.field('actuals').stringOrNull(),
     columns: columns as ColumnMapping,
-    format: r.field('format').oneOf(['auto', 'csv', 'tsv']),
+    baselineColumns: readMapping(r.field('baselineColumns')),
+    candidateColumns: readMapping(r.field('candidateColumns')),
+    format: r.field('format').oneOf(INPUT_FORMATS),
+    delimiter: absent(r, 'delimiter') ? 'auto' : r.field('delimiter').oneOf(DELIMITER_NAMES),
+    decimal: absent(r, 'decimal') ? '.' : r.field('decimal').oneOf(['.', ',']),
+    timeFormat: absent(r, 'timeFormat') ? 'auto' : r.field('timeFormat').oneOf(TIME_FORMAT_NAMES),
+    lineLimit: absent(r, 'lineLimit') ? 1 << 20 : r.field('lineLimit').integer(1),
     loss: r.field('loss').oneOf<LossName>(LOSS_NAMES),
     zeroActuals: r.field('zeroActuals').oneOf(['error', 'skip']),
     alpha: r.field('alpha').number(),
@@ -557,6 +571,22 @@ function readCandidateSettings(
     setAlpha: present('setAlpha') ? r.field('setAlpha').number() : 0.1,
     setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'max',
   };
+}
+
+/** A field that reports written before it existed lack. */
+function absent(r: Reader, name: string): boolean {
+  return r.field(name).value === undefined;
+}
+
+/** A per-file column mapping (empty when absent). */
+function readMapping(r: Reader): ColumnMapping {
+  const columns: Record<string, string> = {};
+  if (r.value === undefined) return columns;
+  for (const role of COLUMN_ROLES) {
+    const name = r.field(role);
+    if (name.value !== undefined) columns[role] = name.string();
+  }
+  return columns as ColumnMapping;
 }
 
 /** settings.recent; absent in reports from before it existed. */

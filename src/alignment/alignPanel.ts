@@ -1,8 +1,9 @@
-import { InputError } from '../core/inputError.js';
+import { echo, InputError } from '../core/inputError.js';
 import type { AlignedPanel, QuantileColumn } from '../core/panel.js';
 import type { ForecastTable, LabelColumn, ValueColumn } from '../reading/forecastTable.js';
 import { parseDecimal } from '../reading/numbers.js';
 import { compareKeys, type KeyComponent, sortByKey } from './keyOrder.js';
+import type { TimeFormatName } from './timeFormat.js';
 import { compareCodeUnits, type LabelOrder, orderLabels } from './timeOrder.js';
 
 export interface AlignInput {
@@ -17,6 +18,8 @@ const EXAMPLES = 5;
 export interface AlignHooks {
   /** Called as the steps finish, with the fraction of the work done (0..1); for long inputs. */
   readonly onProgress?: (fraction: number) => void;
+  /** How timestamp and origin labels read (default auto: all numbers or all ISO 8601). */
+  readonly timeFormat?: TimeFormatName;
 }
 
 /**
@@ -53,15 +56,18 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
 
   // Global dictionaries over all files.
   const series = orderSeries(tables.map((t) => t.series));
+  const timeFormat = hooks.timeFormat ?? 'auto';
   const time = orderLabels(
     tables.map((t) => ({ file: t.summary.path, column: t.timestamp })),
     'timestamp',
+    timeFormat,
   );
   const hasOrigin = baseline.origin !== null;
   const origin: LabelOrder | null = hasOrigin
     ? orderLabels(
         [baseline, candidate].map((t) => ({ file: t.summary.path, column: t.origin! })),
         'origin',
+        timeFormat,
       )
     : null;
   const hasPath = baseline.path !== null;
@@ -121,7 +127,7 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
     if (depth > pathAt && path !== null) {
       parts.push(`path=${path.names[keys[pathAt]!.values[row]!]}`);
     }
-    return parts.join(' ');
+    return parts.map((part) => echo(part, 80)).join(' ');
   };
   const checkDuplicates = (table: ForecastTable, keys: KeyComponent[], order: Int32Array): void => {
     for (let i = 1; i < order.length; i++) {
@@ -314,6 +320,10 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
   // Compact ids to the values that occur in the panel.
   const seriesIds = compact(gather32(bKeys[0]!.values, bRows), series.names);
   const timeIds = compact(gather32(bKeys[1]!.values, bRows), time.labels);
+  const timeInstants =
+    time.instants === null
+      ? null
+      : Float64Array.from(timeIds.kept, (rank) => time.instants![rank]!);
   const horizon = new Int32Array(size);
   for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2]!.values[bRows[p]!]!]!;
   const originIds =
@@ -330,6 +340,8 @@ export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPa
     timestamps: timeIds.names,
     timestampKind: time.kind,
     timestampKindReason: time.reason,
+    timeFormat: time.format,
+    timeInstants,
     horizon,
     origin: originIds === null ? null : originIds.ids,
     origins: originIds === null ? [] : originIds.names,
@@ -521,16 +533,21 @@ function gather32(values: Int32Array, rows: Int32Array): Int32Array {
 }
 
 /** Renumbers ids to 0..k−1 keeping their order, dropping ids that do not occur. */
-function compact(ids: Int32Array, names: readonly string[]): { ids: Int32Array; names: string[] } {
+function compact(
+  ids: Int32Array,
+  names: readonly string[],
+): { ids: Int32Array; names: string[]; kept: number[] } {
   const remap = new Int32Array(names.length).fill(-1);
   for (let p = 0; p < ids.length; p++) remap[ids[p]!] = 0;
-  const kept: string[] = [];
+  const keptNames: string[] = [];
+  const kept: number[] = [];
   for (let id = 0; id < names.length; id++) {
     if (remap[id] === 0) {
-      remap[id] = kept.length;
-      kept.push(names[id]!);
+      remap[id] = keptNames.length;
+      keptNames.push(names[id]!);
+      kept.push(id);
     }
   }
   for (let p = 0; p < ids.length; p++) ids[p] = remap[ids[p]!]!;
-  return { ids, names: kept };
+  return { ids, names: keptNames, kept };
 }

@@ -1,4 +1,5 @@
 import type { ForecastTable } from '../reading/forecastTable.js';
+import type { TimeFormatName } from './timeFormat.js';
 import { orderLabels } from './timeOrder.js';
 
 /**
@@ -6,8 +7,15 @@ import { orderLabels } from './timeOrder.js';
  * series of actuals per series name, in time order: the input of the seasonal naive scale
  * (Hyndman & Koehler 2006). Duplicated keys were already refused by the reader.
  */
-export function historyBySeries(table: ForecastTable): Map<string, Float64Array> {
-  const order = orderLabels([{ file: table.summary.path, column: table.timestamp }], 'timestamp');
+export function historyBySeries(
+  table: ForecastTable,
+  timeFormat: TimeFormatName = 'auto',
+): Map<string, Float64Array> {
+  const order = orderLabels(
+    [{ file: table.summary.path, column: table.timestamp }],
+    'timestamp',
+    timeFormat,
+  );
   const ranks = order.ranks[0]!;
   const actual = table.actual?.values ?? new Float64Array(table.size);
   const bySeries = new Map<string, { rank: number; value: number }[]>();

@@ -2,6 +2,7 @@ import type { LossSeries } from '../aggregation/lossSeries.js';
 import { InputError } from '../core/inputError.js';
 import type { TimestampKind } from '../core/panel.js';
 import type { LossSeriesTable } from '../reading/lossSeriesReader.js';
+import type { TimeFormatName } from './timeFormat.js';
 import { orderLabels } from './timeOrder.js';
 
 /**
@@ -9,14 +10,18 @@ import { orderLabels } from './timeOrder.js';
  * forecast files) and turns it into the LossSeries the tests take. Two labels for one instant
  * ("2024-01-01" and "2024-01-01T00:00Z") are one time point twice: an InputError.
  */
-export function orderLossSeries(table: LossSeriesTable): {
+export function orderLossSeries(
+  table: LossSeriesTable,
+  timeFormat: TimeFormatName = 'auto',
+): {
   series: LossSeries;
   timestamps: string[];
   kind: TimestampKind;
   reason: string;
+  format: TimeFormatName;
 } {
   const file = table.summary.path;
-  const order = orderLabels([{ file, column: table.timestamp }], 'timestamp');
+  const order = orderLabels([{ file, column: table.timestamp }], 'timestamp', timeFormat);
   const ranks = order.ranks[0]!;
   const n = table.size;
   const rowAt = new Int32Array(order.labels.length).fill(-1);
@@ -61,5 +66,6 @@ export function orderLossSeries(table: LossSeriesTable): {
     timestamps: [...order.labels],
     kind: order.kind,
     reason: order.reason,
+    format: order.format,
   };
 }

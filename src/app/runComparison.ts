@@ -6,6 +6,7 @@ import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
 import { checkBacktest } from '../integrity/checkBacktest.js';
+import { type ColumnMapping, checkDistinctNames } from '../reading/columnMapping.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
@@ -36,8 +37,8 @@ export async function runComparison(
   const read = (path: string, role: 'baseline' | 'candidate' | 'actuals') =>
     readForecastFile(path, {
       role,
-      columns: settings.columns,
-      ...(settings.format === 'auto' ? {} : { format: settings.format }),
+      columns: columnsFor(settings, role),
+      ...readDialect(settings),
       requireActual: role === 'actuals' || settings.actuals === null,
       onProgress: (done, total) =>
         hooks.onProgress?.({ stage: `reading ${role}`, fraction: total > 0 ? done / total : 1 }),
@@ -48,7 +49,10 @@ export async function runComparison(
   hooks.onProgress?.({ stage: 'aligning', fraction: 0 });
   const panel = alignPanel(
     { baseline, candidate, ...(actuals === undefined ? {} : { actuals }) },
-    { onProgress: (fraction) => hooks.onProgress?.({ stage: 'aligning', fraction }) },
+    {
+      onProgress: (fraction) => hooks.onProgress?.({ stage: 'aligning', fraction }),
+      timeFormat: settings.timeFormat,
+    },
   );
 
   const folds = settings.folds === null ? undefined : await readFoldLayout(settings.folds);
@@ -86,17 +90,17 @@ async function runOnLossFile(path: string, settings: Settings, hooks: RunHooks):
     );
   }
   const table = await readLossSeriesFile(path, {
-    ...(settings.format === 'auto' ? {} : { format: settings.format }),
+    ...readDialect(settings),
     ...(settings.columns.timestamp === undefined
       ? {}
       : { timestampColumn: settings.columns.timestamp }),
     onProgress: (done, total) =>
       hooks.onProgress?.({ stage: 'reading losses', fraction: total > 0 ? done / total : 1 }),
   });
-  const { series, timestamps, kind } = orderLossSeries(table);
+  const { series, timestamps, kind, reason, format } = orderLossSeries(table, settings.timeFormat);
   return evaluateLossSeries(
     series,
-    { file: table.summary, timestamps, kind },
+    { file: table.summary, timestamps, kind, order: { format, reason } },
     settings,
     hooks.resampleRunner,
   );
@@ -109,8 +113,39 @@ async function readHistory(settings: Settings): Promise<Map<string, Float64Array
   const table = await readForecastFile(settings.history, {
     role: 'actuals',
     columns: settings.columns,
-    ...(settings.format === 'auto' ? {} : { format: settings.format }),
+    ...readDialect(settings),
     requireActual: true,
   });
-  return historyBySeries(table);
+  return historyBySeries(table, settings.timeFormat);
+}
+
+/** The column renames for one file: the shared ones, then that file's own. */
+export function columnsFor(
+  settings: Settings,
+  role: 'baseline' | 'candidate' | 'actuals',
+): ColumnMapping {
+  const own =
+    role === 'baseline'
+      ? settings.baselineColumns
+      : role === 'candidate'
+        ? settings.candidateColumns
+        : {};
+  const merged = { ...settings.columns, ...own };
+  checkDistinctNames(merged, `--columns with --${role}-columns`);
+  return merged;
+}
+
+/** Format and CSV dialect options as the readers take them. */
+export function readDialect(settings: Settings): {
+  format?: 'csv' | 'tsv' | 'parquet';
+  delimiter: Settings['delimiter'];
+  decimal: Settings['decimal'];
+  lineLimit: number;
+} {
+  return {
+    ...(settings.format === 'auto' ? {} : { format: settings.format }),
+    delimiter: settings.delimiter,
+    decimal: settings.decimal,
+    lineLimit: settings.lineLimit,
+  };
 }

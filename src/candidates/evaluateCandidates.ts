@@ -60,11 +60,14 @@ export function evaluateCandidates(
     );
   }
   const pairs = input.candidates.map((c) => {
-    const panel = alignPanel({
-      baseline: input.baseline,
-      candidate: c.table,
-      ...(input.actuals === undefined ? {} : { actuals: input.actuals }),
-    });
+    const panel = alignPanel(
+      {
+        baseline: input.baseline,
+        candidate: c.table,
+        ...(input.actuals === undefined ? {} : { actuals: input.actuals }),
+      },
+      { timeFormat: settings.timeFormat },
+    );
     const own = { ...settings, candidate: c.file };
     // The backtest checks of each candidate's own comparison, as in the two-model run.
     const integrity = checkBacktest(

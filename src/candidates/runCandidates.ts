@@ -1,4 +1,4 @@
-import type { RunHooks } from '../app/runComparison.js';
+import { columnsFor, type RunHooks, readDialect } from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
@@ -23,12 +23,12 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
   const read = (
     path: string,
     role: 'baseline' | 'candidate' | 'actuals',
-    columns = settings.columns,
+    columns = columnsFor(settings, role),
   ) =>
     readForecastFile(path, {
       role,
       columns,
-      ...(settings.format === 'auto' ? {} : { format: settings.format }),
+      ...readDialect(settings),
       requireActual: role === 'actuals' || settings.actuals === null,
       onProgress: (done, total) =>
         hooks.onProgress?.({ stage: `reading ${role}`, fraction: total > 0 ? done / total : 1 }),
@@ -39,14 +39,15 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
   let candidates: CandidateTable[];
   if (settings.modelColumn !== null) {
     const file = settings.candidates[0]!.path;
-    if (settings.columns.path !== undefined) {
+    const own = columnsFor(settings, 'candidate');
+    if (own.path !== undefined) {
       throw new InputError('--model-column cannot be combined with a path column yet', {
         file,
-        column: settings.columns.path,
+        column: own.path,
       });
     }
     const table = await read(file, 'candidate', {
-      ...settings.columns,
+      ...own,
       path: settings.modelColumn,
     });
     if (table.summary.ignoredColumns.includes('path')) {

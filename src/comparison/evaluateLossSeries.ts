@@ -1,4 +1,5 @@
 import type { LossSeries } from '../aggregation/lossSeries.js';
+import type { TimeFormatName } from '../alignment/timeFormat.js';
 import type { FileSummary, TimestampKind } from '../core/panel.js';
 import { VERSION } from '../core/version.js';
 import { hypothesisFor } from '../decision/hypothesis.js';
@@ -16,7 +17,12 @@ import { compareLossSeries } from './compareLossSeries.js';
  */
 export function evaluateLossSeries(
   series: LossSeries,
-  source: { file: FileSummary; timestamps: readonly string[]; kind: TimestampKind },
+  source: {
+    file: FileSummary;
+    timestamps: readonly string[];
+    kind: TimestampKind;
+    order?: { format: TimeFormatName; reason: string };
+  },
   settings: Settings,
   resampleRunner?: ResampleRunner,
 ): Report {
@@ -33,7 +39,13 @@ export function evaluateLossSeries(
     version: VERSION,
     settings,
     hypothesis,
-    inputs: lossFileInputsSummary(source.file, source.timestamps, source.kind, series.maxHorizon),
+    inputs: lossFileInputsSummary(
+      source.file,
+      source.timestamps,
+      source.kind,
+      series.maxHorizon,
+      source.order,
+    ),
     comparisons: [overall],
     stability: assessStability({
       series,

@@ -5,6 +5,7 @@ import { VERSION } from '../core/version.js';
 import { decideAdjusted } from '../decision/decideAdjusted.js';
 import { type Hypothesis, hypothesisFor } from '../decision/hypothesis.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
+import { firstOversizedLoss, MAX_LOSS } from '../losses/lossMagnitude.js';
 import { computeRowLosses, LossUnavailableError, type RowLosses } from '../losses/rowLosses.js';
 import { benjaminiHochbergAdjust } from '../multiplicity/benjaminiHochbergAdjust.js';
 import { holmAdjust } from '../multiplicity/holmAdjust.js';
@@ -76,7 +77,7 @@ export function evaluatePanel(
         { bootstrap: false },
       ),
     );
-    comparisons.push(...perPath);
+    for (const c of perPath) comparisons.push(c);
     const worse = perPath.filter((c) => c.meanDifference > 0).length;
     pathSummary = {
       paths: perPath.length,
@@ -92,7 +93,7 @@ export function evaluatePanel(
   let seriesSummary: SeriesSummary | null = null;
   if (panel.seriesNames.length > 1) {
     const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
-    comparisons.push(...perSeries.comparisons);
+    for (const c of perSeries.comparisons) comparisons.push(c);
     seriesSummary = perSeries.summary;
   }
 
@@ -190,14 +191,15 @@ function seriesComparisons(
       n: c.n,
       minPoints: settings.minPoints,
     });
-    return {
-      ...c,
+    // In place: `raw` is this function's own, and a copy per series doubles the memory of a
+    // panel with a million series.
+    return Object.assign(c as Mutable<Comparison>, {
       verdict: decision.verdict,
       reasons: decision.reasons,
       rejected: { dieboldMariano: decision.rejected, bootstrap: null },
       adjustedPValue: policyP[j] ?? null,
       direction,
-    };
+    }) as Comparison;
   });
   const top = comparisons
     .filter((c) => c.direction === 'worse')
@@ -220,6 +222,8 @@ function seriesComparisons(
     },
   };
 }
+
+type Mutable<T> = { -readonly [K in keyof T]: T[K] };
 
 /** Row indices by value (a horizon, a series id), in row order: one pass over the panel. */
 function groupRows(values: Int32Array): Map<number, number[]> {
@@ -300,6 +304,25 @@ function rowLossesOrInputError(panel: AlignedPanel, settings: Settings): RowLoss
       });
     }
     throw error;
+  }
+  for (const [model, values] of [
+    ['baseline', losses.baseline],
+    ['candidate', losses.candidate],
+  ] as const) {
+    const row = firstOversizedLoss(values, losses.included);
+    if (row >= 0) {
+      const series = panel.seriesNames[panel.series[row]!];
+      throw new InputError(
+        `the ${model}'s ${settings.loss} loss for series ${JSON.stringify(series)}, timestamp ${JSON.stringify(
+          panel.timestamps[panel.time[row]!],
+        )} is ${values[row]}: beyond ${MAX_LOSS}, means and variances would overflow double precision; rescale the data (e.g. to thousands) or check this row`,
+        {
+          file: panel.actualSource.file,
+          line: panel.actualSource.lines[row]!,
+          value: String(values[row]),
+        },
+      );
+    }
   }
   if (settings.zeroActuals === 'error' && losses.zeroActualRows.length > 0) {
     const row = losses.zeroActualRows[0]!;

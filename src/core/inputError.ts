@@ -31,14 +31,27 @@ export class InputError extends Error {
    */
   describe(): string {
     const { file, line, column, value } = this.location;
-    const where = file === undefined ? '' : line === undefined ? `${file}: ` : `${file}:${line}: `;
+    const name = file === undefined ? '' : echo(file);
+    const where = file === undefined ? '' : line === undefined ? `${name}: ` : `${name}:${line}: `;
     const details: string[] = [];
-    if (column !== undefined) details.push(`column "${column}"`);
-    if (value !== undefined) details.push(`value ${JSON.stringify(truncate(value, 80))}`);
-    return printable(
-      `${where}${this.message}${details.length > 0 ? ` (${details.join(', ')})` : ''}`,
-    );
+    if (column !== undefined) details.push(`column "${echo(column)}"`);
+    if (value !== undefined) details.push(`value ${JSON.stringify(echo(value))}`);
+    const message = echo(this.message, MESSAGE_LIMIT);
+    return printable(`${where}${message}${details.length > 0 ? ` (${details.join(', ')})` : ''}`);
   }
+}
+
+/** Longest echoed value (file name, column, value) in a message: about 200 characters. */
+export const ECHO_LIMIT = 200;
+const MESSAGE_LIMIT = 2000;
+
+/**
+ * Text from the input as a message may echo it: at most `max` characters (default ECHO_LIMIT),
+ * cut with "…" and the full length, so a 256 MiB header line is never printed whole.
+ */
+export function echo(text: string, max: number = ECHO_LIMIT): string {
+  if (text.length <= max) return text;
+  return `${text.slice(0, max)}… (${text.length} characters)`;
 }
 
 /**
@@ -60,8 +73,4 @@ export function printable(text: string): string {
             ? '\\t'
             : `\\u{${ch.codePointAt(0)?.toString(16).toUpperCase().padStart(4, '0')}}`,
   );
-}
-
-function truncate(text: string, max: number): string {
-  return text.length <= max ? text : `${text.slice(0, max)}…`;
 }

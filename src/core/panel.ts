@@ -1,3 +1,5 @@
+import type { TimeFormatName } from '../alignment/timeFormat.js';
+
 /**
  * The aligned panel: what the reading + alignment edge hands to the pure core. One entry per
  * matched key (series, timestamp, horizon, origin, path), in no particular order; columnar typed
@@ -83,6 +85,14 @@ export interface AlignedPanel {
   readonly timestampKind: TimestampKind;
   /** One sentence on why this kind was chosen (e.g. which label forced text order). */
   readonly timestampKindReason: string;
+  /** The time format the labels were read with (the `time-format` option). */
+  readonly timeFormat: TimeFormatName;
+  /**
+   * The parsed time of each timestamp rank (same indexing as `timestamps`): epoch milliseconds
+   * (UTC) for date-times, the number itself for numeric timestamps, null in text order. For
+   * anything that needs real time distances (e.g. inferring the data's frequency).
+   */
+  readonly timeInstants: Float64Array | null;
   /** Steps ahead per row (integer ≥ 1; 1 when the files have no horizon column). */
   readonly horizon: Int32Array;
   /**

@@ -1,6 +1,8 @@
 import { InputError } from '../core/inputError.js';
 import type { FileSummary } from '../core/panel.js';
+import { MAX_LOSS } from '../losses/lossMagnitude.js';
 import type { LabelColumn } from './forecastTable.js';
+import type { Delimiter } from './inputFormat.js';
 import { parseDecimal } from './numbers.js';
 import type { TextFormat } from './tableBuilder.js';
 import { Tokenizer } from './tokenizer.js';
@@ -47,13 +49,33 @@ export class LossSeriesReader {
   private rows: number[] = [];
   private horizon: number[] = [];
 
-  constructor(path: string, options: { format: TextFormat; timestampColumn?: string }) {
+  private readonly decimalComma: boolean;
+
+  constructor(
+    path: string,
+    options: {
+      format: TextFormat;
+      timestampColumn?: string;
+      delimiter?: Delimiter;
+      decimal?: '.' | ',';
+      lineLimit?: number;
+    },
+  ) {
     this.path = path;
     this.timestampName = options.timestampColumn ?? 'timestamp';
+    const delimiter = options.delimiter ?? (options.format === 'tsv' ? '\t' : ',');
+    this.decimalComma = options.decimal === ',';
+    if (this.decimalComma && delimiter === ',') {
+      throw new InputError(
+        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
+        { file: path },
+      );
+    }
     this.tokenizer = new Tokenizer(
-      options.format === 'tsv' ? '\t' : ',',
+      delimiter,
       (fields, count, line) => this.record(fields, count, line),
       path,
+      options.lineLimit,
     );
   }
 
@@ -131,7 +153,11 @@ export class LossSeriesReader {
     const at = (name: string) => fields[index[name]!]!;
     const number = (name: string): number => {
       const text = at(name);
-      const x = parseDecimal(text);
+      const x = this.decimalComma
+        ? text.includes('.')
+          ? Number.NaN
+          : parseDecimal(text.replace(',', '.'))
+        : parseDecimal(text);
       if (Number.isNaN(x)) {
         throw new InputError('not a finite decimal number', {
           file: this.path,
@@ -165,6 +191,17 @@ export class LossSeriesReader {
     }
     const b = number('baseline_loss');
     const c = number('candidate_loss');
+    for (const [name, x] of [
+      ['baseline_loss', b],
+      ['candidate_loss', c],
+    ] as const) {
+      if (Math.abs(x) > MAX_LOSS) {
+        throw new InputError(
+          `a loss beyond ${MAX_LOSS} would overflow means and variances in double precision; rescale the data`,
+          { file: this.path, line, column: name, value: at(name) },
+        );
+      }
+    }
     if ('differential' in index) {
       const d = number('differential');
       const scale = Math.max(1, Math.abs(b), Math.abs(c));

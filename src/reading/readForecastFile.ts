@@ -1,25 +1,39 @@
 /**
- * Reads one forecast file: the file edge (`streamTextFile`) feeds the pure ForecastTableReader.
+ * Reads one forecast file: the file edge (`streamTextFile` for CSV/TSV, `streamParquetFile` for
+ * Parquet) feeds the pure ForecastTableReader.
  */
 import type { ColumnMapping } from './columnMapping.js';
 import type { ForecastTable } from './forecastTable.js';
+import { type DelimiterName, delimiterFor } from './inputFormat.js';
+import { streamParquetFile } from './streamParquetFile.js';
 import { streamTextFile } from './streamTextFile.js';
 import { type FileRole, ForecastTableReader, type TextFormat } from './tableBuilder.js';
+
+export type FileFormat = TextFormat | 'parquet';
 
 export interface ReadOptions {
   readonly role: FileRole;
   readonly columns?: ColumnMapping;
-  /** Overrides the format the file name implies (.tsv / .tsv.gz → tsv, else csv). */
-  readonly format?: TextFormat;
+  /** Overrides the format the file name implies (.parquet → parquet, .tsv / .tsv.gz → tsv, else csv). */
+  readonly format?: FileFormat;
   /** See ParseOptions.requireActual. */
   readonly requireActual?: boolean;
+  /** CSV dialect (ignored for Parquet). */
+  readonly delimiter?: DelimiterName;
+  readonly decimal?: '.' | ',';
+  readonly lineLimit?: number;
   /** Called after each chunk of stored bytes with the bytes read so far and the file size. */
   readonly onProgress?: (bytesRead: number, totalBytes: number) => void;
 }
 
-/** What the file name implies: gzip by a final `.gz`, TSV by `.tsv` before it (any case). */
-export function formatFromPath(path: string): { format: TextFormat; gzip: boolean } {
+/**
+ * What the file name implies: Parquet by `.parquet`, gzip by a final `.gz`, TSV by `.tsv` before
+ * it (any case).
+ */
+export function formatFromPath(path: string): { format: FileFormat; gzip: boolean } {
   const lower = path.toLowerCase();
+  if (lower.endsWith('.parquet') || lower.endsWith('.pq'))
+    return { format: 'parquet', gzip: false };
   const gzip = lower.endsWith('.gz');
   const base = gzip ? lower.slice(0, -3) : lower;
   return { format: base.endsWith('.tsv') ? 'tsv' : 'csv', gzip };
@@ -28,12 +42,25 @@ export function formatFromPath(path: string): { format: TextFormat; gzip: boolea
 export async function readForecastFile(path: string, options: ReadOptions): Promise<ForecastTable> {
   const implied = formatFromPath(path);
   const format = options.format ?? implied.format;
+  const textFormat: TextFormat = format === 'tsv' ? 'tsv' : 'csv';
   const reader = new ForecastTableReader(path, {
     role: options.role,
-    format,
+    format: textFormat,
+    delimiter: delimiterFor(options.delimiter ?? 'auto', textFormat === 'tsv'),
+    ...(format === 'parquet' ? {} : withDialect(options)),
     ...(options.columns === undefined ? {} : { columns: options.columns }),
     ...(options.requireActual === undefined ? {} : { requireActual: options.requireActual }),
   });
-  const sha256 = await streamTextFile(path, implied.gzip, reader, options.onProgress);
+  const sha256 =
+    format === 'parquet'
+      ? await streamParquetFile(path, reader, options.onProgress)
+      : await streamTextFile(path, implied.gzip, reader, options.onProgress);
   return reader.finish(sha256);
+}
+
+function withDialect(options: ReadOptions): { decimal?: '.' | ','; lineLimit?: number } {
+  return {
+    ...(options.decimal === undefined ? {} : { decimal: options.decimal }),
+    ...(options.lineLimit === undefined ? {} : { lineLimit: options.lineLimit }),
+  };
 }

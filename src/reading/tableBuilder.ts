@@ -1,11 +1,22 @@
-import { InputError } from '../core/inputError.js';
+import { echo, InputError } from '../core/inputError.js';
 import type { FileSummary, QuantileColumn } from '../core/panel.js';
 import { type ColumnMapping, checkDistinctNames, resolveColumns } from './columnMapping.js';
 import type { ForecastTable, LabelColumn } from './forecastTable.js';
+import { type Delimiter, delimiterLabel } from './inputFormat.js';
 import { parseDecimal, parseHorizon } from './numbers.js';
+import { RowKeySet } from './rowKeySet.js';
 import { Tokenizer } from './tokenizer.js';
 
 export type FileRole = 'baseline' | 'candidate' | 'actuals';
+/**
+ * Longest key value (series, timestamp, origin, path). Distinct key values are kept for the whole
+ * file, so a cap on them (with the line limit and duplicate keys found while reading) bounds the
+ * memory a small compressed file can make the reader use.
+ */
+export const MAX_LABEL = 512;
+
+/** One field of a record: text from a CSV, or a number from a typed source such as Parquet. */
+export type Field = string | number;
 export type TextFormat = 'csv' | 'tsv';
 
 export interface ParseOptions {
@@ -18,6 +29,12 @@ export interface ParseOptions {
    * Actuals files always require it.
    */
   readonly requireActual?: boolean;
+  /** Field separator; overrides the one `format` implies. */
+  readonly delimiter?: Delimiter;
+  /** Decimal mark of numbers: "." (default) or "," (then the delimiter must not be a comma). */
+  readonly decimal?: '.' | ',';
+  /** Longest record in characters (default 1 MiB). */
+  readonly lineLimit?: number;
 }
 
 /**
@@ -47,20 +64,47 @@ export class ForecastTableReader {
   private readonly timeLabels = new Interner();
   private readonly originLabels = new Interner();
   private readonly pathLabels = new Interner();
+  private readonly delimiter: Delimiter;
+  private readonly decimalComma: boolean;
+  private keys: RowKeySet | null = null;
 
   constructor(path: string, options: ParseOptions) {
     this.path = path;
     this.options = options;
     checkDistinctNames(options.columns ?? {});
-    const delimiter = options.format === 'tsv' ? '\t' : ',';
+    const delimiter = options.delimiter ?? (options.format === 'tsv' ? '\t' : ',');
+    this.delimiter = delimiter;
+    this.decimalComma = options.decimal === ',';
+    if (this.decimalComma && delimiter === ',') {
+      throw new InputError(
+        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
+        { file: path },
+      );
+    }
     this.tokenizer = new Tokenizer(
       delimiter,
-      (fields, count, line) => {
-        if (this.header === null) this.readHeader(fields, count, line);
-        else this.readRow(fields, count, line);
-      },
+      (fields, count, line) => this.record(fields, count, line),
       path,
+      options.lineLimit,
     );
+  }
+
+  /**
+   * Takes one record (the header first, then rows) from a source other than text, such as a
+   * Parquet file's rows; `line` is what messages call the record's line. A field may be a number
+   * already (a Parquet double): it is taken as the double a CSV's shortest round-trip text of it
+   * parses to, that is, as it is.
+   */
+  record(fields: readonly Field[], count: number, line: number): void {
+    if (this.header === null) this.readHeader(fields.map(String), count, line);
+    else this.readRow(fields, count, line);
+  }
+
+  /** Header indices of the columns that play a role (after the header was read). */
+  get usedColumns(): readonly number[] {
+    const h = this.header;
+    if (h === null) return [];
+    return h.names.map((_, i) => i).filter((i) => !h.ignored.includes(h.names[i]!));
   }
 
   push(chunk: string): void {
@@ -145,9 +189,26 @@ export class ForecastTableReader {
   }
 
   private readHeader(fields: string[], count: number, line: number): void {
-    this.header = resolveHeader(fields.slice(0, count), this.path, line, this.options);
+    this.header = resolveHeader(
+      fields.slice(0, count),
+      this.path,
+      line,
+      this.options,
+      this.delimiter,
+    );
     this.headerLine = line;
     this.quantileValues = this.header.quantiles.map(() => new Float64Array(0));
+    const h = this.header;
+    // Series first, then time: the orders files are usually written in (see RowKeySet).
+    const key: (() => Int32Array)[] = [];
+    if (h.series >= 0) key.push(() => this.seriesIds);
+    key.push(() => this.timeIds);
+    if (this.options.role !== 'actuals') {
+      if (h.horizon >= 0) key.push(() => this.horizons);
+      if (h.origin >= 0) key.push(() => this.originIds);
+      if (h.path >= 0) key.push(() => this.pathIds);
+    }
+    this.keys = new RowKeySet(key);
   }
 
   private grow(): void {
@@ -164,15 +225,16 @@ export class ForecastTableReader {
     if (h.weight >= 0) this.weight = growFloat(this.weight, capacity);
     this.quantileValues = this.quantileValues.map((v) => growFloat(v, capacity));
     this.capacity = capacity;
+    this.keys?.refresh();
   }
 
-  private readRow(fields: string[], count: number, line: number): void {
+  private readRow(fields: readonly Field[], count: number, line: number): void {
     const h = this.header!;
     if (count !== h.names.length) {
       throw new InputError(`expected ${h.names.length} fields as in the header, found ${count}`, {
         file: this.path,
         line,
-        value: fields.slice(0, count).join(this.options.format === 'tsv' ? '\t' : ','),
+        value: echo(fields.slice(0, Math.min(count, 50)).join(this.delimiter)),
       });
     }
     const r = this.rows;
@@ -190,13 +252,18 @@ export class ForecastTableReader {
     }
     if (h.horizon >= 0) {
       const text = fields[h.horizon]!;
-      const value = parseHorizon(text);
+      const value =
+        typeof text === 'number'
+          ? Number.isInteger(text) && text >= 1 && text <= 0x7fffffff
+            ? text
+            : 0
+          : parseHorizon(text);
       if (value === 0) {
         throw new InputError('the horizon must be a whole number ≥ 1', {
           file: this.path,
           line,
           column: h.names[h.horizon]!,
-          value: text,
+          value: String(text),
         });
       }
       this.horizons[r] = value;
@@ -212,7 +279,7 @@ export class ForecastTableReader {
           file: this.path,
           line,
           column: h.names[h.weight]!,
-          value: fields[h.weight]!,
+          value: String(fields[h.weight]!),
         });
       }
       this.weight[r] = value;
@@ -222,10 +289,41 @@ export class ForecastTableReader {
       const index = qs[k]!.index;
       this.quantileValues[k]![r] = this.number(fields[index]!, index, line);
     }
+    const earlier = this.keys!.add(r);
+    if (earlier >= 0) this.duplicate(earlier, r, line);
     this.rows = r + 1;
   }
 
-  private keyLabel(interner: Interner, text: string, index: number, line: number): number {
+  /** A key seen twice in this file: refused at once, naming both lines. */
+  private duplicate(earlier: number, row: number, line: number): never {
+    const h = this.header!;
+    // Spelled as alignment spells keys (role names; horizon 1 when there is no horizon column).
+    const parts: string[] = [];
+    const label = (role: string, interner: Interner, ids: Int32Array, index: number): void => {
+      if (index >= 0) parts.push(`${role}=${interner.labels[ids[row]!]}`);
+    };
+    label('series', this.seriesLabels, this.seriesIds, h.series);
+    label('timestamp', this.timeLabels, this.timeIds, h.timestamp);
+    if (this.options.role !== 'actuals') {
+      parts.push(`horizon=${h.horizon >= 0 ? this.horizons[row] : 1}`);
+      label('origin', this.originLabels, this.originIds, h.origin);
+      label('path', this.pathLabels, this.pathIds, h.path);
+    }
+    const key = echo(parts.join(' '));
+    throw new InputError(
+      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line} have the same key`,
+      { file: this.path, line, value: key },
+    );
+  }
+
+  private keyLabel(interner: Interner, field: Field, index: number, line: number): number {
+    const text = typeof field === 'string' ? field : String(field);
+    if (text.length > MAX_LABEL) {
+      throw new InputError(
+        `a key value longer than ${MAX_LABEL} characters (${text.length}); series names, timestamps, origins and paths are kept in memory for every distinct value, so they must be short`,
+        { file: this.path, line, column: this.header!.names[index]!, value: text },
+      );
+    }
     if (text.length === 0) {
       throw new InputError('empty value in a key column', {
         file: this.path,
@@ -237,11 +335,30 @@ export class ForecastTableReader {
     return interner.id(text, line);
   }
 
-  private number(text: string, index: number, line: number): number {
-    const value = parseDecimal(text);
+  private number(field: Field, index: number, line: number): number {
+    if (typeof field === 'number') {
+      if (Number.isFinite(field)) return field;
+      throw new InputError('not a finite number', {
+        file: this.path,
+        line,
+        column: this.header!.names[index]!,
+        value: String(field),
+      });
+    }
+    const text = field;
+    const value = this.decimalComma ? parseDecimalComma(text) : parseDecimal(text);
     if (!Number.isNaN(value)) return value; // not NaN
+    let hint = '';
+    if (!this.decimalComma && /^[-+]?\d*,\d+$/.test(text)) {
+      hint = ` (a decimal comma? add --decimal , with a separator other than the comma, e.g. --delimiter ";")`;
+    } else if (this.decimalComma && text.includes('.')) {
+      hint =
+        ' (with --decimal , a point is not a decimal mark, and thousands separators are not read)';
+    }
     throw new InputError(
-      text.length === 0 ? 'empty value where a number is required' : 'not a finite decimal number',
+      text.length === 0
+        ? 'empty value where a number is required'
+        : `not a finite decimal number${hint}`,
       { file: this.path, line, column: this.header!.names[index]!, value: text },
     );
   }
@@ -278,7 +395,13 @@ interface Header {
   }[];
 }
 
-function resolveHeader(names: string[], file: string, line: number, options: ParseOptions): Header {
+function resolveHeader(
+  names: string[],
+  file: string,
+  line: number,
+  options: ParseOptions,
+  delimiter: Delimiter = ',',
+): Header {
   const columns = resolveColumns(options.columns);
   const predictions = options.role !== 'actuals';
   const used = new Set<number>();
@@ -332,10 +455,11 @@ function resolveHeader(names: string[], file: string, line: number, options: Par
     quantiles.sort((a, b) => a.level - b.level);
   }
 
-  const header = names.map((n) => JSON.stringify(n)).join(', ');
+  const shown = names.slice(0, 20).map((n) => JSON.stringify(echo(n, 60)));
+  const header = `${shown.join(', ')}${names.length > 20 ? `, … (${names.length} columns)` : ''}`;
   const missing = (role: string, name: string, why: string): InputError =>
     new InputError(
-      `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)`,
+      `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)${delimiterHint(names, delimiter)}`,
       { file, line, column: name },
     );
   if (timestamp < 0) throw missing('timestamp', columns.timestamp, '(required)');
@@ -369,6 +493,32 @@ function resolveHeader(names: string[], file: string, line: number, options: Par
     weight,
     quantiles,
   };
+}
+
+/**
+ * When a header is one field that holds another separator ("series;timestamp;actual" read with
+ * commas), the likely fix.
+ */
+function delimiterHint(names: readonly string[], delimiter: Delimiter): string {
+  if (names.length !== 1) return '';
+  const only = names[0]!;
+  for (const [candidate, option] of [
+    [';', '";"'],
+    ['\t', 'tab'],
+    ['|', '"|"'],
+    [',', '","'],
+  ] as const) {
+    if (candidate !== delimiter && only.includes(candidate)) {
+      return `; the header is one field that contains ${candidate === '\t' ? 'tabs' : `"${candidate}"`} but the separator is ${delimiterLabel(delimiter)}: add --delimiter ${option}`;
+    }
+  }
+  return '';
+}
+
+/** A number written with a decimal comma ("3,25"); a point anywhere makes it NaN. */
+function parseDecimalComma(text: string): number {
+  if (text.includes('.')) return Number.NaN;
+  return parseDecimal(text.replace(',', '.'));
 }
 
 /** Interns labels to dense ids, remembering the first line of each. */

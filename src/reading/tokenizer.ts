@@ -1,4 +1,5 @@
-import { InputError } from '../core/inputError.js';
+import { echo, InputError } from '../core/inputError.js';
+import { type Delimiter, delimiterLabel } from './inputFormat.js';
 
 /**
  * Receives one record: `fields[0..count-1]` are its fields (the array is reused between calls, so
@@ -19,6 +20,10 @@ export type RecordSink = (fields: string[], count: number, line: number) => void
  * - Line numbers are physical: a record whose quoted field spans three lines advances the count by
  *   three, so the next record's line is the line an editor shows.
  *
+ * - A record longer than `lineLimit` code units (the whole record, quoted line breaks included)
+ *   is an InputError naming its first line, found as soon as that many characters are buffered,
+ *   so a file without line breaks cannot exhaust memory.
+ *
  * Chunks may split anywhere (inside a field, a quote pair, or a CRLF); the records are the same as
  * for the whole text at once. Only the unfinished tail of a chunk is kept, so input larger than
  * one JavaScript string can hold streams through.
@@ -37,12 +42,19 @@ export class Tokenizer {
   private carry = '';
   private linesDone = 0;
   private started = false;
+  private readonly lineLimit: number;
 
-  constructor(delimiter: ',' | '\t', sink: RecordSink, file: string) {
+  constructor(
+    delimiter: Delimiter,
+    sink: RecordSink,
+    file: string,
+    lineLimit: number = DEFAULT_LINE_LIMIT,
+  ) {
     this.delimiter = delimiter;
     this.delimiterCode = delimiter.charCodeAt(0);
     this.sink = sink;
     this.file = file;
+    this.lineLimit = lineLimit;
   }
 
   /** Physical lines consumed so far (complete records and blank lines). */
@@ -75,6 +87,7 @@ export class Tokenizer {
         continue;
       }
       if (nl === -1) break;
+      if (nl - pos > this.lineLimit) this.tooLong(buf, pos, this.linesDone + 1);
       let lineEnd = nl;
       if (lineEnd > pos && buf.charCodeAt(lineEnd - 1) === 13) lineEnd--;
       this.linesDone++;
@@ -97,7 +110,22 @@ export class Tokenizer {
       sink(fields, count, this.linesDone);
       pos = nl + 1;
     }
-    if (pos < n) this.carry = buf.slice(pos);
+    if (pos < n) {
+      if (n - pos > this.lineLimit) this.tooLong(buf, pos, this.linesDone + 1);
+      this.carry = buf.slice(pos);
+    }
+  }
+
+  private tooLong(buf: string, pos: number, line: number): never {
+    throw new InputError(
+      `the line is longer than the limit of ${this.lineLimit} characters (raise it with --line-limit if the file is right; a file without line breaks, or with an unclosed quote, also ends here)`,
+      { file: this.file, line, value: buf.slice(pos, pos + 200) },
+    );
+  }
+
+  /** How the delimiter is named in messages. */
+  get delimiterName(): string {
+    return delimiterLabel(this.delimiter as Delimiter);
   }
 
   /** Flushes the last record (which need not end with a line break). */
@@ -191,6 +219,7 @@ export class Tokenizer {
       break;
     }
     const line = this.linesDone + 1;
+    if (i - pos > this.lineLimit) this.tooLong(buf, pos, line);
     this.linesDone += 1 + newlines;
     this.sink(fields, count, line);
     return i;
@@ -208,5 +237,8 @@ function countNewlines(text: string, from: number, to: number): number {
 }
 
 function truncateValue(text: string): string {
-  return text.length <= 60 ? text : `${text.slice(0, 60)}…`;
+  return echo(text, 60);
 }
+
+/** Default longest record: 1 MiB of text (`line-limit`). */
+export const DEFAULT_LINE_LIMIT = 1 << 20;

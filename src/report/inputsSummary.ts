@@ -1,3 +1,4 @@
+import type { TimeFormatName } from '../alignment/timeFormat.js';
 import type { AlignedPanel, FileSummary, TimestampKind } from '../core/panel.js';
 import type { RowLosses } from '../losses/rowLosses.js';
 import type { InputsSummary } from './reportModel.js';
@@ -26,6 +27,8 @@ export function panelInputsSummary(panel: AlignedPanel, losses: RowLosses): Inpu
       kind: panel.timestampKind,
       first: ts[0] ?? null,
       last: ts.at(-1) ?? null,
+      format: panel.timeFormat,
+      order: panel.timestampKindReason,
     },
     series: panel.seriesNames.length,
     horizons: [...horizons].sort((a, b) => a - b),
@@ -40,6 +43,7 @@ export function lossFileInputsSummary(
   timestamps: readonly string[],
   kind: TimestampKind,
   maxHorizon: number,
+  order: { format: TimeFormatName; reason: string } = { format: 'auto', reason: '' },
 ): InputsSummary {
   return {
     files: [file],
@@ -57,6 +61,8 @@ export function lossFileInputsSummary(
       kind,
       first: timestamps[0] ?? null,
       last: timestamps.at(-1) ?? null,
+      format: order.format,
+      order: order.reason,
     },
     series: 1,
     horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),

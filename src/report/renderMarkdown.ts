@@ -1,6 +1,7 @@
 import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatNumber.js';
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
+import { inputNotes } from './inputNotes.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
 import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
@@ -218,6 +219,7 @@ function inputSection(report: Report): string[] {
     )}), ${i.series} series, horizons ${i.horizons.join(', ') || '1'}.`,
     `Left out: ${d.baseline} baseline rows the candidate lacks, ${d.candidate} candidate rows the baseline lacks, ${d.withoutActual} rows without an actual, ${d.actualsUnused} unused actuals, ${d.skippedByLoss} rows skipped by the loss.`,
   );
+  for (const note of inputNotes(report)) out.push(esc(note));
   if (i.examples.baselineOnly.length > 0) {
     out.push(
       `Examples the candidate lacks: ${i.examples.baselineOnly.map((k) => esc(k)).join(', ')}.`,

@@ -1,4 +1,5 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
+import { inputNotes } from './inputNotes.js';
 import { intervalNote, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
 import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
@@ -86,6 +87,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`,
     ),
   );
+  for (const note of inputNotes(report)) out.push(paint('2', wrap(clean(note), 100, '  ')));
   return `${out.join('\n')}\n`;
 }
 

@@ -1,3 +1,4 @@
+import type { TimeFormatName } from '../alignment/timeFormat.js';
 import type {
   CandidateSummary,
   ConfidenceSetSummary,
@@ -224,6 +225,10 @@ export interface InputsSummary {
     readonly kind: 'number' | 'datetime' | 'text';
     readonly first: string | null;
     readonly last: string | null;
+    /** How the labels were read (the time-format option). */
+    readonly format: TimeFormatName;
+    /** The time order in one sentence (numeric, chronological, or text on request). */
+    readonly order: string;
   };
   readonly series: number;
   readonly horizons: readonly number[];

@@ -1,4 +1,6 @@
-import { LOSS_NAMES } from '../losses/lossName.js';
+import { TIME_FORMAT_NAMES } from '../alignment/timeFormat.js';
+import { LOSS_ALIASES, LOSS_NAMES } from '../losses/lossName.js';
+import { DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
 
 /**
  * The engine's options, in one place: the CLI's flags (`--name`) and the action's inputs (`name`)
@@ -88,16 +90,52 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     help: 'rename columns, e.g. actual=observed,prediction=point,series=zone',
   },
   {
+    name: 'baseline-columns',
+    valueName: 'ROLE=HEADER,…',
+    defaultValue: '',
+    help: 'renames for the baseline file only, over --columns (two pipelines that name columns differently)',
+  },
+  {
+    name: 'candidate-columns',
+    valueName: 'ROLE=HEADER,…',
+    defaultValue: '',
+    help: 'renames for the candidate file only, over --columns',
+  },
+  {
     name: 'format',
     defaultValue: 'auto',
-    choices: ['auto', 'csv', 'tsv'],
-    help: 'input format; auto: TSV for .tsv/.tsv.gz, else CSV',
+    choices: INPUT_FORMATS,
+    help: 'input format; auto: Parquet for .parquet, TSV for .tsv/.tsv.gz, else CSV',
+  },
+  {
+    name: 'delimiter',
+    defaultValue: 'auto',
+    choices: DELIMITER_NAMES,
+    help: 'field separator of CSV files: auto (tab for TSV, else comma), or comma , semicolon ; pipe | tab',
+  },
+  {
+    name: 'decimal',
+    defaultValue: '.',
+    choices: ['.', ','],
+    help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter',
+  },
+  {
+    name: 'time-format',
+    defaultValue: 'auto',
+    choices: TIME_FORMAT_NAMES,
+    help: 'how timestamps read: auto (all numbers or all ISO 8601, else refused), number, iso-8601, day-month-year (31/12/2026 [23:59[:59]]), month-day-year (12/31/2026 [23:59[:59]]), text-order (compare as text: 10 before 9)',
+  },
+  {
+    name: 'line-limit',
+    valueName: 'BYTES',
+    defaultValue: '1048576',
+    help: 'longest line (and field) accepted in a CSV file, in characters; longer is refused',
   },
   {
     name: 'loss',
     defaultValue: 'squared',
-    choices: LOSS_NAMES,
-    help: 'loss per row: squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)',
+    choices: [...LOSS_NAMES, ...Object.keys(LOSS_ALIASES)],
+    help: 'loss per row (mse = squared, mae = absolute, mape = ape): squared, absolute, ape (absolute percentage), sape (symmetric), pinball (quantile columns), interval (interval score of --interval)',
   },
   {
     name: 'zero-actuals',
@@ -113,9 +151,9 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   },
   {
     name: 'margin',
-    valueName: 'NUMBER',
+    valueName: 'NUMBER|PERCENT%',
     defaultValue: '0',
-    help: 'allowed margin: with --margin-kind relative, 0.02 means the candidate may be up to 2% worse',
+    help: 'allowed margin: with --margin-kind relative, 0.02 or 2% means the candidate may be up to 2% worse (a relative margin above 1 must be written as a percentage)',
   },
   {
     name: 'margin-kind',
@@ -290,12 +328,12 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
     name: 'json',
     valueName: 'FILE',
     defaultValue: null,
-    help: 'write the JSON report to this file',
+    help: 'write the JSON report to this file (- for standard output)',
   },
   {
     name: 'markdown',
     valueName: 'FILE',
     defaultValue: null,
-    help: 'write the Markdown report to this file',
+    help: 'write the Markdown report to this file (- for standard output)',
   },
 ];

@@ -1,7 +1,7 @@
 import { parseCandidateList } from '../candidates/candidateList.js';
 import { InputError } from '../core/inputError.js';
 import { FREQUENCY_SYNTAX, parseFrequency } from '../integrity/frequency.js';
-import type { LossName } from '../losses/lossName.js';
+import { canonicalLoss } from '../losses/lossName.js';
 import { parseColumnMapping } from '../reading/columnMapping.js';
 import { parseRecentWindow } from '../stability/recentWindow.js';
 import { defaultConfidence } from './defaultConfidence.js';
@@ -104,11 +104,17 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     losses,
     actuals: optional('actuals'),
     columns: parseColumnMapping(value('columns'), label('columns')),
+    baselineColumns: parseColumnMapping(value('baseline-columns'), label('baseline-columns')),
+    candidateColumns: parseColumnMapping(value('candidate-columns'), label('candidate-columns')),
     format: value('format') as Settings['format'],
-    loss: value('loss') as LossName,
+    delimiter: value('delimiter') as Settings['delimiter'],
+    decimal: parseDecimalMark(value('decimal'), value('delimiter'), label),
+    timeFormat: value('time-format') as Settings['timeFormat'],
+    lineLimit: integer('line-limit', 1024, 1 << 28),
+    loss: canonicalLoss(value('loss')),
     zeroActuals: value('zero-actuals') as Settings['zeroActuals'],
     alpha,
-    margin: number('margin', (x) => x >= 0, 'a number ≥ 0 (0.02 = 2% with --margin-kind relative)'),
+    margin: parseMargin(value('margin'), value('margin-kind'), label),
     marginKind: value('margin-kind') as Settings['marginKind'],
     policy: value('policy') as Settings['policy'],
     agreement: value('agreement') as Settings['agreement'],
@@ -124,7 +130,11 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     minPoints: integer('min-points', 1),
     shortData: value('short-data') as Settings['shortData'],
     allowMissing: bool('allow-missing'),
-    interval: parseInterval(value('interval'), label('interval'), value('loss') === 'interval'),
+    interval: parseInterval(
+      value('interval'),
+      label('interval'),
+      canonicalLoss(value('loss')) === 'interval',
+    ),
     pooling: value('pooling') as Settings['pooling'],
     scale: value('scale') as Settings['scale'],
     history: optional('history'),
@@ -147,6 +157,55 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     json: optional('json'),
     markdown: optional('markdown'),
   };
+}
+
+/**
+ * The margin as a number: "0.02" or "2%" (= 0.02). A relative margin above 1 (the candidate may be
+ * more than twice as bad) is nearly always a percentage typed without its sign ("5" for 5%), so it
+ * is refused unless written as a percentage ("150%") or made absolute.
+ */
+function parseMargin(text: string, kind: string, label: (name: string) => string): number {
+  const percent = text.endsWith('%');
+  const body = percent ? text.slice(0, -1).trim() : text;
+  const x = body === '' ? Number.NaN : Number(body);
+  if (!Number.isFinite(x) || x < 0) {
+    throw new InputError(
+      `${label('margin')} must be a number ≥ 0 or a percentage (0.02 or 2% with ${label('margin-kind')} relative)`,
+      { value: text },
+    );
+  }
+  if (percent) {
+    if (kind !== 'relative') {
+      throw new InputError(
+        `${label('margin')} as a percentage needs ${label('margin-kind')} relative (an absolute margin is in loss units)`,
+        { value: text },
+      );
+    }
+    return x / 100;
+  }
+  if (kind === 'relative' && x > 1) {
+    throw new InputError(
+      `${label('margin')} ${text} with ${label('margin-kind')} relative would allow the candidate to be ${x * 100}% worse; write ${text}% for ${text} percent, ${x / 100} for the same as a fraction, or set ${label('margin-kind')} absolute for loss units`,
+      { value: text },
+    );
+  }
+  return x;
+}
+
+/** The decimal mark, which must differ from the field separator. */
+function parseDecimalMark(
+  text: string,
+  delimiter: string,
+  label: (name: string) => string,
+): '.' | ',' {
+  // With delimiter auto the reader decides per file (a TSV file is fine, a CSV file is refused).
+  if (text === ',' && delimiter === ',') {
+    throw new InputError(
+      `${label('decimal')} , (decimal comma) needs a field separator other than the comma: add ${label('delimiter')} ";" (or tab, |)`,
+      { value: text },
+    );
+  }
+  return text as '.' | ',';
 }
 
 function specOf(name: string): OptionSpec {

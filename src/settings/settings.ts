@@ -1,6 +1,8 @@
+import type { TimeFormatName } from '../alignment/timeFormat.js';
 import type { CandidateFile } from '../candidates/candidateList.js';
 import type { LossName } from '../losses/lossName.js';
 import type { ColumnMapping } from '../reading/columnMapping.js';
+import type { DelimiterName, InputFormat } from '../reading/inputFormat.js';
 import type { RecentWindow } from '../stability/recentWindow.js';
 
 /** Which way the gate leans: what a pull request must show to pass. */
@@ -36,7 +38,17 @@ export interface Settings {
   readonly actuals: string | null;
   /** Column-role → header-name remapping, e.g. { actual: 'observed' }. */
   readonly columns: ColumnMapping;
-  readonly format: 'auto' | 'csv' | 'tsv';
+  /** Renames for one file only, applied over `columns`. */
+  readonly baselineColumns: ColumnMapping;
+  readonly candidateColumns: ColumnMapping;
+  readonly format: InputFormat;
+  /** CSV dialect: field separator and decimal mark. */
+  readonly delimiter: DelimiterName;
+  readonly decimal: '.' | ',';
+  /** How timestamp and origin labels are read and ordered (see alignment/timeFormat). */
+  readonly timeFormat: TimeFormatName;
+  /** Longest line or field a text file may have, in UTF-16 code units. */
+  readonly lineLimit: number;
   readonly loss: LossName;
   readonly zeroActuals: 'error' | 'skip';
   readonly alpha: number;

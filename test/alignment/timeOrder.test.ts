@@ -110,39 +110,131 @@ describe('orderLabels', () => {
     ]);
   });
 
-  it('falls back to text order for every file when one label is neither', () => {
+  it('refuses a text label among numbers, naming its file and line, with a hint', () => {
+    const error = errorOf(() =>
+      orderLabels(
+        [
+          { file: 'b.csv', column: column(['10', '9']) },
+          { file: 'c.csv', column: column(['9', 'zz-extra']) },
+        ],
+        'timestamp',
+      ),
+    );
+    expect(error.describe()).toMatch(
+      /^c\.csv:3: the timestamps cannot be put in a reliable time order: this one is neither a number nor an ISO 8601 date while "10" \(b\.csv:2\) is a number; .*--time-format text-order.*\(column "timestamp", value "zz-extra"\)$/,
+    );
+  });
+
+  it('refuses numbers mixed with dates, naming the odd one out', () => {
+    const error = errorOf(() =>
+      orderLabels(
+        [
+          { file: 'b.csv', column: column(['2024-01-01', '2024-01-02']) },
+          { file: 'c.csv', column: column(['1']) },
+        ],
+        'timestamp',
+      ),
+    );
+    expect(error.location).toEqual({
+      file: 'c.csv',
+      line: 2,
+      column: 'timestamp',
+      value: '1',
+    });
+    expect(error.message).toContain('this one is a number while "2024-01-01" (b.csv:2)');
+  });
+
+  it('refuses US-style dates with a hint at the day/month formats', () => {
+    const error = errorOf(() =>
+      orderLabels(
+        [{ file: 'b.csv', column: column(['1/6/2026 0:00', '1/7/2026 0:00']) }],
+        'timestamp',
+      ),
+    );
+    expect(error.describe()).toContain('b.csv:2:');
+    expect(error.message).toContain('--time-format day-month-year');
+    expect(error.message).toContain('--time-format month-day-year');
+  });
+
+  it('orders text labels as text only when asked, and says so', () => {
     const order = orderLabels(
       [
         { file: 'b.csv', column: column(['10', '9']) },
         { file: 'c.csv', column: column(['9', 'later']) },
       ],
       'timestamp',
+      'text-order',
     );
     expect(order.kind).toBe('text');
-    expect(order.reason).toBe(
-      'text order: "later" in c.csv is neither a decimal number nor an ISO 8601 date/time',
-    );
+    expect(order.format).toBe('text-order');
+    expect(order.reason).toContain('text order');
     expect(order.labels).toEqual(['10', '9', 'later']);
+    expect(order.instants).toBeNull();
   });
 
-  it('falls back to text order when numbers and dates mix, and says so', () => {
-    const order = orderLabels(
+  it('reads day-first and month-first dates chronologically, with epoch milliseconds', () => {
+    const labels = ['2/1/2026', '1/2/2026 12:30', '31/12/2025 23:59:59'];
+    const dmy = orderLabels(
+      [{ file: 'b.csv', column: column(labels) }],
+      'timestamp',
+      'day-month-year',
+    );
+    expect(dmy.kind).toBe('datetime');
+    expect(dmy.labels).toEqual(['31/12/2025 23:59:59', '2/1/2026', '1/2/2026 12:30']);
+    // Date.UTC is the reference (months 0-based there).
+    expect(Array.from(dmy.instants!)).toEqual([
+      Date.UTC(2025, 11, 31, 23, 59, 59),
+      Date.UTC(2026, 0, 2),
+      Date.UTC(2026, 1, 1, 12, 30),
+    ]);
+    const mdy = orderLabels(
+      [{ file: 'b.csv', column: column(['2/1/2026', '1/2/2026 12:30']) }],
+      'timestamp',
+      'month-day-year',
+    );
+    expect(mdy.labels).toEqual(['1/2/2026 12:30', '2/1/2026']);
+    expect(() =>
+      orderLabels(
+        [{ file: 'b.csv', column: column(['31/12/2025']) }],
+        'timestamp',
+        'month-day-year',
+      ),
+    ).toThrow(/month 31 is not 1–12/);
+    expect(() =>
+      orderLabels([{ file: 'b.csv', column: column(['1/2/26']) }], 'timestamp', 'day-month-year'),
+    ).toThrow(/four digits/);
+  });
+
+  it('keeps epoch milliseconds of ISO instants and the numbers of numeric labels', () => {
+    const iso = orderLabels(
       [
-        { file: 'b.csv', column: column(['2024-01-01']) },
-        { file: 'c.csv', column: column(['1']) },
+        {
+          file: 'b.csv',
+          column: column(['2024-01-01T01:00+01:00', '2024-01-02', '2024-01-01T00:00:00.5Z']),
+        },
       ],
       'timestamp',
     );
-    expect(order.kind).toBe('text');
-    expect(order.reason).toContain(
-      'mix numbers (e.g. "1" in c.csv) and dates (e.g. "2024-01-01" in b.csv)',
-    );
-    // In text order labels are keys as written: these two stay apart.
-    const text = orderLabels(
-      [{ file: 'b.csv', column: column(['2024-01-01', '2024-01-01T00:00Z', 'x']) }],
-      'timestamp',
-    );
-    expect(text.labels).toEqual(['2024-01-01', '2024-01-01T00:00Z', 'x']);
+    expect(Array.from(iso.instants!)).toEqual([
+      Date.UTC(2024, 0, 1),
+      Date.UTC(2024, 0, 1) + 500,
+      Date.UTC(2024, 0, 2),
+    ]);
+    const numbers = orderLabels([{ file: 'b.csv', column: column(['10', '2.5']) }], 'timestamp');
+    expect(Array.from(numbers.instants!)).toEqual([2.5, 10]);
+  });
+
+  it('refuses a label that does not fit an explicit format', () => {
+    expect(() =>
+      orderLabels([{ file: 'b.csv', column: column(['1', '2024-01-01']) }], 'timestamp', 'number'),
+    ).toThrow(/not a timestamp in the number format of --time-format: not a decimal number/);
+    expect(() =>
+      orderLabels(
+        [{ file: 'b.csv', column: column(['2024-01-01', '7']) }],
+        'timestamp',
+        'iso-8601',
+      ),
+    ).toThrow(/not an ISO 8601 date/);
   });
 
   it('rejects an invalid date with file, line and value', () => {
@@ -158,3 +250,13 @@ describe('orderLabels', () => {
     );
   });
 });
+
+function errorOf(f: () => unknown): InputError {
+  try {
+    f();
+  } catch (error) {
+    if (error instanceof InputError) return error;
+    throw error;
+  }
+  throw new Error('expected an InputError');
+}

@@ -107,7 +107,7 @@ describe('readForecastFile', () => {
       Buffer.from('timestamp,prediction\nd\xe9j\xe0,1\n', 'latin1'),
     );
     expect((await errorOf(readForecastFile(latin1, { role: 'baseline' }))).describe()).toMatch(
-      /latin1\.csv: the file is not valid UTF-8 text/,
+      /latin1\.csv:2: the file is not UTF-8 text: line 2 has bytes that are not UTF-8 \(byte 0xE9 suggests Latin-1/,
     );
     expect((await errorOf(readForecastFile(dir, { role: 'baseline' }))).describe()).toMatch(
       /not a regular file/,
