@@ -60,8 +60,8 @@ export function checkCandidateName(name: string, where: string): void {
   }
 }
 
-/** Base name without directories and without .gz, then .csv or .tsv (any case). */
+/** Base name without directories and without .gz, then .csv, .tsv or .parquet (any case). */
 export function fileStem(path: string): string {
   const base = path.split(/[\\/]/).pop() ?? path;
-  return base.replace(/\.gz$/i, '').replace(/\.(csv|tsv)$/i, '');
+  return base.replace(/\.gz$/i, '').replace(/\.(csv|tsv|parquet)$/i, '');
 }

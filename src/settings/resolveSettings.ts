@@ -94,7 +94,9 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     name: value('name'),
     baseline: losses === null && baselineModel === null ? value('baseline') : '',
     candidate: candidates[0]?.path ?? '',
-    candidates,
+    // Listed only when several are compared (or read from a model column): a two-model report
+    // keeps the settings it always had.
+    candidates: candidates.length > 1 || modelColumn !== null ? candidates : [],
     modelColumn,
     baselineModel,
     preferred: optional('preferred'),

@@ -20,7 +20,7 @@ export interface Settings {
   /** Forecast files; empty strings when a pre-aggregated `losses` file is given instead. */
   readonly baseline: string;
   readonly candidate: string;
-  /** Every candidate given (name and file); one entry in the two-model case. */
+  /** Every candidate (name and file) when several are compared or a model column is given, else []. */
   readonly candidates: readonly CandidateFile[];
   /** Column of the candidate file that names each row's model (several candidates), or null. */
   readonly modelColumn: string | null;

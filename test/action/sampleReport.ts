@@ -164,7 +164,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       name: '',
       baseline: 'examples/data/baseline.csv',
       candidate: 'examples/data/candidate.csv',
-      candidates: [{ name: 'candidate', path: 'examples/data/candidate.csv' }],
+      candidates: [],
       modelColumn: null,
       baselineModel: null,
       preferred: null,

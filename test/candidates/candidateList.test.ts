@@ -53,7 +53,7 @@ describe('candidate list', () => {
 
   it('a single plain --candidate stays the two-model case', () => {
     const settings = resolveSettings({ baseline: 'b.csv', candidate: 'c.csv' }, (n) => n);
-    expect(settings.candidates).toEqual([{ name: 'c', path: 'c.csv' }]);
+    expect(settings.candidates).toEqual([]);
     expect(settings.candidate).toBe('c.csv');
   });
 
