@@ -13247,7 +13247,11 @@ function relativeChangeText(c) {
   if (rc === null) return point;
   const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
   if (pieces.length === 0) return `${point} \u2205`;
-  return `${point} ${pieces.map(pieceText).join(" \u222A ")}`;
+  return `${point} ${pieces.map(pieceText).join(" \u222A ")}${measuredCoverageText(rc.measuredCoverage)}`;
+}
+function measuredCoverageText(measured) {
+  if (measured === void 0) return "";
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
 }
 function pieceText(p) {
   const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
@@ -13260,7 +13264,13 @@ function intervalNote(report) {
   if (confidenceOverridesDefault(confidence, alpha)) {
     return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
   }
-  return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const base = `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const measured = report.comparisons.flatMap((c) => [
+    c.relativeChange?.measuredCoverage,
+    c.dieboldMariano.interval?.measuredCoverage,
+    c.bootstrap.interval?.measuredCoverage
+  ]).find((m) => m !== void 0);
+  return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
 }
 
 // src/stability/calendarDate.ts
@@ -13302,7 +13312,7 @@ function plural(count, unit) {
 }
 
 // src/stability/stabilityFinding.ts
-function stabilityFinding(stability, hypothesis, settings, kind) {
+function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
   if (stability === null) return { effect: null, headline: "", reasons: [] };
   const sentences = [];
   const reasons = [];
@@ -13314,8 +13324,9 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     sentences.push(
       hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
     );
+    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
     reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
     );
   }
   const f = stability.fluctuation;
@@ -13324,15 +13335,15 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
     sentences.push(
-      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
     );
     reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
     );
   }
   if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
   const gate = settings.stabilityGate;
-  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate}).` : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
   return {
     effect: gate === "off" ? null : gate,
     headline: [...sentences, response].join(" "),
@@ -13358,6 +13369,9 @@ function changeWords(c) {
     return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
   }
   return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function splitNote(stability) {
+  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
 }
 function spanWords(span) {
   return `${span.start} to ${span.end}`;
@@ -13392,7 +13406,13 @@ function buildReport(parts) {
     );
   }
   const stability = parts.stability ?? null;
-  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  const finding = stabilityFinding(
+    stability,
+    hypothesis,
+    settings,
+    inputs.timestamps.kind,
+    worstVerdict(verdicts)
+  );
   reasons.push(...finding.reasons);
   const gateVerdict = worstVerdict(verdicts);
   const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
@@ -13931,6 +13951,37 @@ function describeTest(e, rejected, alpha, hypothesis) {
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
+// src/intervals/measuredCoverage.ts
+var STUDIED_LEVEL = 0.9;
+var WORST_COVERAGE = {
+  relativeChange: [
+    [50, 0.865],
+    [100, 0.887],
+    [200, 0.878],
+    [500, 0.878]
+  ],
+  dieboldMarianoDifference: [
+    [50, 0.826],
+    [100, 0.842],
+    [200, 0.851],
+    [500, 0.866]
+  ],
+  bootstrapDifference: [
+    [50, 0.618],
+    [100, 0.718],
+    [200, 0.748],
+    [500, 0.802]
+  ]
+};
+function measuredCoverage(kind, n, level) {
+  if (level !== STUDIED_LEVEL) return null;
+  const rows = WORST_COVERAGE[kind];
+  let chosen = rows[0];
+  for (const row of rows) if (row[0] <= n) chosen = row;
+  const [studiedN, coverage] = chosen;
+  return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
+}
+
 // src/statistics/bootstrap/basicBootstrapInference.ts
 function tailProbability(level) {
   return Number((1 - level).toPrecision(15));
@@ -14291,13 +14342,20 @@ function dieboldMarianoMarginSet(input) {
     if (estimator === "uniform") {
       const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
       if (!finite(uniform)) return null;
+      const gamma0 = longRunCovariance(
+        d,
+        baseline,
+        candidate,
+        (x) => bartlettLongRunVariance(x, 0)
+      );
+      const tolerance = n * Number.EPSILON;
       const positive = complementOfSet(
         fiellerSet({
           meanD: 0,
           meanB: 0,
-          varDD: -uniform.dd,
-          varDB: -uniform.db,
-          varBB: -uniform.bb,
+          varDD: tolerance * gamma0.dd - uniform.dd,
+          varDB: tolerance * gamma0.db - uniform.db,
+          varBB: tolerance * gamma0.bb - uniform.bb,
           critical: 1
         })
       );
@@ -14363,13 +14421,15 @@ function relativeChange(input) {
   const chosen = combine(input.agreement, dm, bs);
   if (chosen === null) return null;
   const hull = hullOfSet(chosen.set);
+  const measured = measuredCoverage("relativeChange", n, level);
   return {
     estimate,
     level,
     lower: hull?.lower ?? null,
     upper: hull?.upper ?? null,
     method: chosen.method,
-    ...chosen.set.length === 1 ? {} : { pieces: chosen.set }
+    ...chosen.set.length === 1 ? {} : { pieces: chosen.set },
+    ...measured === null ? {} : { measuredCoverage: measured }
   };
 }
 function combine(agreement, dm, bs) {
@@ -15629,16 +15689,14 @@ function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
   const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
   const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
-  const dieboldMariano2 = runDieboldMariano(
-    d,
-    series.maxHorizon,
-    hypothesis,
-    settings,
-    difference
+  const dieboldMariano2 = withMeasured(
+    runDieboldMariano(d, series.maxHorizon, hypothesis, settings, difference),
+    "dieboldMarianoDifference",
+    n
   );
   const withBootstrap = options.bootstrap ?? true;
   const bootstrapRun = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner, difference) : null;
-  const bootstrap = bootstrapRun?.summary ?? bootstrapNotRun(settings);
+  const bootstrap = bootstrapRun === null ? bootstrapNotRun(settings) : withMeasured(bootstrapRun.summary, "bootstrapDifference", n);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -15693,6 +15751,12 @@ function compareLossSeries(series, scope2, hypothesis, settings, options = {}) {
     reasons: decision.reasons,
     rejected: decision.rejected
   };
+}
+function withMeasured(summary, kind, n) {
+  const interval = summary.interval;
+  if (interval === null) return summary;
+  const measured = measuredCoverage(kind, n, interval.level);
+  return measured === null ? summary : { ...summary, interval: { ...interval, measuredCoverage: measured } };
 }
 function meanOrZero(x) {
   return x.length === 0 ? 0 : mean(x);
@@ -15764,6 +15828,11 @@ function recentComparison(series, window2, scope2, hypothesis, settings, runner)
   );
 }
 
+// src/stability/stabilityLevels.ts
+function splitLevel(alpha, checks) {
+  return checks === 2 ? alpha / 2 : alpha;
+}
+
 // src/stability/assessStability.ts
 function assessStability(inputs) {
   const { series, timestamps, settings } = inputs;
@@ -15772,9 +15841,11 @@ function assessStability(inputs) {
   const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
   const d = lossDifferential(series, worse.baselineFactor - 1);
   if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const withRecent = settings.recent !== null && series.baseline.length > 0;
+  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
   const test = fluctuationTest(d, {
     mu: settings.fluctuationWindow,
-    alpha: settings.alpha,
+    alpha: fluctuationAlpha,
     sides: settings.fluctuationSides,
     lag: settings.lag,
     horizon: series.maxHorizon
@@ -15794,15 +15865,22 @@ function assessStability(inputs) {
       end: label(to)
     }))
   };
-  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
+  const recent = settings.recent === null || !withRecent ? null : recentComparison(
     series,
     settings.recent,
     { loss: settings.loss, horizon: "all", series: "all", timestamps },
     inputs.hypothesis,
-    settings,
+    recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
     inputs.runner
   );
-  return { fluctuation, recent, periods };
+  const levels = {
+    adjustment: fluctuation !== null && recent !== null ? "bonferroni" : "none",
+    alpha: settings.alpha,
+    fluctuation: fluctuation === null ? null : fluctuationAlpha,
+    recent: recent === null ? null : recentAlpha
+  };
+  return { fluctuation, recent, periods, levels };
 }
 
 // src/comparison/evaluateLossSeries.ts
@@ -27438,6 +27516,7 @@ function renderStabilitySection(report) {
   const out = ["**Over time**", ""];
   if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
   out.push(fluctuationSentence(stability, report), "");
+  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
   if (stability.periods.length > 0) out.push(...periodTable(stability), "");
   return out;
 }
@@ -27455,15 +27534,19 @@ function windowTable(overall, recent) {
 function fluctuationSentence(stability, report) {
   const f = stability.fluctuation;
   if (f === null) {
-    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
   }
   const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
   if (f.worsePeriods.length > 0) {
     const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
     return `${setup} The candidate is significantly worse over ${spans}.`;
   }
   return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function levelsSentence(stability) {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
 }
 function periodTable(stability) {
   const out = [
@@ -27527,7 +27610,7 @@ function comparisonTable(report) {
   for (const c of report.comparisons.filter((x) => x.series === "all" && x.path === void 0)) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
-    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]`;
+    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
     rows.push(
       `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
         c.meanCandidateLoss
@@ -27624,7 +27707,7 @@ function testDetails(report) {
   );
   if (dm.interval !== null) {
     out.push(
-      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`
+      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`
     );
   }
   out.push(
@@ -27694,15 +27777,16 @@ function renderStabilityTerminal(report) {
   if (s === null) return [];
   const out = [];
   const r = s.recent;
+  const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}: ${r.verdict}`
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
     );
   }
   return out;
@@ -27740,7 +27824,7 @@ function renderTerminal(report, options) {
     relativeChangeText(c),
     formatPValue(c.dieboldMariano.decisionPValue),
     formatPValue(c.bootstrap.decisionPValue),
-    c.bootstrap.interval === null ? "n/a" : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]`,
+    c.bootstrap.interval === null ? "n/a" : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]${measuredCoverageText(c.bootstrap.interval.measuredCoverage)}`,
     c.verdict
   ]);
   const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length)));

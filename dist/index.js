@@ -32363,7 +32363,11 @@ function relativeChangeText(c) {
   if (rc === null) return point;
   const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
   if (pieces.length === 0) return `${point} \u2205`;
-  return `${point} ${pieces.map(pieceText).join(" \u222A ")}`;
+  return `${point} ${pieces.map(pieceText).join(" \u222A ")}${measuredCoverageText(rc.measuredCoverage)}`;
+}
+function measuredCoverageText(measured) {
+  if (measured === void 0) return "";
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
 }
 function pieceText(p) {
   const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
@@ -32376,7 +32380,13 @@ function intervalNote(report) {
   if (confidenceOverridesDefault(confidence, alpha)) {
     return `Intervals are ${pct}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
   }
-  return `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const base = `Intervals are ${pct} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const measured = report.comparisons.flatMap((c) => [
+    c.relativeChange?.measuredCoverage,
+    c.dieboldMariano.interval?.measuredCoverage,
+    c.bootstrap.interval?.measuredCoverage
+  ]).find((m) => m !== void 0);
+  return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
 }
 
 // src/report/renderBacktestChecks.ts
@@ -32424,6 +32434,7 @@ function renderStabilitySection(report) {
   const out = ["**Over time**", ""];
   if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
   out.push(fluctuationSentence(stability, report), "");
+  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
   if (stability.periods.length > 0) out.push(...periodTable(stability), "");
   return out;
 }
@@ -32441,15 +32452,19 @@ function windowTable(overall, recent) {
 function fluctuationSentence(stability, report) {
   const f = stability.fluctuation;
   if (f === null) {
-    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and \u03B1 between 0.01 and 0.10).";
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
   }
   const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${report.policy.alpha}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}.`;
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
   if (f.worsePeriods.length > 0) {
     const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
     return `${setup} The candidate is significantly worse over ${spans}.`;
   }
   return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function levelsSentence(stability) {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
 }
 function periodTable(stability) {
   const out = [
@@ -32513,7 +32528,7 @@ function comparisonTable(report) {
   for (const c of report.comparisons.filter((x) => x.series === "all" && x.path === void 0)) {
     const dm = c.dieboldMariano;
     const bs = c.bootstrap;
-    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]`;
+    const interval = bs.interval === null ? "n/a" : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
     rows.push(
       `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
         c.meanCandidateLoss
@@ -32610,7 +32625,7 @@ function testDetails(report) {
   );
   if (dm.interval !== null) {
     out.push(
-      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`
+      `| DM interval for E[L_candidate \u2212 L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`
     );
   }
   out.push(
@@ -39989,7 +40004,7 @@ function plural(count, unit) {
 }
 
 // src/stability/stabilityFinding.ts
-function stabilityFinding(stability, hypothesis, settings, kind) {
+function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
   if (stability === null) return { effect: null, headline: "", reasons: [] };
   const sentences = [];
   const reasons = [];
@@ -40001,8 +40016,9 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     sentences.push(
       hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
     );
+    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
     reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(" ")}`
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
     );
   }
   const f = stability.fluctuation;
@@ -40011,15 +40027,15 @@ function stabilityFinding(stability, hypothesis, settings, kind) {
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
     sentences.push(
-      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
     );
     reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
     );
   }
   if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
   const gate2 = settings.stabilityGate;
-  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate2 === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate2}).` : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
   return {
     effect: gate2 === "off" ? null : gate2,
     headline: [...sentences, response].join(" "),
@@ -40045,6 +40061,9 @@ function changeWords(c) {
     return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
   }
   return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function splitNote(stability) {
+  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
 }
 function spanWords(span) {
   return `${span.start} to ${span.end}`;
@@ -40079,7 +40098,13 @@ function buildReport(parts) {
     );
   }
   const stability = parts.stability ?? null;
-  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  const finding = stabilityFinding(
+    stability,
+    hypothesis,
+    settings,
+    inputs.timestamps.kind,
+    worstVerdict(verdicts)
+  );
   reasons.push(...finding.reasons);
   const gateVerdict = worstVerdict(verdicts);
   const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
@@ -40618,6 +40643,37 @@ function describeTest(e, rejected, alpha, hypothesis) {
   return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
 }
 
+// src/intervals/measuredCoverage.ts
+var STUDIED_LEVEL = 0.9;
+var WORST_COVERAGE = {
+  relativeChange: [
+    [50, 0.865],
+    [100, 0.887],
+    [200, 0.878],
+    [500, 0.878]
+  ],
+  dieboldMarianoDifference: [
+    [50, 0.826],
+    [100, 0.842],
+    [200, 0.851],
+    [500, 0.866]
+  ],
+  bootstrapDifference: [
+    [50, 0.618],
+    [100, 0.718],
+    [200, 0.748],
+    [500, 0.802]
+  ]
+};
+function measuredCoverage(kind, n, level) {
+  if (level !== STUDIED_LEVEL) return null;
+  const rows = WORST_COVERAGE[kind];
+  let chosen = rows[0];
+  for (const row of rows) if (row[0] <= n) chosen = row;
+  const [studiedN, coverage] = chosen;
+  return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
+}
+
 // src/statistics/bootstrap/basicBootstrapInference.ts
 function tailProbability(level) {
   return Number((1 - level).toPrecision(15));
@@ -40978,13 +41034,20 @@ function dieboldMarianoMarginSet(input) {
     if (estimator === "uniform") {
       const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
       if (!finite(uniform)) return null;
+      const gamma0 = longRunCovariance(
+        d,
+        baseline,
+        candidate,
+        (x) => bartlettLongRunVariance(x, 0)
+      );
+      const tolerance = n * Number.EPSILON;
       const positive = complementOfSet(
         fiellerSet({
           meanD: 0,
           meanB: 0,
-          varDD: -uniform.dd,
-          varDB: -uniform.db,
-          varBB: -uniform.bb,
+          varDD: tolerance * gamma0.dd - uniform.dd,
+          varDB: tolerance * gamma0.db - uniform.db,
+          varBB: tolerance * gamma0.bb - uniform.bb,
           critical: 1
         })
       );
@@ -41050,13 +41113,15 @@ function relativeChange(input) {
   const chosen = combine(input.agreement, dm, bs);
   if (chosen === null) return null;
   const hull = hullOfSet(chosen.set);
+  const measured = measuredCoverage("relativeChange", n, level);
   return {
     estimate,
     level,
     lower: hull?.lower ?? null,
     upper: hull?.upper ?? null,
     method: chosen.method,
-    ...chosen.set.length === 1 ? {} : { pieces: chosen.set }
+    ...chosen.set.length === 1 ? {} : { pieces: chosen.set },
+    ...measured === null ? {} : { measuredCoverage: measured }
   };
 }
 function combine(agreement, dm, bs) {
@@ -42316,16 +42381,14 @@ function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
   const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
   const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
-  const dieboldMariano2 = runDieboldMariano(
-    d,
-    series.maxHorizon,
-    hypothesis,
-    settings,
-    difference
+  const dieboldMariano2 = withMeasured(
+    runDieboldMariano(d, series.maxHorizon, hypothesis, settings, difference),
+    "dieboldMarianoDifference",
+    n
   );
   const withBootstrap = options.bootstrap ?? true;
   const bootstrapRun = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner, difference) : null;
-  const bootstrap = bootstrapRun?.summary ?? bootstrapNotRun(settings);
+  const bootstrap = bootstrapRun === null ? bootstrapNotRun(settings) : withMeasured(bootstrapRun.summary, "bootstrapDifference", n);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -42380,6 +42443,12 @@ function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
     reasons: decision.reasons,
     rejected: decision.rejected
   };
+}
+function withMeasured(summary2, kind, n) {
+  const interval = summary2.interval;
+  if (interval === null) return summary2;
+  const measured = measuredCoverage(kind, n, interval.level);
+  return measured === null ? summary2 : { ...summary2, interval: { ...interval, measuredCoverage: measured } };
 }
 function meanOrZero(x) {
   return x.length === 0 ? 0 : mean(x);
@@ -42451,6 +42520,11 @@ function recentComparison(series, window2, scope, hypothesis, settings, runner) 
   );
 }
 
+// src/stability/stabilityLevels.ts
+function splitLevel(alpha, checks) {
+  return checks === 2 ? alpha / 2 : alpha;
+}
+
 // src/stability/assessStability.ts
 function assessStability(inputs) {
   const { series, timestamps, settings } = inputs;
@@ -42459,9 +42533,11 @@ function assessStability(inputs) {
   const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
   const d = lossDifferential(series, worse.baselineFactor - 1);
   if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const withRecent = settings.recent !== null && series.baseline.length > 0;
+  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
   const test = fluctuationTest(d, {
     mu: settings.fluctuationWindow,
-    alpha: settings.alpha,
+    alpha: fluctuationAlpha,
     sides: settings.fluctuationSides,
     lag: settings.lag,
     horizon: series.maxHorizon
@@ -42481,15 +42557,22 @@ function assessStability(inputs) {
       end: label(to)
     }))
   };
-  const recent = settings.recent === null || series.baseline.length === 0 ? null : recentComparison(
+  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
+  const recent = settings.recent === null || !withRecent ? null : recentComparison(
     series,
     settings.recent,
     { loss: settings.loss, horizon: "all", series: "all", timestamps },
     inputs.hypothesis,
-    settings,
+    recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
     inputs.runner
   );
-  return { fluctuation, recent, periods };
+  const levels = {
+    adjustment: fluctuation !== null && recent !== null ? "bonferroni" : "none",
+    alpha: settings.alpha,
+    fluctuation: fluctuation === null ? null : fluctuationAlpha,
+    recent: recent === null ? null : recentAlpha
+  };
+  return { fluctuation, recent, periods, levels };
 }
 
 // src/comparison/evaluateLossSeries.ts
@@ -55162,7 +55245,7 @@ function readReport(r) {
     seriesSummary: readSeriesSummary(r.field("seriesSummary")),
     pathSummary: readPathSummary(r.field("pathSummary")),
     integrity: readIntegrity(r.field("integrity")),
-    stability: readStability(r.field("stability")),
+    stability: readStability(r.field("stability"), r.field("policy").field("alpha").number()),
     settings: readSettings(r.field("settings")),
     reasons: r.field("reasons").strings()
   };
@@ -55187,7 +55270,18 @@ function readInterval(r) {
     level: r.field("level").number(),
     lower: r.field("lower").number(),
     upper: r.field("upper").number(),
-    method: r.field("method").string()
+    method: r.field("method").string(),
+    ...readMeasuredCoverage(r.field("measuredCoverage"))
+  };
+}
+function readMeasuredCoverage(r) {
+  if (r.value === void 0) return {};
+  return {
+    measuredCoverage: {
+      coverage: r.field("coverage").number(),
+      level: r.field("level").number(),
+      studiedN: r.field("studiedN").integer()
+    }
   };
 }
 var MAX_PIECES = 64;
@@ -55203,7 +55297,8 @@ function readRelativeChange(r) {
     lower: r.field("lower").numberOrNull(),
     upper: r.field("upper").numberOrNull(),
     method: r.field("method").string(),
-    ...r.field("pieces").value === void 0 ? {} : { pieces: readPieces(r.field("pieces")) }
+    ...r.field("pieces").value === void 0 ? {} : { pieces: readPieces(r.field("pieces")) },
+    ...readMeasuredCoverage(r.field("measuredCoverage"))
   };
   function readPieces(p) {
     const items = p.items();
@@ -55276,14 +55371,17 @@ function readPathSummary(r) {
     significantlyWorse: r.field("significantlyWorse").integer()
   };
 }
-function readStability(r) {
+function readStability(r, alpha) {
   if (r.value === null || r.value === void 0) return null;
   const periods = r.field("periods").items();
   if (periods.length > MAX_PERIODS) r.field("periods").fail(`at most ${MAX_PERIODS} periods`);
-  const recent = r.field("recent");
+  const recentField = r.field("recent");
+  const fluctuation = readFluctuation(r.field("fluctuation"));
+  const recent = recentField.value === null ? null : readComparison(recentField);
   return {
-    fluctuation: readFluctuation(r.field("fluctuation")),
-    recent: recent.value === null ? null : readComparison(recent),
+    fluctuation,
+    recent,
+    levels: readStabilityLevels(r.field("levels"), alpha, fluctuation !== null, recent !== null),
     periods: periods.map((p) => ({
       ...readSpan(p),
       n: p.field("n").integer(1),
@@ -55291,6 +55389,22 @@ function readStability(r) {
       meanCandidateLoss: p.field("meanCandidateLoss").number(),
       relativeDifference: p.field("relativeDifference").numberOrNull()
     }))
+  };
+}
+function readStabilityLevels(r, alpha, fluctuation, recent) {
+  if (r.value === void 0) {
+    return {
+      adjustment: "none",
+      alpha,
+      fluctuation: fluctuation ? alpha : null,
+      recent: recent ? alpha : null
+    };
+  }
+  return {
+    adjustment: r.field("adjustment").oneOf(["none", "bonferroni"]),
+    alpha: r.field("alpha").number(),
+    fluctuation: r.field("fluctuation").numberOrNull(),
+    recent: r.field("recent").numberOrNull()
   };
 }
 function readFluctuation(r) {

@@ -8,11 +8,15 @@
  * validation/stabilityStudy.ts alone, replacing its section of the existing document),
  * --candidates-only (the several-candidates study of validation/candidatesStudy.ts alone, with
  * 999 shared resamples and --replications N, default 1000, replacing its section),
- * --section cosine-terms (run only that study and replace its section in the existing FILE).
+ * --section cosine-terms (run only that study and replace its section in the existing FILE),
+ * --coverage (the coverage study of every interval the report shows, validation/coverageStudy.ts,
+ * alone, replacing its section), --coverage-replications N (default 1000), --coverage-resamples B
+ * (default 999), --candidates (print the measurement of the studentised-bootstrap candidate).
  */
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
+import { candidateStudy } from './candidateStudy.js';
 import {
   type CandidatesDesign,
   type CandidatesResult,
@@ -27,6 +31,9 @@ import {
   renderCosineTermsSection,
 } from './cosineTermsSection.js';
 import { type CosineTermsStudyResult, runCosineTermsStudy } from './cosineTermsStudy.js';
+import { type CoverageDesign, coverageDesigns } from './coverageDesigns.js';
+import { COVERAGE_HEADING, renderCoverageSection } from './coverageSection.js';
+import { type CoverageResult, runCoverage } from './coverageStudy.js';
 import type { SimulationDesign } from './simulateLossSeries.js';
 import { runStudy, STUDY_PROCEDURES, type StudyResult } from './sizeAndPowerStudy.js';
 import {
@@ -49,6 +56,10 @@ interface Job {
   seed: number;
 }
 
+interface CoverageJob extends Omit<Job, 'design'> {
+  coverage: CoverageDesign;
+}
+
 interface CandidatesJob {
   candidates: CandidatesDesign;
   options: Parameters<typeof runCandidatesStudy>[1];
@@ -58,12 +69,16 @@ if (!isMainThread && 'candidates' in (workerData as object)) {
   const job = workerData as CandidatesJob;
   parentPort!.postMessage(runCandidatesStudy(job.candidates, job.options));
 } else if (!isMainThread) {
-  const jobs = workerData as (Job | StabilityJob)[];
+  const jobs = workerData as (Job | StabilityJob | CoverageJob)[];
   parentPort!.postMessage(
     jobs[0] !== undefined && 'kind' in jobs[0]
       ? runStabilityJobs(jobs as StabilityJob[])
-      : (jobs as Job[]).map((j) =>
-          j.study === 'cosine-terms' ? runCosineTermsStudy(j.design, j) : runStudy(j.design, j),
+      : (jobs as (Job | CoverageJob)[]).map((j) =>
+          'coverage' in j
+            ? runCoverage(j.coverage, j)
+            : j.study === 'cosine-terms'
+              ? runCosineTermsStudy(j.design, j)
+              : runStudy(j.design, j),
         ),
   );
 } else {
@@ -82,6 +97,18 @@ async function main(): Promise<void> {
   const outIndex = args.indexOf('--out');
   const out = outIndex >= 0 ? args[outIndex + 1]! : 'docs/validation.md';
   const threads = Math.max(1, Math.min(2, availableParallelism()));
+  const coverageReplications = option('coverage-replications', quick ? 200 : 1000);
+  const coverageResamples = option('coverage-resamples', 999);
+  if (args.includes('--candidates')) {
+    process.stdout.write(candidateStudy(option('replications', 300)));
+    return;
+  }
+  if (args.includes('--coverage')) {
+    const section = await coverageStudy(coverageReplications, coverageResamples);
+    writeFileSync(out, withCoverageSection(readFileSync(out, 'utf8'), section));
+    process.stderr.write(`wrote the coverage section of ${out}\n`);
+    return;
+  }
   const sectionIndex = args.indexOf('--section');
   if (sectionIndex >= 0) {
     if (args[sectionIndex + 1] !== 'cosine-terms') {
@@ -138,9 +165,13 @@ async function main(): Promise<void> {
   }
   const seconds = (Date.now() - started) / 1000;
   const section = await cosineTermsStudy(replications, resamples, threads);
+  const coverage = await coverageStudy(coverageReplications, coverageResamples);
   writeFileSync(
     out,
-    `${renderTable(results, { replications, resamples, seconds, threads })}${section}`,
+    withCoverageSection(
+      `${renderTable(results, { replications, resamples, seconds, threads })}${section}`,
+      coverage,
+    ),
   );
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
   await stability(readFileSync(out, 'utf8'));
@@ -290,7 +321,71 @@ function spliceSection(document: string, section: string): string {
   return `${document.slice(0, start)}${section}${document.slice(end + COSINE_TERMS_SECTION_END.length + 1)}`;
 }
 
-function runInWorker(jobs: Job[]): Promise<StudyResult[]> {
+/**
+ * Puts the coverage section into a document: replaces it (from its heading to the next "## "
+ * heading, "<!--" marker or the end) when present, else appends it.
+ */
+function withCoverageSection(document: string, section: string): string {
+  const at = document.indexOf(COVERAGE_HEADING);
+  if (at < 0) return `${document.trimEnd()}\n\n${section}`;
+  const after = at + COVERAGE_HEADING.length;
+  const ends = [document.indexOf('\n## ', after), document.indexOf('\n<!--', after)];
+  const next = Math.min(...ends.map((i) => (i < 0 ? document.length : i)));
+  const rest = document.slice(next).replace(/^\n+/, '');
+  return `${document.slice(0, at)}${section}${rest === '' ? '' : `\n${rest}`}`;
+}
+
+/** The coverage study (validation/coverageStudy.ts) at n = 50, 100, 200, 500 on both threads. */
+async function coverageStudy(replications: number, resamples: number): Promise<string> {
+  const threads = Math.max(1, Math.min(2, availableParallelism()));
+  const started = Date.now();
+  const results: CoverageResult[] = [];
+  for (const n of [50, 100, 200, 500]) {
+    for (const design of coverageDesigns(n)) {
+      const per = Math.ceil(replications / threads);
+      const parts = (await Promise.all(
+        Array.from({ length: threads }, (_, k) => {
+          const first = k * per;
+          const count = Math.max(0, Math.min(per, replications - first));
+          return runInWorker([
+            {
+              coverage: design,
+              firstReplication: first,
+              replications: count,
+              resamples,
+              seed: SEED,
+            },
+          ]);
+        }),
+      )) as unknown as CoverageResult[][];
+      results.push(mergeCoverage(parts.flat()));
+      process.stderr.write(`coverage n=${n} ${design.label}\n`);
+    }
+  }
+  const seconds = (Date.now() - started) / 1000;
+  return renderCoverageSection(results, { replications, resamples, seconds, threads, seed: SEED });
+}
+
+function mergeCoverage(parts: CoverageResult[]): CoverageResult {
+  const total = parts.reduce((s, p) => s + p.replications, 0);
+  const first = parts[0]!;
+  const combine = (pick: (p: CoverageResult) => Readonly<Record<string, number>>) =>
+    Object.fromEntries(
+      Object.keys(pick(first)).map((k) => [
+        k,
+        parts.reduce((s, p) => s + pick(p)[k]! * p.replications, 0) / total,
+      ]),
+    ) as CoverageResult['covered'];
+  return {
+    ...first,
+    replications: total,
+    covered: combine((p) => p.covered),
+    missAbove: combine((p) => p.missAbove),
+    missBelow: combine((p) => p.missBelow),
+  };
+}
+
+function runInWorker(jobs: (Job | CoverageJob)[]): Promise<StudyResult[]> {
   return new Promise((resolve, reject) => {
     const worker = new Worker(new URL(import.meta.url), { workerData: jobs });
     worker.once('message', resolve);

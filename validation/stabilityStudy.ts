@@ -17,20 +17,25 @@ export interface StabilityDesign extends SimulationDesign {
 export interface StabilityStudyResult {
   readonly design: StabilityDesign;
   readonly replications: number;
-  /** Fluctuation test rejected (one-sided: a stretch where the candidate is significantly worse). */
+  /** Fluctuation test alone (no recent window), at α: rejected (a stretch significantly worse). */
+  readonly fluctuationAlone: number;
+  /** Recent window's comparison alone, at α: failed (both tests reject, default policy). */
+  readonly recentAlone: number;
+  /** With both checks (each at α/2, Bonferroni): the fluctuation test rejected. */
   readonly fluctuation: number;
   /** ... and its peak window ends inside the late stretch. */
   readonly fluctuationPeakLate: number;
-  /** The recent window's comparison (both tests, default policy) failed. */
+  /** With both checks: the recent window's comparison failed. */
   readonly recent: number;
-  /** Either of the two: the gate warns under stability-gate warn. */
+  /** With both checks: either flagged, i.e. the report says "not stable" and the gate warns. */
   readonly either: number;
 }
 
 /**
  * Runs simulated backtests of one design through the gate's own stability code
  * (assessStability with the default settings: μ = 0.2, one-sided, α = 0.05, recent 15%, ewc and
- * the stationary bootstrap agreeing on the recent window). Replication r uses random stream r of
+ * the stationary bootstrap agreeing on the recent window): each check alone at α, and both
+ * together, each at α/2 (Bonferroni), with the combined flag. Replication r uses random stream r of
  * `seed`, so any split over threads gives the same counts.
  */
 export function runStabilityStudy(
@@ -47,6 +52,7 @@ export function runStabilityStudy(
     },
     (name) => name,
   );
+  const fluctuationOnly = { ...settings, recent: null };
   const hypothesis = hypothesisFor('no-regression', 0, 'relative');
   const timestamps = Array.from({ length: design.n }, (_, t) => String(t + 1));
   const lateFrom = design.n - Math.round(design.lateShare * design.n);
@@ -54,6 +60,8 @@ export function runStabilityStudy(
   let peakLate = 0;
   let recent = 0;
   let either = 0;
+  let fluctuationAlone = 0;
+  let recentAlone = 0;
   const first = options.firstReplication ?? 0;
   for (let r = first; r < first + options.replications; r++) {
     const series = simulateLossSeries(design, createRandomSource(options.seed, r));
@@ -66,11 +74,28 @@ export function runStabilityStudy(
     if (f && Number(s.fluctuation!.peak.end) > lateFrom) peakLate++;
     if (w) recent++;
     if (f || w) either++;
+    const alone = assessStability({
+      series,
+      timestamps,
+      kind: 'number',
+      hypothesis,
+      settings: fluctuationOnly,
+    });
+    if (alone.fluctuation?.rejected) fluctuationAlone++;
+    // The recent window alone at α: its p-values do not depend on α, so the decision at α is
+    // both p-values ≤ α (agreement both, no-regression, min-points 1), as decideComparison does.
+    const pDm = s.recent?.dieboldMariano.decisionPValue ?? null;
+    const pBoot = s.recent?.bootstrap.decisionPValue ?? null;
+    if (pDm !== null && pBoot !== null && pDm <= settings.alpha && pBoot <= settings.alpha) {
+      recentAlone++;
+    }
   }
   const reps = options.replications;
   return {
     design,
     replications: reps,
+    fluctuationAlone: fluctuationAlone / reps,
+    recentAlone: recentAlone / reps,
     fluctuation: fluctuation / reps,
     fluctuationPeakLate: peakLate / reps,
     recent: recent / reps,

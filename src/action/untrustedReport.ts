@@ -19,6 +19,7 @@ import type {
   DieboldMarianoSummary,
   InputsSummary,
   Interval,
+  MeasuredCoverage,
   PathSummary,
   PolicySummary,
   RelativeChange,
@@ -28,7 +29,12 @@ import type {
 import type { Settings } from '../settings/settings.js';
 import { MAX_PERIODS } from '../stability/periodBuckets.js';
 import type { RecentWindow } from '../stability/recentWindow.js';
-import type { FluctuationSummary, Stability, TimeSpan } from '../stability/stabilityModel.js';
+import type {
+  FluctuationSummary,
+  Stability,
+  StabilityLevels,
+  TimeSpan,
+} from '../stability/stabilityModel.js';
 
 /** Larger report files are refused before parsing. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -156,7 +162,7 @@ function readReport(r: Reader): Report {
     seriesSummary: readSeriesSummary(r.field('seriesSummary')),
     pathSummary: readPathSummary(r.field('pathSummary')),
     integrity: readIntegrity(r.field('integrity')),
-    stability: readStability(r.field('stability')),
+    stability: readStability(r.field('stability'), r.field('policy').field('alpha').number()),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
     ...readCandidateSections(r),
@@ -185,6 +191,18 @@ function readInterval(r: Reader): Interval | null {
     lower: r.field('lower').number(),
     upper: r.field('upper').number(),
     method: r.field('method').string(),
+    ...readMeasuredCoverage(r.field('measuredCoverage')),
+  };
+}
+
+function readMeasuredCoverage(r: Reader): { measuredCoverage?: MeasuredCoverage } {
+  if (r.value === undefined) return {};
+  return {
+    measuredCoverage: {
+      coverage: r.field('coverage').number(),
+      level: r.field('level').number(),
+      studiedN: r.field('studiedN').integer(),
+    },
   };
 }
 
@@ -204,6 +222,7 @@ function readRelativeChange(r: Reader): RelativeChange | null {
     upper: r.field('upper').numberOrNull(),
     method: r.field('method').string(),
     ...(r.field('pieces').value === undefined ? {} : { pieces: readPieces(r.field('pieces')) }),
+    ...readMeasuredCoverage(r.field('measuredCoverage')),
   };
   function readPieces(p: Reader) {
     const items = p.items();
@@ -298,14 +317,17 @@ function readPathSummary(r: Reader): PathSummary | null {
 }
 
 /** report.stability; absent (a report from before it existed) reads as null. */
-function readStability(r: Reader): Stability | null {
+function readStability(r: Reader, alpha: number): Stability | null {
   if (r.value === null || r.value === undefined) return null;
   const periods = r.field('periods').items();
   if (periods.length > MAX_PERIODS) r.field('periods').fail(`at most ${MAX_PERIODS} periods`);
-  const recent = r.field('recent');
+  const recentField = r.field('recent');
+  const fluctuation = readFluctuation(r.field('fluctuation'));
+  const recent = recentField.value === null ? null : readComparison(recentField);
   return {
-    fluctuation: readFluctuation(r.field('fluctuation')),
-    recent: recent.value === null ? null : readComparison(recent),
+    fluctuation,
+    recent,
+    levels: readStabilityLevels(r.field('levels'), alpha, fluctuation !== null, recent !== null),
     periods: periods.map((p) => ({
       ...readSpan(p),
       n: p.field('n').integer(1),
@@ -313,6 +335,32 @@ function readStability(r: Reader): Stability | null {
       meanCandidateLoss: p.field('meanCandidateLoss').number(),
       relativeDifference: p.field('relativeDifference').numberOrNull(),
     })),
+  };
+}
+
+/**
+ * report.stability.levels; absent (a report from before the Bonferroni split) reads as each
+ * check that ran at the policy's α, which is what those versions did.
+ */
+function readStabilityLevels(
+  r: Reader,
+  alpha: number,
+  fluctuation: boolean,
+  recent: boolean,
+): StabilityLevels {
+  if (r.value === undefined) {
+    return {
+      adjustment: 'none',
+      alpha,
+      fluctuation: fluctuation ? alpha : null,
+      recent: recent ? alpha : null,
+    };
+  }
+  return {
+    adjustment: r.field('adjustment').oneOf(['none', 'bonferroni']),
+    alpha: r.field('alpha').number(),
+    fluctuation: r.field('fluctuation').numberOrNull(),
+    recent: r.field('recent').numberOrNull(),
   };
 }
 

@@ -1,9 +1,15 @@
 import { type LossSeries, lossDifferential } from '../aggregation/lossSeries.js';
 import { decideComparison } from '../decision/decideComparison.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
+import { type MeasuredInterval, measuredCoverage } from '../intervals/measuredCoverage.js';
 import { relativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
-import type { BootstrapSummary, Comparison, DieboldMarianoSummary } from '../report/reportModel.js';
+import type {
+  BootstrapSummary,
+  Comparison,
+  DieboldMarianoSummary,
+  Interval,
+} from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { mean } from '../statistics/mean.js';
@@ -38,18 +44,19 @@ export function compareLossSeries(
   const meanTestedDifferential = meanOrZero(d);
   const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
 
-  const dieboldMariano: DieboldMarianoSummary = runDieboldMariano(
-    d,
-    series.maxHorizon,
-    hypothesis,
-    settings,
-    difference,
+  const dieboldMariano: DieboldMarianoSummary = withMeasured(
+    runDieboldMariano(d, series.maxHorizon, hypothesis, settings, difference),
+    'dieboldMarianoDifference',
+    n,
   );
   const withBootstrap = options.bootstrap ?? true;
   const bootstrapRun = withBootstrap
     ? runBootstrap(d, series, hypothesis, settings, options.runner, difference)
     : null;
-  const bootstrap: BootstrapSummary = bootstrapRun?.summary ?? bootstrapNotRun(settings);
+  const bootstrap: BootstrapSummary =
+    bootstrapRun === null
+      ? bootstrapNotRun(settings)
+      : withMeasured(bootstrapRun.summary, 'bootstrapDifference', n);
   const decision = decideComparison({
     hypothesis,
     alpha: settings.alpha,
@@ -104,6 +111,20 @@ export function compareLossSeries(
     reasons: decision.reasons,
     rejected: decision.rejected,
   };
+}
+
+/** Adds the study's measured coverage to a summary's interval where it falls short. */
+function withMeasured<T extends { readonly interval: Interval | null }>(
+  summary: T,
+  kind: MeasuredInterval,
+  n: number,
+): T {
+  const interval = summary.interval;
+  if (interval === null) return summary;
+  const measured = measuredCoverage(kind, n, interval.level);
+  return measured === null
+    ? summary
+    : { ...summary, interval: { ...interval, measuredCoverage: measured } };
 }
 
 /** The project's mean (statistics/mean.ts), with 0 for a comparison that has no time points. */

@@ -88,14 +88,19 @@ export function dieboldMarianoMarginSet(input: {
     if (estimator === 'uniform') {
       const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
       if (!finite(uniform)) return null;
-      // Where ω_uniform(D − r·B) > 0 the gate uses it, elsewhere Bartlett at the same lag.
+      // Where ω_uniform(D − r·B) is positive beyond rounding the gate uses it, elsewhere
+      // Bartlett: "positive" as in `isEffectivelyNonPositive`, ω > n·ε·γ̂_0, also quadratic in r.
+      const gamma0 = longRunCovariance(d, baseline, candidate, (x) =>
+        bartlettLongRunVariance(x, 0),
+      );
+      const tolerance = n * Number.EPSILON;
       const positive = complementOfSet(
         fiellerSet({
           meanD: 0,
           meanB: 0,
-          varDD: -uniform.dd,
-          varDB: -uniform.db,
-          varBB: -uniform.bb,
+          varDD: tolerance * gamma0.dd - uniform.dd,
+          varDB: tolerance * gamma0.db - uniform.db,
+          varBB: tolerance * gamma0.bb - uniform.bb,
           critical: 1,
         }),
       );

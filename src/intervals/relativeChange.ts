@@ -11,10 +11,11 @@ import {
   intersectionOfSets,
   unionOfSets,
 } from './intervalSet.js';
+import { type MeasuredCoverage, measuredCoverage } from './measuredCoverage.js';
 
 /**
  * The relative change E[L_c]/E[L_b] − 1 with the set of relative margins at which the gate would
- * not reject (docs/decisions/0008-intervals-from-the-tests.md): each test inverted over the margin
+ * not reject (docs/decisions/0011-intervals-from-the-tests.md): each test inverted over the margin
  * (`dieboldMarianoMarginSet`, `bootstrapMarginSet`), then combined the way the policy combines
  * the tests: the union with agreement `both` (the gate acts only when both reject), the
  * intersection with `either`, one test's set with `dm` / `bootstrap` or when only one was
@@ -34,6 +35,8 @@ export interface RelativeChange {
   readonly upper: number | null;
   readonly method: string;
   readonly pieces?: readonly IntervalPiece[];
+  /** Present when the coverage study measured this interval > 2 points under its level. */
+  readonly measuredCoverage?: MeasuredCoverage;
 }
 
 export function relativeChange(input: {
@@ -95,6 +98,7 @@ export function relativeChange(input: {
   const chosen = combine(input.agreement, dm, bs);
   if (chosen === null) return null;
   const hull = hullOfSet(chosen.set);
+  const measured = measuredCoverage('relativeChange', n, level);
   return {
     estimate,
     level,
@@ -102,6 +106,7 @@ export function relativeChange(input: {
     upper: hull?.upper ?? null,
     method: chosen.method,
     ...(chosen.set.length === 1 ? {} : { pieces: chosen.set }),
+    ...(measured === null ? {} : { measuredCoverage: measured }),
   };
 }
 

@@ -65,7 +65,13 @@ export function buildReport(parts: ReportParts): Report {
     );
   }
   const stability = parts.stability ?? null;
-  const finding = stabilityFinding(stability, hypothesis, settings, inputs.timestamps.kind);
+  const finding = stabilityFinding(
+    stability,
+    hypothesis,
+    settings,
+    inputs.timestamps.kind,
+    worstVerdict(verdicts),
+  );
   reasons.push(...finding.reasons);
   const gateVerdict = worstVerdict(verdicts);
   const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);

@@ -1,5 +1,6 @@
 import { formatNumber, formatSignedPercent } from '../core/formatNumber.js';
 import type { IntervalPiece } from '../intervals/intervalSet.js';
+import type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 import { confidenceOverridesDefault } from '../settings/defaultConfidence.js';
 import type { Comparison, Report } from './reportModel.js';
 
@@ -14,7 +15,16 @@ export function relativeChangeText(c: Comparison): string {
   if (rc === null) return point;
   const pieces: readonly IntervalPiece[] = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
   if (pieces.length === 0) return `${point} ∅`;
-  return `${point} ${pieces.map(pieceText).join(' ∪ ')}`;
+  return `${point} ${pieces.map(pieceText).join(' ∪ ')}${measuredCoverageText(rc.measuredCoverage)}`;
+}
+
+/**
+ * " (measured coverage 84%)" when the coverage study found the interval more than 2 points under
+ * its level (src/intervals/measuredCoverage.ts), else ""; `intervalNote` says what it means.
+ */
+export function measuredCoverageText(measured: MeasuredCoverage | undefined): string {
+  if (measured === undefined) return '';
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
 }
 
 function pieceText(p: IntervalPiece): string {
@@ -37,9 +47,20 @@ export function intervalNote(report: Report): string {
       `${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (α = ${alpha} each side) may disagree.`
     );
   }
-  return (
+  const base =
     `Intervals are ${pct} (1 − 2α): each end is a one-sided bound at α = ${alpha}. The relative ` +
     'change interval holds the relative margins at which the gate would not reject: a margin ' +
-    'below its lower end means evidence of a regression larger than that margin.'
-  );
+    'below its lower end means evidence of a regression larger than that margin.';
+  const measured = report.comparisons
+    .flatMap((c) => [
+      c.relativeChange?.measuredCoverage,
+      c.dieboldMariano.interval?.measuredCoverage,
+      c.bootstrap.interval?.measuredCoverage,
+    ])
+    .find((m) => m !== undefined);
+  return measured === undefined
+    ? base
+    : `${base} A measured coverage beside an interval is the lowest the validation study ` +
+        `(docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to ` +
+        'strong persistence and heavy tails.';
 }

@@ -2,7 +2,7 @@ import { formatNumber, formatPValue, formatSignedPercent } from '../core/formatN
 import { LOSS_LABELS } from '../losses/lossName.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { inputNotes } from './inputNotes.js';
-import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { intervalNote, measuredCoverageText, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
 import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
 import { renderStabilitySection } from './renderStabilitySection.js';
@@ -71,7 +71,7 @@ function comparisonTable(report: Report): string[] {
     const interval =
       bs.interval === null
         ? 'n/a'
-        : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]`;
+        : `[${formatNumber(bs.interval.lower)}, ${formatNumber(bs.interval.upper)}]${measuredCoverageText(bs.interval.measuredCoverage)}`;
     rows.push(
       `| ${scopeLabel(c)} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(
         c.meanCandidateLoss,
@@ -178,7 +178,7 @@ function testDetails(report: Report): string[] {
   );
   if (dm.interval !== null) {
     out.push(
-      `| DM interval for E[L_candidate − L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}] |`,
+      `| DM interval for E[L_candidate − L_baseline] (${formatNumber(dm.interval.level * 100, 3)}%) | [${formatNumber(dm.interval.lower)}, ${formatNumber(dm.interval.upper)}]${measuredCoverageText(dm.interval.measuredCoverage)} |`,
     );
   }
   out.push(

@@ -17,6 +17,7 @@ export function renderStabilitySection(report: Report): string[] {
   const out = ['**Over time**', ''];
   if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), '');
   out.push(fluctuationSentence(stability, report), '');
+  if (stability.levels.adjustment === 'bonferroni') out.push(levelsSentence(stability), '');
   if (stability.periods.length > 0) out.push(...periodTable(stability), '');
   return out;
 }
@@ -38,10 +39,10 @@ function windowTable(overall: Comparison, recent: Comparison): string[] {
 function fluctuationSentence(stability: Stability, report: Report): string {
   const f = stability.fluctuation;
   if (f === null) {
-    return 'Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and α between 0.01 and 0.10).';
+    return 'Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at α/2).';
   }
   const sides = report.settings.fluctuationSides === 'one' ? 'one-sided' : 'two-sided';
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold–Mariano statistic over rolling windows of ${f.windowSize} time points (μ = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)} against the critical value ${formatNumber(f.criticalValue, 4)} at α = ${report.policy.alpha}, over ${esc(f.peak.start)} to ${esc(f.peak.end)}.`;
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold–Mariano statistic over rolling windows of ${f.windowSize} time points (μ = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${esc(f.peak.start)} to ${esc(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at α = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
   if (f.worsePeriods.length > 0) {
     const spans = f.worsePeriods.map((s) => `${esc(s.start)} to ${esc(s.end)}`).join(', ');
     return `${setup} The candidate is significantly worse over ${spans}.`;
@@ -49,6 +50,12 @@ function fluctuationSentence(stability: Stability, report: Report): string {
   return f.rejected
     ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.`
     : `${setup} No stretch where the candidate is significantly worse.`;
+}
+
+/** How α was shared: each check at α/2 so that "not stable" (either check) keeps α. */
+function levelsSentence(stability: Stability): string {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at α = ${recent} and the fluctuation test at α = ${fluctuation}; together they call the difference not stable at most α = ${alpha} of the time when accuracy is equal throughout.`;
 }
 
 function periodTable(stability: Stability): string[] {

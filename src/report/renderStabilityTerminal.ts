@@ -12,15 +12,16 @@ export function renderStabilityTerminal(report: Report): string[] {
   if (s === null) return [];
   const out: string[] = [];
   const r = s.recent;
+  const split = s.levels.adjustment === 'bonferroni' ? ', α/2 each by Bonferroni' : '';
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? '?')} to ${clean(r.lastTimestamp ?? '?')}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}: ${r.verdict}`,
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? '?')} to ${clean(r.lastTimestamp ?? '?')}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, α = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`,
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, μ = ${f.mu}); ${
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, μ = ${f.mu}, α = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${
         f.worsePeriods.length === 0
           ? 'no stretch significantly worse'
           : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(', ')}`

@@ -1,6 +1,6 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { inputNotes } from './inputNotes.js';
-import { intervalNote, relativeChangeText } from './relativeChangeText.js';
+import { intervalNote, measuredCoverageText, relativeChangeText } from './relativeChangeText.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
 import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
 import { renderStabilityTerminal } from './renderStabilityTerminal.js';
@@ -49,7 +49,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
       formatPValue(c.bootstrap.decisionPValue),
       c.bootstrap.interval === null
         ? 'n/a'
-        : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]`,
+        : `[${formatNumber(c.bootstrap.interval.lower)}, ${formatNumber(c.bootstrap.interval.upper)}]${measuredCoverageText(c.bootstrap.interval.measuredCoverage)}`,
       c.verdict,
     ]);
   const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)));

@@ -8,6 +8,7 @@ import type {
 import type { FileSummary } from '../core/panel.js';
 import type { Verdict } from '../decision/verdict.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
+import type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 import type { RelativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
 import type { Settings } from '../settings/settings.js';
@@ -15,6 +16,7 @@ import type { Stability } from '../stability/stabilityModel.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
 
+export type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 export type { RelativeChange } from '../intervals/relativeChange.js';
 
 /**
@@ -199,6 +201,8 @@ export interface Interval {
   readonly lower: number;
   readonly upper: number;
   readonly method: string;
+  /** Present when the coverage study measured this interval > 2 points under its level. */
+  readonly measuredCoverage?: MeasuredCoverage;
 }
 
 export interface InputsSummary {

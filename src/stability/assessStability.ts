@@ -6,6 +6,7 @@ import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { fluctuationTest } from './fluctuationTest.js';
 import { periodBreakdown } from './periodBreakdown.js';
 import { recentComparison } from './recentComparison.js';
+import { splitLevel } from './stabilityLevels.js';
 import type { FluctuationSummary, Stability } from './stabilityModel.js';
 
 export interface StabilityInputs {
@@ -23,7 +24,9 @@ export interface StabilityInputs {
  * `report.stability` for the overall loss series: the fluctuation test on the differential
  * "candidate worse by more than the margin" (d_t = L_c,t − (1 + r) L_b,t − δ, whatever the
  * policy, since the question is where the candidate is worse), the full comparison on the
- * recent window under the gate's policy, and the breakdown by period.
+ * recent window under the gate's policy, and the breakdown by period. When both checks run,
+ * each runs at α/2 (Bonferroni; src/stability/stabilityLevels.ts, decision 0010), so the
+ * combined "not stable" flag keeps the level α; a check that runs alone runs at α.
  */
 export function assessStability(inputs: StabilityInputs): Stability {
   const { series, timestamps, settings } = inputs;
@@ -33,9 +36,11 @@ export function assessStability(inputs: StabilityInputs): Stability {
   const worse = hypothesisFor('no-regression', settings.margin, settings.marginKind);
   const d = lossDifferential(series, worse.baselineFactor - 1);
   if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t]! -= worse.boundary;
+  const withRecent = settings.recent !== null && series.baseline.length > 0;
+  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
   const test = fluctuationTest(d, {
     mu: settings.fluctuationWindow,
-    alpha: settings.alpha,
+    alpha: fluctuationAlpha,
     sides: settings.fluctuationSides,
     lag: settings.lag,
     horizon: series.maxHorizon,
@@ -59,16 +64,25 @@ export function assessStability(inputs: StabilityInputs): Stability {
           })),
         };
 
+  // The recent window shares α only with a fluctuation test that actually ran.
+  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
   const recent =
-    settings.recent === null || series.baseline.length === 0
+    settings.recent === null || !withRecent
       ? null
       : recentComparison(
           series,
           settings.recent,
           { loss: settings.loss, horizon: 'all', series: 'all', timestamps },
           inputs.hypothesis,
-          settings,
+          recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
           inputs.runner,
         );
-  return { fluctuation, recent, periods };
+  const levels = {
+    adjustment:
+      fluctuation !== null && recent !== null ? ('bonferroni' as const) : ('none' as const),
+    alpha: settings.alpha,
+    fluctuation: fluctuation === null ? null : fluctuationAlpha,
+    recent: recent === null ? null : recentAlpha,
+  };
+  return { fluctuation, recent, periods, levels };
 }

@@ -1,6 +1,7 @@
 import { formatNumber, formatSignedPercent } from '../core/formatNumber.js';
 import type { TimestampKind } from '../core/panel.js';
 import type { Hypothesis } from '../decision/hypothesis.js';
+import type { Verdict } from '../decision/verdict.js';
 import { relativeChangeText } from '../report/relativeChangeText.js';
 import type { Comparison } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
@@ -27,6 +28,7 @@ export function stabilityFinding(
   hypothesis: Hypothesis,
   settings: Settings,
   kind: TimestampKind,
+  overallVerdict?: Verdict,
 ): StabilityFinding {
   if (stability === null) return { effect: null, headline: '', reasons: [] };
   const sentences: string[] = [];
@@ -41,8 +43,12 @@ export function stabilityFinding(
         ? `The candidate is worse in ${where}: ${change}.`
         : `In ${where} the candidate does not meet the policy: ${change}.`,
     );
+    const split =
+      stability.levels.adjustment === 'bonferroni'
+        ? ` at α = ${stability.levels.recent}, half of α = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)`
+        : '';
     reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp}): ${recent.reasons.join(' ')}`,
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(' ')}`,
     );
   }
   const f = stability.fluctuation;
@@ -51,10 +57,10 @@ export function stabilityFinding(
     const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(', ');
     const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : '';
     sentences.push(
-      `The difference is not stable over time: significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`,
+      `${recentWorse ? 'The candidate is also' : 'Over time, the candidate is'} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`,
     );
     reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, μ = ${f.mu}, ${settings.fluctuationSides}-sided, α = ${settings.alpha}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`,
+      `Fluctuation test (Giacomini & Rossi 2010, μ = ${f.mu}, ${settings.fluctuationSides}-sided, α = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`,
     );
   }
   if (!recentWorse && !stretchWorse) return { effect: null, headline: '', reasons };
@@ -62,9 +68,11 @@ export function stabilityFinding(
   const response =
     gate === 'off'
       ? 'This does not change the verdict (stability-gate off).'
-      : gate === 'warn'
-        ? 'This makes the gate warn; it does not fail it (stability-gate warn).'
-        : 'This fails the gate (stability-gate fail).';
+      : overallVerdict === 'fail'
+        ? `On its own this would ${gate === 'warn' ? 'make the gate warn' : 'fail the gate'} (stability-gate ${gate}).`
+        : gate === 'warn'
+          ? 'This makes the gate warn; it does not fail it (stability-gate warn).'
+          : 'This fails the gate (stability-gate fail).';
   return {
     effect: gate === 'off' ? null : gate,
     headline: [...sentences, response].join(' '),
@@ -96,6 +104,13 @@ function changeWords(c: Comparison): string {
     return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
   }
   return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, '')})`;
+}
+
+/** ", α/2 of 0.05 (Bonferroni, beside the recent window)" when the checks shared α. */
+function splitNote(stability: Stability): string {
+  return stability.levels.adjustment === 'bonferroni'
+    ? `, half of α = ${stability.levels.alpha} (Bonferroni, beside the recent window)`
+    : '';
 }
 
 function spanWords(span: TimeSpan): string {

@@ -1,4 +1,7 @@
 import type { Comparison } from '../report/reportModel.js';
+import type { StabilityLevels } from './stabilityLevels.js';
+
+export type { StabilityLevels } from './stabilityLevels.js';
 
 /**
  * Whether the difference between the models holds over time (`report.stability`): the
@@ -12,6 +15,8 @@ export interface Stability {
   readonly recent: Comparison | null;
   /** Mean losses by period, oldest first (calendar buckets for dates, equal counts otherwise). */
   readonly periods: readonly PeriodSummary[];
+  /** The level each check ran at: α/2 each (Bonferroni) when both ran, so the flag keeps α. */
+  readonly levels: StabilityLevels;
 }
 
 /** A stretch of time named by its first and last timestamp label (both included). */
@@ -23,7 +28,7 @@ export interface TimeSpan {
 export interface FluctuationSummary {
   /** max_t F_t (one-sided) or max_t |F_t| (two-sided) over the rolling windows. */
   readonly statistic: number;
-  /** Critical value at α for this μ (Giacomini & Rossi 2010, Table I, interpolated in μ). */
+  /** Critical value at levels.fluctuation for this μ (Giacomini & Rossi 2010, Table I, interpolated). */
   readonly criticalValue: number;
   /** Window size as a fraction of the time points, m = μ·n. */
   readonly mu: number;

@@ -33,7 +33,7 @@ export interface DieboldMarianoOptions {
   /**
    * The series on which `bartlett` / `uniform` choose their lag and `ewc-ar1` its ν (default d).
    * The gate passes the unshifted differential L_c − L_b, so the lag or ν, and with it the test's
-   * variance, is the same quadratic form at every relative margin (docs/decisions/0008-intervals-from-the-tests.md).
+   * variance, is the same quadratic form at every relative margin (docs/decisions/0011-intervals-from-the-tests.md).
    */
   lagSeries?: Float64Array;
 }

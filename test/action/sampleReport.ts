@@ -264,6 +264,7 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
         worsePeriods: [],
       },
       recent: null,
+      levels: { adjustment: 'none', alpha: 0.05, fluctuation: 0.05, recent: null },
       periods: [
         {
           start: '2026-03-04',

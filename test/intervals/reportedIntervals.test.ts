@@ -66,7 +66,9 @@ describe('every interval is for the quantity printed beside it', () => {
     expect(rc.lower!).toBeLessThan(rc.estimate);
     expect(rc.upper!).toBeGreaterThan(rc.estimate);
     expect(rc.method).toBe('Fieller (ewc-ar1) ∪ inverted bootstrap');
-    expect(relativeChangeText(margin)).toMatch(/^[−+-]?\d.*% \[.*%, .*%\]$/);
+    expect(relativeChangeText(margin)).toMatch(
+      /^[−+-]?\d.*% \[.*%, .*%\]( \(measured coverage [\d.]+%\))?$/,
+    );
   });
 
   it('reports an unbounded set with null ends and its pieces', () => {
@@ -90,6 +92,8 @@ describe('every interval is for the quantity printed beside it', () => {
     expect(rc.pieces![0]!.lower).toBeNull();
     expect(rc.pieces![1]!.upper).toBeNull();
     expect(rc.pieces![0]!.upper!).toBeLessThan(rc.pieces![1]!.lower!);
-    expect(relativeChangeText(c)).toMatch(/\[−∞, .*%\] ∪ \[.*%, \+∞\]$/);
+    expect(relativeChangeText(c)).toMatch(
+      /\[−∞, .*%\] ∪ \[.*%, \+∞\]( \(measured coverage .*\))?$/,
+    );
   });
 });

@@ -27,6 +27,35 @@ describe('renderStabilitySection', () => {
     );
   });
 
+  it('says at which level each check ran when both shared α (comment and terminal)', () => {
+    const report = sampleReport();
+    const recent = { ...report.comparisons[0]!, n: 36, firstTimestamp: '2026-09-24' };
+    const shared = {
+      ...report,
+      stability: {
+        ...report.stability!,
+        recent,
+        levels: {
+          adjustment: 'bonferroni' as const,
+          alpha: 0.05,
+          fluctuation: 0.025,
+          recent: 0.025,
+        },
+      },
+    };
+    const md = renderStabilitySection(shared).join('\n');
+    expect(md).toMatch(/critical value 2\.938 at α = 0\.025\./);
+    expect(md).toMatch(
+      /each ran at half the level \(Bonferroni\): the recent window at α = 0\.025 and the fluctuation test at α = 0\.025/,
+    );
+    const alone = renderStabilitySection(report).join('\n');
+    expect(alone).toMatch(/at α = 0\.05\./);
+    expect(alone).not.toMatch(/Bonferroni/);
+    const term = renderTerminal(shared, { color: false });
+    expect(term).toMatch(/p \(boot\) [0-9.]+, α = 0\.025, α\/2 each by Bonferroni: pass/);
+    expect(term).toMatch(/μ = 0\.2, α = 0\.025, α\/2 each by Bonferroni\)/);
+  });
+
   it('escapes hostile timestamp labels in the comment and strips control characters in the terminal', () => {
     const report = sampleReport();
     const hostile = '<img src=x onerror=alert(1)>|[x](http://e)';

@@ -33,6 +33,33 @@ describe('stabilityFinding', () => {
     );
   });
 
+  it('does not say "does not fail it" when the whole backtest already fails the gate', () => {
+    const s = { ...stable, recent: recentFail };
+    const f = stabilityFinding(s, hypothesis, settings('warn'), 'datetime', 'fail');
+    expect(f.headline).toMatch(
+      /On its own this would make the gate warn \(stability-gate warn\)\.$/,
+    );
+    expect(f.headline).not.toMatch(/does not fail it/);
+  });
+
+  it('names the level of each check in the reasons when both shared α (Bonferroni)', () => {
+    const s: Stability = {
+      ...stable,
+      recent: recentFail,
+      fluctuation: {
+        ...stable.fluctuation!,
+        statistic: 3.4,
+        rejected: true,
+        worsePeriods: [{ start: '2026-09-01', end: '2026-10-29' }],
+      },
+      levels: { adjustment: 'bonferroni', alpha: 0.05, fluctuation: 0.025, recent: 0.025 },
+    };
+    const f = stabilityFinding(s, hypothesis, settings('warn'), 'datetime');
+    expect(f.reasons[0]).toMatch(/at α = 0\.025, half of α = 0\.05 \(Bonferroni/);
+    expect(f.reasons[1]).toMatch(/one-sided, α = 0\.025, half of α = 0\.05 \(Bonferroni/);
+    expect(f.headline).toMatch(/The candidate is also significantly worse over 2026-09-01/);
+  });
+
   it('fails the gate or stays silent as stability-gate says', () => {
     const s = { ...stable, recent: recentFail };
     expect(stabilityFinding(s, hypothesis, settings('fail'), 'datetime').effect).toBe('fail');
@@ -57,7 +84,7 @@ describe('stabilityFinding', () => {
       'datetime',
     );
     expect(f.headline).toMatch(
-      /not stable over time: significantly worse over 2026-09-01 to 2026-10-29/,
+      /Over time, the candidate is significantly worse over 2026-09-01 to 2026-10-29/,
     );
     expect(stabilityFinding(stable, hypothesis, settings('warn'), 'datetime')).toEqual({
       effect: null,
