@@ -12,6 +12,7 @@ import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { build } from 'esbuild';
 import { blockLengthSweep } from './blockLengthSweep.mjs';
+import { candidatesSection } from './candidatesCase.mjs';
 import { autoregressiveSeries, writeForecastFile } from './generate.mjs';
 import { parquetReadingSection } from './parquetReading.mjs';
 
@@ -366,6 +367,9 @@ const sweep = blockLengthSweep({
   hasNumpy: hasNumpyForSweep,
 });
 log();
+log('4. several candidates');
+const candidates = await candidatesSection({ cli, work, runs: SCALING_RUNS, log });
+log();
 const parquetReading = await parquetReadingSection({
   root,
   work,
@@ -401,6 +405,7 @@ const results = {
     threshold,
   },
   sweep,
+  candidates,
 };
 writeFileSync(path.join(work, 'results.json'), `${JSON.stringify(results, null, 2)}\n`);
 log(`results written to ${path.relative(root, path.join(work, 'results.json'))}`);

@@ -320,7 +320,7 @@ var require_main = __commonJS({
       var flags;
       var token;
       var flag;
-      var num;
+      var num2;
       var out;
       var pos;
       var f;
@@ -412,11 +412,11 @@ var require_main = __commonJS({
               break;
             case "c":
               if (!isnan(token.arg)) {
-                num = parseInt(token.arg, 10);
-                if (num < 0 || num > 127) {
+                num2 = parseInt(token.arg, 10);
+                if (num2 < 0 || num2 > 127) {
                   throw new Error("invalid character code. Value: " + token.arg);
                 }
-                token.arg = isnan(num) ? String(token.arg) : fromCharCode(num);
+                token.arg = isnan(num2) ? String(token.arg) : fromCharCode(num2);
               }
               break;
             case "e":
@@ -5500,14 +5500,14 @@ var require_gamma_delta_ratio_lanczos = __commonJS({
     var FACTORIAL_169 = 4269068009004705e289;
     function gammaDeltaRatioLanczos(z, delta) {
       var result;
-      var ratio;
+      var ratio2;
       var zgh;
       if (z < EPSILON) {
         if (delta >= FLOAT64_MAX_NTH_FACTORIAL) {
-          ratio = gammaDeltaRatioLanczos(delta, FLOAT64_MAX_NTH_FACTORIAL - delta);
-          ratio *= z;
-          ratio *= FACTORIAL_169;
-          return 1 / ratio;
+          ratio2 = gammaDeltaRatioLanczos(delta, FLOAT64_MAX_NTH_FACTORIAL - delta);
+          ratio2 *= z;
+          ratio2 *= FACTORIAL_169;
+          return 1 / ratio2;
         }
         return 1 / (z * gamma(z + delta));
       }
@@ -7936,7 +7936,7 @@ var require_ibeta_power_terms = __commonJS({
     function ibetaPowerTerms(a, b, x, y, normalized) {
       var result;
       var smallA;
-      var ratio;
+      var ratio2;
       var agh;
       var bgh;
       var cgh;
@@ -7975,14 +7975,14 @@ var require_ibeta_power_terms = __commonJS({
           }
         } else if (maxabs(l1, l2) < 0.5) {
           smallA = a < b;
-          ratio = b / a;
-          if (smallA && ratio * l2 < 0.1 || !smallA && l1 / ratio > 0.1) {
-            l3 = expm1(ratio * log1p(l2));
+          ratio2 = b / a;
+          if (smallA && ratio2 * l2 < 0.1 || !smallA && l1 / ratio2 > 0.1) {
+            l3 = expm1(ratio2 * log1p(l2));
             l3 = l1 + l3 + l3 * l1;
             l3 = a * log1p(l3);
             result *= exp(l3);
           } else {
-            l3 = expm1(log1p(l1) / ratio);
+            l3 = expm1(log1p(l1) / ratio2);
             l3 = l2 + l3 + l3 * l2;
             l3 = b * log1p(l3);
             result *= exp(l3);
@@ -11659,7 +11659,7 @@ var require_halley_iterate = __commonJS({
       var delta;
       var denom;
       var diff;
-      var num;
+      var num2;
       var res;
       var f0;
       var f1;
@@ -11710,11 +11710,11 @@ var require_halley_iterate = __commonJS({
           delta = f0 / f1;
         } else {
           denom = 2 * f0;
-          num = 2 * f1 - f0 * (f2 / f1);
-          if (abs(num) < 1 && abs(denom) >= abs(num) * MAX_VALUE) {
+          num2 = 2 * f1 - f0 * (f2 / f1);
+          if (abs(num2) < 1 && abs(denom) >= abs(num2) * MAX_VALUE) {
             delta = f0 / f1;
           } else {
-            delta = denom / num;
+            delta = denom / num2;
           }
           if (delta * f1 / f0 < 0) {
             delta = f0 / f1;
@@ -12238,9 +12238,9 @@ var InputError = class extends Error {
    * start a line that the Actions runner would read as a workflow command (`::error::…`).
    */
   describe() {
-    const { file, line, column, value } = this.location;
+    const { file, line: line2, column, value } = this.location;
     const name = file === void 0 ? "" : echo(file);
-    const where = file === void 0 ? "" : line === void 0 ? `${name}: ` : `${name}:${line}: `;
+    const where = file === void 0 ? "" : line2 === void 0 ? `${name}: ` : `${name}:${line2}: `;
     const details = [];
     if (column !== void 0) details.push(`column "${echo(column)}"`);
     if (value !== void 0) details.push(`value ${JSON.stringify(echo(value))}`);
@@ -12957,13 +12957,13 @@ function agreedValues(sources, size, what, describeRow) {
       const mine = v[rows[p]];
       const theirs = values[p];
       if (mine !== theirs) {
-        const line = other.table.lines[rows[p]];
+        const line2 = other.table.lines[rows[p]];
         const firstLine = first.table.lines[first.rows[p]];
         throw new InputError(
-          `the ${what} differs between files for ${describeRow(p)}: ${theirs} in ${first.table.summary.path} line ${firstLine}, ${mine} in ${other.table.summary.path} line ${line}`,
+          `the ${what} differs between files for ${describeRow(p)}: ${theirs} in ${first.table.summary.path} line ${firstLine}, ${mine} in ${other.table.summary.path} line ${line2}`,
           {
             file: other.table.summary.path,
-            line,
+            line: line2,
             column: other.column.column,
             value: String(mine)
           }
@@ -13158,4351 +13158,6 @@ function orderLossSeries(table2, timeFormat = "auto") {
   };
 }
 
-// src/core/version.ts
-var VERSION = "0.1.0";
-
-// src/decision/hypothesis.ts
-function hypothesisFor(policy, margin, kind) {
-  const better = policy === "superiority";
-  const signed = better ? -margin : margin;
-  const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
-  const base = {
-    baselineFactor: kind === "relative" ? 1 + signed : 1,
-    boundary: kind === "relative" ? 0 : signed
-  };
-  switch (policy) {
-    case "no-regression":
-      return {
-        ...base,
-        rejectWhen: "above",
-        onReject: "fail",
-        nullHypothesis: `the candidate's expected loss is not higher than the baseline's${marginText}`,
-        alternative: `the candidate's expected loss is higher than the baseline's${marginText}`
-      };
-    case "non-inferiority":
-      return {
-        ...base,
-        rejectWhen: "below",
-        onReject: "pass",
-        nullHypothesis: margin === 0 ? "the candidate's expected loss is at least the baseline's" : `the candidate is worse than the baseline by ${describeMargin(margin, kind)} or more`,
-        alternative: margin === 0 ? "the candidate's expected loss is lower than the baseline's" : `the candidate is not worse than the baseline by ${describeMargin(margin, kind)} or more`
-      };
-    case "superiority":
-      return {
-        ...base,
-        rejectWhen: "below",
-        onReject: "pass",
-        nullHypothesis: `the candidate's expected loss is not lower than the baseline's${marginText}`,
-        alternative: `the candidate's expected loss is lower than the baseline's${marginText}`
-      };
-  }
-}
-function describeMargin(margin, kind) {
-  return kind === "relative" ? formatPercent(margin) : `${margin} loss units`;
-}
-function formatPercent(fraction) {
-  return `${Number((fraction * 100).toPrecision(6))}%`;
-}
-
-// src/decision/verdict.ts
-function worstVerdict(verdicts) {
-  if (verdicts.includes("fail")) return "fail";
-  if (verdicts.includes("warn")) return "warn";
-  return "pass";
-}
-
-// src/integrity/checkResult.ts
-var CHECK_IDS = [
-  "look-ahead",
-  "horizon-steps",
-  "origin-after-actuals",
-  "origin-sets",
-  "path-sets",
-  "horizon-sets",
-  "time-spans",
-  "series-coverage",
-  "fold-purge",
-  "outside-test-window",
-  "exact-predictions"
-];
-var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
-var MAX_EXAMPLES = 5;
-var FindingCollector = class {
-  count = 0;
-  examples = [];
-  add(example) {
-    if (this.count++ < MAX_EXAMPLES) this.examples.push(example());
-  }
-};
-
-// src/integrity/checkPolicy.ts
-function applyCheckPolicy(findings, notRun, mode, frequency) {
-  const checks = findings.map((f) => ({
-    id: f.id,
-    status: statusOf(f, mode),
-    count: f.count,
-    examples: f.examples,
-    summary: f.summary
-  }));
-  const outcome = checks.some((c) => c.status === "fail") ? "fail" : checks.some((c) => c.status === "warn") ? "warn" : "ok";
-  return { mode, outcome, affectsVerdict: mode !== "report", frequency, checks, notRun };
-}
-function statusOf(f, mode) {
-  if (f.count === 0) return "ok";
-  return mode === "enforce" && FAILING_CHECKS.includes(f.id) ? "fail" : "warn";
-}
-function noChecks(mode, reason) {
-  return {
-    mode,
-    outcome: "ok",
-    affectsVerdict: mode !== "report",
-    frequency: null,
-    checks: [],
-    notRun: CHECK_IDS.map((id) => ({ id, reason }))
-  };
-}
-
-// src/core/formatNumber.ts
-function formatNumber(x, digits = 4) {
-  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
-  if (x === 0) return "0";
-  const magnitude = Math.abs(x);
-  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
-  return String(Number(x.toPrecision(digits)));
-}
-function formatSignedPercent(x) {
-  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
-  const text = formatNumber(x * 100, 3);
-  return `${x > 0 ? "+" : ""}${text}%`;
-}
-function formatPValue(p) {
-  if (p === null || p === void 0 || !Number.isFinite(p)) return "n/a";
-  if (p < 1e-4) return "< 0.0001";
-  if (p > 0.9999) return "> 0.9999";
-  return p.toFixed(4);
-}
-
-// src/settings/defaultConfidence.ts
-function defaultConfidence(alpha) {
-  return Number((1 - 2 * alpha).toPrecision(15));
-}
-function confidenceOverridesDefault(confidence, alpha) {
-  return confidence !== defaultConfidence(alpha);
-}
-
-// src/report/relativeChangeText.ts
-function relativeChangeText(c) {
-  const rc = c.relativeChange;
-  const point = formatSignedPercent(c.relativeDifference);
-  if (rc === null) return point;
-  const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
-  if (pieces.length === 0) return `${point} \u2205`;
-  return `${point} ${pieces.map(pieceText).join(" \u222A ")}${measuredCoverageText(rc.measuredCoverage)}`;
-}
-function measuredCoverageText(measured) {
-  if (measured === void 0) return "";
-  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
-}
-function pieceText(p) {
-  const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
-  const upper = p.upper === null ? "+\u221E" : formatSignedPercent(p.upper);
-  return `[${lower}, ${upper}]`;
-}
-function intervalNote(report) {
-  const { confidence, alpha } = report.settings;
-  const pct2 = `${formatNumber(confidence * 100, 3)}%`;
-  if (confidenceOverridesDefault(confidence, alpha)) {
-    return `Intervals are ${pct2}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
-  }
-  const base = `Intervals are ${pct2} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
-  const measured = report.comparisons.flatMap((c) => [
-    c.relativeChange?.measuredCoverage,
-    c.dieboldMariano.interval?.measuredCoverage,
-    c.bootstrap.interval?.measuredCoverage
-  ]).find((m) => m !== void 0);
-  return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
-}
-
-// src/stability/calendarDate.ts
-function calendarDateOf(label) {
-  const reading = readLabel(label);
-  if (typeof reading === "string" || reading.kind !== "datetime") return null;
-  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
-  const dayNumber = Math.floor(seconds / 86400);
-  return { ...civilFromDays(dayNumber), dayNumber };
-}
-function civilFromDays(days) {
-  const z = days + 719468;
-  const era = Math.floor(z / 146097);
-  const doe = z - era * 146097;
-  const yoe = Math.floor(
-    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
-  );
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
-  const month = mp < 10 ? mp + 3 : mp - 9;
-  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
-}
-
-// src/stability/describeSpan.ts
-function describeSpan(first, last, points, kind) {
-  const a = kind === "datetime" ? calendarDateOf(first) : null;
-  const b = kind === "datetime" ? calendarDateOf(last) : null;
-  if (a !== null && b !== null) {
-    const days = b.dayNumber - a.dayNumber + 1;
-    if (days >= 90) return plural(Math.round(days / 30.44), "month");
-    if (days >= 14) return plural(Math.round(days / 7), "week");
-    if (days >= 2) return plural(days, "day");
-  }
-  return plural(points, "time point");
-}
-function plural(count, unit) {
-  return `${count} ${unit}${count === 1 ? "" : "s"}`;
-}
-
-// src/stability/stabilityFinding.ts
-function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
-  if (stability === null) return { effect: null, headline: "", reasons: [] };
-  const sentences = [];
-  const reasons = [];
-  const recent = stability.recent;
-  const recentWorse = recent !== null && recent.verdict === "fail";
-  if (recent !== null && recentWorse) {
-    const where = recentWords(recent, kind);
-    const change = changeWords(recent);
-    sentences.push(
-      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
-    );
-    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
-    reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
-    );
-  }
-  const f = stability.fluctuation;
-  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
-  if (f !== null && stretchWorse) {
-    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
-    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
-    sentences.push(
-      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
-    );
-    reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
-    );
-  }
-  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
-  const gate = settings.stabilityGate;
-  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate}).` : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
-  return {
-    effect: gate === "off" ? null : gate,
-    headline: [...sentences, response].join(" "),
-    reasons
-  };
-}
-function recentWords(c, kind) {
-  const first = c.firstTimestamp ?? "?";
-  const last = c.lastTimestamp ?? "?";
-  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
-}
-function changeWords(c) {
-  const rel = c.relativeDifference;
-  if (rel === null) {
-    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
-  }
-  const rc = c.relativeChange;
-  const shown = `${formatSignedPercent(rel)} mean loss`;
-  if (rc === null) return shown;
-  const single = rc.pieces === void 0 || rc.pieces.length === 1;
-  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
-  if (single && rc.lower !== null && rc.upper !== null) {
-    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
-  }
-  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
-}
-function splitNote(stability) {
-  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
-}
-function spanWords(span) {
-  return `${span.start} to ${span.end}`;
-}
-
-// src/report/buildReport.ts
-function buildReport(parts) {
-  const { inputs, settings, hypothesis } = parts;
-  const overall = parts.comparisons[0];
-  if (overall === void 0) throw new Error("a report needs the overall comparison");
-  const reasons = [];
-  const verdicts = [overall.verdict];
-  const missing = inputs.rowsDropped.baseline;
-  if (missing > 0) {
-    if (settings.allowMissing) {
-      reasons.push(
-        `The candidate lacks ${missing} rows that the baseline has; allowed by allow-missing, they are left out of the comparison.`
-      );
-    } else {
-      verdicts.push("fail");
-      reasons.push(
-        `The candidate lacks ${missing} rows that the baseline has. A candidate must not pass by skipping hard cases; set allow-missing to compare on the common rows only.`
-      );
-    }
-  }
-  const integrity = parts.integrity ?? noChecks(settings.backtestChecks, "a pre-aggregated loss file has no forecast rows to check");
-  if (integrity.affectsVerdict && integrity.outcome !== "ok") {
-    verdicts.push(integrity.outcome === "fail" ? "fail" : "warn");
-    const which = integrity.checks.filter((c) => c.status === integrity.outcome).map((c) => c.id);
-    reasons.push(
-      integrity.outcome === "fail" ? `A backtest check failed (${which.join(", ")}): the comparison cannot be trusted until the backtest is fixed.` : `A backtest check warns (${which.join(", ")}): look at the backtest checks before trusting the comparison.`
-    );
-  }
-  const stability = parts.stability ?? null;
-  const finding = stabilityFinding(
-    stability,
-    hypothesis,
-    settings,
-    inputs.timestamps.kind,
-    worstVerdict(verdicts)
-  );
-  reasons.push(...finding.reasons);
-  const gateVerdict = worstVerdict(verdicts);
-  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
-  return {
-    tool: { name: "skillgate", version: parts.version },
-    name: settings.name,
-    verdict,
-    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(" ").trim(),
-    policy: {
-      policy: settings.policy,
-      agreement: settings.agreement,
-      alpha: settings.alpha,
-      margin: settings.margin,
-      marginKind: settings.marginKind,
-      nullHypothesis: hypothesis.nullHypothesis,
-      alternative: hypothesis.alternative,
-      onReject: hypothesis.onReject,
-      baselineFactor: hypothesis.baselineFactor,
-      boundary: hypothesis.boundary
-    },
-    comparisons: parts.comparisons,
-    inputs,
-    settings,
-    reasons,
-    seriesSummary: parts.seriesSummary ?? null,
-    pathSummary: parts.pathSummary ?? null,
-    integrity,
-    stability
-  };
-}
-function headline(verdict, overall, hypothesis) {
-  const rel = overall.relativeDifference;
-  const change = rel === null ? `mean loss ${overall.meanCandidateLoss} vs ${overall.meanBaselineLoss}` : `mean loss ${rel >= 0 ? "up" : "down"} ${Math.abs(rel * 100).toFixed(2)}% against the baseline`;
-  const tested = `Tested whether ${hypothesis.alternative}, over ${overall.n} time points (${change}).`;
-  switch (verdict) {
-    case "pass":
-      return `${tested} The gate passes.`;
-    case "warn":
-      return `${tested} The evidence is mixed or thin: the gate passes with a warning.`;
-    case "fail":
-      return `${tested} The gate fails.`;
-  }
-}
-
-// src/losses/absoluteError.ts
-function absoluteError(actual, prediction) {
-  return Math.abs(actual - prediction);
-}
-
-// src/losses/absolutePercentageError.ts
-function absolutePercentageError(actual, prediction) {
-  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
-}
-
-// src/losses/intervalCoverage.ts
-function intervalCoverage(actual, lower, upper) {
-  const n = actual.length;
-  if (lower.length !== n || upper.length !== n) {
-    throw new RangeError(
-      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
-    );
-  }
-  if (n === 0) return null;
-  let inside = 0;
-  for (let i = 0; i < n; i++) {
-    const y = actual[i];
-    if (lower[i] <= y && y <= upper[i]) inside++;
-  }
-  return inside / n;
-}
-
-// src/losses/intervalScore.ts
-function intervalScore(actual, lower, upper, alpha) {
-  if (!(alpha > 0 && alpha < 1)) {
-    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
-  }
-  const penalty = 2 / alpha;
-  let score = upper - lower;
-  if (actual < lower) score += penalty * (lower - actual);
-  if (actual > upper) score += penalty * (actual - upper);
-  return score;
-}
-
-// src/losses/pinballLoss.ts
-function pinballLoss(actual, quantile, level) {
-  const u = actual - quantile;
-  return u >= 0 ? level * u : (level - 1) * u;
-}
-
-// src/losses/squaredError.ts
-function squaredError(actual, prediction) {
-  const e = actual - prediction;
-  return e * e;
-}
-
-// src/losses/symmetricAbsolutePercentageError.ts
-function symmetricAbsolutePercentageError(actual, prediction) {
-  const denominator = Math.abs(actual) + Math.abs(prediction);
-  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
-}
-
-// src/losses/rowLosses.ts
-var LossUnavailableError = class extends Error {
-};
-var POINT_LOSSES = {
-  squared: squaredError,
-  absolute: absoluteError,
-  ape: absolutePercentageError,
-  sape: symmetricAbsolutePercentageError
-};
-function computeRowLosses(panel, loss, zeroActuals, interval = null) {
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  if (loss === "interval") return intervalLosses(panel, interval);
-  if (loss === "pinball") {
-    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
-    if (pairs.length === 0) {
-      throw new LossUnavailableError(
-        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
-      );
-    }
-    const y2 = panel.actual;
-    for (const { level, base: base2, cand: cand2 } of pairs) {
-      for (let i = 0; i < n; i++) {
-        const yi = y2[i];
-        baseline[i] += pinballLoss(yi, base2[i], level);
-        candidate[i] += pinballLoss(yi, cand2[i], level);
-      }
-    }
-    const k = pairs.length;
-    for (let i = 0; i < n; i++) {
-      baseline[i] /= k;
-      candidate[i] /= k;
-    }
-    return {
-      loss,
-      baseline,
-      candidate,
-      included: null,
-      zeroActualRows: [],
-      levels: pairs.map((p) => p.level),
-      coverage: null
-    };
-  }
-  const base = panel.baseline.prediction;
-  const cand = panel.candidate.prediction;
-  if (base === null || cand === null) {
-    throw new LossUnavailableError(
-      `the ${loss} loss needs a prediction column in both baseline and candidate`
-    );
-  }
-  const f = POINT_LOSSES[loss];
-  const y = panel.actual;
-  const zeroActualRows = [];
-  let included = null;
-  for (let i = 0; i < n; i++) {
-    const yi = y[i];
-    if (loss === "ape" && yi === 0) {
-      zeroActualRows.push(i);
-      if (zeroActuals === "skip") {
-        included ??= new Uint8Array(n).fill(1);
-        included[i] = 0;
-      }
-      continue;
-    }
-    baseline[i] = f(yi, base[i]);
-    candidate[i] = f(yi, cand[i]);
-  }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
-}
-function intervalLosses(panel, interval) {
-  if (interval === null) {
-    throw new LossUnavailableError(
-      "the interval loss needs the two quantile levels of the interval"
-    );
-  }
-  const [lowLevel, highLevel] = interval;
-  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
-  const bl = find(panel.baseline.quantiles, lowLevel);
-  const bu = find(panel.baseline.quantiles, highLevel);
-  const cl = find(panel.candidate.quantiles, lowLevel);
-  const cu = find(panel.candidate.quantiles, highLevel);
-  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
-    throw new LossUnavailableError(
-      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
-    );
-  }
-  const alpha = 1 - (highLevel - lowLevel);
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const y = panel.actual;
-  for (let i = 0; i < n; i++) {
-    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
-    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
-  }
-  return {
-    loss: "interval",
-    baseline,
-    candidate,
-    included: null,
-    zeroActualRows: [],
-    levels: [lowLevel, highLevel],
-    coverage: {
-      nominal: highLevel - lowLevel,
-      baseline: intervalCoverage(y, bl, bu),
-      candidate: intervalCoverage(y, cl, cu)
-    }
-  };
-}
-function commonQuantiles(baseline, candidate) {
-  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
-  const pairs = [];
-  for (const q of baseline) {
-    const cand = byLevel.get(q.level);
-    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
-  }
-  return pairs;
-}
-
-// src/report/missingRows.ts
-var GROUPS = 50;
-function missingRowsSummary(lacking, losses) {
-  if (lacking === void 0 || lacking.series.length === 0) return null;
-  const n = lacking.series.length;
-  const lossOf = losses.loss === "pinball" || losses.loss === "interval" ? null : POINT_LOSSES[losses.loss];
-  const loss = new Float64Array(n).fill(Number.NaN);
-  let withoutLoss = 0;
-  for (let k = 0; k < n; k++) {
-    const y = lacking.actual[k];
-    const f = lacking.prediction[k];
-    const value = lossOf !== null && Number.isFinite(y) && Number.isFinite(f) ? lossOf(y, f) : Number.NaN;
-    if (Number.isFinite(value)) loss[k] = value;
-    else withoutLoss++;
-  }
-  const group = (keyOf, order) => {
-    const acc = /* @__PURE__ */ new Map();
-    for (let k = 0; k < n; k++) {
-      const key = keyOf(k);
-      const t = lacking.time[k];
-      const g = acc.get(key) ?? { rows: 0, lo: t, hi: t, sum: 0, m: 0 };
-      g.rows++;
-      g.lo = Math.min(g.lo, t);
-      g.hi = Math.max(g.hi, t);
-      if (Number.isFinite(loss[k])) {
-        g.sum += loss[k];
-        g.m++;
-      }
-      acc.set(key, g);
-    }
-    return [...acc.entries()].sort((a, b) => b[1].rows - a[1].rows || order(a[0], b[0])).slice(0, GROUPS).map(([key, g]) => ({
-      key,
-      rows: g.rows,
-      first: lacking.timestamps[g.lo] ?? null,
-      last: lacking.timestamps[g.hi] ?? null,
-      meanBaselineLoss: g.m === 0 ? null : g.sum / g.m
-    }));
-  };
-  const all = group(
-    () => "all",
-    () => 0
-  )[0];
-  let sum = 0;
-  let m = 0;
-  for (let i = 0; i < losses.baseline.length; i++) {
-    if (losses.included !== null && losses.included[i] === 0) continue;
-    sum += losses.baseline[i];
-    m++;
-  }
-  return {
-    rows: n,
-    first: all.first,
-    last: all.last,
-    meanBaselineLoss: all.meanBaselineLoss,
-    meanBaselineLossCommon: m === 0 ? null : sum / m,
-    rowsWithoutLoss: withoutLoss,
-    bySeries: group(
-      (k) => lacking.seriesNames[lacking.series[k]] ?? "",
-      (a, b) => a < b ? -1 : a > b ? 1 : 0
-    ),
-    byHorizon: group(
-      (k) => String(lacking.horizon[k]),
-      (a, b) => Number(a) - Number(b)
-    )
-  };
-}
-
-// src/report/inputsSummary.ts
-function panelInputsSummary(panel, losses) {
-  const horizons = /* @__PURE__ */ new Set();
-  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]);
-  const ts = panel.timestamps;
-  return {
-    files: panel.coverage.files,
-    rowsMatched: panel.coverage.rowsMatched,
-    rowsDropped: {
-      baseline: panel.coverage.baselineOnly,
-      candidate: panel.coverage.candidateOnly,
-      withoutActual: panel.coverage.withoutActual,
-      actualsUnused: panel.coverage.actualsUnused,
-      skippedByLoss: losses.included === null ? 0 : losses.zeroActualRows.length
-    },
-    examples: {
-      baselineOnly: panel.coverage.examples.baselineOnly,
-      candidateOnly: panel.coverage.examples.candidateOnly
-    },
-    timestamps: {
-      count: ts.length,
-      kind: panel.timestampKind,
-      first: ts[0] ?? null,
-      last: ts.at(-1) ?? null,
-      format: panel.timeFormat,
-      order: panel.timestampKindReason
-    },
-    series: panel.seriesNames.length,
-    horizons: [...horizons].sort((a, b) => a - b),
-    quantileLevels: losses.levels,
-    intervalCoverage: losses.coverage,
-    missingRows: missingRowsSummary(panel.coverage.lacking, losses)
-  };
-}
-function lossFileInputsSummary(file, timestamps, kind, maxHorizon, order = { format: "auto", reason: "" }) {
-  return {
-    files: [file],
-    rowsMatched: file.rows,
-    rowsDropped: {
-      baseline: 0,
-      candidate: 0,
-      withoutActual: 0,
-      actualsUnused: 0,
-      skippedByLoss: 0
-    },
-    examples: { baselineOnly: [], candidateOnly: [] },
-    timestamps: {
-      count: timestamps.length,
-      kind,
-      first: timestamps[0] ?? null,
-      last: timestamps.at(-1) ?? null,
-      format: order.format,
-      order: order.reason
-    },
-    series: 1,
-    horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),
-    quantileLevels: [],
-    intervalCoverage: null
-  };
-}
-
-// src/aggregation/lossSeries.ts
-function aggregateByTime(panel, losses, rows, weights = null) {
-  const points = panel.timestamps.length;
-  const sumB = new Float64Array(points);
-  const sumC = new Float64Array(points);
-  const count = new Int32Array(points);
-  const weightSum = weights === null ? null : new Float64Array(points);
-  let maxHorizon = 1;
-  let rowCount = 0;
-  const included = losses.included;
-  const total = rows === void 0 ? panel.size : rows.length;
-  for (let r = 0; r < total; r++) {
-    const i = rows === void 0 ? r : rows[r];
-    if (included !== null && included[i] === 0) continue;
-    const t = panel.time[i];
-    const w = weights === null ? 1 : weights[i];
-    sumB[t] += w * losses.baseline[i];
-    sumC[t] += w * losses.candidate[i];
-    if (weightSum !== null) weightSum[t] += w;
-    count[t]++;
-    rowCount++;
-    const h = panel.horizon[i];
-    if (h > maxHorizon) maxHorizon = h;
-  }
-  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
-  let n = 0;
-  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
-  const time = new Int32Array(n);
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const rowsAt = new Int32Array(n);
-  let k = 0;
-  for (let t = 0; t < points; t++) {
-    const m = denominator(t);
-    if (count[t] === 0 || m <= 0) continue;
-    time[k] = t;
-    baseline[k] = sumB[t] / m;
-    candidate[k] = sumC[t] / m;
-    rowsAt[k] = count[t];
-    k++;
-  }
-  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
-}
-function lossDifferential(series, relativeMargin) {
-  const n = series.baseline.length;
-  const d = new Float64Array(n);
-  const factor = 1 + relativeMargin;
-  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
-  return d;
-}
-
-// src/statistics/mean.ts
-function mean(x) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("mean: the series is empty");
-  let sum = 0;
-  for (let t = 0; t < n; t++) sum += x[t];
-  const first = sum / n;
-  let residual = 0;
-  for (let t = 0; t < n; t++) residual += x[t] - first;
-  return first + residual / n;
-}
-
-// src/statistics/autocovariance.ts
-function autocovariances(x, maxLag) {
-  const n = x.length;
-  if (n === 0) throw new RangeError("autocovariances: the series is empty");
-  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
-    throw new RangeError(
-      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
-    );
-  }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
-  }
-  return gamma;
-}
-
-// src/statistics/bartlettLongRunVariance.ts
-function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
-}
-
-// src/statistics/neweyWestLag.ts
-function neweyWestBandwidth(x) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
-  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
-  const sigma = autocovariances(x, pilotLag);
-  let sum = 0;
-  let weighted = 0;
-  for (let j = 1; j <= pilotLag; j++) {
-    sum += sigma[j];
-    weighted += j * sigma[j];
-  }
-  const s0 = sigma[0] + 2 * sum;
-  const s1 = 2 * weighted;
-  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
-  return { pilotLag, s0, s1, bandwidth };
-}
-function selectLag(x, rule, horizon) {
-  const n = x.length;
-  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
-  if (!Number.isInteger(horizon) || horizon < 1) {
-    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
-  }
-  const notes = [];
-  const cap = (lag, what) => {
-    if (lag <= n - 1) return lag;
-    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
-    return n - 1;
-  };
-  switch (rule.kind) {
-    case "auto": {
-      const bandwidth = neweyWestBandwidth(x);
-      let lag = Math.floor(bandwidth.bandwidth);
-      if (bandwidth.s0 === 0) {
-        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
-      }
-      if (lag < horizon - 1) {
-        notes.push(
-          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
-        );
-        lag = horizon - 1;
-      }
-      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
-    }
-    case "horizon":
-      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
-    case "fixed": {
-      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
-        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
-      }
-      if (rule.lag < horizon - 1) {
-        notes.push(
-          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
-        );
-      }
-      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
-    }
-  }
-}
-
-// src/statistics/prewhitenedLongRunVariance.ts
-var PREWHITENING_CAP = 0.97;
-function prewhitenedLongRunVariance(y, rule, horizon) {
-  const n = y.length;
-  if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
-  const centre = mean(y);
-  let cross = 0;
-  let square = 0;
-  for (let t = 1; t < n; t++) {
-    const previous = y[t - 1] - centre;
-    cross += (y[t] - centre) * previous;
-    square += previous * previous;
-  }
-  const raw = square === 0 ? 0 : cross / square;
-  const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
-  const residuals = new Float64Array(n - 1);
-  for (let t = 1; t < n; t++) {
-    residuals[t - 1] = y[t] - centre - coefficient * (y[t - 1] - centre);
-  }
-  const lag = selectLag(residuals, rule, horizon).lag;
-  const recolour = (1 - coefficient) ** 2;
-  return {
-    longRunVariance: bartlettLongRunVariance(residuals, lag) / recolour,
-    coefficient,
-    lag
-  };
-}
-
-// src/stability/fluctuationCriticalValues.ts
-var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
-var TABLE = {
-  two: [
-    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
-    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
-    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
-  ],
-  one: [
-    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
-    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
-    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
-  ]
-};
-function fluctuationCriticalValue(mu, alpha, sides) {
-  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
-  const columns = TABLE[sides];
-  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
-  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
-  for (let i = 0; i + 1 < columns.length; i++) {
-    const lo2 = columns[i];
-    const hi2 = columns[i + 1];
-    if (alpha > lo2.alpha && alpha < hi2.alpha) {
-      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
-      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
-    }
-  }
-  return null;
-}
-function interpolateInMu(values, mu) {
-  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
-  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
-  const w = Math.min(Math.max(position - i, 0), 1);
-  return (1 - w) * values[i] + w * values[i + 1];
-}
-
-// src/stability/rollingStatistic.ts
-function rollingStatistic(d, m, longRunVariance) {
-  const n = d.length;
-  if (!Number.isInteger(m) || m < 1 || m > n) {
-    throw new RangeError(`rollingStatistic: window ${m} must be an integer in 1..${n}`);
-  }
-  if (!(longRunVariance > 0)) {
-    throw new RangeError(
-      `rollingStatistic: the long-run variance must be > 0, got ${longRunVariance}`
-    );
-  }
-  const scale = 1 / Math.sqrt(m * longRunVariance);
-  const out = new Float64Array(n - m + 1);
-  let sum = 0;
-  for (let k = 0; k <= n - m; k++) {
-    if (k % 1024 === 0) {
-      sum = 0;
-      for (let j = k; j < k + m; j++) sum += d[j];
-    } else {
-      sum += d[k + m - 1] - d[k - 1];
-    }
-    out[k] = sum * scale;
-  }
-  return out;
-}
-
-// src/stability/fluctuationTest.ts
-var FLUCTUATION_MIN_POINTS = 20;
-function fluctuationTest(d, options) {
-  const n = d.length;
-  if (n < FLUCTUATION_MIN_POINTS) return null;
-  const criticalValue = fluctuationCriticalValue(options.mu, options.alpha, options.sides);
-  if (criticalValue === null) return null;
-  const windowSize = Math.round(options.mu * n);
-  if (windowSize < 2) return null;
-  const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
-  if (!(longRunVariance > 0)) return null;
-  const path2 = rollingStatistic(d, windowSize, longRunVariance);
-  let peakWindow = 0;
-  let statistic = Number.NEGATIVE_INFINITY;
-  for (let k = 0; k < path2.length; k++) {
-    const value = options.sides === "one" ? path2[k] : Math.abs(path2[k]);
-    if (value > statistic) {
-      statistic = value;
-      peakWindow = k;
-    }
-  }
-  const worseRuns = [];
-  for (let k = 0; k < path2.length; k++) {
-    if (!(path2[k] > criticalValue)) continue;
-    const from = k;
-    const to = k + windowSize - 1;
-    const last = worseRuns.at(-1);
-    if (last !== void 0 && from <= last[1] + 1) last[1] = to;
-    else worseRuns.push([from, to]);
-  }
-  return {
-    statistic,
-    criticalValue,
-    windowSize,
-    rejected: statistic > criticalValue,
-    peakWindow,
-    worseRuns,
-    lag,
-    longRunVariance,
-    path: path2
-  };
-}
-
-// src/stability/periodBuckets.ts
-var MIN_PERIODS = 8;
-var MAX_PERIODS = 60;
-var POINTS_PER_BUCKET = 10;
-var CALENDAR_UNITS = [
-  "day",
-  "week",
-  "month",
-  "quarter"
-];
-function periodBuckets(labels, kind) {
-  const n = labels.length;
-  if (kind === "datetime" && n > 0) {
-    const dates = labels.map(calendarDateOf);
-    if (dates.every((d) => d !== null)) {
-      for (const unit of CALENDAR_UNITS) {
-        const bounds = calendarBounds(dates, unit);
-        const count = bounds.length - 1;
-        if (count > MAX_PERIODS) continue;
-        if (count >= MIN_PERIODS) return { unit, bounds };
-        break;
-      }
-    }
-  }
-  return { unit: "equal-count", bounds: equalCountBounds(n) };
-}
-function calendarKey(date, unit) {
-  switch (unit) {
-    case "day":
-      return date.dayNumber;
-    case "week":
-      return Math.floor((date.dayNumber + 3) / 7);
-    case "month":
-      return date.year * 12 + date.month - 1;
-    case "quarter":
-      return date.year * 4 + Math.floor((date.month - 1) / 3);
-  }
-}
-function calendarBounds(dates, unit) {
-  const bounds = [];
-  let previous = null;
-  dates.forEach((date, t) => {
-    const key = calendarKey(date, unit);
-    if (key !== previous) bounds.push(t);
-    previous = key;
-  });
-  bounds.push(dates.length);
-  return bounds;
-}
-function equalCountBounds(n) {
-  if (n === 0) return [0];
-  const k = Math.min(
-    n,
-    Math.max(MIN_PERIODS, Math.min(MAX_PERIODS, Math.ceil(n / POINTS_PER_BUCKET)))
-  );
-  const bounds = [];
-  for (let j = 0; j <= k; j++) bounds.push(Math.floor(j * n / k));
-  return bounds;
-}
-
-// src/stability/periodBreakdown.ts
-function periodBreakdown(series, timestamps, kind) {
-  const labels = Array.from(series.time, (t) => timestamps[t] ?? String(t));
-  const buckets = periodBuckets(labels, kind);
-  const periods = [];
-  for (let j = 0; j + 1 < buckets.bounds.length; j++) {
-    const from = buckets.bounds[j];
-    const to = buckets.bounds[j + 1];
-    if (to <= from) continue;
-    const meanBaselineLoss = mean(series.baseline.subarray(from, to));
-    const meanCandidateLoss = mean(series.candidate.subarray(from, to));
-    periods.push({
-      start: labels[from],
-      end: labels[to - 1],
-      n: to - from,
-      meanBaselineLoss,
-      meanCandidateLoss,
-      relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1
-    });
-  }
-  return { buckets, periods };
-}
-
-// src/decision/decideComparison.ts
-function decideComparison(input) {
-  const { hypothesis, alpha } = input;
-  const reasons = [];
-  if (input.identicalLosses) {
-    const verdict2 = hypothesis.rejectWhen === "below" && hypothesis.boundary < 0 ? "fail" : "pass";
-    reasons.push(
-      verdict2 === "pass" ? "The candidate has exactly the same loss as the baseline on every row." : "The candidate has exactly the same loss as the baseline on every row, so it cannot be better by the margin."
-    );
-    return { verdict: verdict2, reasons, rejected: { dieboldMariano: null, bootstrap: null } };
-  }
-  const rejects = (e) => {
-    if (e.state === "zero-variance" || e.state === "identical") {
-      const gap = e.mean - hypothesis.boundary;
-      return hypothesis.rejectWhen === "above" ? gap > 0 : gap < 0;
-    }
-    if (e.pValue === null) return null;
-    return e.pValue <= alpha;
-  };
-  const dm = rejects(input.dieboldMariano);
-  const bs = rejects(input.bootstrap);
-  const rejected = { dieboldMariano: dm, bootstrap: bs };
-  const tests = [
-    { e: input.dieboldMariano, r: dm },
-    { e: input.bootstrap, r: bs }
-  ];
-  for (const { e, r } of tests) reasons.push(describeTest(e, r, alpha, hypothesis));
-  const onReject = hypothesis.onReject;
-  const onKeep = onReject === "fail" ? "pass" : "fail";
-  let verdict;
-  const considered = input.agreement === "dm" ? [dm] : input.agreement === "bootstrap" ? [bs] : [dm, bs];
-  const known = considered.filter((r) => r !== null);
-  if (known.length === 0) {
-    verdict = "warn";
-    reasons.push("No test could be computed, so there is no evidence either way.");
-  } else if (input.agreement === "either") {
-    verdict = known.includes(true) ? onReject : onKeep;
-  } else if (known.length < considered.length) {
-    verdict = known[0] ? onReject : onKeep;
-    reasons.push("Only one test could be computed; the verdict rests on it alone.");
-  } else if (known.every((r) => r)) {
-    verdict = onReject;
-  } else if (known.every((r) => !r)) {
-    verdict = onKeep;
-  } else {
-    verdict = "warn";
-    reasons.push("The two tests disagree, so the gate asks a person to look (agreement: both).");
-  }
-  if (input.n < input.minPoints) {
-    reasons.push(
-      `Too little data: ${input.n} time points, fewer than the ${input.minPoints} required for a firm verdict.`
-    );
-    verdict = input.shortData;
-  }
-  return { verdict, reasons, rejected };
-}
-function describeTest(e, rejected, alpha, hypothesis) {
-  if (rejected === null) return `${e.label}: could not be computed (${e.state}).`;
-  if (e.state === "zero-variance" || e.state === "identical") {
-    return `${e.label}: the differential is constant, so its sign decides: ${rejected ? "evidence that" : "no evidence that"} ${hypothesis.alternative}.`;
-  }
-  const text = formatPValue(e.pValue);
-  const p = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
-  return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
-}
-
-// src/intervals/measuredCoverage.ts
-var STUDIED_LEVEL = 0.9;
-var WORST_COVERAGE = {
-  relativeChange: [
-    [50, 0.865],
-    [100, 0.887],
-    [200, 0.878],
-    [500, 0.878]
-  ],
-  dieboldMarianoDifference: [
-    [50, 0.826],
-    [100, 0.842],
-    [200, 0.851],
-    [500, 0.866]
-  ],
-  bootstrapDifference: [
-    [50, 0.618],
-    [100, 0.718],
-    [200, 0.748],
-    [500, 0.802]
-  ]
-};
-function measuredCoverage(kind, n, level) {
-  if (level !== STUDIED_LEVEL) return null;
-  const rows = WORST_COVERAGE[kind];
-  let chosen = rows[0];
-  for (const row of rows) if (row[0] <= n) chosen = row;
-  const [studiedN, coverage] = chosen;
-  return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
-}
-
-// src/statistics/bootstrap/basicBootstrapInference.ts
-function tailProbability(level) {
-  return Number((1 - level).toPrecision(15));
-}
-function tailOrderStatistic(tail, resamples) {
-  const denominator = resamples + 1;
-  let k = Math.min(resamples, Math.max(0, Math.floor(tail * denominator)));
-  while (k < resamples && (k + 1) / denominator <= tail) k++;
-  while (k > 0 && k / denominator > tail) k--;
-  return k;
-}
-function minimumResamples(level) {
-  const alpha = tailProbability(level);
-  let resamples = Math.max(1, Math.floor(2 / alpha) - 1);
-  while (tailOrderStatistic(alpha / 2, resamples) < 1) resamples++;
-  while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
-  return resamples;
-}
-function basicBootstrapInference(reflectedSorted, margin, level) {
-  const resamples = reflectedSorted.length;
-  const alpha = tailProbability(level);
-  const kTwo = tailOrderStatistic(alpha / 2, resamples);
-  const kOne = tailOrderStatistic(alpha, resamples);
-  if (kTwo < 1) {
-    throw new RangeError(
-      `${resamples} resamples are too few for a ${level} interval (need at least ${minimumResamples(level)})`
-    );
-  }
-  let atOrBelow = 0;
-  let atOrAbove = 0;
-  for (let b = 0; b < resamples; b++) {
-    const u = reflectedSorted[b];
-    if (u <= margin) atOrBelow++;
-    if (u >= margin) atOrAbove++;
-  }
-  const pValue2 = (1 + atOrBelow) / (resamples + 1);
-  const pAbove = (1 + atOrAbove) / (resamples + 1);
-  return {
-    interval: {
-      level,
-      lower: reflectedSorted[kTwo - 1],
-      upper: reflectedSorted[resamples - kTwo]
-    },
-    oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
-    pValue: pValue2,
-    pValueBelow: pAbove,
-    pValueTwoSided: Math.min(1, 2 * Math.min(pValue2, pAbove))
-  };
-}
-
-// src/intervals/intervalSet.ts
-var lo = (p) => p.lower ?? Number.NEGATIVE_INFINITY;
-var hi = (p) => p.upper ?? Number.POSITIVE_INFINITY;
-var piece = (lower, upper) => ({
-  lower: lower === Number.NEGATIVE_INFINITY ? null : lower,
-  upper: upper === Number.POSITIVE_INFINITY ? null : upper
-});
-function normaliseSet(pieces) {
-  const sorted = pieces.filter((p) => lo(p) <= hi(p)).sort((a, b) => lo(a) - lo(b));
-  const out = [];
-  for (const p of sorted) {
-    const last = out[out.length - 1];
-    if (last !== void 0 && lo(p) <= last.upper) last.upper = Math.max(last.upper, hi(p));
-    else out.push({ lower: lo(p), upper: hi(p) });
-  }
-  return out.map((p) => piece(p.lower, p.upper));
-}
-function unionOfSets(a, b) {
-  return normaliseSet([...a, ...b]);
-}
-function intersectionOfSets(a, b) {
-  const out = [];
-  for (const p of a) {
-    for (const q of b) {
-      const lower = Math.max(lo(p), lo(q));
-      const upper = Math.min(hi(p), hi(q));
-      if (lower <= upper) out.push(piece(lower, upper));
-    }
-  }
-  return normaliseSet(out);
-}
-function hullOfSet(set) {
-  const first = set[0];
-  const last = set[set.length - 1];
-  if (first === void 0 || last === void 0) return null;
-  return { lower: first.lower, upper: last.upper };
-}
-function complementOfSet(set) {
-  const out = [];
-  let from = Number.NEGATIVE_INFINITY;
-  for (const p of normaliseSet(set)) {
-    if (lo(p) > from) out.push(piece(from, lo(p)));
-    from = hi(p);
-  }
-  if (from < Number.POSITIVE_INFINITY) out.push(piece(from, Number.POSITIVE_INFINITY));
-  return out;
-}
-
-// src/intervals/bootstrapMarginSet.ts
-function bootstrapMarginSet(input) {
-  const { meanD, meanB, deviationsD, deviationsB, tail } = input;
-  const resamples = deviationsD.length;
-  const k = tailOrderStatistic(tail, resamples);
-  const rising = [];
-  const falling = [];
-  let flatBelow = 0;
-  let flatAbove = 0;
-  for (let b = 0; b < resamples; b++) {
-    const a = meanD - deviationsD[b];
-    const c = meanB - deviationsB[b];
-    if (c > 0) rising.push(a / c);
-    else if (c < 0) falling.push(a / c);
-    else {
-      if (a <= 0) flatBelow++;
-      if (a >= 0) flatAbove++;
-    }
-  }
-  const up = Float64Array.from(rising).sort();
-  const down = Float64Array.from(falling).sort();
-  const accepted = (r) => {
-    const upAtOrBelow = countAtOrBelow(up, r);
-    const upAtOrAbove = up.length - countBelow(up, r);
-    const downAtOrBelow = countAtOrBelow(down, r);
-    const downAtOrAbove = down.length - countBelow(down, r);
-    const nonPositive = flatBelow + upAtOrBelow + downAtOrAbove;
-    const nonNegative = flatAbove + upAtOrAbove + downAtOrBelow;
-    return nonPositive >= k && nonNegative >= k;
-  };
-  if (up.length === 0 && down.length === 0) {
-    return accepted(0) ? [{ lower: null, upper: null }] : [];
-  }
-  const points = Float64Array.from([...up, ...down]).sort();
-  const unique = [];
-  for (const p of points) if (unique[unique.length - 1] !== p) unique.push(p);
-  const pieces = [];
-  let open2;
-  const close = (upper) => {
-    if (open2 !== void 0) pieces.push({ lower: open2, upper });
-    open2 = void 0;
-  };
-  const m = unique.length;
-  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open2 = null;
-  for (let i = 0; i < m; i++) {
-    const p = unique[i];
-    if (accepted(p)) {
-      if (open2 === void 0) open2 = p;
-    } else {
-      close(p);
-    }
-    const next = unique[i + 1];
-    const between = next === void 0 ? p + 1 + Math.abs(p) : p + (next - p) / 2;
-    if (accepted(between)) {
-      if (open2 === void 0) open2 = p;
-    } else {
-      close(p);
-    }
-  }
-  close(null);
-  return normaliseSet(pieces);
-}
-function countAtOrBelow(sorted, r) {
-  let lo2 = 0;
-  let hi2 = sorted.length;
-  while (lo2 < hi2) {
-    const mid = lo2 + hi2 >>> 1;
-    if (sorted[mid] <= r) lo2 = mid + 1;
-    else hi2 = mid;
-  }
-  return lo2;
-}
-function countBelow(sorted, r) {
-  let lo2 = 0;
-  let hi2 = sorted.length;
-  while (lo2 < hi2) {
-    const mid = lo2 + hi2 >>> 1;
-    if (sorted[mid] < r) lo2 = mid + 1;
-    else hi2 = mid;
-  }
-  return lo2;
-}
-
-// src/statistics/distributions.ts
-var import_stats_base_dists_normal_cdf = __toESM(require_lib57(), 1);
-var import_stats_base_dists_normal_quantile = __toESM(require_lib62(), 1);
-var import_stats_base_dists_t_cdf = __toESM(require_lib129(), 1);
-var import_stats_base_dists_t_quantile = __toESM(require_lib139(), 1);
-function standardNormalUpperTail(x) {
-  return (0, import_stats_base_dists_normal_cdf.default)(-x, 0, 1);
-}
-function standardNormalTwoSided(x) {
-  return Math.min(1, 2 * (0, import_stats_base_dists_normal_cdf.default)(-Math.abs(x), 0, 1));
-}
-function standardNormalQuantile(p) {
-  return (0, import_stats_base_dists_normal_quantile.default)(p, 0, 1);
-}
-function studentTUpperTail(x, degreesOfFreedom) {
-  return (0, import_stats_base_dists_t_cdf.default)(-x, degreesOfFreedom);
-}
-function studentTTwoSided(x, degreesOfFreedom) {
-  return Math.min(1, 2 * (0, import_stats_base_dists_t_cdf.default)(-Math.abs(x), degreesOfFreedom));
-}
-function studentTQuantile(p, degreesOfFreedom) {
-  return (0, import_stats_base_dists_t_quantile.default)(p, degreesOfFreedom);
-}
-
-// src/statistics/ewcLongRunVariance.ts
-function ewcDegreesOfFreedom(n) {
-  return Math.max(2, Math.round(0.4 * n ** (2 / 3)));
-}
-function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length)) {
-  const n = x.length;
-  const nu = degreesOfFreedom;
-  if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
-    throw new RangeError(
-      `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
-    );
-  }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
-  const cosTable = new Float64Array(n + 1);
-  for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
-  const period = 4 * n;
-  const half = 2 * n;
-  let sumOfSquares = 0;
-  for (let j = 1; j <= nu; j++) {
-    const step = 2 * j % period;
-    let k = j % period;
-    let lambda = 0;
-    for (let t = 0; t < n; t++) {
-      const r = k > half ? period - k : k;
-      const c = r > n ? -cosTable[half - r] : cosTable[r];
-      lambda += c * u[t];
-      k += step;
-      if (k >= period) k -= period;
-    }
-    lambda *= Math.sqrt(2 / n);
-    sumOfSquares += lambda * lambda;
-  }
-  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
-}
-
-// src/statistics/harveyLeybourneNewbold.ts
-function harveyLeybourneNewboldFactor(n, horizon) {
-  if (!(horizon < n)) return null;
-  return Math.sqrt((n - horizon) * (n - horizon + 1)) / n;
-}
-function harveyLeybourneNewbold(statistic, n, horizon) {
-  const factor = harveyLeybourneNewboldFactor(n, horizon);
-  if (factor === null) return null;
-  const corrected = statistic * factor;
-  const degreesOfFreedom = n - 1;
-  return {
-    statistic: corrected,
-    pValue: studentTUpperTail(corrected, degreesOfFreedom),
-    pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
-    degreesOfFreedom
-  };
-}
-
-// src/statistics/varianceTolerance.ts
-function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
-  return !(longRunVariance > n * Number.EPSILON * gamma0);
-}
-
-// src/statistics/uniformLongRunVariance.ts
-function uniformWeightSum(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
-  return sum;
-}
-function uniformLongRunVariance(x, lag) {
-  const uniformValue = uniformWeightSum(x, lag);
-  const gamma0 = autocovariances(x, 0)[0];
-  if (!isEffectivelyNonPositive(uniformValue, gamma0, x.length)) {
-    return { value: uniformValue, estimator: "uniform", lag, uniformValue, note: null };
-  }
-  const value = bartlettLongRunVariance(x, lag);
-  return {
-    value,
-    estimator: "bartlett",
-    lag,
-    uniformValue,
-    note: `The uniform-weight long-run variance at lag ${lag} is not positive (${uniformValue.toPrecision(6)}), so the Bartlett (Newey\u2013West) weights were used instead, with the same lag ${lag}.`
-  };
-}
-
-// src/intervals/fiellerSet.ts
-function fiellerSet(input) {
-  const { meanD, meanB, varDD, varDB, varBB, critical } = input;
-  const c2 = critical * critical;
-  const a = meanB * meanB - c2 * varBB;
-  const b = meanD * meanB - c2 * varDB;
-  const e = meanD * meanD - c2 * varDD;
-  const discriminant = b * b - a * e;
-  if (a === 0) {
-    if (b > 0) return [{ lower: e / (2 * b), upper: null }];
-    if (b < 0) return [{ lower: null, upper: e / (2 * b) }];
-    return e <= 0 ? [{ lower: null, upper: null }] : [];
-  }
-  if (discriminant < 0) return a > 0 ? [] : [{ lower: null, upper: null }];
-  const root = Math.sqrt(discriminant);
-  const q = b + (b >= 0 ? root : -root);
-  const r1 = q / a;
-  const r2 = q === 0 ? 0 : e / q;
-  const small = Math.min(r1, r2);
-  const large = Math.max(r1, r2);
-  if (a > 0) return [{ lower: small, upper: large }];
-  return normaliseSet([
-    { lower: null, upper: small },
-    { lower: large, upper: null }
-  ]);
-}
-
-// src/intervals/longRunCovariance.ts
-function longRunCovariance(d, b, sum, variance) {
-  const dd = variance(d);
-  const bb = variance(b);
-  const ss = variance(sum);
-  return { dd, bb, db: (ss - dd - bb) / 2 };
-}
-
-// src/intervals/dieboldMarianoMarginSet.ts
-function dieboldMarianoMarginSet(input) {
-  const { candidate, baseline, horizon, tail } = input;
-  const n = baseline.length;
-  if (n < 3) return null;
-  const d = new Float64Array(n);
-  for (let t = 0; t < n; t++) d[t] = candidate[t] - baseline[t];
-  let estimator = input.estimator;
-  let critical;
-  const meanD = mean(d);
-  const meanB = mean(baseline);
-  const fieller = (v) => fiellerSet({ meanD, meanB, varDD: v.dd / n, varDB: v.db / n, varBB: v.bb / n, critical });
-  let covariance;
-  let set;
-  if (estimator === "ewc" || estimator === "ewc-ar1") {
-    const nu = input.degreesOfFreedom;
-    if (nu === null) return null;
-    covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
-    critical = studentTQuantile(1 - tail, nu);
-    if (!finite(covariance)) return null;
-    set = fieller(covariance);
-  } else {
-    const lag = selectLag(d, input.lag, horizon).lag;
-    const factor = harveyLeybourneNewboldFactor(n, horizon);
-    critical = factor === null ? standardNormalQuantile(1 - tail) : studentTQuantile(1 - tail, n - 1) / factor;
-    const bartlett = longRunCovariance(
-      d,
-      baseline,
-      candidate,
-      (x) => bartlettLongRunVariance(x, lag)
-    );
-    if (!finite(bartlett)) return null;
-    covariance = bartlett;
-    set = fieller(bartlett);
-    if (estimator === "uniform") {
-      const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
-      if (!finite(uniform)) return null;
-      const gamma0 = longRunCovariance(
-        d,
-        baseline,
-        candidate,
-        (x) => bartlettLongRunVariance(x, 0)
-      );
-      const tolerance = n * Number.EPSILON;
-      const positive = complementOfSet(
-        fiellerSet({
-          meanD: 0,
-          meanB: 0,
-          varDD: tolerance * gamma0.dd - uniform.dd,
-          varDB: tolerance * gamma0.db - uniform.db,
-          varBB: tolerance * gamma0.bb - uniform.bb,
-          critical: 1
-        })
-      );
-      if (positive.length === 0) estimator = "bartlett";
-      else {
-        covariance = uniform;
-        set = unionOfSets(
-          intersectionOfSets(fieller(uniform), positive),
-          intersectionOfSets(set, complementOfSet(positive))
-        );
-      }
-    }
-  }
-  return { set, estimator, critical, covariance };
-}
-function finite(v) {
-  return Number.isFinite(v.dd) && Number.isFinite(v.db) && Number.isFinite(v.bb);
-}
-
-// src/intervals/relativeChange.ts
-function relativeChange(input) {
-  const { series, settings } = input;
-  const n = series.baseline.length;
-  if (n === 0) return null;
-  const meanB = mean(series.baseline);
-  if (!(meanB > 0)) return null;
-  const estimate = mean(series.candidate) / meanB - 1;
-  const level = settings.confidence;
-  const tail = tailProbability(level) / 2;
-  let dm = null;
-  if (input.dieboldMariano.state === "ok") {
-    const found = dieboldMarianoMarginSet({
-      candidate: series.candidate,
-      baseline: series.baseline,
-      estimator: settings.variance,
-      lag: settings.lag,
-      degreesOfFreedom: input.dieboldMariano.degreesOfFreedom,
-      horizon: series.maxHorizon,
-      tail
-    });
-    if (found !== null) dm = { set: found.set, method: `Fieller (${found.estimator})` };
-  }
-  let bs = null;
-  const deviations = input.bootstrap.resampledDeviations;
-  if (input.bootstrap.state === "ok" && deviations !== null) {
-    const deviationsD = new Float64Array(deviations.candidate.length);
-    for (let b = 0; b < deviationsD.length; b++) {
-      deviationsD[b] = deviations.candidate[b] - deviations.baseline[b];
-    }
-    const d = new Float64Array(n);
-    for (let t = 0; t < n; t++) d[t] = series.candidate[t] - series.baseline[t];
-    bs = {
-      set: bootstrapMarginSet({
-        meanD: mean(d),
-        meanB,
-        deviationsD,
-        deviationsB: deviations.baseline,
-        tail
-      }),
-      method: "inverted bootstrap"
-    };
-  }
-  const chosen = combine(input.agreement, dm, bs);
-  if (chosen === null) return null;
-  const hull = hullOfSet(chosen.set);
-  const measured = measuredCoverage("relativeChange", n, level);
-  return {
-    estimate,
-    level,
-    lower: hull?.lower ?? null,
-    upper: hull?.upper ?? null,
-    method: chosen.method,
-    ...chosen.set.length === 1 ? {} : { pieces: chosen.set },
-    ...measured === null ? {} : { measuredCoverage: measured }
-  };
-}
-function combine(agreement, dm, bs) {
-  if (agreement === "dm") return dm;
-  if (agreement === "bootstrap") return bs;
-  if (dm === null || bs === null) return dm ?? bs;
-  return agreement === "both" ? { set: unionOfSets(dm.set, bs.set), method: `${dm.method} \u222A ${bs.method}` } : { set: intersectionOfSets(dm.set, bs.set), method: `${dm.method} \u2229 ${bs.method}` };
-}
-
-// node_modules/pure-rand/lib/esm/generator/xoroshiro128plus.js
-var jumps = [
-  3639956645,
-  3750757012,
-  1261568508,
-  386426335
-];
-var XoroShiro128Plus = class XoroShiro128Plus2 {
-  constructor(s01, s00, s11, s10) {
-    this.s01 = s01;
-    this.s00 = s00;
-    this.s11 = s11;
-    this.s10 = s10;
-  }
-  clone() {
-    return new XoroShiro128Plus2(this.s01, this.s00, this.s11, this.s10);
-  }
-  next() {
-    const out = this.s00 + this.s10 | 0;
-    const a0 = this.s10 ^ this.s00;
-    const a1 = this.s11 ^ this.s01;
-    const s00 = this.s00;
-    const s01 = this.s01;
-    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-    this.s10 = a1 << 5 ^ a0 >>> 27;
-    this.s11 = a0 << 5 ^ a1 >>> 27;
-    return out;
-  }
-  jump() {
-    let ns01 = 0;
-    let ns00 = 0;
-    let ns11 = 0;
-    let ns10 = 0;
-    let s01 = this.s01;
-    let s00 = this.s00;
-    let s11 = this.s11;
-    let s10 = this.s10;
-    for (let i = 0; i !== 4; ++i) {
-      const ji = jumps[i];
-      for (let mask = 1; mask; mask <<= 1) {
-        if (ji & mask) {
-          ns01 ^= s01;
-          ns00 ^= s00;
-          ns11 ^= s11;
-          ns10 ^= s10;
-        }
-        const a0 = s10 ^ s00;
-        const a1 = s11 ^ s01;
-        const s00_ = s00;
-        const s01_ = s01;
-        s00 = s00_ << 24 ^ s01_ >>> 8 ^ a0 ^ a0 << 16;
-        s01 = s01_ << 24 ^ s00_ >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-        s10 = a1 << 5 ^ a0 >>> 27;
-        s11 = a0 << 5 ^ a1 >>> 27;
-      }
-    }
-    this.s01 = ns01;
-    this.s00 = ns00;
-    this.s11 = ns11;
-    this.s10 = ns10;
-  }
-  getState() {
-    return [
-      this.s01,
-      this.s00,
-      this.s11,
-      this.s10
-    ];
-  }
-};
-function xoroshiro128plusFromState(state) {
-  if (!(state.length === 4)) throw new Error("The state must have been produced by a xoroshiro128plus RandomGenerator");
-  return new XoroShiro128Plus(state[0], state[1], state[2], state[3]);
-}
-
-// src/random/splitMix64.ts
-var MASK_64 = (1n << 64n) - 1n;
-var GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
-function splitMix64Words(seed, count) {
-  let state = BigInt(seed) & MASK_64;
-  const words = [];
-  for (let i = 0; i < count; i++) {
-    state = state + GOLDEN_GAMMA & MASK_64;
-    let z = state;
-    z = (z ^ z >> 30n) * 0xbf58476d1ce4e5b9n & MASK_64;
-    z = (z ^ z >> 27n) * 0x94d049bb133111ebn & MASK_64;
-    z = z ^ z >> 31n;
-    words.push(Number(BigInt.asIntN(32, z >> 32n)), Number(BigInt.asIntN(32, z)));
-  }
-  return words;
-}
-
-// src/random/randomSource.ts
-var TWO_POW_26 = 67108864;
-var TWO_POW_MINUS_53 = 1 / 9007199254740992;
-function randomStreams(factory, seed, first) {
-  if (factory.sequence !== void 0) return factory.sequence(seed, first);
-  let stream = first;
-  return { next: () => factory(seed, stream++) };
-}
-function createRandomSource(seed, stream = 0) {
-  return createRandomStreams(seed, stream).next();
-}
-createRandomSource.sequence = createRandomStreams;
-function createRandomStreams(seed, first = 0) {
-  if (!Number.isSafeInteger(seed) || seed < 0) {
-    throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
-  }
-  if (!Number.isSafeInteger(first) || first < 0) {
-    throw new RangeError(`stream must be a non-negative integer, got ${first}`);
-  }
-  const [s0High, s0Low, s1High, s1Low] = splitMix64Words(seed, 2);
-  const cursor = xoroshiro128plusFromState([s0High, s0Low, s1High, s1Low]);
-  for (let k = 0; k < first; k++) cursor.jump();
-  let started = false;
-  return {
-    next: () => {
-      if (started) cursor.jump();
-      started = true;
-      return sourceOf(cursor.clone());
-    }
-  };
-}
-var TWO_POW_32 = 4294967296;
-var Xoroshiro128PlusSource = class {
-  s01;
-  s00;
-  s11;
-  s10;
-  pending = 0;
-  hasPending = false;
-  constructor(state) {
-    this.s01 = state[0] | 0;
-    this.s00 = state[1] | 0;
-    this.s11 = state[2] | 0;
-    this.s10 = state[3] | 0;
-  }
-  nextUint32() {
-    if (this.hasPending) {
-      this.hasPending = false;
-      return this.pending >>> 0;
-    }
-    const s00 = this.s00;
-    const s01 = this.s01;
-    const s10 = this.s10;
-    const s11 = this.s11;
-    const low = (s00 >>> 0) + (s10 >>> 0);
-    const carry = low >= TWO_POW_32 ? 1 : 0;
-    this.pending = low | 0;
-    this.hasPending = true;
-    const high = s01 + s11 + carry >>> 0;
-    const a0 = s10 ^ s00;
-    const a1 = s11 ^ s01;
-    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-    this.s10 = a1 << 5 ^ a0 >>> 27;
-    this.s11 = a0 << 5 ^ a1 >>> 27;
-    return high;
-  }
-  nextDouble() {
-    const a = this.nextUint32() >>> 5;
-    const b = this.nextUint32() >>> 6;
-    return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
-  }
-};
-function sourceOf(generator) {
-  return new Xoroshiro128PlusSource(generator.getState());
-}
-
-// src/statistics/bootstrap/flatTopWindow.ts
-function flatTop(s) {
-  const a = Math.abs(s);
-  if (a <= 0.5) return 1;
-  if (a <= 1) return 2 * (1 - a);
-  return 0;
-}
-
-// src/statistics/bootstrap/automaticBlockLength.ts
-function automaticBlockLength(d) {
-  const n = d.length;
-  const notes = [];
-  const runLength = Math.max(5, Math.ceil(Math.log10(Math.max(n, 1))));
-  const maxLag = Math.ceil(Math.sqrt(n)) + runLength;
-  const maxBlockLength = Math.max(1, Math.ceil(Math.min(3 * Math.sqrt(n), n / 3)));
-  const criticalValue = n > 0 ? 2 * Math.sqrt(Math.log10(n) / n) : Number.NaN;
-  const base = { n, runLength, maxLag, maxBlockLength, criticalValue };
-  if (n < 2) {
-    notes.push(`series has ${n} observation(s); block length 1`);
-    return degenerate(base, 1, notes);
-  }
-  const lags = Math.min(maxLag, n - 1);
-  const gamma = autocovariances(d, lags);
-  const variance = gamma[0];
-  if (!(variance > 0)) {
-    notes.push("constant series: no dependence to preserve; block length 1");
-    return degenerate(base, 1, notes);
-  }
-  let firstSmallLag = null;
-  let run = 0;
-  for (let k = 1; k <= lags; k++) {
-    if (Math.abs(gamma[k] / variance) < criticalValue) {
-      run++;
-      if (run === runLength) {
-        firstSmallLag = k - runLength + 1;
-        break;
-      }
-    } else {
-      run = 0;
-    }
-  }
-  const runFound = firstSmallLag !== null;
-  if (!runFound) notes.push(`no run of ${runLength} small autocorrelations up to lag ${lags}`);
-  const bandwidth = Math.min(firstSmallLag === null ? maxLag : 2 * firstSmallLag, maxLag, n - 1);
-  let gHat = 0;
-  let spectralSum = gamma[0];
-  for (let k = 1; k <= bandwidth; k++) {
-    const weight = flatTop(k / bandwidth);
-    if (weight === 0) continue;
-    gHat += 2 * weight * k * gamma[k];
-    spectralSum += 2 * weight * gamma[k];
-  }
-  const dValue = 2 * spectralSum * spectralSum;
-  let unclamped = null;
-  let blockLength;
-  if (dValue > 0) {
-    unclamped = Math.cbrt(2 * gHat * gHat / dValue) * Math.cbrt(n);
-    blockLength = Math.min(Math.max(unclamped, 1), maxBlockLength);
-    if (unclamped < 1) notes.push(`estimate ${unclamped} raised to 1`);
-    if (unclamped > maxBlockLength) notes.push(`estimate ${unclamped} capped at ${maxBlockLength}`);
-  } else {
-    blockLength = gHat === 0 ? 1 : maxBlockLength;
-    notes.push(`spectral estimate at zero is 0; block length ${blockLength}`);
-  }
-  return {
-    ...base,
-    runFound,
-    firstSmallLag,
-    bandwidth,
-    gHat,
-    spectralSum,
-    d: dValue,
-    unclamped,
-    blockLength,
-    notes
-  };
-}
-function degenerate(base, blockLength, notes) {
-  return {
-    ...base,
-    runFound: false,
-    firstSmallLag: null,
-    bandwidth: 0,
-    gHat: 0,
-    spectralSum: 0,
-    d: 0,
-    unclamped: null,
-    blockLength,
-    notes
-  };
-}
-
-// src/statistics/bootstrap/centring.ts
-function meanOf(d) {
-  let sum = 0;
-  for (let t = 0; t < d.length; t++) sum += d[t];
-  return sum / d.length;
-}
-
-// src/random/aliasTable.ts
-function buildAliasTable(probabilities) {
-  const size = probabilities.length;
-  let sum = 0;
-  for (let i = 0; i < size; i++) sum += probabilities[i];
-  const scaled = new Float64Array(size);
-  for (let i = 0; i < size; i++) scaled[i] = probabilities[i] * size / sum;
-  const threshold = new Float64Array(size);
-  const alias = new Int32Array(size);
-  const small = [];
-  const large = [];
-  for (let i = size - 1; i >= 0; i--) (scaled[i] < 1 ? small : large).push(i);
-  while (small.length > 0 && large.length > 0) {
-    const less = small.pop();
-    const more = large.pop();
-    threshold[less] = scaled[less];
-    alias[less] = more;
-    scaled[more] = scaled[more] + scaled[less] - 1;
-    (scaled[more] < 1 ? small : large).push(more);
-  }
-  for (const i of large) {
-    threshold[i] = 1;
-    alias[i] = i;
-  }
-  for (const i of small) {
-    threshold[i] = 1;
-    alias[i] = i;
-  }
-  return { threshold, alias };
-}
-
-// src/random/geometricSampler.ts
-var MAX_COLUMNS_LOG2 = 12;
-var OVERFLOW_PROBABILITY = 1 / 1024;
-function createGeometricSampler(mean2) {
-  if (!(Number.isFinite(mean2) && mean2 >= 1)) {
-    throw new RangeError(`the mean of a geometric length must be a finite number \u2265 1, got ${mean2}`);
-  }
-  if (mean2 === 1) {
-    const table2 = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
-    return { mean: mean2, truncation: 1, table: table2, inline: null, sample: () => 1 };
-  }
-  const p = 1 / mean2;
-  const q = 1 - p;
-  let bits2 = 1;
-  while (bits2 < MAX_COLUMNS_LOG2 && q ** (2 ** bits2 - 1) > OVERFLOW_PROBABILITY) bits2++;
-  const columns = 2 ** bits2;
-  const truncation = columns - 1;
-  const probabilities = new Float64Array(columns);
-  for (let k = 1; k <= truncation; k++) probabilities[k - 1] = p * q ** (k - 1);
-  probabilities[truncation] = q ** truncation;
-  const { threshold, alias } = buildAliasTable(probabilities);
-  const shift = 32 - bits2;
-  const coinMask = 2 ** shift - 1;
-  const coinScale = 2 ** shift;
-  const edge = new Float64Array(columns);
-  const edgeFraction = new Float64Array(columns);
-  for (let i = 0; i < columns; i++) {
-    const scaled = threshold[i] * coinScale;
-    edge[i] = Math.floor(scaled);
-    edgeFraction[i] = scaled - edge[i];
-  }
-  const overflow = truncation;
-  return {
-    mean: mean2,
-    truncation,
-    table: { threshold, alias },
-    inline: { shift, coinMask, edge, edgeFraction, alias, truncation },
-    sample(random, cap) {
-      let total = 0;
-      for (; ; ) {
-        const x = random.nextUint32();
-        const column = x >>> shift;
-        const coin = x & coinMask;
-        const cut = edge[column];
-        const keep = coin !== cut ? coin < cut : random.nextDouble() < edgeFraction[column];
-        const outcome = keep ? column : alias[column];
-        if (outcome !== overflow) {
-          total += outcome + 1;
-          return Math.min(total, cap);
-        }
-        total += truncation;
-        if (total >= cap) return cap;
-      }
-    }
-  };
-}
-
-// src/statistics/bootstrap/centredPrefixSums.ts
-function centredPrefixSums(d, mean2) {
-  const n = d.length;
-  const prefix2 = new Float64Array(2 * n + 1);
-  let running = 0;
-  for (let i = 0; i < 2 * n; i++) {
-    running += d[i < n ? i : i - n] - mean2;
-    prefix2[i + 1] = running;
-  }
-  return prefix2;
-}
-
-// src/statistics/bootstrap/resampleMeanDeviation.ts
-function resampleMeanDeviation(prefix2, n, blocks) {
-  const { starts, lengths, count } = blocks;
-  let sum = 0;
-  for (let i = 0; i < count; i++) {
-    const s = starts[i];
-    sum += prefix2[s + lengths[i]] - prefix2[s];
-  }
-  return sum / n;
-}
-
-// src/statistics/bootstrap/sampleStandardDeviation.ts
-function sampleStandardDeviation(values) {
-  const m = values.length;
-  if (m < 2) return 0;
-  let sum = 0;
-  for (let i = 0; i < m; i++) sum += values[i];
-  const centre = sum / m;
-  let squares = 0;
-  for (let i = 0; i < m; i++) squares += (values[i] - centre) ** 2;
-  return Math.sqrt(squares / (m - 1));
-}
-
-// src/random/uniformIndex.ts
-var TWO_POW_322 = 4294967296;
-var LEMIRE_LIMIT = 2097152;
-function uniformIndex(random, n) {
-  if (n <= 1) return 0;
-  if (n <= LEMIRE_LIMIT) {
-    let m = random.nextUint32() * n;
-    let high = Math.floor(m / TWO_POW_322);
-    let low = m - high * TWO_POW_322;
-    if (low < n) {
-      const threshold = TWO_POW_322 % n;
-      while (low < threshold) {
-        m = random.nextUint32() * n;
-        high = Math.floor(m / TWO_POW_322);
-        low = m - high * TWO_POW_322;
-      }
-    }
-    return high;
-  }
-  const shift = Math.clz32(n - 1);
-  for (; ; ) {
-    const candidate = shift === 0 ? random.nextUint32() : random.nextUint32() >>> shift;
-    if (candidate < n) return candidate;
-  }
-}
-
-// src/statistics/bootstrap/stationaryBlocks.ts
-function allocateStationaryBlocks(n) {
-  return { starts: new Int32Array(n), lengths: new Int32Array(n), count: 0 };
-}
-function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlocks(n)) {
-  const { starts, lengths } = into;
-  let filled = 0;
-  let count = 0;
-  while (filled < n) {
-    starts[count] = uniformIndex(random, n);
-    const length = sampler.sample(random, n - filled);
-    lengths[count] = length;
-    filled += length;
-    count++;
-  }
-  into.count = count;
-  return into;
-}
-
-// src/statistics/bootstrap/resampleHistogram.ts
-function resampleHistogram(mean2, deviations, bins = 40) {
-  if (deviations.length === 0) return null;
-  let lo2 = Number.POSITIVE_INFINITY;
-  let hi2 = Number.NEGATIVE_INFINITY;
-  for (const t of deviations) {
-    lo2 = Math.min(lo2, mean2 + t);
-    hi2 = Math.max(hi2, mean2 + t);
-  }
-  const counts = new Array(bins).fill(0);
-  const width = hi2 - lo2;
-  for (const t of deviations) {
-    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
-    counts[j]++;
-  }
-  return { lower: lo2, upper: hi2, counts };
-}
-
-// src/statistics/bootstrap/resampleDeviationsInline.ts
-var TWO_POW_323 = 4294967296;
-var TWO_POW_MINUS_32 = 1 / TWO_POW_323;
-var LEMIRE_LIMIT2 = 2097152;
-function resampleDeviationsInline(prefix2, n, sampler, source, count) {
-  if (sampler.inline === null) return unitBlocks(prefix2, n, source, count);
-  return geometricBlocks(prefix2, n, sampler, source, count);
-}
-function unitBlocks(prefix2, n, source, count) {
-  const P32 = 4294967296;
-  const INV32 = 1 / 4294967296;
-  const out = new Float64Array(count);
-  const lemire = n <= LEMIRE_LIMIT2;
-  const threshold = P32 % n;
-  const maskShift = Math.clz32(n - 1);
-  let s00 = source.s00;
-  let s01 = source.s01;
-  let s10 = source.s10;
-  let s11 = source.s11;
-  let pend = source.pending;
-  let has = source.hasPending;
-  const step = new Float64Array(n);
-  for (let s = 0; s < n; s++) step[s] = prefix2[s + 1] - prefix2[s];
-  for (let r = 0; r < count; r++) {
-    let filled = 0;
-    let sum = 0;
-    while (filled < n) {
-      if (lemire && !has) {
-        const stop = n - 1;
-        let rejected = false;
-        while (filled < stop) {
-          const lo2 = (s00 >>> 0) + (s10 >>> 0);
-          const c = lo2 >= P32 ? 1 : 0;
-          const low = lo2 | 0;
-          const high = s01 + s11 + c >>> 0;
-          const a0 = s10 ^ s00;
-          const a1 = s11 ^ s01;
-          const t00 = s00;
-          s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-          s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-          s10 = a1 << 5 ^ a0 >>> 27;
-          s11 = a0 << 5 ^ a1 >>> 27;
-          const m1 = high * n;
-          const first = Math.floor(m1 * INV32);
-          if (m1 - first * P32 < threshold) {
-            pend = low;
-            has = true;
-            rejected = true;
-            break;
-          }
-          sum += step[first];
-          filled++;
-          const m2 = (low >>> 0) * n;
-          const second = Math.floor(m2 * INV32);
-          if (m2 - second * P32 < threshold) {
-            rejected = true;
-            break;
-          }
-          sum += step[second];
-          filled++;
-        }
-        if (rejected) {
-          source.s00 = s00;
-          source.s01 = s01;
-          source.s10 = s10;
-          source.s11 = s11;
-          source.pending = pend;
-          source.hasPending = has;
-          sum += step[rejectedStart(source, n, threshold)];
-          filled++;
-          s00 = source.s00;
-          s01 = source.s01;
-          s10 = source.s10;
-          s11 = source.s11;
-          pend = source.pending;
-          has = source.hasPending;
-          continue;
-        }
-        if (filled >= n) break;
-      }
-      let x;
-      if (has) {
-        x = pend >>> 0;
-        has = false;
-      } else {
-        const lo2 = (s00 >>> 0) + (s10 >>> 0);
-        const c = lo2 >= P32 ? 1 : 0;
-        pend = lo2 | 0;
-        has = true;
-        x = s01 + s11 + c >>> 0;
-        const a0 = s10 ^ s00;
-        const a1 = s11 ^ s01;
-        const t00 = s00;
-        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-        s10 = a1 << 5 ^ a0 >>> 27;
-        s11 = a0 << 5 ^ a1 >>> 27;
-      }
-      let start;
-      if (lemire) {
-        const m = x * n;
-        start = Math.floor(m * INV32);
-        if (m - start * P32 < threshold) {
-          source.s00 = s00;
-          source.s01 = s01;
-          source.s10 = s10;
-          source.s11 = s11;
-          source.pending = pend;
-          source.hasPending = has;
-          start = rejectedStart(source, n, threshold);
-          s00 = source.s00;
-          s01 = source.s01;
-          s10 = source.s10;
-          s11 = source.s11;
-          pend = source.pending;
-          has = source.hasPending;
-        }
-      } else {
-        start = maskShift === 0 ? x : x >>> maskShift;
-        if (start >= n) {
-          source.s00 = s00;
-          source.s01 = s01;
-          source.s10 = s10;
-          source.s11 = s11;
-          source.pending = pend;
-          source.hasPending = has;
-          start = bitmaskStart(source, n, maskShift);
-          s00 = source.s00;
-          s01 = source.s01;
-          s10 = source.s10;
-          s11 = source.s11;
-          pend = source.pending;
-          has = source.hasPending;
-        }
-      }
-      sum += step[start];
-      filled++;
-    }
-    out[r] = sum / n;
-  }
-  source.s00 = s00;
-  source.s01 = s01;
-  source.s10 = s10;
-  source.s11 = s11;
-  source.pending = pend;
-  source.hasPending = has;
-  return out;
-}
-function geometricBlocks(prefix2, n, sampler, source, count) {
-  const P32 = 4294967296;
-  const INV32 = 1 / 4294967296;
-  const out = new Float64Array(count);
-  const inline = sampler.inline;
-  const lemire = n <= LEMIRE_LIMIT2;
-  const threshold = P32 % n;
-  const maskShift = Math.clz32(n - 1);
-  let s00 = source.s00;
-  let s01 = source.s01;
-  let s10 = source.s10;
-  let s11 = source.s11;
-  let pend = source.pending;
-  let has = source.hasPending;
-  const { shift, coinMask, edge, alias, truncation } = inline;
-  const starts = new Int32Array(n);
-  const lengths = new Int32Array(n);
-  for (let r = 0; r < count; r++) {
-    let filled = 0;
-    let blocks = 0;
-    while (filled < n) {
-      let x;
-      if (has) {
-        x = pend >>> 0;
-        has = false;
-      } else {
-        const lo2 = (s00 >>> 0) + (s10 >>> 0);
-        const c = lo2 >= P32 ? 1 : 0;
-        pend = lo2 | 0;
-        has = true;
-        x = s01 + s11 + c >>> 0;
-        const a0 = s10 ^ s00;
-        const a1 = s11 ^ s01;
-        const t00 = s00;
-        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-        s10 = a1 << 5 ^ a0 >>> 27;
-        s11 = a0 << 5 ^ a1 >>> 27;
-      }
-      let start;
-      if (lemire) {
-        const m = x * n;
-        start = Math.floor(m * INV32);
-        if (m - start * P32 < threshold) {
-          source.s00 = s00;
-          source.s01 = s01;
-          source.s10 = s10;
-          source.s11 = s11;
-          source.pending = pend;
-          source.hasPending = has;
-          start = rejectedStart(source, n, threshold);
-          s00 = source.s00;
-          s01 = source.s01;
-          s10 = source.s10;
-          s11 = source.s11;
-          pend = source.pending;
-          has = source.hasPending;
-        }
-      } else {
-        start = maskShift === 0 ? x : x >>> maskShift;
-        if (start >= n) {
-          source.s00 = s00;
-          source.s01 = s01;
-          source.s10 = s10;
-          source.s11 = s11;
-          source.pending = pend;
-          source.hasPending = has;
-          start = bitmaskStart(source, n, maskShift);
-          s00 = source.s00;
-          s01 = source.s01;
-          s10 = source.s10;
-          s11 = source.s11;
-          pend = source.pending;
-          has = source.hasPending;
-        }
-      }
-      let y;
-      if (has) {
-        y = pend >>> 0;
-        has = false;
-      } else {
-        const lo2 = (s00 >>> 0) + (s10 >>> 0);
-        const c = lo2 >= P32 ? 1 : 0;
-        pend = lo2 | 0;
-        has = true;
-        y = s01 + s11 + c >>> 0;
-        const a0 = s10 ^ s00;
-        const a1 = s11 ^ s01;
-        const t00 = s00;
-        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
-        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
-        s10 = a1 << 5 ^ a0 >>> 27;
-        s11 = a0 << 5 ^ a1 >>> 27;
-      }
-      const column = y >>> shift;
-      const coin = y & coinMask;
-      const cut = edge[column];
-      let length;
-      if (coin !== cut) {
-        const outcome = coin < cut ? column : alias[column];
-        length = outcome !== truncation ? outcome + 1 : -1;
-      } else {
-        length = -1;
-      }
-      const left = n - filled;
-      if (length < 0) {
-        source.s00 = s00;
-        source.s01 = s01;
-        source.s10 = s10;
-        source.s11 = s11;
-        source.pending = pend;
-        source.hasPending = has;
-        length = finishLength(source, sampler, column, coin, cut, left);
-        s00 = source.s00;
-        s01 = source.s01;
-        s10 = source.s10;
-        s11 = source.s11;
-        pend = source.pending;
-        has = source.hasPending;
-      } else if (length > left) {
-        length = left;
-      }
-      starts[blocks] = start;
-      lengths[blocks] = length;
-      blocks++;
-      filled += length;
-    }
-    let sum = 0;
-    for (let i = 0; i < blocks; i++) {
-      const s = starts[i];
-      sum += prefix2[s + lengths[i]] - prefix2[s];
-    }
-    out[r] = sum / n;
-  }
-  source.s00 = s00;
-  source.s01 = s01;
-  source.s10 = s10;
-  source.s11 = s11;
-  source.pending = pend;
-  source.hasPending = has;
-  return out;
-}
-function rejectedStart(source, n, threshold) {
-  for (; ; ) {
-    const m = source.nextUint32() * n;
-    const high = Math.floor(m * TWO_POW_MINUS_32);
-    if (m - high * TWO_POW_323 >= threshold) return high;
-  }
-}
-function bitmaskStart(source, n, maskShift) {
-  for (; ; ) {
-    const x = source.nextUint32();
-    const candidate = maskShift === 0 ? x : x >>> maskShift;
-    if (candidate < n) return candidate;
-  }
-}
-function finishLength(source, sampler, column, coin, cut, cap) {
-  const { edgeFraction, alias, truncation } = sampler.inline;
-  const keep = coin !== cut ? coin < cut : source.nextDouble() < edgeFraction[column];
-  const outcome = keep ? column : alias[column];
-  if (outcome !== truncation) return Math.min(outcome + 1, cap);
-  if (truncation >= cap) return cap;
-  return truncation + sampler.sample(source, cap - truncation);
-}
-
-// src/statistics/bootstrap/resampleJob.ts
-var RESAMPLES_PER_STREAM = 256;
-function streamCount(resamples) {
-  return Math.ceil(resamples / RESAMPLES_PER_STREAM);
-}
-function streamShare(resamples, stream) {
-  const first = stream * RESAMPLES_PER_STREAM;
-  return { first, count: Math.max(0, Math.min(RESAMPLES_PER_STREAM, resamples - first)) };
-}
-function runResampleJob(job, random = createRandomSource) {
-  const out = new Float64Array(job.resamples);
-  const sampler = createGeometricSampler(job.expectedBlockLength);
-  const streams = randomStreams(random, job.seed, 0);
-  const total = streamCount(job.resamples);
-  for (let stream = 0; stream < total; stream++) {
-    const { first, count } = streamShare(job.resamples, stream);
-    out.set(resampleDeviationsOfStream(job.prefix, job.n, sampler, streams.next(), count), first);
-  }
-  return out;
-}
-function resampleDeviationsOfStream(prefix2, n, sampler, random, count) {
-  if (random instanceof Xoroshiro128PlusSource && n >= 2) {
-    return resampleDeviationsInline(prefix2, n, sampler, random, count);
-  }
-  return resampleDeviationsGeneric(prefix2, n, sampler, random, count);
-}
-function resampleDeviationsGeneric(prefix2, n, sampler, random, count) {
-  const out = new Float64Array(count);
-  const blocks = allocateStationaryBlocks(n);
-  for (let b = 0; b < count; b++) {
-    drawStationaryBlocks(n, sampler, random, blocks);
-    out[b] = resampleMeanDeviation(prefix2, n, blocks);
-  }
-  return out;
-}
-
-// src/statistics/bootstrap/stationaryBootstrap.ts
-var MINIMUM_BOOTSTRAP_LENGTH = 2;
-function stationaryBootstrap(d, options, random = createRandomSource, runner = runResampleJob) {
-  validateStationaryBootstrapOptions(options);
-  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
-  const n = d.length;
-  for (let t = 0; t < n; t++) {
-    if (!Number.isFinite(d[t])) {
-      throw new RangeError(`loss differential at position ${t} is not a finite number: ${d[t]}`);
-    }
-  }
-  const base = { resamples, seed, expectedBlockLength };
-  const notes = [];
-  if (n < MINIMUM_BOOTSTRAP_LENGTH) {
-    notes.push(
-      `series has ${n} observation(s); the bootstrap needs at least ${MINIMUM_BOOTSTRAP_LENGTH}`
-    );
-    return {
-      state: "too-short",
-      ...base,
-      mean: n === 1 ? d[0] : null,
-      standardError: null,
-      interval: null,
-      oneSidedLower: null,
-      pValue: null,
-      pValueBelow: null,
-      pValueTwoSided: null,
-      distribution: null,
-      notes
-    };
-  }
-  const constant = d.every((x) => x === d[0]);
-  const identical = constant && d[0] === 0;
-  const mean2 = constant ? d[0] : meanOf(d);
-  let deviations;
-  if (identical) {
-    notes.push("every loss differential is 0 (identical forecasts); no resampling needed");
-    deviations = new Float64Array(resamples);
-  } else {
-    if (constant) notes.push("the loss differential is constant: every resample mean equals it");
-    if (expectedBlockLength > n) {
-      notes.push(`expected block length ${expectedBlockLength} exceeds the series length ${n}`);
-    }
-    deviations = stationaryResampleDeviations(
-      d,
-      mean2,
-      expectedBlockLength,
-      resamples,
-      seed,
-      random,
-      runner
-    );
-  }
-  const standardError = sampleStandardDeviation(deviations);
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = mean2 - deviations[b];
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
-  return {
-    state: identical ? "identical" : "ok",
-    ...base,
-    mean: mean2,
-    standardError,
-    interval: { ...inference.interval, method: "basic" },
-    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
-    pValue: inference.pValue,
-    pValueBelow: inference.pValueBelow,
-    pValueTwoSided: inference.pValueTwoSided,
-    distribution: resampleHistogram(mean2, deviations),
-    notes
-  };
-}
-function stationaryResampleDeviations(d, mean2, expectedBlockLength, resamples, seed, random = createRandomSource, runner = runResampleJob) {
-  const prefix2 = centredPrefixSums(d, mean2);
-  return runner({ prefix: prefix2, n: d.length, expectedBlockLength, resamples, seed }, random);
-}
-function validateStationaryBootstrapOptions(options) {
-  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
-  if (!(confidence > 0 && confidence < 1)) {
-    throw new RangeError(`confidence must lie strictly between 0 and 1, got ${confidence}`);
-  }
-  const fewest = minimumResamples(confidence);
-  if (!Number.isSafeInteger(resamples) || resamples < fewest) {
-    throw new RangeError(
-      `resamples must be an integer of at least ${fewest} for a ${confidence} interval, got ${resamples}`
-    );
-  }
-  if (!(Number.isFinite(expectedBlockLength) && expectedBlockLength >= 1)) {
-    throw new RangeError(
-      `expected block length must be a finite number \u2265 1, got ${expectedBlockLength}`
-    );
-  }
-  if (!Number.isSafeInteger(seed) || seed < 0) {
-    throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
-  }
-  if (!Number.isFinite(margin)) throw new RangeError(`margin must be finite, got ${margin}`);
-}
-
-// src/statistics/bootstrap/relativeDifferenceBootstrap.ts
-function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, random = createRandomSource) {
-  validateStationaryBootstrapOptions(options);
-  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
-  const n = candidateLoss.length;
-  if (baselineLoss.length !== n) {
-    throw new RangeError(`loss series differ in length: ${n} vs ${baselineLoss.length}`);
-  }
-  for (let t = 0; t < n; t++) {
-    if (!(Number.isFinite(candidateLoss[t]) && Number.isFinite(baselineLoss[t]))) {
-      throw new RangeError(`loss at position ${t} is not a finite number`);
-    }
-  }
-  const empty = {
-    resamples,
-    seed,
-    expectedBlockLength,
-    standardError: null,
-    interval: null,
-    oneSidedLower: null,
-    pValue: null,
-    pValueTwoSided: null,
-    resampledDeviations: null
-  };
-  if (n < MINIMUM_BOOTSTRAP_LENGTH) {
-    return {
-      state: "too-short",
-      ...empty,
-      relativeDifference: null,
-      notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`]
-    };
-  }
-  const candidateMean = meanOf(candidateLoss);
-  const baselineMean = meanOf(baselineLoss);
-  if (!(baselineMean > 0)) {
-    return {
-      state: "baseline-zero",
-      ...empty,
-      relativeDifference: null,
-      notes: [`the baseline's mean loss is ${baselineMean}; a relative difference needs it > 0`]
-    };
-  }
-  const estimate = candidateMean / baselineMean - 1;
-  const identical = candidateLoss.every((x, t) => x === baselineLoss[t]);
-  const notes = [];
-  const deviations = new Float64Array(resamples);
-  const candidateDeviations = new Float64Array(resamples);
-  const baselineDeviations = new Float64Array(resamples);
-  if (identical) {
-    notes.push("candidate and baseline losses are identical; no resampling needed");
-  } else {
-    const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
-    const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
-    const sampler = createGeometricSampler(expectedBlockLength);
-    const blocks = allocateStationaryBlocks(n);
-    let zeroDenominators = 0;
-    const streams = randomStreams(random, seed, 0);
-    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
-      const source = streams.next();
-      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
-      for (let b = first; b < last; b++) {
-        drawStationaryBlocks(n, sampler, source, blocks);
-        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
-        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
-        const c = candidateMean + candidateDeviations[b];
-        const base = baselineMean + baselineDeviations[b];
-        if (base === 0) zeroDenominators++;
-        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
-        deviations[b] = theta - estimate;
-      }
-    }
-    if (zeroDenominators > 0) {
-      notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (\u03B8* infinite)`);
-    }
-  }
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b];
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
-  return {
-    state: identical ? "identical" : "ok",
-    ...empty,
-    relativeDifference: estimate,
-    standardError: sampleStandardDeviation(deviations),
-    interval: { ...inference.interval, method: "basic" },
-    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
-    pValue: inference.pValue,
-    pValueTwoSided: inference.pValueTwoSided,
-    resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
-    notes
-  };
-}
-
-// src/comparison/runBootstrap.ts
-function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
-  const auto = settings.blockLength.kind === "auto" && d.length >= 2 ? automaticBlockLength(difference) : null;
-  const expectedBlockLength = settings.blockLength.kind === "fixed" ? settings.blockLength.length : auto?.blockLength ?? 1;
-  const options = {
-    resamples: settings.resamples,
-    expectedBlockLength,
-    seed: settings.seed,
-    confidence: settings.confidence,
-    margin: hypothesis.boundary
-  };
-  const result = stationaryBootstrap(d, options, createRandomSource, runner);
-  const relative = relativeDifferenceBootstrap(series.candidate, series.baseline, {
-    ...options,
-    margin: hypothesis.baselineFactor - 1
-  });
-  const decisionPValue = hypothesis.rejectWhen === "above" ? result.pValue : result.pValueBelow;
-  const summary = {
-    state: result.state,
-    resamples: result.resamples,
-    seed: result.seed,
-    expectedBlockLength,
-    blockLengthRule: settings.blockLength.kind,
-    blockLengthSelection: auto,
-    standardError: result.standardError,
-    interval: difference === d ? result.interval : differenceInterval(difference, relative.resampledDeviations, settings.confidence),
-    relativeInterval: settings.marginKind === "relative" ? relative.interval : null,
-    pValue: result.pValue,
-    pValueTwoSided: result.pValueTwoSided,
-    decisionPValue,
-    distribution: result.distribution,
-    notes: result.notes
-  };
-  return { summary, resampledDeviations: relative.resampledDeviations };
-}
-function differenceInterval(difference, deviations, level) {
-  if (deviations === null) return null;
-  const centre = meanOf(difference);
-  const reflected = new Float64Array(deviations.candidate.length);
-  for (let b = 0; b < reflected.length; b++) {
-    reflected[b] = centre - (deviations.candidate[b] - deviations.baseline[b]);
-  }
-  reflected.sort();
-  const { interval } = basicBootstrapInference(reflected, 0, level);
-  return { ...interval, method: "basic" };
-}
-
-// src/statistics/ewcCosineTermsRule.ts
-var CALIBRATION_AUTOCORRELATION = 0.7;
-var AUTOCORRELATION_FLOOR = 0.05;
-var AUTOCORRELATION_CEILING = 0.97;
-function ar1SpectralCurvature(rho) {
-  return 2 * rho / (1 - rho) ** 2;
-}
-function ar1PluginCosineTerms(x) {
-  const n = x.length;
-  if (n < 4) return { terms: ewcDegreesOfFreedom(n), autocorrelation: 0, pluginAutocorrelation: 0 };
-  const [gamma0, gamma1] = autocovariances(x, 1);
-  const rho = gamma0 > 0 ? gamma1 / gamma0 : 0;
-  const corrected = rho + (1 + 3 * rho) / n;
-  const plugin = Math.min(Math.max(corrected, AUTOCORRELATION_FLOOR), AUTOCORRELATION_CEILING);
-  return {
-    terms: cosineTermsForAutocorrelation(n, plugin),
-    autocorrelation: rho,
-    pluginAutocorrelation: plugin
-  };
-}
-function cosineTermsForAutocorrelation(n, rho) {
-  const ratio = ar1SpectralCurvature(CALIBRATION_AUTOCORRELATION) / ar1SpectralCurvature(rho);
-  const raw = Math.round(0.4 * n ** (2 / 3) * Math.cbrt(ratio));
-  return Math.min(Math.max(2, raw), Math.max(2, Math.floor(n / 2)));
-}
-
-// src/statistics/dieboldMariano.ts
-var MINIMUM_LENGTH = 3;
-function dieboldMariano(d, options) {
-  const { estimator: requestedEstimator, horizon, margin } = options;
-  validate(d, options);
-  const n = d.length;
-  const base = {
-    state: "ok",
-    estimator: requestedEstimator,
-    requestedEstimator,
-    n,
-    mean: n > 0 ? mean(d) : 0,
-    statistic: null,
-    pValue: null,
-    pValueTwoSided: null,
-    longRunVariance: null,
-    variance: null,
-    lag: null,
-    degreesOfFreedom: null,
-    smallSample: null,
-    lagSelection: null,
-    notes: []
-  };
-  if (n < MINIMUM_LENGTH) {
-    base.state = "too-short";
-    base.notes.push(
-      `Only ${n} loss differential${n === 1 ? "" : "s"}; the Diebold\u2013Mariano test needs at least ${MINIMUM_LENGTH}.`
-    );
-    return base;
-  }
-  const constant = constantValue(d);
-  if (constant === 0) {
-    base.state = "identical";
-    base.mean = 0;
-    base.notes.push(
-      "Every loss differential is 0: both forecasts have the same loss on every row, so there is no difference to test."
-    );
-    return base;
-  }
-  if (constant !== null) {
-    base.state = "zero-variance";
-    base.mean = constant;
-    base.notes.push(
-      `Every loss differential equals ${constant}: the differential does not vary, so its variance is 0 and the statistic is undefined.`
-    );
-    return base;
-  }
-  const gamma0 = autocovariances(d, 0)[0];
-  let longRunVariance;
-  let estimator = requestedEstimator;
-  let lagChoice = null;
-  if (requestedEstimator === "ewc" || requestedEstimator === "ewc-ar1") {
-    let terms;
-    if (requestedEstimator === "ewc-ar1") {
-      const choice = ar1PluginCosineTerms(options.lagSeries ?? d);
-      terms = choice.terms;
-      base.notes.push(
-        `${terms} cosine terms chosen from the first-order autocorrelation ${choice.autocorrelation.toFixed(3)} (AR(1) plug-in, Lazarus et al. 2018).`
-      );
-    }
-    const ewc = ewcLongRunVariance(d, terms);
-    longRunVariance = ewc.value;
-    base.degreesOfFreedom = ewc.degreesOfFreedom;
-  } else {
-    lagChoice = selectLag(options.lagSeries ?? d, options.lag, horizon);
-    base.notes.push(...lagChoice.notes);
-    base.lag = lagChoice.lag;
-    base.lagSelection = describeLagChoice(lagChoice);
-    if (requestedEstimator === "bartlett") {
-      longRunVariance = bartlettLongRunVariance(d, lagChoice.lag);
-    } else {
-      const uniform = uniformLongRunVariance(d, lagChoice.lag);
-      longRunVariance = uniform.value;
-      estimator = uniform.estimator;
-      if (uniform.note !== null) base.notes.push(uniform.note);
-    }
-  }
-  base.estimator = estimator;
-  if (!Number.isFinite(longRunVariance)) {
-    throw new RangeError(
-      "dieboldMariano: the loss differentials are too large to square in double precision"
-    );
-  }
-  base.longRunVariance = longRunVariance;
-  base.variance = longRunVariance / n;
-  if (isEffectivelyNonPositive(longRunVariance, gamma0, n)) {
-    base.state = "zero-variance";
-    base.notes.push(
-      `The long-run variance estimate is ${longRunVariance.toPrecision(6)}, zero within rounding, so the statistic is undefined.`
-    );
-    return base;
-  }
-  const statistic = (base.mean - margin) / Math.sqrt(base.variance);
-  if (!Number.isFinite(statistic)) {
-    base.state = "zero-variance";
-    base.notes.push("The variance of the mean is too small for a finite statistic.");
-    return base;
-  }
-  base.statistic = statistic;
-  if (estimator === "ewc" || estimator === "ewc-ar1") {
-    const nu = base.degreesOfFreedom;
-    base.pValue = studentTUpperTail(statistic, nu);
-    base.pValueTwoSided = studentTTwoSided(statistic, nu);
-  } else {
-    base.pValue = standardNormalUpperTail(statistic);
-    base.pValueTwoSided = standardNormalTwoSided(statistic);
-    base.smallSample = harveyLeybourneNewbold(statistic, n, horizon);
-    if (base.smallSample === null) {
-      base.notes.push(
-        `The small-sample correction needs the horizon (${horizon}) below n (${n}); not computed.`
-      );
-    }
-  }
-  return base;
-}
-function validate(d, options) {
-  const { horizon, margin, lag } = options;
-  if (!Number.isInteger(horizon) || horizon < 1) {
-    throw new RangeError(`dieboldMariano: the horizon must be an integer \u2265 1, got ${horizon}`);
-  }
-  if (!Number.isFinite(margin)) {
-    throw new RangeError(`dieboldMariano: the margin must be finite, got ${margin}`);
-  }
-  if (lag.kind === "fixed" && (!Number.isInteger(lag.lag) || lag.lag < 0)) {
-    throw new RangeError(`dieboldMariano: a fixed lag must be an integer \u2265 0, got ${lag.lag}`);
-  }
-  for (let t = 0; t < d.length; t++) {
-    if (!Number.isFinite(d[t])) {
-      throw new RangeError(`dieboldMariano: loss differential ${t + 1} is ${d[t]}, not finite`);
-    }
-  }
-}
-function constantValue(d) {
-  const first = d[0];
-  for (let t = 1; t < d.length; t++) if (d[t] !== first) return null;
-  return first === 0 ? 0 : first;
-}
-function describeLagChoice(choice) {
-  if (choice.bandwidth === void 0) return { rule: choice.rule };
-  const { pilotLag, bandwidth, s0, s1 } = choice.bandwidth;
-  return { rule: choice.rule, pilotLag, bandwidth, s0, s1 };
-}
-
-// src/comparison/runDieboldMariano.ts
-function runDieboldMariano(d, horizon, hypothesis, settings, difference = d) {
-  const options = {
-    estimator: settings.variance,
-    lag: settings.lag,
-    horizon,
-    lagSeries: difference
-  };
-  const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
-  const upper = result.smallSample?.pValue ?? result.pValue;
-  const decisionPValue = upper === null ? null : hypothesis.rejectWhen === "above" ? upper : 1 - upper;
-  const unshifted = difference === d ? result : dieboldMariano(difference, { ...options, margin: 0 });
-  return {
-    state: result.state,
-    estimator: result.estimator,
-    requestedEstimator: result.requestedEstimator,
-    statistic: result.statistic,
-    pValue: result.pValue,
-    pValueTwoSided: result.pValueTwoSided,
-    decisionPValue,
-    variance: result.variance,
-    longRunVariance: result.longRunVariance,
-    lag: result.lag,
-    degreesOfFreedom: result.degreesOfFreedom,
-    smallSample: result.smallSample,
-    interval: meanInterval(unshifted, horizon, settings.confidence),
-    lagSelection: result.lagSelection,
-    notes: result.notes
-  };
-}
-function meanInterval(result, horizon, level) {
-  if (result.variance === null || !(result.variance > 0) || result.statistic === null) return null;
-  const tail = 1 - (1 - level) / 2;
-  let se = Math.sqrt(result.variance);
-  let q;
-  if (result.smallSample !== null) {
-    se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
-    q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
-  } else if (result.degreesOfFreedom !== null) {
-    q = studentTQuantile(tail, result.degreesOfFreedom);
-  } else {
-    q = standardNormalQuantile(tail);
-  }
-  return {
-    level,
-    lower: result.mean - q * se,
-    upper: result.mean + q * se,
-    method: result.smallSample !== null ? "HLN-corrected t" : result.degreesOfFreedom !== null ? "fixed-b t" : "normal"
-  };
-}
-
-// src/comparison/compareLossSeries.ts
-function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
-  const n = series.baseline.length;
-  const meanBaselineLoss = meanOrZero(series.baseline);
-  const meanCandidateLoss = meanOrZero(series.candidate);
-  const d = lossDifferential(series, hypothesis.baselineFactor - 1);
-  const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
-  const meanTestedDifferential = meanOrZero(d);
-  const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
-  const dieboldMariano2 = withMeasured(
-    runDieboldMariano(d, series.maxHorizon, hypothesis, settings, difference),
-    "dieboldMarianoDifference",
-    n
-  );
-  const withBootstrap = options.bootstrap ?? true;
-  const bootstrapRun = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner, difference) : null;
-  const bootstrap = bootstrapRun === null ? bootstrapNotRun(settings) : withMeasured(bootstrapRun.summary, "bootstrapDifference", n);
-  const decision = decideComparison({
-    hypothesis,
-    alpha: settings.alpha,
-    agreement: withBootstrap ? settings.agreement : "dm",
-    dieboldMariano: {
-      label: `Diebold\u2013Mariano (${dieboldMariano2.estimator})`,
-      pValue: dieboldMariano2.decisionPValue,
-      mean: meanTestedDifferential,
-      state: dieboldMariano2.state
-    },
-    bootstrap: {
-      label: "Stationary bootstrap",
-      pValue: bootstrap.decisionPValue,
-      mean: meanTestedDifferential,
-      state: bootstrap.state
-    },
-    n,
-    minPoints: settings.minPoints,
-    shortData: settings.shortData,
-    identicalLosses
-  });
-  const first = series.time[0];
-  const last = series.time[n - 1];
-  return {
-    loss: scope.loss,
-    horizon: scope.horizon,
-    series: scope.series,
-    ...scope.path === void 0 ? {} : { path: scope.path },
-    n,
-    rows: series.rowCount,
-    maxHorizon: series.maxHorizon,
-    firstTimestamp: first === void 0 ? null : scope.timestamps[first] ?? null,
-    lastTimestamp: last === void 0 ? null : scope.timestamps[last] ?? null,
-    meanBaselineLoss,
-    meanCandidateLoss,
-    meanDifference: meanCandidateLoss - meanBaselineLoss,
-    relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1,
-    meanTestedDifferential,
-    relativeChange: relativeChange({
-      series,
-      settings,
-      agreement: withBootstrap ? settings.agreement : "dm",
-      dieboldMariano: dieboldMariano2,
-      bootstrap: {
-        state: bootstrap.state,
-        resampledDeviations: bootstrapRun?.resampledDeviations ?? null
-      }
-    }),
-    dieboldMariano: dieboldMariano2,
-    bootstrap,
-    verdict: decision.verdict,
-    reasons: decision.reasons,
-    rejected: decision.rejected
-  };
-}
-function withMeasured(summary, kind, n) {
-  const interval = summary.interval;
-  if (interval === null) return summary;
-  const measured = measuredCoverage(kind, n, interval.level);
-  return measured === null ? summary : { ...summary, interval: { ...interval, measuredCoverage: measured } };
-}
-function meanOrZero(x) {
-  return x.length === 0 ? 0 : mean(x);
-}
-function bootstrapNotRun(settings) {
-  return {
-    state: "not-run",
-    resamples: 0,
-    seed: settings.seed,
-    expectedBlockLength: 1,
-    blockLengthRule: settings.blockLength.kind,
-    blockLengthSelection: null,
-    standardError: null,
-    interval: null,
-    relativeInterval: null,
-    pValue: null,
-    pValueTwoSided: null,
-    decisionPValue: null,
-    notes: [
-      "not run for per-series comparisons (the Diebold\u2013Mariano test with adjusted p-values locates them)"
-    ]
-  };
-}
-
-// src/stability/recentWindow.ts
-function parseRecentWindow(text, label) {
-  if (text === "") return null;
-  const percent2 = /^(\d+(?:\.\d+)?)%$/.exec(text);
-  if (percent2 !== null) {
-    const share = Number(percent2[1]) / 100;
-    if (share > 0 && share < 1) return { kind: "share", share };
-  } else if (/^\d+$/.test(text)) {
-    const points = Number(text);
-    if (Number.isSafeInteger(points) && points >= 2) return { kind: "points", points };
-  }
-  throw new InputError(
-    `${label} must be a number of time points (an integer \u2265 2) or a percentage such as 15%`,
-    { value: text }
-  );
-}
-function recentPoints(window2, n) {
-  const k = window2.kind === "points" ? window2.points : Math.ceil(window2.share * n - 1e-9);
-  return Math.min(n, Math.max(k, 0));
-}
-
-// src/stability/recentComparison.ts
-function lastPoints(series, count) {
-  const from = series.baseline.length - count;
-  const rows = series.rows.subarray(from);
-  let rowCount = 0;
-  for (let t = 0; t < rows.length; t++) rowCount += rows[t];
-  return {
-    time: series.time.subarray(from),
-    baseline: series.baseline.subarray(from),
-    candidate: series.candidate.subarray(from),
-    rows,
-    rowCount,
-    maxHorizon: series.maxHorizon
-  };
-}
-function recentComparison(series, window2, scope, hypothesis, settings, runner) {
-  const count = recentPoints(window2, series.baseline.length);
-  return compareLossSeries(
-    lastPoints(series, count),
-    scope,
-    hypothesis,
-    settings,
-    runner === void 0 ? {} : { runner }
-  );
-}
-
-// src/stability/stabilityLevels.ts
-function splitLevel(alpha, checks) {
-  return checks === 2 ? alpha / 2 : alpha;
-}
-
-// src/stability/assessStability.ts
-function assessStability(inputs) {
-  const { series, timestamps, settings } = inputs;
-  const label = (i) => timestamps[series.time[i]] ?? String(i);
-  const { periods } = periodBreakdown(series, timestamps, inputs.kind);
-  const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
-  const d = lossDifferential(series, worse.baselineFactor - 1);
-  if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
-  const withRecent = settings.recent !== null && series.baseline.length > 0;
-  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
-  const test = fluctuationTest(d, {
-    mu: settings.fluctuationWindow,
-    alpha: fluctuationAlpha,
-    sides: settings.fluctuationSides,
-    lag: settings.lag,
-    horizon: series.maxHorizon
-  });
-  const fluctuation = test === null ? null : {
-    statistic: test.statistic,
-    criticalValue: test.criticalValue,
-    mu: settings.fluctuationWindow,
-    windowSize: test.windowSize,
-    rejected: test.rejected,
-    peak: {
-      start: label(test.peakWindow),
-      end: label(test.peakWindow + test.windowSize - 1)
-    },
-    worsePeriods: test.worseRuns.map(([from, to]) => ({
-      start: label(from),
-      end: label(to)
-    }))
-  };
-  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
-  const recent = settings.recent === null || !withRecent ? null : recentComparison(
-    series,
-    settings.recent,
-    { loss: settings.loss, horizon: "all", series: "all", timestamps },
-    inputs.hypothesis,
-    recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
-    inputs.runner
-  );
-  const levels = {
-    adjustment: fluctuation !== null && recent !== null ? "bonferroni" : "none",
-    alpha: settings.alpha,
-    fluctuation: fluctuation === null ? null : fluctuationAlpha,
-    recent: recent === null ? null : recentAlpha
-  };
-  return { fluctuation, recent, periods, levels };
-}
-
-// src/comparison/evaluateLossSeries.ts
-function evaluateLossSeries(series, source, settings, resampleRunner) {
-  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
-  const runner = resampleRunner === void 0 ? {} : { runner: resampleRunner };
-  const overall = compareLossSeries(
-    series,
-    { loss: settings.loss, horizon: "all", series: "all", timestamps: source.timestamps },
-    hypothesis,
-    settings,
-    runner
-  );
-  return buildReport({
-    version: VERSION,
-    settings,
-    hypothesis,
-    inputs: lossFileInputsSummary(
-      source.file,
-      source.timestamps,
-      source.kind,
-      series.maxHorizon,
-      source.order
-    ),
-    comparisons: [overall],
-    stability: assessStability({
-      series,
-      timestamps: source.timestamps,
-      kind: source.kind,
-      hypothesis,
-      settings,
-      ...runner
-    })
-  });
-}
-
-// src/decision/decideAdjusted.ts
-function decideAdjusted(input) {
-  const { hypothesis, alpha, adjustedPValue: p } = input;
-  const name = input.method === "holm" ? "Holm-adjusted" : "Benjamini\u2013Hochberg-adjusted";
-  if (p === null) {
-    return {
-      verdict: "warn",
-      reasons: ["The Diebold\u2013Mariano test could not be computed for this series."],
-      rejected: null
-    };
-  }
-  const rejected = p <= alpha;
-  const onKeep = hypothesis.onReject === "fail" ? "pass" : "fail";
-  const text = formatPValue(p);
-  const shown = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
-  const reasons = [
-    `${name} Diebold\u2013Mariano ${shown} ${rejected ? "\u2264" : ">"} \u03B1 = ${alpha}: ${rejected ? "evidence" : "no evidence"} that ${hypothesis.alternative}.`
-  ];
-  let verdict = rejected ? hypothesis.onReject : onKeep;
-  if (input.n < input.minPoints) {
-    verdict = "warn";
-    reasons.push(`Too little data: ${input.n} time points, fewer than ${input.minPoints}.`);
-  }
-  return { verdict, reasons, rejected };
-}
-
-// src/losses/lossMagnitude.ts
-var MAX_LOSS = 1e100;
-function firstOversizedLoss(values, included = null) {
-  for (let i = 0; i < values.length; i++) {
-    if (included !== null && included[i] === 0) continue;
-    const v = values[i];
-    if (!(Math.abs(v) <= MAX_LOSS)) return i;
-  }
-  return -1;
-}
-
-// src/multiplicity/testFamily.ts
-function testFamily(pValues, what) {
-  const positions = [];
-  const values = [];
-  pValues.forEach((p, i) => {
-    if (p === null) return;
-    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
-      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
-    }
-    positions.push(i);
-    values.push(p);
-  });
-  return { positions, values };
-}
-function ascendingOrder(values) {
-  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
-}
-
-// src/multiplicity/benjaminiHochbergAdjust.ts
-function benjaminiHochbergAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  const order = ascendingOrder(values);
-  let running = 1;
-  for (let i = m - 1; i >= 0; i--) {
-    const k = order[i];
-    running = Math.min(running, m / (i + 1) * values[k]);
-    adjusted[positions[k]] = running;
-  }
-  return adjusted;
-}
-
-// src/multiplicity/holmAdjust.ts
-function holmAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "holmAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  let running = 0;
-  ascendingOrder(values).forEach((k, i) => {
-    running = Math.max(running, Math.min(1, (m - i) * values[k]));
-    adjusted[positions[k]] = running;
-  });
-  return adjusted;
-}
-
-// src/scaling/seriesScale.ts
-function scaleFromSum(sum, terms, what) {
-  if (terms === 0) {
-    return { state: "too-short", value: null, terms, note: `the ${what} has no terms` };
-  }
-  const value = sum / terms;
-  if (!Number.isFinite(value)) {
-    throw new RangeError(`the ${what} is ${value}, too large for double precision`);
-  }
-  if (value === 0) {
-    return {
-      state: "zero",
-      value: null,
-      terms,
-      note: `the ${what} is 0 over ${terms} term${terms === 1 ? "" : "s"}, so it cannot scale`
-    };
-  }
-  return { state: "ok", value, terms, note: null };
-}
-
-// src/scaling/baselineMeanLossScale.ts
-function baselineMeanLossScale(seriesNames, series, baselineLoss, included = null) {
-  const n = series.length;
-  if (baselineLoss.length !== n || included !== null && included.length !== n) {
-    throw new RangeError(
-      `baselineMeanLossScale: ${n} series indices, ${baselineLoss.length} losses` + (included === null ? "" : `, ${included.length} inclusion flags`)
-    );
-  }
-  const k = seriesNames.length;
-  const sum = new Float64Array(k);
-  const count = new Int32Array(k);
-  for (let i = 0; i < n; i++) {
-    if (included !== null && included[i] === 0) continue;
-    const s = series[i];
-    if (!(s >= 0 && s < k)) {
-      throw new RangeError(
-        `baselineMeanLossScale: row ${i + 1} has series index ${s}, not 0..${k - 1}`
-      );
-    }
-    const loss = baselineLoss[i];
-    if (!(loss >= 0 && Number.isFinite(loss))) {
-      throw new RangeError(`baselineMeanLossScale: row ${i + 1} has baseline loss ${loss}`);
-    }
-    sum[s] += loss;
-    count[s]++;
-  }
-  const scales = /* @__PURE__ */ new Map();
-  seriesNames.forEach((name, s) => {
-    scales.set(name, scaleFromSum(sum[s], count[s], "mean baseline loss"));
-  });
-  return scales;
-}
-
-// src/scaling/scaleLossesBySeries.ts
-function scaleLossesBySeries(seriesNames, series, baseline, candidate, scales) {
-  const n = series.length;
-  if (baseline.length !== n || candidate.length !== n) {
-    throw new RangeError(
-      `scaleLossesBySeries: ${n} series indices, ${baseline.length} baseline and ${candidate.length} candidate losses`
-    );
-  }
-  const k = seriesNames.length;
-  const used = new Uint8Array(k);
-  for (let i = 0; i < n; i++) {
-    const s = series[i];
-    if (!(s >= 0 && s < k)) {
-      throw new RangeError(
-        `scaleLossesBySeries: row ${i + 1} has series index ${s}, not 0..${k - 1}`
-      );
-    }
-    used[s] = 1;
-  }
-  const divisor = new Float64Array(k);
-  const missing = [];
-  seriesNames.forEach((name, s) => {
-    if (used[s] === 0) return;
-    const scale = scales.get(name);
-    if (scale === void 0) {
-      missing.push({ series: name, state: "absent", note: "no scale was given for this series" });
-    } else if (scale.state !== "ok" || scale.value === null) {
-      const state = scale.state === "ok" ? "zero" : scale.state;
-      missing.push({ series: name, state, note: scale.note ?? "the scale is not usable" });
-    } else {
-      divisor[s] = scale.value;
-    }
-  });
-  if (missing.length > 0) return { state: "unavailable", missing };
-  const scaledBaseline = new Float64Array(n);
-  const scaledCandidate = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    const c = divisor[series[i]];
-    scaledBaseline[i] = baseline[i] / c;
-    scaledCandidate[i] = candidate[i] / c;
-  }
-  return { state: "ok", baseline: scaledBaseline, candidate: scaledCandidate };
-}
-
-// src/scaling/seasonalNaiveScale.ts
-function seasonalNaiveScaleOf(history, period, loss) {
-  if (!Number.isInteger(period) || period < 1) {
-    throw new RangeError(`seasonalNaiveScale: the period must be an integer \u2265 1, got ${period}`);
-  }
-  const n = history.length;
-  for (let t = 0; t < n; t++) {
-    if (!Number.isFinite(history[t])) {
-      throw new RangeError(`seasonalNaiveScale: value ${t + 1} is ${history[t]}, not finite`);
-    }
-  }
-  let sum = 0;
-  for (let t = period; t < n; t++) {
-    const e = history[t] - history[t - period];
-    sum += loss === "absolute" ? Math.abs(e) : e * e;
-  }
-  const what = loss === "absolute" ? `mean absolute seasonal naive error (period ${period})` : `mean squared seasonal naive error (period ${period})`;
-  return scaleFromSum(sum, Math.max(0, n - period), what);
-}
-function seasonalNaiveScale(histories, period, loss) {
-  const scales = /* @__PURE__ */ new Map();
-  for (const [name, history] of histories) {
-    try {
-      scales.set(name, seasonalNaiveScaleOf(history, period, loss));
-    } catch (error) {
-      if (error instanceof RangeError) {
-        throw new RangeError(`series ${JSON.stringify(name)}: ${error.message}`);
-      }
-      throw error;
-    }
-  }
-  return scales;
-}
-
-// src/comparison/evaluatePanel.ts
-function evaluatePanel(panel, settings, extras = {}) {
-  const losses = rowLossesOrInputError(panel, settings);
-  const pooled = settings.pooling === "scaled" ? scaledLosses(panel, losses, settings, extras) : losses;
-  const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
-  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
-  const runner = extras.resampleRunner === void 0 ? {} : { runner: extras.resampleRunner };
-  const scope = (horizon, series) => ({
-    loss: settings.loss,
-    horizon,
-    series,
-    timestamps: panel.timestamps
-  });
-  const overallSeries = aggregateByTime(panel, pooled, void 0, weights);
-  const comparisons = [
-    compareLossSeries(overallSeries, scope("all", "all"), hypothesis, settings, runner)
-  ];
-  const byHorizon = groupRows(panel.horizon);
-  if (byHorizon.size > 1) {
-    for (const h of [...byHorizon.keys()].sort((a, b) => a - b)) {
-      const series = aggregateByTime(panel, pooled, byHorizon.get(h), weights);
-      comparisons.push(compareLossSeries(series, scope(h, "all"), hypothesis, settings, runner));
-    }
-  }
-  let pathSummary = null;
-  if (panel.path !== null && panel.paths.length > 1) {
-    const byPath = groupRows(panel.path);
-    const perPath = panel.paths.map(
-      (name, id) => compareLossSeries(
-        aggregateByTime(panel, pooled, byPath.get(id) ?? [], weights),
-        { ...scope("all", "all"), path: name },
-        hypothesis,
-        settings,
-        { bootstrap: false }
-      )
-    );
-    for (const c of perPath) comparisons.push(c);
-    const worse = perPath.filter((c) => c.meanDifference > 0).length;
-    pathSummary = {
-      paths: perPath.length,
-      worse,
-      shareWorse: worse / perPath.length,
-      significantlyWorse: perPath.filter((c) => {
-        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
-        return p !== null && p <= settings.alpha;
-      }).length
-    };
-  }
-  let seriesSummary = null;
-  if (panel.seriesNames.length > 1) {
-    const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
-    for (const c of perSeries.comparisons) comparisons.push(c);
-    seriesSummary = perSeries.summary;
-  }
-  return buildReport({
-    version: VERSION,
-    settings,
-    hypothesis,
-    inputs: panelInputsSummary(panel, losses),
-    comparisons,
-    seriesSummary,
-    pathSummary,
-    ...extras.integrity === void 0 ? {} : { integrity: extras.integrity },
-    stability: assessStability({
-      series: overallSeries,
-      timestamps: panel.timestamps,
-      kind: panel.timestampKind,
-      hypothesis,
-      settings,
-      ...runner
-    })
-  });
-}
-function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
-  const k = panel.seriesNames.length;
-  const rowsOf = groupRows(panel.series);
-  const plain = hypothesisFor("no-regression", 0, "absolute");
-  const upper = [];
-  const raw = panel.seriesNames.map((name, id) => {
-    const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
-    const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
-    upper.push(dm.smallSample?.pValue ?? dm.pValue);
-    return compareLossSeries(series, scope("all", name), hypothesis, settings, {
-      bootstrap: false
-    });
-  });
-  const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
-  const worseP = adjust(upper);
-  const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
-  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
-  const policyP = hypothesis.rejectWhen === "above" ? adjust(tested) : adjust(tested.map((p) => p === null ? null : 1 - p));
-  let worse = 0;
-  let better = 0;
-  const comparisons = raw.map((c, j) => {
-    const w = worseP[j] ?? null;
-    const b = betterP[j] ?? null;
-    const direction = w !== null && w <= settings.alpha ? "worse" : b !== null && b <= settings.alpha ? "better" : "no evidence";
-    if (direction === "worse") worse++;
-    if (direction === "better") better++;
-    const decision = decideAdjusted({
-      hypothesis,
-      alpha: settings.alpha,
-      adjustedPValue: policyP[j] ?? null,
-      method: settings.adjust,
-      n: c.n,
-      minPoints: settings.minPoints
-    });
-    return Object.assign(c, {
-      verdict: decision.verdict,
-      reasons: decision.reasons,
-      rejected: { dieboldMariano: decision.rejected, bootstrap: null },
-      adjustedPValue: policyP[j] ?? null,
-      direction,
-      directionPValue: direction === "better" ? b : w
-    });
-  });
-  const top = comparisons.filter((c) => c.direction === "worse").sort(
-    (a, b) => (b.relativeDifference ?? b.meanDifference) - (a.relativeDifference ?? a.meanDifference)
-  ).slice(0, settings.top).map((c) => c.series);
-  return {
-    comparisons,
-    summary: {
-      method: settings.adjust,
-      alpha: settings.alpha,
-      series: k,
-      worse,
-      better,
-      noEvidence: k - worse - better,
-      topRegressions: top
-    }
-  };
-}
-function groupRows(values) {
-  const groups = /* @__PURE__ */ new Map();
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i];
-    let list = groups.get(v);
-    if (list === void 0) {
-      list = [];
-      groups.set(v, list);
-    }
-    list.push(i);
-  }
-  return groups;
-}
-function scaledLosses(panel, losses, settings, extras) {
-  let scales;
-  if (settings.scale === "baseline") {
-    scales = baselineMeanLossScale(
-      panel.seriesNames,
-      panel.series,
-      losses.baseline,
-      losses.included
-    );
-  } else {
-    if (extras.history === void 0) {
-      throw new InputError(
-        "the seasonal-naive scale needs a history file (series, timestamp, actual)",
-        {
-          file: "history"
-        }
-      );
-    }
-    const lossKind = settings.loss === "squared" ? "squared" : "absolute";
-    scales = seasonalNaiveScale(extras.history, settings.season, lossKind);
-  }
-  const scaled = scaleLossesBySeries(
-    panel.seriesNames,
-    panel.series,
-    losses.baseline,
-    losses.candidate,
-    scales
-  );
-  if (scaled.state === "unavailable") {
-    const first = scaled.missing[0];
-    throw new InputError(
-      `pooling scaled losses needs a positive scale for every series; ${scaled.missing.length} series lack one, first ${JSON.stringify(first.series)}: ${first.note}`,
-      { file: settings.history ?? settings.baseline, value: first.series }
-    );
-  }
-  return { ...losses, baseline: scaled.baseline, candidate: scaled.candidate };
-}
-function weightsOrInputError(panel, settings) {
-  if (panel.weight === null) {
-    throw new InputError("weights were asked for, but the files have no weight column", {
-      file: settings.actuals ?? settings.baseline,
-      column: settings.columns.weight ?? "weight"
-    });
-  }
-  return panel.weight;
-}
-function rowLossesOrInputError(panel, settings) {
-  let losses;
-  try {
-    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals, settings.interval);
-  } catch (error) {
-    if (error instanceof LossUnavailableError) {
-      throw new InputError(`loss ${settings.loss}: ${error.message}`, {
-        file: `${settings.baseline}, ${settings.candidate}`
-      });
-    }
-    throw error;
-  }
-  for (const [model, values] of [
-    ["baseline", losses.baseline],
-    ["candidate", losses.candidate]
-  ]) {
-    const row = firstOversizedLoss(values, losses.included);
-    if (row >= 0) {
-      const series = panel.seriesNames[panel.series[row]];
-      throw new InputError(
-        `the ${model}'s ${settings.loss} loss for series ${JSON.stringify(series)}, timestamp ${JSON.stringify(
-          panel.timestamps[panel.time[row]]
-        )} is ${values[row]}: beyond ${MAX_LOSS}, means and variances would overflow double precision; rescale the data (e.g. to thousands) or check this row`,
-        {
-          file: panel.actualSource.file,
-          line: panel.actualSource.lines[row],
-          value: String(values[row])
-        }
-      );
-    }
-  }
-  if (settings.zeroActuals === "error" && losses.zeroActualRows.length > 0) {
-    const row = losses.zeroActualRows[0];
-    throw new InputError(
-      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows, this the first; series ${JSON.stringify(
-        panel.seriesNames[panel.series[row]]
-      )}, timestamp ${JSON.stringify(panel.timestamps[panel.time[row]])}); use zero-actuals skip to leave them out and count them, or another loss`,
-      {
-        file: panel.actualSource.file,
-        line: panel.actualSource.lines[row],
-        column: settings.columns.actual ?? "actual",
-        value: "0"
-      }
-    );
-  }
-  return losses;
-}
-
-// src/integrity/panelRowKey.ts
-function describePanelRow(panel, p) {
-  const parts = [];
-  if (panel.seriesNames.length > 1 || panel.seriesNames[0] !== "") {
-    parts.push(`series=${panel.seriesNames[panel.series[p]]}`);
-  }
-  parts.push(`timestamp=${panel.timestamps[panel.time[p]]}`);
-  parts.push(`horizon=${panel.horizon[p]}`);
-  if (panel.origin !== null) parts.push(`origin=${panel.origins[panel.origin[p]]}`);
-  if (panel.path !== null) parts.push(`path=${panel.paths[panel.path[p]]}`);
-  return parts.join(" ");
-}
-
-// src/integrity/exactPredictions.ts
-var EXACT_TOLERANCE = 1e-9;
-var EXACT_RULE = { MIN_ROWS: 5, MIN_SHARE_GAP: 0.05, RATIO: 5 };
-function isExact(prediction, actual) {
-  return Math.abs(prediction - actual) <= EXACT_TOLERANCE * Math.max(Math.abs(prediction), Math.abs(actual));
-}
-function checkExactPredictions(panel) {
-  const b = panel.baseline.prediction;
-  const c = panel.candidate.prediction;
-  if (b === null || c === null) {
-    return {
-      findings: [],
-      notRun: [{ id: "exact-predictions", reason: "the models have no point forecasts in common" }]
-    };
-  }
-  const exactB = new FindingCollector();
-  const exactC = new FindingCollector();
-  for (let p = 0; p < panel.size; p++) {
-    const a = panel.actual[p];
-    if (isExact(b[p], a)) exactB.add(() => `baseline: ${describePanelRow(panel, p)}`);
-    if (isExact(c[p], a)) exactC.add(() => `candidate: ${describePanelRow(panel, p)}`);
-  }
-  const n = panel.size;
-  const shareB = exactB.count / n;
-  const shareC = exactC.count / n;
-  const flagged = (mine, share, other) => mine.count >= EXACT_RULE.MIN_ROWS && share - other >= EXACT_RULE.MIN_SHARE_GAP && share >= EXACT_RULE.RATIO * other;
-  const flagB = flagged(exactB, shareB, shareC);
-  const flagC = flagged(exactC, shareC, shareB);
-  const pct2 = (x) => `${(x * 100).toFixed(2)}%`;
-  const shares = `candidate ${exactC.count} (${pct2(shareC)}), baseline ${exactB.count} (${pct2(shareB)})`;
-  let count = 0;
-  let examples = [];
-  let summary = `rows where the prediction equals the actual (to 1e-9 relative), of ${n}: ${shares}; no model stands out`;
-  if (flagC || flagB) {
-    const who = flagC && flagB ? "both models" : flagC ? "the candidate" : "the baseline";
-    count = (flagC ? exactC.count : 0) + (flagB ? exactB.count : 0);
-    examples = [...flagC ? exactC.examples : [], ...flagB ? exactB.examples : []].slice(0, 5);
-    summary = `${who} reproduce${flagC && flagB ? "" : "s"} the actual far more often than the other model, a sign of target leakage: ${shares} of ${n} rows`;
-  }
-  return { findings: [{ id: "exact-predictions", count, examples, summary }], notRun: [] };
-}
-
-// src/integrity/frequency.ts
-var UNITS = {
-  s: { unit: "second", factor: 1 },
-  min: { unit: "second", factor: 60 },
-  h: { unit: "second", factor: 3600 },
-  d: { unit: "day", factor: 1 },
-  bd: { unit: "businessDay", factor: 1 },
-  w: { unit: "day", factor: 7 },
-  mo: { unit: "month", factor: 1 },
-  q: { unit: "month", factor: 3 },
-  y: { unit: "month", factor: 12 }
-};
-var FREQUENCY_SYNTAX = "auto, a count and unit (s, min, h, d, bd, w, mo, q, y), e.g. 1h, 15min, 1d, 1bd, 1w, 1mo, or a number > 0 for numeric timestamps";
-function parseFrequency(text) {
-  const m = /^(\d{1,6})(s|min|h|d|bd|w|mo|q|y)$/.exec(text);
-  if (m !== null) {
-    const count = Number(m[1]);
-    const { unit, factor } = UNITS[m[2]];
-    return count > 0 ? { unit, size: count * factor } : null;
-  }
-  if (!/^\d*\.?\d+(?:[eE][-+]?\d+)?$/.test(text)) return null;
-  const size = Number(text);
-  return Number.isFinite(size) && size > 0 ? { unit: "number", size } : null;
-}
-function formatFrequency(f) {
-  switch (f.unit) {
-    case "number":
-      return String(f.size);
-    case "second":
-      if (f.size % 3600 === 0) return `${f.size / 3600}h`;
-      if (f.size % 60 === 0) return `${f.size / 60}min`;
-      return `${f.size}s`;
-    case "day":
-      return f.size % 7 === 0 ? `${f.size / 7}w` : `${f.size}d`;
-    case "businessDay":
-      return `${f.size}bd`;
-    case "month":
-      return f.size % 12 === 0 ? `${f.size / 12}y` : `${f.size}mo`;
-  }
-}
-
-// src/integrity/timePoint.ts
-var INSTANT_KEY = /^(\d{13})\.(\d{9})$/;
-var WRITTEN_FIELDS = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?/;
-function toTimePoint(label, kind) {
-  const reading = readLabel(label);
-  if (typeof reading === "string" || reading.kind !== kind) return null;
-  if (reading.kind === "number") {
-    return {
-      seconds: reading.key,
-      nanos: 0,
-      wallDay: 0,
-      wallSecond: 0,
-      month: 0,
-      dayOfMonth: 0,
-      monthLength: 0
-    };
-  }
-  if (reading.kind !== "datetime") return null;
-  const instant = INSTANT_KEY.exec(reading.key);
-  const written = WRITTEN_FIELDS.exec(label);
-  if (instant === null || written === null) {
-    throw new Error(`cannot take the instant and written date of ${JSON.stringify(label)}`);
-  }
-  const seconds = Number(instant[1]) - 1e12;
-  const nanos = Number(instant[2]);
-  const year = Number(written[1]);
-  const month = Number(written[2]);
-  const day = Number(written[3]);
-  const wallSecond = written[4] === void 0 ? 0 : Number(written[4]) * 3600 + Number(written[5]) * 60 + (written[6] === void 0 ? 0 : Number(written[6])) + nanos / 1e9;
-  return {
-    seconds,
-    nanos,
-    wallDay: daysFromCivil(year, month, day),
-    wallSecond,
-    month: year * 12 + month - 1,
-    dayOfMonth: day,
-    monthLength: lengthOfMonth(year, month)
-  };
-}
-function compareTimePoints(a, b) {
-  return a.seconds - b.seconds || a.nanos - b.nanos;
-}
-function timePointsOf(labels, kind) {
-  return labels.map((label) => toTimePoint(label, kind));
-}
-function lengthOfMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
-}
-
-// src/integrity/stepCount.ts
-var SLACK = 1e-9;
-function stepsAhead(from, target, f) {
-  if (compareTimePoints(target, from) <= 0) return 0;
-  switch (f.unit) {
-    case "number":
-    case "second": {
-      const diff = target.seconds - from.seconds + (target.nanos - from.nanos) / 1e9;
-      return Math.max(0, Math.ceil(diff / f.size - SLACK));
-    }
-    case "day": {
-      const days = target.wallDay - from.wallDay;
-      const later = target.wallSecond > from.wallSecond;
-      return gridCount(later ? days : days - 1, f.size);
-    }
-    case "businessDay": {
-      const later = target.wallSecond > from.wallSecond && isWeekday(from.wallDay);
-      const n = weekdaysUpTo(target.wallDay) - weekdaysUpTo(from.wallDay) + (later ? 1 : 0);
-      return gridCount(n - 1, f.size);
-    }
-    case "month": {
-      const months = target.month - from.month;
-      const day = Math.min(target.dayOfMonth, from.monthLength);
-      const later = day > from.dayOfMonth || day === from.dayOfMonth && target.wallSecond > from.wallSecond;
-      return gridCount(later ? months : months - 1, f.size);
-    }
-  }
-}
-function gridCount(span, size) {
-  return span < 0 ? 0 : Math.floor(span / size) + 1;
-}
-function isWeekday(day) {
-  const weekday = ((day + 4) % 7 + 7) % 7;
-  return weekday !== 0 && weekday !== 6;
-}
-function weekdaysUpTo(day) {
-  const m = day - 4;
-  const weeks = Math.floor(m / 7);
-  const r = m - 7 * weeks;
-  return 5 * weeks + Math.min(r + 1, 5);
-}
-
-// src/integrity/foldChecks.ts
-function checkFolds(input) {
-  const { panel, layout } = input;
-  const kind = panel.timestampKind;
-  if (kind === "text") {
-    throw new InputError(
-      "--folds needs timestamps that are all numbers or all ISO 8601 date-times; these are in text order",
-      { file: layout.file }
-    );
-  }
-  const folds = /* @__PURE__ */ new Map();
-  for (const s of layout.segments) {
-    const point = (label, column) => {
-      const p = toTimePoint(label, kind);
-      if (p === null) {
-        throw new InputError(
-          `${column} is not a ${kind === "number" ? "number" : "ISO 8601 date-time"} like the predictions' timestamps`,
-          { file: layout.file, line: s.line, column, value: label }
-        );
-      }
-      return p;
-    };
-    const from = point(s.start, "start");
-    const to = point(s.end, "end");
-    if (compareTimePoints(from, to) > 0) {
-      throw new InputError(`the segment ends (${s.end}) before it starts (${s.start})`, {
-        file: layout.file,
-        line: s.line,
-        value: s.end
-      });
-    }
-    let fold = folds.get(s.fold);
-    if (fold === void 0) {
-      fold = { train: [], test: [] };
-      folds.set(s.fold, fold);
-    }
-    fold[s.role].push({ ...s, from, to });
-  }
-  for (const [name, fold] of folds) {
-    if (fold.test.length === 0) {
-      const line = fold.train[0].line;
-      throw new InputError(`fold "${name}" has no test segment`, {
-        file: layout.file,
-        line,
-        value: name
-      });
-    }
-  }
-  const findings = [];
-  const notRun = [];
-  let maxHorizon = 1;
-  for (let p = 0; p < panel.size; p++) maxHorizon = Math.max(maxHorizon, panel.horizon[p]);
-  const f = input.frequency;
-  if (f === null) {
-    notRun.push({ id: "fold-purge", reason: input.frequencyReason });
-  } else {
-    const purge = new FindingCollector();
-    let pairs = 0;
-    for (const [name, fold] of folds) {
-      for (const test of fold.test) {
-        for (const train of fold.train) {
-          pairs++;
-          if (touches(train, test, maxHorizon, input.embargo, f)) {
-            purge.add(
-              () => `fold ${name}: train ${train.start} to ${train.end} (line ${train.line}) touches test ${test.start} to ${test.end} (line ${test.line})`
-            );
-          }
-        }
-      }
-    }
-    findings.push({
-      id: "fold-purge",
-      count: purge.count,
-      examples: purge.examples,
-      summary: `${purge.count} of ${pairs} (training, test) segment pairs overlap the test window widened by ${maxHorizon} steps before (largest horizon) and ${input.embargo} after (embargo), at ${formatFrequency(f)}`
-    });
-  }
-  const times = panel.timestamps.map((label) => toTimePoint(label, kind));
-  const windows = /* @__PURE__ */ new Map();
-  for (const [name, fold] of folds) windows.set(name, mergeWindows(fold.test));
-  const anyFold = mergeWindows([...folds.values()].flatMap((fold) => fold.test));
-  const outside = new FindingCollector();
-  for (let p = 0; p < panel.size; p++) {
-    const tests = panel.path === null ? anyFold : windows.get(panel.paths[panel.path[p]]);
-    if (tests === void 0 || !insideAny(tests, times[panel.time[p]])) {
-      outside.add(
-        () => `${describePanelRow(panel, p)}${tests === void 0 ? " (no such fold in the layout)" : ""}`
-      );
-    }
-  }
-  findings.push({
-    id: "outside-test-window",
-    count: outside.count,
-    examples: outside.examples,
-    summary: `${outside.count} of ${panel.size} evaluated rows lie outside the test segments of their fold${panel.path === null ? " (no path column: any fold)" : ""}`
-  });
-  return { findings, notRun };
-}
-function touches(train, test, h, n, f) {
-  const endsLate = compareTimePoints(train.to, test.from) >= 0 || stepsAhead(train.to, test.from, f) <= h;
-  const startsEarly = compareTimePoints(train.from, test.to) <= 0 || stepsAhead(test.to, train.from, f) <= n;
-  return endsLate && startsEarly;
-}
-function mergeWindows(segments) {
-  const sorted = [...segments].sort((a, b) => compareTimePoints(a.from, b.from));
-  const out = [];
-  for (const s of sorted) {
-    const last = out[out.length - 1];
-    if (last !== void 0 && compareTimePoints(s.from, last.to) <= 0) {
-      if (compareTimePoints(s.to, last.to) > 0) last.to = s.to;
-    } else {
-      out.push({ from: s.from, to: s.to });
-    }
-  }
-  return out;
-}
-function insideAny(windows, t) {
-  let lo2 = 0;
-  let hi2 = windows.length - 1;
-  let found = -1;
-  while (lo2 <= hi2) {
-    const mid = lo2 + hi2 >> 1;
-    if (compareTimePoints(windows[mid].from, t) <= 0) {
-      found = mid;
-      lo2 = mid + 1;
-    } else {
-      hi2 = mid - 1;
-    }
-  }
-  return found >= 0 && compareTimePoints(t, windows[found].to) <= 0;
-}
-
-// src/integrity/inferFrequency.ts
-var BUSINESS_DAILY = { frequency: { unit: "businessDay", size: 1 } };
-function isBusinessDaily(series) {
-  let crossesWeekend = false;
-  for (const points of series) {
-    for (let i = 0; i < points.length; i++) {
-      if (!isWeekday(points[i].wallDay)) return false;
-      const from = points[i - 1]?.wallDay;
-      if (from !== void 0 && points[i].wallDay - from === 3 && ((from - 1) % 7 + 7) % 7 === 0) {
-        crossesWeekend = true;
-      }
-    }
-  }
-  return crossesWeekend;
-}
-var SLACK2 = 1e-6;
-function inferFrequency(kind, series) {
-  if (!series.some((points) => points.length >= 2)) {
-    return { frequency: null, reason: "no series has two different timestamps" };
-  }
-  if (kind === "number") {
-    return fromGaps(series, "number", (a, b) => b.seconds - a.seconds);
-  }
-  const first = series.find((points) => points.length > 0)[0];
-  const every = (test) => series.every((points) => points.every(test));
-  const oneTimeOfDay = every((p) => p.wallSecond === first.wallSecond);
-  if (oneTimeOfDay) {
-    const oneDay = every((p) => p.dayOfMonth === first.dayOfMonth);
-    const monthEnds = every((p) => p.dayOfMonth === p.monthLength);
-    if (oneDay || monthEnds) return fromGaps(series, "month", (a, b) => b.month - a.month);
-    const daily = fromGaps(series, "day", (a, b) => b.wallDay - a.wallDay);
-    return daily.frequency?.size === 1 && isBusinessDaily(series) ? BUSINESS_DAILY : daily;
-  }
-  return fromGaps(series, "second", (a, b) => b.seconds - a.seconds + (b.nanos - a.nanos) / 1e9);
-}
-function fromGaps(series, unit, gap) {
-  let step = Number.POSITIVE_INFINITY;
-  for (const points of series) {
-    for (let i = 1; i < points.length; i++) {
-      const g = gap(points[i - 1], points[i]);
-      if (g > 0 && g < step) step = g;
-    }
-  }
-  if (!Number.isFinite(step)) {
-    return { frequency: null, reason: "no two timestamps of a series are a step apart" };
-  }
-  const frequency = { unit, size: step };
-  for (const points of series) {
-    for (let i = 1; i < points.length; i++) {
-      const g = gap(points[i - 1], points[i]);
-      const ratio = g / step;
-      if (Math.abs(ratio - Math.round(ratio)) > SLACK2 * Math.max(1, ratio)) {
-        const other = { unit, size: g };
-        return {
-          frequency: null,
-          reason: `irregular timestamps: gaps of ${formatFrequency(frequency)} and ${formatFrequency(other)} (not a multiple of it)`
-        };
-      }
-    }
-  }
-  return { frequency };
-}
-
-// src/integrity/likeForLike.ts
-function checkLikeForLike(input) {
-  const { baseline: b, candidate: c } = input;
-  const findings = [];
-  const notRun = [];
-  const labelSets = (id, what, pick, keyOf) => {
-    const bc = pick(b);
-    const cc = pick(c);
-    if (bc === null || cc === null) {
-      notRun.push({ id, reason: `the files have no ${what} column` });
-      return;
-    }
-    findings.push(compareSets(id, what, keyed(bc.labels, keyOf), keyed(cc.labels, keyOf)));
-  };
-  labelSets("origin-sets", "origin", (t) => t.origin, timeKey(input.originKind));
-  labelSets(
-    "path-sets",
-    "path",
-    (t) => t.path,
-    (label) => label
-  );
-  if (b.horizon === null || c.horizon === null) {
-    notRun.push({ id: "horizon-sets", reason: "the files have no horizon column" });
-  } else {
-    findings.push(
-      compareSets(
-        "horizon-sets",
-        "horizon",
-        new Map([...distinct(b.horizon.values)].map((h) => [String(h), String(h)])),
-        new Map([...distinct(c.horizon.values)].map((h) => [String(h), String(h)]))
-      )
-    );
-  }
-  if (input.timestampKind === "text") {
-    notRun.push({ id: "time-spans", reason: "timestamps are in text order" });
-  } else {
-    findings.push(timeSpans(b, c, input.timestampKind));
-  }
-  labelSets(
-    "series-coverage",
-    "series",
-    (t) => t.series,
-    (label) => label
-  );
-  return { findings, notRun };
-}
-function timeKey(kind) {
-  if (kind === "text") return (label) => label;
-  return (label) => {
-    const r = readLabel(label);
-    return typeof r === "string" || r.kind === "text" ? label : String(r.key);
-  };
-}
-function keyed(labels, keyOf) {
-  const out = /* @__PURE__ */ new Map();
-  for (const label of labels) {
-    const key = keyOf(label);
-    if (!out.has(key)) out.set(key, label);
-  }
-  return out;
-}
-function distinct(values) {
-  const out = /* @__PURE__ */ new Set();
-  for (let i = 0; i < values.length; i++) out.add(values[i]);
-  return out;
-}
-function compareSets(id, what, baseline, candidate) {
-  const onlyIn = (mine, other, role) => {
-    const found = new FindingCollector();
-    for (const [key, label] of mine) {
-      if (!other.has(key)) found.add(() => `${what}=${label} only in the ${role}`);
-    }
-    return found;
-  };
-  const b = onlyIn(baseline, candidate, "baseline");
-  const c = onlyIn(candidate, baseline, "candidate");
-  const examples = [...b.examples.slice(0, c.count > 0 ? 3 : MAX_EXAMPLES), ...c.examples].slice(
-    0,
-    MAX_EXAMPLES
-  );
-  return {
-    id,
-    count: b.count + c.count,
-    examples,
-    summary: `${b.count} of ${baseline.size} ${what} values only in the baseline, ${c.count} of ${candidate.size} only in the candidate`
-  };
-}
-function timeSpans(b, c, kind) {
-  const keyOf = timeKey(kind);
-  const order = (x, y) => kind === "number" ? Number(x) - Number(y) : x < y ? -1 : x > y ? 1 : 0;
-  const span = (t) => {
-    const keys = keyed(t.timestamp.labels, keyOf);
-    const sorted = [...keys.keys()].sort(order);
-    return { keys, first: sorted[0], last: sorted[sorted.length - 1] };
-  };
-  const sb = span(b);
-  const sc = span(c);
-  const found = new FindingCollector();
-  const outside = (mine, other, role, otherRole) => {
-    let n = 0;
-    for (const [key, label2] of mine.keys) {
-      if (order(key, other.first) < 0 || order(key, other.last) > 0) {
-        n++;
-        found.add(() => `timestamp=${label2} in the ${role}, outside the ${otherRole}'s span`);
-      }
-    }
-    return n;
-  };
-  const nb = outside(sb, sc, "baseline", "candidate");
-  const nc = outside(sc, sb, "candidate", "baseline");
-  const label = (s) => `${s.keys.get(s.first)} to ${s.keys.get(s.last)}`;
-  return {
-    id: "time-spans",
-    count: found.count,
-    examples: found.examples,
-    summary: `baseline spans ${label(sb)}, candidate ${label(sc)}: ${nb} baseline and ${nc} candidate timestamps lie outside the other's span`
-  };
-}
-
-// src/integrity/rowKey.ts
-function describeTableRow(table2, i) {
-  const parts = [];
-  if (table2.series !== null) parts.push(`series=${table2.series.labels[table2.series.ids[i]]}`);
-  parts.push(`timestamp=${table2.timestamp.labels[table2.timestamp.ids[i]]}`);
-  if (table2.horizon !== null) parts.push(`horizon=${table2.horizon.values[i]}`);
-  if (table2.origin !== null) parts.push(`origin=${table2.origin.labels[table2.origin.ids[i]]}`);
-  if (table2.path !== null) parts.push(`path=${table2.path.labels[table2.path.ids[i]]}`);
-  return `${table2.summary.role} line ${table2.lines[i]}: ${parts.join(" ")}`;
-}
-
-// src/integrity/rowChecks.ts
-function checkRows(input) {
-  const { tables } = input;
-  if (tables.some((t) => t.origin === null)) {
-    const reason = "the predictions files have no origin column";
-    return {
-      findings: [],
-      notRun: [
-        { id: "look-ahead", reason },
-        { id: "horizon-steps", reason },
-        { id: "origin-after-actuals", reason }
-      ]
-    };
-  }
-  if (input.timestampKind === "text" || input.originKind !== input.timestampKind) {
-    const reason = input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`;
-    return {
-      findings: [],
-      notRun: [
-        { id: "look-ahead", reason },
-        { id: "horizon-steps", reason },
-        { id: "origin-after-actuals", reason }
-      ]
-    };
-  }
-  const kind = input.timestampKind;
-  const lookAhead = new FindingCollector();
-  const horizon = new FindingCollector();
-  const afterActuals = new FindingCollector();
-  const notRun = [];
-  const f = input.frequency;
-  const hasHorizon = tables.every((t) => t.horizon !== null);
-  if (!hasHorizon) notRun.push({ id: "horizon-steps", reason: "the files have no horizon column" });
-  else if (f === null) notRun.push({ id: "horizon-steps", reason: input.frequencyReason });
-  const countSteps = hasHorizon && f !== null;
-  let rows = 0;
-  for (const table2 of tables) {
-    const times = timePointsOf(table2.timestamp.labels, kind);
-    const origins = timePointsOf(table2.origin.labels, kind);
-    const tIds = table2.timestamp.ids;
-    const oIds = table2.origin.ids;
-    const h = table2.horizon?.values;
-    rows += table2.size;
-    for (let i = 0; i < table2.size; i++) {
-      const t = times[tIds[i]];
-      const o = origins[oIds[i]];
-      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table2, i));
-      else if (countSteps && stepsAhead(o, t, f) !== h[i]) {
-        horizon.add(() => {
-          const steps = stepsAhead(o, t, f);
-          return `${describeTableRow(table2, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
-        });
-      }
-      if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
-        afterActuals.add(() => describeTableRow(table2, i));
-      }
-    }
-  }
-  const findings = [
-    {
-      id: "look-ahead",
-      ...lookAhead,
-      summary: `${lookAhead.count} of ${rows} predictions rows have an origin at or after the timestamp they forecast`
-    }
-  ];
-  if (countSteps) {
-    findings.push({
-      id: "horizon-steps",
-      ...horizon,
-      summary: `${horizon.count} of ${rows} rows have a horizon that differs from the steps of ${formatFrequency(f)} from origin to timestamp`
-    });
-  }
-  if (input.lastActual === null) {
-    notRun.push({ id: "origin-after-actuals", reason: "no actual has a comparable timestamp" });
-  } else {
-    findings.push({
-      id: "origin-after-actuals",
-      ...afterActuals,
-      summary: `${afterActuals.count} of ${rows} rows were issued after the last actual (${input.lastActualLabel})`
-    });
-  }
-  return { findings, notRun };
-}
-
-// src/integrity/checkBacktest.ts
-function checkBacktest(input, settings) {
-  const timestampKind = readableKind(input.panel.timestampKind, [
-    input.panel.timestamps,
-    input.baseline.timestamp.labels,
-    input.candidate.timestamp.labels,
-    ...input.actuals === void 0 ? [] : [input.actuals.timestamp.labels]
-  ]);
-  const originKind = readableKind(input.panel.originKind, [
-    input.baseline.origin?.labels ?? [],
-    input.candidate.origin?.labels ?? []
-  ]);
-  const panel = { ...input.panel, timestampKind, originKind };
-  const frequency = chooseFrequency(panel, settings.frequency);
-  const findings = [];
-  const notRun = [];
-  const add = (part) => {
-    findings.push(...part.findings);
-    notRun.push(...part.notRun);
-  };
-  const actualTables = input.actuals === void 0 ? [input.baseline, input.candidate] : [input.actuals];
-  const last = lastTime(actualTables, panel.timestampKind);
-  add(
-    checkRows({
-      tables: [input.baseline, input.candidate],
-      timestampKind: panel.timestampKind,
-      originKind: panel.originKind,
-      lastActual: last?.point ?? null,
-      lastActualLabel: last?.label ?? "",
-      frequency: frequency.frequency,
-      frequencyReason: frequency.reason
-    })
-  );
-  add(
-    checkLikeForLike({
-      baseline: input.baseline,
-      candidate: input.candidate,
-      timestampKind: panel.timestampKind,
-      originKind: panel.originKind
-    })
-  );
-  if (input.folds === void 0) {
-    const reason = "no fold layout given (--folds FILE)";
-    notRun.push({ id: "fold-purge", reason }, { id: "outside-test-window", reason });
-  } else {
-    add(
-      checkFolds({
-        panel,
-        layout: input.folds,
-        embargo: settings.embargo,
-        frequency: frequency.frequency,
-        frequencyReason: frequency.reason
-      })
-    );
-  }
-  add(checkExactPredictions(panel));
-  const rank = (id) => CHECK_IDS.indexOf(id);
-  findings.sort((a, b) => rank(a.id) - rank(b.id));
-  notRun.sort((a, b) => rank(a.id) - rank(b.id));
-  return applyCheckPolicy(
-    findings,
-    notRun,
-    settings.mode,
-    frequency.frequency === null ? null : { text: formatFrequency(frequency.frequency), source: frequency.source }
-  );
-}
-function chooseFrequency(panel, text) {
-  const kind = panel.timestampKind;
-  if (text !== "auto") {
-    const f = parseFrequency(text);
-    if (f === null) throw new InputError("frequency is not a frequency", { value: text });
-    if (kind === "text") {
-      return { frequency: null, reason: "timestamps are in text order", source: "given" };
-    }
-    if (f.unit === "number" !== (kind === "number")) {
-      throw new InputError(
-        kind === "number" ? `the frequency ${text} has a unit, but the timestamps are numbers: give a plain step such as 1` : `the frequency ${text} is a plain number, but the timestamps are ISO 8601 date-times: give a unit such as 1h, 1d or 1mo`,
-        { value: text }
-      );
-    }
-    return { frequency: f, reason: "", source: "given" };
-  }
-  if (kind === "text") {
-    return {
-      frequency: null,
-      reason: "timestamps are in text order, so steps cannot be counted",
-      source: "inferred"
-    };
-  }
-  const inferred = inferFrequency(kind, pointsBySeries(panel, kind));
-  return inferred.frequency === null ? {
-    frequency: null,
-    reason: `no frequency: ${inferred.reason}; give --frequency`,
-    source: "inferred"
-  } : { frequency: inferred.frequency, reason: "", source: "inferred" };
-}
-function pointsBySeries(panel, kind) {
-  const points = panel.timestamps.map((label) => toTimePoint(label, kind));
-  const out = panel.seriesNames.map(() => []);
-  let lastSeries = -1;
-  let lastTime2 = -1;
-  for (let p = 0; p < panel.size; p++) {
-    const series = panel.series[p];
-    const time = panel.time[p];
-    if (series === lastSeries && time === lastTime2) continue;
-    if (series === lastSeries && time < lastTime2) {
-      throw new Error("the aligned panel is not sorted by series and timestamp");
-    }
-    out[series].push(points[time]);
-    lastSeries = series;
-    lastTime2 = time;
-  }
-  return out;
-}
-function readableKind(kind, lists) {
-  if (kind === "text") return kind;
-  for (const labels of lists) {
-    for (const label of labels) if (toTimePoint(label, kind) === null) return "text";
-  }
-  return kind;
-}
-function lastTime(tables, kind) {
-  if (kind === "text") return null;
-  let best = null;
-  for (const table2 of tables) {
-    for (const label of table2.timestamp.labels) {
-      const point = toTimePoint(label, kind);
-      if (point !== null && (best === null || compareTimePoints(point, best.point) > 0)) {
-        best = { point, label };
-      }
-    }
-  }
-  return best;
-}
-
-// src/reading/columnMapping.ts
-var COLUMN_ROLES = [
-  "series",
-  "timestamp",
-  "horizon",
-  "origin",
-  "path",
-  "actual",
-  "prediction",
-  "weight",
-  "quantile"
-];
-var DEFAULT_COLUMNS = {
-  series: "series",
-  timestamp: "timestamp",
-  horizon: "horizon",
-  origin: "origin",
-  path: "path",
-  actual: "actual",
-  prediction: "prediction",
-  weight: "weight",
-  quantile: "q"
-};
-function resolveColumns(mapping = {}) {
-  const resolved = { ...DEFAULT_COLUMNS };
-  for (const role of COLUMN_ROLES) {
-    const name = mapping[role];
-    if (name !== void 0) resolved[role] = name;
-  }
-  return resolved;
-}
-function parseColumnMapping(text, source = "--columns") {
-  const mapping = {};
-  if (text.trim() === "") return mapping;
-  for (const rawPair of text.split(",")) {
-    const pair = rawPair.trim();
-    const eq = pair.indexOf("=");
-    if (eq < 0) {
-      throw new InputError(
-        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
-        { file: source, value: pair }
-      );
-    }
-    const role = pair.slice(0, eq).trim();
-    const name = pair.slice(eq + 1).trim();
-    if (!isRole(role)) {
-      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
-        file: source,
-        value: pair
-      });
-    }
-    if (name === "") {
-      throw new InputError(`the column name for role "${role}" is empty`, {
-        file: source,
-        value: pair
-      });
-    }
-    if (mapping[role] !== void 0) {
-      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
-    }
-    mapping[role] = name;
-  }
-  checkDistinctNames(mapping, source);
-  return mapping;
-}
-function checkDistinctNames(mapping, source = "--columns") {
-  const resolved = resolveColumns(mapping);
-  const seen = /* @__PURE__ */ new Map();
-  for (const role of COLUMN_ROLES) {
-    if (role === "quantile") continue;
-    const name = resolved[role];
-    const other = seen.get(name);
-    if (other !== void 0) {
-      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
-        file: source,
-        value: name
-      });
-    }
-    seen.set(name, role);
-  }
-}
-function isRole(text) {
-  return COLUMN_ROLES.includes(text);
-}
-
 // src/reading/inputFormat.ts
 var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
 var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
@@ -17591,10 +13246,10 @@ var Tokenizer = class {
       this.carry = buf.slice(pos);
     }
   }
-  tooLong(buf, pos, line) {
+  tooLong(buf, pos, line2) {
     throw new InputError(
       `the line is longer than the limit of ${this.lineLimit} characters (raise it with --line-limit if the file is right; a file without line breaks, or with an unclosed quote, also ends here)`,
-      { file: this.file, line, value: buf.slice(pos, pos + 200) }
+      { file: this.file, line: line2, value: buf.slice(pos, pos + 200) }
     );
   }
   /** How the delimiter is named in messages. */
@@ -17688,10 +13343,10 @@ var Tokenizer = class {
       i = j + 1;
       break;
     }
-    const line = this.linesDone + 1;
-    if (i - pos > this.lineLimit) this.tooLong(buf, pos, line);
+    const line2 = this.linesDone + 1;
+    if (i - pos > this.lineLimit) this.tooLong(buf, pos, line2);
     this.linesDone += 1 + newlines;
-    this.sink(fields, count, line);
+    this.sink(fields, count, line2);
     return i;
   }
 };
@@ -17722,7 +13377,7 @@ var FoldLayoutReader = class {
     this.file = file;
     this.tokenizer = new Tokenizer(
       format === "tsv" ? "	" : ",",
-      (fields, count, line) => this.record(fields.slice(0, count), line),
+      (fields, count, line2) => this.record(fields.slice(0, count), line2),
       file
     );
   }
@@ -17747,7 +13402,7 @@ var FoldLayoutReader = class {
     }
     return { file: this.file, segments: this.segments };
   }
-  record(fields, line) {
+  record(fields, line2) {
     if (this.index === null) {
       const index = /* @__PURE__ */ new Map();
       fields.forEach((name, i) => {
@@ -17759,7 +13414,7 @@ var FoldLayoutReader = class {
         if (!index.has(name)) {
           throw new InputError(
             `the fold layout needs the columns fold (or path), role, start and end; "${name}" is missing`,
-            { file: this.file, line, value: fields.join(",") }
+            { file: this.file, line: line2, value: fields.join(",") }
           );
         }
       }
@@ -17770,7 +13425,7 @@ var FoldLayoutReader = class {
     if (this.segments.length >= MAX_SEGMENTS) {
       throw new InputError(`the fold layout has more than ${MAX_SEGMENTS} segments`, {
         file: this.file,
-        line
+        line: line2
       });
     }
     const at = (name) => (fields[this.index.get(name)] ?? "").trim();
@@ -17778,17 +13433,17 @@ var FoldLayoutReader = class {
     if (role !== "train" && role !== "test") {
       throw new InputError("role must be train or test", {
         file: this.file,
-        line,
+        line: line2,
         column: "role",
         value: role
       });
     }
     for (const name of ["fold", "start", "end"]) {
       if (at(name) === "") {
-        throw new InputError(`empty ${name}`, { file: this.file, line, column: name, value: "" });
+        throw new InputError(`empty ${name}`, { file: this.file, line: line2, column: name, value: "" });
       }
     }
-    this.segments.push({ fold: at("fold"), role, start: at("start"), end: at("end"), line });
+    this.segments.push({ fold: at("fold"), role, start: at("start"), end: at("end"), line: line2 });
   }
 };
 
@@ -26332,11 +21987,11 @@ async function streamParquetFile(path2, reader, onProgress) {
         throw notParquet(error, path2);
       }
       for (let r = 0; r < groupRows2; r++) {
-        const line = groupStart + r + 2;
+        const line2 = groupStart + r + 2;
         for (let k = 0; k < used.length; k++) {
-          fields[used[k]] = fieldValue(columns[k][r], path2, line, usedNames[k]);
+          fields[used[k]] = fieldValue(columns[k][r], path2, line2, usedNames[k]);
         }
-        reader.record(fields, names.length, line);
+        reader.record(fields, names.length, line2);
       }
       groupStart = groupEnd;
       onProgress?.(total > 0 ? Math.round(size * groupStart / total) : size, size);
@@ -26403,7 +22058,7 @@ function isoTimestamp(count, digits) {
   const f = fraction === 0n ? "" : `.${fraction.toString().padStart(digits, "0").replace(/0+$/, "")}`;
   return `${text}${f}Z`;
 }
-function fieldValue(value, path2, line, column) {
+function fieldValue(value, path2, line2, column) {
   switch (typeof value) {
     case "string":
     case "number":
@@ -26420,16 +22075,16 @@ function fieldValue(value, path2, line, column) {
       if (value instanceof Uint8Array) {
         throw new InputError("a binary Parquet value that is not UTF-8 text", {
           file: path2,
-          line,
+          line: line2,
           column
         });
       }
       throw new InputError(
         "a Parquet value that is neither a number nor text (binary or nested data)",
-        { file: path2, line, column }
+        { file: path2, line: line2, column }
       );
     default:
-      throw new InputError("a Parquet value of an unsupported type", { file: path2, line, column });
+      throw new InputError("a Parquet value of an unsupported type", { file: path2, line: line2, column });
   }
 }
 async function sha256Of(path2) {
@@ -26515,15 +22170,15 @@ async function streamTextFile(path2, gzip, sink, onProgress) {
   return `sha256:${hash.digest("hex")}`;
 }
 function notText(chunk, at, before, path2, what) {
-  const line = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
+  const line2 = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
   const b0 = chunk[0];
   const b1 = chunk[1];
   const utf16 = before === 0 && (b0 === 255 && b1 === 254 || b0 === 254 && b1 === 255) || what === "a NUL byte";
   const byte = chunk[at];
   const hint = utf16 ? "it looks like UTF-16: convert it, e.g. iconv -f UTF-16 -t UTF-8" : byte !== void 0 && byte >= 128 ? `byte 0x${byte.toString(16).toUpperCase()} suggests Latin-1 or Windows-1252: convert it, e.g. iconv -f WINDOWS-1252 -t UTF-8` : "convert it to UTF-8";
-  return new InputError(`the file is not UTF-8 text: line ${line} has ${what} (${hint})`, {
+  return new InputError(`the file is not UTF-8 text: line ${line2} has ${what} (${hint})`, {
     file: path2,
-    line,
+    line: line2,
     value: chunk.subarray(Math.max(0, at - 20), at + 20).toString("latin1").replace(/[^\x20-\x7e]/g, "?")
   });
 }
@@ -26566,6 +22221,91 @@ function asInputError(error, path2) {
   }
   const message = error instanceof Error ? error.message : String(error);
   return new InputError(`cannot read the file: ${message}`, { file: path2 });
+}
+
+// src/reading/columnMapping.ts
+var COLUMN_ROLES = [
+  "series",
+  "timestamp",
+  "horizon",
+  "origin",
+  "path",
+  "actual",
+  "prediction",
+  "weight",
+  "quantile"
+];
+var DEFAULT_COLUMNS = {
+  series: "series",
+  timestamp: "timestamp",
+  horizon: "horizon",
+  origin: "origin",
+  path: "path",
+  actual: "actual",
+  prediction: "prediction",
+  weight: "weight",
+  quantile: "q"
+};
+function resolveColumns(mapping = {}) {
+  const resolved = { ...DEFAULT_COLUMNS };
+  for (const role of COLUMN_ROLES) {
+    const name = mapping[role];
+    if (name !== void 0) resolved[role] = name;
+  }
+  return resolved;
+}
+function parseColumnMapping(text, source = "--columns") {
+  const mapping = {};
+  if (text.trim() === "") return mapping;
+  for (const rawPair of text.split(",")) {
+    const pair = rawPair.trim();
+    const eq = pair.indexOf("=");
+    if (eq < 0) {
+      throw new InputError(
+        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
+        { file: source, value: pair }
+      );
+    }
+    const role = pair.slice(0, eq).trim();
+    const name = pair.slice(eq + 1).trim();
+    if (!isRole(role)) {
+      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (name === "") {
+      throw new InputError(`the column name for role "${role}" is empty`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (mapping[role] !== void 0) {
+      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
+    }
+    mapping[role] = name;
+  }
+  checkDistinctNames(mapping, source);
+  return mapping;
+}
+function checkDistinctNames(mapping, source = "--columns") {
+  const resolved = resolveColumns(mapping);
+  const seen = /* @__PURE__ */ new Map();
+  for (const role of COLUMN_ROLES) {
+    if (role === "quantile") continue;
+    const name = resolved[role];
+    const other = seen.get(name);
+    if (other !== void 0) {
+      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
+        file: source,
+        value: name
+      });
+    }
+    seen.set(name, role);
+  }
+}
+function isRole(text) {
+  return COLUMN_ROLES.includes(text);
 }
 
 // src/reading/rowKeySet.ts
@@ -26706,7 +22446,7 @@ var ForecastTableReader = class {
     }
     this.tokenizer = new Tokenizer(
       delimiter,
-      (fields, count, line) => this.record(fields, count, line),
+      (fields, count, line2) => this.record(fields, count, line2),
       path2,
       options.lineLimit
     );
@@ -26717,9 +22457,9 @@ var ForecastTableReader = class {
    * already (a Parquet double): it is taken as the double a CSV's shortest round-trip text of it
    * parses to, that is, as it is.
    */
-  record(fields, count, line) {
-    if (this.header === null) this.readHeader(fields.map(String), count, line);
-    else this.readRow(fields, count, line);
+  record(fields, count, line2) {
+    if (this.header === null) this.readHeader(fields.map(String), count, line2);
+    else this.readRow(fields, count, line2);
   }
   /** Header indices of the columns that play a role (after the header was read). */
   get usedColumns() {
@@ -26786,15 +22526,15 @@ var ForecastTableReader = class {
       quantiles
     };
   }
-  readHeader(fields, count, line) {
+  readHeader(fields, count, line2) {
     this.header = resolveHeader(
       fields.slice(0, count),
       this.path,
-      line,
+      line2,
       this.options,
       this.delimiter
     );
-    this.headerLine = line;
+    this.headerLine = line2;
     this.quantileValues = this.header.quantiles.map(() => new Float64Array(0));
     const h = this.header;
     const key = [];
@@ -26823,27 +22563,27 @@ var ForecastTableReader = class {
     this.capacity = capacity;
     this.keys?.refresh();
   }
-  readRow(fields, count, line) {
+  readRow(fields, count, line2) {
     const h = this.header;
     if (count !== h.names.length) {
       throw new InputError(`expected ${h.names.length} fields as in the header, found ${count}`, {
         file: this.path,
-        line,
+        line: line2,
         value: echo(fields.slice(0, Math.min(count, 50)).join(this.delimiter))
       });
     }
     const r = this.rows;
     if (r === this.capacity) this.grow();
-    this.lines[r] = line;
+    this.lines[r] = line2;
     if (h.series >= 0) {
-      this.seriesIds[r] = this.keyLabel(this.seriesLabels, fields[h.series], h.series, line);
+      this.seriesIds[r] = this.keyLabel(this.seriesLabels, fields[h.series], h.series, line2);
     }
-    this.timeIds[r] = this.keyLabel(this.timeLabels, fields[h.timestamp], h.timestamp, line);
+    this.timeIds[r] = this.keyLabel(this.timeLabels, fields[h.timestamp], h.timestamp, line2);
     if (h.origin >= 0) {
-      this.originIds[r] = this.keyLabel(this.originLabels, fields[h.origin], h.origin, line);
+      this.originIds[r] = this.keyLabel(this.originLabels, fields[h.origin], h.origin, line2);
     }
     if (h.path >= 0) {
-      this.pathIds[r] = this.keyLabel(this.pathLabels, fields[h.path], h.path, line);
+      this.pathIds[r] = this.keyLabel(this.pathLabels, fields[h.path], h.path, line2);
     }
     if (h.horizon >= 0) {
       const text = fields[h.horizon];
@@ -26851,23 +22591,23 @@ var ForecastTableReader = class {
       if (value === 0) {
         throw new InputError("the horizon must be a whole number \u2265 1", {
           file: this.path,
-          line,
+          line: line2,
           column: h.names[h.horizon],
           value: String(text)
         });
       }
       this.horizons[r] = value;
     }
-    if (h.actual >= 0) this.actual[r] = this.number(fields[h.actual], h.actual, line);
+    if (h.actual >= 0) this.actual[r] = this.number(fields[h.actual], h.actual, line2);
     if (h.prediction >= 0) {
-      this.prediction[r] = this.number(fields[h.prediction], h.prediction, line);
+      this.prediction[r] = this.number(fields[h.prediction], h.prediction, line2);
     }
     if (h.weight >= 0) {
-      const value = this.number(fields[h.weight], h.weight, line);
+      const value = this.number(fields[h.weight], h.weight, line2);
       if (value < 0) {
         throw new InputError("weights must be \u2265 0", {
           file: this.path,
-          line,
+          line: line2,
           column: h.names[h.weight],
           value: String(fields[h.weight])
         });
@@ -26877,14 +22617,14 @@ var ForecastTableReader = class {
     const qs = h.quantiles;
     for (let k = 0; k < qs.length; k++) {
       const index = qs[k].index;
-      this.quantileValues[k][r] = this.number(fields[index], index, line);
+      this.quantileValues[k][r] = this.number(fields[index], index, line2);
     }
     const earlier = this.keys.add(r);
-    if (earlier >= 0) this.duplicate(earlier, r, line);
+    if (earlier >= 0) this.duplicate(earlier, r, line2);
     this.rows = r + 1;
   }
   /** A key seen twice in this file: refused at once, naming both lines. */
-  duplicate(earlier, row, line) {
+  duplicate(earlier, row, line2) {
     const h = this.header;
     const parts = [];
     const label = (role, interner, ids, index) => {
@@ -26899,34 +22639,34 @@ var ForecastTableReader = class {
     }
     const key = echo(parts.join(" "));
     throw new InputError(
-      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line} have the same key`,
-      { file: this.path, line, value: key }
+      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line2} have the same key`,
+      { file: this.path, line: line2, value: key }
     );
   }
-  keyLabel(interner, field, index, line) {
+  keyLabel(interner, field, index, line2) {
     const text = typeof field === "string" ? field : String(field);
     if (text.length > MAX_LABEL) {
       throw new InputError(
         `a key value longer than ${MAX_LABEL} characters (${text.length}); series names, timestamps, origins and paths are kept in memory for every distinct value, so they must be short`,
-        { file: this.path, line, column: this.header.names[index], value: text }
+        { file: this.path, line: line2, column: this.header.names[index], value: text }
       );
     }
     if (text.length === 0) {
       throw new InputError("empty value in a key column", {
         file: this.path,
-        line,
+        line: line2,
         column: this.header.names[index],
         value: text
       });
     }
-    return interner.id(text, line);
+    return interner.id(text, line2);
   }
-  number(field, index, line) {
+  number(field, index, line2) {
     if (typeof field === "number") {
       if (Number.isFinite(field)) return field;
       throw new InputError("not a finite number", {
         file: this.path,
-        line,
+        line: line2,
         column: this.header.names[index],
         value: String(field)
       });
@@ -26942,11 +22682,11 @@ var ForecastTableReader = class {
     }
     throw new InputError(
       text.length === 0 ? "empty value where a number is required" : `not a finite decimal number${hint}`,
-      { file: this.path, line, column: this.header.names[index], value: text }
+      { file: this.path, line: line2, column: this.header.names[index], value: text }
     );
   }
 };
-function resolveHeader(names, file, line, options, delimiter = ",") {
+function resolveHeader(names, file, line2, options, delimiter = ",") {
   const columns = resolveColumns(options.columns);
   const predictions = options.role !== "actuals";
   const used = /* @__PURE__ */ new Set();
@@ -26958,7 +22698,7 @@ function resolveHeader(names, file, line, options, delimiter = ",") {
     if (second >= 0) {
       throw new InputError(
         `the column "${name}" appears twice in the header (fields ${first + 1} and ${second + 1})`,
-        { file, line, column: name, value: name }
+        { file, line: line2, column: name, value: name }
       );
     }
     used.add(first);
@@ -26983,14 +22723,14 @@ function resolveHeader(names, file, line, options, delimiter = ",") {
       if (!(level > 0 && level < 1)) {
         throw new InputError(
           `quantile level ${levelText} is not strictly between 0 and 1 (write e.g. ${prefix2}0.1 for the 10% quantile)`,
-          { file, line, column: name, value: name }
+          { file, line: line2, column: name, value: name }
         );
       }
       const same = quantiles.find((q) => q.level === level);
       if (same !== void 0) {
         throw new InputError(
           `quantile level ${level} appears twice in the header (columns "${same.column}" and "${name}")`,
-          { file, line, column: name, value: name }
+          { file, line: line2, column: name, value: name }
         );
       }
       quantiles.push({ level, column: name, index });
@@ -27002,7 +22742,7 @@ function resolveHeader(names, file, line, options, delimiter = ",") {
   const header = `${shown.join(", ")}${names.length > 20 ? `, \u2026 (${names.length} columns)` : ""}`;
   const missing = (role, name, why) => new InputError(
     `missing the ${role} column "${name}" ${why}; the header has ${header} (map another column with e.g. ${role}=NAME)${delimiterHint(names, delimiter)}`,
-    { file, line, column: name }
+    { file, line: line2, column: name }
   );
   if (timestamp < 0) throw missing("timestamp", columns.timestamp, "(required)");
   if (actual < 0 && (!predictions || options.requireActual === true)) {
@@ -27059,14 +22799,14 @@ var Interner = class {
   map = /* @__PURE__ */ new Map();
   last = "";
   lastId = -1;
-  id(text, line) {
+  id(text, line2) {
     if (this.lastId >= 0 && text === this.last) return this.lastId;
     let id = this.map.get(text);
     if (id === void 0) {
       const own = ` ${text}`.slice(1);
       id = this.labels.length;
       this.labels.push(own);
-      this.firstLines.push(line);
+      this.firstLines.push(line2);
       this.map.set(own, id);
     }
     this.last = text;
@@ -27128,6 +22868,5019 @@ async function readFoldLayout(path2, format) {
   return reader.finish();
 }
 
+// src/candidates/candidateList.ts
+var MAX_CANDIDATES = 50;
+var MAX_NAME_LENGTH = 64;
+var NAME = /^[A-Za-z0-9][A-Za-z0-9._+-]*$/;
+function parseCandidateList(text, label) {
+  const out = [];
+  const lines = text.split(/\r?\n/);
+  lines.forEach((raw, index) => {
+    const line2 = raw.trim();
+    if (line2 === "") return;
+    const eq = line2.indexOf("=");
+    const head = eq > 0 ? line2.slice(0, eq).trim() : "";
+    const named = head !== "" && NAME.test(head);
+    const path2 = named ? line2.slice(eq + 1).trim() : line2;
+    if (path2 === "") {
+      throw new InputError(`${label}: line ${index + 1} names candidate "${head}" but no file`, {
+        value: line2
+      });
+    }
+    const name = named ? head : fileStem(path2);
+    checkCandidateName(name, `${label} (line ${index + 1})`);
+    if (out.some((c) => c.name === name)) {
+      throw new InputError(`${label}: two candidates are named "${name}"; give each a name=path`, {
+        value: line2
+      });
+    }
+    out.push({ name, path: path2 });
+  });
+  if (out.length > MAX_CANDIDATES) {
+    throw new InputError(`${label}: at most ${MAX_CANDIDATES} candidates, got ${out.length}`);
+  }
+  return out;
+}
+function checkCandidateName(name, where) {
+  if (name.length > MAX_NAME_LENGTH || !NAME.test(name)) {
+    throw new InputError(
+      `${where}: a model name must be 1 to ${MAX_NAME_LENGTH} letters, digits or . _ + - (starting with a letter or digit)`,
+      { value: name }
+    );
+  }
+}
+function fileStem(path2) {
+  const base = path2.split(/[\\/]/).pop() ?? path2;
+  return base.replace(/\.gz$/i, "").replace(/\.(csv|tsv|parquet)$/i, "");
+}
+
+// src/aggregation/lossSeries.ts
+function aggregateByTime(panel, losses, rows, weights = null) {
+  const points = panel.timestamps.length;
+  const sumB = new Float64Array(points);
+  const sumC = new Float64Array(points);
+  const count = new Int32Array(points);
+  const weightSum = weights === null ? null : new Float64Array(points);
+  let maxHorizon = 1;
+  let rowCount = 0;
+  const included = losses.included;
+  const total = rows === void 0 ? panel.size : rows.length;
+  for (let r = 0; r < total; r++) {
+    const i = rows === void 0 ? r : rows[r];
+    if (included !== null && included[i] === 0) continue;
+    const t = panel.time[i];
+    const w = weights === null ? 1 : weights[i];
+    sumB[t] += w * losses.baseline[i];
+    sumC[t] += w * losses.candidate[i];
+    if (weightSum !== null) weightSum[t] += w;
+    count[t]++;
+    rowCount++;
+    const h = panel.horizon[i];
+    if (h > maxHorizon) maxHorizon = h;
+  }
+  const denominator = (t) => weightSum === null ? count[t] : weightSum[t];
+  let n = 0;
+  for (let t = 0; t < points; t++) if (count[t] > 0 && denominator(t) > 0) n++;
+  const time = new Int32Array(n);
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const rowsAt = new Int32Array(n);
+  let k = 0;
+  for (let t = 0; t < points; t++) {
+    const m = denominator(t);
+    if (count[t] === 0 || m <= 0) continue;
+    time[k] = t;
+    baseline[k] = sumB[t] / m;
+    candidate[k] = sumC[t] / m;
+    rowsAt[k] = count[t];
+    k++;
+  }
+  return { time, baseline, candidate, rows: rowsAt, rowCount, maxHorizon };
+}
+function lossDifferential(series, relativeMargin) {
+  const n = series.baseline.length;
+  const d = new Float64Array(n);
+  const factor = 1 + relativeMargin;
+  for (let t = 0; t < n; t++) d[t] = series.candidate[t] - factor * series.baseline[t];
+  return d;
+}
+
+// src/core/version.ts
+var VERSION = "0.1.0";
+
+// src/core/formatNumber.ts
+function formatNumber(x, digits = 4) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  if (x === 0) return "0";
+  const magnitude = Math.abs(x);
+  if (magnitude >= 1e6 || magnitude < 1e-4) return x.toExponential(digits - 1);
+  return String(Number(x.toPrecision(digits)));
+}
+function formatSignedPercent(x) {
+  if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
+  const text = formatNumber(x * 100, 3);
+  return `${x > 0 ? "+" : ""}${text}%`;
+}
+function formatPValue(p) {
+  if (p === null || p === void 0 || !Number.isFinite(p)) return "n/a";
+  if (p < 1e-4) return "< 0.0001";
+  if (p > 0.9999) return "> 0.9999";
+  return p.toFixed(4);
+}
+
+// src/decision/decideAdjusted.ts
+function decideAdjusted(input) {
+  const { hypothesis, alpha, adjustedPValue: p } = input;
+  const name = input.method === "holm" ? "Holm-adjusted" : "Benjamini\u2013Hochberg-adjusted";
+  if (p === null) {
+    return {
+      verdict: "warn",
+      reasons: ["The Diebold\u2013Mariano test could not be computed for this series."],
+      rejected: null
+    };
+  }
+  const rejected = p <= alpha;
+  const onKeep = hypothesis.onReject === "fail" ? "pass" : "fail";
+  const text = formatPValue(p);
+  const shown = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
+  const reasons = [
+    `${name} Diebold\u2013Mariano ${shown} ${rejected ? "\u2264" : ">"} \u03B1 = ${alpha}: ${rejected ? "evidence" : "no evidence"} that ${hypothesis.alternative}.`
+  ];
+  let verdict = rejected ? hypothesis.onReject : onKeep;
+  if (input.n < input.minPoints) {
+    verdict = "warn";
+    reasons.push(`Too little data: ${input.n} time points, fewer than ${input.minPoints}.`);
+  }
+  return { verdict, reasons, rejected };
+}
+
+// src/decision/hypothesis.ts
+function hypothesisFor(policy, margin, kind) {
+  const better = policy === "superiority";
+  const signed = better ? -margin : margin;
+  const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
+  const base = {
+    baselineFactor: kind === "relative" ? 1 + signed : 1,
+    boundary: kind === "relative" ? 0 : signed
+  };
+  switch (policy) {
+    case "no-regression":
+      return {
+        ...base,
+        rejectWhen: "above",
+        onReject: "fail",
+        nullHypothesis: `the candidate's expected loss is not higher than the baseline's${marginText}`,
+        alternative: `the candidate's expected loss is higher than the baseline's${marginText}`
+      };
+    case "non-inferiority":
+      return {
+        ...base,
+        rejectWhen: "below",
+        onReject: "pass",
+        nullHypothesis: margin === 0 ? "the candidate's expected loss is at least the baseline's" : `the candidate is worse than the baseline by ${describeMargin(margin, kind)} or more`,
+        alternative: margin === 0 ? "the candidate's expected loss is lower than the baseline's" : `the candidate is not worse than the baseline by ${describeMargin(margin, kind)} or more`
+      };
+    case "superiority":
+      return {
+        ...base,
+        rejectWhen: "below",
+        onReject: "pass",
+        nullHypothesis: `the candidate's expected loss is not lower than the baseline's${marginText}`,
+        alternative: `the candidate's expected loss is lower than the baseline's${marginText}`
+      };
+  }
+}
+function describeMargin(margin, kind) {
+  return kind === "relative" ? formatPercent(margin) : `${margin} loss units`;
+}
+function formatPercent(fraction) {
+  return `${Number((fraction * 100).toPrecision(6))}%`;
+}
+
+// src/losses/lossMagnitude.ts
+var MAX_LOSS = 1e100;
+function firstOversizedLoss(values, included = null) {
+  for (let i = 0; i < values.length; i++) {
+    if (included !== null && included[i] === 0) continue;
+    const v = values[i];
+    if (!(Math.abs(v) <= MAX_LOSS)) return i;
+  }
+  return -1;
+}
+
+// src/losses/absoluteError.ts
+function absoluteError(actual, prediction) {
+  return Math.abs(actual - prediction);
+}
+
+// src/losses/absolutePercentageError.ts
+function absolutePercentageError(actual, prediction) {
+  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/intervalCoverage.ts
+function intervalCoverage(actual, lower, upper) {
+  const n = actual.length;
+  if (lower.length !== n || upper.length !== n) {
+    throw new RangeError(
+      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
+    );
+  }
+  if (n === 0) return null;
+  let inside = 0;
+  for (let i = 0; i < n; i++) {
+    const y = actual[i];
+    if (lower[i] <= y && y <= upper[i]) inside++;
+  }
+  return inside / n;
+}
+
+// src/losses/intervalScore.ts
+function intervalScore(actual, lower, upper, alpha) {
+  if (!(alpha > 0 && alpha < 1)) {
+    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
+  }
+  const penalty = 2 / alpha;
+  let score = upper - lower;
+  if (actual < lower) score += penalty * (lower - actual);
+  if (actual > upper) score += penalty * (actual - upper);
+  return score;
+}
+
+// src/losses/pinballLoss.ts
+function pinballLoss(actual, quantile, level) {
+  const u = actual - quantile;
+  return u >= 0 ? level * u : (level - 1) * u;
+}
+
+// src/losses/squaredError.ts
+function squaredError(actual, prediction) {
+  const e = actual - prediction;
+  return e * e;
+}
+
+// src/losses/symmetricAbsolutePercentageError.ts
+function symmetricAbsolutePercentageError(actual, prediction) {
+  const denominator = Math.abs(actual) + Math.abs(prediction);
+  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
+}
+
+// src/losses/rowLosses.ts
+var LossUnavailableError = class extends Error {
+};
+var POINT_LOSSES = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError
+};
+function computeRowLosses(panel, loss, zeroActuals, interval = null) {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === "interval") return intervalLosses(panel, interval);
+  if (loss === "pinball") {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
+      );
+    }
+    const y2 = panel.actual;
+    for (const { level, base: base2, cand: cand2 } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y2[i];
+        baseline[i] += pinballLoss(yi, base2[i], level);
+        candidate[i] += pinballLoss(yi, cand2[i], level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i] /= k;
+      candidate[i] /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level),
+      coverage: null
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows = [];
+  let included = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i];
+    if (loss === "ape" && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === "skip") {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]);
+    candidate[i] = f(yi, cand[i]);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
+}
+function intervalLosses(panel, interval) {
+  if (interval === null) {
+    throw new LossUnavailableError(
+      "the interval loss needs the two quantile levels of the interval"
+    );
+  }
+  const [lowLevel, highLevel] = interval;
+  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
+  const bl = find(panel.baseline.quantiles, lowLevel);
+  const bu = find(panel.baseline.quantiles, highLevel);
+  const cl = find(panel.candidate.quantiles, lowLevel);
+  const cu = find(panel.candidate.quantiles, highLevel);
+  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
+    throw new LossUnavailableError(
+      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
+    );
+  }
+  const alpha = 1 - (highLevel - lowLevel);
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const y = panel.actual;
+  for (let i = 0; i < n; i++) {
+    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
+    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
+  }
+  return {
+    loss: "interval",
+    baseline,
+    candidate,
+    included: null,
+    zeroActualRows: [],
+    levels: [lowLevel, highLevel],
+    coverage: {
+      nominal: highLevel - lowLevel,
+      baseline: intervalCoverage(y, bl, bu),
+      candidate: intervalCoverage(y, cl, cu)
+    }
+  };
+}
+function commonQuantiles(baseline, candidate) {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}
+
+// src/multiplicity/testFamily.ts
+function testFamily(pValues, what) {
+  const positions = [];
+  const values = [];
+  pValues.forEach((p, i) => {
+    if (p === null) return;
+    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
+      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
+    }
+    positions.push(i);
+    values.push(p);
+  });
+  return { positions, values };
+}
+function ascendingOrder(values) {
+  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
+}
+
+// src/multiplicity/benjaminiHochbergAdjust.ts
+function benjaminiHochbergAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  const order = ascendingOrder(values);
+  let running = 1;
+  for (let i = m - 1; i >= 0; i--) {
+    const k = order[i];
+    running = Math.min(running, m / (i + 1) * values[k]);
+    adjusted[positions[k]] = running;
+  }
+  return adjusted;
+}
+
+// src/multiplicity/holmAdjust.ts
+function holmAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "holmAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  let running = 0;
+  ascendingOrder(values).forEach((k, i) => {
+    running = Math.max(running, Math.min(1, (m - i) * values[k]));
+    adjusted[positions[k]] = running;
+  });
+  return adjusted;
+}
+
+// src/decision/verdict.ts
+function worstVerdict(verdicts) {
+  if (verdicts.includes("fail")) return "fail";
+  if (verdicts.includes("warn")) return "warn";
+  return "pass";
+}
+
+// src/integrity/checkResult.ts
+var CHECK_IDS = [
+  "look-ahead",
+  "horizon-steps",
+  "origin-after-actuals",
+  "origin-sets",
+  "path-sets",
+  "horizon-sets",
+  "time-spans",
+  "series-coverage",
+  "fold-purge",
+  "outside-test-window",
+  "exact-predictions"
+];
+var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
+var MAX_EXAMPLES = 5;
+var FindingCollector = class {
+  count = 0;
+  examples = [];
+  add(example) {
+    if (this.count++ < MAX_EXAMPLES) this.examples.push(example());
+  }
+};
+
+// src/integrity/checkPolicy.ts
+function applyCheckPolicy(findings, notRun, mode, frequency) {
+  const checks = findings.map((f) => ({
+    id: f.id,
+    status: statusOf(f, mode),
+    count: f.count,
+    examples: f.examples,
+    summary: f.summary
+  }));
+  const outcome = checks.some((c) => c.status === "fail") ? "fail" : checks.some((c) => c.status === "warn") ? "warn" : "ok";
+  return { mode, outcome, affectsVerdict: mode !== "report", frequency, checks, notRun };
+}
+function statusOf(f, mode) {
+  if (f.count === 0) return "ok";
+  return mode === "enforce" && FAILING_CHECKS.includes(f.id) ? "fail" : "warn";
+}
+function noChecks(mode, reason) {
+  return {
+    mode,
+    outcome: "ok",
+    affectsVerdict: mode !== "report",
+    frequency: null,
+    checks: [],
+    notRun: CHECK_IDS.map((id) => ({ id, reason }))
+  };
+}
+
+// src/settings/defaultConfidence.ts
+function defaultConfidence(alpha) {
+  return Number((1 - 2 * alpha).toPrecision(15));
+}
+function confidenceOverridesDefault(confidence, alpha) {
+  return confidence !== defaultConfidence(alpha);
+}
+
+// src/report/relativeChangeText.ts
+function relativeChangeText(c) {
+  const rc = c.relativeChange;
+  const point = formatSignedPercent(c.relativeDifference);
+  if (rc === null) return point;
+  const pieces = rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }];
+  if (pieces.length === 0) return `${point} \u2205`;
+  return `${point} ${pieces.map(pieceText).join(" \u222A ")}${measuredCoverageText(rc.measuredCoverage)}`;
+}
+function measuredCoverageText(measured) {
+  if (measured === void 0) return "";
+  return ` (measured coverage ${formatNumber(measured.coverage * 100, 2)}%)`;
+}
+function pieceText(p) {
+  const lower = p.lower === null ? "\u2212\u221E" : formatSignedPercent(p.lower);
+  const upper = p.upper === null ? "+\u221E" : formatSignedPercent(p.upper);
+  return `[${lower}, ${upper}]`;
+}
+function intervalNote(report) {
+  const { confidence, alpha } = report.settings;
+  const pct3 = `${formatNumber(confidence * 100, 3)}%`;
+  if (confidenceOverridesDefault(confidence, alpha)) {
+    return `Intervals are ${pct3}, set by --confidence instead of the default 1 \u2212 2\u03B1 = ${formatNumber((1 - 2 * alpha) * 100, 3)}%: the intervals and the tests (\u03B1 = ${alpha} each side) may disagree.`;
+  }
+  const base = `Intervals are ${pct3} (1 \u2212 2\u03B1): each end is a one-sided bound at \u03B1 = ${alpha}. The relative change interval holds the relative margins at which the gate would not reject: a margin below its lower end means evidence of a regression larger than that margin.`;
+  const measured = report.comparisons.flatMap((c) => [
+    c.relativeChange?.measuredCoverage,
+    c.dieboldMariano.interval?.measuredCoverage,
+    c.bootstrap.interval?.measuredCoverage
+  ]).find((m) => m !== void 0);
+  return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
+}
+
+// src/stability/calendarDate.ts
+function calendarDateOf(label) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== "datetime") return null;
+  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
+  const dayNumber = Math.floor(seconds / 86400);
+  return { ...civilFromDays(dayNumber), dayNumber };
+}
+function civilFromDays(days) {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+// src/stability/describeSpan.ts
+function describeSpan(first, last, points, kind) {
+  const a = kind === "datetime" ? calendarDateOf(first) : null;
+  const b = kind === "datetime" ? calendarDateOf(last) : null;
+  if (a !== null && b !== null) {
+    const days = b.dayNumber - a.dayNumber + 1;
+    if (days >= 90) return plural(Math.round(days / 30.44), "month");
+    if (days >= 14) return plural(Math.round(days / 7), "week");
+    if (days >= 2) return plural(days, "day");
+  }
+  return plural(points, "time point");
+}
+function plural(count, unit) {
+  return `${count} ${unit}${count === 1 ? "" : "s"}`;
+}
+
+// src/stability/stabilityFinding.ts
+function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
+  if (stability === null) return { effect: null, headline: "", reasons: [] };
+  const sentences = [];
+  const reasons = [];
+  const recent = stability.recent;
+  const recentWorse = recent !== null && recent.verdict === "fail";
+  if (recent !== null && recentWorse) {
+    const where = recentWords(recent, kind);
+    const change = changeWords(recent);
+    sentences.push(
+      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
+    );
+    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
+    reasons.push(
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
+    );
+  }
+  const f = stability.fluctuation;
+  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
+  if (f !== null && stretchWorse) {
+    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
+    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
+    sentences.push(
+      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+    );
+    reasons.push(
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+    );
+  }
+  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
+  const gate = settings.stabilityGate;
+  const response = gate === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate}).` : gate === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  return {
+    effect: gate === "off" ? null : gate,
+    headline: [...sentences, response].join(" "),
+    reasons
+  };
+}
+function recentWords(c, kind) {
+  const first = c.firstTimestamp ?? "?";
+  const last = c.lastTimestamp ?? "?";
+  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
+}
+function changeWords(c) {
+  const rel = c.relativeDifference;
+  if (rel === null) {
+    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
+  }
+  const rc = c.relativeChange;
+  const shown = `${formatSignedPercent(rel)} mean loss`;
+  if (rc === null) return shown;
+  const single = rc.pieces === void 0 || rc.pieces.length === 1;
+  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
+  if (single && rc.lower !== null && rc.upper !== null) {
+    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
+  }
+  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function splitNote(stability) {
+  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
+}
+function spanWords(span) {
+  return `${span.start} to ${span.end}`;
+}
+
+// src/report/buildReport.ts
+function buildReport(parts) {
+  const { inputs, settings, hypothesis } = parts;
+  const overall = parts.comparisons[0];
+  if (overall === void 0) throw new Error("a report needs the overall comparison");
+  const reasons = [];
+  const verdicts = [overall.verdict];
+  const missing = inputs.rowsDropped.baseline;
+  if (missing > 0) {
+    if (settings.allowMissing) {
+      reasons.push(
+        `The candidate lacks ${missing} rows that the baseline has; allowed by allow-missing, they are left out of the comparison.`
+      );
+    } else {
+      verdicts.push("fail");
+      reasons.push(
+        `The candidate lacks ${missing} rows that the baseline has. A candidate must not pass by skipping hard cases; set allow-missing to compare on the common rows only.`
+      );
+    }
+  }
+  const integrity = parts.integrity ?? noChecks(settings.backtestChecks, "a pre-aggregated loss file has no forecast rows to check");
+  if (integrity.affectsVerdict && integrity.outcome !== "ok") {
+    verdicts.push(integrity.outcome === "fail" ? "fail" : "warn");
+    const which = integrity.checks.filter((c) => c.status === integrity.outcome).map((c) => c.id);
+    reasons.push(
+      integrity.outcome === "fail" ? `A backtest check failed (${which.join(", ")}): the comparison cannot be trusted until the backtest is fixed.` : `A backtest check warns (${which.join(", ")}): look at the backtest checks before trusting the comparison.`
+    );
+  }
+  const stability = parts.stability ?? null;
+  const finding = stabilityFinding(
+    stability,
+    hypothesis,
+    settings,
+    inputs.timestamps.kind,
+    worstVerdict(verdicts)
+  );
+  reasons.push(...finding.reasons);
+  const gateVerdict = worstVerdict(verdicts);
+  const verdict = worstVerdict(finding.effect === null ? verdicts : [...verdicts, finding.effect]);
+  return {
+    tool: { name: "skillgate", version: parts.version },
+    name: settings.name,
+    verdict,
+    headline: [headline(gateVerdict, overall, hypothesis), finding.headline].join(" ").trim(),
+    policy: {
+      policy: settings.policy,
+      agreement: settings.agreement,
+      alpha: settings.alpha,
+      margin: settings.margin,
+      marginKind: settings.marginKind,
+      nullHypothesis: hypothesis.nullHypothesis,
+      alternative: hypothesis.alternative,
+      onReject: hypothesis.onReject,
+      baselineFactor: hypothesis.baselineFactor,
+      boundary: hypothesis.boundary
+    },
+    comparisons: parts.comparisons,
+    inputs,
+    settings,
+    reasons,
+    seriesSummary: parts.seriesSummary ?? null,
+    pathSummary: parts.pathSummary ?? null,
+    integrity,
+    stability
+  };
+}
+function headline(verdict, overall, hypothesis) {
+  const rel = overall.relativeDifference;
+  const change = rel === null ? `mean loss ${overall.meanCandidateLoss} vs ${overall.meanBaselineLoss}` : `mean loss ${rel >= 0 ? "up" : "down"} ${Math.abs(rel * 100).toFixed(2)}% against the baseline`;
+  const tested = `Tested whether ${hypothesis.alternative}, over ${overall.n} time points (${change}).`;
+  switch (verdict) {
+    case "pass":
+      return `${tested} The gate passes.`;
+    case "warn":
+      return `${tested} The evidence is mixed or thin: the gate passes with a warning.`;
+    case "fail":
+      return `${tested} The gate fails.`;
+  }
+}
+
+// src/report/missingRows.ts
+var GROUPS = 50;
+function missingRowsSummary(lacking, losses) {
+  if (lacking === void 0 || lacking.series.length === 0) return null;
+  const n = lacking.series.length;
+  const lossOf = losses.loss === "pinball" || losses.loss === "interval" ? null : POINT_LOSSES[losses.loss];
+  const loss = new Float64Array(n).fill(Number.NaN);
+  let withoutLoss = 0;
+  for (let k = 0; k < n; k++) {
+    const y = lacking.actual[k];
+    const f = lacking.prediction[k];
+    const value = lossOf !== null && Number.isFinite(y) && Number.isFinite(f) ? lossOf(y, f) : Number.NaN;
+    if (Number.isFinite(value)) loss[k] = value;
+    else withoutLoss++;
+  }
+  const group = (keyOf, order) => {
+    const acc = /* @__PURE__ */ new Map();
+    for (let k = 0; k < n; k++) {
+      const key = keyOf(k);
+      const t = lacking.time[k];
+      const g = acc.get(key) ?? { rows: 0, lo: t, hi: t, sum: 0, m: 0 };
+      g.rows++;
+      g.lo = Math.min(g.lo, t);
+      g.hi = Math.max(g.hi, t);
+      if (Number.isFinite(loss[k])) {
+        g.sum += loss[k];
+        g.m++;
+      }
+      acc.set(key, g);
+    }
+    return [...acc.entries()].sort((a, b) => b[1].rows - a[1].rows || order(a[0], b[0])).slice(0, GROUPS).map(([key, g]) => ({
+      key,
+      rows: g.rows,
+      first: lacking.timestamps[g.lo] ?? null,
+      last: lacking.timestamps[g.hi] ?? null,
+      meanBaselineLoss: g.m === 0 ? null : g.sum / g.m
+    }));
+  };
+  const all = group(
+    () => "all",
+    () => 0
+  )[0];
+  let sum = 0;
+  let m = 0;
+  for (let i = 0; i < losses.baseline.length; i++) {
+    if (losses.included !== null && losses.included[i] === 0) continue;
+    sum += losses.baseline[i];
+    m++;
+  }
+  return {
+    rows: n,
+    first: all.first,
+    last: all.last,
+    meanBaselineLoss: all.meanBaselineLoss,
+    meanBaselineLossCommon: m === 0 ? null : sum / m,
+    rowsWithoutLoss: withoutLoss,
+    bySeries: group(
+      (k) => lacking.seriesNames[lacking.series[k]] ?? "",
+      (a, b) => a < b ? -1 : a > b ? 1 : 0
+    ),
+    byHorizon: group(
+      (k) => String(lacking.horizon[k]),
+      (a, b) => Number(a) - Number(b)
+    )
+  };
+}
+
+// src/report/inputsSummary.ts
+function panelInputsSummary(panel, losses) {
+  const horizons = /* @__PURE__ */ new Set();
+  for (let i = 0; i < panel.size; i++) horizons.add(panel.horizon[i]);
+  const ts = panel.timestamps;
+  return {
+    files: panel.coverage.files,
+    rowsMatched: panel.coverage.rowsMatched,
+    rowsDropped: {
+      baseline: panel.coverage.baselineOnly,
+      candidate: panel.coverage.candidateOnly,
+      withoutActual: panel.coverage.withoutActual,
+      actualsUnused: panel.coverage.actualsUnused,
+      skippedByLoss: losses.included === null ? 0 : losses.zeroActualRows.length
+    },
+    examples: {
+      baselineOnly: panel.coverage.examples.baselineOnly,
+      candidateOnly: panel.coverage.examples.candidateOnly
+    },
+    timestamps: {
+      count: ts.length,
+      kind: panel.timestampKind,
+      first: ts[0] ?? null,
+      last: ts.at(-1) ?? null,
+      format: panel.timeFormat,
+      order: panel.timestampKindReason
+    },
+    series: panel.seriesNames.length,
+    horizons: [...horizons].sort((a, b) => a - b),
+    quantileLevels: losses.levels,
+    intervalCoverage: losses.coverage,
+    missingRows: missingRowsSummary(panel.coverage.lacking, losses)
+  };
+}
+function lossFileInputsSummary(file, timestamps, kind, maxHorizon, order = { format: "auto", reason: "" }) {
+  return {
+    files: [file],
+    rowsMatched: file.rows,
+    rowsDropped: {
+      baseline: 0,
+      candidate: 0,
+      withoutActual: 0,
+      actualsUnused: 0,
+      skippedByLoss: 0
+    },
+    examples: { baselineOnly: [], candidateOnly: [] },
+    timestamps: {
+      count: timestamps.length,
+      kind,
+      first: timestamps[0] ?? null,
+      last: timestamps.at(-1) ?? null,
+      format: order.format,
+      order: order.reason
+    },
+    series: 1,
+    horizons: Array.from({ length: maxHorizon }, (_, i) => i + 1).slice(-1),
+    quantileLevels: [],
+    intervalCoverage: null
+  };
+}
+
+// src/scaling/seriesScale.ts
+function scaleFromSum(sum, terms, what) {
+  if (terms === 0) {
+    return { state: "too-short", value: null, terms, note: `the ${what} has no terms` };
+  }
+  const value = sum / terms;
+  if (!Number.isFinite(value)) {
+    throw new RangeError(`the ${what} is ${value}, too large for double precision`);
+  }
+  if (value === 0) {
+    return {
+      state: "zero",
+      value: null,
+      terms,
+      note: `the ${what} is 0 over ${terms} term${terms === 1 ? "" : "s"}, so it cannot scale`
+    };
+  }
+  return { state: "ok", value, terms, note: null };
+}
+
+// src/scaling/baselineMeanLossScale.ts
+function baselineMeanLossScale(seriesNames, series, baselineLoss, included = null) {
+  const n = series.length;
+  if (baselineLoss.length !== n || included !== null && included.length !== n) {
+    throw new RangeError(
+      `baselineMeanLossScale: ${n} series indices, ${baselineLoss.length} losses` + (included === null ? "" : `, ${included.length} inclusion flags`)
+    );
+  }
+  const k = seriesNames.length;
+  const sum = new Float64Array(k);
+  const count = new Int32Array(k);
+  for (let i = 0; i < n; i++) {
+    if (included !== null && included[i] === 0) continue;
+    const s = series[i];
+    if (!(s >= 0 && s < k)) {
+      throw new RangeError(
+        `baselineMeanLossScale: row ${i + 1} has series index ${s}, not 0..${k - 1}`
+      );
+    }
+    const loss = baselineLoss[i];
+    if (!(loss >= 0 && Number.isFinite(loss))) {
+      throw new RangeError(`baselineMeanLossScale: row ${i + 1} has baseline loss ${loss}`);
+    }
+    sum[s] += loss;
+    count[s]++;
+  }
+  const scales = /* @__PURE__ */ new Map();
+  seriesNames.forEach((name, s) => {
+    scales.set(name, scaleFromSum(sum[s], count[s], "mean baseline loss"));
+  });
+  return scales;
+}
+
+// src/scaling/scaleLossesBySeries.ts
+function scaleLossesBySeries(seriesNames, series, baseline, candidate, scales) {
+  const n = series.length;
+  if (baseline.length !== n || candidate.length !== n) {
+    throw new RangeError(
+      `scaleLossesBySeries: ${n} series indices, ${baseline.length} baseline and ${candidate.length} candidate losses`
+    );
+  }
+  const k = seriesNames.length;
+  const used = new Uint8Array(k);
+  for (let i = 0; i < n; i++) {
+    const s = series[i];
+    if (!(s >= 0 && s < k)) {
+      throw new RangeError(
+        `scaleLossesBySeries: row ${i + 1} has series index ${s}, not 0..${k - 1}`
+      );
+    }
+    used[s] = 1;
+  }
+  const divisor = new Float64Array(k);
+  const missing = [];
+  seriesNames.forEach((name, s) => {
+    if (used[s] === 0) return;
+    const scale = scales.get(name);
+    if (scale === void 0) {
+      missing.push({ series: name, state: "absent", note: "no scale was given for this series" });
+    } else if (scale.state !== "ok" || scale.value === null) {
+      const state = scale.state === "ok" ? "zero" : scale.state;
+      missing.push({ series: name, state, note: scale.note ?? "the scale is not usable" });
+    } else {
+      divisor[s] = scale.value;
+    }
+  });
+  if (missing.length > 0) return { state: "unavailable", missing };
+  const scaledBaseline = new Float64Array(n);
+  const scaledCandidate = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const c = divisor[series[i]];
+    scaledBaseline[i] = baseline[i] / c;
+    scaledCandidate[i] = candidate[i] / c;
+  }
+  return { state: "ok", baseline: scaledBaseline, candidate: scaledCandidate };
+}
+
+// src/scaling/seasonalNaiveScale.ts
+function seasonalNaiveScaleOf(history, period, loss) {
+  if (!Number.isInteger(period) || period < 1) {
+    throw new RangeError(`seasonalNaiveScale: the period must be an integer \u2265 1, got ${period}`);
+  }
+  const n = history.length;
+  for (let t = 0; t < n; t++) {
+    if (!Number.isFinite(history[t])) {
+      throw new RangeError(`seasonalNaiveScale: value ${t + 1} is ${history[t]}, not finite`);
+    }
+  }
+  let sum = 0;
+  for (let t = period; t < n; t++) {
+    const e = history[t] - history[t - period];
+    sum += loss === "absolute" ? Math.abs(e) : e * e;
+  }
+  const what = loss === "absolute" ? `mean absolute seasonal naive error (period ${period})` : `mean squared seasonal naive error (period ${period})`;
+  return scaleFromSum(sum, Math.max(0, n - period), what);
+}
+function seasonalNaiveScale(histories, period, loss) {
+  const scales = /* @__PURE__ */ new Map();
+  for (const [name, history] of histories) {
+    try {
+      scales.set(name, seasonalNaiveScaleOf(history, period, loss));
+    } catch (error) {
+      if (error instanceof RangeError) {
+        throw new RangeError(`series ${JSON.stringify(name)}: ${error.message}`);
+      }
+      throw error;
+    }
+  }
+  return scales;
+}
+
+// src/statistics/mean.ts
+function mean(x) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("mean: the series is empty");
+  let sum = 0;
+  for (let t = 0; t < n; t++) sum += x[t];
+  const first = sum / n;
+  let residual = 0;
+  for (let t = 0; t < n; t++) residual += x[t] - first;
+  return first + residual / n;
+}
+
+// src/statistics/autocovariance.ts
+function autocovariances(x, maxLag) {
+  const n = x.length;
+  if (n === 0) throw new RangeError("autocovariances: the series is empty");
+  if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
+    throw new RangeError(
+      `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
+    );
+  }
+  const centre2 = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) {
+    let sum = 0;
+    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
+    gamma[k] = sum / n;
+  }
+  return gamma;
+}
+
+// src/statistics/bartlettLongRunVariance.ts
+function bartlettLongRunVariance(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
+  return sum;
+}
+
+// src/statistics/neweyWestLag.ts
+function neweyWestBandwidth(x) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
+  const pilotLag = Math.min(Math.floor(4 * (n / 100) ** (2 / 9)), n - 1);
+  const sigma = autocovariances(x, pilotLag);
+  let sum = 0;
+  let weighted = 0;
+  for (let j = 1; j <= pilotLag; j++) {
+    sum += sigma[j];
+    weighted += j * sigma[j];
+  }
+  const s0 = sigma[0] + 2 * sum;
+  const s1 = 2 * weighted;
+  const bandwidth = s0 === 0 ? 0 : 1.1447 * ((s1 / s0) ** 2) ** (1 / 3) * n ** (1 / 3);
+  return { pilotLag, s0, s1, bandwidth };
+}
+function selectLag(x, rule, horizon) {
+  const n = x.length;
+  if (n < 2) throw new RangeError(`selectLag: needs at least 2 values, got ${n}`);
+  if (!Number.isInteger(horizon) || horizon < 1) {
+    throw new RangeError(`selectLag: the horizon must be an integer \u2265 1, got ${horizon}`);
+  }
+  const notes = [];
+  const cap = (lag, what) => {
+    if (lag <= n - 1) return lag;
+    notes.push(`The ${what} ${lag} exceeds n \u2212 1 = ${n - 1}; lag ${n - 1} was used instead.`);
+    return n - 1;
+  };
+  switch (rule.kind) {
+    case "auto": {
+      const bandwidth = neweyWestBandwidth(x);
+      let lag = Math.floor(bandwidth.bandwidth);
+      if (bandwidth.s0 === 0) {
+        notes.push("The Newey\u2013West pilot sum s0 is 0, so the automatic bandwidth is taken as 0.");
+      }
+      if (lag < horizon - 1) {
+        notes.push(
+          `The automatic lag \u230A${bandwidth.bandwidth.toPrecision(6)}\u230B = ${lag} is below h \u2212 1 = ${horizon - 1} for horizon ${horizon}; lag ${horizon - 1} was used.`
+        );
+        lag = horizon - 1;
+      }
+      return { lag: cap(lag, "automatic lag"), rule: "auto", bandwidth, notes };
+    }
+    case "horizon":
+      return { lag: cap(horizon - 1, "lag h \u2212 1 ="), rule: "horizon", notes };
+    case "fixed": {
+      if (!Number.isInteger(rule.lag) || rule.lag < 0) {
+        throw new RangeError(`selectLag: a fixed lag must be an integer \u2265 0, got ${rule.lag}`);
+      }
+      if (rule.lag < horizon - 1) {
+        notes.push(
+          `The fixed lag ${rule.lag} is below h \u2212 1 = ${horizon - 1}; h-step forecast errors are usually correlated up to lag h \u2212 1, so the variance may be understated.`
+        );
+      }
+      return { lag: cap(rule.lag, "fixed lag"), rule: "fixed", notes };
+    }
+  }
+}
+
+// src/statistics/prewhitenedLongRunVariance.ts
+var PREWHITENING_CAP = 0.97;
+function prewhitenedLongRunVariance(y, rule, horizon) {
+  const n = y.length;
+  if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
+  const centre2 = mean(y);
+  let cross = 0;
+  let square = 0;
+  for (let t = 1; t < n; t++) {
+    const previous = y[t - 1] - centre2;
+    cross += (y[t] - centre2) * previous;
+    square += previous * previous;
+  }
+  const raw = square === 0 ? 0 : cross / square;
+  const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
+  const residuals = new Float64Array(n - 1);
+  for (let t = 1; t < n; t++) {
+    residuals[t - 1] = y[t] - centre2 - coefficient * (y[t - 1] - centre2);
+  }
+  const lag = selectLag(residuals, rule, horizon).lag;
+  const recolour = (1 - coefficient) ** 2;
+  return {
+    longRunVariance: bartlettLongRunVariance(residuals, lag) / recolour,
+    coefficient,
+    lag
+  };
+}
+
+// src/stability/fluctuationCriticalValues.ts
+var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var TABLE = {
+  two: [
+    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
+    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
+    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
+  ],
+  one: [
+    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
+    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
+    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
+  ]
+};
+function fluctuationCriticalValue(mu, alpha, sides) {
+  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
+  const columns = TABLE[sides];
+  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
+  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
+  for (let i = 0; i + 1 < columns.length; i++) {
+    const lo2 = columns[i];
+    const hi2 = columns[i + 1];
+    if (alpha > lo2.alpha && alpha < hi2.alpha) {
+      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
+      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
+    }
+  }
+  return null;
+}
+function interpolateInMu(values, mu) {
+  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
+  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
+  const w = Math.min(Math.max(position - i, 0), 1);
+  return (1 - w) * values[i] + w * values[i + 1];
+}
+
+// src/stability/rollingStatistic.ts
+function rollingStatistic(d, m, longRunVariance) {
+  const n = d.length;
+  if (!Number.isInteger(m) || m < 1 || m > n) {
+    throw new RangeError(`rollingStatistic: window ${m} must be an integer in 1..${n}`);
+  }
+  if (!(longRunVariance > 0)) {
+    throw new RangeError(
+      `rollingStatistic: the long-run variance must be > 0, got ${longRunVariance}`
+    );
+  }
+  const scale = 1 / Math.sqrt(m * longRunVariance);
+  const out = new Float64Array(n - m + 1);
+  let sum = 0;
+  for (let k = 0; k <= n - m; k++) {
+    if (k % 1024 === 0) {
+      sum = 0;
+      for (let j = k; j < k + m; j++) sum += d[j];
+    } else {
+      sum += d[k + m - 1] - d[k - 1];
+    }
+    out[k] = sum * scale;
+  }
+  return out;
+}
+
+// src/stability/fluctuationTest.ts
+var FLUCTUATION_MIN_POINTS = 20;
+function fluctuationTest(d, options) {
+  const n = d.length;
+  if (n < FLUCTUATION_MIN_POINTS) return null;
+  const criticalValue = fluctuationCriticalValue(options.mu, options.alpha, options.sides);
+  if (criticalValue === null) return null;
+  const windowSize = Math.round(options.mu * n);
+  if (windowSize < 2) return null;
+  const { longRunVariance, lag } = prewhitenedLongRunVariance(d, options.lag, options.horizon);
+  if (!(longRunVariance > 0)) return null;
+  const path2 = rollingStatistic(d, windowSize, longRunVariance);
+  let peakWindow = 0;
+  let statistic = Number.NEGATIVE_INFINITY;
+  for (let k = 0; k < path2.length; k++) {
+    const value = options.sides === "one" ? path2[k] : Math.abs(path2[k]);
+    if (value > statistic) {
+      statistic = value;
+      peakWindow = k;
+    }
+  }
+  const worseRuns = [];
+  for (let k = 0; k < path2.length; k++) {
+    if (!(path2[k] > criticalValue)) continue;
+    const from = k;
+    const to = k + windowSize - 1;
+    const last = worseRuns.at(-1);
+    if (last !== void 0 && from <= last[1] + 1) last[1] = to;
+    else worseRuns.push([from, to]);
+  }
+  return {
+    statistic,
+    criticalValue,
+    windowSize,
+    rejected: statistic > criticalValue,
+    peakWindow,
+    worseRuns,
+    lag,
+    longRunVariance,
+    path: path2
+  };
+}
+
+// src/stability/periodBuckets.ts
+var MIN_PERIODS = 8;
+var MAX_PERIODS = 60;
+var POINTS_PER_BUCKET = 10;
+var CALENDAR_UNITS = [
+  "day",
+  "week",
+  "month",
+  "quarter"
+];
+function periodBuckets(labels, kind) {
+  const n = labels.length;
+  if (kind === "datetime" && n > 0) {
+    const dates = labels.map(calendarDateOf);
+    if (dates.every((d) => d !== null)) {
+      for (const unit of CALENDAR_UNITS) {
+        const bounds = calendarBounds(dates, unit);
+        const count = bounds.length - 1;
+        if (count > MAX_PERIODS) continue;
+        if (count >= MIN_PERIODS) return { unit, bounds };
+        break;
+      }
+    }
+  }
+  return { unit: "equal-count", bounds: equalCountBounds(n) };
+}
+function calendarKey(date, unit) {
+  switch (unit) {
+    case "day":
+      return date.dayNumber;
+    case "week":
+      return Math.floor((date.dayNumber + 3) / 7);
+    case "month":
+      return date.year * 12 + date.month - 1;
+    case "quarter":
+      return date.year * 4 + Math.floor((date.month - 1) / 3);
+  }
+}
+function calendarBounds(dates, unit) {
+  const bounds = [];
+  let previous = null;
+  dates.forEach((date, t) => {
+    const key = calendarKey(date, unit);
+    if (key !== previous) bounds.push(t);
+    previous = key;
+  });
+  bounds.push(dates.length);
+  return bounds;
+}
+function equalCountBounds(n) {
+  if (n === 0) return [0];
+  const k = Math.min(
+    n,
+    Math.max(MIN_PERIODS, Math.min(MAX_PERIODS, Math.ceil(n / POINTS_PER_BUCKET)))
+  );
+  const bounds = [];
+  for (let j = 0; j <= k; j++) bounds.push(Math.floor(j * n / k));
+  return bounds;
+}
+
+// src/stability/periodBreakdown.ts
+function periodBreakdown(series, timestamps, kind) {
+  const labels = Array.from(series.time, (t) => timestamps[t] ?? String(t));
+  const buckets = periodBuckets(labels, kind);
+  const periods = [];
+  for (let j = 0; j + 1 < buckets.bounds.length; j++) {
+    const from = buckets.bounds[j];
+    const to = buckets.bounds[j + 1];
+    if (to <= from) continue;
+    const meanBaselineLoss = mean(series.baseline.subarray(from, to));
+    const meanCandidateLoss = mean(series.candidate.subarray(from, to));
+    periods.push({
+      start: labels[from],
+      end: labels[to - 1],
+      n: to - from,
+      meanBaselineLoss,
+      meanCandidateLoss,
+      relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1
+    });
+  }
+  return { buckets, periods };
+}
+
+// src/decision/decideComparison.ts
+function decideComparison(input) {
+  const { hypothesis, alpha } = input;
+  const reasons = [];
+  if (input.identicalLosses) {
+    const verdict2 = hypothesis.rejectWhen === "below" && hypothesis.boundary < 0 ? "fail" : "pass";
+    reasons.push(
+      verdict2 === "pass" ? "The candidate has exactly the same loss as the baseline on every row." : "The candidate has exactly the same loss as the baseline on every row, so it cannot be better by the margin."
+    );
+    return { verdict: verdict2, reasons, rejected: { dieboldMariano: null, bootstrap: null } };
+  }
+  const rejects = (e) => {
+    if (e.state === "zero-variance" || e.state === "identical") {
+      const gap = e.mean - hypothesis.boundary;
+      return hypothesis.rejectWhen === "above" ? gap > 0 : gap < 0;
+    }
+    if (e.pValue === null) return null;
+    return e.pValue <= alpha;
+  };
+  const dm = rejects(input.dieboldMariano);
+  const bs = rejects(input.bootstrap);
+  const rejected = { dieboldMariano: dm, bootstrap: bs };
+  const tests = [
+    { e: input.dieboldMariano, r: dm },
+    { e: input.bootstrap, r: bs }
+  ];
+  for (const { e, r } of tests) reasons.push(describeTest(e, r, alpha, hypothesis));
+  const onReject = hypothesis.onReject;
+  const onKeep = onReject === "fail" ? "pass" : "fail";
+  let verdict;
+  const considered = input.agreement === "dm" ? [dm] : input.agreement === "bootstrap" ? [bs] : [dm, bs];
+  const known = considered.filter((r) => r !== null);
+  if (known.length === 0) {
+    verdict = "warn";
+    reasons.push("No test could be computed, so there is no evidence either way.");
+  } else if (input.agreement === "either") {
+    verdict = known.includes(true) ? onReject : onKeep;
+  } else if (known.length < considered.length) {
+    verdict = known[0] ? onReject : onKeep;
+    reasons.push("Only one test could be computed; the verdict rests on it alone.");
+  } else if (known.every((r) => r)) {
+    verdict = onReject;
+  } else if (known.every((r) => !r)) {
+    verdict = onKeep;
+  } else {
+    verdict = "warn";
+    reasons.push("The two tests disagree, so the gate asks a person to look (agreement: both).");
+  }
+  if (input.n < input.minPoints) {
+    reasons.push(
+      `Too little data: ${input.n} time points, fewer than the ${input.minPoints} required for a firm verdict.`
+    );
+    verdict = input.shortData;
+  }
+  return { verdict, reasons, rejected };
+}
+function describeTest(e, rejected, alpha, hypothesis) {
+  if (rejected === null) return `${e.label}: could not be computed (${e.state}).`;
+  if (e.state === "zero-variance" || e.state === "identical") {
+    return `${e.label}: the differential is constant, so its sign decides: ${rejected ? "evidence that" : "no evidence that"} ${hypothesis.alternative}.`;
+  }
+  const text = formatPValue(e.pValue);
+  const p = /^[<>]/.test(text) ? `p ${text}` : `p = ${text}`;
+  return rejected ? `${e.label}: ${p} \u2264 \u03B1 = ${alpha}: evidence that ${hypothesis.alternative}.` : `${e.label}: ${p} > \u03B1 = ${alpha}: no evidence that ${hypothesis.alternative}.`;
+}
+
+// src/intervals/measuredCoverage.ts
+var STUDIED_LEVEL = 0.9;
+var WORST_COVERAGE = {
+  relativeChange: [
+    [50, 0.865],
+    [100, 0.887],
+    [200, 0.878],
+    [500, 0.878]
+  ],
+  dieboldMarianoDifference: [
+    [50, 0.826],
+    [100, 0.842],
+    [200, 0.851],
+    [500, 0.866]
+  ],
+  bootstrapDifference: [
+    [50, 0.618],
+    [100, 0.718],
+    [200, 0.748],
+    [500, 0.802]
+  ]
+};
+function measuredCoverage(kind, n, level) {
+  if (level !== STUDIED_LEVEL) return null;
+  const rows = WORST_COVERAGE[kind];
+  let chosen = rows[0];
+  for (const row of rows) if (row[0] <= n) chosen = row;
+  const [studiedN, coverage] = chosen;
+  return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
+}
+
+// src/statistics/bootstrap/basicBootstrapInference.ts
+function tailProbability(level) {
+  return Number((1 - level).toPrecision(15));
+}
+function tailOrderStatistic(tail, resamples) {
+  const denominator = resamples + 1;
+  let k = Math.min(resamples, Math.max(0, Math.floor(tail * denominator)));
+  while (k < resamples && (k + 1) / denominator <= tail) k++;
+  while (k > 0 && k / denominator > tail) k--;
+  return k;
+}
+function minimumResamples(level) {
+  const alpha = tailProbability(level);
+  let resamples = Math.max(1, Math.floor(2 / alpha) - 1);
+  while (tailOrderStatistic(alpha / 2, resamples) < 1) resamples++;
+  while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
+  return resamples;
+}
+function basicBootstrapInference(reflectedSorted, margin, level) {
+  const resamples = reflectedSorted.length;
+  const alpha = tailProbability(level);
+  const kTwo = tailOrderStatistic(alpha / 2, resamples);
+  const kOne = tailOrderStatistic(alpha, resamples);
+  if (kTwo < 1) {
+    throw new RangeError(
+      `${resamples} resamples are too few for a ${level} interval (need at least ${minimumResamples(level)})`
+    );
+  }
+  let atOrBelow = 0;
+  let atOrAbove = 0;
+  for (let b = 0; b < resamples; b++) {
+    const u = reflectedSorted[b];
+    if (u <= margin) atOrBelow++;
+    if (u >= margin) atOrAbove++;
+  }
+  const pValue2 = (1 + atOrBelow) / (resamples + 1);
+  const pAbove = (1 + atOrAbove) / (resamples + 1);
+  return {
+    interval: {
+      level,
+      lower: reflectedSorted[kTwo - 1],
+      upper: reflectedSorted[resamples - kTwo]
+    },
+    oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
+    pValue: pValue2,
+    pValueBelow: pAbove,
+    pValueTwoSided: Math.min(1, 2 * Math.min(pValue2, pAbove))
+  };
+}
+
+// src/intervals/intervalSet.ts
+var lo = (p) => p.lower ?? Number.NEGATIVE_INFINITY;
+var hi = (p) => p.upper ?? Number.POSITIVE_INFINITY;
+var piece = (lower, upper) => ({
+  lower: lower === Number.NEGATIVE_INFINITY ? null : lower,
+  upper: upper === Number.POSITIVE_INFINITY ? null : upper
+});
+function normaliseSet(pieces) {
+  const sorted = pieces.filter((p) => lo(p) <= hi(p)).sort((a, b) => lo(a) - lo(b));
+  const out = [];
+  for (const p of sorted) {
+    const last = out[out.length - 1];
+    if (last !== void 0 && lo(p) <= last.upper) last.upper = Math.max(last.upper, hi(p));
+    else out.push({ lower: lo(p), upper: hi(p) });
+  }
+  return out.map((p) => piece(p.lower, p.upper));
+}
+function unionOfSets(a, b) {
+  return normaliseSet([...a, ...b]);
+}
+function intersectionOfSets(a, b) {
+  const out = [];
+  for (const p of a) {
+    for (const q of b) {
+      const lower = Math.max(lo(p), lo(q));
+      const upper = Math.min(hi(p), hi(q));
+      if (lower <= upper) out.push(piece(lower, upper));
+    }
+  }
+  return normaliseSet(out);
+}
+function hullOfSet(set) {
+  const first = set[0];
+  const last = set[set.length - 1];
+  if (first === void 0 || last === void 0) return null;
+  return { lower: first.lower, upper: last.upper };
+}
+function complementOfSet(set) {
+  const out = [];
+  let from = Number.NEGATIVE_INFINITY;
+  for (const p of normaliseSet(set)) {
+    if (lo(p) > from) out.push(piece(from, lo(p)));
+    from = hi(p);
+  }
+  if (from < Number.POSITIVE_INFINITY) out.push(piece(from, Number.POSITIVE_INFINITY));
+  return out;
+}
+
+// src/intervals/bootstrapMarginSet.ts
+function bootstrapMarginSet(input) {
+  const { meanD, meanB, deviationsD, deviationsB, tail } = input;
+  const resamples = deviationsD.length;
+  const k = tailOrderStatistic(tail, resamples);
+  const rising = [];
+  const falling = [];
+  let flatBelow = 0;
+  let flatAbove = 0;
+  for (let b = 0; b < resamples; b++) {
+    const a = meanD - deviationsD[b];
+    const c = meanB - deviationsB[b];
+    if (c > 0) rising.push(a / c);
+    else if (c < 0) falling.push(a / c);
+    else {
+      if (a <= 0) flatBelow++;
+      if (a >= 0) flatAbove++;
+    }
+  }
+  const up = Float64Array.from(rising).sort();
+  const down = Float64Array.from(falling).sort();
+  const accepted = (r) => {
+    const upAtOrBelow = countAtOrBelow(up, r);
+    const upAtOrAbove = up.length - countBelow(up, r);
+    const downAtOrBelow = countAtOrBelow(down, r);
+    const downAtOrAbove = down.length - countBelow(down, r);
+    const nonPositive = flatBelow + upAtOrBelow + downAtOrAbove;
+    const nonNegative = flatAbove + upAtOrAbove + downAtOrBelow;
+    return nonPositive >= k && nonNegative >= k;
+  };
+  if (up.length === 0 && down.length === 0) {
+    return accepted(0) ? [{ lower: null, upper: null }] : [];
+  }
+  const points = Float64Array.from([...up, ...down]).sort();
+  const unique = [];
+  for (const p of points) if (unique[unique.length - 1] !== p) unique.push(p);
+  const pieces = [];
+  let open2;
+  const close = (upper) => {
+    if (open2 !== void 0) pieces.push({ lower: open2, upper });
+    open2 = void 0;
+  };
+  const m = unique.length;
+  if (accepted(unique[0] - 1 - Math.abs(unique[0]))) open2 = null;
+  for (let i = 0; i < m; i++) {
+    const p = unique[i];
+    if (accepted(p)) {
+      if (open2 === void 0) open2 = p;
+    } else {
+      close(p);
+    }
+    const next = unique[i + 1];
+    const between = next === void 0 ? p + 1 + Math.abs(p) : p + (next - p) / 2;
+    if (accepted(between)) {
+      if (open2 === void 0) open2 = p;
+    } else {
+      close(p);
+    }
+  }
+  close(null);
+  return normaliseSet(pieces);
+}
+function countAtOrBelow(sorted, r) {
+  let lo2 = 0;
+  let hi2 = sorted.length;
+  while (lo2 < hi2) {
+    const mid = lo2 + hi2 >>> 1;
+    if (sorted[mid] <= r) lo2 = mid + 1;
+    else hi2 = mid;
+  }
+  return lo2;
+}
+function countBelow(sorted, r) {
+  let lo2 = 0;
+  let hi2 = sorted.length;
+  while (lo2 < hi2) {
+    const mid = lo2 + hi2 >>> 1;
+    if (sorted[mid] < r) lo2 = mid + 1;
+    else hi2 = mid;
+  }
+  return lo2;
+}
+
+// src/statistics/distributions.ts
+var import_stats_base_dists_normal_cdf = __toESM(require_lib57(), 1);
+var import_stats_base_dists_normal_quantile = __toESM(require_lib62(), 1);
+var import_stats_base_dists_t_cdf = __toESM(require_lib129(), 1);
+var import_stats_base_dists_t_quantile = __toESM(require_lib139(), 1);
+function standardNormalUpperTail(x) {
+  return (0, import_stats_base_dists_normal_cdf.default)(-x, 0, 1);
+}
+function standardNormalTwoSided(x) {
+  return Math.min(1, 2 * (0, import_stats_base_dists_normal_cdf.default)(-Math.abs(x), 0, 1));
+}
+function standardNormalQuantile(p) {
+  return (0, import_stats_base_dists_normal_quantile.default)(p, 0, 1);
+}
+function studentTUpperTail(x, degreesOfFreedom) {
+  return (0, import_stats_base_dists_t_cdf.default)(-x, degreesOfFreedom);
+}
+function studentTTwoSided(x, degreesOfFreedom) {
+  return Math.min(1, 2 * (0, import_stats_base_dists_t_cdf.default)(-Math.abs(x), degreesOfFreedom));
+}
+function studentTQuantile(p, degreesOfFreedom) {
+  return (0, import_stats_base_dists_t_quantile.default)(p, degreesOfFreedom);
+}
+
+// src/statistics/ewcLongRunVariance.ts
+function ewcDegreesOfFreedom(n) {
+  return Math.max(2, Math.round(0.4 * n ** (2 / 3)));
+}
+function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length)) {
+  const n = x.length;
+  const nu = degreesOfFreedom;
+  if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
+    throw new RangeError(
+      `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
+    );
+  }
+  const centre2 = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
+  const cosTable = new Float64Array(n + 1);
+  for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
+  const period = 4 * n;
+  const half = 2 * n;
+  let sumOfSquares = 0;
+  for (let j = 1; j <= nu; j++) {
+    const step = 2 * j % period;
+    let k = j % period;
+    let lambda = 0;
+    for (let t = 0; t < n; t++) {
+      const r = k > half ? period - k : k;
+      const c = r > n ? -cosTable[half - r] : cosTable[r];
+      lambda += c * u[t];
+      k += step;
+      if (k >= period) k -= period;
+    }
+    lambda *= Math.sqrt(2 / n);
+    sumOfSquares += lambda * lambda;
+  }
+  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+}
+
+// src/statistics/harveyLeybourneNewbold.ts
+function harveyLeybourneNewboldFactor(n, horizon) {
+  if (!(horizon < n)) return null;
+  return Math.sqrt((n - horizon) * (n - horizon + 1)) / n;
+}
+function harveyLeybourneNewbold(statistic, n, horizon) {
+  const factor = harveyLeybourneNewboldFactor(n, horizon);
+  if (factor === null) return null;
+  const corrected = statistic * factor;
+  const degreesOfFreedom = n - 1;
+  return {
+    statistic: corrected,
+    pValue: studentTUpperTail(corrected, degreesOfFreedom),
+    pValueTwoSided: studentTTwoSided(corrected, degreesOfFreedom),
+    degreesOfFreedom
+  };
+}
+
+// src/statistics/varianceTolerance.ts
+function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
+  return !(longRunVariance > n * Number.EPSILON * gamma0);
+}
+
+// src/statistics/uniformLongRunVariance.ts
+function uniformWeightSum(x, lag) {
+  const gamma = autocovariances(x, lag);
+  let sum = gamma[0];
+  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
+  return sum;
+}
+function uniformLongRunVariance(x, lag) {
+  const uniformValue = uniformWeightSum(x, lag);
+  const gamma0 = autocovariances(x, 0)[0];
+  if (!isEffectivelyNonPositive(uniformValue, gamma0, x.length)) {
+    return { value: uniformValue, estimator: "uniform", lag, uniformValue, note: null };
+  }
+  const value = bartlettLongRunVariance(x, lag);
+  return {
+    value,
+    estimator: "bartlett",
+    lag,
+    uniformValue,
+    note: `The uniform-weight long-run variance at lag ${lag} is not positive (${uniformValue.toPrecision(6)}), so the Bartlett (Newey\u2013West) weights were used instead, with the same lag ${lag}.`
+  };
+}
+
+// src/intervals/fiellerSet.ts
+function fiellerSet(input) {
+  const { meanD, meanB, varDD, varDB, varBB, critical } = input;
+  const c2 = critical * critical;
+  const a = meanB * meanB - c2 * varBB;
+  const b = meanD * meanB - c2 * varDB;
+  const e = meanD * meanD - c2 * varDD;
+  const discriminant = b * b - a * e;
+  if (a === 0) {
+    if (b > 0) return [{ lower: e / (2 * b), upper: null }];
+    if (b < 0) return [{ lower: null, upper: e / (2 * b) }];
+    return e <= 0 ? [{ lower: null, upper: null }] : [];
+  }
+  if (discriminant < 0) return a > 0 ? [] : [{ lower: null, upper: null }];
+  const root = Math.sqrt(discriminant);
+  const q = b + (b >= 0 ? root : -root);
+  const r1 = q / a;
+  const r2 = q === 0 ? 0 : e / q;
+  const small = Math.min(r1, r2);
+  const large = Math.max(r1, r2);
+  if (a > 0) return [{ lower: small, upper: large }];
+  return normaliseSet([
+    { lower: null, upper: small },
+    { lower: large, upper: null }
+  ]);
+}
+
+// src/intervals/longRunCovariance.ts
+function longRunCovariance(d, b, sum, variance) {
+  const dd = variance(d);
+  const bb = variance(b);
+  const ss = variance(sum);
+  return { dd, bb, db: (ss - dd - bb) / 2 };
+}
+
+// src/intervals/dieboldMarianoMarginSet.ts
+function dieboldMarianoMarginSet(input) {
+  const { candidate, baseline, horizon, tail } = input;
+  const n = baseline.length;
+  if (n < 3) return null;
+  const d = new Float64Array(n);
+  for (let t = 0; t < n; t++) d[t] = candidate[t] - baseline[t];
+  let estimator = input.estimator;
+  let critical;
+  const meanD = mean(d);
+  const meanB = mean(baseline);
+  const fieller = (v) => fiellerSet({ meanD, meanB, varDD: v.dd / n, varDB: v.db / n, varBB: v.bb / n, critical });
+  let covariance;
+  let set;
+  if (estimator === "ewc" || estimator === "ewc-ar1") {
+    const nu = input.degreesOfFreedom;
+    if (nu === null) return null;
+    covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
+    critical = studentTQuantile(1 - tail, nu);
+    if (!finite(covariance)) return null;
+    set = fieller(covariance);
+  } else {
+    const lag = selectLag(d, input.lag, horizon).lag;
+    const factor = harveyLeybourneNewboldFactor(n, horizon);
+    critical = factor === null ? standardNormalQuantile(1 - tail) : studentTQuantile(1 - tail, n - 1) / factor;
+    const bartlett = longRunCovariance(
+      d,
+      baseline,
+      candidate,
+      (x) => bartlettLongRunVariance(x, lag)
+    );
+    if (!finite(bartlett)) return null;
+    covariance = bartlett;
+    set = fieller(bartlett);
+    if (estimator === "uniform") {
+      const uniform = longRunCovariance(d, baseline, candidate, (x) => uniformWeightSum(x, lag));
+      if (!finite(uniform)) return null;
+      const gamma0 = longRunCovariance(
+        d,
+        baseline,
+        candidate,
+        (x) => bartlettLongRunVariance(x, 0)
+      );
+      const tolerance = n * Number.EPSILON;
+      const positive = complementOfSet(
+        fiellerSet({
+          meanD: 0,
+          meanB: 0,
+          varDD: tolerance * gamma0.dd - uniform.dd,
+          varDB: tolerance * gamma0.db - uniform.db,
+          varBB: tolerance * gamma0.bb - uniform.bb,
+          critical: 1
+        })
+      );
+      if (positive.length === 0) estimator = "bartlett";
+      else {
+        covariance = uniform;
+        set = unionOfSets(
+          intersectionOfSets(fieller(uniform), positive),
+          intersectionOfSets(set, complementOfSet(positive))
+        );
+      }
+    }
+  }
+  return { set, estimator, critical, covariance };
+}
+function finite(v) {
+  return Number.isFinite(v.dd) && Number.isFinite(v.db) && Number.isFinite(v.bb);
+}
+
+// src/intervals/relativeChange.ts
+function relativeChange(input) {
+  const { series, settings } = input;
+  const n = series.baseline.length;
+  if (n === 0) return null;
+  const meanB = mean(series.baseline);
+  if (!(meanB > 0)) return null;
+  const estimate = mean(series.candidate) / meanB - 1;
+  const level = settings.confidence;
+  const tail = tailProbability(level) / 2;
+  let dm = null;
+  if (input.dieboldMariano.state === "ok") {
+    const found = dieboldMarianoMarginSet({
+      candidate: series.candidate,
+      baseline: series.baseline,
+      estimator: settings.variance,
+      lag: settings.lag,
+      degreesOfFreedom: input.dieboldMariano.degreesOfFreedom,
+      horizon: series.maxHorizon,
+      tail
+    });
+    if (found !== null) dm = { set: found.set, method: `Fieller (${found.estimator})` };
+  }
+  let bs = null;
+  const deviations = input.bootstrap.resampledDeviations;
+  if (input.bootstrap.state === "ok" && deviations !== null) {
+    const deviationsD = new Float64Array(deviations.candidate.length);
+    for (let b = 0; b < deviationsD.length; b++) {
+      deviationsD[b] = deviations.candidate[b] - deviations.baseline[b];
+    }
+    const d = new Float64Array(n);
+    for (let t = 0; t < n; t++) d[t] = series.candidate[t] - series.baseline[t];
+    bs = {
+      set: bootstrapMarginSet({
+        meanD: mean(d),
+        meanB,
+        deviationsD,
+        deviationsB: deviations.baseline,
+        tail
+      }),
+      method: "inverted bootstrap"
+    };
+  }
+  const chosen = combine(input.agreement, dm, bs);
+  if (chosen === null) return null;
+  const hull = hullOfSet(chosen.set);
+  const measured = measuredCoverage("relativeChange", n, level);
+  return {
+    estimate,
+    level,
+    lower: hull?.lower ?? null,
+    upper: hull?.upper ?? null,
+    method: chosen.method,
+    ...chosen.set.length === 1 ? {} : { pieces: chosen.set },
+    ...measured === null ? {} : { measuredCoverage: measured }
+  };
+}
+function combine(agreement, dm, bs) {
+  if (agreement === "dm") return dm;
+  if (agreement === "bootstrap") return bs;
+  if (dm === null || bs === null) return dm ?? bs;
+  return agreement === "both" ? { set: unionOfSets(dm.set, bs.set), method: `${dm.method} \u222A ${bs.method}` } : { set: intersectionOfSets(dm.set, bs.set), method: `${dm.method} \u2229 ${bs.method}` };
+}
+
+// node_modules/pure-rand/lib/esm/generator/xoroshiro128plus.js
+var jumps = [
+  3639956645,
+  3750757012,
+  1261568508,
+  386426335
+];
+var XoroShiro128Plus = class XoroShiro128Plus2 {
+  constructor(s01, s00, s11, s10) {
+    this.s01 = s01;
+    this.s00 = s00;
+    this.s11 = s11;
+    this.s10 = s10;
+  }
+  clone() {
+    return new XoroShiro128Plus2(this.s01, this.s00, this.s11, this.s10);
+  }
+  next() {
+    const out = this.s00 + this.s10 | 0;
+    const a0 = this.s10 ^ this.s00;
+    const a1 = this.s11 ^ this.s01;
+    const s00 = this.s00;
+    const s01 = this.s01;
+    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+    this.s10 = a1 << 5 ^ a0 >>> 27;
+    this.s11 = a0 << 5 ^ a1 >>> 27;
+    return out;
+  }
+  jump() {
+    let ns01 = 0;
+    let ns00 = 0;
+    let ns11 = 0;
+    let ns10 = 0;
+    let s01 = this.s01;
+    let s00 = this.s00;
+    let s11 = this.s11;
+    let s10 = this.s10;
+    for (let i = 0; i !== 4; ++i) {
+      const ji = jumps[i];
+      for (let mask = 1; mask; mask <<= 1) {
+        if (ji & mask) {
+          ns01 ^= s01;
+          ns00 ^= s00;
+          ns11 ^= s11;
+          ns10 ^= s10;
+        }
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const s00_ = s00;
+        const s01_ = s01;
+        s00 = s00_ << 24 ^ s01_ >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01_ << 24 ^ s00_ >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+    }
+    this.s01 = ns01;
+    this.s00 = ns00;
+    this.s11 = ns11;
+    this.s10 = ns10;
+  }
+  getState() {
+    return [
+      this.s01,
+      this.s00,
+      this.s11,
+      this.s10
+    ];
+  }
+};
+function xoroshiro128plusFromState(state) {
+  if (!(state.length === 4)) throw new Error("The state must have been produced by a xoroshiro128plus RandomGenerator");
+  return new XoroShiro128Plus(state[0], state[1], state[2], state[3]);
+}
+
+// src/random/splitMix64.ts
+var MASK_64 = (1n << 64n) - 1n;
+var GOLDEN_GAMMA = 0x9e3779b97f4a7c15n;
+function splitMix64Words(seed, count) {
+  let state = BigInt(seed) & MASK_64;
+  const words = [];
+  for (let i = 0; i < count; i++) {
+    state = state + GOLDEN_GAMMA & MASK_64;
+    let z = state;
+    z = (z ^ z >> 30n) * 0xbf58476d1ce4e5b9n & MASK_64;
+    z = (z ^ z >> 27n) * 0x94d049bb133111ebn & MASK_64;
+    z = z ^ z >> 31n;
+    words.push(Number(BigInt.asIntN(32, z >> 32n)), Number(BigInt.asIntN(32, z)));
+  }
+  return words;
+}
+
+// src/random/randomSource.ts
+var TWO_POW_26 = 67108864;
+var TWO_POW_MINUS_53 = 1 / 9007199254740992;
+function randomStreams(factory, seed, first) {
+  if (factory.sequence !== void 0) return factory.sequence(seed, first);
+  let stream = first;
+  return { next: () => factory(seed, stream++) };
+}
+function createRandomSource(seed, stream = 0) {
+  return createRandomStreams(seed, stream).next();
+}
+createRandomSource.sequence = createRandomStreams;
+function createRandomStreams(seed, first = 0) {
+  if (!Number.isSafeInteger(seed) || seed < 0) {
+    throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
+  }
+  if (!Number.isSafeInteger(first) || first < 0) {
+    throw new RangeError(`stream must be a non-negative integer, got ${first}`);
+  }
+  const [s0High, s0Low, s1High, s1Low] = splitMix64Words(seed, 2);
+  const cursor = xoroshiro128plusFromState([s0High, s0Low, s1High, s1Low]);
+  for (let k = 0; k < first; k++) cursor.jump();
+  let started = false;
+  return {
+    next: () => {
+      if (started) cursor.jump();
+      started = true;
+      return sourceOf(cursor.clone());
+    }
+  };
+}
+var TWO_POW_32 = 4294967296;
+var Xoroshiro128PlusSource = class {
+  s01;
+  s00;
+  s11;
+  s10;
+  pending = 0;
+  hasPending = false;
+  constructor(state) {
+    this.s01 = state[0] | 0;
+    this.s00 = state[1] | 0;
+    this.s11 = state[2] | 0;
+    this.s10 = state[3] | 0;
+  }
+  nextUint32() {
+    if (this.hasPending) {
+      this.hasPending = false;
+      return this.pending >>> 0;
+    }
+    const s00 = this.s00;
+    const s01 = this.s01;
+    const s10 = this.s10;
+    const s11 = this.s11;
+    const low = (s00 >>> 0) + (s10 >>> 0);
+    const carry = low >= TWO_POW_32 ? 1 : 0;
+    this.pending = low | 0;
+    this.hasPending = true;
+    const high = s01 + s11 + carry >>> 0;
+    const a0 = s10 ^ s00;
+    const a1 = s11 ^ s01;
+    this.s00 = s00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+    this.s01 = s01 << 24 ^ s00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+    this.s10 = a1 << 5 ^ a0 >>> 27;
+    this.s11 = a0 << 5 ^ a1 >>> 27;
+    return high;
+  }
+  nextDouble() {
+    const a = this.nextUint32() >>> 5;
+    const b = this.nextUint32() >>> 6;
+    return (a * TWO_POW_26 + b) * TWO_POW_MINUS_53;
+  }
+};
+function sourceOf(generator) {
+  return new Xoroshiro128PlusSource(generator.getState());
+}
+
+// src/statistics/bootstrap/flatTopWindow.ts
+function flatTop(s) {
+  const a = Math.abs(s);
+  if (a <= 0.5) return 1;
+  if (a <= 1) return 2 * (1 - a);
+  return 0;
+}
+
+// src/statistics/bootstrap/automaticBlockLength.ts
+function automaticBlockLength(d) {
+  const n = d.length;
+  const notes = [];
+  const runLength = Math.max(5, Math.ceil(Math.log10(Math.max(n, 1))));
+  const maxLag = Math.ceil(Math.sqrt(n)) + runLength;
+  const maxBlockLength = Math.max(1, Math.ceil(Math.min(3 * Math.sqrt(n), n / 3)));
+  const criticalValue = n > 0 ? 2 * Math.sqrt(Math.log10(n) / n) : Number.NaN;
+  const base = { n, runLength, maxLag, maxBlockLength, criticalValue };
+  if (n < 2) {
+    notes.push(`series has ${n} observation(s); block length 1`);
+    return degenerate(base, 1, notes);
+  }
+  const lags = Math.min(maxLag, n - 1);
+  const gamma = autocovariances(d, lags);
+  const variance = gamma[0];
+  if (!(variance > 0)) {
+    notes.push("constant series: no dependence to preserve; block length 1");
+    return degenerate(base, 1, notes);
+  }
+  let firstSmallLag = null;
+  let run = 0;
+  for (let k = 1; k <= lags; k++) {
+    if (Math.abs(gamma[k] / variance) < criticalValue) {
+      run++;
+      if (run === runLength) {
+        firstSmallLag = k - runLength + 1;
+        break;
+      }
+    } else {
+      run = 0;
+    }
+  }
+  const runFound = firstSmallLag !== null;
+  if (!runFound) notes.push(`no run of ${runLength} small autocorrelations up to lag ${lags}`);
+  const bandwidth = Math.min(firstSmallLag === null ? maxLag : 2 * firstSmallLag, maxLag, n - 1);
+  let gHat = 0;
+  let spectralSum = gamma[0];
+  for (let k = 1; k <= bandwidth; k++) {
+    const weight = flatTop(k / bandwidth);
+    if (weight === 0) continue;
+    gHat += 2 * weight * k * gamma[k];
+    spectralSum += 2 * weight * gamma[k];
+  }
+  const dValue = 2 * spectralSum * spectralSum;
+  let unclamped = null;
+  let blockLength;
+  if (dValue > 0) {
+    unclamped = Math.cbrt(2 * gHat * gHat / dValue) * Math.cbrt(n);
+    blockLength = Math.min(Math.max(unclamped, 1), maxBlockLength);
+    if (unclamped < 1) notes.push(`estimate ${unclamped} raised to 1`);
+    if (unclamped > maxBlockLength) notes.push(`estimate ${unclamped} capped at ${maxBlockLength}`);
+  } else {
+    blockLength = gHat === 0 ? 1 : maxBlockLength;
+    notes.push(`spectral estimate at zero is 0; block length ${blockLength}`);
+  }
+  return {
+    ...base,
+    runFound,
+    firstSmallLag,
+    bandwidth,
+    gHat,
+    spectralSum,
+    d: dValue,
+    unclamped,
+    blockLength,
+    notes
+  };
+}
+function degenerate(base, blockLength, notes) {
+  return {
+    ...base,
+    runFound: false,
+    firstSmallLag: null,
+    bandwidth: 0,
+    gHat: 0,
+    spectralSum: 0,
+    d: 0,
+    unclamped: null,
+    blockLength,
+    notes
+  };
+}
+
+// src/statistics/bootstrap/centring.ts
+function centre(d) {
+  const n = d.length;
+  const mean2 = meanOf(d);
+  const centred = new Float64Array(n);
+  for (let t = 0; t < n; t++) centred[t] = d[t] - mean2;
+  return centred;
+}
+function meanOf(d) {
+  let sum = 0;
+  for (let t = 0; t < d.length; t++) sum += d[t];
+  return sum / d.length;
+}
+function lagProduct(u, k) {
+  let sum = 0;
+  for (let t = k; t < u.length; t++) sum += u[t] * u[t - k];
+  return sum;
+}
+
+// src/random/aliasTable.ts
+function buildAliasTable(probabilities) {
+  const size = probabilities.length;
+  let sum = 0;
+  for (let i = 0; i < size; i++) sum += probabilities[i];
+  const scaled = new Float64Array(size);
+  for (let i = 0; i < size; i++) scaled[i] = probabilities[i] * size / sum;
+  const threshold = new Float64Array(size);
+  const alias = new Int32Array(size);
+  const small = [];
+  const large = [];
+  for (let i = size - 1; i >= 0; i--) (scaled[i] < 1 ? small : large).push(i);
+  while (small.length > 0 && large.length > 0) {
+    const less = small.pop();
+    const more = large.pop();
+    threshold[less] = scaled[less];
+    alias[less] = more;
+    scaled[more] = scaled[more] + scaled[less] - 1;
+    (scaled[more] < 1 ? small : large).push(more);
+  }
+  for (const i of large) {
+    threshold[i] = 1;
+    alias[i] = i;
+  }
+  for (const i of small) {
+    threshold[i] = 1;
+    alias[i] = i;
+  }
+  return { threshold, alias };
+}
+
+// src/random/geometricSampler.ts
+var MAX_COLUMNS_LOG2 = 12;
+var OVERFLOW_PROBABILITY = 1 / 1024;
+function createGeometricSampler(mean2) {
+  if (!(Number.isFinite(mean2) && mean2 >= 1)) {
+    throw new RangeError(`the mean of a geometric length must be a finite number \u2265 1, got ${mean2}`);
+  }
+  if (mean2 === 1) {
+    const table2 = { threshold: Float64Array.of(1, 0), alias: Int32Array.of(0, 0) };
+    return { mean: mean2, truncation: 1, table: table2, inline: null, sample: () => 1 };
+  }
+  const p = 1 / mean2;
+  const q = 1 - p;
+  let bits2 = 1;
+  while (bits2 < MAX_COLUMNS_LOG2 && q ** (2 ** bits2 - 1) > OVERFLOW_PROBABILITY) bits2++;
+  const columns = 2 ** bits2;
+  const truncation = columns - 1;
+  const probabilities = new Float64Array(columns);
+  for (let k = 1; k <= truncation; k++) probabilities[k - 1] = p * q ** (k - 1);
+  probabilities[truncation] = q ** truncation;
+  const { threshold, alias } = buildAliasTable(probabilities);
+  const shift = 32 - bits2;
+  const coinMask = 2 ** shift - 1;
+  const coinScale = 2 ** shift;
+  const edge = new Float64Array(columns);
+  const edgeFraction = new Float64Array(columns);
+  for (let i = 0; i < columns; i++) {
+    const scaled = threshold[i] * coinScale;
+    edge[i] = Math.floor(scaled);
+    edgeFraction[i] = scaled - edge[i];
+  }
+  const overflow = truncation;
+  return {
+    mean: mean2,
+    truncation,
+    table: { threshold, alias },
+    inline: { shift, coinMask, edge, edgeFraction, alias, truncation },
+    sample(random, cap) {
+      let total = 0;
+      for (; ; ) {
+        const x = random.nextUint32();
+        const column = x >>> shift;
+        const coin = x & coinMask;
+        const cut = edge[column];
+        const keep = coin !== cut ? coin < cut : random.nextDouble() < edgeFraction[column];
+        const outcome = keep ? column : alias[column];
+        if (outcome !== overflow) {
+          total += outcome + 1;
+          return Math.min(total, cap);
+        }
+        total += truncation;
+        if (total >= cap) return cap;
+      }
+    }
+  };
+}
+
+// src/statistics/bootstrap/centredPrefixSums.ts
+function centredPrefixSums(d, mean2) {
+  const n = d.length;
+  const prefix2 = new Float64Array(2 * n + 1);
+  let running = 0;
+  for (let i = 0; i < 2 * n; i++) {
+    running += d[i < n ? i : i - n] - mean2;
+    prefix2[i + 1] = running;
+  }
+  return prefix2;
+}
+
+// src/statistics/bootstrap/resampleMeanDeviation.ts
+function resampleMeanDeviation(prefix2, n, blocks) {
+  const { starts, lengths, count } = blocks;
+  let sum = 0;
+  for (let i = 0; i < count; i++) {
+    const s = starts[i];
+    sum += prefix2[s + lengths[i]] - prefix2[s];
+  }
+  return sum / n;
+}
+
+// src/statistics/bootstrap/sampleStandardDeviation.ts
+function sampleStandardDeviation(values) {
+  const m = values.length;
+  if (m < 2) return 0;
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += values[i];
+  const centre2 = sum / m;
+  let squares = 0;
+  for (let i = 0; i < m; i++) squares += (values[i] - centre2) ** 2;
+  return Math.sqrt(squares / (m - 1));
+}
+
+// src/random/uniformIndex.ts
+var TWO_POW_322 = 4294967296;
+var LEMIRE_LIMIT = 2097152;
+function uniformIndex(random, n) {
+  if (n <= 1) return 0;
+  if (n <= LEMIRE_LIMIT) {
+    let m = random.nextUint32() * n;
+    let high = Math.floor(m / TWO_POW_322);
+    let low = m - high * TWO_POW_322;
+    if (low < n) {
+      const threshold = TWO_POW_322 % n;
+      while (low < threshold) {
+        m = random.nextUint32() * n;
+        high = Math.floor(m / TWO_POW_322);
+        low = m - high * TWO_POW_322;
+      }
+    }
+    return high;
+  }
+  const shift = Math.clz32(n - 1);
+  for (; ; ) {
+    const candidate = shift === 0 ? random.nextUint32() : random.nextUint32() >>> shift;
+    if (candidate < n) return candidate;
+  }
+}
+
+// src/statistics/bootstrap/stationaryBlocks.ts
+function allocateStationaryBlocks(n) {
+  return { starts: new Int32Array(n), lengths: new Int32Array(n), count: 0 };
+}
+function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlocks(n)) {
+  const { starts, lengths } = into;
+  let filled = 0;
+  let count = 0;
+  while (filled < n) {
+    starts[count] = uniformIndex(random, n);
+    const length = sampler.sample(random, n - filled);
+    lengths[count] = length;
+    filled += length;
+    count++;
+  }
+  into.count = count;
+  return into;
+}
+
+// src/statistics/bootstrap/resampleHistogram.ts
+function resampleHistogram(mean2, deviations, bins = 40) {
+  if (deviations.length === 0) return null;
+  let lo2 = Number.POSITIVE_INFINITY;
+  let hi2 = Number.NEGATIVE_INFINITY;
+  for (const t of deviations) {
+    lo2 = Math.min(lo2, mean2 + t);
+    hi2 = Math.max(hi2, mean2 + t);
+  }
+  const counts = new Array(bins).fill(0);
+  const width = hi2 - lo2;
+  for (const t of deviations) {
+    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
+    counts[j]++;
+  }
+  return { lower: lo2, upper: hi2, counts };
+}
+
+// src/statistics/bootstrap/resampleDeviationsInline.ts
+var TWO_POW_323 = 4294967296;
+var TWO_POW_MINUS_32 = 1 / TWO_POW_323;
+var LEMIRE_LIMIT2 = 2097152;
+function resampleDeviationsInline(prefix2, n, sampler, source, count) {
+  if (sampler.inline === null) return unitBlocks(prefix2, n, source, count);
+  return geometricBlocks(prefix2, n, sampler, source, count);
+}
+function unitBlocks(prefix2, n, source, count) {
+  const P32 = 4294967296;
+  const INV32 = 1 / 4294967296;
+  const out = new Float64Array(count);
+  const lemire = n <= LEMIRE_LIMIT2;
+  const threshold = P32 % n;
+  const maskShift = Math.clz32(n - 1);
+  let s00 = source.s00;
+  let s01 = source.s01;
+  let s10 = source.s10;
+  let s11 = source.s11;
+  let pend = source.pending;
+  let has = source.hasPending;
+  const step = new Float64Array(n);
+  for (let s = 0; s < n; s++) step[s] = prefix2[s + 1] - prefix2[s];
+  for (let r = 0; r < count; r++) {
+    let filled = 0;
+    let sum = 0;
+    while (filled < n) {
+      if (lemire && !has) {
+        const stop = n - 1;
+        let rejected = false;
+        while (filled < stop) {
+          const lo2 = (s00 >>> 0) + (s10 >>> 0);
+          const c = lo2 >= P32 ? 1 : 0;
+          const low = lo2 | 0;
+          const high = s01 + s11 + c >>> 0;
+          const a0 = s10 ^ s00;
+          const a1 = s11 ^ s01;
+          const t00 = s00;
+          s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+          s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+          s10 = a1 << 5 ^ a0 >>> 27;
+          s11 = a0 << 5 ^ a1 >>> 27;
+          const m1 = high * n;
+          const first = Math.floor(m1 * INV32);
+          if (m1 - first * P32 < threshold) {
+            pend = low;
+            has = true;
+            rejected = true;
+            break;
+          }
+          sum += step[first];
+          filled++;
+          const m2 = (low >>> 0) * n;
+          const second = Math.floor(m2 * INV32);
+          if (m2 - second * P32 < threshold) {
+            rejected = true;
+            break;
+          }
+          sum += step[second];
+          filled++;
+        }
+        if (rejected) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          sum += step[rejectedStart(source, n, threshold)];
+          filled++;
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+          continue;
+        }
+        if (filled >= n) break;
+      }
+      let x;
+      if (has) {
+        x = pend >>> 0;
+        has = false;
+      } else {
+        const lo2 = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo2 >= P32 ? 1 : 0;
+        pend = lo2 | 0;
+        has = true;
+        x = s01 + s11 + c >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+      let start;
+      if (lemire) {
+        const m = x * n;
+        start = Math.floor(m * INV32);
+        if (m - start * P32 < threshold) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = rejectedStart(source, n, threshold);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      } else {
+        start = maskShift === 0 ? x : x >>> maskShift;
+        if (start >= n) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = bitmaskStart(source, n, maskShift);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      }
+      sum += step[start];
+      filled++;
+    }
+    out[r] = sum / n;
+  }
+  source.s00 = s00;
+  source.s01 = s01;
+  source.s10 = s10;
+  source.s11 = s11;
+  source.pending = pend;
+  source.hasPending = has;
+  return out;
+}
+function geometricBlocks(prefix2, n, sampler, source, count) {
+  const P32 = 4294967296;
+  const INV32 = 1 / 4294967296;
+  const out = new Float64Array(count);
+  const inline = sampler.inline;
+  const lemire = n <= LEMIRE_LIMIT2;
+  const threshold = P32 % n;
+  const maskShift = Math.clz32(n - 1);
+  let s00 = source.s00;
+  let s01 = source.s01;
+  let s10 = source.s10;
+  let s11 = source.s11;
+  let pend = source.pending;
+  let has = source.hasPending;
+  const { shift, coinMask, edge, alias, truncation } = inline;
+  const starts = new Int32Array(n);
+  const lengths = new Int32Array(n);
+  for (let r = 0; r < count; r++) {
+    let filled = 0;
+    let blocks = 0;
+    while (filled < n) {
+      let x;
+      if (has) {
+        x = pend >>> 0;
+        has = false;
+      } else {
+        const lo2 = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo2 >= P32 ? 1 : 0;
+        pend = lo2 | 0;
+        has = true;
+        x = s01 + s11 + c >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+      let start;
+      if (lemire) {
+        const m = x * n;
+        start = Math.floor(m * INV32);
+        if (m - start * P32 < threshold) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = rejectedStart(source, n, threshold);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      } else {
+        start = maskShift === 0 ? x : x >>> maskShift;
+        if (start >= n) {
+          source.s00 = s00;
+          source.s01 = s01;
+          source.s10 = s10;
+          source.s11 = s11;
+          source.pending = pend;
+          source.hasPending = has;
+          start = bitmaskStart(source, n, maskShift);
+          s00 = source.s00;
+          s01 = source.s01;
+          s10 = source.s10;
+          s11 = source.s11;
+          pend = source.pending;
+          has = source.hasPending;
+        }
+      }
+      let y;
+      if (has) {
+        y = pend >>> 0;
+        has = false;
+      } else {
+        const lo2 = (s00 >>> 0) + (s10 >>> 0);
+        const c = lo2 >= P32 ? 1 : 0;
+        pend = lo2 | 0;
+        has = true;
+        y = s01 + s11 + c >>> 0;
+        const a0 = s10 ^ s00;
+        const a1 = s11 ^ s01;
+        const t00 = s00;
+        s00 = t00 << 24 ^ s01 >>> 8 ^ a0 ^ a0 << 16;
+        s01 = s01 << 24 ^ t00 >>> 8 ^ a1 ^ (a1 << 16 | a0 >>> 16);
+        s10 = a1 << 5 ^ a0 >>> 27;
+        s11 = a0 << 5 ^ a1 >>> 27;
+      }
+      const column = y >>> shift;
+      const coin = y & coinMask;
+      const cut = edge[column];
+      let length;
+      if (coin !== cut) {
+        const outcome = coin < cut ? column : alias[column];
+        length = outcome !== truncation ? outcome + 1 : -1;
+      } else {
+        length = -1;
+      }
+      const left = n - filled;
+      if (length < 0) {
+        source.s00 = s00;
+        source.s01 = s01;
+        source.s10 = s10;
+        source.s11 = s11;
+        source.pending = pend;
+        source.hasPending = has;
+        length = finishLength(source, sampler, column, coin, cut, left);
+        s00 = source.s00;
+        s01 = source.s01;
+        s10 = source.s10;
+        s11 = source.s11;
+        pend = source.pending;
+        has = source.hasPending;
+      } else if (length > left) {
+        length = left;
+      }
+      starts[blocks] = start;
+      lengths[blocks] = length;
+      blocks++;
+      filled += length;
+    }
+    let sum = 0;
+    for (let i = 0; i < blocks; i++) {
+      const s = starts[i];
+      sum += prefix2[s + lengths[i]] - prefix2[s];
+    }
+    out[r] = sum / n;
+  }
+  source.s00 = s00;
+  source.s01 = s01;
+  source.s10 = s10;
+  source.s11 = s11;
+  source.pending = pend;
+  source.hasPending = has;
+  return out;
+}
+function rejectedStart(source, n, threshold) {
+  for (; ; ) {
+    const m = source.nextUint32() * n;
+    const high = Math.floor(m * TWO_POW_MINUS_32);
+    if (m - high * TWO_POW_323 >= threshold) return high;
+  }
+}
+function bitmaskStart(source, n, maskShift) {
+  for (; ; ) {
+    const x = source.nextUint32();
+    const candidate = maskShift === 0 ? x : x >>> maskShift;
+    if (candidate < n) return candidate;
+  }
+}
+function finishLength(source, sampler, column, coin, cut, cap) {
+  const { edgeFraction, alias, truncation } = sampler.inline;
+  const keep = coin !== cut ? coin < cut : source.nextDouble() < edgeFraction[column];
+  const outcome = keep ? column : alias[column];
+  if (outcome !== truncation) return Math.min(outcome + 1, cap);
+  if (truncation >= cap) return cap;
+  return truncation + sampler.sample(source, cap - truncation);
+}
+
+// src/statistics/bootstrap/resampleJob.ts
+var RESAMPLES_PER_STREAM = 256;
+function streamCount(resamples) {
+  return Math.ceil(resamples / RESAMPLES_PER_STREAM);
+}
+function streamShare(resamples, stream) {
+  const first = stream * RESAMPLES_PER_STREAM;
+  return { first, count: Math.max(0, Math.min(RESAMPLES_PER_STREAM, resamples - first)) };
+}
+function runResampleJob(job, random = createRandomSource) {
+  const out = new Float64Array(job.resamples);
+  const sampler = createGeometricSampler(job.expectedBlockLength);
+  const streams = randomStreams(random, job.seed, 0);
+  const total = streamCount(job.resamples);
+  for (let stream = 0; stream < total; stream++) {
+    const { first, count } = streamShare(job.resamples, stream);
+    out.set(resampleDeviationsOfStream(job.prefix, job.n, sampler, streams.next(), count), first);
+  }
+  return out;
+}
+function resampleDeviationsOfStream(prefix2, n, sampler, random, count) {
+  if (random instanceof Xoroshiro128PlusSource && n >= 2) {
+    return resampleDeviationsInline(prefix2, n, sampler, random, count);
+  }
+  return resampleDeviationsGeneric(prefix2, n, sampler, random, count);
+}
+function resampleDeviationsGeneric(prefix2, n, sampler, random, count) {
+  const out = new Float64Array(count);
+  const blocks = allocateStationaryBlocks(n);
+  for (let b = 0; b < count; b++) {
+    drawStationaryBlocks(n, sampler, random, blocks);
+    out[b] = resampleMeanDeviation(prefix2, n, blocks);
+  }
+  return out;
+}
+
+// src/statistics/bootstrap/stationaryBootstrap.ts
+var MINIMUM_BOOTSTRAP_LENGTH = 2;
+function stationaryBootstrap(d, options, random = createRandomSource, runner = runResampleJob) {
+  validateStationaryBootstrapOptions(options);
+  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
+  const n = d.length;
+  for (let t = 0; t < n; t++) {
+    if (!Number.isFinite(d[t])) {
+      throw new RangeError(`loss differential at position ${t} is not a finite number: ${d[t]}`);
+    }
+  }
+  const base = { resamples, seed, expectedBlockLength };
+  const notes = [];
+  if (n < MINIMUM_BOOTSTRAP_LENGTH) {
+    notes.push(
+      `series has ${n} observation(s); the bootstrap needs at least ${MINIMUM_BOOTSTRAP_LENGTH}`
+    );
+    return {
+      state: "too-short",
+      ...base,
+      mean: n === 1 ? d[0] : null,
+      standardError: null,
+      interval: null,
+      oneSidedLower: null,
+      pValue: null,
+      pValueBelow: null,
+      pValueTwoSided: null,
+      distribution: null,
+      notes
+    };
+  }
+  const constant = d.every((x) => x === d[0]);
+  const identical = constant && d[0] === 0;
+  const mean2 = constant ? d[0] : meanOf(d);
+  let deviations;
+  if (identical) {
+    notes.push("every loss differential is 0 (identical forecasts); no resampling needed");
+    deviations = new Float64Array(resamples);
+  } else {
+    if (constant) notes.push("the loss differential is constant: every resample mean equals it");
+    if (expectedBlockLength > n) {
+      notes.push(`expected block length ${expectedBlockLength} exceeds the series length ${n}`);
+    }
+    deviations = stationaryResampleDeviations(
+      d,
+      mean2,
+      expectedBlockLength,
+      resamples,
+      seed,
+      random,
+      runner
+    );
+  }
+  const standardError = sampleStandardDeviation(deviations);
+  const reflected = new Float64Array(resamples);
+  for (let b = 0; b < resamples; b++) reflected[b] = mean2 - deviations[b];
+  reflected.sort();
+  const inference = basicBootstrapInference(reflected, margin, confidence);
+  return {
+    state: identical ? "identical" : "ok",
+    ...base,
+    mean: mean2,
+    standardError,
+    interval: { ...inference.interval, method: "basic" },
+    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
+    pValue: inference.pValue,
+    pValueBelow: inference.pValueBelow,
+    pValueTwoSided: inference.pValueTwoSided,
+    distribution: resampleHistogram(mean2, deviations),
+    notes
+  };
+}
+function stationaryResampleDeviations(d, mean2, expectedBlockLength, resamples, seed, random = createRandomSource, runner = runResampleJob) {
+  const prefix2 = centredPrefixSums(d, mean2);
+  return runner({ prefix: prefix2, n: d.length, expectedBlockLength, resamples, seed }, random);
+}
+function validateStationaryBootstrapOptions(options) {
+  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
+  if (!(confidence > 0 && confidence < 1)) {
+    throw new RangeError(`confidence must lie strictly between 0 and 1, got ${confidence}`);
+  }
+  const fewest = minimumResamples(confidence);
+  if (!Number.isSafeInteger(resamples) || resamples < fewest) {
+    throw new RangeError(
+      `resamples must be an integer of at least ${fewest} for a ${confidence} interval, got ${resamples}`
+    );
+  }
+  if (!(Number.isFinite(expectedBlockLength) && expectedBlockLength >= 1)) {
+    throw new RangeError(
+      `expected block length must be a finite number \u2265 1, got ${expectedBlockLength}`
+    );
+  }
+  if (!Number.isSafeInteger(seed) || seed < 0) {
+    throw new RangeError(`seed must be an integer between 0 and 2^53 \u2212 1, got ${seed}`);
+  }
+  if (!Number.isFinite(margin)) throw new RangeError(`margin must be finite, got ${margin}`);
+}
+
+// src/statistics/bootstrap/relativeDifferenceBootstrap.ts
+function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, random = createRandomSource) {
+  validateStationaryBootstrapOptions(options);
+  const { resamples, expectedBlockLength, seed, confidence, margin } = options;
+  const n = candidateLoss.length;
+  if (baselineLoss.length !== n) {
+    throw new RangeError(`loss series differ in length: ${n} vs ${baselineLoss.length}`);
+  }
+  for (let t = 0; t < n; t++) {
+    if (!(Number.isFinite(candidateLoss[t]) && Number.isFinite(baselineLoss[t]))) {
+      throw new RangeError(`loss at position ${t} is not a finite number`);
+    }
+  }
+  const empty = {
+    resamples,
+    seed,
+    expectedBlockLength,
+    standardError: null,
+    interval: null,
+    oneSidedLower: null,
+    pValue: null,
+    pValueTwoSided: null,
+    resampledDeviations: null
+  };
+  if (n < MINIMUM_BOOTSTRAP_LENGTH) {
+    return {
+      state: "too-short",
+      ...empty,
+      relativeDifference: null,
+      notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`]
+    };
+  }
+  const candidateMean = meanOf(candidateLoss);
+  const baselineMean = meanOf(baselineLoss);
+  if (!(baselineMean > 0)) {
+    return {
+      state: "baseline-zero",
+      ...empty,
+      relativeDifference: null,
+      notes: [`the baseline's mean loss is ${baselineMean}; a relative difference needs it > 0`]
+    };
+  }
+  const estimate = candidateMean / baselineMean - 1;
+  const identical = candidateLoss.every((x, t) => x === baselineLoss[t]);
+  const notes = [];
+  const deviations = new Float64Array(resamples);
+  const candidateDeviations = new Float64Array(resamples);
+  const baselineDeviations = new Float64Array(resamples);
+  if (identical) {
+    notes.push("candidate and baseline losses are identical; no resampling needed");
+  } else {
+    const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
+    const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
+    const sampler = createGeometricSampler(expectedBlockLength);
+    const blocks = allocateStationaryBlocks(n);
+    let zeroDenominators = 0;
+    const streams = randomStreams(random, seed, 0);
+    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
+      const source = streams.next();
+      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
+      for (let b = first; b < last; b++) {
+        drawStationaryBlocks(n, sampler, source, blocks);
+        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+        const c = candidateMean + candidateDeviations[b];
+        const base = baselineMean + baselineDeviations[b];
+        if (base === 0) zeroDenominators++;
+        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+        deviations[b] = theta - estimate;
+      }
+    }
+    if (zeroDenominators > 0) {
+      notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (\u03B8* infinite)`);
+    }
+  }
+  const reflected = new Float64Array(resamples);
+  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b];
+  reflected.sort();
+  const inference = basicBootstrapInference(reflected, margin, confidence);
+  return {
+    state: identical ? "identical" : "ok",
+    ...empty,
+    relativeDifference: estimate,
+    standardError: sampleStandardDeviation(deviations),
+    interval: { ...inference.interval, method: "basic" },
+    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
+    pValue: inference.pValue,
+    pValueTwoSided: inference.pValueTwoSided,
+    resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
+    notes
+  };
+}
+
+// src/comparison/runBootstrap.ts
+function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
+  const auto = settings.blockLength.kind === "auto" && d.length >= 2 ? automaticBlockLength(difference) : null;
+  const expectedBlockLength = settings.blockLength.kind === "fixed" ? settings.blockLength.length : auto?.blockLength ?? 1;
+  const options = {
+    resamples: settings.resamples,
+    expectedBlockLength,
+    seed: settings.seed,
+    confidence: settings.confidence,
+    margin: hypothesis.boundary
+  };
+  const result = stationaryBootstrap(d, options, createRandomSource, runner);
+  const relative = relativeDifferenceBootstrap(series.candidate, series.baseline, {
+    ...options,
+    margin: hypothesis.baselineFactor - 1
+  });
+  const decisionPValue = hypothesis.rejectWhen === "above" ? result.pValue : result.pValueBelow;
+  const summary = {
+    state: result.state,
+    resamples: result.resamples,
+    seed: result.seed,
+    expectedBlockLength,
+    blockLengthRule: settings.blockLength.kind,
+    blockLengthSelection: auto,
+    standardError: result.standardError,
+    interval: difference === d ? result.interval : differenceInterval(difference, relative.resampledDeviations, settings.confidence),
+    relativeInterval: settings.marginKind === "relative" ? relative.interval : null,
+    pValue: result.pValue,
+    pValueTwoSided: result.pValueTwoSided,
+    decisionPValue,
+    distribution: result.distribution,
+    notes: result.notes
+  };
+  return { summary, resampledDeviations: relative.resampledDeviations };
+}
+function differenceInterval(difference, deviations, level) {
+  if (deviations === null) return null;
+  const centre2 = meanOf(difference);
+  const reflected = new Float64Array(deviations.candidate.length);
+  for (let b = 0; b < reflected.length; b++) {
+    reflected[b] = centre2 - (deviations.candidate[b] - deviations.baseline[b]);
+  }
+  reflected.sort();
+  const { interval } = basicBootstrapInference(reflected, 0, level);
+  return { ...interval, method: "basic" };
+}
+
+// src/statistics/ewcCosineTermsRule.ts
+var CALIBRATION_AUTOCORRELATION = 0.7;
+var AUTOCORRELATION_FLOOR = 0.05;
+var AUTOCORRELATION_CEILING = 0.97;
+function ar1SpectralCurvature(rho) {
+  return 2 * rho / (1 - rho) ** 2;
+}
+function ar1PluginCosineTerms(x) {
+  const n = x.length;
+  if (n < 4) return { terms: ewcDegreesOfFreedom(n), autocorrelation: 0, pluginAutocorrelation: 0 };
+  const [gamma0, gamma1] = autocovariances(x, 1);
+  const rho = gamma0 > 0 ? gamma1 / gamma0 : 0;
+  const corrected = rho + (1 + 3 * rho) / n;
+  const plugin = Math.min(Math.max(corrected, AUTOCORRELATION_FLOOR), AUTOCORRELATION_CEILING);
+  return {
+    terms: cosineTermsForAutocorrelation(n, plugin),
+    autocorrelation: rho,
+    pluginAutocorrelation: plugin
+  };
+}
+function cosineTermsForAutocorrelation(n, rho) {
+  const ratio2 = ar1SpectralCurvature(CALIBRATION_AUTOCORRELATION) / ar1SpectralCurvature(rho);
+  const raw = Math.round(0.4 * n ** (2 / 3) * Math.cbrt(ratio2));
+  return Math.min(Math.max(2, raw), Math.max(2, Math.floor(n / 2)));
+}
+
+// src/statistics/dieboldMariano.ts
+var MINIMUM_LENGTH = 3;
+function dieboldMariano(d, options) {
+  const { estimator: requestedEstimator, horizon, margin } = options;
+  validate(d, options);
+  const n = d.length;
+  const base = {
+    state: "ok",
+    estimator: requestedEstimator,
+    requestedEstimator,
+    n,
+    mean: n > 0 ? mean(d) : 0,
+    statistic: null,
+    pValue: null,
+    pValueTwoSided: null,
+    longRunVariance: null,
+    variance: null,
+    lag: null,
+    degreesOfFreedom: null,
+    smallSample: null,
+    lagSelection: null,
+    notes: []
+  };
+  if (n < MINIMUM_LENGTH) {
+    base.state = "too-short";
+    base.notes.push(
+      `Only ${n} loss differential${n === 1 ? "" : "s"}; the Diebold\u2013Mariano test needs at least ${MINIMUM_LENGTH}.`
+    );
+    return base;
+  }
+  const constant = constantValue(d);
+  if (constant === 0) {
+    base.state = "identical";
+    base.mean = 0;
+    base.notes.push(
+      "Every loss differential is 0: both forecasts have the same loss on every row, so there is no difference to test."
+    );
+    return base;
+  }
+  if (constant !== null) {
+    base.state = "zero-variance";
+    base.mean = constant;
+    base.notes.push(
+      `Every loss differential equals ${constant}: the differential does not vary, so its variance is 0 and the statistic is undefined.`
+    );
+    return base;
+  }
+  const gamma0 = autocovariances(d, 0)[0];
+  let longRunVariance;
+  let estimator = requestedEstimator;
+  let lagChoice = null;
+  if (requestedEstimator === "ewc" || requestedEstimator === "ewc-ar1") {
+    let terms;
+    if (requestedEstimator === "ewc-ar1") {
+      const choice = ar1PluginCosineTerms(options.lagSeries ?? d);
+      terms = choice.terms;
+      base.notes.push(
+        `${terms} cosine terms chosen from the first-order autocorrelation ${choice.autocorrelation.toFixed(3)} (AR(1) plug-in, Lazarus et al. 2018).`
+      );
+    }
+    const ewc = ewcLongRunVariance(d, terms);
+    longRunVariance = ewc.value;
+    base.degreesOfFreedom = ewc.degreesOfFreedom;
+  } else {
+    lagChoice = selectLag(options.lagSeries ?? d, options.lag, horizon);
+    base.notes.push(...lagChoice.notes);
+    base.lag = lagChoice.lag;
+    base.lagSelection = describeLagChoice(lagChoice);
+    if (requestedEstimator === "bartlett") {
+      longRunVariance = bartlettLongRunVariance(d, lagChoice.lag);
+    } else {
+      const uniform = uniformLongRunVariance(d, lagChoice.lag);
+      longRunVariance = uniform.value;
+      estimator = uniform.estimator;
+      if (uniform.note !== null) base.notes.push(uniform.note);
+    }
+  }
+  base.estimator = estimator;
+  if (!Number.isFinite(longRunVariance)) {
+    throw new RangeError(
+      "dieboldMariano: the loss differentials are too large to square in double precision"
+    );
+  }
+  base.longRunVariance = longRunVariance;
+  base.variance = longRunVariance / n;
+  if (isEffectivelyNonPositive(longRunVariance, gamma0, n)) {
+    base.state = "zero-variance";
+    base.notes.push(
+      `The long-run variance estimate is ${longRunVariance.toPrecision(6)}, zero within rounding, so the statistic is undefined.`
+    );
+    return base;
+  }
+  const statistic = (base.mean - margin) / Math.sqrt(base.variance);
+  if (!Number.isFinite(statistic)) {
+    base.state = "zero-variance";
+    base.notes.push("The variance of the mean is too small for a finite statistic.");
+    return base;
+  }
+  base.statistic = statistic;
+  if (estimator === "ewc" || estimator === "ewc-ar1") {
+    const nu = base.degreesOfFreedom;
+    base.pValue = studentTUpperTail(statistic, nu);
+    base.pValueTwoSided = studentTTwoSided(statistic, nu);
+  } else {
+    base.pValue = standardNormalUpperTail(statistic);
+    base.pValueTwoSided = standardNormalTwoSided(statistic);
+    base.smallSample = harveyLeybourneNewbold(statistic, n, horizon);
+    if (base.smallSample === null) {
+      base.notes.push(
+        `The small-sample correction needs the horizon (${horizon}) below n (${n}); not computed.`
+      );
+    }
+  }
+  return base;
+}
+function validate(d, options) {
+  const { horizon, margin, lag } = options;
+  if (!Number.isInteger(horizon) || horizon < 1) {
+    throw new RangeError(`dieboldMariano: the horizon must be an integer \u2265 1, got ${horizon}`);
+  }
+  if (!Number.isFinite(margin)) {
+    throw new RangeError(`dieboldMariano: the margin must be finite, got ${margin}`);
+  }
+  if (lag.kind === "fixed" && (!Number.isInteger(lag.lag) || lag.lag < 0)) {
+    throw new RangeError(`dieboldMariano: a fixed lag must be an integer \u2265 0, got ${lag.lag}`);
+  }
+  for (let t = 0; t < d.length; t++) {
+    if (!Number.isFinite(d[t])) {
+      throw new RangeError(`dieboldMariano: loss differential ${t + 1} is ${d[t]}, not finite`);
+    }
+  }
+}
+function constantValue(d) {
+  const first = d[0];
+  for (let t = 1; t < d.length; t++) if (d[t] !== first) return null;
+  return first === 0 ? 0 : first;
+}
+function describeLagChoice(choice) {
+  if (choice.bandwidth === void 0) return { rule: choice.rule };
+  const { pilotLag, bandwidth, s0, s1 } = choice.bandwidth;
+  return { rule: choice.rule, pilotLag, bandwidth, s0, s1 };
+}
+
+// src/comparison/runDieboldMariano.ts
+function runDieboldMariano(d, horizon, hypothesis, settings, difference = d) {
+  const options = {
+    estimator: settings.variance,
+    lag: settings.lag,
+    horizon,
+    lagSeries: difference
+  };
+  const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
+  const upper = result.smallSample?.pValue ?? result.pValue;
+  const decisionPValue = upper === null ? null : hypothesis.rejectWhen === "above" ? upper : 1 - upper;
+  const unshifted = difference === d ? result : dieboldMariano(difference, { ...options, margin: 0 });
+  return {
+    state: result.state,
+    estimator: result.estimator,
+    requestedEstimator: result.requestedEstimator,
+    statistic: result.statistic,
+    pValue: result.pValue,
+    pValueTwoSided: result.pValueTwoSided,
+    decisionPValue,
+    variance: result.variance,
+    longRunVariance: result.longRunVariance,
+    lag: result.lag,
+    degreesOfFreedom: result.degreesOfFreedom,
+    smallSample: result.smallSample,
+    interval: meanInterval(unshifted, horizon, settings.confidence),
+    lagSelection: result.lagSelection,
+    notes: result.notes
+  };
+}
+function meanInterval(result, horizon, level) {
+  if (result.variance === null || !(result.variance > 0) || result.statistic === null) return null;
+  const tail = 1 - (1 - level) / 2;
+  let se = Math.sqrt(result.variance);
+  let q;
+  if (result.smallSample !== null) {
+    se /= harveyLeybourneNewboldFactor(result.n, horizon) ?? 1;
+    q = studentTQuantile(tail, result.smallSample.degreesOfFreedom);
+  } else if (result.degreesOfFreedom !== null) {
+    q = studentTQuantile(tail, result.degreesOfFreedom);
+  } else {
+    q = standardNormalQuantile(tail);
+  }
+  return {
+    level,
+    lower: result.mean - q * se,
+    upper: result.mean + q * se,
+    method: result.smallSample !== null ? "HLN-corrected t" : result.degreesOfFreedom !== null ? "fixed-b t" : "normal"
+  };
+}
+
+// src/comparison/compareLossSeries.ts
+function compareLossSeries(series, scope, hypothesis, settings, options = {}) {
+  const n = series.baseline.length;
+  const meanBaselineLoss = meanOrZero(series.baseline);
+  const meanCandidateLoss = meanOrZero(series.candidate);
+  const d = lossDifferential(series, hypothesis.baselineFactor - 1);
+  const difference = hypothesis.baselineFactor === 1 ? d : lossDifferential(series, 0);
+  const meanTestedDifferential = meanOrZero(d);
+  const identicalLosses = series.baseline.every((b, t) => b === series.candidate[t]);
+  const dieboldMariano2 = withMeasured(
+    runDieboldMariano(d, series.maxHorizon, hypothesis, settings, difference),
+    "dieboldMarianoDifference",
+    n
+  );
+  const withBootstrap = options.bootstrap ?? true;
+  const bootstrapRun = withBootstrap ? runBootstrap(d, series, hypothesis, settings, options.runner, difference) : null;
+  const bootstrap = bootstrapRun === null ? bootstrapNotRun(settings) : withMeasured(bootstrapRun.summary, "bootstrapDifference", n);
+  const decision = decideComparison({
+    hypothesis,
+    alpha: settings.alpha,
+    agreement: withBootstrap ? settings.agreement : "dm",
+    dieboldMariano: {
+      label: `Diebold\u2013Mariano (${dieboldMariano2.estimator})`,
+      pValue: dieboldMariano2.decisionPValue,
+      mean: meanTestedDifferential,
+      state: dieboldMariano2.state
+    },
+    bootstrap: {
+      label: "Stationary bootstrap",
+      pValue: bootstrap.decisionPValue,
+      mean: meanTestedDifferential,
+      state: bootstrap.state
+    },
+    n,
+    minPoints: settings.minPoints,
+    shortData: settings.shortData,
+    identicalLosses
+  });
+  const first = series.time[0];
+  const last = series.time[n - 1];
+  return {
+    loss: scope.loss,
+    horizon: scope.horizon,
+    series: scope.series,
+    ...scope.path === void 0 ? {} : { path: scope.path },
+    n,
+    rows: series.rowCount,
+    maxHorizon: series.maxHorizon,
+    firstTimestamp: first === void 0 ? null : scope.timestamps[first] ?? null,
+    lastTimestamp: last === void 0 ? null : scope.timestamps[last] ?? null,
+    meanBaselineLoss,
+    meanCandidateLoss,
+    meanDifference: meanCandidateLoss - meanBaselineLoss,
+    relativeDifference: meanBaselineLoss === 0 ? null : meanCandidateLoss / meanBaselineLoss - 1,
+    meanTestedDifferential,
+    relativeChange: relativeChange({
+      series,
+      settings,
+      agreement: withBootstrap ? settings.agreement : "dm",
+      dieboldMariano: dieboldMariano2,
+      bootstrap: {
+        state: bootstrap.state,
+        resampledDeviations: bootstrapRun?.resampledDeviations ?? null
+      }
+    }),
+    dieboldMariano: dieboldMariano2,
+    bootstrap,
+    verdict: decision.verdict,
+    reasons: decision.reasons,
+    rejected: decision.rejected
+  };
+}
+function withMeasured(summary, kind, n) {
+  const interval = summary.interval;
+  if (interval === null) return summary;
+  const measured = measuredCoverage(kind, n, interval.level);
+  return measured === null ? summary : { ...summary, interval: { ...interval, measuredCoverage: measured } };
+}
+function meanOrZero(x) {
+  return x.length === 0 ? 0 : mean(x);
+}
+function bootstrapNotRun(settings) {
+  return {
+    state: "not-run",
+    resamples: 0,
+    seed: settings.seed,
+    expectedBlockLength: 1,
+    blockLengthRule: settings.blockLength.kind,
+    blockLengthSelection: null,
+    standardError: null,
+    interval: null,
+    relativeInterval: null,
+    pValue: null,
+    pValueTwoSided: null,
+    decisionPValue: null,
+    notes: [
+      "not run for per-series comparisons (the Diebold\u2013Mariano test with adjusted p-values locates them)"
+    ]
+  };
+}
+
+// src/stability/recentWindow.ts
+function parseRecentWindow(text, label) {
+  if (text === "") return null;
+  const percent2 = /^(\d+(?:\.\d+)?)%$/.exec(text);
+  if (percent2 !== null) {
+    const share = Number(percent2[1]) / 100;
+    if (share > 0 && share < 1) return { kind: "share", share };
+  } else if (/^\d+$/.test(text)) {
+    const points = Number(text);
+    if (Number.isSafeInteger(points) && points >= 2) return { kind: "points", points };
+  }
+  throw new InputError(
+    `${label} must be a number of time points (an integer \u2265 2) or a percentage such as 15%`,
+    { value: text }
+  );
+}
+function recentPoints(window2, n) {
+  const k = window2.kind === "points" ? window2.points : Math.ceil(window2.share * n - 1e-9);
+  return Math.min(n, Math.max(k, 0));
+}
+
+// src/stability/recentComparison.ts
+function lastPoints(series, count) {
+  const from = series.baseline.length - count;
+  const rows = series.rows.subarray(from);
+  let rowCount = 0;
+  for (let t = 0; t < rows.length; t++) rowCount += rows[t];
+  return {
+    time: series.time.subarray(from),
+    baseline: series.baseline.subarray(from),
+    candidate: series.candidate.subarray(from),
+    rows,
+    rowCount,
+    maxHorizon: series.maxHorizon
+  };
+}
+function recentComparison(series, window2, scope, hypothesis, settings, runner) {
+  const count = recentPoints(window2, series.baseline.length);
+  return compareLossSeries(
+    lastPoints(series, count),
+    scope,
+    hypothesis,
+    settings,
+    runner === void 0 ? {} : { runner }
+  );
+}
+
+// src/stability/stabilityLevels.ts
+function splitLevel(alpha, checks) {
+  return checks === 2 ? alpha / 2 : alpha;
+}
+
+// src/stability/assessStability.ts
+function assessStability(inputs) {
+  const { series, timestamps, settings } = inputs;
+  const label = (i) => timestamps[series.time[i]] ?? String(i);
+  const { periods } = periodBreakdown(series, timestamps, inputs.kind);
+  const worse = hypothesisFor("no-regression", settings.margin, settings.marginKind);
+  const d = lossDifferential(series, worse.baselineFactor - 1);
+  if (worse.boundary !== 0) for (let t = 0; t < d.length; t++) d[t] -= worse.boundary;
+  const withRecent = settings.recent !== null && series.baseline.length > 0;
+  const fluctuationAlpha = splitLevel(settings.alpha, withRecent ? 2 : 1);
+  const test = fluctuationTest(d, {
+    mu: settings.fluctuationWindow,
+    alpha: fluctuationAlpha,
+    sides: settings.fluctuationSides,
+    lag: settings.lag,
+    horizon: series.maxHorizon
+  });
+  const fluctuation = test === null ? null : {
+    statistic: test.statistic,
+    criticalValue: test.criticalValue,
+    mu: settings.fluctuationWindow,
+    windowSize: test.windowSize,
+    rejected: test.rejected,
+    peak: {
+      start: label(test.peakWindow),
+      end: label(test.peakWindow + test.windowSize - 1)
+    },
+    worsePeriods: test.worseRuns.map(([from, to]) => ({
+      start: label(from),
+      end: label(to)
+    }))
+  };
+  const recentAlpha = splitLevel(settings.alpha, test === null ? 1 : 2);
+  const recent = settings.recent === null || !withRecent ? null : recentComparison(
+    series,
+    settings.recent,
+    { loss: settings.loss, horizon: "all", series: "all", timestamps },
+    inputs.hypothesis,
+    recentAlpha === settings.alpha ? settings : { ...settings, alpha: recentAlpha },
+    inputs.runner
+  );
+  const levels = {
+    adjustment: fluctuation !== null && recent !== null ? "bonferroni" : "none",
+    alpha: settings.alpha,
+    fluctuation: fluctuation === null ? null : fluctuationAlpha,
+    recent: recent === null ? null : recentAlpha
+  };
+  return { fluctuation, recent, periods, levels };
+}
+
+// src/comparison/evaluatePanel.ts
+function evaluatePanel(panel, settings, extras = {}) {
+  const { losses, pooled, weights } = panelLosses(panel, settings, extras);
+  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const runner = extras.resampleRunner === void 0 ? {} : { runner: extras.resampleRunner };
+  const scope = (horizon, series) => ({
+    loss: settings.loss,
+    horizon,
+    series,
+    timestamps: panel.timestamps
+  });
+  const overallSeries = aggregateByTime(panel, pooled, void 0, weights);
+  const comparisons = [
+    compareLossSeries(overallSeries, scope("all", "all"), hypothesis, settings, runner)
+  ];
+  const byHorizon = groupRows(panel.horizon);
+  if (byHorizon.size > 1) {
+    for (const h of [...byHorizon.keys()].sort((a, b) => a - b)) {
+      const series = aggregateByTime(panel, pooled, byHorizon.get(h), weights);
+      comparisons.push(compareLossSeries(series, scope(h, "all"), hypothesis, settings, runner));
+    }
+  }
+  let pathSummary = null;
+  if (panel.path !== null && panel.paths.length > 1) {
+    const byPath = groupRows(panel.path);
+    const perPath = panel.paths.map(
+      (name, id) => compareLossSeries(
+        aggregateByTime(panel, pooled, byPath.get(id) ?? [], weights),
+        { ...scope("all", "all"), path: name },
+        hypothesis,
+        settings,
+        { bootstrap: false }
+      )
+    );
+    for (const c of perPath) comparisons.push(c);
+    const worse = perPath.filter((c) => c.meanDifference > 0).length;
+    pathSummary = {
+      paths: perPath.length,
+      worse,
+      shareWorse: worse / perPath.length,
+      significantlyWorse: perPath.filter((c) => {
+        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        return p !== null && p <= settings.alpha;
+      }).length
+    };
+  }
+  let seriesSummary = null;
+  if (panel.seriesNames.length > 1) {
+    const perSeries = seriesComparisons(panel, losses, weights, hypothesis, settings, scope);
+    for (const c of perSeries.comparisons) comparisons.push(c);
+    seriesSummary = perSeries.summary;
+  }
+  return buildReport({
+    version: VERSION,
+    settings,
+    hypothesis,
+    inputs: panelInputsSummary(panel, losses),
+    comparisons,
+    seriesSummary,
+    pathSummary,
+    ...extras.integrity === void 0 ? {} : { integrity: extras.integrity },
+    stability: assessStability({
+      series: overallSeries,
+      timestamps: panel.timestamps,
+      kind: panel.timestampKind,
+      hypothesis,
+      settings,
+      ...runner
+    })
+  });
+}
+function overallLossSeries(panel, settings, extras = {}) {
+  const { pooled, weights } = panelLosses(panel, settings, extras);
+  return aggregateByTime(panel, pooled, void 0, weights);
+}
+function panelLosses(panel, settings, extras) {
+  const losses = rowLossesOrInputError(panel, settings);
+  const pooled = settings.pooling === "scaled" ? scaledLosses(panel, losses, settings, extras) : losses;
+  const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
+  return { losses, pooled, weights };
+}
+function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) {
+  const k = panel.seriesNames.length;
+  const rowsOf = groupRows(panel.series);
+  const plain = hypothesisFor("no-regression", 0, "absolute");
+  const upper = [];
+  const raw = panel.seriesNames.map((name, id) => {
+    const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
+    const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
+    upper.push(dm.smallSample?.pValue ?? dm.pValue);
+    return compareLossSeries(series, scope("all", name), hypothesis, settings, {
+      bootstrap: false
+    });
+  });
+  const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
+  const worseP = adjust(upper);
+  const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
+  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const policyP = hypothesis.rejectWhen === "above" ? adjust(tested) : adjust(tested.map((p) => p === null ? null : 1 - p));
+  let worse = 0;
+  let better = 0;
+  const comparisons = raw.map((c, j) => {
+    const w = worseP[j] ?? null;
+    const b = betterP[j] ?? null;
+    const direction = w !== null && w <= settings.alpha ? "worse" : b !== null && b <= settings.alpha ? "better" : "no evidence";
+    if (direction === "worse") worse++;
+    if (direction === "better") better++;
+    const decision = decideAdjusted({
+      hypothesis,
+      alpha: settings.alpha,
+      adjustedPValue: policyP[j] ?? null,
+      method: settings.adjust,
+      n: c.n,
+      minPoints: settings.minPoints
+    });
+    return Object.assign(c, {
+      verdict: decision.verdict,
+      reasons: decision.reasons,
+      rejected: { dieboldMariano: decision.rejected, bootstrap: null },
+      adjustedPValue: policyP[j] ?? null,
+      direction,
+      directionPValue: direction === "better" ? b : w
+    });
+  });
+  const top = comparisons.filter((c) => c.direction === "worse").sort(
+    (a, b) => (b.relativeDifference ?? b.meanDifference) - (a.relativeDifference ?? a.meanDifference)
+  ).slice(0, settings.top).map((c) => c.series);
+  return {
+    comparisons,
+    summary: {
+      method: settings.adjust,
+      alpha: settings.alpha,
+      series: k,
+      worse,
+      better,
+      noEvidence: k - worse - better,
+      topRegressions: top
+    }
+  };
+}
+function groupRows(values) {
+  const groups = /* @__PURE__ */ new Map();
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    let list = groups.get(v);
+    if (list === void 0) {
+      list = [];
+      groups.set(v, list);
+    }
+    list.push(i);
+  }
+  return groups;
+}
+function scaledLosses(panel, losses, settings, extras) {
+  let scales;
+  if (settings.scale === "baseline") {
+    scales = baselineMeanLossScale(
+      panel.seriesNames,
+      panel.series,
+      losses.baseline,
+      losses.included
+    );
+  } else {
+    if (extras.history === void 0) {
+      throw new InputError(
+        "the seasonal-naive scale needs a history file (series, timestamp, actual)",
+        {
+          file: "history"
+        }
+      );
+    }
+    const lossKind = settings.loss === "squared" ? "squared" : "absolute";
+    scales = seasonalNaiveScale(extras.history, settings.season, lossKind);
+  }
+  const scaled = scaleLossesBySeries(
+    panel.seriesNames,
+    panel.series,
+    losses.baseline,
+    losses.candidate,
+    scales
+  );
+  if (scaled.state === "unavailable") {
+    const first = scaled.missing[0];
+    throw new InputError(
+      `pooling scaled losses needs a positive scale for every series; ${scaled.missing.length} series lack one, first ${JSON.stringify(first.series)}: ${first.note}`,
+      { file: settings.history ?? settings.baseline, value: first.series }
+    );
+  }
+  return { ...losses, baseline: scaled.baseline, candidate: scaled.candidate };
+}
+function weightsOrInputError(panel, settings) {
+  if (panel.weight === null) {
+    throw new InputError("weights were asked for, but the files have no weight column", {
+      file: settings.actuals ?? settings.baseline,
+      column: settings.columns.weight ?? "weight"
+    });
+  }
+  return panel.weight;
+}
+function rowLossesOrInputError(panel, settings) {
+  let losses;
+  try {
+    losses = computeRowLosses(panel, settings.loss, settings.zeroActuals, settings.interval);
+  } catch (error) {
+    if (error instanceof LossUnavailableError) {
+      throw new InputError(`loss ${settings.loss}: ${error.message}`, {
+        file: `${settings.baseline}, ${settings.candidate}`
+      });
+    }
+    throw error;
+  }
+  for (const [model, values] of [
+    ["baseline", losses.baseline],
+    ["candidate", losses.candidate]
+  ]) {
+    const row = firstOversizedLoss(values, losses.included);
+    if (row >= 0) {
+      const series = panel.seriesNames[panel.series[row]];
+      throw new InputError(
+        `the ${model}'s ${settings.loss} loss for series ${JSON.stringify(series)}, timestamp ${JSON.stringify(
+          panel.timestamps[panel.time[row]]
+        )} is ${values[row]}: beyond ${MAX_LOSS}, means and variances would overflow double precision; rescale the data (e.g. to thousands) or check this row`,
+        {
+          file: panel.actualSource.file,
+          line: panel.actualSource.lines[row],
+          value: String(values[row])
+        }
+      );
+    }
+  }
+  if (settings.zeroActuals === "error" && losses.zeroActualRows.length > 0) {
+    const row = losses.zeroActualRows[0];
+    throw new InputError(
+      `the absolute percentage error is undefined where the actual is 0 (${losses.zeroActualRows.length} rows, this the first; series ${JSON.stringify(
+        panel.seriesNames[panel.series[row]]
+      )}, timestamp ${JSON.stringify(panel.timestamps[panel.time[row]])}); use zero-actuals skip to leave them out and count them, or another loss`,
+      {
+        file: panel.actualSource.file,
+        line: panel.actualSource.lines[row],
+        column: settings.columns.actual ?? "actual",
+        value: "0"
+      }
+    );
+  }
+  return losses;
+}
+
+// src/integrity/panelRowKey.ts
+function describePanelRow(panel, p) {
+  const parts = [];
+  if (panel.seriesNames.length > 1 || panel.seriesNames[0] !== "") {
+    parts.push(`series=${panel.seriesNames[panel.series[p]]}`);
+  }
+  parts.push(`timestamp=${panel.timestamps[panel.time[p]]}`);
+  parts.push(`horizon=${panel.horizon[p]}`);
+  if (panel.origin !== null) parts.push(`origin=${panel.origins[panel.origin[p]]}`);
+  if (panel.path !== null) parts.push(`path=${panel.paths[panel.path[p]]}`);
+  return parts.join(" ");
+}
+
+// src/integrity/exactPredictions.ts
+var EXACT_TOLERANCE = 1e-9;
+var EXACT_RULE = { MIN_ROWS: 5, MIN_SHARE_GAP: 0.05, RATIO: 5 };
+function isExact(prediction, actual) {
+  return Math.abs(prediction - actual) <= EXACT_TOLERANCE * Math.max(Math.abs(prediction), Math.abs(actual));
+}
+function checkExactPredictions(panel) {
+  const b = panel.baseline.prediction;
+  const c = panel.candidate.prediction;
+  if (b === null || c === null) {
+    return {
+      findings: [],
+      notRun: [{ id: "exact-predictions", reason: "the models have no point forecasts in common" }]
+    };
+  }
+  const exactB = new FindingCollector();
+  const exactC = new FindingCollector();
+  for (let p = 0; p < panel.size; p++) {
+    const a = panel.actual[p];
+    if (isExact(b[p], a)) exactB.add(() => `baseline: ${describePanelRow(panel, p)}`);
+    if (isExact(c[p], a)) exactC.add(() => `candidate: ${describePanelRow(panel, p)}`);
+  }
+  const n = panel.size;
+  const shareB = exactB.count / n;
+  const shareC = exactC.count / n;
+  const flagged = (mine, share, other) => mine.count >= EXACT_RULE.MIN_ROWS && share - other >= EXACT_RULE.MIN_SHARE_GAP && share >= EXACT_RULE.RATIO * other;
+  const flagB = flagged(exactB, shareB, shareC);
+  const flagC = flagged(exactC, shareC, shareB);
+  const pct3 = (x) => `${(x * 100).toFixed(2)}%`;
+  const shares = `candidate ${exactC.count} (${pct3(shareC)}), baseline ${exactB.count} (${pct3(shareB)})`;
+  let count = 0;
+  let examples = [];
+  let summary = `rows where the prediction equals the actual (to 1e-9 relative), of ${n}: ${shares}; no model stands out`;
+  if (flagC || flagB) {
+    const who = flagC && flagB ? "both models" : flagC ? "the candidate" : "the baseline";
+    count = (flagC ? exactC.count : 0) + (flagB ? exactB.count : 0);
+    examples = [...flagC ? exactC.examples : [], ...flagB ? exactB.examples : []].slice(0, 5);
+    summary = `${who} reproduce${flagC && flagB ? "" : "s"} the actual far more often than the other model, a sign of target leakage: ${shares} of ${n} rows`;
+  }
+  return { findings: [{ id: "exact-predictions", count, examples, summary }], notRun: [] };
+}
+
+// src/integrity/frequency.ts
+var UNITS = {
+  s: { unit: "second", factor: 1 },
+  min: { unit: "second", factor: 60 },
+  h: { unit: "second", factor: 3600 },
+  d: { unit: "day", factor: 1 },
+  bd: { unit: "businessDay", factor: 1 },
+  w: { unit: "day", factor: 7 },
+  mo: { unit: "month", factor: 1 },
+  q: { unit: "month", factor: 3 },
+  y: { unit: "month", factor: 12 }
+};
+var FREQUENCY_SYNTAX = "auto, a count and unit (s, min, h, d, bd, w, mo, q, y), e.g. 1h, 15min, 1d, 1bd, 1w, 1mo, or a number > 0 for numeric timestamps";
+function parseFrequency(text) {
+  const m = /^(\d{1,6})(s|min|h|d|bd|w|mo|q|y)$/.exec(text);
+  if (m !== null) {
+    const count = Number(m[1]);
+    const { unit, factor } = UNITS[m[2]];
+    return count > 0 ? { unit, size: count * factor } : null;
+  }
+  if (!/^\d*\.?\d+(?:[eE][-+]?\d+)?$/.test(text)) return null;
+  const size = Number(text);
+  return Number.isFinite(size) && size > 0 ? { unit: "number", size } : null;
+}
+function formatFrequency(f) {
+  switch (f.unit) {
+    case "number":
+      return String(f.size);
+    case "second":
+      if (f.size % 3600 === 0) return `${f.size / 3600}h`;
+      if (f.size % 60 === 0) return `${f.size / 60}min`;
+      return `${f.size}s`;
+    case "day":
+      return f.size % 7 === 0 ? `${f.size / 7}w` : `${f.size}d`;
+    case "businessDay":
+      return `${f.size}bd`;
+    case "month":
+      return f.size % 12 === 0 ? `${f.size / 12}y` : `${f.size}mo`;
+  }
+}
+
+// src/integrity/timePoint.ts
+var INSTANT_KEY = /^(\d{13})\.(\d{9})$/;
+var WRITTEN_FIELDS = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2}))?)?/;
+function toTimePoint(label, kind) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== kind) return null;
+  if (reading.kind === "number") {
+    return {
+      seconds: reading.key,
+      nanos: 0,
+      wallDay: 0,
+      wallSecond: 0,
+      month: 0,
+      dayOfMonth: 0,
+      monthLength: 0
+    };
+  }
+  if (reading.kind !== "datetime") return null;
+  const instant = INSTANT_KEY.exec(reading.key);
+  const written = WRITTEN_FIELDS.exec(label);
+  if (instant === null || written === null) {
+    throw new Error(`cannot take the instant and written date of ${JSON.stringify(label)}`);
+  }
+  const seconds = Number(instant[1]) - 1e12;
+  const nanos = Number(instant[2]);
+  const year = Number(written[1]);
+  const month = Number(written[2]);
+  const day = Number(written[3]);
+  const wallSecond = written[4] === void 0 ? 0 : Number(written[4]) * 3600 + Number(written[5]) * 60 + (written[6] === void 0 ? 0 : Number(written[6])) + nanos / 1e9;
+  return {
+    seconds,
+    nanos,
+    wallDay: daysFromCivil(year, month, day),
+    wallSecond,
+    month: year * 12 + month - 1,
+    dayOfMonth: day,
+    monthLength: lengthOfMonth(year, month)
+  };
+}
+function compareTimePoints(a, b) {
+  return a.seconds - b.seconds || a.nanos - b.nanos;
+}
+function timePointsOf(labels, kind) {
+  return labels.map((label) => toTimePoint(label, kind));
+}
+function lengthOfMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
+
+// src/integrity/stepCount.ts
+var SLACK = 1e-9;
+function stepsAhead(from, target, f) {
+  if (compareTimePoints(target, from) <= 0) return 0;
+  switch (f.unit) {
+    case "number":
+    case "second": {
+      const diff = target.seconds - from.seconds + (target.nanos - from.nanos) / 1e9;
+      return Math.max(0, Math.ceil(diff / f.size - SLACK));
+    }
+    case "day": {
+      const days = target.wallDay - from.wallDay;
+      const later = target.wallSecond > from.wallSecond;
+      return gridCount(later ? days : days - 1, f.size);
+    }
+    case "businessDay": {
+      const later = target.wallSecond > from.wallSecond && isWeekday(from.wallDay);
+      const n = weekdaysUpTo(target.wallDay) - weekdaysUpTo(from.wallDay) + (later ? 1 : 0);
+      return gridCount(n - 1, f.size);
+    }
+    case "month": {
+      const months = target.month - from.month;
+      const day = Math.min(target.dayOfMonth, from.monthLength);
+      const later = day > from.dayOfMonth || day === from.dayOfMonth && target.wallSecond > from.wallSecond;
+      return gridCount(later ? months : months - 1, f.size);
+    }
+  }
+}
+function gridCount(span, size) {
+  return span < 0 ? 0 : Math.floor(span / size) + 1;
+}
+function isWeekday(day) {
+  const weekday = ((day + 4) % 7 + 7) % 7;
+  return weekday !== 0 && weekday !== 6;
+}
+function weekdaysUpTo(day) {
+  const m = day - 4;
+  const weeks = Math.floor(m / 7);
+  const r = m - 7 * weeks;
+  return 5 * weeks + Math.min(r + 1, 5);
+}
+
+// src/integrity/foldChecks.ts
+function checkFolds(input) {
+  const { panel, layout } = input;
+  const kind = panel.timestampKind;
+  if (kind === "text") {
+    throw new InputError(
+      "--folds needs timestamps that are all numbers or all ISO 8601 date-times; these are in text order",
+      { file: layout.file }
+    );
+  }
+  const folds = /* @__PURE__ */ new Map();
+  for (const s of layout.segments) {
+    const point = (label, column) => {
+      const p = toTimePoint(label, kind);
+      if (p === null) {
+        throw new InputError(
+          `${column} is not a ${kind === "number" ? "number" : "ISO 8601 date-time"} like the predictions' timestamps`,
+          { file: layout.file, line: s.line, column, value: label }
+        );
+      }
+      return p;
+    };
+    const from = point(s.start, "start");
+    const to = point(s.end, "end");
+    if (compareTimePoints(from, to) > 0) {
+      throw new InputError(`the segment ends (${s.end}) before it starts (${s.start})`, {
+        file: layout.file,
+        line: s.line,
+        value: s.end
+      });
+    }
+    let fold = folds.get(s.fold);
+    if (fold === void 0) {
+      fold = { train: [], test: [] };
+      folds.set(s.fold, fold);
+    }
+    fold[s.role].push({ ...s, from, to });
+  }
+  for (const [name, fold] of folds) {
+    if (fold.test.length === 0) {
+      const line2 = fold.train[0].line;
+      throw new InputError(`fold "${name}" has no test segment`, {
+        file: layout.file,
+        line: line2,
+        value: name
+      });
+    }
+  }
+  const findings = [];
+  const notRun = [];
+  let maxHorizon = 1;
+  for (let p = 0; p < panel.size; p++) maxHorizon = Math.max(maxHorizon, panel.horizon[p]);
+  const f = input.frequency;
+  if (f === null) {
+    notRun.push({ id: "fold-purge", reason: input.frequencyReason });
+  } else {
+    const purge = new FindingCollector();
+    let pairs = 0;
+    for (const [name, fold] of folds) {
+      for (const test of fold.test) {
+        for (const train of fold.train) {
+          pairs++;
+          if (touches(train, test, maxHorizon, input.embargo, f)) {
+            purge.add(
+              () => `fold ${name}: train ${train.start} to ${train.end} (line ${train.line}) touches test ${test.start} to ${test.end} (line ${test.line})`
+            );
+          }
+        }
+      }
+    }
+    findings.push({
+      id: "fold-purge",
+      count: purge.count,
+      examples: purge.examples,
+      summary: `${purge.count} of ${pairs} (training, test) segment pairs overlap the test window widened by ${maxHorizon} steps before (largest horizon) and ${input.embargo} after (embargo), at ${formatFrequency(f)}`
+    });
+  }
+  const times = panel.timestamps.map((label) => toTimePoint(label, kind));
+  const windows = /* @__PURE__ */ new Map();
+  for (const [name, fold] of folds) windows.set(name, mergeWindows(fold.test));
+  const anyFold = mergeWindows([...folds.values()].flatMap((fold) => fold.test));
+  const outside = new FindingCollector();
+  for (let p = 0; p < panel.size; p++) {
+    const tests = panel.path === null ? anyFold : windows.get(panel.paths[panel.path[p]]);
+    if (tests === void 0 || !insideAny(tests, times[panel.time[p]])) {
+      outside.add(
+        () => `${describePanelRow(panel, p)}${tests === void 0 ? " (no such fold in the layout)" : ""}`
+      );
+    }
+  }
+  findings.push({
+    id: "outside-test-window",
+    count: outside.count,
+    examples: outside.examples,
+    summary: `${outside.count} of ${panel.size} evaluated rows lie outside the test segments of their fold${panel.path === null ? " (no path column: any fold)" : ""}`
+  });
+  return { findings, notRun };
+}
+function touches(train, test, h, n, f) {
+  const endsLate = compareTimePoints(train.to, test.from) >= 0 || stepsAhead(train.to, test.from, f) <= h;
+  const startsEarly = compareTimePoints(train.from, test.to) <= 0 || stepsAhead(test.to, train.from, f) <= n;
+  return endsLate && startsEarly;
+}
+function mergeWindows(segments) {
+  const sorted = [...segments].sort((a, b) => compareTimePoints(a.from, b.from));
+  const out = [];
+  for (const s of sorted) {
+    const last = out[out.length - 1];
+    if (last !== void 0 && compareTimePoints(s.from, last.to) <= 0) {
+      if (compareTimePoints(s.to, last.to) > 0) last.to = s.to;
+    } else {
+      out.push({ from: s.from, to: s.to });
+    }
+  }
+  return out;
+}
+function insideAny(windows, t) {
+  let lo2 = 0;
+  let hi2 = windows.length - 1;
+  let found = -1;
+  while (lo2 <= hi2) {
+    const mid = lo2 + hi2 >> 1;
+    if (compareTimePoints(windows[mid].from, t) <= 0) {
+      found = mid;
+      lo2 = mid + 1;
+    } else {
+      hi2 = mid - 1;
+    }
+  }
+  return found >= 0 && compareTimePoints(t, windows[found].to) <= 0;
+}
+
+// src/integrity/inferFrequency.ts
+var BUSINESS_DAILY = { frequency: { unit: "businessDay", size: 1 } };
+function isBusinessDaily(series) {
+  let crossesWeekend = false;
+  for (const points of series) {
+    for (let i = 0; i < points.length; i++) {
+      if (!isWeekday(points[i].wallDay)) return false;
+      const from = points[i - 1]?.wallDay;
+      if (from !== void 0 && points[i].wallDay - from === 3 && ((from - 1) % 7 + 7) % 7 === 0) {
+        crossesWeekend = true;
+      }
+    }
+  }
+  return crossesWeekend;
+}
+var SLACK2 = 1e-6;
+function inferFrequency(kind, series) {
+  if (!series.some((points) => points.length >= 2)) {
+    return { frequency: null, reason: "no series has two different timestamps" };
+  }
+  if (kind === "number") {
+    return fromGaps(series, "number", (a, b) => b.seconds - a.seconds);
+  }
+  const first = series.find((points) => points.length > 0)[0];
+  const every = (test) => series.every((points) => points.every(test));
+  const oneTimeOfDay = every((p) => p.wallSecond === first.wallSecond);
+  if (oneTimeOfDay) {
+    const oneDay = every((p) => p.dayOfMonth === first.dayOfMonth);
+    const monthEnds = every((p) => p.dayOfMonth === p.monthLength);
+    if (oneDay || monthEnds) return fromGaps(series, "month", (a, b) => b.month - a.month);
+    const daily = fromGaps(series, "day", (a, b) => b.wallDay - a.wallDay);
+    return daily.frequency?.size === 1 && isBusinessDaily(series) ? BUSINESS_DAILY : daily;
+  }
+  return fromGaps(series, "second", (a, b) => b.seconds - a.seconds + (b.nanos - a.nanos) / 1e9);
+}
+function fromGaps(series, unit, gap) {
+  let step = Number.POSITIVE_INFINITY;
+  for (const points of series) {
+    for (let i = 1; i < points.length; i++) {
+      const g = gap(points[i - 1], points[i]);
+      if (g > 0 && g < step) step = g;
+    }
+  }
+  if (!Number.isFinite(step)) {
+    return { frequency: null, reason: "no two timestamps of a series are a step apart" };
+  }
+  const frequency = { unit, size: step };
+  for (const points of series) {
+    for (let i = 1; i < points.length; i++) {
+      const g = gap(points[i - 1], points[i]);
+      const ratio2 = g / step;
+      if (Math.abs(ratio2 - Math.round(ratio2)) > SLACK2 * Math.max(1, ratio2)) {
+        const other = { unit, size: g };
+        return {
+          frequency: null,
+          reason: `irregular timestamps: gaps of ${formatFrequency(frequency)} and ${formatFrequency(other)} (not a multiple of it)`
+        };
+      }
+    }
+  }
+  return { frequency };
+}
+
+// src/integrity/likeForLike.ts
+function checkLikeForLike(input) {
+  const { baseline: b, candidate: c } = input;
+  const findings = [];
+  const notRun = [];
+  const labelSets = (id, what, pick, keyOf) => {
+    const bc = pick(b);
+    const cc = pick(c);
+    if (bc === null || cc === null) {
+      notRun.push({ id, reason: `the files have no ${what} column` });
+      return;
+    }
+    findings.push(compareSets(id, what, keyed(bc.labels, keyOf), keyed(cc.labels, keyOf)));
+  };
+  labelSets("origin-sets", "origin", (t) => t.origin, timeKey(input.originKind));
+  labelSets(
+    "path-sets",
+    "path",
+    (t) => t.path,
+    (label) => label
+  );
+  if (b.horizon === null || c.horizon === null) {
+    notRun.push({ id: "horizon-sets", reason: "the files have no horizon column" });
+  } else {
+    findings.push(
+      compareSets(
+        "horizon-sets",
+        "horizon",
+        new Map([...distinct(b.horizon.values)].map((h) => [String(h), String(h)])),
+        new Map([...distinct(c.horizon.values)].map((h) => [String(h), String(h)]))
+      )
+    );
+  }
+  if (input.timestampKind === "text") {
+    notRun.push({ id: "time-spans", reason: "timestamps are in text order" });
+  } else {
+    findings.push(timeSpans(b, c, input.timestampKind));
+  }
+  labelSets(
+    "series-coverage",
+    "series",
+    (t) => t.series,
+    (label) => label
+  );
+  return { findings, notRun };
+}
+function timeKey(kind) {
+  if (kind === "text") return (label) => label;
+  return (label) => {
+    const r = readLabel(label);
+    return typeof r === "string" || r.kind === "text" ? label : String(r.key);
+  };
+}
+function keyed(labels, keyOf) {
+  const out = /* @__PURE__ */ new Map();
+  for (const label of labels) {
+    const key = keyOf(label);
+    if (!out.has(key)) out.set(key, label);
+  }
+  return out;
+}
+function distinct(values) {
+  const out = /* @__PURE__ */ new Set();
+  for (let i = 0; i < values.length; i++) out.add(values[i]);
+  return out;
+}
+function compareSets(id, what, baseline, candidate) {
+  const onlyIn = (mine, other, role) => {
+    const found = new FindingCollector();
+    for (const [key, label] of mine) {
+      if (!other.has(key)) found.add(() => `${what}=${label} only in the ${role}`);
+    }
+    return found;
+  };
+  const b = onlyIn(baseline, candidate, "baseline");
+  const c = onlyIn(candidate, baseline, "candidate");
+  const examples = [...b.examples.slice(0, c.count > 0 ? 3 : MAX_EXAMPLES), ...c.examples].slice(
+    0,
+    MAX_EXAMPLES
+  );
+  return {
+    id,
+    count: b.count + c.count,
+    examples,
+    summary: `${b.count} of ${baseline.size} ${what} values only in the baseline, ${c.count} of ${candidate.size} only in the candidate`
+  };
+}
+function timeSpans(b, c, kind) {
+  const keyOf = timeKey(kind);
+  const order = (x, y) => kind === "number" ? Number(x) - Number(y) : x < y ? -1 : x > y ? 1 : 0;
+  const span = (t) => {
+    const keys = keyed(t.timestamp.labels, keyOf);
+    const sorted = [...keys.keys()].sort(order);
+    return { keys, first: sorted[0], last: sorted[sorted.length - 1] };
+  };
+  const sb = span(b);
+  const sc = span(c);
+  const found = new FindingCollector();
+  const outside = (mine, other, role, otherRole) => {
+    let n = 0;
+    for (const [key, label2] of mine.keys) {
+      if (order(key, other.first) < 0 || order(key, other.last) > 0) {
+        n++;
+        found.add(() => `timestamp=${label2} in the ${role}, outside the ${otherRole}'s span`);
+      }
+    }
+    return n;
+  };
+  const nb = outside(sb, sc, "baseline", "candidate");
+  const nc = outside(sc, sb, "candidate", "baseline");
+  const label = (s) => `${s.keys.get(s.first)} to ${s.keys.get(s.last)}`;
+  return {
+    id: "time-spans",
+    count: found.count,
+    examples: found.examples,
+    summary: `baseline spans ${label(sb)}, candidate ${label(sc)}: ${nb} baseline and ${nc} candidate timestamps lie outside the other's span`
+  };
+}
+
+// src/integrity/rowKey.ts
+function describeTableRow(table2, i) {
+  const parts = [];
+  if (table2.series !== null) parts.push(`series=${table2.series.labels[table2.series.ids[i]]}`);
+  parts.push(`timestamp=${table2.timestamp.labels[table2.timestamp.ids[i]]}`);
+  if (table2.horizon !== null) parts.push(`horizon=${table2.horizon.values[i]}`);
+  if (table2.origin !== null) parts.push(`origin=${table2.origin.labels[table2.origin.ids[i]]}`);
+  if (table2.path !== null) parts.push(`path=${table2.path.labels[table2.path.ids[i]]}`);
+  return `${table2.summary.role} line ${table2.lines[i]}: ${parts.join(" ")}`;
+}
+
+// src/integrity/rowChecks.ts
+function checkRows(input) {
+  const { tables } = input;
+  if (tables.some((t) => t.origin === null)) {
+    const reason = "the predictions files have no origin column";
+    return {
+      findings: [],
+      notRun: [
+        { id: "look-ahead", reason },
+        { id: "horizon-steps", reason },
+        { id: "origin-after-actuals", reason }
+      ]
+    };
+  }
+  if (input.timestampKind === "text" || input.originKind !== input.timestampKind) {
+    const reason = input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`;
+    return {
+      findings: [],
+      notRun: [
+        { id: "look-ahead", reason },
+        { id: "horizon-steps", reason },
+        { id: "origin-after-actuals", reason }
+      ]
+    };
+  }
+  const kind = input.timestampKind;
+  const lookAhead = new FindingCollector();
+  const horizon = new FindingCollector();
+  const afterActuals = new FindingCollector();
+  const notRun = [];
+  const f = input.frequency;
+  const hasHorizon = tables.every((t) => t.horizon !== null);
+  if (!hasHorizon) notRun.push({ id: "horizon-steps", reason: "the files have no horizon column" });
+  else if (f === null) notRun.push({ id: "horizon-steps", reason: input.frequencyReason });
+  const countSteps = hasHorizon && f !== null;
+  let rows = 0;
+  for (const table2 of tables) {
+    const times = timePointsOf(table2.timestamp.labels, kind);
+    const origins = timePointsOf(table2.origin.labels, kind);
+    const tIds = table2.timestamp.ids;
+    const oIds = table2.origin.ids;
+    const h = table2.horizon?.values;
+    rows += table2.size;
+    for (let i = 0; i < table2.size; i++) {
+      const t = times[tIds[i]];
+      const o = origins[oIds[i]];
+      if (compareTimePoints(o, t) >= 0) lookAhead.add(() => describeTableRow(table2, i));
+      else if (countSteps && stepsAhead(o, t, f) !== h[i]) {
+        horizon.add(() => {
+          const steps = stepsAhead(o, t, f);
+          return `${describeTableRow(table2, i)} (${steps} step${steps === 1 ? "" : "s"} of ${formatFrequency(f)})`;
+        });
+      }
+      if (input.lastActual !== null && compareTimePoints(o, input.lastActual) > 0) {
+        afterActuals.add(() => describeTableRow(table2, i));
+      }
+    }
+  }
+  const findings = [
+    {
+      id: "look-ahead",
+      ...lookAhead,
+      summary: `${lookAhead.count} of ${rows} predictions rows have an origin at or after the timestamp they forecast`
+    }
+  ];
+  if (countSteps) {
+    findings.push({
+      id: "horizon-steps",
+      ...horizon,
+      summary: `${horizon.count} of ${rows} rows have a horizon that differs from the steps of ${formatFrequency(f)} from origin to timestamp`
+    });
+  }
+  if (input.lastActual === null) {
+    notRun.push({ id: "origin-after-actuals", reason: "no actual has a comparable timestamp" });
+  } else {
+    findings.push({
+      id: "origin-after-actuals",
+      ...afterActuals,
+      summary: `${afterActuals.count} of ${rows} rows were issued after the last actual (${input.lastActualLabel})`
+    });
+  }
+  return { findings, notRun };
+}
+
+// src/integrity/checkBacktest.ts
+function checkBacktest(input, settings) {
+  const timestampKind = readableKind(input.panel.timestampKind, [
+    input.panel.timestamps,
+    input.baseline.timestamp.labels,
+    input.candidate.timestamp.labels,
+    ...input.actuals === void 0 ? [] : [input.actuals.timestamp.labels]
+  ]);
+  const originKind = readableKind(input.panel.originKind, [
+    input.baseline.origin?.labels ?? [],
+    input.candidate.origin?.labels ?? []
+  ]);
+  const panel = { ...input.panel, timestampKind, originKind };
+  const frequency = chooseFrequency(panel, settings.frequency);
+  const findings = [];
+  const notRun = [];
+  const add = (part) => {
+    findings.push(...part.findings);
+    notRun.push(...part.notRun);
+  };
+  const actualTables = input.actuals === void 0 ? [input.baseline, input.candidate] : [input.actuals];
+  const last = lastTime(actualTables, panel.timestampKind);
+  add(
+    checkRows({
+      tables: [input.baseline, input.candidate],
+      timestampKind: panel.timestampKind,
+      originKind: panel.originKind,
+      lastActual: last?.point ?? null,
+      lastActualLabel: last?.label ?? "",
+      frequency: frequency.frequency,
+      frequencyReason: frequency.reason
+    })
+  );
+  add(
+    checkLikeForLike({
+      baseline: input.baseline,
+      candidate: input.candidate,
+      timestampKind: panel.timestampKind,
+      originKind: panel.originKind
+    })
+  );
+  if (input.folds === void 0) {
+    const reason = "no fold layout given (--folds FILE)";
+    notRun.push({ id: "fold-purge", reason }, { id: "outside-test-window", reason });
+  } else {
+    add(
+      checkFolds({
+        panel,
+        layout: input.folds,
+        embargo: settings.embargo,
+        frequency: frequency.frequency,
+        frequencyReason: frequency.reason
+      })
+    );
+  }
+  add(checkExactPredictions(panel));
+  const rank = (id) => CHECK_IDS.indexOf(id);
+  findings.sort((a, b) => rank(a.id) - rank(b.id));
+  notRun.sort((a, b) => rank(a.id) - rank(b.id));
+  return applyCheckPolicy(
+    findings,
+    notRun,
+    settings.mode,
+    frequency.frequency === null ? null : { text: formatFrequency(frequency.frequency), source: frequency.source }
+  );
+}
+function chooseFrequency(panel, text) {
+  const kind = panel.timestampKind;
+  if (text !== "auto") {
+    const f = parseFrequency(text);
+    if (f === null) throw new InputError("frequency is not a frequency", { value: text });
+    if (kind === "text") {
+      return { frequency: null, reason: "timestamps are in text order", source: "given" };
+    }
+    if (f.unit === "number" !== (kind === "number")) {
+      throw new InputError(
+        kind === "number" ? `the frequency ${text} has a unit, but the timestamps are numbers: give a plain step such as 1` : `the frequency ${text} is a plain number, but the timestamps are ISO 8601 date-times: give a unit such as 1h, 1d or 1mo`,
+        { value: text }
+      );
+    }
+    return { frequency: f, reason: "", source: "given" };
+  }
+  if (kind === "text") {
+    return {
+      frequency: null,
+      reason: "timestamps are in text order, so steps cannot be counted",
+      source: "inferred"
+    };
+  }
+  const inferred = inferFrequency(kind, pointsBySeries(panel, kind));
+  return inferred.frequency === null ? {
+    frequency: null,
+    reason: `no frequency: ${inferred.reason}; give --frequency`,
+    source: "inferred"
+  } : { frequency: inferred.frequency, reason: "", source: "inferred" };
+}
+function pointsBySeries(panel, kind) {
+  const points = panel.timestamps.map((label) => toTimePoint(label, kind));
+  const out = panel.seriesNames.map(() => []);
+  let lastSeries = -1;
+  let lastTime2 = -1;
+  for (let p = 0; p < panel.size; p++) {
+    const series = panel.series[p];
+    const time = panel.time[p];
+    if (series === lastSeries && time === lastTime2) continue;
+    if (series === lastSeries && time < lastTime2) {
+      throw new Error("the aligned panel is not sorted by series and timestamp");
+    }
+    out[series].push(points[time]);
+    lastSeries = series;
+    lastTime2 = time;
+  }
+  return out;
+}
+function readableKind(kind, lists) {
+  if (kind === "text") return kind;
+  for (const labels of lists) {
+    for (const label of labels) if (toTimePoint(label, kind) === null) return "text";
+  }
+  return kind;
+}
+function lastTime(tables, kind) {
+  if (kind === "text") return null;
+  let best = null;
+  for (const table2 of tables) {
+    for (const label of table2.timestamp.labels) {
+      const point = toTimePoint(label, kind);
+      if (point !== null && (best === null || compareTimePoints(point, best.point) > 0)) {
+        best = { point, label };
+      }
+    }
+  }
+  return best;
+}
+
+// src/statistics/modelConfidenceSet.ts
+function modelConfidenceSet(input) {
+  const { means, deviations, statistic, alpha } = input;
+  const m = means.length;
+  if (m === 0 || deviations.length !== m) {
+    throw new RangeError("the model confidence set needs one mean and one resample row per model");
+  }
+  if (!(alpha > 0 && alpha < 1)) throw new RangeError(`alpha must lie in (0, 1), got ${alpha}`);
+  const resamples = deviations[0].length;
+  const alive = means.map((_, i) => i);
+  const order = [];
+  const stepPValues = [];
+  const pValues = new Array(m).fill(1);
+  let running = 0;
+  while (alive.length > 1) {
+    const step = statistic === "range" ? rangeStep(alive, means, deviations, resamples) : maxStep(alive, means, deviations, resamples);
+    const pValue2 = (1 + step.exceedances) / (resamples + 1);
+    running = Math.max(running, pValue2);
+    order.push(step.eliminate);
+    stepPValues.push(pValue2);
+    pValues[step.eliminate] = running;
+    alive.splice(alive.indexOf(step.eliminate), 1);
+  }
+  order.push(alive[0]);
+  stepPValues.push(1);
+  pValues[alive[0]] = 1;
+  return {
+    eliminationOrder: order,
+    stepPValues,
+    pValues,
+    members: pValues.flatMap((p, i) => p >= alpha ? [i] : []),
+    level: 1 - alpha,
+    statistic
+  };
+}
+function reaches(resampled, observed) {
+  return resampled >= observed - Math.abs(observed) * 1e-10;
+}
+function rangeStep(alive, means, deviations, resamples) {
+  const size = alive.length;
+  const pairs = [];
+  const worst = new Array(size).fill(Number.NEGATIVE_INFINITY);
+  let observed = 0;
+  for (let a = 0; a < size; a++) {
+    for (let c = a + 1; c < size; c++) {
+      const zi = deviations[alive[a]];
+      const zj = deviations[alive[c]];
+      let sum = 0;
+      for (let b = 0; b < resamples; b++) {
+        const x = zi[b] - zj[b];
+        sum += x * x;
+      }
+      const variance = sum / resamples;
+      const t = variance > 0 ? (means[alive[a]] - means[alive[c]]) / Math.sqrt(variance) : 0;
+      if (t > worst[a]) worst[a] = t;
+      if (-t > worst[c]) worst[c] = -t;
+      if (Math.abs(t) > observed) observed = Math.abs(t);
+      if (variance > 0) pairs.push({ i: alive[a], j: alive[c], scale: 1 / Math.sqrt(variance) });
+    }
+  }
+  let exceedances = 0;
+  for (let b = 0; b < resamples; b++) {
+    let max = 0;
+    for (const { i, j, scale } of pairs) {
+      const t = Math.abs(deviations[i][b] - deviations[j][b]) * scale;
+      if (t > max) max = t;
+    }
+    if (reaches(max, observed)) exceedances++;
+  }
+  return { eliminate: alive[argmax(worst)], exceedances };
+}
+function maxStep(alive, means, deviations, resamples) {
+  const size = alive.length;
+  const average = new Float64Array(resamples);
+  for (const i of alive) {
+    const z = deviations[i];
+    for (let b = 0; b < resamples; b++) average[b] += z[b];
+  }
+  for (let b = 0; b < resamples; b++) average[b] /= size;
+  let meanOfMeans = 0;
+  for (const i of alive) meanOfMeans += means[i];
+  meanOfMeans /= size;
+  const scales = new Float64Array(size);
+  const t = new Array(size);
+  for (let a = 0; a < size; a++) {
+    const z = deviations[alive[a]];
+    let sum = 0;
+    for (let b = 0; b < resamples; b++) {
+      const x = z[b] - average[b];
+      sum += x * x;
+    }
+    const variance = sum / resamples;
+    scales[a] = variance > 0 ? 1 / Math.sqrt(variance) : 0;
+    t[a] = (means[alive[a]] - meanOfMeans) * scales[a];
+  }
+  const observed = Math.max(...t);
+  let exceedances = 0;
+  for (let b = 0; b < resamples; b++) {
+    let max = Number.NEGATIVE_INFINITY;
+    for (let a = 0; a < size; a++) {
+      const x = (deviations[alive[a]][b] - average[b]) * scales[a];
+      if (x > max) max = x;
+    }
+    if (reaches(max, observed)) exceedances++;
+  }
+  return { eliminate: alive[argmax(t)], exceedances };
+}
+function argmax(values) {
+  let best = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] > values[best]) best = i;
+  return best;
+}
+
+// src/candidates/commonBlockLength.ts
+function commonBlockLength(baseline, candidates, rule) {
+  if (rule.kind === "fixed") return rule.length;
+  if (baseline.length < 2) return 1;
+  const lengths = candidates.map((c) => {
+    const d = new Float64Array(baseline.length);
+    for (let t = 0; t < d.length; t++) d[t] = c[t] - baseline[t];
+    return automaticBlockLength(d).blockLength;
+  });
+  lengths.sort((a, b) => a - b);
+  let sum = 0;
+  for (const b of lengths) sum += b;
+  return sum / lengths.length;
+}
+
+// src/candidates/decideCandidates.ts
+function decideCandidates(input) {
+  const { rule, alpha, setAlpha, preferred, spaPValue } = input;
+  const reasons = [];
+  const verdicts = [];
+  const p = spaPValue.toPrecision(3);
+  switch (rule) {
+    case "preferred-in-set": {
+      const level = `${Math.round((1 - setAlpha) * 1e3) / 10}%`;
+      if (!preferred.inConfidenceSet) {
+        verdicts.push("fail");
+        reasons.push(
+          `The preferred candidate ${preferred.name} is not in the ${level} model confidence set (MCS p-value ${preferred.mcsPValue.toPrecision(3)} < ${setAlpha}): other models are significantly more accurate.`
+        );
+      } else {
+        reasons.push(
+          `The preferred candidate ${preferred.name} is in the ${level} model confidence set (MCS p-value ${preferred.mcsPValue.toPrecision(3)}).`
+        );
+      }
+      verdicts.push(preferred.verdict);
+      reasons.push(`Its own comparison against the baseline: ${preferred.verdict}.`);
+      break;
+    }
+    case "none-worse":
+      if (spaPValue <= alpha) {
+        verdicts.push("fail");
+        reasons.push(
+          `The SPA test finds some candidate worse than the baseline (consistent p-value ${p} \u2264 ${alpha}).`
+        );
+      } else {
+        verdicts.push("pass");
+        reasons.push(
+          `No evidence that any candidate is worse than the baseline (SPA consistent p-value ${p} > ${alpha}).`
+        );
+      }
+      break;
+    case "some-better":
+      if (spaPValue <= alpha) {
+        verdicts.push("pass");
+        reasons.push(
+          `The SPA test finds some candidate better than the baseline, allowing for the choice among all of them (consistent p-value ${p} \u2264 ${alpha}).`
+        );
+      } else {
+        verdicts.push("fail");
+        reasons.push(
+          `No evidence, after allowing for the choice among the candidates, that any beats the baseline (SPA consistent p-value ${p} > ${alpha}).`
+        );
+      }
+      break;
+  }
+  if (input.missingRows.length > 0) {
+    verdicts.push("fail");
+    reasons.push(
+      `Candidates lacking rows the baseline has: ${input.missingRows.join(", ")} (set allow-missing to compare on the common rows).`
+    );
+  }
+  return { verdict: worstVerdict(verdicts), reasons };
+}
+
+// src/candidates/jointLossSeries.ts
+function jointLossSeries(pairs) {
+  const first = pairs[0];
+  if (first === void 0) throw new Error("joint loss series need at least one candidate");
+  const labels = (p) => Array.from(p.series.time, (t) => p.timestamps[t]);
+  const reference = labels(first);
+  for (const pair of pairs.slice(1)) {
+    const own = labels(pair);
+    const at = firstDifference(reference, own, first.series.baseline, pair.series.baseline);
+    if (at !== null) {
+      const where = at < Math.min(reference.length, own.length) ? `at timestamp ${JSON.stringify(reference[at])} / ${JSON.stringify(own[at])} (point ${at + 1})` : `in length (${reference.length} against ${own.length} time points)`;
+      throw new InputError(
+        `candidates "${first.name}" and "${pair.name}" are not scored on the same rows against the baseline: they differ ${where}. The joint tests (superior predictive ability, model confidence set) need every candidate to forecast the same keys`,
+        { file: pair.file }
+      );
+    }
+  }
+  return {
+    timestamps: reference,
+    baseline: first.series.baseline,
+    candidates: pairs.map((p) => p.series.candidate)
+  };
+}
+function firstDifference(a, b, baseA, baseB) {
+  const n = Math.min(a.length, b.length);
+  for (let i = 0; i < n; i++) {
+    if (a[i] !== b[i] || !Object.is(baseA[i], baseB[i])) return i;
+  }
+  return a.length === b.length ? null : n;
+}
+
+// src/candidates/sharedResampleDeviations.ts
+function sharedResampleDeviations(series, options, random = createRandomSource, runner) {
+  const n = series[0]?.length ?? 0;
+  return series.map((x) => {
+    if (x.length !== n) throw new RangeError("shared resamples need series of one length");
+    return stationaryResampleDeviations(
+      x,
+      meanOf(x),
+      options.expectedBlockLength,
+      options.resamples,
+      options.seed,
+      random,
+      runner
+    );
+  });
+}
+
+// src/statistics/bootstrap/stationaryBootstrapVariance.ts
+function stationaryBootstrapVariance(d, expectedBlockLength) {
+  const n = d.length;
+  if (n === 0) return Number.NaN;
+  if (!(Number.isFinite(expectedBlockLength) && expectedBlockLength >= 1)) {
+    throw new RangeError(
+      `expected block length must be a finite number \u2265 1, got ${expectedBlockLength}`
+    );
+  }
+  const u = centre(d);
+  const q = 1 - 1 / expectedBlockLength;
+  const negligible = 1e-17 / n;
+  const near = q === 0 ? 0 : Math.min(n - 1, Math.ceil(Math.log(negligible) / Math.log(q)));
+  let sum = lagProduct(u, 0) / n;
+  for (let k = 1; k < n; k++) {
+    if (k > near && n - k > near) {
+      k = n - near - 1;
+      continue;
+    }
+    const weight = (1 - k / n) * q ** k + k / n * q ** (n - k);
+    if (weight !== 0) sum += 2 * weight * (lagProduct(u, k) / n);
+  }
+  return sum / n;
+}
+
+// src/statistics/realityCheck.ts
+function realityCheck(means, deviations, n) {
+  if (means.length === 0 || deviations.length !== means.length) {
+    throw new RangeError("the reality check needs one mean and one resample row per candidate");
+  }
+  const root = Math.sqrt(n);
+  const statistic = root * Math.max(...means);
+  const resamples = deviations[0].length;
+  let count = 0;
+  for (let b = 0; b < resamples; b++) {
+    let max = Number.NEGATIVE_INFINITY;
+    for (const row of deviations) if (row[b] > max) max = row[b];
+    if (root * max >= statistic) count++;
+  }
+  return { statistic, pValue: (1 + count) / (resamples + 1) };
+}
+
+// src/statistics/superiorPredictiveAbility.ts
+function superiorPredictiveAbility(input) {
+  const { means, standardErrors, deviations, n } = input;
+  const k = means.length;
+  if (k === 0 || standardErrors.length !== k || deviations.length !== k) {
+    throw new RangeError(
+      "superior predictive ability needs one mean, error and resample row per candidate"
+    );
+  }
+  const resamples = deviations[0].length;
+  const studentised = means.map((m, i) => ratio(m, standardErrors[i]));
+  const statistic = Math.max(0, ...studentised);
+  const threshold = Math.sqrt(2 * Math.log(Math.log(n)));
+  const shifts = {
+    lower: means.map((m) => Math.min(m, 0)),
+    consistent: means.map((m, i) => m < -standardErrors[i] * threshold ? m : 0),
+    upper: means.map(() => 0)
+  };
+  const resampled = (centring) => {
+    const shift = shifts[centring];
+    const out = new Float64Array(resamples);
+    for (let b = 0; b < resamples; b++) {
+      let max = 0;
+      for (let i = 0; i < k; i++) {
+        const t = ratio(deviations[i][b] + shift[i], standardErrors[i]);
+        if (t > max) max = t;
+      }
+      out[b] = max;
+    }
+    return out;
+  };
+  const pValueAt = (stars, t) => {
+    let count = 0;
+    for (let b = 0; b < resamples; b++) if (stars[b] >= t) count++;
+    return (1 + count) / (resamples + 1);
+  };
+  const consistent = resampled("consistent");
+  return {
+    statistic,
+    pValueLower: pValueAt(resampled("lower"), statistic),
+    pValueConsistent: pValueAt(consistent, statistic),
+    pValueUpper: pValueAt(resampled("upper"), statistic),
+    studentised,
+    adjustedPValues: studentised.map((t) => pValueAt(consistent, Math.max(0, t))),
+    resamples
+  };
+}
+function ratio(x, s) {
+  if (s > 0) return x / s;
+  return x === 0 ? 0 : x > 0 ? Number.POSITIVE_INFINITY : Number.NEGATIVE_INFINITY;
+}
+
+// src/candidates/superiorAbilityTest.ts
+function superiorAbilityTest(baseline, candidates, deviations, expectedBlockLength, hypothesis, margin = { factor: 1, shift: 0 }) {
+  const sign = hypothesis === "none-better" ? 1 : -1;
+  const { factor, shift } = margin;
+  const n = baseline.length;
+  const base = deviations[0];
+  const performance = candidates.map((c) => {
+    const x = new Float64Array(n);
+    for (let t = 0; t < n; t++) x[t] = sign * (factor * baseline[t] - c[t]) - shift;
+    return x;
+  });
+  const resampled = candidates.map((_, k) => {
+    const own = deviations[k + 1];
+    const x = new Float64Array(own.length);
+    for (let b = 0; b < x.length; b++) x[b] = sign * (factor * base[b] - own[b]);
+    return x;
+  });
+  const means = performance.map(meanOf);
+  const standardErrors = performance.map(
+    (x) => Math.sqrt(Math.max(0, stationaryBootstrapVariance(x, expectedBlockLength)))
+  );
+  return {
+    hypothesis,
+    spa: superiorPredictiveAbility({ means, standardErrors, deviations: resampled, n }),
+    realityCheck: realityCheck(means, resampled, n)
+  };
+}
+
+// src/candidates/evaluateCandidates.ts
+var MINIMUM_JOINT_POINTS = 2;
+function evaluateCandidates(input, settings, extras = {}) {
+  const names = [input.baselineName, ...input.candidates.map((c) => c.name)];
+  if (new Set(names).size !== names.length) {
+    throw new InputError(
+      `every model needs its own name; the baseline and the candidates are named ${names.join(", ")}`
+    );
+  }
+  const pairs = input.candidates.map((c) => {
+    const panel = alignPanel(
+      {
+        baseline: input.baseline,
+        candidate: c.table,
+        ...input.actuals === void 0 ? {} : { actuals: input.actuals }
+      },
+      { timeFormat: settings.timeFormat }
+    );
+    const own = { ...settings, candidate: c.file };
+    const integrity = checkBacktest(
+      {
+        panel,
+        baseline: input.baseline,
+        candidate: c.table,
+        ...input.actuals === void 0 ? {} : { actuals: input.actuals },
+        ...input.folds === void 0 ? {} : { folds: input.folds }
+      },
+      { frequency: settings.frequency, embargo: settings.embargo, mode: settings.backtestChecks }
+    );
+    const extrasOf = { ...extras, integrity };
+    return { ...c, panel, own, extrasOf, series: overallLossSeries(panel, own, extras) };
+  });
+  const joint = jointLossSeries(
+    pairs.map((p) => ({
+      name: p.name,
+      file: p.file,
+      series: p.series,
+      timestamps: p.panel.timestamps
+    }))
+  );
+  const n = joint.baseline.length;
+  if (n < MINIMUM_JOINT_POINTS) {
+    throw new InputError(
+      `the candidates share ${n} time point(s) with the baseline; the joint tests need at least ${MINIMUM_JOINT_POINTS}`
+    );
+  }
+  const block = commonBlockLength(joint.baseline, joint.candidates, settings.blockLength);
+  const reports = pairs.map(
+    (p) => evaluatePanel(p.panel, { ...p.own, blockLength: { kind: "fixed", length: block } }, p.extrasOf)
+  );
+  const models = [joint.baseline, ...joint.candidates];
+  const deviations = sharedResampleDeviations(
+    models,
+    { expectedBlockLength: block, resamples: settings.resamples, seed: settings.seed },
+    createRandomSource,
+    extras.resampleRunner
+  );
+  const hypothesis = settings.selectionRule === "none-worse" ? "none-worse" : "none-better";
+  const test = superiorAbilityTest(
+    joint.baseline,
+    joint.candidates,
+    deviations,
+    block,
+    hypothesis,
+    spaMargin(settings, hypothesis)
+  );
+  const means = models.map(meanOf);
+  const mcs = modelConfidenceSet({
+    means,
+    deviations,
+    statistic: settings.setStatistic,
+    alpha: settings.setAlpha
+  });
+  const byLoss = input.candidates.map((_, k) => k).sort((a, b) => means[a + 1] - means[b + 1]);
+  const candidates = input.candidates.map((c, k) => ({
+    name: c.name,
+    file: c.file,
+    comparison: reports[k].comparisons[0],
+    inConfidenceSet: mcs.members.includes(k + 1),
+    mcsPValue: mcs.pValues[k + 1],
+    spaPValue: test.spa.adjustedPValues[k],
+    rank: byLoss.indexOf(k) + 1
+  }));
+  const preferredIndex = preferredCandidate(settings, input.candidates, byLoss);
+  const preferred = candidates[preferredIndex];
+  const base = reports[preferredIndex];
+  const decision = decideCandidates({
+    rule: settings.selectionRule,
+    alpha: settings.alpha,
+    setAlpha: settings.setAlpha,
+    preferred: {
+      name: preferred.name,
+      verdict: base.verdict,
+      inConfidenceSet: preferred.inConfidenceSet,
+      mcsPValue: preferred.mcsPValue
+    },
+    spaPValue: test.spa.pValueConsistent,
+    missingRows: settings.allowMissing ? [] : reports.flatMap((r, k) => r.inputs.rowsDropped.baseline > 0 ? [candidates[k].name] : [])
+  });
+  const spa = {
+    hypothesis,
+    statistic: test.spa.statistic,
+    pValueLower: test.spa.pValueLower,
+    pValueConsistent: test.spa.pValueConsistent,
+    pValueUpper: test.spa.pValueUpper,
+    resamples: settings.resamples,
+    expectedBlockLength: block,
+    realityCheck: test.realityCheck
+  };
+  const confidenceSet = {
+    level: mcs.level,
+    statistic: mcs.statistic,
+    members: mcs.members.map((i) => names[i]),
+    eliminationOrder: mcs.eliminationOrder.map((i) => names[i]),
+    stepPValues: mcs.stepPValues,
+    baseline: {
+      name: input.baselineName,
+      meanLoss: means[0],
+      inConfidenceSet: mcs.members.includes(0),
+      mcsPValue: mcs.pValues[0]
+    }
+  };
+  const selection = {
+    rule: settings.selectionRule,
+    preferred: preferred.name,
+    preferredBy: settings.preferred === null ? "lowest-mean-loss" : "option",
+    verdict: decision.verdict,
+    reasons: decision.reasons,
+    timePoints: n,
+    expectedBlockLength: block,
+    blockLengthRule: settings.blockLength.kind
+  };
+  return {
+    ...base,
+    verdict: decision.verdict,
+    headline: headline2(decision.verdict, candidates.length, preferred.name, settings.selectionRule),
+    reasons: [...decision.reasons, ...base.reasons],
+    settings,
+    candidates,
+    spa,
+    confidenceSet,
+    selection
+  };
+}
+function spaMargin(settings, hypothesis) {
+  if (settings.marginKind === "absolute") return { factor: 1, shift: settings.margin };
+  return {
+    factor: hypothesis === "none-worse" ? 1 + settings.margin : 1 - settings.margin,
+    shift: 0
+  };
+}
+function preferredCandidate(settings, candidates, byLoss) {
+  if (settings.preferred === null) return byLoss[0];
+  const index = candidates.findIndex((c) => c.name === settings.preferred);
+  if (index < 0) {
+    throw new InputError(
+      `the preferred candidate is not among the candidates (${candidates.map((c) => c.name).join(", ")})`,
+      { file: "preferred", value: settings.preferred }
+    );
+  }
+  return index;
+}
+function headline2(verdict, k, preferred, rule) {
+  const question = rule === "preferred-in-set" ? `whether the preferred candidate ${preferred} is among the most accurate of ${k + 1} models (model confidence set) and not worse than the baseline` : rule === "none-worse" ? `whether any of ${k} candidates is worse than the baseline (superior predictive ability test)` : `whether any of ${k} candidates beats the baseline, allowing for the choice among them (superior predictive ability test)`;
+  const outcome = verdict === "pass" ? "The gate passes." : verdict === "warn" ? "The evidence is mixed or thin: the gate passes with a warning." : "The gate fails.";
+  return `Tested ${question}. ${outcome}`;
+}
+
+// src/candidates/splitByModel.ts
+function splitByModel(table2) {
+  const models = table2.path;
+  if (models === null) throw new Error("splitByModel needs the model labels in the path slot");
+  const rowsOf = /* @__PURE__ */ new Map();
+  for (let i = 0; i < table2.size; i++) {
+    const id = models.ids[i];
+    let rows = rowsOf.get(id);
+    if (rows === void 0) {
+      rows = [];
+      rowsOf.set(id, rows);
+    }
+    rows.push(i);
+  }
+  const out = /* @__PURE__ */ new Map();
+  for (const [id, rows] of rowsOf) {
+    const name = models.labels[id];
+    try {
+      checkCandidateName(name, `model column "${models.column}"`);
+    } catch (error) {
+      if (error instanceof InputError) {
+        throw new InputError(error.message, {
+          file: table2.summary.path,
+          line: models.firstLines[id],
+          column: models.column,
+          value: name
+        });
+      }
+      throw error;
+    }
+    out.set(name, subset(table2, rows));
+  }
+  return out;
+}
+function subset(table2, rows) {
+  const n = rows.length;
+  const lines = Int32Array.from(rows, (i) => table2.lines[i]);
+  const pick = (values) => Float64Array.from(rows, (i) => values[i]);
+  const labels = (column) => {
+    if (column === null) return null;
+    const remap = /* @__PURE__ */ new Map();
+    const names = [];
+    const firstLines = [];
+    const ids = new Int32Array(n);
+    rows.forEach((i, r) => {
+      const old = column.ids[i];
+      let id = remap.get(old);
+      if (id === void 0) {
+        id = names.length;
+        remap.set(old, id);
+        names.push(column.labels[old]);
+        firstLines.push(table2.lines[i]);
+      }
+      ids[r] = id;
+    });
+    return { column: column.column, ids, labels: names, firstLines: Int32Array.from(firstLines) };
+  };
+  return {
+    summary: { ...table2.summary, rows: n },
+    size: n,
+    lines,
+    series: labels(table2.series),
+    timestamp: labels(table2.timestamp),
+    horizon: table2.horizon === null ? null : {
+      column: table2.horizon.column,
+      values: Int32Array.from(rows, (i) => table2.horizon.values[i])
+    },
+    origin: labels(table2.origin),
+    path: null,
+    actual: table2.actual === null ? null : { column: table2.actual.column, values: pick(table2.actual.values) },
+    prediction: table2.prediction === null ? null : { column: table2.prediction.column, values: pick(table2.prediction.values) },
+    weight: table2.weight === null ? null : { column: table2.weight.column, values: pick(table2.weight.values) },
+    quantiles: table2.quantiles.map((q) => ({ ...q, values: pick(q.values) }))
+  };
+}
+
+// src/candidates/runCandidates.ts
+async function runCandidates(settings, hooks = {}) {
+  if (settings.history !== null && settings.scale === "seasonal-naive") {
+    throw new InputError("several candidates do not support --scale seasonal-naive yet", {
+      file: "scale"
+    });
+  }
+  const read = (path2, role, columns = columnsFor(settings, role)) => readForecastFile(path2, {
+    role,
+    columns,
+    ...readDialect(settings),
+    requireActual: role === "actuals" || settings.actuals === null,
+    onProgress: (done, total) => hooks.onProgress?.({ stage: `reading ${role}`, fraction: total > 0 ? done / total : 1 })
+  });
+  let baseline;
+  let baselineName = settings.baselineModel ?? fileStem(settings.baseline);
+  let candidates;
+  if (settings.modelColumn !== null) {
+    const file = settings.candidates[0].path;
+    const own = columnsFor(settings, "candidate");
+    if (own.path !== void 0) {
+      throw new InputError("--model-column cannot be combined with a path column yet", {
+        file,
+        column: own.path
+      });
+    }
+    const table2 = await read(file, "candidate", {
+      ...own,
+      path: settings.modelColumn
+    });
+    if (table2.summary.ignoredColumns.includes("path")) {
+      throw new InputError("--model-column cannot be combined with a path column yet", {
+        file,
+        column: "path"
+      });
+    }
+    if (table2.path === null) {
+      throw new InputError("the model column is missing from the candidate file", {
+        file,
+        line: 1,
+        column: settings.modelColumn
+      });
+    }
+    const parts = splitByModel(table2);
+    if (settings.baselineModel !== null) {
+      baseline = parts.get(settings.baselineModel);
+      if (baseline === void 0) {
+        throw new InputError(
+          `the baseline model is not in the model column (models: ${[...parts.keys()].join(", ")})`,
+          { file, column: settings.modelColumn, value: settings.baselineModel }
+        );
+      }
+      parts.delete(settings.baselineModel);
+      baselineName = settings.baselineModel;
+    }
+    candidates = [...parts].map(([name, t]) => ({ name, file: `${file}#${name}`, table: t }));
+  } else {
+    candidates = [];
+    for (const c of settings.candidates) {
+      candidates.push({ name: c.name, file: c.path, table: await read(c.path, "candidate") });
+    }
+  }
+  if (candidates.length === 0) {
+    throw new InputError("no candidate left to compare with the baseline", {
+      file: settings.candidates[0]?.path ?? "candidate"
+    });
+  }
+  baseline ??= await read(settings.baseline, "baseline");
+  const actuals = settings.actuals === null ? void 0 : await read(settings.actuals, "actuals");
+  const folds = settings.folds === null ? void 0 : await readFoldLayout(settings.folds);
+  hooks.onProgress?.({ stage: "testing", fraction: 0 });
+  const report = evaluateCandidates(
+    {
+      baselineName,
+      baseline,
+      candidates,
+      ...actuals === void 0 ? {} : { actuals },
+      ...folds === void 0 ? {} : { folds }
+    },
+    settings,
+    hooks.resampleRunner === void 0 ? {} : { resampleRunner: hooks.resampleRunner }
+  );
+  hooks.onProgress?.({ stage: "testing", fraction: 1 });
+  return report;
+}
+
+// src/comparison/evaluateLossSeries.ts
+function evaluateLossSeries(series, source, settings, resampleRunner) {
+  const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
+  const runner = resampleRunner === void 0 ? {} : { runner: resampleRunner };
+  const overall = compareLossSeries(
+    series,
+    { loss: settings.loss, horizon: "all", series: "all", timestamps: source.timestamps },
+    hypothesis,
+    settings,
+    runner
+  );
+  return buildReport({
+    version: VERSION,
+    settings,
+    hypothesis,
+    inputs: lossFileInputsSummary(
+      source.file,
+      source.timestamps,
+      source.kind,
+      series.maxHorizon,
+      source.order
+    ),
+    comparisons: [overall],
+    stability: assessStability({
+      series,
+      timestamps: source.timestamps,
+      kind: source.kind,
+      hypothesis,
+      settings,
+      ...runner
+    })
+  });
+}
+
 // src/reading/lossSeriesReader.ts
 var REQUIRED2 = ["baseline_loss", "candidate_loss"];
 var KNOWN = ["baseline_loss", "candidate_loss", "differential", "rows", "horizon"];
@@ -27159,7 +27912,7 @@ var LossSeriesReader = class {
     }
     this.tokenizer = new Tokenizer(
       delimiter,
-      (fields, count, line) => this.record(fields, count, line),
+      (fields, count, line2) => this.record(fields, count, line2),
       path2,
       options.lineLimit
     );
@@ -27201,7 +27954,7 @@ var LossSeriesReader = class {
       horizon: Int32Array.from(this.horizon)
     };
   }
-  record(fields, count, line) {
+  record(fields, count, line2) {
     if (this.header === null) {
       const names2 = fields.slice(0, count).map((f) => f.trim());
       const index2 = {};
@@ -27209,7 +27962,7 @@ var LossSeriesReader = class {
         if (n in index2) {
           throw new InputError(`the header names the column "${n}" twice`, {
             file: this.path,
-            line
+            line: line2
           });
         }
         index2[n] = i;
@@ -27218,7 +27971,7 @@ var LossSeriesReader = class {
         if (!(need in index2)) {
           throw new InputError(
             `a loss file needs the columns ${this.timestampName}, baseline_loss and candidate_loss; "${need}" is missing`,
-            { file: this.path, line, column: need }
+            { file: this.path, line: line2, column: need }
           );
         }
       }
@@ -27229,7 +27982,7 @@ var LossSeriesReader = class {
     if (count !== names.length) {
       throw new InputError(`expected ${names.length} fields as in the header, found ${count}`, {
         file: this.path,
-        line
+        line: line2
       });
     }
     const at = (name) => fields[index[name]];
@@ -27239,7 +27992,7 @@ var LossSeriesReader = class {
       if (Number.isNaN(x)) {
         throw new InputError("not a finite decimal number", {
           file: this.path,
-          line,
+          line: line2,
           column: name,
           value: text
         });
@@ -27252,7 +28005,7 @@ var LossSeriesReader = class {
       if (!Number.isInteger(x) || x < 1) {
         throw new InputError("expected a whole number \u2265 1", {
           file: this.path,
-          line,
+          line: line2,
           column: name,
           value: at(name)
         });
@@ -27263,7 +28016,7 @@ var LossSeriesReader = class {
     if (label === "") {
       throw new InputError("empty timestamp", {
         file: this.path,
-        line,
+        line: line2,
         column: this.timestampName
       });
     }
@@ -27276,7 +28029,7 @@ var LossSeriesReader = class {
       if (Math.abs(x) > MAX_LOSS) {
         throw new InputError(
           `a loss beyond ${MAX_LOSS} would overflow means and variances in double precision; rescale the data`,
-          { file: this.path, line, column: name, value: at(name) }
+          { file: this.path, line: line2, column: name, value: at(name) }
         );
       }
     }
@@ -27286,7 +28039,7 @@ var LossSeriesReader = class {
       if (Math.abs(d - (c - b)) > 1e-9 * scale) {
         throw new InputError(`differential should be candidate_loss \u2212 baseline_loss = ${c - b}`, {
           file: this.path,
-          line,
+          line: line2,
           column: "differential",
           value: at("differential")
         });
@@ -27297,20 +28050,20 @@ var LossSeriesReader = class {
       id = this.labels.length;
       this.idOf.set(label, id);
       this.labels.push(label);
-      this.firstLines.push(line);
+      this.firstLines.push(line2);
     } else {
       throw new InputError(
         `timestamp ${JSON.stringify(label)} appears twice (first on line ${this.firstLines[id]})`,
         {
           file: this.path,
-          line,
+          line: line2,
           column: this.timestampName,
           value: label
         }
       );
     }
     this.ids.push(id);
-    this.lines.push(line);
+    this.lines.push(line2);
     this.baseline.push(b);
     this.candidate.push(c);
     this.rows.push(integer("rows"));
@@ -27343,6 +28096,8 @@ async function readLossSeriesFile(path2, options = {}) {
 async function runComparison(settings, hooks = {}) {
   if (settings.losses !== null)
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
+  if (settings.candidates.length > 1 || settings.modelColumn !== null)
+    return { report: await runCandidates(settings, hooks) };
   const read = (path2, role) => readForecastFile(path2, {
     role,
     columns: columnsFor(settings, role),
@@ -27562,6 +28317,140 @@ function createResamplePool(options = {}) {
   };
 }
 
+// src/report/candidatesChartSvg.ts
+var ROW = 26;
+var LEFT = 170;
+var PLOT = 420;
+var RIGHT = 24;
+var TOP = 34;
+var BOTTOM = 34;
+function candidatesChartSvg(report) {
+  const candidates = report.candidates;
+  if (candidates === void 0 || candidates.length === 0) return "";
+  const rows = [...candidates].sort((a, b) => a.rank - b.rank);
+  const margin = report.settings.marginKind === "relative" ? report.settings.margin : null;
+  const [lo2, hi2] = axisRange(rows, margin);
+  const x = (v) => LEFT + (logRatio(v) - logRatio(lo2)) / (logRatio(hi2) - logRatio(lo2)) * PLOT;
+  const width = LEFT + PLOT + RIGHT;
+  const height = TOP + rows.length * ROW + BOTTOM;
+  const parts = [
+    `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="${width}" height="${height}" role="img" aria-label="Relative change of each candidate against the baseline">`,
+    `<title>Relative change against the baseline, with the ${pct(report.settings.confidence)} set of each comparison</title>`,
+    `<text x="${LEFT}" y="18" font-size="12" font-family="sans-serif">change in mean loss against the baseline (\u25CF in the set, \u25CB out)</text>`,
+    line(x(0), TOP - 6, x(0), TOP + rows.length * ROW, "#555", "")
+  ];
+  if (margin !== null && margin > 0 && margin <= hi2) {
+    parts.push(line(x(margin), TOP - 6, x(margin), TOP + rows.length * ROW, "#b35900", "4 3"));
+  }
+  rows.forEach((c, i) => {
+    const y = TOP + i * ROW + ROW / 2;
+    parts.push(
+      `<text x="${LEFT - 8}" y="${y + 4}" font-size="12" font-family="sans-serif" text-anchor="end">${xml(c.name)}</text>`
+    );
+    const rc = c.comparison.relativeChange;
+    if (rc !== null) {
+      for (const piece2 of rc.pieces ?? [{ lower: rc.lower, upper: rc.upper }]) {
+        const a = piece2.lower === null || piece2.lower < lo2 ? lo2 : piece2.lower;
+        const b = piece2.upper === null || piece2.upper > hi2 ? hi2 : piece2.upper;
+        parts.push(line(x(a), y, x(b), y, "#1f4e79", ""));
+        if (a === lo2 && (piece2.lower === null || piece2.lower < lo2)) parts.push(arrow(x(lo2), y, -1));
+        if (b === hi2 && (piece2.upper === null || piece2.upper > hi2)) parts.push(arrow(x(hi2), y, 1));
+      }
+    }
+    const estimate = c.comparison.relativeDifference;
+    if (estimate !== null) {
+      const cx = x(Math.min(hi2, Math.max(lo2, estimate)));
+      parts.push(
+        `<circle cx="${num(cx)}" cy="${y}" r="4.5" stroke="#1f4e79" stroke-width="1.5" fill="${c.inConfidenceSet ? "#1f4e79" : "#ffffff"}"><title>${xml(`${c.name}: ${formatSignedPercent(estimate)}`)}</title></circle>`
+      );
+    }
+  });
+  const axisY = TOP + rows.length * ROW + 14;
+  for (const tick of ticks(lo2, hi2)) {
+    parts.push(
+      `<text x="${num(x(tick))}" y="${axisY}" font-size="11" font-family="sans-serif" text-anchor="middle">${xml(formatSignedPercent(tick))}</text>`
+    );
+  }
+  parts.push("</svg>");
+  return parts.join("\n");
+}
+function axisRange(rows, margin) {
+  const values = [0];
+  if (margin !== null) values.push(margin);
+  for (const c of rows) {
+    if (c.comparison.relativeDifference !== null) values.push(c.comparison.relativeDifference);
+    const rc = c.comparison.relativeChange;
+    for (const p of rc?.pieces ?? (rc === null ? [] : [{ lower: rc.lower, upper: rc.upper }])) {
+      if (p.lower !== null) values.push(p.lower);
+      if (p.upper !== null) values.push(p.upper);
+    }
+  }
+  const lo2 = Math.min(...values.map(logRatio));
+  const hi2 = Math.max(...values.map(logRatio));
+  const pad = hi2 > lo2 ? (hi2 - lo2) * 0.05 : 0.01;
+  return [Math.expm1(lo2 - pad), Math.expm1(hi2 + pad)];
+}
+function logRatio(change) {
+  return Math.log(Math.max(1e-3, 1 + change));
+}
+var TICKS = [
+  -0.99,
+  -0.9,
+  -0.5,
+  -0.2,
+  -0.1,
+  -0.05,
+  -0.02,
+  -0.01,
+  0,
+  0.01,
+  0.02,
+  0.05,
+  0.1,
+  0.2,
+  0.5,
+  1,
+  2,
+  5,
+  10,
+  20,
+  50,
+  100,
+  200,
+  500,
+  1e3
+];
+function ticks(lo2, hi2) {
+  const span = logRatio(hi2) - logRatio(lo2);
+  const out = [];
+  for (const t of TICKS) {
+    if (t < lo2 || t > hi2) continue;
+    const last = out.at(-1);
+    if (last === void 0 || logRatio(t) - logRatio(last) >= span / 6 || t === 0) {
+      if (t === 0 && last !== void 0 && logRatio(0) - logRatio(last) < span / 6) out.pop();
+      out.push(t);
+    }
+  }
+  return out;
+}
+function line(x1, y1, x2, y2, colour, dash) {
+  const dashed = dash === "" ? "" : ` stroke-dasharray="${dash}"`;
+  return `<line x1="${num(x1)}" y1="${num(y1)}" x2="${num(x2)}" y2="${num(y2)}" stroke="${colour}" stroke-width="2"${dashed}/>`;
+}
+function arrow(x, y, direction) {
+  const tip = x + 6 * direction;
+  return `<polygon points="${num(tip)},${y} ${num(x)},${y - 4} ${num(x)},${y + 4}" fill="#1f4e79"/>`;
+}
+function num(v) {
+  return (Math.round(v * 10) / 10).toString();
+}
+function pct(level) {
+  return `${Math.round(level * 1e3) / 10}%`;
+}
+function xml(text) {
+  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+}
+
 // src/report/cells.ts
 var LOSS_DIGITS = 4;
 var PERCENT_DIGITS = 3;
@@ -27729,6 +28618,111 @@ function missingRowsSection(report) {
   return { title, lines, tables };
 }
 
+// src/report/escapeMarkdown.ts
+function escapeMarkdown(text) {
+  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
+}
+
+// src/report/renderStabilitySection.ts
+function overTimeParts(report) {
+  const stability = report.stability;
+  const overall = report.comparisons[0];
+  if (stability === null || overall === void 0) return null;
+  const sentences = [fluctuationSentence(stability, report)];
+  if (stability.levels.adjustment === "bonferroni") sentences.push(levelsSentence(stability));
+  return {
+    windows: stability.recent === null ? null : windowTable(overall, stability.recent),
+    sentences,
+    periods: stability.periods.length > 0 ? periodTable(stability) : null
+  };
+}
+function renderStabilitySection(report) {
+  const parts = overTimeParts(report);
+  if (parts === null) return [];
+  const out = ["**Over time**", ""];
+  if (parts.windows !== null) out.push(...markdownRows(parts.windows), "");
+  for (const sentence of parts.sentences) out.push(escapeMarkdown(sentence), "");
+  if (parts.periods !== null) {
+    out.push(
+      `<details><summary>Mean loss by period (${parts.periods.rows.length} periods)</summary>`,
+      "",
+      ...markdownRows(parts.periods),
+      "",
+      "</details>",
+      ""
+    );
+  }
+  return out;
+}
+function markdownRows(t) {
+  const row = (cells) => `| ${cells.map(escapeMarkdown).join(" | ")} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
+    ...t.rows.map(row)
+  ];
+}
+function windowTable(overall, recent) {
+  const level = recent.relativeChange?.level;
+  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
+  const row = (name, c) => [
+    name,
+    `${c.firstTimestamp ?? "n/a"} to ${c.lastTimestamp ?? "n/a"}`,
+    String(c.n),
+    formatNumber(c.meanBaselineLoss),
+    formatNumber(c.meanCandidateLoss),
+    relativeChangeText(c),
+    formatPValue(c.dieboldMariano.decisionPValue),
+    formatPValue(c.bootstrap.decisionPValue),
+    c.verdict
+  ];
+  return table(
+    [
+      "window",
+      "from \u2013 to",
+      "time points",
+      "baseline loss",
+      "candidate loss",
+      head,
+      "p (DM)",
+      "p (bootstrap)",
+      "verdict"
+    ],
+    ["left", "left", "right", "right", "right", "right", "right", "right", "left"],
+    [row("whole backtest", overall), row("most recent", recent)]
+  );
+}
+function fluctuationSentence(stability, report) {
+  const f = stability.fluctuation;
+  if (f === null) {
+    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
+  }
+  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
+  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${f.peak.start} to ${f.peak.end}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
+  if (f.worsePeriods.length > 0) {
+    const spans = f.worsePeriods.map((s) => `${s.start} to ${s.end}`).join(", ");
+    return `${setup} The candidate is significantly worse over ${spans}.`;
+  }
+  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
+}
+function levelsSentence(stability) {
+  const { alpha, fluctuation, recent } = stability.levels;
+  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
+}
+function periodTable(stability) {
+  return table(
+    ["period", "time points", "baseline loss", "candidate loss", "relative"],
+    ["left", "right", "right", "right", "right"],
+    stability.periods.map((p) => [
+      p.start === p.end ? p.start : `${p.start} to ${p.end}`,
+      String(p.n),
+      formatNumber(p.meanBaselineLoss),
+      formatNumber(p.meanCandidateLoss),
+      formatSignedPercent(p.relativeDifference)
+    ])
+  );
+}
+
 // src/losses/lossName.ts
 var LOSS_NAMES = ["squared", "absolute", "ape", "sape", "pinball", "interval"];
 var LOSS_LABELS = {
@@ -27759,10 +28753,46 @@ var ENGINE_OPTIONS = [
   },
   {
     name: "candidate",
-    valueName: "FILE",
+    valueName: "FILE|NAME=FILE",
     defaultValue: null,
     required: true,
-    help: "predictions of the pull request's model"
+    help: "predictions of the pull request's model; repeat as NAME=FILE (one per line in the action) to test several candidates at once (the name defaults to the file's stem)"
+  },
+  {
+    name: "model-column",
+    valueName: "COLUMN",
+    defaultValue: "",
+    help: "several candidates in one long candidate file: the column naming the model of each row"
+  },
+  {
+    name: "baseline-model",
+    valueName: "NAME",
+    defaultValue: "",
+    help: "with --model-column: the model of that file that is the baseline (then no --baseline file)"
+  },
+  {
+    name: "preferred",
+    valueName: "NAME",
+    defaultValue: "",
+    help: "with several candidates: the one the pull request would ship (default: the lowest mean loss)"
+  },
+  {
+    name: "selection-rule",
+    defaultValue: "preferred-in-set",
+    choices: ["preferred-in-set", "none-worse", "some-better"],
+    help: "with several candidates: preferred-in-set passes when the preferred candidate is in the model confidence set and passes its own comparison; none-worse fails on evidence that some candidate is worse than the baseline (SPA test); some-better passes only on evidence that some candidate is better (SPA test)"
+  },
+  {
+    name: "set-alpha",
+    valueName: "NUMBER",
+    defaultValue: "0.1",
+    help: "with several candidates: \u03B1 of the model confidence set, which then holds the best models with probability 1 \u2212 \u03B1 (0.1 as in Hansen, Lunde & Nason 2011)"
+  },
+  {
+    name: "set-statistic",
+    defaultValue: "max",
+    choices: ["range", "max"],
+    help: "with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)"
   },
   {
     name: "losses",
@@ -28238,7 +29268,7 @@ function reportSections(report, options = {}) {
   const lead = `${GATE_WORD[report.verdict]}: ${first?.text ?? "no finding"}.`;
   const interval = relativeInterval(overall);
   const onCommon = report.inputs.rowsDropped.baseline > 0 ? " on the rows both models scored" : "";
-  const change = overall.relativeDifference === null ? `Mean loss ${significant(overall.meanCandidateLoss)} against the baseline's ${significant(overall.meanBaselineLoss)}${onCommon}, over ${overall.n} time points.` : `Mean loss ${percent(overall.relativeDifference)}${interval === null ? "" : ` (${pct(interval.level)} interval ${interval.pieces === void 0 && interval.lower !== null && interval.upper !== null ? `${percent(interval.lower)} to ${percent(interval.upper)}` : intervalText(interval)})`} against the baseline${onCommon}, over ${overall.n} time points${overall.firstTimestamp === null ? "" : ` from ${overall.firstTimestamp} to ${overall.lastTimestamp}`}.`;
+  const change = overall.relativeDifference === null ? `Mean loss ${significant(overall.meanCandidateLoss)} against the baseline's ${significant(overall.meanBaselineLoss)}${onCommon}, over ${overall.n} time points.` : `Mean loss ${percent(overall.relativeDifference)}${interval === null ? "" : ` (${pct2(interval.level)} interval ${interval.pieces === void 0 && interval.lower !== null && interval.upper !== null ? `${percent(interval.lower)} to ${percent(interval.upper)}` : intervalText(interval)})`} against the baseline${onCommon}, over ${overall.n} time points${overall.firstTimestamp === null ? "" : ` from ${overall.firstTimestamp} to ${overall.lastTimestamp}`}.`;
   const options_ = settingsAsOptions(report.settings, paths);
   return {
     title: report.name === "" ? "skillgate" : `skillgate \xB7 ${report.name}`,
@@ -28260,12 +29290,12 @@ function reportSections(report, options = {}) {
     settings: settingsTable(options_)
   };
 }
-function pct(level) {
+function pct2(level) {
   return `${Number((level * 100).toPrecision(3))}%`;
 }
 function changeHeader(rows) {
   const level = rows.map(relativeInterval).find((i) => i !== null)?.level;
-  return level === void 0 ? "change" : `change [${pct(level)} interval]`;
+  return level === void 0 ? "change" : `change [${pct2(level)} interval]`;
 }
 function mainTable(report, overall) {
   const gate = report.verdict;
@@ -28306,7 +29336,7 @@ function mainNotes(reasons) {
 function detailsTable(report, c) {
   const dm = c.dieboldMariano;
   const bs = c.bootstrap;
-  const interval = (i) => i === null ? "n/a" : `[${significant(i.lower)}, ${significant(i.upper)}] (${pct(i.level)})${measuredCoverageText(i.measuredCoverage)}`;
+  const interval = (i) => i === null ? "n/a" : `[${significant(i.lower)}, ${significant(i.upper)}] (${pct2(i.level)})${measuredCoverageText(i.measuredCoverage)}`;
   const rows = [
     [
       "statistic",
@@ -28348,7 +29378,7 @@ function detailsTable(report, c) {
   const coverage = report.inputs.intervalCoverage;
   if (coverage !== null) {
     rows.push([
-      `coverage of the ${pct(coverage.nominal)} interval`,
+      `coverage of the ${pct2(coverage.nominal)} interval`,
       `baseline ${percent(coverage.baseline).replace("+", "")}`,
       `candidate ${percent(coverage.candidate).replace("+", "")}`
     ]);
@@ -28493,7 +29523,7 @@ var COLOURS = { worse: "#b4501a", better: "#2463a6", neutral: "#6b7280", ink: "#
 var W = 640;
 var H = 240;
 var M = { left: 56, right: 16, top: 16, bottom: 40 };
-function xml(text) {
+function xml2(text) {
   return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 }
 function linear(lo2, hi2, from, to) {
@@ -28517,19 +29547,19 @@ function fmt(x) {
 }
 function frame(title, body, desc) {
   return [
-    `<svg viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${xml(title)}" xmlns="http://www.w3.org/2000/svg">`,
-    `<title>${xml(title)}</title><desc>${xml(desc)}</desc>`,
+    `<svg viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${xml2(title)}" xmlns="http://www.w3.org/2000/svg">`,
+    `<title>${xml2(title)}</title><desc>${xml2(desc)}</desc>`,
     ...body,
     "</svg>"
   ].join("\n");
 }
 function yAxis(y, unit) {
   return y.ticks.map(
-    (t) => `<line x1="${M.left}" x2="${W - M.right}" y1="${y(t).toFixed(1)}" y2="${y(t).toFixed(1)}" stroke="#e5e7eb"/><text x="${M.left - 6}" y="${(y(t) + 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${COLOURS.neutral}">${xml(fmt(t))}${unit}</text>`
+    (t) => `<line x1="${M.left}" x2="${W - M.right}" y1="${y(t).toFixed(1)}" y2="${y(t).toFixed(1)}" stroke="#e5e7eb"/><text x="${M.left - 6}" y="${(y(t) + 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${COLOURS.neutral}">${xml2(fmt(t))}${unit}</text>`
   );
 }
 function hline(y, colour, dash, label) {
-  return `<line x1="${M.left}" x2="${W - M.right}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${colour}" stroke-width="1.5" stroke-dasharray="${dash}"/><text x="${W - M.right - 2}" y="${(y - 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${colour}">${xml(label)}</text>`;
+  return `<line x1="${M.left}" x2="${W - M.right}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${colour}" stroke-width="1.5" stroke-dasharray="${dash}"/><text x="${W - M.right - 2}" y="${(y - 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${colour}">${xml2(label)}</text>`;
 }
 function differenceOverTimeSvg(input) {
   const { labels, values, margin, band } = input;
@@ -28558,13 +29588,13 @@ function differenceOverTimeSvg(input) {
   );
   values.forEach((v, i) => {
     body.push(
-      `<circle cx="${x(i).toFixed(1)}" cy="${y(v).toFixed(1)}" r="3" fill="${v > 0 ? COLOURS.worse : COLOURS.better}"><title>${xml(`${labels[i]}: ${fmt(v)}%`)}</title></circle>`
+      `<circle cx="${x(i).toFixed(1)}" cy="${y(v).toFixed(1)}" r="3" fill="${v > 0 ? COLOURS.worse : COLOURS.better}"><title>${xml2(`${labels[i]}: ${fmt(v)}%`)}</title></circle>`
     );
   });
   const step = Math.max(1, Math.ceil(n / 6));
   for (let i = 0; i < n; i += step) {
     body.push(
-      `<text x="${x(i).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(labels[i] ?? "")}</text>`
+      `<text x="${x(i).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(labels[i] ?? "")}</text>`
     );
   }
   return frame(
@@ -28586,7 +29616,7 @@ function intervalsSvg(input) {
   const body = [];
   for (const t of x.ticks) {
     body.push(
-      `<line x1="${x(t).toFixed(1)}" x2="${x(t).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="#e5e7eb"/><text x="${x(t).toFixed(1)}" y="${height - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+      `<line x1="${x(t).toFixed(1)}" x2="${x(t).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="#e5e7eb"/><text x="${x(t).toFixed(1)}" y="${height - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(fmt(t))}%</text>`
     );
   }
   body.push(
@@ -28601,7 +29631,7 @@ function intervalsSvg(input) {
     const cy = M.top + rowH * i + rowH / 2;
     const colour = r.lower !== null && r.lower > 0 ? COLOURS.worse : r.upper !== null && r.upper < 0 ? COLOURS.better : COLOURS.neutral;
     body.push(
-      `<text x="${M.left + 32}" y="${cy + 4}" font-size="11" text-anchor="end" fill="${COLOURS.ink}">${xml(r.label)}</text>`
+      `<text x="${M.left + 32}" y="${cy + 4}" font-size="11" text-anchor="end" fill="${COLOURS.ink}">${xml2(r.label)}</text>`
     );
     if (r.lower !== null && r.upper !== null) {
       body.push(
@@ -28609,7 +29639,7 @@ function intervalsSvg(input) {
       );
     }
     body.push(
-      `<circle cx="${x(r.estimate).toFixed(1)}" cy="${cy}" r="4" fill="${colour}"><title>${xml(`${r.label}: ${fmt(r.estimate)}%`)}</title></circle>`
+      `<circle cx="${x(r.estimate).toFixed(1)}" cy="${cy}" r="4" fill="${colour}"><title>${xml2(`${r.label}: ${fmt(r.estimate)}%`)}</title></circle>`
     );
   });
   return frame(
@@ -28633,7 +29663,7 @@ function seriesDotPlotSvg(input) {
   );
   for (const t of x.ticks) {
     body.push(
-      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(fmt(t))}%</text>`
     );
   }
   body.push(
@@ -28642,7 +29672,7 @@ function seriesDotPlotSvg(input) {
   for (const p of points) {
     const colour = p.direction === "worse" ? COLOURS.worse : p.direction === "better" ? COLOURS.better : COLOURS.neutral;
     body.push(
-      `<circle cx="${x(p.change).toFixed(1)}" cy="${y(sig(p.p)).toFixed(1)}" r="4" fill="${colour}" fill-opacity="0.8"><title>${xml(`${p.label}: ${fmt(p.change)}%, adjusted p ${p.p.toPrecision(2)}`)}</title></circle>`
+      `<circle cx="${x(p.change).toFixed(1)}" cy="${y(sig(p.p)).toFixed(1)}" r="4" fill="${colour}" fill-opacity="0.8"><title>${xml2(`${p.label}: ${fmt(p.change)}%, adjusted p ${p.p.toPrecision(2)}`)}</title></circle>`
     );
   }
   return frame(
@@ -28671,13 +29701,13 @@ function bootstrapHistogramSvg(input) {
   });
   for (const t of x.ticks) {
     body.push(
-      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}</text>`
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(fmt(t))}</text>`
     );
   }
   const vline = (v, colour, dash, label, side, row) => {
     const width2 = label.length * 6.2;
     const anchor = side === "end" && x(v) - width2 < M.left ? "start" : side === "start" && x(v) + width2 > W - M.right ? "end" : side;
-    return `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/><text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml(label)}</text>`;
+    return `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/><text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml2(label)}</text>`;
   };
   body.push(
     vline(
@@ -28740,16 +29770,16 @@ function renderHtml(report, options = {}) {
     '<html lang="en"><head><meta charset="utf-8">',
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
-    `<title>${xml(s.title)}: ${s.verdict.toUpperCase()}</title>`,
+    `<title>${xml2(s.title)}: ${s.verdict.toUpperCase()}</title>`,
     `<style>${STYLE}</style></head><body>`,
-    `<h1>${xml(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
-    `<p class="lead"><strong>${xml(s.lead)}</strong> ${xml(s.change)}</p>`,
+    `<h1>${xml2(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
+    `<p class="lead"><strong>${xml2(s.lead)}</strong> ${xml2(s.change)}</p>`,
     htmlTable(s.main),
-    `<p class="muted">${xml(s.intervalNote)}</p>`
+    `<p class="muted">${xml2(s.intervalNote)}</p>`
   );
-  if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`);
+  if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml2(n)}</li>`).join("")}</ul>`);
   out.push(
-    `<p class="muted">${s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: <code>${xml(s.changedSettings)}</code>`}</p>`
+    `<p class="muted">${s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: <code>${xml2(s.changedSettings)}</code>`}</p>`
   );
   const chart = differenceSeries(view);
   if (chart !== null) {
@@ -28762,9 +29792,24 @@ function renderHtml(report, options = {}) {
         values: chart.values,
         margin: chart.margin,
         band: band === null ? null : { lower: band.lower * 100, upper: band.upper * 100 }
-      })}<figcaption>${xml(chartCaption(chart))}${band === null ? "" : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
-      `<p class="spark">${xml(sparklineText(chart))}</p>`
+      })}<figcaption>${xml2(chartCaption(chart))}${band === null ? "" : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
+      `<p class="spark">${xml2(sparklineText(chart))}</p>`
     );
+  }
+  const overTime = overTimeParts(report);
+  if (overTime !== null) {
+    out.push("<h2>Over time</h2>");
+    if (overTime.windows !== null) out.push(htmlTable(overTime.windows));
+    out.push(...overTime.sentences.map((t) => `<p>${xml2(t)}</p>`));
+    if (overTime.periods !== null) {
+      out.push(
+        `<details><summary>Mean loss by period (${overTime.periods.rows.length} periods)</summary>${htmlTable(overTime.periods)}</details>`
+      );
+    }
+  }
+  const candidatesChart = candidatesChartSvg(report);
+  if (candidatesChart !== "") {
+    out.push("<h2>Candidates</h2>", `<figure>${candidatesChart}</figure>`);
   }
   const horizons = view.comparisons.filter(
     (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
@@ -28803,17 +29848,17 @@ function renderHtml(report, options = {}) {
         `<figure>${seriesDotPlotSvg({ points, alpha: view.policy.alpha })}<figcaption>Each dot is a series: across, the change in its mean loss; up, the strength of the evidence (\u2212log10 of the multiplicity-adjusted p-value). Rust: worse, blue: better, grey: no clear difference.</figcaption></figure>`
       );
     }
-    out.push(`<p>${xml(s.series.summary)}</p>`, htmlTable(s.series.table));
+    out.push(`<p>${xml2(s.series.summary)}</p>`, htmlTable(s.series.table));
   }
   if (s.paths !== null) {
-    out.push("<h2>By backtest path</h2>", `<p>${xml(s.paths.summary)}</p>`);
+    out.push("<h2>By backtest path</h2>", `<p>${xml2(s.paths.summary)}</p>`);
     if (s.paths.table !== null) out.push(htmlTable(s.paths.table));
   }
   const missing = missingRowsSection(view);
   if (missing !== null) {
     out.push(
-      `<h2>${xml(missing.title)}</h2>`,
-      ...missing.lines.map((l) => `<p>${xml(l)}</p>`),
+      `<h2>${xml2(missing.title)}</h2>`,
+      ...missing.lines.map((l) => `<p>${xml2(l)}</p>`),
       ...missing.tables.map(htmlTable)
     );
   }
@@ -28826,17 +29871,17 @@ function renderHtml(report, options = {}) {
   }
   out.push(
     htmlTable(s.details),
-    `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`
+    `<ul>${s.detailNotes.map((n) => `<li>${xml2(n)}</li>`).join("")}</ul>`
   );
   if (s.checks !== null) out.push("<h2>Backtest checks</h2>", htmlTable(s.checks));
   out.push(
     "<h2>Inputs and coverage</h2>",
     htmlTable(s.inputs.table),
-    ...s.inputs.lines.map((l) => `<p>${xml(l)}</p>`)
+    ...s.inputs.lines.map((l) => `<p>${xml2(l)}</p>`)
   );
   out.push("<h2>All settings</h2>", htmlTable(s.settings));
   out.push(
-    `<p class="muted">A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${xml(report.tool.version)}.</p>`,
+    `<p class="muted">A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${xml2(report.tool.version)}.</p>`,
     "</body></html>"
   );
   return `${out.join("\n")}
@@ -28848,18 +29893,13 @@ function marginPercent(report) {
   return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
 }
 function htmlTable(t) {
-  const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text)}</${tag}>`;
+  const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml2(text)}</${tag}>`;
   return [
     '<div class="scroll"><table>',
     `<thead><tr>${t.header.map((h, j) => cell("th", h, j)).join("")}</tr></thead>`,
     `<tbody>${t.rows.map((r) => `<tr>${r.map((c, j) => cell("td", c, j)).join("")}</tr>`).join("")}</tbody>`,
     "</table></div>"
   ].join("");
-}
-
-// src/report/escapeMarkdown.ts
-function escapeMarkdown(text) {
-  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
 }
 
 // src/report/renderBacktestChecks.ts
@@ -28898,7 +29938,7 @@ function checkLine(check) {
   const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
-function backtestChecksLines(report, clean3) {
+function backtestChecksLines(report, clean4) {
   const integrity = report.integrity;
   if (integrity.checks.length === 0) return [];
   const flagged = integrity.checks.filter((c) => c.status !== "ok");
@@ -28906,66 +29946,42 @@ function backtestChecksLines(report, clean3) {
     `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
   ];
   for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
+    const eg = c.examples.slice(0, SHOWN).map((e) => clean4(clip(e))).join("; ");
     out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
   }
   return out;
 }
 
-// src/report/renderStabilitySection.ts
-function renderStabilitySection(report) {
-  const stability = report.stability;
-  const overall = report.comparisons[0];
-  if (stability === null || overall === void 0) return [];
-  const out = ["**Over time**", ""];
-  if (stability.recent !== null) out.push(...windowTable(overall, stability.recent), "");
-  out.push(fluctuationSentence(stability, report), "");
-  if (stability.levels.adjustment === "bonferroni") out.push(levelsSentence(stability), "");
-  if (stability.periods.length > 0) out.push(...periodTable(stability), "");
-  return out;
-}
-function windowTable(overall, recent) {
-  const level = recent.relativeChange?.level;
-  const head = level === void 0 ? "relative" : `relative [${formatNumber(level * 100, 3)}% interval]`;
-  const row = (name, c) => `| ${name} | ${escapeMarkdown(c.firstTimestamp ?? "n/a")} to ${escapeMarkdown(c.lastTimestamp ?? "n/a")} | ${c.n} | ${formatNumber(c.meanBaselineLoss)} | ${formatNumber(c.meanCandidateLoss)} | ${relativeChangeText(c)} | ${formatPValue(c.dieboldMariano.decisionPValue)} | ${formatPValue(c.bootstrap.decisionPValue)} | ${c.verdict} |`;
-  return [
-    `| window | from \u2013 to | time points | baseline loss | candidate loss | ${head} | p (DM) | p (bootstrap) | verdict |`,
-    "|---|---|---:|---:|---:|---:|---:|---:|---|",
-    row("whole backtest", overall),
-    row("most recent", recent)
-  ];
-}
-function fluctuationSentence(stability, report) {
-  const f = stability.fluctuation;
-  if (f === null) {
-    return "Fluctuation test: not run (it needs at least 20 time points, a non-zero long-run variance and a level between 0.01 and 0.10; beside a recent window it runs at \u03B1/2).";
-  }
-  const sides = report.settings.fluctuationSides === "one" ? "one-sided" : "two-sided";
-  const setup = `Fluctuation test (Giacomini & Rossi 2010, ${sides}): the Diebold\u2013Mariano statistic over rolling windows of ${f.windowSize} time points (\u03BC = ${f.mu}); its largest value ${formatNumber(f.statistic, 3)}, over ${escapeMarkdown(f.peak.start)} to ${escapeMarkdown(f.peak.end)}, against the critical value ${formatNumber(f.criticalValue, 4)} at \u03B1 = ${stability.levels.fluctuation ?? report.policy.alpha}.`;
-  if (f.worsePeriods.length > 0) {
-    const spans = f.worsePeriods.map((s) => `${escapeMarkdown(s.start)} to ${escapeMarkdown(s.end)}`).join(", ");
-    return `${setup} The candidate is significantly worse over ${spans}.`;
-  }
-  return f.rejected ? `${setup} Accuracy is not equal throughout, but in no stretch is the candidate significantly worse.` : `${setup} No stretch where the candidate is significantly worse.`;
-}
-function levelsSentence(stability) {
-  const { alpha, fluctuation, recent } = stability.levels;
-  return `Both checks ran, so each ran at half the level (Bonferroni): the recent window at \u03B1 = ${recent} and the fluctuation test at \u03B1 = ${fluctuation}; together they call the difference not stable at most \u03B1 = ${alpha} of the time when accuracy is equal throughout.`;
-}
-function periodTable(stability) {
+// src/report/renderCandidatesMarkdown.ts
+function renderCandidatesMarkdown(report) {
+  const { candidates, spa, confidenceSet: set, selection } = report;
+  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
+  const level = `${formatNumber(set.level * 100, 3)}%`;
+  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
+  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
   const out = [
-    `<details><summary>Mean loss by period (${stability.periods.length} periods)</summary>`,
+    `**Candidates** (${candidates.length}, ranked by mean loss; preferred: ${escapeMarkdown(selection?.preferred ?? "")})`,
     "",
-    "| period | time points | baseline loss | candidate loss | relative |",
-    "|---|---:|---:|---:|---:|"
+    `| rank | model | mean loss | change against the baseline (${changeLevel}) | in the ${level} set | MCS p-value | SPA p-value (${direction}) | own verdict |`,
+    "|---:|---|---:|---|:---:|---:|---:|---|"
   ];
-  for (const p of stability.periods) {
-    const span = p.start === p.end ? escapeMarkdown(p.start) : `${escapeMarkdown(p.start)} to ${escapeMarkdown(p.end)}`;
+  for (const c of [...candidates].sort((a, b) => a.rank - b.rank)) {
+    const mark = c.name === selection?.preferred ? " (preferred)" : "";
     out.push(
-      `| ${span} | ${p.n} | ${formatNumber(p.meanBaselineLoss)} | ${formatNumber(p.meanCandidateLoss)} | ${formatSignedPercent(p.relativeDifference)} |`
+      `| ${c.rank} | ${escapeMarkdown(c.name)}${mark} | ${formatNumber(c.comparison.meanCandidateLoss)} | ${relativeChangeText(c.comparison)} | ${c.inConfidenceSet ? "yes" : "no"} | ${formatPValue(c.mcsPValue)} | ${formatPValue(c.spaPValue)} | ${c.comparison.verdict} |`
     );
   }
-  out.push("", "</details>");
+  out.push(
+    `| \u2013 | ${escapeMarkdown(set.baseline.name)} (baseline) | ${formatNumber(set.baseline.meanLoss)} | \u2013 | ${set.baseline.inConfidenceSet ? "yes" : "no"} | ${formatPValue(set.baseline.mcsPValue)} | \u2013 | \u2013 |`,
+    ""
+  );
+  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
+  out.push(
+    `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    "",
+    `Model confidence set (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.map(escapeMarkdown).join(", ")}. Eliminated in order: ${set.eliminationOrder.slice(0, -1).map((name, j) => `${escapeMarkdown(name)} (p ${formatPValue(set.stepPValues[j])})`).join(", ")}.`,
+    ""
+  );
   return out;
 }
 
@@ -28980,6 +29996,7 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
   for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
   if (s.notes.length > 0) lines.push("");
+  lines.push(...renderCandidatesMarkdown(report));
   const chart = differenceSeries(view);
   if (chart !== null) {
     lines.push(...mermaidChart(chart), "");
@@ -29092,6 +30109,45 @@ function code(text) {
   return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : escapeMarkdown(text);
 }
 
+// src/report/renderCandidatesTerminal.ts
+function renderCandidatesTerminal(report) {
+  const { candidates, spa, confidenceSet: set } = report;
+  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
+  const header = ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"];
+  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
+    String(c.rank),
+    clean(c.name),
+    formatNumber(c.comparison.meanCandidateLoss),
+    relativeChangeText(c.comparison),
+    c.inConfidenceSet ? "yes" : "no",
+    formatPValue(c.mcsPValue),
+    formatPValue(c.spaPValue),
+    c.comparison.verdict
+  ]);
+  rows.push([
+    "-",
+    `${clean(set.baseline.name)} (baseline)`,
+    formatNumber(set.baseline.meanLoss),
+    "-",
+    set.baseline.inConfidenceSet ? "yes" : "no",
+    formatPValue(set.baseline.mcsPValue),
+    "-",
+    "-"
+  ]);
+  const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => r[j].length)));
+  const line2 = (cells) => cells.map((cell, j) => j === 1 || j === 3 ? cell.padEnd(widths[j]) : cell.padStart(widths[j])).join("  ");
+  return [
+    "",
+    line2(header),
+    ...rows.map(line2),
+    `SPA (${spa.hypothesis}): lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; reality check ${formatPValue(spa.realityCheck.pValue)}`,
+    `${formatNumber(set.level * 100, 3)}% model confidence set (${set.statistic}): ${set.members.map(clean).join(", ")}`
+  ];
+}
+function clean(text) {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
+}
+
 // src/report/renderStabilityTerminal.ts
 function renderStabilityTerminal(report) {
   const s = report.stability;
@@ -29101,18 +30157,18 @@ function renderStabilityTerminal(report) {
   const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
+      `recent window: ${r.n} time points ${clean2(r.firstTimestamp ?? "?")} to ${clean2(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean2(w.start)} to ${clean2(w.end)}`).join(", ")}`}`
     );
   }
   return out;
 }
-function clean(text) {
+function clean2(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 
@@ -29124,13 +30180,14 @@ function renderTerminal(report, options) {
   const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
   const out = [];
   out.push(
-    `${paint("1", clean2(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
+    `${paint("1", clean3(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
   );
   out.push(wrap(`${s.lead} ${s.change}`, 100), "");
   out.push(...textTable(s.main, paint));
   out.push("", paint("2", wrap(s.intervalNote, 100)));
+  out.push(...renderCandidatesTerminal(report));
   const chart = differenceSeries(view);
-  if (chart !== null) out.push("", clean2(sparklineText(chart)));
+  if (chart !== null) out.push("", clean3(sparklineText(chart)));
   const overTime = renderStabilityTerminal(report);
   if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, "  ")));
   if (s.notes.length > 0) out.push("");
@@ -29141,7 +30198,7 @@ function renderTerminal(report, options) {
   }
   if (s.series !== null) out.push("", wrap(s.series.summary, 100));
   if (s.paths !== null) out.push("", wrap(s.paths.summary, 100));
-  const checks = backtestChecksLines(report, clean2);
+  const checks = backtestChecksLines(report, clean3);
   if (checks.length > 0) out.push("", ...checks);
   for (const r of report.reasons) {
     if (r.startsWith("The candidate lacks")) out.push(wrap(`- ${r}`, 100, "  "));
@@ -29151,7 +30208,7 @@ function renderTerminal(report, options) {
   out.push(
     paint(
       "2",
-      clean2(
+      clean3(
         `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`
       )
     )
@@ -29161,25 +30218,25 @@ function renderTerminal(report, options) {
       out.push(paint("2", wrap(l, 100, "  ")));
     }
   }
-  if (s.changedSettings !== "") out.push(paint("2", clean2(`settings: ${s.changedSettings}`)));
+  if (s.changedSettings !== "") out.push(paint("2", clean3(`settings: ${s.changedSettings}`)));
   return `${out.join("\n")}
 `;
 }
 function textTable(t, paint) {
-  const rows = t.rows.map((r) => r.map(clean2));
+  const rows = t.rows.map((r) => r.map(clean3));
   const widths = t.header.map(
     (h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length))
   );
-  const line = (cells) => cells.map(
+  const line2 = (cells) => cells.map(
     (cell, j) => t.align[j] === "right" ? cell.padStart(widths[j]) : cell.padEnd(widths[j])
   ).join("  ").trimEnd();
-  return [paint("2", line(t.header)), ...rows.map(line)];
+  return [paint("2", line2(t.header)), ...rows.map(line2)];
 }
-function clean2(text) {
+function clean3(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 function wrap(text, width, indent2 = "") {
-  const words = clean2(text).split(" ");
+  const words = clean3(text).split(" ");
   const lines = [];
   let current = "";
   for (const w of words) {
@@ -29251,10 +30308,34 @@ function resolveSettings(raw, label) {
     (x) => x > 0 && x < 0.5,
     "a number between 0 and 0.5, such as 0.05"
   );
+  const baselineModel = optional("baseline-model");
+  const modelColumn = optional("model-column");
+  if (baselineModel !== null && (modelColumn === null || optional("baseline") !== null)) {
+    throw new InputError(
+      `${label("baseline-model")} takes the baseline from the ${label("model-column")} file; give it with ${label("model-column")} and without ${label("baseline")}`,
+      { value: baselineModel }
+    );
+  }
+  const candidates = losses === null ? parseCandidateList(value("candidate"), label("candidate")) : [];
+  if (modelColumn !== null && candidates.length !== 1) {
+    throw new InputError(
+      `${label("model-column")} reads every candidate from one file; give exactly one ${label("candidate")} file`,
+      { value: modelColumn }
+    );
+  }
   return {
     name: value("name"),
-    baseline: losses === null ? value("baseline") : "",
-    candidate: losses === null ? value("candidate") : "",
+    baseline: losses === null && baselineModel === null ? value("baseline") : "",
+    candidate: candidates[0]?.path ?? "",
+    // Listed only when several are compared (or read from a model column): a two-model report
+    // keeps the settings it always had.
+    candidates: candidates.length > 1 || modelColumn !== null ? candidates : [],
+    modelColumn,
+    baselineModel,
+    preferred: optional("preferred"),
+    selectionRule: value("selection-rule"),
+    setAlpha: number("set-alpha", (x) => x > 0 && x < 1, "a number between 0 and 1, such as 0.1"),
+    setStatistic: value("set-statistic"),
     losses,
     actuals: optional("actuals"),
     columns: parseColumnMapping(value("columns"), label("columns")),
@@ -29543,8 +30624,11 @@ function parseArguments(argv) {
       `unknown command "${echo(command ?? "", 60)}"; the command is "compare" (see skillgate --help)${hint}`
     );
   }
-  const spec = { quiet: { type: "boolean" } };
+  const spec = {
+    quiet: { type: "boolean" }
+  };
   for (const o of ENGINE_OPTIONS) spec[o.name] = { type: o.flag ? "boolean" : "string" };
+  spec.candidate = { type: "string", multiple: true };
   let values;
   try {
     ({ values } = parseArgs({
@@ -29559,7 +30643,7 @@ function parseArguments(argv) {
   const options = {};
   for (const o of ENGINE_OPTIONS) {
     const v = values[o.name];
-    options[o.name] = typeof v === "boolean" ? String(v) : v;
+    options[o.name] = typeof v === "boolean" ? String(v) : Array.isArray(v) ? v.join("\n") : v;
   }
   return { kind: "compare", options, quiet: values.quiet === true };
 }
@@ -29605,8 +30689,8 @@ function progressReporter(stream) {
       if (now - last < 100 && p.fraction < 1) return;
       last = now;
       shown = true;
-      const pct2 = Math.round(Math.max(0, Math.min(1, p.fraction)) * 100);
-      stream.write(`\r\x1B[2K${p.stage} ${pct2}%`);
+      const pct3 = Math.round(Math.max(0, Math.min(1, p.fraction)) * 100);
+      stream.write(`\r\x1B[2K${p.stage} ${pct3}%`);
     },
     done: () => {
       if (shown) stream.write("\r\x1B[2K");

@@ -6,15 +6,24 @@
  * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
  * --stability-replications N (default 4000) and --stability-only (the stability study of
  * validation/stabilityStudy.ts alone, replacing its section of the existing document),
+ * --candidates-only (the several-candidates study of validation/candidatesStudy.ts alone, with
+ * 999 shared resamples and --replications N, default 1000, replacing its section),
  * --section cosine-terms (run only that study and replace its section in the existing FILE),
  * --coverage (the coverage study of every interval the report shows, validation/coverageStudy.ts,
  * alone, replacing its section), --coverage-replications N (default 1000), --coverage-resamples B
  * (default 999), --candidates (print the measurement of the studentised-bootstrap candidate).
  */
-import { readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { isMainThread, parentPort, Worker, workerData } from 'node:worker_threads';
 import { candidateStudy } from './candidateStudy.js';
+import {
+  type CandidatesDesign,
+  type CandidatesResult,
+  mergeCandidatesResults,
+  renderCandidatesSection,
+  runCandidatesStudy,
+} from './candidatesStudy.js';
 import {
   COSINE_TERMS_SECTION_END,
   COSINE_TERMS_SECTION_START,
@@ -51,7 +60,15 @@ interface CoverageJob extends Omit<Job, 'design'> {
   coverage: CoverageDesign;
 }
 
-if (!isMainThread) {
+interface CandidatesJob {
+  candidates: CandidatesDesign;
+  options: Parameters<typeof runCandidatesStudy>[1];
+}
+
+if (!isMainThread && 'candidates' in (workerData as object)) {
+  const job = workerData as CandidatesJob;
+  parentPort!.postMessage(runCandidatesStudy(job.candidates, job.options));
+} else if (!isMainThread) {
   const jobs = workerData as (Job | StabilityJob | CoverageJob)[];
   parentPort!.postMessage(
     jobs[0] !== undefined && 'kind' in jobs[0]
@@ -124,6 +141,10 @@ async function main(): Promise<void> {
     process.stderr.write(`wrote the stability section of ${out} in ${seconds.toFixed(0)} s\n`);
   };
   if (args.includes('--stability-only')) return stability(readFileSync(out, 'utf8'));
+  const candidateReplications = option('replications', quick ? 200 : 1000);
+  if (args.includes('--candidates-only')) {
+    return candidatesStudy(candidateReplications, quick ? 499 : 999, out);
+  }
   const started = Date.now();
   const results: StudyResult[] = [];
   for (const design of designs) {
@@ -154,6 +175,84 @@ async function main(): Promise<void> {
   );
   process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
   await stability(readFileSync(out, 'utf8'));
+  await candidatesStudy(candidateReplications, quick ? 499 : 999, out);
+}
+
+/**
+ * `document` with its several-candidates section (from its heading to the next top-level
+ * heading or section marker, or the end) replaced by `section`, or with `section` appended.
+ */
+function withCandidatesSection(document: string, section: string): string {
+  // Local: module-level constants below the top-level `await main()` are not initialised yet.
+  const CANDIDATES_HEADING = '## Several candidates';
+  const at = document.indexOf(CANDIDATES_HEADING);
+  if (at < 0) return `${document.trimEnd()}\n\n${section}`;
+  const rest = document.slice(at + CANDIDATES_HEADING.length);
+  const next = [rest.indexOf('\n## '), rest.indexOf('\n<!--')].filter((i) => i >= 0);
+  const end =
+    next.length === 0 ? document.length : at + CANDIDATES_HEADING.length + Math.min(...next) + 1;
+  return `${document.slice(0, at)}${section}${end < document.length ? `\n${document.slice(end)}` : ''}`;
+}
+
+/** Runs validation/candidatesStudy.ts and puts its section at the end of `out`, replacing an older one. */
+async function candidatesStudy(
+  replications: number,
+  resamples: number,
+  out: string,
+): Promise<void> {
+  const design = (n: number, betterScale: number): CandidatesDesign => ({
+    n,
+    candidates: 5,
+    phi: 0.6,
+    correlation: 0.5,
+    betterScale,
+  });
+  const designs = [design(200, 1), design(200, 0.9), design(200, 0.8), design(500, 1)];
+  const threads = Math.max(1, Math.min(2, availableParallelism()));
+  const started = Date.now();
+  const alpha = 0.05;
+  const setAlpha = 0.1;
+  const results: CandidatesResult[] = [];
+  for (const design of designs) {
+    const per = Math.ceil(replications / threads);
+    const parts = await Promise.all(
+      Array.from({ length: threads }, (_, k) => {
+        const first = k * per;
+        const count = Math.max(0, Math.min(per, replications - first));
+        const job: CandidatesJob = {
+          candidates: design,
+          options: {
+            replications: count,
+            firstReplication: first,
+            resamples,
+            seed: SEED,
+            alpha,
+            setAlpha,
+          },
+        };
+        return new Promise<CandidatesResult>((resolve, reject) => {
+          const worker = new Worker(new URL(import.meta.url), { workerData: job });
+          worker.once('message', resolve);
+          worker.once('error', reject);
+        });
+      }),
+    );
+    results.push(mergeCandidatesResults(parts.filter((p) => p.replications > 0)));
+    process.stderr.write(`validated candidates σ1=${design.betterScale}\n`);
+  }
+  const seconds = (Date.now() - started) / 1000;
+  const section = renderCandidatesSection(results, {
+    replications,
+    resamples,
+    seconds,
+    threads,
+    seed: SEED,
+    alpha,
+    setAlpha,
+  });
+  const text = existsSync(out) ? readFileSync(out, 'utf8') : '';
+  writeFileSync(out, withCandidatesSection(text, section));
+  process.stderr.write(`wrote the candidates section of ${out} in ${seconds.toFixed(0)} s\n`);
 }
 
 /** The cosine-terms study on `threads` worker threads, rendered as its section. */

@@ -1,4 +1,11 @@
 import { TIME_FORMAT_NAMES } from '../alignment/timeFormat.js';
+import { MAX_CANDIDATES, MAX_NAME_LENGTH } from '../candidates/candidateList.js';
+import type {
+  CandidateSummary,
+  ConfidenceSetSummary,
+  SelectionSummary,
+  SpaSummary,
+} from '../candidates/candidatesModel.js';
 import { InputError } from '../core/inputError.js';
 import type { FileSummary } from '../core/panel.js';
 import { noChecks } from '../integrity/checkPolicy.js';
@@ -135,6 +142,8 @@ const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
 const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
 const ESTIMATORS = ['ewc', 'ewc-ar1', 'bartlett', 'uniform'] as const;
 const MARGIN_KINDS = ['relative', 'absolute'] as const;
+const SELECTION_RULES = ['preferred-in-set', 'none-worse', 'some-better'] as const;
+const SET_STATISTICS = ['range', 'max'] as const;
 
 function readReport(r: Reader): Report {
   const tool = r.field('tool');
@@ -158,6 +167,7 @@ function readReport(r: Reader): Report {
     stability: readStability(r.field('stability'), r.field('policy').field('alpha').number()),
     settings: readSettings(r.field('settings')),
     reasons: r.field('reasons').strings(),
+    ...readCandidateSections(r),
   };
 }
 
@@ -566,6 +576,7 @@ function readSettings(r: Reader): Settings {
     name: r.field('name').string(),
     baseline: r.field('baseline').string(),
     candidate: r.field('candidate').string(),
+    ...readCandidateSettings(r),
     losses: r.field('losses').value === undefined ? null : r.field('losses').stringOrNull(),
     actuals: r.field('actuals').stringOrNull(),
     columns: columns as ColumnMapping,
@@ -634,6 +645,38 @@ function readSettings(r: Reader): Settings {
   };
 }
 
+/** The several-candidates settings; absent in reports of earlier versions (then the defaults). */
+function readCandidateSettings(
+  r: Reader,
+): Pick<
+  Settings,
+  | 'candidates'
+  | 'modelColumn'
+  | 'baselineModel'
+  | 'preferred'
+  | 'selectionRule'
+  | 'setAlpha'
+  | 'setStatistic'
+> {
+  const present = (name: string) => r.field(name).value !== undefined;
+  return {
+    candidates: present('candidates')
+      ? r
+          .field('candidates')
+          .items()
+          .map((c) => ({ name: c.field('name').string(), path: c.field('path').string() }))
+      : [],
+    modelColumn: present('modelColumn') ? r.field('modelColumn').stringOrNull() : null,
+    baselineModel: present('baselineModel') ? r.field('baselineModel').stringOrNull() : null,
+    preferred: present('preferred') ? r.field('preferred').stringOrNull() : null,
+    selectionRule: present('selectionRule')
+      ? r.field('selectionRule').oneOf(SELECTION_RULES)
+      : 'preferred-in-set',
+    setAlpha: present('setAlpha') ? r.field('setAlpha').number() : 0.1,
+    setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'max',
+  };
+}
+
 /** A field that reports written before it existed lack. */
 function absent(r: Reader, name: string): boolean {
   return r.field(name).value === undefined;
@@ -663,4 +706,90 @@ function readLevels(r: Reader): readonly [number, number] | null {
   const [lower, upper, ...rest] = r.items().map((x) => x.number());
   if (lower === undefined || upper === undefined || rest.length > 0) r.fail('two quantile levels');
   return [lower, upper];
+}
+
+const MODEL_NAME = new RegExp(`^[A-Za-z0-9][A-Za-z0-9._+-]{0,${MAX_NAME_LENGTH - 1}}$`);
+
+/**
+ * The several-candidates sections (absent in a two-model report: then absent here too). Names
+ * must be model names as the engine accepts them; at most MAX_CANDIDATES candidates and as many
+ * names in the set and the elimination order as there are models.
+ */
+function readCandidateSections(r: Reader): {
+  candidates?: CandidateSummary[];
+  spa?: SpaSummary;
+  confidenceSet?: ConfidenceSetSummary;
+  selection?: SelectionSummary;
+} {
+  const field = r.field('candidates');
+  if (field.value === undefined) return {};
+  const name = (x: Reader) => x.matching(MODEL_NAME, 'a model name (letters, digits, . _ + -)');
+  const items = field.items();
+  if (items.length === 0 || items.length > MAX_CANDIDATES) {
+    field.fail(`an array of 1 to ${MAX_CANDIDATES} candidates`);
+  }
+  const candidates = items.map((c) => ({
+    name: name(c.field('name')),
+    file: c.field('file').string(),
+    comparison: readComparison(c.field('comparison')),
+    inConfidenceSet: c.field('inConfidenceSet').boolean(),
+    mcsPValue: readProbability(c.field('mcsPValue')),
+    spaPValue: readProbability(c.field('spaPValue')),
+    rank: c.field('rank').integer(1),
+  }));
+  const s = r.field('spa');
+  const rc = s.field('realityCheck');
+  const spa: SpaSummary = {
+    hypothesis: s.field('hypothesis').oneOf(['none-better', 'none-worse']),
+    statistic: s.field('statistic').number(),
+    pValueLower: readProbability(s.field('pValueLower')),
+    pValueConsistent: readProbability(s.field('pValueConsistent')),
+    pValueUpper: readProbability(s.field('pValueUpper')),
+    resamples: s.field('resamples').integer(1),
+    expectedBlockLength: s.field('expectedBlockLength').number(),
+    realityCheck: {
+      statistic: rc.field('statistic').number(),
+      pValue: readProbability(rc.field('pValue')),
+    },
+  };
+  const m = r.field('confidenceSet');
+  const names = (x: Reader) => {
+    const list = x.items();
+    if (list.length > MAX_CANDIDATES + 1) x.fail(`at most ${MAX_CANDIDATES + 1} names`);
+    return list.map(name);
+  };
+  const b = m.field('baseline');
+  const steps = m.field('stepPValues').items();
+  if (steps.length > MAX_CANDIDATES + 1) m.field('stepPValues').fail('one p-value per model');
+  const confidenceSet: ConfidenceSetSummary = {
+    level: readProbability(m.field('level')),
+    statistic: m.field('statistic').oneOf(['range', 'max']),
+    members: names(m.field('members')),
+    eliminationOrder: names(m.field('eliminationOrder')),
+    stepPValues: steps.map(readProbability),
+    baseline: {
+      name: name(b.field('name')),
+      meanLoss: b.field('meanLoss').number(),
+      inConfidenceSet: b.field('inConfidenceSet').boolean(),
+      mcsPValue: readProbability(b.field('mcsPValue')),
+    },
+  };
+  const sel = r.field('selection');
+  const selection: SelectionSummary = {
+    rule: sel.field('rule').oneOf(SELECTION_RULES),
+    preferred: name(sel.field('preferred')),
+    preferredBy: sel.field('preferredBy').oneOf(['option', 'lowest-mean-loss']),
+    verdict: sel.field('verdict').oneOf(VERDICTS),
+    reasons: sel.field('reasons').strings(),
+    timePoints: sel.field('timePoints').integer(2),
+    expectedBlockLength: sel.field('expectedBlockLength').number(),
+    blockLengthRule: sel.field('blockLengthRule').oneOf(['auto', 'fixed']),
+  };
+  return { candidates, spa, confidenceSet, selection };
+}
+
+function readProbability(r: Reader): number {
+  const x = r.number();
+  if (x < 0 || x > 1) r.fail('a number from 0 to 1');
+  return x;
 }

@@ -1,6 +1,7 @@
 import { alignPanel } from '../alignment/alignPanel.js';
 import { historyBySeries } from '../alignment/historyBySeries.js';
 import { orderLossSeries } from '../alignment/orderLossSeries.js';
+import { runCandidates } from '../candidates/runCandidates.js';
 import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
@@ -31,6 +32,8 @@ export async function runComparison(
 ): Promise<{ report: Report }> {
   if (settings.losses !== null)
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
+  if (settings.candidates.length > 1 || settings.modelColumn !== null)
+    return { report: await runCandidates(settings, hooks) };
   const read = (path: string, role: 'baseline' | 'candidate' | 'actuals') =>
     readForecastFile(path, {
       role,
@@ -117,7 +120,10 @@ async function readHistory(settings: Settings): Promise<Map<string, Float64Array
 }
 
 /** The column renames for one file: the shared ones, then that file's own. */
-function columnsFor(settings: Settings, role: 'baseline' | 'candidate' | 'actuals'): ColumnMapping {
+export function columnsFor(
+  settings: Settings,
+  role: 'baseline' | 'candidate' | 'actuals',
+): ColumnMapping {
   const own =
     role === 'baseline'
       ? settings.baselineColumns
@@ -130,7 +136,7 @@ function columnsFor(settings: Settings, role: 'baseline' | 'candidate' | 'actual
 }
 
 /** Format and CSV dialect options as the readers take them. */
-function readDialect(settings: Settings): {
+export function readDialect(settings: Settings): {
   format?: 'csv' | 'tsv' | 'parquet';
   delimiter: Settings['delimiter'];
   decimal: Settings['decimal'];

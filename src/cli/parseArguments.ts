@@ -29,9 +29,13 @@ export function parseArguments(argv: readonly string[]): CliRequest {
       `unknown command "${echo(command ?? '', 60)}"; the command is "compare" (see skillgate --help)${hint}`,
     );
   }
-  const spec: Record<string, { type: 'string' | 'boolean' }> = { quiet: { type: 'boolean' } };
+  const spec: Record<string, { type: 'string' | 'boolean'; multiple?: boolean }> = {
+    quiet: { type: 'boolean' },
+  };
   for (const o of ENGINE_OPTIONS) spec[o.name] = { type: o.flag ? 'boolean' : 'string' };
-  let values: Record<string, string | boolean | undefined>;
+  // --candidate may be repeated (several candidates); the lines reach the settings joined.
+  spec.candidate = { type: 'string', multiple: true };
+  let values: Record<string, string | boolean | (string | boolean)[] | undefined>;
   try {
     ({ values } = parseArgs({
       args: [...rest],
@@ -45,7 +49,7 @@ export function parseArguments(argv: readonly string[]): CliRequest {
   const options: Record<string, string | undefined> = {};
   for (const o of ENGINE_OPTIONS) {
     const v = values[o.name];
-    options[o.name] = typeof v === 'boolean' ? String(v) : v;
+    options[o.name] = typeof v === 'boolean' ? String(v) : Array.isArray(v) ? v.join('\n') : v;
   }
   return { kind: 'compare', options, quiet: values.quiet === true };
 }

@@ -1,4 +1,4 @@
-import { aggregateByTime, lossDifferential } from '../aggregation/lossSeries.js';
+import { aggregateByTime, type LossSeries, lossDifferential } from '../aggregation/lossSeries.js';
 import { InputError } from '../core/inputError.js';
 import type { AlignedPanel } from '../core/panel.js';
 import { VERSION } from '../core/version.js';
@@ -44,10 +44,7 @@ export function evaluatePanel(
   settings: Settings,
   extras: PanelExtras = {},
 ): Report {
-  const losses = rowLossesOrInputError(panel, settings);
-  const pooled =
-    settings.pooling === 'scaled' ? scaledLosses(panel, losses, settings, extras) : losses;
-  const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
+  const { losses, pooled, weights } = panelLosses(panel, settings, extras);
   const hypothesis = hypothesisFor(settings.policy, settings.margin, settings.marginKind);
   const runner = extras.resampleRunner === undefined ? {} : { runner: extras.resampleRunner };
   const scope = (horizon: 'all' | number, series: 'all' | string): ComparisonScope => ({
@@ -119,6 +116,31 @@ export function evaluatePanel(
       ...runner,
     }),
   });
+}
+
+/**
+ * The overall loss series of a panel exactly as `evaluatePanel` tests it (row losses, pooling,
+ * weights, one value per time point): for procedures that combine several panels.
+ */
+export function overallLossSeries(
+  panel: AlignedPanel,
+  settings: Settings,
+  extras: PanelExtras = {},
+): LossSeries {
+  const { pooled, weights } = panelLosses(panel, settings, extras);
+  return aggregateByTime(panel, pooled, undefined, weights);
+}
+
+function panelLosses(
+  panel: AlignedPanel,
+  settings: Settings,
+  extras: PanelExtras,
+): { losses: RowLosses; pooled: RowLosses; weights: Float64Array | null } {
+  const losses = rowLossesOrInputError(panel, settings);
+  const pooled =
+    settings.pooling === 'scaled' ? scaledLosses(panel, losses, settings, extras) : losses;
+  const weights = settings.weights ? weightsOrInputError(panel, settings) : null;
+  return { losses, pooled, weights };
 }
 
 /**

@@ -1,6 +1,8 @@
+import { candidatesChartSvg } from './candidatesChartSvg.js';
 import { percent, relativeInterval } from './cells.js';
 import { chartCaption, differenceSeries, sparklineText } from './differenceChart.js';
 import { missingRowsSection } from './missingRowsSection.js';
+import { overTimeParts } from './renderStabilitySection.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
 import type { ReportTable } from './reportTable.js';
@@ -86,6 +88,23 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
       })}<figcaption>${xml(chartCaption(chart))}${band === null ? '' : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
       `<p class="spark">${xml(sparklineText(chart))}</p>`,
     );
+  }
+
+  const overTime = overTimeParts(report);
+  if (overTime !== null) {
+    out.push('<h2>Over time</h2>');
+    if (overTime.windows !== null) out.push(htmlTable(overTime.windows));
+    out.push(...overTime.sentences.map((t) => `<p>${xml(t)}</p>`));
+    if (overTime.periods !== null) {
+      out.push(
+        `<details><summary>Mean loss by period (${overTime.periods.rows.length} periods)</summary>${htmlTable(overTime.periods)}</details>`,
+      );
+    }
+  }
+
+  const candidatesChart = candidatesChartSvg(report);
+  if (candidatesChart !== '') {
+    out.push('<h2>Candidates</h2>', `<figure>${candidatesChart}</figure>`);
   }
 
   const horizons = view.comparisons.filter(

@@ -2,6 +2,7 @@ import { chartCaption, differenceSeries, mermaidChart, sparklineText } from './d
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { missingRowsSection } from './missingRowsSection.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
+import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
 import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
@@ -32,6 +33,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(`<sub>${esc(s.intervalNote)}</sub>`, '');
   for (const note of s.notes) lines.push(`- ${esc(note)}`);
   if (s.notes.length > 0) lines.push('');
+  lines.push(...renderCandidatesMarkdown(report));
 
   const chart = differenceSeries(view);
   if (chart !== null) {

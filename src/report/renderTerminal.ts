@@ -1,5 +1,6 @@
 import { differenceSeries, sparklineText } from './differenceChart.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
+import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
 import { renderStabilityTerminal } from './renderStabilityTerminal.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
@@ -32,6 +33,7 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   out.push(wrap(`${s.lead} ${s.change}`, 100), '');
   out.push(...textTable(s.main, paint));
   out.push('', paint('2', wrap(s.intervalNote, 100)));
+  out.push(...renderCandidatesTerminal(report));
   const chart = differenceSeries(view);
   if (chart !== null) out.push('', clean(sparklineText(chart)));
   const overTime = renderStabilityTerminal(report);

@@ -1,4 +1,10 @@
 import type { TimeFormatName } from '../alignment/timeFormat.js';
+import type {
+  CandidateSummary,
+  ConfidenceSetSummary,
+  SelectionSummary,
+  SpaSummary,
+} from '../candidates/candidatesModel.js';
 import type { FileSummary } from '../core/panel.js';
 import type { Verdict } from '../decision/verdict.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
@@ -44,6 +50,14 @@ export interface Report {
   readonly integrity: IntegrityReport;
   /** Whether the difference holds over time (fluctuation test, recent window, periods), or null. */
   readonly stability: Stability | null;
+  /** Several candidates (src/candidates/): each one's overall comparison, set membership, ranks. */
+  readonly candidates?: readonly CandidateSummary[];
+  /** Several candidates: Hansen's (2005) SPA test over them, in the selection rule's direction. */
+  readonly spa?: SpaSummary;
+  /** Several candidates: the model confidence set over the baseline and every candidate. */
+  readonly confidenceSet?: ConfidenceSetSummary;
+  /** Several candidates: the rule that decided the gate and why. */
+  readonly selection?: SelectionSummary;
 }
 
 /**

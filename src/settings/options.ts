@@ -30,10 +30,46 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   },
   {
     name: 'candidate',
-    valueName: 'FILE',
+    valueName: 'FILE|NAME=FILE',
     defaultValue: null,
     required: true,
-    help: "predictions of the pull request's model",
+    help: "predictions of the pull request's model; repeat as NAME=FILE (one per line in the action) to test several candidates at once (the name defaults to the file's stem)",
+  },
+  {
+    name: 'model-column',
+    valueName: 'COLUMN',
+    defaultValue: '',
+    help: 'several candidates in one long candidate file: the column naming the model of each row',
+  },
+  {
+    name: 'baseline-model',
+    valueName: 'NAME',
+    defaultValue: '',
+    help: 'with --model-column: the model of that file that is the baseline (then no --baseline file)',
+  },
+  {
+    name: 'preferred',
+    valueName: 'NAME',
+    defaultValue: '',
+    help: 'with several candidates: the one the pull request would ship (default: the lowest mean loss)',
+  },
+  {
+    name: 'selection-rule',
+    defaultValue: 'preferred-in-set',
+    choices: ['preferred-in-set', 'none-worse', 'some-better'],
+    help: 'with several candidates: preferred-in-set passes when the preferred candidate is in the model confidence set and passes its own comparison; none-worse fails on evidence that some candidate is worse than the baseline (SPA test); some-better passes only on evidence that some candidate is better (SPA test)',
+  },
+  {
+    name: 'set-alpha',
+    valueName: 'NUMBER',
+    defaultValue: '0.1',
+    help: 'with several candidates: α of the model confidence set, which then holds the best models with probability 1 − α (0.1 as in Hansen, Lunde & Nason 2011)',
+  },
+  {
+    name: 'set-statistic',
+    defaultValue: 'max',
+    choices: ['range', 'max'],
+    help: 'with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)',
   },
   {
     name: 'losses',

@@ -1,3 +1,4 @@
+import { parseCandidateList } from '../candidates/candidateList.js';
 import { InputError } from '../core/inputError.js';
 import { FREQUENCY_SYNTAX, parseFrequency } from '../integrity/frequency.js';
 import { canonicalLoss } from '../losses/lossName.js';
@@ -73,10 +74,35 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     (x) => x > 0 && x < 0.5,
     'a number between 0 and 0.5, such as 0.05',
   );
+  const baselineModel = optional('baseline-model');
+  const modelColumn = optional('model-column');
+  if (baselineModel !== null && (modelColumn === null || optional('baseline') !== null)) {
+    throw new InputError(
+      `${label('baseline-model')} takes the baseline from the ${label('model-column')} file; give it with ${label('model-column')} and without ${label('baseline')}`,
+      { value: baselineModel },
+    );
+  }
+  const candidates =
+    losses === null ? parseCandidateList(value('candidate'), label('candidate')) : [];
+  if (modelColumn !== null && candidates.length !== 1) {
+    throw new InputError(
+      `${label('model-column')} reads every candidate from one file; give exactly one ${label('candidate')} file`,
+      { value: modelColumn },
+    );
+  }
   return {
     name: value('name'),
-    baseline: losses === null ? value('baseline') : '',
-    candidate: losses === null ? value('candidate') : '',
+    baseline: losses === null && baselineModel === null ? value('baseline') : '',
+    candidate: candidates[0]?.path ?? '',
+    // Listed only when several are compared (or read from a model column): a two-model report
+    // keeps the settings it always had.
+    candidates: candidates.length > 1 || modelColumn !== null ? candidates : [],
+    modelColumn,
+    baselineModel,
+    preferred: optional('preferred'),
+    selectionRule: value('selection-rule') as Settings['selectionRule'],
+    setAlpha: number('set-alpha', (x) => x > 0 && x < 1, 'a number between 0 and 1, such as 0.1'),
+    setStatistic: value('set-statistic') as Settings['setStatistic'],
     losses,
     actuals: optional('actuals'),
     columns: parseColumnMapping(value('columns'), label('columns')),

@@ -1,4 +1,5 @@
 import type { TimeFormatName } from '../alignment/timeFormat.js';
+import type { CandidateFile } from '../candidates/candidateList.js';
 import type { LossName } from '../losses/lossName.js';
 import type { ColumnMapping } from '../reading/columnMapping.js';
 import type { DelimiterName, InputFormat } from '../reading/inputFormat.js';
@@ -19,6 +20,19 @@ export interface Settings {
   /** Forecast files; empty strings when a pre-aggregated `losses` file is given instead. */
   readonly baseline: string;
   readonly candidate: string;
+  /** Every candidate (name and file) when several are compared or a model column is given, else []. */
+  readonly candidates: readonly CandidateFile[];
+  /** Column of the candidate file that names each row's model (several candidates), or null. */
+  readonly modelColumn: string | null;
+  /** With modelColumn: the model of the candidate file that is the baseline, or null. */
+  readonly baselineModel: string | null;
+  /** With several candidates: the one the pull request would ship (null: lowest mean loss). */
+  readonly preferred: string | null;
+  /** With several candidates: how they decide the gate (docs/decisions/0015-several-candidates.md). */
+  readonly selectionRule: 'preferred-in-set' | 'none-worse' | 'some-better';
+  /** α of the model confidence set (level 1 − α). */
+  readonly setAlpha: number;
+  readonly setStatistic: 'range' | 'max';
   /** A pre-aggregated loss file (timestamp, baseline_loss, candidate_loss), or null. */
   readonly losses: string | null;
   readonly actuals: string | null;

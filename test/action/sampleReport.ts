@@ -164,6 +164,13 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
       name: '',
       baseline: 'examples/data/baseline.csv',
       candidate: 'examples/data/candidate.csv',
+      candidates: [],
+      modelColumn: null,
+      baselineModel: null,
+      preferred: null,
+      selectionRule: 'preferred-in-set',
+      setAlpha: 0.1,
+      setStatistic: 'max',
       losses: null,
       actuals: null,
       columns: {
@@ -280,4 +287,92 @@ export function sampleReport(overrides: Partial<Report> = {}): Report {
     },
   };
   return { ...report, ...overrides };
+}
+
+/**
+ * The sample with the several-candidates sections (hand-kept, in the shape evaluateCandidates
+ * returns): three candidates, their comparisons the sample's overall one with its diagnostics
+ * dropped (as the untrusted reader drops them), so the report reads back unchanged.
+ */
+export function sampleCandidatesReport(): Report {
+  const base = sampleReport();
+  const c = base.comparisons[0]!;
+  const comparison = {
+    ...c,
+    dieboldMariano: { ...c.dieboldMariano, lagSelection: null },
+    bootstrap: { ...c.bootstrap, blockLengthSelection: null },
+  };
+  return {
+    ...base,
+    comparisons: [comparison],
+    candidates: [
+      {
+        name: 'gbm-v2',
+        file: 'out/gbm-v2.csv',
+        comparison,
+        inConfidenceSet: true,
+        mcsPValue: 1,
+        spaPValue: 0.012,
+        rank: 1,
+      },
+      {
+        name: 'gbm-v3',
+        file: 'out/gbm-v3.csv',
+        comparison: {
+          ...comparison,
+          meanCandidateLoss: 4.1,
+          relativeDifference: 0.02,
+          verdict: 'warn',
+        },
+        inConfidenceSet: true,
+        mcsPValue: 0.31,
+        spaPValue: 1,
+        rank: 2,
+      },
+      {
+        name: 'ensemble_1',
+        file: 'out/ensemble_1.csv',
+        comparison: {
+          ...comparison,
+          meanCandidateLoss: 5.3,
+          relativeDifference: 0.31,
+          verdict: 'fail',
+        },
+        inConfidenceSet: false,
+        mcsPValue: 0.004,
+        spaPValue: 1,
+        rank: 3,
+      },
+    ],
+    spa: {
+      hypothesis: 'none-better',
+      statistic: 2.71,
+      pValueLower: 0.008,
+      pValueConsistent: 0.012,
+      pValueUpper: 0.02,
+      resamples: 9999,
+      expectedBlockLength: 6.5,
+      realityCheck: { statistic: 3.2, pValue: 0.03 },
+    },
+    confidenceSet: {
+      level: 0.9,
+      statistic: 'range',
+      members: ['gbm-v2', 'gbm-v3'],
+      eliminationOrder: ['ensemble_1', 'baseline', 'gbm-v3', 'gbm-v2'],
+      stepPValues: [0.004, 0.021, 0.31, 1],
+      baseline: { name: 'baseline', meanLoss: 4.02, inConfidenceSet: false, mcsPValue: 0.021 },
+    },
+    selection: {
+      rule: 'preferred-in-set',
+      preferred: 'gbm-v2',
+      preferredBy: 'lowest-mean-loss',
+      verdict: 'pass',
+      reasons: [
+        'The preferred candidate gbm-v2 is in the 90% model confidence set (MCS p-value 1.00).',
+      ],
+      timePoints: 240,
+      expectedBlockLength: 6.5,
+      blockLengthRule: 'auto',
+    },
+  };
 }
