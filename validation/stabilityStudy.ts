@@ -68,7 +68,7 @@ export function runStabilityStudy(
     const candidate = series.candidate as Float64Array;
     for (let t = lateFrom; t < design.n; t++) candidate[t]! *= design.lateFactor;
     const s = assessStability({ series, timestamps, kind: 'number', hypothesis, settings });
-    const f = s.fluctuation !== null && s.fluctuation.rejected;
+    const f = s.fluctuation?.rejected === true;
     const w = s.recent !== null && s.recent.verdict === 'fail';
     if (f) fluctuation++;
     if (f && Number(s.fluctuation!.peak.end) > lateFrom) peakLate++;
