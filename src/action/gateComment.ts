@@ -60,6 +60,11 @@ export interface PublishOptions {
   /** The login the action posts as (see postingIdentity.ts): only its comments are edited. */
   readonly author: string;
   /**
+   * The advice appended to the warning when a created comment's author is not `author`, given
+   * that author (e.g. to set the comment-author input).
+   */
+  readonly authorFix?: (written: string) => string;
+  /**
    * How long to wait before creating again after a failed create (attempt 0, 1, …), or null to
    * give up and rethrow. Only called for failures after which the create may or may not have
    * happened (a server error, a timeout, a rate limit).
@@ -113,8 +118,12 @@ export async function publishGateComment(
     if (outcome.kind === 'created') {
       created = outcome.comment;
       if (!sameLogin(created.author, options.author)) {
+        const written = created.author || 'an unknown user';
+        const fix =
+          options.authorFix?.(written) ??
+          "Use the workflow's token or a personal access token for github-token.";
         options.warning(
-          `skillgate: the comment was written as ${created.author || 'an unknown user'}, not as ${options.author}; later runs will not recognise it and will post again. Use the workflow's token or a personal access token for github-token.`,
+          `skillgate: the comment was written as ${written}, not as ${options.author}; later runs will not recognise it and will post again. ${fix}`,
         );
         return { action: 'created', id: created.id, url: created.url, removed: 0 };
       }

@@ -7,6 +7,7 @@ import { ENGINE_OPTIONS, type OptionSpec } from '../settings/options.js';
  */
 export const INPUT = {
   githubToken: 'github-token',
+  commentAuthor: 'comment-author',
   comment: 'comment',
   pullRequest: 'pull-request',
   reportFile: 'report-file',
@@ -18,6 +19,11 @@ export const ACTION_INPUTS: readonly OptionSpec[] = [
     // biome-ignore lint/suspicious/noTemplateCurlyInString: a GitHub expression, kept verbatim
     defaultValue: '${{ github.token }}',
     help: 'token for the pull-request comment (needs pull-requests: write); empty to skip commenting',
+  },
+  {
+    name: INPUT.commentAuthor,
+    defaultValue: '',
+    help: "the login the action's comments are written as, for a GitHub App token, e.g. my-app[bot] (default: the workflow token's github-actions[bot], or the user GET /user reports for a personal access token)",
   },
   {
     name: INPUT.comment,

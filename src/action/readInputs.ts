@@ -3,6 +3,7 @@ import { ENGINE_OPTIONS } from '../settings/options.js';
 import { type RawOptions, resolveSettings } from '../settings/resolveSettings.js';
 import type { Settings } from '../settings/settings.js';
 import { INPUT } from './names.js';
+import { isLogin } from './postingIdentity.js';
 
 /** Where the report comes from: a fresh comparison, or a JSON report an earlier job wrote. */
 export type ReportSource =
@@ -22,6 +23,8 @@ export interface ActionSettings {
   readonly source: ReportSource;
   readonly comment: boolean;
   readonly token: string;
+  /** The `comment-author` input: the login the comments are written as, or null to ask GitHub. */
+  readonly commentAuthor: string | null;
   readonly pullRequest: number | null;
 }
 
@@ -41,6 +44,7 @@ export function readActionSettings(getInput: (name: string) => string): ActionSe
     source: reportFile === '' ? compareSource(raw) : reportFileSource(reportFile, raw),
     comment: readBoolean(INPUT.comment, getInput(INPUT.comment), true),
     token: getInput(INPUT.githubToken).trim(),
+    commentAuthor: readCommentAuthor(getInput(INPUT.commentAuthor)),
     pullRequest: readPullRequest(getInput(INPUT.pullRequest)),
   };
 }
@@ -78,6 +82,22 @@ export function readBoolean(name: string, text: string, fallback: boolean): bool
   if (value === 'true') return true;
   if (value === 'false') return false;
   throw new InputError(`${inputLabel(name)} must be true or false`, { value: text });
+}
+
+/**
+ * The `comment-author` input: a GitHub login, optionally ending in `[bot]`. It comes from the
+ * workflow file (trusted), and only decides whose comments the gate may edit.
+ */
+function readCommentAuthor(text: string): string | null {
+  const value = text.trim();
+  if (value === '') return null;
+  if (!isLogin(value)) {
+    throw new InputError(
+      `${inputLabel(INPUT.commentAuthor)} must be a GitHub login such as my-app[bot] (letters, digits and single inner hyphens, at most 39 characters, optionally followed by [bot])`,
+      { value: text },
+    );
+  }
+  return value;
 }
 
 function readPullRequest(text: string): number | null {

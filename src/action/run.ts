@@ -22,8 +22,8 @@ import {
   openPullRequestsFromHead,
   pullRequestsOfCommit,
 } from './githubApi.js';
-import { OUTPUT } from './names.js';
-import { postingIdentity } from './postingIdentity.js';
+import { INPUT, OUTPUT } from './names.js';
+import { type PostingIdentity, postingIdentity } from './postingIdentity.js';
 import { type ActionSettings, inputLabel, readActionSettings } from './readInputs.js';
 import { readRegularFile } from './readRegularFile.js';
 import {
@@ -233,9 +233,11 @@ async function comment(
     const client = installRetries(deps.createClient(action.token, env.apiUrl), policy, timeouts);
     const number = await resolvePullRequest(deps, client, repository, plan);
     if (number === null) return null;
-    const author = await postingIdentity(client);
+    const identity = await postingIdentity(client, action.commentAuthor);
+    const author = identity.login;
     const result = await publishGateComment(client, repository, number, marker, body, {
       author,
+      authorFix: authorMismatchFix(identity),
       retryWait: createRetryWait(policy, timeouts, start),
       sleep: deps.sleep,
       info: (m) => deps.log.info(m),
@@ -265,6 +267,23 @@ async function comment(
       deps.log.warning(`skillgate: could not post the comment: ${message}`);
     }
     return null;
+  }
+}
+
+/**
+ * What the warning says to do when a created comment's author is not the identity the action
+ * assumed (`written` is the author GitHub reports for the new comment).
+ */
+function authorMismatchFix(identity: PostingIdentity): (written: string) => string {
+  const input = inputLabel(INPUT.commentAuthor);
+  switch (identity.source) {
+    case 'input':
+      return (written) => `Correct ${input}: GitHub wrote it as ${written}.`;
+    case 'assumed':
+      return (written) =>
+        `With a GitHub App's installation token as github-token, set ${input} to the login its comments are written as (here: ${written}).`;
+    case 'token':
+      return () => `Set ${input} to the login the comments are written as.`;
   }
 }
 

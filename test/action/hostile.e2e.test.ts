@@ -85,6 +85,58 @@ describe('1. only comments written by the identity the action posts as are edite
   });
 });
 
+describe('1. a GitHub App token, named by the comment-author input', () => {
+  // An App's own installation token: GET /user is refused, and comments are written as APP[bot].
+  const asApp = { 'comment-author': 'my-app[bot]' };
+
+  it('two runs leave one comment, and a squatter with the marker is not edited', async () => {
+    api.botUser = 'my-app[bot]';
+    const squatter = api.addComment(80, `${marker}\n### skillgate: PASS (squatted)`, 'mallory');
+    const first = await gate(80, asApp);
+    expect(first.code).toBe(0);
+    const second = await gate(80, { ...asApp, ...demoInputs('candidate-regressed.csv') });
+    expect(second.code).toBe(1);
+    const own = withMarker(80).filter((c) => c.user === 'my-app[bot]');
+    expect(own).toHaveLength(1);
+    expect(own[0]!.body).toContain('### skillgate: FAIL');
+    expect(api.writes().map((r) => `${r.method} ${r.path}`)).toEqual([
+      'POST /repos/acme/models/issues/80/comments',
+      `PATCH /repos/acme/models/issues/comments/${own[0]!.id}`,
+    ]);
+    expect(squatter.body).toBe(`${marker}\n### skillgate: PASS (squatted)`);
+    // The input is the identity: GitHub is not asked, and nothing warns.
+    expect(api.requests.filter((r) => r.path === '/user')).toHaveLength(0);
+    for (const run of [first, second]) {
+      expect(run.stdout).toContain('(as my-app[bot])');
+      expect(run.stdout).toContain(
+        "ignored 1 comment carrying this gate's marker but not written by my-app[bot]",
+      );
+      expect(run.stdout).not.toContain('::warning::');
+    }
+  });
+
+  it('without the input, the warning after the first post names it as the fix', async () => {
+    api.botUser = 'my-app[bot]';
+    const first = await gate(81);
+    expect(first.code).toBe(0);
+    expect(first.stdout).toContain(
+      "::warning::skillgate: the comment was written as my-app[bot], not as github-actions[bot]; later runs will not recognise it and will post again. With a GitHub App's installation token as github-token, set input 'comment-author' to the login its comments are written as (here: my-app[bot]).",
+    );
+  });
+
+  it('refuses a value that is not a GitHub login, before any request', async () => {
+    for (const value of ['my app[bot]', '-bot', 'app[bot]x', `${'a'.repeat(40)}[bot]`]) {
+      // An input error fails the step (exit 1, as the runner's setFailed does) before any request.
+      const result = await gate(82, { 'comment-author': value });
+      expect(result.code).toBe(1);
+      expect(result.stdout).toContain(
+        `::error::skillgate: input 'comment-author' must be a GitHub login such as my-app[bot] (letters, digits and single inner hyphens, at most 39 characters, optionally followed by [bot]) (value ${JSON.stringify(value)})`,
+      );
+    }
+    expect(api.requests).toEqual([]);
+  });
+});
+
 describe('2. no duplicate comments', () => {
   it('a create that GitHub carried out but answered with 502 is not repeated', async () => {
     api.failures.push({

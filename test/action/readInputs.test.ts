@@ -32,6 +32,30 @@ describe('readActionSettings', () => {
     expect(action).toMatchObject({ comment: true, token: 't', pullRequest: null });
   });
 
+  it('reads comment-author as a GitHub login, optionally ending in [bot]', () => {
+    expect(readActionSettings(inputs(base)).commentAuthor).toBeNull();
+    for (const login of ['my-app[bot]', 'release-robot', 'A1', `${'a'.repeat(39)}[bot]`]) {
+      expect(
+        readActionSettings(inputs({ ...base, 'comment-author': ` ${login} ` })).commentAuthor,
+      ).toBe(login);
+    }
+    for (const bad of [
+      '-app',
+      'app-',
+      'my--app',
+      'my app',
+      'app[bot]x',
+      '[bot]',
+      'a'.repeat(40),
+      'app\n::error::x',
+      '@app',
+    ]) {
+      expect(errorOf({ ...base, 'comment-author': bad })).toMatch(
+        /^input 'comment-author' must be a GitHub login such as my-app\[bot\]/,
+      );
+    }
+  });
+
   it('names the input in every message', () => {
     expect(errorOf({ ...base, alpha: 'abc' })).toBe(
       `input 'alpha' must be a number between 0 and 0.5, such as 0.05 (value "abc")`,
