@@ -56731,8 +56731,14 @@ async function openPullRequestsFromHead(client, repository, head) {
 
 // src/action/postingIdentity.ts
 var WORKFLOW_TOKEN_LOGIN = "github-actions[bot]";
-async function postingIdentity(client) {
-  return await authenticatedLogin(client) ?? WORKFLOW_TOKEN_LOGIN;
+var LOGIN = /^(?=.{1,39}(?:\[bot\])?$)[A-Za-z0-9](?:-?[A-Za-z0-9])*(?:\[bot\])?$/;
+function isLogin(text2) {
+  return LOGIN.test(text2);
+}
+async function postingIdentity(client, configured) {
+  if (configured !== null) return { login: configured, source: "input" };
+  const login = await authenticatedLogin(client);
+  return login === null ? { login: WORKFLOW_TOKEN_LOGIN, source: "assumed" } : { login, source: "token" };
 }
 function sameLogin(a, b) {
   return a.toLowerCase() === b.toLowerCase();
@@ -56779,8 +56785,10 @@ async function publishGateComment(client, repository, issueNumber, marker, body,
     if (outcome.kind === "created") {
       created = outcome.comment;
       if (!sameLogin(created.author, options.author)) {
+        const written = created.author || "an unknown user";
+        const fix = options.authorFix?.(written) ?? "Use the workflow's token or a personal access token for github-token.";
         options.warning(
-          `skillgate: the comment was written as ${created.author || "an unknown user"}, not as ${options.author}; later runs will not recognise it and will post again. Use the workflow's token or a personal access token for github-token.`
+          `skillgate: the comment was written as ${written}, not as ${options.author}; later runs will not recognise it and will post again. ${fix}`
         );
         return { action: "created", id: created.id, url: created.url, removed: 0 };
       }
@@ -56837,6 +56845,7 @@ function describeFailure(error2) {
 // src/action/names.ts
 var INPUT = {
   githubToken: "github-token",
+  commentAuthor: "comment-author",
   comment: "comment",
   pullRequest: "pull-request",
   reportFile: "report-file"
@@ -56847,6 +56856,11 @@ var ACTION_INPUTS = [
     // biome-ignore lint/suspicious/noTemplateCurlyInString: a GitHub expression, kept verbatim
     defaultValue: "${{ github.token }}",
     help: "token for the pull-request comment (needs pull-requests: write); empty to skip commenting"
+  },
+  {
+    name: INPUT.commentAuthor,
+    defaultValue: "",
+    help: "the login the action's comments are written as, for a GitHub App token, e.g. my-app[bot] (default: the workflow token's github-actions[bot], or the user GET /user reports for a personal access token)"
   },
   {
     name: INPUT.comment,
@@ -57101,6 +57115,7 @@ function readActionSettings(getInput2) {
     source: reportFile === "" ? compareSource(raw) : reportFileSource(reportFile, raw),
     comment: readBoolean(INPUT.comment, getInput2(INPUT.comment), true),
     token: getInput2(INPUT.githubToken).trim(),
+    commentAuthor: readCommentAuthor(getInput2(INPUT.commentAuthor)),
     pullRequest: readPullRequest(getInput2(INPUT.pullRequest))
   };
 }
@@ -57134,6 +57149,17 @@ function readBoolean(name, text2, fallback) {
   if (value === "true") return true;
   if (value === "false") return false;
   throw new InputError(`${inputLabel(name)} must be true or false`, { value: text2 });
+}
+function readCommentAuthor(text2) {
+  const value = text2.trim();
+  if (value === "") return null;
+  if (!isLogin(value)) {
+    throw new InputError(
+      `${inputLabel(INPUT.commentAuthor)} must be a GitHub login such as my-app[bot] (letters, digits and single inner hyphens, at most 39 characters, optionally followed by [bot])`,
+      { value: text2 }
+    );
+  }
+  return value;
 }
 function readPullRequest(text2) {
   const value = text2.trim().replace(/^#/, "");
@@ -57972,9 +57998,11 @@ async function comment(deps, env, action, plan, marker, body) {
     const client = installRetries(deps.createClient(action.token, env.apiUrl), policy, timeouts);
     const number = await resolvePullRequest(deps, client, repository, plan);
     if (number === null) return null;
-    const author = await postingIdentity(client);
+    const identity = await postingIdentity(client, action.commentAuthor);
+    const author = identity.login;
     const result = await publishGateComment(client, repository, number, marker, body, {
       author,
+      authorFix: authorMismatchFix(identity),
       retryWait: createRetryWait(policy, timeouts, start),
       sleep: deps.sleep,
       info: (m) => deps.log.info(m),
@@ -58003,6 +58031,17 @@ async function comment(deps, env, action, plan, marker, body) {
       deps.log.warning(`skillgate: could not post the comment: ${message}`);
     }
     return null;
+  }
+}
+function authorMismatchFix(identity) {
+  const input = inputLabel(INPUT.commentAuthor);
+  switch (identity.source) {
+    case "input":
+      return (written) => `Correct ${input}: GitHub wrote it as ${written}.`;
+    case "assumed":
+      return (written) => `With a GitHub App's installation token as github-token, set ${input} to the login its comments are written as (here: ${written}).`;
+    case "token":
+      return () => `Set ${input} to the login the comments are written as.`;
   }
 }
 function apiTimeouts(env) {
