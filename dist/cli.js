@@ -28317,6 +28317,227 @@ function createResamplePool(options = {}) {
   };
 }
 
+// src/report/svgCharts.ts
+var COLOURS = { worse: "#b4501a", better: "#2463a6", neutral: "#6b7280", ink: "#1f2328" };
+var W = 640;
+var H = 240;
+var M = { left: 56, right: 16, top: 16, bottom: 40 };
+function xml(text) {
+  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+}
+function linear(lo2, hi2, from, to) {
+  const span = hi2 - lo2 || 1;
+  const f = (x) => from + (x - lo2) / span * (to - from);
+  return Object.assign(f, { ticks: niceTicks(lo2, hi2) });
+}
+function niceTicks(lo2, hi2, count = 5) {
+  const span = hi2 - lo2 || 1;
+  const step0 = span / count;
+  const mag = 10 ** Math.floor(Math.log10(step0));
+  const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= step0) ?? 10 * mag;
+  const out = [];
+  for (let v = Math.ceil(lo2 / step) * step; v <= hi2 + step * 1e-9; v += step) {
+    out.push(Number(v.toPrecision(12)));
+  }
+  return out;
+}
+function fmt(x) {
+  return String(Number(x.toPrecision(3)));
+}
+function frame(title, body, desc) {
+  return [
+    `<svg viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${xml(title)}" xmlns="http://www.w3.org/2000/svg">`,
+    `<title>${xml(title)}</title><desc>${xml(desc)}</desc>`,
+    ...body,
+    "</svg>"
+  ].join("\n");
+}
+function yAxis(y, unit) {
+  return y.ticks.map(
+    (t) => `<line x1="${M.left}" x2="${W - M.right}" y1="${y(t).toFixed(1)}" y2="${y(t).toFixed(1)}" stroke="#e5e7eb"/><text x="${M.left - 6}" y="${(y(t) + 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${COLOURS.neutral}">${xml(fmt(t))}${unit}</text>`
+  );
+}
+function hline(y, colour, dash, label) {
+  return `<line x1="${M.left}" x2="${W - M.right}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${colour}" stroke-width="1.5" stroke-dasharray="${dash}"/><text x="${W - M.right - 2}" y="${(y - 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${colour}">${xml(label)}</text>`;
+}
+function differenceOverTimeSvg(input) {
+  const { labels, values, margin, band } = input;
+  const all = [
+    0,
+    ...values,
+    ...margin === null ? [] : [margin],
+    ...band === null ? [] : [band.lower, band.upper]
+  ];
+  const lo2 = Math.min(...all);
+  const hi2 = Math.max(...all);
+  const pad = (hi2 - lo2) * 0.08 || 1;
+  const y = linear(lo2 - pad, hi2 + pad, H - M.bottom, M.top);
+  const n = values.length;
+  const x = (i) => M.left + (n === 1 ? 0.5 : i / (n - 1)) * (W - M.left - M.right);
+  const body = yAxis(y, "%");
+  if (band !== null) {
+    body.push(
+      `<rect x="${M.left}" y="${y(band.upper).toFixed(1)}" width="${W - M.left - M.right}" height="${Math.max(1, y(band.lower) - y(band.upper)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.15"/>`
+    );
+  }
+  body.push(hline(y(0), COLOURS.ink, "0", "no difference"));
+  if (margin !== null) body.push(hline(y(margin), COLOURS.worse, "6 4", `margin ${fmt(margin)}%`));
+  body.push(
+    `<polyline fill="none" stroke="${COLOURS.ink}" stroke-width="1.5" points="${values.map((v, i) => `${x(i).toFixed(1)},${y(v).toFixed(1)}`).join(" ")}"/>`
+  );
+  values.forEach((v, i) => {
+    body.push(
+      `<circle cx="${x(i).toFixed(1)}" cy="${y(v).toFixed(1)}" r="3" fill="${v > 0 ? COLOURS.worse : COLOURS.better}"><title>${xml(`${labels[i]}: ${fmt(v)}%`)}</title></circle>`
+    );
+  });
+  const step = Math.max(1, Math.ceil(n / 6));
+  for (let i = 0; i < n; i += step) {
+    body.push(
+      `<text x="${x(i).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(labels[i] ?? "")}</text>`
+    );
+  }
+  return frame(
+    "Change in mean loss per period",
+    body,
+    `Candidate's mean loss against the baseline's in each of ${n} periods, in percent; shaded: the overall change's interval.`
+  );
+}
+function intervalsSvg(input) {
+  const { rows, margin } = input;
+  const rowH = 22;
+  const height = M.top + M.bottom + rowH * rows.length;
+  const values = rows.flatMap((r) => [r.estimate, r.lower ?? r.estimate, r.upper ?? r.estimate]);
+  const all = [0, ...values, ...margin === null ? [] : [margin]];
+  const lo2 = Math.min(...all);
+  const hi2 = Math.max(...all);
+  const pad = (hi2 - lo2) * 0.06 || 1;
+  const x = linear(lo2 - pad, hi2 + pad, M.left + 40, W - M.right);
+  const body = [];
+  for (const t of x.ticks) {
+    body.push(
+      `<line x1="${x(t).toFixed(1)}" x2="${x(t).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="#e5e7eb"/><text x="${x(t).toFixed(1)}" y="${height - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+    );
+  }
+  body.push(
+    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.ink}"/>`
+  );
+  if (margin !== null) {
+    body.push(
+      `<line x1="${x(margin).toFixed(1)}" x2="${x(margin).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.worse}" stroke-dasharray="6 4"/>`
+    );
+  }
+  rows.forEach((r, i) => {
+    const cy = M.top + rowH * i + rowH / 2;
+    const colour = r.lower !== null && r.lower > 0 ? COLOURS.worse : r.upper !== null && r.upper < 0 ? COLOURS.better : COLOURS.neutral;
+    body.push(
+      `<text x="${M.left + 32}" y="${cy + 4}" font-size="11" text-anchor="end" fill="${COLOURS.ink}">${xml(r.label)}</text>`
+    );
+    if (r.lower !== null && r.upper !== null) {
+      body.push(
+        `<line x1="${x(r.lower).toFixed(1)}" x2="${x(r.upper).toFixed(1)}" y1="${cy}" y2="${cy}" stroke="${colour}" stroke-width="2"/>`
+      );
+    }
+    body.push(
+      `<circle cx="${x(r.estimate).toFixed(1)}" cy="${cy}" r="4" fill="${colour}"><title>${xml(`${r.label}: ${fmt(r.estimate)}%`)}</title></circle>`
+    );
+  });
+  return frame(
+    input.title,
+    body,
+    "Dots: change in mean loss in percent; bars: its interval; vertical line: no difference."
+  ).replace(`viewBox="0 0 ${W} ${H}"`, `viewBox="0 0 ${W} ${height}"`);
+}
+function seriesDotPlotSvg(input) {
+  const { points, alpha } = input;
+  const sig = (p) => -Math.log10(Math.max(p, 1e-12));
+  const xs = [0, ...points.map((p) => p.change)];
+  const ys = [0, sig(alpha), ...points.map((p) => sig(p.p))];
+  const xPad = (Math.max(...xs) - Math.min(...xs)) * 0.06 || 1;
+  const x = linear(Math.min(...xs) - xPad, Math.max(...xs) + xPad, M.left, W - M.right);
+  const y = linear(0, Math.max(...ys) * 1.1, H - M.bottom, M.top);
+  const body = yAxis(y, "");
+  body.push(hline(y(sig(alpha)), COLOURS.neutral, "4 3", `adjusted p = ${alpha}`));
+  body.push(
+    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${COLOURS.ink}"/>`
+  );
+  for (const t of x.ticks) {
+    body.push(
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}%</text>`
+    );
+  }
+  body.push(
+    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">change in mean loss; up: stronger evidence (\u2212log10 adjusted p)</text>`
+  );
+  for (const p of points) {
+    const colour = p.direction === "worse" ? COLOURS.worse : p.direction === "better" ? COLOURS.better : COLOURS.neutral;
+    body.push(
+      `<circle cx="${x(p.change).toFixed(1)}" cy="${y(sig(p.p)).toFixed(1)}" r="4" fill="${colour}" fill-opacity="0.8"><title>${xml(`${p.label}: ${fmt(p.change)}%, adjusted p ${p.p.toPrecision(2)}`)}</title></circle>`
+    );
+  }
+  return frame(
+    "Series: change against evidence",
+    body,
+    "Each dot is a series; right of the vertical line its loss is higher; above the dashed line the adjusted evidence is significant."
+  );
+}
+function bootstrapHistogramSvg(input) {
+  const { histogram, observed, boundary } = input;
+  const lo2 = Math.min(histogram.lower, observed, boundary);
+  const hi2 = Math.max(histogram.upper, observed, boundary);
+  const pad = (hi2 - lo2) * 0.04 || 1;
+  const x = linear(lo2 - pad, hi2 + pad, M.left, W - M.right);
+  const max = Math.max(...histogram.counts);
+  const y = linear(0, max * 1.1, H - M.bottom, M.top);
+  const bins = histogram.counts.length;
+  const width = (histogram.upper - histogram.lower) / bins;
+  const body = [];
+  histogram.counts.forEach((c, j) => {
+    const x0 = x(histogram.lower + j * width);
+    const x1 = x(histogram.lower + (j + 1) * width);
+    body.push(
+      `<rect x="${x0.toFixed(1)}" y="${y(c).toFixed(1)}" width="${Math.max(0.5, x1 - x0 - 0.5).toFixed(1)}" height="${(y(0) - y(c)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.5"/>`
+    );
+  });
+  for (const t of x.ticks) {
+    body.push(
+      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml(fmt(t))}</text>`
+    );
+  }
+  const vline = (v, colour, dash, label, side, row) => {
+    const width2 = label.length * 6.2;
+    const anchor = side === "end" && x(v) - width2 < M.left ? "start" : side === "start" && x(v) + width2 > W - M.right ? "end" : side;
+    return `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/><text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml(label)}</text>`;
+  };
+  body.push(
+    vline(
+      boundary,
+      COLOURS.ink,
+      "4 3",
+      ` H0 boundary ${fmt(boundary)} `,
+      observed >= boundary ? "end" : "start",
+      0
+    )
+  );
+  body.push(
+    vline(
+      observed,
+      COLOURS.worse,
+      "0",
+      ` observed ${fmt(observed)} `,
+      observed >= boundary ? "start" : "end",
+      1
+    )
+  );
+  body.push(
+    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">resampled mean of the tested differential d</text>`
+  );
+  return frame(
+    "Bootstrap distribution",
+    body,
+    "Histogram of the stationary-bootstrap resample means of d, with the observed mean and the boundary of H0."
+  );
+}
+
 // src/report/candidatesChartSvg.ts
 var ROW = 26;
 var LEFT = 170;
@@ -28446,9 +28667,6 @@ function num(v) {
 }
 function pct(level) {
   return `${Math.round(level * 1e3) / 10}%`;
-}
-function xml(text) {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 }
 
 // src/report/cells.ts
@@ -29518,227 +29736,6 @@ function settingsTable(options) {
   );
 }
 
-// src/report/svgCharts.ts
-var COLOURS = { worse: "#b4501a", better: "#2463a6", neutral: "#6b7280", ink: "#1f2328" };
-var W = 640;
-var H = 240;
-var M = { left: 56, right: 16, top: 16, bottom: 40 };
-function xml2(text) {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
-}
-function linear(lo2, hi2, from, to) {
-  const span = hi2 - lo2 || 1;
-  const f = (x) => from + (x - lo2) / span * (to - from);
-  return Object.assign(f, { ticks: niceTicks(lo2, hi2) });
-}
-function niceTicks(lo2, hi2, count = 5) {
-  const span = hi2 - lo2 || 1;
-  const step0 = span / count;
-  const mag = 10 ** Math.floor(Math.log10(step0));
-  const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= step0) ?? 10 * mag;
-  const out = [];
-  for (let v = Math.ceil(lo2 / step) * step; v <= hi2 + step * 1e-9; v += step) {
-    out.push(Number(v.toPrecision(12)));
-  }
-  return out;
-}
-function fmt(x) {
-  return String(Number(x.toPrecision(3)));
-}
-function frame(title, body, desc) {
-  return [
-    `<svg viewBox="0 0 ${W} ${H}" width="100%" role="img" aria-label="${xml2(title)}" xmlns="http://www.w3.org/2000/svg">`,
-    `<title>${xml2(title)}</title><desc>${xml2(desc)}</desc>`,
-    ...body,
-    "</svg>"
-  ].join("\n");
-}
-function yAxis(y, unit) {
-  return y.ticks.map(
-    (t) => `<line x1="${M.left}" x2="${W - M.right}" y1="${y(t).toFixed(1)}" y2="${y(t).toFixed(1)}" stroke="#e5e7eb"/><text x="${M.left - 6}" y="${(y(t) + 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${COLOURS.neutral}">${xml2(fmt(t))}${unit}</text>`
-  );
-}
-function hline(y, colour, dash, label) {
-  return `<line x1="${M.left}" x2="${W - M.right}" y1="${y.toFixed(1)}" y2="${y.toFixed(1)}" stroke="${colour}" stroke-width="1.5" stroke-dasharray="${dash}"/><text x="${W - M.right - 2}" y="${(y - 4).toFixed(1)}" font-size="11" text-anchor="end" fill="${colour}">${xml2(label)}</text>`;
-}
-function differenceOverTimeSvg(input) {
-  const { labels, values, margin, band } = input;
-  const all = [
-    0,
-    ...values,
-    ...margin === null ? [] : [margin],
-    ...band === null ? [] : [band.lower, band.upper]
-  ];
-  const lo2 = Math.min(...all);
-  const hi2 = Math.max(...all);
-  const pad = (hi2 - lo2) * 0.08 || 1;
-  const y = linear(lo2 - pad, hi2 + pad, H - M.bottom, M.top);
-  const n = values.length;
-  const x = (i) => M.left + (n === 1 ? 0.5 : i / (n - 1)) * (W - M.left - M.right);
-  const body = yAxis(y, "%");
-  if (band !== null) {
-    body.push(
-      `<rect x="${M.left}" y="${y(band.upper).toFixed(1)}" width="${W - M.left - M.right}" height="${Math.max(1, y(band.lower) - y(band.upper)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.15"/>`
-    );
-  }
-  body.push(hline(y(0), COLOURS.ink, "0", "no difference"));
-  if (margin !== null) body.push(hline(y(margin), COLOURS.worse, "6 4", `margin ${fmt(margin)}%`));
-  body.push(
-    `<polyline fill="none" stroke="${COLOURS.ink}" stroke-width="1.5" points="${values.map((v, i) => `${x(i).toFixed(1)},${y(v).toFixed(1)}`).join(" ")}"/>`
-  );
-  values.forEach((v, i) => {
-    body.push(
-      `<circle cx="${x(i).toFixed(1)}" cy="${y(v).toFixed(1)}" r="3" fill="${v > 0 ? COLOURS.worse : COLOURS.better}"><title>${xml2(`${labels[i]}: ${fmt(v)}%`)}</title></circle>`
-    );
-  });
-  const step = Math.max(1, Math.ceil(n / 6));
-  for (let i = 0; i < n; i += step) {
-    body.push(
-      `<text x="${x(i).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(labels[i] ?? "")}</text>`
-    );
-  }
-  return frame(
-    "Change in mean loss per period",
-    body,
-    `Candidate's mean loss against the baseline's in each of ${n} periods, in percent; shaded: the overall change's interval.`
-  );
-}
-function intervalsSvg(input) {
-  const { rows, margin } = input;
-  const rowH = 22;
-  const height = M.top + M.bottom + rowH * rows.length;
-  const values = rows.flatMap((r) => [r.estimate, r.lower ?? r.estimate, r.upper ?? r.estimate]);
-  const all = [0, ...values, ...margin === null ? [] : [margin]];
-  const lo2 = Math.min(...all);
-  const hi2 = Math.max(...all);
-  const pad = (hi2 - lo2) * 0.06 || 1;
-  const x = linear(lo2 - pad, hi2 + pad, M.left + 40, W - M.right);
-  const body = [];
-  for (const t of x.ticks) {
-    body.push(
-      `<line x1="${x(t).toFixed(1)}" x2="${x(t).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="#e5e7eb"/><text x="${x(t).toFixed(1)}" y="${height - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(fmt(t))}%</text>`
-    );
-  }
-  body.push(
-    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.ink}"/>`
-  );
-  if (margin !== null) {
-    body.push(
-      `<line x1="${x(margin).toFixed(1)}" x2="${x(margin).toFixed(1)}" y1="${M.top}" y2="${height - M.bottom}" stroke="${COLOURS.worse}" stroke-dasharray="6 4"/>`
-    );
-  }
-  rows.forEach((r, i) => {
-    const cy = M.top + rowH * i + rowH / 2;
-    const colour = r.lower !== null && r.lower > 0 ? COLOURS.worse : r.upper !== null && r.upper < 0 ? COLOURS.better : COLOURS.neutral;
-    body.push(
-      `<text x="${M.left + 32}" y="${cy + 4}" font-size="11" text-anchor="end" fill="${COLOURS.ink}">${xml2(r.label)}</text>`
-    );
-    if (r.lower !== null && r.upper !== null) {
-      body.push(
-        `<line x1="${x(r.lower).toFixed(1)}" x2="${x(r.upper).toFixed(1)}" y1="${cy}" y2="${cy}" stroke="${colour}" stroke-width="2"/>`
-      );
-    }
-    body.push(
-      `<circle cx="${x(r.estimate).toFixed(1)}" cy="${cy}" r="4" fill="${colour}"><title>${xml2(`${r.label}: ${fmt(r.estimate)}%`)}</title></circle>`
-    );
-  });
-  return frame(
-    input.title,
-    body,
-    "Dots: change in mean loss in percent; bars: its interval; vertical line: no difference."
-  ).replace(`viewBox="0 0 ${W} ${H}"`, `viewBox="0 0 ${W} ${height}"`);
-}
-function seriesDotPlotSvg(input) {
-  const { points, alpha } = input;
-  const sig = (p) => -Math.log10(Math.max(p, 1e-12));
-  const xs = [0, ...points.map((p) => p.change)];
-  const ys = [0, sig(alpha), ...points.map((p) => sig(p.p))];
-  const xPad = (Math.max(...xs) - Math.min(...xs)) * 0.06 || 1;
-  const x = linear(Math.min(...xs) - xPad, Math.max(...xs) + xPad, M.left, W - M.right);
-  const y = linear(0, Math.max(...ys) * 1.1, H - M.bottom, M.top);
-  const body = yAxis(y, "");
-  body.push(hline(y(sig(alpha)), COLOURS.neutral, "4 3", `adjusted p = ${alpha}`));
-  body.push(
-    `<line x1="${x(0).toFixed(1)}" x2="${x(0).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${COLOURS.ink}"/>`
-  );
-  for (const t of x.ticks) {
-    body.push(
-      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(fmt(t))}%</text>`
-    );
-  }
-  body.push(
-    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">change in mean loss; up: stronger evidence (\u2212log10 adjusted p)</text>`
-  );
-  for (const p of points) {
-    const colour = p.direction === "worse" ? COLOURS.worse : p.direction === "better" ? COLOURS.better : COLOURS.neutral;
-    body.push(
-      `<circle cx="${x(p.change).toFixed(1)}" cy="${y(sig(p.p)).toFixed(1)}" r="4" fill="${colour}" fill-opacity="0.8"><title>${xml2(`${p.label}: ${fmt(p.change)}%, adjusted p ${p.p.toPrecision(2)}`)}</title></circle>`
-    );
-  }
-  return frame(
-    "Series: change against evidence",
-    body,
-    "Each dot is a series; right of the vertical line its loss is higher; above the dashed line the adjusted evidence is significant."
-  );
-}
-function bootstrapHistogramSvg(input) {
-  const { histogram, observed, boundary } = input;
-  const lo2 = Math.min(histogram.lower, observed, boundary);
-  const hi2 = Math.max(histogram.upper, observed, boundary);
-  const pad = (hi2 - lo2) * 0.04 || 1;
-  const x = linear(lo2 - pad, hi2 + pad, M.left, W - M.right);
-  const max = Math.max(...histogram.counts);
-  const y = linear(0, max * 1.1, H - M.bottom, M.top);
-  const bins = histogram.counts.length;
-  const width = (histogram.upper - histogram.lower) / bins;
-  const body = [];
-  histogram.counts.forEach((c, j) => {
-    const x0 = x(histogram.lower + j * width);
-    const x1 = x(histogram.lower + (j + 1) * width);
-    body.push(
-      `<rect x="${x0.toFixed(1)}" y="${y(c).toFixed(1)}" width="${Math.max(0.5, x1 - x0 - 0.5).toFixed(1)}" height="${(y(0) - y(c)).toFixed(1)}" fill="${COLOURS.neutral}" fill-opacity="0.5"/>`
-    );
-  });
-  for (const t of x.ticks) {
-    body.push(
-      `<text x="${x(t).toFixed(1)}" y="${H - M.bottom + 16}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">${xml2(fmt(t))}</text>`
-    );
-  }
-  const vline = (v, colour, dash, label, side, row) => {
-    const width2 = label.length * 6.2;
-    const anchor = side === "end" && x(v) - width2 < M.left ? "start" : side === "start" && x(v) + width2 > W - M.right ? "end" : side;
-    return `<line x1="${x(v).toFixed(1)}" x2="${x(v).toFixed(1)}" y1="${M.top}" y2="${H - M.bottom}" stroke="${colour}" stroke-width="2" stroke-dasharray="${dash}"/><text x="${x(v).toFixed(1)}" y="${M.top + 10 + 14 * row}" font-size="11" text-anchor="${anchor}" fill="${colour}">${xml2(label)}</text>`;
-  };
-  body.push(
-    vline(
-      boundary,
-      COLOURS.ink,
-      "4 3",
-      ` H0 boundary ${fmt(boundary)} `,
-      observed >= boundary ? "end" : "start",
-      0
-    )
-  );
-  body.push(
-    vline(
-      observed,
-      COLOURS.worse,
-      "0",
-      ` observed ${fmt(observed)} `,
-      observed >= boundary ? "start" : "end",
-      1
-    )
-  );
-  body.push(
-    `<text x="${W / 2}" y="${H - 6}" font-size="11" text-anchor="middle" fill="${COLOURS.neutral}">resampled mean of the tested differential d</text>`
-  );
-  return frame(
-    "Bootstrap distribution",
-    body,
-    "Histogram of the stationary-bootstrap resample means of d, with the observed mean and the boundary of H0."
-  );
-}
-
 // src/report/renderHtml.ts
 var STYLE = `
 :root { color-scheme: light; }
@@ -29770,16 +29767,16 @@ function renderHtml(report, options = {}) {
     '<html lang="en"><head><meta charset="utf-8">',
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
-    `<title>${xml2(s.title)}: ${s.verdict.toUpperCase()}</title>`,
+    `<title>${xml(s.title)}: ${s.verdict.toUpperCase()}</title>`,
     `<style>${STYLE}</style></head><body>`,
-    `<h1>${xml2(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
-    `<p class="lead"><strong>${xml2(s.lead)}</strong> ${xml2(s.change)}</p>`,
+    `<h1>${xml(s.title)} <span class="verdict ${s.verdict}">${s.verdict.toUpperCase()}</span></h1>`,
+    `<p class="lead"><strong>${xml(s.lead)}</strong> ${xml(s.change)}</p>`,
     htmlTable(s.main),
-    `<p class="muted">${xml2(s.intervalNote)}</p>`
+    `<p class="muted">${xml(s.intervalNote)}</p>`
   );
-  if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml2(n)}</li>`).join("")}</ul>`);
+  if (s.notes.length > 0) out.push(`<ul>${s.notes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`);
   out.push(
-    `<p class="muted">${s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: <code>${xml2(s.changedSettings)}</code>`}</p>`
+    `<p class="muted">${s.changedSettings === "" ? "Settings: the defaults." : `Settings that differ from the defaults: <code>${xml(s.changedSettings)}</code>`}</p>`
   );
   const chart = differenceSeries(view);
   if (chart !== null) {
@@ -29792,15 +29789,15 @@ function renderHtml(report, options = {}) {
         values: chart.values,
         margin: chart.margin,
         band: band === null ? null : { lower: band.lower * 100, upper: band.upper * 100 }
-      })}<figcaption>${xml2(chartCaption(chart))}${band === null ? "" : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
-      `<p class="spark">${xml2(sparklineText(chart))}</p>`
+      })}<figcaption>${xml(chartCaption(chart))}${band === null ? "" : ` Shaded: the overall change's ${Math.round(band.level * 100)}% interval (${percent(band.lower)} to ${percent(band.upper)}).`}</figcaption></figure>`,
+      `<p class="spark">${xml(sparklineText(chart))}</p>`
     );
   }
   const overTime = overTimeParts(report);
   if (overTime !== null) {
     out.push("<h2>Over time</h2>");
     if (overTime.windows !== null) out.push(htmlTable(overTime.windows));
-    out.push(...overTime.sentences.map((t) => `<p>${xml2(t)}</p>`));
+    out.push(...overTime.sentences.map((t) => `<p>${xml(t)}</p>`));
     if (overTime.periods !== null) {
       out.push(
         `<details><summary>Mean loss by period (${overTime.periods.rows.length} periods)</summary>${htmlTable(overTime.periods)}</details>`
@@ -29848,17 +29845,17 @@ function renderHtml(report, options = {}) {
         `<figure>${seriesDotPlotSvg({ points, alpha: view.policy.alpha })}<figcaption>Each dot is a series: across, the change in its mean loss; up, the strength of the evidence (\u2212log10 of the multiplicity-adjusted p-value). Rust: worse, blue: better, grey: no clear difference.</figcaption></figure>`
       );
     }
-    out.push(`<p>${xml2(s.series.summary)}</p>`, htmlTable(s.series.table));
+    out.push(`<p>${xml(s.series.summary)}</p>`, htmlTable(s.series.table));
   }
   if (s.paths !== null) {
-    out.push("<h2>By backtest path</h2>", `<p>${xml2(s.paths.summary)}</p>`);
+    out.push("<h2>By backtest path</h2>", `<p>${xml(s.paths.summary)}</p>`);
     if (s.paths.table !== null) out.push(htmlTable(s.paths.table));
   }
   const missing = missingRowsSection(view);
   if (missing !== null) {
     out.push(
-      `<h2>${xml2(missing.title)}</h2>`,
-      ...missing.lines.map((l) => `<p>${xml2(l)}</p>`),
+      `<h2>${xml(missing.title)}</h2>`,
+      ...missing.lines.map((l) => `<p>${xml(l)}</p>`),
       ...missing.tables.map(htmlTable)
     );
   }
@@ -29871,17 +29868,17 @@ function renderHtml(report, options = {}) {
   }
   out.push(
     htmlTable(s.details),
-    `<ul>${s.detailNotes.map((n) => `<li>${xml2(n)}</li>`).join("")}</ul>`
+    `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`
   );
   if (s.checks !== null) out.push("<h2>Backtest checks</h2>", htmlTable(s.checks));
   out.push(
     "<h2>Inputs and coverage</h2>",
     htmlTable(s.inputs.table),
-    ...s.inputs.lines.map((l) => `<p>${xml2(l)}</p>`)
+    ...s.inputs.lines.map((l) => `<p>${xml(l)}</p>`)
   );
   out.push("<h2>All settings</h2>", htmlTable(s.settings));
   out.push(
-    `<p class="muted">A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${xml2(report.tool.version)}.</p>`,
+    `<p class="muted">A pass is evidence, not proof: it is only as good as the backtest behind it. Generated by skillgate ${xml(report.tool.version)}.</p>`,
     "</body></html>"
   );
   return `${out.join("\n")}
@@ -29893,7 +29890,7 @@ function marginPercent(report) {
   return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
 }
 function htmlTable(t) {
-  const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml2(text)}</${tag}>`;
+  const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text)}</${tag}>`;
   return [
     '<div class="scroll"><table>',
     `<thead><tr>${t.header.map((h, j) => cell("th", h, j)).join("")}</tr></thead>`,

@@ -1,6 +1,7 @@
 import type { CandidateSummary } from '../candidates/candidatesModel.js';
 import { formatSignedPercent } from '../core/formatNumber.js';
 import type { Report } from './reportModel.js';
+import { xml } from './svgCharts.js';
 
 /** Layout of the chart, in SVG user units. */
 const ROW = 26;
@@ -142,14 +143,4 @@ function num(v: number): string {
 
 function pct(level: number): string {
   return `${Math.round(level * 1000) / 10}%`;
-}
-
-/** Text safe inside SVG/XML content and attribute values. */
-function xml(text: string): string {
-  return text
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&#39;');
 }

@@ -11,6 +11,7 @@ const W = 640;
 const H = 240;
 const M = { left: 56, right: 16, top: 16, bottom: 40 };
 
+/** Text safe inside SVG/XML (and HTML) content and attribute values. */
 export function xml(text: string): string {
   return text
     .replace(/&/g, '&amp;')
