@@ -29328,6 +29328,9 @@ function optionText(value) {
     if (v.kind === "horizon") return "h-1";
     if (typeof v.lag === "number") return String(v.lag);
     if (typeof v.length === "number") return String(v.length);
+    if (v.kind === "points" && typeof v.points === "number") return String(v.points);
+    if (v.kind === "share" && typeof v.share === "number")
+      return `${Number((v.share * 100).toPrecision(12))}%`;
   }
   return Object.entries(v).filter(([, header]) => typeof header === "string").map(([role, header]) => `${role}=${header}`).join(",");
 }

@@ -33468,6 +33468,9 @@ function optionText(value) {
     if (v.kind === "horizon") return "h-1";
     if (typeof v.lag === "number") return String(v.lag);
     if (typeof v.length === "number") return String(v.length);
+    if (v.kind === "points" && typeof v.points === "number") return String(v.points);
+    if (v.kind === "share" && typeof v.share === "number")
+      return `${Number((v.share * 100).toPrecision(12))}%`;
   }
   return Object.entries(v).filter(([, header2]) => typeof header2 === "string").map(([role, header2]) => `${role}=${header2}`).join(",");
 }

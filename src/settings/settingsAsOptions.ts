@@ -75,6 +75,10 @@ function optionText(value: unknown): string {
     if (v.kind === 'horizon') return 'h-1';
     if (typeof v.lag === 'number') return String(v.lag);
     if (typeof v.length === 'number') return String(v.length);
+    // the recent window: N time points or P%
+    if (v.kind === 'points' && typeof v.points === 'number') return String(v.points);
+    if (v.kind === 'share' && typeof v.share === 'number')
+      return `${Number((v.share * 100).toPrecision(12))}%`;
   }
   // the column mapping: role=header pairs
   return Object.entries(v)

@@ -43,6 +43,20 @@ describe('settings as a user types them', () => {
     );
   });
 
+  it.each(['15%', '36', '12.5%'])('round-trips a recent window of %s as typed', (recent) => {
+    const settings = resolveSettings(
+      { baseline: 'b.csv', candidate: 'c.csv', recent },
+      (n) => `--${n}`,
+    );
+    const option = settingsAsOptions(settings).find((o) => o.name === 'recent')!;
+    expect(option.value).toBe(recent);
+    const again = resolveSettings(
+      Object.fromEntries(settingsAsOptions(settings).map((o) => [o.name, o.value])),
+      (n) => `--${n}`,
+    );
+    expect(again).toEqual(settings);
+  });
+
   it('shows only the changed options in the comment, all of them folded, paths relative', () => {
     const report = sampleReport();
     const md = renderMarkdown(
