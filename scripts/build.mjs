@@ -14,6 +14,8 @@ const entries = [
   { in: 'src/action/main.ts', out: 'index' },
   // The bootstrap's worker thread (src/parallel/resamplePool.ts loads it from next to the bundle).
   { in: 'src/parallel/resampleWorker.ts', out: 'resampleWorker' },
+  // The reading worker thread (src/parallel/readForecastFiles.ts loads it from next to the bundle).
+  { in: 'src/parallel/readingWorker.ts', out: 'readingWorker' },
 ].filter((e) => existsSync(path.join(root, e.in)));
 
 await build({

@@ -6,7 +6,9 @@ import { evaluateLossSeries } from '../comparison/evaluateLossSeries.js';
 import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
 import { checkBacktest } from '../integrity/checkBacktest.js';
+import { readForecastFiles } from '../parallel/readForecastFiles.js';
 import { type ColumnMapping, checkDistinctNames } from '../reading/columnMapping.js';
+import type { ForecastTable } from '../reading/forecastTable.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
 import { readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
@@ -14,6 +16,7 @@ import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import type { Progress } from './progress.js';
+import { readingProgress } from './readingProgress.js';
 
 export interface RunHooks {
   readonly onProgress?: (progress: Progress) => void;
@@ -34,18 +37,9 @@ export async function runComparison(
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
   if (settings.candidates.length > 1 || settings.modelColumn !== null)
     return { report: await runCandidates(settings, hooks) };
-  const read = (path: string, role: 'baseline' | 'candidate' | 'actuals') =>
-    readForecastFile(path, {
-      role,
-      columns: columnsFor(settings, role),
-      ...readDialect(settings),
-      requireActual: role === 'actuals' || settings.actuals === null,
-      onProgress: (done, total) =>
-        hooks.onProgress?.({ stage: `reading ${role}`, fraction: total > 0 ? done / total : 1 }),
-    });
-  const baseline = await read(settings.baseline, 'baseline');
-  const candidate = await read(settings.candidate, 'candidate');
-  const actuals = settings.actuals === null ? undefined : await read(settings.actuals, 'actuals');
+  const roles = settings.actuals === null ? FORECAST_ROLES : [...FORECAST_ROLES, ACTUALS_ROLE];
+  const [baseline, candidate, actuals] = await readRoleFiles(settings, roles, hooks);
+  if (baseline === undefined || candidate === undefined) throw new Error('a file was not read');
   hooks.onProgress?.({ stage: 'aligning', fraction: 0 });
   const panel = alignPanel(
     { baseline, candidate, ...(actuals === undefined ? {} : { actuals }) },
@@ -117,6 +111,43 @@ async function readHistory(settings: Settings): Promise<Map<string, Float64Array
     requireActual: true,
   });
   return historyBySeries(table, settings.timeFormat);
+}
+
+export type Role = 'baseline' | 'candidate' | 'actuals';
+const FORECAST_ROLES: readonly Role[] = ['baseline', 'candidate'];
+const ACTUALS_ROLE: Role = 'actuals';
+
+/** The path settings give for a role. */
+function pathOf(settings: Settings, role: Role): string {
+  if (role === 'baseline') return settings.baseline;
+  if (role === 'candidate') return settings.candidate;
+  if (settings.actuals === null) throw new Error('no actuals file');
+  return settings.actuals;
+}
+
+/**
+ * Reads the files of `roles` (at once on worker threads when they are large, see
+ * readForecastFiles), in that order for errors, with one progress stage for all of them.
+ */
+export function readRoleFiles(
+  settings: Settings,
+  roles: readonly Role[],
+  hooks: RunHooks,
+  paths: readonly string[] = roles.map((role) => pathOf(settings, role)),
+): Promise<ForecastTable[]> {
+  const progress = readingProgress(roles, hooks.onProgress);
+  return readForecastFiles(
+    roles.map((role, k) => ({
+      path: paths[k]!,
+      options: {
+        role,
+        columns: columnsFor(settings, role),
+        ...readDialect(settings),
+        requireActual: role === 'actuals' || settings.actuals === null,
+        onProgress: progress.forFile(k),
+      },
+    })),
+  );
 }
 
 /** The column renames for one file: the shared ones, then that file's own. */

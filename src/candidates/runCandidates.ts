@@ -1,4 +1,10 @@
-import { columnsFor, type RunHooks, readDialect } from '../app/runComparison.js';
+import {
+  columnsFor,
+  type Role,
+  type RunHooks,
+  readDialect,
+  readRoleFiles,
+} from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
@@ -37,6 +43,16 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
   let baseline: ForecastTable | undefined;
   let baselineName = settings.baselineModel ?? fileStem(settings.baseline);
   let candidates: CandidateTable[];
+  // The tables of otherRoles(baseline) once read: the baseline unless known, then the actuals.
+  let rest: ForecastTable[] | undefined;
+  const otherRoles = (known: ForecastTable | undefined): Role[] => [
+    ...(known === undefined ? (['baseline'] as const) : []),
+    ...(settings.actuals === null ? [] : (['actuals'] as const)),
+  ];
+  const otherPaths = (known: ForecastTable | undefined): string[] => [
+    ...(known === undefined ? [settings.baseline] : []),
+    ...(settings.actuals === null ? [] : [settings.actuals]),
+  ];
   if (settings.modelColumn !== null) {
     const file = settings.candidates[0]!.path;
     const own = columnsFor(settings, 'candidate');
@@ -77,18 +93,26 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
     }
     candidates = [...parts].map(([name, t]) => ({ name, file: `${file}#${name}`, table: t }));
   } else {
-    candidates = [];
-    for (const c of settings.candidates) {
-      candidates.push({ name: c.name, file: c.path, table: await read(c.path, 'candidate') });
-    }
+    // Candidates, baseline and actuals in one go (at once when large), errors in that order.
+    const roles = [...settings.candidates.map((): Role => 'candidate'), ...otherRoles(undefined)];
+    const paths = [...settings.candidates.map((c) => c.path), ...otherPaths(undefined)];
+    const tables = await readRoleFiles(settings, roles, hooks, paths);
+    candidates = settings.candidates.map((c, k) => ({
+      name: c.name,
+      file: c.path,
+      table: tables[k]!,
+    }));
+    rest = tables.slice(settings.candidates.length);
   }
   if (candidates.length === 0) {
     throw new InputError('no candidate left to compare with the baseline', {
       file: settings.candidates[0]?.path ?? 'candidate',
     });
   }
-  baseline ??= await read(settings.baseline, 'baseline');
-  const actuals = settings.actuals === null ? undefined : await read(settings.actuals, 'actuals');
+  rest ??= await readRoleFiles(settings, otherRoles(baseline), hooks, otherPaths(baseline));
+  if (baseline === undefined) baseline = rest.shift();
+  const actuals = rest[0];
+  if (baseline === undefined) throw new Error('the baseline was not read');
   const folds = settings.folds === null ? undefined : await readFoldLayout(settings.folds);
   hooks.onProgress?.({ stage: 'testing', fraction: 0 });
   const report = evaluateCandidates(

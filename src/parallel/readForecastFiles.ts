@@ -1,0 +1,155 @@
+/**
+ * Reads several forecast files at once (baseline, candidate, actuals), one per worker thread,
+ * each with `readForecastFile` unchanged (readingWorker.ts); the tables come back with their
+ * typed columns moved, not copied (tableTransfer.ts). Small inputs stay in the calling thread,
+ * where the result is the same and no thread has to start. Either way the tables are those of
+ * reading the files one after the other, and so is the error: when several files fail, the one
+ * earliest in the given order is reported, as if they had been read in that order.
+ */
+import { existsSync } from 'node:fs';
+import { stat } from 'node:fs/promises';
+import { availableParallelism } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import type { ForecastTable } from '../reading/forecastTable.js';
+import { type ReadOptions, readForecastFile } from '../reading/readForecastFile.js';
+import { type ReadReply, type ReadRequest, rebuildError } from './readingMessages.js';
+
+/**
+ * Files are read on worker threads only when at least two of them have this many bytes (as
+ * stored). Below it the calling thread reads them one after the other: a worker costs about
+ * 50–100 ms before it reads its first byte (thread start, loading and compiling its bundle) on the
+ * 2-core machine of docs/performance.md ("Reading both files at once"), while reading proceeds at
+ * roughly 15–25 MB/s per file, so the second core pays for itself from a few MB per file.
+ */
+export const MINIMUM_PARALLEL_FILE_BYTES = 4 * 2 ** 20;
+
+export interface FileToRead {
+  readonly path: string;
+  readonly options: ReadOptions;
+}
+
+export interface ParallelReadingOptions {
+  /** Threads to read on at most; default: available cores. 1 = the calling thread only. */
+  readonly threads?: number;
+  /** See MINIMUM_PARALLEL_FILE_BYTES. */
+  readonly minimumFileBytes?: number;
+  /**
+   * The bundled worker script; default: readingWorker.js next to this module's bundle. When the
+   * script is not there (running from the TypeScript sources), the calling thread reads.
+   */
+  readonly workerUrl?: URL;
+}
+
+/** The tables of `files`, in the same order. */
+export async function readForecastFiles(
+  files: readonly FileToRead[],
+  options: ParallelReadingOptions = {},
+): Promise<ForecastTable[]> {
+  const threads = options.threads ?? availableParallelism();
+  const minimum = options.minimumFileBytes ?? MINIMUM_PARALLEL_FILE_BYTES;
+  const workerUrl = options.workerUrl ?? new URL('./readingWorker.js', import.meta.url);
+  const sizes = await Promise.all(files.map((f) => storedBytes(f.path)));
+  const large = sizes.filter((size) => size >= minimum).length;
+  if (threads < 2 || large < 2 || !existsSync(fileURLToPath(workerUrl))) {
+    const tables: ForecastTable[] = [];
+    for (const file of files) tables.push(await readForecastFile(file.path, file.options));
+    return tables;
+  }
+  // Largest first, so the last file to start is a small one.
+  const order = files.map((_, i) => i).sort((a, b) => sizes[b]! - sizes[a]! || a - b);
+  return readOnWorkers(files, order, Math.min(threads, files.length), workerUrl);
+}
+
+/** The file's size as stored, or 0 when it cannot be read (reading it will say why). */
+async function storedBytes(path: string): Promise<number> {
+  try {
+    const info = await stat(path);
+    return info.isFile() ? info.size : 0;
+  } catch {
+    return 0;
+  }
+}
+
+type Outcome = { readonly table: ForecastTable } | { readonly error: Error };
+
+function readOnWorkers(
+  files: readonly FileToRead[],
+  order: readonly number[],
+  workerCount: number,
+  workerUrl: URL,
+): Promise<ForecastTable[]> {
+  return new Promise((resolve, reject) => {
+    const outcomes: (Outcome | undefined)[] = files.map(() => undefined);
+    const workers: Worker[] = [];
+    let next = 0;
+    let finished = false;
+
+    const finish = (result: () => void): void => {
+      finished = true;
+      Promise.all(workers.map((w) => w.terminate())).then(result, result);
+    };
+    // Done when every file is read, or when the earliest failing file is known.
+    const settle = (index: number, outcome: Outcome): void => {
+      if (finished || outcomes[index] !== undefined) return;
+      outcomes[index] = outcome;
+      const tables: ForecastTable[] = [];
+      for (const o of outcomes) {
+        if (o === undefined) return;
+        if ('error' in o) {
+          const { error } = o;
+          finish(() => reject(error));
+          return;
+        }
+        tables.push(o.table);
+      }
+      finish(() => resolve(tables));
+    };
+
+    const start = (): void => {
+      const worker = new Worker(workerUrl);
+      workers.push(worker);
+      let current = -1;
+      const give = (): void => {
+        if (next >= order.length) {
+          current = -1;
+          worker.terminate().catch(() => {});
+          return;
+        }
+        current = order[next++]!;
+        const file = files[current]!;
+        const { onProgress, ...readOptions } = file.options;
+        const request: ReadRequest = {
+          index: current,
+          path: file.path,
+          options: readOptions,
+          progress: onProgress !== undefined,
+        };
+        worker.postMessage(request);
+      };
+      worker.on('message', (reply: ReadReply) => {
+        if (reply.kind === 'progress') {
+          files[reply.index]?.options.onProgress?.(reply.bytesRead, reply.totalBytes);
+          return;
+        }
+        settle(
+          reply.index,
+          reply.kind === 'table' ? { table: reply.table } : { error: rebuildError(reply.error) },
+        );
+        if (!finished) give();
+      });
+      // A worker that dies is a bug, not an input error: stop everything and say so.
+      worker.on('error', (error) => {
+        if (!finished) finish(() => reject(error));
+      });
+      worker.on('exit', (code) => {
+        if (current >= 0 && !finished) {
+          const error = new Error(`a reading worker stopped (exit code ${code})`);
+          finish(() => reject(error));
+        }
+      });
+      give();
+    };
+    for (let w = 0; w < workerCount; w++) start();
+  });
+}
