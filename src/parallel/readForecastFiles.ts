@@ -1,7 +1,8 @@
 /**
- * Reads several forecast files at once (baseline, candidate, actuals), one per worker thread,
- * each with `readForecastFile` unchanged (readingWorker.ts); the tables come back with their
- * typed columns moved, not copied (tableTransfer.ts). Small inputs stay in the calling thread,
+ * Reads several forecast files at once (baseline, candidate, actuals): the first in the calling
+ * thread, the others on worker threads, each with `readForecastFile` unchanged
+ * (readingWorker.ts); the tables come back with their typed columns moved, not copied
+ * (tableTransfer.ts). Small inputs stay in the calling thread,
  * where the result is the same and no thread has to start. Either way the tables are those of
  * reading the files one after the other, and so is the error: when several files fail, the one
  * earliest in the given order is reported, as if they had been read in that order.
@@ -30,7 +31,10 @@ export interface FileToRead {
 }
 
 export interface ParallelReadingOptions {
-  /** Threads to read on at most; default: available cores. 1 = the calling thread only. */
+  /**
+   * Threads to read on at most, the calling thread included; default: available cores. 1 = the
+   * calling thread only.
+   */
   readonly threads?: number;
   /** See MINIMUM_PARALLEL_FILE_BYTES. */
   readonly minimumFileBytes?: number;
@@ -56,9 +60,13 @@ export async function readForecastFiles(
     for (const file of files) tables.push(await readForecastFile(file.path, file.options));
     return tables;
   }
-  // Largest first, so the last file to start is a small one.
-  const order = files.map((_, i) => i).sort((a, b) => sizes[b]! - sizes[a]! || a - b);
-  return readOnWorkers(files, order, Math.min(threads, files.length), workerUrl);
+  // The first file in this thread (its error comes first, and ends the others at once); the
+  // others on the workers, largest first, so the last file to start is a small one.
+  const order = files
+    .map((_, i) => i)
+    .slice(1)
+    .sort((a, b) => sizes[b]! - sizes[a]! || a - b);
+  return readOnWorkers(files, order, Math.min(threads - 1, files.length - 1), workerUrl);
 }
 
 /** The file's size as stored, or 0 when it cannot be read (reading it will say why). */
@@ -151,5 +159,11 @@ function readOnWorkers(
       give();
     };
     for (let w = 0; w < workerCount; w++) start();
+    const first = files[0]!;
+    readForecastFile(first.path, first.options).then(
+      (table) => settle(0, { table }),
+      (error: unknown) =>
+        settle(0, { error: error instanceof Error ? error : new Error(String(error)) }),
+    );
   });
 }
