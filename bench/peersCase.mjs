@@ -156,6 +156,7 @@ export function peersOnFiles({ root, cli, prepared, files, runs, measure, median
       best: Math.min(...ms.map((m) => m.wall)),
       inner: withInner.length > 0 ? median(withInner.map((m) => m.inner)) : null,
       rss: Math.max(...ms.map((m) => m.rss ?? 0)),
+      cpu: median(ms.map((m) => m.cpu ?? 0)),
       out: ms.at(-1).out ?? null,
     };
   }
@@ -199,13 +200,13 @@ export function printPeers({ peers, log, fmt, large, mean }) {
     `   ${(peers.rows / 1e6).toFixed(0)}M rows per file, ${fmt(peers.bytes / 1e6)} MB in all; ${peers.runs} run(s), medians; load average (1/5/15 min) by run: ${peers.loads.join(' → ')}`,
   );
   log(
-    '   case                                                      │   wall │ best run │ in process │ peak RSS │ pandas ÷ case │ case ÷ DuckDB process',
+    '   case                                                      │    wall │ best run │ in process │ CPU (user+sys) │ peak RSS │ pandas ÷ case │ case ÷ DuckDB process',
   );
   for (const [name, c] of Object.entries(r)) {
     const vsPandas = pandas === undefined ? '—' : `${fmt(pandas.wall / c.wall)}×`;
     const vsDuck = duck === undefined ? '—' : `${fmt(c.wall / duck.wall)}×`;
     log(
-      `   ${name.padEnd(57)} │ ${s(c.wall).padStart(6)} │ ${s(c.best).padStart(8)} │ ${(c.inner === null ? '—' : s(c.inner)).padStart(10)} │ ${`${fmt(c.rss)} MiB`.padStart(8)} │ ${vsPandas.padStart(13)} │ ${vsDuck.padStart(8)}`,
+      `   ${name.padEnd(57)} │ ${s(c.wall).padStart(7)} │ ${s(c.best).padStart(8)} │ ${(c.inner === null ? '—' : s(c.inner)).padStart(10)} │ ${s(c.cpu).padStart(14)} │ ${`${fmt(c.rss)} MiB`.padStart(8)} │ ${vsPandas.padStart(13)} │ ${vsDuck.padStart(8)}`,
     );
   }
   const means = [

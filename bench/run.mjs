@@ -62,13 +62,13 @@ function logLogSlope(points) {
 // ── peak memory: /usr/bin/time when present, else polling /proc/<pid>/status (VmHWM) ──────────
 const TIME = existsSync('/usr/bin/time') ? '/usr/bin/time' : null;
 
-/** Runs a command, returns wall ms, peak resident set (MiB, or null) and stdout. */
+/** Runs a command, returns wall ms, peak resident set (MiB, or null), CPU ms (user + system, or null) and stdout. */
 function measure(command, commandArgs, { okCodes = [0] } = {}) {
   const rssFile = path.join(work, 'rss.txt');
   const [file, fileArgs] =
     TIME === null
       ? [command, commandArgs]
-      : [TIME, ['-f', '%M', '-o', rssFile, command, ...commandArgs]];
+      : [TIME, ['-f', '%M %U %S', '-o', rssFile, command, ...commandArgs]];
   const t0 = performance.now();
   const result = spawnSync(file, fileArgs, { cwd: work, encoding: 'utf8', maxBuffer: 1 << 26 });
   const wall = performance.now() - t0;
@@ -78,8 +78,13 @@ function measure(command, commandArgs, { okCodes = [0] } = {}) {
     );
   }
   let rss = null;
-  if (TIME !== null) rss = Number(readFileSync(rssFile, 'utf8').trim().split('\n').pop()) / 1024;
-  return { wall, rss, stdout: result.stdout };
+  let cpu = null;
+  if (TIME !== null) {
+    const [kib, user, system] = readFileSync(rssFile, 'utf8').trim().split('\n').pop().split(' ');
+    rss = Number(kib) / 1024;
+    cpu = (Number(user) + Number(system)) * 1000;
+  }
+  return { wall, rss, cpu, stdout: result.stdout };
 }
 
 function machine() {

@@ -18,12 +18,15 @@ import { type ReadReply, type ReadRequest, rebuildError } from './readingMessage
 
 /**
  * Files are read on worker threads only when at least two of them have this many bytes (as
- * stored). Below it the calling thread reads them one after the other: a worker costs about
- * 50–100 ms before it reads its first byte (thread start, loading and compiling its bundle) on the
- * 2-core machine of docs/performance.md ("Reading both files at once"), while reading proceeds at
- * roughly 15–25 MB/s per file, so the second core pays for itself from a few MB per file.
+ * stored). Below it the calling thread reads them one after the other. Measured with
+ * `npm run bench` on 2 cores (docs/performance.md, "Reading both files at once"): a reading
+ * worker costs 0.05–0.15 s of CPU (thread start, loading its bundle, compiling the reader again)
+ * and reading proceeds at about 75 MB/s of CPU per thread, so with a free core the worker's file
+ * is back before the calling thread's from about 5–10 MB per file; 16 MiB is about twice that, so
+ * that below it nothing is lost when the second core is busy with other work (where reading at
+ * once can only add the worker's cost).
  */
-export const MINIMUM_PARALLEL_FILE_BYTES = 4 * 2 ** 20;
+export const MINIMUM_PARALLEL_FILE_BYTES = 16 * 2 ** 20;
 
 export interface FileToRead {
   readonly path: string;

@@ -1,4 +1,4 @@
-import { existsSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -12,7 +12,7 @@ const work = mkdtempSync(path.join(tmpdir(), 'skillgate-parallel-cli-'));
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 
 // About 25 bytes a row.
-const ROWS = Math.ceil((MINIMUM_PARALLEL_FILE_BYTES * 1.3) / 25);
+const ROWS = Math.ceil((MINIMUM_PARALLEL_FILE_BYTES * 1.1) / 25);
 
 function forecastFile(name: string, seed: number, badLine?: number): string {
   const lines = ['series,timestamp,actual,prediction'];
@@ -29,35 +29,17 @@ function forecastFile(name: string, seed: number, badLine?: number): string {
 }
 
 const baseline = forecastFile('baseline.csv', 1);
-const rows = ROWS;
+
+// (That tables read on workers equal those read on one thread is checked in
+// test/parallel/readForecastFiles.test.ts, with the worker bundled the same way.)
 
 describe('skillgate compare on files read by worker threads (dist/cli.js)', () => {
   it('ships the reading worker beside the bundles', () => {
     expect(existsSync(path.join(root, 'dist', 'readingWorker.js'))).toBe(true);
   });
 
-  it('reads, aligns and compares them', () => {
-    const candidate = forecastFile('candidate.csv', 3);
-    const json = path.join(work, 'report.json');
-    const r = runCli([
-      'compare',
-      '--baseline',
-      baseline,
-      '--candidate',
-      candidate,
-      '--resamples',
-      '99',
-      '--json',
-      json,
-      '--quiet',
-    ]);
-    expect(r.stderr).toBe('');
-    expect([0, 1]).toContain(r.status);
-    expect(JSON.parse(readFileSync(json, 'utf8')).inputs.rowsMatched).toBe(rows);
-  });
-
   it('gives an error read on a worker as on one thread: file, line, value, exit 2, no stack', async () => {
-    const badLine = rows - 10;
+    const badLine = ROWS - 10;
     const candidate = forecastFile('candidate-bad.csv', 3, badLine);
     let expected = '';
     try {
