@@ -59,6 +59,7 @@ describe('npm pack → install from the tarball → npx skillgate', () => {
         'dist/cli.js',
         'dist/index.js',
         'dist/resampleWorker.js',
+        'dist/readingWorker.js',
         'docs/report.schema.json',
       ]),
     );
