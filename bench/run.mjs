@@ -460,7 +460,7 @@ if (large) {
 }
 const readingThreads = readingThreshold({
   prepared: peersPrepared,
-  pairs: await Promise.all([25, 50, 100, 200, 400].map((series) => panelFiles(series, 1000))),
+  pairs: await Promise.all([50, 200, 400, 600, 1000].map((series) => panelFiles(series, 1000))),
   runs: SCALING_RUNS,
   measure,
   median,
