@@ -3,9 +3,9 @@ import { describe, expect, it } from 'vitest';
 import type { LossSeries } from '../../src/aggregation/lossSeries.js';
 import { compareLossSeries } from '../../src/comparison/compareLossSeries.js';
 import { hypothesisFor } from '../../src/decision/hypothesis.js';
+import type { Policy } from '../../src/decision/policy.js';
 import type { Verdict } from '../../src/decision/verdict.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
-import type { Policy } from '../../src/settings/settings.js';
 
 // The interval of the relative change is the set of margins at which the gate does not reject
 // (docs/decisions/0011-intervals-from-the-tests.md). Property: on random loss series, for every
