@@ -18,7 +18,7 @@ export type StabilityGateMode = (typeof STABILITY_GATE_MODES)[number];
 /** What the stability checks add to the gate: a verdict to merge, words for the headline. */
 export interface StabilityFinding {
   /** 'warn' or 'fail' when the candidate is significantly worse recently or in some stretch. */
-  readonly effect: 'warn' | 'fail' | null;
+  readonly effect: Exclude<StabilityGateMode, 'off'> | null;
   /** Sentences appended to the headline, or '' when there is nothing to say. */
   readonly headline: string;
   readonly reasons: readonly string[];
