@@ -19,6 +19,10 @@ export type JsonSchema = {
   readonly enum?: readonly unknown[];
   readonly const?: unknown;
   readonly definitions?: Readonly<Record<string, JsonSchema>>;
+  /** Draft-07 conditionals, as used here: a `const` on one property makes `then` apply. */
+  readonly if?: JsonSchema;
+  readonly then?: JsonSchema;
+  readonly allOf?: readonly JsonSchema[];
   /** Draft-07 property dependencies: with the key present, these fields are required too. */
   readonly dependencies?: Readonly<Record<string, readonly string[]>>;
 };
@@ -85,7 +89,10 @@ export function walkSchema(schema: JsonSchema, value: unknown): SchemaWalk {
     if (node.enum !== undefined) walk.closed.push({ at, schema: node, values: node.enum });
     if (node.const !== undefined) walk.closed.push({ at, schema: node, values: [node.const] });
     if (Array.isArray(v) && node.items !== undefined) {
-      v.forEach((item, i) => visit(node.items!, item, [...at, i]));
+      const items = node.items;
+      v.forEach((item, i) => {
+        visit(items, item, [...at, i]);
+      });
       return;
     }
     if (!isObject(v)) return;
@@ -93,6 +100,11 @@ export function walkSchema(schema: JsonSchema, value: unknown): SchemaWalk {
     const required = [...(node.required ?? [])];
     for (const [key, also] of Object.entries(node.dependencies ?? {})) {
       if (Object.hasOwn(v, key)) required.push(...also);
+    }
+    for (const c of [node, ...(node.allOf ?? [])]) {
+      if (c.if === undefined || c.then === undefined) continue;
+      const holds = Object.entries(c.if.properties ?? {}).every(([k, p]) => v[k] === p.const);
+      if (holds) required.push(...(c.then.required ?? []));
     }
     for (const key of required) {
       walk.required.push({ at: [...at, key], schema: resolve(properties[key] ?? {}) });

@@ -447,6 +447,17 @@ export function fullSampleReport(): Report {
     meanBaselineLoss: 5.2,
   };
   const [first, ...others] = base.candidates!;
+  const every = {
+    series: 'zone',
+    timestamp: 'target_date',
+    horizon: 'steps',
+    origin: 'issued',
+    path: 'fold',
+    actual: 'observed',
+    prediction: 'forecast',
+    weight: 'w',
+    quantile: 'p',
+  };
   return {
     ...base,
     comparisons: [overall, perSeries],
@@ -493,6 +504,9 @@ export function fullSampleReport(): Report {
     },
     settings: {
       ...base.settings,
+      columns: every,
+      baselineColumns: { ...every, prediction: 'point_forecast' },
+      candidateColumns: { ...every, actual: 'y' },
       recent: { kind: 'share', share: 0.15 },
       interval: [0.1, 0.9],
       lag: { kind: 'fixed', lag: 2 },
