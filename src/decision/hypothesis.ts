@@ -1,4 +1,4 @@
-import type { MarginKind, Policy } from './policy.js';
+import { MARGIN_SIGN, type MarginKind, type Policy } from './policy.js';
 
 /** What rejecting H0 does to the gate, by policy. */
 export const ON_REJECT_VERDICTS = ['pass', 'fail'] as const;
@@ -31,8 +31,7 @@ export interface Hypothesis {
 }
 
 export function hypothesisFor(policy: Policy, margin: number, kind: MarginKind): Hypothesis {
-  const better = policy === 'superiority';
-  const signed = better ? -margin : margin;
+  const signed = MARGIN_SIGN[policy] * margin;
   const marginText =
     margin === 0
       ? ''

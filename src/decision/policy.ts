@@ -8,6 +8,18 @@
 export const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
 export type Policy = (typeof POLICIES)[number];
 
+/**
+ * Which side of the baseline each policy puts the margin on: +1 above it (the candidate may be,
+ * or is tested for being, worse by up to the margin), −1 below it (superiority: better by more
+ * than the margin). The signed margin enters the tested differential (see `hypothesisFor`) and
+ * the charts' margin line.
+ */
+export const MARGIN_SIGN: Readonly<Record<Policy, 1 | -1>> = {
+  'no-regression': 1,
+  'non-inferiority': 1,
+  superiority: -1,
+};
+
 /** Which tests must reject for the policy's decision; a split gives `warn` (`--agreement`). */
 export const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
 export type Agreement = (typeof AGREEMENTS)[number];
