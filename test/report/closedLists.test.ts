@@ -38,6 +38,7 @@ import { DIEBOLD_MARIANO_STATES } from '../../src/statistics/dieboldMariano.js';
 import { CONFIDENCE_SET_STATISTICS } from '../../src/statistics/modelConfidenceSet.js';
 import { LAG_RULE_KINDS } from '../../src/statistics/neweyWestLag.js';
 import { VARIANCE_ESTIMATORS } from '../../src/statistics/varianceEstimator.js';
+import { readActionYml } from '../action/actionYml.js';
 import { pathPattern, readReportSchema, walkSchema } from '../action/reportSchemaWalk.js';
 import { fullSampleReport } from '../action/sampleReport.js';
 
@@ -148,5 +149,20 @@ describe('closed lists: code, schema and README in step', () => {
       const choices = option.choices.filter((c) => !Object.hasOwn(LOSS_ALIASES, c));
       expect(usage, option.name).toContain(`[--${option.name} ${shown(choices)}]`);
     }
+  });
+
+  it('action.yml names every choice of each input that has them', () => {
+    const yml = readActionYml(path.join(root, 'action.yml'));
+    const missing: string[] = [];
+    for (const option of ENGINE_OPTIONS) {
+      const description = yml.inputs.get(option.name)?.description ?? '';
+      for (const choice of option.choices ?? []) {
+        const word = /^[a-z0-9-]+$/.test(choice)
+          ? new RegExp(`(^|[^a-z0-9-])${choice}($|[^a-z0-9-])`).test(description)
+          : description.includes(choice);
+        if (!word) missing.push(`${option.name}: ${choice}`);
+      }
+    }
+    expect(missing).toEqual([]);
   });
 });
