@@ -9,8 +9,9 @@ import { checkBacktest } from '../integrity/checkBacktest.js';
 import { readForecastFiles } from '../parallel/readForecastFiles.js';
 import { type ColumnMapping, checkDistinctNames } from '../reading/columnMapping.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
+import type { InputFormat } from '../reading/inputFormat.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
-import { readForecastFile } from '../reading/readForecastFile.js';
+import { type FileRole, readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
@@ -113,12 +114,11 @@ async function readHistory(settings: Settings): Promise<Map<string, Float64Array
   return historyBySeries(table, settings.timeFormat);
 }
 
-export type Role = 'baseline' | 'candidate' | 'actuals';
-const FORECAST_ROLES: readonly Role[] = ['baseline', 'candidate'];
-const ACTUALS_ROLE: Role = 'actuals';
+const FORECAST_ROLES: readonly FileRole[] = ['baseline', 'candidate'];
+const ACTUALS_ROLE: FileRole = 'actuals';
 
 /** The path settings give for a role. */
-function pathOf(settings: Settings, role: Role): string {
+function pathOf(settings: Settings, role: FileRole): string {
   if (role === 'baseline') return settings.baseline;
   if (role === 'candidate') return settings.candidate;
   if (settings.actuals === null) throw new Error('no actuals file');
@@ -131,7 +131,7 @@ function pathOf(settings: Settings, role: Role): string {
  */
 export function readRoleFiles(
   settings: Settings,
-  roles: readonly Role[],
+  roles: readonly FileRole[],
   hooks: RunHooks,
   paths: readonly string[] = roles.map((role) => pathOf(settings, role)),
 ): Promise<ForecastTable[]> {
@@ -151,10 +151,7 @@ export function readRoleFiles(
 }
 
 /** The column renames for one file: the shared ones, then that file's own. */
-export function columnsFor(
-  settings: Settings,
-  role: 'baseline' | 'candidate' | 'actuals',
-): ColumnMapping {
+export function columnsFor(settings: Settings, role: FileRole): ColumnMapping {
   const own =
     role === 'baseline'
       ? settings.baselineColumns
@@ -168,7 +165,7 @@ export function columnsFor(
 
 /** Format and CSV dialect options as the readers take them. */
 export function readDialect(settings: Settings): {
-  format?: 'csv' | 'tsv' | 'parquet';
+  format?: Exclude<InputFormat, 'auto'>;
   delimiter: Settings['delimiter'];
   decimal: Settings['decimal'];
   lineLimit: number;

@@ -1,14 +1,8 @@
-import {
-  columnsFor,
-  type Role,
-  type RunHooks,
-  readDialect,
-  readRoleFiles,
-} from '../app/runComparison.js';
+import { columnsFor, type RunHooks, readDialect, readRoleFiles } from '../app/runComparison.js';
 import { InputError } from '../core/inputError.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
-import { readForecastFile } from '../reading/readForecastFile.js';
+import { type FileRole, readForecastFile } from '../reading/readForecastFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { fileStem } from './candidateList.js';
@@ -26,11 +20,7 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
       file: 'scale',
     });
   }
-  const read = (
-    path: string,
-    role: 'baseline' | 'candidate' | 'actuals',
-    columns = columnsFor(settings, role),
-  ) =>
+  const read = (path: string, role: FileRole, columns = columnsFor(settings, role)) =>
     readForecastFile(path, {
       role,
       columns,
@@ -45,7 +35,7 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
   let candidates: CandidateTable[];
   // The tables of otherRoles(baseline) once read: the baseline unless known, then the actuals.
   let rest: ForecastTable[] | undefined;
-  const otherRoles = (known: ForecastTable | undefined): Role[] => [
+  const otherRoles = (known: ForecastTable | undefined): FileRole[] => [
     ...(known === undefined ? (['baseline'] as const) : []),
     ...(settings.actuals === null ? [] : (['actuals'] as const)),
   ];
@@ -94,7 +84,10 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
     candidates = [...parts].map(([name, t]) => ({ name, file: `${file}#${name}`, table: t }));
   } else {
     // Candidates, baseline and actuals in one go (at once when large), errors in that order.
-    const roles = [...settings.candidates.map((): Role => 'candidate'), ...otherRoles(undefined)];
+    const roles = [
+      ...settings.candidates.map((): FileRole => 'candidate'),
+      ...otherRoles(undefined),
+    ];
     const paths = [...settings.candidates.map((c) => c.path), ...otherPaths(undefined)];
     const tables = await readRoleFiles(settings, roles, hooks, paths);
     candidates = settings.candidates.map((c, k) => ({
