@@ -1,7 +1,7 @@
 // The benchmark behind docs/performance.md: `npm run bench` (add `-- --large` for the 10M-row
 // cases, `-- --runs N` to change the repetitions, `-- --sweep-only` for the block-length sweep
 // alone, `-- --reading-only` for reading and the peers (sections 1 and 5), `-- --peers-only` for
-// the peers alone). Inputs are generated deterministically under
+// the peers alone, `-- --candidates` to add the several-candidates section, which takes minutes). Inputs are generated deterministically under
 // bench/.work/ (gitignored) and reused; every case runs several times in child processes and is
 // reported as a median, with ratios against references measured in the same run, so a loaded
 // machine shifts both sides alike. Nothing here is a test: nothing fails on a slow machine.
@@ -34,6 +34,7 @@ const SCALING_RUNS = Math.max(3, Math.floor(RUNS / 2) + 1);
 const sweepOnly = args.includes('--sweep-only');
 const peersOnly = args.includes('--peers-only');
 const readingOnly = peersOnly || args.includes('--reading-only');
+const withCandidates = args.includes('--candidates');
 mkdirSync(work, { recursive: true });
 
 const median = (xs) => {
@@ -389,8 +390,15 @@ async function otherSections() {
     hasNumpy: hasNumpyForSweep,
   });
   log();
-  log('4. several candidates');
-  const candidates = await candidatesSection({ cli, work, runs: SCALING_RUNS, log });
+  // Several candidates take minutes on their own (k = 20 comparisons at B = 9,999): only on
+  // request, to keep the default run under about ten minutes.
+  let candidates = null;
+  if (withCandidates) {
+    log('4. several candidates');
+    candidates = await candidatesSection({ cli, work, runs: SCALING_RUNS, log });
+  } else {
+    log('4. several candidates: skipped (add --candidates, or run node bench/candidatesCase.mjs)');
+  }
   log();
   const parquetReading = await parquetReadingSection({
     root,
