@@ -69,6 +69,19 @@ export async function preparePeers({ root, work, distDir }) {
   };
 }
 
+/** `compare` on the two files with the peers' loss, then `extra`. */
+const compareArguments = (files, extra) => [
+  'compare',
+  '--baseline',
+  files.baseline,
+  '--candidate',
+  files.candidate,
+  '--quiet',
+  '--loss',
+  'absolute',
+  ...extra,
+];
+
 const hasPandas = (spawnSync) =>
   spawnSync('/usr/bin/python3', ['-c', 'import pandas'], { encoding: 'utf8' }).status === 0;
 
@@ -82,15 +95,7 @@ export function peersOnFiles({ root, cli, prepared, files, runs, measure, median
       process.execPath,
       [
         command,
-        'compare',
-        '--baseline',
-        files.baseline,
-        '--candidate',
-        files.candidate,
-        '--quiet',
-        '--loss',
-        'absolute',
-        ...(resamples === null ? [] : ['--resamples', String(resamples)]),
+        ...compareArguments(files, resamples === null ? [] : ['--resamples', String(resamples)]),
       ],
       { okCodes: [0, 1] },
     );
@@ -169,18 +174,7 @@ export function skillgateMean({ cli, files, work, spawnSync }) {
   const json = path.join(work, 'peers-report.json');
   spawnSync(process.execPath, [
     cli,
-    'compare',
-    '--baseline',
-    files.baseline,
-    '--candidate',
-    files.candidate,
-    '--quiet',
-    '--loss',
-    'absolute',
-    '--resamples',
-    '99',
-    '--json',
-    json,
+    ...compareArguments(files, ['--resamples', '99', '--json', json]),
   ]);
   try {
     return JSON.parse(readFileSync(json, 'utf8')).comparisons[0].meanDifference;

@@ -131,9 +131,8 @@ log();
 
 const hasNumpyForSweep =
   spawnSync('/usr/bin/python3', ['-c', 'import numpy'], { encoding: 'utf8' }).status === 0;
-if (sweepOnly) {
-  log('3. stationary bootstrap by block length');
-  const sweep = blockLengthSweep({
+const runSweep = () =>
+  blockLengthSweep({
     work,
     root,
     bootstrapCase,
@@ -141,6 +140,9 @@ if (sweepOnly) {
     log,
     hasNumpy: hasNumpyForSweep,
   });
+if (sweepOnly) {
+  log('3. stationary bootstrap by block length');
+  const sweep = runSweep();
   const end = machine();
   log();
   log(`load average at end: ${end.load}`);
@@ -381,14 +383,7 @@ async function otherSections() {
   }
   log();
   log('3. stationary bootstrap by block length');
-  const sweep = blockLengthSweep({
-    work,
-    root,
-    bootstrapCase,
-    runs: SCALING_RUNS,
-    log,
-    hasNumpy: hasNumpyForSweep,
-  });
+  const sweep = runSweep();
   log();
   // Several candidates take minutes on their own (k = 20 comparisons at B = 9,999): only on
   // request, to keep the default run under about ten minutes.
