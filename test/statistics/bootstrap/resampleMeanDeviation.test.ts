@@ -1,12 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createGeometricSampler } from '../../src/random/geometricSampler.js';
-import { createRandomSource } from '../../src/random/randomSource.js';
-import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
-import { resampleMeanDeviation } from '../../src/statistics/bootstrap/resampleMeanDeviation.js';
-import { drawStationaryBlocks } from '../../src/statistics/bootstrap/stationaryBlocks.js';
-import { expectClose } from './expectClose.js';
+import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
+import { createRandomSource } from '../../../src/random/randomSource.js';
+import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPrefixSums.js';
+import { meanOf } from '../../../src/statistics/bootstrap/centring.js';
+import { resampleMeanDeviation } from '../../../src/statistics/bootstrap/resampleMeanDeviation.js';
+import { drawStationaryBlocks } from '../../../src/statistics/bootstrap/stationaryBlocks.js';
+import { expectClose } from './bootstrapFixtures.js';
 import { blocksOf, naiveResampleMean } from './naiveResample.js';
 
 describe('resampleMeanDeviation (deterministic step)', () => {
@@ -59,7 +59,7 @@ describe('resampleMeanDeviation (deterministic step)', () => {
         const naive = naiveResampleMean(d, blocks);
         expectClose(fast, naive, 1e-12, {
           what: 'prefix-sum resample mean vs naive',
-          source: 'naive per-observation sum (test/bootstrap/naiveResample.ts)',
+          source: 'naive per-observation sum (test/statistics/bootstrap/naiveResample.ts)',
           inputs: { d: Array.from(d), pairs },
         });
       }),

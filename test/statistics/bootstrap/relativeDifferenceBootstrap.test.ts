@@ -1,11 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { relativeDifferenceBootstrap } from '../../src/statistics/bootstrap/relativeDifferenceBootstrap.js';
+import { relativeDifferenceBootstrap } from '../../../src/statistics/bootstrap/relativeDifferenceBootstrap.js';
 import {
   type StationaryBootstrapOptions,
   stationaryBootstrap,
-} from '../../src/statistics/bootstrap/stationaryBootstrap.js';
-import { expectClose, readSeries } from './expectClose.js';
+} from '../../../src/statistics/bootstrap/stationaryBootstrap.js';
+import { expectClose, readSeries } from './bootstrapFixtures.js';
 
 const options: StationaryBootstrapOptions = {
   resamples: 499,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { stationaryBootstrapVariance } from '../../src/statistics/bootstrap/stationaryBootstrapVariance.js';
-import { expectClose, readFixture, type SeriesFixture } from './expectClose.js';
+import { stationaryBootstrapVariance } from '../../../src/statistics/bootstrap/stationaryBootstrapVariance.js';
+import { expectClose, readFixture, type SeriesFixture } from './bootstrapFixtures.js';
 
 interface VarianceFixture {
   cases: { series: string; expectedBlockLength: number; variance: number }[];

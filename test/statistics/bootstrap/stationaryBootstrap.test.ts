@@ -1,18 +1,18 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createGeometricSampler } from '../../src/random/geometricSampler.js';
-import { createRandomSource, type RandomSourceFactory } from '../../src/random/randomSource.js';
-import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
+import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
+import { createRandomSource, type RandomSourceFactory } from '../../../src/random/randomSource.js';
+import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPrefixSums.js';
+import { meanOf } from '../../../src/statistics/bootstrap/centring.js';
 import {
   RESAMPLES_PER_STREAM,
   resampleDeviationsOfStream,
   type StationaryBootstrapOptions,
   stationaryBootstrap,
   stationaryResampleDeviations,
-} from '../../src/statistics/bootstrap/stationaryBootstrap.js';
-import { stationaryBootstrapVariance } from '../../src/statistics/bootstrap/stationaryBootstrapVariance.js';
-import { expectClose, readSeries } from './expectClose.js';
+} from '../../../src/statistics/bootstrap/stationaryBootstrap.js';
+import { stationaryBootstrapVariance } from '../../../src/statistics/bootstrap/stationaryBootstrapVariance.js';
+import { expectClose, readSeries } from './bootstrapFixtures.js';
 
 const defaults: StationaryBootstrapOptions = {
   resamples: 999,

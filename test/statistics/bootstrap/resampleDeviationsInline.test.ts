@@ -1,11 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createGeometricSampler } from '../../src/random/geometricSampler.js';
-import { createRandomSource, Xoroshiro128PlusSource } from '../../src/random/randomSource.js';
-import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
-import { resampleDeviationsInline } from '../../src/statistics/bootstrap/resampleDeviationsInline.js';
-import { resampleDeviationsGeneric } from '../../src/statistics/bootstrap/resampleJob.js';
+import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
+import { createRandomSource, Xoroshiro128PlusSource } from '../../../src/random/randomSource.js';
+import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPrefixSums.js';
+import { meanOf } from '../../../src/statistics/bootstrap/centring.js';
+import { resampleDeviationsInline } from '../../../src/statistics/bootstrap/resampleDeviationsInline.js';
+import { resampleDeviationsGeneric } from '../../../src/statistics/bootstrap/resampleJob.js';
 
 const sourceOf = (seed: number, stream: number) =>
   createRandomSource(seed, stream) as Xoroshiro128PlusSource;

@@ -27,7 +27,7 @@ export function expectClose(
 /** Reads a JSON fixture written by test/reference/scripts/bootstrap_*. */
 export async function readFixture<T>(name: string): Promise<T> {
   const { readFile } = await import('node:fs/promises');
-  const url = new URL(`../reference/fixtures/${name}`, import.meta.url);
+  const url = new URL(`../../reference/fixtures/${name}`, import.meta.url);
   return JSON.parse(await readFile(url, 'utf8')) as T;
 }
 
