@@ -19,6 +19,7 @@ import type { SeriesScale } from '../scaling/seriesScale.js';
 import type { Settings } from '../settings/settings.js';
 import { assessStability } from '../stability/assessStability.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
+import { smallSampleValue } from '../statistics/smallSampleValue.js';
 import { type ComparisonScope, compareLossSeries } from './compareLossSeries.js';
 import { runDieboldMariano } from './runDieboldMariano.js';
 
@@ -85,7 +86,7 @@ export function evaluatePanel(
       worse,
       shareWorse: worse / perPath.length,
       significantlyWorse: perPath.filter((c) => {
-        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        const p = smallSampleValue(c.dieboldMariano);
         return p !== null && p <= settings.alpha;
       }).length,
     };
@@ -167,7 +168,7 @@ function seriesComparisons(
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
     const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
-    upper.push(dm.smallSample?.pValue ?? dm.pValue);
+    upper.push(smallSampleValue(dm));
     return compareLossSeries(series, scope('all', name), hypothesis, settings, {
       bootstrap: false,
     });
@@ -178,7 +179,7 @@ function seriesComparisons(
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => (p === null ? null : 1 - p)));
   // The policy's direction, on the tested (margin-shifted) differential, for the verdicts.
-  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const tested = raw.map((c) => smallSampleValue(c.dieboldMariano));
   const policyP =
     hypothesis.rejectWhen === 'above'
       ? adjust(tested)

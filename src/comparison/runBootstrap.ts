@@ -5,10 +5,10 @@ import type { BootstrapSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { automaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
 import { basicBootstrapInference } from '../statistics/bootstrap/basicBootstrapInference.js';
-import { meanOf } from '../statistics/bootstrap/centring.js';
 import { relativeDifferenceBootstrap } from '../statistics/bootstrap/relativeDifferenceBootstrap.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { stationaryBootstrap } from '../statistics/bootstrap/stationaryBootstrap.js';
+import { mean } from '../statistics/mean.js';
 
 export interface BootstrapRun {
   readonly summary: BootstrapSummary;
@@ -79,7 +79,7 @@ function differenceInterval(
   level: number,
 ): BootstrapSummary['interval'] {
   if (deviations === null) return null;
-  const centre = meanOf(difference);
+  const centre = mean(difference);
   const reflected = new Float64Array(deviations.candidate.length);
   for (let b = 0; b < reflected.length; b++) {
     reflected[b] = centre - (deviations.candidate[b]! - deviations.baseline[b]!);

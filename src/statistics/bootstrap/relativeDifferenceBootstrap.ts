@@ -1,18 +1,15 @@
-import { createGeometricSampler } from '../../random/geometricSampler.js';
 import {
   createRandomSource,
-  randomStreams,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
+import { mean } from '../mean.js';
 import { basicBootstrapInference } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
-import { meanOf } from './centring.js';
+import { forEachStationaryResample } from './eachStationaryResample.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';
 import { sampleStandardDeviation } from './sampleStandardDeviation.js';
-import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
 import {
   MINIMUM_BOOTSTRAP_LENGTH,
-  RESAMPLES_PER_STREAM,
   type StationaryBootstrapOptions,
   validateStationaryBootstrapOptions,
 } from './stationaryBootstrap.js';
@@ -95,8 +92,8 @@ export function relativeDifferenceBootstrap(
       notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`],
     };
   }
-  const candidateMean = meanOf(candidateLoss);
-  const baselineMean = meanOf(baselineLoss);
+  const candidateMean = mean(candidateLoss);
+  const baselineMean = mean(baselineLoss);
   if (!(baselineMean > 0)) {
     return {
       state: 'baseline-zero',
@@ -116,24 +113,16 @@ export function relativeDifferenceBootstrap(
   } else {
     const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
     const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
-    const sampler = createGeometricSampler(expectedBlockLength);
-    const blocks = allocateStationaryBlocks(n);
     let zeroDenominators = 0;
-    const streams = randomStreams(random, seed, 0);
-    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
-      const source = streams.next();
-      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
-      for (let b = first; b < last; b++) {
-        drawStationaryBlocks(n, sampler, source, blocks);
-        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
-        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
-        const c = candidateMean + candidateDeviations[b]!;
-        const base = baselineMean + baselineDeviations[b]!;
-        if (base === 0) zeroDenominators++;
-        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
-        deviations[b] = theta - estimate;
-      }
-    }
+    forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, (b, blocks) => {
+      candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+      baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+      const c = candidateMean + candidateDeviations[b]!;
+      const base = baselineMean + baselineDeviations[b]!;
+      if (base === 0) zeroDenominators++;
+      const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+      deviations[b] = theta - estimate;
+    });
     if (zeroDenominators > 0) {
       notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (θ* infinite)`);
     }

@@ -2,9 +2,9 @@ import {
   createRandomSource,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
+import { mean } from '../mean.js';
 import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
-import { meanOf } from './centring.js';
 import { type ResampleHistogram, resampleHistogram } from './resampleHistogram.js';
 import { type ResampleRunner, runResampleJob } from './resampleJob.js';
 import { sampleStandardDeviation } from './sampleStandardDeviation.js';
@@ -117,7 +117,7 @@ export function stationaryBootstrap(
   const constant = d.every((x) => x === d[0]);
   const identical = constant && d[0] === 0;
   // A constant series has that constant as its mean, exactly: then every resample mean is too.
-  const mean = constant ? d[0]! : meanOf(d);
+  const sampleMean = constant ? d[0]! : mean(d);
   let deviations: Float64Array;
   if (identical) {
     notes.push('every loss differential is 0 (identical forecasts); no resampling needed');
@@ -129,7 +129,7 @@ export function stationaryBootstrap(
     }
     deviations = stationaryResampleDeviations(
       d,
-      mean,
+      sampleMean,
       expectedBlockLength,
       resamples,
       seed,
@@ -140,20 +140,20 @@ export function stationaryBootstrap(
 
   const standardError = sampleStandardDeviation(deviations);
   const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = mean - deviations[b]!;
+  for (let b = 0; b < resamples; b++) reflected[b] = sampleMean - deviations[b]!;
   reflected.sort();
   const inference = basicBootstrapInference(reflected, margin, confidence);
   return {
     state: identical ? 'identical' : 'ok',
     ...base,
-    mean,
+    mean: sampleMean,
     standardError,
     interval: { ...inference.interval, method: 'basic' },
     oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
     pValue: inference.pValue,
     pValueBelow: inference.pValueBelow,
     pValueTwoSided: inference.pValueTwoSided,
-    distribution: resampleHistogram(mean, deviations),
+    distribution: resampleHistogram(sampleMean, deviations),
     notes,
   };
 }

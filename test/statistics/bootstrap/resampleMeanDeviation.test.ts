@@ -3,9 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
 import { createRandomSource } from '../../../src/random/randomSource.js';
 import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../../src/statistics/bootstrap/centring.js';
 import { resampleMeanDeviation } from '../../../src/statistics/bootstrap/resampleMeanDeviation.js';
 import { drawStationaryBlocks } from '../../../src/statistics/bootstrap/stationaryBlocks.js';
+import { mean } from '../../../src/statistics/mean.js';
 import { expectClose } from './bootstrapFixtures.js';
 import { blocksOf, naiveResampleMean } from './naiveResample.js';
 
@@ -53,9 +53,9 @@ describe('resampleMeanDeviation (deterministic step)', () => {
     );
     fc.assert(
       fc.property(case_, ({ d, pairs }) => {
-        const mean = meanOf(d);
+        const centre = mean(d);
         const blocks = blocksOf(pairs);
-        const fast = mean + resampleMeanDeviation(centredPrefixSums(d, mean), d.length, blocks);
+        const fast = centre + resampleMeanDeviation(centredPrefixSums(d, centre), d.length, blocks);
         const naive = naiveResampleMean(d, blocks);
         expectClose(fast, naive, 1e-12, {
           what: 'prefix-sum resample mean vs naive',
@@ -69,14 +69,14 @@ describe('resampleMeanDeviation (deterministic step)', () => {
   it('equals the naive resample mean on blocks drawn by the random step (n = 500, 200 resamples)', () => {
     const n = 500;
     const d = Float64Array.from({ length: n }, (_, t) => Math.sin(0.3 * t) + 0.01 * t);
-    const mean = meanOf(d);
-    const prefix = centredPrefixSums(d, mean);
+    const centre = mean(d);
+    const prefix = centredPrefixSums(d, centre);
     for (const b of [1, 3.5, 40, 1000]) {
       const sampler = createGeometricSampler(b);
       const random = createRandomSource(5);
       for (let r = 0; r < 200; r++) {
         const blocks = drawStationaryBlocks(n, sampler, random);
-        const fast = mean + resampleMeanDeviation(prefix, n, blocks);
+        const fast = centre + resampleMeanDeviation(prefix, n, blocks);
         expectClose(fast, naiveResampleMean(d, blocks), 1e-12, {
           what: `resample ${r}`,
           source: 'naive per-observation sum',
