@@ -67,18 +67,48 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       const dm = c.dieboldMariano;
       const what = `${name} vs ${hac!.source}`;
       expect(dm.lag).toBe(hac!.lag);
-      expectClose(c.meanTestedDifferential, fixture.mean, 1e-6, `${what}: mean of d`);
-      expectClose(dm.longRunVariance, hac!.longRunVariance, 1e-6, `${what}: long-run variance`);
-      expectClose(dm.statistic, hac!.statistic, 1e-6, `${what}: statistic`);
-      expectClose(dm.pValue, hac!.pValue, 1e-6, `${what}: one-sided p`);
-      expectClose(dm.pValueTwoSided, hac!.pValueTwoSided, 1e-6, `${what}: two-sided p`);
+      expectClose(
+        c.meanTestedDifferential,
+        fixture.mean,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: mean of d`,
+      );
+      expectClose(
+        dm.longRunVariance,
+        hac!.longRunVariance,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: long-run variance`,
+      );
+      expectClose(
+        dm.statistic,
+        hac!.statistic,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: statistic`,
+      );
+      expectClose(
+        dm.pValue,
+        hac!.pValue,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: one-sided p`,
+      );
+      expectClose(
+        dm.pValueTwoSided,
+        hac!.pValueTwoSided,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: two-sided p`,
+      );
       expectClose(
         dm.smallSample.statistic,
         hac!.smallSample.statistic,
-        1e-6,
+        { relative: 1e-6, absolute: 1e-6 },
         `${what}: HLN statistic`,
       );
-      expectClose(dm.smallSample.pValue, hac!.smallSample.pValue, 1e-6, `${what}: HLN p`);
+      expectClose(
+        dm.smallSample.pValue,
+        hac!.smallSample.pValue,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: HLN p`,
+      );
     });
     it(`${name}: the default is ewc-ar1`, () => {
       expect(run(name, fixture, []).dieboldMariano.estimator).toBe('ewc-ar1');
@@ -92,11 +122,16 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       expectClose(
         dm.longRunVariance,
         fixture.ewc.longRunVariance,
-        1e-6,
+        { relative: 1e-6, absolute: 1e-6 },
         `${what}: long-run variance`,
       );
-      expectClose(dm.statistic, fixture.ewc.statistic, 1e-6, `${what}: statistic`);
-      expectClose(dm.pValue, fixture.ewc.pValue, 1e-6, `${what}: p`);
+      expectClose(
+        dm.statistic,
+        fixture.ewc.statistic,
+        { relative: 1e-6, absolute: 1e-6 },
+        `${what}: statistic`,
+      );
+      expectClose(dm.pValue, fixture.ewc.pValue, { relative: 1e-6, absolute: 1e-6 }, `${what}: p`);
     });
   }
 });

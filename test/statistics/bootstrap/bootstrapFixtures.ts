@@ -1,29 +1,3 @@
-import { expect } from 'vitest';
-
-/**
- * Asserts |actual − expected| ≤ tolerance · max(1, |expected|) (relative for large values,
- * absolute near 0) and, on failure, prints the inputs, the expected value with its source, the
- * actual value and the difference.
- */
-export function expectClose(
-  actual: number,
-  expected: number,
-  tolerance: number,
-  context: { what: string; source: string; inputs?: unknown },
-): void {
-  const difference = Math.abs(actual - expected);
-  const allowed = tolerance * Math.max(1, Math.abs(expected));
-  const message = [
-    `${context.what}`,
-    `  source:     ${context.source}`,
-    `  inputs:     ${JSON.stringify(context.inputs ?? {})}`,
-    `  expected:   ${expected}`,
-    `  actual:     ${actual}`,
-    `  difference: ${difference} (allowed ${allowed})`,
-  ].join('\n');
-  expect(difference <= allowed, message).toBe(true);
-}
-
 /** Reads a JSON fixture written by test/reference/scripts/bootstrap_*. */
 export async function readFixture<T>(name: string): Promise<T> {
   const { readFile } = await import('node:fs/promises');

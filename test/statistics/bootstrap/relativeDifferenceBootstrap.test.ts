@@ -5,7 +5,8 @@ import {
   type StationaryBootstrapOptions,
   stationaryBootstrap,
 } from '../../../src/statistics/bootstrap/stationaryBootstrap.js';
-import { expectClose, readSeries } from './bootstrapFixtures.js';
+import { expectClose } from '../../helpers/tolerance.js';
+import { readSeries } from './bootstrapFixtures.js';
 
 const options: StationaryBootstrapOptions = {
   resamples: 499,
@@ -46,18 +47,33 @@ describe('relativeDifferenceBootstrap', () => {
           source: 'stationaryBootstrap on the same data and seed',
           inputs: { seed },
         };
-        expectClose(relative.standardError!, absolute.standardError!, 1e-9, {
-          ...context,
-          what: 'SE',
-        });
-        expectClose(relative.interval!.lower, absolute.interval!.lower - 1, 1e-9, {
-          ...context,
-          what: 'lower',
-        });
-        expectClose(relative.interval!.upper, absolute.interval!.upper - 1, 1e-9, {
-          ...context,
-          what: 'upper',
-        });
+        expectClose(
+          relative.standardError!,
+          absolute.standardError!,
+          { relative: 1e-9, absolute: 1e-9 },
+          {
+            ...context,
+            what: 'SE',
+          },
+        );
+        expectClose(
+          relative.interval!.lower,
+          absolute.interval!.lower - 1,
+          { relative: 1e-9, absolute: 1e-9 },
+          {
+            ...context,
+            what: 'lower',
+          },
+        );
+        expectClose(
+          relative.interval!.upper,
+          absolute.interval!.upper - 1,
+          { relative: 1e-9, absolute: 1e-9 },
+          {
+            ...context,
+            what: 'upper',
+          },
+        );
       }),
       { numRuns: 30 },
     );
@@ -74,15 +90,25 @@ describe('relativeDifferenceBootstrap', () => {
       options,
     );
     for (const key of ['lower', 'upper'] as const) {
-      expectClose(b.interval![key], a.interval![key], 1e-12, {
-        what: key,
-        source: 'scale invariance of a ratio',
-      });
+      expectClose(
+        b.interval![key],
+        a.interval![key],
+        { relative: 1e-12, absolute: 1e-12 },
+        {
+          what: key,
+          source: 'scale invariance of a ratio',
+        },
+      );
     }
-    expectClose(b.relativeDifference!, a.relativeDifference!, 1e-12, {
-      what: 'θ̂',
-      source: 'scale invariance',
-    });
+    expectClose(
+      b.relativeDifference!,
+      a.relativeDifference!,
+      { relative: 1e-12, absolute: 1e-12 },
+      {
+        what: 'θ̂',
+        source: 'scale invariance',
+      },
+    );
     // p-value ≤ α exactly when the relative margin is below the one-sided bound.
     for (const margin of [
       a.oneSidedLower!.lower,

@@ -6,7 +6,7 @@ import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPref
 import { resampleMeanDeviation } from '../../../src/statistics/bootstrap/resampleMeanDeviation.js';
 import { drawStationaryBlocks } from '../../../src/statistics/bootstrap/stationaryBlocks.js';
 import { mean } from '../../../src/statistics/mean.js';
-import { expectClose } from './bootstrapFixtures.js';
+import { expectClose } from '../../helpers/tolerance.js';
 import { blocksOf, naiveResampleMean } from './naiveResample.js';
 
 describe('resampleMeanDeviation (deterministic step)', () => {
@@ -24,7 +24,12 @@ describe('resampleMeanDeviation (deterministic step)', () => {
         [0, 1],
       ]),
     );
-    expectClose(shifted, 1 / 3, 1e-15, { what: 'mean(3, 3, 1) − 2', source: 'hand computation' });
+    expectClose(
+      shifted,
+      1 / 3,
+      { relative: 1e-15, absolute: 1e-15 },
+      { what: 'mean(3, 3, 1) − 2', source: 'hand computation' },
+    );
   });
 
   it('equals the naive per-observation resample mean for any fixed blocks (to 1e-12)', () => {
@@ -57,11 +62,16 @@ describe('resampleMeanDeviation (deterministic step)', () => {
         const blocks = blocksOf(pairs);
         const fast = centre + resampleMeanDeviation(centredPrefixSums(d, centre), d.length, blocks);
         const naive = naiveResampleMean(d, blocks);
-        expectClose(fast, naive, 1e-12, {
-          what: 'prefix-sum resample mean vs naive',
-          source: 'naive per-observation sum (test/statistics/bootstrap/naiveResample.ts)',
-          inputs: { d: Array.from(d), pairs },
-        });
+        expectClose(
+          fast,
+          naive,
+          { relative: 1e-12, absolute: 1e-12 },
+          {
+            what: 'prefix-sum resample mean vs naive',
+            source: 'naive per-observation sum (test/statistics/bootstrap/naiveResample.ts)',
+            inputs: { d: Array.from(d), pairs },
+          },
+        );
       }),
     );
   });
@@ -77,11 +87,16 @@ describe('resampleMeanDeviation (deterministic step)', () => {
       for (let r = 0; r < 200; r++) {
         const blocks = drawStationaryBlocks(n, sampler, random);
         const fast = centre + resampleMeanDeviation(prefix, n, blocks);
-        expectClose(fast, naiveResampleMean(d, blocks), 1e-12, {
-          what: `resample ${r}`,
-          source: 'naive per-observation sum',
-          inputs: { b, seed: 5 },
-        });
+        expectClose(
+          fast,
+          naiveResampleMean(d, blocks),
+          { relative: 1e-12, absolute: 1e-12 },
+          {
+            what: `resample ${r}`,
+            source: 'naive per-observation sum',
+            inputs: { b, seed: 5 },
+          },
+        );
       }
     }
   });

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { stationaryBootstrapVariance } from '../../../src/statistics/bootstrap/stationaryBootstrapVariance.js';
 import { mean } from '../../../src/statistics/mean.js';
-import { expectClose, readFixture, type SeriesFixture } from './bootstrapFixtures.js';
+import { expectClose } from '../../helpers/tolerance.js';
+import { readFixture, type SeriesFixture } from './bootstrapFixtures.js';
 
 interface VarianceFixture {
   cases: { series: string; expectedBlockLength: number; variance: number }[];
@@ -31,10 +32,15 @@ function fullSum(d: Float64Array, b: number): number {
 
 describe('stationaryBootstrapVariance (Politis & Romano 1994, Lemma 1)', () => {
   it('matches the worked example: d = (1, 2, 3), b = 2 gives 7/54', () => {
-    expectClose(stationaryBootstrapVariance(Float64Array.of(1, 2, 3), 2), 7 / 54, 1e-15, {
-      what: 'Var*(mean*)',
-      source: 'hand computation in the doc comment',
-    });
+    expectClose(
+      stationaryBootstrapVariance(Float64Array.of(1, 2, 3), 2),
+      7 / 54,
+      { relative: 1e-15, absolute: 1e-15 },
+      {
+        what: 'Var*(mean*)',
+        source: 'hand computation in the doc comment',
+      },
+    );
   });
 
   it('agrees with the circular-autocovariance evaluation in R to 1e-9 (relative)', async () => {
