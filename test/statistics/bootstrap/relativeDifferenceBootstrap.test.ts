@@ -42,38 +42,12 @@ describe('relativeDifferenceBootstrap', () => {
         const baseline = new Float64Array(candidate.length).fill(1);
         const relative = relativeDifferenceBootstrap(candidate, baseline, { ...options, seed });
         const absolute = stationaryBootstrap(candidate, { ...options, seed, margin: 1 });
-        const context = {
-          what: '',
-          source: 'stationaryBootstrap on the same data and seed',
-          inputs: { seed },
-        };
-        expectClose(
-          relative.standardError!,
-          absolute.standardError!,
-          { relative: 1e-9, absolute: 1e-9 },
-          {
-            ...context,
-            what: 'SE',
-          },
-        );
-        expectClose(
-          relative.interval!.lower,
-          absolute.interval!.lower - 1,
-          { relative: 1e-9, absolute: 1e-9 },
-          {
-            ...context,
-            what: 'lower',
-          },
-        );
-        expectClose(
-          relative.interval!.upper,
-          absolute.interval!.upper - 1,
-          { relative: 1e-9, absolute: 1e-9 },
-          {
-            ...context,
-            what: 'upper',
-          },
-        );
+        const source = 'stationaryBootstrap on the same data and seed';
+        const about = (what: string) => ({ what, source, inputs: { seed } });
+        const within = { relative: 1e-9, absolute: 1e-9 };
+        expectClose(relative.standardError!, absolute.standardError!, within, about('SE'));
+        expectClose(relative.interval!.lower, absolute.interval!.lower - 1, within, about('lower'));
+        expectClose(relative.interval!.upper, absolute.interval!.upper - 1, within, about('upper'));
       }),
       { numRuns: 30 },
     );
