@@ -3,29 +3,29 @@ import {
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
 import { mean } from '../mean.js';
-import { basicBootstrapInference } from './basicBootstrapInference.js';
+import type { BasicInterval, BasicLowerBound } from './basicBootstrapInference.js';
+import { basicSummary } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
 import { forEachStationaryResample } from './eachStationaryResample.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';
-import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 import {
+  type BootstrapRunFields,
   MINIMUM_BOOTSTRAP_LENGTH,
   type StationaryBootstrapOptions,
   validateStationaryBootstrapOptions,
 } from './stationaryBootstrap.js';
 
-export interface RelativeDifferenceResult {
+export interface RelativeDifferenceResult extends BootstrapRunFields {
   /** 'baseline-zero': the baseline's mean loss is not positive, so no ratio exists. */
   state: 'ok' | 'identical' | 'too-short' | 'baseline-zero';
-  resamples: number;
-  seed: number;
-  expectedBlockLength: number;
   /** θ̂ = mean(candidate loss) / mean(baseline loss) − 1, e.g. 0.03 = "3% worse". */
   relativeDifference: number | null;
   /** Standard deviation of the B resampled θ*, divisor B − 1. */
   standardError: number | null;
-  interval: { level: number; lower: number; upper: number; method: 'basic' } | null;
-  oneSidedLower: { level: number; alpha: number; lower: number; method: 'basic' } | null;
+  /** Basic interval for θ; see `basicBootstrapInference`. */
+  interval: BasicInterval | null;
+  /** One-sided basic lower bound for θ at `level`. */
+  oneSidedLower: BasicLowerBound | null;
   /** (1 + #{θ*_b − θ̂ ≥ θ̂ − r})/(B + 1) for H0: θ ≤ r, r = options.margin (relative). */
   pValue: number | null;
   pValueTwoSided: number | null;
@@ -127,19 +127,16 @@ export function relativeDifferenceBootstrap(
       notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (θ* infinite)`);
     }
   }
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b]!;
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
+  const summary = basicSummary(estimate, deviations, margin, confidence);
   return {
     state: identical ? 'identical' : 'ok',
     ...empty,
     relativeDifference: estimate,
-    standardError: sampleStandardDeviation(deviations),
-    interval: { ...inference.interval, method: 'basic' },
-    oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
-    pValue: inference.pValue,
-    pValueTwoSided: inference.pValueTwoSided,
+    standardError: summary.standardError,
+    interval: summary.interval,
+    oneSidedLower: summary.oneSidedLower,
+    pValue: summary.pValue,
+    pValueTwoSided: summary.pValueTwoSided,
     resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
     notes,
   };

@@ -3,11 +3,15 @@ import {
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
 import { mean } from '../mean.js';
-import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
+import {
+  type BasicInterval,
+  type BasicLowerBound,
+  basicSummary,
+  minimumResamples,
+} from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
 import { type ResampleHistogram, resampleHistogram } from './resampleHistogram.js';
 import { type ResampleRunner, runResampleJob } from './resampleJob.js';
-import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 
 export {
   RESAMPLES_PER_STREAM,
@@ -35,20 +39,24 @@ export interface StationaryBootstrapOptions {
   margin: number;
 }
 
-export interface StationaryBootstrapResult {
-  /** 'identical': every d_t is 0; 'too-short': n < MINIMUM_BOOTSTRAP_LENGTH (numbers are null). */
-  state: 'ok' | 'identical' | 'too-short';
+/** What every stationary-bootstrap result repeats of its run: B, the seed and b. */
+export interface BootstrapRunFields {
   resamples: number;
   seed: number;
   expectedBlockLength: number;
+}
+
+export interface StationaryBootstrapResult extends BootstrapRunFields {
+  /** 'identical': every d_t is 0; 'too-short': n < MINIMUM_BOOTSTRAP_LENGTH (numbers are null). */
+  state: 'ok' | 'identical' | 'too-short';
   /** d̄. */
   mean: number | null;
   /** Standard deviation of the B resample means d̄*_b, divisor B − 1. */
   standardError: number | null;
   /** Basic (reverse-percentile) two-sided interval for E[d]; see `basicBootstrapInference`. */
-  interval: { level: number; lower: number; upper: number; method: 'basic' } | null;
+  interval: BasicInterval | null;
   /** One-sided basic lower bound for E[d] at `level`: pValue ≤ alpha ⇔ margin < lower. */
-  oneSidedLower: { level: number; alpha: number; lower: number; method: 'basic' } | null;
+  oneSidedLower: BasicLowerBound | null;
   /** (1 + #{d̄*_b − d̄ ≥ d̄ − δ})/(B + 1): one-sided, "candidate worse by more than δ". */
   pValue: number | null;
   /** (1 + #{d̄*_b − d̄ ≤ d̄ − δ})/(B + 1): one-sided, "candidate better than δ" (E[d] < δ). */
@@ -138,21 +146,11 @@ export function stationaryBootstrap(
     );
   }
 
-  const standardError = sampleStandardDeviation(deviations);
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = sampleMean - deviations[b]!;
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
   return {
     state: identical ? 'identical' : 'ok',
     ...base,
     mean: sampleMean,
-    standardError,
-    interval: { ...inference.interval, method: 'basic' },
-    oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
-    pValue: inference.pValue,
-    pValueBelow: inference.pValueBelow,
-    pValueTwoSided: inference.pValueTwoSided,
+    ...basicSummary(sampleMean, deviations, margin, confidence),
     distribution: resampleHistogram(sampleMean, deviations),
     notes,
   };
