@@ -33868,7 +33868,8 @@ function modelConfidenceSet(input) {
   const pValues = new Array(m).fill(1);
   let running = 0;
   while (alive.length > 1) {
-    const step = statistic === "range" ? rangeStep(alive, means, deviations, resamples) : maxStep(alive, means, deviations, resamples);
+    const input2 = { alive, means, deviations, resamples };
+    const step = statistic === "range" ? rangeStep(input2) : maxStep(input2);
     const pValue2 = (1 + step.exceedances) / (resamples + 1);
     running = Math.max(running, pValue2);
     order.push(step.eliminate);
@@ -33891,7 +33892,7 @@ function modelConfidenceSet(input) {
 function reaches(resampled, observed) {
   return resampled >= observed - Math.abs(observed) * 1e-10;
 }
-function rangeStep(alive, means, deviations, resamples) {
+function rangeStep({ alive, means, deviations, resamples }) {
   const size = alive.length;
   const pairs = [];
   const worst = new Array(size).fill(Number.NEGATIVE_INFINITY);
@@ -33900,12 +33901,7 @@ function rangeStep(alive, means, deviations, resamples) {
     for (let c = a + 1; c < size; c++) {
       const zi = deviations[alive[a]];
       const zj = deviations[alive[c]];
-      let sum = 0;
-      for (let b = 0; b < resamples; b++) {
-        const x = zi[b] - zj[b];
-        sum += x * x;
-      }
-      const variance = sum / resamples;
+      const variance = meanSquaredDifference(zi, zj, resamples);
       const t = variance > 0 ? (means[alive[a]] - means[alive[c]]) / Math.sqrt(variance) : 0;
       if (t > worst[a]) worst[a] = t;
       if (-t > worst[c]) worst[c] = -t;
@@ -33924,7 +33920,7 @@ function rangeStep(alive, means, deviations, resamples) {
   }
   return { eliminate: alive[argmax(worst)], exceedances };
 }
-function maxStep(alive, means, deviations, resamples) {
+function maxStep({ alive, means, deviations, resamples }) {
   const size = alive.length;
   const average = new Float64Array(resamples);
   for (const i of alive) {
@@ -33939,12 +33935,7 @@ function maxStep(alive, means, deviations, resamples) {
   const t = new Array(size);
   for (let a = 0; a < size; a++) {
     const z = deviations[alive[a]];
-    let sum = 0;
-    for (let b = 0; b < resamples; b++) {
-      const x = z[b] - average[b];
-      sum += x * x;
-    }
-    const variance = sum / resamples;
+    const variance = meanSquaredDifference(z, average, resamples);
     scales[a] = variance > 0 ? 1 / Math.sqrt(variance) : 0;
     t[a] = (means[alive[a]] - meanOfMeans) * scales[a];
   }
@@ -33959,6 +33950,14 @@ function maxStep(alive, means, deviations, resamples) {
     if (reaches(max, observed)) exceedances++;
   }
   return { eliminate: alive[argmax(t)], exceedances };
+}
+function meanSquaredDifference(z, w, resamples) {
+  let sum = 0;
+  for (let b = 0; b < resamples; b++) {
+    const x = z[b] - w[b];
+    sum += x * x;
+  }
+  return sum / resamples;
 }
 function argmax(values) {
   let best = 0;
@@ -34355,6 +34354,11 @@ function shellWord(text2) {
   return `'${text2.replace(/'/g, `'\\''`)}'`;
 }
 
+// src/statistics/smallSampleValue.ts
+function smallSampleValue(result, which2 = "pValue") {
+  return result.smallSample === null ? result[which2] : result.smallSample[which2];
+}
+
 // src/report/decidingReason.ts
 var RANK = { pass: 0, warn: 1, fail: 2 };
 function decidingReasons(report) {
@@ -34573,21 +34577,13 @@ function detailsTable(report, c) {
       dm.smallSample === null ? significant(dm.statistic) : `${significant(dm.smallSample.statistic)} (Harvey\u2013Leybourne\u2013Newbold; raw ${significant(dm.statistic)})`,
       bs.standardError === null ? "n/a" : `standard error of d\u0304 ${significant(bs.standardError)}`
     ],
-    [
-      "p, one-sided: candidate worse",
-      pValue(dm.smallSample?.pValue ?? dm.pValue),
-      pValue(bs.pValue)
-    ],
+    ["p, one-sided: candidate worse", pValue(smallSampleValue(dm)), pValue(bs.pValue)],
     [
       "p, in the policy\u2019s direction (decides)",
       pValue(dm.decisionPValue),
       pValue(bs.decisionPValue)
     ],
-    [
-      "p, two-sided",
-      pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
-      pValue(bs.pValueTwoSided)
-    ],
+    ["p, two-sided", pValue(smallSampleValue(dm, "pValueTwoSided")), pValue(bs.pValueTwoSided)],
     ["interval for E[L_candidate \u2212 L_baseline]", interval(dm.interval), interval(bs.interval)],
     [
       "rejects H0 at \u03B1",
@@ -34692,7 +34688,7 @@ function pathSection(report) {
         significant(c.meanBaselineLoss),
         significant(c.meanCandidateLoss),
         percent(c.relativeDifference),
-        pValue(c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue)
+        pValue(smallSampleValue(c.dieboldMariano))
       ])
     )
   };
@@ -52252,31 +52248,51 @@ function mean(x) {
 
 // src/statistics/autocovariance.ts
 function autocovariances(x, maxLag) {
+  checkMaxLag(x.length, maxLag);
+  const u = centred(x);
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) gamma[k] = autocovarianceOfCentred(u, k);
+  return gamma;
+}
+function centred(x) {
   const n = x.length;
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  return u;
+}
+function autocovarianceOfCentred(u, k) {
+  let sum = 0;
+  for (let t = k; t < u.length; t++) sum += u[t] * u[t - k];
+  return sum / u.length;
+}
+function checkMaxLag(n, maxLag) {
   if (n === 0) throw new RangeError("autocovariances: the series is empty");
   if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
     throw new RangeError(
       `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
     );
   }
-  const centre2 = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
+}
+
+// src/statistics/weightedAutocovarianceSum.ts
+function weightedAutocovarianceSum(x, maxLag, weight) {
+  checkMaxLag(x.length, maxLag);
+  const u = centred(x);
+  let sum = autocovarianceOfCentred(u, 0);
+  for (let k = 1; k <= maxLag; k++) {
+    const w = weight(k);
+    if (w !== 0) sum += 2 * w * autocovarianceOfCentred(u, k);
   }
-  return gamma;
+  return sum;
 }
 
 // src/statistics/bartlettLongRunVariance.ts
 function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
+  return weightedAutocovarianceSum(x, lag, bartlettWeights(lag));
+}
+function bartlettWeights(lag) {
+  return (k) => k <= lag ? 1 - k / (lag + 1) : 0;
 }
 
 // src/statistics/neweyWestLag.ts
@@ -52345,19 +52361,19 @@ var PREWHITENING_CAP = 0.97;
 function prewhitenedLongRunVariance(y, rule, horizon) {
   const n = y.length;
   if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
-  const centre2 = mean(y);
+  const centre = mean(y);
   let cross = 0;
   let square = 0;
   for (let t = 1; t < n; t++) {
-    const previous = y[t - 1] - centre2;
-    cross += (y[t] - centre2) * previous;
+    const previous = y[t - 1] - centre;
+    cross += (y[t] - centre) * previous;
     square += previous * previous;
   }
   const raw = square === 0 ? 0 : cross / square;
   const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
   const residuals = new Float64Array(n - 1);
   for (let t = 1; t < n; t++) {
-    residuals[t - 1] = y[t] - centre2 - coefficient * (y[t - 1] - centre2);
+    residuals[t - 1] = y[t] - centre - coefficient * (y[t - 1] - centre);
   }
   const lag = selectLag(residuals, rule, horizon).lag;
   const recolour = (1 - coefficient) ** 2;
@@ -52617,6 +52633,18 @@ function measuredCoverage(kind, n, level) {
   return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
 }
 
+// src/statistics/bootstrap/sampleStandardDeviation.ts
+function sampleStandardDeviation(values) {
+  const m = values.length;
+  if (m < 2) return 0;
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += values[i];
+  const centre = sum / m;
+  let squares = 0;
+  for (let i = 0; i < m; i++) squares += (values[i] - centre) ** 2;
+  return Math.sqrt(squares / (m - 1));
+}
+
 // src/statistics/bootstrap/basicBootstrapInference.ts
 function tailProbability(level) {
   return Number((1 - level).toPrecision(15));
@@ -52635,8 +52663,13 @@ function minimumResamples(level) {
   while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
   return resamples;
 }
-function basicBootstrapInference(reflectedSorted, margin, level) {
-  const resamples = reflectedSorted.length;
+function reflectedSorted(estimate, deviations) {
+  const reflected = new Float64Array(deviations.length);
+  for (let b = 0; b < deviations.length; b++) reflected[b] = estimate - deviations[b];
+  return reflected.sort();
+}
+function basicBootstrapInference(reflectedSorted2, margin, level) {
+  const resamples = reflectedSorted2.length;
   const alpha = tailProbability(level);
   const kTwo = tailOrderStatistic(alpha / 2, resamples);
   const kOne = tailOrderStatistic(alpha, resamples);
@@ -52648,7 +52681,7 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
   let atOrBelow = 0;
   let atOrAbove = 0;
   for (let b = 0; b < resamples; b++) {
-    const u = reflectedSorted[b];
+    const u = reflectedSorted2[b];
     if (u <= margin) atOrBelow++;
     if (u >= margin) atOrAbove++;
   }
@@ -52657,13 +52690,24 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
   return {
     interval: {
       level,
-      lower: reflectedSorted[kTwo - 1],
-      upper: reflectedSorted[resamples - kTwo]
+      lower: reflectedSorted2[kTwo - 1],
+      upper: reflectedSorted2[resamples - kTwo]
     },
-    oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
+    oneSidedLower: { level, alpha, lower: reflectedSorted2[kOne - 1] },
     pValue: pValue2,
     pValueBelow: pAbove,
     pValueTwoSided: Math.min(1, 2 * Math.min(pValue2, pAbove))
+  };
+}
+function basicSummary(estimate, deviations, margin, level) {
+  const inference = basicBootstrapInference(reflectedSorted(estimate, deviations), margin, level);
+  return {
+    standardError: sampleStandardDeviation(deviations),
+    interval: { ...inference.interval, method: "basic" },
+    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
+    pValue: inference.pValue,
+    pValueBelow: inference.pValueBelow,
+    pValueTwoSided: inference.pValueTwoSided
   };
 }
 
@@ -52834,9 +52878,7 @@ function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length))
       `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
     );
   }
-  const centre2 = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
+  const u = centred(x);
   const cosTable = new Float64Array(n + 1);
   for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
   const period = 4 * n;
@@ -52884,10 +52926,10 @@ function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
 
 // src/statistics/uniformLongRunVariance.ts
 function uniformWeightSum(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
-  return sum;
+  return weightedAutocovarianceSum(x, lag, uniformWeights(lag));
+}
+function uniformWeights(lag) {
+  return (k) => k <= lag ? 1 : 0;
 }
 function uniformLongRunVariance(x, lag) {
   const uniformValue = uniformWeightSum(x, lag);
@@ -53336,23 +53378,16 @@ function degenerate(base, blockLength, notes) {
   };
 }
 
-// src/statistics/bootstrap/centring.ts
-function centre(d) {
+// src/statistics/bootstrap/centredPrefixSums.ts
+function centredPrefixSums(d, mean2) {
   const n = d.length;
-  const mean2 = meanOf(d);
-  const centred = new Float64Array(n);
-  for (let t = 0; t < n; t++) centred[t] = d[t] - mean2;
-  return centred;
-}
-function meanOf(d) {
-  let sum = 0;
-  for (let t = 0; t < d.length; t++) sum += d[t];
-  return sum / d.length;
-}
-function lagProduct(u, k) {
-  let sum = 0;
-  for (let t = k; t < u.length; t++) sum += u[t] * u[t - k];
-  return sum;
+  const prefix2 = new Float64Array(2 * n + 1);
+  let running = 0;
+  for (let i = 0; i < 2 * n; i++) {
+    running += d[i < n ? i : i - n] - mean2;
+    prefix2[i + 1] = running;
+  }
+  return prefix2;
 }
 
 // src/random/aliasTable.ts
@@ -53443,108 +53478,10 @@ function createGeometricSampler(mean2) {
   };
 }
 
-// src/statistics/bootstrap/centredPrefixSums.ts
-function centredPrefixSums(d, mean2) {
-  const n = d.length;
-  const prefix2 = new Float64Array(2 * n + 1);
-  let running = 0;
-  for (let i = 0; i < 2 * n; i++) {
-    running += d[i < n ? i : i - n] - mean2;
-    prefix2[i + 1] = running;
-  }
-  return prefix2;
-}
-
-// src/statistics/bootstrap/resampleMeanDeviation.ts
-function resampleMeanDeviation(prefix2, n, blocks) {
-  const { starts, lengths, count } = blocks;
-  let sum = 0;
-  for (let i = 0; i < count; i++) {
-    const s = starts[i];
-    sum += prefix2[s + lengths[i]] - prefix2[s];
-  }
-  return sum / n;
-}
-
-// src/statistics/bootstrap/sampleStandardDeviation.ts
-function sampleStandardDeviation(values) {
-  const m = values.length;
-  if (m < 2) return 0;
-  let sum = 0;
-  for (let i = 0; i < m; i++) sum += values[i];
-  const centre2 = sum / m;
-  let squares = 0;
-  for (let i = 0; i < m; i++) squares += (values[i] - centre2) ** 2;
-  return Math.sqrt(squares / (m - 1));
-}
-
-// src/random/uniformIndex.ts
-var TWO_POW_322 = 4294967296;
-var LEMIRE_LIMIT = 2097152;
-function uniformIndex(random, n) {
-  if (n <= 1) return 0;
-  if (n <= LEMIRE_LIMIT) {
-    let m = random.nextUint32() * n;
-    let high = Math.floor(m / TWO_POW_322);
-    let low = m - high * TWO_POW_322;
-    if (low < n) {
-      const threshold = TWO_POW_322 % n;
-      while (low < threshold) {
-        m = random.nextUint32() * n;
-        high = Math.floor(m / TWO_POW_322);
-        low = m - high * TWO_POW_322;
-      }
-    }
-    return high;
-  }
-  const shift = Math.clz32(n - 1);
-  for (; ; ) {
-    const candidate = shift === 0 ? random.nextUint32() : random.nextUint32() >>> shift;
-    if (candidate < n) return candidate;
-  }
-}
-
-// src/statistics/bootstrap/stationaryBlocks.ts
-function allocateStationaryBlocks(n) {
-  return { starts: new Int32Array(n), lengths: new Int32Array(n), count: 0 };
-}
-function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlocks(n)) {
-  const { starts, lengths } = into;
-  let filled = 0;
-  let count = 0;
-  while (filled < n) {
-    starts[count] = uniformIndex(random, n);
-    const length = sampler.sample(random, n - filled);
-    lengths[count] = length;
-    filled += length;
-    count++;
-  }
-  into.count = count;
-  return into;
-}
-
-// src/statistics/bootstrap/resampleHistogram.ts
-function resampleHistogram(mean2, deviations, bins = 40) {
-  if (deviations.length === 0) return null;
-  let lo2 = Number.POSITIVE_INFINITY;
-  let hi2 = Number.NEGATIVE_INFINITY;
-  for (const t of deviations) {
-    lo2 = Math.min(lo2, mean2 + t);
-    hi2 = Math.max(hi2, mean2 + t);
-  }
-  const counts = new Array(bins).fill(0);
-  const width = hi2 - lo2;
-  for (const t of deviations) {
-    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
-    counts[j]++;
-  }
-  return { lower: lo2, upper: hi2, counts };
-}
-
 // src/statistics/bootstrap/resampleDeviationsInline.ts
-var TWO_POW_323 = 4294967296;
-var TWO_POW_MINUS_32 = 1 / TWO_POW_323;
-var LEMIRE_LIMIT2 = 2097152;
+var TWO_POW_322 = 4294967296;
+var TWO_POW_MINUS_32 = 1 / TWO_POW_322;
+var LEMIRE_LIMIT = 2097152;
 function resampleDeviationsInline(prefix2, n, sampler, source, count) {
   if (sampler.inline === null) return unitBlocks(prefix2, n, source, count);
   return geometricBlocks(prefix2, n, sampler, source, count);
@@ -53553,7 +53490,7 @@ function unitBlocks(prefix2, n, source, count) {
   const P32 = 4294967296;
   const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
-  const lemire = n <= LEMIRE_LIMIT2;
+  const lemire = n <= LEMIRE_LIMIT;
   const threshold = P32 % n;
   const maskShift = Math.clz32(n - 1);
   let s00 = source.s00;
@@ -53694,7 +53631,7 @@ function geometricBlocks(prefix2, n, sampler, source, count) {
   const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
   const inline = sampler.inline;
-  const lemire = n <= LEMIRE_LIMIT2;
+  const lemire = n <= LEMIRE_LIMIT;
   const threshold = P32 % n;
   const maskShift = Math.clz32(n - 1);
   let s00 = source.s00;
@@ -53835,7 +53772,7 @@ function rejectedStart(source, n, threshold) {
   for (; ; ) {
     const m = source.nextUint32() * n;
     const high = Math.floor(m * TWO_POW_MINUS_32);
-    if (m - high * TWO_POW_323 >= threshold) return high;
+    if (m - high * TWO_POW_322 >= threshold) return high;
   }
 }
 function bitmaskStart(source, n, maskShift) {
@@ -53852,6 +53789,62 @@ function finishLength(source, sampler, column, coin, cut, cap) {
   if (outcome !== truncation) return Math.min(outcome + 1, cap);
   if (truncation >= cap) return cap;
   return truncation + sampler.sample(source, cap - truncation);
+}
+
+// src/statistics/bootstrap/resampleMeanDeviation.ts
+function resampleMeanDeviation(prefix2, n, blocks) {
+  const { starts, lengths, count } = blocks;
+  let sum = 0;
+  for (let i = 0; i < count; i++) {
+    const s = starts[i];
+    sum += prefix2[s + lengths[i]] - prefix2[s];
+  }
+  return sum / n;
+}
+
+// src/random/uniformIndex.ts
+var TWO_POW_323 = 4294967296;
+var LEMIRE_LIMIT2 = 2097152;
+function uniformIndex(random, n) {
+  if (n <= 1) return 0;
+  if (n <= LEMIRE_LIMIT2) {
+    let m = random.nextUint32() * n;
+    let high = Math.floor(m / TWO_POW_323);
+    let low = m - high * TWO_POW_323;
+    if (low < n) {
+      const threshold = TWO_POW_323 % n;
+      while (low < threshold) {
+        m = random.nextUint32() * n;
+        high = Math.floor(m / TWO_POW_323);
+        low = m - high * TWO_POW_323;
+      }
+    }
+    return high;
+  }
+  const shift = Math.clz32(n - 1);
+  for (; ; ) {
+    const candidate = shift === 0 ? random.nextUint32() : random.nextUint32() >>> shift;
+    if (candidate < n) return candidate;
+  }
+}
+
+// src/statistics/bootstrap/stationaryBlocks.ts
+function allocateStationaryBlocks(n) {
+  return { starts: new Int32Array(n), lengths: new Int32Array(n), count: 0 };
+}
+function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlocks(n)) {
+  const { starts, lengths } = into;
+  let filled = 0;
+  let count = 0;
+  while (filled < n) {
+    starts[count] = uniformIndex(random, n);
+    const length = sampler.sample(random, n - filled);
+    lengths[count] = length;
+    filled += length;
+    count++;
+  }
+  into.count = count;
+  return into;
 }
 
 // src/statistics/bootstrap/resampleJob.ts
@@ -53890,6 +53883,36 @@ function resampleDeviationsGeneric(prefix2, n, sampler, random, count) {
   return out;
 }
 
+// src/statistics/bootstrap/eachStationaryResample.ts
+function forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, visit) {
+  const sampler = createGeometricSampler(expectedBlockLength);
+  const blocks = allocateStationaryBlocks(n);
+  const streams = randomStreams(random, seed, 0);
+  for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
+    const source = streams.next();
+    const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
+    for (let b = first; b < last; b++) visit(b, drawStationaryBlocks(n, sampler, source, blocks));
+  }
+}
+
+// src/statistics/bootstrap/resampleHistogram.ts
+function resampleHistogram(mean2, deviations, bins = 40) {
+  if (deviations.length === 0) return null;
+  let lo2 = Number.POSITIVE_INFINITY;
+  let hi2 = Number.NEGATIVE_INFINITY;
+  for (const t of deviations) {
+    lo2 = Math.min(lo2, mean2 + t);
+    hi2 = Math.max(hi2, mean2 + t);
+  }
+  const counts = new Array(bins).fill(0);
+  const width = hi2 - lo2;
+  for (const t of deviations) {
+    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
+    counts[j]++;
+  }
+  return { lower: lo2, upper: hi2, counts };
+}
+
 // src/statistics/bootstrap/stationaryBootstrap.ts
 var MINIMUM_BOOTSTRAP_LENGTH = 2;
 function stationaryBootstrap(d, options, random = createRandomSource, runner = runResampleJob) {
@@ -53923,7 +53946,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
   }
   const constant = d.every((x) => x === d[0]);
   const identical = constant && d[0] === 0;
-  const mean2 = constant ? d[0] : meanOf(d);
+  const sampleMean = constant ? d[0] : mean(d);
   let deviations;
   if (identical) {
     notes.push("every loss differential is 0 (identical forecasts); no resampling needed");
@@ -53935,7 +53958,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
     }
     deviations = stationaryResampleDeviations(
       d,
-      mean2,
+      sampleMean,
       expectedBlockLength,
       resamples,
       seed,
@@ -53943,22 +53966,12 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
       runner
     );
   }
-  const standardError = sampleStandardDeviation(deviations);
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = mean2 - deviations[b];
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
   return {
     state: identical ? "identical" : "ok",
     ...base,
-    mean: mean2,
-    standardError,
-    interval: { ...inference.interval, method: "basic" },
-    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
-    pValue: inference.pValue,
-    pValueBelow: inference.pValueBelow,
-    pValueTwoSided: inference.pValueTwoSided,
-    distribution: resampleHistogram(mean2, deviations),
+    mean: sampleMean,
+    ...basicSummary(sampleMean, deviations, margin, confidence),
+    distribution: resampleHistogram(sampleMean, deviations),
     notes
   };
 }
@@ -54020,8 +54033,8 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
       notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`]
     };
   }
-  const candidateMean = meanOf(candidateLoss);
-  const baselineMean = meanOf(baselineLoss);
+  const candidateMean = mean(candidateLoss);
+  const baselineMean = mean(baselineLoss);
   if (!(baselineMean > 0)) {
     return {
       state: "baseline-zero",
@@ -54041,41 +54054,30 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
   } else {
     const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
     const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
-    const sampler = createGeometricSampler(expectedBlockLength);
-    const blocks = allocateStationaryBlocks(n);
     let zeroDenominators = 0;
-    const streams = randomStreams(random, seed, 0);
-    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
-      const source = streams.next();
-      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
-      for (let b = first; b < last; b++) {
-        drawStationaryBlocks(n, sampler, source, blocks);
-        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
-        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
-        const c = candidateMean + candidateDeviations[b];
-        const base = baselineMean + baselineDeviations[b];
-        if (base === 0) zeroDenominators++;
-        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
-        deviations[b] = theta - estimate;
-      }
-    }
+    forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, (b, blocks) => {
+      candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+      baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+      const c = candidateMean + candidateDeviations[b];
+      const base = baselineMean + baselineDeviations[b];
+      if (base === 0) zeroDenominators++;
+      const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+      deviations[b] = theta - estimate;
+    });
     if (zeroDenominators > 0) {
       notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (\u03B8* infinite)`);
     }
   }
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b];
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
+  const summary2 = basicSummary(estimate, deviations, margin, confidence);
   return {
     state: identical ? "identical" : "ok",
     ...empty,
     relativeDifference: estimate,
-    standardError: sampleStandardDeviation(deviations),
-    interval: { ...inference.interval, method: "basic" },
-    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
-    pValue: inference.pValue,
-    pValueTwoSided: inference.pValueTwoSided,
+    standardError: summary2.standardError,
+    interval: summary2.interval,
+    oneSidedLower: summary2.oneSidedLower,
+    pValue: summary2.pValue,
+    pValueTwoSided: summary2.pValueTwoSided,
     resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
     notes
   };
@@ -54118,13 +54120,11 @@ function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
 }
 function differenceInterval(difference, deviations, level) {
   if (deviations === null) return null;
-  const centre2 = meanOf(difference);
-  const reflected = new Float64Array(deviations.candidate.length);
-  for (let b = 0; b < reflected.length; b++) {
-    reflected[b] = centre2 - (deviations.candidate[b] - deviations.baseline[b]);
+  const shifts = new Float64Array(deviations.candidate.length);
+  for (let b = 0; b < shifts.length; b++) {
+    shifts[b] = deviations.candidate[b] - deviations.baseline[b];
   }
-  reflected.sort();
-  const { interval } = basicBootstrapInference(reflected, 0, level);
+  const { interval } = basicBootstrapInference(reflectedSorted(mean(difference), shifts), 0, level);
   return { ...interval, method: "basic" };
 }
 
@@ -54307,7 +54307,7 @@ function runDieboldMariano(d, horizon, hypothesis, settings, difference = d) {
     lagSeries: difference
   };
   const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
-  const upper = result.smallSample?.pValue ?? result.pValue;
+  const upper = smallSampleValue(result);
   const decisionPValue = upper === null ? null : hypothesis.rejectWhen === "above" ? upper : 1 - upper;
   const unshifted = difference === d ? result : dieboldMariano(difference, { ...options, margin: 0 });
   return {
@@ -54598,7 +54598,7 @@ function evaluatePanel(panel, settings, extras = {}) {
       worse,
       shareWorse: worse / perPath.length,
       significantlyWorse: perPath.filter((c) => {
-        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        const p = smallSampleValue(c.dieboldMariano);
         return p !== null && p <= settings.alpha;
       }).length
     };
@@ -54646,7 +54646,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
     const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
-    upper.push(dm.smallSample?.pValue ?? dm.pValue);
+    upper.push(smallSampleValue(dm));
     return compareLossSeries(series, scope("all", name), hypothesis, settings, {
       bootstrap: false
     });
@@ -54654,7 +54654,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
   const adjust = ADJUSTMENTS[settings.adjust].adjust;
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
-  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const tested = raw.map((c) => smallSampleValue(c.dieboldMariano));
   const policyP = hypothesis.rejectWhen === "above" ? adjust(tested) : adjust(tested.map((p) => p === null ? null : 1 - p));
   let worse = 0;
   let better = 0;
@@ -55321,26 +55321,12 @@ function describeTableRow(table2, i) {
 function checkRows(input) {
   const { tables } = input;
   if (tables.some((t) => t.origin === null)) {
-    const reason = "the predictions files have no origin column";
-    return {
-      findings: [],
-      notRun: [
-        { id: "look-ahead", reason },
-        { id: "horizon-steps", reason },
-        { id: "origin-after-actuals", reason }
-      ]
-    };
+    return noneRun("the predictions files have no origin column");
   }
   if (input.timestampKind === "text" || input.originKind !== input.timestampKind) {
-    const reason = input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`;
-    return {
-      findings: [],
-      notRun: [
-        { id: "look-ahead", reason },
-        { id: "horizon-steps", reason },
-        { id: "origin-after-actuals", reason }
-      ]
-    };
+    return noneRun(
+      input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`
+    );
   }
   const kind = input.timestampKind;
   const lookAhead = new FindingCollector();
@@ -55399,6 +55385,16 @@ function checkRows(input) {
     });
   }
   return { findings, notRun };
+}
+function noneRun(reason) {
+  return {
+    findings: [],
+    notRun: [
+      { id: "look-ahead", reason },
+      { id: "horizon-steps", reason },
+      { id: "origin-after-actuals", reason }
+    ]
+  };
 }
 
 // src/integrity/checkBacktest.ts
@@ -55589,7 +55585,7 @@ function sharedResampleDeviations(series, options, random = createRandomSource, 
     if (x.length !== n) throw new RangeError("shared resamples need series of one length");
     return stationaryResampleDeviations(
       x,
-      meanOf(x),
+      mean(x),
       options.expectedBlockLength,
       options.resamples,
       options.seed,
@@ -55608,20 +55604,11 @@ function stationaryBootstrapVariance(d, expectedBlockLength) {
       `expected block length must be a finite number \u2265 1, got ${expectedBlockLength}`
     );
   }
-  const u = centre(d);
   const q = 1 - 1 / expectedBlockLength;
   const negligible = 1e-17 / n;
   const near = q === 0 ? 0 : Math.min(n - 1, Math.ceil(Math.log(negligible) / Math.log(q)));
-  let sum = lagProduct(u, 0) / n;
-  for (let k = 1; k < n; k++) {
-    if (k > near && n - k > near) {
-      k = n - near - 1;
-      continue;
-    }
-    const weight = (1 - k / n) * q ** k + k / n * q ** (n - k);
-    if (weight !== 0) sum += 2 * weight * (lagProduct(u, k) / n);
-  }
-  return sum / n;
+  const weight = (k) => k > near && n - k > near ? 0 : (1 - k / n) * q ** k + k / n * q ** (n - k);
+  return weightedAutocovarianceSum(d, n - 1, weight) / n;
 }
 
 // src/statistics/realityCheck.ts
@@ -55711,7 +55698,7 @@ function superiorAbilityTest(baseline, candidates, deviations, expectedBlockLeng
     for (let b = 0; b < x.length; b++) x[b] = sign * (factor * base[b] - own[b]);
     return x;
   });
-  const means = performance2.map(meanOf);
+  const means = performance2.map(mean);
   const standardErrors = performance2.map(
     (x) => Math.sqrt(Math.max(0, stationaryBootstrapVariance(x, expectedBlockLength)))
   );
@@ -55788,7 +55775,7 @@ function evaluateCandidates(input, settings, extras = {}) {
     hypothesis,
     spaMargin(settings, hypothesis)
   );
-  const means = models.map(meanOf);
+  const means = models.map(mean);
   const mcs = modelConfidenceSet({
     means,
     deviations,
