@@ -69,7 +69,8 @@ export class ByteInterner {
   private equal(id: number, source: Uint8Array, start: number, length: number): boolean {
     const bytes = this.bytes;
     const offset = this.offsets[id]!;
-    for (let k = 0; k < length; k++) if (bytes[offset + k] !== source[start + k]) return false;
+    // From the end: values that differ (dates, numbered names) mostly differ in their last bytes.
+    for (let k = length - 1; k >= 0; k--) if (bytes[offset + k] !== source[start + k]) return false;
     return true;
   }
 

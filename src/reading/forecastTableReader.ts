@@ -227,7 +227,7 @@ export class ForecastTableReader {
         }
         default: {
           let value = fastDecimal(bytes, a, b, mark);
-          if (value !== value) value = this.numberOfText(c, bytes.toString('utf8', a, b), line);
+          if (Number.isNaN(value)) value = this.numberOfText(c, bytes.toString('utf8', a, b), line);
           if (c.kind === WEIGHT && value < 0) {
             this.negativeWeight(c, bytes.toString('utf8', a, b), line);
           }

@@ -156,7 +156,7 @@ export function decimalFromBytes(
   comma: boolean,
 ): number {
   const value = fastDecimal(bytes, start, end, comma ? 44 : 46);
-  if (value === value) return value;
+  if (!Number.isNaN(value)) return value;
   const text = bytes.toString('utf8', start, end);
   return comma ? parseDecimalComma(text) : parseDecimal(text);
 }
