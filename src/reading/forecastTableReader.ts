@@ -18,11 +18,11 @@ import type { ForecastTable } from './forecastTable.js';
 import { type TextDialect, type TextFormat, textDialect } from './formatDetection.js';
 import type { Delimiter } from './inputFormat.js';
 import {
-  fastDecimal,
   horizonFromBytes,
   parseDecimal,
   parseDecimalComma,
   parseHorizon,
+  storeDecimalFromBytes,
 } from './numbers.js';
 import { RowKeySet } from './rowKeySet.js';
 import { type Bytes, utf16Length } from './utf8.js';
@@ -207,7 +207,7 @@ export class ForecastTableReader {
     }
     const r = this.nextRow(line);
     const columns = this.columns;
-    const mark = this.dialect.decimalComma ? 44 : 46;
+    const comma = this.dialect.decimalComma;
     for (let k = 0; k < columns.length; k++) {
       const c = columns[k]!;
       const a = starts[c.field]!;
@@ -226,12 +226,13 @@ export class ForecastTableReader {
           break;
         }
         default: {
-          let value = fastDecimal(bytes, a, b, mark);
-          if (Number.isNaN(value)) value = this.numberOfText(c, bytes.toString('utf8', a, b), line);
-          if (c.kind === WEIGHT && value < 0) {
+          const floats = c.floats;
+          if (!storeDecimalFromBytes(bytes, a, b, comma, floats, r)) {
+            this.numberOfText(c, bytes.toString('utf8', a, b), line);
+          }
+          if (c.kind === WEIGHT && floats[r]! < 0) {
             this.negativeWeight(c, bytes.toString('utf8', a, b), line);
           }
-          c.floats[r] = value;
         }
       }
     }

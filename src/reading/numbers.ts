@@ -90,8 +90,25 @@ export function parseHorizon(text: string): number {
  * larger exponents — which the caller hands to the text parser (decimalFromBytes).
  */
 export function fastDecimal(bytes: Uint8Array, start: number, end: number, mark: number): number {
+  return storeDecimal(bytes, start, end, mark, ONE, 0) ? ONE[0]! : Number.NaN;
+}
+
+const ONE = new Float64Array(1);
+
+/**
+ * fastDecimal that stores the value at `out[at]` and returns whether the fast path applied (false
+ * leaves `out[at]` as it was). A stored double is not boxed, so a row of numbers allocates nothing.
+ */
+export function storeDecimal(
+  bytes: Uint8Array,
+  start: number,
+  end: number,
+  mark: number,
+  out: Float64Array,
+  at: number,
+): boolean {
   let i = start;
-  if (i >= end) return Number.NaN;
+  if (i >= end) return false;
   let c = bytes[i]!;
   const negative = c === 45;
   if (negative || c === 43) i++;
@@ -108,9 +125,9 @@ export function fastDecimal(bytes: Uint8Array, start: number, end: number, mark:
       if (fraction) exponent--;
       if (significant === 0 && digit === 0) continue;
       if (significant >= 15) {
-        if (mantissa > 900719925474099) return Number.NaN;
+        if (mantissa > 900719925474099) return false;
         const next = mantissa * 10 + digit;
-        if (next >= TWO_53) return Number.NaN;
+        if (next >= TWO_53) return false;
         mantissa = next;
       } else mantissa = mantissa * 10 + digit;
       significant++;
@@ -118,47 +135,65 @@ export function fastDecimal(bytes: Uint8Array, start: number, end: number, mark:
       fraction = true;
     } else break;
   }
-  if (digits === 0) return Number.NaN;
+  if (digits === 0) return false;
   if (i < end) {
-    if ((c | 0x20) !== 101) return Number.NaN; // e or E
+    if ((c | 0x20) !== 101) return false; // e or E
     i++;
-    if (i >= end) return Number.NaN;
+    if (i >= end) return false;
     c = bytes[i]!;
     const negativeExponent = c === 45;
     if (negativeExponent || c === 43) i++;
-    if (i >= end) return Number.NaN;
+    if (i >= end) return false;
     let written = 0;
     for (; i < end; i++) {
       const digit = bytes[i]! - 48;
-      if (digit < 0 || digit > 9) return Number.NaN;
+      if (digit < 0 || digit > 9) return false;
       if (written < 1000) written = written * 10 + digit;
     }
     exponent += negativeExponent ? -written : written;
   }
-  if (mantissa === 0) return negative ? -0 : 0;
+  if (mantissa === 0) {
+    out[at] = negative ? -0 : 0;
+    return true;
+  }
   let value: number;
   if (exponent === 0) value = mantissa;
   else if (exponent > 0 && exponent <= 22) value = mantissa * EXACT_POWERS[exponent]!;
   else if (exponent < 0 && exponent >= -22) value = mantissa / EXACT_POWERS[-exponent]!;
-  else return Number.NaN;
-  return negative ? -value : value;
+  else return false;
+  out[at] = negative ? -value : value;
+  return true;
 }
 
 /**
- * parseDecimal of the UTF-8 text `bytes[start, end)` (with a decimal comma when `comma`): the
- * exact fast path when it applies, else the text parser on the decoded slice, so the numbers and
- * the set of accepted texts are those of parseDecimal.
+ * parseDecimal of the UTF-8 text `bytes[start, end)` (parseDecimalComma when `comma`), stored at
+ * `out[at]`: the exact fast path when it applies, else the text parser on the decoded slice, so
+ * the numbers and the set of accepted texts are those of the text parsers. Returns false (and
+ * stores NaN) when the text is refused.
  */
+export function storeDecimalFromBytes(
+  bytes: Buffer,
+  start: number,
+  end: number,
+  comma: boolean,
+  out: Float64Array,
+  at: number,
+): boolean {
+  if (storeDecimal(bytes, start, end, comma ? 44 : 46, out, at)) return true;
+  const text = bytes.toString('utf8', start, end);
+  const value = comma ? parseDecimalComma(text) : parseDecimal(text);
+  out[at] = value;
+  return !Number.isNaN(value);
+}
+
+/** storeDecimalFromBytes as a returned value (NaN when refused). */
 export function decimalFromBytes(
   bytes: Buffer,
   start: number,
   end: number,
   comma: boolean,
 ): number {
-  const value = fastDecimal(bytes, start, end, comma ? 44 : 46);
-  if (!Number.isNaN(value)) return value;
-  const text = bytes.toString('utf8', start, end);
-  return comma ? parseDecimalComma(text) : parseDecimal(text);
+  return storeDecimalFromBytes(bytes, start, end, comma, ONE, 0) ? ONE[0]! : Number.NaN;
 }
 
 /** A number written with a decimal comma ("3,25"); a point anywhere makes it NaN. */

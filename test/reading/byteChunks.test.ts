@@ -57,7 +57,10 @@ const csv = fc
     const eol = crlf ? '\r\n' : '\n';
     const quote = (v: string): string =>
       quoteAll || /[",\r\n]/.test(v) ? `"${v.replaceAll('"', '""')}"` : v;
-    const lines = ['series,timestamp,actual,prediction', ...rows.map((r) => r.map(quote).join(','))];
+    const lines = [
+      'series,timestamp,actual,prediction',
+      ...rows.map((r) => r.map(quote).join(',')),
+    ];
     for (const b of blanks) lines.splice(1 + (b % lines.length), 0, '');
     return `${bom ? '\uFEFF' : ''}${lines.join(eol)}${eol}`;
   });
@@ -82,9 +85,10 @@ describe('reading from byte chunks', () => {
 
   it('reads the keys and numbers the text holds', () => {
     const table = readChunks(
-      cut(Buffer.from('series,timestamp,actual\n"naïve €",1,2.5\r\n𝄞,1,-0\n"naïve €",2,1e3\n'), [
-        5, 27, 28, 40,
-      ]),
+      cut(
+        Buffer.from('series,timestamp,actual\n"naïve €",1,2.5\r\n𝄞,1,-0\n"naïve €",2,1e3\n'),
+        [5, 27, 28, 40],
+      ),
       { role: 'actuals' },
     );
     expect(table.series!.labels).toEqual(['naïve €', '𝄞']);

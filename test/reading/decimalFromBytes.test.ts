@@ -42,7 +42,9 @@ const decimalText = fc
     ),
   )
   .map(([sign, zeros, int, point, fraction, exponent]) =>
-    point === '' ? `${sign}${zeros}${int}${exponent}` : `${sign}${zeros}${int}.${fraction}${exponent}`,
+    point === ''
+      ? `${sign}${zeros}${int}${exponent}`
+      : `${sign}${zeros}${int}.${fraction}${exponent}`,
   );
 
 /** Doubles written the ways writers write them: shortest round trip, 17 digits, fixed, exponent. */
@@ -85,9 +87,10 @@ describe('decimals read from bytes', () => {
     fc.assert(
       fc.property(fc.oneof(decimalText, writtenDouble, junk), (text) => {
         const { bytes, start, end } = field(text);
-        expect(Object.is(decimalFromBytes(bytes, start, end, false), parseDecimal(text)), text).toBe(
-          true,
-        );
+        expect(
+          Object.is(decimalFromBytes(bytes, start, end, false), parseDecimal(text)),
+          text,
+        ).toBe(true);
         expect(
           Object.is(decimalFromBytes(bytes, start, end, true), parseDecimalComma(text)),
           text,
