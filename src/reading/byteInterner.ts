@@ -8,8 +8,10 @@ import type { Bytes } from './utf8.js';
  *
  * The table is open addressing with linear probing (load ≤ 1/2) over FNV-1a 32-bit hashes
  * (Fowler, Noll and Vo); the bytes of every distinct value are kept once, end to end, in one
- * growing array. The value of the previous call is compared first: files written series by series
- * repeat it row after row.
+ * growing array. Before hashing, the value of the previous call and the value first seen after it
+ * are compared: in a file written series by series the series repeats row after row and the
+ * timestamps come round in the order they were first seen (and the other way round in a file
+ * written time point by time point), so most lookups of a sorted file are one comparison.
  */
 export class ByteInterner {
   /** The decoded values, by id. */
@@ -33,6 +35,16 @@ export class ByteInterner {
     const last = this.last;
     if (last >= 0 && this.lengths[last] === length && this.equal(last, source, start, length)) {
       return last;
+    }
+    const after = last + 1;
+    if (
+      after > 0 &&
+      after < this.labels.length &&
+      this.lengths[after] === length &&
+      this.equal(after, source, start, length)
+    ) {
+      this.last = after;
+      return after;
     }
     let h = 0x811c9dc5;
     for (let i = start; i < end; i++) h = Math.imul(h ^ source[i]!, 0x01000193);
