@@ -28669,6 +28669,63 @@ function pct(level) {
   return `${Math.round(level * 1e3) / 10}%`;
 }
 
+// src/report/reportTable.ts
+function table(header, align2, rows) {
+  return { header, align: align2, rows };
+}
+
+// src/report/candidatesSection.ts
+function candidatesSection(report) {
+  const { candidates, spa, confidenceSet: set, selection } = report;
+  if (candidates === void 0 || spa === void 0 || set === void 0) return null;
+  const level = `${formatNumber(set.level * 100, 3)}%`;
+  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
+  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
+  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
+    String(c.rank),
+    c.name === selection?.preferred ? `${c.name} (preferred)` : c.name,
+    formatNumber(c.comparison.meanCandidateLoss),
+    relativeChangeText(c.comparison),
+    c.inConfidenceSet ? "yes" : "no",
+    formatPValue(c.mcsPValue),
+    formatPValue(c.spaPValue),
+    c.comparison.verdict
+  ]);
+  rows.push([
+    "\u2013",
+    `${set.baseline.name} (baseline)`,
+    formatNumber(set.baseline.meanLoss),
+    "\u2013",
+    set.baseline.inConfidenceSet ? "yes" : "no",
+    formatPValue(set.baseline.mcsPValue),
+    "\u2013",
+    "\u2013"
+  ]);
+  const ranking = table(
+    [
+      "rank",
+      "model",
+      "mean loss",
+      `change against the baseline (${changeLevel})`,
+      `in the ${level} set`,
+      "MCS p-value",
+      `SPA p-value (${direction})`,
+      "own verdict"
+    ],
+    ["right", "left", "right", "left", "left", "right", "right", "left"],
+    rows
+  );
+  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
+  const eliminated = set.eliminationOrder.slice(0, -1).map((name, j) => `${name} (p ${formatPValue(set.stepPValues[j])})`).join(", ");
+  return {
+    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection?.preferred ?? "none"})`,
+    ranking,
+    shortHeader: ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"],
+    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    setSentence: `Model confidence set at ${level} (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.join(", ")}.${eliminated === "" ? "" : ` Eliminated in order: ${eliminated}.`}`
+  };
+}
+
 // src/report/cells.ts
 var LOSS_DIGITS = 4;
 var PERCENT_DIGITS = 3;
@@ -28789,11 +28846,6 @@ function chartCaption(series) {
 }
 function round2(x) {
   return Number(x.toFixed(2));
-}
-
-// src/report/reportTable.ts
-function table(header, align2, rows) {
-  return { header, align: align2, rows };
 }
 
 // src/report/missingRowsSection.ts
@@ -29807,9 +29859,16 @@ function renderHtml(report, options = {}) {
       );
     }
   }
-  const candidatesChart = candidatesChartSvg(report);
-  if (candidatesChart !== "") {
-    out.push("<h2>Candidates</h2>", `<figure>${candidatesChart}</figure>`);
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    const chart2 = candidatesChartSvg(report);
+    out.push(`<h2>${xml(candidates.heading)}</h2>`);
+    if (chart2 !== "") out.push(`<figure>${chart2}</figure>`);
+    out.push(
+      htmlTable(candidates.ranking),
+      `<p>${xml(candidates.spaSentence)}</p>`,
+      `<p>${xml(candidates.setSentence)}</p>`
+    );
   }
   const horizons = view.comparisons.filter(
     (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
@@ -29938,7 +29997,7 @@ function checkLine(check) {
   const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
-function backtestChecksLines(report, clean4) {
+function backtestChecksLines(report, clean3) {
   const integrity = report.integrity;
   if (integrity.checks.length === 0) return [];
   const flagged = integrity.checks.filter((c) => c.status !== "ok");
@@ -29946,42 +30005,9 @@ function backtestChecksLines(report, clean4) {
     `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
   ];
   for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map((e) => clean4(clip(e))).join("; ");
+    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
     out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
   }
-  return out;
-}
-
-// src/report/renderCandidatesMarkdown.ts
-function renderCandidatesMarkdown(report) {
-  const { candidates, spa, confidenceSet: set, selection } = report;
-  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
-  const level = `${formatNumber(set.level * 100, 3)}%`;
-  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
-  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
-  const out = [
-    `**Candidates** (${candidates.length}, ranked by mean loss; preferred: ${escapeMarkdown(selection?.preferred ?? "")})`,
-    "",
-    `| rank | model | mean loss | change against the baseline (${changeLevel}) | in the ${level} set | MCS p-value | SPA p-value (${direction}) | own verdict |`,
-    "|---:|---|---:|---|:---:|---:|---:|---|"
-  ];
-  for (const c of [...candidates].sort((a, b) => a.rank - b.rank)) {
-    const mark = c.name === selection?.preferred ? " (preferred)" : "";
-    out.push(
-      `| ${c.rank} | ${escapeMarkdown(c.name)}${mark} | ${formatNumber(c.comparison.meanCandidateLoss)} | ${relativeChangeText(c.comparison)} | ${c.inConfidenceSet ? "yes" : "no"} | ${formatPValue(c.mcsPValue)} | ${formatPValue(c.spaPValue)} | ${c.comparison.verdict} |`
-    );
-  }
-  out.push(
-    `| \u2013 | ${escapeMarkdown(set.baseline.name)} (baseline) | ${formatNumber(set.baseline.meanLoss)} | \u2013 | ${set.baseline.inConfidenceSet ? "yes" : "no"} | ${formatPValue(set.baseline.mcsPValue)} | \u2013 | \u2013 |`,
-    ""
-  );
-  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
-  out.push(
-    `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
-    "",
-    `Model confidence set (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.map(escapeMarkdown).join(", ")}. Eliminated in order: ${set.eliminationOrder.slice(0, -1).map((name, j) => `${escapeMarkdown(name)} (p ${formatPValue(set.stepPValues[j])})`).join(", ")}.`,
-    ""
-  );
   return out;
 }
 
@@ -29996,7 +30022,11 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
   for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
   if (s.notes.length > 0) lines.push("");
-  lines.push(...renderCandidatesMarkdown(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    lines.push(`**${escapeMarkdown(candidates.heading)}**`, "", ...markdownTable(candidates.ranking), "");
+    lines.push(escapeMarkdown(candidates.spaSentence), "", escapeMarkdown(candidates.setSentence), "");
+  }
   const chart = differenceSeries(view);
   if (chart !== null) {
     lines.push(...mermaidChart(chart), "");
@@ -30109,45 +30139,6 @@ function code(text) {
   return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : escapeMarkdown(text);
 }
 
-// src/report/renderCandidatesTerminal.ts
-function renderCandidatesTerminal(report) {
-  const { candidates, spa, confidenceSet: set } = report;
-  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
-  const header = ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"];
-  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
-    String(c.rank),
-    clean(c.name),
-    formatNumber(c.comparison.meanCandidateLoss),
-    relativeChangeText(c.comparison),
-    c.inConfidenceSet ? "yes" : "no",
-    formatPValue(c.mcsPValue),
-    formatPValue(c.spaPValue),
-    c.comparison.verdict
-  ]);
-  rows.push([
-    "-",
-    `${clean(set.baseline.name)} (baseline)`,
-    formatNumber(set.baseline.meanLoss),
-    "-",
-    set.baseline.inConfidenceSet ? "yes" : "no",
-    formatPValue(set.baseline.mcsPValue),
-    "-",
-    "-"
-  ]);
-  const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => r[j].length)));
-  const line2 = (cells) => cells.map((cell, j) => j === 1 || j === 3 ? cell.padEnd(widths[j]) : cell.padStart(widths[j])).join("  ");
-  return [
-    "",
-    line2(header),
-    ...rows.map(line2),
-    `SPA (${spa.hypothesis}): lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; reality check ${formatPValue(spa.realityCheck.pValue)}`,
-    `${formatNumber(set.level * 100, 3)}% model confidence set (${set.statistic}): ${set.members.map(clean).join(", ")}`
-  ];
-}
-function clean(text) {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
-}
-
 // src/report/renderStabilityTerminal.ts
 function renderStabilityTerminal(report) {
   const s = report.stability;
@@ -30157,18 +30148,18 @@ function renderStabilityTerminal(report) {
   const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean2(r.firstTimestamp ?? "?")} to ${clean2(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean2(w.start)} to ${clean2(w.end)}`).join(", ")}`}`
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
     );
   }
   return out;
 }
-function clean2(text) {
+function clean(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 
@@ -30180,14 +30171,19 @@ function renderTerminal(report, options) {
   const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
   const out = [];
   out.push(
-    `${paint("1", clean3(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
+    `${paint("1", clean2(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
   );
   out.push(wrap(`${s.lead} ${s.change}`, 100), "");
   out.push(...textTable(s.main, paint));
   out.push("", paint("2", wrap(s.intervalNote, 100)));
-  out.push(...renderCandidatesTerminal(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    out.push("", wrap(candidates.heading, 100));
+    out.push(...textTable({ ...candidates.ranking, header: candidates.shortHeader }, paint));
+    out.push(wrap(candidates.spaSentence, 100, "  "), wrap(candidates.setSentence, 100, "  "));
+  }
   const chart = differenceSeries(view);
-  if (chart !== null) out.push("", clean3(sparklineText(chart)));
+  if (chart !== null) out.push("", clean2(sparklineText(chart)));
   const overTime = renderStabilityTerminal(report);
   if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, "  ")));
   if (s.notes.length > 0) out.push("");
@@ -30198,7 +30194,7 @@ function renderTerminal(report, options) {
   }
   if (s.series !== null) out.push("", wrap(s.series.summary, 100));
   if (s.paths !== null) out.push("", wrap(s.paths.summary, 100));
-  const checks = backtestChecksLines(report, clean3);
+  const checks = backtestChecksLines(report, clean2);
   if (checks.length > 0) out.push("", ...checks);
   for (const r of report.reasons) {
     if (r.startsWith("The candidate lacks")) out.push(wrap(`- ${r}`, 100, "  "));
@@ -30208,7 +30204,7 @@ function renderTerminal(report, options) {
   out.push(
     paint(
       "2",
-      clean3(
+      clean2(
         `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`
       )
     )
@@ -30218,12 +30214,12 @@ function renderTerminal(report, options) {
       out.push(paint("2", wrap(l, 100, "  ")));
     }
   }
-  if (s.changedSettings !== "") out.push(paint("2", clean3(`settings: ${s.changedSettings}`)));
+  if (s.changedSettings !== "") out.push(paint("2", clean2(`settings: ${s.changedSettings}`)));
   return `${out.join("\n")}
 `;
 }
 function textTable(t, paint) {
-  const rows = t.rows.map((r) => r.map(clean3));
+  const rows = t.rows.map((r) => r.map(clean2));
   const widths = t.header.map(
     (h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length))
   );
@@ -30232,11 +30228,11 @@ function textTable(t, paint) {
   ).join("  ").trimEnd();
   return [paint("2", line2(t.header)), ...rows.map(line2)];
 }
-function clean3(text) {
+function clean2(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 function wrap(text, width, indent2 = "") {
-  const words = clean3(text).split(" ");
+  const words = clean2(text).split(" ");
   const lines = [];
   let current = "";
   for (const w of words) {

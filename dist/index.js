@@ -32703,6 +32703,63 @@ function intervalNote(report) {
   return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
 }
 
+// src/report/reportTable.ts
+function table(header2, align2, rows) {
+  return { header: header2, align: align2, rows };
+}
+
+// src/report/candidatesSection.ts
+function candidatesSection(report) {
+  const { candidates, spa, confidenceSet: set, selection } = report;
+  if (candidates === void 0 || spa === void 0 || set === void 0) return null;
+  const level = `${formatNumber(set.level * 100, 3)}%`;
+  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
+  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
+  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
+    String(c.rank),
+    c.name === selection?.preferred ? `${c.name} (preferred)` : c.name,
+    formatNumber(c.comparison.meanCandidateLoss),
+    relativeChangeText(c.comparison),
+    c.inConfidenceSet ? "yes" : "no",
+    formatPValue(c.mcsPValue),
+    formatPValue(c.spaPValue),
+    c.comparison.verdict
+  ]);
+  rows.push([
+    "\u2013",
+    `${set.baseline.name} (baseline)`,
+    formatNumber(set.baseline.meanLoss),
+    "\u2013",
+    set.baseline.inConfidenceSet ? "yes" : "no",
+    formatPValue(set.baseline.mcsPValue),
+    "\u2013",
+    "\u2013"
+  ]);
+  const ranking = table(
+    [
+      "rank",
+      "model",
+      "mean loss",
+      `change against the baseline (${changeLevel})`,
+      `in the ${level} set`,
+      "MCS p-value",
+      `SPA p-value (${direction})`,
+      "own verdict"
+    ],
+    ["right", "left", "right", "left", "left", "right", "right", "left"],
+    rows
+  );
+  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
+  const eliminated = set.eliminationOrder.slice(0, -1).map((name, j) => `${name} (p ${formatPValue(set.stepPValues[j])})`).join(", ");
+  return {
+    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection?.preferred ?? "none"})`,
+    ranking,
+    shortHeader: ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"],
+    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    setSentence: `Model confidence set at ${level} (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.join(", ")}.${eliminated === "" ? "" : ` Eliminated in order: ${eliminated}.`}`
+  };
+}
+
 // src/report/cells.ts
 var LOSS_DIGITS = 4;
 var PERCENT_DIGITS = 3;
@@ -32823,11 +32880,6 @@ function chartCaption(series) {
 }
 function round(x) {
   return Number(x.toFixed(2));
-}
-
-// src/report/reportTable.ts
-function table(header2, align2, rows) {
-  return { header: header2, align: align2, rows };
 }
 
 // src/report/missingRowsSection.ts
@@ -33947,9 +33999,16 @@ function renderHtml(report, options = {}) {
       );
     }
   }
-  const candidatesChart = candidatesChartSvg(report);
-  if (candidatesChart !== "") {
-    out.push("<h2>Candidates</h2>", `<figure>${candidatesChart}</figure>`);
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    const chart2 = candidatesChartSvg(report);
+    out.push(`<h2>${xml(candidates.heading)}</h2>`);
+    if (chart2 !== "") out.push(`<figure>${chart2}</figure>`);
+    out.push(
+      htmlTable(candidates.ranking),
+      `<p>${xml(candidates.spaSentence)}</p>`,
+      `<p>${xml(candidates.setSentence)}</p>`
+    );
   }
   const horizons = view.comparisons.filter(
     (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
@@ -34079,39 +34138,6 @@ function checkLine(check) {
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
 
-// src/report/renderCandidatesMarkdown.ts
-function renderCandidatesMarkdown(report) {
-  const { candidates, spa, confidenceSet: set, selection } = report;
-  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
-  const level = `${formatNumber(set.level * 100, 3)}%`;
-  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
-  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
-  const out = [
-    `**Candidates** (${candidates.length}, ranked by mean loss; preferred: ${escapeMarkdown(selection?.preferred ?? "")})`,
-    "",
-    `| rank | model | mean loss | change against the baseline (${changeLevel}) | in the ${level} set | MCS p-value | SPA p-value (${direction}) | own verdict |`,
-    "|---:|---|---:|---|:---:|---:|---:|---|"
-  ];
-  for (const c of [...candidates].sort((a, b) => a.rank - b.rank)) {
-    const mark = c.name === selection?.preferred ? " (preferred)" : "";
-    out.push(
-      `| ${c.rank} | ${escapeMarkdown(c.name)}${mark} | ${formatNumber(c.comparison.meanCandidateLoss)} | ${relativeChangeText(c.comparison)} | ${c.inConfidenceSet ? "yes" : "no"} | ${formatPValue(c.mcsPValue)} | ${formatPValue(c.spaPValue)} | ${c.comparison.verdict} |`
-    );
-  }
-  out.push(
-    `| \u2013 | ${escapeMarkdown(set.baseline.name)} (baseline) | ${formatNumber(set.baseline.meanLoss)} | \u2013 | ${set.baseline.inConfidenceSet ? "yes" : "no"} | ${formatPValue(set.baseline.mcsPValue)} | \u2013 | \u2013 |`,
-    ""
-  );
-  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
-  out.push(
-    `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
-    "",
-    `Model confidence set (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.map(escapeMarkdown).join(", ")}. Eliminated in order: ${set.eliminationOrder.slice(0, -1).map((name, j) => `${escapeMarkdown(name)} (p ${formatPValue(set.stepPValues[j])})`).join(", ")}.`,
-    ""
-  );
-  return out;
-}
-
 // src/report/renderMarkdown.ts
 function renderMarkdown(report, options = {}) {
   const view = report;
@@ -34123,7 +34149,11 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
   for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
   if (s.notes.length > 0) lines.push("");
-  lines.push(...renderCandidatesMarkdown(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    lines.push(`**${escapeMarkdown(candidates.heading)}**`, "", ...markdownTable(candidates.ranking), "");
+    lines.push(escapeMarkdown(candidates.spaSentence), "", escapeMarkdown(candidates.setSentence), "");
+  }
   const chart = differenceSeries(view);
   if (chart !== null) {
     lines.push(...mermaidChart(chart), "");

@@ -1,4 +1,5 @@
 import { candidatesChartSvg } from './candidatesChartSvg.js';
+import { candidatesSection } from './candidatesSection.js';
 import { percent, relativeInterval } from './cells.js';
 import { chartCaption, differenceSeries, sparklineText } from './differenceChart.js';
 import { missingRowsSection } from './missingRowsSection.js';
@@ -102,9 +103,16 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
     }
   }
 
-  const candidatesChart = candidatesChartSvg(report);
-  if (candidatesChart !== '') {
-    out.push('<h2>Candidates</h2>', `<figure>${candidatesChart}</figure>`);
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    const chart = candidatesChartSvg(report);
+    out.push(`<h2>${xml(candidates.heading)}</h2>`);
+    if (chart !== '') out.push(`<figure>${chart}</figure>`);
+    out.push(
+      htmlTable(candidates.ranking),
+      `<p>${xml(candidates.spaSentence)}</p>`,
+      `<p>${xml(candidates.setSentence)}</p>`,
+    );
   }
 
   const horizons = view.comparisons.filter(
