@@ -28,6 +28,8 @@ export class ByteInterner {
   private last = -1;
   private encoded: Uint8Array = new Uint8Array(0);
   private readonly encoder = new TextEncoder();
+  private lastText: string | null = null;
+  private lastTextId = -1;
 
   /** The id of `source[start, end)`, a new one (with `line` as its first line) if unseen. */
   id(source: Bytes, start: number, end: number, line: number): number {
@@ -72,10 +74,15 @@ export class ByteInterner {
 
   /** The id of a value given as text (a Parquet field), by its UTF-8 bytes. */
   idOfText(text: string, line: number): number {
+    // An id never changes, so the pair of the previous call stays right.
+    if (text === this.lastText) return this.lastTextId;
     if (this.encoded.length < 3 * text.length) this.encoded = new Uint8Array(3 * text.length);
     const { written } = this.encoder.encodeInto(text, this.encoded);
     const bytes = Buffer.from(this.encoded.buffer, 0, written);
-    return this.id(bytes, 0, written, line);
+    const id = this.id(bytes, 0, written, line);
+    this.lastText = text;
+    this.lastTextId = id;
+    return id;
   }
 
   private equal(id: number, source: Uint8Array, start: number, length: number): boolean {

@@ -1,7 +1,5 @@
 import { ByteTokenizer, DEFAULT_LINE_LIMIT } from './byteTokenizer.js';
-import { type Delimiter, delimiterLabel } from './inputFormat.js';
-
-export { DEFAULT_LINE_LIMIT };
+import type { Delimiter } from './inputFormat.js';
 
 /**
  * Receives one record: `fields[0..count-1]` are its fields (the array is reused between calls, so
@@ -19,7 +17,6 @@ export type RecordSink = (fields: string[], count: number, line: number) => void
  */
 export class Tokenizer {
   private readonly bytes: ByteTokenizer;
-  private readonly delimiter: Delimiter;
   private readonly fields: string[] = [];
 
   constructor(
@@ -28,7 +25,6 @@ export class Tokenizer {
     file: string,
     lineLimit: number = DEFAULT_LINE_LIMIT,
   ) {
-    this.delimiter = delimiter;
     const fields = this.fields;
     this.bytes = new ByteTokenizer(
       delimiter,
@@ -49,11 +45,6 @@ export class Tokenizer {
   /** Physical lines consumed so far (complete records and blank lines). */
   get lines(): number {
     return this.bytes.lines;
-  }
-
-  /** How the delimiter is named in messages. */
-  get delimiterName(): string {
-    return delimiterLabel(this.delimiter);
   }
 
   push(chunk: string | Uint8Array): void {
