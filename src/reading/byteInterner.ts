@@ -29,6 +29,7 @@ export class ByteInterner {
   private encoded: Uint8Array = new Uint8Array(0);
   private readonly encoder = new TextEncoder();
   private lastText: string | null = null;
+  private readonly textIds = new Map<string, number>();
   private lastTextId = -1;
 
   /** The id of `source[start, end)`, a new one (with `line` as its first line) if unseen. */
@@ -72,14 +73,19 @@ export class ByteInterner {
     return id;
   }
 
-  /** The id of a value given as text (a Parquet field), by its UTF-8 bytes. */
+  /**
+   * The id of a value given as text (a Parquet field), by its UTF-8 bytes; texts seen before are
+   * found by a map of their own (ids never change, so it stays right).
+   */
   idOfText(text: string, line: number): number {
-    // An id never changes, so the pair of the previous call stays right.
     if (text === this.lastText) return this.lastTextId;
-    if (this.encoded.length < 3 * text.length) this.encoded = new Uint8Array(3 * text.length);
-    const { written } = this.encoder.encodeInto(text, this.encoded);
-    const bytes = Buffer.from(this.encoded.buffer, 0, written);
-    const id = this.id(bytes, 0, written, line);
+    let id = this.textIds.get(text);
+    if (id === undefined) {
+      if (this.encoded.length < 3 * text.length) this.encoded = new Uint8Array(3 * text.length);
+      const { written } = this.encoder.encodeInto(text, this.encoded);
+      id = this.id(Buffer.from(this.encoded.buffer, 0, written), 0, written, line);
+      this.textIds.set(this.labels[id]!, id);
+    }
     this.lastText = text;
     this.lastTextId = id;
     return id;

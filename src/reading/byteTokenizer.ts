@@ -139,17 +139,18 @@ export class ByteTokenizer {
     const limit = this.lineLimit;
     let starts = this.starts;
     let ends = this.ends;
-    let nextQuote = buf.indexOf(QUOTE, pos);
     while (pos < n) {
-      if (nextQuote !== -1 && nextQuote < pos) nextQuote = buf.indexOf(QUOTE, pos);
-      // A record with a quote before its line break takes the slow path.
-      const stop = nextQuote === -1 ? n : nextQuote;
       let count = 0;
       let start = pos;
       let j = pos;
-      for (; j < stop; j++) {
+      let quoted = false;
+      for (; j < n; j++) {
         const c = buf[j]!;
         if (c === LF) break;
+        if (c === QUOTE) {
+          quoted = true;
+          break;
+        }
         if (c === d) {
           if (count + 1 >= starts.length) {
             this.growFields();
@@ -162,8 +163,8 @@ export class ByteTokenizer {
           start = j + 1;
         }
       }
-      if (j === stop) {
-        if (stop === n) break;
+      // A record with a quote before its line break takes the slow path.
+      if (quoted) {
         const end = this.slowRecord(buf, pos);
         if (end < 0) break;
         pos = end;
@@ -171,6 +172,7 @@ export class ByteTokenizer {
         ends = this.ends;
         continue;
       }
+      if (j === n) break;
       if (j - pos > limit && utf16Length(buf, pos, j) > limit) {
         this.tooLong(buf, pos, this.linesDone + 1);
       }
@@ -217,10 +219,13 @@ export class ByteTokenizer {
         const fieldStart = i;
         const outStart = written;
         for (;;) {
-          const q = buf.indexOf(QUOTE, i);
-          if (q === -1 || q + 1 >= n) return -1;
-          buf.copy(out, written, i, q);
-          written += q - i;
+          let q = i;
+          for (; q < n; q++) {
+            const c = buf[q]!;
+            if (c === QUOTE) break;
+            out[written++] = c;
+          }
+          if (q + 1 >= n) return -1;
           if (buf[q + 1] === QUOTE) {
             out[written++] = QUOTE;
             i = q + 2;
@@ -267,9 +272,8 @@ export class ByteTokenizer {
       }
       if (j >= n) return -1;
       const end = buf[j] === d ? j : j > i && buf[j - 1] === CR ? j - 1 : j;
-      buf.copy(out, written, i, end);
       starts[count] = written;
-      written += end - i;
+      for (let k = i; k < end; k++) out[written++] = buf[k]!;
       ends[count] = written;
       count++;
       const last = buf[j] !== d;

@@ -244,11 +244,13 @@ export class ForecastTableReader {
     const width = this.header!.names.length;
     if (count !== width) this.fieldCount(fields.slice(0, Math.min(count, 50)), count, line);
     const r = this.nextRow(line);
-    for (const c of this.columns) {
+    const columns = this.columns;
+    for (let k = 0; k < columns.length; k++) {
+      const c = columns[k]!;
       const field = fields[c.field]!;
       if (c.kind === LABEL) {
         const text = typeof field === 'string' ? field : String(field);
-        this.checkLabel(c, text, line);
+        if (text.length === 0 || text.length > MAX_LABEL) this.checkLabel(c, text, line);
         c.ints[r] = c.labels!.idOfText(text, line);
       } else if (c.kind === HORIZON) {
         const value =
