@@ -63,6 +63,11 @@ export class ByteTokenizer {
   /** Fields of a record with quotes, unquoted. */
   private scratch: Bytes = EMPTY;
   private linesDone = 0;
+  /** Bytes pushed so far, and the offset in the input of the buffer being read. */
+  private pushed = 0;
+  private base = 0;
+  /** End of the last record handed over, in the buffer being read. */
+  private recordEnd = 0;
   private started = false;
   private readonly encoder = new Utf8Encoder();
 
@@ -83,9 +88,17 @@ export class ByteTokenizer {
     return this.linesDone;
   }
 
+  /** Bytes of the input up to the end of the last record handed over (exact inside the sink). */
+  get bytesDone(): number {
+    return this.base + this.recordEnd;
+  }
+
   push(chunk: string | Uint8Array): void {
     const bytes = typeof chunk === 'string' ? this.encoder.encode(chunk) : asBytes(chunk);
     let buf = bytes;
+    this.base = this.pushed - this.carryLength;
+    this.pushed += bytes.length;
+    this.recordEnd = 0;
     if (this.carryLength > 0) {
       const n = this.carryLength + bytes.length;
       if (this.joined.length < n) {
@@ -187,6 +200,7 @@ export class ByteTokenizer {
       starts[count] = start;
       ends[count] = lineEnd;
       count++;
+      this.recordEnd = j + 1;
       this.sink(buf, starts, ends, count, this.linesDone);
       pos = j + 1;
     }
@@ -285,6 +299,7 @@ export class ByteTokenizer {
       this.tooLong(buf, pos, line);
     }
     this.linesDone += 1 + newlines;
+    this.recordEnd = i;
     this.sink(out, this.starts, this.ends, count, line);
     return i;
   }

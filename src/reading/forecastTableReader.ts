@@ -75,6 +75,7 @@ export class ForecastTableReader {
   private capacity = 0;
   private lines: Int32Array = new Int32Array(0);
   private keys: RowKeySet | null = null;
+  private expectedBytes = 0;
 
   constructor(path: string, options: ParseOptions) {
     this.path = path;
@@ -115,6 +116,11 @@ export class ForecastTableReader {
 
   push(chunk: string | Uint8Array): void {
     this.tokenizer.push(chunk);
+  }
+
+  /** The size of the text input, if known: the columns then grow to the rows it holds. */
+  expectBytes(total: number): void {
+    this.expectedBytes = total;
   }
 
   /** Physical lines fully read so far. */
@@ -170,7 +176,7 @@ export class ForecastTableReader {
   private nextRow(line: number): number {
     const r = this.rows;
     if (r === this.capacity) {
-      const capacity = Math.max(1024, this.capacity * 2);
+      const capacity = this.nextCapacity(r);
       const lines = new Int32Array(capacity);
       lines.set(this.lines);
       this.lines = lines;
@@ -180,6 +186,20 @@ export class ForecastTableReader {
     }
     this.lines[r] = line;
     return r;
+  }
+
+  /**
+   * Room for the rows after row `r`: twice as many, or — once the size of the input is known and
+   * a few thousand rows are read — the rows the whole input holds at the bytes per row so far,
+   * plus 2%, but at least half as many again and at most four times as many (so a huge file that
+   * fails early has not reserved its whole table).
+   */
+  private nextCapacity(r: number): number {
+    const doubled = Math.max(1024, 2 * this.capacity);
+    const done = this.tokenizer.bytesDone;
+    if (this.expectedBytes <= 0 || r < 4096 || done <= 0) return doubled;
+    const estimate = Math.ceil(((r * this.expectedBytes) / done) * 1.02) + 1024;
+    return Math.min(4 * this.capacity, Math.max(this.capacity + (this.capacity >> 1), estimate));
   }
 
   /** Ends a row: a key seen before is refused at once, naming both lines. */

@@ -40,7 +40,11 @@ export async function readForecastFile(path: string, options: ReadOptions): Prom
   const sha256 =
     format === 'parquet'
       ? await streamParquetFile(path, reader, options.onProgress)
-      : await streamTextFile(path, implied.gzip, reader, options.onProgress);
+      : await streamTextFile(path, implied.gzip, reader, (bytesRead, totalBytes) => {
+          // The stored size is the text's size unless it is gzipped.
+          if (!implied.gzip) reader.expectBytes(totalBytes);
+          options.onProgress?.(bytesRead, totalBytes);
+        });
   return reader.finish(sha256);
 }
 
