@@ -13161,6 +13161,7 @@ function orderLossSeries(table2, timeFormat = "auto") {
 // src/reading/inputFormat.ts
 var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
 var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
+var DECIMAL_MARKS = [".", ","];
 function delimiterFor(name, tsv) {
   if (name === "auto") return tsv ? "	" : ",";
   return name === "tab" ? "	" : name;
@@ -22988,10 +22989,63 @@ function formatPValue(p) {
   return p.toFixed(4);
 }
 
+// src/multiplicity/testFamily.ts
+function testFamily(pValues, what) {
+  const positions = [];
+  const values = [];
+  pValues.forEach((p, i) => {
+    if (p === null) return;
+    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
+      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
+    }
+    positions.push(i);
+    values.push(p);
+  });
+  return { positions, values };
+}
+function ascendingOrder(values) {
+  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
+}
+
+// src/multiplicity/benjaminiHochbergAdjust.ts
+function benjaminiHochbergAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  const order = ascendingOrder(values);
+  let running = 1;
+  for (let i = m - 1; i >= 0; i--) {
+    const k = order[i];
+    running = Math.min(running, m / (i + 1) * values[k]);
+    adjusted[positions[k]] = running;
+  }
+  return adjusted;
+}
+
+// src/multiplicity/holmAdjust.ts
+function holmAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "holmAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  let running = 0;
+  ascendingOrder(values).forEach((k, i) => {
+    running = Math.max(running, Math.min(1, (m - i) * values[k]));
+    adjusted[positions[k]] = running;
+  });
+  return adjusted;
+}
+
+// src/multiplicity/adjustmentMethod.ts
+var ADJUSTMENT_METHODS = ["holm", "bh"];
+var ADJUSTMENTS = {
+  holm: { name: "Holm", adjust: holmAdjust },
+  bh: { name: "Benjamini\u2013Hochberg", adjust: benjaminiHochbergAdjust }
+};
+
 // src/decision/decideAdjusted.ts
 function decideAdjusted(input) {
   const { hypothesis, alpha, adjustedPValue: p } = input;
-  const name = input.method === "holm" ? "Holm-adjusted" : "Benjamini\u2013Hochberg-adjusted";
+  const name = `${ADJUSTMENTS[input.method].name}-adjusted`;
   if (p === null) {
     return {
       verdict: "warn",
@@ -23014,10 +23068,20 @@ function decideAdjusted(input) {
   return { verdict, reasons, rejected };
 }
 
+// src/decision/policy.ts
+var POLICIES = ["no-regression", "non-inferiority", "superiority"];
+var MARGIN_SIGN = {
+  "no-regression": 1,
+  "non-inferiority": 1,
+  superiority: -1
+};
+var AGREEMENTS = ["both", "either", "dm", "bootstrap"];
+var MARGIN_KINDS = ["relative", "absolute"];
+var SHORT_DATA_VERDICTS = ["warn", "fail"];
+
 // src/decision/hypothesis.ts
 function hypothesisFor(policy, margin, kind) {
-  const better = policy === "superiority";
-  const signed = better ? -margin : margin;
+  const signed = MARGIN_SIGN[policy] * margin;
   const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
   const base = {
     baselineFactor: kind === "relative" ? 1 + signed : 1,
@@ -23134,6 +23198,7 @@ var POINT_LOSSES = {
   ape: absolutePercentageError,
   sape: symmetricAbsolutePercentageError
 };
+var ZERO_ACTUALS_RULES = ["error", "skip"];
 function computeRowLosses(panel, loss, zeroActuals, interval = null) {
   const n = panel.size;
   const baseline = new Float64Array(n);
@@ -23245,52 +23310,6 @@ function commonQuantiles(baseline, candidate) {
   return pairs;
 }
 
-// src/multiplicity/testFamily.ts
-function testFamily(pValues, what) {
-  const positions = [];
-  const values = [];
-  pValues.forEach((p, i) => {
-    if (p === null) return;
-    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
-      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
-    }
-    positions.push(i);
-    values.push(p);
-  });
-  return { positions, values };
-}
-function ascendingOrder(values) {
-  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
-}
-
-// src/multiplicity/benjaminiHochbergAdjust.ts
-function benjaminiHochbergAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  const order = ascendingOrder(values);
-  let running = 1;
-  for (let i = m - 1; i >= 0; i--) {
-    const k = order[i];
-    running = Math.min(running, m / (i + 1) * values[k]);
-    adjusted[positions[k]] = running;
-  }
-  return adjusted;
-}
-
-// src/multiplicity/holmAdjust.ts
-function holmAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "holmAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  let running = 0;
-  ascendingOrder(values).forEach((k, i) => {
-    running = Math.max(running, Math.min(1, (m - i) * values[k]));
-    adjusted[positions[k]] = running;
-  });
-  return adjusted;
-}
-
 // src/decision/verdict.ts
 function worstVerdict(verdicts) {
   if (verdicts.includes("fail")) return "fail";
@@ -23313,6 +23332,7 @@ var CHECK_IDS = [
   "exact-predictions"
 ];
 var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
+var CHECK_MODES = ["enforce", "warn", "report"];
 var MAX_EXAMPLES = 5;
 var FindingCollector = class {
   count = 0;
@@ -23429,6 +23449,7 @@ function plural(count, unit) {
 }
 
 // src/stability/stabilityFinding.ts
+var STABILITY_GATE_MODES = ["off", "warn", "fail"];
 function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
   if (stability === null) return { effect: null, headline: "", reasons: [] };
   const sentences = [];
@@ -23964,6 +23985,7 @@ function prewhitenedLongRunVariance(y, rule, horizon) {
 
 // src/stability/fluctuationCriticalValues.ts
 var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var FLUCTUATION_SIDES = ["one", "two"];
 var TABLE = {
   two: [
     { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
@@ -26275,7 +26297,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
       bootstrap: false
     });
   });
-  const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
+  const adjust = ADJUSTMENTS[settings.adjust].adjust;
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
   const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
@@ -27161,6 +27183,7 @@ function lastTime(tables, kind) {
 }
 
 // src/statistics/modelConfidenceSet.ts
+var CONFIDENCE_SET_STATISTICS = ["range", "max"];
 function modelConfidenceSet(input) {
   const { means, deviations, statistic, alpha } = input;
   const m = means.length;
@@ -27289,6 +27312,7 @@ function commonBlockLength(baseline, candidates, rule) {
 }
 
 // src/candidates/decideCandidates.ts
+var SELECTION_RULES = ["preferred-in-set", "none-worse", "some-better"];
 function decideCandidates(input) {
   const { rule, alpha, setAlpha, preferred, spaPValue } = input;
   const reasons = [];
@@ -28792,7 +28816,7 @@ function differenceSeries(report) {
   );
   if (periods.length < 2) return null;
   const p = report.policy;
-  const margin = p.marginKind === "relative" && p.margin > 0 ? (p.policy === "superiority" ? -p.margin : p.margin) * 100 : null;
+  const margin = p.marginKind === "relative" && p.margin > 0 ? MARGIN_SIGN[p.policy] * p.margin * 100 : null;
   return {
     labels: periods.map((x) => periodLabel(x.start)),
     values: periods.map((x) => x.relativeDifference * 100),
@@ -29012,6 +29036,13 @@ function canonicalLoss(name) {
   return LOSS_ALIASES[name] ?? name;
 }
 
+// src/scaling/pooling.ts
+var POOLINGS = ["raw", "scaled"];
+var SCALE_KINDS = ["baseline", "seasonal-naive"];
+
+// src/statistics/varianceEstimator.ts
+var VARIANCE_ESTIMATORS = ["ewc-ar1", "ewc", "bartlett", "uniform"];
+
 // src/settings/options.ts
 var ENGINE_OPTIONS = [
   {
@@ -29049,7 +29080,7 @@ var ENGINE_OPTIONS = [
   {
     name: "selection-rule",
     defaultValue: "preferred-in-set",
-    choices: ["preferred-in-set", "none-worse", "some-better"],
+    choices: SELECTION_RULES,
     help: "with several candidates: preferred-in-set passes when the preferred candidate is in the model confidence set and passes its own comparison; none-worse fails on evidence that some candidate is worse than the baseline (SPA test); some-better passes only on evidence that some candidate is better (SPA test)"
   },
   {
@@ -29061,7 +29092,7 @@ var ENGINE_OPTIONS = [
   {
     name: "set-statistic",
     defaultValue: "max",
-    choices: ["range", "max"],
+    choices: CONFIDENCE_SET_STATISTICS,
     help: "with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)"
   },
   {
@@ -29109,7 +29140,7 @@ var ENGINE_OPTIONS = [
   {
     name: "decimal",
     defaultValue: ".",
-    choices: [".", ","],
+    choices: DECIMAL_MARKS,
     help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter'
   },
   {
@@ -29133,7 +29164,7 @@ var ENGINE_OPTIONS = [
   {
     name: "zero-actuals",
     defaultValue: "error",
-    choices: ["error", "skip"],
+    choices: ZERO_ACTUALS_RULES,
     help: "with ape: refuse rows whose actual is 0, or skip and count them"
   },
   {
@@ -29151,25 +29182,25 @@ var ENGINE_OPTIONS = [
   {
     name: "margin-kind",
     defaultValue: "relative",
-    choices: ["relative", "absolute"],
+    choices: MARGIN_KINDS,
     help: "relative (fraction of the baseline loss) or absolute (loss units)"
   },
   {
     name: "policy",
     defaultValue: "no-regression",
-    choices: ["no-regression", "non-inferiority", "superiority"],
+    choices: POLICIES,
     help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin"
   },
   {
     name: "agreement",
     defaultValue: "both",
-    choices: ["both", "either", "dm", "bootstrap"],
+    choices: AGREEMENTS,
     help: "which tests must reject for the decision; with both, a split verdict is a warning"
   },
   {
     name: "variance",
     defaultValue: "ewc-ar1",
-    choices: ["ewc-ar1", "ewc", "bartlett", "uniform"],
+    choices: VARIANCE_ESTIMATORS,
     help: "long-run variance for Diebold\u2013Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4\xB7n^(2/3) terms), bartlett (Newey\u2013West), uniform"
   },
   {
@@ -29206,7 +29237,7 @@ var ENGINE_OPTIONS = [
   {
     name: "short-data",
     defaultValue: "warn",
-    choices: ["warn", "fail"],
+    choices: SHORT_DATA_VERDICTS,
     help: "verdict when there are fewer time points than --min-points"
   },
   {
@@ -29224,13 +29255,13 @@ var ENGINE_OPTIONS = [
   {
     name: "pooling",
     defaultValue: "raw",
-    choices: ["raw", "scaled"],
+    choices: POOLINGS,
     help: "pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)"
   },
   {
     name: "scale",
     defaultValue: "baseline",
-    choices: ["baseline", "seasonal-naive"],
+    choices: SCALE_KINDS,
     help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)"
   },
   {
@@ -29254,7 +29285,7 @@ var ENGINE_OPTIONS = [
   {
     name: "adjust",
     defaultValue: "holm",
-    choices: ["holm", "bh"],
+    choices: ADJUSTMENT_METHODS,
     help: "multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)"
   },
   {
@@ -29278,13 +29309,13 @@ var ENGINE_OPTIONS = [
   {
     name: "fluctuation-sides",
     defaultValue: "one",
-    choices: ["one", "two"],
+    choices: FLUCTUATION_SIDES,
     help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
   },
   {
     name: "stability-gate",
     defaultValue: "warn",
-    choices: ["off", "warn", "fail"],
+    choices: STABILITY_GATE_MODES,
     help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
   },
   {
@@ -29308,7 +29339,7 @@ var ENGINE_OPTIONS = [
   {
     name: "backtest-checks",
     defaultValue: "enforce",
-    choices: ["enforce", "warn", "report"],
+    choices: CHECK_MODES,
     help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
   },
   {
@@ -29701,7 +29732,7 @@ var SERIES_ROWS = 50;
 function seriesSection(report) {
   const s = report.seriesSummary;
   if (s === null) return null;
-  const method = s.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
+  const method = ADJUSTMENTS[s.method].name;
   const rows = report.comparisons.filter((c) => c.series !== "all").sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));
   const shown = rows.length <= SERIES_ROWS ? rows : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
   const summary = `${s.series} series: ${s.worse} worse, ${s.better} better, ${s.noEvidence} with no clear difference (Diebold\u2013Mariano on L_candidate \u2212 L_baseline per series, ${method}-adjusted, \u03B1 = ${s.alpha}; whatever the policy, "worse" needs evidence of a higher loss and "better" of a lower one).${shown.length < rows.length ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.` : ""}`;
@@ -29949,7 +29980,7 @@ function renderHtml(report, options = {}) {
 function marginPercent(report) {
   const p = report.policy;
   if (p.marginKind !== "relative" || p.margin === 0) return null;
-  return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
+  return MARGIN_SIGN[p.policy] * p.margin * 100;
 }
 function htmlTable(t) {
   const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text)}</${tag}>`;
@@ -30263,6 +30294,12 @@ function resolveSettings(raw, label) {
     }
     return text;
   };
+  const choice = (name, values) => {
+    const text = value(name);
+    const found = values.find((v) => v === text);
+    if (found === void 0) throw new Error(`option ${name} lists other choices than ${values}`);
+    return found;
+  };
   const optional = (name) => {
     const given = raw[name]?.trim();
     return given === void 0 || given === "" ? null : given;
@@ -30329,46 +30366,46 @@ function resolveSettings(raw, label) {
     modelColumn,
     baselineModel,
     preferred: optional("preferred"),
-    selectionRule: value("selection-rule"),
+    selectionRule: choice("selection-rule", SELECTION_RULES),
     setAlpha: number("set-alpha", (x) => x > 0 && x < 1, "a number between 0 and 1, such as 0.1"),
-    setStatistic: value("set-statistic"),
+    setStatistic: choice("set-statistic", CONFIDENCE_SET_STATISTICS),
     losses,
     actuals: optional("actuals"),
     columns: parseColumnMapping(value("columns"), label("columns")),
     baselineColumns: parseColumnMapping(value("baseline-columns"), label("baseline-columns")),
     candidateColumns: parseColumnMapping(value("candidate-columns"), label("candidate-columns")),
-    format: value("format"),
-    delimiter: value("delimiter"),
-    decimal: parseDecimalMark(value("decimal"), value("delimiter"), label),
-    timeFormat: value("time-format"),
+    format: choice("format", INPUT_FORMATS),
+    delimiter: choice("delimiter", DELIMITER_NAMES),
+    decimal: parseDecimalMark(choice("decimal", DECIMAL_MARKS), value("delimiter"), label),
+    timeFormat: choice("time-format", TIME_FORMAT_NAMES),
     lineLimit: integer("line-limit", 1024, 1 << 28),
     loss: canonicalLoss(value("loss")),
-    zeroActuals: value("zero-actuals"),
+    zeroActuals: choice("zero-actuals", ZERO_ACTUALS_RULES),
     alpha,
     margin: parseMargin(value("margin"), value("margin-kind"), label),
-    marginKind: value("margin-kind"),
-    policy: value("policy"),
-    agreement: value("agreement"),
-    variance: value("variance"),
+    marginKind: choice("margin-kind", MARGIN_KINDS),
+    policy: choice("policy", POLICIES),
+    agreement: choice("agreement", AGREEMENTS),
+    variance: choice("variance", VARIANCE_ESTIMATORS),
     lag: parseLag(value("lag"), label("lag")),
     blockLength: parseBlockLength(value("block-length"), label("block-length")),
     resamples: integer("resamples", 99, 1e7),
     seed: integer("seed", 0, 2 ** 31 - 1),
     confidence: optional("confidence") === null ? defaultConfidence(alpha) : number("confidence", (x) => x > 0.5 && x < 1, "a number between 0.5 and 1, such as 0.9"),
     minPoints: integer("min-points", 1),
-    shortData: value("short-data"),
+    shortData: choice("short-data", SHORT_DATA_VERDICTS),
     allowMissing: bool("allow-missing"),
     interval: parseInterval(
       value("interval"),
       label("interval"),
       canonicalLoss(value("loss")) === "interval"
     ),
-    pooling: value("pooling"),
-    scale: value("scale"),
+    pooling: choice("pooling", POOLINGS),
+    scale: choice("scale", SCALE_KINDS),
     history: optional("history"),
     season: integer("season", 1),
     weights: bool("weights"),
-    adjust: value("adjust"),
+    adjust: choice("adjust", ADJUSTMENT_METHODS),
     top: integer("top", 0, 1e4),
     recent: parseRecentWindow(value("recent"), label("recent")),
     fluctuationWindow: number(
@@ -30376,12 +30413,12 @@ function resolveSettings(raw, label) {
       (x) => x >= 0.1 && x <= 0.9,
       "a number from 0.1 to 0.9 (the window as a fraction of the time points)"
     ),
-    fluctuationSides: value("fluctuation-sides"),
-    stabilityGate: value("stability-gate"),
+    fluctuationSides: choice("fluctuation-sides", FLUCTUATION_SIDES),
+    stabilityGate: choice("stability-gate", STABILITY_GATE_MODES),
     frequency: parseFrequencyOption(value("frequency"), label("frequency")),
     folds: optional("folds"),
     embargo: integer("embargo", 0, 1e6),
-    backtestChecks: value("backtest-checks"),
+    backtestChecks: choice("backtest-checks", CHECK_MODES),
     json: optional("json"),
     markdown: optional("markdown"),
     html: optional("html")

@@ -1,5 +1,5 @@
 import { echo, InputError } from '../core/inputError.js';
-import type { FileSummary } from '../core/panel.js';
+import type { FileSummary, FileSummaryRole } from '../core/panel.js';
 import { ByteTokenizer } from './byteTokenizer.js';
 import { type ColumnMapping, checkDistinctNames } from './columnMapping.js';
 import {
@@ -16,7 +16,7 @@ import {
 import { type Header, resolveHeader } from './forecastHeader.js';
 import type { ForecastTable } from './forecastTable.js';
 import { type TextDialect, type TextFormat, textDialect } from './formatDetection.js';
-import type { Delimiter } from './inputFormat.js';
+import type { DecimalMark, Delimiter } from './inputFormat.js';
 import {
   horizonFromBytes,
   parseDecimal,
@@ -27,7 +27,8 @@ import {
 import { RowKeySet } from './rowKeySet.js';
 import { type Bytes, utf16Length } from './utf8.js';
 
-export type FileRole = 'baseline' | 'candidate' | 'actuals';
+/** The part a forecast file plays (a loss file is read elsewhere). */
+export type FileRole = Exclude<FileSummaryRole, 'losses'>;
 /**
  * Longest key value (series, timestamp, origin, path). Distinct key values are kept for the whole
  * file, so a cap on them (with the line limit and duplicate keys found while reading) bounds the
@@ -51,7 +52,7 @@ export interface ParseOptions {
   /** Field separator; overrides the one `format` implies. */
   readonly delimiter?: Delimiter;
   /** Decimal mark of numbers: "." (default) or "," (then the delimiter must not be a comma). */
-  readonly decimal?: '.' | ',';
+  readonly decimal?: DecimalMark;
   /** Longest record in characters (default 1 MiB). */
   readonly lineLimit?: number;
 }

@@ -1,5 +1,5 @@
 import { InputError } from '../core/inputError.js';
-import type { Delimiter } from './inputFormat.js';
+import type { DecimalMark, Delimiter } from './inputFormat.js';
 
 /**
  * What every file reader decides before reading: the format a file name implies, and the text
@@ -33,7 +33,7 @@ export interface TextDialect {
  */
 export function textDialect(
   file: string,
-  options: { format?: TextFormat; delimiter?: Delimiter; decimal?: '.' | ',' },
+  options: { format?: TextFormat; delimiter?: Delimiter; decimal?: DecimalMark },
 ): TextDialect {
   const delimiter = options.delimiter ?? (options.format === 'tsv' ? '\t' : ',');
   const decimalComma = options.decimal === ',';

@@ -3,7 +3,7 @@ import type { FileSummary } from '../core/panel.js';
 import { MAX_LOSS } from '../losses/lossMagnitude.js';
 import type { LabelColumn } from './forecastTable.js';
 import { type TextFormat, textDialect } from './formatDetection.js';
-import type { Delimiter } from './inputFormat.js';
+import type { DecimalMark, Delimiter } from './inputFormat.js';
 import { parseDecimal, parseDecimalComma } from './numbers.js';
 import { Tokenizer } from './tokenizer.js';
 
@@ -57,7 +57,7 @@ export class LossSeriesReader {
       format: TextFormat;
       timestampColumn?: string;
       delimiter?: Delimiter;
-      decimal?: '.' | ',';
+      decimal?: DecimalMark;
       lineLimit?: number;
     },
   ) {

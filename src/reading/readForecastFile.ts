@@ -6,9 +6,11 @@ import type { ColumnMapping } from './columnMapping.js';
 import type { ForecastTable } from './forecastTable.js';
 import { type FileRole, ForecastTableReader } from './forecastTableReader.js';
 import { type FileFormat, formatFromPath, type TextFormat } from './formatDetection.js';
-import { type DelimiterName, delimiterFor } from './inputFormat.js';
+import { type DecimalMark, type DelimiterName, delimiterFor } from './inputFormat.js';
 import { streamParquetFile } from './streamParquetFile.js';
 import { streamTextFile } from './streamTextFile.js';
+
+export type { FileRole } from './forecastTableReader.js';
 
 export interface ReadOptions {
   readonly role: FileRole;
@@ -19,7 +21,7 @@ export interface ReadOptions {
   readonly requireActual?: boolean;
   /** CSV dialect (ignored for Parquet). */
   readonly delimiter?: DelimiterName;
-  readonly decimal?: '.' | ',';
+  readonly decimal?: DecimalMark;
   readonly lineLimit?: number;
   /** Called after each chunk of stored bytes with the bytes read so far and the file size. */
   readonly onProgress?: (bytesRead: number, totalBytes: number) => void;
@@ -48,7 +50,7 @@ export async function readForecastFile(path: string, options: ReadOptions): Prom
   return reader.finish(sha256);
 }
 
-function withDialect(options: ReadOptions): { decimal?: '.' | ','; lineLimit?: number } {
+function withDialect(options: ReadOptions): { decimal?: DecimalMark; lineLimit?: number } {
   return {
     ...(options.decimal === undefined ? {} : { decimal: options.decimal }),
     ...(options.lineLimit === undefined ? {} : { lineLimit: options.lineLimit }),

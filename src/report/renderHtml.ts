@@ -1,3 +1,4 @@
+import { MARGIN_SIGN } from '../decision/policy.js';
 import { candidatesChartSvg } from './candidatesChartSvg.js';
 import { candidatesSection } from './candidatesSection.js';
 import { percent, relativeInterval } from './cells.js';
@@ -202,7 +203,7 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
 function marginPercent(report: ReportView): number | null {
   const p = report.policy;
   if (p.marginKind !== 'relative' || p.margin === 0) return null;
-  return (p.policy === 'superiority' ? -p.margin : p.margin) * 100;
+  return MARGIN_SIGN[p.policy] * p.margin * 100;
 }
 
 function htmlTable(t: ReportTable): string {
