@@ -1,6 +1,7 @@
 // One tokenizer run for the benchmark: streams the files given on the command line through the
-// file edge and the byte tokenizer alone (no number parsing, no keys, no table) and prints the
-// CSV bytes read (after gunzip) and the wall time in ms. Usage (after bundling, as bench/run.mjs does for its cases):
+// file edge (read, sha256, gunzip, UTF-8 check) and the byte tokenizer alone (no number parsing,
+// no keys, no table) and prints one JSON line: the CSV bytes tokenized (after gunzip), the wall
+// time in ms and the CPU time in ms. Bundle it as the other cases are bundled, then
 //   node tokenizerCase.mjs FILE...
 import { ByteTokenizer } from '../src/reading/byteTokenizer.js';
 import { formatFromPath } from '../src/reading/formatDetection.js';
