@@ -244,9 +244,13 @@ export function printPeers({ peers, log, fmt, large, mean }) {
   }
   const tokenizer = r['tokenizer alone, one thread'];
   if (tokenizer !== undefined) {
-    const mbps = tokenizer.out.bytes / 1e6 / (tokenizer.out.ms / 1000);
+    // Per core: from the case's own CPU time when it reports one (the wall time on a shared
+    // machine also holds the time spent waiting for a core).
+    const { bytes, ms, cpuMs } = tokenizer.out;
+    const mbps = (t) => bytes / 1e6 / (t / 1000);
+    const perCore = mbps(cpuMs ?? ms);
     log(
-      `   target: tokenizer alone ≥ ${TARGETS.tokenizerMBps} MB/s per core: ${fmt(mbps)} MB/s (last run; median ${s(tokenizer.inner)} for ${fmt(tokenizer.out.bytes / 1e6)} MB): ${verdict(mbps >= TARGETS.tokenizerMBps)}`,
+      `   target: tokenizer alone ≥ ${TARGETS.tokenizerMBps} MB/s per core: ${fmt(perCore)} MB/s of CPU, ${fmt(mbps(ms))} MB/s of wall time (last run, ${fmt(bytes / 1e6)} MB): ${verdict(perCore >= TARGETS.tokenizerMBps)}`,
     );
   } else {
     log('   tokenizer alone: bench/tokenizerCase.ts is not there yet');
