@@ -20,11 +20,10 @@ import { type ReadReply, type ReadRequest, rebuildError } from './readingMessage
  * Files are read on worker threads only when at least two of them have this many bytes (as
  * stored). Below it the calling thread reads them one after the other. Measured with
  * `npm run bench` on 2 cores (docs/performance.md, "Reading both files at once"): a reading
- * worker costs 0.05–0.15 s of CPU (thread start, loading its bundle, compiling the reader again)
- * and reading proceeds at about 75 MB/s of CPU per thread, so with a free core the worker's file
- * is back before the calling thread's from about 5–10 MB per file; 16 MiB is about twice that, so
- * that below it nothing is lost when the second core is busy with other work (where reading at
- * once can only add the worker's cost).
+ * worker costs 0.05–0.15 s of CPU (thread start, loading its bundle, warming the reader up again),
+ * and reading two equal files at once, against one after the other, lost below 8 MiB per file
+ * (0.50× at 2 MiB, 0.79× at 8 MiB) and won from 15 MiB (1.18–1.30× at 15–38 MiB). 16 MiB keeps
+ * small inputs on one thread, where nothing is lost when the second core is busy with other work.
  */
 export const MINIMUM_PARALLEL_FILE_BYTES = 16 * 2 ** 20;
 
