@@ -10,14 +10,19 @@ export interface KeyComponent {
   readonly cardinality: number;
 }
 
-export function sortByKey(size: number, components: readonly KeyComponent[]): Int32Array {
+/**
+ * The row order that sorts the key. `codes`, when given, are the rows' key codes (see keyCodes):
+ * if they are already ascending (files are often written in key order) the identity is the
+ * answer without sorting.
+ */
+export function sortByKey(
+  size: number,
+  components: readonly KeyComponent[],
+  codes?: Float64Array,
+): Int32Array {
   let order = new Int32Array(size);
   for (let i = 0; i < size; i++) order[i] = i;
-  // Files are often written in key order already: then the identity is the answer.
-  let sorted = true;
-  for (let i = 1; i < size && sorted; i++)
-    sorted = compareKeys(components, i - 1, components, i) <= 0;
-  if (sorted) return order;
+  if (codes !== undefined && isAscending(codes)) return order;
   let next = new Int32Array(size);
   for (let c = components.length - 1; c >= 0; c--) {
     const { values, cardinality } = components[c]!;
@@ -36,17 +41,7 @@ export function sortByKey(size: number, components: readonly KeyComponent[]): In
   return order;
 }
 
-/** Compares the keys of row a and row b on the first `depth` components. */
-export function compareKeys(
-  components: readonly KeyComponent[],
-  a: number,
-  other: readonly KeyComponent[],
-  b: number,
-  depth: number = components.length,
-): number {
-  for (let c = 0; c < depth; c++) {
-    const d = components[c]!.values[a]! - other[c]!.values[b]!;
-    if (d !== 0) return d;
-  }
-  return 0;
+function isAscending(codes: Float64Array): boolean {
+  for (let i = 1; i < codes.length; i++) if (codes[i - 1]! > codes[i]!) return false;
+  return true;
 }

@@ -1,0 +1,69 @@
+import { type KeyColumns, type KeyPart, partColumn } from './keyLayout.js';
+import { sortByKey } from './keyOrder.js';
+
+/**
+ * One number per row that orders and matches rows as their whole key does: keys compare as
+ * their codes compare, and equal keys have equal codes, across all the files given. Then sorting,
+ * duplicate checks and joins compare one number per row instead of a key part by part.
+ *
+ * The code is the mixed-radix number of the part ids (series most significant) when the product
+ * of the parts' cardinalities is below 2^53, so every code is an exact double; otherwise (many
+ * origins × paths × …) it is the rank of the key among the distinct keys of all the files,
+ * found by sorting them together (sortByKey).
+ */
+export function keyCodes(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Float64Array[] {
+  let product = 1;
+  for (const part of parts) product *= part.cardinality;
+  return product <= Number.MAX_SAFE_INTEGER ? mixedRadix(parts, keys) : denseRanks(parts, keys);
+}
+
+function mixedRadix(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Float64Array[] {
+  return keys.map((k) => {
+    const codes = new Float64Array(k.size);
+    for (const part of parts) {
+      if (part.cardinality <= 1) continue; // every id is 0
+      const ids = partColumn(k, part.name);
+      const radix = part.cardinality;
+      for (let i = 0; i < k.size; i++) codes[i] = codes[i]! * radix + ids[i]!;
+    }
+    return codes;
+  });
+}
+
+function denseRanks(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Float64Array[] {
+  let total = 0;
+  for (const k of keys) total += k.size;
+  // All files' rows in one list, part by part.
+  const components = parts.map((part) => {
+    const values = new Int32Array(total);
+    let at = 0;
+    for (const k of keys) {
+      values.set(partColumn(k, part.name), at);
+      at += k.size;
+    }
+    return { values, cardinality: part.cardinality };
+  });
+  const order = sortByKey(total, components);
+  const rank = new Float64Array(total);
+  let current = -1;
+  for (let i = 0; i < total; i++) {
+    const row = order[i]!;
+    if (i === 0 || !sameKey(components, order[i - 1]!, row)) current++;
+    rank[row] = current;
+  }
+  let at = 0;
+  return keys.map((k) => {
+    const codes = rank.slice(at, at + k.size);
+    at += k.size;
+    return codes;
+  });
+}
+
+function sameKey(
+  components: readonly { readonly values: Int32Array }[],
+  a: number,
+  b: number,
+): boolean {
+  for (const { values } of components) if (values[a] !== values[b]) return false;
+  return true;
+}

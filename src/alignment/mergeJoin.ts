@@ -1,0 +1,80 @@
+import type { SortedKeys } from './sortedKeys.js';
+
+/** How many one-sided keys a join keeps as examples for the report. */
+export const KEY_EXAMPLES = 5;
+
+/** The outcome of matching the baseline's keys with the candidate's. */
+export interface KeyMatch {
+  readonly matched: number;
+  /** Matched rows, in key order: baselineRows[m] and candidateRows[m] have the same key. */
+  readonly baselineRows: Int32Array;
+  readonly candidateRows: Int32Array;
+  /** Baseline rows whose key the candidate lacks, in key order. */
+  readonly baselineOnlyRows: Int32Array;
+  readonly candidateOnly: number;
+  /** Up to KEY_EXAMPLES keys of each one-sided set, as describe wrote them. */
+  readonly examples: { readonly baselineOnly: string[]; readonly candidateOnly: string[] };
+}
+
+/**
+ * Merge join of two files sorted by key: one pass over both orders, comparing one key code per
+ * row. `describe` writes a one-sided key for the examples.
+ */
+export function mergeJoin(
+  baseline: SortedKeys,
+  candidate: SortedKeys,
+  describe: (side: SortedKeys, row: number) => string,
+): KeyMatch {
+  const bOrder = baseline.order;
+  const cOrder = candidate.order;
+  const bCodes = baseline.codes;
+  const cCodes = candidate.codes;
+  const nb = bOrder.length;
+  const nc = cOrder.length;
+  const baselineRows = new Int32Array(Math.min(nb, nc));
+  const candidateRows = new Int32Array(Math.min(nb, nc));
+  const baselineOnlyRows = new Int32Array(nb);
+  const examples = { baselineOnly: [] as string[], candidateOnly: [] as string[] };
+  let matched = 0;
+  let baselineOnly = 0;
+  let candidateOnly = 0;
+  let i = 0;
+  let j = 0;
+  while (i < nb && j < nc) {
+    const b = bOrder[i]!;
+    const c = cOrder[j]!;
+    const bCode = bCodes[b]!;
+    const cCode = cCodes[c]!;
+    if (bCode === cCode) {
+      baselineRows[matched] = b;
+      candidateRows[matched] = c;
+      matched++;
+      i++;
+      j++;
+    } else if (bCode < cCode) {
+      if (baselineOnly < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, b));
+      baselineOnlyRows[baselineOnly++] = b;
+      i++;
+    } else {
+      if (candidateOnly++ < KEY_EXAMPLES) examples.candidateOnly.push(describe(candidate, c));
+      j++;
+    }
+  }
+  for (; i < nb; i++) {
+    const b = bOrder[i]!;
+    if (baselineOnly < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, b));
+    baselineOnlyRows[baselineOnly++] = b;
+  }
+  for (; j < nc; j++) {
+    if (candidateOnly++ < KEY_EXAMPLES)
+      examples.candidateOnly.push(describe(candidate, cOrder[j]!));
+  }
+  return {
+    matched,
+    baselineRows: baselineRows.subarray(0, matched),
+    candidateRows: candidateRows.subarray(0, matched),
+    baselineOnlyRows: baselineOnlyRows.slice(0, baselineOnly),
+    candidateOnly,
+    examples,
+  };
+}

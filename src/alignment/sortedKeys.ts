@@ -1,0 +1,50 @@
+import { InputError } from '../core/inputError.js';
+import type { ForecastTable } from '../reading/forecastTable.js';
+import {
+  describeKey,
+  type KeyColumns,
+  type KeyLayout,
+  type KeyPart,
+  partColumn,
+} from './keyLayout.js';
+import { sortByKey } from './keyOrder.js';
+
+/** One file's keys in key order: its key columns, their codes (see keyCodes), the sorted rows. */
+export interface SortedKeys {
+  readonly table: ForecastTable;
+  readonly keys: KeyColumns;
+  readonly codes: Float64Array;
+  /** Rows in key order; equal keys would be adjacent, in file order. */
+  readonly order: Int32Array;
+}
+
+/**
+ * Sorts a file's rows by key (radix sort on the part ids) and refuses a key that occurs twice,
+ * naming both lines.
+ */
+export function sortKeys(
+  layout: KeyLayout,
+  parts: readonly KeyPart[],
+  table: ForecastTable,
+  keys: KeyColumns,
+  codes: Float64Array,
+): SortedKeys {
+  const components = parts.map((part) => ({
+    values: partColumn(keys, part.name),
+    cardinality: part.cardinality,
+  }));
+  const order = sortByKey(keys.size, components, codes);
+  for (let i = 1; i < order.length; i++) {
+    const a = order[i - 1]!;
+    const b = order[i]!;
+    if (codes[a] === codes[b]) {
+      const first = Math.min(table.lines[a]!, table.lines[b]!);
+      const second = Math.max(table.lines[a]!, table.lines[b]!);
+      throw new InputError(
+        `duplicated key ${describeKey(layout, keys, a, parts)}: lines ${first} and ${second} have the same key`,
+        { file: table.summary.path, line: second, value: describeKey(layout, keys, b, parts) },
+      );
+    }
+  }
+  return { table, keys, codes, order };
+}
