@@ -54,7 +54,9 @@ async function bundle(sourceRoot, outfile) {
   return outfile;
 }
 
-const cases = [{ name: 'working tree', file: await bundle(root, path.join(work, 'alignCase.mjs')) }];
+const cases = [
+  { name: 'working tree', file: await bundle(root, path.join(work, 'alignCase.mjs')) },
+];
 if (against !== null) {
   const refRoot = path.join(work, 'align-ref');
   rmSync(refRoot, { recursive: true, force: true });
@@ -63,7 +65,10 @@ if (against !== null) {
   execFileSync('tar', ['-x', '-C', refRoot], { input: archive });
   // The same case file, compiled against the revision's src/.
   mkdirSync(path.join(refRoot, 'bench'));
-  copyFileSync(path.join(root, 'bench', 'alignCase.ts'), path.join(refRoot, 'bench', 'alignCase.ts'));
+  copyFileSync(
+    path.join(root, 'bench', 'alignCase.ts'),
+    path.join(refRoot, 'bench', 'alignCase.ts'),
+  );
   cases.unshift({
     name: against,
     file: await bundle(refRoot, path.join(work, 'alignCase-ref.mjs')),
@@ -76,7 +81,9 @@ const load = () =>
     .loadavg()
     .map((x) => x.toFixed(2))
     .join(' ');
-process.stdout.write(`alignPanel alone, 2 × ${SERIES * 1000} rows, ${RUNS} processes each (7 calls per process)\n`);
+process.stdout.write(
+  `alignPanel alone, 2 × ${SERIES * 1000} rows, ${RUNS} processes each (7 calls per process)\n`,
+);
 process.stdout.write(`load average at start: ${load()}\n`);
 const results = cases.map(() => []);
 for (let r = 0; r < RUNS; r++) {

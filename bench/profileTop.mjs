@@ -18,9 +18,11 @@ const self = new Map();
 const deltas = profile.timeDeltas;
 let total = 0;
 for (let i = 0; i < profile.samples.length; i++) {
-  const dt = i + 1 < deltas.length ? deltas[i + 1] : (profile.endTime - profile.startTime) / deltas.length;
+  const dt =
+    i + 1 < deltas.length ? deltas[i + 1] : (profile.endTime - profile.startTime) / deltas.length;
   const { callFrame } = byId.get(profile.samples[i]);
-  const where = callFrame.url === '' ? '' : ` ${path.basename(callFrame.url)}:${callFrame.lineNumber + 1}`;
+  const where =
+    callFrame.url === '' ? '' : ` ${path.basename(callFrame.url)}:${callFrame.lineNumber + 1}`;
   const name = `${callFrame.functionName || '(anonymous)'}${where}`;
   self.set(name, (self.get(name) ?? 0) + dt);
   total += dt;
@@ -29,5 +31,7 @@ const rows = [...self].sort((a, b) => b[1] - a[1]).slice(0, top);
 process.stdout.write(`total sampled: ${(total / 1000).toFixed(0)} ms\n`);
 process.stdout.write('| self ms | share | function |\n|---:|---:|---|\n');
 for (const [name, us] of rows) {
-  process.stdout.write(`| ${(us / 1000).toFixed(0)} | ${((100 * us) / total).toFixed(1)} % | ${name} |\n`);
+  process.stdout.write(
+    `| ${(us / 1000).toFixed(0)} | ${((100 * us) / total).toFixed(1)} % | ${name} |\n`,
+  );
 }
