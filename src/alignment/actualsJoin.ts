@@ -81,8 +81,8 @@ export function panelRows(match: KeyMatch, actuals: ActualsMatch | null): PanelR
     const size = match.matched;
     return {
       size,
-      baseline: match.baselineRows.slice(),
-      candidate: match.candidateRows.slice(),
+      baseline: match.baselineRows,
+      candidate: match.candidateRows,
       actuals: new Int32Array(size).fill(-1),
     };
   }

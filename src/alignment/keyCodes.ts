@@ -1,25 +1,36 @@
 import { type KeyColumns, type KeyPart, partColumn } from './keyLayout.js';
 import { sortByKey } from './keyOrder.js';
 
+/** Key codes, one per row: 32-bit when they fit (the usual case), else exact doubles. */
+export type KeyCodes = Uint32Array | Float64Array;
+
 /**
  * One number per row that orders and matches rows as their whole key does: keys compare as
  * their codes compare, and equal keys have equal codes, across all the files given. Then sorting,
  * duplicate checks and joins compare one number per row instead of a key part by part.
  *
  * The code is the mixed-radix number of the part ids (series most significant) when the product
- * of the parts' cardinalities is below 2^53, so every code is an exact double; otherwise (many
- * origins × paths × …) it is the rank of the key among the distinct keys of all the files,
- * found by sorting them together (sortByKey).
+ * of the parts' cardinalities is below 2^53, so every code is exact (held in 32 bits up to 2^32);
+ * otherwise (many origins × paths × …) it is the rank of the key among the distinct keys of all
+ * the files, found by sorting them together (sortByKey).
  */
-export function keyCodes(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Float64Array[] {
+export function keyCodes(parts: readonly KeyPart[], keys: readonly KeyColumns[]): KeyCodes[] {
   let product = 1;
   for (const part of parts) product *= part.cardinality;
-  return product <= Number.MAX_SAFE_INTEGER ? mixedRadix(parts, keys) : denseRanks(parts, keys);
+  if (product <= 2 ** 32) return mixedRadix(parts, keys, (n) => new Uint32Array(n));
+  if (product <= Number.MAX_SAFE_INTEGER) {
+    return mixedRadix(parts, keys, (n) => new Float64Array(n));
+  }
+  return denseRanks(parts, keys);
 }
 
-function mixedRadix(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Float64Array[] {
+function mixedRadix(
+  parts: readonly KeyPart[],
+  keys: readonly KeyColumns[],
+  allocate: (size: number) => KeyCodes,
+): KeyCodes[] {
   return keys.map((k) => {
-    const codes = new Float64Array(k.size);
+    const codes = allocate(k.size);
     for (const part of parts) {
       if (part.cardinality <= 1) continue; // every id is 0
       const ids = partColumn(k, part.name);
@@ -30,7 +41,7 @@ function mixedRadix(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Flo
   });
 }
 
-function denseRanks(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Float64Array[] {
+function denseRanks(parts: readonly KeyPart[], keys: readonly KeyColumns[]): KeyCodes[] {
   let total = 0;
   for (const k of keys) total += k.size;
   // All files' rows in one list, part by part.
@@ -44,7 +55,8 @@ function denseRanks(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Flo
     return { values, cardinality: part.cardinality };
   });
   const order = sortByKey(total, components);
-  const rank = new Float64Array(total);
+  // At most `total` distinct keys: ranks fit in 32 bits.
+  const rank = new Uint32Array(total);
   let current = -1;
   for (let i = 0; i < total; i++) {
     const row = order[i]!;

@@ -18,7 +18,7 @@ export interface KeyComponent {
 export function sortByKey(
   size: number,
   components: readonly KeyComponent[],
-  codes?: Float64Array,
+  codes?: ArrayLike<number>,
 ): Int32Array {
   let order = new Int32Array(size);
   for (let i = 0; i < size; i++) order[i] = i;
@@ -41,7 +41,7 @@ export function sortByKey(
   return order;
 }
 
-function isAscending(codes: Float64Array): boolean {
+function isAscending(codes: ArrayLike<number>): boolean {
   for (let i = 1; i < codes.length; i++) if (codes[i - 1]! > codes[i]!) return false;
   return true;
 }

@@ -33,7 +33,6 @@ export function mergeJoin(
   const nc = cOrder.length;
   const baselineRows = new Int32Array(Math.min(nb, nc));
   const candidateRows = new Int32Array(Math.min(nb, nc));
-  const baselineOnlyRows = new Int32Array(nb);
   const examples = { baselineOnly: [] as string[], candidateOnly: [] as string[] };
   let matched = 0;
   let baselineOnly = 0;
@@ -52,8 +51,7 @@ export function mergeJoin(
       i++;
       j++;
     } else if (bCode < cCode) {
-      if (baselineOnly < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, b));
-      baselineOnlyRows[baselineOnly++] = b;
+      if (baselineOnly++ < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, b));
       i++;
     } else {
       if (candidateOnly++ < KEY_EXAMPLES) examples.candidateOnly.push(describe(candidate, c));
@@ -61,9 +59,7 @@ export function mergeJoin(
     }
   }
   for (; i < nb; i++) {
-    const b = bOrder[i]!;
-    if (baselineOnly < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, b));
-    baselineOnlyRows[baselineOnly++] = b;
+    if (baselineOnly++ < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, bOrder[i]!));
   }
   for (; j < nc; j++) {
     if (candidateOnly++ < KEY_EXAMPLES)
@@ -73,8 +69,19 @@ export function mergeJoin(
     matched,
     baselineRows: baselineRows.subarray(0, matched),
     candidateRows: candidateRows.subarray(0, matched),
-    baselineOnlyRows: baselineOnlyRows.slice(0, baselineOnly),
+    baselineOnlyRows: oneSided(bOrder, baselineRows.subarray(0, matched), baselineOnly),
     candidateOnly,
     examples,
   };
+}
+
+/** The rows of `order` not among `matchedRows` (`count` of them), in key order. */
+function oneSided(order: Int32Array, matchedRows: Int32Array, count: number): Int32Array {
+  const out = new Int32Array(count);
+  if (count === 0) return out;
+  const isMatched = new Uint8Array(order.length);
+  for (let m = 0; m < matchedRows.length; m++) isMatched[matchedRows[m]!] = 1;
+  let k = 0;
+  for (let i = 0; i < order.length; i++) if (isMatched[order[i]!] === 0) out[k++] = order[i]!;
+  return out;
 }

@@ -1,5 +1,6 @@
 import { InputError } from '../core/inputError.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
+import type { KeyCodes } from './keyCodes.js';
 import {
   describeKey,
   type KeyColumns,
@@ -13,7 +14,7 @@ import { sortByKey } from './keyOrder.js';
 export interface SortedKeys {
   readonly table: ForecastTable;
   readonly keys: KeyColumns;
-  readonly codes: Float64Array;
+  readonly codes: KeyCodes;
   /** Rows in key order; equal keys would be adjacent, in file order. */
   readonly order: Int32Array;
 }
@@ -27,7 +28,7 @@ export function sortKeys(
   parts: readonly KeyPart[],
   table: ForecastTable,
   keys: KeyColumns,
-  codes: Float64Array,
+  codes: KeyCodes,
 ): SortedKeys {
   const components = parts.map((part) => ({
     values: partColumn(keys, part.name),
