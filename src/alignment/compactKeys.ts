@@ -74,6 +74,8 @@ function compact(
       kept.push(id);
     }
   }
-  for (let p = 0; p < ids.length; p++) ids[p] = remap[ids[p]!]!;
+  // Every id occurs (the usual case): the ids are already compact.
+  if (keptNames.length < names.length)
+    for (let p = 0; p < ids.length; p++) ids[p] = remap[ids[p]!]!;
   return { ids, names: keptNames, kept };
 }

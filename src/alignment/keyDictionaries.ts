@@ -174,6 +174,10 @@ function orderHorizons(tables: readonly ForecastTable[]): HorizonDictionary {
     const h = table.horizon?.values;
     if (h !== undefined) for (let i = 0; i < h.length; i++) if (h[i]! > max) max = h[i]!;
   }
+  if (max === 1) {
+    // Every horizon is 1 (or there is no horizon column): rank 0 for all.
+    return { values: [1], ranksOf: (_column, size) => new Int32Array(size) };
+  }
   if (max <= DENSE_HORIZONS) {
     const rank = new Int32Array(max + 1).fill(-1);
     for (const table of tables) {

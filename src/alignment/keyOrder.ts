@@ -26,7 +26,7 @@ export function sortByKey(
   let next = new Int32Array(size);
   for (let c = components.length - 1; c >= 0; c--) {
     const { values, cardinality } = components[c]!;
-    if (cardinality <= 1) continue;
+    if (cardinality <= 1 || isAscendingIn(values, order)) continue; // the pass would not move a row
     const starts = new Int32Array(cardinality + 1);
     for (let i = 0; i < size; i++) starts[values[i]! + 1]!++;
     for (let v = 0; v < cardinality; v++) starts[v + 1]! += starts[v]!;
@@ -43,5 +43,12 @@ export function sortByKey(
 
 function isAscending(codes: ArrayLike<number>): boolean {
   for (let i = 1; i < codes.length; i++) if (codes[i - 1]! > codes[i]!) return false;
+  return true;
+}
+
+/** Whether values[order[i]] never decreases: a stable sort by values would keep the order. */
+function isAscendingIn(values: Int32Array, order: Int32Array): boolean {
+  for (let i = 1; i < order.length; i++)
+    if (values[order[i - 1]!]! > values[order[i]!]!) return false;
   return true;
 }
