@@ -31,8 +31,13 @@ export function joinActuals(
 ): ActualsMatch {
   const keys = keyColumns(layout, actuals, 'actuals');
   const [bCodes, aCodes] = keyCodes(layout.actual, [baseline.keys, keys]);
-  const sorted = sortKeys(layout, layout.actual, actuals, keys, aCodes!);
-  const aOrder = sorted.order;
+  const { order: aOrder, sorted: aSorted } = sortKeys(
+    layout,
+    layout.actual,
+    actuals,
+    keys,
+    aCodes!,
+  );
   const rows = new Int32Array(match.matched).fill(-1);
   const used = new Uint8Array(actuals.size);
   const withoutActualExamples: string[] = [];
@@ -41,8 +46,8 @@ export function joinActuals(
   for (let m = 0; m < match.matched; m++) {
     const b = match.baselineRows[m]!;
     const code = bCodes![b]!;
-    while (k < aOrder.length && aCodes![aOrder[k]!]! < code) k++;
-    if (k < aOrder.length && aCodes![aOrder[k]!] === code) {
+    while (k < aOrder.length && aSorted[k]! < code) k++;
+    if (k < aOrder.length && aSorted[k] === code) {
       rows[m] = aOrder[k]!;
       used[aOrder[k]!] = 1;
     } else {

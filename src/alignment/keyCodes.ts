@@ -21,7 +21,9 @@ export function keyCodes(parts: readonly KeyPart[], keys: readonly KeyColumns[])
   if (product <= Number.MAX_SAFE_INTEGER) {
     return mixedRadix(parts, keys, (n) => new Float64Array(n));
   }
-  return denseRanks(parts, keys);
+  let total = 0;
+  for (const k of keys) total += k.size;
+  return denseRanks(parts, keys, total);
 }
 
 function mixedRadix(
@@ -41,9 +43,11 @@ function mixedRadix(
   });
 }
 
-function denseRanks(parts: readonly KeyPart[], keys: readonly KeyColumns[]): KeyCodes[] {
-  let total = 0;
-  for (const k of keys) total += k.size;
+function denseRanks(
+  parts: readonly KeyPart[],
+  keys: readonly KeyColumns[],
+  total: number,
+): KeyCodes[] {
   // All files' rows in one list, part by part.
   const components = parts.map((part) => {
     const values = new Int32Array(total);
@@ -54,7 +58,7 @@ function denseRanks(parts: readonly KeyPart[], keys: readonly KeyColumns[]): Key
     }
     return { values, cardinality: part.cardinality };
   });
-  const order = sortByKey(total, components);
+  const { order } = sortByKey(total, components);
   // At most `total` distinct keys: ranks fit in 32 bits.
   const rank = new Uint32Array(total);
   let current = -1;

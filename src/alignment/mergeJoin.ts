@@ -17,8 +17,8 @@ export interface KeyMatch {
 }
 
 /**
- * Merge join of two files sorted by key: one pass over both orders, comparing one key code per
- * row. `describe` writes a one-sided key for the examples.
+ * Merge join of two files sorted by key: one pass over both, comparing their key codes in key
+ * order. `describe` writes a one-sided key for the examples.
  */
 export function mergeJoin(
   baseline: SortedKeys,
@@ -27,8 +27,8 @@ export function mergeJoin(
 ): KeyMatch {
   const bOrder = baseline.order;
   const cOrder = candidate.order;
-  const bCodes = baseline.codes;
-  const cCodes = candidate.codes;
+  const bCodes = baseline.sorted;
+  const cCodes = candidate.sorted;
   const nb = bOrder.length;
   const nc = cOrder.length;
   const baselineRows = new Int32Array(Math.min(nb, nc));
@@ -42,8 +42,8 @@ export function mergeJoin(
   while (i < nb && j < nc) {
     const b = bOrder[i]!;
     const c = cOrder[j]!;
-    const bCode = bCodes[b]!;
-    const cCode = cCodes[c]!;
+    const bCode = bCodes[i]!;
+    const cCode = cCodes[j]!;
     if (bCode === cCode) {
       baselineRows[matched] = b;
       candidateRows[matched] = c;

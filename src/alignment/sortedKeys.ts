@@ -17,11 +17,13 @@ export interface SortedKeys {
   readonly codes: KeyCodes;
   /** Rows in key order; equal keys would be adjacent, in file order. */
   readonly order: Int32Array;
+  /** codes[order[i]]: the codes in key order. */
+  readonly sorted: KeyCodes;
 }
 
 /**
- * Sorts a file's rows by key (radix sort on the part ids) and refuses a key that occurs twice,
- * naming both lines.
+ * Sorts a file's rows by key (radix sort on the part ids, carrying the codes along) and refuses a
+ * key that occurs twice, naming both lines.
  */
 export function sortKeys(
   layout: KeyLayout,
@@ -35,10 +37,11 @@ export function sortKeys(
     cardinality: part.cardinality,
   }));
   const order = sortByKey(keys.size, components, codes);
-  for (let i = 1; i < order.length; i++) {
-    const a = order[i - 1]!;
-    const b = order[i]!;
-    if (codes[a] === codes[b]) {
+  const sorted = order.sorted!;
+  for (let i = 1; i < order.order.length; i++) {
+    if (sorted[i - 1] === sorted[i]) {
+      const a = order.order[i - 1]!;
+      const b = order.order[i]!;
       const first = Math.min(table.lines[a]!, table.lines[b]!);
       const second = Math.max(table.lines[a]!, table.lines[b]!);
       throw new InputError(
@@ -47,5 +50,5 @@ export function sortKeys(
       );
     }
   }
-  return { table, keys, codes, order };
+  return { table, keys, codes, order: order.order, sorted };
 }
