@@ -13161,6 +13161,7 @@ function orderLossSeries(table2, timeFormat = "auto") {
 // src/reading/inputFormat.ts
 var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
 var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
+var DECIMAL_MARKS = [".", ","];
 function delimiterFor(name, tsv) {
   if (name === "auto") return tsv ? "	" : ",";
   return name === "tab" ? "	" : name;
@@ -22988,10 +22989,63 @@ function formatPValue(p) {
   return p.toFixed(4);
 }
 
+// src/multiplicity/testFamily.ts
+function testFamily(pValues, what) {
+  const positions = [];
+  const values = [];
+  pValues.forEach((p, i) => {
+    if (p === null) return;
+    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
+      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
+    }
+    positions.push(i);
+    values.push(p);
+  });
+  return { positions, values };
+}
+function ascendingOrder(values) {
+  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
+}
+
+// src/multiplicity/benjaminiHochbergAdjust.ts
+function benjaminiHochbergAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  const order = ascendingOrder(values);
+  let running = 1;
+  for (let i = m - 1; i >= 0; i--) {
+    const k = order[i];
+    running = Math.min(running, m / (i + 1) * values[k]);
+    adjusted[positions[k]] = running;
+  }
+  return adjusted;
+}
+
+// src/multiplicity/holmAdjust.ts
+function holmAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "holmAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  let running = 0;
+  ascendingOrder(values).forEach((k, i) => {
+    running = Math.max(running, Math.min(1, (m - i) * values[k]));
+    adjusted[positions[k]] = running;
+  });
+  return adjusted;
+}
+
+// src/multiplicity/adjustmentMethod.ts
+var ADJUSTMENT_METHODS = ["holm", "bh"];
+var ADJUSTMENTS = {
+  holm: { name: "Holm", adjust: holmAdjust },
+  bh: { name: "Benjamini\u2013Hochberg", adjust: benjaminiHochbergAdjust }
+};
+
 // src/decision/decideAdjusted.ts
 function decideAdjusted(input) {
   const { hypothesis, alpha, adjustedPValue: p } = input;
-  const name = input.method === "holm" ? "Holm-adjusted" : "Benjamini\u2013Hochberg-adjusted";
+  const name = `${ADJUSTMENTS[input.method].name}-adjusted`;
   if (p === null) {
     return {
       verdict: "warn",
@@ -23014,10 +23068,20 @@ function decideAdjusted(input) {
   return { verdict, reasons, rejected };
 }
 
+// src/decision/policy.ts
+var POLICIES = ["no-regression", "non-inferiority", "superiority"];
+var MARGIN_SIGN = {
+  "no-regression": 1,
+  "non-inferiority": 1,
+  superiority: -1
+};
+var AGREEMENTS = ["both", "either", "dm", "bootstrap"];
+var MARGIN_KINDS = ["relative", "absolute"];
+var SHORT_DATA_VERDICTS = ["warn", "fail"];
+
 // src/decision/hypothesis.ts
 function hypothesisFor(policy, margin, kind) {
-  const better = policy === "superiority";
-  const signed = better ? -margin : margin;
+  const signed = MARGIN_SIGN[policy] * margin;
   const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
   const base = {
     baselineFactor: kind === "relative" ? 1 + signed : 1,
@@ -23134,6 +23198,7 @@ var POINT_LOSSES = {
   ape: absolutePercentageError,
   sape: symmetricAbsolutePercentageError
 };
+var ZERO_ACTUALS_RULES = ["error", "skip"];
 function computeRowLosses(panel, loss, zeroActuals, interval = null) {
   const n = panel.size;
   const baseline = new Float64Array(n);
@@ -23245,52 +23310,6 @@ function commonQuantiles(baseline, candidate) {
   return pairs;
 }
 
-// src/multiplicity/testFamily.ts
-function testFamily(pValues, what) {
-  const positions = [];
-  const values = [];
-  pValues.forEach((p, i) => {
-    if (p === null) return;
-    if (typeof p !== "number" || !(p >= 0 && p <= 1)) {
-      throw new RangeError(`${what}: p-value ${i + 1} is ${p}, not a number in [0, 1]`);
-    }
-    positions.push(i);
-    values.push(p);
-  });
-  return { positions, values };
-}
-function ascendingOrder(values) {
-  return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
-}
-
-// src/multiplicity/benjaminiHochbergAdjust.ts
-function benjaminiHochbergAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  const order = ascendingOrder(values);
-  let running = 1;
-  for (let i = m - 1; i >= 0; i--) {
-    const k = order[i];
-    running = Math.min(running, m / (i + 1) * values[k]);
-    adjusted[positions[k]] = running;
-  }
-  return adjusted;
-}
-
-// src/multiplicity/holmAdjust.ts
-function holmAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "holmAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  let running = 0;
-  ascendingOrder(values).forEach((k, i) => {
-    running = Math.max(running, Math.min(1, (m - i) * values[k]));
-    adjusted[positions[k]] = running;
-  });
-  return adjusted;
-}
-
 // src/decision/verdict.ts
 function worstVerdict(verdicts) {
   if (verdicts.includes("fail")) return "fail";
@@ -23313,6 +23332,7 @@ var CHECK_IDS = [
   "exact-predictions"
 ];
 var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
+var CHECK_MODES = ["enforce", "warn", "report"];
 var MAX_EXAMPLES = 5;
 var FindingCollector = class {
   count = 0;
@@ -23429,6 +23449,7 @@ function plural(count, unit) {
 }
 
 // src/stability/stabilityFinding.ts
+var STABILITY_GATE_MODES = ["off", "warn", "fail"];
 function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
   if (stability === null) return { effect: null, headline: "", reasons: [] };
   const sentences = [];
@@ -23964,6 +23985,7 @@ function prewhitenedLongRunVariance(y, rule, horizon) {
 
 // src/stability/fluctuationCriticalValues.ts
 var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var FLUCTUATION_SIDES = ["one", "two"];
 var TABLE = {
   two: [
     { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
@@ -26275,7 +26297,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
       bootstrap: false
     });
   });
-  const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
+  const adjust = ADJUSTMENTS[settings.adjust].adjust;
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
   const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
@@ -27161,6 +27183,7 @@ function lastTime(tables, kind) {
 }
 
 // src/statistics/modelConfidenceSet.ts
+var CONFIDENCE_SET_STATISTICS = ["range", "max"];
 function modelConfidenceSet(input) {
   const { means, deviations, statistic, alpha } = input;
   const m = means.length;
@@ -27289,6 +27312,7 @@ function commonBlockLength(baseline, candidates, rule) {
 }
 
 // src/candidates/decideCandidates.ts
+var SELECTION_RULES = ["preferred-in-set", "none-worse", "some-better"];
 function decideCandidates(input) {
   const { rule, alpha, setAlpha, preferred, spaPValue } = input;
   const reasons = [];
@@ -28669,6 +28693,63 @@ function pct(level) {
   return `${Math.round(level * 1e3) / 10}%`;
 }
 
+// src/report/reportTable.ts
+function table(header, align2, rows) {
+  return { header, align: align2, rows };
+}
+
+// src/report/candidatesSection.ts
+function candidatesSection(report) {
+  const { candidates, spa, confidenceSet: set, selection } = report;
+  if (candidates === void 0 || spa === void 0 || set === void 0) return null;
+  const level = `${formatNumber(set.level * 100, 3)}%`;
+  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
+  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
+  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
+    String(c.rank),
+    c.name === selection?.preferred ? `${c.name} (preferred)` : c.name,
+    formatNumber(c.comparison.meanCandidateLoss),
+    relativeChangeText(c.comparison),
+    c.inConfidenceSet ? "yes" : "no",
+    formatPValue(c.mcsPValue),
+    formatPValue(c.spaPValue),
+    c.comparison.verdict
+  ]);
+  rows.push([
+    "\u2013",
+    `${set.baseline.name} (baseline)`,
+    formatNumber(set.baseline.meanLoss),
+    "\u2013",
+    set.baseline.inConfidenceSet ? "yes" : "no",
+    formatPValue(set.baseline.mcsPValue),
+    "\u2013",
+    "\u2013"
+  ]);
+  const ranking = table(
+    [
+      "rank",
+      "model",
+      "mean loss",
+      `change against the baseline (${changeLevel})`,
+      `in the ${level} set`,
+      "MCS p-value",
+      `SPA p-value (${direction})`,
+      "own verdict"
+    ],
+    ["right", "left", "right", "left", "left", "right", "right", "left"],
+    rows
+  );
+  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
+  const eliminated = set.eliminationOrder.slice(0, -1).map((name, j) => `${name} (p ${formatPValue(set.stepPValues[j])})`).join(", ");
+  return {
+    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection?.preferred ?? "none"})`,
+    ranking,
+    shortHeader: ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"],
+    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    setSentence: `Model confidence set at ${level} (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.join(", ")}.${eliminated === "" ? "" : ` Eliminated in order: ${eliminated}.`}`
+  };
+}
+
 // src/report/cells.ts
 var LOSS_DIGITS = 4;
 var PERCENT_DIGITS = 3;
@@ -28735,7 +28816,7 @@ function differenceSeries(report) {
   );
   if (periods.length < 2) return null;
   const p = report.policy;
-  const margin = p.marginKind === "relative" && p.margin > 0 ? (p.policy === "superiority" ? -p.margin : p.margin) * 100 : null;
+  const margin = p.marginKind === "relative" && p.margin > 0 ? MARGIN_SIGN[p.policy] * p.margin * 100 : null;
   return {
     labels: periods.map((x) => periodLabel(x.start)),
     values: periods.map((x) => x.relativeDifference * 100),
@@ -28789,11 +28870,6 @@ function chartCaption(series) {
 }
 function round2(x) {
   return Number(x.toFixed(2));
-}
-
-// src/report/reportTable.ts
-function table(header, align2, rows) {
-  return { header, align: align2, rows };
 }
 
 // src/report/missingRowsSection.ts
@@ -28960,6 +29036,13 @@ function canonicalLoss(name) {
   return LOSS_ALIASES[name] ?? name;
 }
 
+// src/scaling/pooling.ts
+var POOLINGS = ["raw", "scaled"];
+var SCALE_KINDS = ["baseline", "seasonal-naive"];
+
+// src/statistics/varianceEstimator.ts
+var VARIANCE_ESTIMATORS = ["ewc-ar1", "ewc", "bartlett", "uniform"];
+
 // src/settings/options.ts
 var ENGINE_OPTIONS = [
   {
@@ -28997,7 +29080,7 @@ var ENGINE_OPTIONS = [
   {
     name: "selection-rule",
     defaultValue: "preferred-in-set",
-    choices: ["preferred-in-set", "none-worse", "some-better"],
+    choices: SELECTION_RULES,
     help: "with several candidates: preferred-in-set passes when the preferred candidate is in the model confidence set and passes its own comparison; none-worse fails on evidence that some candidate is worse than the baseline (SPA test); some-better passes only on evidence that some candidate is better (SPA test)"
   },
   {
@@ -29009,7 +29092,7 @@ var ENGINE_OPTIONS = [
   {
     name: "set-statistic",
     defaultValue: "max",
-    choices: ["range", "max"],
+    choices: CONFIDENCE_SET_STATISTICS,
     help: "with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)"
   },
   {
@@ -29057,7 +29140,7 @@ var ENGINE_OPTIONS = [
   {
     name: "decimal",
     defaultValue: ".",
-    choices: [".", ","],
+    choices: DECIMAL_MARKS,
     help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter'
   },
   {
@@ -29081,7 +29164,7 @@ var ENGINE_OPTIONS = [
   {
     name: "zero-actuals",
     defaultValue: "error",
-    choices: ["error", "skip"],
+    choices: ZERO_ACTUALS_RULES,
     help: "with ape: refuse rows whose actual is 0, or skip and count them"
   },
   {
@@ -29099,25 +29182,25 @@ var ENGINE_OPTIONS = [
   {
     name: "margin-kind",
     defaultValue: "relative",
-    choices: ["relative", "absolute"],
+    choices: MARGIN_KINDS,
     help: "relative (fraction of the baseline loss) or absolute (loss units)"
   },
   {
     name: "policy",
     defaultValue: "no-regression",
-    choices: ["no-regression", "non-inferiority", "superiority"],
+    choices: POLICIES,
     help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin"
   },
   {
     name: "agreement",
     defaultValue: "both",
-    choices: ["both", "either", "dm", "bootstrap"],
+    choices: AGREEMENTS,
     help: "which tests must reject for the decision; with both, a split verdict is a warning"
   },
   {
     name: "variance",
     defaultValue: "ewc-ar1",
-    choices: ["ewc-ar1", "ewc", "bartlett", "uniform"],
+    choices: VARIANCE_ESTIMATORS,
     help: "long-run variance for Diebold\u2013Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4\xB7n^(2/3) terms), bartlett (Newey\u2013West), uniform"
   },
   {
@@ -29154,7 +29237,7 @@ var ENGINE_OPTIONS = [
   {
     name: "short-data",
     defaultValue: "warn",
-    choices: ["warn", "fail"],
+    choices: SHORT_DATA_VERDICTS,
     help: "verdict when there are fewer time points than --min-points"
   },
   {
@@ -29172,13 +29255,13 @@ var ENGINE_OPTIONS = [
   {
     name: "pooling",
     defaultValue: "raw",
-    choices: ["raw", "scaled"],
+    choices: POOLINGS,
     help: "pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)"
   },
   {
     name: "scale",
     defaultValue: "baseline",
-    choices: ["baseline", "seasonal-naive"],
+    choices: SCALE_KINDS,
     help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)"
   },
   {
@@ -29202,7 +29285,7 @@ var ENGINE_OPTIONS = [
   {
     name: "adjust",
     defaultValue: "holm",
-    choices: ["holm", "bh"],
+    choices: ADJUSTMENT_METHODS,
     help: "multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)"
   },
   {
@@ -29226,13 +29309,13 @@ var ENGINE_OPTIONS = [
   {
     name: "fluctuation-sides",
     defaultValue: "one",
-    choices: ["one", "two"],
+    choices: FLUCTUATION_SIDES,
     help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
   },
   {
     name: "stability-gate",
     defaultValue: "warn",
-    choices: ["off", "warn", "fail"],
+    choices: STABILITY_GATE_MODES,
     help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
   },
   {
@@ -29256,7 +29339,7 @@ var ENGINE_OPTIONS = [
   {
     name: "backtest-checks",
     defaultValue: "enforce",
-    choices: ["enforce", "warn", "report"],
+    choices: CHECK_MODES,
     help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
   },
   {
@@ -29649,7 +29732,7 @@ var SERIES_ROWS = 50;
 function seriesSection(report) {
   const s = report.seriesSummary;
   if (s === null) return null;
-  const method = s.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
+  const method = ADJUSTMENTS[s.method].name;
   const rows = report.comparisons.filter((c) => c.series !== "all").sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));
   const shown = rows.length <= SERIES_ROWS ? rows : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
   const summary = `${s.series} series: ${s.worse} worse, ${s.better} better, ${s.noEvidence} with no clear difference (Diebold\u2013Mariano on L_candidate \u2212 L_baseline per series, ${method}-adjusted, \u03B1 = ${s.alpha}; whatever the policy, "worse" needs evidence of a higher loss and "better" of a lower one).${shown.length < rows.length ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.` : ""}`;
@@ -29807,9 +29890,16 @@ function renderHtml(report, options = {}) {
       );
     }
   }
-  const candidatesChart = candidatesChartSvg(report);
-  if (candidatesChart !== "") {
-    out.push("<h2>Candidates</h2>", `<figure>${candidatesChart}</figure>`);
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    const chart2 = candidatesChartSvg(report);
+    out.push(`<h2>${xml(candidates.heading)}</h2>`);
+    if (chart2 !== "") out.push(`<figure>${chart2}</figure>`);
+    out.push(
+      htmlTable(candidates.ranking),
+      `<p>${xml(candidates.spaSentence)}</p>`,
+      `<p>${xml(candidates.setSentence)}</p>`
+    );
   }
   const horizons = view.comparisons.filter(
     (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
@@ -29890,7 +29980,7 @@ function renderHtml(report, options = {}) {
 function marginPercent(report) {
   const p = report.policy;
   if (p.marginKind !== "relative" || p.margin === 0) return null;
-  return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
+  return MARGIN_SIGN[p.policy] * p.margin * 100;
 }
 function htmlTable(t) {
   const cell = (tag, text, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text)}</${tag}>`;
@@ -29938,7 +30028,7 @@ function checkLine(check) {
   const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
-function backtestChecksLines(report, clean4) {
+function backtestChecksLines(report, clean3) {
   const integrity = report.integrity;
   if (integrity.checks.length === 0) return [];
   const flagged = integrity.checks.filter((c) => c.status !== "ok");
@@ -29946,42 +30036,9 @@ function backtestChecksLines(report, clean4) {
     `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
   ];
   for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map((e) => clean4(clip(e))).join("; ");
+    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
     out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
   }
-  return out;
-}
-
-// src/report/renderCandidatesMarkdown.ts
-function renderCandidatesMarkdown(report) {
-  const { candidates, spa, confidenceSet: set, selection } = report;
-  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
-  const level = `${formatNumber(set.level * 100, 3)}%`;
-  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
-  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
-  const out = [
-    `**Candidates** (${candidates.length}, ranked by mean loss; preferred: ${escapeMarkdown(selection?.preferred ?? "")})`,
-    "",
-    `| rank | model | mean loss | change against the baseline (${changeLevel}) | in the ${level} set | MCS p-value | SPA p-value (${direction}) | own verdict |`,
-    "|---:|---|---:|---|:---:|---:|---:|---|"
-  ];
-  for (const c of [...candidates].sort((a, b) => a.rank - b.rank)) {
-    const mark = c.name === selection?.preferred ? " (preferred)" : "";
-    out.push(
-      `| ${c.rank} | ${escapeMarkdown(c.name)}${mark} | ${formatNumber(c.comparison.meanCandidateLoss)} | ${relativeChangeText(c.comparison)} | ${c.inConfidenceSet ? "yes" : "no"} | ${formatPValue(c.mcsPValue)} | ${formatPValue(c.spaPValue)} | ${c.comparison.verdict} |`
-    );
-  }
-  out.push(
-    `| \u2013 | ${escapeMarkdown(set.baseline.name)} (baseline) | ${formatNumber(set.baseline.meanLoss)} | \u2013 | ${set.baseline.inConfidenceSet ? "yes" : "no"} | ${formatPValue(set.baseline.mcsPValue)} | \u2013 | \u2013 |`,
-    ""
-  );
-  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
-  out.push(
-    `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
-    "",
-    `Model confidence set (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.map(escapeMarkdown).join(", ")}. Eliminated in order: ${set.eliminationOrder.slice(0, -1).map((name, j) => `${escapeMarkdown(name)} (p ${formatPValue(set.stepPValues[j])})`).join(", ")}.`,
-    ""
-  );
   return out;
 }
 
@@ -29996,7 +30053,11 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
   for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
   if (s.notes.length > 0) lines.push("");
-  lines.push(...renderCandidatesMarkdown(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    lines.push(`**${escapeMarkdown(candidates.heading)}**`, "", ...markdownTable(candidates.ranking), "");
+    lines.push(escapeMarkdown(candidates.spaSentence), "", escapeMarkdown(candidates.setSentence), "");
+  }
   const chart = differenceSeries(view);
   if (chart !== null) {
     lines.push(...mermaidChart(chart), "");
@@ -30109,45 +30170,6 @@ function code(text) {
   return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : escapeMarkdown(text);
 }
 
-// src/report/renderCandidatesTerminal.ts
-function renderCandidatesTerminal(report) {
-  const { candidates, spa, confidenceSet: set } = report;
-  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
-  const header = ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"];
-  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
-    String(c.rank),
-    clean(c.name),
-    formatNumber(c.comparison.meanCandidateLoss),
-    relativeChangeText(c.comparison),
-    c.inConfidenceSet ? "yes" : "no",
-    formatPValue(c.mcsPValue),
-    formatPValue(c.spaPValue),
-    c.comparison.verdict
-  ]);
-  rows.push([
-    "-",
-    `${clean(set.baseline.name)} (baseline)`,
-    formatNumber(set.baseline.meanLoss),
-    "-",
-    set.baseline.inConfidenceSet ? "yes" : "no",
-    formatPValue(set.baseline.mcsPValue),
-    "-",
-    "-"
-  ]);
-  const widths = header.map((h, j) => Math.max(h.length, ...rows.map((r) => r[j].length)));
-  const line2 = (cells) => cells.map((cell, j) => j === 1 || j === 3 ? cell.padEnd(widths[j]) : cell.padStart(widths[j])).join("  ");
-  return [
-    "",
-    line2(header),
-    ...rows.map(line2),
-    `SPA (${spa.hypothesis}): lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; reality check ${formatPValue(spa.realityCheck.pValue)}`,
-    `${formatNumber(set.level * 100, 3)}% model confidence set (${set.statistic}): ${set.members.map(clean).join(", ")}`
-  ];
-}
-function clean(text) {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
-}
-
 // src/report/renderStabilityTerminal.ts
 function renderStabilityTerminal(report) {
   const s = report.stability;
@@ -30157,18 +30179,18 @@ function renderStabilityTerminal(report) {
   const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean2(r.firstTimestamp ?? "?")} to ${clean2(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
+      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean2(w.start)} to ${clean2(w.end)}`).join(", ")}`}`
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
     );
   }
   return out;
 }
-function clean2(text) {
+function clean(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 
@@ -30180,14 +30202,19 @@ function renderTerminal(report, options) {
   const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
   const out = [];
   out.push(
-    `${paint("1", clean3(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
+    `${paint("1", clean2(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
   );
   out.push(wrap(`${s.lead} ${s.change}`, 100), "");
   out.push(...textTable(s.main, paint));
   out.push("", paint("2", wrap(s.intervalNote, 100)));
-  out.push(...renderCandidatesTerminal(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    out.push("", wrap(candidates.heading, 100));
+    out.push(...textTable({ ...candidates.ranking, header: candidates.shortHeader }, paint));
+    out.push(wrap(candidates.spaSentence, 100, "  "), wrap(candidates.setSentence, 100, "  "));
+  }
   const chart = differenceSeries(view);
-  if (chart !== null) out.push("", clean3(sparklineText(chart)));
+  if (chart !== null) out.push("", clean2(sparklineText(chart)));
   const overTime = renderStabilityTerminal(report);
   if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, "  ")));
   if (s.notes.length > 0) out.push("");
@@ -30198,7 +30225,7 @@ function renderTerminal(report, options) {
   }
   if (s.series !== null) out.push("", wrap(s.series.summary, 100));
   if (s.paths !== null) out.push("", wrap(s.paths.summary, 100));
-  const checks = backtestChecksLines(report, clean3);
+  const checks = backtestChecksLines(report, clean2);
   if (checks.length > 0) out.push("", ...checks);
   for (const r of report.reasons) {
     if (r.startsWith("The candidate lacks")) out.push(wrap(`- ${r}`, 100, "  "));
@@ -30208,7 +30235,7 @@ function renderTerminal(report, options) {
   out.push(
     paint(
       "2",
-      clean3(
+      clean2(
         `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`
       )
     )
@@ -30218,12 +30245,12 @@ function renderTerminal(report, options) {
       out.push(paint("2", wrap(l, 100, "  ")));
     }
   }
-  if (s.changedSettings !== "") out.push(paint("2", clean3(`settings: ${s.changedSettings}`)));
+  if (s.changedSettings !== "") out.push(paint("2", clean2(`settings: ${s.changedSettings}`)));
   return `${out.join("\n")}
 `;
 }
 function textTable(t, paint) {
-  const rows = t.rows.map((r) => r.map(clean3));
+  const rows = t.rows.map((r) => r.map(clean2));
   const widths = t.header.map(
     (h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length))
   );
@@ -30232,11 +30259,11 @@ function textTable(t, paint) {
   ).join("  ").trimEnd();
   return [paint("2", line2(t.header)), ...rows.map(line2)];
 }
-function clean3(text) {
+function clean2(text) {
   return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 function wrap(text, width, indent2 = "") {
-  const words = clean3(text).split(" ");
+  const words = clean2(text).split(" ");
   const lines = [];
   let current = "";
   for (const w of words) {
@@ -30266,6 +30293,12 @@ function resolveSettings(raw, label) {
       });
     }
     return text;
+  };
+  const choice = (name, values) => {
+    const text = value(name);
+    const found = values.find((v) => v === text);
+    if (found === void 0) throw new Error(`option ${name} lists other choices than ${values}`);
+    return found;
   };
   const optional = (name) => {
     const given = raw[name]?.trim();
@@ -30333,46 +30366,46 @@ function resolveSettings(raw, label) {
     modelColumn,
     baselineModel,
     preferred: optional("preferred"),
-    selectionRule: value("selection-rule"),
+    selectionRule: choice("selection-rule", SELECTION_RULES),
     setAlpha: number("set-alpha", (x) => x > 0 && x < 1, "a number between 0 and 1, such as 0.1"),
-    setStatistic: value("set-statistic"),
+    setStatistic: choice("set-statistic", CONFIDENCE_SET_STATISTICS),
     losses,
     actuals: optional("actuals"),
     columns: parseColumnMapping(value("columns"), label("columns")),
     baselineColumns: parseColumnMapping(value("baseline-columns"), label("baseline-columns")),
     candidateColumns: parseColumnMapping(value("candidate-columns"), label("candidate-columns")),
-    format: value("format"),
-    delimiter: value("delimiter"),
-    decimal: parseDecimalMark(value("decimal"), value("delimiter"), label),
-    timeFormat: value("time-format"),
+    format: choice("format", INPUT_FORMATS),
+    delimiter: choice("delimiter", DELIMITER_NAMES),
+    decimal: parseDecimalMark(choice("decimal", DECIMAL_MARKS), value("delimiter"), label),
+    timeFormat: choice("time-format", TIME_FORMAT_NAMES),
     lineLimit: integer("line-limit", 1024, 1 << 28),
     loss: canonicalLoss(value("loss")),
-    zeroActuals: value("zero-actuals"),
+    zeroActuals: choice("zero-actuals", ZERO_ACTUALS_RULES),
     alpha,
     margin: parseMargin(value("margin"), value("margin-kind"), label),
-    marginKind: value("margin-kind"),
-    policy: value("policy"),
-    agreement: value("agreement"),
-    variance: value("variance"),
+    marginKind: choice("margin-kind", MARGIN_KINDS),
+    policy: choice("policy", POLICIES),
+    agreement: choice("agreement", AGREEMENTS),
+    variance: choice("variance", VARIANCE_ESTIMATORS),
     lag: parseLag(value("lag"), label("lag")),
     blockLength: parseBlockLength(value("block-length"), label("block-length")),
     resamples: integer("resamples", 99, 1e7),
     seed: integer("seed", 0, 2 ** 31 - 1),
     confidence: optional("confidence") === null ? defaultConfidence(alpha) : number("confidence", (x) => x > 0.5 && x < 1, "a number between 0.5 and 1, such as 0.9"),
     minPoints: integer("min-points", 1),
-    shortData: value("short-data"),
+    shortData: choice("short-data", SHORT_DATA_VERDICTS),
     allowMissing: bool("allow-missing"),
     interval: parseInterval(
       value("interval"),
       label("interval"),
       canonicalLoss(value("loss")) === "interval"
     ),
-    pooling: value("pooling"),
-    scale: value("scale"),
+    pooling: choice("pooling", POOLINGS),
+    scale: choice("scale", SCALE_KINDS),
     history: optional("history"),
     season: integer("season", 1),
     weights: bool("weights"),
-    adjust: value("adjust"),
+    adjust: choice("adjust", ADJUSTMENT_METHODS),
     top: integer("top", 0, 1e4),
     recent: parseRecentWindow(value("recent"), label("recent")),
     fluctuationWindow: number(
@@ -30380,12 +30413,12 @@ function resolveSettings(raw, label) {
       (x) => x >= 0.1 && x <= 0.9,
       "a number from 0.1 to 0.9 (the window as a fraction of the time points)"
     ),
-    fluctuationSides: value("fluctuation-sides"),
-    stabilityGate: value("stability-gate"),
+    fluctuationSides: choice("fluctuation-sides", FLUCTUATION_SIDES),
+    stabilityGate: choice("stability-gate", STABILITY_GATE_MODES),
     frequency: parseFrequencyOption(value("frequency"), label("frequency")),
     folds: optional("folds"),
     embargo: integer("embargo", 0, 1e6),
-    backtestChecks: value("backtest-checks"),
+    backtestChecks: choice("backtest-checks", CHECK_MODES),
     json: optional("json"),
     markdown: optional("markdown"),
     html: optional("html")

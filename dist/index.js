@@ -32290,6 +32290,17 @@ function printable(text2) {
   );
 }
 
+// src/decision/policy.ts
+var POLICIES = ["no-regression", "non-inferiority", "superiority"];
+var MARGIN_SIGN = {
+  "no-regression": 1,
+  "non-inferiority": 1,
+  superiority: -1
+};
+var AGREEMENTS = ["both", "either", "dm", "bootstrap"];
+var MARGIN_KINDS = ["relative", "absolute"];
+var SHORT_DATA_VERDICTS = ["warn", "fail"];
+
 // src/core/formatNumber.ts
 function formatNumber(x, digits = 4) {
   if (x === null || x === void 0 || !Number.isFinite(x)) return "n/a";
@@ -32703,6 +32714,63 @@ function intervalNote(report) {
   return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
 }
 
+// src/report/reportTable.ts
+function table(header2, align2, rows) {
+  return { header: header2, align: align2, rows };
+}
+
+// src/report/candidatesSection.ts
+function candidatesSection(report) {
+  const { candidates, spa, confidenceSet: set, selection } = report;
+  if (candidates === void 0 || spa === void 0 || set === void 0) return null;
+  const level = `${formatNumber(set.level * 100, 3)}%`;
+  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
+  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
+  const rows = [...candidates].sort((a, b) => a.rank - b.rank).map((c) => [
+    String(c.rank),
+    c.name === selection?.preferred ? `${c.name} (preferred)` : c.name,
+    formatNumber(c.comparison.meanCandidateLoss),
+    relativeChangeText(c.comparison),
+    c.inConfidenceSet ? "yes" : "no",
+    formatPValue(c.mcsPValue),
+    formatPValue(c.spaPValue),
+    c.comparison.verdict
+  ]);
+  rows.push([
+    "\u2013",
+    `${set.baseline.name} (baseline)`,
+    formatNumber(set.baseline.meanLoss),
+    "\u2013",
+    set.baseline.inConfidenceSet ? "yes" : "no",
+    formatPValue(set.baseline.mcsPValue),
+    "\u2013",
+    "\u2013"
+  ]);
+  const ranking = table(
+    [
+      "rank",
+      "model",
+      "mean loss",
+      `change against the baseline (${changeLevel})`,
+      `in the ${level} set`,
+      "MCS p-value",
+      `SPA p-value (${direction})`,
+      "own verdict"
+    ],
+    ["right", "left", "right", "left", "left", "right", "right", "left"],
+    rows
+  );
+  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
+  const eliminated = set.eliminationOrder.slice(0, -1).map((name, j) => `${name} (p ${formatPValue(set.stepPValues[j])})`).join(", ");
+  return {
+    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection?.preferred ?? "none"})`,
+    ranking,
+    shortHeader: ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"],
+    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    setSentence: `Model confidence set at ${level} (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.join(", ")}.${eliminated === "" ? "" : ` Eliminated in order: ${eliminated}.`}`
+  };
+}
+
 // src/report/cells.ts
 var LOSS_DIGITS = 4;
 var PERCENT_DIGITS = 3;
@@ -32769,7 +32837,7 @@ function differenceSeries(report) {
   );
   if (periods.length < 2) return null;
   const p = report.policy;
-  const margin = p.marginKind === "relative" && p.margin > 0 ? (p.policy === "superiority" ? -p.margin : p.margin) * 100 : null;
+  const margin = p.marginKind === "relative" && p.margin > 0 ? MARGIN_SIGN[p.policy] * p.margin * 100 : null;
   return {
     labels: periods.map((x) => periodLabel(x.start)),
     values: periods.map((x) => x.relativeDifference * 100),
@@ -32823,11 +32891,6 @@ function chartCaption(series) {
 }
 function round(x) {
   return Number(x.toFixed(2));
-}
-
-// src/report/reportTable.ts
-function table(header2, align2, rows) {
-  return { header: header2, align: align2, rows };
 }
 
 // src/report/missingRowsSection.ts
@@ -33012,6 +33075,21 @@ function ascendingOrder(values) {
   return values.map((_, i) => i).sort((a, b) => values[a] - values[b] || a - b);
 }
 
+// src/multiplicity/benjaminiHochbergAdjust.ts
+function benjaminiHochbergAdjust(pValues) {
+  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
+  const m = values.length;
+  const adjusted = pValues.map(() => null);
+  const order = ascendingOrder(values);
+  let running = 1;
+  for (let i = m - 1; i >= 0; i--) {
+    const k = order[i];
+    running = Math.min(running, m / (i + 1) * values[k]);
+    adjusted[positions[k]] = running;
+  }
+  return adjusted;
+}
+
 // src/multiplicity/holmAdjust.ts
 function holmAdjust(pValues) {
   const { positions, values } = testFamily(pValues, "holmAdjust");
@@ -33024,6 +33102,13 @@ function holmAdjust(pValues) {
   });
   return adjusted;
 }
+
+// src/multiplicity/adjustmentMethod.ts
+var ADJUSTMENT_METHODS = ["holm", "bh"];
+var ADJUSTMENTS = {
+  holm: { name: "Holm", adjust: holmAdjust },
+  bh: { name: "Benjamini\u2013Hochberg", adjust: benjaminiHochbergAdjust }
+};
 
 // src/alignment/civilDays.ts
 function daysFromCivil(year, month, day) {
@@ -33089,9 +33174,283 @@ function instantOf(t) {
   return { key, epochMillis: seconds * 1e3 + t.nanos / 1e6 };
 }
 
+// src/decision/verdict.ts
+var VERDICTS = ["pass", "warn", "fail"];
+function worstVerdict(verdicts) {
+  if (verdicts.includes("fail")) return "fail";
+  if (verdicts.includes("warn")) return "warn";
+  return "pass";
+}
+
+// src/candidates/decideCandidates.ts
+var SELECTION_RULES = ["preferred-in-set", "none-worse", "some-better"];
+function decideCandidates(input) {
+  const { rule, alpha, setAlpha, preferred, spaPValue } = input;
+  const reasons = [];
+  const verdicts = [];
+  const p = spaPValue.toPrecision(3);
+  switch (rule) {
+    case "preferred-in-set": {
+      const level = `${Math.round((1 - setAlpha) * 1e3) / 10}%`;
+      if (!preferred.inConfidenceSet) {
+        verdicts.push("fail");
+        reasons.push(
+          `The preferred candidate ${preferred.name} is not in the ${level} model confidence set (MCS p-value ${preferred.mcsPValue.toPrecision(3)} < ${setAlpha}): other models are significantly more accurate.`
+        );
+      } else {
+        reasons.push(
+          `The preferred candidate ${preferred.name} is in the ${level} model confidence set (MCS p-value ${preferred.mcsPValue.toPrecision(3)}).`
+        );
+      }
+      verdicts.push(preferred.verdict);
+      reasons.push(`Its own comparison against the baseline: ${preferred.verdict}.`);
+      break;
+    }
+    case "none-worse":
+      if (spaPValue <= alpha) {
+        verdicts.push("fail");
+        reasons.push(
+          `The SPA test finds some candidate worse than the baseline (consistent p-value ${p} \u2264 ${alpha}).`
+        );
+      } else {
+        verdicts.push("pass");
+        reasons.push(
+          `No evidence that any candidate is worse than the baseline (SPA consistent p-value ${p} > ${alpha}).`
+        );
+      }
+      break;
+    case "some-better":
+      if (spaPValue <= alpha) {
+        verdicts.push("pass");
+        reasons.push(
+          `The SPA test finds some candidate better than the baseline, allowing for the choice among all of them (consistent p-value ${p} \u2264 ${alpha}).`
+        );
+      } else {
+        verdicts.push("fail");
+        reasons.push(
+          `No evidence, after allowing for the choice among the candidates, that any beats the baseline (SPA consistent p-value ${p} > ${alpha}).`
+        );
+      }
+      break;
+  }
+  if (input.missingRows.length > 0) {
+    verdicts.push("fail");
+    reasons.push(
+      `Candidates lacking rows the baseline has: ${input.missingRows.join(", ")} (set allow-missing to compare on the common rows).`
+    );
+  }
+  return { verdict: worstVerdict(verdicts), reasons };
+}
+
+// src/integrity/checkResult.ts
+var CHECK_IDS = [
+  "look-ahead",
+  "horizon-steps",
+  "origin-after-actuals",
+  "origin-sets",
+  "path-sets",
+  "horizon-sets",
+  "time-spans",
+  "series-coverage",
+  "fold-purge",
+  "outside-test-window",
+  "exact-predictions"
+];
+var CHECK_STATUSES = ["ok", "warn", "fail"];
+var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
+var CHECK_MODES = ["enforce", "warn", "report"];
+var FREQUENCY_SOURCES = ["inferred", "given"];
+var MAX_EXAMPLES = 5;
+var FindingCollector = class {
+  count = 0;
+  examples = [];
+  add(example) {
+    if (this.count++ < MAX_EXAMPLES) this.examples.push(example());
+  }
+};
+
+// src/losses/absoluteError.ts
+function absoluteError(actual, prediction) {
+  return Math.abs(actual - prediction);
+}
+
+// src/losses/absolutePercentageError.ts
+function absolutePercentageError(actual, prediction) {
+  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
+}
+
+// src/losses/intervalCoverage.ts
+function intervalCoverage(actual, lower, upper) {
+  const n = actual.length;
+  if (lower.length !== n || upper.length !== n) {
+    throw new RangeError(
+      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
+    );
+  }
+  if (n === 0) return null;
+  let inside = 0;
+  for (let i = 0; i < n; i++) {
+    const y = actual[i];
+    if (lower[i] <= y && y <= upper[i]) inside++;
+  }
+  return inside / n;
+}
+
+// src/losses/intervalScore.ts
+function intervalScore(actual, lower, upper, alpha) {
+  if (!(alpha > 0 && alpha < 1)) {
+    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
+  }
+  const penalty = 2 / alpha;
+  let score = upper - lower;
+  if (actual < lower) score += penalty * (lower - actual);
+  if (actual > upper) score += penalty * (actual - upper);
+  return score;
+}
+
+// src/losses/pinballLoss.ts
+function pinballLoss(actual, quantile, level) {
+  const u = actual - quantile;
+  return u >= 0 ? level * u : (level - 1) * u;
+}
+
+// src/losses/squaredError.ts
+function squaredError(actual, prediction) {
+  const e = actual - prediction;
+  return e * e;
+}
+
+// src/losses/symmetricAbsolutePercentageError.ts
+function symmetricAbsolutePercentageError(actual, prediction) {
+  const denominator = Math.abs(actual) + Math.abs(prediction);
+  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
+}
+
+// src/losses/rowLosses.ts
+var LossUnavailableError = class extends Error {
+};
+var POINT_LOSSES = {
+  squared: squaredError,
+  absolute: absoluteError,
+  ape: absolutePercentageError,
+  sape: symmetricAbsolutePercentageError
+};
+var ZERO_ACTUALS_RULES = ["error", "skip"];
+function computeRowLosses(panel, loss, zeroActuals, interval = null) {
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  if (loss === "interval") return intervalLosses(panel, interval);
+  if (loss === "pinball") {
+    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
+    if (pairs.length === 0) {
+      throw new LossUnavailableError(
+        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
+      );
+    }
+    const y2 = panel.actual;
+    for (const { level, base: base2, cand: cand2 } of pairs) {
+      for (let i = 0; i < n; i++) {
+        const yi = y2[i];
+        baseline[i] += pinballLoss(yi, base2[i], level);
+        candidate[i] += pinballLoss(yi, cand2[i], level);
+      }
+    }
+    const k = pairs.length;
+    for (let i = 0; i < n; i++) {
+      baseline[i] /= k;
+      candidate[i] /= k;
+    }
+    return {
+      loss,
+      baseline,
+      candidate,
+      included: null,
+      zeroActualRows: [],
+      levels: pairs.map((p) => p.level),
+      coverage: null
+    };
+  }
+  const base = panel.baseline.prediction;
+  const cand = panel.candidate.prediction;
+  if (base === null || cand === null) {
+    throw new LossUnavailableError(
+      `the ${loss} loss needs a prediction column in both baseline and candidate`
+    );
+  }
+  const f = POINT_LOSSES[loss];
+  const y = panel.actual;
+  const zeroActualRows = [];
+  let included = null;
+  for (let i = 0; i < n; i++) {
+    const yi = y[i];
+    if (loss === "ape" && yi === 0) {
+      zeroActualRows.push(i);
+      if (zeroActuals === "skip") {
+        included ??= new Uint8Array(n).fill(1);
+        included[i] = 0;
+      }
+      continue;
+    }
+    baseline[i] = f(yi, base[i]);
+    candidate[i] = f(yi, cand[i]);
+  }
+  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
+}
+function intervalLosses(panel, interval) {
+  if (interval === null) {
+    throw new LossUnavailableError(
+      "the interval loss needs the two quantile levels of the interval"
+    );
+  }
+  const [lowLevel, highLevel] = interval;
+  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
+  const bl = find(panel.baseline.quantiles, lowLevel);
+  const bu = find(panel.baseline.quantiles, highLevel);
+  const cl = find(panel.candidate.quantiles, lowLevel);
+  const cu = find(panel.candidate.quantiles, highLevel);
+  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
+    throw new LossUnavailableError(
+      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
+    );
+  }
+  const alpha = 1 - (highLevel - lowLevel);
+  const n = panel.size;
+  const baseline = new Float64Array(n);
+  const candidate = new Float64Array(n);
+  const y = panel.actual;
+  for (let i = 0; i < n; i++) {
+    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
+    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
+  }
+  return {
+    loss: "interval",
+    baseline,
+    candidate,
+    included: null,
+    zeroActualRows: [],
+    levels: [lowLevel, highLevel],
+    coverage: {
+      nominal: highLevel - lowLevel,
+      baseline: intervalCoverage(y, bl, bu),
+      candidate: intervalCoverage(y, cl, cu)
+    }
+  };
+}
+function commonQuantiles(baseline, candidate) {
+  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
+  const pairs = [];
+  for (const q of baseline) {
+    const cand = byLevel.get(q.level);
+    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
+  }
+  return pairs;
+}
+
 // src/reading/inputFormat.ts
 var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
 var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
+var DECIMAL_MARKS = [".", ","];
 function delimiterFor(name, tsv) {
   if (name === "auto") return tsv ? "	" : ",";
   return name === "tab" ? "	" : name;
@@ -33099,6 +33458,516 @@ function delimiterFor(name, tsv) {
 function delimiterLabel(delimiter3) {
   return delimiter3 === "	" ? "tab" : `"${delimiter3}"`;
 }
+
+// src/scaling/pooling.ts
+var POOLINGS = ["raw", "scaled"];
+var SCALE_KINDS = ["baseline", "seasonal-naive"];
+
+// src/stability/fluctuationCriticalValues.ts
+var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
+var FLUCTUATION_SIDES = ["one", "two"];
+var TABLE = {
+  two: [
+    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
+    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
+    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
+  ],
+  one: [
+    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
+    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
+    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
+  ]
+};
+function fluctuationCriticalValue(mu, alpha, sides) {
+  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
+  const columns = TABLE[sides];
+  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
+  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
+  for (let i = 0; i + 1 < columns.length; i++) {
+    const lo2 = columns[i];
+    const hi2 = columns[i + 1];
+    if (alpha > lo2.alpha && alpha < hi2.alpha) {
+      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
+      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
+    }
+  }
+  return null;
+}
+function interpolateInMu(values, mu) {
+  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
+  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
+  const w = Math.min(Math.max(position - i, 0), 1);
+  return (1 - w) * values[i] + w * values[i + 1];
+}
+
+// src/reading/numbers.ts
+function parseDecimal(text2) {
+  const n = text2.length;
+  if (n === 0) return Number.NaN;
+  if (n <= 17) {
+    let i = 0;
+    let c = text2.charCodeAt(0);
+    const negative = c === 45;
+    if (negative || c === 43) i = 1;
+    let mantissa = 0;
+    let digits = 0;
+    let scale = -1;
+    for (; i < n; i++) {
+      c = text2.charCodeAt(i);
+      if (c >= 48 && c <= 57) {
+        mantissa = mantissa * 10 + (c - 48);
+        digits++;
+      } else if (c === 46 && scale < 0) {
+        scale = i;
+      } else break;
+    }
+    if (i === n && digits > 0 && digits <= 15) {
+      const fraction = scale < 0 ? 0 : n - 1 - scale;
+      const value2 = fraction === 0 ? mantissa : mantissa / POWERS_OF_TEN[fraction];
+      return negative ? -value2 : value2;
+    }
+  }
+  const first = text2.charCodeAt(0);
+  if (!(isDigit(first) || first === 45 || first === 43 || first === 46))
+    return Number.NaN;
+  const last = text2.charCodeAt(n - 1);
+  if (!(isDigit(last) || last === 46)) return Number.NaN;
+  if (first === 48 && n > 2) {
+    const second = text2.charCodeAt(1) | 32;
+    if (second === 120 || second === 98 || second === 111) return Number.NaN;
+  }
+  const value = +text2;
+  return Number.isFinite(value) ? value : Number.NaN;
+}
+var POWERS_OF_TEN = [
+  1,
+  10,
+  100,
+  1e3,
+  1e4,
+  1e5,
+  1e6,
+  1e7,
+  1e8,
+  1e9,
+  1e10,
+  1e11,
+  1e12,
+  1e13,
+  1e14,
+  1e15
+];
+function isDigit(code2) {
+  return code2 >= 48 && code2 <= 57;
+}
+function parseHorizon(text2) {
+  const n = text2.length;
+  if (n > 0 && n <= 9) {
+    let value2 = 0;
+    let i = 0;
+    for (; i < n; i++) {
+      const c = text2.charCodeAt(i);
+      if (c < 48 || c > 57) break;
+      value2 = value2 * 10 + (c - 48);
+    }
+    if (i === n) return value2 >= 1 ? value2 : 0;
+  }
+  const value = parseDecimal(text2);
+  return Number.isInteger(value) && value >= 1 && value <= 2147483647 ? value : 0;
+}
+
+// src/alignment/timeOrder.ts
+var DATE_PREFIX = /^\d{4}-\d{2}-\d{2}/;
+var ISO = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?(Z|[+-]\d{2}:\d{2})?)?$/;
+function readLabel(label) {
+  const number = parseDecimal(label);
+  if (!Number.isNaN(number)) return { kind: "number", key: number === 0 ? 0 : number };
+  if (!DATE_PREFIX.test(label)) return { kind: "text" };
+  return readIsoLabel(label);
+}
+function readIsoLabel(label) {
+  const m = ISO.exec(label);
+  if (m === null) {
+    return "starts like a date but is not YYYY-MM-DD[THH:MM[:SS[.fff]]][Z|\xB1HH:MM]";
+  }
+  const month = Number(m[2]);
+  const day = Number(m[3]);
+  const year = Number(m[1]);
+  if (month < 1 || month > 12) return `month ${m[2]} is not 01\u201312`;
+  if (day < 1 || day > 31 || checkCivil({ ...ZERO, year, month, day }, "") !== null)
+    return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
+  const hour = m[4] === void 0 ? 0 : Number(m[4]);
+  const minute = m[5] === void 0 ? 0 : Number(m[5]);
+  const second = m[6] === void 0 ? 0 : Number(m[6]);
+  if (hour > 23) return `hour ${m[4]} is not 00\u201323`;
+  if (minute > 59) return `minute ${m[5]} is not 00\u201359`;
+  if (second > 59) return `second ${m[6]} is not 00\u201359`;
+  let offsetSeconds = 0;
+  const zone = m[8];
+  if (zone !== void 0 && zone !== "Z") {
+    const oh = Number(zone.slice(1, 3));
+    const om = Number(zone.slice(4, 6));
+    if (oh > 23 || om > 59) return `offset ${zone} is not a valid \xB1HH:MM`;
+    offsetSeconds = (zone[0] === "-" ? -1 : 1) * (oh * 3600 + om * 60);
+  }
+  const civil = {
+    year,
+    month,
+    day,
+    hour,
+    minute,
+    second,
+    nanos: m[7] === void 0 ? 0 : Number(m[7].padEnd(9, "0")),
+    offsetSeconds
+  };
+  const { key, epochMillis } = instantOf(civil);
+  return { kind: "datetime", key, epochMillis };
+}
+var ZERO = {
+  year: 0,
+  month: 1,
+  day: 1,
+  hour: 0,
+  minute: 0,
+  second: 0,
+  nanos: 0,
+  offsetSeconds: 0
+};
+function readAs(label, format) {
+  switch (format) {
+    case "auto":
+      return readLabel(label);
+    case "text-order":
+      return { kind: "text" };
+    case "number": {
+      const x = parseDecimal(label);
+      return Number.isNaN(x) ? "not a decimal number" : { kind: "number", key: x === 0 ? 0 : x };
+    }
+    case "iso-8601":
+      return DATE_PREFIX.test(label) ? readIsoLabel(label) : "not an ISO 8601 date (YYYY-MM-DD[THH:MM[:SS]][Z|\xB1HH:MM])";
+    case "day-month-year":
+    case "month-day-year": {
+      const civil = readDayMonthDate(label, format === "day-month-year");
+      if (typeof civil === "string") return civil;
+      const { key, epochMillis } = instantOf(civil);
+      return { kind: "datetime", key, epochMillis };
+    }
+  }
+}
+function orderLabels(sources, what, format = "auto", option = "--time-format") {
+  const readings = /* @__PURE__ */ new Map();
+  const first = {
+    number: null,
+    datetime: null,
+    text: null
+  };
+  const counts = { number: 0, datetime: 0, text: 0 };
+  for (const { file, column } of sources) {
+    const labels2 = column.labels;
+    for (let id = 0; id < labels2.length; id++) {
+      const label = labels2[id];
+      if (readings.has(label)) continue;
+      const reading = readAs(label, format);
+      if (typeof reading === "string") {
+        throw new InputError(
+          format === "auto" ? `not a valid ISO 8601 ${what}: ${reading}` : `not a ${what} in the ${format} format of ${option}: ${reading}`,
+          { file, line: column.firstLines[id], column: column.column, value: label }
+        );
+      }
+      readings.set(label, reading);
+      counts[reading.kind]++;
+      first[reading.kind] ??= { file, line: column.firstLines[id], column: column.column, label };
+    }
+  }
+  const total = readings.size;
+  let kind;
+  let reason;
+  if (format === "text-order") {
+    kind = "text";
+    reason = `text order (UTF-16 code units, so "10" comes before "9"), as ${option} text-order asks`;
+  } else if (counts.number === total) {
+    kind = "number";
+    reason = `every ${what} is a decimal number: numeric order`;
+  } else if (counts.datetime === total) {
+    kind = "datetime";
+    reason = format === "day-month-year" || format === "month-day-year" ? `every ${what} is a ${format} date: chronological order (times are UTC)` : `every ${what} is an ISO 8601 date or date-time: chronological order (no offset means UTC)`;
+  } else {
+    throw mixedKinds(first, counts, what, option);
+  }
+  const keyOf = (label) => {
+    const reading = readings.get(label);
+    if (kind === "text" || reading.kind === "text") return label;
+    return reading.key;
+  };
+  const representative = /* @__PURE__ */ new Map();
+  for (const label of readings.keys()) {
+    const key = keyOf(label);
+    const current = representative.get(key);
+    if (current === void 0 || label < current) representative.set(key, label);
+  }
+  const keys = [...representative.keys()];
+  if (kind === "number") keys.sort((a, b) => a - b);
+  else keys.sort(compareCodeUnits);
+  const rankOfKey = /* @__PURE__ */ new Map();
+  keys.forEach((key, rank) => {
+    rankOfKey.set(key, rank);
+  });
+  const ranks = sources.map(
+    ({ column }) => Int32Array.from(column.labels, (label) => rankOfKey.get(keyOf(label)))
+  );
+  const labels = keys.map((key) => representative.get(key));
+  let instants = null;
+  if (kind === "number") instants = Float64Array.from(keys);
+  else if (kind === "datetime") {
+    instants = Float64Array.from(labels, (label) => {
+      const reading = readings.get(label);
+      return reading.kind === "datetime" ? reading.epochMillis : Number.NaN;
+    });
+  }
+  return { kind, format, reason, ranks, labels, instants };
+}
+function mixedKinds(first, counts, what, option) {
+  const odd = first.text ?? (counts.number <= counts.datetime ? first.number : first.datetime) ?? first.number;
+  const others = odd === first.text ? counts.number >= counts.datetime ? first.number : first.datetime : odd === first.number ? first.datetime : first.number;
+  const context3 = others === null ? "" : ` while ${JSON.stringify(others.label)} (${others.file}:${others.line}) is ${others === first.number ? "a number" : "an ISO 8601 date"}`;
+  let hint;
+  if (looksLikeDayMonthDate(odd.label)) {
+    hint = `it looks like a date with day and month first: say how to read it with ${option} day-month-year (31/12/2026) or ${option} month-day-year (12/31/2026)`;
+  } else if (odd === first.text) {
+    hint = `a ${what} must be a number or an ISO 8601 date (YYYY-MM-DD[THH:MM[:SS]]); if the labels are names with no time order, ${option} text-order compares them as text (then "10" sorts before "9")`;
+  } else {
+    hint = `one file (or column) must use one kind of ${what} throughout; convert them, or use ${option} text-order to compare them as text`;
+  }
+  return new InputError(
+    `the ${what}s cannot be put in a reliable time order: this one is ${odd === first.text ? "neither a number nor an ISO 8601 date" : odd === first.number ? "a number" : "an ISO 8601 date"}${context3}; ${hint}`,
+    { file: odd.file, line: odd.line, column: odd.column, value: odd.label }
+  );
+}
+function compareCodeUnits(a, b) {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+// src/stability/calendarDate.ts
+function calendarDateOf(label) {
+  const reading = readLabel(label);
+  if (typeof reading === "string" || reading.kind !== "datetime") return null;
+  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
+  const dayNumber = Math.floor(seconds / 86400);
+  return { ...civilFromDays(dayNumber), dayNumber };
+}
+function civilFromDays(days) {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor(
+    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
+  );
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+// src/stability/describeSpan.ts
+function describeSpan(first, last, points, kind) {
+  const a = kind === "datetime" ? calendarDateOf(first) : null;
+  const b = kind === "datetime" ? calendarDateOf(last) : null;
+  if (a !== null && b !== null) {
+    const days = b.dayNumber - a.dayNumber + 1;
+    if (days >= 90) return plural(Math.round(days / 30.44), "month");
+    if (days >= 14) return plural(Math.round(days / 7), "week");
+    if (days >= 2) return plural(days, "day");
+  }
+  return plural(points, "time point");
+}
+function plural(count, unit) {
+  return `${count} ${unit}${count === 1 ? "" : "s"}`;
+}
+
+// src/stability/stabilityFinding.ts
+var STABILITY_GATE_MODES = ["off", "warn", "fail"];
+function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
+  if (stability === null) return { effect: null, headline: "", reasons: [] };
+  const sentences = [];
+  const reasons = [];
+  const recent = stability.recent;
+  const recentWorse = recent !== null && recent.verdict === "fail";
+  if (recent !== null && recentWorse) {
+    const where = recentWords(recent, kind);
+    const change = changeWords(recent);
+    sentences.push(
+      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
+    );
+    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
+    reasons.push(
+      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
+    );
+  }
+  const f = stability.fluctuation;
+  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
+  if (f !== null && stretchWorse) {
+    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
+    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
+    sentences.push(
+      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
+    );
+    reasons.push(
+      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
+    );
+  }
+  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
+  const gate2 = settings.stabilityGate;
+  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate2 === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate2}).` : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
+  return {
+    effect: gate2 === "off" ? null : gate2,
+    headline: [...sentences, response].join(" "),
+    reasons
+  };
+}
+function recentWords(c, kind) {
+  const first = c.firstTimestamp ?? "?";
+  const last = c.lastTimestamp ?? "?";
+  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
+}
+function changeWords(c) {
+  const rel = c.relativeDifference;
+  if (rel === null) {
+    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
+  }
+  const rc = c.relativeChange;
+  const shown = `${formatSignedPercent(rel)} mean loss`;
+  if (rc === null) return shown;
+  const single = rc.pieces === void 0 || rc.pieces.length === 1;
+  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
+  if (single && rc.lower !== null && rc.upper !== null) {
+    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
+  }
+  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
+}
+function splitNote(stability) {
+  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
+}
+function spanWords(span) {
+  return `${span.start} to ${span.end}`;
+}
+
+// src/statistics/modelConfidenceSet.ts
+var CONFIDENCE_SET_STATISTICS = ["range", "max"];
+function modelConfidenceSet(input) {
+  const { means, deviations, statistic, alpha } = input;
+  const m = means.length;
+  if (m === 0 || deviations.length !== m) {
+    throw new RangeError("the model confidence set needs one mean and one resample row per model");
+  }
+  if (!(alpha > 0 && alpha < 1)) throw new RangeError(`alpha must lie in (0, 1), got ${alpha}`);
+  const resamples = deviations[0].length;
+  const alive = means.map((_, i) => i);
+  const order = [];
+  const stepPValues = [];
+  const pValues = new Array(m).fill(1);
+  let running = 0;
+  while (alive.length > 1) {
+    const step = statistic === "range" ? rangeStep(alive, means, deviations, resamples) : maxStep(alive, means, deviations, resamples);
+    const pValue2 = (1 + step.exceedances) / (resamples + 1);
+    running = Math.max(running, pValue2);
+    order.push(step.eliminate);
+    stepPValues.push(pValue2);
+    pValues[step.eliminate] = running;
+    alive.splice(alive.indexOf(step.eliminate), 1);
+  }
+  order.push(alive[0]);
+  stepPValues.push(1);
+  pValues[alive[0]] = 1;
+  return {
+    eliminationOrder: order,
+    stepPValues,
+    pValues,
+    members: pValues.flatMap((p, i) => p >= alpha ? [i] : []),
+    level: 1 - alpha,
+    statistic
+  };
+}
+function reaches(resampled, observed) {
+  return resampled >= observed - Math.abs(observed) * 1e-10;
+}
+function rangeStep(alive, means, deviations, resamples) {
+  const size = alive.length;
+  const pairs = [];
+  const worst = new Array(size).fill(Number.NEGATIVE_INFINITY);
+  let observed = 0;
+  for (let a = 0; a < size; a++) {
+    for (let c = a + 1; c < size; c++) {
+      const zi = deviations[alive[a]];
+      const zj = deviations[alive[c]];
+      let sum = 0;
+      for (let b = 0; b < resamples; b++) {
+        const x = zi[b] - zj[b];
+        sum += x * x;
+      }
+      const variance = sum / resamples;
+      const t = variance > 0 ? (means[alive[a]] - means[alive[c]]) / Math.sqrt(variance) : 0;
+      if (t > worst[a]) worst[a] = t;
+      if (-t > worst[c]) worst[c] = -t;
+      if (Math.abs(t) > observed) observed = Math.abs(t);
+      if (variance > 0) pairs.push({ i: alive[a], j: alive[c], scale: 1 / Math.sqrt(variance) });
+    }
+  }
+  let exceedances = 0;
+  for (let b = 0; b < resamples; b++) {
+    let max = 0;
+    for (const { i, j, scale } of pairs) {
+      const t = Math.abs(deviations[i][b] - deviations[j][b]) * scale;
+      if (t > max) max = t;
+    }
+    if (reaches(max, observed)) exceedances++;
+  }
+  return { eliminate: alive[argmax(worst)], exceedances };
+}
+function maxStep(alive, means, deviations, resamples) {
+  const size = alive.length;
+  const average = new Float64Array(resamples);
+  for (const i of alive) {
+    const z = deviations[i];
+    for (let b = 0; b < resamples; b++) average[b] += z[b];
+  }
+  for (let b = 0; b < resamples; b++) average[b] /= size;
+  let meanOfMeans = 0;
+  for (const i of alive) meanOfMeans += means[i];
+  meanOfMeans /= size;
+  const scales = new Float64Array(size);
+  const t = new Array(size);
+  for (let a = 0; a < size; a++) {
+    const z = deviations[alive[a]];
+    let sum = 0;
+    for (let b = 0; b < resamples; b++) {
+      const x = z[b] - average[b];
+      sum += x * x;
+    }
+    const variance = sum / resamples;
+    scales[a] = variance > 0 ? 1 / Math.sqrt(variance) : 0;
+    t[a] = (means[alive[a]] - meanOfMeans) * scales[a];
+  }
+  const observed = Math.max(...t);
+  let exceedances = 0;
+  for (let b = 0; b < resamples; b++) {
+    let max = Number.NEGATIVE_INFINITY;
+    for (let a = 0; a < size; a++) {
+      const x = (deviations[alive[a]][b] - average[b]) * scales[a];
+      if (x > max) max = x;
+    }
+    if (reaches(max, observed)) exceedances++;
+  }
+  return { eliminate: alive[argmax(t)], exceedances };
+}
+function argmax(values) {
+  let best = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] > values[best]) best = i;
+  return best;
+}
+
+// src/statistics/varianceEstimator.ts
+var VARIANCE_ESTIMATORS = ["ewc-ar1", "ewc", "bartlett", "uniform"];
 
 // src/settings/options.ts
 var ENGINE_OPTIONS = [
@@ -33137,7 +34006,7 @@ var ENGINE_OPTIONS = [
   {
     name: "selection-rule",
     defaultValue: "preferred-in-set",
-    choices: ["preferred-in-set", "none-worse", "some-better"],
+    choices: SELECTION_RULES,
     help: "with several candidates: preferred-in-set passes when the preferred candidate is in the model confidence set and passes its own comparison; none-worse fails on evidence that some candidate is worse than the baseline (SPA test); some-better passes only on evidence that some candidate is better (SPA test)"
   },
   {
@@ -33149,7 +34018,7 @@ var ENGINE_OPTIONS = [
   {
     name: "set-statistic",
     defaultValue: "max",
-    choices: ["range", "max"],
+    choices: CONFIDENCE_SET_STATISTICS,
     help: "with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)"
   },
   {
@@ -33197,7 +34066,7 @@ var ENGINE_OPTIONS = [
   {
     name: "decimal",
     defaultValue: ".",
-    choices: [".", ","],
+    choices: DECIMAL_MARKS,
     help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter'
   },
   {
@@ -33221,7 +34090,7 @@ var ENGINE_OPTIONS = [
   {
     name: "zero-actuals",
     defaultValue: "error",
-    choices: ["error", "skip"],
+    choices: ZERO_ACTUALS_RULES,
     help: "with ape: refuse rows whose actual is 0, or skip and count them"
   },
   {
@@ -33239,25 +34108,25 @@ var ENGINE_OPTIONS = [
   {
     name: "margin-kind",
     defaultValue: "relative",
-    choices: ["relative", "absolute"],
+    choices: MARGIN_KINDS,
     help: "relative (fraction of the baseline loss) or absolute (loss units)"
   },
   {
     name: "policy",
     defaultValue: "no-regression",
-    choices: ["no-regression", "non-inferiority", "superiority"],
+    choices: POLICIES,
     help: "no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin"
   },
   {
     name: "agreement",
     defaultValue: "both",
-    choices: ["both", "either", "dm", "bootstrap"],
+    choices: AGREEMENTS,
     help: "which tests must reject for the decision; with both, a split verdict is a warning"
   },
   {
     name: "variance",
     defaultValue: "ewc-ar1",
-    choices: ["ewc-ar1", "ewc", "bartlett", "uniform"],
+    choices: VARIANCE_ESTIMATORS,
     help: "long-run variance for Diebold\u2013Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4\xB7n^(2/3) terms), bartlett (Newey\u2013West), uniform"
   },
   {
@@ -33294,7 +34163,7 @@ var ENGINE_OPTIONS = [
   {
     name: "short-data",
     defaultValue: "warn",
-    choices: ["warn", "fail"],
+    choices: SHORT_DATA_VERDICTS,
     help: "verdict when there are fewer time points than --min-points"
   },
   {
@@ -33312,13 +34181,13 @@ var ENGINE_OPTIONS = [
   {
     name: "pooling",
     defaultValue: "raw",
-    choices: ["raw", "scaled"],
+    choices: POOLINGS,
     help: "pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)"
   },
   {
     name: "scale",
     defaultValue: "baseline",
-    choices: ["baseline", "seasonal-naive"],
+    choices: SCALE_KINDS,
     help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)"
   },
   {
@@ -33342,7 +34211,7 @@ var ENGINE_OPTIONS = [
   {
     name: "adjust",
     defaultValue: "holm",
-    choices: ["holm", "bh"],
+    choices: ADJUSTMENT_METHODS,
     help: "multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)"
   },
   {
@@ -33366,13 +34235,13 @@ var ENGINE_OPTIONS = [
   {
     name: "fluctuation-sides",
     defaultValue: "one",
-    choices: ["one", "two"],
+    choices: FLUCTUATION_SIDES,
     help: "fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)"
   },
   {
     name: "stability-gate",
     defaultValue: "warn",
-    choices: ["off", "warn", "fail"],
+    choices: STABILITY_GATE_MODES,
     help: "what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail"
   },
   {
@@ -33396,7 +34265,7 @@ var ENGINE_OPTIONS = [
   {
     name: "backtest-checks",
     defaultValue: "enforce",
-    choices: ["enforce", "warn", "report"],
+    choices: CHECK_MODES,
     help: "enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone"
   },
   {
@@ -33789,7 +34658,7 @@ var SERIES_ROWS = 50;
 function seriesSection(report) {
   const s = report.seriesSummary;
   if (s === null) return null;
-  const method = s.method === "holm" ? "Holm" : "Benjamini\u2013Hochberg";
+  const method = ADJUSTMENTS[s.method].name;
   const rows = report.comparisons.filter((c) => c.series !== "all").sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));
   const shown = rows.length <= SERIES_ROWS ? rows : [...rows.slice(0, SERIES_ROWS / 2), ...rows.slice(-SERIES_ROWS / 2)];
   const summary2 = `${s.series} series: ${s.worse} worse, ${s.better} better, ${s.noEvidence} with no clear difference (Diebold\u2013Mariano on L_candidate \u2212 L_baseline per series, ${method}-adjusted, \u03B1 = ${s.alpha}; whatever the policy, "worse" needs evidence of a higher loss and "better" of a lower one).${shown.length < rows.length ? ` Shown: the ${SERIES_ROWS / 2} largest increases and the ${SERIES_ROWS / 2} largest decreases.` : ""}`;
@@ -33947,9 +34816,16 @@ function renderHtml(report, options = {}) {
       );
     }
   }
-  const candidatesChart = candidatesChartSvg(report);
-  if (candidatesChart !== "") {
-    out.push("<h2>Candidates</h2>", `<figure>${candidatesChart}</figure>`);
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    const chart2 = candidatesChartSvg(report);
+    out.push(`<h2>${xml(candidates.heading)}</h2>`);
+    if (chart2 !== "") out.push(`<figure>${chart2}</figure>`);
+    out.push(
+      htmlTable(candidates.ranking),
+      `<p>${xml(candidates.spaSentence)}</p>`,
+      `<p>${xml(candidates.setSentence)}</p>`
+    );
   }
   const horizons = view.comparisons.filter(
     (c) => c.horizon !== "all" && c.series === "all" && c.path === void 0
@@ -34030,7 +34906,7 @@ function renderHtml(report, options = {}) {
 function marginPercent(report) {
   const p = report.policy;
   if (p.marginKind !== "relative" || p.margin === 0) return null;
-  return (p.policy === "superiority" ? -p.margin : p.margin) * 100;
+  return MARGIN_SIGN[p.policy] * p.margin * 100;
 }
 function htmlTable(t) {
   const cell = (tag, text2, j) => `<${tag}${t.align[j] === "right" ? ' class="r"' : ""}>${xml(text2)}</${tag}>`;
@@ -34079,39 +34955,6 @@ function checkLine(check) {
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
 
-// src/report/renderCandidatesMarkdown.ts
-function renderCandidatesMarkdown(report) {
-  const { candidates, spa, confidenceSet: set, selection } = report;
-  if (candidates === void 0 || spa === void 0 || set === void 0) return [];
-  const level = `${formatNumber(set.level * 100, 3)}%`;
-  const changeLevel = `${formatNumber(report.settings.confidence * 100, 3)}%`;
-  const direction = spa.hypothesis === "none-better" ? "better" : "worse";
-  const out = [
-    `**Candidates** (${candidates.length}, ranked by mean loss; preferred: ${escapeMarkdown(selection?.preferred ?? "")})`,
-    "",
-    `| rank | model | mean loss | change against the baseline (${changeLevel}) | in the ${level} set | MCS p-value | SPA p-value (${direction}) | own verdict |`,
-    "|---:|---|---:|---|:---:|---:|---:|---|"
-  ];
-  for (const c of [...candidates].sort((a, b) => a.rank - b.rank)) {
-    const mark = c.name === selection?.preferred ? " (preferred)" : "";
-    out.push(
-      `| ${c.rank} | ${escapeMarkdown(c.name)}${mark} | ${formatNumber(c.comparison.meanCandidateLoss)} | ${relativeChangeText(c.comparison)} | ${c.inConfidenceSet ? "yes" : "no"} | ${formatPValue(c.mcsPValue)} | ${formatPValue(c.spaPValue)} | ${c.comparison.verdict} |`
-    );
-  }
-  out.push(
-    `| \u2013 | ${escapeMarkdown(set.baseline.name)} (baseline) | ${formatNumber(set.baseline.meanLoss)} | \u2013 | ${set.baseline.inConfidenceSet ? "yes" : "no"} | ${formatPValue(set.baseline.mcsPValue)} | \u2013 | \u2013 |`,
-    ""
-  );
-  const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
-  out.push(
-    `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
-    "",
-    `Model confidence set (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.map(escapeMarkdown).join(", ")}. Eliminated in order: ${set.eliminationOrder.slice(0, -1).map((name, j) => `${escapeMarkdown(name)} (p ${formatPValue(set.stepPValues[j])})`).join(", ")}.`,
-    ""
-  );
-  return out;
-}
-
 // src/report/renderMarkdown.ts
 function renderMarkdown(report, options = {}) {
   const view = report;
@@ -34123,7 +34966,11 @@ function renderMarkdown(report, options = {}) {
   lines.push(`<sub>${escapeMarkdown(s.intervalNote)}</sub>`, "");
   for (const note of s.notes) lines.push(`- ${escapeMarkdown(note)}`);
   if (s.notes.length > 0) lines.push("");
-  lines.push(...renderCandidatesMarkdown(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    lines.push(`**${escapeMarkdown(candidates.heading)}**`, "", ...markdownTable(candidates.ranking), "");
+    lines.push(escapeMarkdown(candidates.spaSentence), "", escapeMarkdown(candidates.setSentence), "");
+  }
   const chart = differenceSeries(view);
   if (chart !== null) {
     lines.push(...mermaidChart(chart), "");
@@ -40560,82 +41407,6 @@ function getOctokit(token, options, ...additionalPlugins) {
   return new GitHubWithPlugins(getOctokitOptions(token, options));
 }
 
-// src/reading/numbers.ts
-function parseDecimal(text2) {
-  const n = text2.length;
-  if (n === 0) return Number.NaN;
-  if (n <= 17) {
-    let i = 0;
-    let c = text2.charCodeAt(0);
-    const negative = c === 45;
-    if (negative || c === 43) i = 1;
-    let mantissa = 0;
-    let digits = 0;
-    let scale = -1;
-    for (; i < n; i++) {
-      c = text2.charCodeAt(i);
-      if (c >= 48 && c <= 57) {
-        mantissa = mantissa * 10 + (c - 48);
-        digits++;
-      } else if (c === 46 && scale < 0) {
-        scale = i;
-      } else break;
-    }
-    if (i === n && digits > 0 && digits <= 15) {
-      const fraction = scale < 0 ? 0 : n - 1 - scale;
-      const value2 = fraction === 0 ? mantissa : mantissa / POWERS_OF_TEN[fraction];
-      return negative ? -value2 : value2;
-    }
-  }
-  const first = text2.charCodeAt(0);
-  if (!(isDigit(first) || first === 45 || first === 43 || first === 46))
-    return Number.NaN;
-  const last = text2.charCodeAt(n - 1);
-  if (!(isDigit(last) || last === 46)) return Number.NaN;
-  if (first === 48 && n > 2) {
-    const second = text2.charCodeAt(1) | 32;
-    if (second === 120 || second === 98 || second === 111) return Number.NaN;
-  }
-  const value = +text2;
-  return Number.isFinite(value) ? value : Number.NaN;
-}
-var POWERS_OF_TEN = [
-  1,
-  10,
-  100,
-  1e3,
-  1e4,
-  1e5,
-  1e6,
-  1e7,
-  1e8,
-  1e9,
-  1e10,
-  1e11,
-  1e12,
-  1e13,
-  1e14,
-  1e15
-];
-function isDigit(code2) {
-  return code2 >= 48 && code2 <= 57;
-}
-function parseHorizon(text2) {
-  const n = text2.length;
-  if (n > 0 && n <= 9) {
-    let value2 = 0;
-    let i = 0;
-    for (; i < n; i++) {
-      const c = text2.charCodeAt(i);
-      if (c < 48 || c > 57) break;
-      value2 = value2 * 10 + (c - 48);
-    }
-    if (i === n) return value2 >= 1 ? value2 : 0;
-  }
-  const value = parseDecimal(text2);
-  return Number.isInteger(value) && value >= 1 && value <= 2147483647 ? value : 0;
-}
-
 // src/alignment/keyOrder.ts
 function sortByKey(size, components) {
   let order = new Int32Array(size);
@@ -40667,177 +41438,6 @@ function compareKeys(components, a, other, b, depth = components.length) {
     if (d !== 0) return d;
   }
   return 0;
-}
-
-// src/alignment/timeOrder.ts
-var DATE_PREFIX = /^\d{4}-\d{2}-\d{2}/;
-var ISO = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.(\d{1,9}))?)?(Z|[+-]\d{2}:\d{2})?)?$/;
-function readLabel(label) {
-  const number = parseDecimal(label);
-  if (!Number.isNaN(number)) return { kind: "number", key: number === 0 ? 0 : number };
-  if (!DATE_PREFIX.test(label)) return { kind: "text" };
-  return readIsoLabel(label);
-}
-function readIsoLabel(label) {
-  const m = ISO.exec(label);
-  if (m === null) {
-    return "starts like a date but is not YYYY-MM-DD[THH:MM[:SS[.fff]]][Z|\xB1HH:MM]";
-  }
-  const month = Number(m[2]);
-  const day = Number(m[3]);
-  const year = Number(m[1]);
-  if (month < 1 || month > 12) return `month ${m[2]} is not 01\u201312`;
-  if (day < 1 || day > 31 || checkCivil({ ...ZERO, year, month, day }, "") !== null)
-    return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
-  const hour = m[4] === void 0 ? 0 : Number(m[4]);
-  const minute = m[5] === void 0 ? 0 : Number(m[5]);
-  const second = m[6] === void 0 ? 0 : Number(m[6]);
-  if (hour > 23) return `hour ${m[4]} is not 00\u201323`;
-  if (minute > 59) return `minute ${m[5]} is not 00\u201359`;
-  if (second > 59) return `second ${m[6]} is not 00\u201359`;
-  let offsetSeconds = 0;
-  const zone = m[8];
-  if (zone !== void 0 && zone !== "Z") {
-    const oh = Number(zone.slice(1, 3));
-    const om = Number(zone.slice(4, 6));
-    if (oh > 23 || om > 59) return `offset ${zone} is not a valid \xB1HH:MM`;
-    offsetSeconds = (zone[0] === "-" ? -1 : 1) * (oh * 3600 + om * 60);
-  }
-  const civil = {
-    year,
-    month,
-    day,
-    hour,
-    minute,
-    second,
-    nanos: m[7] === void 0 ? 0 : Number(m[7].padEnd(9, "0")),
-    offsetSeconds
-  };
-  const { key, epochMillis } = instantOf(civil);
-  return { kind: "datetime", key, epochMillis };
-}
-var ZERO = {
-  year: 0,
-  month: 1,
-  day: 1,
-  hour: 0,
-  minute: 0,
-  second: 0,
-  nanos: 0,
-  offsetSeconds: 0
-};
-function readAs(label, format) {
-  switch (format) {
-    case "auto":
-      return readLabel(label);
-    case "text-order":
-      return { kind: "text" };
-    case "number": {
-      const x = parseDecimal(label);
-      return Number.isNaN(x) ? "not a decimal number" : { kind: "number", key: x === 0 ? 0 : x };
-    }
-    case "iso-8601":
-      return DATE_PREFIX.test(label) ? readIsoLabel(label) : "not an ISO 8601 date (YYYY-MM-DD[THH:MM[:SS]][Z|\xB1HH:MM])";
-    case "day-month-year":
-    case "month-day-year": {
-      const civil = readDayMonthDate(label, format === "day-month-year");
-      if (typeof civil === "string") return civil;
-      const { key, epochMillis } = instantOf(civil);
-      return { kind: "datetime", key, epochMillis };
-    }
-  }
-}
-function orderLabels(sources, what, format = "auto", option = "--time-format") {
-  const readings = /* @__PURE__ */ new Map();
-  const first = {
-    number: null,
-    datetime: null,
-    text: null
-  };
-  const counts = { number: 0, datetime: 0, text: 0 };
-  for (const { file, column } of sources) {
-    const labels2 = column.labels;
-    for (let id = 0; id < labels2.length; id++) {
-      const label = labels2[id];
-      if (readings.has(label)) continue;
-      const reading = readAs(label, format);
-      if (typeof reading === "string") {
-        throw new InputError(
-          format === "auto" ? `not a valid ISO 8601 ${what}: ${reading}` : `not a ${what} in the ${format} format of ${option}: ${reading}`,
-          { file, line: column.firstLines[id], column: column.column, value: label }
-        );
-      }
-      readings.set(label, reading);
-      counts[reading.kind]++;
-      first[reading.kind] ??= { file, line: column.firstLines[id], column: column.column, label };
-    }
-  }
-  const total = readings.size;
-  let kind;
-  let reason;
-  if (format === "text-order") {
-    kind = "text";
-    reason = `text order (UTF-16 code units, so "10" comes before "9"), as ${option} text-order asks`;
-  } else if (counts.number === total) {
-    kind = "number";
-    reason = `every ${what} is a decimal number: numeric order`;
-  } else if (counts.datetime === total) {
-    kind = "datetime";
-    reason = format === "day-month-year" || format === "month-day-year" ? `every ${what} is a ${format} date: chronological order (times are UTC)` : `every ${what} is an ISO 8601 date or date-time: chronological order (no offset means UTC)`;
-  } else {
-    throw mixedKinds(first, counts, what, option);
-  }
-  const keyOf = (label) => {
-    const reading = readings.get(label);
-    if (kind === "text" || reading.kind === "text") return label;
-    return reading.key;
-  };
-  const representative = /* @__PURE__ */ new Map();
-  for (const label of readings.keys()) {
-    const key = keyOf(label);
-    const current = representative.get(key);
-    if (current === void 0 || label < current) representative.set(key, label);
-  }
-  const keys = [...representative.keys()];
-  if (kind === "number") keys.sort((a, b) => a - b);
-  else keys.sort(compareCodeUnits);
-  const rankOfKey = /* @__PURE__ */ new Map();
-  keys.forEach((key, rank) => {
-    rankOfKey.set(key, rank);
-  });
-  const ranks = sources.map(
-    ({ column }) => Int32Array.from(column.labels, (label) => rankOfKey.get(keyOf(label)))
-  );
-  const labels = keys.map((key) => representative.get(key));
-  let instants = null;
-  if (kind === "number") instants = Float64Array.from(keys);
-  else if (kind === "datetime") {
-    instants = Float64Array.from(labels, (label) => {
-      const reading = readings.get(label);
-      return reading.kind === "datetime" ? reading.epochMillis : Number.NaN;
-    });
-  }
-  return { kind, format, reason, ranks, labels, instants };
-}
-function mixedKinds(first, counts, what, option) {
-  const odd = first.text ?? (counts.number <= counts.datetime ? first.number : first.datetime) ?? first.number;
-  const others = odd === first.text ? counts.number >= counts.datetime ? first.number : first.datetime : odd === first.number ? first.datetime : first.number;
-  const context3 = others === null ? "" : ` while ${JSON.stringify(others.label)} (${others.file}:${others.line}) is ${others === first.number ? "a number" : "an ISO 8601 date"}`;
-  let hint;
-  if (looksLikeDayMonthDate(odd.label)) {
-    hint = `it looks like a date with day and month first: say how to read it with ${option} day-month-year (31/12/2026) or ${option} month-day-year (12/31/2026)`;
-  } else if (odd === first.text) {
-    hint = `a ${what} must be a number or an ISO 8601 date (YYYY-MM-DD[THH:MM[:SS]]); if the labels are names with no time order, ${option} text-order compares them as text (then "10" sorts before "9")`;
-  } else {
-    hint = `one file (or column) must use one kind of ${what} throughout; convert them, or use ${option} text-order to compare them as text`;
-  }
-  return new InputError(
-    `the ${what}s cannot be put in a reliable time order: this one is ${odd === first.text ? "neither a number nor an ISO 8601 date" : odd === first.number ? "a number" : "an ISO 8601 date"}${context3}; ${hint}`,
-    { file: odd.file, line: odd.line, column: odd.column, value: odd.label }
-  );
-}
-function compareCodeUnits(a, b) {
-  return a < b ? -1 : a > b ? 1 : 0;
 }
 
 // src/alignment/alignPanel.ts
@@ -51192,9 +51792,10 @@ function lossDifferential(series, relativeMargin) {
 var VERSION7 = "0.1.0";
 
 // src/decision/decideAdjusted.ts
+var SERIES_DIRECTIONS = ["worse", "better", "no evidence"];
 function decideAdjusted(input) {
   const { hypothesis, alpha, adjustedPValue: p } = input;
-  const name = input.method === "holm" ? "Holm-adjusted" : "Benjamini\u2013Hochberg-adjusted";
+  const name = `${ADJUSTMENTS[input.method].name}-adjusted`;
   if (p === null) {
     return {
       verdict: "warn",
@@ -51218,9 +51819,9 @@ function decideAdjusted(input) {
 }
 
 // src/decision/hypothesis.ts
+var ON_REJECT_VERDICTS = ["pass", "fail"];
 function hypothesisFor(policy, margin, kind) {
-  const better = policy === "superiority";
-  const signed = better ? -margin : margin;
+  const signed = MARGIN_SIGN[policy] * margin;
   const marginText = margin === 0 ? "" : kind === "relative" ? ` by more than ${formatPercent(margin)}` : ` by more than ${margin} loss units`;
   const base = {
     baselineFactor: kind === "relative" ? 1 + signed : 1,
@@ -51271,229 +51872,6 @@ function firstOversizedLoss(values, included = null) {
   return -1;
 }
 
-// src/losses/absoluteError.ts
-function absoluteError(actual, prediction) {
-  return Math.abs(actual - prediction);
-}
-
-// src/losses/absolutePercentageError.ts
-function absolutePercentageError(actual, prediction) {
-  return 100 * Math.abs(actual - prediction) / Math.abs(actual);
-}
-
-// src/losses/intervalCoverage.ts
-function intervalCoverage(actual, lower, upper) {
-  const n = actual.length;
-  if (lower.length !== n || upper.length !== n) {
-    throw new RangeError(
-      `intervalCoverage: ${n} actuals, ${lower.length} lower and ${upper.length} upper bounds`
-    );
-  }
-  if (n === 0) return null;
-  let inside = 0;
-  for (let i = 0; i < n; i++) {
-    const y = actual[i];
-    if (lower[i] <= y && y <= upper[i]) inside++;
-  }
-  return inside / n;
-}
-
-// src/losses/intervalScore.ts
-function intervalScore(actual, lower, upper, alpha) {
-  if (!(alpha > 0 && alpha < 1)) {
-    throw new RangeError(`intervalScore: \u03B1 must be in (0, 1), got ${alpha}`);
-  }
-  const penalty = 2 / alpha;
-  let score = upper - lower;
-  if (actual < lower) score += penalty * (lower - actual);
-  if (actual > upper) score += penalty * (actual - upper);
-  return score;
-}
-
-// src/losses/pinballLoss.ts
-function pinballLoss(actual, quantile, level) {
-  const u = actual - quantile;
-  return u >= 0 ? level * u : (level - 1) * u;
-}
-
-// src/losses/squaredError.ts
-function squaredError(actual, prediction) {
-  const e = actual - prediction;
-  return e * e;
-}
-
-// src/losses/symmetricAbsolutePercentageError.ts
-function symmetricAbsolutePercentageError(actual, prediction) {
-  const denominator = Math.abs(actual) + Math.abs(prediction);
-  return denominator === 0 ? 0 : 200 * Math.abs(actual - prediction) / denominator;
-}
-
-// src/losses/rowLosses.ts
-var LossUnavailableError = class extends Error {
-};
-var POINT_LOSSES = {
-  squared: squaredError,
-  absolute: absoluteError,
-  ape: absolutePercentageError,
-  sape: symmetricAbsolutePercentageError
-};
-function computeRowLosses(panel, loss, zeroActuals, interval = null) {
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  if (loss === "interval") return intervalLosses(panel, interval);
-  if (loss === "pinball") {
-    const pairs = commonQuantiles(panel.baseline.quantiles, panel.candidate.quantiles);
-    if (pairs.length === 0) {
-      throw new LossUnavailableError(
-        "the pinball loss needs quantile columns (such as q0.1, q0.5, q0.9) with the same levels in baseline and candidate"
-      );
-    }
-    const y2 = panel.actual;
-    for (const { level, base: base2, cand: cand2 } of pairs) {
-      for (let i = 0; i < n; i++) {
-        const yi = y2[i];
-        baseline[i] += pinballLoss(yi, base2[i], level);
-        candidate[i] += pinballLoss(yi, cand2[i], level);
-      }
-    }
-    const k = pairs.length;
-    for (let i = 0; i < n; i++) {
-      baseline[i] /= k;
-      candidate[i] /= k;
-    }
-    return {
-      loss,
-      baseline,
-      candidate,
-      included: null,
-      zeroActualRows: [],
-      levels: pairs.map((p) => p.level),
-      coverage: null
-    };
-  }
-  const base = panel.baseline.prediction;
-  const cand = panel.candidate.prediction;
-  if (base === null || cand === null) {
-    throw new LossUnavailableError(
-      `the ${loss} loss needs a prediction column in both baseline and candidate`
-    );
-  }
-  const f = POINT_LOSSES[loss];
-  const y = panel.actual;
-  const zeroActualRows = [];
-  let included = null;
-  for (let i = 0; i < n; i++) {
-    const yi = y[i];
-    if (loss === "ape" && yi === 0) {
-      zeroActualRows.push(i);
-      if (zeroActuals === "skip") {
-        included ??= new Uint8Array(n).fill(1);
-        included[i] = 0;
-      }
-      continue;
-    }
-    baseline[i] = f(yi, base[i]);
-    candidate[i] = f(yi, cand[i]);
-  }
-  return { loss, baseline, candidate, included, zeroActualRows, levels: [], coverage: null };
-}
-function intervalLosses(panel, interval) {
-  if (interval === null) {
-    throw new LossUnavailableError(
-      "the interval loss needs the two quantile levels of the interval"
-    );
-  }
-  const [lowLevel, highLevel] = interval;
-  const find = (columns, level) => columns.find((q) => Math.abs(q.level - level) < 1e-12)?.values;
-  const bl = find(panel.baseline.quantiles, lowLevel);
-  const bu = find(panel.baseline.quantiles, highLevel);
-  const cl = find(panel.candidate.quantiles, lowLevel);
-  const cu = find(panel.candidate.quantiles, highLevel);
-  if (bl === void 0 || bu === void 0 || cl === void 0 || cu === void 0) {
-    throw new LossUnavailableError(
-      `the interval loss needs quantile columns at levels ${lowLevel} and ${highLevel} in baseline and candidate`
-    );
-  }
-  const alpha = 1 - (highLevel - lowLevel);
-  const n = panel.size;
-  const baseline = new Float64Array(n);
-  const candidate = new Float64Array(n);
-  const y = panel.actual;
-  for (let i = 0; i < n; i++) {
-    baseline[i] = intervalScore(y[i], bl[i], bu[i], alpha);
-    candidate[i] = intervalScore(y[i], cl[i], cu[i], alpha);
-  }
-  return {
-    loss: "interval",
-    baseline,
-    candidate,
-    included: null,
-    zeroActualRows: [],
-    levels: [lowLevel, highLevel],
-    coverage: {
-      nominal: highLevel - lowLevel,
-      baseline: intervalCoverage(y, bl, bu),
-      candidate: intervalCoverage(y, cl, cu)
-    }
-  };
-}
-function commonQuantiles(baseline, candidate) {
-  const byLevel = new Map(candidate.map((q) => [q.level, q.values]));
-  const pairs = [];
-  for (const q of baseline) {
-    const cand = byLevel.get(q.level);
-    if (cand !== void 0) pairs.push({ level: q.level, base: q.values, cand });
-  }
-  return pairs;
-}
-
-// src/multiplicity/benjaminiHochbergAdjust.ts
-function benjaminiHochbergAdjust(pValues) {
-  const { positions, values } = testFamily(pValues, "benjaminiHochbergAdjust");
-  const m = values.length;
-  const adjusted = pValues.map(() => null);
-  const order = ascendingOrder(values);
-  let running = 1;
-  for (let i = m - 1; i >= 0; i--) {
-    const k = order[i];
-    running = Math.min(running, m / (i + 1) * values[k]);
-    adjusted[positions[k]] = running;
-  }
-  return adjusted;
-}
-
-// src/decision/verdict.ts
-function worstVerdict(verdicts) {
-  if (verdicts.includes("fail")) return "fail";
-  if (verdicts.includes("warn")) return "warn";
-  return "pass";
-}
-
-// src/integrity/checkResult.ts
-var CHECK_IDS = [
-  "look-ahead",
-  "horizon-steps",
-  "origin-after-actuals",
-  "origin-sets",
-  "path-sets",
-  "horizon-sets",
-  "time-spans",
-  "series-coverage",
-  "fold-purge",
-  "outside-test-window",
-  "exact-predictions"
-];
-var FAILING_CHECKS = ["look-ahead", "outside-test-window"];
-var MAX_EXAMPLES = 5;
-var FindingCollector = class {
-  count = 0;
-  examples = [];
-  add(example) {
-    if (this.count++ < MAX_EXAMPLES) this.examples.push(example());
-  }
-};
-
 // src/integrity/checkPolicy.ts
 function applyCheckPolicy(findings, notRun, mode, frequency) {
   const checks = findings.map((f) => ({
@@ -51519,110 +51897,6 @@ function noChecks(mode, reason) {
     checks: [],
     notRun: CHECK_IDS.map((id) => ({ id, reason }))
   };
-}
-
-// src/stability/calendarDate.ts
-function calendarDateOf(label) {
-  const reading = readLabel(label);
-  if (typeof reading === "string" || reading.kind !== "datetime") return null;
-  const seconds = Number(reading.key.slice(0, 13)) - 1e12;
-  const dayNumber = Math.floor(seconds / 86400);
-  return { ...civilFromDays(dayNumber), dayNumber };
-}
-function civilFromDays(days) {
-  const z = days + 719468;
-  const era = Math.floor(z / 146097);
-  const doe = z - era * 146097;
-  const yoe = Math.floor(
-    (doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365
-  );
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
-  const month = mp < 10 ? mp + 3 : mp - 9;
-  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
-}
-
-// src/stability/describeSpan.ts
-function describeSpan(first, last, points, kind) {
-  const a = kind === "datetime" ? calendarDateOf(first) : null;
-  const b = kind === "datetime" ? calendarDateOf(last) : null;
-  if (a !== null && b !== null) {
-    const days = b.dayNumber - a.dayNumber + 1;
-    if (days >= 90) return plural(Math.round(days / 30.44), "month");
-    if (days >= 14) return plural(Math.round(days / 7), "week");
-    if (days >= 2) return plural(days, "day");
-  }
-  return plural(points, "time point");
-}
-function plural(count, unit) {
-  return `${count} ${unit}${count === 1 ? "" : "s"}`;
-}
-
-// src/stability/stabilityFinding.ts
-function stabilityFinding(stability, hypothesis, settings, kind, overallVerdict) {
-  if (stability === null) return { effect: null, headline: "", reasons: [] };
-  const sentences = [];
-  const reasons = [];
-  const recent = stability.recent;
-  const recentWorse = recent !== null && recent.verdict === "fail";
-  if (recent !== null && recentWorse) {
-    const where = recentWords(recent, kind);
-    const change = changeWords(recent);
-    sentences.push(
-      hypothesis.onReject === "fail" ? `The candidate is worse in ${where}: ${change}.` : `In ${where} the candidate does not meet the policy: ${change}.`
-    );
-    const split = stability.levels.adjustment === "bonferroni" ? ` at \u03B1 = ${stability.levels.recent}, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the fluctuation test)` : "";
-    reasons.push(
-      `Recent window (${recent.n} time points, ${recent.firstTimestamp} to ${recent.lastTimestamp})${split}: ${recent.reasons.join(" ")}`
-    );
-  }
-  const f = stability.fluctuation;
-  const stretchWorse = f?.rejected && f.worsePeriods.length > 0;
-  if (f !== null && stretchWorse) {
-    const spans = f.worsePeriods.slice(0, 3).map(spanWords).join(", ");
-    const more = f.worsePeriods.length > 3 ? ` and ${f.worsePeriods.length - 3} more` : "";
-    sentences.push(
-      `${recentWorse ? "The candidate is also" : "Over time, the candidate is"} significantly worse over ${spans}${more} (fluctuation test, windows of ${f.windowSize} time points, ${formatNumber(f.statistic, 3)} > ${formatNumber(f.criticalValue, 4)}).`
-    );
-    reasons.push(
-      `Fluctuation test (Giacomini & Rossi 2010, \u03BC = ${f.mu}, ${settings.fluctuationSides}-sided, \u03B1 = ${stability.levels.fluctuation ?? settings.alpha}${splitNote(stability)}): the largest rolling statistic ${formatNumber(f.statistic)} exceeds the critical value ${formatNumber(f.criticalValue)}; it peaks over ${spanWords(f.peak)}.`
-    );
-  }
-  if (!recentWorse && !stretchWorse) return { effect: null, headline: "", reasons };
-  const gate2 = settings.stabilityGate;
-  const response = gate2 === "off" ? "This does not change the verdict (stability-gate off)." : overallVerdict === "fail" ? `On its own this would ${gate2 === "warn" ? "make the gate warn" : "fail the gate"} (stability-gate ${gate2}).` : gate2 === "warn" ? "This makes the gate warn; it does not fail it (stability-gate warn)." : "This fails the gate (stability-gate fail).";
-  return {
-    effect: gate2 === "off" ? null : gate2,
-    headline: [...sentences, response].join(" "),
-    reasons
-  };
-}
-function recentWords(c, kind) {
-  const first = c.firstTimestamp ?? "?";
-  const last = c.lastTimestamp ?? "?";
-  return `the most recent ${describeSpan(first, last, c.n, kind)} (${first} to ${last})`;
-}
-function changeWords(c) {
-  const rel = c.relativeDifference;
-  if (rel === null) {
-    return `mean loss ${formatNumber(c.meanCandidateLoss)} vs ${formatNumber(c.meanBaselineLoss)}`;
-  }
-  const rc = c.relativeChange;
-  const shown = `${formatSignedPercent(rel)} mean loss`;
-  if (rc === null) return shown;
-  const single = rc.pieces === void 0 || rc.pieces.length === 1;
-  const level = `${formatNumber(rc.level * 100, 3)}% interval`;
-  if (single && rc.lower !== null && rc.upper !== null) {
-    return `${shown} (${level} ${formatSignedPercent(rc.lower)} to ${formatSignedPercent(rc.upper)})`;
-  }
-  return `${shown} (${level} ${relativeChangeText(c).replace(/^\S+ /, "")})`;
-}
-function splitNote(stability) {
-  return stability.levels.adjustment === "bonferroni" ? `, half of \u03B1 = ${stability.levels.alpha} (Bonferroni, beside the recent window)` : "";
-}
-function spanWords(span) {
-  return `${span.start} to ${span.end}`;
 }
 
 // src/report/buildReport.ts
@@ -52006,6 +52280,7 @@ function bartlettLongRunVariance(x, lag) {
 }
 
 // src/statistics/neweyWestLag.ts
+var LAG_RULE_KINDS = ["auto", "horizon", "fixed"];
 function neweyWestBandwidth(x) {
   const n = x.length;
   if (n < 2) throw new RangeError(`neweyWestBandwidth: needs at least 2 values, got ${n}`);
@@ -52091,42 +52366,6 @@ function prewhitenedLongRunVariance(y, rule, horizon) {
     coefficient,
     lag
   };
-}
-
-// src/stability/fluctuationCriticalValues.ts
-var TABLE_MU = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
-var TABLE = {
-  two: [
-    { alpha: 0.01, values: [3.8733, 3.6919, 3.5621, 3.4441, 3.347, 3.231, 3.133, 3.0092, 2.8685] },
-    { alpha: 0.05, values: [3.393, 3.179, 3.012, 2.89, 2.779, 2.634, 2.56, 2.433, 2.248] },
-    { alpha: 0.1, values: [3.17, 2.948, 2.766, 2.626, 2.5, 2.356, 2.252, 2.13, 1.95] }
-  ],
-  one: [
-    { alpha: 0.01, values: [3.69, 3.4981, 3.3616, 3.2245, 3.0992, 3.0005, 2.8805, 2.76, 2.6099] },
-    { alpha: 0.05, values: [3.176, 2.938, 2.77, 2.624, 2.475, 2.352, 2.248, 2.08, 1.975] },
-    { alpha: 0.1, values: [2.928, 2.676, 2.482, 2.334, 2.168, 2.03, 1.904, 1.74, 1.6] }
-  ]
-};
-function fluctuationCriticalValue(mu, alpha, sides) {
-  if (!(mu >= 0.1 - 1e-12 && mu <= 0.9 + 1e-12)) return null;
-  const columns = TABLE[sides];
-  const atAlpha = columns.find((c) => Math.abs(c.alpha - alpha) < 1e-12);
-  if (atAlpha !== void 0) return interpolateInMu(atAlpha.values, mu);
-  for (let i = 0; i + 1 < columns.length; i++) {
-    const lo2 = columns[i];
-    const hi2 = columns[i + 1];
-    if (alpha > lo2.alpha && alpha < hi2.alpha) {
-      const w = Math.log(alpha / lo2.alpha) / Math.log(hi2.alpha / lo2.alpha);
-      return (1 - w) * interpolateInMu(lo2.values, mu) + w * interpolateInMu(hi2.values, mu);
-    }
-  }
-  return null;
-}
-function interpolateInMu(values, mu) {
-  const position = Math.min(Math.max((mu - 0.1) / 0.1, 0), TABLE_MU.length - 1);
-  const i = Math.min(Math.floor(position + 1e-9), TABLE_MU.length - 2);
-  const w = Math.min(Math.max(position - i, 0), 1);
-  return (1 - w) * values[i] + w * values[i + 1];
 }
 
 // src/stability/rollingStatistic.ts
@@ -53916,6 +54155,7 @@ function cosineTermsForAutocorrelation(n, rho) {
 }
 
 // src/statistics/dieboldMariano.ts
+var DIEBOLD_MARIANO_STATES = ["ok", "identical", "zero-variance", "too-short"];
 var MINIMUM_LENGTH = 3;
 function dieboldMariano(d, options) {
   const { estimator: requestedEstimator, horizon, margin } = options;
@@ -54211,6 +54451,10 @@ function bootstrapNotRun(settings) {
 }
 
 // src/stability/recentWindow.ts
+var RECENT_WINDOW_KINDS = [
+  "points",
+  "share"
+];
 function parseRecentWindow(text2, label) {
   if (text2 === "") return null;
   const percent2 = /^(\d+(?:\.\d+)?)%$/.exec(text2);
@@ -54258,6 +54502,7 @@ function recentComparison(series, window2, scope, hypothesis, settings, runner) 
 }
 
 // src/stability/stabilityLevels.ts
+var STABILITY_ADJUSTMENTS = ["none", "bonferroni"];
 function splitLevel(alpha, checks) {
   return checks === 2 ? alpha / 2 : alpha;
 }
@@ -54406,7 +54651,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
       bootstrap: false
     });
   });
-  const adjust = settings.adjust === "holm" ? holmAdjust : benjaminiHochbergAdjust;
+  const adjust = ADJUSTMENTS[settings.adjust].adjust;
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
   const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
@@ -55291,119 +55536,6 @@ function lastTime(tables, kind) {
   return best;
 }
 
-// src/statistics/modelConfidenceSet.ts
-function modelConfidenceSet(input) {
-  const { means, deviations, statistic, alpha } = input;
-  const m = means.length;
-  if (m === 0 || deviations.length !== m) {
-    throw new RangeError("the model confidence set needs one mean and one resample row per model");
-  }
-  if (!(alpha > 0 && alpha < 1)) throw new RangeError(`alpha must lie in (0, 1), got ${alpha}`);
-  const resamples = deviations[0].length;
-  const alive = means.map((_, i) => i);
-  const order = [];
-  const stepPValues = [];
-  const pValues = new Array(m).fill(1);
-  let running = 0;
-  while (alive.length > 1) {
-    const step = statistic === "range" ? rangeStep(alive, means, deviations, resamples) : maxStep(alive, means, deviations, resamples);
-    const pValue2 = (1 + step.exceedances) / (resamples + 1);
-    running = Math.max(running, pValue2);
-    order.push(step.eliminate);
-    stepPValues.push(pValue2);
-    pValues[step.eliminate] = running;
-    alive.splice(alive.indexOf(step.eliminate), 1);
-  }
-  order.push(alive[0]);
-  stepPValues.push(1);
-  pValues[alive[0]] = 1;
-  return {
-    eliminationOrder: order,
-    stepPValues,
-    pValues,
-    members: pValues.flatMap((p, i) => p >= alpha ? [i] : []),
-    level: 1 - alpha,
-    statistic
-  };
-}
-function reaches(resampled, observed) {
-  return resampled >= observed - Math.abs(observed) * 1e-10;
-}
-function rangeStep(alive, means, deviations, resamples) {
-  const size = alive.length;
-  const pairs = [];
-  const worst = new Array(size).fill(Number.NEGATIVE_INFINITY);
-  let observed = 0;
-  for (let a = 0; a < size; a++) {
-    for (let c = a + 1; c < size; c++) {
-      const zi = deviations[alive[a]];
-      const zj = deviations[alive[c]];
-      let sum = 0;
-      for (let b = 0; b < resamples; b++) {
-        const x = zi[b] - zj[b];
-        sum += x * x;
-      }
-      const variance = sum / resamples;
-      const t = variance > 0 ? (means[alive[a]] - means[alive[c]]) / Math.sqrt(variance) : 0;
-      if (t > worst[a]) worst[a] = t;
-      if (-t > worst[c]) worst[c] = -t;
-      if (Math.abs(t) > observed) observed = Math.abs(t);
-      if (variance > 0) pairs.push({ i: alive[a], j: alive[c], scale: 1 / Math.sqrt(variance) });
-    }
-  }
-  let exceedances = 0;
-  for (let b = 0; b < resamples; b++) {
-    let max = 0;
-    for (const { i, j, scale } of pairs) {
-      const t = Math.abs(deviations[i][b] - deviations[j][b]) * scale;
-      if (t > max) max = t;
-    }
-    if (reaches(max, observed)) exceedances++;
-  }
-  return { eliminate: alive[argmax(worst)], exceedances };
-}
-function maxStep(alive, means, deviations, resamples) {
-  const size = alive.length;
-  const average = new Float64Array(resamples);
-  for (const i of alive) {
-    const z = deviations[i];
-    for (let b = 0; b < resamples; b++) average[b] += z[b];
-  }
-  for (let b = 0; b < resamples; b++) average[b] /= size;
-  let meanOfMeans = 0;
-  for (const i of alive) meanOfMeans += means[i];
-  meanOfMeans /= size;
-  const scales = new Float64Array(size);
-  const t = new Array(size);
-  for (let a = 0; a < size; a++) {
-    const z = deviations[alive[a]];
-    let sum = 0;
-    for (let b = 0; b < resamples; b++) {
-      const x = z[b] - average[b];
-      sum += x * x;
-    }
-    const variance = sum / resamples;
-    scales[a] = variance > 0 ? 1 / Math.sqrt(variance) : 0;
-    t[a] = (means[alive[a]] - meanOfMeans) * scales[a];
-  }
-  const observed = Math.max(...t);
-  let exceedances = 0;
-  for (let b = 0; b < resamples; b++) {
-    let max = Number.NEGATIVE_INFINITY;
-    for (let a = 0; a < size; a++) {
-      const x = (deviations[alive[a]][b] - average[b]) * scales[a];
-      if (x > max) max = x;
-    }
-    if (reaches(max, observed)) exceedances++;
-  }
-  return { eliminate: alive[argmax(t)], exceedances };
-}
-function argmax(values) {
-  let best = 0;
-  for (let i = 1; i < values.length; i++) if (values[i] > values[best]) best = i;
-  return best;
-}
-
 // src/candidates/commonBlockLength.ts
 function commonBlockLength(baseline, candidates, rule) {
   if (rule.kind === "fixed") return rule.length;
@@ -55417,65 +55549,6 @@ function commonBlockLength(baseline, candidates, rule) {
   let sum = 0;
   for (const b of lengths) sum += b;
   return sum / lengths.length;
-}
-
-// src/candidates/decideCandidates.ts
-function decideCandidates(input) {
-  const { rule, alpha, setAlpha, preferred, spaPValue } = input;
-  const reasons = [];
-  const verdicts = [];
-  const p = spaPValue.toPrecision(3);
-  switch (rule) {
-    case "preferred-in-set": {
-      const level = `${Math.round((1 - setAlpha) * 1e3) / 10}%`;
-      if (!preferred.inConfidenceSet) {
-        verdicts.push("fail");
-        reasons.push(
-          `The preferred candidate ${preferred.name} is not in the ${level} model confidence set (MCS p-value ${preferred.mcsPValue.toPrecision(3)} < ${setAlpha}): other models are significantly more accurate.`
-        );
-      } else {
-        reasons.push(
-          `The preferred candidate ${preferred.name} is in the ${level} model confidence set (MCS p-value ${preferred.mcsPValue.toPrecision(3)}).`
-        );
-      }
-      verdicts.push(preferred.verdict);
-      reasons.push(`Its own comparison against the baseline: ${preferred.verdict}.`);
-      break;
-    }
-    case "none-worse":
-      if (spaPValue <= alpha) {
-        verdicts.push("fail");
-        reasons.push(
-          `The SPA test finds some candidate worse than the baseline (consistent p-value ${p} \u2264 ${alpha}).`
-        );
-      } else {
-        verdicts.push("pass");
-        reasons.push(
-          `No evidence that any candidate is worse than the baseline (SPA consistent p-value ${p} > ${alpha}).`
-        );
-      }
-      break;
-    case "some-better":
-      if (spaPValue <= alpha) {
-        verdicts.push("pass");
-        reasons.push(
-          `The SPA test finds some candidate better than the baseline, allowing for the choice among all of them (consistent p-value ${p} \u2264 ${alpha}).`
-        );
-      } else {
-        verdicts.push("fail");
-        reasons.push(
-          `No evidence, after allowing for the choice among the candidates, that any beats the baseline (SPA consistent p-value ${p} > ${alpha}).`
-        );
-      }
-      break;
-  }
-  if (input.missingRows.length > 0) {
-    verdicts.push("fail");
-    reasons.push(
-      `Candidates lacking rows the baseline has: ${input.missingRows.join(", ")} (set allow-missing to compare on the common rows).`
-    );
-  }
-  return { verdict: worstVerdict(verdicts), reasons };
 }
 
 // src/candidates/jointLossSeries.ts
@@ -55621,6 +55694,7 @@ function ratio(x, s) {
 }
 
 // src/candidates/superiorAbilityTest.ts
+var SPA_HYPOTHESES = ["none-better", "none-worse"];
 function superiorAbilityTest(baseline, candidates, deviations, expectedBlockLength, hypothesis, margin = { factor: 1, shift: 0 }) {
   const sign = hypothesis === "none-better" ? 1 : -1;
   const { factor, shift } = margin;
@@ -56903,6 +56977,12 @@ function resolveSettings(raw, label) {
     }
     return text2;
   };
+  const choice = (name, values) => {
+    const text2 = value(name);
+    const found = values.find((v) => v === text2);
+    if (found === void 0) throw new Error(`option ${name} lists other choices than ${values}`);
+    return found;
+  };
   const optional = (name) => {
     const given = raw[name]?.trim();
     return given === void 0 || given === "" ? null : given;
@@ -56969,46 +57049,46 @@ function resolveSettings(raw, label) {
     modelColumn,
     baselineModel,
     preferred: optional("preferred"),
-    selectionRule: value("selection-rule"),
+    selectionRule: choice("selection-rule", SELECTION_RULES),
     setAlpha: number("set-alpha", (x) => x > 0 && x < 1, "a number between 0 and 1, such as 0.1"),
-    setStatistic: value("set-statistic"),
+    setStatistic: choice("set-statistic", CONFIDENCE_SET_STATISTICS),
     losses,
     actuals: optional("actuals"),
     columns: parseColumnMapping(value("columns"), label("columns")),
     baselineColumns: parseColumnMapping(value("baseline-columns"), label("baseline-columns")),
     candidateColumns: parseColumnMapping(value("candidate-columns"), label("candidate-columns")),
-    format: value("format"),
-    delimiter: value("delimiter"),
-    decimal: parseDecimalMark(value("decimal"), value("delimiter"), label),
-    timeFormat: value("time-format"),
+    format: choice("format", INPUT_FORMATS),
+    delimiter: choice("delimiter", DELIMITER_NAMES),
+    decimal: parseDecimalMark(choice("decimal", DECIMAL_MARKS), value("delimiter"), label),
+    timeFormat: choice("time-format", TIME_FORMAT_NAMES),
     lineLimit: integer("line-limit", 1024, 1 << 28),
     loss: canonicalLoss(value("loss")),
-    zeroActuals: value("zero-actuals"),
+    zeroActuals: choice("zero-actuals", ZERO_ACTUALS_RULES),
     alpha,
     margin: parseMargin(value("margin"), value("margin-kind"), label),
-    marginKind: value("margin-kind"),
-    policy: value("policy"),
-    agreement: value("agreement"),
-    variance: value("variance"),
+    marginKind: choice("margin-kind", MARGIN_KINDS),
+    policy: choice("policy", POLICIES),
+    agreement: choice("agreement", AGREEMENTS),
+    variance: choice("variance", VARIANCE_ESTIMATORS),
     lag: parseLag(value("lag"), label("lag")),
     blockLength: parseBlockLength(value("block-length"), label("block-length")),
     resamples: integer("resamples", 99, 1e7),
     seed: integer("seed", 0, 2 ** 31 - 1),
     confidence: optional("confidence") === null ? defaultConfidence(alpha) : number("confidence", (x) => x > 0.5 && x < 1, "a number between 0.5 and 1, such as 0.9"),
     minPoints: integer("min-points", 1),
-    shortData: value("short-data"),
+    shortData: choice("short-data", SHORT_DATA_VERDICTS),
     allowMissing: bool("allow-missing"),
     interval: parseInterval(
       value("interval"),
       label("interval"),
       canonicalLoss(value("loss")) === "interval"
     ),
-    pooling: value("pooling"),
-    scale: value("scale"),
+    pooling: choice("pooling", POOLINGS),
+    scale: choice("scale", SCALE_KINDS),
     history: optional("history"),
     season: integer("season", 1),
     weights: bool("weights"),
-    adjust: value("adjust"),
+    adjust: choice("adjust", ADJUSTMENT_METHODS),
     top: integer("top", 0, 1e4),
     recent: parseRecentWindow(value("recent"), label("recent")),
     fluctuationWindow: number(
@@ -57016,12 +57096,12 @@ function resolveSettings(raw, label) {
       (x) => x >= 0.1 && x <= 0.9,
       "a number from 0.1 to 0.9 (the window as a fraction of the time points)"
     ),
-    fluctuationSides: value("fluctuation-sides"),
-    stabilityGate: value("stability-gate"),
+    fluctuationSides: choice("fluctuation-sides", FLUCTUATION_SIDES),
+    stabilityGate: choice("stability-gate", STABILITY_GATE_MODES),
     frequency: parseFrequencyOption(value("frequency"), label("frequency")),
     folds: optional("folds"),
     embargo: integer("embargo", 0, 1e6),
-    backtestChecks: value("backtest-checks"),
+    backtestChecks: choice("backtest-checks", CHECK_MODES),
     json: optional("json"),
     markdown: optional("markdown"),
     html: optional("html")
@@ -57239,6 +57319,19 @@ function runUrl(env, runId = env.runId) {
   return `${env.serverUrl}/${env.repository.owner}/${env.repository.repo}/actions/runs/${runId}`;
 }
 
+// src/candidates/candidatesModel.ts
+var PREFERRED_BY = ["option", "lowest-mean-loss"];
+
+// src/core/panel.ts
+var TIMESTAMP_KINDS = ["number", "datetime", "text"];
+var FILE_ROLES = ["baseline", "candidate", "actuals", "losses"];
+
+// src/report/reportModel.ts
+var BOOTSTRAP_STATES = ["ok", "identical", "too-short", "not-run"];
+
+// src/statistics/bootstrap/blockLengthRule.ts
+var BLOCK_LENGTH_RULE_KINDS = ["auto", "fixed"];
+
 // src/action/untrustedReport.ts
 var MAX_REPORT_BYTES = 64 * 1024 * 1024;
 function parseUntrustedReport(text2, source) {
@@ -57328,14 +57421,6 @@ var Reader = class _Reader {
     return this.items().map((r) => r.string());
   }
 };
-var VERDICTS = ["pass", "warn", "fail"];
-var CHECK_STATUSES = ["ok", "warn", "fail"];
-var POLICIES = ["no-regression", "non-inferiority", "superiority"];
-var AGREEMENTS = ["both", "either", "dm", "bootstrap"];
-var ESTIMATORS = ["ewc", "ewc-ar1", "bartlett", "uniform"];
-var MARGIN_KINDS = ["relative", "absolute"];
-var SELECTION_RULES = ["preferred-in-set", "none-worse", "some-better"];
-var SET_STATISTICS = ["range", "max"];
 function readReport(r) {
   const tool = r.field("tool");
   tool.field("name").oneOf(["skillgate"]);
@@ -57370,7 +57455,7 @@ function readPolicy(r) {
     marginKind: r.field("marginKind").oneOf(MARGIN_KINDS),
     nullHypothesis: r.field("nullHypothesis").string(),
     alternative: r.field("alternative").string(),
-    onReject: r.field("onReject").oneOf(["fail", "pass"]),
+    onReject: r.field("onReject").oneOf(ON_REJECT_VERDICTS),
     baselineFactor: r.field("baselineFactor").number(),
     boundary: r.field("boundary").number()
   };
@@ -57446,11 +57531,10 @@ function readComparison(r) {
       bootstrap: rejected.field("bootstrap").booleanOrNull()
     },
     ...r.field("adjustedPValue").value === void 0 ? {} : { adjustedPValue: r.field("adjustedPValue").numberOrNull() },
-    ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(["worse", "better", "no evidence"]) },
+    ...r.field("direction").value === void 0 ? {} : { direction: r.field("direction").oneOf(SERIES_DIRECTIONS) },
     ...r.field("directionPValue").value === void 0 ? {} : { directionPValue: r.field("directionPValue").numberOrNull() }
   };
 }
-var CHECK_MODES = ["enforce", "warn", "report"];
 function readIntegrity(r) {
   if (r.value === void 0) {
     return noChecks("report", "the report was written without backtest checks");
@@ -57462,7 +57546,7 @@ function readIntegrity(r) {
     affectsVerdict: r.field("affectsVerdict").boolean(),
     frequency: frequency.value === null ? null : {
       text: frequency.field("text").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
-      source: frequency.field("source").oneOf(["inferred", "given"])
+      source: frequency.field("source").oneOf(FREQUENCY_SOURCES)
     },
     checks: r.field("checks").items().map((c) => ({
       id: c.field("id").oneOf(CHECK_IDS),
@@ -57513,7 +57597,7 @@ function readStabilityLevels(r, alpha, fluctuation, recent) {
     };
   }
   return {
-    adjustment: r.field("adjustment").oneOf(["none", "bonferroni"]),
+    adjustment: r.field("adjustment").oneOf(STABILITY_ADJUSTMENTS),
     alpha: r.field("alpha").number(),
     fluctuation: r.field("fluctuation").numberOrNull(),
     recent: r.field("recent").numberOrNull()
@@ -57537,7 +57621,7 @@ function readSpan(r) {
 function readSeriesSummary(r) {
   if (r.value === null || r.value === void 0) return null;
   return {
-    method: r.field("method").oneOf(["holm", "bh"]),
+    method: r.field("method").oneOf(ADJUSTMENT_METHODS),
     alpha: r.field("alpha").number(),
     series: r.field("series").integer(),
     worse: r.field("worse").integer(),
@@ -57549,9 +57633,9 @@ function readSeriesSummary(r) {
 function readDieboldMariano(r) {
   const small = r.field("smallSample");
   return {
-    state: r.field("state").oneOf(["ok", "identical", "zero-variance", "too-short"]),
-    estimator: r.field("estimator").oneOf(ESTIMATORS),
-    requestedEstimator: r.field("requestedEstimator").oneOf(ESTIMATORS),
+    state: r.field("state").oneOf(DIEBOLD_MARIANO_STATES),
+    estimator: r.field("estimator").oneOf(VARIANCE_ESTIMATORS),
+    requestedEstimator: r.field("requestedEstimator").oneOf(VARIANCE_ESTIMATORS),
     statistic: r.field("statistic").numberOrNull(),
     pValue: r.field("pValue").numberOrNull(),
     pValueTwoSided: r.field("pValueTwoSided").numberOrNull(),
@@ -57574,11 +57658,11 @@ function readDieboldMariano(r) {
 }
 function readBootstrap(r) {
   return {
-    state: r.field("state").oneOf(["ok", "identical", "too-short", "not-run"]),
+    state: r.field("state").oneOf(BOOTSTRAP_STATES),
     resamples: r.field("resamples").integer(),
     seed: r.field("seed").integer(),
     expectedBlockLength: r.field("expectedBlockLength").number(),
-    blockLengthRule: r.field("blockLengthRule").oneOf(["auto", "fixed"]),
+    blockLengthRule: r.field("blockLengthRule").oneOf(BLOCK_LENGTH_RULE_KINDS),
     blockLengthSelection: null,
     standardError: r.field("standardError").numberOrNull(),
     interval: readInterval(r.field("interval")),
@@ -57605,7 +57689,7 @@ function readHistogram(r) {
 }
 function readFile(r) {
   return {
-    role: r.field("role").oneOf(["baseline", "candidate", "actuals"]),
+    role: r.field("role").oneOf(FILE_ROLES),
     path: r.field("path").string(),
     rows: r.field("rows").integer(),
     sha256: r.field("sha256").matching(/^sha256:[0-9a-f]{64}$/, "sha256: and 64 hex digits"),
@@ -57634,7 +57718,7 @@ function readInputs(r) {
     },
     timestamps: {
       count: timestamps.field("count").integer(),
-      kind: timestamps.field("kind").oneOf(["number", "datetime", "text"]),
+      kind: timestamps.field("kind").oneOf(TIMESTAMP_KINDS),
       first: timestamps.field("first").stringOrNull(),
       last: timestamps.field("last").stringOrNull(),
       format: timestamps.field("format").value === void 0 ? "auto" : timestamps.field("format").oneOf(TIME_FORMAT_NAMES),
@@ -57684,9 +57768,9 @@ function readSettings(r) {
     if (name.value !== void 0) columns[role] = name.string();
   }
   const lag = r.field("lag");
-  const lagKind = lag.field("kind").oneOf(["auto", "horizon", "fixed"]);
+  const lagKind = lag.field("kind").oneOf(LAG_RULE_KINDS);
   const block = r.field("blockLength");
-  const blockKind = block.field("kind").oneOf(["auto", "fixed"]);
+  const blockKind = block.field("kind").oneOf(BLOCK_LENGTH_RULE_KINDS);
   return {
     name: r.field("name").string(),
     baseline: r.field("baseline").string(),
@@ -57699,37 +57783,37 @@ function readSettings(r) {
     candidateColumns: readMapping(r.field("candidateColumns")),
     format: r.field("format").oneOf(INPUT_FORMATS),
     delimiter: absent(r, "delimiter") ? "auto" : r.field("delimiter").oneOf(DELIMITER_NAMES),
-    decimal: absent(r, "decimal") ? "." : r.field("decimal").oneOf([".", ","]),
+    decimal: absent(r, "decimal") ? "." : r.field("decimal").oneOf(DECIMAL_MARKS),
     timeFormat: absent(r, "timeFormat") ? "auto" : r.field("timeFormat").oneOf(TIME_FORMAT_NAMES),
     lineLimit: absent(r, "lineLimit") ? 1 << 20 : r.field("lineLimit").integer(1),
     loss: r.field("loss").oneOf(LOSS_NAMES),
-    zeroActuals: r.field("zeroActuals").oneOf(["error", "skip"]),
+    zeroActuals: r.field("zeroActuals").oneOf(ZERO_ACTUALS_RULES),
     alpha: r.field("alpha").number(),
     margin: r.field("margin").number(),
     marginKind: r.field("marginKind").oneOf(MARGIN_KINDS),
     policy: r.field("policy").oneOf(POLICIES),
     agreement: r.field("agreement").oneOf(AGREEMENTS),
-    variance: r.field("variance").oneOf(ESTIMATORS),
+    variance: r.field("variance").oneOf(VARIANCE_ESTIMATORS),
     lag: lagKind === "fixed" ? { kind: "fixed", lag: lag.field("lag").integer() } : { kind: lagKind },
     blockLength: blockKind === "fixed" ? { kind: "fixed", length: block.field("length").number() } : { kind: "auto" },
     resamples: r.field("resamples").integer(),
     seed: r.field("seed").integer(),
     confidence: r.field("confidence").number(),
     minPoints: r.field("minPoints").integer(),
-    shortData: r.field("shortData").oneOf(["warn", "fail"]),
+    shortData: r.field("shortData").oneOf(SHORT_DATA_VERDICTS),
     allowMissing: r.field("allowMissing").boolean(),
     interval: readLevels(r.field("interval")),
-    pooling: r.field("pooling").oneOf(["raw", "scaled"]),
-    scale: r.field("scale").oneOf(["baseline", "seasonal-naive"]),
+    pooling: r.field("pooling").oneOf(POOLINGS),
+    scale: r.field("scale").oneOf(SCALE_KINDS),
     history: r.field("history").stringOrNull(),
     season: r.field("season").integer(),
     weights: r.field("weights").boolean(),
-    adjust: r.field("adjust").oneOf(["holm", "bh"]),
+    adjust: r.field("adjust").oneOf(ADJUSTMENT_METHODS),
     top: r.field("top").integer(),
     recent: readRecentWindow(r.field("recent")),
     fluctuationWindow: r.field("fluctuationWindow").value === void 0 ? 0.2 : r.field("fluctuationWindow").number(),
-    fluctuationSides: r.field("fluctuationSides").value === void 0 ? "one" : r.field("fluctuationSides").oneOf(["one", "two"]),
-    stabilityGate: r.field("stabilityGate").value === void 0 ? "warn" : r.field("stabilityGate").oneOf(["off", "warn", "fail"]),
+    fluctuationSides: r.field("fluctuationSides").value === void 0 ? "one" : r.field("fluctuationSides").oneOf(FLUCTUATION_SIDES),
+    stabilityGate: r.field("stabilityGate").value === void 0 ? "warn" : r.field("stabilityGate").oneOf(STABILITY_GATE_MODES),
     // Absent from reports written before the backtest checks: their defaults.
     frequency: r.field("frequency").value === void 0 ? "auto" : r.field("frequency").matching(/^[0-9A-Za-z.]{1,20}$/, "a frequency such as 1h"),
     folds: r.field("folds").value === void 0 ? null : r.field("folds").stringOrNull(),
@@ -57749,7 +57833,7 @@ function readCandidateSettings(r) {
     preferred: present("preferred") ? r.field("preferred").stringOrNull() : null,
     selectionRule: present("selectionRule") ? r.field("selectionRule").oneOf(SELECTION_RULES) : "preferred-in-set",
     setAlpha: present("setAlpha") ? r.field("setAlpha").number() : 0.1,
-    setStatistic: present("setStatistic") ? r.field("setStatistic").oneOf(SET_STATISTICS) : "max"
+    setStatistic: present("setStatistic") ? r.field("setStatistic").oneOf(CONFIDENCE_SET_STATISTICS) : "max"
   };
 }
 function absent(r, name) {
@@ -57766,7 +57850,7 @@ function readMapping(r) {
 }
 function readRecentWindow(r) {
   if (r.value === null || r.value === void 0) return null;
-  return r.field("kind").oneOf(["points", "share"]) === "points" ? { kind: "points", points: r.field("points").integer(2) } : { kind: "share", share: r.field("share").number() };
+  return r.field("kind").oneOf(RECENT_WINDOW_KINDS) === "points" ? { kind: "points", points: r.field("points").integer(2) } : { kind: "share", share: r.field("share").number() };
 }
 function readLevels(r) {
   if (r.value === null) return null;
@@ -57795,7 +57879,7 @@ function readCandidateSections(r) {
   const s = r.field("spa");
   const rc = s.field("realityCheck");
   const spa = {
-    hypothesis: s.field("hypothesis").oneOf(["none-better", "none-worse"]),
+    hypothesis: s.field("hypothesis").oneOf(SPA_HYPOTHESES),
     statistic: s.field("statistic").number(),
     pValueLower: readProbability(s.field("pValueLower")),
     pValueConsistent: readProbability(s.field("pValueConsistent")),
@@ -57818,7 +57902,7 @@ function readCandidateSections(r) {
   if (steps.length > MAX_CANDIDATES + 1) m.field("stepPValues").fail("one p-value per model");
   const confidenceSet = {
     level: readProbability(m.field("level")),
-    statistic: m.field("statistic").oneOf(["range", "max"]),
+    statistic: m.field("statistic").oneOf(CONFIDENCE_SET_STATISTICS),
     members: names(m.field("members")),
     eliminationOrder: names(m.field("eliminationOrder")),
     stepPValues: steps.map(readProbability),
@@ -57833,12 +57917,12 @@ function readCandidateSections(r) {
   const selection = {
     rule: sel.field("rule").oneOf(SELECTION_RULES),
     preferred: name(sel.field("preferred")),
-    preferredBy: sel.field("preferredBy").oneOf(["option", "lowest-mean-loss"]),
+    preferredBy: sel.field("preferredBy").oneOf(PREFERRED_BY),
     verdict: sel.field("verdict").oneOf(VERDICTS),
     reasons: sel.field("reasons").strings(),
     timePoints: sel.field("timePoints").integer(2),
     expectedBlockLength: sel.field("expectedBlockLength").number(),
-    blockLengthRule: sel.field("blockLengthRule").oneOf(["auto", "fixed"])
+    blockLengthRule: sel.field("blockLengthRule").oneOf(BLOCK_LENGTH_RULE_KINDS)
   };
   return { candidates, spa, confidenceSet, selection };
 }

@@ -1,6 +1,6 @@
 /**
  * `npm run validate`: the full size, power and coverage study behind docs/validation.md. Runs the
- * designs of DESIGN.md ("Why ewc is the default") through the gate's own code on both cores
+ * designs of docs/design.md ("Why ewc is the default") through the gate's own code on both cores
  * (worker threads, replications split by index, so the numbers do not depend on the split) and
  * writes the table. Options: --replications N (default 2000), --resamples B (default 9999),
  * --out FILE (default docs/validation.md), --quick (200 replications, 999 resamples),
@@ -8,7 +8,8 @@
  * validation/stabilityStudy.ts alone, replacing its section of the existing document),
  * --candidates-only (the several-candidates study of validation/candidatesStudy.ts alone, with
  * 999 shared resamples and --replications N, default 1000, replacing its section),
- * --section cosine-terms (run only that study and replace its section in the existing FILE),
+ * --section main (the size, power and coverage tables alone, replacing the top of FILE up to the
+ * stability section), --section cosine-terms (run only that study and replace its section in FILE),
  * --coverage (the coverage study of every interval the report shows, validation/coverageStudy.ts,
  * alone, replacing its section), --coverage-replications N (default 1000), --coverage-resamples B
  * (default 999), --candidates (print the measurement of the studentised-bootstrap candidate).
@@ -110,22 +111,25 @@ async function main(): Promise<void> {
     return;
   }
   const sectionIndex = args.indexOf('--section');
+  if (sectionIndex >= 0 && args[sectionIndex + 1] === 'main') {
+    // The opening tables alone, replacing everything before the stability section.
+    const { results, seconds } = await mainTables(replications, resamples, threads);
+    const document = readFileSync(out, 'utf8');
+    const at = document.indexOf('<!-- stability study: start -->');
+    if (at < 0) throw new Error(`${out} has no stability section to keep after the main tables`);
+    const table = renderTable(results, { replications, resamples, seconds, threads });
+    writeFileSync(out, `${table}\n${document.slice(at)}`);
+    process.stderr.write(`replaced the main tables of ${out} (${seconds.toFixed(0)} s)\n`);
+    return;
+  }
   if (sectionIndex >= 0) {
     if (args[sectionIndex + 1] !== 'cosine-terms') {
-      throw new Error(`unknown section ${args[sectionIndex + 1]}; known: cosine-terms`);
+      throw new Error(`unknown section ${args[sectionIndex + 1]}; known: main, cosine-terms`);
     }
     const section = await cosineTermsStudy(replications, resamples, threads);
     writeFileSync(out, spliceSection(readFileSync(out, 'utf8'), section));
     process.stderr.write(`replaced the cosine-terms section of ${out}\n`);
     return;
-  }
-  const designs: SimulationDesign[] = [];
-  for (const innovationCorrelation of [0.5, 0.8]) {
-    for (const n of [100, 200]) {
-      for (const candidateScale of [1, 1.2]) {
-        designs.push({ n, phi: 0.6, innovationCorrelation, candidateScale });
-      }
-    }
   }
   // --stability-only: regenerate the stability section of an existing document alone.
   const stabilityReplications = option('stability-replications', quick ? 400 : 4000);
@@ -145,6 +149,35 @@ async function main(): Promise<void> {
   if (args.includes('--candidates-only')) {
     return candidatesStudy(candidateReplications, quick ? 499 : 999, out);
   }
+  const { results, seconds } = await mainTables(replications, resamples, threads);
+  const section = await cosineTermsStudy(replications, resamples, threads);
+  const coverage = await coverageStudy(coverageReplications, coverageResamples);
+  writeFileSync(
+    out,
+    withCoverageSection(
+      `${renderTable(results, { replications, resamples, seconds, threads })}${section}`,
+      coverage,
+    ),
+  );
+  process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
+  await stability(readFileSync(out, 'utf8'));
+  await candidatesStudy(candidateReplications, quick ? 499 : 999, out);
+}
+
+/** The size, power and coverage tables at the top of the document: every design, all replications. */
+async function mainTables(
+  replications: number,
+  resamples: number,
+  threads: number,
+): Promise<{ results: StudyResult[]; seconds: number }> {
+  const designs: SimulationDesign[] = [];
+  for (const innovationCorrelation of [0.5, 0.8]) {
+    for (const n of [100, 200]) {
+      for (const candidateScale of [1, 1.2]) {
+        designs.push({ n, phi: 0.6, innovationCorrelation, candidateScale });
+      }
+    }
+  }
   const started = Date.now();
   const results: StudyResult[] = [];
   for (const design of designs) {
@@ -163,19 +196,7 @@ async function main(): Promise<void> {
       `validated n=${design.n} ρ=${design.innovationCorrelation} scale=${design.candidateScale}\n`,
     );
   }
-  const seconds = (Date.now() - started) / 1000;
-  const section = await cosineTermsStudy(replications, resamples, threads);
-  const coverage = await coverageStudy(coverageReplications, coverageResamples);
-  writeFileSync(
-    out,
-    withCoverageSection(
-      `${renderTable(results, { replications, resamples, seconds, threads })}${section}`,
-      coverage,
-    ),
-  );
-  process.stderr.write(`wrote ${out} in ${seconds.toFixed(0)} s\n`);
-  await stability(readFileSync(out, 'utf8'));
-  await candidatesStudy(candidateReplications, quick ? 499 : 999, out);
+  return { results, seconds: (Date.now() - started) / 1000 };
 }
 
 /**
@@ -448,7 +469,7 @@ function renderTable(
     '',
     '## Coverage of the 95% intervals for E[d] and the default verdicts',
     '',
-    '| ρ | n | truth | bootstrap (basic) | Diebold–Mariano (ewc, t_ν) | verdict fail | verdict warn |',
+    '| ρ | n | truth | bootstrap (basic) | Diebold–Mariano (ewc-ar1, t_ν) | verdict fail | verdict warn |',
     '|---:|---:|---|---:|---:|---:|---:|',
   );
   for (const r of results) {

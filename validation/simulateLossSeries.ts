@@ -2,7 +2,7 @@ import type { LossSeries } from '../src/aggregation/lossSeries.js';
 import type { RandomSource } from '../src/random/randomSource.js';
 
 /**
- * The simulation design of DESIGN.md ("Why ewc is the default"): the forecast errors of both
+ * The simulation design of docs/design.md ("Why ewc is the default"): the forecast errors of both
  * models are AR(1) with φ = 0.6, e_t = φ e_{t−1} + σ ε_t, with innovations correlated ρ between
  * the models (they forecast the same target and share its surprises), started from the stationary
  * distribution. Equal accuracy: both σ = 1; the power alternative scales the candidate's error by

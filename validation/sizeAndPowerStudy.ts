@@ -28,9 +28,9 @@ export const STUDY_PROCEDURES = [
   'bartlett, lag 0',
   'bartlett, automatic lag',
   'bartlett, automatic lag + HLN',
-  'ewc',
+  'ewc-ar1 (default)',
   'stationary bootstrap',
-  'default policy (ewc and bootstrap agree)',
+  'default policy (ewc-ar1 and bootstrap agree)',
 ] as const;
 export type StudyProcedure = (typeof STUDY_PROCEDURES)[number];
 
@@ -94,10 +94,10 @@ export function runStudy(
       hypothesis,
       settings,
     );
-    if (comparison.rejected.dieboldMariano) counts.ewc++;
+    if (comparison.rejected.dieboldMariano) counts['ewc-ar1 (default)']++;
     if (comparison.rejected.bootstrap) counts['stationary bootstrap']++;
     if (comparison.verdict === 'fail') {
-      counts['default policy (ewc and bootstrap agree)']++;
+      counts['default policy (ewc-ar1 and bootstrap agree)']++;
       fails++;
     }
     if (comparison.verdict === 'warn') warns++;

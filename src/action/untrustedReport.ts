@@ -1,42 +1,67 @@
 import { TIME_FORMAT_NAMES } from '../alignment/timeFormat.js';
 import { MAX_CANDIDATES, MAX_NAME_LENGTH } from '../candidates/candidateList.js';
-import type {
-  CandidateSummary,
-  ConfidenceSetSummary,
-  SelectionSummary,
-  SpaSummary,
+import {
+  type CandidateSummary,
+  type ConfidenceSetSummary,
+  PREFERRED_BY,
+  type SelectionSummary,
+  type SpaSummary,
 } from '../candidates/candidatesModel.js';
+import { SELECTION_RULES } from '../candidates/decideCandidates.js';
+import { SPA_HYPOTHESES } from '../candidates/superiorAbilityTest.js';
 import { InputError } from '../core/inputError.js';
-import type { FileSummary } from '../core/panel.js';
+import { FILE_ROLES, type FileSummary, TIMESTAMP_KINDS } from '../core/panel.js';
+import { SERIES_DIRECTIONS } from '../decision/decideAdjusted.js';
+import { ON_REJECT_VERDICTS } from '../decision/hypothesis.js';
+import { AGREEMENTS, MARGIN_KINDS, POLICIES, SHORT_DATA_VERDICTS } from '../decision/policy.js';
+import { VERDICTS } from '../decision/verdict.js';
 import { noChecks } from '../integrity/checkPolicy.js';
-import { CHECK_IDS, type IntegrityReport } from '../integrity/checkResult.js';
+import {
+  CHECK_IDS,
+  CHECK_MODES,
+  CHECK_STATUSES,
+  FREQUENCY_SOURCES,
+  type IntegrityReport,
+} from '../integrity/checkResult.js';
 import { LOSS_NAMES, type LossName } from '../losses/lossName.js';
+import { ZERO_ACTUALS_RULES } from '../losses/rowLosses.js';
+import { ADJUSTMENT_METHODS } from '../multiplicity/adjustmentMethod.js';
 import { COLUMN_ROLES, type ColumnMapping } from '../reading/columnMapping.js';
-import { DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
+import { DECIMAL_MARKS, DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
 import type { MissingRowsGroup, MissingRowsSummary } from '../report/missingRows.js';
-import type {
-  BootstrapSummary,
-  Comparison,
-  DieboldMarianoSummary,
-  InputsSummary,
-  Interval,
-  MeasuredCoverage,
-  PathSummary,
-  PolicySummary,
-  RelativeChange,
-  Report,
-  SeriesSummary,
+import {
+  BOOTSTRAP_STATES,
+  type BootstrapSummary,
+  type Comparison,
+  type DieboldMarianoSummary,
+  type InputsSummary,
+  type Interval,
+  type MeasuredCoverage,
+  type PathSummary,
+  type PolicySummary,
+  type RelativeChange,
+  type Report,
+  type SeriesSummary,
 } from '../report/reportModel.js';
+import { POOLINGS, SCALE_KINDS } from '../scaling/pooling.js';
 import type { Settings } from '../settings/settings.js';
+import { FLUCTUATION_SIDES } from '../stability/fluctuationCriticalValues.js';
 import { MAX_PERIODS } from '../stability/periodBuckets.js';
-import type { RecentWindow } from '../stability/recentWindow.js';
+import { RECENT_WINDOW_KINDS, type RecentWindow } from '../stability/recentWindow.js';
+import { STABILITY_GATE_MODES } from '../stability/stabilityFinding.js';
+import { STABILITY_ADJUSTMENTS } from '../stability/stabilityLevels.js';
 import type {
   FluctuationSummary,
   Stability,
   StabilityLevels,
   TimeSpan,
 } from '../stability/stabilityModel.js';
+import { BLOCK_LENGTH_RULE_KINDS } from '../statistics/bootstrap/blockLengthRule.js';
 import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
+import { DIEBOLD_MARIANO_STATES } from '../statistics/dieboldMariano.js';
+import { CONFIDENCE_SET_STATISTICS } from '../statistics/modelConfidenceSet.js';
+import { LAG_RULE_KINDS } from '../statistics/neweyWestLag.js';
+import { VARIANCE_ESTIMATORS } from '../statistics/varianceEstimator.js';
 
 /** Larger report files are refused before parsing. */
 export const MAX_REPORT_BYTES = 64 * 1024 * 1024;
@@ -136,15 +161,6 @@ class Reader {
   }
 }
 
-const VERDICTS = ['pass', 'warn', 'fail'] as const;
-const CHECK_STATUSES = ['ok', 'warn', 'fail'] as const;
-const POLICIES = ['no-regression', 'non-inferiority', 'superiority'] as const;
-const AGREEMENTS = ['both', 'either', 'dm', 'bootstrap'] as const;
-const ESTIMATORS = ['ewc', 'ewc-ar1', 'bartlett', 'uniform'] as const;
-const MARGIN_KINDS = ['relative', 'absolute'] as const;
-const SELECTION_RULES = ['preferred-in-set', 'none-worse', 'some-better'] as const;
-const SET_STATISTICS = ['range', 'max'] as const;
-
 function readReport(r: Reader): Report {
   const tool = r.field('tool');
   tool.field('name').oneOf(['skillgate']);
@@ -180,7 +196,7 @@ function readPolicy(r: Reader): PolicySummary {
     marginKind: r.field('marginKind').oneOf(MARGIN_KINDS),
     nullHypothesis: r.field('nullHypothesis').string(),
     alternative: r.field('alternative').string(),
-    onReject: r.field('onReject').oneOf(['fail', 'pass']),
+    onReject: r.field('onReject').oneOf(ON_REJECT_VERDICTS),
     baselineFactor: r.field('baselineFactor').number(),
     boundary: r.field('boundary').number(),
   };
@@ -266,14 +282,12 @@ function readComparison(r: Reader): Comparison {
       : { adjustedPValue: r.field('adjustedPValue').numberOrNull() }),
     ...(r.field('direction').value === undefined
       ? {}
-      : { direction: r.field('direction').oneOf(['worse', 'better', 'no evidence'] as const) }),
+      : { direction: r.field('direction').oneOf(SERIES_DIRECTIONS) }),
     ...(r.field('directionPValue').value === undefined
       ? {}
       : { directionPValue: r.field('directionPValue').numberOrNull() }),
   };
 }
-
-const CHECK_MODES = ['enforce', 'warn', 'report'] as const;
 
 /** Backtest checks; a report written before they existed reads as having none. */
 function readIntegrity(r: Reader): IntegrityReport {
@@ -292,7 +306,7 @@ function readIntegrity(r: Reader): IntegrityReport {
             text: frequency
               .field('text')
               .matching(/^[0-9A-Za-z.]{1,20}$/, 'a frequency such as 1h'),
-            source: frequency.field('source').oneOf(['inferred', 'given']),
+            source: frequency.field('source').oneOf(FREQUENCY_SOURCES),
           },
     checks: r
       .field('checks')
@@ -362,7 +376,7 @@ function readStabilityLevels(
     };
   }
   return {
-    adjustment: r.field('adjustment').oneOf(['none', 'bonferroni']),
+    adjustment: r.field('adjustment').oneOf(STABILITY_ADJUSTMENTS),
     alpha: r.field('alpha').number(),
     fluctuation: r.field('fluctuation').numberOrNull(),
     recent: r.field('recent').numberOrNull(),
@@ -389,7 +403,7 @@ function readSpan(r: Reader): TimeSpan {
 function readSeriesSummary(r: Reader): SeriesSummary | null {
   if (r.value === null || r.value === undefined) return null;
   return {
-    method: r.field('method').oneOf(['holm', 'bh']),
+    method: r.field('method').oneOf(ADJUSTMENT_METHODS),
     alpha: r.field('alpha').number(),
     series: r.field('series').integer(),
     worse: r.field('worse').integer(),
@@ -402,9 +416,9 @@ function readSeriesSummary(r: Reader): SeriesSummary | null {
 function readDieboldMariano(r: Reader): DieboldMarianoSummary {
   const small = r.field('smallSample');
   return {
-    state: r.field('state').oneOf(['ok', 'identical', 'zero-variance', 'too-short']),
-    estimator: r.field('estimator').oneOf(ESTIMATORS),
-    requestedEstimator: r.field('requestedEstimator').oneOf(ESTIMATORS),
+    state: r.field('state').oneOf(DIEBOLD_MARIANO_STATES),
+    estimator: r.field('estimator').oneOf(VARIANCE_ESTIMATORS),
+    requestedEstimator: r.field('requestedEstimator').oneOf(VARIANCE_ESTIMATORS),
     statistic: r.field('statistic').numberOrNull(),
     pValue: r.field('pValue').numberOrNull(),
     pValueTwoSided: r.field('pValueTwoSided').numberOrNull(),
@@ -431,11 +445,11 @@ function readDieboldMariano(r: Reader): DieboldMarianoSummary {
 
 function readBootstrap(r: Reader): BootstrapSummary {
   return {
-    state: r.field('state').oneOf(['ok', 'identical', 'too-short', 'not-run']),
+    state: r.field('state').oneOf(BOOTSTRAP_STATES),
     resamples: r.field('resamples').integer(),
     seed: r.field('seed').integer(),
     expectedBlockLength: r.field('expectedBlockLength').number(),
-    blockLengthRule: r.field('blockLengthRule').oneOf(['auto', 'fixed']),
+    blockLengthRule: r.field('blockLengthRule').oneOf(BLOCK_LENGTH_RULE_KINDS),
     blockLengthSelection: null,
     standardError: r.field('standardError').numberOrNull(),
     interval: readInterval(r.field('interval')),
@@ -468,7 +482,7 @@ function readHistogram(r: Reader): ResampleHistogram | null {
 
 function readFile(r: Reader): FileSummary {
   return {
-    role: r.field('role').oneOf(['baseline', 'candidate', 'actuals']),
+    role: r.field('role').oneOf(FILE_ROLES),
     path: r.field('path').string(),
     rows: r.field('rows').integer(),
     sha256: r.field('sha256').matching(/^sha256:[0-9a-f]{64}$/, 'sha256: and 64 hex digits'),
@@ -498,7 +512,7 @@ function readInputs(r: Reader): InputsSummary {
     },
     timestamps: {
       count: timestamps.field('count').integer(),
-      kind: timestamps.field('kind').oneOf(['number', 'datetime', 'text']),
+      kind: timestamps.field('kind').oneOf(TIMESTAMP_KINDS),
       first: timestamps.field('first').stringOrNull(),
       last: timestamps.field('last').stringOrNull(),
       format:
@@ -569,9 +583,9 @@ function readSettings(r: Reader): Settings {
     if (name.value !== undefined) columns[role] = name.string();
   }
   const lag = r.field('lag');
-  const lagKind = lag.field('kind').oneOf(['auto', 'horizon', 'fixed']);
+  const lagKind = lag.field('kind').oneOf(LAG_RULE_KINDS);
   const block = r.field('blockLength');
-  const blockKind = block.field('kind').oneOf(['auto', 'fixed']);
+  const blockKind = block.field('kind').oneOf(BLOCK_LENGTH_RULE_KINDS);
   return {
     name: r.field('name').string(),
     baseline: r.field('baseline').string(),
@@ -584,17 +598,17 @@ function readSettings(r: Reader): Settings {
     candidateColumns: readMapping(r.field('candidateColumns')),
     format: r.field('format').oneOf(INPUT_FORMATS),
     delimiter: absent(r, 'delimiter') ? 'auto' : r.field('delimiter').oneOf(DELIMITER_NAMES),
-    decimal: absent(r, 'decimal') ? '.' : r.field('decimal').oneOf(['.', ',']),
+    decimal: absent(r, 'decimal') ? '.' : r.field('decimal').oneOf(DECIMAL_MARKS),
     timeFormat: absent(r, 'timeFormat') ? 'auto' : r.field('timeFormat').oneOf(TIME_FORMAT_NAMES),
     lineLimit: absent(r, 'lineLimit') ? 1 << 20 : r.field('lineLimit').integer(1),
     loss: r.field('loss').oneOf<LossName>(LOSS_NAMES),
-    zeroActuals: r.field('zeroActuals').oneOf(['error', 'skip']),
+    zeroActuals: r.field('zeroActuals').oneOf(ZERO_ACTUALS_RULES),
     alpha: r.field('alpha').number(),
     margin: r.field('margin').number(),
     marginKind: r.field('marginKind').oneOf(MARGIN_KINDS),
     policy: r.field('policy').oneOf(POLICIES),
     agreement: r.field('agreement').oneOf(AGREEMENTS),
-    variance: r.field('variance').oneOf(ESTIMATORS),
+    variance: r.field('variance').oneOf(VARIANCE_ESTIMATORS),
     lag:
       lagKind === 'fixed' ? { kind: 'fixed', lag: lag.field('lag').integer() } : { kind: lagKind },
     blockLength:
@@ -605,15 +619,15 @@ function readSettings(r: Reader): Settings {
     seed: r.field('seed').integer(),
     confidence: r.field('confidence').number(),
     minPoints: r.field('minPoints').integer(),
-    shortData: r.field('shortData').oneOf(['warn', 'fail']),
+    shortData: r.field('shortData').oneOf(SHORT_DATA_VERDICTS),
     allowMissing: r.field('allowMissing').boolean(),
     interval: readLevels(r.field('interval')),
-    pooling: r.field('pooling').oneOf(['raw', 'scaled']),
-    scale: r.field('scale').oneOf(['baseline', 'seasonal-naive']),
+    pooling: r.field('pooling').oneOf(POOLINGS),
+    scale: r.field('scale').oneOf(SCALE_KINDS),
     history: r.field('history').stringOrNull(),
     season: r.field('season').integer(),
     weights: r.field('weights').boolean(),
-    adjust: r.field('adjust').oneOf(['holm', 'bh']),
+    adjust: r.field('adjust').oneOf(ADJUSTMENT_METHODS),
     top: r.field('top').integer(),
     recent: readRecentWindow(r.field('recent')),
     fluctuationWindow:
@@ -623,11 +637,11 @@ function readSettings(r: Reader): Settings {
     fluctuationSides:
       r.field('fluctuationSides').value === undefined
         ? 'one'
-        : r.field('fluctuationSides').oneOf(['one', 'two']),
+        : r.field('fluctuationSides').oneOf(FLUCTUATION_SIDES),
     stabilityGate:
       r.field('stabilityGate').value === undefined
         ? 'warn'
-        : r.field('stabilityGate').oneOf(['off', 'warn', 'fail']),
+        : r.field('stabilityGate').oneOf(STABILITY_GATE_MODES),
     // Absent from reports written before the backtest checks: their defaults.
     frequency:
       r.field('frequency').value === undefined
@@ -673,7 +687,9 @@ function readCandidateSettings(
       ? r.field('selectionRule').oneOf(SELECTION_RULES)
       : 'preferred-in-set',
     setAlpha: present('setAlpha') ? r.field('setAlpha').number() : 0.1,
-    setStatistic: present('setStatistic') ? r.field('setStatistic').oneOf(SET_STATISTICS) : 'max',
+    setStatistic: present('setStatistic')
+      ? r.field('setStatistic').oneOf(CONFIDENCE_SET_STATISTICS)
+      : 'max',
   };
 }
 
@@ -696,7 +712,7 @@ function readMapping(r: Reader): ColumnMapping {
 /** settings.recent; absent in reports from before it existed. */
 function readRecentWindow(r: Reader): RecentWindow | null {
   if (r.value === null || r.value === undefined) return null;
-  return r.field('kind').oneOf(['points', 'share']) === 'points'
+  return r.field('kind').oneOf(RECENT_WINDOW_KINDS) === 'points'
     ? { kind: 'points', points: r.field('points').integer(2) }
     : { kind: 'share', share: r.field('share').number() };
 }
@@ -740,7 +756,7 @@ function readCandidateSections(r: Reader): {
   const s = r.field('spa');
   const rc = s.field('realityCheck');
   const spa: SpaSummary = {
-    hypothesis: s.field('hypothesis').oneOf(['none-better', 'none-worse']),
+    hypothesis: s.field('hypothesis').oneOf(SPA_HYPOTHESES),
     statistic: s.field('statistic').number(),
     pValueLower: readProbability(s.field('pValueLower')),
     pValueConsistent: readProbability(s.field('pValueConsistent')),
@@ -763,7 +779,7 @@ function readCandidateSections(r: Reader): {
   if (steps.length > MAX_CANDIDATES + 1) m.field('stepPValues').fail('one p-value per model');
   const confidenceSet: ConfidenceSetSummary = {
     level: readProbability(m.field('level')),
-    statistic: m.field('statistic').oneOf(['range', 'max']),
+    statistic: m.field('statistic').oneOf(CONFIDENCE_SET_STATISTICS),
     members: names(m.field('members')),
     eliminationOrder: names(m.field('eliminationOrder')),
     stepPValues: steps.map(readProbability),
@@ -778,12 +794,12 @@ function readCandidateSections(r: Reader): {
   const selection: SelectionSummary = {
     rule: sel.field('rule').oneOf(SELECTION_RULES),
     preferred: name(sel.field('preferred')),
-    preferredBy: sel.field('preferredBy').oneOf(['option', 'lowest-mean-loss']),
+    preferredBy: sel.field('preferredBy').oneOf(PREFERRED_BY),
     verdict: sel.field('verdict').oneOf(VERDICTS),
     reasons: sel.field('reasons').strings(),
     timePoints: sel.field('timePoints').integer(2),
     expectedBlockLength: sel.field('expectedBlockLength').number(),
-    blockLengthRule: sel.field('blockLengthRule').oneOf(['auto', 'fixed']),
+    blockLengthRule: sel.field('blockLengthRule').oneOf(BLOCK_LENGTH_RULE_KINDS),
   };
   return { candidates, spa, confidenceSet, selection };
 }

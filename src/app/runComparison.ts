@@ -7,8 +7,9 @@ import { evaluatePanel } from '../comparison/evaluatePanel.js';
 import { InputError } from '../core/inputError.js';
 import { checkBacktest } from '../integrity/checkBacktest.js';
 import { type ColumnMapping, checkDistinctNames } from '../reading/columnMapping.js';
+import type { InputFormat } from '../reading/inputFormat.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
-import { readForecastFile } from '../reading/readForecastFile.js';
+import { type FileRole, readForecastFile } from '../reading/readForecastFile.js';
 import { readLossSeriesFile } from '../reading/readLossSeriesFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
@@ -34,7 +35,7 @@ export async function runComparison(
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
   if (settings.candidates.length > 1 || settings.modelColumn !== null)
     return { report: await runCandidates(settings, hooks) };
-  const read = (path: string, role: 'baseline' | 'candidate' | 'actuals') =>
+  const read = (path: string, role: FileRole) =>
     readForecastFile(path, {
       role,
       columns: columnsFor(settings, role),
@@ -120,10 +121,7 @@ async function readHistory(settings: Settings): Promise<Map<string, Float64Array
 }
 
 /** The column renames for one file: the shared ones, then that file's own. */
-export function columnsFor(
-  settings: Settings,
-  role: 'baseline' | 'candidate' | 'actuals',
-): ColumnMapping {
+export function columnsFor(settings: Settings, role: FileRole): ColumnMapping {
   const own =
     role === 'baseline'
       ? settings.baselineColumns
@@ -137,7 +135,7 @@ export function columnsFor(
 
 /** Format and CSV dialect options as the readers take them. */
 export function readDialect(settings: Settings): {
-  format?: 'csv' | 'tsv' | 'parquet';
+  format?: Exclude<InputFormat, 'auto'>;
   delimiter: Settings['delimiter'];
   decimal: Settings['decimal'];
   lineLimit: number;

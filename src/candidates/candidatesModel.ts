@@ -1,6 +1,8 @@
 import type { Verdict } from '../decision/verdict.js';
 import type { Comparison } from '../report/reportModel.js';
-import type { Settings } from '../settings/settings.js';
+import type { BlockLengthRule } from '../statistics/bootstrap/blockLengthRule.js';
+import type { ConfidenceSetStatistic } from '../statistics/modelConfidenceSet.js';
+import type { SelectionRule } from './decideCandidates.js';
 import type { SpaHypothesis } from './superiorAbilityTest.js';
 
 /**
@@ -42,7 +44,7 @@ export interface SpaSummary {
 /** The model confidence set (Hansen, Lunde & Nason 2011) over the baseline and all candidates. */
 export interface ConfidenceSetSummary {
   readonly level: number;
-  readonly statistic: 'range' | 'max';
+  readonly statistic: ConfidenceSetStatistic;
   /** Names of the models in the set, baseline included when it is in. */
   readonly members: readonly string[];
   /** All model names in the order they were eliminated; the last was never eliminated. */
@@ -57,17 +59,20 @@ export interface ConfidenceSetSummary {
   };
 }
 
+/** How the preferred candidate was chosen: named by the option, or the lowest mean loss. */
+export const PREFERRED_BY = ['option', 'lowest-mean-loss'] as const;
+
 /** How the several candidates decided the gate (docs/decisions/0015-several-candidates.md). */
 export interface SelectionSummary {
-  readonly rule: Settings['selectionRule'];
+  readonly rule: SelectionRule;
   /** The candidate the pull request would ship, and whether it was named or the lowest loss. */
   readonly preferred: string;
-  readonly preferredBy: 'option' | 'lowest-mean-loss';
+  readonly preferredBy: (typeof PREFERRED_BY)[number];
   readonly verdict: Verdict;
   readonly reasons: readonly string[];
   /** Time points every model was scored on (the joint tests' n). */
   readonly timePoints: number;
   /** The one block length of every candidate's bootstrap and the joint tests. */
   readonly expectedBlockLength: number;
-  readonly blockLengthRule: 'auto' | 'fixed';
+  readonly blockLengthRule: BlockLengthRule['kind'];
 }

@@ -1,5 +1,5 @@
-import type { BlockLengthRule } from '../settings/settings.js';
 import { automaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
+import type { BlockLengthRule } from '../statistics/bootstrap/blockLengthRule.js';
 
 /**
  * The one expected block length b shared by every candidate's bootstrap and the joint tests, so

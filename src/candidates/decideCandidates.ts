@@ -1,8 +1,11 @@
 import { type Verdict, worstVerdict } from '../decision/verdict.js';
-import type { Settings } from '../settings/settings.js';
+
+/** How several candidates decide the gate (`--selection-rule`; see decideCandidates). */
+export const SELECTION_RULES = ['preferred-in-set', 'none-worse', 'some-better'] as const;
+export type SelectionRule = (typeof SELECTION_RULES)[number];
 
 export interface CandidateDecisionInput {
-  readonly rule: Settings['selectionRule'];
+  readonly rule: SelectionRule;
   readonly alpha: number;
   readonly setAlpha: number;
   readonly preferred: {

@@ -15,7 +15,7 @@ import type {
   SpaSummary,
 } from './candidatesModel.js';
 import { commonBlockLength } from './commonBlockLength.js';
-import { decideCandidates } from './decideCandidates.js';
+import { decideCandidates, type SelectionRule } from './decideCandidates.js';
 import { jointLossSeries } from './jointLossSeries.js';
 import { sharedResampleDeviations } from './sharedResampleDeviations.js';
 import { type SpaHypothesis, type SpaMargin, superiorAbilityTest } from './superiorAbilityTest.js';
@@ -230,7 +230,7 @@ function headline(
   verdict: Report['verdict'],
   k: number,
   preferred: string,
-  rule: Settings['selectionRule'],
+  rule: SelectionRule,
 ): string {
   const question =
     rule === 'preferred-in-set'

@@ -2,7 +2,7 @@ import { columnsFor, type RunHooks, readDialect } from '../app/runComparison.js'
 import { InputError } from '../core/inputError.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import { readFoldLayout } from '../reading/readFoldLayout.js';
-import { readForecastFile } from '../reading/readForecastFile.js';
+import { type FileRole, readForecastFile } from '../reading/readForecastFile.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { fileStem } from './candidateList.js';
@@ -20,11 +20,7 @@ export async function runCandidates(settings: Settings, hooks: RunHooks = {}): P
       file: 'scale',
     });
   }
-  const read = (
-    path: string,
-    role: 'baseline' | 'candidate' | 'actuals',
-    columns = columnsFor(settings, role),
-  ) =>
+  const read = (path: string, role: FileRole, columns = columnsFor(settings, role)) =>
     readForecastFile(path, {
       role,
       columns,

@@ -12,7 +12,8 @@ import {
  * - 'none-worse': no candidate is worse than the baseline (the mirror, for a regression gate),
  *   X_k = L_k − L_baseline.
  */
-export type SpaHypothesis = 'none-better' | 'none-worse';
+export const SPA_HYPOTHESES = ['none-better', 'none-worse'] as const;
+export type SpaHypothesis = (typeof SPA_HYPOTHESES)[number];
 
 /**
  * The margin as the policies apply it (docs/design.md, "Margins"): X_k = ±(f·L_baseline − L_k) − s,

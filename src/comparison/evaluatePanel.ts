@@ -2,13 +2,12 @@ import { aggregateByTime, type LossSeries, lossDifferential } from '../aggregati
 import { InputError } from '../core/inputError.js';
 import type { AlignedPanel } from '../core/panel.js';
 import { VERSION } from '../core/version.js';
-import { decideAdjusted } from '../decision/decideAdjusted.js';
+import { decideAdjusted, type SeriesDirection } from '../decision/decideAdjusted.js';
 import { type Hypothesis, hypothesisFor } from '../decision/hypothesis.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
 import { firstOversizedLoss, MAX_LOSS } from '../losses/lossMagnitude.js';
 import { computeRowLosses, LossUnavailableError, type RowLosses } from '../losses/rowLosses.js';
-import { benjaminiHochbergAdjust } from '../multiplicity/benjaminiHochbergAdjust.js';
-import { holmAdjust } from '../multiplicity/holmAdjust.js';
+import { ADJUSTMENTS } from '../multiplicity/adjustmentMethod.js';
 import { buildReport } from '../report/buildReport.js';
 import { panelInputsSummary } from '../report/inputsSummary.js';
 import type { Comparison, PathSummary, Report, SeriesSummary } from '../report/reportModel.js';
@@ -172,7 +171,7 @@ function seriesComparisons(
       bootstrap: false,
     });
   });
-  const adjust = settings.adjust === 'holm' ? holmAdjust : benjaminiHochbergAdjust;
+  const adjust = ADJUSTMENTS[settings.adjust].adjust;
   // One-sided p-values of the plain difference in each direction (HLN-corrected for
   // bartlett/uniform), adjusted across the series family.
   const worseP = adjust(upper);
@@ -188,7 +187,7 @@ function seriesComparisons(
   const comparisons = raw.map((c, j) => {
     const w = worseP[j] ?? null;
     const b = betterP[j] ?? null;
-    const direction: 'worse' | 'better' | 'no evidence' =
+    const direction: SeriesDirection =
       w !== null && w <= settings.alpha
         ? 'worse'
         : b !== null && b <= settings.alpha

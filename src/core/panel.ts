@@ -7,7 +7,8 @@ import type { TimeFormatName } from '../alignment/timeFormat.js';
  */
 
 /** How timestamps are ordered: numbers numerically, ISO 8601 chronologically, else as text. */
-export type TimestampKind = 'number' | 'datetime' | 'text';
+export const TIMESTAMP_KINDS = ['number', 'datetime', 'text'] as const;
+export type TimestampKind = (typeof TIMESTAMP_KINDS)[number];
 
 /** Point and quantile forecasts of one model, aligned to the panel's rows. */
 export interface ModelForecasts {
@@ -66,8 +67,12 @@ export interface LackingRows {
   readonly prediction: Float64Array;
 }
 
+/** The part a file plays in a comparison, as the report's file list names it. */
+export const FILE_ROLES = ['baseline', 'candidate', 'actuals', 'losses'] as const;
+export type FileSummaryRole = (typeof FILE_ROLES)[number];
+
 export interface FileSummary {
-  readonly role: 'baseline' | 'candidate' | 'actuals' | 'losses';
+  readonly role: FileSummaryRole;
   readonly path: string;
   /** Data rows (excluding the header). */
   readonly rows: number;

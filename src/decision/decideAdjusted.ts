@@ -1,6 +1,14 @@
 import { formatPValue } from '../core/formatNumber.js';
+import { ADJUSTMENTS, type AdjustmentMethod } from '../multiplicity/adjustmentMethod.js';
 import type { Hypothesis } from './hypothesis.js';
 import type { Verdict } from './verdict.js';
+
+/**
+ * What the adjusted one-sided tests found for one series of a family, whatever the policy:
+ * `worse` and `better` need evidence in that direction.
+ */
+export const SERIES_DIRECTIONS = ['worse', 'better', 'no evidence'] as const;
+export type SeriesDirection = (typeof SERIES_DIRECTIONS)[number];
 
 /**
  * The verdict of one member of a family of comparisons (one series among many), from its
@@ -12,12 +20,12 @@ export function decideAdjusted(input: {
   readonly hypothesis: Hypothesis;
   readonly alpha: number;
   readonly adjustedPValue: number | null;
-  readonly method: 'holm' | 'bh';
+  readonly method: AdjustmentMethod;
   readonly n: number;
   readonly minPoints: number;
 }): { verdict: Verdict; reasons: string[]; rejected: boolean | null } {
   const { hypothesis, alpha, adjustedPValue: p } = input;
-  const name = input.method === 'holm' ? 'Holm-adjusted' : 'Benjamini–Hochberg-adjusted';
+  const name = `${ADJUSTMENTS[input.method].name}-adjusted`;
   if (p === null) {
     return {
       verdict: 'warn',

@@ -1,6 +1,6 @@
 import { formatPValue } from '../core/formatNumber.js';
-import type { Agreement } from '../settings/settings.js';
 import type { Hypothesis } from './hypothesis.js';
+import type { Agreement, ShortDataVerdict } from './policy.js';
 import type { Verdict } from './verdict.js';
 
 /** What one test says, reduced to what the decision needs. */
@@ -26,7 +26,7 @@ export interface DecisionInput {
   /** Time points in the tested series. */
   readonly n: number;
   readonly minPoints: number;
-  readonly shortData: 'warn' | 'fail';
+  readonly shortData: ShortDataVerdict;
   /** Candidate and baseline losses are equal on every row. */
   readonly identicalLosses: boolean;
 }

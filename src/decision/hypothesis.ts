@@ -1,4 +1,7 @@
-import type { MarginKind, Policy } from '../settings/settings.js';
+import { MARGIN_SIGN, type MarginKind, type Policy } from './policy.js';
+
+/** What rejecting H0 does to the gate, by policy. */
+export const ON_REJECT_VERDICTS = ['pass', 'fail'] as const;
 
 /**
  * How a policy and a margin become the differential that is tested and the side of the test.
@@ -21,15 +24,14 @@ export interface Hypothesis {
   /** 'above': evidence is d̄ well above δ (no-regression); 'below': well below δ. */
   readonly rejectWhen: 'above' | 'below';
   /** What rejecting H0 means for the gate. */
-  readonly onReject: 'fail' | 'pass';
+  readonly onReject: (typeof ON_REJECT_VERDICTS)[number];
   /** H0 and the alternative H1 in plain words. */
   readonly nullHypothesis: string;
   readonly alternative: string;
 }
 
 export function hypothesisFor(policy: Policy, margin: number, kind: MarginKind): Hypothesis {
-  const better = policy === 'superiority';
-  const signed = better ? -margin : margin;
+  const signed = MARGIN_SIGN[policy] * margin;
   const marginText =
     margin === 0
       ? ''

@@ -1,5 +1,6 @@
 /** The gate's three outcomes. `warn` passes the step but asks a person to look. */
-export type Verdict = 'pass' | 'warn' | 'fail';
+export const VERDICTS = ['pass', 'warn', 'fail'] as const;
+export type Verdict = (typeof VERDICTS)[number];
 
 /** The worst of several verdicts (fail > warn > pass). */
 export function worstVerdict(verdicts: readonly Verdict[]): Verdict {

@@ -2,7 +2,13 @@ import { InputError } from '../core/inputError.js';
 import type { AlignedPanel, TimestampKind } from '../core/panel.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import { applyCheckPolicy } from './checkPolicy.js';
-import type { CheckFinding, CheckMode, CheckNotRun, IntegrityReport } from './checkResult.js';
+import type {
+  CheckFinding,
+  CheckMode,
+  CheckNotRun,
+  FrequencySource,
+  IntegrityReport,
+} from './checkResult.js';
 import { CHECK_IDS } from './checkResult.js';
 import { checkExactPredictions } from './exactPredictions.js';
 import { checkFolds } from './foldChecks.js';
@@ -112,7 +118,7 @@ export function checkBacktest(
 function chooseFrequency(
   panel: AlignedPanel,
   text: string,
-): { frequency: Frequency | null; reason: string; source: 'inferred' | 'given' } {
+): { frequency: Frequency | null; reason: string; source: FrequencySource } {
   const kind = panel.timestampKind;
   if (text !== 'auto') {
     const f = parseFrequency(text);

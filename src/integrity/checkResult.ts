@@ -19,13 +19,19 @@ export const CHECK_IDS = [
 ] as const;
 export type CheckId = (typeof CHECK_IDS)[number];
 
-export type CheckStatus = 'ok' | 'warn' | 'fail';
+export const CHECK_STATUSES = ['ok', 'warn', 'fail'] as const;
+export type CheckStatus = (typeof CHECK_STATUSES)[number];
 
 /** The checks that fail the gate under the default mode (`--backtest-checks enforce`). */
 export const FAILING_CHECKS: readonly CheckId[] = ['look-ahead', 'outside-test-window'];
 
 /** How the checks' findings act on the gate (`--backtest-checks`). */
-export type CheckMode = 'enforce' | 'warn' | 'report';
+export const CHECK_MODES = ['enforce', 'warn', 'report'] as const;
+export type CheckMode = (typeof CHECK_MODES)[number];
+
+/** Where the grid step came from: inferred from the timestamps or given (`--frequency`). */
+export const FREQUENCY_SOURCES = ['inferred', 'given'] as const;
+export type FrequencySource = (typeof FREQUENCY_SOURCES)[number];
 
 export interface CheckFinding {
   readonly id: CheckId;
@@ -56,7 +62,7 @@ export interface IntegrityReport {
   /** Whether the outcome is part of the gate's verdict (false with mode 'report'). */
   readonly affectsVerdict: boolean;
   /** The grid step used to count steps ("1d", "1h", "1mo", "2"), or null when none was known. */
-  readonly frequency: { readonly text: string; readonly source: 'inferred' | 'given' } | null;
+  readonly frequency: { readonly text: string; readonly source: FrequencySource } | null;
   readonly checks: readonly IntegrityCheck[];
   readonly notRun: readonly CheckNotRun[];
 }

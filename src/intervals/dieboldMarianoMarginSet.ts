@@ -1,11 +1,12 @@
 import { bartlettLongRunVariance } from '../statistics/bartlettLongRunVariance.js';
-import type { LagRule, VarianceEstimator } from '../statistics/dieboldMariano.js';
 import { standardNormalQuantile, studentTQuantile } from '../statistics/distributions.js';
 import { ewcLongRunVariance } from '../statistics/ewcLongRunVariance.js';
 import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbold.js';
 import { mean } from '../statistics/mean.js';
+import type { LagRule } from '../statistics/neweyWestLag.js';
 import { selectLag } from '../statistics/neweyWestLag.js';
 import { uniformWeightSum } from '../statistics/uniformLongRunVariance.js';
+import type { VarianceEstimator } from '../statistics/varianceEstimator.js';
 import { fiellerSet } from './fiellerSet.js';
 import {
   complementOfSet,

@@ -1,5 +1,6 @@
 import type { LossSeries } from '../aggregation/lossSeries.js';
-import type { Agreement, Settings } from '../settings/settings.js';
+import type { Agreement } from '../decision/policy.js';
+import type { Settings } from '../settings/settings.js';
 import { tailProbability } from '../statistics/bootstrap/basicBootstrapInference.js';
 import { mean } from '../statistics/mean.js';
 import { bootstrapMarginSet } from './bootstrapMarginSet.js';

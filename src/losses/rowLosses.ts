@@ -44,6 +44,10 @@ export const POINT_LOSSES: Record<Exclude<LossName, 'pinball' | 'interval'>, Poi
   sape: symmetricAbsolutePercentageError,
 };
 
+/** What a relative loss does with rows whose actual is 0 (`--zero-actuals`): refuse or skip them. */
+export const ZERO_ACTUALS_RULES = ['error', 'skip'] as const;
+export type ZeroActualsRule = (typeof ZERO_ACTUALS_RULES)[number];
+
 /**
  * Computes the loss of every matched row for baseline and candidate. Absolute percentage error
  * rows with y = 0 are listed in `zeroActualRows` and, when `zeroActuals` is 'skip', excluded via
@@ -52,7 +56,7 @@ export const POINT_LOSSES: Record<Exclude<LossName, 'pinball' | 'interval'>, Poi
 export function computeRowLosses(
   panel: AlignedPanel,
   loss: LossName,
-  zeroActuals: 'error' | 'skip',
+  zeroActuals: ZeroActualsRule,
   interval: readonly [number, number] | null = null,
 ): RowLosses {
   const n = panel.size;

@@ -9,6 +9,10 @@ export type InputFormat = (typeof INPUT_FORMATS)[number];
 export const DELIMITER_NAMES = ['auto', ',', ';', '|', 'tab'] as const;
 export type DelimiterName = (typeof DELIMITER_NAMES)[number];
 
+/** Decimal marks of numbers in text files (`--decimal`). */
+export const DECIMAL_MARKS = ['.', ','] as const;
+export type DecimalMark = (typeof DECIMAL_MARKS)[number];
+
 /** A field separator of a text file. */
 export type Delimiter = ',' | ';' | '|' | '\t';
 

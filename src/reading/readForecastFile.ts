@@ -4,10 +4,12 @@
  */
 import type { ColumnMapping } from './columnMapping.js';
 import type { ForecastTable } from './forecastTable.js';
-import { type DelimiterName, delimiterFor } from './inputFormat.js';
+import { type DecimalMark, type DelimiterName, delimiterFor } from './inputFormat.js';
 import { streamParquetFile } from './streamParquetFile.js';
 import { streamTextFile } from './streamTextFile.js';
 import { type FileRole, ForecastTableReader, type TextFormat } from './tableBuilder.js';
+
+export type { FileRole } from './tableBuilder.js';
 
 export type FileFormat = TextFormat | 'parquet';
 
@@ -20,7 +22,7 @@ export interface ReadOptions {
   readonly requireActual?: boolean;
   /** CSV dialect (ignored for Parquet). */
   readonly delimiter?: DelimiterName;
-  readonly decimal?: '.' | ',';
+  readonly decimal?: DecimalMark;
   readonly lineLimit?: number;
   /** Called after each chunk of stored bytes with the bytes read so far and the file size. */
   readonly onProgress?: (bytesRead: number, totalBytes: number) => void;
@@ -58,7 +60,7 @@ export async function readForecastFile(path: string, options: ReadOptions): Prom
   return reader.finish(sha256);
 }
 
-function withDialect(options: ReadOptions): { decimal?: '.' | ','; lineLimit?: number } {
+function withDialect(options: ReadOptions): { decimal?: DecimalMark; lineLimit?: number } {
   return {
     ...(options.decimal === undefined ? {} : { decimal: options.decimal }),
     ...(options.lineLimit === undefined ? {} : { lineLimit: options.lineLimit }),

@@ -1,5 +1,5 @@
 import { InputError } from '../core/inputError.js';
-import { type DelimiterName, delimiterFor } from './inputFormat.js';
+import { type DecimalMark, type DelimiterName, delimiterFor } from './inputFormat.js';
 import { LossSeriesReader, type LossSeriesTable } from './lossSeriesReader.js';
 import { type FileFormat, formatFromPath } from './readForecastFile.js';
 import { streamTextFile } from './streamTextFile.js';
@@ -11,7 +11,7 @@ export async function readLossSeriesFile(
     format?: FileFormat;
     timestampColumn?: string;
     delimiter?: DelimiterName;
-    decimal?: '.' | ',';
+    decimal?: DecimalMark;
     lineLimit?: number;
     onProgress?: (bytesRead: number, totalBytes: number) => void;
   } = {},

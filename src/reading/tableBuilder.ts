@@ -1,5 +1,5 @@
 import { echo, InputError } from '../core/inputError.js';
-import type { FileSummary, QuantileColumn } from '../core/panel.js';
+import type { FileSummary, FileSummaryRole, QuantileColumn } from '../core/panel.js';
 import { type ColumnMapping, checkDistinctNames, resolveColumns } from './columnMapping.js';
 import type { ForecastTable, LabelColumn } from './forecastTable.js';
 import { type Delimiter, delimiterLabel } from './inputFormat.js';
@@ -7,7 +7,8 @@ import { parseDecimal, parseHorizon } from './numbers.js';
 import { RowKeySet } from './rowKeySet.js';
 import { Tokenizer } from './tokenizer.js';
 
-export type FileRole = 'baseline' | 'candidate' | 'actuals';
+/** The part a forecast file plays (a loss file is read elsewhere). */
+export type FileRole = Exclude<FileSummaryRole, 'losses'>;
 /**
  * Longest key value (series, timestamp, origin, path). Distinct key values are kept for the whole
  * file, so a cap on them (with the line limit and duplicate keys found while reading) bounds the

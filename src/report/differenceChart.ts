@@ -1,3 +1,4 @@
+import { MARGIN_SIGN } from '../decision/policy.js';
 import type { PeriodSummary } from '../stability/stabilityModel.js';
 import { percent } from './cells.js';
 import type { ReportView } from './reportView.js';
@@ -26,9 +27,7 @@ export function differenceSeries(report: ReportView): DifferenceSeries | null {
   if (periods.length < 2) return null;
   const p = report.policy;
   const margin =
-    p.marginKind === 'relative' && p.margin > 0
-      ? (p.policy === 'superiority' ? -p.margin : p.margin) * 100
-      : null;
+    p.marginKind === 'relative' && p.margin > 0 ? MARGIN_SIGN[p.policy] * p.margin * 100 : null;
   return {
     labels: periods.map((x) => periodLabel(x.start)),
     values: periods.map((x) => (x.relativeDifference as number) * 100),

@@ -1,4 +1,6 @@
+import { MARGIN_SIGN } from '../decision/policy.js';
 import { candidatesChartSvg } from './candidatesChartSvg.js';
+import { candidatesSection } from './candidatesSection.js';
 import { percent, relativeInterval } from './cells.js';
 import { chartCaption, differenceSeries, sparklineText } from './differenceChart.js';
 import { missingRowsSection } from './missingRowsSection.js';
@@ -102,9 +104,16 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
     }
   }
 
-  const candidatesChart = candidatesChartSvg(report);
-  if (candidatesChart !== '') {
-    out.push('<h2>Candidates</h2>', `<figure>${candidatesChart}</figure>`);
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    const chart = candidatesChartSvg(report);
+    out.push(`<h2>${xml(candidates.heading)}</h2>`);
+    if (chart !== '') out.push(`<figure>${chart}</figure>`);
+    out.push(
+      htmlTable(candidates.ranking),
+      `<p>${xml(candidates.spaSentence)}</p>`,
+      `<p>${xml(candidates.setSentence)}</p>`,
+    );
   }
 
   const horizons = view.comparisons.filter(
@@ -194,7 +203,7 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
 function marginPercent(report: ReportView): number | null {
   const p = report.policy;
   if (p.marginKind !== 'relative' || p.margin === 0) return null;
-  return (p.policy === 'superiority' ? -p.margin : p.margin) * 100;
+  return MARGIN_SIGN[p.policy] * p.margin * 100;
 }
 
 function htmlTable(t: ReportTable): string {

@@ -1,8 +1,8 @@
+import { candidatesSection } from './candidatesSection.js';
 import { chartCaption, differenceSeries, mermaidChart, sparklineText } from './differenceChart.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { missingRowsSection } from './missingRowsSection.js';
 import { backtestChecksSection } from './renderBacktestChecks.js';
-import { renderCandidatesMarkdown } from './renderCandidatesMarkdown.js';
 import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
@@ -33,7 +33,11 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   lines.push(`<sub>${esc(s.intervalNote)}</sub>`, '');
   for (const note of s.notes) lines.push(`- ${esc(note)}`);
   if (s.notes.length > 0) lines.push('');
-  lines.push(...renderCandidatesMarkdown(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    lines.push(`**${esc(candidates.heading)}**`, '', ...markdownTable(candidates.ranking), '');
+    lines.push(esc(candidates.spaSentence), '', esc(candidates.setSentence), '');
+  }
 
   const chart = differenceSeries(view);
   if (chart !== null) {

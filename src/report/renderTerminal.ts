@@ -1,6 +1,6 @@
+import { candidatesSection } from './candidatesSection.js';
 import { differenceSeries, sparklineText } from './differenceChart.js';
 import { backtestChecksLines } from './renderBacktestChecks.js';
-import { renderCandidatesTerminal } from './renderCandidatesTerminal.js';
 import { renderStabilityTerminal } from './renderStabilityTerminal.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
@@ -33,7 +33,12 @@ export function renderTerminal(report: Report, options: TerminalOptions): string
   out.push(wrap(`${s.lead} ${s.change}`, 100), '');
   out.push(...textTable(s.main, paint));
   out.push('', paint('2', wrap(s.intervalNote, 100)));
-  out.push(...renderCandidatesTerminal(report));
+  const candidates = candidatesSection(report);
+  if (candidates !== null) {
+    out.push('', wrap(candidates.heading, 100));
+    out.push(...textTable({ ...candidates.ranking, header: candidates.shortHeader }, paint));
+    out.push(wrap(candidates.spaSentence, 100, '  '), wrap(candidates.setSentence, 100, '  '));
+  }
   const chart = differenceSeries(view);
   if (chart !== null) out.push('', clean(sparklineText(chart)));
   const overTime = renderStabilityTerminal(report);

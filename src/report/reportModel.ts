@@ -5,17 +5,21 @@ import type {
   SelectionSummary,
   SpaSummary,
 } from '../candidates/candidatesModel.js';
-import type { FileSummary } from '../core/panel.js';
+import type { FileSummary, TimestampKind } from '../core/panel.js';
+import type { SeriesDirection } from '../decision/decideAdjusted.js';
+import type { ON_REJECT_VERDICTS } from '../decision/hypothesis.js';
 import type { Verdict } from '../decision/verdict.js';
 import type { IntegrityReport } from '../integrity/checkResult.js';
 import type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 import type { RelativeChange } from '../intervals/relativeChange.js';
 import type { LossName } from '../losses/lossName.js';
+import type { AdjustmentMethod } from '../multiplicity/adjustmentMethod.js';
 import type { Settings } from '../settings/settings.js';
 import type { Stability } from '../stability/stabilityModel.js';
 import type { AutomaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
+import type { BlockLengthRule } from '../statistics/bootstrap/blockLengthRule.js';
 import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
-import type { DieboldMarianoResult } from '../statistics/dieboldMariano.js';
+import type { DieboldMarianoResult, DieboldMarianoState } from '../statistics/dieboldMariano.js';
 import type { MissingRowsSummary } from './missingRows.js';
 
 export type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
@@ -77,7 +81,7 @@ export interface PathSummary {
  * one-sided p-values at α) and the series with the largest significant regressions.
  */
 export interface SeriesSummary {
-  readonly method: 'holm' | 'bh';
+  readonly method: AdjustmentMethod;
   readonly alpha: number;
   readonly series: number;
   readonly worse: number;
@@ -97,7 +101,7 @@ export interface PolicySummary {
   readonly nullHypothesis: string;
   readonly alternative: string;
   /** What rejecting H0 does to the gate. */
-  readonly onReject: 'fail' | 'pass';
+  readonly onReject: (typeof ON_REJECT_VERDICTS)[number];
   /** d_t = L_c,t − k·L_b,t and the boundary δ of H0 (E[d] = δ). */
   readonly baselineFactor: number;
   readonly boundary: number;
@@ -141,7 +145,7 @@ export interface Comparison {
   /** Per-series comparisons: the multiplicity-adjusted p-value in the policy's direction. */
   readonly adjustedPValue?: number | null;
   /** Per-series comparisons: what the adjusted one-sided tests found. */
-  readonly direction?: 'worse' | 'better' | 'no evidence';
+  readonly direction?: SeriesDirection;
   /**
    * Per-series comparisons: the adjusted one-sided p-value of the plain difference L_c − L_b
    * behind `direction` (upper tail for worse and no evidence, lower tail for better).
@@ -150,7 +154,7 @@ export interface Comparison {
 }
 
 export interface DieboldMarianoSummary {
-  readonly state: 'ok' | 'identical' | 'zero-variance' | 'too-short';
+  readonly state: DieboldMarianoState;
   readonly estimator: Settings['variance'];
   readonly requestedEstimator: Settings['variance'];
   readonly statistic: number | null;
@@ -179,13 +183,19 @@ export interface DieboldMarianoSummary {
   readonly notes: readonly string[];
 }
 
+/**
+ * The bootstrap's state in the report: the stationary bootstrap's (`ok`, `identical`,
+ * `too-short`), or `not-run` (per-series comparisons use the Diebold–Mariano test alone).
+ */
+export const BOOTSTRAP_STATES = ['ok', 'identical', 'too-short', 'not-run'] as const;
+export type BootstrapState = (typeof BOOTSTRAP_STATES)[number];
+
 export interface BootstrapSummary {
-  /** 'not-run': per-series comparisons use the Diebold–Mariano test alone. */
-  readonly state: 'ok' | 'identical' | 'too-short' | 'not-run';
+  readonly state: BootstrapState;
   readonly resamples: number;
   readonly seed: number;
   readonly expectedBlockLength: number;
-  readonly blockLengthRule: 'auto' | 'fixed';
+  readonly blockLengthRule: BlockLengthRule['kind'];
   /** Politis–White quantities when the block length was chosen automatically. */
   readonly blockLengthSelection: AutomaticBlockLength | null;
   readonly standardError: number | null;
@@ -235,7 +245,7 @@ export interface InputsSummary {
   };
   readonly timestamps: {
     readonly count: number;
-    readonly kind: 'number' | 'datetime' | 'text';
+    readonly kind: TimestampKind;
     readonly first: string | null;
     readonly last: string | null;
     /** How the labels were read (the time-format option). */

@@ -1,4 +1,5 @@
 import { LOSS_LABELS } from '../losses/lossName.js';
+import { ADJUSTMENTS } from '../multiplicity/adjustmentMethod.js';
 import { holmAdjust } from '../multiplicity/holmAdjust.js';
 import {
   asCommandLine,
@@ -277,7 +278,7 @@ const SERIES_ROWS = 50;
 function seriesSection(report: ReportView): ReportSections['series'] {
   const s = report.seriesSummary;
   if (s === null) return null;
-  const method = s.method === 'holm' ? 'Holm' : 'Benjamini–Hochberg';
+  const method = ADJUSTMENTS[s.method].name;
   const rows = report.comparisons
     .filter((c) => c.series !== 'all')
     .sort((a, b) => (b.relativeDifference ?? 0) - (a.relativeDifference ?? 0));

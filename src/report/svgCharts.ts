@@ -1,3 +1,4 @@
+import type { SeriesDirection } from '../decision/decideAdjusted.js';
 import type { ResampleHistogram } from '../statistics/bootstrap/resampleHistogram.js';
 
 /**
@@ -192,7 +193,7 @@ export function seriesDotPlotSvg(input: {
     label: string;
     change: number;
     p: number;
-    direction: 'worse' | 'better' | 'no evidence';
+    direction: SeriesDirection;
   }[];
   readonly alpha: number;
 }): string {

@@ -1,6 +1,16 @@
 import { TIME_FORMAT_NAMES } from '../alignment/timeFormat.js';
+import { SELECTION_RULES } from '../candidates/decideCandidates.js';
+import { AGREEMENTS, MARGIN_KINDS, POLICIES, SHORT_DATA_VERDICTS } from '../decision/policy.js';
+import { CHECK_MODES } from '../integrity/checkResult.js';
 import { LOSS_ALIASES, LOSS_NAMES } from '../losses/lossName.js';
-import { DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
+import { ZERO_ACTUALS_RULES } from '../losses/rowLosses.js';
+import { ADJUSTMENT_METHODS } from '../multiplicity/adjustmentMethod.js';
+import { DECIMAL_MARKS, DELIMITER_NAMES, INPUT_FORMATS } from '../reading/inputFormat.js';
+import { POOLINGS, SCALE_KINDS } from '../scaling/pooling.js';
+import { FLUCTUATION_SIDES } from '../stability/fluctuationCriticalValues.js';
+import { STABILITY_GATE_MODES } from '../stability/stabilityFinding.js';
+import { CONFIDENCE_SET_STATISTICS } from '../statistics/modelConfidenceSet.js';
+import { VARIANCE_ESTIMATORS } from '../statistics/varianceEstimator.js';
 
 /**
  * The engine's options, in one place: the CLI's flags (`--name`) and the action's inputs (`name`)
@@ -56,7 +66,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'selection-rule',
     defaultValue: 'preferred-in-set',
-    choices: ['preferred-in-set', 'none-worse', 'some-better'],
+    choices: SELECTION_RULES,
     help: 'with several candidates: preferred-in-set passes when the preferred candidate is in the model confidence set and passes its own comparison; none-worse fails on evidence that some candidate is worse than the baseline (SPA test); some-better passes only on evidence that some candidate is better (SPA test)',
   },
   {
@@ -68,7 +78,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'set-statistic',
     defaultValue: 'max',
-    choices: ['range', 'max'],
+    choices: CONFIDENCE_SET_STATISTICS,
     help: 'with several candidates: statistic of the model confidence set, max (T_max) or range (T_R; over-rejects with skewed losses at a few hundred points, see docs/validation.md)',
   },
   {
@@ -116,7 +126,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'decimal',
     defaultValue: '.',
-    choices: ['.', ','],
+    choices: DECIMAL_MARKS,
     help: 'decimal mark of numbers in CSV files; "," (decimal comma) needs another --delimiter',
   },
   {
@@ -140,7 +150,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'zero-actuals',
     defaultValue: 'error',
-    choices: ['error', 'skip'],
+    choices: ZERO_ACTUALS_RULES,
     help: 'with ape: refuse rows whose actual is 0, or skip and count them',
   },
   {
@@ -158,25 +168,25 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'margin-kind',
     defaultValue: 'relative',
-    choices: ['relative', 'absolute'],
+    choices: MARGIN_KINDS,
     help: 'relative (fraction of the baseline loss) or absolute (loss units)',
   },
   {
     name: 'policy',
     defaultValue: 'no-regression',
-    choices: ['no-regression', 'non-inferiority', 'superiority'],
+    choices: POLICIES,
     help: 'no-regression: fail only on evidence the candidate is worse than the margin; non-inferiority: pass only on evidence it is not; superiority: pass only on evidence it is better by the margin',
   },
   {
     name: 'agreement',
     defaultValue: 'both',
-    choices: ['both', 'either', 'dm', 'bootstrap'],
+    choices: AGREEMENTS,
     help: 'which tests must reject for the decision; with both, a split verdict is a warning',
   },
   {
     name: 'variance',
     defaultValue: 'ewc-ar1',
-    choices: ['ewc-ar1', 'ewc', 'bartlett', 'uniform'],
+    choices: VARIANCE_ESTIMATORS,
     help: 'long-run variance for Diebold–Mariano: ewc-ar1 (equal-weighted cosine, fixed-b, cosine terms from the data), ewc (the same with 0.4·n^(2/3) terms), bartlett (Newey–West), uniform',
   },
   {
@@ -213,7 +223,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'short-data',
     defaultValue: 'warn',
-    choices: ['warn', 'fail'],
+    choices: SHORT_DATA_VERDICTS,
     help: 'verdict when there are fewer time points than --min-points',
   },
   {
@@ -231,13 +241,13 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'pooling',
     defaultValue: 'raw',
-    choices: ['raw', 'scaled'],
+    choices: POOLINGS,
     help: 'pool raw losses across series, or losses divided by a per-series scale (so no large series dominates)',
   },
   {
     name: 'scale',
     defaultValue: 'baseline',
-    choices: ['baseline', 'seasonal-naive'],
+    choices: SCALE_KINDS,
     help: "with --pooling scaled: each series' mean baseline loss, or the in-sample error of the seasonal naive forecast on --history (as in MASE)",
   },
   {
@@ -261,7 +271,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'adjust',
     defaultValue: 'holm',
-    choices: ['holm', 'bh'],
+    choices: ADJUSTMENT_METHODS,
     help: 'multiplicity adjustment of the per-series p-values: holm (family-wise error) or bh (false discovery rate)',
   },
   {
@@ -285,13 +295,13 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'fluctuation-sides',
     defaultValue: 'one',
-    choices: ['one', 'two'],
+    choices: FLUCTUATION_SIDES,
     help: 'fluctuation test against a candidate worse in some stretch (one) or a difference of either sign (two)',
   },
   {
     name: 'stability-gate',
     defaultValue: 'warn',
-    choices: ['off', 'warn', 'fail'],
+    choices: STABILITY_GATE_MODES,
     help: 'what a candidate significantly worse recently or in some stretch does to the gate: nothing, warn, or fail',
   },
   {
@@ -315,7 +325,7 @@ export const ENGINE_OPTIONS: readonly OptionSpec[] = [
   {
     name: 'backtest-checks',
     defaultValue: 'enforce',
-    choices: ['enforce', 'warn', 'report'],
+    choices: CHECK_MODES,
     help: 'enforce: look-ahead and rows outside their test window fail the gate, other findings warn; warn: every finding warns; report: findings are shown but leave the verdict alone',
   },
   {

@@ -1,12 +1,31 @@
+import { TIME_FORMAT_NAMES } from '../alignment/timeFormat.js';
 import { parseCandidateList } from '../candidates/candidateList.js';
+import { SELECTION_RULES } from '../candidates/decideCandidates.js';
 import { InputError } from '../core/inputError.js';
+import { AGREEMENTS, MARGIN_KINDS, POLICIES, SHORT_DATA_VERDICTS } from '../decision/policy.js';
+import { CHECK_MODES } from '../integrity/checkResult.js';
 import { FREQUENCY_SYNTAX, parseFrequency } from '../integrity/frequency.js';
 import { canonicalLoss } from '../losses/lossName.js';
+import { ZERO_ACTUALS_RULES } from '../losses/rowLosses.js';
+import { ADJUSTMENT_METHODS } from '../multiplicity/adjustmentMethod.js';
 import { parseColumnMapping } from '../reading/columnMapping.js';
+import {
+  DECIMAL_MARKS,
+  DELIMITER_NAMES,
+  type DecimalMark,
+  INPUT_FORMATS,
+} from '../reading/inputFormat.js';
+import { POOLINGS, SCALE_KINDS } from '../scaling/pooling.js';
+import { FLUCTUATION_SIDES } from '../stability/fluctuationCriticalValues.js';
 import { parseRecentWindow } from '../stability/recentWindow.js';
+import { STABILITY_GATE_MODES } from '../stability/stabilityFinding.js';
+import type { BlockLengthRule } from '../statistics/bootstrap/blockLengthRule.js';
+import { CONFIDENCE_SET_STATISTICS } from '../statistics/modelConfidenceSet.js';
+import type { LagRule } from '../statistics/neweyWestLag.js';
+import { VARIANCE_ESTIMATORS } from '../statistics/varianceEstimator.js';
 import { defaultConfidence } from './defaultConfidence.js';
 import { ENGINE_OPTIONS, type OptionSpec } from './options.js';
-import type { BlockLengthRule, LagRule, Settings } from './settings.js';
+import type { Settings } from './settings.js';
 
 /** Raw option values by option name (as typed by the user, before validation). */
 export type RawOptions = Readonly<Record<string, string | undefined>>;
@@ -30,6 +49,13 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
       });
     }
     return text;
+  };
+  /** The option's value as one of its listed values (the table's choices are those lists). */
+  const choice = <T extends string>(name: string, values: readonly T[]): T => {
+    const text = value(name);
+    const found = values.find((v) => v === text);
+    if (found === undefined) throw new Error(`option ${name} lists other choices than ${values}`);
+    return found;
   };
   const optional = (name: string): string | null => {
     const given = raw[name]?.trim();
@@ -100,27 +126,27 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
     modelColumn,
     baselineModel,
     preferred: optional('preferred'),
-    selectionRule: value('selection-rule') as Settings['selectionRule'],
+    selectionRule: choice('selection-rule', SELECTION_RULES),
     setAlpha: number('set-alpha', (x) => x > 0 && x < 1, 'a number between 0 and 1, such as 0.1'),
-    setStatistic: value('set-statistic') as Settings['setStatistic'],
+    setStatistic: choice('set-statistic', CONFIDENCE_SET_STATISTICS),
     losses,
     actuals: optional('actuals'),
     columns: parseColumnMapping(value('columns'), label('columns')),
     baselineColumns: parseColumnMapping(value('baseline-columns'), label('baseline-columns')),
     candidateColumns: parseColumnMapping(value('candidate-columns'), label('candidate-columns')),
-    format: value('format') as Settings['format'],
-    delimiter: value('delimiter') as Settings['delimiter'],
-    decimal: parseDecimalMark(value('decimal'), value('delimiter'), label),
-    timeFormat: value('time-format') as Settings['timeFormat'],
+    format: choice('format', INPUT_FORMATS),
+    delimiter: choice('delimiter', DELIMITER_NAMES),
+    decimal: parseDecimalMark(choice('decimal', DECIMAL_MARKS), value('delimiter'), label),
+    timeFormat: choice('time-format', TIME_FORMAT_NAMES),
     lineLimit: integer('line-limit', 1024, 1 << 28),
     loss: canonicalLoss(value('loss')),
-    zeroActuals: value('zero-actuals') as Settings['zeroActuals'],
+    zeroActuals: choice('zero-actuals', ZERO_ACTUALS_RULES),
     alpha,
     margin: parseMargin(value('margin'), value('margin-kind'), label),
-    marginKind: value('margin-kind') as Settings['marginKind'],
-    policy: value('policy') as Settings['policy'],
-    agreement: value('agreement') as Settings['agreement'],
-    variance: value('variance') as Settings['variance'],
+    marginKind: choice('margin-kind', MARGIN_KINDS),
+    policy: choice('policy', POLICIES),
+    agreement: choice('agreement', AGREEMENTS),
+    variance: choice('variance', VARIANCE_ESTIMATORS),
     lag: parseLag(value('lag'), label('lag')),
     blockLength: parseBlockLength(value('block-length'), label('block-length')),
     resamples: integer('resamples', 99, 10_000_000),
@@ -130,19 +156,19 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
         ? defaultConfidence(alpha)
         : number('confidence', (x) => x > 0.5 && x < 1, 'a number between 0.5 and 1, such as 0.9'),
     minPoints: integer('min-points', 1),
-    shortData: value('short-data') as Settings['shortData'],
+    shortData: choice('short-data', SHORT_DATA_VERDICTS),
     allowMissing: bool('allow-missing'),
     interval: parseInterval(
       value('interval'),
       label('interval'),
       canonicalLoss(value('loss')) === 'interval',
     ),
-    pooling: value('pooling') as Settings['pooling'],
-    scale: value('scale') as Settings['scale'],
+    pooling: choice('pooling', POOLINGS),
+    scale: choice('scale', SCALE_KINDS),
     history: optional('history'),
     season: integer('season', 1),
     weights: bool('weights'),
-    adjust: value('adjust') as Settings['adjust'],
+    adjust: choice('adjust', ADJUSTMENT_METHODS),
     top: integer('top', 0, 10_000),
     recent: parseRecentWindow(value('recent'), label('recent')),
     fluctuationWindow: number(
@@ -150,12 +176,12 @@ export function resolveSettings(raw: RawOptions, label: (name: string) => string
       (x) => x >= 0.1 && x <= 0.9,
       'a number from 0.1 to 0.9 (the window as a fraction of the time points)',
     ),
-    fluctuationSides: value('fluctuation-sides') as Settings['fluctuationSides'],
-    stabilityGate: value('stability-gate') as Settings['stabilityGate'],
+    fluctuationSides: choice('fluctuation-sides', FLUCTUATION_SIDES),
+    stabilityGate: choice('stability-gate', STABILITY_GATE_MODES),
     frequency: parseFrequencyOption(value('frequency'), label('frequency')),
     folds: optional('folds'),
     embargo: integer('embargo', 0, 1_000_000),
-    backtestChecks: value('backtest-checks') as Settings['backtestChecks'],
+    backtestChecks: choice('backtest-checks', CHECK_MODES),
     json: optional('json'),
     markdown: optional('markdown'),
     html: optional('html'),
@@ -197,10 +223,10 @@ function parseMargin(text: string, kind: string, label: (name: string) => string
 
 /** The decimal mark, which must differ from the field separator. */
 function parseDecimalMark(
-  text: string,
+  text: DecimalMark,
   delimiter: string,
   label: (name: string) => string,
-): '.' | ',' {
+): DecimalMark {
   // With delimiter auto the reader decides per file (a TSV file is fine, a CSV file is refused).
   if (text === ',' && delimiter === ',') {
     throw new InputError(
@@ -208,7 +234,7 @@ function parseDecimalMark(
       { value: text },
     );
   }
-  return text as '.' | ',';
+  return text;
 }
 
 function specOf(name: string): OptionSpec {

@@ -10,7 +10,9 @@
  */
 export const TABLE_MU: readonly number[] = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
 
-export type FluctuationSides = 'one' | 'two';
+/** One-sided (a candidate worse in some stretch) or two-sided (`--fluctuation-sides`). */
+export const FLUCTUATION_SIDES = ['one', 'two'] as const;
+export type FluctuationSides = (typeof FLUCTUATION_SIDES)[number];
 
 interface Column {
   readonly alpha: number;

@@ -1,4 +1,4 @@
-import type { LagRule } from '../settings/settings.js';
+import type { LagRule } from '../statistics/neweyWestLag.js';
 import { prewhitenedLongRunVariance } from '../statistics/prewhitenedLongRunVariance.js';
 import { type FluctuationSides, fluctuationCriticalValue } from './fluctuationCriticalValues.js';
 import { rollingStatistic } from './rollingStatistic.js';

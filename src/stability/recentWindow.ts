@@ -4,6 +4,10 @@ import { InputError } from '../core/inputError.js';
 export type RecentWindow =
   | { readonly kind: 'points'; readonly points: number }
   | { readonly kind: 'share'; readonly share: number };
+export const RECENT_WINDOW_KINDS = [
+  'points',
+  'share',
+] as const satisfies readonly RecentWindow['kind'][];
 
 /**
  * Reads `recent`: '' (no recent window), an integer N ≥ 2 (the last N time points) or a

@@ -8,10 +8,17 @@ import type { Settings } from '../settings/settings.js';
 import { describeSpan } from './describeSpan.js';
 import type { Stability, TimeSpan } from './stabilityModel.js';
 
+/**
+ * What a candidate significantly worse recently or in some stretch does to the gate
+ * (`--stability-gate`): nothing, warn, or fail.
+ */
+export const STABILITY_GATE_MODES = ['off', 'warn', 'fail'] as const;
+export type StabilityGateMode = (typeof STABILITY_GATE_MODES)[number];
+
 /** What the stability checks add to the gate: a verdict to merge, words for the headline. */
 export interface StabilityFinding {
   /** 'warn' or 'fail' when the candidate is significantly worse recently or in some stretch. */
-  readonly effect: 'warn' | 'fail' | null;
+  readonly effect: Exclude<StabilityGateMode, 'off'> | null;
   /** Sentences appended to the headline, or '' when there is nothing to say. */
   readonly headline: string;
   readonly reasons: readonly string[];

@@ -1,3 +1,6 @@
+/** 'bonferroni' when both checks ran (each at α/2), 'none' otherwise. */
+export const STABILITY_ADJUSTMENTS = ['none', 'bonferroni'] as const;
+
 /**
  * The level each stability check runs at (`report.stability.levels`). The report flags "not
  * stable" when either the fluctuation test or the recent window's comparison finds the candidate
@@ -6,8 +9,7 @@
  * and stable accuracy, whatever the dependence between them. A check that runs alone keeps α.
  */
 export interface StabilityLevels {
-  /** 'bonferroni' when both checks ran (each at α/2), 'none' otherwise. */
-  readonly adjustment: 'none' | 'bonferroni';
+  readonly adjustment: (typeof STABILITY_ADJUSTMENTS)[number];
   /** The gate's α, the bound on the combined "not stable" flag. */
   readonly alpha: number;
   /** Level of the fluctuation test, or null when it was not run. */

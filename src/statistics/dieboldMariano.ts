@@ -12,15 +12,8 @@ import { harveyLeybourneNewbold } from './harveyLeybourneNewbold.js';
 import { mean } from './mean.js';
 import { type LagChoice, type LagRule, selectLag } from './neweyWestLag.js';
 import { uniformLongRunVariance } from './uniformLongRunVariance.js';
+import type { VarianceEstimator } from './varianceEstimator.js';
 import { isEffectivelyNonPositive } from './varianceTolerance.js';
-
-export type { LagRule } from './neweyWestLag.js';
-
-/**
- * The long-run variance estimator (`--variance`): `ewc` with ν = max(2, round(0.4 n^{2/3})),
- * `ewc-ar1` the same estimator with ν chosen from the data (`ar1PluginCosineTerms`).
- */
-export type VarianceEstimator = 'ewc' | 'ewc-ar1' | 'bartlett' | 'uniform';
 
 export interface DieboldMarianoOptions {
   estimator: VarianceEstimator;
@@ -44,7 +37,8 @@ export interface DieboldMarianoOptions {
  * - `zero-variance`: d has no variation, or the long-run variance is 0 within rounding;
  * - `too-short`: fewer than `MINIMUM_LENGTH` values.
  */
-export type DieboldMarianoState = 'ok' | 'identical' | 'zero-variance' | 'too-short';
+export const DIEBOLD_MARIANO_STATES = ['ok', 'identical', 'zero-variance', 'too-short'] as const;
+export type DieboldMarianoState = (typeof DIEBOLD_MARIANO_STATES)[number];
 
 export interface DieboldMarianoResult {
   state: DieboldMarianoState;
@@ -75,7 +69,7 @@ export interface DieboldMarianoResult {
     degreesOfFreedom: number;
   } | null;
   lagSelection: {
-    rule: 'auto' | 'horizon' | 'fixed';
+    rule: LagRule['kind'];
     pilotLag?: number;
     bandwidth?: number;
     s0?: number;

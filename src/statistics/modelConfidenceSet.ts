@@ -26,7 +26,8 @@
  * Ties in an argmax go to the model listed first: with continuous losses they have probability 0,
  * and outside ties the result does not depend on the order in which models are listed.
  */
-export type ConfidenceSetStatistic = 'range' | 'max';
+export const CONFIDENCE_SET_STATISTICS = ['range', 'max'] as const;
+export type ConfidenceSetStatistic = (typeof CONFIDENCE_SET_STATISTICS)[number];
 
 export interface ModelConfidenceSetInput {
   /** L̄_i per model. */

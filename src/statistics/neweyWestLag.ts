@@ -1,7 +1,14 @@
 import { autocovariances } from './autocovariance.js';
 
-/** How the lag L of the Bartlett / uniform long-run variance is chosen (`--lag`). */
-export type LagRule = { kind: 'auto' } | { kind: 'horizon' } | { kind: 'fixed'; lag: number };
+/**
+ * How the lag L of the Bartlett / uniform long-run variance is chosen (`--lag`): `auto` (the
+ * Newey–West 1994 plug-in, at least h − 1), `horizon` (h − 1), or a fixed lag.
+ */
+export const LAG_RULE_KINDS = ['auto', 'horizon', 'fixed'] as const;
+/** A lag rule: the kinds other than `fixed` take no parameter. */
+export type LagRule =
+  | { kind: Exclude<(typeof LAG_RULE_KINDS)[number], 'fixed'> }
+  | { kind: 'fixed'; lag: number };
 
 export interface NeweyWestBandwidth {
   /** Pilot lag m = ⌊4 (n/100)^{2/9}⌋, at most n − 1. */

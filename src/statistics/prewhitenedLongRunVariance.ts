@@ -1,6 +1,6 @@
-import type { LagRule } from '../settings/settings.js';
 import { bartlettLongRunVariance } from './bartlettLongRunVariance.js';
 import { mean } from './mean.js';
+import type { LagRule } from './neweyWestLag.js';
 import { selectLag } from './neweyWestLag.js';
 
 /** Largest |â| of the AR(1) prewhitening filter (Andrews & Monahan 1992 cap it likewise). */

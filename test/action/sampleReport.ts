@@ -376,3 +376,141 @@ export function sampleCandidatesReport(): Report {
     },
   };
 }
+
+/**
+ * The sample with every field the schema (docs/report.schema.json) lets a report have: the
+ * optional ones present and the nullable ones filled (a per-series comparison with its adjusted
+ * p-values and direction, a backtest path, a relative change in pieces, measured coverage,
+ * small-sample statistics, the bootstrap's relative interval and histogram, series and path
+ * summaries, the missing-rows breakdown, interval coverage, a recent window, and the
+ * several-candidates sections). Estimator diagnostics are null, as the untrusted reader leaves
+ * them, so the report reads back unchanged.
+ */
+export function fullSampleReport(): Report {
+  const base = sampleCandidatesReport();
+  const overall = base.comparisons[0]!;
+  const measuredCoverage = { coverage: 0.861, level: 0.9, studiedN: 48 };
+  const perSeries = {
+    ...overall,
+    series: 'north',
+    horizon: 2,
+    path: 'fold-1',
+    n: 60,
+    rows: 60,
+    maxHorizon: 2,
+    relativeChange: {
+      estimate: 0.031,
+      level: 0.9,
+      lower: null,
+      upper: null,
+      method: 'Fieller (bartlett)',
+      pieces: [
+        { lower: null, upper: -0.41 },
+        { lower: 0.012, upper: null },
+      ],
+      measuredCoverage,
+    },
+    dieboldMariano: {
+      ...overall.dieboldMariano,
+      estimator: 'bartlett' as const,
+      requestedEstimator: 'uniform' as const,
+      lag: 2,
+      degreesOfFreedom: null,
+      smallSample: { statistic: 1.21, pValue: 0.115, pValueTwoSided: 0.23, degreesOfFreedom: 59 },
+      interval: { ...overall.dieboldMariano.interval!, measuredCoverage },
+      notes: ['The uniform estimate was not positive; Bartlett weights were used instead.'],
+    },
+    bootstrap: {
+      ...overall.bootstrap,
+      state: 'not-run' as const,
+      blockLengthRule: 'fixed' as const,
+      interval: { ...overall.bootstrap.interval!, measuredCoverage },
+      relativeInterval: {
+        level: 0.9,
+        lower: -0.02,
+        upper: 0.05,
+        method: 'basic',
+        measuredCoverage,
+      },
+      distribution: { lower: -1.2, upper: 0.4, counts: [3, 40, 120, 31, 2] },
+    },
+    verdict: 'warn' as const,
+    adjustedPValue: 0.23,
+    direction: 'no evidence' as const,
+    directionPValue: 0.46,
+  };
+  const group = {
+    key: 'north',
+    rows: 12,
+    first: '2026-04-01',
+    last: '2026-04-12',
+    meanBaselineLoss: 5.2,
+  };
+  const [first, ...others] = base.candidates!;
+  const every = {
+    series: 'zone',
+    timestamp: 'target_date',
+    horizon: 'steps',
+    origin: 'issued',
+    path: 'fold',
+    actual: 'observed',
+    prediction: 'forecast',
+    weight: 'w',
+    quantile: 'p',
+  };
+  return {
+    ...base,
+    comparisons: [overall, perSeries],
+    candidates: [{ ...first!, comparison: { ...perSeries, series: 'all' } }, ...others],
+    inputs: {
+      ...base.inputs,
+      files: [
+        ...base.inputs.files,
+        { ...base.inputs.files[0]!, role: 'actuals', path: 'examples/data/actuals.csv' },
+        { ...base.inputs.files[0]!, role: 'losses', path: 'out/losses.csv' },
+      ],
+      quantileLevels: [0.1, 0.9],
+      intervalCoverage: { nominal: 0.8, baseline: 0.77, candidate: 0.81 },
+      missingRows: {
+        rows: 12,
+        first: '2026-04-01',
+        last: '2026-04-12',
+        meanBaselineLoss: 5.2,
+        meanBaselineLossCommon: 4.6,
+        rowsWithoutLoss: 0,
+        bySeries: [group],
+        byHorizon: [{ ...group, key: '1' }],
+      },
+    },
+    seriesSummary: {
+      method: 'bh',
+      alpha: 0.05,
+      series: 4,
+      worse: 1,
+      better: 2,
+      noEvidence: 1,
+      topRegressions: ['north'],
+    },
+    pathSummary: { paths: 3, worse: 1, shareWorse: 1 / 3, significantlyWorse: 0 },
+    stability: {
+      ...base.stability!,
+      fluctuation: {
+        ...base.stability!.fluctuation!,
+        rejected: true,
+        worsePeriods: [{ start: '2026-08-01', end: '2026-08-30' }],
+      },
+      recent: { ...perSeries, series: 'all', horizon: 'all', n: 36, firstTimestamp: '2026-09-24' },
+      levels: { adjustment: 'bonferroni', alpha: 0.05, fluctuation: 0.025, recent: 0.025 },
+    },
+    settings: {
+      ...base.settings,
+      columns: every,
+      baselineColumns: { ...every, prediction: 'point_forecast' },
+      candidateColumns: { ...every, actual: 'y' },
+      recent: { kind: 'share', share: 0.15 },
+      interval: [0.1, 0.9],
+      lag: { kind: 'fixed', lag: 2 },
+      blockLength: { kind: 'fixed', length: 6.5 },
+    },
+  };
+}

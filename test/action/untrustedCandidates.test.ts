@@ -63,8 +63,8 @@ describe('the several-candidates sections of an uploaded report', () => {
       'ensemble\\_1',
       'baseline (baseline)',
     ]);
-    expect(rows[0]).toContain('| yes | > 0.9999 | 0.0120 | pass |');
-    expect(rows[2]).toContain('| no | 0.0040 | > 0.9999 | fail |');
+    expect(rows[0]).toContain('| yes | &gt; 0.9999 | 0.0120 | pass |');
+    expect(rows[2]).toContain('| no | 0.0040 | &gt; 0.9999 | fail |');
     expect(text).toContain('consistent 0.0120');
     expect(text).toContain('ensemble\\_1 (p 0.0040), baseline (p 0.0210), gbm-v3 (p 0.3100)');
   });

@@ -67,7 +67,7 @@ describe('several candidates from the CLI', () => {
     expect(pValueConsistent).toBeLessThanOrEqual(pValueUpper);
     // The 'mean' forecast of a trending series is far worse than every other: out of the set.
     expect(report.candidates!.find((c) => c.name === 'mean')!.inConfidenceSet).toBe(false);
-    expect(long.stdout).toContain('model confidence set');
+    expect(long.stdout).toContain('Model confidence set');
   });
 
   it('gives the same answers from separate NAME=FILE candidates, in any order', () => {

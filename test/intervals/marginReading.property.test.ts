@@ -3,9 +3,9 @@ import { describe, expect, it } from 'vitest';
 import type { LossSeries } from '../../src/aggregation/lossSeries.js';
 import { compareLossSeries } from '../../src/comparison/compareLossSeries.js';
 import { hypothesisFor } from '../../src/decision/hypothesis.js';
+import { AGREEMENTS, POLICIES, type Policy } from '../../src/decision/policy.js';
 import type { Verdict } from '../../src/decision/verdict.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
-import type { Policy } from '../../src/settings/settings.js';
 
 // The interval of the relative change is the set of margins at which the gate does not reject
 // (docs/decisions/0011-intervals-from-the-tests.md). Property: on random loss series, for every
@@ -70,8 +70,8 @@ describe('the relative-change interval shows the decision at any margin', () => 
         fc.integer({ min: 30, max: 120 }),
         fc.double({ min: -0.3, max: 0.4, noNaN: true }),
         fc.constantFrom(0, 0.4),
-        fc.constantFrom<Policy>('no-regression', 'non-inferiority', 'superiority'),
-        fc.constantFrom('both', 'either', 'dm', 'bootstrap'),
+        fc.constantFrom(...POLICIES),
+        fc.constantFrom(...AGREEMENTS),
         fc.constantFrom('ewc', 'bartlett', 'uniform'),
         (seed, n, worse, phi, policy, agreement, variance) => {
           const series = lossSeries(seed, n, worse, phi);

@@ -7,12 +7,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { autocovariances } from '../../src/statistics/autocovariance.js';
-import {
-  type DieboldMarianoOptions,
-  dieboldMariano,
-  type LagRule,
-  type VarianceEstimator,
-} from '../../src/statistics/dieboldMariano.js';
+import { type DieboldMarianoOptions, dieboldMariano } from '../../src/statistics/dieboldMariano.js';
+import type { LagRule } from '../../src/statistics/neweyWestLag.js';
+import type { VarianceEstimator } from '../../src/statistics/varianceEstimator.js';
 
 const value = fc
   .double({ min: -1000, max: 1000, noNaN: true })

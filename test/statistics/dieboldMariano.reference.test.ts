@@ -10,8 +10,8 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { dieboldMariano, type LagRule } from '../../src/statistics/dieboldMariano.js';
-import { neweyWestBandwidth, selectLag } from '../../src/statistics/neweyWestLag.js';
+import { dieboldMariano } from '../../src/statistics/dieboldMariano.js';
+import { type LagRule, neweyWestBandwidth, selectLag } from '../../src/statistics/neweyWestLag.js';
 import { expectClose } from './closeTo.js';
 import { FIXTURES, loadDieboldMarianoReferences } from './referenceFixtures.js';
 

@@ -13,7 +13,7 @@ const design = (n: number) => ({ n, phi: 0.6, innovationCorrelation: 0.5, candid
 describe.each([100, 200])('size at n = %i under equal accuracy', (n) => {
   const result = runStudy(design(n), { replications: 1000, resamples: 999, seed: 20261201 });
   it('the default policy fails at most 6.5% of equally good candidates', () => {
-    const rate = result.rejectionRate['default policy (ewc and bootstrap agree)'];
+    const rate = result.rejectionRate['default policy (ewc-ar1 and bootstrap agree)'];
     console.info(`n=${n} rejection rates`, result.rejectionRate, 'coverage', result.coverage);
     expect(rate).toBeLessThanOrEqual(0.065);
   });
