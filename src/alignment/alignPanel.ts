@@ -49,11 +49,12 @@ export interface AlignHooks {
  *   numbers, else in code-unit order), so the panel does not depend on the order of rows in
  *   the files.
  *
- * The steps, each in its own module: global dictionaries of the key parts (keyDictionaries), key
- * columns of integer ids and one order-preserving code per row (keyLayout, keyCodes), a radix
- * sort and duplicate check per file (sortedKeys), the merge join (mergeJoin), the actuals
- * (actualsJoin, agreedValues), the comparable forecasts (comparableForecasts) and the compaction
- * of ids to the panel's labels (compactKeys). No step builds an object or a string per row.
+ * The steps (docs/design.md, "Alignment"), each in its own module: global dictionaries of the
+ * key parts (keyDictionaries), key columns of integer ids and one order-preserving code per row
+ * (keyLayout, keyCodes), a radix sort and duplicate check per file (sortedKeys), the merge join
+ * (mergeJoin), the actuals (actualsJoin, agreedValues), the comparable forecasts
+ * (comparableForecasts) and the compaction of ids to the panel's labels (compactKeys). No step
+ * builds an object or a string per row.
  */
 export function alignPanel(input: AlignInput, hooks: AlignHooks = {}): AlignedPanel {
   const { baseline, candidate, actuals } = input;
