@@ -31,13 +31,24 @@ function mixedRadix(
   keys: readonly KeyColumns[],
   allocate: (size: number) => KeyCodes,
 ): KeyCodes[] {
+  // Parts with one id add nothing; the others are folded in two at a time, one pass per pair.
+  const used = parts.filter((part) => part.cardinality > 1);
   return keys.map((k) => {
     const codes = allocate(k.size);
-    for (const part of parts) {
-      if (part.cardinality <= 1) continue; // every id is 0
-      const ids = partColumn(k, part.name);
-      const radix = part.cardinality;
-      for (let i = 0; i < k.size; i++) codes[i] = codes[i]! * radix + ids[i]!;
+    for (let p = 0; p < used.length; p += 2) {
+      const a = partColumn(k, used[p]!.name);
+      const radixA = used[p]!.cardinality;
+      const second = used[p + 1];
+      if (second === undefined) {
+        for (let i = 0; i < k.size; i++) codes[i] = codes[i]! * radixA + a[i]!;
+        continue;
+      }
+      const b = partColumn(k, second.name);
+      const radixB = second.cardinality;
+      if (p === 0) for (let i = 0; i < k.size; i++) codes[i] = a[i]! * radixB + b[i]!;
+      else {
+        for (let i = 0; i < k.size; i++) codes[i] = (codes[i]! * radixA + a[i]!) * radixB + b[i]!;
+      }
     }
     return codes;
   });

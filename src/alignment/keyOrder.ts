@@ -34,9 +34,10 @@ export function sortByKey(
   let order = new Int32Array(size);
   for (let i = 0; i < size; i++) order[i] = i;
   if (codes !== null && isAscending(codes)) return { order, sorted: codes };
-  let sorted = codes === null ? null : codes.slice();
+  // The codes are read, never written: the sorted copies go to buffers of their own.
+  let sorted = codes;
   let next = new Int32Array(size);
-  let nextSorted = sorted === null ? null : sorted.slice();
+  let spare: KeyCodes | null = null;
   for (let c = components.length - 1; c >= 0; c--) {
     const { values, cardinality } = components[c]!;
     if (cardinality <= 1 || isAscendingIn(values, order)) continue; // the pass would not move a row
@@ -49,13 +50,16 @@ export function sortByKey(
         next[starts[values[row]!]!++] = row;
       }
     } else {
+      const target: KeyCodes =
+        spare ?? (sorted instanceof Uint32Array ? new Uint32Array(size) : new Float64Array(size));
       for (let i = 0; i < size; i++) {
         const row = order[i]!;
         const at = starts[values[row]!]!++;
         next[at] = row;
-        nextSorted![at] = sorted[i]!;
+        target[at] = sorted[i]!;
       }
-      [sorted, nextSorted] = [nextSorted!, sorted];
+      spare = sorted === codes ? null : sorted;
+      sorted = target;
     }
     [order, next] = [next, order];
   }

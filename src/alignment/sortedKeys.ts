@@ -10,11 +10,10 @@ import {
 } from './keyLayout.js';
 import { sortByKey } from './keyOrder.js';
 
-/** One file's keys in key order: its key columns, their codes (see keyCodes), the sorted rows. */
+/** One file's keys in key order: its key columns, the sorted rows and their codes (see keyCodes). */
 export interface SortedKeys {
   readonly table: ForecastTable;
   readonly keys: KeyColumns;
-  readonly codes: KeyCodes;
   /** Rows in key order; equal keys would be adjacent, in file order. */
   readonly order: Int32Array;
   /** codes[order[i]]: the codes in key order. */
@@ -50,5 +49,5 @@ export function sortKeys(
       );
     }
   }
-  return { table, keys, codes, order: order.order, sorted };
+  return { table, keys, order: order.order, sorted };
 }
