@@ -4,7 +4,7 @@
 // RUNS times each, and prints the medians and their ratio. Usage (via bench/backtestChecks.mjs).
 import { alignPanel } from '../src/alignment/alignPanel.js';
 import { checkBacktest } from '../src/integrity/checkBacktest.js';
-import { parseForecastText } from '../src/reading/tableBuilder.js';
+import { parseForecastText } from '../src/reading/forecastTableReader.js';
 
 const [seriesArg, daysArg, runsArg] = process.argv.slice(2);
 const SERIES = Number(seriesArg ?? 100);

@@ -16916,7 +16916,7 @@ var require_util7 = __commonJS({
     var { kReadyState, kController, kResponse, kBinaryType, kWebSocketURL } = require_symbols5();
     var { states, opcodes } = require_constants5();
     var { ErrorEvent, createFastMessageEvent } = require_events();
-    var { isUtf8 } = __require("node:buffer");
+    var { isUtf8: isUtf82 } = __require("node:buffer");
     var { collectASequenceOfCodePointsFast, removeHTTPWhitespace } = require_data_url();
     function isConnecting(ws) {
       return ws[kReadyState] === states.CONNECTING;
@@ -17056,7 +17056,7 @@ var require_util7 = __commonJS({
     var hasIntl = typeof process.versions.icu === "string";
     var fatalDecoder = hasIntl ? new TextDecoder("utf-8", { fatal: true }) : void 0;
     var utf8Decode = hasIntl ? fatalDecoder.decode.bind(fatalDecoder) : function(buffer) {
-      if (isUtf8(buffer)) {
+      if (isUtf82(buffer)) {
         return buffer.toString("utf-8");
       }
       throw new TypeError("Invalid utf-8 received.");
@@ -18314,9 +18314,9 @@ var require_eventsource_stream = __commonJS({
     var buffer = __require("node:buffer");
     var { Transform: Transform2 } = __require("node:stream");
     var { isASCIINumber, isValidLastEventId } = require_util8();
-    var BOM = [239, 187, 191];
-    var LF = 10;
-    var CR = 13;
+    var BOM2 = [239, 187, 191];
+    var LF2 = 10;
+    var CR2 = 13;
     var COLON = 58;
     var SPACE = 32;
     var defaultMaxEventSize = buffer.kStringMaxLength;
@@ -18430,7 +18430,7 @@ var require_eventsource_stream = __commonJS({
           callback();
           return;
         }
-        if (this.maxEventSize > 0 && this.chunks.length >= this.maxBufferedChunks && chunk[0] !== LF && chunk[0] !== CR) {
+        if (this.maxEventSize > 0 && this.chunks.length >= this.maxBufferedChunks && chunk[0] !== LF2 && chunk[0] !== CR2) {
           callback(createMaxEventSizeExceededError());
           return;
         }
@@ -18445,15 +18445,15 @@ var require_eventsource_stream = __commonJS({
           const byte = this.currentByte();
           if (this.eventEndCheck) {
             if (this.crlfCheck) {
-              if (byte === LF) {
+              if (byte === LF2) {
                 this.crlfCheck = false;
                 this.consumeCurrentByte();
                 continue;
               }
               this.crlfCheck = false;
             }
-            if (byte === LF || byte === CR) {
-              if (byte === CR) {
+            if (byte === LF2 || byte === CR2) {
+              if (byte === CR2) {
                 this.crlfCheck = true;
               }
               this.consumeCurrentByte();
@@ -18466,8 +18466,8 @@ var require_eventsource_stream = __commonJS({
             this.eventEndCheck = false;
             continue;
           }
-          if (byte === LF || byte === CR) {
-            if (byte === CR) {
+          if (byte === LF2 || byte === CR2) {
+            if (byte === CR2) {
               this.crlfCheck = true;
             }
             try {
@@ -18686,20 +18686,20 @@ ${value}`;
         const second = this.peekBufferedByte(1);
         const third = this.peekBufferedByte(2);
         if (second === void 0) {
-          if (first === BOM[0]) {
+          if (first === BOM2[0]) {
             return true;
           }
           this.checkBOM = false;
           return true;
         }
         if (third === void 0) {
-          if (first === BOM[0] && second === BOM[1]) {
+          if (first === BOM2[0] && second === BOM2[1]) {
             return true;
           }
           this.checkBOM = false;
           return false;
         }
-        if (first === BOM[0] && second === BOM[1] && third === BOM[2]) {
+        if (first === BOM2[0] && second === BOM2[1] && third === BOM2[2]) {
           this.discardLeadingBytes(3);
         }
         this.checkBOM = false;
@@ -33575,6 +33575,116 @@ function parseHorizon(text2) {
   const value = parseDecimal(text2);
   return Number.isInteger(value) && value >= 1 && value <= 2147483647 ? value : 0;
 }
+var ONE = new Float64Array(1);
+function storeDecimal(bytes, start, end, mark, out, at) {
+  let i = start;
+  if (i >= end) return false;
+  let c = bytes[i];
+  const negative = c === 45;
+  if (negative || c === 43) i++;
+  let mantissa = 0;
+  let significant2 = 0;
+  let digits = 0;
+  let exponent = 0;
+  let fraction = false;
+  for (; i < end; i++) {
+    c = bytes[i];
+    const digit = c - 48;
+    if (digit >= 0 && digit <= 9) {
+      digits++;
+      if (fraction) exponent--;
+      if (significant2 === 0 && digit === 0) continue;
+      if (significant2 >= 15) {
+        if (mantissa > 900719925474099) return false;
+        const next = mantissa * 10 + digit;
+        if (next >= TWO_53) return false;
+        mantissa = next;
+      } else mantissa = mantissa * 10 + digit;
+      significant2++;
+    } else if (c === mark && !fraction) {
+      fraction = true;
+    } else break;
+  }
+  if (digits === 0) return false;
+  if (i < end) {
+    if ((c | 32) !== 101) return false;
+    i++;
+    if (i >= end) return false;
+    c = bytes[i];
+    const negativeExponent = c === 45;
+    if (negativeExponent || c === 43) i++;
+    if (i >= end) return false;
+    let written = 0;
+    for (; i < end; i++) {
+      const digit = bytes[i] - 48;
+      if (digit < 0 || digit > 9) return false;
+      if (written < 1e3) written = written * 10 + digit;
+    }
+    exponent += negativeExponent ? -written : written;
+  }
+  if (mantissa === 0) {
+    out[at] = negative ? -0 : 0;
+    return true;
+  }
+  let value;
+  if (exponent === 0) value = mantissa;
+  else if (exponent > 0 && exponent <= 22) value = mantissa * EXACT_POWERS[exponent];
+  else if (exponent < 0 && exponent >= -22) value = mantissa / EXACT_POWERS[-exponent];
+  else return false;
+  out[at] = negative ? -value : value;
+  return true;
+}
+function storeDecimalFromBytes(bytes, start, end, comma, out, at) {
+  if (storeDecimal(bytes, start, end, comma ? 44 : 46, out, at)) return true;
+  const text2 = bytes.toString("utf8", start, end);
+  const value = comma ? parseDecimalComma(text2) : parseDecimal(text2);
+  out[at] = value;
+  return !Number.isNaN(value);
+}
+function parseDecimalComma(text2) {
+  if (text2.includes(".")) return Number.NaN;
+  return parseDecimal(text2.replace(",", "."));
+}
+function horizonFromBytes(bytes, start, end) {
+  const n = end - start;
+  if (n > 0 && n <= 9) {
+    let value = 0;
+    let i = start;
+    for (; i < end; i++) {
+      const digit = bytes[i] - 48;
+      if (digit < 0 || digit > 9) break;
+      value = value * 10 + digit;
+    }
+    if (i === end) return value >= 1 ? value : 0;
+  }
+  return parseHorizon(bytes.toString("utf8", start, end));
+}
+var TWO_53 = 9007199254740992;
+var EXACT_POWERS = [
+  1,
+  10,
+  100,
+  1e3,
+  1e4,
+  1e5,
+  1e6,
+  1e7,
+  1e8,
+  1e9,
+  1e10,
+  1e11,
+  1e12,
+  1e13,
+  1e14,
+  1e15,
+  1e16,
+  1e17,
+  1e18,
+  1e19,
+  1e20,
+  1e21,
+  1e22
+];
 
 // src/alignment/timeOrder.ts
 var DATE_PREFIX = /^\d{4}-\d{2}-\d{2}/;
@@ -33868,7 +33978,8 @@ function modelConfidenceSet(input) {
   const pValues = new Array(m).fill(1);
   let running = 0;
   while (alive.length > 1) {
-    const step = statistic === "range" ? rangeStep(alive, means, deviations, resamples) : maxStep(alive, means, deviations, resamples);
+    const input2 = { alive, means, deviations, resamples };
+    const step = statistic === "range" ? rangeStep(input2) : maxStep(input2);
     const pValue2 = (1 + step.exceedances) / (resamples + 1);
     running = Math.max(running, pValue2);
     order.push(step.eliminate);
@@ -33891,7 +34002,7 @@ function modelConfidenceSet(input) {
 function reaches(resampled, observed) {
   return resampled >= observed - Math.abs(observed) * 1e-10;
 }
-function rangeStep(alive, means, deviations, resamples) {
+function rangeStep({ alive, means, deviations, resamples }) {
   const size = alive.length;
   const pairs = [];
   const worst = new Array(size).fill(Number.NEGATIVE_INFINITY);
@@ -33900,12 +34011,7 @@ function rangeStep(alive, means, deviations, resamples) {
     for (let c = a + 1; c < size; c++) {
       const zi = deviations[alive[a]];
       const zj = deviations[alive[c]];
-      let sum = 0;
-      for (let b = 0; b < resamples; b++) {
-        const x = zi[b] - zj[b];
-        sum += x * x;
-      }
-      const variance = sum / resamples;
+      const variance = meanSquaredDifference(zi, zj, resamples);
       const t = variance > 0 ? (means[alive[a]] - means[alive[c]]) / Math.sqrt(variance) : 0;
       if (t > worst[a]) worst[a] = t;
       if (-t > worst[c]) worst[c] = -t;
@@ -33924,7 +34030,7 @@ function rangeStep(alive, means, deviations, resamples) {
   }
   return { eliminate: alive[argmax(worst)], exceedances };
 }
-function maxStep(alive, means, deviations, resamples) {
+function maxStep({ alive, means, deviations, resamples }) {
   const size = alive.length;
   const average = new Float64Array(resamples);
   for (const i of alive) {
@@ -33939,12 +34045,7 @@ function maxStep(alive, means, deviations, resamples) {
   const t = new Array(size);
   for (let a = 0; a < size; a++) {
     const z = deviations[alive[a]];
-    let sum = 0;
-    for (let b = 0; b < resamples; b++) {
-      const x = z[b] - average[b];
-      sum += x * x;
-    }
-    const variance = sum / resamples;
+    const variance = meanSquaredDifference(z, average, resamples);
     scales[a] = variance > 0 ? 1 / Math.sqrt(variance) : 0;
     t[a] = (means[alive[a]] - meanOfMeans) * scales[a];
   }
@@ -33959,6 +34060,14 @@ function maxStep(alive, means, deviations, resamples) {
     if (reaches(max, observed)) exceedances++;
   }
   return { eliminate: alive[argmax(t)], exceedances };
+}
+function meanSquaredDifference(z, w, resamples) {
+  let sum = 0;
+  for (let b = 0; b < resamples; b++) {
+    const x = z[b] - w[b];
+    sum += x * x;
+  }
+  return sum / resamples;
 }
 function argmax(values) {
   let best = 0;
@@ -34355,6 +34464,11 @@ function shellWord(text2) {
   return `'${text2.replace(/'/g, `'\\''`)}'`;
 }
 
+// src/statistics/smallSampleValue.ts
+function smallSampleValue(result, which2 = "pValue") {
+  return result.smallSample === null ? result[which2] : result.smallSample[which2];
+}
+
 // src/report/decidingReason.ts
 var RANK = { pass: 0, warn: 1, fail: 2 };
 function decidingReasons(report) {
@@ -34573,21 +34687,13 @@ function detailsTable(report, c) {
       dm.smallSample === null ? significant(dm.statistic) : `${significant(dm.smallSample.statistic)} (Harvey\u2013Leybourne\u2013Newbold; raw ${significant(dm.statistic)})`,
       bs.standardError === null ? "n/a" : `standard error of d\u0304 ${significant(bs.standardError)}`
     ],
-    [
-      "p, one-sided: candidate worse",
-      pValue(dm.smallSample?.pValue ?? dm.pValue),
-      pValue(bs.pValue)
-    ],
+    ["p, one-sided: candidate worse", pValue(smallSampleValue(dm)), pValue(bs.pValue)],
     [
       "p, in the policy\u2019s direction (decides)",
       pValue(dm.decisionPValue),
       pValue(bs.decisionPValue)
     ],
-    [
-      "p, two-sided",
-      pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
-      pValue(bs.pValueTwoSided)
-    ],
+    ["p, two-sided", pValue(smallSampleValue(dm, "pValueTwoSided")), pValue(bs.pValueTwoSided)],
     ["interval for E[L_candidate \u2212 L_baseline]", interval(dm.interval), interval(bs.interval)],
     [
       "rejects H0 at \u03B1",
@@ -34692,7 +34798,7 @@ function pathSection(report) {
         significant(c.meanBaselineLoss),
         significant(c.meanCandidateLoss),
         percent(c.relativeDifference),
-        pValue(c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue)
+        pValue(smallSampleValue(c.dieboldMariano))
       ])
     )
   };
@@ -41992,22 +42098,82 @@ function orderLossSeries(table2, timeFormat = "auto") {
   };
 }
 
-// src/reading/tokenizer.ts
-var Tokenizer = class {
+// src/reading/utf8.ts
+function asBytes(bytes) {
+  return Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes.buffer, bytes.byteOffset, bytes.length);
+}
+function utf16Length(bytes, start, end) {
+  let units = 0;
+  for (let i = start; i < end; i++) {
+    const b = bytes[i];
+    if ((b & 192) !== 128) units += b >= 240 ? 2 : 1;
+  }
+  return units;
+}
+function decodeUtf8(bytes, start, end) {
+  return bytes.toString("utf8", start, completeEnd(bytes, start, end));
+}
+function completeEnd(bytes, start, end) {
+  let k = end;
+  while (k > start && end - k < 3 && (bytes[k - 1] & 192) === 128) k--;
+  if (k === start) return end;
+  const lead = bytes[k - 1];
+  const length = lead >= 240 ? 4 : lead >= 224 ? 3 : lead >= 192 ? 2 : 1;
+  return end - (k - 1) < length ? k - 1 : end;
+}
+var Utf8Encoder = class {
+  pending = "";
+  encode(text2) {
+    let whole = this.pending.length > 0 ? this.pending + text2 : text2;
+    this.pending = "";
+    const last = whole.charCodeAt(whole.length - 1);
+    if (last >= 55296 && last <= 56319) {
+      this.pending = whole.slice(-1);
+      whole = whole.slice(0, -1);
+    }
+    return Buffer.from(whole, "utf8");
+  }
+  /** Bytes of a half pair left at the end (as U+FFFD, what UTF-8 can hold of it), or none. */
+  flush() {
+    const rest = this.pending;
+    this.pending = "";
+    return Buffer.from(rest, "utf8");
+  }
+};
+
+// src/reading/byteTokenizer.ts
+var DEFAULT_LINE_LIMIT = 1 << 20;
+var QUOTE = 34;
+var LF = 10;
+var CR = 13;
+var EMPTY = Buffer.alloc(0);
+var LINE_BREAK = Buffer.from("\n");
+var ByteTokenizer = class {
   /** Empty lines skipped so far. */
   blankLines = 0;
   delimiter;
-  delimiterCode;
   sink;
   file;
-  fields = [];
-  carry = "";
-  linesDone = 0;
-  started = false;
   lineLimit;
+  starts = new Int32Array(64);
+  ends = new Int32Array(64);
+  /** The unfinished tail of the input so far: `carry[0, carryLength)`. */
+  carry = EMPTY;
+  carryLength = 0;
+  /** Where the carry and the next chunk are joined. */
+  joined = EMPTY;
+  /** Fields of a record with quotes, unquoted. */
+  scratch = EMPTY;
+  linesDone = 0;
+  /** Bytes pushed so far, and the offset in the input of the buffer being read. */
+  pushed = 0;
+  base = 0;
+  /** End of the last record handed over, in the buffer being read. */
+  recordEnd = 0;
+  started = false;
+  encoder = new Utf8Encoder();
   constructor(delimiter3, sink, file, lineLimit = DEFAULT_LINE_LIMIT) {
-    this.delimiter = delimiter3;
-    this.delimiterCode = delimiter3.charCodeAt(0);
+    this.delimiter = delimiter3.charCodeAt(0);
     this.sink = sink;
     this.file = file;
     this.lineLimit = lineLimit;
@@ -42016,126 +42182,176 @@ var Tokenizer = class {
   get lines() {
     return this.linesDone;
   }
+  /** Bytes of the input up to the end of the last record handed over (exact inside the sink). */
+  get bytesDone() {
+    return this.base + this.recordEnd;
+  }
   push(chunk) {
-    let buf = this.carry.length > 0 ? this.carry + chunk : chunk;
-    this.carry = "";
+    const bytes = typeof chunk === "string" ? this.encoder.encode(chunk) : asBytes(chunk);
+    let buf = bytes;
+    this.base = this.pushed - this.carryLength;
+    this.pushed += bytes.length;
+    this.recordEnd = 0;
+    if (this.carryLength > 0) {
+      const n = this.carryLength + bytes.length;
+      if (this.joined.length < n) {
+        this.joined = Buffer.allocUnsafe(Math.max(n, 2 * this.joined.length));
+      }
+      this.carry.copy(this.joined, 0, 0, this.carryLength);
+      this.joined.set(bytes, this.carryLength);
+      buf = this.joined.subarray(0, n);
+      this.carryLength = 0;
+    }
+    let pos = 0;
     if (!this.started) {
       if (buf.length === 0) return;
+      if (buf.length < 3 && isBomPrefix(buf)) {
+        this.keep(buf, 0);
+        return;
+      }
       this.started = true;
-      if (buf.charCodeAt(0) === 65279) buf = buf.slice(1);
+      if (buf[0] === 239 && buf[1] === 187 && buf[2] === 191) pos = 3;
     }
-    const n = buf.length;
-    const delimiter3 = this.delimiter;
-    const fields = this.fields;
-    const sink = this.sink;
-    let pos = 0;
-    let nextQuote = buf.indexOf('"');
-    let nextDelim = -2;
-    while (pos < n) {
-      const nl = buf.indexOf("\n", pos);
-      if (nextQuote !== -1 && nextQuote < pos) nextQuote = buf.indexOf('"', pos);
-      if (nextQuote !== -1 && (nl === -1 || nextQuote < nl)) {
-        const end = this.slowRecord(buf, pos);
-        if (end < 0) break;
-        pos = end;
-        continue;
+    pos = this.records(buf, pos);
+    if (pos < buf.length) {
+      const n = buf.length;
+      if (n - pos > this.lineLimit && utf16Length(buf, pos, n) > this.lineLimit) {
+        this.tooLong(buf, pos, this.linesDone + 1);
       }
-      if (nl === -1) break;
-      if (nl - pos > this.lineLimit) this.tooLong(buf, pos, this.linesDone + 1);
-      let lineEnd = nl;
-      if (lineEnd > pos && buf.charCodeAt(lineEnd - 1) === 13) lineEnd--;
-      this.linesDone++;
-      if (lineEnd === pos) {
-        this.blankLines++;
-        pos = nl + 1;
-        continue;
-      }
-      let count = 0;
-      let start = pos;
-      for (; ; ) {
-        if (nextDelim !== -1 && nextDelim < start) nextDelim = buf.indexOf(delimiter3, start);
-        if (nextDelim === -1 || nextDelim >= lineEnd) {
-          fields[count++] = buf.slice(start, lineEnd);
-          break;
-        }
-        fields[count++] = buf.slice(start, nextDelim);
-        start = nextDelim + 1;
-      }
-      sink(fields, count, this.linesDone);
-      pos = nl + 1;
+      this.keep(buf, pos);
     }
-    if (pos < n) {
-      if (n - pos > this.lineLimit) this.tooLong(buf, pos, this.linesDone + 1);
-      this.carry = buf.slice(pos);
-    }
-  }
-  tooLong(buf, pos, line2) {
-    throw new InputError(
-      `the line is longer than the limit of ${this.lineLimit} characters (raise it with --line-limit if the file is right; a file without line breaks, or with an unclosed quote, also ends here)`,
-      { file: this.file, line: line2, value: buf.slice(pos, pos + 200) }
-    );
-  }
-  /** How the delimiter is named in messages. */
-  get delimiterName() {
-    return delimiterLabel(this.delimiter);
   }
   /** Flushes the last record (which need not end with a line break). */
   end() {
-    if (this.carry.length === 0) return;
+    const rest = this.encoder.flush();
+    if (rest.length > 0) this.push(rest);
+    if (this.carryLength === 0) return;
     const startLine = this.linesDone + 1;
-    this.push("\n");
-    if (this.carry.length > 0) {
+    this.push(LINE_BREAK);
+    if (this.carryLength > 0) {
       throw new InputError("a quoted field is not closed before the end of the file", {
         file: this.file,
         line: startLine,
-        value: truncateValue(this.carry)
+        value: echo(decodeUtf8(this.carry, 0, this.carryLength), 60)
       });
     }
   }
+  /** Hands over the complete records in `buf` from `pos`; returns where the unfinished tail starts. */
+  records(buf, pos) {
+    const n = buf.length;
+    const d = this.delimiter;
+    const limit = this.lineLimit;
+    let starts = this.starts;
+    let ends = this.ends;
+    while (pos < n) {
+      let count = 0;
+      let start = pos;
+      let j = pos;
+      let quoted = false;
+      for (; j < n; j++) {
+        const c = buf[j];
+        if (c === LF) break;
+        if (c === QUOTE) {
+          quoted = true;
+          break;
+        }
+        if (c === d) {
+          if (count + 1 >= starts.length) {
+            this.growFields();
+            starts = this.starts;
+            ends = this.ends;
+          }
+          starts[count] = start;
+          ends[count] = j;
+          count++;
+          start = j + 1;
+        }
+      }
+      if (quoted) {
+        const end = this.slowRecord(buf, pos);
+        if (end < 0) break;
+        pos = end;
+        starts = this.starts;
+        ends = this.ends;
+        continue;
+      }
+      if (j === n) break;
+      if (j - pos > limit && utf16Length(buf, pos, j) > limit) {
+        this.tooLong(buf, pos, this.linesDone + 1);
+      }
+      let lineEnd = j;
+      if (lineEnd > pos && buf[lineEnd - 1] === CR) lineEnd--;
+      this.linesDone++;
+      if (lineEnd === pos) {
+        this.blankLines++;
+        pos = j + 1;
+        continue;
+      }
+      starts[count] = start;
+      ends[count] = lineEnd;
+      count++;
+      this.recordEnd = j + 1;
+      this.sink(buf, starts, ends, count, this.linesDone);
+      pos = j + 1;
+    }
+    return pos;
+  }
   /**
-   * Parses one record that contains a quote, char by char. Returns the position after its line
-   * break, or −1 when the buffer ends first (the caller keeps the tail for the next chunk).
+   * Reads one record that contains a quote, byte by byte, into the scratch buffer with the quotes
+   * removed. Returns the position after its line break, or −1 when the buffer ends first (the
+   * caller keeps the tail for the next chunk).
    */
   slowRecord(buf, pos) {
     const n = buf.length;
-    const d = this.delimiterCode;
-    const fields = this.fields;
+    const d = this.delimiter;
+    if (this.scratch.length < n - pos) {
+      this.scratch = Buffer.allocUnsafe(Math.max(n - pos, 2 * this.scratch.length, 1024));
+    }
+    const out = this.scratch;
+    let written = 0;
     let count = 0;
     let i = pos;
     let newlines = 0;
     for (; ; ) {
-      if (i < n && buf.charCodeAt(i) === 34) {
+      if (count + 1 >= this.starts.length) this.growFields();
+      const starts = this.starts;
+      const ends = this.ends;
+      if (i < n && buf[i] === QUOTE) {
         i++;
         const fieldStart = i;
-        let value = "";
-        let segment = i;
+        const outStart = written;
         for (; ; ) {
-          const q = buf.indexOf('"', i);
-          if (q === -1 || q + 1 >= n) return -1;
-          if (buf.charCodeAt(q + 1) === 34) {
-            value += buf.slice(segment, q + 1);
+          let q = i;
+          for (; q < n; q++) {
+            const c2 = buf[q];
+            if (c2 === QUOTE) break;
+            out[written++] = c2;
+          }
+          if (q + 1 >= n) return -1;
+          if (buf[q + 1] === QUOTE) {
+            out[written++] = QUOTE;
             i = q + 2;
-            segment = i;
             continue;
           }
-          value += buf.slice(segment, q);
-          newlines += countNewlines(buf, fieldStart, q);
+          newlines += countLineFeeds(buf, fieldStart, q);
           i = q + 1;
           break;
         }
-        fields[count++] = value;
-        const c = buf.charCodeAt(i);
+        starts[count] = outStart;
+        ends[count] = written;
+        count++;
+        const c = buf[i];
         if (c === d) {
           i++;
           continue;
         }
-        if (c === 10) {
+        if (c === LF) {
           i++;
           break;
         }
-        if (c === 13) {
+        if (c === CR) {
           if (i + 1 >= n) return -1;
-          if (buf.charCodeAt(i + 1) === 10) {
+          if (buf[i + 1] === LF) {
             i += 2;
             break;
           }
@@ -42145,47 +42361,112 @@ var Tokenizer = class {
           {
             file: this.file,
             line: this.linesDone + 1 + newlines,
-            value: truncateValue(buf.slice(pos, Math.min(n, i + 20)))
+            value: echo(textAround(buf, pos, i, 20), 60)
           }
         );
       }
       let j = i;
       while (j < n) {
-        const c = buf.charCodeAt(j);
-        if (c === d || c === 10) break;
+        const c = buf[j];
+        if (c === d || c === LF) break;
         j++;
       }
       if (j >= n) return -1;
-      if (buf.charCodeAt(j) === d) {
-        fields[count++] = buf.slice(i, j);
-        i = j + 1;
-        continue;
-      }
-      const end = j > i && buf.charCodeAt(j - 1) === 13 ? j - 1 : j;
-      fields[count++] = buf.slice(i, end);
+      const end = buf[j] === d ? j : j > i && buf[j - 1] === CR ? j - 1 : j;
+      starts[count] = written;
+      for (let k = i; k < end; k++) out[written++] = buf[k];
+      ends[count] = written;
+      count++;
+      const last = buf[j] !== d;
       i = j + 1;
-      break;
+      if (last) break;
     }
     const line2 = this.linesDone + 1;
-    if (i - pos > this.lineLimit) this.tooLong(buf, pos, line2);
+    if (i - pos > this.lineLimit && utf16Length(buf, pos, i) > this.lineLimit) {
+      this.tooLong(buf, pos, line2);
+    }
     this.linesDone += 1 + newlines;
-    this.sink(fields, count, line2);
+    this.recordEnd = i;
+    this.sink(out, this.starts, this.ends, count, line2);
     return i;
   }
+  tooLong(buf, pos, line2) {
+    throw new InputError(
+      `the line is longer than the limit of ${this.lineLimit} characters (raise it with --line-limit if the file is right; a file without line breaks, or with an unclosed quote, also ends here)`,
+      {
+        file: this.file,
+        line: line2,
+        value: decodeUtf8(buf, pos, Math.min(buf.length, pos + 800)).slice(0, 200)
+      }
+    );
+  }
+  /** Copies `buf[pos, end)` to the carry. */
+  keep(buf, pos) {
+    const length = buf.length - pos;
+    if (this.carry.length < length) {
+      this.carry = Buffer.allocUnsafe(Math.max(length, 2 * this.carry.length, 256));
+    }
+    buf.copy(this.carry, 0, pos);
+    this.carryLength = length;
+  }
+  growFields() {
+    const starts = new Int32Array(this.starts.length * 2);
+    const ends = new Int32Array(this.ends.length * 2);
+    starts.set(this.starts);
+    ends.set(this.ends);
+    this.starts = starts;
+    this.ends = ends;
+  }
 };
-function countNewlines(text2, from, to) {
+function textAround(buf, from, to, units) {
+  const head = decodeUtf8(buf, from, to);
+  return decodeUtf8(buf, from, Math.min(buf.length, to + 4 * units)).slice(0, head.length + units);
+}
+function isBomPrefix(buf) {
+  return buf[0] === 239 && (buf.length < 2 || buf[1] === 187);
+}
+function countLineFeeds(bytes, from, to) {
   let count = 0;
-  let i = text2.indexOf("\n", from);
+  let i = bytes.indexOf(LF, from);
   while (i !== -1 && i < to) {
     count++;
-    i = text2.indexOf("\n", i + 1);
+    i = bytes.indexOf(LF, i + 1);
   }
   return count;
 }
-function truncateValue(text2) {
-  return echo(text2, 60);
-}
-var DEFAULT_LINE_LIMIT = 1 << 20;
+
+// src/reading/tokenizer.ts
+var Tokenizer = class {
+  bytes;
+  fields = [];
+  constructor(delimiter3, sink, file, lineLimit = DEFAULT_LINE_LIMIT) {
+    const fields = this.fields;
+    this.bytes = new ByteTokenizer(
+      delimiter3,
+      (bytes, starts, ends, count, line2) => {
+        for (let k = 0; k < count; k++) fields[k] = bytes.toString("utf8", starts[k], ends[k]);
+        sink(fields, count, line2);
+      },
+      file,
+      lineLimit
+    );
+  }
+  /** Empty lines skipped so far. */
+  get blankLines() {
+    return this.bytes.blankLines;
+  }
+  /** Physical lines consumed so far (complete records and blank lines). */
+  get lines() {
+    return this.bytes.lines;
+  }
+  push(chunk) {
+    this.bytes.push(chunk);
+  }
+  /** Flushes the last record (which need not end with a line break). */
+  end() {
+    this.bytes.end();
+  }
+};
 
 // src/reading/foldLayoutReader.ts
 var FOLD_NAMES = ["fold", "path"];
@@ -42270,11 +42551,980 @@ var FoldLayoutReader = class {
   }
 };
 
-// src/reading/streamParquetFile.ts
+// src/reading/formatDetection.ts
+function formatFromPath(path8) {
+  const lower = path8.toLowerCase();
+  if (lower.endsWith(".parquet") || lower.endsWith(".pq"))
+    return { format: "parquet", gzip: false };
+  const gzip = lower.endsWith(".gz");
+  const base = gzip ? lower.slice(0, -3) : lower;
+  return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
+}
+function textDialect(file, options) {
+  const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
+  const decimalComma = options.decimal === ",";
+  if (decimalComma && delimiter3 === ",") {
+    throw new InputError(
+      'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
+      { file }
+    );
+  }
+  return { delimiter: delimiter3, decimalComma };
+}
+
+// src/reading/streamTextFile.ts
+import { isUtf8 } from "node:buffer";
 import { createHash } from "node:crypto";
 import { createReadStream } from "node:fs";
-import { open as open2, stat as stat2 } from "node:fs/promises";
+import { stat as stat2 } from "node:fs/promises";
 import { pipeline } from "node:stream/promises";
+import { createGunzip } from "node:zlib";
+var CHUNK_BYTES = 1 << 20;
+async function streamTextFile(path8, gzip, sink, onProgress) {
+  let totalBytes;
+  try {
+    const info2 = await stat2(path8);
+    if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
+    totalBytes = info2.size;
+  } catch (error2) {
+    throw asInputError(error2, path8);
+  }
+  const hash = createHash("sha256");
+  let bytesRead = 0;
+  const tap = async function* (source) {
+    for await (const chunk of source) {
+      hash.update(chunk);
+      bytesRead += chunk.length;
+      onProgress?.(bytesRead, totalBytes);
+      yield chunk;
+    }
+  };
+  let newlines = 0;
+  const check = new Utf8Check();
+  const bom = new LeadingBom();
+  const consume = async (source) => {
+    for await (const chunk of source) {
+      const nul = chunk.indexOf(0);
+      if (nul >= 0) throw notText(chunk, nul, newlines, path8, "a NUL byte");
+      if (!check.valid(chunk)) {
+        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path8, "bytes that are not UTF-8");
+      }
+      newlines += countByte(chunk, 10);
+      const text2 = bom.strip(chunk);
+      if (text2.length > 0) sink.push(text2);
+    }
+    if (check.inCharacter) {
+      throw new InputError(
+        `the file is not valid UTF-8 text: it ends inside a multi-byte character (line ${newlines + 1})`,
+        { file: path8, line: newlines + 1 }
+      );
+    }
+    const rest = bom.strip(Buffer.alloc(0), true);
+    if (rest.length > 0) sink.push(rest);
+  };
+  try {
+    const raw = createReadStream(path8, { highWaterMark: CHUNK_BYTES });
+    if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
+    else await pipeline(raw, tap, consume);
+  } catch (error2) {
+    throw asInputError(error2, path8);
+  }
+  return `sha256:${hash.digest("hex")}`;
+}
+var Utf8Check = class {
+  pending = Buffer.alloc(0);
+  /** True while the bytes so far end inside a character. */
+  get inCharacter() {
+    return this.pending.length > 0;
+  }
+  valid(chunk) {
+    let body = chunk;
+    if (this.pending.length > 0) {
+      const need = sequenceLength(this.pending[0]) - this.pending.length;
+      const joined = Buffer.concat([this.pending, chunk.subarray(0, need)]);
+      if (joined.length < need + this.pending.length) {
+        this.pending = joined;
+        return validPrefix(joined);
+      }
+      if (!isUtf8(joined)) return false;
+      this.pending = Buffer.alloc(0);
+      body = chunk.subarray(need);
+    }
+    const cut = cutCharacter(body);
+    if (!isUtf8(body.subarray(0, cut))) return false;
+    if (cut < body.length) {
+      this.pending = Buffer.from(body.subarray(cut));
+      return validPrefix(this.pending);
+    }
+    return true;
+  }
+};
+function sequenceLength(lead) {
+  return lead >= 240 && lead <= 244 ? 4 : lead >= 224 ? lead <= 239 ? 3 : 1 : lead >= 194 ? 2 : 1;
+}
+function cutCharacter(bytes) {
+  const n = bytes.length;
+  let k = n;
+  while (k > 0 && n - k < 3 && (bytes[k - 1] & 192) === 128) k--;
+  if (k === 0) return n;
+  const length = sequenceLength(bytes[k - 1]);
+  return length > 1 && n - (k - 1) < length ? k - 1 : n;
+}
+function validPrefix(bytes) {
+  if (bytes.length === 1) return true;
+  const padded = Buffer.alloc(sequenceLength(bytes[0]), 128);
+  bytes.copy(padded);
+  return isUtf8(padded);
+}
+var LeadingBom = class {
+  head = Buffer.alloc(0);
+  strip(chunk, last = false) {
+    if (this.head === null) return chunk;
+    const bytes = this.head.length > 0 ? Buffer.concat([this.head, chunk]) : chunk;
+    if (!last && bytes.length < 3 && BOM.subarray(0, bytes.length).equals(bytes)) {
+      this.head = bytes;
+      return Buffer.alloc(0);
+    }
+    this.head = null;
+    return bytes.subarray(0, 3).equals(BOM) ? bytes.subarray(3) : bytes;
+  }
+};
+var BOM = Buffer.from([239, 187, 191]);
+function notText(chunk, at, before, path8, what) {
+  const line2 = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
+  const b0 = chunk[0];
+  const b1 = chunk[1];
+  const utf16 = before === 0 && (b0 === 255 && b1 === 254 || b0 === 254 && b1 === 255) || what === "a NUL byte";
+  const byte = chunk[at];
+  const hint = utf16 ? "it looks like UTF-16: convert it, e.g. iconv -f UTF-16 -t UTF-8" : byte !== void 0 && byte >= 128 ? `byte 0x${byte.toString(16).toUpperCase()} suggests Latin-1 or Windows-1252: convert it, e.g. iconv -f WINDOWS-1252 -t UTF-8` : "convert it to UTF-8";
+  return new InputError(`the file is not UTF-8 text: line ${line2} has ${what} (${hint})`, {
+    file: path8,
+    line: line2,
+    value: chunk.subarray(Math.max(0, at - 20), at + 20).toString("latin1").replace(/[^\x20-\x7e]/g, "?")
+  });
+}
+function firstInvalidUtf8(bytes) {
+  let i = 0;
+  const n = bytes.length;
+  while (i < 3 && i < n && (bytes[i] & 192) === 128) i++;
+  while (i < n) {
+    const b = bytes[i];
+    if (b < 128) {
+      i++;
+      continue;
+    }
+    const length = b >= 194 && b <= 223 ? 2 : b >= 224 && b <= 239 ? 3 : b >= 240 && b <= 244 ? 4 : 0;
+    if (length === 0) return i;
+    if (i + length > n) return i;
+    for (let k = 1; k < length; k++) if ((bytes[i + k] & 192) !== 128) return i;
+    i += length;
+  }
+  return n;
+}
+function countByte(bytes, byte) {
+  let count = 0;
+  let i = bytes.indexOf(byte);
+  while (i !== -1) {
+    count++;
+    i = bytes.indexOf(byte, i + 1);
+  }
+  return count;
+}
+function asInputError(error2, path8) {
+  if (error2 instanceof InputError) return error2;
+  const code2 = error2?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path8 });
+  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path8 });
+  if (typeof code2 === "string" && code2.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error2.message})`, { file: path8 });
+  }
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`cannot read the file: ${message}`, { file: path8 });
+}
+
+// src/reading/readFoldLayout.ts
+async function readFoldLayout(path8, format) {
+  const implied = formatFromPath(path8);
+  const chosen = format ?? implied.format;
+  if (chosen === "parquet") {
+    throw new InputError("a fold layout file is read as CSV or TSV", { file: path8 });
+  }
+  const reader = new FoldLayoutReader(path8, chosen);
+  await streamTextFile(path8, implied.gzip, reader);
+  return reader.finish();
+}
+
+// src/reading/columnMapping.ts
+var COLUMN_ROLES = [
+  "series",
+  "timestamp",
+  "horizon",
+  "origin",
+  "path",
+  "actual",
+  "prediction",
+  "weight",
+  "quantile"
+];
+var DEFAULT_COLUMNS = {
+  series: "series",
+  timestamp: "timestamp",
+  horizon: "horizon",
+  origin: "origin",
+  path: "path",
+  actual: "actual",
+  prediction: "prediction",
+  weight: "weight",
+  quantile: "q"
+};
+function resolveColumns(mapping = {}) {
+  const resolved = { ...DEFAULT_COLUMNS };
+  for (const role of COLUMN_ROLES) {
+    const name = mapping[role];
+    if (name !== void 0) resolved[role] = name;
+  }
+  return resolved;
+}
+function parseColumnMapping(text2, source = "--columns") {
+  const mapping = {};
+  if (text2.trim() === "") return mapping;
+  for (const rawPair of text2.split(",")) {
+    const pair = rawPair.trim();
+    const eq = pair.indexOf("=");
+    if (eq < 0) {
+      throw new InputError(
+        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
+        { file: source, value: pair }
+      );
+    }
+    const role = pair.slice(0, eq).trim();
+    const name = pair.slice(eq + 1).trim();
+    if (!isRole(role)) {
+      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (name === "") {
+      throw new InputError(`the column name for role "${role}" is empty`, {
+        file: source,
+        value: pair
+      });
+    }
+    if (mapping[role] !== void 0) {
+      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
+    }
+    mapping[role] = name;
+  }
+  checkDistinctNames(mapping, source);
+  return mapping;
+}
+function checkDistinctNames(mapping, source = "--columns") {
+  const resolved = resolveColumns(mapping);
+  const seen = /* @__PURE__ */ new Map();
+  for (const role of COLUMN_ROLES) {
+    if (role === "quantile") continue;
+    const name = resolved[role];
+    const other = seen.get(name);
+    if (other !== void 0) {
+      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
+        file: source,
+        value: name
+      });
+    }
+    seen.set(name, role);
+  }
+}
+function isRole(text2) {
+  return COLUMN_ROLES.includes(text2);
+}
+
+// src/reading/byteInterner.ts
+var ByteInterner = class {
+  /** The decoded values, by id. */
+  labels = [];
+  /** The physical line each value first appeared on, by id. */
+  firstLines = [];
+  bytes = new Uint8Array(4096);
+  used = 0;
+  offsets = new Int32Array(256);
+  lengths = new Int32Array(256);
+  hashes = new Int32Array(256);
+  table = new Int32Array(1024);
+  mask = 1023;
+  last = -1;
+  encoded = new Uint8Array(0);
+  encoder = new TextEncoder();
+  lastText = null;
+  textIds = /* @__PURE__ */ new Map();
+  lastTextId = -1;
+  /** The id of `source[start, end)`, a new one (with `line` as its first line) if unseen. */
+  id(source, start, end, line2) {
+    const length = end - start;
+    const last = this.last;
+    if (last >= 0 && this.lengths[last] === length && this.equal(last, source, start, length)) {
+      return last;
+    }
+    const after = last + 1;
+    if (after > 0 && after < this.labels.length && this.lengths[after] === length && this.equal(after, source, start, length)) {
+      this.last = after;
+      return after;
+    }
+    let h = 2166136261;
+    for (let i = start; i < end; i++) h = Math.imul(h ^ source[i], 16777619);
+    let slot = h & this.mask;
+    for (; ; ) {
+      const stored = this.table[slot];
+      if (stored === 0) break;
+      const id2 = stored - 1;
+      if (this.hashes[id2] === h && this.lengths[id2] === length && this.equal(id2, source, start, length)) {
+        this.last = id2;
+        return id2;
+      }
+      slot = slot + 1 & this.mask;
+    }
+    const id = this.add(source, start, end, h, line2);
+    this.table[slot] = id + 1;
+    if (2 * this.labels.length > this.table.length) this.rehash();
+    this.last = id;
+    return id;
+  }
+  /**
+   * The id of a value given as text (a Parquet field), by its UTF-8 bytes; texts seen before are
+   * found by a map of their own (ids never change, so it stays right).
+   */
+  idOfText(text2, line2) {
+    if (text2 === this.lastText) return this.lastTextId;
+    let id = this.textIds.get(text2);
+    if (id === void 0) {
+      if (this.encoded.length < 3 * text2.length) this.encoded = new Uint8Array(3 * text2.length);
+      const { written } = this.encoder.encodeInto(text2, this.encoded);
+      id = this.id(Buffer.from(this.encoded.buffer, 0, written), 0, written, line2);
+      this.textIds.set(this.labels[id], id);
+    }
+    this.lastText = text2;
+    this.lastTextId = id;
+    return id;
+  }
+  equal(id, source, start, length) {
+    const bytes = this.bytes;
+    const offset = this.offsets[id];
+    for (let k = length - 1; k >= 0; k--) if (bytes[offset + k] !== source[start + k]) return false;
+    return true;
+  }
+  add(source, start, end, hash, line2) {
+    const id = this.labels.length;
+    const length = end - start;
+    if (this.used + length > this.bytes.length) {
+      const next = new Uint8Array(Math.max(2 * this.bytes.length, this.used + length));
+      next.set(this.bytes.subarray(0, this.used));
+      this.bytes = next;
+    }
+    if (id === this.offsets.length) {
+      this.offsets = grown(this.offsets);
+      this.lengths = grown(this.lengths);
+      this.hashes = grown(this.hashes);
+    }
+    this.bytes.set(source.subarray(start, end), this.used);
+    this.offsets[id] = this.used;
+    this.lengths[id] = length;
+    this.hashes[id] = hash;
+    this.used += length;
+    this.labels.push(source.toString("utf8", start, end));
+    this.firstLines.push(line2);
+    return id;
+  }
+  rehash() {
+    const table2 = new Int32Array(this.table.length * 2);
+    const mask = table2.length - 1;
+    for (let id = 0; id < this.labels.length; id++) {
+      let slot = this.hashes[id] & mask;
+      while (table2[slot] !== 0) slot = slot + 1 & mask;
+      table2[slot] = id + 1;
+    }
+    this.table = table2;
+    this.mask = mask;
+  }
+};
+function grown(array) {
+  const next = new Int32Array(array.length * 2);
+  next.set(array);
+  return next;
+}
+
+// src/reading/forecastColumns.ts
+var LABEL = 0;
+var HORIZON = 1;
+var VALUE = 2;
+var WEIGHT = 3;
+var KEY_PARTS = ["series", "timestamp", "horizon", "origin", "path"];
+function forecastColumns(header2) {
+  const columns = [];
+  const add = (part, kind, field, level = Number.NaN) => {
+    if (field < 0) return;
+    columns.push({
+      part,
+      kind,
+      field,
+      name: header2.names[field],
+      level,
+      labels: kind === LABEL ? new ByteInterner() : null,
+      ints: NO_INTS,
+      floats: NO_FLOATS
+    });
+  };
+  add("series", LABEL, header2.series);
+  add("timestamp", LABEL, header2.timestamp);
+  add("origin", LABEL, header2.origin);
+  add("path", LABEL, header2.path);
+  add("horizon", HORIZON, header2.horizon);
+  add("actual", VALUE, header2.actual);
+  add("prediction", VALUE, header2.prediction);
+  add("weight", WEIGHT, header2.weight);
+  for (const q of header2.quantiles) add("quantile", VALUE, q.index, q.level);
+  return columns;
+}
+function growColumns(columns, capacity) {
+  for (const column of columns) {
+    if (column.kind === LABEL || column.kind === HORIZON) {
+      const next = new Int32Array(capacity);
+      next.set(column.ints);
+      column.ints = next;
+    } else {
+      const next = new Float64Array(capacity);
+      next.set(column.floats);
+      column.floats = next;
+    }
+  }
+}
+function columnOf(columns, part) {
+  return columns.find((c) => c.part === part);
+}
+function tableColumns(columns, n) {
+  const label = (part) => {
+    const c = columnOf(columns, part);
+    if (c === void 0) return null;
+    return {
+      column: c.name,
+      ids: c.ints.slice(0, n),
+      labels: c.labels.labels,
+      firstLines: Int32Array.from(c.labels.firstLines)
+    };
+  };
+  const value = (part) => {
+    const c = columnOf(columns, part);
+    return c === void 0 ? null : { column: c.name, values: c.floats.slice(0, n) };
+  };
+  const horizon = columnOf(columns, "horizon");
+  return {
+    series: label("series"),
+    timestamp: label("timestamp"),
+    horizon: horizon === void 0 ? null : { column: horizon.name, values: horizon.ints.slice(0, n) },
+    origin: label("origin"),
+    path: label("path"),
+    actual: value("actual"),
+    prediction: value("prediction"),
+    weight: value("weight"),
+    quantiles: columns.filter((c) => c.part === "quantile").map((c) => ({ level: c.level, column: c.name, values: c.floats.slice(0, n) }))
+  };
+}
+var NO_INTS = new Int32Array(0);
+var NO_FLOATS = new Float64Array(0);
+
+// src/reading/forecastHeader.ts
+function resolveHeader(names, file, line2, options, delimiter3 = ",") {
+  const columns = resolveColumns(options.columns);
+  const predictions = options.role !== "actuals";
+  const used = /* @__PURE__ */ new Set();
+  const find = (name, wanted) => {
+    if (!wanted) return -1;
+    const first = names.indexOf(name);
+    if (first < 0) return -1;
+    const second = names.indexOf(name, first + 1);
+    if (second >= 0) {
+      throw new InputError(
+        `the column "${name}" appears twice in the header (fields ${first + 1} and ${second + 1})`,
+        { file, line: line2, column: name, value: name }
+      );
+    }
+    used.add(first);
+    return first;
+  };
+  const series = find(columns.series, true);
+  const timestamp = find(columns.timestamp, true);
+  const horizon = find(columns.horizon, predictions);
+  const origin = find(columns.origin, predictions);
+  const path8 = find(columns.path, predictions);
+  const actual = find(columns.actual, true);
+  const prediction = find(columns.prediction, predictions);
+  const weight = find(columns.weight, true);
+  const quantiles = [];
+  if (predictions) {
+    const prefix2 = columns.quantile;
+    names.forEach((name, index) => {
+      if (used.has(index) || !name.startsWith(prefix2)) return;
+      const levelText = name.slice(prefix2.length);
+      const level = parseDecimal(levelText);
+      if (Number.isNaN(level)) return;
+      if (!(level > 0 && level < 1)) {
+        throw new InputError(
+          `quantile level ${levelText} is not strictly between 0 and 1 (write e.g. ${prefix2}0.1 for the 10% quantile)`,
+          { file, line: line2, column: name, value: name }
+        );
+      }
+      const same = quantiles.find((q) => q.level === level);
+      if (same !== void 0) {
+        throw new InputError(
+          `quantile level ${level} appears twice in the header (columns "${same.column}" and "${name}")`,
+          { file, line: line2, column: name, value: name }
+        );
+      }
+      quantiles.push({ level, column: name, index });
+      used.add(index);
+    });
+    quantiles.sort((a, b) => a.level - b.level);
+  }
+  const shown = names.slice(0, 20).map((n) => JSON.stringify(echo(n, 60)));
+  const header2 = `${shown.join(", ")}${names.length > 20 ? `, \u2026 (${names.length} columns)` : ""}`;
+  const missing = (role, name, why) => new InputError(
+    `missing the ${role} column "${name}" ${why}; the header has ${header2} (map another column with e.g. ${role}=NAME)${delimiterHint(names, delimiter3)}`,
+    { file, line: line2, column: name }
+  );
+  if (timestamp < 0) throw missing("timestamp", columns.timestamp, "(required)");
+  if (actual < 0 && (!predictions || options.requireActual === true)) {
+    throw missing(
+      "actual",
+      columns.actual,
+      predictions ? "(required when there is no separate actuals file)" : "(required in an actuals file)"
+    );
+  }
+  if (predictions && prediction < 0 && quantiles.length === 0) {
+    throw missing(
+      "prediction",
+      columns.prediction,
+      `(required unless quantile columns such as ${columns.quantile}0.5 are present)`
+    );
+  }
+  const ignored = names.filter((_, index) => !used.has(index));
+  return {
+    names,
+    ignored,
+    series,
+    timestamp,
+    horizon,
+    origin,
+    path: path8,
+    actual,
+    prediction,
+    weight,
+    quantiles
+  };
+}
+function delimiterHint(names, delimiter3) {
+  if (names.length !== 1) return "";
+  const only = names[0];
+  for (const [candidate, option] of [
+    [";", '";"'],
+    ["	", "tab"],
+    ["|", '"|"'],
+    [",", '","']
+  ]) {
+    if (candidate !== delimiter3 && only.includes(candidate)) {
+      return `; the header is one field that contains ${candidate === "	" ? "tabs" : `"${candidate}"`} but the separator is ${delimiterLabel(delimiter3)}: add --delimiter ${option}`;
+    }
+  }
+  return "";
+}
+
+// src/reading/rowKeySet.ts
+var RowKeySet = class {
+  table = new Int32Array(1024);
+  mask = 1023;
+  size = 0;
+  columns;
+  c0 = EMPTY2;
+  c1 = EMPTY2;
+  c2 = EMPTY2;
+  c3 = EMPTY2;
+  c4 = EMPTY2;
+  /** Rows so far strictly increasing in column order, or with the first two columns swapped. */
+  ascending = true;
+  ascendingSwapped = true;
+  hashing = false;
+  /**
+   * `columns` (one to five) return the reader's current arrays; call refresh() whenever the
+   * reader replaces them (it grows them by copying).
+   */
+  constructor(columns) {
+    if (columns.length < 1 || columns.length > 5) throw new Error("a key has 1 to 5 columns");
+    this.columns = columns;
+    this.refresh();
+  }
+  /** Takes the reader's current arrays again (after they grew). */
+  refresh() {
+    const cols = this.columns.map((c) => c());
+    const first = cols[0];
+    this.c0 = first;
+    this.c1 = cols[1] ?? first;
+    this.c2 = cols[2] ?? first;
+    this.c3 = cols[3] ?? first;
+    this.c4 = cols[4] ?? first;
+  }
+  /** Adds row `row` (its key already written to the columns); returns an earlier row with the same key, or −1. */
+  add(row) {
+    if (!this.hashing) {
+      if (row === 0) return -1;
+      if (this.ascending) this.ascending = this.compare(row - 1, row, false) < 0;
+      if (this.ascendingSwapped) this.ascendingSwapped = this.compare(row - 1, row, true) < 0;
+      if (this.ascending || this.ascendingSwapped) return -1;
+      this.hashing = true;
+      for (let r = 0; r < row; r++) this.insert(r);
+    }
+    return this.insert(row);
+  }
+  /** Sign of key(a) − key(b), lexicographic in column order (or with c0 and c1 swapped). */
+  compare(a, b, swapped) {
+    const first = swapped ? this.c1 : this.c0;
+    const second = swapped ? this.c0 : this.c1;
+    return first[a] - first[b] || second[a] - second[b] || this.c2[a] - this.c2[b] || this.c3[a] - this.c3[b] || this.c4[a] - this.c4[b];
+  }
+  insert(row) {
+    const mask = this.mask;
+    const table2 = this.table;
+    let slot = this.hash(row) & mask;
+    for (; ; ) {
+      const stored = table2[slot];
+      if (stored === 0) break;
+      if (this.same(row, stored - 1)) return stored - 1;
+      slot = slot + 1 & mask;
+    }
+    table2[slot] = row + 1;
+    this.size++;
+    if (this.size * 2 > table2.length) this.grow();
+    return -1;
+  }
+  same(a, b) {
+    return this.c0[a] === this.c0[b] && this.c1[a] === this.c1[b] && this.c2[a] === this.c2[b] && this.c3[a] === this.c3[b] && this.c4[a] === this.c4[b];
+  }
+  /** A 32-bit mix of the key (multiply–xorshift steps, as in MurmurHash3's finaliser). */
+  hash(row) {
+    let h = Math.imul(this.c0[row] ^ 2654435769, 2246822507);
+    h = Math.imul(h ^ h >>> 15 ^ this.c1[row], 3266489909);
+    h = Math.imul(h ^ h >>> 13 ^ this.c2[row], 2246822507);
+    h = Math.imul(h ^ h >>> 15 ^ this.c3[row], 3266489909);
+    h = Math.imul(h ^ h >>> 13 ^ this.c4[row], 668265263);
+    return (h ^ h >>> 16) >>> 0;
+  }
+  grow() {
+    const old = this.table;
+    const next = new Int32Array(old.length * 2);
+    const mask = next.length - 1;
+    for (let i = 0; i < old.length; i++) {
+      const stored = old[i];
+      if (stored === 0) continue;
+      let slot = this.hash(stored - 1) & mask;
+      while (next[slot] !== 0) slot = slot + 1 & mask;
+      next[slot] = stored;
+    }
+    this.table = next;
+    this.mask = mask;
+  }
+};
+var EMPTY2 = new Int32Array(0);
+
+// src/reading/forecastTableReader.ts
+var MAX_LABEL = 512;
+var ForecastTableReader = class {
+  tokenizer;
+  path;
+  options;
+  dialect;
+  header = null;
+  headerLine = 0;
+  columns = [];
+  rows = 0;
+  capacity = 0;
+  lines = new Int32Array(0);
+  keys = null;
+  expectedBytes = 0;
+  constructor(path8, options) {
+    this.path = path8;
+    this.options = options;
+    checkDistinctNames(options.columns ?? {});
+    this.dialect = textDialect(path8, options);
+    this.tokenizer = new ByteTokenizer(
+      this.dialect.delimiter,
+      (bytes, starts, ends, count, line2) => {
+        if (this.header === null) {
+          const names = [];
+          for (let k = 0; k < count; k++) names.push(bytes.toString("utf8", starts[k], ends[k]));
+          this.readHeader(names, line2);
+        } else this.readBytes(bytes, starts, ends, count, line2);
+      },
+      path8,
+      options.lineLimit
+    );
+  }
+  /**
+   * Takes one record (the header first, then rows) from a source other than text, such as a
+   * Parquet file's rows; `line` is what messages call the record's line. A field may be a number
+   * already (a Parquet double): it is taken as the double a CSV's shortest round-trip text of it
+   * parses to, that is, as it is.
+   */
+  record(fields, count, line2) {
+    if (this.header === null) this.readHeader(fields.slice(0, count).map(String), line2);
+    else this.readFields(fields, count, line2);
+  }
+  /** Header indices of the columns that play a role (after the header was read). */
+  get usedColumns() {
+    const h = this.header;
+    if (h === null) return [];
+    return h.names.map((_, i) => i).filter((i) => !h.ignored.includes(h.names[i]));
+  }
+  push(chunk) {
+    this.tokenizer.push(chunk);
+  }
+  /** The size of the text input, if known: the columns then grow to the rows it holds. */
+  expectBytes(total) {
+    this.expectedBytes = total;
+  }
+  /** Physical lines fully read so far. */
+  get linesRead() {
+    return this.tokenizer.lines;
+  }
+  /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
+  finish(sha256 = "") {
+    this.tokenizer.end();
+    const header2 = this.header;
+    if (header2 === null) {
+      throw new InputError("the file is empty (expected a header line and data rows)", {
+        file: this.path,
+        line: 1
+      });
+    }
+    if (this.rows === 0) {
+      throw new InputError("the file has a header but no data rows", {
+        file: this.path,
+        line: this.headerLine + 1
+      });
+    }
+    const n = this.rows;
+    const summary2 = {
+      role: this.options.role,
+      path: this.path,
+      rows: n,
+      sha256,
+      columns: header2.names,
+      ignoredColumns: header2.ignored,
+      blankLines: this.tokenizer.blankLines
+    };
+    return { summary: summary2, size: n, lines: this.lines.slice(0, n), ...tableColumns(this.columns, n) };
+  }
+  readHeader(names, line2) {
+    const h = resolveHeader(names, this.path, line2, this.options, this.dialect.delimiter);
+    this.header = h;
+    this.headerLine = line2;
+    this.columns = forecastColumns(h);
+    const parts = this.options.role === "actuals" ? KEY_PARTS.slice(0, 2) : KEY_PARTS;
+    const key = parts.map((part) => columnOf(this.columns, part)).filter((c) => c !== void 0).map((c) => () => c.ints);
+    this.keys = new RowKeySet(key);
+  }
+  /** Makes room for the next row; returns its index. */
+  nextRow(line2) {
+    const r = this.rows;
+    if (r === this.capacity) {
+      const capacity = this.nextCapacity(r);
+      const lines = new Int32Array(capacity);
+      lines.set(this.lines);
+      this.lines = lines;
+      growColumns(this.columns, capacity);
+      this.capacity = capacity;
+      this.keys.refresh();
+    }
+    this.lines[r] = line2;
+    return r;
+  }
+  /**
+   * Room for the rows after row `r`: twice as many, or — once the size of the input is known and
+   * a few thousand rows are read — the rows the whole input holds at the bytes per row so far,
+   * plus 2%, but at least half as many again and at most four times as many (so a huge file that
+   * fails early has not reserved its whole table).
+   */
+  nextCapacity(r) {
+    const doubled = Math.max(1024, 2 * this.capacity);
+    const done = this.tokenizer.bytesDone;
+    if (this.expectedBytes <= 0 || r < 4096 || done <= 0) return doubled;
+    const estimate = Math.ceil(r * this.expectedBytes / done * 1.02) + 1024;
+    return Math.min(4 * this.capacity, Math.max(this.capacity + (this.capacity >> 1), estimate));
+  }
+  /** Ends a row: a key seen before is refused at once, naming both lines. */
+  endRow(r, line2) {
+    const earlier = this.keys.add(r);
+    if (earlier >= 0) this.duplicate(earlier, r, line2);
+    this.rows = r + 1;
+  }
+  /** One row of a text file, read from its bytes. */
+  readBytes(bytes, starts, ends, count, line2) {
+    const width = this.header.names.length;
+    if (count !== width) {
+      const fields = [];
+      for (let k = 0; k < Math.min(count, 50); k++) {
+        fields.push(bytes.toString("utf8", starts[k], ends[k]));
+      }
+      this.fieldCount(fields, count, line2);
+    }
+    const r = this.nextRow(line2);
+    const columns = this.columns;
+    const comma = this.dialect.decimalComma;
+    for (let k = 0; k < columns.length; k++) {
+      const c = columns[k];
+      const a = starts[c.field];
+      const b = ends[c.field];
+      switch (c.kind) {
+        case LABEL:
+          if (a === b || b - a > MAX_LABEL && utf16Length(bytes, a, b) > MAX_LABEL) {
+            this.checkLabel(c, bytes.toString("utf8", a, b), line2);
+          }
+          c.ints[r] = c.labels.id(bytes, a, b, line2);
+          break;
+        case HORIZON: {
+          const value = horizonFromBytes(bytes, a, b);
+          if (value === 0) this.badHorizon(c, bytes.toString("utf8", a, b), line2);
+          c.ints[r] = value;
+          break;
+        }
+        default: {
+          const floats = c.floats;
+          if (!storeDecimalFromBytes(bytes, a, b, comma, floats, r)) {
+            this.numberOfText(c, bytes.toString("utf8", a, b), line2);
+          }
+          if (c.kind === WEIGHT && floats[r] < 0) {
+            this.negativeWeight(c, bytes.toString("utf8", a, b), line2);
+          }
+        }
+      }
+    }
+    this.endRow(r, line2);
+  }
+  /** One row from a typed source (fields are text or numbers). */
+  readFields(fields, count, line2) {
+    const width = this.header.names.length;
+    if (count !== width) this.fieldCount(fields.slice(0, Math.min(count, 50)), count, line2);
+    const r = this.nextRow(line2);
+    const columns = this.columns;
+    for (let k = 0; k < columns.length; k++) {
+      const c = columns[k];
+      const field = fields[c.field];
+      if (c.kind === LABEL) {
+        const text2 = typeof field === "string" ? field : String(field);
+        if (text2.length === 0 || text2.length > MAX_LABEL) this.checkLabel(c, text2, line2);
+        c.ints[r] = c.labels.idOfText(text2, line2);
+      } else if (c.kind === HORIZON) {
+        const value = typeof field === "number" ? Number.isInteger(field) && field >= 1 && field <= 2147483647 ? field : 0 : parseHorizon(field);
+        if (value === 0) this.badHorizon(c, String(field), line2);
+        c.ints[r] = value;
+      } else {
+        let value;
+        if (typeof field === "number") {
+          if (!Number.isFinite(field)) {
+            throw new InputError("not a finite number", {
+              file: this.path,
+              line: line2,
+              column: c.name,
+              value: String(field)
+            });
+          }
+          value = field;
+        } else value = this.numberOfText(c, field, line2);
+        if (c.kind === WEIGHT && value < 0) this.negativeWeight(c, String(field), line2);
+        c.floats[r] = value;
+      }
+    }
+    this.endRow(r, line2);
+  }
+  fieldCount(shown, count, line2) {
+    const width = this.header.names.length;
+    throw new InputError(`expected ${width} fields as in the header, found ${count}`, {
+      file: this.path,
+      line: line2,
+      value: echo(shown.join(this.dialect.delimiter))
+    });
+  }
+  /** A key seen twice in this file: refused at once, naming both lines. */
+  duplicate(earlier, row, line2) {
+    const parts = [];
+    const spelled = this.options.role === "actuals" ? KEY_PARTS.slice(0, 2) : KEY_PARTS;
+    for (const part of spelled) {
+      const c = columnOf(this.columns, part);
+      if (c === void 0) {
+        if (part === "horizon") parts.push("horizon=1");
+      } else if (c.kind === HORIZON) parts.push(`horizon=${c.ints[row]}`);
+      else parts.push(`${part}=${c.labels.labels[c.ints[row]]}`);
+    }
+    const key = echo(parts.join(" "));
+    throw new InputError(
+      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line2} have the same key`,
+      { file: this.path, line: line2, value: key }
+    );
+  }
+  /** Refuses a key value that is too long or empty. */
+  checkLabel(c, text2, line2) {
+    if (text2.length > MAX_LABEL) {
+      throw new InputError(
+        `a key value longer than ${MAX_LABEL} characters (${text2.length}); series names, timestamps, origins and paths are kept in memory for every distinct value, so they must be short`,
+        { file: this.path, line: line2, column: c.name, value: text2 }
+      );
+    }
+    if (text2.length === 0) {
+      throw new InputError("empty value in a key column", {
+        file: this.path,
+        line: line2,
+        column: c.name,
+        value: text2
+      });
+    }
+  }
+  badHorizon(c, text2, line2) {
+    throw new InputError("the horizon must be a whole number \u2265 1", {
+      file: this.path,
+      line: line2,
+      column: c.name,
+      value: text2
+    });
+  }
+  negativeWeight(c, text2, line2) {
+    throw new InputError("weights must be \u2265 0", {
+      file: this.path,
+      line: line2,
+      column: c.name,
+      value: text2
+    });
+  }
+  /** The number a text field holds, or an InputError with a hint at the likely dialect. */
+  numberOfText(c, text2, line2) {
+    const comma = this.dialect.decimalComma;
+    const value = comma ? parseDecimalComma(text2) : parseDecimal(text2);
+    if (!Number.isNaN(value)) return value;
+    let hint = "";
+    if (!comma && /^[-+]?\d*,\d+$/.test(text2)) {
+      hint = ` (a decimal comma? add --decimal , with a separator other than the comma, e.g. --delimiter ";")`;
+    } else if (comma && text2.includes(".")) {
+      hint = " (with --decimal , a point is not a decimal mark, and thousands separators are not read)";
+    }
+    throw new InputError(
+      text2.length === 0 ? "empty value where a number is required" : `not a finite decimal number${hint}`,
+      { file: this.path, line: line2, column: c.name, value: text2 }
+    );
+  }
+};
+
+// src/reading/streamParquetFile.ts
+import { createHash as createHash2 } from "node:crypto";
+import { createReadStream as createReadStream2 } from "node:fs";
+import { open as open2, stat as stat3 } from "node:fs/promises";
+import { pipeline as pipeline2 } from "node:stream/promises";
 
 // node_modules/hyparquet/src/constants.js
 var ParquetTypes = [
@@ -50759,7 +52009,7 @@ var MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
 async function streamParquetFile(path8, reader, onProgress) {
   let size;
   try {
-    const info2 = await stat2(path8);
+    const info2 = await stat3(path8);
     if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
     size = info2.size;
   } catch (error2) {
@@ -50911,8 +52161,8 @@ function fieldValue(value, path8, line2, column) {
   }
 }
 async function sha256Of(path8) {
-  const hash = createHash("sha256");
-  await pipeline(createReadStream(path8, { highWaterMark: 1 << 20 }), async (source) => {
+  const hash = createHash2("sha256");
+  await pipeline2(createReadStream2(path8, { highWaterMark: 1 << 20 }), async (source) => {
     for await (const chunk of source) hash.update(chunk);
   });
   return `sha256:${hash.digest("hex")}`;
@@ -50932,731 +52182,7 @@ function fileError(error2, path8) {
   return new InputError(`cannot read the file: ${message}`, { file: path8 });
 }
 
-// src/reading/streamTextFile.ts
-import { createHash as createHash2 } from "node:crypto";
-import { createReadStream as createReadStream2 } from "node:fs";
-import { stat as stat3 } from "node:fs/promises";
-import { pipeline as pipeline2 } from "node:stream/promises";
-import { TextDecoder as TextDecoder2 } from "node:util";
-import { createGunzip } from "node:zlib";
-var CHUNK_BYTES = 1 << 20;
-async function streamTextFile(path8, gzip, sink, onProgress) {
-  let totalBytes;
-  try {
-    const info2 = await stat3(path8);
-    if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
-    totalBytes = info2.size;
-  } catch (error2) {
-    throw asInputError(error2, path8);
-  }
-  const hash = createHash2("sha256");
-  const decoder4 = new TextDecoder2("utf-8", { fatal: true });
-  let bytesRead = 0;
-  const tap = async function* (source) {
-    for await (const chunk of source) {
-      hash.update(chunk);
-      bytesRead += chunk.length;
-      onProgress?.(bytesRead, totalBytes);
-      yield chunk;
-    }
-  };
-  let newlines = 0;
-  const consume = async (source) => {
-    for await (const chunk of source) {
-      const nul = chunk.indexOf(0);
-      if (nul >= 0) throw notText(chunk, nul, newlines, path8, "a NUL byte");
-      let text2;
-      try {
-        text2 = decoder4.decode(chunk, { stream: true });
-      } catch {
-        throw notText(chunk, firstInvalidUtf8(chunk), newlines, path8, "bytes that are not UTF-8");
-      }
-      newlines += countByte(chunk, 10);
-      sink.push(text2);
-    }
-    try {
-      sink.push(decoder4.decode(void 0, { stream: false }));
-    } catch {
-      throw new InputError(
-        `the file is not valid UTF-8 text: it ends inside a multi-byte character (line ${newlines + 1})`,
-        { file: path8, line: newlines + 1 }
-      );
-    }
-  };
-  try {
-    const raw = createReadStream2(path8, { highWaterMark: CHUNK_BYTES });
-    if (gzip) await pipeline2(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
-    else await pipeline2(raw, tap, consume);
-  } catch (error2) {
-    throw asInputError(error2, path8);
-  }
-  return `sha256:${hash.digest("hex")}`;
-}
-function notText(chunk, at, before, path8, what) {
-  const line2 = before + countByte(chunk.subarray(0, Math.max(0, at)), 10) + 1;
-  const b0 = chunk[0];
-  const b1 = chunk[1];
-  const utf16 = before === 0 && (b0 === 255 && b1 === 254 || b0 === 254 && b1 === 255) || what === "a NUL byte";
-  const byte = chunk[at];
-  const hint = utf16 ? "it looks like UTF-16: convert it, e.g. iconv -f UTF-16 -t UTF-8" : byte !== void 0 && byte >= 128 ? `byte 0x${byte.toString(16).toUpperCase()} suggests Latin-1 or Windows-1252: convert it, e.g. iconv -f WINDOWS-1252 -t UTF-8` : "convert it to UTF-8";
-  return new InputError(`the file is not UTF-8 text: line ${line2} has ${what} (${hint})`, {
-    file: path8,
-    line: line2,
-    value: chunk.subarray(Math.max(0, at - 20), at + 20).toString("latin1").replace(/[^\x20-\x7e]/g, "?")
-  });
-}
-function firstInvalidUtf8(bytes) {
-  let i = 0;
-  const n = bytes.length;
-  while (i < 3 && i < n && (bytes[i] & 192) === 128) i++;
-  while (i < n) {
-    const b = bytes[i];
-    if (b < 128) {
-      i++;
-      continue;
-    }
-    const length = b >= 194 && b <= 223 ? 2 : b >= 224 && b <= 239 ? 3 : b >= 240 && b <= 244 ? 4 : 0;
-    if (length === 0) return i;
-    if (i + length > n) return i;
-    for (let k = 1; k < length; k++) if ((bytes[i + k] & 192) !== 128) return i;
-    i += length;
-  }
-  return n;
-}
-function countByte(bytes, byte) {
-  let count = 0;
-  let i = bytes.indexOf(byte);
-  while (i !== -1) {
-    count++;
-    i = bytes.indexOf(byte, i + 1);
-  }
-  return count;
-}
-function asInputError(error2, path8) {
-  if (error2 instanceof InputError) return error2;
-  const code2 = error2?.code;
-  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
-  if (code2 === "EACCES" || code2 === "EPERM")
-    return new InputError("permission denied", { file: path8 });
-  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path8 });
-  if (typeof code2 === "string" && code2.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error2.message})`, { file: path8 });
-  }
-  const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path8 });
-}
-
-// src/reading/columnMapping.ts
-var COLUMN_ROLES = [
-  "series",
-  "timestamp",
-  "horizon",
-  "origin",
-  "path",
-  "actual",
-  "prediction",
-  "weight",
-  "quantile"
-];
-var DEFAULT_COLUMNS = {
-  series: "series",
-  timestamp: "timestamp",
-  horizon: "horizon",
-  origin: "origin",
-  path: "path",
-  actual: "actual",
-  prediction: "prediction",
-  weight: "weight",
-  quantile: "q"
-};
-function resolveColumns(mapping = {}) {
-  const resolved = { ...DEFAULT_COLUMNS };
-  for (const role of COLUMN_ROLES) {
-    const name = mapping[role];
-    if (name !== void 0) resolved[role] = name;
-  }
-  return resolved;
-}
-function parseColumnMapping(text2, source = "--columns") {
-  const mapping = {};
-  if (text2.trim() === "") return mapping;
-  for (const rawPair of text2.split(",")) {
-    const pair = rawPair.trim();
-    const eq = pair.indexOf("=");
-    if (eq < 0) {
-      throw new InputError(
-        `expected role=column pairs separated by commas, e.g. "actual=observed,prediction=point"`,
-        { file: source, value: pair }
-      );
-    }
-    const role = pair.slice(0, eq).trim();
-    const name = pair.slice(eq + 1).trim();
-    if (!isRole(role)) {
-      throw new InputError(`unknown column role "${role}"; roles are ${COLUMN_ROLES.join(", ")}`, {
-        file: source,
-        value: pair
-      });
-    }
-    if (name === "") {
-      throw new InputError(`the column name for role "${role}" is empty`, {
-        file: source,
-        value: pair
-      });
-    }
-    if (mapping[role] !== void 0) {
-      throw new InputError(`role "${role}" is mapped twice`, { file: source, value: pair });
-    }
-    mapping[role] = name;
-  }
-  checkDistinctNames(mapping, source);
-  return mapping;
-}
-function checkDistinctNames(mapping, source = "--columns") {
-  const resolved = resolveColumns(mapping);
-  const seen = /* @__PURE__ */ new Map();
-  for (const role of COLUMN_ROLES) {
-    if (role === "quantile") continue;
-    const name = resolved[role];
-    const other = seen.get(name);
-    if (other !== void 0) {
-      throw new InputError(`roles "${other}" and "${role}" both use the column "${name}"`, {
-        file: source,
-        value: name
-      });
-    }
-    seen.set(name, role);
-  }
-}
-function isRole(text2) {
-  return COLUMN_ROLES.includes(text2);
-}
-
-// src/reading/rowKeySet.ts
-var RowKeySet = class {
-  table = new Int32Array(1024);
-  mask = 1023;
-  size = 0;
-  columns;
-  c0 = EMPTY;
-  c1 = EMPTY;
-  c2 = EMPTY;
-  c3 = EMPTY;
-  c4 = EMPTY;
-  /** Rows so far strictly increasing in column order, or with the first two columns swapped. */
-  ascending = true;
-  ascendingSwapped = true;
-  hashing = false;
-  /**
-   * `columns` (one to five) return the reader's current arrays; call refresh() whenever the
-   * reader replaces them (it grows them by copying).
-   */
-  constructor(columns) {
-    if (columns.length < 1 || columns.length > 5) throw new Error("a key has 1 to 5 columns");
-    this.columns = columns;
-    this.refresh();
-  }
-  /** Takes the reader's current arrays again (after they grew). */
-  refresh() {
-    const cols = this.columns.map((c) => c());
-    const first = cols[0];
-    this.c0 = first;
-    this.c1 = cols[1] ?? first;
-    this.c2 = cols[2] ?? first;
-    this.c3 = cols[3] ?? first;
-    this.c4 = cols[4] ?? first;
-  }
-  /** Adds row `row` (its key already written to the columns); returns an earlier row with the same key, or −1. */
-  add(row) {
-    if (!this.hashing) {
-      if (row === 0) return -1;
-      if (this.ascending) this.ascending = this.compare(row - 1, row, false) < 0;
-      if (this.ascendingSwapped) this.ascendingSwapped = this.compare(row - 1, row, true) < 0;
-      if (this.ascending || this.ascendingSwapped) return -1;
-      this.hashing = true;
-      for (let r = 0; r < row; r++) this.insert(r);
-    }
-    return this.insert(row);
-  }
-  /** Sign of key(a) − key(b), lexicographic in column order (or with c0 and c1 swapped). */
-  compare(a, b, swapped) {
-    const first = swapped ? this.c1 : this.c0;
-    const second = swapped ? this.c0 : this.c1;
-    return first[a] - first[b] || second[a] - second[b] || this.c2[a] - this.c2[b] || this.c3[a] - this.c3[b] || this.c4[a] - this.c4[b];
-  }
-  insert(row) {
-    const mask = this.mask;
-    const table2 = this.table;
-    let slot = this.hash(row) & mask;
-    for (; ; ) {
-      const stored = table2[slot];
-      if (stored === 0) break;
-      if (this.same(row, stored - 1)) return stored - 1;
-      slot = slot + 1 & mask;
-    }
-    table2[slot] = row + 1;
-    this.size++;
-    if (this.size * 2 > table2.length) this.grow();
-    return -1;
-  }
-  same(a, b) {
-    return this.c0[a] === this.c0[b] && this.c1[a] === this.c1[b] && this.c2[a] === this.c2[b] && this.c3[a] === this.c3[b] && this.c4[a] === this.c4[b];
-  }
-  /** A 32-bit mix of the key (multiply–xorshift steps, as in MurmurHash3's finaliser). */
-  hash(row) {
-    let h = Math.imul(this.c0[row] ^ 2654435769, 2246822507);
-    h = Math.imul(h ^ h >>> 15 ^ this.c1[row], 3266489909);
-    h = Math.imul(h ^ h >>> 13 ^ this.c2[row], 2246822507);
-    h = Math.imul(h ^ h >>> 15 ^ this.c3[row], 3266489909);
-    h = Math.imul(h ^ h >>> 13 ^ this.c4[row], 668265263);
-    return (h ^ h >>> 16) >>> 0;
-  }
-  grow() {
-    const old = this.table;
-    const next = new Int32Array(old.length * 2);
-    const mask = next.length - 1;
-    for (let i = 0; i < old.length; i++) {
-      const stored = old[i];
-      if (stored === 0) continue;
-      let slot = this.hash(stored - 1) & mask;
-      while (next[slot] !== 0) slot = slot + 1 & mask;
-      next[slot] = stored;
-    }
-    this.table = next;
-    this.mask = mask;
-  }
-};
-var EMPTY = new Int32Array(0);
-
-// src/reading/tableBuilder.ts
-var MAX_LABEL = 512;
-var ForecastTableReader = class {
-  tokenizer;
-  path;
-  options;
-  header = null;
-  headerLine = 0;
-  rows = 0;
-  capacity = 0;
-  lines = new Int32Array(0);
-  seriesIds = new Int32Array(0);
-  timeIds = new Int32Array(0);
-  originIds = new Int32Array(0);
-  pathIds = new Int32Array(0);
-  horizons = new Int32Array(0);
-  actual = new Float64Array(0);
-  prediction = new Float64Array(0);
-  weight = new Float64Array(0);
-  quantileValues = [];
-  seriesLabels = new Interner();
-  timeLabels = new Interner();
-  originLabels = new Interner();
-  pathLabels = new Interner();
-  delimiter;
-  decimalComma;
-  keys = null;
-  constructor(path8, options) {
-    this.path = path8;
-    this.options = options;
-    checkDistinctNames(options.columns ?? {});
-    const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
-    this.delimiter = delimiter3;
-    this.decimalComma = options.decimal === ",";
-    if (this.decimalComma && delimiter3 === ",") {
-      throw new InputError(
-        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path8 }
-      );
-    }
-    this.tokenizer = new Tokenizer(
-      delimiter3,
-      (fields, count, line2) => this.record(fields, count, line2),
-      path8,
-      options.lineLimit
-    );
-  }
-  /**
-   * Takes one record (the header first, then rows) from a source other than text, such as a
-   * Parquet file's rows; `line` is what messages call the record's line. A field may be a number
-   * already (a Parquet double): it is taken as the double a CSV's shortest round-trip text of it
-   * parses to, that is, as it is.
-   */
-  record(fields, count, line2) {
-    if (this.header === null) this.readHeader(fields.map(String), count, line2);
-    else this.readRow(fields, count, line2);
-  }
-  /** Header indices of the columns that play a role (after the header was read). */
-  get usedColumns() {
-    const h = this.header;
-    if (h === null) return [];
-    return h.names.map((_, i) => i).filter((i) => !h.ignored.includes(h.names[i]));
-  }
-  push(chunk) {
-    this.tokenizer.push(chunk);
-  }
-  /** Physical lines fully read so far. */
-  get linesRead() {
-    return this.tokenizer.lines;
-  }
-  /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
-  finish(sha256 = "") {
-    this.tokenizer.end();
-    const header2 = this.header;
-    if (header2 === null) {
-      throw new InputError("the file is empty (expected a header line and data rows)", {
-        file: this.path,
-        line: 1
-      });
-    }
-    if (this.rows === 0) {
-      throw new InputError("the file has a header but no data rows", {
-        file: this.path,
-        line: this.headerLine + 1
-      });
-    }
-    const n = this.rows;
-    const summary2 = {
-      role: this.options.role,
-      path: this.path,
-      rows: n,
-      sha256,
-      columns: header2.names,
-      ignoredColumns: header2.ignored,
-      blankLines: this.tokenizer.blankLines
-    };
-    const label = (interner, ids, column) => ({
-      column,
-      ids: ids.slice(0, n),
-      labels: interner.labels,
-      firstLines: Int32Array.from(interner.firstLines)
-    });
-    const quantiles = header2.quantiles.map((q, k) => ({
-      level: q.level,
-      column: q.column,
-      values: this.quantileValues[k].slice(0, n)
-    }));
-    return {
-      summary: summary2,
-      size: n,
-      lines: this.lines.slice(0, n),
-      series: header2.series < 0 ? null : label(this.seriesLabels, this.seriesIds, header2.names[header2.series]),
-      timestamp: label(this.timeLabels, this.timeIds, header2.names[header2.timestamp]),
-      horizon: header2.horizon < 0 ? null : { column: header2.names[header2.horizon], values: this.horizons.slice(0, n) },
-      origin: header2.origin < 0 ? null : label(this.originLabels, this.originIds, header2.names[header2.origin]),
-      path: header2.path < 0 ? null : label(this.pathLabels, this.pathIds, header2.names[header2.path]),
-      actual: header2.actual < 0 ? null : { column: header2.names[header2.actual], values: this.actual.slice(0, n) },
-      prediction: header2.prediction < 0 ? null : { column: header2.names[header2.prediction], values: this.prediction.slice(0, n) },
-      weight: header2.weight < 0 ? null : { column: header2.names[header2.weight], values: this.weight.slice(0, n) },
-      quantiles
-    };
-  }
-  readHeader(fields, count, line2) {
-    this.header = resolveHeader(
-      fields.slice(0, count),
-      this.path,
-      line2,
-      this.options,
-      this.delimiter
-    );
-    this.headerLine = line2;
-    this.quantileValues = this.header.quantiles.map(() => new Float64Array(0));
-    const h = this.header;
-    const key = [];
-    if (h.series >= 0) key.push(() => this.seriesIds);
-    key.push(() => this.timeIds);
-    if (this.options.role !== "actuals") {
-      if (h.horizon >= 0) key.push(() => this.horizons);
-      if (h.origin >= 0) key.push(() => this.originIds);
-      if (h.path >= 0) key.push(() => this.pathIds);
-    }
-    this.keys = new RowKeySet(key);
-  }
-  grow() {
-    const capacity = Math.max(1024, this.capacity * 2);
-    const h = this.header;
-    this.lines = growInt(this.lines, capacity);
-    this.timeIds = growInt(this.timeIds, capacity);
-    if (h.series >= 0) this.seriesIds = growInt(this.seriesIds, capacity);
-    if (h.origin >= 0) this.originIds = growInt(this.originIds, capacity);
-    if (h.path >= 0) this.pathIds = growInt(this.pathIds, capacity);
-    if (h.horizon >= 0) this.horizons = growInt(this.horizons, capacity);
-    if (h.actual >= 0) this.actual = growFloat(this.actual, capacity);
-    if (h.prediction >= 0) this.prediction = growFloat(this.prediction, capacity);
-    if (h.weight >= 0) this.weight = growFloat(this.weight, capacity);
-    this.quantileValues = this.quantileValues.map((v) => growFloat(v, capacity));
-    this.capacity = capacity;
-    this.keys?.refresh();
-  }
-  readRow(fields, count, line2) {
-    const h = this.header;
-    if (count !== h.names.length) {
-      throw new InputError(`expected ${h.names.length} fields as in the header, found ${count}`, {
-        file: this.path,
-        line: line2,
-        value: echo(fields.slice(0, Math.min(count, 50)).join(this.delimiter))
-      });
-    }
-    const r = this.rows;
-    if (r === this.capacity) this.grow();
-    this.lines[r] = line2;
-    if (h.series >= 0) {
-      this.seriesIds[r] = this.keyLabel(this.seriesLabels, fields[h.series], h.series, line2);
-    }
-    this.timeIds[r] = this.keyLabel(this.timeLabels, fields[h.timestamp], h.timestamp, line2);
-    if (h.origin >= 0) {
-      this.originIds[r] = this.keyLabel(this.originLabels, fields[h.origin], h.origin, line2);
-    }
-    if (h.path >= 0) {
-      this.pathIds[r] = this.keyLabel(this.pathLabels, fields[h.path], h.path, line2);
-    }
-    if (h.horizon >= 0) {
-      const text2 = fields[h.horizon];
-      const value = typeof text2 === "number" ? Number.isInteger(text2) && text2 >= 1 && text2 <= 2147483647 ? text2 : 0 : parseHorizon(text2);
-      if (value === 0) {
-        throw new InputError("the horizon must be a whole number \u2265 1", {
-          file: this.path,
-          line: line2,
-          column: h.names[h.horizon],
-          value: String(text2)
-        });
-      }
-      this.horizons[r] = value;
-    }
-    if (h.actual >= 0) this.actual[r] = this.number(fields[h.actual], h.actual, line2);
-    if (h.prediction >= 0) {
-      this.prediction[r] = this.number(fields[h.prediction], h.prediction, line2);
-    }
-    if (h.weight >= 0) {
-      const value = this.number(fields[h.weight], h.weight, line2);
-      if (value < 0) {
-        throw new InputError("weights must be \u2265 0", {
-          file: this.path,
-          line: line2,
-          column: h.names[h.weight],
-          value: String(fields[h.weight])
-        });
-      }
-      this.weight[r] = value;
-    }
-    const qs = h.quantiles;
-    for (let k = 0; k < qs.length; k++) {
-      const index = qs[k].index;
-      this.quantileValues[k][r] = this.number(fields[index], index, line2);
-    }
-    const earlier = this.keys.add(r);
-    if (earlier >= 0) this.duplicate(earlier, r, line2);
-    this.rows = r + 1;
-  }
-  /** A key seen twice in this file: refused at once, naming both lines. */
-  duplicate(earlier, row, line2) {
-    const h = this.header;
-    const parts = [];
-    const label = (role, interner, ids, index) => {
-      if (index >= 0) parts.push(`${role}=${interner.labels[ids[row]]}`);
-    };
-    label("series", this.seriesLabels, this.seriesIds, h.series);
-    label("timestamp", this.timeLabels, this.timeIds, h.timestamp);
-    if (this.options.role !== "actuals") {
-      parts.push(`horizon=${h.horizon >= 0 ? this.horizons[row] : 1}`);
-      label("origin", this.originLabels, this.originIds, h.origin);
-      label("path", this.pathLabels, this.pathIds, h.path);
-    }
-    const key = echo(parts.join(" "));
-    throw new InputError(
-      `duplicated key ${key}: lines ${this.lines[earlier]} and ${line2} have the same key`,
-      { file: this.path, line: line2, value: key }
-    );
-  }
-  keyLabel(interner, field, index, line2) {
-    const text2 = typeof field === "string" ? field : String(field);
-    if (text2.length > MAX_LABEL) {
-      throw new InputError(
-        `a key value longer than ${MAX_LABEL} characters (${text2.length}); series names, timestamps, origins and paths are kept in memory for every distinct value, so they must be short`,
-        { file: this.path, line: line2, column: this.header.names[index], value: text2 }
-      );
-    }
-    if (text2.length === 0) {
-      throw new InputError("empty value in a key column", {
-        file: this.path,
-        line: line2,
-        column: this.header.names[index],
-        value: text2
-      });
-    }
-    return interner.id(text2, line2);
-  }
-  number(field, index, line2) {
-    if (typeof field === "number") {
-      if (Number.isFinite(field)) return field;
-      throw new InputError("not a finite number", {
-        file: this.path,
-        line: line2,
-        column: this.header.names[index],
-        value: String(field)
-      });
-    }
-    const text2 = field;
-    const value = this.decimalComma ? parseDecimalComma(text2) : parseDecimal(text2);
-    if (!Number.isNaN(value)) return value;
-    let hint = "";
-    if (!this.decimalComma && /^[-+]?\d*,\d+$/.test(text2)) {
-      hint = ` (a decimal comma? add --decimal , with a separator other than the comma, e.g. --delimiter ";")`;
-    } else if (this.decimalComma && text2.includes(".")) {
-      hint = " (with --decimal , a point is not a decimal mark, and thousands separators are not read)";
-    }
-    throw new InputError(
-      text2.length === 0 ? "empty value where a number is required" : `not a finite decimal number${hint}`,
-      { file: this.path, line: line2, column: this.header.names[index], value: text2 }
-    );
-  }
-};
-function resolveHeader(names, file, line2, options, delimiter3 = ",") {
-  const columns = resolveColumns(options.columns);
-  const predictions = options.role !== "actuals";
-  const used = /* @__PURE__ */ new Set();
-  const find = (name, wanted) => {
-    if (!wanted) return -1;
-    const first = names.indexOf(name);
-    if (first < 0) return -1;
-    const second = names.indexOf(name, first + 1);
-    if (second >= 0) {
-      throw new InputError(
-        `the column "${name}" appears twice in the header (fields ${first + 1} and ${second + 1})`,
-        { file, line: line2, column: name, value: name }
-      );
-    }
-    used.add(first);
-    return first;
-  };
-  const series = find(columns.series, true);
-  const timestamp = find(columns.timestamp, true);
-  const horizon = find(columns.horizon, predictions);
-  const origin = find(columns.origin, predictions);
-  const path8 = find(columns.path, predictions);
-  const actual = find(columns.actual, true);
-  const prediction = find(columns.prediction, predictions);
-  const weight = find(columns.weight, true);
-  const quantiles = [];
-  if (predictions) {
-    const prefix2 = columns.quantile;
-    names.forEach((name, index) => {
-      if (used.has(index) || !name.startsWith(prefix2)) return;
-      const levelText = name.slice(prefix2.length);
-      const level = parseDecimal(levelText);
-      if (Number.isNaN(level)) return;
-      if (!(level > 0 && level < 1)) {
-        throw new InputError(
-          `quantile level ${levelText} is not strictly between 0 and 1 (write e.g. ${prefix2}0.1 for the 10% quantile)`,
-          { file, line: line2, column: name, value: name }
-        );
-      }
-      const same = quantiles.find((q) => q.level === level);
-      if (same !== void 0) {
-        throw new InputError(
-          `quantile level ${level} appears twice in the header (columns "${same.column}" and "${name}")`,
-          { file, line: line2, column: name, value: name }
-        );
-      }
-      quantiles.push({ level, column: name, index });
-      used.add(index);
-    });
-    quantiles.sort((a, b) => a.level - b.level);
-  }
-  const shown = names.slice(0, 20).map((n) => JSON.stringify(echo(n, 60)));
-  const header2 = `${shown.join(", ")}${names.length > 20 ? `, \u2026 (${names.length} columns)` : ""}`;
-  const missing = (role, name, why) => new InputError(
-    `missing the ${role} column "${name}" ${why}; the header has ${header2} (map another column with e.g. ${role}=NAME)${delimiterHint(names, delimiter3)}`,
-    { file, line: line2, column: name }
-  );
-  if (timestamp < 0) throw missing("timestamp", columns.timestamp, "(required)");
-  if (actual < 0 && (!predictions || options.requireActual === true)) {
-    throw missing(
-      "actual",
-      columns.actual,
-      predictions ? "(required when there is no separate actuals file)" : "(required in an actuals file)"
-    );
-  }
-  if (predictions && prediction < 0 && quantiles.length === 0) {
-    throw missing(
-      "prediction",
-      columns.prediction,
-      `(required unless quantile columns such as ${columns.quantile}0.5 are present)`
-    );
-  }
-  const ignored = names.filter((_, index) => !used.has(index));
-  return {
-    names,
-    ignored,
-    series,
-    timestamp,
-    horizon,
-    origin,
-    path: path8,
-    actual,
-    prediction,
-    weight,
-    quantiles
-  };
-}
-function delimiterHint(names, delimiter3) {
-  if (names.length !== 1) return "";
-  const only = names[0];
-  for (const [candidate, option] of [
-    [";", '";"'],
-    ["	", "tab"],
-    ["|", '"|"'],
-    [",", '","']
-  ]) {
-    if (candidate !== delimiter3 && only.includes(candidate)) {
-      return `; the header is one field that contains ${candidate === "	" ? "tabs" : `"${candidate}"`} but the separator is ${delimiterLabel(delimiter3)}: add --delimiter ${option}`;
-    }
-  }
-  return "";
-}
-function parseDecimalComma(text2) {
-  if (text2.includes(".")) return Number.NaN;
-  return parseDecimal(text2.replace(",", "."));
-}
-var Interner = class {
-  labels = [];
-  firstLines = [];
-  map = /* @__PURE__ */ new Map();
-  last = "";
-  lastId = -1;
-  id(text2, line2) {
-    if (this.lastId >= 0 && text2 === this.last) return this.lastId;
-    let id = this.map.get(text2);
-    if (id === void 0) {
-      const own = ` ${text2}`.slice(1);
-      id = this.labels.length;
-      this.labels.push(own);
-      this.firstLines.push(line2);
-      this.map.set(own, id);
-    }
-    this.last = text2;
-    this.lastId = id;
-    return id;
-  }
-};
-function growInt(array, capacity) {
-  const next = new Int32Array(capacity);
-  next.set(array);
-  return next;
-}
-function growFloat(array, capacity) {
-  const next = new Float64Array(capacity);
-  next.set(array);
-  return next;
-}
-
 // src/reading/readForecastFile.ts
-function formatFromPath(path8) {
-  const lower = path8.toLowerCase();
-  if (lower.endsWith(".parquet") || lower.endsWith(".pq"))
-    return { format: "parquet", gzip: false };
-  const gzip = lower.endsWith(".gz");
-  const base = gzip ? lower.slice(0, -3) : lower;
-  return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
-}
 async function readForecastFile(path8, options) {
   const implied = formatFromPath(path8);
   const format = options.format ?? implied.format;
@@ -51669,7 +52195,10 @@ async function readForecastFile(path8, options) {
     ...options.columns === void 0 ? {} : { columns: options.columns },
     ...options.requireActual === void 0 ? {} : { requireActual: options.requireActual }
   });
-  const sha256 = format === "parquet" ? await streamParquetFile(path8, reader, options.onProgress) : await streamTextFile(path8, implied.gzip, reader, options.onProgress);
+  const sha256 = format === "parquet" ? await streamParquetFile(path8, reader, options.onProgress) : await streamTextFile(path8, implied.gzip, reader, (bytesRead, totalBytes) => {
+    if (!implied.gzip) reader.expectBytes(totalBytes);
+    options.onProgress?.(bytesRead, totalBytes);
+  });
   return reader.finish(sha256);
 }
 function withDialect(options) {
@@ -51677,18 +52206,6 @@ function withDialect(options) {
     ...options.decimal === void 0 ? {} : { decimal: options.decimal },
     ...options.lineLimit === void 0 ? {} : { lineLimit: options.lineLimit }
   };
-}
-
-// src/reading/readFoldLayout.ts
-async function readFoldLayout(path8, format) {
-  const implied = formatFromPath(path8);
-  const chosen = format ?? implied.format;
-  if (chosen === "parquet") {
-    throw new InputError("a fold layout file is read as CSV or TSV", { file: path8 });
-  }
-  const reader = new FoldLayoutReader(path8, chosen);
-  await streamTextFile(path8, implied.gzip, reader);
-  return reader.finish();
 }
 
 // src/candidates/candidateList.ts
@@ -52252,31 +52769,51 @@ function mean(x) {
 
 // src/statistics/autocovariance.ts
 function autocovariances(x, maxLag) {
+  checkMaxLag(x.length, maxLag);
+  const u = centred(x);
+  const gamma = new Float64Array(maxLag + 1);
+  for (let k = 0; k <= maxLag; k++) gamma[k] = autocovarianceOfCentred(u, k);
+  return gamma;
+}
+function centred(x) {
   const n = x.length;
+  const centre = mean(x);
+  const u = new Float64Array(n);
+  for (let t = 0; t < n; t++) u[t] = x[t] - centre;
+  return u;
+}
+function autocovarianceOfCentred(u, k) {
+  let sum = 0;
+  for (let t = k; t < u.length; t++) sum += u[t] * u[t - k];
+  return sum / u.length;
+}
+function checkMaxLag(n, maxLag) {
   if (n === 0) throw new RangeError("autocovariances: the series is empty");
   if (!Number.isInteger(maxLag) || maxLag < 0 || maxLag > n - 1) {
     throw new RangeError(
       `autocovariances: maxLag must be an integer in 0..${n - 1}, got ${maxLag}`
     );
   }
-  const centre2 = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
-  const gamma = new Float64Array(maxLag + 1);
-  for (let k = 0; k <= maxLag; k++) {
-    let sum = 0;
-    for (let t = k; t < n; t++) sum += u[t] * u[t - k];
-    gamma[k] = sum / n;
+}
+
+// src/statistics/weightedAutocovarianceSum.ts
+function weightedAutocovarianceSum(x, maxLag, weight) {
+  checkMaxLag(x.length, maxLag);
+  const u = centred(x);
+  let sum = autocovarianceOfCentred(u, 0);
+  for (let k = 1; k <= maxLag; k++) {
+    const w = weight(k);
+    if (w !== 0) sum += 2 * w * autocovarianceOfCentred(u, k);
   }
-  return gamma;
+  return sum;
 }
 
 // src/statistics/bartlettLongRunVariance.ts
 function bartlettLongRunVariance(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k];
-  return sum;
+  return weightedAutocovarianceSum(x, lag, bartlettWeights(lag));
+}
+function bartlettWeights(lag) {
+  return (k) => k <= lag ? 1 - k / (lag + 1) : 0;
 }
 
 // src/statistics/neweyWestLag.ts
@@ -52345,19 +52882,19 @@ var PREWHITENING_CAP = 0.97;
 function prewhitenedLongRunVariance(y, rule, horizon) {
   const n = y.length;
   if (n < 3) throw new RangeError(`prewhitenedLongRunVariance: needs at least 3 values, got ${n}`);
-  const centre2 = mean(y);
+  const centre = mean(y);
   let cross = 0;
   let square = 0;
   for (let t = 1; t < n; t++) {
-    const previous = y[t - 1] - centre2;
-    cross += (y[t] - centre2) * previous;
+    const previous = y[t - 1] - centre;
+    cross += (y[t] - centre) * previous;
     square += previous * previous;
   }
   const raw = square === 0 ? 0 : cross / square;
   const coefficient = Math.max(-PREWHITENING_CAP, Math.min(PREWHITENING_CAP, raw));
   const residuals = new Float64Array(n - 1);
   for (let t = 1; t < n; t++) {
-    residuals[t - 1] = y[t] - centre2 - coefficient * (y[t - 1] - centre2);
+    residuals[t - 1] = y[t] - centre - coefficient * (y[t - 1] - centre);
   }
   const lag = selectLag(residuals, rule, horizon).lag;
   const recolour = (1 - coefficient) ** 2;
@@ -52617,6 +53154,18 @@ function measuredCoverage(kind, n, level) {
   return coverage < level - 0.02 ? { coverage, level, studiedN } : null;
 }
 
+// src/statistics/bootstrap/sampleStandardDeviation.ts
+function sampleStandardDeviation(values) {
+  const m = values.length;
+  if (m < 2) return 0;
+  let sum = 0;
+  for (let i = 0; i < m; i++) sum += values[i];
+  const centre = sum / m;
+  let squares = 0;
+  for (let i = 0; i < m; i++) squares += (values[i] - centre) ** 2;
+  return Math.sqrt(squares / (m - 1));
+}
+
 // src/statistics/bootstrap/basicBootstrapInference.ts
 function tailProbability(level) {
   return Number((1 - level).toPrecision(15));
@@ -52635,8 +53184,13 @@ function minimumResamples(level) {
   while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
   return resamples;
 }
-function basicBootstrapInference(reflectedSorted, margin, level) {
-  const resamples = reflectedSorted.length;
+function reflectedSorted(estimate, deviations) {
+  const reflected = new Float64Array(deviations.length);
+  for (let b = 0; b < deviations.length; b++) reflected[b] = estimate - deviations[b];
+  return reflected.sort();
+}
+function basicBootstrapInference(reflectedSorted2, margin, level) {
+  const resamples = reflectedSorted2.length;
   const alpha = tailProbability(level);
   const kTwo = tailOrderStatistic(alpha / 2, resamples);
   const kOne = tailOrderStatistic(alpha, resamples);
@@ -52648,7 +53202,7 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
   let atOrBelow = 0;
   let atOrAbove = 0;
   for (let b = 0; b < resamples; b++) {
-    const u = reflectedSorted[b];
+    const u = reflectedSorted2[b];
     if (u <= margin) atOrBelow++;
     if (u >= margin) atOrAbove++;
   }
@@ -52657,13 +53211,24 @@ function basicBootstrapInference(reflectedSorted, margin, level) {
   return {
     interval: {
       level,
-      lower: reflectedSorted[kTwo - 1],
-      upper: reflectedSorted[resamples - kTwo]
+      lower: reflectedSorted2[kTwo - 1],
+      upper: reflectedSorted2[resamples - kTwo]
     },
-    oneSidedLower: { level, alpha, lower: reflectedSorted[kOne - 1] },
+    oneSidedLower: { level, alpha, lower: reflectedSorted2[kOne - 1] },
     pValue: pValue2,
     pValueBelow: pAbove,
     pValueTwoSided: Math.min(1, 2 * Math.min(pValue2, pAbove))
+  };
+}
+function basicSummary(estimate, deviations, margin, level) {
+  const inference = basicBootstrapInference(reflectedSorted(estimate, deviations), margin, level);
+  return {
+    standardError: sampleStandardDeviation(deviations),
+    interval: { ...inference.interval, method: "basic" },
+    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
+    pValue: inference.pValue,
+    pValueBelow: inference.pValueBelow,
+    pValueTwoSided: inference.pValueTwoSided
   };
 }
 
@@ -52834,9 +53399,7 @@ function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length))
       `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
     );
   }
-  const centre2 = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t] - centre2;
+  const u = centred(x);
   const cosTable = new Float64Array(n + 1);
   for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
   const period = 4 * n;
@@ -52884,10 +53447,10 @@ function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
 
 // src/statistics/uniformLongRunVariance.ts
 function uniformWeightSum(x, lag) {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0];
-  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k];
-  return sum;
+  return weightedAutocovarianceSum(x, lag, uniformWeights(lag));
+}
+function uniformWeights(lag) {
+  return (k) => k <= lag ? 1 : 0;
 }
 function uniformLongRunVariance(x, lag) {
   const uniformValue = uniformWeightSum(x, lag);
@@ -53336,23 +53899,16 @@ function degenerate(base, blockLength, notes) {
   };
 }
 
-// src/statistics/bootstrap/centring.ts
-function centre(d) {
+// src/statistics/bootstrap/centredPrefixSums.ts
+function centredPrefixSums(d, mean2) {
   const n = d.length;
-  const mean2 = meanOf(d);
-  const centred = new Float64Array(n);
-  for (let t = 0; t < n; t++) centred[t] = d[t] - mean2;
-  return centred;
-}
-function meanOf(d) {
-  let sum = 0;
-  for (let t = 0; t < d.length; t++) sum += d[t];
-  return sum / d.length;
-}
-function lagProduct(u, k) {
-  let sum = 0;
-  for (let t = k; t < u.length; t++) sum += u[t] * u[t - k];
-  return sum;
+  const prefix2 = new Float64Array(2 * n + 1);
+  let running = 0;
+  for (let i = 0; i < 2 * n; i++) {
+    running += d[i < n ? i : i - n] - mean2;
+    prefix2[i + 1] = running;
+  }
+  return prefix2;
 }
 
 // src/random/aliasTable.ts
@@ -53443,108 +53999,10 @@ function createGeometricSampler(mean2) {
   };
 }
 
-// src/statistics/bootstrap/centredPrefixSums.ts
-function centredPrefixSums(d, mean2) {
-  const n = d.length;
-  const prefix2 = new Float64Array(2 * n + 1);
-  let running = 0;
-  for (let i = 0; i < 2 * n; i++) {
-    running += d[i < n ? i : i - n] - mean2;
-    prefix2[i + 1] = running;
-  }
-  return prefix2;
-}
-
-// src/statistics/bootstrap/resampleMeanDeviation.ts
-function resampleMeanDeviation(prefix2, n, blocks) {
-  const { starts, lengths, count } = blocks;
-  let sum = 0;
-  for (let i = 0; i < count; i++) {
-    const s = starts[i];
-    sum += prefix2[s + lengths[i]] - prefix2[s];
-  }
-  return sum / n;
-}
-
-// src/statistics/bootstrap/sampleStandardDeviation.ts
-function sampleStandardDeviation(values) {
-  const m = values.length;
-  if (m < 2) return 0;
-  let sum = 0;
-  for (let i = 0; i < m; i++) sum += values[i];
-  const centre2 = sum / m;
-  let squares = 0;
-  for (let i = 0; i < m; i++) squares += (values[i] - centre2) ** 2;
-  return Math.sqrt(squares / (m - 1));
-}
-
-// src/random/uniformIndex.ts
-var TWO_POW_322 = 4294967296;
-var LEMIRE_LIMIT = 2097152;
-function uniformIndex(random, n) {
-  if (n <= 1) return 0;
-  if (n <= LEMIRE_LIMIT) {
-    let m = random.nextUint32() * n;
-    let high = Math.floor(m / TWO_POW_322);
-    let low = m - high * TWO_POW_322;
-    if (low < n) {
-      const threshold = TWO_POW_322 % n;
-      while (low < threshold) {
-        m = random.nextUint32() * n;
-        high = Math.floor(m / TWO_POW_322);
-        low = m - high * TWO_POW_322;
-      }
-    }
-    return high;
-  }
-  const shift = Math.clz32(n - 1);
-  for (; ; ) {
-    const candidate = shift === 0 ? random.nextUint32() : random.nextUint32() >>> shift;
-    if (candidate < n) return candidate;
-  }
-}
-
-// src/statistics/bootstrap/stationaryBlocks.ts
-function allocateStationaryBlocks(n) {
-  return { starts: new Int32Array(n), lengths: new Int32Array(n), count: 0 };
-}
-function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlocks(n)) {
-  const { starts, lengths } = into;
-  let filled = 0;
-  let count = 0;
-  while (filled < n) {
-    starts[count] = uniformIndex(random, n);
-    const length = sampler.sample(random, n - filled);
-    lengths[count] = length;
-    filled += length;
-    count++;
-  }
-  into.count = count;
-  return into;
-}
-
-// src/statistics/bootstrap/resampleHistogram.ts
-function resampleHistogram(mean2, deviations, bins = 40) {
-  if (deviations.length === 0) return null;
-  let lo2 = Number.POSITIVE_INFINITY;
-  let hi2 = Number.NEGATIVE_INFINITY;
-  for (const t of deviations) {
-    lo2 = Math.min(lo2, mean2 + t);
-    hi2 = Math.max(hi2, mean2 + t);
-  }
-  const counts = new Array(bins).fill(0);
-  const width = hi2 - lo2;
-  for (const t of deviations) {
-    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
-    counts[j]++;
-  }
-  return { lower: lo2, upper: hi2, counts };
-}
-
 // src/statistics/bootstrap/resampleDeviationsInline.ts
-var TWO_POW_323 = 4294967296;
-var TWO_POW_MINUS_32 = 1 / TWO_POW_323;
-var LEMIRE_LIMIT2 = 2097152;
+var TWO_POW_322 = 4294967296;
+var TWO_POW_MINUS_32 = 1 / TWO_POW_322;
+var LEMIRE_LIMIT = 2097152;
 function resampleDeviationsInline(prefix2, n, sampler, source, count) {
   if (sampler.inline === null) return unitBlocks(prefix2, n, source, count);
   return geometricBlocks(prefix2, n, sampler, source, count);
@@ -53553,7 +54011,7 @@ function unitBlocks(prefix2, n, source, count) {
   const P32 = 4294967296;
   const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
-  const lemire = n <= LEMIRE_LIMIT2;
+  const lemire = n <= LEMIRE_LIMIT;
   const threshold = P32 % n;
   const maskShift = Math.clz32(n - 1);
   let s00 = source.s00;
@@ -53694,7 +54152,7 @@ function geometricBlocks(prefix2, n, sampler, source, count) {
   const INV32 = 1 / 4294967296;
   const out = new Float64Array(count);
   const inline = sampler.inline;
-  const lemire = n <= LEMIRE_LIMIT2;
+  const lemire = n <= LEMIRE_LIMIT;
   const threshold = P32 % n;
   const maskShift = Math.clz32(n - 1);
   let s00 = source.s00;
@@ -53835,7 +54293,7 @@ function rejectedStart(source, n, threshold) {
   for (; ; ) {
     const m = source.nextUint32() * n;
     const high = Math.floor(m * TWO_POW_MINUS_32);
-    if (m - high * TWO_POW_323 >= threshold) return high;
+    if (m - high * TWO_POW_322 >= threshold) return high;
   }
 }
 function bitmaskStart(source, n, maskShift) {
@@ -53852,6 +54310,62 @@ function finishLength(source, sampler, column, coin, cut, cap) {
   if (outcome !== truncation) return Math.min(outcome + 1, cap);
   if (truncation >= cap) return cap;
   return truncation + sampler.sample(source, cap - truncation);
+}
+
+// src/statistics/bootstrap/resampleMeanDeviation.ts
+function resampleMeanDeviation(prefix2, n, blocks) {
+  const { starts, lengths, count } = blocks;
+  let sum = 0;
+  for (let i = 0; i < count; i++) {
+    const s = starts[i];
+    sum += prefix2[s + lengths[i]] - prefix2[s];
+  }
+  return sum / n;
+}
+
+// src/random/uniformIndex.ts
+var TWO_POW_323 = 4294967296;
+var LEMIRE_LIMIT2 = 2097152;
+function uniformIndex(random, n) {
+  if (n <= 1) return 0;
+  if (n <= LEMIRE_LIMIT2) {
+    let m = random.nextUint32() * n;
+    let high = Math.floor(m / TWO_POW_323);
+    let low = m - high * TWO_POW_323;
+    if (low < n) {
+      const threshold = TWO_POW_323 % n;
+      while (low < threshold) {
+        m = random.nextUint32() * n;
+        high = Math.floor(m / TWO_POW_323);
+        low = m - high * TWO_POW_323;
+      }
+    }
+    return high;
+  }
+  const shift = Math.clz32(n - 1);
+  for (; ; ) {
+    const candidate = shift === 0 ? random.nextUint32() : random.nextUint32() >>> shift;
+    if (candidate < n) return candidate;
+  }
+}
+
+// src/statistics/bootstrap/stationaryBlocks.ts
+function allocateStationaryBlocks(n) {
+  return { starts: new Int32Array(n), lengths: new Int32Array(n), count: 0 };
+}
+function drawStationaryBlocks(n, sampler, random, into = allocateStationaryBlocks(n)) {
+  const { starts, lengths } = into;
+  let filled = 0;
+  let count = 0;
+  while (filled < n) {
+    starts[count] = uniformIndex(random, n);
+    const length = sampler.sample(random, n - filled);
+    lengths[count] = length;
+    filled += length;
+    count++;
+  }
+  into.count = count;
+  return into;
 }
 
 // src/statistics/bootstrap/resampleJob.ts
@@ -53890,6 +54404,36 @@ function resampleDeviationsGeneric(prefix2, n, sampler, random, count) {
   return out;
 }
 
+// src/statistics/bootstrap/eachStationaryResample.ts
+function forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, visit) {
+  const sampler = createGeometricSampler(expectedBlockLength);
+  const blocks = allocateStationaryBlocks(n);
+  const streams = randomStreams(random, seed, 0);
+  for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
+    const source = streams.next();
+    const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
+    for (let b = first; b < last; b++) visit(b, drawStationaryBlocks(n, sampler, source, blocks));
+  }
+}
+
+// src/statistics/bootstrap/resampleHistogram.ts
+function resampleHistogram(mean2, deviations, bins = 40) {
+  if (deviations.length === 0) return null;
+  let lo2 = Number.POSITIVE_INFINITY;
+  let hi2 = Number.NEGATIVE_INFINITY;
+  for (const t of deviations) {
+    lo2 = Math.min(lo2, mean2 + t);
+    hi2 = Math.max(hi2, mean2 + t);
+  }
+  const counts = new Array(bins).fill(0);
+  const width = hi2 - lo2;
+  for (const t of deviations) {
+    const j = width === 0 ? 0 : Math.min(bins - 1, Math.floor((mean2 + t - lo2) / width * bins));
+    counts[j]++;
+  }
+  return { lower: lo2, upper: hi2, counts };
+}
+
 // src/statistics/bootstrap/stationaryBootstrap.ts
 var MINIMUM_BOOTSTRAP_LENGTH = 2;
 function stationaryBootstrap(d, options, random = createRandomSource, runner = runResampleJob) {
@@ -53923,7 +54467,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
   }
   const constant = d.every((x) => x === d[0]);
   const identical = constant && d[0] === 0;
-  const mean2 = constant ? d[0] : meanOf(d);
+  const sampleMean = constant ? d[0] : mean(d);
   let deviations;
   if (identical) {
     notes.push("every loss differential is 0 (identical forecasts); no resampling needed");
@@ -53935,7 +54479,7 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
     }
     deviations = stationaryResampleDeviations(
       d,
-      mean2,
+      sampleMean,
       expectedBlockLength,
       resamples,
       seed,
@@ -53943,22 +54487,12 @@ function stationaryBootstrap(d, options, random = createRandomSource, runner = r
       runner
     );
   }
-  const standardError = sampleStandardDeviation(deviations);
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = mean2 - deviations[b];
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
   return {
     state: identical ? "identical" : "ok",
     ...base,
-    mean: mean2,
-    standardError,
-    interval: { ...inference.interval, method: "basic" },
-    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
-    pValue: inference.pValue,
-    pValueBelow: inference.pValueBelow,
-    pValueTwoSided: inference.pValueTwoSided,
-    distribution: resampleHistogram(mean2, deviations),
+    mean: sampleMean,
+    ...basicSummary(sampleMean, deviations, margin, confidence),
+    distribution: resampleHistogram(sampleMean, deviations),
     notes
   };
 }
@@ -54020,8 +54554,8 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
       notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`]
     };
   }
-  const candidateMean = meanOf(candidateLoss);
-  const baselineMean = meanOf(baselineLoss);
+  const candidateMean = mean(candidateLoss);
+  const baselineMean = mean(baselineLoss);
   if (!(baselineMean > 0)) {
     return {
       state: "baseline-zero",
@@ -54041,41 +54575,30 @@ function relativeDifferenceBootstrap(candidateLoss, baselineLoss, options, rando
   } else {
     const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
     const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
-    const sampler = createGeometricSampler(expectedBlockLength);
-    const blocks = allocateStationaryBlocks(n);
     let zeroDenominators = 0;
-    const streams = randomStreams(random, seed, 0);
-    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
-      const source = streams.next();
-      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
-      for (let b = first; b < last; b++) {
-        drawStationaryBlocks(n, sampler, source, blocks);
-        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
-        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
-        const c = candidateMean + candidateDeviations[b];
-        const base = baselineMean + baselineDeviations[b];
-        if (base === 0) zeroDenominators++;
-        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
-        deviations[b] = theta - estimate;
-      }
-    }
+    forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, (b, blocks) => {
+      candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+      baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+      const c = candidateMean + candidateDeviations[b];
+      const base = baselineMean + baselineDeviations[b];
+      if (base === 0) zeroDenominators++;
+      const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+      deviations[b] = theta - estimate;
+    });
     if (zeroDenominators > 0) {
       notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (\u03B8* infinite)`);
     }
   }
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b];
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
+  const summary2 = basicSummary(estimate, deviations, margin, confidence);
   return {
     state: identical ? "identical" : "ok",
     ...empty,
     relativeDifference: estimate,
-    standardError: sampleStandardDeviation(deviations),
-    interval: { ...inference.interval, method: "basic" },
-    oneSidedLower: { ...inference.oneSidedLower, method: "basic" },
-    pValue: inference.pValue,
-    pValueTwoSided: inference.pValueTwoSided,
+    standardError: summary2.standardError,
+    interval: summary2.interval,
+    oneSidedLower: summary2.oneSidedLower,
+    pValue: summary2.pValue,
+    pValueTwoSided: summary2.pValueTwoSided,
     resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
     notes
   };
@@ -54118,13 +54641,11 @@ function runBootstrap(d, series, hypothesis, settings, runner, difference = d) {
 }
 function differenceInterval(difference, deviations, level) {
   if (deviations === null) return null;
-  const centre2 = meanOf(difference);
-  const reflected = new Float64Array(deviations.candidate.length);
-  for (let b = 0; b < reflected.length; b++) {
-    reflected[b] = centre2 - (deviations.candidate[b] - deviations.baseline[b]);
+  const shifts = new Float64Array(deviations.candidate.length);
+  for (let b = 0; b < shifts.length; b++) {
+    shifts[b] = deviations.candidate[b] - deviations.baseline[b];
   }
-  reflected.sort();
-  const { interval } = basicBootstrapInference(reflected, 0, level);
+  const { interval } = basicBootstrapInference(reflectedSorted(mean(difference), shifts), 0, level);
   return { ...interval, method: "basic" };
 }
 
@@ -54307,7 +54828,7 @@ function runDieboldMariano(d, horizon, hypothesis, settings, difference = d) {
     lagSeries: difference
   };
   const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
-  const upper = result.smallSample?.pValue ?? result.pValue;
+  const upper = smallSampleValue(result);
   const decisionPValue = upper === null ? null : hypothesis.rejectWhen === "above" ? upper : 1 - upper;
   const unshifted = difference === d ? result : dieboldMariano(difference, { ...options, margin: 0 });
   return {
@@ -54598,7 +55119,7 @@ function evaluatePanel(panel, settings, extras = {}) {
       worse,
       shareWorse: worse / perPath.length,
       significantlyWorse: perPath.filter((c) => {
-        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        const p = smallSampleValue(c.dieboldMariano);
         return p !== null && p <= settings.alpha;
       }).length
     };
@@ -54646,7 +55167,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
     const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
-    upper.push(dm.smallSample?.pValue ?? dm.pValue);
+    upper.push(smallSampleValue(dm));
     return compareLossSeries(series, scope("all", name), hypothesis, settings, {
       bootstrap: false
     });
@@ -54654,7 +55175,7 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
   const adjust = ADJUSTMENTS[settings.adjust].adjust;
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => p === null ? null : 1 - p));
-  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const tested = raw.map((c) => smallSampleValue(c.dieboldMariano));
   const policyP = hypothesis.rejectWhen === "above" ? adjust(tested) : adjust(tested.map((p) => p === null ? null : 1 - p));
   let worse = 0;
   let better = 0;
@@ -55321,26 +55842,12 @@ function describeTableRow(table2, i) {
 function checkRows(input) {
   const { tables } = input;
   if (tables.some((t) => t.origin === null)) {
-    const reason = "the predictions files have no origin column";
-    return {
-      findings: [],
-      notRun: [
-        { id: "look-ahead", reason },
-        { id: "horizon-steps", reason },
-        { id: "origin-after-actuals", reason }
-      ]
-    };
+    return noneRun("the predictions files have no origin column");
   }
   if (input.timestampKind === "text" || input.originKind !== input.timestampKind) {
-    const reason = input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`;
-    return {
-      findings: [],
-      notRun: [
-        { id: "look-ahead", reason },
-        { id: "horizon-steps", reason },
-        { id: "origin-after-actuals", reason }
-      ]
-    };
+    return noneRun(
+      input.timestampKind === "text" ? "timestamps are in text order (neither all numbers nor all ISO 8601)" : `origins are ${input.originKind === "number" ? "numbers" : input.originKind} but timestamps are ${input.timestampKind === "number" ? "numbers" : input.timestampKind}, so they cannot be compared`
+    );
   }
   const kind = input.timestampKind;
   const lookAhead = new FindingCollector();
@@ -55399,6 +55906,16 @@ function checkRows(input) {
     });
   }
   return { findings, notRun };
+}
+function noneRun(reason) {
+  return {
+    findings: [],
+    notRun: [
+      { id: "look-ahead", reason },
+      { id: "horizon-steps", reason },
+      { id: "origin-after-actuals", reason }
+    ]
+  };
 }
 
 // src/integrity/checkBacktest.ts
@@ -55589,7 +56106,7 @@ function sharedResampleDeviations(series, options, random = createRandomSource, 
     if (x.length !== n) throw new RangeError("shared resamples need series of one length");
     return stationaryResampleDeviations(
       x,
-      meanOf(x),
+      mean(x),
       options.expectedBlockLength,
       options.resamples,
       options.seed,
@@ -55608,20 +56125,11 @@ function stationaryBootstrapVariance(d, expectedBlockLength) {
       `expected block length must be a finite number \u2265 1, got ${expectedBlockLength}`
     );
   }
-  const u = centre(d);
   const q = 1 - 1 / expectedBlockLength;
   const negligible = 1e-17 / n;
   const near = q === 0 ? 0 : Math.min(n - 1, Math.ceil(Math.log(negligible) / Math.log(q)));
-  let sum = lagProduct(u, 0) / n;
-  for (let k = 1; k < n; k++) {
-    if (k > near && n - k > near) {
-      k = n - near - 1;
-      continue;
-    }
-    const weight = (1 - k / n) * q ** k + k / n * q ** (n - k);
-    if (weight !== 0) sum += 2 * weight * (lagProduct(u, k) / n);
-  }
-  return sum / n;
+  const weight = (k) => k > near && n - k > near ? 0 : (1 - k / n) * q ** k + k / n * q ** (n - k);
+  return weightedAutocovarianceSum(d, n - 1, weight) / n;
 }
 
 // src/statistics/realityCheck.ts
@@ -55711,7 +56219,7 @@ function superiorAbilityTest(baseline, candidates, deviations, expectedBlockLeng
     for (let b = 0; b < x.length; b++) x[b] = sign * (factor * base[b] - own[b]);
     return x;
   });
-  const means = performance2.map(meanOf);
+  const means = performance2.map(mean);
   const standardErrors = performance2.map(
     (x) => Math.sqrt(Math.max(0, stationaryBootstrapVariance(x, expectedBlockLength)))
   );
@@ -55788,7 +56296,7 @@ function evaluateCandidates(input, settings, extras = {}) {
     hypothesis,
     spaMargin(settings, hypothesis)
   );
-  const means = models.map(meanOf);
+  const means = models.map(mean);
   const mcs = modelConfidenceSet({
     means,
     deviations,
@@ -56107,14 +56615,8 @@ var LossSeriesReader = class {
   constructor(path8, options) {
     this.path = path8;
     this.timestampName = options.timestampColumn ?? "timestamp";
-    const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
-    this.decimalComma = options.decimal === ",";
-    if (this.decimalComma && delimiter3 === ",") {
-      throw new InputError(
-        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path8 }
-      );
-    }
+    const { delimiter: delimiter3, decimalComma } = textDialect(path8, options);
+    this.decimalComma = decimalComma;
     this.tokenizer = new Tokenizer(
       delimiter3,
       (fields, count, line2) => this.record(fields, count, line2),
@@ -56193,7 +56695,7 @@ var LossSeriesReader = class {
     const at = (name) => fields[index[name]];
     const number = (name) => {
       const text2 = at(name);
-      const x = this.decimalComma ? text2.includes(".") ? Number.NaN : parseDecimal(text2.replace(",", ".")) : parseDecimal(text2);
+      const x = this.decimalComma ? parseDecimalComma(text2) : parseDecimal(text2);
       if (Number.isNaN(x)) {
         throw new InputError("not a finite decimal number", {
           file: this.path,

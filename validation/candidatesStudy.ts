@@ -2,7 +2,7 @@ import { commonBlockLength } from '../src/candidates/commonBlockLength.js';
 import { sharedResampleDeviations } from '../src/candidates/sharedResampleDeviations.js';
 import { superiorAbilityTest } from '../src/candidates/superiorAbilityTest.js';
 import { createRandomSource, type RandomSource } from '../src/random/randomSource.js';
-import { meanOf } from '../src/statistics/bootstrap/centring.js';
+import { mean } from '../src/statistics/mean.js';
 import { modelConfidenceSet } from '../src/statistics/modelConfidenceSet.js';
 
 /**
@@ -84,7 +84,7 @@ export function runCandidatesStudy(
       if (t.spa.pValueUpper <= options.alpha) counts.upper++;
       if (t.realityCheck.pValue <= options.alpha) counts.realityCheck++;
     }
-    const means = losses.map(meanOf);
+    const means = losses.map(mean);
     for (const statistic of ['range', 'max'] as const) {
       const set = modelConfidenceSet({ means, deviations, statistic, alpha: options.setAlpha });
       const c = mcs[statistic];

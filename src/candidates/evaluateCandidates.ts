@@ -6,7 +6,7 @@ import { createRandomSource } from '../random/randomSource.js';
 import type { ForecastTable } from '../reading/forecastTable.js';
 import type { Report } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
-import { meanOf } from '../statistics/bootstrap/centring.js';
+import { mean } from '../statistics/mean.js';
 import { modelConfidenceSet } from '../statistics/modelConfidenceSet.js';
 import type {
   CandidateSummary,
@@ -119,7 +119,7 @@ export function evaluateCandidates(
     hypothesis,
     spaMargin(settings, hypothesis),
   );
-  const means = models.map(meanOf);
+  const means = models.map(mean);
   const mcs = modelConfidenceSet({
     means,
     deviations,

@@ -1,7 +1,7 @@
 import { createRandomSource, type SequentialRandomSourceFactory } from '../random/randomSource.js';
-import { meanOf } from '../statistics/bootstrap/centring.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { stationaryResampleDeviations } from '../statistics/bootstrap/stationaryBootstrap.js';
+import { mean } from '../statistics/mean.js';
 
 /**
  * The stationary-bootstrap deviations L̄*_b,i − L̄_i of several loss series on ONE draw of
@@ -30,7 +30,7 @@ export function sharedResampleDeviations(
     if (x.length !== n) throw new RangeError('shared resamples need series of one length');
     return stationaryResampleDeviations(
       x,
-      meanOf(x),
+      mean(x),
       options.expectedBlockLength,
       options.resamples,
       options.seed,

@@ -1,5 +1,5 @@
-import { meanOf } from '../statistics/bootstrap/centring.js';
 import { stationaryBootstrapVariance } from '../statistics/bootstrap/stationaryBootstrapVariance.js';
+import { mean } from '../statistics/mean.js';
 import { type RealityCheckResult, realityCheck } from '../statistics/realityCheck.js';
 import {
   type SuperiorPredictiveAbilityResult,
@@ -63,7 +63,7 @@ export function superiorAbilityTest(
     for (let b = 0; b < x.length; b++) x[b] = sign * (factor * base[b]! - own[b]!);
     return x;
   });
-  const means = performance.map(meanOf);
+  const means = performance.map(mean);
   const standardErrors = performance.map((x) =>
     Math.sqrt(Math.max(0, stationaryBootstrapVariance(x, expectedBlockLength))),
   );

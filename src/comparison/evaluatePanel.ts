@@ -18,6 +18,7 @@ import type { SeriesScale } from '../scaling/seriesScale.js';
 import type { Settings } from '../settings/settings.js';
 import { assessStability } from '../stability/assessStability.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
+import { smallSampleValue } from '../statistics/smallSampleValue.js';
 import { type ComparisonScope, compareLossSeries } from './compareLossSeries.js';
 import { runDieboldMariano } from './runDieboldMariano.js';
 
@@ -84,7 +85,7 @@ export function evaluatePanel(
       worse,
       shareWorse: worse / perPath.length,
       significantlyWorse: perPath.filter((c) => {
-        const p = c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue;
+        const p = smallSampleValue(c.dieboldMariano);
         return p !== null && p <= settings.alpha;
       }).length,
     };
@@ -166,7 +167,7 @@ function seriesComparisons(
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
     const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
-    upper.push(dm.smallSample?.pValue ?? dm.pValue);
+    upper.push(smallSampleValue(dm));
     return compareLossSeries(series, scope('all', name), hypothesis, settings, {
       bootstrap: false,
     });
@@ -177,7 +178,7 @@ function seriesComparisons(
   const worseP = adjust(upper);
   const betterP = adjust(upper.map((p) => (p === null ? null : 1 - p)));
   // The policy's direction, on the tested (margin-shifted) differential, for the verdicts.
-  const tested = raw.map((c) => c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue);
+  const tested = raw.map((c) => smallSampleValue(c.dieboldMariano));
   const policyP =
     hypothesis.rejectWhen === 'above'
       ? adjust(tested)

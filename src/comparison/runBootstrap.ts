@@ -4,11 +4,14 @@ import { createRandomSource } from '../random/randomSource.js';
 import type { BootstrapSummary } from '../report/reportModel.js';
 import type { Settings } from '../settings/settings.js';
 import { automaticBlockLength } from '../statistics/bootstrap/automaticBlockLength.js';
-import { basicBootstrapInference } from '../statistics/bootstrap/basicBootstrapInference.js';
-import { meanOf } from '../statistics/bootstrap/centring.js';
+import {
+  basicBootstrapInference,
+  reflectedSorted,
+} from '../statistics/bootstrap/basicBootstrapInference.js';
 import { relativeDifferenceBootstrap } from '../statistics/bootstrap/relativeDifferenceBootstrap.js';
 import type { ResampleRunner } from '../statistics/bootstrap/resampleJob.js';
 import { stationaryBootstrap } from '../statistics/bootstrap/stationaryBootstrap.js';
+import { mean } from '../statistics/mean.js';
 
 export interface BootstrapRun {
   readonly summary: BootstrapSummary;
@@ -79,12 +82,10 @@ function differenceInterval(
   level: number,
 ): BootstrapSummary['interval'] {
   if (deviations === null) return null;
-  const centre = meanOf(difference);
-  const reflected = new Float64Array(deviations.candidate.length);
-  for (let b = 0; b < reflected.length; b++) {
-    reflected[b] = centre - (deviations.candidate[b]! - deviations.baseline[b]!);
+  const shifts = new Float64Array(deviations.candidate.length);
+  for (let b = 0; b < shifts.length; b++) {
+    shifts[b] = deviations.candidate[b]! - deviations.baseline[b]!;
   }
-  reflected.sort();
-  const { interval } = basicBootstrapInference(reflected, 0, level);
+  const { interval } = basicBootstrapInference(reflectedSorted(mean(difference), shifts), 0, level);
   return { ...interval, method: 'basic' };
 }

@@ -4,6 +4,7 @@ import type { Settings } from '../settings/settings.js';
 import { type DieboldMarianoResult, dieboldMariano } from '../statistics/dieboldMariano.js';
 import { standardNormalQuantile, studentTQuantile } from '../statistics/distributions.js';
 import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbold.js';
+import { smallSampleValue } from '../statistics/smallSampleValue.js';
 
 /**
  * Runs the Diebold–Mariano test on the tested differential and adds what the report and the
@@ -33,7 +34,7 @@ export function runDieboldMariano(
     lagSeries: difference,
   };
   const result = dieboldMariano(d, { ...options, margin: hypothesis.boundary });
-  const upper = result.smallSample?.pValue ?? result.pValue;
+  const upper = smallSampleValue(result);
   const decisionPValue =
     upper === null ? null : hypothesis.rejectWhen === 'above' ? upper : 1 - upper;
   // The interval is for E[L_c − L_b], the difference printed beside it, at every margin.

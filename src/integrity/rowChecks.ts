@@ -40,29 +40,14 @@ export function checkRows(input: RowCheckInput): {
 } {
   const { tables } = input;
   if (tables.some((t) => t.origin === null)) {
-    const reason = 'the predictions files have no origin column';
-    return {
-      findings: [],
-      notRun: [
-        { id: 'look-ahead', reason },
-        { id: 'horizon-steps', reason },
-        { id: 'origin-after-actuals', reason },
-      ],
-    };
+    return noneRun('the predictions files have no origin column');
   }
   if (input.timestampKind === 'text' || input.originKind !== input.timestampKind) {
-    const reason =
+    return noneRun(
       input.timestampKind === 'text'
         ? 'timestamps are in text order (neither all numbers nor all ISO 8601)'
-        : `origins are ${input.originKind === 'number' ? 'numbers' : input.originKind} but timestamps are ${input.timestampKind === 'number' ? 'numbers' : input.timestampKind}, so they cannot be compared`;
-    return {
-      findings: [],
-      notRun: [
-        { id: 'look-ahead', reason },
-        { id: 'horizon-steps', reason },
-        { id: 'origin-after-actuals', reason },
-      ],
-    };
+        : `origins are ${input.originKind === 'number' ? 'numbers' : input.originKind} but timestamps are ${input.timestampKind === 'number' ? 'numbers' : input.timestampKind}, so they cannot be compared`,
+    );
   }
   const kind = input.timestampKind;
   const lookAhead = new FindingCollector();
@@ -121,4 +106,16 @@ export function checkRows(input: RowCheckInput): {
     });
   }
   return { findings, notRun };
+}
+
+/** None of the three row checks could run, all for the same reason. */
+function noneRun(reason: string): { findings: CheckFinding[]; notRun: CheckNotRun[] } {
+  return {
+    findings: [],
+    notRun: [
+      { id: 'look-ahead', reason },
+      { id: 'horizon-steps', reason },
+      { id: 'origin-after-actuals', reason },
+    ],
+  };
 }

@@ -30,7 +30,7 @@ export class FoldLayoutReader {
     );
   }
 
-  push(chunk: string): void {
+  push(chunk: string | Uint8Array): void {
     this.tokenizer.push(chunk);
   }
 

@@ -2,9 +2,9 @@ import { InputError } from '../core/inputError.js';
 import type { FileSummary } from '../core/panel.js';
 import { MAX_LOSS } from '../losses/lossMagnitude.js';
 import type { LabelColumn } from './forecastTable.js';
-import type { Delimiter } from './inputFormat.js';
-import { parseDecimal } from './numbers.js';
-import type { TextFormat } from './tableBuilder.js';
+import { type TextFormat, textDialect } from './formatDetection.js';
+import type { DecimalMark, Delimiter } from './inputFormat.js';
+import { parseDecimal, parseDecimalComma } from './numbers.js';
 import { Tokenizer } from './tokenizer.js';
 
 /**
@@ -57,20 +57,14 @@ export class LossSeriesReader {
       format: TextFormat;
       timestampColumn?: string;
       delimiter?: Delimiter;
-      decimal?: '.' | ',';
+      decimal?: DecimalMark;
       lineLimit?: number;
     },
   ) {
     this.path = path;
     this.timestampName = options.timestampColumn ?? 'timestamp';
-    const delimiter = options.delimiter ?? (options.format === 'tsv' ? '\t' : ',');
-    this.decimalComma = options.decimal === ',';
-    if (this.decimalComma && delimiter === ',') {
-      throw new InputError(
-        'a decimal comma needs a field separator other than the comma (e.g. --delimiter ";")',
-        { file: path },
-      );
-    }
+    const { delimiter, decimalComma } = textDialect(path, options);
+    this.decimalComma = decimalComma;
     this.tokenizer = new Tokenizer(
       delimiter,
       (fields, count, line) => this.record(fields, count, line),
@@ -83,7 +77,7 @@ export class LossSeriesReader {
     return this.tokenizer.lines;
   }
 
-  push(chunk: string): void {
+  push(chunk: string | Uint8Array): void {
     this.tokenizer.push(chunk);
   }
 
@@ -153,11 +147,7 @@ export class LossSeriesReader {
     const at = (name: string) => fields[index[name]!]!;
     const number = (name: string): number => {
       const text = at(name);
-      const x = this.decimalComma
-        ? text.includes('.')
-          ? Number.NaN
-          : parseDecimal(text.replace(',', '.'))
-        : parseDecimal(text);
+      const x = this.decimalComma ? parseDecimalComma(text) : parseDecimal(text);
       if (Number.isNaN(x)) {
         throw new InputError('not a finite decimal number', {
           file: this.path,

@@ -1,7 +1,7 @@
 import { InputError } from '../core/inputError.js';
 import type { FoldLayout } from '../integrity/foldLayout.js';
 import { FoldLayoutReader } from './foldLayoutReader.js';
-import { formatFromPath } from './readForecastFile.js';
+import { formatFromPath } from './formatDetection.js';
 import { streamTextFile } from './streamTextFile.js';
 
 /** Reads the fold layout file given to `--folds` (CSV or TSV, optionally .gz). */

@@ -4,14 +4,13 @@
  */
 import type { ColumnMapping } from './columnMapping.js';
 import type { ForecastTable } from './forecastTable.js';
+import { type FileRole, ForecastTableReader } from './forecastTableReader.js';
+import { type FileFormat, formatFromPath, type TextFormat } from './formatDetection.js';
 import { type DecimalMark, type DelimiterName, delimiterFor } from './inputFormat.js';
 import { streamParquetFile } from './streamParquetFile.js';
 import { streamTextFile } from './streamTextFile.js';
-import { type FileRole, ForecastTableReader, type TextFormat } from './tableBuilder.js';
 
-export type { FileRole } from './tableBuilder.js';
-
-export type FileFormat = TextFormat | 'parquet';
+export type { FileRole } from './forecastTableReader.js';
 
 export interface ReadOptions {
   readonly role: FileRole;
@@ -26,19 +25,6 @@ export interface ReadOptions {
   readonly lineLimit?: number;
   /** Called after each chunk of stored bytes with the bytes read so far and the file size. */
   readonly onProgress?: (bytesRead: number, totalBytes: number) => void;
-}
-
-/**
- * What the file name implies: Parquet by `.parquet`, gzip by a final `.gz`, TSV by `.tsv` before
- * it (any case).
- */
-export function formatFromPath(path: string): { format: FileFormat; gzip: boolean } {
-  const lower = path.toLowerCase();
-  if (lower.endsWith('.parquet') || lower.endsWith('.pq'))
-    return { format: 'parquet', gzip: false };
-  const gzip = lower.endsWith('.gz');
-  const base = gzip ? lower.slice(0, -3) : lower;
-  return { format: base.endsWith('.tsv') ? 'tsv' : 'csv', gzip };
 }
 
 export async function readForecastFile(path: string, options: ReadOptions): Promise<ForecastTable> {
@@ -56,7 +42,11 @@ export async function readForecastFile(path: string, options: ReadOptions): Prom
   const sha256 =
     format === 'parquet'
       ? await streamParquetFile(path, reader, options.onProgress)
-      : await streamTextFile(path, implied.gzip, reader, options.onProgress);
+      : await streamTextFile(path, implied.gzip, reader, (bytesRead, totalBytes) => {
+          // The stored size is the text's size unless it is gzipped.
+          if (!implied.gzip) reader.expectBytes(totalBytes);
+          options.onProgress?.(bytesRead, totalBytes);
+        });
   return reader.finish(sha256);
 }
 

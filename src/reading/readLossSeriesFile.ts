@@ -1,7 +1,7 @@
 import { InputError } from '../core/inputError.js';
+import { type FileFormat, formatFromPath } from './formatDetection.js';
 import { type DecimalMark, type DelimiterName, delimiterFor } from './inputFormat.js';
 import { LossSeriesReader, type LossSeriesTable } from './lossSeriesReader.js';
-import { type FileFormat, formatFromPath } from './readForecastFile.js';
 import { streamTextFile } from './streamTextFile.js';
 
 /** Reads a pre-aggregated loss file (see LossSeriesReader) through the shared file edge. */

@@ -27,7 +27,7 @@ import { pipeline } from 'node:stream/promises';
 import { type AsyncBuffer, type FileMetaData, parquetMetadataAsync, parquetRead } from 'hyparquet';
 import { compressors } from 'hyparquet-compressors';
 import { echo, InputError } from '../core/inputError.js';
-import type { Field, ForecastTableReader } from './tableBuilder.js';
+import type { Field, ForecastTableReader } from './forecastTableReader.js';
 
 const MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
 

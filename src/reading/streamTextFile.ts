@@ -1,21 +1,23 @@
 /**
  * The file edge shared by every reader: streams a file's stored bytes in 1 MiB chunks (hashing
- * them as they pass), gunzips `.gz` files, decodes UTF-8 incrementally and hands the text chunks
- * to `push`. Nothing holds the whole file. File-system errors become InputErrors naming the file.
+ * them as they pass), gunzips `.gz` files, checks that the bytes are UTF-8 text and hands the byte
+ * chunks to `push` (a chunk may end inside a character; the next one completes it). A UTF-8
+ * byte-order mark at the start is removed, as a UTF-8 decoder does. Nothing holds the whole file.
+ * File-system errors become InputErrors naming the file.
  */
+import { isUtf8 } from 'node:buffer';
 import { createHash } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { pipeline } from 'node:stream/promises';
-import { TextDecoder } from 'node:util';
 import { createGunzip } from 'node:zlib';
 import { InputError } from '../core/inputError.js';
 
 const CHUNK_BYTES = 1 << 20;
 
 export interface TextSink {
-  /** Receives the next decoded text chunk (the last call may be an empty string). */
-  push(text: string): void;
+  /** Receives the next chunk of UTF-8 bytes. */
+  push(bytes: Buffer): void;
 }
 
 /** Streams `path` into `sink`; returns "sha256:<hex>" of the stored bytes. */
@@ -34,7 +36,6 @@ export async function streamTextFile(
     throw asInputError(error, path);
   }
   const hash = createHash('sha256');
-  const decoder = new TextDecoder('utf-8', { fatal: true });
   let bytesRead = 0;
   const tap = async function* (source: AsyncIterable<Buffer>): AsyncGenerator<Buffer> {
     for await (const chunk of source) {
@@ -44,29 +45,29 @@ export async function streamTextFile(
       yield chunk;
     }
   };
-  // Line breaks in the bytes decoded so far, to name the line of an invalid byte.
+  // Line breaks in the bytes checked so far, to name the line of an invalid byte.
   let newlines = 0;
+  const check = new Utf8Check();
+  const bom = new LeadingBom();
   const consume = async (source: AsyncIterable<Buffer>): Promise<void> => {
     for await (const chunk of source) {
       const nul = chunk.indexOf(0);
       if (nul >= 0) throw notText(chunk, nul, newlines, path, 'a NUL byte');
-      let text: string;
-      try {
-        text = decoder.decode(chunk, { stream: true });
-      } catch {
+      if (!check.valid(chunk)) {
         throw notText(chunk, firstInvalidUtf8(chunk), newlines, path, 'bytes that are not UTF-8');
       }
       newlines += countByte(chunk, 10);
-      sink.push(text);
+      const text = bom.strip(chunk);
+      if (text.length > 0) sink.push(text);
     }
-    try {
-      sink.push(decoder.decode(undefined, { stream: false }));
-    } catch {
+    if (check.inCharacter) {
       throw new InputError(
         `the file is not valid UTF-8 text: it ends inside a multi-byte character (line ${newlines + 1})`,
         { file: path, line: newlines + 1 },
       );
     }
+    const rest = bom.strip(Buffer.alloc(0), true);
+    if (rest.length > 0) sink.push(rest);
   };
   try {
     const raw = createReadStream(path, { highWaterMark: CHUNK_BYTES });
@@ -77,6 +78,91 @@ export async function streamTextFile(
   }
   return `sha256:${hash.digest('hex')}`;
 }
+
+/**
+ * Checks a stream of chunks as UTF-8 (with Node's native validator), carrying a character that a
+ * chunk boundary cuts into the next chunk. A cut character whose bytes so far cannot start a valid
+ * character fails with its own chunk, as a streaming decoder fails.
+ */
+class Utf8Check {
+  private pending: Buffer = Buffer.alloc(0);
+
+  /** True while the bytes so far end inside a character. */
+  get inCharacter(): boolean {
+    return this.pending.length > 0;
+  }
+
+  valid(chunk: Buffer): boolean {
+    let body = chunk;
+    if (this.pending.length > 0) {
+      const need = sequenceLength(this.pending[0]!) - this.pending.length;
+      const joined = Buffer.concat([this.pending, chunk.subarray(0, need)]);
+      if (joined.length < need + this.pending.length) {
+        this.pending = joined;
+        return validPrefix(joined);
+      }
+      if (!isUtf8(joined)) return false;
+      this.pending = Buffer.alloc(0);
+      body = chunk.subarray(need);
+    }
+    const cut = cutCharacter(body);
+    if (!isUtf8(body.subarray(0, cut))) return false;
+    if (cut < body.length) {
+      this.pending = Buffer.from(body.subarray(cut));
+      return validPrefix(this.pending);
+    }
+    return true;
+  }
+}
+
+/** Bytes in the character a lead byte starts (1 for anything that is not a multi-byte lead). */
+function sequenceLength(lead: number): number {
+  return lead >= 0xf0 && lead <= 0xf4
+    ? 4
+    : lead >= 0xe0
+      ? lead <= 0xef
+        ? 3
+        : 1
+      : lead >= 0xc2
+        ? 2
+        : 1;
+}
+
+/** Where a multi-byte character the end of `bytes` cuts begins, or `bytes.length`. */
+function cutCharacter(bytes: Buffer): number {
+  const n = bytes.length;
+  let k = n;
+  while (k > 0 && n - k < 3 && (bytes[k - 1]! & 0xc0) === 0x80) k--;
+  if (k === 0) return n;
+  const length = sequenceLength(bytes[k - 1]!);
+  return length > 1 && n - (k - 1) < length ? k - 1 : n;
+}
+
+/** Whether the first bytes of a character can still be completed into valid UTF-8. */
+function validPrefix(bytes: Buffer): boolean {
+  if (bytes.length === 1) return true;
+  const padded = Buffer.alloc(sequenceLength(bytes[0]!), 0x80);
+  bytes.copy(padded);
+  return isUtf8(padded);
+}
+
+/** Removes the byte-order mark EF BB BF from the start of a stream of chunks. */
+class LeadingBom {
+  private head: Buffer | null = Buffer.alloc(0);
+
+  strip(chunk: Buffer, last = false): Buffer {
+    if (this.head === null) return chunk;
+    const bytes = this.head.length > 0 ? Buffer.concat([this.head, chunk]) : chunk;
+    if (!last && bytes.length < 3 && BOM.subarray(0, bytes.length).equals(bytes)) {
+      this.head = bytes;
+      return Buffer.alloc(0);
+    }
+    this.head = null;
+    return bytes.subarray(0, 3).equals(BOM) ? bytes.subarray(3) : bytes;
+  }
+}
+
+const BOM = Buffer.from([0xef, 0xbb, 0xbf]);
 
 /**
  * The refusal of bytes that are not UTF-8 text, at their line, with a hint at the likely encoding:

@@ -6,6 +6,7 @@ import {
   type OptionValue,
   settingsAsOptions,
 } from '../settings/settingsAsOptions.js';
+import { smallSampleValue } from '../statistics/smallSampleValue.js';
 import {
   changeCell,
   evidenceOf,
@@ -180,21 +181,13 @@ function detailsTable(report: ReportView, c: ComparisonView): ReportTable {
         : `${significant(dm.smallSample.statistic)} (Harvey–Leybourne–Newbold; raw ${significant(dm.statistic)})`,
       bs.standardError === null ? 'n/a' : `standard error of d̄ ${significant(bs.standardError)}`,
     ],
-    [
-      'p, one-sided: candidate worse',
-      pValue(dm.smallSample?.pValue ?? dm.pValue),
-      pValue(bs.pValue),
-    ],
+    ['p, one-sided: candidate worse', pValue(smallSampleValue(dm)), pValue(bs.pValue)],
     [
       'p, in the policy’s direction (decides)',
       pValue(dm.decisionPValue),
       pValue(bs.decisionPValue),
     ],
-    [
-      'p, two-sided',
-      pValue(dm.smallSample?.pValueTwoSided ?? dm.pValueTwoSided),
-      pValue(bs.pValueTwoSided),
-    ],
+    ['p, two-sided', pValue(smallSampleValue(dm, 'pValueTwoSided')), pValue(bs.pValueTwoSided)],
     ['interval for E[L_candidate − L_baseline]', interval(dm.interval), interval(bs.interval)],
     [
       'rejects H0 at α',
@@ -325,7 +318,7 @@ function pathSection(report: ReportView): ReportSections['paths'] {
               significant(c.meanBaselineLoss),
               significant(c.meanCandidateLoss),
               percent(c.relativeDifference),
-              pValue(c.dieboldMariano.smallSample?.pValue ?? c.dieboldMariano.pValue),
+              pValue(smallSampleValue(c.dieboldMariano)),
             ]),
           ),
   };

@@ -1,11 +1,12 @@
-import { autocovariances } from './autocovariance.js';
+import { type LagWeights, weightedAutocovarianceSum } from './weightedAutocovarianceSum.js';
 
 /**
  * Bartlett-kernel (Newey & West 1987) estimate of the long-run variance ω² = Σ_k γ_k of a series:
  *
  *   ω̂² = γ̂_0 + 2 Σ_{k=1..L} (1 − k/(L+1)) γ̂_k,
  *
- * with γ̂_k the autocovariances about the sample mean divided by n (see `autocovariances`).
+ * with γ̂_k the autocovariances about the sample mean divided by n (see `autocovariances`): the
+ * weighted sum `weightedAutocovarianceSum` with the Bartlett weights (`bartlettWeights`).
  * Never negative in exact arithmetic (Newey & West 1987, Theorem 1). Equals R
  * `sandwich::NeweyWest(lm(x ~ 1), lag = L, prewhite = FALSE, adjust = FALSE) · n` and statsmodels'
  * HAC OLS with `maxlags = L, use_correction = False`, times n. Lag 0 gives γ̂_0.
@@ -14,8 +15,15 @@ import { autocovariances } from './autocovariance.js';
  * @throws RangeError when lag is not an integer in 0..n−1.
  */
 export function bartlettLongRunVariance(x: Float64Array, lag: number): number {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0]!;
-  for (let k = 1; k <= lag; k++) sum += 2 * (1 - k / (lag + 1)) * gamma[k]!;
-  return sum;
+  return weightedAutocovarianceSum(x, lag, bartlettWeights(lag));
+}
+
+/**
+ * The Bartlett (triangular) weights at lag L (Newey & West 1987): w(k) = 1 − k/(L + 1) for
+ * 1 ≤ k ≤ L, and 0 beyond L. Bandwidth L + 1 in Andrews' (1991) notation.
+ *
+ * @example bartlettWeights(3)(1) // 0.75
+ */
+export function bartlettWeights(lag: number): LagWeights {
+  return (k) => (k <= lag ? 1 - k / (lag + 1) : 0);
 }

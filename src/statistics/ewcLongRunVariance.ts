@@ -1,4 +1,4 @@
-import { mean } from './mean.js';
+import { centred } from './autocovariance.js';
 
 /**
  * Degrees of freedom ν of the equal-weighted cosine (EWC) estimator, the rule of Lazarus, Lewis,
@@ -51,9 +51,7 @@ export function ewcLongRunVariance(
       `ewcLongRunVariance: ν must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`,
     );
   }
-  const centre = mean(x);
-  const u = new Float64Array(n);
-  for (let t = 0; t < n; t++) u[t] = x[t]! - centre;
+  const u = centred(x);
 
   const allRows = keptWeights(n, nu);
   const scratch = allRows === null ? new Float64Array(BLOCK * n) : null;

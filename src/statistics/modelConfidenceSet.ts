@@ -66,10 +66,8 @@ export function modelConfidenceSet(input: ModelConfidenceSetInput): ModelConfide
   const pValues = new Array<number>(m).fill(1);
   let running = 0;
   while (alive.length > 1) {
-    const step =
-      statistic === 'range'
-        ? rangeStep(alive, means, deviations, resamples)
-        : maxStep(alive, means, deviations, resamples);
+    const input = { alive, means, deviations, resamples };
+    const step = statistic === 'range' ? rangeStep(input) : maxStep(input);
     const pValue = (1 + step.exceedances) / (resamples + 1);
     running = Math.max(running, pValue);
     order.push(step.eliminate);
@@ -99,17 +97,20 @@ function reaches(resampled: number, observed: number): boolean {
   return resampled >= observed - Math.abs(observed) * 1e-10;
 }
 
+/** One elimination step's data: the models still in the set, all means and resample deviations. */
+interface StepInput {
+  readonly alive: readonly number[];
+  readonly means: readonly number[];
+  readonly deviations: readonly Float64Array[];
+  readonly resamples: number;
+}
+
 interface Step {
   readonly eliminate: number;
   readonly exceedances: number;
 }
 
-function rangeStep(
-  alive: readonly number[],
-  means: readonly number[],
-  deviations: readonly Float64Array[],
-  resamples: number,
-): Step {
+function rangeStep({ alive, means, deviations, resamples }: StepInput): Step {
   const size = alive.length;
   const pairs: { i: number; j: number; scale: number }[] = [];
   const worst = new Array<number>(size).fill(Number.NEGATIVE_INFINITY);
@@ -118,12 +119,7 @@ function rangeStep(
     for (let c = a + 1; c < size; c++) {
       const zi = deviations[alive[a]!]!;
       const zj = deviations[alive[c]!]!;
-      let sum = 0;
-      for (let b = 0; b < resamples; b++) {
-        const x = zi[b]! - zj[b]!;
-        sum += x * x;
-      }
-      const variance = sum / resamples;
+      const variance = meanSquaredDifference(zi, zj, resamples);
       const t = variance > 0 ? (means[alive[a]!]! - means[alive[c]!]!) / Math.sqrt(variance) : 0;
       if (t > worst[a]!) worst[a] = t;
       if (-t > worst[c]!) worst[c] = -t;
@@ -143,12 +139,7 @@ function rangeStep(
   return { eliminate: alive[argmax(worst)]!, exceedances };
 }
 
-function maxStep(
-  alive: readonly number[],
-  means: readonly number[],
-  deviations: readonly Float64Array[],
-  resamples: number,
-): Step {
+function maxStep({ alive, means, deviations, resamples }: StepInput): Step {
   const size = alive.length;
   const average = new Float64Array(resamples);
   for (const i of alive) {
@@ -163,12 +154,7 @@ function maxStep(
   const t = new Array<number>(size);
   for (let a = 0; a < size; a++) {
     const z = deviations[alive[a]!]!;
-    let sum = 0;
-    for (let b = 0; b < resamples; b++) {
-      const x = z[b]! - average[b]!;
-      sum += x * x;
-    }
-    const variance = sum / resamples;
+    const variance = meanSquaredDifference(z, average, resamples);
     scales[a] = variance > 0 ? 1 / Math.sqrt(variance) : 0;
     t[a] = (means[alive[a]!]! - meanOfMeans) * scales[a]!;
   }
@@ -183,6 +169,19 @@ function maxStep(
     if (reaches(max, observed)) exceedances++;
   }
   return { eliminate: alive[argmax(t)]!, exceedances };
+}
+
+/**
+ * (1/B) Σ_b (z_b − w_b)² over the first B resamples: the bootstrap variance of a statistic whose
+ * resample deviations are z − w (divide by B, as Hansen, Lunde & Nason 2011 do).
+ */
+function meanSquaredDifference(z: Float64Array, w: Float64Array, resamples: number): number {
+  let sum = 0;
+  for (let b = 0; b < resamples; b++) {
+    const x = z[b]! - w[b]!;
+    sum += x * x;
+  }
+  return sum / resamples;
 }
 
 /** Index of the largest value, the first on ties. */

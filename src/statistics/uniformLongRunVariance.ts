@@ -1,13 +1,15 @@
 import { autocovariances } from './autocovariance.js';
 import { bartlettLongRunVariance } from './bartlettLongRunVariance.js';
 import { isEffectivelyNonPositive } from './varianceTolerance.js';
+import { type LagWeights, weightedAutocovarianceSum } from './weightedAutocovarianceSum.js';
 
 /**
  * Uniform-weight (truncated-kernel) long-run variance, the estimator of Diebold & Mariano (1995):
  *
  *   ω̂² = γ̂_0 + 2 Σ_{k=1..L} γ̂_k,
  *
- * γ̂_k about the sample mean divided by n. Can be zero or negative (the truncated kernel is not
+ * γ̂_k about the sample mean divided by n: the weighted sum `weightedAutocovarianceSum` with the
+ * uniform weights (`uniformWeights`). Can be zero or negative (the truncated kernel is not
  * positive definite), which is why `uniformLongRunVariance` falls back to Bartlett. Equals R
  * `sandwich::vcovHAC(lm(x ~ 1), weights = rep(1, L + 1), prewhite = FALSE, adjust = FALSE) · n`.
  *
@@ -15,10 +17,17 @@ import { isEffectivelyNonPositive } from './varianceTolerance.js';
  * @throws RangeError when lag is not an integer in 0..n−1.
  */
 export function uniformWeightSum(x: Float64Array, lag: number): number {
-  const gamma = autocovariances(x, lag);
-  let sum = gamma[0]!;
-  for (let k = 1; k <= lag; k++) sum += 2 * gamma[k]!;
-  return sum;
+  return weightedAutocovarianceSum(x, lag, uniformWeights(lag));
+}
+
+/**
+ * The uniform (truncated) weights at lag L (Diebold & Mariano 1995): w(k) = 1 for 1 ≤ k ≤ L, and
+ * 0 beyond L. Not positive definite: the sum can be negative.
+ *
+ * @example uniformWeights(3)(2) // 1
+ */
+export function uniformWeights(lag: number): LagWeights {
+  return (k) => (k <= lag ? 1 : 0);
 }
 
 export interface UniformLongRunVariance {

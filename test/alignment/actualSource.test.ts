@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 
 // Each row of the panel remembers where its actual was read, so a later refusal (a zero actual
 // under the absolute percentage error) can name the file and line.

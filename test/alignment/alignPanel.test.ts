@@ -4,7 +4,7 @@ import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { InputError } from '../../src/core/inputError.js';
 import type { AlignedPanel } from '../../src/core/panel.js';
 import type { ForecastTable } from '../../src/reading/forecastTable.js';
-import { type FileRole, parseForecastText } from '../../src/reading/tableBuilder.js';
+import { type FileRole, parseForecastText } from '../../src/reading/forecastTableReader.js';
 
 function table(role: FileRole, path: string, text: string): ForecastTable {
   return parseForecastText(text, path, { role });

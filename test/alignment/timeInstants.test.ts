@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 
 const read = (text: string, role: 'baseline' | 'candidate') =>
   parseForecastText(text, `${role}.csv`, { role });

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { sharedResampleDeviations } from '../../src/candidates/sharedResampleDeviations.js';
 import { superiorAbilityTest } from '../../src/candidates/superiorAbilityTest.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
+import { mean } from '../../src/statistics/mean.js';
 import { modelConfidenceSet } from '../../src/statistics/modelConfidenceSet.js';
 
 // Invariants of the k-model procedures on shared resamples (Hansen 2005; Hansen, Lunde & Nason
@@ -91,7 +91,7 @@ describe('model confidence set', () => {
       fc.property(lossPanel, fc.constantFrom('range', 'max' as const), (p, statistic) => {
         const dev = resamplesOf(p.losses, p.block, p.seed);
         const mcs = modelConfidenceSet({
-          means: p.losses.map(meanOf),
+          means: p.losses.map(mean),
           deviations: dev,
           statistic: statistic as 'range' | 'max',
           alpha: 0.1,
@@ -123,7 +123,7 @@ describe('model confidence set', () => {
         ),
         ({ panel: { losses, block, seed }, order, statistic }) => {
           const dev = resamplesOf(losses, block, seed);
-          const means = losses.map(meanOf);
+          const means = losses.map(mean);
           const a = modelConfidenceSet({ means, deviations: dev, statistic, alpha: 0.1 });
           const b = modelConfidenceSet({
             means: order.map((i) => means[i]!),

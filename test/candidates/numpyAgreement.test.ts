@@ -5,7 +5,7 @@ import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { sharedResampleDeviations } from '../../src/candidates/sharedResampleDeviations.js';
 import { superiorAbilityTest } from '../../src/candidates/superiorAbilityTest.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
+import { mean } from '../../src/statistics/mean.js';
 import { modelConfidenceSet } from '../../src/statistics/modelConfidenceSet.js';
 import { co2Losses } from './co2Losses.js';
 import { deviationsFromIndices, stationaryIndexMatrix } from './indexMatrix.js';
@@ -101,7 +101,7 @@ describe('k candidates against numpy on the same bootstrap indices (co2, 6 model
     it(`MCS (${statistic}): elimination order, step and MCS p-values, members at 90%`, () => {
       const expected = reference.mcs[statistic];
       const got = modelConfidenceSet({
-        means: losses.map(meanOf),
+        means: losses.map(mean),
         deviations: fromIndices,
         statistic,
         alpha: ALPHA,

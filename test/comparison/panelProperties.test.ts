@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { evaluatePanel } from '../../src/comparison/evaluatePanel.js';
 import { createRandomSource, type RandomSource } from '../../src/random/randomSource.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 import type { Report } from '../../src/report/reportModel.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
 

@@ -4,7 +4,7 @@ import { Ajv } from 'ajv';
 import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { evaluatePanel } from '../../src/comparison/evaluatePanel.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
 
 // Backtest paths (issue 6, item 5): three complete out-of-sample paths over the same 60 time

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { evaluatePanel } from '../../src/comparison/evaluatePanel.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
 
 // Properties of the whole pure pipeline (text → tables → panel → losses → tests → report), on

@@ -54,6 +54,9 @@ function run(name: string, fixture: { loss: string; margin: number }, extra: str
   return JSON.parse(readFileSync(out, 'utf8')).comparisons[0];
 }
 
+/** 1e-6 of the reference value, or 1e-6 absolute near 0 (the rule of test/helpers/tolerance.ts). */
+const WITHIN_1E6 = { relative: 1e-6, absolute: 1e-6 };
+
 describe('CLI against R sandwich and statsmodels on open datasets', () => {
   expect(cases.length).toBeGreaterThanOrEqual(8);
   for (const name of cases) {
@@ -67,18 +70,23 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       const dm = c.dieboldMariano;
       const what = `${name} vs ${hac!.source}`;
       expect(dm.lag).toBe(hac!.lag);
-      expectClose(c.meanTestedDifferential, fixture.mean, 1e-6, `${what}: mean of d`);
-      expectClose(dm.longRunVariance, hac!.longRunVariance, 1e-6, `${what}: long-run variance`);
-      expectClose(dm.statistic, hac!.statistic, 1e-6, `${what}: statistic`);
-      expectClose(dm.pValue, hac!.pValue, 1e-6, `${what}: one-sided p`);
-      expectClose(dm.pValueTwoSided, hac!.pValueTwoSided, 1e-6, `${what}: two-sided p`);
+      expectClose(c.meanTestedDifferential, fixture.mean, WITHIN_1E6, `${what}: mean of d`);
+      expectClose(
+        dm.longRunVariance,
+        hac!.longRunVariance,
+        WITHIN_1E6,
+        `${what}: long-run variance`,
+      );
+      expectClose(dm.statistic, hac!.statistic, WITHIN_1E6, `${what}: statistic`);
+      expectClose(dm.pValue, hac!.pValue, WITHIN_1E6, `${what}: one-sided p`);
+      expectClose(dm.pValueTwoSided, hac!.pValueTwoSided, WITHIN_1E6, `${what}: two-sided p`);
       expectClose(
         dm.smallSample.statistic,
         hac!.smallSample.statistic,
-        1e-6,
+        WITHIN_1E6,
         `${what}: HLN statistic`,
       );
-      expectClose(dm.smallSample.pValue, hac!.smallSample.pValue, 1e-6, `${what}: HLN p`);
+      expectClose(dm.smallSample.pValue, hac!.smallSample.pValue, WITHIN_1E6, `${what}: HLN p`);
     });
     it(`${name}: the default is ewc-ar1`, () => {
       expect(run(name, fixture, []).dieboldMariano.estimator).toBe('ewc-ar1');
@@ -92,11 +100,11 @@ describe('CLI against R sandwich and statsmodels on open datasets', () => {
       expectClose(
         dm.longRunVariance,
         fixture.ewc.longRunVariance,
-        1e-6,
+        WITHIN_1E6,
         `${what}: long-run variance`,
       );
-      expectClose(dm.statistic, fixture.ewc.statistic, 1e-6, `${what}: statistic`);
-      expectClose(dm.pValue, fixture.ewc.pValue, 1e-6, `${what}: p`);
+      expectClose(dm.statistic, fixture.ewc.statistic, WITHIN_1E6, `${what}: statistic`);
+      expectClose(dm.pValue, fixture.ewc.pValue, WITHIN_1E6, `${what}: p`);
     });
   }
 });

@@ -68,17 +68,32 @@ describe('--losses: a pre-aggregated loss file', () => {
       expect(b.rows).toBe(a.rows);
       expect(b.dieboldMariano.degreesOfFreedom).toBe(a.dieboldMariano.degreesOfFreedom);
       for (const key of ['meanBaselineLoss', 'meanCandidateLoss', 'meanDifference'] as const) {
-        expectClose(b[key], a[key], 1e-9, key);
+        expectClose(b[key], a[key], { relative: 1e-9, absolute: 1e-9 }, key);
       }
-      expectClose(b.dieboldMariano.statistic, a.dieboldMariano.statistic, 1e-9, 'DM statistic');
-      expectClose(b.dieboldMariano.pValue, a.dieboldMariano.pValue, 1e-9, 'DM p-value');
+      expectClose(
+        b.dieboldMariano.statistic,
+        a.dieboldMariano.statistic,
+        { relative: 1e-9, absolute: 1e-9 },
+        'DM statistic',
+      );
+      expectClose(
+        b.dieboldMariano.pValue,
+        a.dieboldMariano.pValue,
+        { relative: 1e-9, absolute: 1e-9 },
+        'DM p-value',
+      );
       expectClose(
         b.bootstrap.expectedBlockLength,
         a.bootstrap.expectedBlockLength,
-        1e-9,
+        { relative: 1e-9, absolute: 1e-9 },
         'block length',
       );
-      expectClose(b.bootstrap.interval.lower, a.bootstrap.interval.lower, 1e-9, 'bootstrap lower');
+      expectClose(
+        b.bootstrap.interval.lower,
+        a.bootstrap.interval.lower,
+        { relative: 1e-9, absolute: 1e-9 },
+        'bootstrap lower',
+      );
       expect(b.verdict).toBe(a.verdict);
     });
   }

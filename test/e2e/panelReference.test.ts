@@ -60,13 +60,33 @@ function checkBartlett(
     pValue: number;
     smallSample: { statistic: number; pValue: number };
   };
-  expectClose(c.meanTestedDifferential, e.mean, TOL, `${what}: mean of d`);
+  expectClose(
+    c.meanTestedDifferential,
+    e.mean,
+    { relative: TOL, absolute: TOL },
+    `${what}: mean of d`,
+  );
   expect(dm.lag, `${what}: lag`).toBe(e.lag);
-  expectClose(dm.longRunVariance, e.longRunVariance, TOL, `${what}: long-run variance`);
-  expectClose(dm.statistic, e.statistic, TOL, `${what}: statistic`);
-  expectClose(dm.pValue, e.pValue, TOL, `${what}: p`);
-  expectClose(dm.smallSample.statistic, e.smallSample.statistic, TOL, `${what}: HLN statistic`);
-  expectClose(dm.smallSample.pValue, e.smallSample.pValue, TOL, `${what}: HLN p`);
+  expectClose(
+    dm.longRunVariance,
+    e.longRunVariance,
+    { relative: TOL, absolute: TOL },
+    `${what}: long-run variance`,
+  );
+  expectClose(dm.statistic, e.statistic, { relative: TOL, absolute: TOL }, `${what}: statistic`);
+  expectClose(dm.pValue, e.pValue, { relative: TOL, absolute: TOL }, `${what}: p`);
+  expectClose(
+    dm.smallSample.statistic,
+    e.smallSample.statistic,
+    { relative: TOL, absolute: TOL },
+    `${what}: HLN statistic`,
+  );
+  expectClose(
+    dm.smallSample.pValue,
+    e.smallSample.pValue,
+    { relative: TOL, absolute: TOL },
+    `${what}: HLN p`,
+  );
 }
 
 interface LossFixture {
@@ -102,10 +122,15 @@ describe.each(cases)('Seatbelts panel, %s loss, against R', (loss, expected) => 
       expectClose(
         c.dieboldMariano.statistic,
         s.statistic,
-        TOL,
+        { relative: TOL, absolute: TOL },
         `${loss} series ${s.series}: statistic`,
       );
-      expectClose(c.dieboldMariano.pValue, s.pValue, TOL, `${loss} series ${s.series}: p`);
+      expectClose(
+        c.dieboldMariano.pValue,
+        s.pValue,
+        { relative: TOL, absolute: TOL },
+        `${loss} series ${s.series}: p`,
+      );
     }
   });
 
@@ -117,17 +142,22 @@ describe.each(cases)('Seatbelts panel, %s loss, against R', (loss, expected) => 
       expectClose(
         overall.dieboldMariano.statistic,
         expected.overall.ewc.statistic,
-        TOL,
+        { relative: TOL, absolute: TOL },
         `${loss} ewc statistic`,
       );
-      expectClose(overall.dieboldMariano.pValue, expected.overall.ewc.pValue, TOL, `${loss} ewc p`);
+      expectClose(
+        overall.dieboldMariano.pValue,
+        expected.overall.ewc.pValue,
+        { relative: TOL, absolute: TOL },
+        `${loss} ewc p`,
+      );
       const adjusted = expected.seriesAdjusted.ewc[method] as number[];
       expected.seriesAdjusted.series.forEach((name: string, j: number) => {
         const c = report.comparisons.find((x: { series: unknown }) => x.series === name);
         expectClose(
           c.adjustedPValue,
           adjusted[j]!,
-          TOL,
+          { relative: TOL, absolute: TOL },
           `${loss} ${method} ${name} vs ${expected.seriesAdjusted.source}`,
         );
       });

@@ -4,7 +4,7 @@ import { InputError } from '../../src/core/inputError.js';
 import { checkBacktest } from '../../src/integrity/checkBacktest.js';
 import type { CheckMode, IntegrityReport } from '../../src/integrity/checkResult.js';
 import type { FoldLayout } from '../../src/integrity/foldLayout.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 
 const run = (
   baseline: string,

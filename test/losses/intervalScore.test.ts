@@ -24,13 +24,23 @@ describe('interval score, worked examples (Gneiting & Raftery 2007, eq. 43, by h
   });
   it('above the interval: width + (2/α)(y − u)', () => {
     // [8, 10], y = 12, α = 0.2: 2 + 10·2 = 22.
-    expectClose(intervalScore(12, 8, 10, 0.2), 22, 1e-14, 'IS(12; [8, 10], 0.2)');
+    expectClose(
+      intervalScore(12, 8, 10, 0.2),
+      22,
+      { relative: 1e-14, absolute: 1e-14 },
+      'IS(12; [8, 10], 0.2)',
+    );
   });
   it('below the interval: width + (2/α)(l − y)', () => {
     // [−1, 3], y = −2, α = 0.5: 4 + 4·1 = 8.
     expect(intervalScore(-2, -1, 3, 0.5)).toBe(8);
     // [0, 0] (a point), y = −3, α = 0.1: 0 + 20·3 = 60.
-    expectClose(intervalScore(-3, 0, 0, 0.1), 60, 1e-14, 'IS(−3; [0, 0], 0.1)');
+    expectClose(
+      intervalScore(-3, 0, 0, 0.1),
+      60,
+      { relative: 1e-14, absolute: 1e-14 },
+      'IS(−3; [0, 0], 0.1)',
+    );
   });
   it('a crossed interval (l > u) scores (2/α − 1)(l − u) between the bounds', () => {
     // l = 10, u = 8, y = 9, α = 0.5: −2 + 4·1 + 4·1 = 6 = (4 − 1)·2.
@@ -46,7 +56,12 @@ describe('interval score, worked examples (Gneiting & Raftery 2007, eq. 43, by h
 describe('interval coverage, worked examples', () => {
   it('counts closed intervals; crossed ones cover nothing', () => {
     // 1 ∈ [0, 4], 5 ∈ [0, 5] (on the bound), 9 ∉ [0, 8]: 2/3.
-    expectClose(intervalCoverage([1, 5, 9], [0, 0, 0], [4, 5, 8])!, 2 / 3, 1e-15, 'coverage');
+    expectClose(
+      intervalCoverage([1, 5, 9], [0, 0, 0], [4, 5, 8])!,
+      2 / 3,
+      { relative: 1e-15, absolute: 1e-15 },
+      'coverage',
+    );
     expect(intervalCoverage([1, 1], [2, 0], [0, 2])).toBe(0.5);
     expect(intervalCoverage(new Float64Array([3]), [3], [3])).toBe(1);
   });
@@ -133,9 +148,14 @@ describe.each(fixture.cases)('against R: $dataset', (c) => {
       const rows = c.actual.map((y, i) => pinballLoss(y, q.values[i]!, q.level));
       rows.forEach((r, i) => {
         const context = `${where}: τ = ${q.level}, row ${i + 1}, y ${c.actual[i]}, q ${q.values[i]}`;
-        expectClose(r, q.rowLoss[i]!, ROW, context);
+        expectClose(r, q.rowLoss[i]!, { relative: ROW, absolute: ROW }, context);
       });
-      expectClose(mean(rows), q.meanLoss, MEAN, `${where}: mean pinball loss at τ = ${q.level}`);
+      expectClose(
+        mean(rows),
+        q.meanLoss,
+        { relative: MEAN, absolute: MEAN },
+        `${where}: mean pinball loss at τ = ${q.level}`,
+      );
     }
   });
   it('interval score per row, its mean, and coverage', () => {
@@ -145,13 +165,23 @@ describe.each(fixture.cases)('against R: $dataset', (c) => {
       const upper = c.quantiles.find((q) => q.level === interval.upperLevel)!.values;
       const rows = c.actual.map((y, i) => intervalScore(y, lower[i]!, upper[i]!, interval.alpha));
       rows.forEach((r, i) => {
-        expectClose(r, interval.rowScore[i]!, ROW, `${where}: α = ${interval.alpha}, row ${i + 1}`);
+        expectClose(
+          r,
+          interval.rowScore[i]!,
+          { relative: ROW, absolute: ROW },
+          `${where}: α = ${interval.alpha}, row ${i + 1}`,
+        );
       });
-      expectClose(mean(rows), interval.meanScore, MEAN, `${where}: mean interval score`);
+      expectClose(
+        mean(rows),
+        interval.meanScore,
+        { relative: MEAN, absolute: MEAN },
+        `${where}: mean interval score`,
+      );
       expectClose(
         intervalCoverage(c.actual, lower, upper)!,
         interval.coverage,
-        1e-15,
+        { relative: 1e-15, absolute: 1e-15 },
         `${where}: coverage at α = ${interval.alpha}`,
       );
     }

@@ -69,7 +69,12 @@ describe('point losses, properties', () => {
     fc.assert(
       fc.property(finite, finite, fc.double({ min: 0.01, max: 0.99, noNaN: true }), (y, q, tau) => {
         const avg = (pinballLoss(y, q, tau) + pinballLoss(y, q, 1 - tau)) / 2;
-        expectClose(avg, absoluteError(y, q) / 2, 1e-12, 'pinball average');
+        expectClose(
+          avg,
+          absoluteError(y, q) / 2,
+          { relative: 1e-12, absolute: 1e-12 },
+          'pinball average',
+        );
       }),
     );
   });
@@ -96,7 +101,12 @@ describe('pinball loss against scikit-learn', () => {
           c.actual.reduce((s, y, i) => s + pinballLoss(y, q.values[i]!, q.level), 0) /
           c.actual.length;
         const want = ref.levels.find((l) => l.level === q.level)!.meanLoss;
-        expectClose(mean, want, 1e-12, `${c.name} τ=${q.level} vs ${expected.source}`);
+        expectClose(
+          mean,
+          want,
+          { relative: 1e-12, absolute: 1e-12 },
+          `${c.name} τ=${q.level} vs ${expected.source}`,
+        );
       }
     });
   }

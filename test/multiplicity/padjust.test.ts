@@ -14,14 +14,16 @@ describe('worked examples (by hand from the formulas in the doc comments)', () =
     const got = holmAdjust([0.01, 0.04, null, 0.03]);
     expect(got[2]).toBeNull();
     [0.03, 0.06, null, 0.06].forEach((e, i) => {
-      if (e !== null) expectClose(got[i]!, e, 1e-15, `holm position ${i + 1}`);
+      if (e !== null)
+        expectClose(got[i]!, e, { relative: 1e-15, absolute: 1e-15 }, `holm position ${i + 1}`);
     });
   });
   it('BH: m = 3, sorted 0.01, 0.03, 0.04 → 3·0.01, min(1.5·0.03, 0.04), 1·0.04', () => {
     const got = benjaminiHochbergAdjust([0.01, 0.04, null, 0.03]);
     expect(got[2]).toBeNull();
     [0.03, 0.04, null, 0.04].forEach((e, i) => {
-      if (e !== null) expectClose(got[i]!, e, 1e-15, `bh position ${i + 1}`);
+      if (e !== null)
+        expectClose(got[i]!, e, { relative: 1e-15, absolute: 1e-15 }, `bh position ${i + 1}`);
     });
   });
   it('caps at 1', () => {

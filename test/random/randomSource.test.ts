@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { createRandomSource } from '../../src/random/randomSource.js';
-import { readFixture } from '../bootstrap/expectClose.js';
+import { readFixture } from '../statistics/bootstrap/bootstrapFixtures.js';
 
 interface StreamFixture {
   cases: { seed: number; stream: number; uint32: number[]; doubles: string[] }[];

@@ -1,9 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/inputError.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 import { RowKeySet } from '../../src/reading/rowKeySet.js';
 import { firstInvalidUtf8 } from '../../src/reading/streamTextFile.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
 import { Tokenizer } from '../../src/reading/tokenizer.js';
 
 function errorOf(f: () => unknown): InputError {

@@ -5,8 +5,9 @@ import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { afterAll, describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/inputError.js';
-import { formatFromPath, readForecastFile } from '../../src/reading/readForecastFile.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
+import { formatFromPath } from '../../src/reading/formatDetection.js';
+import { readForecastFile } from '../../src/reading/readForecastFile.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'skillgate-reading-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { evaluatePanel } from '../../src/comparison/evaluatePanel.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 import { renderMarkdown } from '../../src/report/renderMarkdown.js';
 import { resolveSettings } from '../../src/settings/resolveSettings.js';
 

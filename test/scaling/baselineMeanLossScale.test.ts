@@ -113,7 +113,12 @@ describe('properties', () => {
         const again = baselineMeanLossScale(names, series, scaled.baseline);
         for (const [name, scale] of again) {
           if (scale.state === 'too-short') continue;
-          expectClose(scale.value!, 1, 1e-12, `${name} in ${JSON.stringify(rows)}`);
+          expectClose(
+            scale.value!,
+            1,
+            { relative: 1e-12, absolute: 1e-12 },
+            `${name} in ${JSON.stringify(rows)}`,
+          );
         }
       }),
     );
@@ -142,7 +147,12 @@ describe('properties', () => {
         );
         if (plain.state !== 'ok' || stretched.state !== 'ok') return expect.fail('unscaled');
         plain.candidate.forEach((v, i) => {
-          expectClose(stretched.candidate[i]!, v, 1e-12, `row ${i}, c ${c}`);
+          expectClose(
+            stretched.candidate[i]!,
+            v,
+            { relative: 1e-12, absolute: 1e-12 },
+            `row ${i}, c ${c}`,
+          );
         });
       }),
     );

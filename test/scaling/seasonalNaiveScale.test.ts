@@ -16,7 +16,7 @@ describe('worked examples (by hand)', () => {
     const abs = seasonalNaiveScaleOf([1, 3, 2, 6], 1, 'absolute');
     expect(abs.state).toBe('ok');
     expect(abs.terms).toBe(3);
-    expectClose(abs.value!, 7 / 3, 1e-15, 'absolute, m = 1');
+    expectClose(abs.value!, 7 / 3, { relative: 1e-15, absolute: 1e-15 }, 'absolute, m = 1');
     expect(seasonalNaiveScaleOf([1, 3, 2, 6], 1, 'squared').value).toBe(7);
   });
   it('seasonal, m = 2: 2 − 1 and 6 − 3 → absolute 2, squared 5', () => {
@@ -157,7 +157,7 @@ describe.each(fixture.datasets)('against R: $dataset', (ds) => {
           const where = `${ds.dataset}, ${s.id}, m = ${m}, ${loss} (${fixture.source})`;
           expect(got.state, where).toBe('ok');
           expect(got.terms, where).toBe(s.history.length - m);
-          expectClose(got.value! / expected, 1, RELATIVE, where);
+          expectClose(got.value! / expected, 1, { relative: RELATIVE, absolute: RELATIVE }, where);
         }
       }
     }

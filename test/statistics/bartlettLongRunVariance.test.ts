@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { bartlettLongRunVariance } from '../../src/statistics/bartlettLongRunVariance.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 import { loadDieboldMarianoReferences } from './referenceFixtures.js';
 
 const entries = loadDieboldMarianoReferences().flatMap(({ file, ref }) =>
@@ -21,7 +21,12 @@ describe('bartlettLongRunVariance', () => {
     '$file, lag $entry.lag: agrees with the fixture (1e-6 relative)',
     ({ file, ref, entry }) => {
       const value = bartlettLongRunVariance(Float64Array.from(ref.d), entry.lag);
-      expectClose(value, entry.longRunVariance, 1e-6, `${file}, lag ${entry.lag}: ${entry.source}`);
+      expectClose(
+        value,
+        entry.longRunVariance,
+        { relative: 1e-6 },
+        `${file}, lag ${entry.lag}: ${entry.source}`,
+      );
     },
   );
 

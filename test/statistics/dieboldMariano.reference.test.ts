@@ -12,7 +12,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { dieboldMariano } from '../../src/statistics/dieboldMariano.js';
 import { type LagRule, neweyWestBandwidth, selectLag } from '../../src/statistics/neweyWestLag.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 import { FIXTURES, loadDieboldMarianoReferences } from './referenceFixtures.js';
 
 const RELATIVE = 1e-6;
@@ -64,9 +64,14 @@ describe.each(cases)('$file', ({ file, ref }) => {
     const bw = neweyWestBandwidth(d);
     const source = `${where}\n  source: ${ref.autoLag.source}`;
     expect(bw.pilotLag, `pilot lag, ${source}`).toBe(ref.autoLag.pilotLag);
-    expectClose(bw.s0, ref.autoLag.s0, RELATIVE, `s0, ${source}`);
-    expectClose(bw.s1, ref.autoLag.s1, RELATIVE, `s1, ${source}`);
-    expectClose(bw.bandwidth, ref.autoLag.bandwidth, RELATIVE, `bandwidth, ${source}`);
+    expectClose(bw.s0, ref.autoLag.s0, { relative: RELATIVE }, `s0, ${source}`);
+    expectClose(bw.s1, ref.autoLag.s1, { relative: RELATIVE }, `s1, ${source}`);
+    expectClose(
+      bw.bandwidth,
+      ref.autoLag.bandwidth,
+      { relative: RELATIVE },
+      `bandwidth, ${source}`,
+    );
     expect(selectLag(d, { kind: 'auto' }, h).lag, `lag, ${source}`).toBe(ref.autoLag.lag);
   });
 
@@ -86,20 +91,50 @@ describe.each(cases)('$file', ({ file, ref }) => {
       expect(result.estimator, source).toBe(entry.usedEstimator);
       expect(result.requestedEstimator).toBe(entry.estimator);
       expect(result.degreesOfFreedom).toBeNull();
-      expectClose(result.mean, ref.mean, RELATIVE, `mean, ${source}`);
-      expectClose(result.longRunVariance, entry.longRunVariance, RELATIVE, `ω̂², ${source}`);
-      expectClose(result.variance, entry.variance, RELATIVE, `ω̂²/n, ${source}`);
-      expectClose(result.statistic, entry.statistic, RELATIVE, `DM statistic, ${source}`);
-      expectClose(result.pValue, entry.pValue, RELATIVE, `one-sided p-value, ${source}`);
-      expectClose(result.pValueTwoSided, entry.pValueTwoSided, RELATIVE, `two-sided p, ${source}`);
+      expectClose(result.mean, ref.mean, { relative: RELATIVE }, `mean, ${source}`);
+      expectClose(
+        result.longRunVariance,
+        entry.longRunVariance,
+        { relative: RELATIVE },
+        `ω̂², ${source}`,
+      );
+      expectClose(result.variance, entry.variance, { relative: RELATIVE }, `ω̂²/n, ${source}`);
+      expectClose(
+        result.statistic,
+        entry.statistic,
+        { relative: RELATIVE },
+        `DM statistic, ${source}`,
+      );
+      expectClose(
+        result.pValue,
+        entry.pValue,
+        { relative: RELATIVE },
+        `one-sided p-value, ${source}`,
+      );
+      expectClose(
+        result.pValueTwoSided,
+        entry.pValueTwoSided,
+        { relative: RELATIVE },
+        `two-sided p, ${source}`,
+      );
       const small = result.smallSample;
       expect(small, source).not.toBeNull();
-      expectClose(small?.statistic, entry.smallSample.statistic, RELATIVE, `HLN stat, ${source}`);
-      expectClose(small?.pValue, entry.smallSample.pValue, RELATIVE, `HLN p, ${source}`);
+      expectClose(
+        small?.statistic,
+        entry.smallSample.statistic,
+        { relative: RELATIVE },
+        `HLN stat, ${source}`,
+      );
+      expectClose(
+        small?.pValue,
+        entry.smallSample.pValue,
+        { relative: RELATIVE },
+        `HLN p, ${source}`,
+      );
       expectClose(
         small?.pValueTwoSided,
         entry.smallSample.pValueTwoSided,
-        RELATIVE,
+        { relative: RELATIVE },
         `HLN two-sided p, ${source}`,
       );
       expect(small?.degreesOfFreedom).toBe(entry.smallSample.degreesOfFreedom);
@@ -121,10 +156,25 @@ describe.each(cases)('$file', ({ file, ref }) => {
     expect(result.degreesOfFreedom, source).toBe(ref.ewc.degreesOfFreedom);
     expect(result.lag).toBeNull();
     expect(result.smallSample).toBeNull();
-    expectClose(result.longRunVariance, ref.ewc.longRunVariance, RELATIVE, `ω̂², ${source}`);
-    expectClose(result.variance, ref.ewc.variance, RELATIVE, `ω̂²/n, ${source}`);
-    expectClose(result.statistic, ref.ewc.statistic, RELATIVE, `statistic, ${source}`);
-    expectClose(result.pValue, ref.ewc.pValue, RELATIVE, `one-sided p, ${source}`);
-    expectClose(result.pValueTwoSided, ref.ewc.pValueTwoSided, RELATIVE, `two-sided p, ${source}`);
+    expectClose(
+      result.longRunVariance,
+      ref.ewc.longRunVariance,
+      { relative: RELATIVE },
+      `ω̂², ${source}`,
+    );
+    expectClose(result.variance, ref.ewc.variance, { relative: RELATIVE }, `ω̂²/n, ${source}`);
+    expectClose(
+      result.statistic,
+      ref.ewc.statistic,
+      { relative: RELATIVE },
+      `statistic, ${source}`,
+    );
+    expectClose(result.pValue, ref.ewc.pValue, { relative: RELATIVE }, `one-sided p, ${source}`);
+    expectClose(
+      result.pValueTwoSided,
+      ref.ewc.pValueTwoSided,
+      { relative: RELATIVE },
+      `two-sided p, ${source}`,
+    );
   });
 });

@@ -5,7 +5,7 @@ import {
   dieboldMariano,
   MINIMUM_LENGTH,
 } from '../../src/statistics/dieboldMariano.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 
 const bartlett0: DieboldMarianoOptions = {
   estimator: 'bartlett',
@@ -29,11 +29,11 @@ describe('dieboldMariano: a worked example', () => {
     const result = dieboldMariano(new Float64Array([1, 2, 0, 3, 1]), bartlett0);
     expect(result.state).toBe('ok');
     expect(result.mean).toBe(1.4);
-    expectClose(result.longRunVariance, 1.04, 1e-14, 'γ̂_0 = 5.2/5');
-    expectClose(result.statistic, 1.4 / Math.sqrt(1.04 / 5), 1e-14, 'statistic');
+    expectClose(result.longRunVariance, 1.04, { relative: 1e-14 }, 'γ̂_0 = 5.2/5');
+    expectClose(result.statistic, 1.4 / Math.sqrt(1.04 / 5), { relative: 1e-14 }, 'statistic');
     // R: pnorm(1.4 / sqrt(1.04 / 5), lower.tail = FALSE) = 0.001071358
-    expectClose(result.pValue, 0.001071358, 1e-6, 'one-sided p');
-    expectClose(result.pValueTwoSided, 2 * 0.001071358, 1e-6, 'two-sided p');
+    expectClose(result.pValue, 0.001071358, { relative: 1e-6 }, 'one-sided p');
+    expectClose(result.pValueTwoSided, 2 * 0.001071358, { relative: 1e-6 }, 'two-sided p');
     expectJsonSafe(result);
   });
 

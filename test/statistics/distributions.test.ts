@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import * as distributions from '../../src/statistics/distributions.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 import { loadDistributionReferences } from './referenceFixtures.js';
 
 const reference = loadDistributionReferences();
@@ -23,6 +23,6 @@ describe(`distributions agree with ${reference.source} (dm_distributions.json), 
   it.each(reference.values)('$call', ({ fn, call, args, value }) => {
     const f = functions[fn];
     expect(f, fn).toBeDefined();
-    expectClose(f!(...args), value, 1e-9, `${fn}(${args.join(', ')}) vs R ${call}`);
+    expectClose(f!(...args), value, { relative: 1e-9 }, `${fn}(${args.join(', ')}) vs R ${call}`);
   });
 });

@@ -4,12 +4,22 @@ import {
   harveyLeybourneNewbold,
   harveyLeybourneNewboldFactor,
 } from '../../src/statistics/harveyLeybourneNewbold.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 
 describe('harveyLeybourneNewboldFactor: √((n + 1 − 2h + h(h − 1)/n)/n) (HLN 1997)', () => {
   it('n = 100, h = 1 gives √0.99; n = 10, h = 3 gives √0.56 (hand arithmetic)', () => {
-    expectClose(harveyLeybourneNewboldFactor(100, 1), Math.sqrt(0.99), 1e-15, 'n = 100, h = 1');
-    expectClose(harveyLeybourneNewboldFactor(10, 3), Math.sqrt(0.56), 1e-15, 'n = 10, h = 3');
+    expectClose(
+      harveyLeybourneNewboldFactor(100, 1),
+      Math.sqrt(0.99),
+      { relative: 1e-15 },
+      'n = 100, h = 1',
+    );
+    expectClose(
+      harveyLeybourneNewboldFactor(10, 3),
+      Math.sqrt(0.56),
+      { relative: 1e-15 },
+      'n = 10, h = 3',
+    );
   });
 
   it('is undefined (null) when h ≥ n', () => {
@@ -28,7 +38,7 @@ describe('harveyLeybourneNewboldFactor: √((n + 1 − 2h + h(h − 1)/n)/n) (HL
         expectClose(
           harveyLeybourneNewboldFactor(n, h),
           Math.sqrt(ratio),
-          tolerance,
+          { relative: tolerance },
           `n = ${n}, h = ${h}`,
         );
       }),
@@ -39,10 +49,10 @@ describe('harveyLeybourneNewboldFactor: √((n + 1 − 2h + h(h − 1)/n)/n) (HL
 describe('harveyLeybourneNewbold', () => {
   it('statistic 2, n = 100, h = 1: 2√0.99 against t_99 (R: pt(2 * sqrt(0.99), 99, lower.tail = FALSE) = 0.02467578814)', () => {
     const result = harveyLeybourneNewbold(2, 100, 1)!;
-    expectClose(result.statistic, 2 * Math.sqrt(0.99), 1e-15, 'statistic');
+    expectClose(result.statistic, 2 * Math.sqrt(0.99), { relative: 1e-15 }, 'statistic');
     expect(result.degreesOfFreedom).toBe(99);
-    expectClose(result.pValue, 0.02467578814, 1e-9, 'one-sided p');
+    expectClose(result.pValue, 0.02467578814, { relative: 1e-9 }, 'one-sided p');
     // R: 2 * pt(-2 * sqrt(0.99), 99)
-    expectClose(result.pValueTwoSided, 0.04935157629, 1e-9, 'two-sided p');
+    expectClose(result.pValueTwoSided, 0.04935157629, { relative: 1e-9 }, 'two-sided p');
   });
 });

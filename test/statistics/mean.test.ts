@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { mean } from '../../src/statistics/mean.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 import { loadDieboldMarianoReferences } from './referenceFixtures.js';
 
 describe('mean', () => {
@@ -22,7 +22,7 @@ describe('mean', () => {
       expectClose(
         mean(Float64Array.from(ref.d)),
         ref.mean,
-        1e-12,
+        { relative: 1e-12 },
         `${file}: mean(d) (${ref.dataset})`,
       );
     },

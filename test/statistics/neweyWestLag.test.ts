@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { neweyWestBandwidth, selectLag } from '../../src/statistics/neweyWestLag.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 
 /** A deterministic AR(1)-like series by formula (no RNG): x_t = 0.6 x_{t−1} + sin(t²/7). */
 function formulaSeries(n: number): Float64Array {
@@ -20,7 +20,12 @@ describe('neweyWestBandwidth', () => {
     expect(bw.pilotLag).toBe(1);
     expect(bw.s0).toBe(1.875);
     expect(bw.s1).toBe(0.625);
-    expectClose(bw.bandwidth, 1.1447 * (1 / 9) ** (1 / 3) * 4 ** (1 / 3), 1e-14, 'bandwidth');
+    expectClose(
+      bw.bandwidth,
+      1.1447 * (1 / 9) ** (1 / 3) * 4 ** (1 / 3),
+      { relative: 1e-14 },
+      'bandwidth',
+    );
   });
 
   it('pilot lag m = ⌊4 (n/100)^{2/9}⌋: 4 at n = 100, 5 at n = 298 (hand arithmetic)', () => {
@@ -38,7 +43,7 @@ describe('neweyWestBandwidth', () => {
     expectClose(
       bw.bandwidth,
       1.1447 * Math.abs(bw.s1 / bw.s0) ** (2 / 3) * 50 ** (1 / 3),
-      1e-12,
+      { relative: 1e-12 },
       'bandwidth from |s1/s0|',
     );
   });

@@ -4,7 +4,7 @@ import {
   uniformLongRunVariance,
   uniformWeightSum,
 } from '../../src/statistics/uniformLongRunVariance.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/tolerance.js';
 import { loadDieboldMarianoReferences } from './referenceFixtures.js';
 
 const entries = loadDieboldMarianoReferences().flatMap(({ file, ref }) =>
@@ -31,9 +31,14 @@ describe('uniformLongRunVariance', () => {
       const label = `${file}, lag ${entry.lag}: ${entry.source}`;
       expect(result.estimator, label).toBe(entry.usedEstimator);
       expect(result.lag).toBe(entry.lag);
-      expectClose(result.value, entry.longRunVariance, 1e-6, label);
+      expectClose(result.value, entry.longRunVariance, { relative: 1e-6 }, label);
       if (entry.uniformLongRunVariance !== undefined) {
-        expectClose(result.uniformValue, entry.uniformLongRunVariance, 1e-6, `raw sum, ${label}`);
+        expectClose(
+          result.uniformValue,
+          entry.uniformLongRunVariance,
+          { relative: 1e-6 },
+          `raw sum, ${label}`,
+        );
       }
     },
   );

@@ -1,3 +1,5 @@
+import { sampleStandardDeviation } from './sampleStandardDeviation.js';
+
 /**
  * Basic (reverse-percentile) bootstrap interval, one-sided bound and p-values for E[d], from the
  * resample deviations T_b = d̄*_b − d̄ (Davison & Hinkley 1997, "Bootstrap Methods and their
@@ -33,6 +35,12 @@
  * [U_(1), U_(19)] = [1, 19]; k(0.1) = 2 so L = 2; δ = 1.5 gives p = (1 + 1)/20 = 0.1 ≤ α and
  * indeed 1.5 < L.
  */
+/** A basic (reverse-percentile) two-sided interval at `level`. */
+export type BasicInterval = { level: number; lower: number; upper: number; method: 'basic' };
+
+/** A one-sided basic lower bound at `level`, with α = 1 − level. */
+export type BasicLowerBound = { level: number; alpha: number; lower: number; method: 'basic' };
+
 export interface BasicBootstrapInference {
   readonly interval: { readonly level: number; readonly lower: number; readonly upper: number };
   /** Rejects "E[d] ≤ δ" at tail probability `alpha` exactly when δ < lower (and pValue ≤ alpha). */
@@ -68,6 +76,18 @@ export function minimumResamples(level: number): number {
   while (tailOrderStatistic(alpha / 2, resamples) < 1) resamples++;
   while (resamples > 1 && tailOrderStatistic(alpha / 2, resamples - 1) >= 1) resamples--;
   return resamples;
+}
+
+/**
+ * U_(1..B), the reflected resamples U_b = θ̂ − T_b in ascending order, from the estimate θ̂ and the
+ * resample deviations T_b = θ*_b − θ̂: what `basicBootstrapInference` reads.
+ *
+ * @example reflectedSorted(2, Float64Array.of(0.5, -1, 0)) // Float64Array [1.5, 2, 3]
+ */
+export function reflectedSorted(estimate: number, deviations: Float64Array): Float64Array {
+  const reflected = new Float64Array(deviations.length);
+  for (let b = 0; b < deviations.length; b++) reflected[b] = estimate - deviations[b]!;
+  return reflected.sort();
 }
 
 /**
@@ -108,5 +128,38 @@ export function basicBootstrapInference(
     pValue,
     pValueBelow: pAbove,
     pValueTwoSided: Math.min(1, 2 * Math.min(pValue, pAbove)),
+  };
+}
+
+/** What a bootstrap result reports from its deviations: the standard error and the basic inference. */
+export interface BasicSummary {
+  readonly standardError: number;
+  readonly interval: BasicInterval;
+  readonly oneSidedLower: BasicLowerBound;
+  readonly pValue: number;
+  readonly pValueBelow: number;
+  readonly pValueTwoSided: number;
+}
+
+/**
+ * From the estimate θ̂ and the resample deviations T_b = θ*_b − θ̂: the standard error of the θ*
+ * (`sampleStandardDeviation`, divisor B − 1) and the basic interval, one-sided lower bound and
+ * p-values against the boundary `margin` at `level` (`basicBootstrapInference` on
+ * `reflectedSorted(θ̂, T)`).
+ */
+export function basicSummary(
+  estimate: number,
+  deviations: Float64Array,
+  margin: number,
+  level: number,
+): BasicSummary {
+  const inference = basicBootstrapInference(reflectedSorted(estimate, deviations), margin, level);
+  return {
+    standardError: sampleStandardDeviation(deviations),
+    interval: { ...inference.interval, method: 'basic' },
+    oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
+    pValue: inference.pValue,
+    pValueBelow: inference.pValueBelow,
+    pValueTwoSided: inference.pValueTwoSided,
   };
 }

@@ -1,34 +1,31 @@
-import { createGeometricSampler } from '../../random/geometricSampler.js';
 import {
   createRandomSource,
-  randomStreams,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
-import { basicBootstrapInference } from './basicBootstrapInference.js';
+import { mean } from '../mean.js';
+import type { BasicInterval, BasicLowerBound } from './basicBootstrapInference.js';
+import { basicSummary } from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
-import { meanOf } from './centring.js';
+import { forEachStationaryResample } from './eachStationaryResample.js';
 import { resampleMeanDeviation } from './resampleMeanDeviation.js';
-import { sampleStandardDeviation } from './sampleStandardDeviation.js';
-import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
 import {
+  type BootstrapRunFields,
   MINIMUM_BOOTSTRAP_LENGTH,
-  RESAMPLES_PER_STREAM,
   type StationaryBootstrapOptions,
   validateStationaryBootstrapOptions,
 } from './stationaryBootstrap.js';
 
-export interface RelativeDifferenceResult {
+export interface RelativeDifferenceResult extends BootstrapRunFields {
   /** 'baseline-zero': the baseline's mean loss is not positive, so no ratio exists. */
   state: 'ok' | 'identical' | 'too-short' | 'baseline-zero';
-  resamples: number;
-  seed: number;
-  expectedBlockLength: number;
   /** θ̂ = mean(candidate loss) / mean(baseline loss) − 1, e.g. 0.03 = "3% worse". */
   relativeDifference: number | null;
   /** Standard deviation of the B resampled θ*, divisor B − 1. */
   standardError: number | null;
-  interval: { level: number; lower: number; upper: number; method: 'basic' } | null;
-  oneSidedLower: { level: number; alpha: number; lower: number; method: 'basic' } | null;
+  /** Basic interval for θ; see `basicBootstrapInference`. */
+  interval: BasicInterval | null;
+  /** One-sided basic lower bound for θ at `level`. */
+  oneSidedLower: BasicLowerBound | null;
   /** (1 + #{θ*_b − θ̂ ≥ θ̂ − r})/(B + 1) for H0: θ ≤ r, r = options.margin (relative). */
   pValue: number | null;
   pValueTwoSided: number | null;
@@ -95,8 +92,8 @@ export function relativeDifferenceBootstrap(
       notes: [`series has ${n} observation(s); the bootstrap needs ${MINIMUM_BOOTSTRAP_LENGTH}`],
     };
   }
-  const candidateMean = meanOf(candidateLoss);
-  const baselineMean = meanOf(baselineLoss);
+  const candidateMean = mean(candidateLoss);
+  const baselineMean = mean(baselineLoss);
   if (!(baselineMean > 0)) {
     return {
       state: 'baseline-zero',
@@ -116,41 +113,30 @@ export function relativeDifferenceBootstrap(
   } else {
     const candidatePrefix = centredPrefixSums(candidateLoss, candidateMean);
     const baselinePrefix = centredPrefixSums(baselineLoss, baselineMean);
-    const sampler = createGeometricSampler(expectedBlockLength);
-    const blocks = allocateStationaryBlocks(n);
     let zeroDenominators = 0;
-    const streams = randomStreams(random, seed, 0);
-    for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
-      const source = streams.next();
-      const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
-      for (let b = first; b < last; b++) {
-        drawStationaryBlocks(n, sampler, source, blocks);
-        candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
-        baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
-        const c = candidateMean + candidateDeviations[b]!;
-        const base = baselineMean + baselineDeviations[b]!;
-        if (base === 0) zeroDenominators++;
-        const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
-        deviations[b] = theta - estimate;
-      }
-    }
+    forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, (b, blocks) => {
+      candidateDeviations[b] = resampleMeanDeviation(candidatePrefix, n, blocks);
+      baselineDeviations[b] = resampleMeanDeviation(baselinePrefix, n, blocks);
+      const c = candidateMean + candidateDeviations[b]!;
+      const base = baselineMean + baselineDeviations[b]!;
+      if (base === 0) zeroDenominators++;
+      const theta = base === 0 && c === 0 ? Number.POSITIVE_INFINITY : c / base - 1;
+      deviations[b] = theta - estimate;
+    });
     if (zeroDenominators > 0) {
       notes.push(`${zeroDenominators} resample(s) had a zero baseline mean loss (θ* infinite)`);
     }
   }
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = estimate - deviations[b]!;
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
+  const summary = basicSummary(estimate, deviations, margin, confidence);
   return {
     state: identical ? 'identical' : 'ok',
     ...empty,
     relativeDifference: estimate,
-    standardError: sampleStandardDeviation(deviations),
-    interval: { ...inference.interval, method: 'basic' },
-    oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
-    pValue: inference.pValue,
-    pValueTwoSided: inference.pValueTwoSided,
+    standardError: summary.standardError,
+    interval: summary.interval,
+    oneSidedLower: summary.oneSidedLower,
+    pValue: summary.pValue,
+    pValueTwoSided: summary.pValueTwoSided,
     resampledDeviations: { candidate: candidateDeviations, baseline: baselineDeviations },
     notes,
   };

@@ -2,12 +2,16 @@ import {
   createRandomSource,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
-import { basicBootstrapInference, minimumResamples } from './basicBootstrapInference.js';
+import { mean } from '../mean.js';
+import {
+  type BasicInterval,
+  type BasicLowerBound,
+  basicSummary,
+  minimumResamples,
+} from './basicBootstrapInference.js';
 import { centredPrefixSums } from './centredPrefixSums.js';
-import { meanOf } from './centring.js';
 import { type ResampleHistogram, resampleHistogram } from './resampleHistogram.js';
 import { type ResampleRunner, runResampleJob } from './resampleJob.js';
-import { sampleStandardDeviation } from './sampleStandardDeviation.js';
 
 export {
   RESAMPLES_PER_STREAM,
@@ -35,20 +39,24 @@ export interface StationaryBootstrapOptions {
   margin: number;
 }
 
-export interface StationaryBootstrapResult {
-  /** 'identical': every d_t is 0; 'too-short': n < MINIMUM_BOOTSTRAP_LENGTH (numbers are null). */
-  state: 'ok' | 'identical' | 'too-short';
+/** What every stationary-bootstrap result repeats of its run: B, the seed and b. */
+export interface BootstrapRunFields {
   resamples: number;
   seed: number;
   expectedBlockLength: number;
+}
+
+export interface StationaryBootstrapResult extends BootstrapRunFields {
+  /** 'identical': every d_t is 0; 'too-short': n < MINIMUM_BOOTSTRAP_LENGTH (numbers are null). */
+  state: 'ok' | 'identical' | 'too-short';
   /** d̄. */
   mean: number | null;
   /** Standard deviation of the B resample means d̄*_b, divisor B − 1. */
   standardError: number | null;
   /** Basic (reverse-percentile) two-sided interval for E[d]; see `basicBootstrapInference`. */
-  interval: { level: number; lower: number; upper: number; method: 'basic' } | null;
+  interval: BasicInterval | null;
   /** One-sided basic lower bound for E[d] at `level`: pValue ≤ alpha ⇔ margin < lower. */
-  oneSidedLower: { level: number; alpha: number; lower: number; method: 'basic' } | null;
+  oneSidedLower: BasicLowerBound | null;
   /** (1 + #{d̄*_b − d̄ ≥ d̄ − δ})/(B + 1): one-sided, "candidate worse by more than δ". */
   pValue: number | null;
   /** (1 + #{d̄*_b − d̄ ≤ d̄ − δ})/(B + 1): one-sided, "candidate better than δ" (E[d] < δ). */
@@ -117,7 +125,7 @@ export function stationaryBootstrap(
   const constant = d.every((x) => x === d[0]);
   const identical = constant && d[0] === 0;
   // A constant series has that constant as its mean, exactly: then every resample mean is too.
-  const mean = constant ? d[0]! : meanOf(d);
+  const sampleMean = constant ? d[0]! : mean(d);
   let deviations: Float64Array;
   if (identical) {
     notes.push('every loss differential is 0 (identical forecasts); no resampling needed');
@@ -129,7 +137,7 @@ export function stationaryBootstrap(
     }
     deviations = stationaryResampleDeviations(
       d,
-      mean,
+      sampleMean,
       expectedBlockLength,
       resamples,
       seed,
@@ -138,22 +146,12 @@ export function stationaryBootstrap(
     );
   }
 
-  const standardError = sampleStandardDeviation(deviations);
-  const reflected = new Float64Array(resamples);
-  for (let b = 0; b < resamples; b++) reflected[b] = mean - deviations[b]!;
-  reflected.sort();
-  const inference = basicBootstrapInference(reflected, margin, confidence);
   return {
     state: identical ? 'identical' : 'ok',
     ...base,
-    mean,
-    standardError,
-    interval: { ...inference.interval, method: 'basic' },
-    oneSidedLower: { ...inference.oneSidedLower, method: 'basic' },
-    pValue: inference.pValue,
-    pValueBelow: inference.pValueBelow,
-    pValueTwoSided: inference.pValueTwoSided,
-    distribution: resampleHistogram(mean, deviations),
+    mean: sampleMean,
+    ...basicSummary(sampleMean, deviations, margin, confidence),
+    distribution: resampleHistogram(sampleMean, deviations),
     notes,
   };
 }

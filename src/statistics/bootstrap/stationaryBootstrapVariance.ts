@@ -1,4 +1,4 @@
-import { centre, lagProduct } from './centring.js';
+import { weightedAutocovarianceSum } from '../weightedAutocovarianceSum.js';
 
 /**
  * The exact variance of the stationary-bootstrap mean given the data (Politis & Romano 1994,
@@ -6,11 +6,13 @@ import { centre, lagProduct } from './centring.js';
  *
  *   Var*(d̄*) = n⁻¹ [Ĉ_0 + 2 Σ_{k=1..n−1} ((1 − k/n) q^k + (k/n) q^{n−k}) Ĉ_k],  q = 1 − 1/b,
  *
- * with Ĉ_k = (1/n) Σ_{t=1..n−k} (d_t − d̄)(d_{t+k} − d̄) (divide by n). This is what the Monte
+ * with Ĉ_k = (1/n) Σ_{t=1..n−k} (d_t − d̄)(d_{t+k} − d̄) (divide by n): n⁻¹ times the weighted
+ * autocovariance sum `weightedAutocovarianceSum` over all lags 1..n − 1 with the weights
+ * w(k) = (1 − k/n) q^k + (k/n) q^{n−k}. This is what the Monte
  * Carlo standard error of `stationaryBootstrap` estimates, so it serves as its exact oracle.
  *
  * Computation: the weight of lag k is at most q^k + q^{n−k}; lags with both q^k and q^{n−k} below
- * ε = 10⁻¹⁷/n are skipped (their total contribution is below 2ε·n·Ĉ_0 ≤ 2·10⁻¹⁷ Ĉ_0, since
+ * ε = 10⁻¹⁷/n get weight 0 and are skipped (their total contribution is below 2ε·n·Ĉ_0 ≤ 2·10⁻¹⁷ Ĉ_0, since
  * |Ĉ_k| ≤ Ĉ_0). Lags near 0 cost O(n) each, lags near n only O(n − k), so the cost is
  * O(n · min(n, b·log(n·10¹⁷))) instead of O(n²).
  *
@@ -28,19 +30,11 @@ export function stationaryBootstrapVariance(d: Float64Array, expectedBlockLength
       `expected block length must be a finite number ≥ 1, got ${expectedBlockLength}`,
     );
   }
-  const u = centre(d);
   const q = 1 - 1 / expectedBlockLength;
   const negligible = 1e-17 / n;
   // Lags 1..near (q^k still counts) and far..n−1 (q^{n−k} still counts).
   const near = q === 0 ? 0 : Math.min(n - 1, Math.ceil(Math.log(negligible) / Math.log(q)));
-  let sum = lagProduct(u, 0) / n;
-  for (let k = 1; k < n; k++) {
-    if (k > near && n - k > near) {
-      k = n - near - 1; // jump to the first far lag (loop increment adds 1)
-      continue;
-    }
-    const weight = (1 - k / n) * q ** k + (k / n) * q ** (n - k);
-    if (weight !== 0) sum += 2 * weight * (lagProduct(u, k) / n);
-  }
-  return sum / n;
+  const weight = (k: number) =>
+    k > near && n - k > near ? 0 : (1 - k / n) * q ** k + (k / n) * q ** (n - k);
+  return weightedAutocovarianceSum(d, n - 1, weight) / n;
 }

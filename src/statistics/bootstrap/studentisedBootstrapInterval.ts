@@ -1,14 +1,11 @@
-import { createGeometricSampler } from '../../random/geometricSampler.js';
 import {
   createRandomSource,
-  randomStreams,
   type SequentialRandomSourceFactory,
 } from '../../random/randomSource.js';
 import { ewcLongRunVariance } from '../ewcLongRunVariance.js';
+import { mean } from '../mean.js';
 import { tailOrderStatistic, tailProbability } from './basicBootstrapInference.js';
-import { meanOf } from './centring.js';
-import { allocateStationaryBlocks, drawStationaryBlocks } from './stationaryBlocks.js';
-import { RESAMPLES_PER_STREAM } from './stationaryBootstrap.js';
+import { forEachStationaryResample } from './eachStationaryResample.js';
 
 /**
  * Studentised stationary-bootstrap interval for E[d] with the fixed-b (ewc) studentisation
@@ -39,7 +36,7 @@ export function studentisedBootstrapInterval(
   const n = d.length;
   const { resamples, expectedBlockLength, seed, level, degreesOfFreedom: nu } = options;
   if (n < 3 || nu > n - 1) return null;
-  const centre = meanOf(d);
+  const centre = mean(d);
   const omega = ewcLongRunVariance(d, nu).value;
   if (!(omega > 0)) return null;
   const se = Math.sqrt(omega / n);
@@ -50,47 +47,39 @@ export function studentisedBootstrapInterval(
       table[(j - 1) * n + t] = scale * Math.cos((Math.PI * j * (t + 0.5)) / n);
     }
   }
-  const sampler = createGeometricSampler(expectedBlockLength);
-  const blocks = allocateStationaryBlocks(n);
   const u = new Float64Array(n);
   const t = new Float64Array(resamples);
   let valid = 0;
-  const streams = randomStreams(random, seed, 0);
-  for (let first = 0; first < resamples; first += RESAMPLES_PER_STREAM) {
-    const source = streams.next();
-    const last = Math.min(resamples, first + RESAMPLES_PER_STREAM);
-    for (let b = first; b < last; b++) {
-      drawStationaryBlocks(n, sampler, source, blocks);
-      let k = 0;
-      let sum = 0;
-      for (let i = 0; i < blocks.count; i++) {
-        let s = blocks.starts[i]!;
-        for (let m = blocks.lengths[i]!; m > 0; m--) {
-          const x = d[s]! - centre;
-          u[k++] = x;
-          sum += x;
-          s = s + 1 === n ? 0 : s + 1;
-        }
+  forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, (b, blocks) => {
+    let k = 0;
+    let sum = 0;
+    for (let i = 0; i < blocks.count; i++) {
+      let s = blocks.starts[i]!;
+      for (let m = blocks.lengths[i]!; m > 0; m--) {
+        const x = d[s]! - centre;
+        u[k++] = x;
+        sum += x;
+        s = s + 1 === n ? 0 : s + 1;
       }
-      let squares = 0;
-      for (let j = 0; j < nu; j++) {
-        const row = j * n;
-        let lambda = 0;
-        for (let i = 0; i < n; i++) lambda += table[row + i]! * u[i]!;
-        squares += lambda * lambda;
-      }
-      const seStar = Math.sqrt(squares / nu / n);
-      t[b] =
-        seStar > 0
-          ? sum / n / seStar
-          : sum === 0
-            ? 0
-            : sum > 0
-              ? Number.POSITIVE_INFINITY
-              : Number.NEGATIVE_INFINITY;
-      valid++;
     }
-  }
+    let squares = 0;
+    for (let j = 0; j < nu; j++) {
+      const row = j * n;
+      let lambda = 0;
+      for (let i = 0; i < n; i++) lambda += table[row + i]! * u[i]!;
+      squares += lambda * lambda;
+    }
+    const seStar = Math.sqrt(squares / nu / n);
+    t[b] =
+      seStar > 0
+        ? sum / n / seStar
+        : sum === 0
+          ? 0
+          : sum > 0
+            ? Number.POSITIVE_INFINITY
+            : Number.NEGATIVE_INFINITY;
+    valid++;
+  });
   t.sort();
   const k = tailOrderStatistic(tailProbability(level) / 2, valid);
   if (k < 1) return null;

@@ -1,11 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { relativeDifferenceBootstrap } from '../../src/statistics/bootstrap/relativeDifferenceBootstrap.js';
+import { relativeDifferenceBootstrap } from '../../../src/statistics/bootstrap/relativeDifferenceBootstrap.js';
 import {
   type StationaryBootstrapOptions,
   stationaryBootstrap,
-} from '../../src/statistics/bootstrap/stationaryBootstrap.js';
-import { expectClose, readSeries } from './expectClose.js';
+} from '../../../src/statistics/bootstrap/stationaryBootstrap.js';
+import { expectClose } from '../../helpers/tolerance.js';
+import { readSeries } from './bootstrapFixtures.js';
 
 const options: StationaryBootstrapOptions = {
   resamples: 499,
@@ -41,23 +42,12 @@ describe('relativeDifferenceBootstrap', () => {
         const baseline = new Float64Array(candidate.length).fill(1);
         const relative = relativeDifferenceBootstrap(candidate, baseline, { ...options, seed });
         const absolute = stationaryBootstrap(candidate, { ...options, seed, margin: 1 });
-        const context = {
-          what: '',
-          source: 'stationaryBootstrap on the same data and seed',
-          inputs: { seed },
-        };
-        expectClose(relative.standardError!, absolute.standardError!, 1e-9, {
-          ...context,
-          what: 'SE',
-        });
-        expectClose(relative.interval!.lower, absolute.interval!.lower - 1, 1e-9, {
-          ...context,
-          what: 'lower',
-        });
-        expectClose(relative.interval!.upper, absolute.interval!.upper - 1, 1e-9, {
-          ...context,
-          what: 'upper',
-        });
+        const source = 'stationaryBootstrap on the same data and seed';
+        const about = (what: string) => ({ what, source, inputs: { seed } });
+        const within = { relative: 1e-9, absolute: 1e-9 };
+        expectClose(relative.standardError!, absolute.standardError!, within, about('SE'));
+        expectClose(relative.interval!.lower, absolute.interval!.lower - 1, within, about('lower'));
+        expectClose(relative.interval!.upper, absolute.interval!.upper - 1, within, about('upper'));
       }),
       { numRuns: 30 },
     );
@@ -74,15 +64,25 @@ describe('relativeDifferenceBootstrap', () => {
       options,
     );
     for (const key of ['lower', 'upper'] as const) {
-      expectClose(b.interval![key], a.interval![key], 1e-12, {
-        what: key,
-        source: 'scale invariance of a ratio',
-      });
+      expectClose(
+        b.interval![key],
+        a.interval![key],
+        { relative: 1e-12, absolute: 1e-12 },
+        {
+          what: key,
+          source: 'scale invariance of a ratio',
+        },
+      );
     }
-    expectClose(b.relativeDifference!, a.relativeDifference!, 1e-12, {
-      what: 'θ̂',
-      source: 'scale invariance',
-    });
+    expectClose(
+      b.relativeDifference!,
+      a.relativeDifference!,
+      { relative: 1e-12, absolute: 1e-12 },
+      {
+        what: 'θ̂',
+        source: 'scale invariance',
+      },
+    );
     // p-value ≤ α exactly when the relative margin is below the one-sided bound.
     for (const margin of [
       a.oneSidedLower!.lower,

@@ -1,12 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createGeometricSampler } from '../../src/random/geometricSampler.js';
-import { createRandomSource } from '../../src/random/randomSource.js';
-import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
-import { resampleMeanDeviation } from '../../src/statistics/bootstrap/resampleMeanDeviation.js';
-import { drawStationaryBlocks } from '../../src/statistics/bootstrap/stationaryBlocks.js';
-import { expectClose } from './expectClose.js';
+import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
+import { createRandomSource } from '../../../src/random/randomSource.js';
+import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPrefixSums.js';
+import { resampleMeanDeviation } from '../../../src/statistics/bootstrap/resampleMeanDeviation.js';
+import { drawStationaryBlocks } from '../../../src/statistics/bootstrap/stationaryBlocks.js';
+import { mean } from '../../../src/statistics/mean.js';
+import { expectClose } from '../../helpers/tolerance.js';
 import { blocksOf, naiveResampleMean } from './naiveResample.js';
 
 describe('resampleMeanDeviation (deterministic step)', () => {
@@ -24,7 +24,12 @@ describe('resampleMeanDeviation (deterministic step)', () => {
         [0, 1],
       ]),
     );
-    expectClose(shifted, 1 / 3, 1e-15, { what: 'mean(3, 3, 1) − 2', source: 'hand computation' });
+    expectClose(
+      shifted,
+      1 / 3,
+      { relative: 1e-15, absolute: 1e-15 },
+      { what: 'mean(3, 3, 1) − 2', source: 'hand computation' },
+    );
   });
 
   it('equals the naive per-observation resample mean for any fixed blocks (to 1e-12)', () => {
@@ -53,15 +58,20 @@ describe('resampleMeanDeviation (deterministic step)', () => {
     );
     fc.assert(
       fc.property(case_, ({ d, pairs }) => {
-        const mean = meanOf(d);
+        const centre = mean(d);
         const blocks = blocksOf(pairs);
-        const fast = mean + resampleMeanDeviation(centredPrefixSums(d, mean), d.length, blocks);
+        const fast = centre + resampleMeanDeviation(centredPrefixSums(d, centre), d.length, blocks);
         const naive = naiveResampleMean(d, blocks);
-        expectClose(fast, naive, 1e-12, {
-          what: 'prefix-sum resample mean vs naive',
-          source: 'naive per-observation sum (test/bootstrap/naiveResample.ts)',
-          inputs: { d: Array.from(d), pairs },
-        });
+        expectClose(
+          fast,
+          naive,
+          { relative: 1e-12, absolute: 1e-12 },
+          {
+            what: 'prefix-sum resample mean vs naive',
+            source: 'naive per-observation sum (test/statistics/bootstrap/naiveResample.ts)',
+            inputs: { d: Array.from(d), pairs },
+          },
+        );
       }),
     );
   });
@@ -69,19 +79,24 @@ describe('resampleMeanDeviation (deterministic step)', () => {
   it('equals the naive resample mean on blocks drawn by the random step (n = 500, 200 resamples)', () => {
     const n = 500;
     const d = Float64Array.from({ length: n }, (_, t) => Math.sin(0.3 * t) + 0.01 * t);
-    const mean = meanOf(d);
-    const prefix = centredPrefixSums(d, mean);
+    const centre = mean(d);
+    const prefix = centredPrefixSums(d, centre);
     for (const b of [1, 3.5, 40, 1000]) {
       const sampler = createGeometricSampler(b);
       const random = createRandomSource(5);
       for (let r = 0; r < 200; r++) {
         const blocks = drawStationaryBlocks(n, sampler, random);
-        const fast = mean + resampleMeanDeviation(prefix, n, blocks);
-        expectClose(fast, naiveResampleMean(d, blocks), 1e-12, {
-          what: `resample ${r}`,
-          source: 'naive per-observation sum',
-          inputs: { b, seed: 5 },
-        });
+        const fast = centre + resampleMeanDeviation(prefix, n, blocks);
+        expectClose(
+          fast,
+          naiveResampleMean(d, blocks),
+          { relative: 1e-12, absolute: 1e-12 },
+          {
+            what: `resample ${r}`,
+            source: 'naive per-observation sum',
+            inputs: { b, seed: 5 },
+          },
+        );
       }
     }
   });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { createRandomSource, type RandomSource } from '../../src/random/randomSource.js';
-import { stationaryBootstrap } from '../../src/statistics/bootstrap/stationaryBootstrap.js';
+import { createRandomSource, type RandomSource } from '../../../src/random/randomSource.js';
+import { stationaryBootstrap } from '../../../src/statistics/bootstrap/stationaryBootstrap.js';
 
 /** Standard normal by Box & Muller (1958): √(−2 ln u₁) cos(2π u₂), u₁ in (0, 1]. */
 function normal(random: RandomSource): number {

@@ -8,12 +8,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createResamplePool, type ResamplePool } from '../../src/parallel/resamplePool.js';
 import { createRandomSource, type RandomSourceFactory } from '../../src/random/randomSource.js';
 import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
 import {
   type ResampleJob,
   runResampleJob,
   stationaryBootstrap,
 } from '../../src/statistics/bootstrap/stationaryBootstrap.js';
+import { mean } from '../../src/statistics/mean.js';
 
 // The worker runs bundled JavaScript, as in dist/: bundle it once for these tests.
 const root = path.resolve(import.meta.dirname, '..', '..');
@@ -44,7 +44,7 @@ afterAll(async () => {
 
 function jobOf(d: Float64Array, expectedBlockLength: number, resamples: number, seed: number) {
   const job: ResampleJob = {
-    prefix: centredPrefixSums(d, meanOf(d)),
+    prefix: centredPrefixSums(d, mean(d)),
     n: d.length,
     expectedBlockLength,
     resamples,

@@ -2,9 +2,9 @@ import { describe, expect, it } from 'vitest';
 import {
   type AutomaticBlockLength,
   automaticBlockLength,
-} from '../../src/statistics/bootstrap/automaticBlockLength.js';
-import { flatTop } from '../../src/statistics/bootstrap/flatTopWindow.js';
-import { readFixture, readSeries } from './expectClose.js';
+} from '../../../src/statistics/bootstrap/automaticBlockLength.js';
+import { flatTop } from '../../../src/statistics/bootstrap/flatTopWindow.js';
+import { readFixture, readSeries } from './bootstrapFixtures.js';
 
 type Reference = Omit<AutomaticBlockLength, 'notes'> & { series: string };
 

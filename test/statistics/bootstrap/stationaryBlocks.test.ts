@@ -1,9 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createGeometricSampler } from '../../src/random/geometricSampler.js';
-import { createRandomSource } from '../../src/random/randomSource.js';
-import { drawStationaryBlocks } from '../../src/statistics/bootstrap/stationaryBlocks.js';
-import { scriptedSource } from '../random/scriptedSource.js';
+import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
+import { createRandomSource } from '../../../src/random/randomSource.js';
+import { drawStationaryBlocks } from '../../../src/statistics/bootstrap/stationaryBlocks.js';
+import { scriptedSource } from '../../random/scriptedSource.js';
 
 describe('drawStationaryBlocks (random step)', () => {
   it('gives blocks with starts on 0..n−1 and lengths ≥ 1 that sum to n', () => {

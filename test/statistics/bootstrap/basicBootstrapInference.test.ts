@@ -5,7 +5,7 @@ import {
   minimumResamples,
   tailOrderStatistic,
   tailProbability,
-} from '../../src/statistics/bootstrap/basicBootstrapInference.js';
+} from '../../../src/statistics/bootstrap/basicBootstrapInference.js';
 
 /** The adjacent doubles below and above x. */
 function neighbours(x: number): [number, number] {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { stationaryBootstrap } from '../../src/statistics/bootstrap/stationaryBootstrap.js';
+import { stationaryBootstrap } from '../../../src/statistics/bootstrap/stationaryBootstrap.js';
 
 // The lower-tail p-value (used by the non-inferiority and superiority policies) counts the same
 // resamples from the other side: (1 + #{U ≥ δ}) + (1 + #{U ≤ δ}) = B + 2 + #{U = δ}.

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/core/inputError.js';
-import { type ParseOptions, parseForecastText } from '../../src/reading/tableBuilder.js';
+import { type ParseOptions, parseForecastText } from '../../src/reading/forecastTableReader.js';
 
 const base: ParseOptions = { role: 'baseline' };
 

@@ -1,11 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createGeometricSampler } from '../../src/random/geometricSampler.js';
-import { createRandomSource, Xoroshiro128PlusSource } from '../../src/random/randomSource.js';
-import { centredPrefixSums } from '../../src/statistics/bootstrap/centredPrefixSums.js';
-import { meanOf } from '../../src/statistics/bootstrap/centring.js';
-import { resampleDeviationsInline } from '../../src/statistics/bootstrap/resampleDeviationsInline.js';
-import { resampleDeviationsGeneric } from '../../src/statistics/bootstrap/resampleJob.js';
+import { createGeometricSampler } from '../../../src/random/geometricSampler.js';
+import { createRandomSource, Xoroshiro128PlusSource } from '../../../src/random/randomSource.js';
+import { centredPrefixSums } from '../../../src/statistics/bootstrap/centredPrefixSums.js';
+import { resampleDeviationsInline } from '../../../src/statistics/bootstrap/resampleDeviationsInline.js';
+import { resampleDeviationsGeneric } from '../../../src/statistics/bootstrap/resampleJob.js';
+import { mean } from '../../../src/statistics/mean.js';
 
 const sourceOf = (seed: number, stream: number) =>
   createRandomSource(seed, stream) as Xoroshiro128PlusSource;
@@ -27,7 +27,7 @@ describe('resampleDeviationsInline', () => {
         fc.integer({ min: 1, max: 40 }),
         (values, b, seed, stream, count) => {
           const d = Float64Array.from(values, (x) => x / 64);
-          const prefix = centredPrefixSums(d, meanOf(d));
+          const prefix = centredPrefixSums(d, mean(d));
           const sampler = createGeometricSampler(b);
           const inlineSource = sourceOf(seed, stream);
           const genericSource = sourceOf(seed, stream);
@@ -59,7 +59,7 @@ describe('resampleDeviationsInline', () => {
       [3000, 1.001, 30],
     ] as const) {
       const d = Float64Array.from({ length: n }, (_, t) => Math.sin(t * 0.37) + (t % 11) / 8);
-      const prefix = centredPrefixSums(d, meanOf(d));
+      const prefix = centredPrefixSums(d, mean(d));
       const sampler = createGeometricSampler(b);
       const fast = resampleDeviationsInline(prefix, n, sampler, sourceOf(77, 2), count);
       const slow = resampleDeviationsGeneric(prefix, n, sampler, sourceOf(77, 2), count);

@@ -1,4 +1,4 @@
-import type { StationaryBlocks } from '../../src/statistics/bootstrap/stationaryBlocks.js';
+import type { StationaryBlocks } from '../../../src/statistics/bootstrap/stationaryBlocks.js';
 
 /** The resample mean observation by observation: block (s, ℓ) contributes d_{(s+j) mod n}, j < ℓ. */
 export function naiveResampleMean(d: Float64Array, blocks: StationaryBlocks): number {
