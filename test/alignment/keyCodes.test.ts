@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { alignPanel } from '../../src/alignment/alignPanel.js';
 import { keyCodes } from '../../src/alignment/keyCodes.js';
 import type { KeyColumns, KeyPart, KeyPartName } from '../../src/alignment/keyLayout.js';
-import { parseForecastText } from '../../src/reading/tableBuilder.js';
+import { parseForecastText } from '../../src/reading/forecastTableReader.js';
 
 const NAMES: readonly KeyPartName[] = ['series', 'timestamp', 'horizon', 'origin', 'path'];
 
