@@ -12262,6 +12262,516 @@ function printable(text) {
   );
 }
 
+// src/alignment/keyLayout.ts
+function keyLayout(dictionaries, namesSeries) {
+  const { series, time, horizons, origin, path: path2 } = dictionaries;
+  const actual = [
+    { name: "series", cardinality: series.names.length, label: (id) => series.names[id] },
+    {
+      name: "timestamp",
+      cardinality: time.order.labels.length,
+      label: (id) => time.order.labels[id]
+    }
+  ];
+  const prediction = [
+    ...actual,
+    {
+      name: "horizon",
+      cardinality: horizons.values.length,
+      label: (id) => `${horizons.values[id]}`
+    }
+  ];
+  if (origin !== null) {
+    prediction.push({
+      name: "origin",
+      cardinality: origin.order.labels.length,
+      label: (id) => origin.order.labels[id]
+    });
+  }
+  if (path2 !== null) {
+    prediction.push({
+      name: "path",
+      cardinality: path2.names.length,
+      label: (id) => path2.names[id]
+    });
+  }
+  return { dictionaries, prediction, actual, namesSeries };
+}
+function partColumn(keys, part) {
+  const column = keys[part];
+  if (column === null) throw new Error(`the key has no ${part} part`);
+  return column;
+}
+function keyColumns(layout, table2, role) {
+  const { series, time, horizons, origin, path: path2 } = layout.dictionaries;
+  const n = table2.size;
+  const predictions = role !== "actuals";
+  return {
+    size: n,
+    series: mapIds(table2.series?.ids ?? null, series.ids[role], n),
+    timestamp: mapIds(table2.timestamp.ids, time.ranks[role], n),
+    horizon: predictions ? horizons.ranksOf(table2.horizon, n) : null,
+    origin: predictions && origin !== null ? mapIds(table2.origin.ids, origin.ranks[role], n) : null,
+    path: predictions && path2 !== null ? mapIds(table2.path.ids, path2.ids[role], n) : null
+  };
+}
+function describeKey(layout, keys, row, parts = keys.horizon === null ? layout.actual : layout.prediction) {
+  const shown = [];
+  for (const part of parts) {
+    if (part.name === "series" && !layout.namesSeries) continue;
+    shown.push(echo(`${part.name}=${part.label(partColumn(keys, part.name)[row])}`, 80));
+  }
+  return shown.join(" ");
+}
+function mapIds(ids, map, n) {
+  const out = new Int32Array(n);
+  if (ids === null) return out.fill(map[0]);
+  for (let i = 0; i < n; i++) out[i] = map[ids[i]];
+  return out;
+}
+
+// src/alignment/keyOrder.ts
+function sortByKey(size, components, codes = null) {
+  let order = new Int32Array(size);
+  for (let i = 0; i < size; i++) order[i] = i;
+  if (codes !== null && isAscending(codes)) return { order, sorted: codes };
+  let sorted = codes;
+  let next = new Int32Array(size);
+  let spare = null;
+  for (let c = components.length - 1; c >= 0; c--) {
+    const { values, cardinality } = components[c];
+    if (cardinality <= 1 || isAscendingIn(values, order)) continue;
+    const starts = new Int32Array(cardinality + 1);
+    for (let i = 0; i < size; i++) starts[values[i] + 1]++;
+    for (let v = 0; v < cardinality; v++) starts[v + 1] += starts[v];
+    if (sorted === null) {
+      for (let i = 0; i < size; i++) {
+        const row = order[i];
+        next[starts[values[row]]++] = row;
+      }
+    } else {
+      const target = spare ?? (sorted instanceof Uint32Array ? new Uint32Array(size) : new Float64Array(size));
+      for (let i = 0; i < size; i++) {
+        const row = order[i];
+        const at = starts[values[row]]++;
+        next[at] = row;
+        target[at] = sorted[i];
+      }
+      spare = sorted === codes ? null : sorted;
+      sorted = target;
+    }
+    [order, next] = [next, order];
+  }
+  return { order, sorted };
+}
+function isAscending(codes) {
+  for (let i = 1; i < codes.length; i++) if (codes[i - 1] > codes[i]) return false;
+  return true;
+}
+function isAscendingIn(values, order) {
+  for (let i = 1; i < order.length; i++) {
+    if (values[order[i - 1]] > values[order[i]]) return false;
+  }
+  return true;
+}
+
+// src/alignment/keyCodes.ts
+function keyCodes(parts, keys) {
+  let product = 1;
+  for (const part of parts) product *= part.cardinality;
+  if (product <= 2 ** 32) return mixedRadix(parts, keys, (n) => new Uint32Array(n));
+  if (product <= Number.MAX_SAFE_INTEGER) {
+    return mixedRadix(parts, keys, (n) => new Float64Array(n));
+  }
+  let total = 0;
+  for (const k of keys) total += k.size;
+  return denseRanks(parts, keys, total);
+}
+function mixedRadix(parts, keys, allocate) {
+  const used = parts.filter((part) => part.cardinality > 1);
+  return keys.map((k) => {
+    const codes = allocate(k.size);
+    for (let p = 0; p < used.length; p += 2) {
+      const a = partColumn(k, used[p].name);
+      const radixA = used[p].cardinality;
+      const second = used[p + 1];
+      if (second === void 0) {
+        for (let i = 0; i < k.size; i++) codes[i] = codes[i] * radixA + a[i];
+        continue;
+      }
+      const b = partColumn(k, second.name);
+      const radixB = second.cardinality;
+      if (p === 0) for (let i = 0; i < k.size; i++) codes[i] = a[i] * radixB + b[i];
+      else {
+        for (let i = 0; i < k.size; i++) codes[i] = (codes[i] * radixA + a[i]) * radixB + b[i];
+      }
+    }
+    return codes;
+  });
+}
+function denseRanks(parts, keys, total) {
+  const components = parts.map((part) => {
+    const values = new Int32Array(total);
+    let at2 = 0;
+    for (const k of keys) {
+      values.set(partColumn(k, part.name), at2);
+      at2 += k.size;
+    }
+    return { values, cardinality: part.cardinality };
+  });
+  const { order } = sortByKey(total, components);
+  const rank = new Uint32Array(total);
+  let current = -1;
+  for (let i = 0; i < total; i++) {
+    const row = order[i];
+    if (i === 0 || !sameKey(components, order[i - 1], row)) current++;
+    rank[row] = current;
+  }
+  let at = 0;
+  return keys.map((k) => {
+    const codes = rank.slice(at, at + k.size);
+    at += k.size;
+    return codes;
+  });
+}
+function sameKey(components, a, b) {
+  for (const { values } of components) if (values[a] !== values[b]) return false;
+  return true;
+}
+
+// src/alignment/mergeJoin.ts
+var KEY_EXAMPLES = 5;
+function mergeJoin(baseline, candidate, describe) {
+  const bOrder = baseline.order;
+  const cOrder = candidate.order;
+  const bCodes = baseline.sorted;
+  const cCodes = candidate.sorted;
+  const nb = bOrder.length;
+  const nc = cOrder.length;
+  const baselineRows = new Int32Array(Math.min(nb, nc));
+  const candidateRows = new Int32Array(Math.min(nb, nc));
+  const examples = { baselineOnly: [], candidateOnly: [] };
+  let matched = 0;
+  let baselineOnly = 0;
+  let candidateOnly = 0;
+  let i = 0;
+  let j = 0;
+  while (i < nb && j < nc) {
+    const b = bOrder[i];
+    const c = cOrder[j];
+    const bCode = bCodes[i];
+    const cCode = cCodes[j];
+    if (bCode === cCode) {
+      baselineRows[matched] = b;
+      candidateRows[matched] = c;
+      matched++;
+      i++;
+      j++;
+    } else if (bCode < cCode) {
+      if (baselineOnly++ < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, b));
+      i++;
+    } else {
+      if (candidateOnly++ < KEY_EXAMPLES) examples.candidateOnly.push(describe(candidate, c));
+      j++;
+    }
+  }
+  for (; i < nb; i++) {
+    if (baselineOnly++ < KEY_EXAMPLES) examples.baselineOnly.push(describe(baseline, bOrder[i]));
+  }
+  for (; j < nc; j++) {
+    if (candidateOnly++ < KEY_EXAMPLES)
+      examples.candidateOnly.push(describe(candidate, cOrder[j]));
+  }
+  return {
+    matched,
+    baselineRows: baselineRows.subarray(0, matched),
+    candidateRows: candidateRows.subarray(0, matched),
+    baselineOnlyRows: oneSided(bOrder, baselineRows.subarray(0, matched), baselineOnly),
+    candidateOnly,
+    examples
+  };
+}
+function oneSided(order, matchedRows, count) {
+  const out = new Int32Array(count);
+  if (count === 0) return out;
+  const isMatched = new Uint8Array(order.length);
+  for (let m = 0; m < matchedRows.length; m++) isMatched[matchedRows[m]] = 1;
+  let k = 0;
+  for (let i = 0; i < order.length; i++) if (isMatched[order[i]] === 0) out[k++] = order[i];
+  return out;
+}
+
+// src/alignment/sortedKeys.ts
+function sortKeys(layout, parts, table2, keys, codes) {
+  const components = parts.map((part) => ({
+    values: partColumn(keys, part.name),
+    cardinality: part.cardinality
+  }));
+  const order = sortByKey(keys.size, components, codes);
+  const sorted = order.sorted;
+  for (let i = 1; i < order.order.length; i++) {
+    if (sorted[i - 1] === sorted[i]) {
+      const a = order.order[i - 1];
+      const b = order.order[i];
+      const first = Math.min(table2.lines[a], table2.lines[b]);
+      const second = Math.max(table2.lines[a], table2.lines[b]);
+      throw new InputError(
+        `duplicated key ${describeKey(layout, keys, a, parts)}: lines ${first} and ${second} have the same key`,
+        { file: table2.summary.path, line: second, value: describeKey(layout, keys, b, parts) }
+      );
+    }
+  }
+  return { table: table2, keys, order: order.order, sorted };
+}
+
+// src/alignment/actualsJoin.ts
+function joinActuals(layout, baseline, match, actuals, describe) {
+  const keys = keyColumns(layout, actuals, "actuals");
+  const [bCodes, aCodes] = keyCodes(layout.actual, [baseline.keys, keys]);
+  const { order: aOrder, sorted: aSorted } = sortKeys(
+    layout,
+    layout.actual,
+    actuals,
+    keys,
+    aCodes
+  );
+  const rows = new Int32Array(match.matched).fill(-1);
+  const used = new Uint8Array(actuals.size);
+  const withoutActualExamples = [];
+  let withoutActual = 0;
+  let k = 0;
+  for (let m = 0; m < match.matched; m++) {
+    const b = match.baselineRows[m];
+    const code2 = bCodes[b];
+    while (k < aOrder.length && aSorted[k] < code2) k++;
+    if (k < aOrder.length && aSorted[k] === code2) {
+      rows[m] = aOrder[k];
+      used[aOrder[k]] = 1;
+    } else {
+      withoutActual++;
+      if (withoutActualExamples.length < KEY_EXAMPLES) withoutActualExamples.push(describe(b));
+    }
+  }
+  let unused = 0;
+  for (let r = 0; r < actuals.size; r++) if (used[r] === 0) unused++;
+  return { keys, rows, withoutActual, withoutActualExamples, unused };
+}
+function checkActualColumns(baseline, candidate) {
+  for (const table2 of [baseline, candidate]) {
+    if (table2.actual === null) {
+      throw new InputError(
+        `no actual column and no separate actuals file: each predictions file must then carry the actual values`,
+        { file: table2.summary.path, line: 1, column: "actual" }
+      );
+    }
+  }
+}
+function panelRows(match, actuals) {
+  if (actuals === null) {
+    const size2 = match.matched;
+    return {
+      size: size2,
+      baseline: match.baselineRows,
+      candidate: match.candidateRows,
+      actuals: new Int32Array(size2).fill(-1)
+    };
+  }
+  const size = match.matched - actuals.withoutActual;
+  const baseline = new Int32Array(size);
+  const candidate = new Int32Array(size);
+  const rows = new Int32Array(size);
+  let p = 0;
+  for (let m = 0; m < match.matched; m++) {
+    const a = actuals.rows[m];
+    if (a === -1) continue;
+    baseline[p] = match.baselineRows[m];
+    candidate[p] = match.candidateRows[m];
+    rows[p] = a;
+    p++;
+  }
+  return { size, baseline, candidate, actuals: rows };
+}
+
+// src/alignment/gatherRows.ts
+function gatherRows(values, rows) {
+  const out = new Float64Array(rows.length);
+  for (let p = 0; p < rows.length; p++) out[p] = values[rows[p]];
+  return out;
+}
+function gatherIntRows(values, rows) {
+  const out = new Int32Array(rows.length);
+  for (let p = 0; p < rows.length; p++) out[p] = values[rows[p]];
+  return out;
+}
+
+// src/alignment/agreedValues.ts
+function agreedActualAndWeight(sources, describeRow) {
+  const { baseline, candidate, actuals } = sources;
+  const actual = agreedValues(
+    valueSources(sources, (t) => t.actual),
+    sources.rows.size,
+    "actual",
+    describeRow
+  );
+  const weightSources = valueSources(sources, (t) => t.weight);
+  if (weightSources.length === 0) return { actual, weight: null };
+  const fromActuals = actuals !== void 0 && actuals.weight !== null;
+  if (!fromActuals && weightSources.length === 1) {
+    const only = weightSources[0].table;
+    const other = only === baseline ? candidate : baseline;
+    throw new InputError(
+      `only this file has a weight column (${other.summary.path} has none); weights must come from the actuals file or from both predictions files`,
+      { file: only.summary.path, line: 1, column: weightSources[0].column.column }
+    );
+  }
+  return {
+    actual,
+    weight: agreedValues(weightSources, sources.rows.size, "weight", describeRow)
+  };
+}
+function valueSources(sources, pick) {
+  const { baseline, candidate, actuals, rows } = sources;
+  const list = [];
+  if (actuals !== void 0) {
+    const column = pick(actuals);
+    if (column !== null) list.push({ table: actuals, column, rows: rows.actuals });
+  }
+  const bc = pick(baseline);
+  if (bc !== null) list.push({ table: baseline, column: bc, rows: rows.baseline });
+  const cc = pick(candidate);
+  if (cc !== null) list.push({ table: candidate, column: cc, rows: rows.candidate });
+  return list;
+}
+function agreedValues(sources, size, what, describeRow) {
+  const first = sources[0];
+  const values = gatherRows(first.column.values, first.rows);
+  for (let s = 1; s < sources.length; s++) {
+    const other = sources[s];
+    const v = other.column.values;
+    const rows = other.rows;
+    for (let p = 0; p < size; p++) {
+      const mine = v[rows[p]];
+      const theirs = values[p];
+      if (mine !== theirs) {
+        const line2 = other.table.lines[rows[p]];
+        const firstLine = first.table.lines[first.rows[p]];
+        throw new InputError(
+          `the ${what} differs between files for ${describeRow(p)}: ${theirs} in ${first.table.summary.path} line ${firstLine}, ${mine} in ${other.table.summary.path} line ${line2}`,
+          {
+            file: other.table.summary.path,
+            line: line2,
+            column: other.column.column,
+            value: String(mine)
+          }
+        );
+      }
+    }
+  }
+  return values;
+}
+
+// src/alignment/alignmentErrors.ts
+function noCommonKey(tables, layout, match) {
+  const { baseline, candidate } = tables;
+  const { origin, path: path2 } = layout.dictionaries;
+  const eg = (list) => list.length > 0 ? ` (e.g. ${list[0]})` : "";
+  return new InputError(
+    `${baseline.summary.path} and ${candidate.summary.path} have no key (series, timestamp, horizon${origin !== null ? ", origin" : ""}${path2 !== null ? ", path" : ""}) in common: ${baseline.size} baseline rows${eg(match.examples.baselineOnly)}, ${candidate.size} candidate rows${eg(match.examples.candidateOnly)}`,
+    { file: candidate.summary.path }
+  );
+}
+function noActualInCommon(tables, matched) {
+  const { baseline, candidate, actuals } = tables;
+  return new InputError(
+    `none of the ${matched} keys common to ${baseline.summary.path} and ${candidate.summary.path} has an actual value in this file`,
+    { file: actuals.summary.path }
+  );
+}
+
+// src/alignment/compactKeys.ts
+function compactKeys(layout, baseline, rows) {
+  const { series, time, horizons, origin, path: path2 } = layout.dictionaries;
+  const keys = baseline.keys;
+  const seriesIds = compact(gatherIntRows(keys.series, rows), series.names);
+  const timeIds = compact(gatherIntRows(keys.timestamp, rows), time.order.labels);
+  const instants = time.order.instants;
+  const horizon = new Int32Array(rows.length);
+  const horizonRank = keys.horizon;
+  const horizonValues = horizons.values;
+  for (let p = 0; p < rows.length; p++) horizon[p] = horizonValues[horizonRank[rows[p]]];
+  const originIds = origin === null ? null : compact(gatherIntRows(keys.origin, rows), origin.order.labels);
+  const pathIds = path2 === null ? null : compact(gatherIntRows(keys.path, rows), path2.names);
+  return {
+    series: seriesIds.ids,
+    seriesNames: seriesIds.names,
+    time: timeIds.ids,
+    timestamps: timeIds.names,
+    timestampKind: time.order.kind,
+    timestampKindReason: time.order.reason,
+    timeFormat: time.order.format,
+    timeInstants: instants === null ? null : Float64Array.from(timeIds.kept, (rank) => instants[rank]),
+    horizon,
+    origin: originIds === null ? null : originIds.ids,
+    origins: originIds === null ? [] : originIds.names,
+    originKind: origin === null ? "text" : origin.order.kind,
+    path: pathIds === null ? null : pathIds.ids,
+    paths: pathIds === null ? [] : pathIds.names
+  };
+}
+function compact(ids, names) {
+  const remap = new Int32Array(names.length).fill(-1);
+  for (let p = 0; p < ids.length; p++) remap[ids[p]] = 0;
+  const keptNames = [];
+  const kept2 = [];
+  for (let id = 0; id < names.length; id++) {
+    if (remap[id] === 0) {
+      remap[id] = keptNames.length;
+      keptNames.push(names[id]);
+      kept2.push(id);
+    }
+  }
+  if (keptNames.length < names.length)
+    for (let p = 0; p < ids.length; p++) ids[p] = remap[ids[p]];
+  return { ids, names: keptNames, kept: kept2 };
+}
+
+// src/alignment/comparableForecasts.ts
+function comparableForecasts(baseline, candidate, baselineRows, candidateRows) {
+  const bLevels = baseline.quantiles.map((q) => q.level);
+  const cLevels = candidate.quantiles.map((q) => q.level);
+  const common = bLevels.filter((l) => cLevels.includes(l));
+  const bothPredict = baseline.prediction !== null && candidate.prediction !== null;
+  if (!bothPredict && common.length === 0) {
+    const offer = (t) => [
+      t.prediction === null ? "" : `point forecasts ("${t.prediction.column}")`,
+      t.quantiles.length === 0 ? "" : `quantiles ${t.quantiles.map((q) => q.column).join(", ")}`
+    ].filter((s) => s !== "").join(" and ");
+    throw new InputError(
+      `nothing to compare: ${baseline.summary.path} has ${offer(baseline)}, ${candidate.summary.path} has ${offer(candidate)}`,
+      { file: candidate.summary.path, line: 1 }
+    );
+  }
+  const forecasts = (table2, rows) => ({
+    prediction: bothPredict ? gatherRows(table2.prediction.values, rows) : null,
+    quantiles: table2.quantiles.filter((q) => common.includes(q.level)).map(
+      (q) => ({
+        level: q.level,
+        column: q.column,
+        values: gatherRows(q.values, rows)
+      })
+    )
+  });
+  return {
+    baseline: forecasts(baseline, baselineRows),
+    candidate: forecasts(candidate, candidateRows),
+    quantileLevels: {
+      common,
+      baselineOnly: bLevels.filter((l) => !cLevels.includes(l)),
+      candidateOnly: cLevels.filter((l) => !bLevels.includes(l))
+    }
+  };
+}
+
 // src/reading/numbers.ts
 function parseDecimal(text) {
   const n = text.length;
@@ -12447,39 +12957,6 @@ var EXACT_POWERS = [
   1e21,
   1e22
 ];
-
-// src/alignment/keyOrder.ts
-function sortByKey(size, components) {
-  let order = new Int32Array(size);
-  for (let i = 0; i < size; i++) order[i] = i;
-  let sorted = true;
-  for (let i = 1; i < size && sorted; i++)
-    sorted = compareKeys(components, i - 1, components, i) <= 0;
-  if (sorted) return order;
-  let next = new Int32Array(size);
-  for (let c = components.length - 1; c >= 0; c--) {
-    const { values, cardinality } = components[c];
-    if (cardinality <= 1) continue;
-    const starts = new Int32Array(cardinality + 1);
-    for (let i = 0; i < size; i++) starts[values[i] + 1]++;
-    for (let v = 0; v < cardinality; v++) starts[v + 1] += starts[v];
-    for (let i = 0; i < size; i++) {
-      const row = order[i];
-      next[starts[values[row]]++] = row;
-    }
-    const swap = order;
-    order = next;
-    next = swap;
-  }
-  return order;
-}
-function compareKeys(components, a, other, b, depth = components.length) {
-  for (let c = 0; c < depth; c++) {
-    const d = components[c].values[a] - other[c].values[b];
-    if (d !== 0) return d;
-  }
-  return 0;
-}
 
 // src/alignment/civilDays.ts
 function daysFromCivil(year, month, day) {
@@ -12716,372 +13193,53 @@ function compareCodeUnits(a, b) {
   return a < b ? -1 : a > b ? 1 : 0;
 }
 
-// src/alignment/alignPanel.ts
-var EXAMPLES = 5;
-function alignPanel(input, hooks = {}) {
-  const { baseline, candidate, actuals } = input;
-  const progress = hooks.onProgress ?? (() => {
-  });
-  const bFile = baseline.summary.path;
-  const cFile = candidate.summary.path;
+// src/alignment/keyDictionaries.ts
+function keyDictionaries(tables, timeFormat) {
+  const { baseline, candidate, actuals } = tables;
   checkSameShape(baseline, candidate, "series", (t) => t.series);
   checkSameShape(baseline, candidate, "origin", (t) => t.origin);
   checkSameShape(baseline, candidate, "path", (t) => t.path);
   if (actuals !== void 0) checkSameShape(baseline, actuals, "series", (t) => t.series);
-  const tables = actuals === void 0 ? [baseline, candidate] : [baseline, candidate, actuals];
-  const series = orderSeries(tables.map((t) => t.series));
-  const timeFormat = hooks.timeFormat ?? "auto";
-  const time = orderLabels(
-    tables.map((t) => ({ file: t.summary.path, column: t.timestamp })),
+  const all = actuals === void 0 ? [baseline, candidate] : [baseline, candidate, actuals];
+  const series = byRole(
+    all.map((t) => t.series),
+    orderSeries
+  );
+  const time = timeDictionary(
+    all.map((t) => t.timestamp),
+    all,
     "timestamp",
     timeFormat
   );
-  const hasOrigin = baseline.origin !== null;
-  const origin = hasOrigin ? orderLabels(
-    [baseline, candidate].map((t) => ({ file: t.summary.path, column: t.origin })),
-    "origin",
-    timeFormat
-  ) : null;
-  const hasPath = baseline.path !== null;
-  const path2 = hasPath ? orderPaths([baseline.path, candidate.path]) : null;
-  const originAt = 3;
-  const pathAt = hasOrigin ? 4 : 3;
-  const horizons = orderHorizons([baseline, candidate]);
-  progress(0.1);
-  const keysOf = (table2, index, withHorizon) => {
-    const n = table2.size;
-    const components = [
-      { values: mapIds(table2.series, series.ids[index], n), cardinality: series.names.length },
-      {
-        values: mapIds(table2.timestamp, time.ranks[index], n),
-        cardinality: time.labels.length
-      }
-    ];
-    if (withHorizon) {
-      const values = new Int32Array(n);
-      const h = table2.horizon?.values;
-      if (h === void 0) values.fill(horizons.rankOf(1));
-      else for (let i = 0; i < n; i++) values[i] = horizons.rankOf(h[i]);
-      components.push({ values, cardinality: horizons.values.length });
-      if (origin !== null) {
-        components.push({
-          values: mapIds(table2.origin, origin.ranks[index], n),
-          cardinality: origin.labels.length
-        });
-      }
-      if (path2 !== null) {
-        components.push({
-          values: mapIds(table2.path, path2.ids[index], n),
-          cardinality: path2.names.length
-        });
-      }
-    }
-    return components;
-  };
-  const bKeys = keysOf(baseline, 0, true);
-  const cKeys = keysOf(candidate, 1, true);
-  progress(0.2);
-  const bOrder = sortByKey(baseline.size, bKeys);
-  progress(0.3);
-  const cOrder = sortByKey(candidate.size, cKeys);
-  progress(0.4);
-  const describeKey = (keys, row, depth = keys.length) => {
-    const parts = [];
-    if (baseline.series !== null) parts.push(`series=${series.names[keys[0].values[row]]}`);
-    parts.push(`timestamp=${time.labels[keys[1].values[row]]}`);
-    if (depth > 2) parts.push(`horizon=${horizons.values[keys[2].values[row]]}`);
-    if (depth > originAt && origin !== null) {
-      parts.push(`origin=${origin.labels[keys[originAt].values[row]]}`);
-    }
-    if (depth > pathAt && path2 !== null) {
-      parts.push(`path=${path2.names[keys[pathAt].values[row]]}`);
-    }
-    return parts.map((part) => echo(part, 80)).join(" ");
-  };
-  const checkDuplicates = (table2, keys, order) => {
-    for (let i = 1; i < order.length; i++) {
-      const a = order[i - 1];
-      const b = order[i];
-      if (compareKeys(keys, a, keys, b) === 0) {
-        const first = Math.min(table2.lines[a], table2.lines[b]);
-        const second = Math.max(table2.lines[a], table2.lines[b]);
-        throw new InputError(
-          `duplicated key ${describeKey(keys, a)}: lines ${first} and ${second} have the same key`,
-          { file: table2.summary.path, line: second, value: describeKey(keys, b) }
-        );
-      }
-    }
-  };
-  checkDuplicates(baseline, bKeys, bOrder);
-  checkDuplicates(candidate, cKeys, cOrder);
-  progress(0.5);
-  let pairs = new Int32Array(Math.min(baseline.size, candidate.size) * 2);
-  let matched = 0;
-  let baselineOnly = 0;
-  let candidateOnly = 0;
-  const baselineOnlyRows = [];
-  const examples = { baselineOnly: [], candidateOnly: [] };
-  {
-    let i = 0;
-    let j = 0;
-    while (i < bOrder.length || j < cOrder.length) {
-      const c = i >= bOrder.length ? 1 : j >= cOrder.length ? -1 : compareKeys(bKeys, bOrder[i], cKeys, cOrder[j]);
-      if (c === 0) {
-        pairs[2 * matched] = bOrder[i++];
-        pairs[2 * matched + 1] = cOrder[j++];
-        matched++;
-      } else if (c < 0) {
-        if (baselineOnly++ < EXAMPLES) examples.baselineOnly.push(describeKey(bKeys, bOrder[i]));
-        baselineOnlyRows.push(bOrder[i]);
-        i++;
-      } else {
-        if (candidateOnly++ < EXAMPLES) {
-          examples.candidateOnly.push(describeKey(cKeys, cOrder[j]));
-        }
-        j++;
-      }
-    }
-  }
-  if (matched === 0) {
-    const eg = (list) => list.length > 0 ? ` (e.g. ${list[0]})` : "";
-    throw new InputError(
-      `${bFile} and ${cFile} have no key (series, timestamp, horizon${hasOrigin ? ", origin" : ""}${hasPath ? ", path" : ""}) in common: ${baseline.size} baseline rows${eg(examples.baselineOnly)}, ${candidate.size} candidate rows${eg(examples.candidateOnly)}`,
-      { file: cFile }
-    );
-  }
-  progress(0.6);
-  const actualRow = new Int32Array(matched).fill(-1);
-  let withoutActual = 0;
-  let actualsUnused = 0;
-  const withoutActualExamples = [];
-  if (actuals !== void 0) {
-    const aKeys = keysOf(actuals, 2, false);
-    const aOrder = sortByKey(actuals.size, aKeys);
-    checkDuplicates(actuals, aKeys, aOrder);
-    const used = new Uint8Array(actuals.size);
-    let k = 0;
-    for (let m = 0; m < matched; m++) {
-      const b = pairs[2 * m];
-      let c = 1;
-      while (k < aOrder.length) {
-        c = compareKeys(bKeys, b, aKeys, aOrder[k], 2);
-        if (c <= 0) break;
-        k++;
-      }
-      if (k < aOrder.length && c === 0) {
-        actualRow[m] = aOrder[k];
-        used[aOrder[k]] = 1;
-      } else {
-        withoutActual++;
-        if (withoutActualExamples.length < EXAMPLES) {
-          withoutActualExamples.push(describeKey(bKeys, b));
-        }
-      }
-    }
-    for (let r = 0; r < actuals.size; r++) if (used[r] === 0) actualsUnused++;
-  } else {
-    for (const table2 of [baseline, candidate]) {
-      if (table2.actual === null) {
-        throw new InputError(
-          `no actual column and no separate actuals file: each predictions file must then carry the actual values`,
-          { file: table2.summary.path, line: 1, column: "actual" }
-        );
-      }
-    }
-  }
-  const size = matched - withoutActual;
-  if (size === 0) {
-    throw new InputError(
-      `none of the ${matched} keys common to ${bFile} and ${cFile} has an actual value in this file`,
-      { file: actuals.summary.path }
-    );
-  }
-  const bRows = new Int32Array(size);
-  const cRows = new Int32Array(size);
-  const aRows = new Int32Array(size);
-  {
-    let p = 0;
-    for (let m = 0; m < matched; m++) {
-      if (actuals !== void 0 && actualRow[m] === -1) continue;
-      bRows[p] = pairs[2 * m];
-      cRows[p] = pairs[2 * m + 1];
-      aRows[p] = actualRow[m];
-      p++;
-    }
-  }
-  pairs = new Int32Array(0);
-  progress(0.7);
-  const describeRow = (p) => describeKey(bKeys, bRows[p]);
-  const sources = (pick) => {
-    const list = [];
-    if (actuals !== void 0) {
-      const column = pick(actuals);
-      if (column !== null) list.push({ table: actuals, column, rows: aRows });
-    }
-    const bc = pick(baseline);
-    if (bc !== null) list.push({ table: baseline, column: bc, rows: bRows });
-    const cc = pick(candidate);
-    if (cc !== null) list.push({ table: candidate, column: cc, rows: cRows });
-    return list;
-  };
-  const actualSources = sources((t) => t.actual);
-  const actual = agreedValues(actualSources, size, "actual", describeRow);
-  const weightSources = sources((t) => t.weight);
-  let weight = null;
-  if (weightSources.length > 0) {
-    const fromActuals = actuals !== void 0 && actuals.weight !== null;
-    if (!fromActuals && weightSources.length === 1) {
-      const only = weightSources[0].table;
-      const other = only === baseline ? candidate : baseline;
-      throw new InputError(
-        `only this file has a weight column (${other.summary.path} has none); weights must come from the actuals file or from both predictions files`,
-        { file: only.summary.path, line: 1, column: weightSources[0].column.column }
-      );
-    }
-    weight = agreedValues(weightSources, size, "weight", describeRow);
-  }
-  progress(0.8);
-  const bLevels = baseline.quantiles.map((q) => q.level);
-  const cLevels = candidate.quantiles.map((q) => q.level);
-  const common = bLevels.filter((l) => cLevels.includes(l));
-  const bothPredict = baseline.prediction !== null && candidate.prediction !== null;
-  if (!bothPredict && common.length === 0) {
-    const offer = (t) => [
-      t.prediction === null ? "" : `point forecasts ("${t.prediction.column}")`,
-      t.quantiles.length === 0 ? "" : `quantiles ${t.quantiles.map((q) => q.column).join(", ")}`
-    ].filter((s) => s !== "").join(" and ");
-    throw new InputError(
-      `nothing to compare: ${bFile} has ${offer(baseline)}, ${cFile} has ${offer(candidate)}`,
-      { file: cFile, line: 1 }
-    );
-  }
-  const forecasts = (table2, rows) => ({
-    prediction: bothPredict ? gather(table2.prediction.values, rows) : null,
-    quantiles: table2.quantiles.filter((q) => common.includes(q.level)).map(
-      (q) => ({
-        level: q.level,
-        column: q.column,
-        values: gather(q.values, rows)
-      })
-    )
-  });
-  const seriesIds = compact(gather32(bKeys[0].values, bRows), series.names);
-  const timeIds = compact(gather32(bKeys[1].values, bRows), time.labels);
-  const timeInstants = time.instants === null ? null : Float64Array.from(timeIds.kept, (rank) => time.instants[rank]);
-  const horizon = new Int32Array(size);
-  for (let p = 0; p < size; p++) horizon[p] = horizons.values[bKeys[2].values[bRows[p]]];
-  const originIds = origin === null ? null : compact(gather32(bKeys[originAt].values, bRows), origin.labels);
-  const pathIds = path2 === null ? null : compact(gather32(bKeys[pathAt].values, bRows), path2.names);
-  progress(1);
+  const origin = baseline.origin === null ? null : timeDictionary([baseline.origin, candidate.origin], all, "origin", timeFormat);
+  const path2 = baseline.path === null ? null : byRole([baseline.path, candidate.path], (columns) => orderPaths(columns));
+  return { series, time, horizons: orderHorizons([baseline, candidate]), origin, path: path2 };
+}
+function perRole(list) {
   return {
-    size,
-    series: seriesIds.ids,
-    seriesNames: seriesIds.names,
-    time: timeIds.ids,
-    timestamps: timeIds.names,
-    timestampKind: time.kind,
-    timestampKindReason: time.reason,
-    timeFormat: time.format,
-    timeInstants,
-    horizon,
-    origin: originIds === null ? null : originIds.ids,
-    origins: originIds === null ? [] : originIds.names,
-    originKind: origin === null ? "text" : origin.kind,
-    path: pathIds === null ? null : pathIds.ids,
-    paths: pathIds === null ? [] : pathIds.names,
-    actual,
-    actualSource: actuals === void 0 ? { file: bFile, lines: gather32(baseline.lines, bRows) } : { file: actuals.summary.path, lines: gather32(actuals.lines, aRows) },
-    baseline: forecasts(baseline, bRows),
-    candidate: forecasts(candidate, cRows),
-    weight,
-    quantileLevels: {
-      common,
-      baselineOnly: bLevels.filter((l) => !cLevels.includes(l)),
-      candidateOnly: cLevels.filter((l) => !bLevels.includes(l))
-    },
-    coverage: {
-      files: tables.map((t) => t.summary),
-      rowsMatched: size,
-      baselineOnly,
-      candidateOnly,
-      withoutActual,
-      actualsUnused,
-      examples: { ...examples, withoutActual: withoutActualExamples },
-      lacking: lackingRows(
-        baselineOnlyRows,
-        baseline,
-        bKeys,
-        actuals === void 0 ? null : { table: actuals, keys: () => keysOf(actuals, 2, false) },
-        series.names,
-        time.labels,
-        horizons.values
-      )
-    }
+    baseline: list[0] ?? null,
+    candidate: list[1] ?? null,
+    actuals: list[2] ?? null
   };
 }
-function lackingRows(rows, baseline, bKeys, actuals, seriesNames, timeLabels, horizonValues) {
-  const n = rows.length;
-  const out = {
-    series: new Int32Array(n),
-    seriesNames,
-    time: new Int32Array(n),
-    timestamps: timeLabels,
-    horizon: new Int32Array(n),
-    actual: new Float64Array(n).fill(Number.NaN),
-    prediction: new Float64Array(n).fill(Number.NaN)
-  };
-  let fromActuals = null;
-  const actualColumn = actuals?.table.actual ?? null;
-  if (n > 0 && baseline.actual === null && actuals !== null && actualColumn !== null) {
-    fromActuals = /* @__PURE__ */ new Map();
-    const [aSeries, aTime] = actuals.keys();
-    for (let r = 0; r < actuals.table.size; r++) {
-      fromActuals.set(
-        aSeries.values[r] * timeLabels.length + aTime.values[r],
-        actualColumn.values[r]
-      );
-    }
-  }
-  for (let k = 0; k < n; k++) {
-    const row = rows[k];
-    const s = bKeys[0].values[row];
-    const t = bKeys[1].values[row];
-    out.series[k] = s;
-    out.time[k] = t;
-    out.horizon[k] = horizonValues[bKeys[2].values[row]];
-    if (baseline.prediction !== null) out.prediction[k] = baseline.prediction.values[row];
-    if (baseline.actual !== null) out.actual[k] = baseline.actual.values[row];
-    else if (fromActuals !== null)
-      out.actual[k] = fromActuals.get(s * timeLabels.length + t) ?? Number.NaN;
-  }
-  return out;
+function byRole(columns, order) {
+  const names = order(columns);
+  const index = /* @__PURE__ */ new Map();
+  names.forEach((name, id) => {
+    index.set(name, id);
+  });
+  const ids = columns.map(
+    (column) => Int32Array.from(column?.labels ?? [""], (label) => index.get(label))
+  );
+  return { names, ids: perRole(ids) };
 }
-function agreedValues(sources, size, what, describeRow) {
-  const first = sources[0];
-  const values = gather(first.column.values, first.rows);
-  for (let s = 1; s < sources.length; s++) {
-    const other = sources[s];
-    const v = other.column.values;
-    const rows = other.rows;
-    for (let p = 0; p < size; p++) {
-      const mine = v[rows[p]];
-      const theirs = values[p];
-      if (mine !== theirs) {
-        const line2 = other.table.lines[rows[p]];
-        const firstLine = first.table.lines[first.rows[p]];
-        throw new InputError(
-          `the ${what} differs between files for ${describeRow(p)}: ${theirs} in ${first.table.summary.path} line ${firstLine}, ${mine} in ${other.table.summary.path} line ${line2}`,
-          {
-            file: other.table.summary.path,
-            line: line2,
-            column: other.column.column,
-            value: String(mine)
-          }
-        );
-      }
-    }
-  }
-  return values;
+function timeDictionary(columns, tables, what, format) {
+  const order = orderLabels(
+    columns.map((column, i) => ({ file: tables[i].summary.path, column })),
+    what,
+    format
+  );
+  return { order, ranks: perRole(order.ranks) };
 }
 function checkSameShape(a, b, what, pick) {
   const ca = pick(a);
@@ -13097,7 +13255,7 @@ function checkSameShape(a, b, what, pick) {
 function orderSeries(columns) {
   const all = /* @__PURE__ */ new Set();
   for (const column of columns) for (const label of column?.labels ?? [""]) all.add(label);
-  return numberLabels(columns, [...all].sort(compareCodeUnits));
+  return [...all].sort(compareCodeUnits);
 }
 function orderPaths(columns) {
   const all = /* @__PURE__ */ new Set();
@@ -13106,21 +13264,11 @@ function orderPaths(columns) {
   const values = /* @__PURE__ */ new Map();
   for (const name of names) values.set(name, parseDecimal(name));
   const numeric = names.every((name) => !Number.isNaN(values.get(name)));
-  names.sort(
+  return names.sort(
     numeric ? (a, b) => values.get(a) - values.get(b) || compareCodeUnits(a, b) : compareCodeUnits
   );
-  return numberLabels(columns, names);
 }
-function numberLabels(columns, names) {
-  const index = /* @__PURE__ */ new Map();
-  names.forEach((name, id) => {
-    index.set(name, id);
-  });
-  const ids = columns.map(
-    (column) => Int32Array.from(column?.labels ?? [""], (label) => index.get(label))
-  );
-  return { names, ids };
-}
+var DENSE_HORIZONS = 1 << 16;
 function orderHorizons(tables) {
   let max = 1;
   for (const table2 of tables) {
@@ -13129,7 +13277,10 @@ function orderHorizons(tables) {
       for (let i = 0; i < h.length; i++) if (h[i] > max) max = h[i];
     }
   }
-  if (max <= 1 << 16) {
+  if (max === 1) {
+    return { values: [1], ranksOf: (_column, size) => new Int32Array(size) };
+  }
+  if (max <= DENSE_HORIZONS) {
     const rank2 = new Int32Array(max + 1).fill(-1);
     for (const table2 of tables) {
       const h = table2.horizon?.values;
@@ -13138,7 +13289,16 @@ function orderHorizons(tables) {
     }
     const values2 = [];
     for (let v = 1; v <= max; v++) if (rank2[v] === 0) rank2[v] = values2.push(v) - 1;
-    return { values: values2, rankOf: (horizon) => rank2[horizon] };
+    return {
+      values: values2,
+      ranksOf: (column, size) => {
+        const out = new Int32Array(size);
+        if (column === null) return out.fill(rank2[1]);
+        const h = column.values;
+        for (let i = 0; i < size; i++) out[i] = rank2[h[i]];
+        return out;
+      }
+    };
   }
   const seen = /* @__PURE__ */ new Set();
   for (const table2 of tables) {
@@ -13151,39 +13311,130 @@ function orderHorizons(tables) {
   values.forEach((v, r) => {
     rank.set(v, r);
   });
-  return { values, rankOf: (horizon) => rank.get(horizon) };
+  return {
+    values,
+    ranksOf: (column, size) => {
+      const out = new Int32Array(size);
+      if (column === null) return out.fill(rank.get(1));
+      const h = column.values;
+      for (let i = 0; i < size; i++) out[i] = rank.get(h[i]);
+      return out;
+    }
+  };
 }
-function mapIds(column, map, n) {
-  const out = new Int32Array(n);
-  if (column === null) return out.fill(map[0]);
-  const ids = column.ids;
-  for (let i = 0; i < n; i++) out[i] = map[ids[i]];
-  return out;
-}
-function gather(values, rows) {
-  const out = new Float64Array(rows.length);
-  for (let p = 0; p < rows.length; p++) out[p] = values[rows[p]];
-  return out;
-}
-function gather32(values, rows) {
-  const out = new Int32Array(rows.length);
-  for (let p = 0; p < rows.length; p++) out[p] = values[rows[p]];
-  return out;
-}
-function compact(ids, names) {
-  const remap = new Int32Array(names.length).fill(-1);
-  for (let p = 0; p < ids.length; p++) remap[ids[p]] = 0;
-  const keptNames = [];
-  const kept = [];
-  for (let id = 0; id < names.length; id++) {
-    if (remap[id] === 0) {
-      remap[id] = keptNames.length;
-      keptNames.push(names[id]);
-      kept.push(id);
+
+// src/alignment/lackingRows.ts
+function lackingRows(layout, rows, baseline, baselineKeys, actuals) {
+  const { series, time, horizons } = layout.dictionaries;
+  const timeCount = time.order.labels.length;
+  const n = rows.length;
+  const out = {
+    series: new Int32Array(n),
+    seriesNames: series.names,
+    time: new Int32Array(n),
+    timestamps: time.order.labels,
+    horizon: new Int32Array(n),
+    actual: new Float64Array(n).fill(Number.NaN),
+    prediction: new Float64Array(n).fill(Number.NaN)
+  };
+  let fromActuals = null;
+  const actualColumn = actuals?.table.actual ?? null;
+  if (n > 0 && baseline.actual === null && actuals !== null && actualColumn !== null) {
+    fromActuals = /* @__PURE__ */ new Map();
+    const keys = actuals.keys;
+    for (let r = 0; r < actuals.table.size; r++) {
+      fromActuals.set(keys.series[r] * timeCount + keys.timestamp[r], actualColumn.values[r]);
     }
   }
-  for (let p = 0; p < ids.length; p++) ids[p] = remap[ids[p]];
-  return { ids, names: keptNames, kept };
+  for (let k = 0; k < n; k++) {
+    const row = rows[k];
+    const s = baselineKeys.series[row];
+    const t = baselineKeys.timestamp[row];
+    out.series[k] = s;
+    out.time[k] = t;
+    out.horizon[k] = horizons.values[baselineKeys.horizon[row]];
+    if (baseline.prediction !== null) out.prediction[k] = baseline.prediction.values[row];
+    if (baseline.actual !== null) out.actual[k] = baseline.actual.values[row];
+    else if (fromActuals !== null) {
+      out.actual[k] = fromActuals.get(s * timeCount + t) ?? Number.NaN;
+    }
+  }
+  return out;
+}
+
+// src/alignment/alignPanel.ts
+function alignPanel(input, hooks = {}) {
+  const { baseline, candidate, actuals } = input;
+  const progress = hooks.onProgress ?? (() => {
+  });
+  const layout = keyLayout(
+    keyDictionaries(input, hooks.timeFormat ?? "auto"),
+    baseline.series !== null
+  );
+  progress(0.1);
+  const bKeys = keyColumns(layout, baseline, "baseline");
+  const cKeys = keyColumns(layout, candidate, "candidate");
+  const [bCodes, cCodes] = keyCodes(layout.prediction, [bKeys, cKeys]);
+  progress(0.2);
+  const bSorted = sortKeys(layout, layout.prediction, baseline, bKeys, bCodes);
+  progress(0.3);
+  const cSorted = sortKeys(layout, layout.prediction, candidate, cKeys, cCodes);
+  progress(0.5);
+  const match = mergeJoin(bSorted, cSorted, (side, row) => describeKey(layout, side.keys, row));
+  if (match.matched === 0) throw noCommonKey(input, layout, match);
+  progress(0.6);
+  let actualsMatch = null;
+  if (actuals !== void 0) {
+    actualsMatch = joinActuals(
+      layout,
+      bSorted,
+      match,
+      actuals,
+      (row) => describeKey(layout, bKeys, row)
+    );
+  } else checkActualColumns(baseline, candidate);
+  const rows = panelRows(match, actualsMatch);
+  if (rows.size === 0) throw noActualInCommon(input, match.matched);
+  progress(0.7);
+  const { actual, weight } = agreedActualAndWeight(
+    { baseline, candidate, actuals, rows },
+    (p) => describeKey(layout, bKeys, rows.baseline[p])
+  );
+  progress(0.8);
+  const forecasts = comparableForecasts(baseline, candidate, rows.baseline, rows.candidate);
+  const keys = compactKeys(layout, bSorted, rows.baseline);
+  progress(1);
+  return {
+    size: rows.size,
+    ...keys,
+    actual,
+    actualSource: actuals === void 0 ? { file: baseline.summary.path, lines: gatherIntRows(baseline.lines, rows.baseline) } : { file: actuals.summary.path, lines: gatherIntRows(actuals.lines, rows.actuals) },
+    baseline: forecasts.baseline,
+    candidate: forecasts.candidate,
+    weight,
+    quantileLevels: forecasts.quantileLevels,
+    coverage: {
+      files: (actuals === void 0 ? [baseline, candidate] : [baseline, candidate, actuals]).map(
+        (t) => t.summary
+      ),
+      rowsMatched: rows.size,
+      baselineOnly: match.baselineOnlyRows.length,
+      candidateOnly: match.candidateOnly,
+      withoutActual: actualsMatch?.withoutActual ?? 0,
+      actualsUnused: actualsMatch?.unused ?? 0,
+      examples: {
+        ...match.examples,
+        withoutActual: actualsMatch?.withoutActualExamples ?? []
+      },
+      lacking: lackingRows(
+        layout,
+        match.baselineOnlyRows,
+        baseline,
+        bKeys,
+        actuals === void 0 || actualsMatch === null ? null : { table: actuals, keys: actualsMatch.keys }
+      )
+    }
+  };
 }
 
 // src/alignment/historyBySeries.ts
@@ -25056,26 +25307,92 @@ function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length))
     );
   }
   const u = centred(x);
-  const cosTable = new Float64Array(n + 1);
-  for (let r = 0; r <= n; r++) cosTable[r] = Math.cos(Math.PI * r / (2 * n));
-  const period = 4 * n;
-  const half = 2 * n;
+  const allRows = keptWeights(n, nu);
+  const scratch = allRows === null ? new Float64Array(BLOCK * n) : null;
+  const cosTable = allRows === null ? cosineTable(n) : null;
+  const scale = Math.sqrt(2 / n);
   let sumOfSquares = 0;
-  for (let j = 1; j <= nu; j++) {
-    const step = 2 * j % period;
-    let k = j % period;
-    let lambda = 0;
-    for (let t = 0; t < n; t++) {
-      const r = k > half ? period - k : k;
-      const c = r > n ? -cosTable[half - r] : cosTable[r];
-      lambda += c * u[t];
-      k += step;
-      if (k >= period) k -= period;
+  for (let j0 = 1; j0 <= nu; j0 += BLOCK) {
+    const count = Math.min(BLOCK, nu - j0 + 1);
+    let weights;
+    let at;
+    if (allRows === null) {
+      for (let b = 0; b < count; b++) cosineRow(j0 + b, n, cosTable, scratch, b * n);
+      weights = scratch;
+      at = 0;
+    } else {
+      weights = allRows;
+      at = (j0 - 1) * n;
     }
-    lambda *= Math.sqrt(2 / n);
-    sumOfSquares += lambda * lambda;
+    if (count === BLOCK) {
+      const at1 = at + n;
+      const at2 = at1 + n;
+      const at3 = at2 + n;
+      let l0 = 0;
+      let l1 = 0;
+      let l2 = 0;
+      let l3 = 0;
+      for (let t = 0; t < n; t++) {
+        const v = u[t];
+        l0 += weights[at + t] * v;
+        l1 += weights[at1 + t] * v;
+        l2 += weights[at2 + t] * v;
+        l3 += weights[at3 + t] * v;
+      }
+      const m0 = l0 * scale;
+      const m1 = l1 * scale;
+      const m2 = l2 * scale;
+      const m3 = l3 * scale;
+      sumOfSquares += m0 * m0;
+      sumOfSquares += m1 * m1;
+      sumOfSquares += m2 * m2;
+      sumOfSquares += m3 * m3;
+    } else {
+      for (let b = 0; b < count; b++) {
+        const row = at + b * n;
+        let lambda = 0;
+        for (let t = 0; t < n; t++) lambda += weights[row + t] * u[t];
+        lambda *= scale;
+        sumOfSquares += lambda * lambda;
+      }
+    }
   }
   return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+}
+var BLOCK = 4;
+var WEIGHTS_KEPT = 1 << 21;
+var kept = null;
+function keptWeights(n, nu) {
+  if (n * nu > WEIGHTS_KEPT) return null;
+  if (kept === null || kept.n !== n || kept.rows < nu) {
+    const weights = new Float64Array(n * nu);
+    let from = 1;
+    if (kept !== null && kept.n === n) {
+      weights.set(kept.weights);
+      from = kept.rows + 1;
+    }
+    const cosTable = cosineTable(n);
+    for (let j = from; j <= nu; j++) cosineRow(j, n, cosTable, weights, (j - 1) * n);
+    kept = { n, rows: nu, weights };
+  }
+  return kept.weights;
+}
+function cosineTable(n) {
+  const table2 = new Float64Array(n + 1);
+  for (let r = 0; r <= n; r++) table2[r] = Math.cos(Math.PI * r / (2 * n));
+  return table2;
+}
+function cosineRow(j, n, cosTable, out, at) {
+  const period = 4 * n;
+  const half = 2 * n;
+  const step = 2 * j % period;
+  let k = j % period;
+  for (let t = 0; t < n; t++) {
+    const r = k > half ? period - k : k;
+    out[at + t] = r > n ? -cosTable[half - r] : cosTable[r];
+    k += step;
+    if (k >= period) k -= period;
+  }
 }
 
 // src/statistics/harveyLeybourneNewbold.ts
@@ -26874,15 +27191,30 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
   };
 }
 function groupRows(values) {
+  const n = values.length;
+  let max = 0;
+  for (let i = 0; i < n; i++) if (values[i] > max) max = values[i];
+  let slotOf = values;
+  let slotValue = null;
+  let slots = max + 1;
+  if (max > 4 * n + 16) {
+    const distinct2 = [...new Set(values)].sort((a, b) => a - b);
+    const rank = new Map(distinct2.map((v, r) => [v, r]));
+    slotOf = Int32Array.from(values, (v) => rank.get(v));
+    slotValue = distinct2;
+    slots = distinct2.length;
+  }
+  const starts = new Int32Array(slots + 1);
+  for (let i = 0; i < n; i++) starts[slotOf[i] + 1]++;
+  for (let v = 0; v < slots; v++) starts[v + 1] += starts[v];
+  const rows = new Int32Array(n);
+  const next = starts.slice(0, slots);
+  for (let i = 0; i < n; i++) rows[next[slotOf[i]]++] = i;
   const groups = /* @__PURE__ */ new Map();
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i];
-    let list = groups.get(v);
-    if (list === void 0) {
-      list = [];
-      groups.set(v, list);
+  for (let v = 0; v < slots; v++) {
+    if (starts[v + 1] > starts[v]) {
+      groups.set(slotValue === null ? v : slotValue[v], rows.subarray(starts[v], starts[v + 1]));
     }
-    list.push(i);
   }
   return groups;
 }

@@ -1,3 +1,5 @@
+import type { KeyCodes } from './keyCodes.js';
+
 /**
  * Orders rows by a composite key of small non-negative integers, most significant first, with a
  * least-significant-digit radix sort: one stable counting sort per key component, O(rows +
@@ -10,43 +12,69 @@ export interface KeyComponent {
   readonly cardinality: number;
 }
 
-export function sortByKey(size: number, components: readonly KeyComponent[]): Int32Array {
+/** Rows in key order, and (when the rows' key codes were given) the codes in that order. */
+export interface KeyOrder {
+  readonly order: Int32Array;
+  /** codes[order[i]], carried along by the sort so later passes read them in order; or null. */
+  readonly sorted: KeyCodes | null;
+}
+
+/**
+ * The row order that sorts the key. `codes`, when given, are the rows' key codes (see keyCodes):
+ * if they are already ascending (files are often written in key order) the identity is the
+ * answer without sorting, and they come back in key order. A component on which the rows are
+ * already in order (a file written time point by time point, for the timestamp) costs one check
+ * and no pass.
+ */
+export function sortByKey(
+  size: number,
+  components: readonly KeyComponent[],
+  codes: KeyCodes | null = null,
+): KeyOrder {
   let order = new Int32Array(size);
   for (let i = 0; i < size; i++) order[i] = i;
-  // Files are often written in key order already: then the identity is the answer.
-  let sorted = true;
-  for (let i = 1; i < size && sorted; i++)
-    sorted = compareKeys(components, i - 1, components, i) <= 0;
-  if (sorted) return order;
+  if (codes !== null && isAscending(codes)) return { order, sorted: codes };
+  // The codes are read, never written: the sorted copies go to buffers of their own.
+  let sorted = codes;
   let next = new Int32Array(size);
+  let spare: KeyCodes | null = null;
   for (let c = components.length - 1; c >= 0; c--) {
     const { values, cardinality } = components[c]!;
-    if (cardinality <= 1) continue;
+    if (cardinality <= 1 || isAscendingIn(values, order)) continue; // the pass would not move a row
     const starts = new Int32Array(cardinality + 1);
     for (let i = 0; i < size; i++) starts[values[i]! + 1]!++;
     for (let v = 0; v < cardinality; v++) starts[v + 1]! += starts[v]!;
-    for (let i = 0; i < size; i++) {
-      const row = order[i]!;
-      next[starts[values[row]!]!++] = row;
+    if (sorted === null) {
+      for (let i = 0; i < size; i++) {
+        const row = order[i]!;
+        next[starts[values[row]!]!++] = row;
+      }
+    } else {
+      const target: KeyCodes =
+        spare ?? (sorted instanceof Uint32Array ? new Uint32Array(size) : new Float64Array(size));
+      for (let i = 0; i < size; i++) {
+        const row = order[i]!;
+        const at = starts[values[row]!]!++;
+        next[at] = row;
+        target[at] = sorted[i]!;
+      }
+      spare = sorted === codes ? null : sorted;
+      sorted = target;
     }
-    const swap = order;
-    order = next;
-    next = swap;
+    [order, next] = [next, order];
   }
-  return order;
+  return { order, sorted };
 }
 
-/** Compares the keys of row a and row b on the first `depth` components. */
-export function compareKeys(
-  components: readonly KeyComponent[],
-  a: number,
-  other: readonly KeyComponent[],
-  b: number,
-  depth: number = components.length,
-): number {
-  for (let c = 0; c < depth; c++) {
-    const d = components[c]!.values[a]! - other[c]!.values[b]!;
-    if (d !== 0) return d;
+function isAscending(codes: KeyCodes): boolean {
+  for (let i = 1; i < codes.length; i++) if (codes[i - 1]! > codes[i]!) return false;
+  return true;
+}
+
+/** Whether values[order[i]] never decreases: a stable sort by values would keep the order. */
+function isAscendingIn(values: Int32Array, order: Int32Array): boolean {
+  for (let i = 1; i < order.length; i++) {
+    if (values[order[i - 1]!]! > values[order[i]!]!) return false;
   }
-  return 0;
+  return true;
 }

@@ -239,17 +239,36 @@ function seriesComparisons(
 
 type Mutable<T> = { -readonly [K in keyof T]: T[K] };
 
-/** Row indices by value (a horizon, a series id), in row order: one pass over the panel. */
-function groupRows(values: Int32Array): Map<number, number[]> {
-  const groups = new Map<number, number[]>();
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i]!;
-    let list = groups.get(v);
-    if (list === undefined) {
-      list = [];
-      groups.set(v, list);
+/**
+ * Row indices by value (a horizon, a series id), in row order: a counting sort into one typed
+ * array, each value's rows a view of it (no per-row growth of lists).
+ */
+function groupRows(values: Int32Array): Map<number, Int32Array> {
+  const n = values.length;
+  // Values are ids or horizons: non-negative integers, dense in practice; else ranked first.
+  let max = 0;
+  for (let i = 0; i < n; i++) if (values[i]! > max) max = values[i]!;
+  let slotOf = values;
+  let slotValue: ArrayLike<number> | null = null;
+  let slots = max + 1;
+  if (max > 4 * n + 16) {
+    const distinct = [...new Set(values)].sort((a, b) => a - b);
+    const rank = new Map(distinct.map((v, r) => [v, r]));
+    slotOf = Int32Array.from(values, (v) => rank.get(v)!);
+    slotValue = distinct;
+    slots = distinct.length;
+  }
+  const starts = new Int32Array(slots + 1);
+  for (let i = 0; i < n; i++) starts[slotOf[i]! + 1]!++;
+  for (let v = 0; v < slots; v++) starts[v + 1]! += starts[v]!;
+  const rows = new Int32Array(n);
+  const next = starts.slice(0, slots);
+  for (let i = 0; i < n; i++) rows[next[slotOf[i]!]!++] = i;
+  const groups = new Map<number, Int32Array>();
+  for (let v = 0; v < slots; v++) {
+    if (starts[v + 1]! > starts[v]!) {
+      groups.set(slotValue === null ? v : slotValue[v]!, rows.subarray(starts[v]!, starts[v + 1]!));
     }
-    list.push(i);
   }
   return groups;
 }

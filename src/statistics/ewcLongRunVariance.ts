@@ -31,7 +31,11 @@ export interface EwcLongRunVariance {
  * Conventions: ν from `ewcDegreesOfFreedom(n)` unless given; never negative. Cost O(n·ν) =
  * O(n^{5/3}) with no trigonometric call in the inner loop: every cosine is cos(π k/(2n)) for an
  * integer k = j(2t − 1) mod 4n, read from a table of n + 1 values by symmetry, so the terms are
- * as accurate as one `Math.cos` each (n = 10⁵ is about 10⁸ table reads).
+ * as accurate as one `Math.cos` each (n = 10⁵ is about 10⁸ table reads). The rows of weights are
+ * kept for the next call with the same n (a comparison calls this once per series and per margin
+ * check, all with the same n and with ν from 2 to ⌊n/2⌋), when they fit in WEIGHTS_KEPT entries,
+ * and four terms are summed side by side; each Λ_j is still summed over t in order, so the
+ * result is the same to the bit as summing one term at a time.
  *
  * @example ewcLongRunVariance(new Float64Array([1, 2, 3, 4])) // ν = 2, value ≈ 2.4874
  * @throws RangeError when ν is not an integer in 1..n−1 (higher cosines alias lower ones).
@@ -49,27 +53,109 @@ export function ewcLongRunVariance(
   }
   const u = centred(x);
 
-  // cosTable[r] = cos(π r / (2n)) for r = 0..n; other multiples of π/(2n) by symmetry.
-  const cosTable = new Float64Array(n + 1);
-  for (let r = 0; r <= n; r++) cosTable[r] = Math.cos((Math.PI * r) / (2 * n));
-  const period = 4 * n;
-  const half = 2 * n;
-
+  const allRows = keptWeights(n, nu);
+  const scratch = allRows === null ? new Float64Array(BLOCK * n) : null;
+  const cosTable = allRows === null ? cosineTable(n) : null;
+  const scale = Math.sqrt(2 / n);
   let sumOfSquares = 0;
-  for (let j = 1; j <= nu; j++) {
-    // angle of term t (0-based) is π j (2t + 1) / (2n): k starts at j and grows by 2j.
-    const step = (2 * j) % period;
-    let k = j % period;
-    let lambda = 0;
-    for (let t = 0; t < n; t++) {
-      const r = k > half ? period - k : k; // cos(2π − a) = cos(a)
-      const c = r > n ? -cosTable[half - r]! : cosTable[r]!; // cos(π − a) = −cos(a)
-      lambda += c * u[t]!;
-      k += step;
-      if (k >= period) k -= period;
+  // BLOCK terms at a time: their sums run side by side, each over t in order, so every Λ_j is
+  // summed exactly as alone, without waiting on one addition after another.
+  for (let j0 = 1; j0 <= nu; j0 += BLOCK) {
+    const count = Math.min(BLOCK, nu - j0 + 1);
+    let weights: Float64Array;
+    let at: number;
+    if (allRows === null) {
+      for (let b = 0; b < count; b++) cosineRow(j0 + b, n, cosTable!, scratch!, b * n);
+      weights = scratch!;
+      at = 0;
+    } else {
+      weights = allRows;
+      at = (j0 - 1) * n;
     }
-    lambda *= Math.sqrt(2 / n);
-    sumOfSquares += lambda * lambda;
+    if (count === BLOCK) {
+      const at1 = at + n;
+      const at2 = at1 + n;
+      const at3 = at2 + n;
+      let l0 = 0;
+      let l1 = 0;
+      let l2 = 0;
+      let l3 = 0;
+      for (let t = 0; t < n; t++) {
+        const v = u[t]!;
+        l0 += weights[at + t]! * v;
+        l1 += weights[at1 + t]! * v;
+        l2 += weights[at2 + t]! * v;
+        l3 += weights[at3 + t]! * v;
+      }
+      const m0 = l0 * scale;
+      const m1 = l1 * scale;
+      const m2 = l2 * scale;
+      const m3 = l3 * scale;
+      sumOfSquares += m0 * m0;
+      sumOfSquares += m1 * m1;
+      sumOfSquares += m2 * m2;
+      sumOfSquares += m3 * m3;
+    } else {
+      for (let b = 0; b < count; b++) {
+        const row = at + b * n;
+        let lambda = 0;
+        for (let t = 0; t < n; t++) lambda += weights[row + t]! * u[t]!;
+        lambda *= scale;
+        sumOfSquares += lambda * lambda;
+      }
+    }
   }
   return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+}
+
+/** Terms summed side by side. */
+const BLOCK = 4;
+
+/** Most weights kept between calls: 2^21 doubles (16 MiB), e.g. n = 10,000 with ν = 186. */
+export const WEIGHTS_KEPT = 1 << 21;
+
+/** The weight rows built so far for one n (j = 1..rows), kept for the next call. */
+let kept: { readonly n: number; readonly rows: number; readonly weights: Float64Array } | null =
+  null;
+
+/**
+ * The ν rows cos(π j (2t + 1)/(2n)), j = 1..ν, t = 0..n−1, row after row (possibly followed by
+ * more rows), from the kept rows, extended when ν is larger; null when n·ν is too many to keep.
+ */
+function keptWeights(n: number, nu: number): Float64Array | null {
+  if (n * nu > WEIGHTS_KEPT) return null;
+  if (kept === null || kept.n !== n || kept.rows < nu) {
+    const weights = new Float64Array(n * nu);
+    let from = 1;
+    if (kept !== null && kept.n === n) {
+      weights.set(kept.weights);
+      from = kept.rows + 1;
+    }
+    const cosTable = cosineTable(n);
+    for (let j = from; j <= nu; j++) cosineRow(j, n, cosTable, weights, (j - 1) * n);
+    kept = { n, rows: nu, weights };
+  }
+  return kept.weights;
+}
+
+/** cos(π r / (2n)) for r = 0..n; other multiples of π/(2n) by symmetry. */
+function cosineTable(n: number): Float64Array {
+  const table = new Float64Array(n + 1);
+  for (let r = 0; r <= n; r++) table[r] = Math.cos((Math.PI * r) / (2 * n));
+  return table;
+}
+
+/** out[at + t] = cos(π j (2t + 1)/(2n)) for t = 0..n−1, from the table. */
+function cosineRow(j: number, n: number, cosTable: Float64Array, out: Float64Array, at: number) {
+  const period = 4 * n;
+  const half = 2 * n;
+  // angle of term t (0-based) is π j (2t + 1) / (2n): k starts at j and grows by 2j.
+  const step = (2 * j) % period;
+  let k = j % period;
+  for (let t = 0; t < n; t++) {
+    const r = k > half ? period - k : k; // cos(2π − a) = cos(a)
+    out[at + t] = r > n ? -cosTable[half - r]! : cosTable[r]!; // cos(π − a) = −cos(a)
+    k += step;
+    if (k >= period) k -= period;
+  }
 }

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import {
   ewcDegreesOfFreedom,
   ewcLongRunVariance,
+  WEIGHTS_KEPT,
 } from '../../src/statistics/ewcLongRunVariance.js';
 import { expectClose } from '../helpers/tolerance.js';
 import { loadDieboldMarianoReferences } from './referenceFixtures.js';
@@ -74,5 +75,21 @@ describe('ewcLongRunVariance', () => {
         },
       ),
     );
+  });
+
+  it('gives the direct formula when the weights are too many to keep, and again when kept', () => {
+    // n·ν above WEIGHTS_KEPT: weights computed row by row; below: kept and reused.
+    const n = 2100;
+    const x = Float64Array.from(
+      { length: n },
+      (_, t) => Math.sin(t * 0.37) + ((t * 7919) % 13) / 13,
+    );
+    for (const nu of [1000, 40, 40]) {
+      expect(n * nu > WEIGHTS_KEPT).toBe(nu === 1000);
+      const expected = directFormula(x, nu);
+      expect(Math.abs(ewcLongRunVariance(x, nu).value - expected)).toBeLessThanOrEqual(
+        1e-12 * expected,
+      );
+    }
   });
 });
