@@ -25299,19 +25299,26 @@ function ewcDegreesOfFreedom(n) {
   return Math.max(2, Math.round(0.4 * n ** (2 / 3)));
 }
 function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length)) {
-  const n = x.length;
-  const nu = degreesOfFreedom;
+  const nu = checkedTerms("ewcLongRunVariance", x.length, degreesOfFreedom);
+  const lambda = ewcCosineTransforms(centred(x), null, nu).first;
+  let sumOfSquares = 0;
+  for (let j = 0; j < nu; j++) sumOfSquares += lambda[j] * lambda[j];
+  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+}
+function checkedTerms(caller, n, nu) {
   if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
-    throw new RangeError(
-      `ewcLongRunVariance: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`
-    );
+    throw new RangeError(`${caller}: \u03BD must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`);
   }
-  const u = centred(x);
+  return nu;
+}
+function ewcCosineTransforms(u, v, nu) {
+  const n = u.length;
+  const first = new Float64Array(nu);
+  const second = v === null ? null : new Float64Array(nu);
   const allRows = keptWeights(n, nu);
   const scratch = allRows === null ? new Float64Array(BLOCK * n) : null;
   const cosTable = allRows === null ? cosineTable(n) : null;
   const scale = Math.sqrt(2 / n);
-  let sumOfSquares = 0;
   for (let j0 = 1; j0 <= nu; j0 += BLOCK) {
     const count = Math.min(BLOCK, nu - j0 + 1);
     let weights;
@@ -25324,7 +25331,8 @@ function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length))
       weights = allRows;
       at = (j0 - 1) * n;
     }
-    if (count === BLOCK) {
+    const j = j0 - 1;
+    if (count === BLOCK && v === null) {
       const at1 = at + n;
       const at2 = at1 + n;
       const at3 = at2 + n;
@@ -25333,31 +25341,68 @@ function ewcLongRunVariance(x, degreesOfFreedom = ewcDegreesOfFreedom(x.length))
       let l2 = 0;
       let l3 = 0;
       for (let t = 0; t < n; t++) {
-        const v = u[t];
-        l0 += weights[at + t] * v;
-        l1 += weights[at1 + t] * v;
-        l2 += weights[at2 + t] * v;
-        l3 += weights[at3 + t] * v;
+        const x = u[t];
+        l0 += weights[at + t] * x;
+        l1 += weights[at1 + t] * x;
+        l2 += weights[at2 + t] * x;
+        l3 += weights[at3 + t] * x;
       }
-      const m0 = l0 * scale;
-      const m1 = l1 * scale;
-      const m2 = l2 * scale;
-      const m3 = l3 * scale;
-      sumOfSquares += m0 * m0;
-      sumOfSquares += m1 * m1;
-      sumOfSquares += m2 * m2;
-      sumOfSquares += m3 * m3;
+      first[j] = l0 * scale;
+      first[j + 1] = l1 * scale;
+      first[j + 2] = l2 * scale;
+      first[j + 3] = l3 * scale;
+    } else if (count === BLOCK && v !== null) {
+      const at1 = at + n;
+      const at2 = at1 + n;
+      const at3 = at2 + n;
+      let l0 = 0;
+      let l1 = 0;
+      let l2 = 0;
+      let l3 = 0;
+      let k0 = 0;
+      let k1 = 0;
+      let k2 = 0;
+      let k3 = 0;
+      for (let t = 0; t < n; t++) {
+        const x = u[t];
+        const y = v[t];
+        const w0 = weights[at + t];
+        const w1 = weights[at1 + t];
+        const w2 = weights[at2 + t];
+        const w3 = weights[at3 + t];
+        l0 += w0 * x;
+        l1 += w1 * x;
+        l2 += w2 * x;
+        l3 += w3 * x;
+        k0 += w0 * y;
+        k1 += w1 * y;
+        k2 += w2 * y;
+        k3 += w3 * y;
+      }
+      first[j] = l0 * scale;
+      first[j + 1] = l1 * scale;
+      first[j + 2] = l2 * scale;
+      first[j + 3] = l3 * scale;
+      second[j] = k0 * scale;
+      second[j + 1] = k1 * scale;
+      second[j + 2] = k2 * scale;
+      second[j + 3] = k3 * scale;
     } else {
       for (let b = 0; b < count; b++) {
         const row = at + b * n;
-        let lambda = 0;
-        for (let t = 0; t < n; t++) lambda += weights[row + t] * u[t];
-        lambda *= scale;
-        sumOfSquares += lambda * lambda;
+        let l = 0;
+        let k = 0;
+        for (let t = 0; t < n; t++) {
+          const w = weights[row + t];
+          l += w * u[t];
+          if (v !== null) k += w * v[t];
+        }
+        first[j + b] = l * scale;
+        if (second !== null) second[j + b] = k * scale;
       }
     }
   }
-  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+  return { first, second };
 }
 var BLOCK = 4;
 var WEIGHTS_KEPT = 1 << 21;
@@ -25393,6 +25438,27 @@ function cosineRow(j, n, cosTable, out, at) {
     k += step;
     if (k >= period) k -= period;
   }
+}
+
+// src/statistics/ewcLongRunCovariance.ts
+function ewcLongRunCovariance(x, y, degreesOfFreedom) {
+  const n = x.length;
+  if (y.length !== n) {
+    throw new RangeError(`ewcLongRunCovariance: lengths differ (${n} and ${y.length})`);
+  }
+  const nu = checkedTerms("ewcLongRunCovariance", n, degreesOfFreedom);
+  const { first, second } = ewcCosineTransforms(centred(x), centred(y), nu);
+  let dd = 0;
+  let db = 0;
+  let bb = 0;
+  for (let j = 0; j < nu; j++) {
+    const a = first[j];
+    const b = second[j];
+    dd += a * a;
+    db += a * b;
+    bb += b * b;
+  }
+  return { dd: dd / nu, db: db / nu, bb: bb / nu };
 }
 
 // src/statistics/harveyLeybourneNewbold.ts
@@ -25493,7 +25559,7 @@ function dieboldMarianoMarginSet(input) {
   if (estimator === "ewc" || estimator === "ewc-ar1") {
     const nu = input.degreesOfFreedom;
     if (nu === null) return null;
-    covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
+    covariance = ewcLongRunCovariance(d, baseline, nu);
     critical = studentTQuantile(1 - tail, nu);
     if (!finite(covariance)) return null;
     set = fieller(covariance);
@@ -27136,13 +27202,15 @@ function seriesComparisons(panel, losses, weights, hypothesis, settings, scope) 
   const rowsOf = groupRows(panel.series);
   const plain = hypothesisFor("no-regression", 0, "absolute");
   const upper = [];
+  const policyIsPlain = hypothesis.baselineFactor === 1 && Object.is(hypothesis.boundary, 0);
   const raw = panel.seriesNames.map((name, id) => {
     const series = aggregateByTime(panel, losses, rowsOf.get(id) ?? [], weights);
-    const dm = runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
-    upper.push(smallSampleValue(dm));
-    return compareLossSeries(series, scope("all", name), hypothesis, settings, {
+    const comparison = compareLossSeries(series, scope("all", name), hypothesis, settings, {
       bootstrap: false
     });
+    const dm = policyIsPlain ? comparison.dieboldMariano : runDieboldMariano(lossDifferential(series, 0), series.maxHorizon, plain, settings);
+    upper.push(smallSampleValue(dm));
+    return comparison;
   });
   const adjust = ADJUSTMENTS[settings.adjust].adjust;
   const worseP = adjust(upper);

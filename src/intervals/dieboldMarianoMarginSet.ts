@@ -1,6 +1,6 @@
 import { bartlettLongRunVariance } from '../statistics/bartlettLongRunVariance.js';
 import { standardNormalQuantile, studentTQuantile } from '../statistics/distributions.js';
-import { ewcLongRunVariance } from '../statistics/ewcLongRunVariance.js';
+import { ewcLongRunCovariance } from '../statistics/ewcLongRunCovariance.js';
 import { harveyLeybourneNewboldFactor } from '../statistics/harveyLeybourneNewbold.js';
 import { mean } from '../statistics/mean.js';
 import type { LagRule } from '../statistics/neweyWestLag.js';
@@ -30,8 +30,10 @@ export interface DieboldMarianoMarginSet {
  * Inverts the gate's Diebold–Mariano test over the relative margin: the set of r at which the
  * one-sided tests of E[L_c − (1 + r)·L_b] = 0 in either direction, each at tail probability
  * `tail`, do not reject. With D = L_c − L_b and B = L_b the tested differential is D − r·B, and
- * with the long-run covariance of (D, B) estimated once (`longRunCovariance`, with the gate's
- * estimator, its ν or its lag chosen on D), the condition is the Fieller (1954) quadratic
+ * with the long-run covariance of (D, B) estimated once with the gate's estimator, its ν or its
+ * lag chosen on D (`ewcLongRunCovariance` for `ewc` / `ewc-ar1`, from the cosine transforms of D
+ * and B in one pass; `longRunCovariance`, by polarisation, for `bartlett` / `uniform`), the
+ * condition is the Fieller (1954) quadratic
  * (`fiellerSet`) with c the (1 − tail) quantile of the gate's reference: Student t with ν df for
  * `ewc` and `ewc-ar1` (Lazarus et al. 2018; the test's own ν); for `bartlett` / `uniform` Student t with n − 1 df divided by the
  * Harvey–Leybourne–Newbold (1997) factor, or N(0, 1) when that correction is undefined (h ≥ n).
@@ -69,7 +71,7 @@ export function dieboldMarianoMarginSet(input: {
   if (estimator === 'ewc' || estimator === 'ewc-ar1') {
     const nu = input.degreesOfFreedom;
     if (nu === null) return null;
-    covariance = longRunCovariance(d, baseline, candidate, (x) => ewcLongRunVariance(x, nu).value);
+    covariance = ewcLongRunCovariance(d, baseline, nu);
     critical = studentTQuantile(1 - tail, nu);
     if (!finite(covariance)) return null;
     set = fieller(covariance);

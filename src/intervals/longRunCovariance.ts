@@ -9,7 +9,9 @@
  * B = L_b it is the candidate's loss L_c, so no third series is built. Estimating Ω once and
  * reading ω(D − r·B) off it is what makes the set of margins at which the Diebold–Mariano test
  * does not reject a quadratic inequality (Fieller 1954). Conventions: whatever `variance` uses
- * (divide by n, its lag or ν); Ω_DB by the polarisation identity above.
+ * (divide by n, its lag or ν); Ω_DB by the polarisation identity above. The margin set uses it
+ * for Bartlett and uniform weights; for ewc, `ewcLongRunCovariance` gives the same matrix from one
+ * pass over the cosine transforms of D and B.
  */
 export interface LongRunCovariance {
   readonly dd: number;

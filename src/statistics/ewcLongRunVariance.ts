@@ -44,20 +44,45 @@ export function ewcLongRunVariance(
   x: Float64Array,
   degreesOfFreedom: number = ewcDegreesOfFreedom(x.length),
 ): EwcLongRunVariance {
-  const n = x.length;
-  const nu = degreesOfFreedom;
-  if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
-    throw new RangeError(
-      `ewcLongRunVariance: ν must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`,
-    );
-  }
-  const u = centred(x);
+  const nu = checkedTerms('ewcLongRunVariance', x.length, degreesOfFreedom);
+  const lambda = ewcCosineTransforms(centred(x), null, nu).first;
+  let sumOfSquares = 0;
+  for (let j = 0; j < nu; j++) sumOfSquares += lambda[j]! * lambda[j]!;
+  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+}
 
+/** ν itself, or a RangeError naming `caller` when ν is not an integer in 1..n−1. */
+export function checkedTerms(caller: string, n: number, nu: number): number {
+  if (!Number.isInteger(nu) || nu < 1 || nu > n - 1) {
+    throw new RangeError(`${caller}: ν must be an integer in 1..${n - 1} for n = ${n}, got ${nu}`);
+  }
+  return nu;
+}
+
+/**
+ * The cosine transforms Λ_j = √(2/n) Σ_{t=1..n} cos(π j (t − ½)/n) u_t, j = 1..ν, of one centred
+ * series u, or of two (u and v, the same length) in one pass: each row of weights is read once
+ * for both, so the long-run covariance of two series (`ewcLongRunCovariance`) takes one pass over
+ * the weights instead of the three of polarisation. `first[j − 1]` is Λ_j(u), `second[j − 1]`
+ * Λ_j(v).
+ *
+ * Conventions: u and v are centred by the caller (the estimator centres at the mean); ν is
+ * checked by the caller (1..n−1). Weights come from the kept rows when n·ν fits (see
+ * `ewcLongRunVariance`), and four terms are summed side by side, each over t in order, so every
+ * Λ_j is the same to the bit whether computed alone, in a block, or beside a second series.
+ */
+export function ewcCosineTransforms(
+  u: Float64Array,
+  v: Float64Array | null,
+  nu: number,
+): { readonly first: Float64Array; readonly second: Float64Array | null } {
+  const n = u.length;
+  const first = new Float64Array(nu);
+  const second = v === null ? null : new Float64Array(nu);
   const allRows = keptWeights(n, nu);
   const scratch = allRows === null ? new Float64Array(BLOCK * n) : null;
   const cosTable = allRows === null ? cosineTable(n) : null;
   const scale = Math.sqrt(2 / n);
-  let sumOfSquares = 0;
   // BLOCK terms at a time: their sums run side by side, each over t in order, so every Λ_j is
   // summed exactly as alone, without waiting on one addition after another.
   for (let j0 = 1; j0 <= nu; j0 += BLOCK) {
@@ -72,7 +97,8 @@ export function ewcLongRunVariance(
       weights = allRows;
       at = (j0 - 1) * n;
     }
-    if (count === BLOCK) {
+    const j = j0 - 1;
+    if (count === BLOCK && v === null) {
       const at1 = at + n;
       const at2 = at1 + n;
       const at3 = at2 + n;
@@ -81,31 +107,68 @@ export function ewcLongRunVariance(
       let l2 = 0;
       let l3 = 0;
       for (let t = 0; t < n; t++) {
-        const v = u[t]!;
-        l0 += weights[at + t]! * v;
-        l1 += weights[at1 + t]! * v;
-        l2 += weights[at2 + t]! * v;
-        l3 += weights[at3 + t]! * v;
+        const x = u[t]!;
+        l0 += weights[at + t]! * x;
+        l1 += weights[at1 + t]! * x;
+        l2 += weights[at2 + t]! * x;
+        l3 += weights[at3 + t]! * x;
       }
-      const m0 = l0 * scale;
-      const m1 = l1 * scale;
-      const m2 = l2 * scale;
-      const m3 = l3 * scale;
-      sumOfSquares += m0 * m0;
-      sumOfSquares += m1 * m1;
-      sumOfSquares += m2 * m2;
-      sumOfSquares += m3 * m3;
+      first[j] = l0 * scale;
+      first[j + 1] = l1 * scale;
+      first[j + 2] = l2 * scale;
+      first[j + 3] = l3 * scale;
+    } else if (count === BLOCK && v !== null) {
+      const at1 = at + n;
+      const at2 = at1 + n;
+      const at3 = at2 + n;
+      let l0 = 0;
+      let l1 = 0;
+      let l2 = 0;
+      let l3 = 0;
+      let k0 = 0;
+      let k1 = 0;
+      let k2 = 0;
+      let k3 = 0;
+      for (let t = 0; t < n; t++) {
+        const x = u[t]!;
+        const y = v[t]!;
+        const w0 = weights[at + t]!;
+        const w1 = weights[at1 + t]!;
+        const w2 = weights[at2 + t]!;
+        const w3 = weights[at3 + t]!;
+        l0 += w0 * x;
+        l1 += w1 * x;
+        l2 += w2 * x;
+        l3 += w3 * x;
+        k0 += w0 * y;
+        k1 += w1 * y;
+        k2 += w2 * y;
+        k3 += w3 * y;
+      }
+      first[j] = l0 * scale;
+      first[j + 1] = l1 * scale;
+      first[j + 2] = l2 * scale;
+      first[j + 3] = l3 * scale;
+      second![j] = k0 * scale;
+      second![j + 1] = k1 * scale;
+      second![j + 2] = k2 * scale;
+      second![j + 3] = k3 * scale;
     } else {
       for (let b = 0; b < count; b++) {
         const row = at + b * n;
-        let lambda = 0;
-        for (let t = 0; t < n; t++) lambda += weights[row + t]! * u[t]!;
-        lambda *= scale;
-        sumOfSquares += lambda * lambda;
+        let l = 0;
+        let k = 0;
+        for (let t = 0; t < n; t++) {
+          const w = weights[row + t]!;
+          l += w * u[t]!;
+          if (v !== null) k += w * v[t]!;
+        }
+        first[j + b] = l * scale;
+        if (second !== null) second[j + b] = k * scale;
       }
     }
   }
-  return { value: sumOfSquares / nu, degreesOfFreedom: nu };
+  return { first, second };
 }
 
 /** Terms summed side by side. */
