@@ -28718,6 +28718,15 @@ async function runCandidates(settings, hooks = {}) {
   let baseline;
   let baselineName = settings.baselineModel ?? fileStem(settings.baseline);
   let candidates;
+  let rest;
+  const otherRoles = (known) => [
+    ...known === void 0 ? ["baseline"] : [],
+    ...settings.actuals === null ? [] : ["actuals"]
+  ];
+  const otherPaths = (known) => [
+    ...known === void 0 ? [settings.baseline] : [],
+    ...settings.actuals === null ? [] : [settings.actuals]
+  ];
   if (settings.modelColumn !== null) {
     const file = settings.candidates[0].path;
     const own = columnsFor(settings, "candidate");
@@ -28758,18 +28767,28 @@ async function runCandidates(settings, hooks = {}) {
     }
     candidates = [...parts].map(([name, t]) => ({ name, file: `${file}#${name}`, table: t }));
   } else {
-    candidates = [];
-    for (const c of settings.candidates) {
-      candidates.push({ name: c.name, file: c.path, table: await read(c.path, "candidate") });
-    }
+    const roles = [
+      ...settings.candidates.map(() => "candidate"),
+      ...otherRoles(void 0)
+    ];
+    const paths = [...settings.candidates.map((c) => c.path), ...otherPaths(void 0)];
+    const tables = await readRoleFiles(settings, roles, hooks, paths);
+    candidates = settings.candidates.map((c, k) => ({
+      name: c.name,
+      file: c.path,
+      table: tables[k]
+    }));
+    rest = tables.slice(settings.candidates.length);
   }
   if (candidates.length === 0) {
     throw new InputError("no candidate left to compare with the baseline", {
       file: settings.candidates[0]?.path ?? "candidate"
     });
   }
-  baseline ??= await read(settings.baseline, "baseline");
-  const actuals = settings.actuals === null ? void 0 : await read(settings.actuals, "actuals");
+  rest ??= await readRoleFiles(settings, otherRoles(baseline), hooks, otherPaths(baseline));
+  if (baseline === void 0) baseline = rest.shift();
+  const actuals = rest[0];
+  if (baseline === void 0) throw new Error("the baseline was not read");
   const folds = settings.folds === null ? void 0 : await readFoldLayout(settings.folds);
   hooks.onProgress?.({ stage: "testing", fraction: 0 });
   const report = evaluateCandidates(
@@ -28818,6 +28837,123 @@ function evaluateLossSeries(series, source, settings, resampleRunner) {
       settings,
       ...runner
     })
+  });
+}
+
+// src/parallel/readForecastFiles.ts
+import { existsSync } from "node:fs";
+import { stat as stat3 } from "node:fs/promises";
+import { availableParallelism } from "node:os";
+import { fileURLToPath } from "node:url";
+import { Worker } from "node:worker_threads";
+
+// src/parallel/readingMessages.ts
+function rebuildError(shipped) {
+  if (shipped.input) return new InputError(shipped.message, shipped.location);
+  const error = new Error(shipped.message);
+  if (shipped.stack !== void 0) error.stack = shipped.stack;
+  return error;
+}
+
+// src/parallel/readForecastFiles.ts
+var MINIMUM_PARALLEL_FILE_BYTES = 16 * 2 ** 20;
+async function readForecastFiles(files, options = {}) {
+  const threads = options.threads ?? availableParallelism();
+  const minimum = options.minimumFileBytes ?? MINIMUM_PARALLEL_FILE_BYTES;
+  const workerUrl = options.workerUrl ?? new URL("./readingWorker.js", import.meta.url);
+  const sizes = await Promise.all(files.map((f) => storedBytes(f.path)));
+  const large = sizes.filter((size) => size >= minimum).length;
+  if (threads < 2 || large < 2 || !existsSync(fileURLToPath(workerUrl))) {
+    const tables = [];
+    for (const file of files) tables.push(await readForecastFile(file.path, file.options));
+    return tables;
+  }
+  const order = files.map((_, i) => i).slice(1).sort((a, b) => sizes[b] - sizes[a] || a - b);
+  return readOnWorkers(files, order, Math.min(threads - 1, files.length - 1), workerUrl);
+}
+async function storedBytes(path2) {
+  try {
+    const info = await stat3(path2);
+    return info.isFile() ? info.size : 0;
+  } catch {
+    return 0;
+  }
+}
+function readOnWorkers(files, order, workerCount, workerUrl) {
+  return new Promise((resolve2, reject) => {
+    const outcomes = files.map(() => void 0);
+    const workers = [];
+    let next = 0;
+    let finished = false;
+    const finish = (result) => {
+      finished = true;
+      Promise.all(workers.map((w) => w.terminate())).then(result, result);
+    };
+    const settle = (index, outcome) => {
+      if (finished || outcomes[index] !== void 0) return;
+      outcomes[index] = outcome;
+      const tables = [];
+      for (const o of outcomes) {
+        if (o === void 0) return;
+        if ("error" in o) {
+          const { error } = o;
+          finish(() => reject(error));
+          return;
+        }
+        tables.push(o.table);
+      }
+      finish(() => resolve2(tables));
+    };
+    const start = () => {
+      const worker = new Worker(workerUrl);
+      workers.push(worker);
+      let current = -1;
+      const give = () => {
+        if (next >= order.length) {
+          current = -1;
+          worker.terminate().catch(() => {
+          });
+          return;
+        }
+        current = order[next++];
+        const file = files[current];
+        const { onProgress, ...readOptions } = file.options;
+        const request = {
+          index: current,
+          path: file.path,
+          options: readOptions,
+          progress: onProgress !== void 0
+        };
+        worker.postMessage(request);
+      };
+      worker.on("message", (reply) => {
+        if (reply.kind === "progress") {
+          files[reply.index]?.options.onProgress?.(reply.bytesRead, reply.totalBytes);
+          return;
+        }
+        settle(
+          reply.index,
+          reply.kind === "table" ? { table: reply.table } : { error: rebuildError(reply.error) }
+        );
+        if (!finished) give();
+      });
+      worker.on("error", (error) => {
+        if (!finished) finish(() => reject(error));
+      });
+      worker.on("exit", (code2) => {
+        if (current >= 0 && !finished) {
+          const error = new Error(`a reading worker stopped (exit code ${code2})`);
+          finish(() => reject(error));
+        }
+      });
+      give();
+    };
+    for (let w = 0; w < workerCount; w++) start();
+    const first = files[0];
+    readForecastFile(first.path, first.options).then(
+      (table2) => settle(0, { table: table2 }),
+      (error) => settle(0, { error: error instanceof Error ? error : new Error(String(error)) })
+    );
   });
 }
 
@@ -29026,22 +29162,27 @@ async function readLossSeriesFile(path2, options = {}) {
   return reader.finish(sha256);
 }
 
+// src/app/readingProgress.ts
+function readingProgress(roles, report) {
+  const stage = `reading ${[...new Set(roles)].join(", ")}`;
+  const fractions = roles.map(() => 0);
+  return {
+    forFile: (k) => (bytesRead, totalBytes) => {
+      fractions[k] = totalBytes > 0 ? Math.min(1, bytesRead / totalBytes) : 1;
+      report?.({ stage, fraction: fractions.reduce((a, b) => a + b, 0) / fractions.length });
+    }
+  };
+}
+
 // src/app/runComparison.ts
 async function runComparison(settings, hooks = {}) {
   if (settings.losses !== null)
     return { report: await runOnLossFile(settings.losses, settings, hooks) };
   if (settings.candidates.length > 1 || settings.modelColumn !== null)
     return { report: await runCandidates(settings, hooks) };
-  const read = (path2, role) => readForecastFile(path2, {
-    role,
-    columns: columnsFor(settings, role),
-    ...readDialect(settings),
-    requireActual: role === "actuals" || settings.actuals === null,
-    onProgress: (done, total) => hooks.onProgress?.({ stage: `reading ${role}`, fraction: total > 0 ? done / total : 1 })
-  });
-  const baseline = await read(settings.baseline, "baseline");
-  const candidate = await read(settings.candidate, "candidate");
-  const actuals = settings.actuals === null ? void 0 : await read(settings.actuals, "actuals");
+  const roles = settings.actuals === null ? FORECAST_ROLES : [...FORECAST_ROLES, ACTUALS_ROLE];
+  const [baseline, candidate, actuals] = await readRoleFiles(settings, roles, hooks);
+  if (baseline === void 0 || candidate === void 0) throw new Error("a file was not read");
   hooks.onProgress?.({ stage: "aligning", fraction: 0 });
   const panel = alignPanel(
     { baseline, candidate, ...actuals === void 0 ? {} : { actuals } },
@@ -29103,6 +29244,29 @@ async function readHistory(settings) {
   });
   return historyBySeries(table2, settings.timeFormat);
 }
+var FORECAST_ROLES = ["baseline", "candidate"];
+var ACTUALS_ROLE = "actuals";
+function pathOf(settings, role) {
+  if (role === "baseline") return settings.baseline;
+  if (role === "candidate") return settings.candidate;
+  if (settings.actuals === null) throw new Error("no actuals file");
+  return settings.actuals;
+}
+function readRoleFiles(settings, roles, hooks, paths = roles.map((role) => pathOf(settings, role))) {
+  const progress = readingProgress(roles, hooks.onProgress);
+  return readForecastFiles(
+    roles.map((role, k) => ({
+      path: paths[k],
+      options: {
+        role,
+        columns: columnsFor(settings, role),
+        ...readDialect(settings),
+        requireActual: role === "actuals" || settings.actuals === null,
+        onProgress: progress.forFile(k)
+      }
+    }))
+  );
+}
 function columnsFor(settings, role) {
   const own = role === "baseline" ? settings.baselineColumns : role === "candidate" ? settings.candidateColumns : {};
   const merged = { ...settings.columns, ...own };
@@ -29119,11 +29283,11 @@ function readDialect(settings) {
 }
 
 // src/parallel/resamplePool.ts
-import { availableParallelism } from "node:os";
+import { availableParallelism as availableParallelism2 } from "node:os";
 import {
   MessageChannel,
   receiveMessageOnPort,
-  Worker
+  Worker as Worker2
 } from "node:worker_threads";
 
 // src/parallel/sharedResampleTask.ts
@@ -29195,7 +29359,7 @@ function waitForSharedTask(task, describeFailure) {
 // src/parallel/resamplePool.ts
 var MINIMUM_PARALLEL_BLOCK_DRAWS = 5e6;
 function createResamplePool(options = {}) {
-  const workerCount = options.workers ?? Math.max(0, availableParallelism() - 1);
+  const workerCount = options.workers ?? Math.max(0, availableParallelism2() - 1);
   const minimum = options.minimumBlockDraws ?? MINIMUM_PARALLEL_BLOCK_DRAWS;
   const workerUrl = options.workerUrl ?? new URL("./resampleWorker.js", import.meta.url);
   const workers = [];
@@ -29203,7 +29367,7 @@ function createResamplePool(options = {}) {
   const start = () => {
     while (workers.length < workerCount) {
       const channel = new MessageChannel();
-      const worker = new Worker(workerUrl, {
+      const worker = new Worker2(workerUrl, {
         workerData: { failures: channel.port2 },
         transferList: [channel.port2]
       });
@@ -31454,12 +31618,12 @@ function helpText() {
 
 // src/cli/outputs.ts
 import { constants } from "node:fs";
-import { access, stat as stat3 } from "node:fs/promises";
+import { access, stat as stat4 } from "node:fs/promises";
 import { dirname } from "node:path";
 var STANDARD_OUTPUT = "-";
 async function checkWritable(path2, option) {
   if (path2 === STANDARD_OUTPUT) return;
-  const info = await stat3(path2).catch(() => null);
+  const info = await stat4(path2).catch(() => null);
   if (info !== null) {
     if (info.isDirectory()) {
       throw new InputError(`${option} names a directory; give a file name`, { file: path2 });
@@ -31472,7 +31636,7 @@ async function checkWritable(path2, option) {
     return;
   }
   const folder = dirname(path2);
-  const parent = await stat3(folder).catch(() => null);
+  const parent = await stat4(folder).catch(() => null);
   if (parent === null || !parent.isDirectory()) {
     throw new InputError(`${option}: the folder ${JSON.stringify(folder)} does not exist`, {
       file: path2
