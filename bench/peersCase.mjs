@@ -64,6 +64,7 @@ export async function preparePeers({ root, work, distDir }) {
   return {
     cliOneThread: path.join(oneThreadDir, 'cli.js'),
     readFilesCase: await bundle(root, work, 'readFilesCase'),
+    peersJobCase: await bundle(root, work, 'peersJobCase'),
     readingWorkerUrl: pathToFileURL(path.join(distDir, 'readingWorker.js')).href,
     tokenizerCase: existsSync(tokenizerSource) ? await bundle(root, work, 'tokenizerCase') : null,
   };
@@ -126,6 +127,13 @@ export function peersOnFiles({ root, cli, prepared, files, runs, measure, median
     [
       'DuckDB (@duckdb/node-api)',
       () => inner(measure(process.execPath, [path.join(root, 'bench', 'peerDuckdb.mjs'), ...pair])),
+    ],
+    [
+      "skillgate engine, the peers' job (read, align, mean)",
+      () =>
+        inner(
+          measure(process.execPath, [prepared.peersJobCase, prepared.readingWorkerUrl, ...pair]),
+        ),
     ],
     [
       'skillgate reader alone, both files at once',
@@ -205,6 +213,10 @@ export function printPeers({ peers, log, fmt, large, mean }) {
   }
   const means = [
     ['skillgate', mean],
+    [
+      "skillgate engine (peers' job)",
+      r["skillgate engine, the peers' job (read, align, mean)"]?.out?.mean,
+    ],
     ['pandas', pandas?.out?.mean],
     ['DuckDB', duck?.out?.mean],
   ].filter(([, m]) => m !== undefined && m !== null);
@@ -217,6 +229,12 @@ export function printPeers({ peers, log, fmt, large, mean }) {
     `   both files at once: reader alone ${fmt(readInOrder.inner / readAtOnce.inner)}× faster (in process), compare end to end ${fmt(oneThread.wall / fair.wall)}× (${s(oneThread.wall)} → ${s(fair.wall)})`,
   );
   const verdict = (ok) => (ok ? 'met' : 'NOT met');
+  const job = r["skillgate engine, the peers' job (read, align, mean)"];
+  if (job !== undefined) {
+    log(
+      `   the peers' job in skillgate's engine: ${s(job.wall)}${pandas === undefined ? '' : `, ${fmt(pandas.wall / job.wall)}× faster than pandas`}${duck === undefined ? '' : `, ${fmt(job.wall / duck.wall)}× DuckDB's process time`} (whole processes)`,
+    );
+  }
   if (!large) {
     if (pandas !== undefined) {
       const speedup = pandas.wall / fair.wall;
