@@ -4,6 +4,7 @@ import { superiorAbilityTest } from '../src/candidates/superiorAbilityTest.js';
 import { createRandomSource, type RandomSource } from '../src/random/randomSource.js';
 import { mean } from '../src/statistics/mean.js';
 import { modelConfidenceSet } from '../src/statistics/modelConfidenceSet.js';
+import { normalSampler } from './normalSampler.js';
 
 /**
  * The several-candidates study behind docs/validation.md ("Several candidates"): a baseline and
@@ -125,23 +126,6 @@ function simulate(design: CandidatesDesign, random: RandomSource): Float64Array[
     }
   }
   return losses;
-}
-
-/** Box & Muller (1958) from the injected uniform source (as validation/simulateLossSeries.ts). */
-function normalSampler(random: RandomSource): () => number {
-  let spare: number | null = null;
-  return () => {
-    if (spare !== null) {
-      const s = spare;
-      spare = null;
-      return s;
-    }
-    const u = 1 - random.nextDouble();
-    const v = random.nextDouble();
-    const radius = Math.sqrt(-2 * Math.log(u));
-    spare = radius * Math.sin(2 * Math.PI * v);
-    return radius * Math.cos(2 * Math.PI * v);
-  };
 }
 
 /** Merges the results of parts of the replications (weighted by their counts). */

@@ -1,5 +1,6 @@
 import type { LossSeries } from '../src/aggregation/lossSeries.js';
 import type { RandomSource } from '../src/random/randomSource.js';
+import { normalSampler } from './normalSampler.js';
 
 /**
  * Designs of the interval-coverage study (docs/validation.md, "Coverage"): both models' forecast
@@ -100,20 +101,4 @@ export function coverageDesigns(n: number): CoverageDesign[] {
     );
   }
   return designs;
-}
-
-function normalSampler(random: RandomSource): () => number {
-  let spare: number | null = null;
-  return () => {
-    if (spare !== null) {
-      const s = spare;
-      spare = null;
-      return s;
-    }
-    const u = 1 - random.nextDouble();
-    const v = random.nextDouble();
-    const r = Math.sqrt(-2 * Math.log(u));
-    spare = r * Math.sin(2 * Math.PI * v);
-    return r * Math.cos(2 * Math.PI * v);
-  };
 }

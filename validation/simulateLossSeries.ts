@@ -1,5 +1,6 @@
 import type { LossSeries } from '../src/aggregation/lossSeries.js';
 import type { RandomSource } from '../src/random/randomSource.js';
+import { normalSampler } from './normalSampler.js';
 
 /**
  * The simulation design of docs/design.md ("Why ewc is the default"): the forecast errors of both
@@ -59,22 +60,6 @@ export function simulateLossSeries(design: SimulationDesign, random: RandomSourc
  */
 export function trueMeanDifferential(design: SimulationDesign): number {
   return (design.candidateScale ** 2 - 1) / (1 - design.phi * design.phi);
-}
-
-function normalSampler(random: RandomSource): () => number {
-  let spare: number | null = null;
-  return () => {
-    if (spare !== null) {
-      const s = spare;
-      spare = null;
-      return s;
-    }
-    const u = 1 - random.nextDouble();
-    const v = random.nextDouble();
-    const r = Math.sqrt(-2 * Math.log(u));
-    spare = r * Math.sin(2 * Math.PI * v);
-    return r * Math.cos(2 * Math.PI * v);
-  };
 }
 
 /** Unit-variance Student t with 3 degrees of freedom from a normal sampler (see SimulationDesign). */
