@@ -5,10 +5,11 @@
 // pandas script and the DuckDB query compute. No tests, checks or report. Prints the wall time in
 // ms, the rows matched and that mean (to check it is the same job).
 // Usage: node peersJobCase.mjs WORKER_URL|- BASELINE CANDIDATE
-import { aggregateByTime } from '../src/aggregation/lossSeries.js';
+import { aggregateByTime, lossDifferential } from '../src/aggregation/lossSeries.js';
 import { alignPanel } from '../src/alignment/alignPanel.js';
 import { computeRowLosses } from '../src/losses/rowLosses.js';
 import { readForecastFiles } from '../src/parallel/readForecastFiles.js';
+import { mean as meanOf } from '../src/statistics/mean.js';
 
 const [worker, baselineFile, candidateFile] = process.argv.slice(2);
 const t0 = performance.now();
@@ -22,7 +23,5 @@ const [baseline, candidate] = await readForecastFiles(
 const panel = alignPanel({ baseline: baseline!, candidate: candidate! });
 const losses = computeRowLosses(panel, 'absolute', 'error');
 const series = aggregateByTime(panel, losses);
-let sum = 0;
-for (let t = 0; t < series.time.length; t++) sum += series.candidate[t]! - series.baseline[t]!;
-const mean = sum / series.time.length;
+const mean = meanOf(lossDifferential(series, 0));
 process.stdout.write(`${JSON.stringify({ ms: performance.now() - t0, rows: panel.size, mean })}\n`);

@@ -5,6 +5,7 @@
 //   node tokenizerCase.mjs FILE...
 import { ByteTokenizer } from '../src/reading/byteTokenizer.js';
 import { formatFromPath } from '../src/reading/formatDetection.js';
+import { delimiterFor } from '../src/reading/inputFormat.js';
 import { streamTextFile } from '../src/reading/streamTextFile.js';
 
 const files = process.argv.slice(2);
@@ -15,7 +16,7 @@ let fields = 0;
 for (const file of files) {
   const { format, gzip } = formatFromPath(file);
   const tokenizer = new ByteTokenizer(
-    format === 'tsv' ? '\t' : ',',
+    delimiterFor('auto', format === 'tsv'),
     (_b, _s, _e, count) => {
       fields += count;
     },

@@ -29,8 +29,8 @@ import { shareResampleJob, waitForSharedTask, workOnSharedTask } from './sharedR
  * loading its bundle, compiling the kernel) before it contributes, and one block draw costs about
  * 40–60 ns, so the second core pays for itself from about 5 · 10^6 block draws (≈ 0.3 s of work
  * in one thread). The default run (B = 9,999 at n = 100,000, b ≈ 68: 1.5 · 10^7 draws) is above.
- * Measured before the inlined kernel (`resampleDeviationsInline`), which brought a draw to about
- * 10–30 ns of CPU at short blocks (block-length sweep in docs/performance.md): the threshold now
+ * Measured before the inlined kernel (`resampleDeviationsInline`), which brought a draw to 6–10 ns
+ * of CPU at b = 1 and 24–74 ns at b = 2–68 (block-length sweeps in docs/performance.md): the threshold now
  * errs towards starting the worker; re-measure with `npm run bench` before changing it.
  */
 export const MINIMUM_PARALLEL_BLOCK_DRAWS = 5_000_000;

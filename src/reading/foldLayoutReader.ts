@@ -1,5 +1,6 @@
 import { InputError } from '../core/inputError.js';
 import type { FoldLayout, FoldSegment } from '../integrity/foldLayout.js';
+import { delimiterFor } from './inputFormat.js';
 import { Tokenizer } from './tokenizer.js';
 
 /** Header names of the fold layout file; the fold column may also be called "path". */
@@ -24,7 +25,7 @@ export class FoldLayoutReader {
   constructor(file: string, format: 'csv' | 'tsv') {
     this.file = file;
     this.tokenizer = new Tokenizer(
-      format === 'tsv' ? '\t' : ',',
+      delimiterFor('auto', format === 'tsv'),
       (fields, count, line) => this.record(fields.slice(0, count), line),
       file,
     );
@@ -32,10 +33,6 @@ export class FoldLayoutReader {
 
   push(chunk: string | Uint8Array): void {
     this.tokenizer.push(chunk);
-  }
-
-  get linesRead(): number {
-    return this.tokenizer.lines;
   }
 
   finish(): FoldLayout {

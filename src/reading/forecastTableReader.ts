@@ -124,11 +124,6 @@ export class ForecastTableReader {
     this.expectedBytes = total;
   }
 
-  /** Physical lines fully read so far. */
-  get linesRead(): number {
-    return this.tokenizer.lines;
-  }
-
   /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
   finish(sha256 = ''): ForecastTable {
     this.tokenizer.end();

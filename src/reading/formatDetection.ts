@@ -1,5 +1,5 @@
 import { InputError } from '../core/inputError.js';
-import type { DecimalMark, Delimiter } from './inputFormat.js';
+import { type DecimalMark, type Delimiter, delimiterFor } from './inputFormat.js';
 
 /**
  * What every file reader decides before reading: the format a file name implies, and the text
@@ -35,7 +35,7 @@ export function textDialect(
   file: string,
   options: { format?: TextFormat; delimiter?: Delimiter; decimal?: DecimalMark },
 ): TextDialect {
-  const delimiter = options.delimiter ?? (options.format === 'tsv' ? '\t' : ',');
+  const delimiter = options.delimiter ?? delimiterFor('auto', options.format === 'tsv');
   const decimalComma = options.decimal === ',';
   if (decimalComma && delimiter === ',') {
     throw new InputError(

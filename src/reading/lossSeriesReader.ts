@@ -73,10 +73,6 @@ export class LossSeriesReader {
     );
   }
 
-  get linesRead(): number {
-    return this.tokenizer.lines;
-  }
-
   push(chunk: string | Uint8Array): void {
     this.tokenizer.push(chunk);
   }
@@ -181,17 +177,16 @@ export class LossSeriesReader {
     }
     const b = number('baseline_loss');
     const c = number('candidate_loss');
-    for (const [name, x] of [
-      ['baseline_loss', b],
-      ['candidate_loss', c],
-    ] as const) {
+    const refuseOverflow = (name: 'baseline_loss' | 'candidate_loss', x: number) => {
       if (Math.abs(x) > MAX_LOSS) {
         throw new InputError(
           `a loss beyond ${MAX_LOSS} would overflow means and variances in double precision; rescale the data`,
           { file: this.path, line, column: name, value: at(name) },
         );
       }
-    }
+    };
+    refuseOverflow('baseline_loss', b);
+    refuseOverflow('candidate_loss', c);
     if ('differential' in index) {
       const d = number('differential');
       const scale = Math.max(1, Math.abs(b), Math.abs(c));

@@ -27,6 +27,7 @@ import { pipeline } from 'node:stream/promises';
 import { type AsyncBuffer, type FileMetaData, parquetMetadataAsync, parquetRead } from 'hyparquet';
 import { compressors } from 'hyparquet-compressors';
 import { echo, InputError } from '../core/inputError.js';
+import { fileReadError } from './fileReadError.js';
 import type { Field, ForecastTableReader } from './forecastTableReader.js';
 
 const MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
@@ -43,10 +44,10 @@ export async function streamParquetFile(
     if (!info.isFile()) throw new InputError('not a regular file', { file: path });
     size = info.size;
   } catch (error) {
-    throw fileError(error, path);
+    throw fileReadError(error, path);
   }
   const handle = await open(path, 'r').catch((error: unknown) => {
-    throw fileError(error, path);
+    throw fileReadError(error, path);
   });
   try {
     const file = fileBuffer(handle, size);
@@ -62,12 +63,12 @@ export async function streamParquetFile(
     const usedNames = used.map((i) => names[i]!);
     const fields = new Array<Field>(names.length).fill('');
     const total = Number(metadata.num_rows);
+    const slot = new Map(usedNames.map((name, k) => [name, k]));
     let groupStart = 0;
     for (const group of metadata.row_groups) {
       const groupRows = Number(group.num_rows);
       const groupEnd = groupStart + groupRows;
       const columns = usedNames.map(() => new Array<unknown>(groupRows));
-      const slot = new Map(usedNames.map((name, k) => [name, k]));
       try {
         await parquetRead({
           file,
@@ -218,14 +219,4 @@ function notParquet(error: unknown, path: string): InputError {
   if (error instanceof InputError) return error;
   const message = error instanceof Error ? error.message : String(error);
   return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path });
-}
-
-function fileError(error: unknown, path: string): InputError {
-  if (error instanceof InputError) return error;
-  const code = (error as { code?: unknown } | null)?.code;
-  if (code === 'ENOENT') return new InputError('no such file', { file: path });
-  if (code === 'EACCES' || code === 'EPERM')
-    return new InputError('permission denied', { file: path });
-  const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path });
 }

@@ -12,6 +12,7 @@ import { stat } from 'node:fs/promises';
 import { pipeline } from 'node:stream/promises';
 import { createGunzip } from 'node:zlib';
 import { InputError } from '../core/inputError.js';
+import { fileReadError } from './fileReadError.js';
 
 const CHUNK_BYTES = 1 << 20;
 
@@ -33,7 +34,7 @@ export async function streamTextFile(
     if (!info.isFile()) throw new InputError('not a regular file', { file: path });
     totalBytes = info.size;
   } catch (error) {
-    throw asInputError(error, path);
+    throw fileReadError(error, path);
   }
   const hash = createHash('sha256');
   let bytesRead = 0;
@@ -74,7 +75,7 @@ export async function streamTextFile(
     if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
     else await pipeline(raw, tap, consume);
   } catch (error) {
-    throw asInputError(error, path);
+    throw fileReadError(error, path);
   }
   return `sha256:${hash.digest('hex')}`;
 }
@@ -227,18 +228,4 @@ function countByte(bytes: Buffer, byte: number): number {
     i = bytes.indexOf(byte, i + 1);
   }
   return count;
-}
-
-function asInputError(error: unknown, path: string): InputError {
-  if (error instanceof InputError) return error;
-  const code = (error as { code?: unknown } | null)?.code;
-  if (code === 'ENOENT') return new InputError('no such file', { file: path });
-  if (code === 'EACCES' || code === 'EPERM')
-    return new InputError('permission denied', { file: path });
-  if (code === 'EISDIR') return new InputError('is a directory, not a file', { file: path });
-  if (typeof code === 'string' && code.startsWith('Z_')) {
-    return new InputError(`not a valid gzip file (${(error as Error).message})`, { file: path });
-  }
-  const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path });
 }
