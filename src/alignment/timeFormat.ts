@@ -1,4 +1,4 @@
-import { daysFromCivil } from './civilDays.js';
+import { daysFromCivil, daysInMonth } from './civilDays.js';
 
 /**
  * How timestamp (and origin) labels are read, as the `time-format` option names it:
@@ -82,11 +82,6 @@ export function checkCivil(t: CivilTime, pattern: string): string | null {
   if (t.minute > 59) return `minute ${t.minute} is not 0–59`;
   if (t.second > 59) return `second ${t.second} is not 0–59`;
   return null;
-}
-
-export function daysInMonth(year: number, month: number): number {
-  if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
 
 /**

@@ -2,10 +2,9 @@ import { InputError } from '../core/inputError.js';
 import type { TimestampKind } from '../core/panel.js';
 import type { LabelColumn } from '../reading/forecastTable.js';
 import { parseDecimal } from '../reading/numbers.js';
-import { daysFromCivil } from './civilDays.js';
+import { daysFromCivil, daysInMonth } from './civilDays.js';
 import {
   type CivilTime,
-  checkCivil,
   instantOf,
   looksLikeDayMonthDate,
   readDayMonthDate,
@@ -56,7 +55,7 @@ function readIsoLabel(label: string): LabelReading | string {
   const day = Number(m[3]);
   const year = Number(m[1]);
   if (month < 1 || month > 12) return `month ${m[2]} is not 01–12`;
-  if (day < 1 || day > 31 || checkCivil({ ...ZERO, year, month, day }, '') !== null)
+  if (day < 1 || day > daysInMonth(year, month))
     return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
   const hour = m[4] === undefined ? 0 : Number(m[4]);
   const minute = m[5] === undefined ? 0 : Number(m[5]);
@@ -85,17 +84,6 @@ function readIsoLabel(label: string): LabelReading | string {
   const { key, epochMillis } = instantOf(civil);
   return { kind: 'datetime', key, epochMillis };
 }
-
-const ZERO: CivilTime = {
-  year: 0,
-  month: 1,
-  day: 1,
-  hour: 0,
-  minute: 0,
-  second: 0,
-  nanos: 0,
-  offsetSeconds: 0,
-};
 
 /** Reads a label as the time format says; a string is what is wrong with it. */
 function readAs(label: string, format: TimeFormatName): LabelReading | string {

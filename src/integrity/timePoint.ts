@@ -1,3 +1,4 @@
+import { daysInMonth } from '../alignment/civilDays.js';
 import { daysFromCivil, readLabel } from '../alignment/timeOrder.js';
 import type { TimestampKind } from '../core/panel.js';
 
@@ -79,7 +80,7 @@ export function toTimePoint(label: string, kind: TimestampKind): TimePoint | nul
     wallSecond,
     month: year * 12 + month - 1,
     dayOfMonth: day,
-    monthLength: lengthOfMonth(year, month),
+    monthLength: daysInMonth(year, month),
   };
 }
 
@@ -91,9 +92,4 @@ export function compareTimePoints(a: TimePoint, b: TimePoint): number {
 /** Time points per label id of a column's label list, null where a label is not of `kind`. */
 export function timePointsOf(labels: readonly string[], kind: TimestampKind): (TimePoint | null)[] {
   return labels.map((label) => toTimePoint(label, kind));
-}
-
-export function lengthOfMonth(year: number, month: number): number {
-  if (month === 2) return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
