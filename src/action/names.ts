@@ -52,11 +52,3 @@ export const OUTPUT = {
   commentUrl: 'comment-url',
   htmlReport: 'html-report',
 } as const;
-
-export const OUTPUT_HELP: Readonly<Record<(typeof OUTPUT)[keyof typeof OUTPUT], string>> = {
-  verdict: 'pass, warn or fail',
-  report: 'path of the JSON report written by this step',
-  'comment-url': 'URL of the pull-request comment, when one was posted or updated',
-  'html-report':
-    'path of the self-contained HTML report written by this step, for upload as an artifact',
-};

@@ -21,7 +21,7 @@ export interface MeasuredCoverage {
   readonly studiedN: number;
 }
 
-export const STUDIED_LEVEL = 0.9;
+const STUDIED_LEVEL = 0.9;
 
 /**
  * [n, worst coverage] per interval, from docs/validation.md (1,000 replications per cell, B = 999,

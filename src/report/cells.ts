@@ -1,7 +1,6 @@
 import { formatPValue } from '../core/formatNumber.js';
 import type { MeasuredCoverage } from '../intervals/measuredCoverage.js';
 import { measuredCoverageText } from './relativeChangeText.js';
-import type { Comparison } from './reportModel.js';
 import type { ComparisonView, ReportView } from './reportView.js';
 
 /**
@@ -110,14 +109,4 @@ function sideOf(intervals: readonly { lower: number | null; upper: number | null
   if (intervals.every((i) => i.lower !== null && i.lower > 0)) return 'worse';
   if (intervals.every((i) => i.upper !== null && i.upper < 0)) return 'better';
   return 'no clear difference';
-}
-
-/** "overall", "horizon 3", "series north", "path p1". */
-export function scopeText(c: Comparison): string {
-  if (c.path !== undefined) return `path ${c.path}`;
-  if (c.horizon === 'all' && c.series === 'all') return 'overall';
-  const parts: string[] = [];
-  if (c.horizon !== 'all') parts.push(`horizon ${c.horizon}`);
-  if (c.series !== 'all') parts.push(`series ${c.series}`);
-  return parts.join(', ');
 }

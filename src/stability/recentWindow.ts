@@ -34,8 +34,3 @@ export function recentPoints(window: RecentWindow, n: number): number {
   const k = window.kind === 'points' ? window.points : Math.ceil(window.share * n - 1e-9);
   return Math.min(n, Math.max(k, 0));
 }
-
-/** The window as the user wrote it, for headlines: "the last 36 time points" / "15%". */
-export function describeRecentWindow(window: RecentWindow): string {
-  return window.kind === 'points' ? `${window.points}` : `${+(window.share * 100).toFixed(6)}%`;
-}

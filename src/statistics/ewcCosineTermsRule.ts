@@ -2,10 +2,10 @@ import { autocovariances } from './autocovariance.js';
 import { ewcDegreesOfFreedom } from './ewcLongRunVariance.js';
 
 /** The AR(1) coefficient at which the fixed rule ν = 0.4 n^{2/3} is the loss-minimising one. */
-export const CALIBRATION_AUTOCORRELATION = 0.7;
+const CALIBRATION_AUTOCORRELATION = 0.7;
 /** The plug-in AR(1) coefficient is kept in this range (see `ar1PluginCosineTerms`). */
-export const AUTOCORRELATION_FLOOR = 0.05;
-export const AUTOCORRELATION_CEILING = 0.97;
+const AUTOCORRELATION_FLOOR = 0.05;
+const AUTOCORRELATION_CEILING = 0.97;
 
 /**
  * ω^{(2)} = Σ_j j² γ_j / Σ_j γ_j (sums over all integers j) for an AR(1) with coefficient ρ:
@@ -51,7 +51,7 @@ export interface CosineTermsChoice {
  * mean, E[ρ̂] − ρ = −(1 + 3ρ)/n + O(n^{−2}) (Kendall 1954, "Note on bias in the estimation of
  * autocorrelation", Biometrika 41; Marriott & Pope 1954, Biometrika 41): without it the plug-in
  * under-states persistence at n = 100 exactly where the fixed rule is oversized (the first
- * measurement, without the correction, is kept in docs/validation.md).
+ * measurement, without the correction, is kept in docs/decisions/0012-ewc-cosine-terms.md).
  *
  * So ν̂ equals today's fixed rule when ρ̃ = 0.7, is smaller (fewer terms, less bias, wider
  * t_ν critical values) for stronger persistence and larger for weaker. Conventions: the floor

@@ -4,7 +4,7 @@ import type { LagRule } from './neweyWestLag.js';
 import { selectLag } from './neweyWestLag.js';
 
 /** Largest |â| of the AR(1) prewhitening filter (Andrews & Monahan 1992 cap it likewise). */
-export const PREWHITENING_CAP = 0.97;
+const PREWHITENING_CAP = 0.97;
 
 export interface PrewhitenedLongRunVariance {
   /** ω̂² of the series. */

@@ -9,8 +9,8 @@ export interface WithSmallSample {
 
 /**
  * The p-value the test reports: the Harvey, Leybourne & Newbold (1997) corrected one when the
- * correction was applied (the `bartlett` and `uniform` estimators), else the plain one (`ewc`,
- * whose fixed-b Student t reference needs no correction; or a state without a statistic, null).
+ * correction was applied (the `bartlett` and `uniform` estimators), else the plain one (`ewc`
+ * and `ewc-ar1`, whose fixed-b Student t reference needs no correction; or a state without a statistic, null).
  * `which` picks the one-sided (upper tail: candidate worse) or the two-sided p-value.
  *
  * @example smallSampleValue({ pValue: 0.03, pValueTwoSided: 0.06,

@@ -35,12 +35,6 @@ import { sampleStandardDeviation } from './sampleStandardDeviation.js';
  * [U_(1), U_(19)] = [1, 19]; k(0.1) = 2 so L = 2; δ = 1.5 gives p = (1 + 1)/20 = 0.1 ≤ α and
  * indeed 1.5 < L.
  */
-/** A basic (reverse-percentile) two-sided interval at `level`. */
-export type BasicInterval = { level: number; lower: number; upper: number; method: 'basic' };
-
-/** A one-sided basic lower bound at `level`, with α = 1 − level. */
-export type BasicLowerBound = { level: number; alpha: number; lower: number; method: 'basic' };
-
 export interface BasicBootstrapInference {
   readonly interval: { readonly level: number; readonly lower: number; readonly upper: number };
   /** Rejects "E[d] ≤ δ" at tail probability `alpha` exactly when δ < lower (and pValue ≤ alpha). */
@@ -54,6 +48,12 @@ export interface BasicBootstrapInference {
   readonly pValueBelow: number;
   readonly pValueTwoSided: number;
 }
+
+/** A basic (reverse-percentile) two-sided interval at `level`. */
+export type BasicInterval = { level: number; lower: number; upper: number; method: 'basic' };
+
+/** A one-sided basic lower bound at `level`, with α = 1 − level. */
+export type BasicLowerBound = { level: number; alpha: number; lower: number; method: 'basic' };
 
 /** α = 1 − level, rounded to 15 significant digits (see above): 0.9 → 0.1, 0.95 → 0.05. */
 export function tailProbability(level: number): number {

@@ -20,7 +20,8 @@ import { forEachStationaryResample } from './eachStationaryResample.js';
  *
  * Cost O(B·n·ν): the ν cosine projections of each resample come from a ν × n table computed once
  * (the cosines are orthogonal to constants, so each resample is centred at d̄ only to keep
- * rounding small). Measured in docs/validation.md; not used by the gate.
+ * rounding small). Measured and rejected in docs/decisions/0011-intervals-from-the-tests.md; not used
+ * by the gate.
  */
 export function studentisedBootstrapInterval(
   d: Float64Array,
@@ -49,7 +50,6 @@ export function studentisedBootstrapInterval(
   }
   const u = new Float64Array(n);
   const t = new Float64Array(resamples);
-  let valid = 0;
   forEachStationaryResample(n, expectedBlockLength, resamples, seed, random, (b, blocks) => {
     let k = 0;
     let sum = 0;
@@ -78,10 +78,9 @@ export function studentisedBootstrapInterval(
           : sum > 0
             ? Number.POSITIVE_INFINITY
             : Number.NEGATIVE_INFINITY;
-    valid++;
   });
   t.sort();
-  const k = tailOrderStatistic(tailProbability(level) / 2, valid);
+  const k = tailOrderStatistic(tailProbability(level) / 2, resamples);
   if (k < 1) return null;
-  return { lower: centre - t[valid - k]! * se, upper: centre - t[k - 1]! * se };
+  return { lower: centre - t[resamples - k]! * se, upper: centre - t[k - 1]! * se };
 }
