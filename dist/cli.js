@@ -4819,7 +4819,7 @@ var require_main68 = __commonJS({
     var fromWords = require_lib43();
     var rempio2Kernel = require_kernel_rempio2();
     var rempio2Medium = require_rempio2_medium();
-    var ZERO2 = 0;
+    var ZERO = 0;
     var TWO24 = 16777216;
     var PIO2_1 = 1.5707963267341256;
     var PIO2_1T = 6077100506506192e-26;
@@ -4927,7 +4927,7 @@ var require_main68 = __commonJS({
       }
       TX[2] = z;
       nx = 3;
-      while (TX[nx - 1] === ZERO2) {
+      while (TX[nx - 1] === ZERO) {
         nx -= 1;
       }
       n = rempio2Kernel(TX, TY, e0, nx, 1);
@@ -12968,6 +12968,10 @@ function daysFromCivil(year, month, day) {
   const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
   return era * 146097 + doe - 719468;
 }
+function daysInMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
 
 // src/alignment/timeFormat.ts
 var TIME_FORMAT_NAMES = [
@@ -13012,10 +13016,6 @@ function checkCivil(t, pattern) {
   if (t.second > 59) return `second ${t.second} is not 0\u201359`;
   return null;
 }
-function daysInMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
-}
 function instantOf(t) {
   const seconds = daysFromCivil(t.year, t.month, t.day) * 86400 + t.hour * 3600 + t.minute * 60 + t.second - t.offsetSeconds;
   const key = `${String(seconds + 1e12).padStart(13, "0")}.${String(t.nanos).padStart(9, "0")}`;
@@ -13040,7 +13040,7 @@ function readIsoLabel(label) {
   const day = Number(m[3]);
   const year = Number(m[1]);
   if (month < 1 || month > 12) return `month ${m[2]} is not 01\u201312`;
-  if (day < 1 || day > 31 || checkCivil({ ...ZERO, year, month, day }, "") !== null)
+  if (day < 1 || day > daysInMonth(year, month))
     return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
   const hour = m[4] === void 0 ? 0 : Number(m[4]);
   const minute = m[5] === void 0 ? 0 : Number(m[5]);
@@ -13069,16 +13069,6 @@ function readIsoLabel(label) {
   const { key, epochMillis } = instantOf(civil);
   return { kind: "datetime", key, epochMillis };
 }
-var ZERO = {
-  year: 0,
-  month: 1,
-  day: 1,
-  hour: 0,
-  minute: 0,
-  second: 0,
-  nanos: 0,
-  offsetSeconds: 0
-};
 function readAs(label, format) {
   switch (format) {
     case "auto":
@@ -13519,6 +13509,18 @@ function orderLossSeries(table2, timeFormat = "auto") {
   };
 }
 
+// src/reading/inputFormat.ts
+var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
+var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
+var DECIMAL_MARKS = [".", ","];
+function delimiterFor(name, tsv) {
+  if (name === "auto") return tsv ? "	" : ",";
+  return name === "tab" ? "	" : name;
+}
+function delimiterLabel(delimiter) {
+  return delimiter === "	" ? "tab" : `"${delimiter}"`;
+}
+
 // src/reading/utf8.ts
 function asBytes(bytes) {
   return Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes.buffer, bytes.byteOffset, bytes.length);
@@ -13901,16 +13903,13 @@ var FoldLayoutReader = class {
   constructor(file, format) {
     this.file = file;
     this.tokenizer = new Tokenizer(
-      format === "tsv" ? "	" : ",",
+      delimiterFor("auto", format === "tsv"),
       (fields, count, line2) => this.record(fields.slice(0, count), line2),
       file
     );
   }
   push(chunk) {
     this.tokenizer.push(chunk);
-  }
-  get linesRead() {
-    return this.tokenizer.lines;
   }
   finish() {
     this.tokenizer.end();
@@ -13982,7 +13981,7 @@ function formatFromPath(path2) {
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
 }
 function textDialect(file, options) {
-  const delimiter = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
+  const delimiter = options.delimiter ?? delimiterFor("auto", options.format === "tsv");
   const decimalComma = options.decimal === ",";
   if (decimalComma && delimiter === ",") {
     throw new InputError(
@@ -14000,6 +13999,23 @@ import { createReadStream } from "node:fs";
 import { stat } from "node:fs/promises";
 import { pipeline } from "node:stream/promises";
 import { createGunzip } from "node:zlib";
+
+// src/reading/fileReadError.ts
+function fileReadError(error, path2) {
+  if (error instanceof InputError) return error;
+  const code2 = error?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path2 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path2 });
+  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path2 });
+  if (typeof code2 === "string" && code2.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error.message})`, { file: path2 });
+  }
+  const message = error instanceof Error ? error.message : String(error);
+  return new InputError(`cannot read the file: ${message}`, { file: path2 });
+}
+
+// src/reading/streamTextFile.ts
 var CHUNK_BYTES = 1 << 20;
 async function streamTextFile(path2, gzip, sink, onProgress) {
   let totalBytes;
@@ -14008,7 +14024,7 @@ async function streamTextFile(path2, gzip, sink, onProgress) {
     if (!info.isFile()) throw new InputError("not a regular file", { file: path2 });
     totalBytes = info.size;
   } catch (error) {
-    throw asInputError(error, path2);
+    throw fileReadError(error, path2);
   }
   const hash = createHash("sha256");
   let bytesRead = 0;
@@ -14048,7 +14064,7 @@ async function streamTextFile(path2, gzip, sink, onProgress) {
     if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
     else await pipeline(raw, tap, consume);
   } catch (error) {
-    throw asInputError(error, path2);
+    throw fileReadError(error, path2);
   }
   return `sha256:${hash.digest("hex")}`;
 }
@@ -14150,19 +14166,6 @@ function countByte(bytes, byte) {
     i = bytes.indexOf(byte, i + 1);
   }
   return count;
-}
-function asInputError(error, path2) {
-  if (error instanceof InputError) return error;
-  const code2 = error?.code;
-  if (code2 === "ENOENT") return new InputError("no such file", { file: path2 });
-  if (code2 === "EACCES" || code2 === "EPERM")
-    return new InputError("permission denied", { file: path2 });
-  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path2 });
-  if (typeof code2 === "string" && code2.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error.message})`, { file: path2 });
-  }
-  const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path2 });
 }
 
 // src/reading/readFoldLayout.ts
@@ -14454,18 +14457,6 @@ function tableColumns(columns, n) {
 var NO_INTS = new Int32Array(0);
 var NO_FLOATS = new Float64Array(0);
 
-// src/reading/inputFormat.ts
-var INPUT_FORMATS = ["auto", "csv", "tsv", "parquet"];
-var DELIMITER_NAMES = ["auto", ",", ";", "|", "tab"];
-var DECIMAL_MARKS = [".", ","];
-function delimiterFor(name, tsv) {
-  if (name === "auto") return tsv ? "	" : ",";
-  return name === "tab" ? "	" : name;
-}
-function delimiterLabel(delimiter) {
-  return delimiter === "	" ? "tab" : `"${delimiter}"`;
-}
-
 // src/reading/forecastHeader.ts
 function resolveHeader(names, file, line2, options, delimiter = ",") {
   const columns = resolveColumns(options.columns);
@@ -14722,10 +14713,6 @@ var ForecastTableReader = class {
   /** The size of the text input, if known: the columns then grow to the rows it holds. */
   expectBytes(total) {
     this.expectedBytes = total;
-  }
-  /** Physical lines fully read so far. */
-  get linesRead() {
-    return this.tokenizer.lines;
   }
   /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
   finish(sha256 = "") {
@@ -23446,10 +23433,10 @@ async function streamParquetFile(path2, reader, onProgress) {
     if (!info.isFile()) throw new InputError("not a regular file", { file: path2 });
     size = info.size;
   } catch (error) {
-    throw fileError(error, path2);
+    throw fileReadError(error, path2);
   }
   const handle = await open(path2, "r").catch((error) => {
-    throw fileError(error, path2);
+    throw fileReadError(error, path2);
   });
   try {
     const file = fileBuffer(handle, size);
@@ -23465,12 +23452,12 @@ async function streamParquetFile(path2, reader, onProgress) {
     const usedNames = used.map((i) => names[i]);
     const fields = new Array(names.length).fill("");
     const total = Number(metadata.num_rows);
+    const slot = new Map(usedNames.map((name, k) => [name, k]));
     let groupStart = 0;
     for (const group of metadata.row_groups) {
       const groupRows2 = Number(group.num_rows);
       const groupEnd = groupStart + groupRows2;
       const columns = usedNames.map(() => new Array(groupRows2));
-      const slot = new Map(usedNames.map((name, k) => [name, k]));
       try {
         await parquetRead({
           file,
@@ -23604,15 +23591,6 @@ function notParquet(error, path2) {
   if (error instanceof InputError) return error;
   const message = error instanceof Error ? error.message : String(error);
   return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path2 });
-}
-function fileError(error, path2) {
-  if (error instanceof InputError) return error;
-  const code2 = error?.code;
-  if (code2 === "ENOENT") return new InputError("no such file", { file: path2 });
-  if (code2 === "EACCES" || code2 === "EPERM")
-    return new InputError("permission denied", { file: path2 });
-  const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path2 });
 }
 
 // src/reading/readForecastFile.ts
@@ -27512,7 +27490,7 @@ function toTimePoint(label, kind) {
     wallSecond,
     month: year * 12 + month - 1,
     dayOfMonth: day,
-    monthLength: lengthOfMonth(year, month)
+    monthLength: daysInMonth(year, month)
   };
 }
 function compareTimePoints(a, b) {
@@ -27520,10 +27498,6 @@ function compareTimePoints(a, b) {
 }
 function timePointsOf(labels, kind) {
   return labels.map((label) => toTimePoint(label, kind));
-}
-function lengthOfMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
 
 // src/integrity/stepCount.ts
@@ -28987,9 +28961,6 @@ var LossSeriesReader = class {
       options.lineLimit
     );
   }
-  get linesRead() {
-    return this.tokenizer.lines;
-  }
   push(chunk) {
     this.tokenizer.push(chunk);
   }
@@ -29092,17 +29063,16 @@ var LossSeriesReader = class {
     }
     const b = number("baseline_loss");
     const c = number("candidate_loss");
-    for (const [name, x] of [
-      ["baseline_loss", b],
-      ["candidate_loss", c]
-    ]) {
+    const refuseOverflow = (name, x) => {
       if (Math.abs(x) > MAX_LOSS) {
         throw new InputError(
           `a loss beyond ${MAX_LOSS} would overflow means and variances in double precision; rescale the data`,
           { file: this.path, line: line2, column: name, value: at(name) }
         );
       }
-    }
+    };
+    refuseOverflow("baseline_loss", b);
+    refuseOverflow("candidate_loss", c);
     if ("differential" in index) {
       const d = number("differential");
       const scale = Math.max(1, Math.abs(b), Math.abs(c));
@@ -29421,7 +29391,7 @@ var W = 640;
 var H = 240;
 var M = { left: 56, right: 16, top: 16, bottom: 40 };
 function xml(text) {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+  return text.replace(/[\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 }
 function linear(lo2, hi2, from, to) {
   const span = hi2 - lo2 || 1;
@@ -29767,9 +29737,22 @@ function pct(level) {
   return `${Math.round(level * 1e3) / 10}%`;
 }
 
+// src/report/escapeMarkdown.ts
+function escapeMarkdown(text) {
+  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
+}
+
 // src/report/reportTable.ts
 function table(header, align2, rows) {
   return { header, align: align2, rows };
+}
+function markdownTable(t) {
+  const row = (cells) => `| ${cells.map((c) => escapeMarkdown(c)).join(" | ")} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
+    ...t.rows.map(row)
+  ];
 }
 
 // src/report/candidatesSection.ts
@@ -29986,11 +29969,6 @@ function missingRowsSection(report) {
   return { title, lines, tables };
 }
 
-// src/report/escapeMarkdown.ts
-function escapeMarkdown(text) {
-  return text.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
-}
-
 // src/report/renderStabilitySection.ts
 function overTimeParts(report) {
   const stability = report.stability;
@@ -30008,27 +29986,19 @@ function renderStabilitySection(report) {
   const parts = overTimeParts(report);
   if (parts === null) return [];
   const out = ["**Over time**", ""];
-  if (parts.windows !== null) out.push(...markdownRows(parts.windows), "");
+  if (parts.windows !== null) out.push(...markdownTable(parts.windows), "");
   for (const sentence of parts.sentences) out.push(escapeMarkdown(sentence), "");
   if (parts.periods !== null) {
     out.push(
       `<details><summary>Mean loss by period (${parts.periods.rows.length} periods)</summary>`,
       "",
-      ...markdownRows(parts.periods),
+      ...markdownTable(parts.periods),
       "",
       "</details>",
       ""
     );
   }
   return out;
-}
-function markdownRows(t) {
-  const row = (cells) => `| ${cells.map(escapeMarkdown).join(" | ")} |`;
-  return [
-    row(t.header),
-    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
-    ...t.rows.map(row)
-  ];
 }
 function windowTable(overall, recent) {
   const level = recent.relativeChange?.level;
@@ -31094,7 +31064,7 @@ function checkLine(check) {
   const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
   return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
-function backtestChecksLines(report, clean3) {
+function backtestChecksLines(report, clean) {
   const integrity = report.integrity;
   if (integrity.checks.length === 0) return [];
   const flagged = integrity.checks.filter((c) => c.status !== "ok");
@@ -31102,7 +31072,7 @@ function backtestChecksLines(report, clean3) {
     `backtest checks: ${integrity.outcome} (${integrity.checks.length} run, ${integrity.notRun.length} not run)`
   ];
   for (const c of flagged) {
-    const eg = c.examples.slice(0, SHOWN).map((e) => clean3(clip(e))).join("; ");
+    const eg = c.examples.slice(0, SHOWN).map((e) => clean(clip(e))).join("; ");
     out.push(`  ${c.status} ${c.id}: ${c.count}${eg === "" ? "" : `, e.g. ${eg}`}`);
   }
   return out;
@@ -31221,19 +31191,16 @@ function overTimeSummary(report) {
   if (stretch) return "Over time: worse in some stretches";
   return "Over time: the recent window, the fluctuation test and the mean loss by period";
 }
-function markdownTable(t) {
-  const row = (cells) => `| ${cells.map((c) => escapeMarkdown(c)).join(" | ")} |`;
-  return [
-    row(t.header),
-    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
-    ...t.rows.map(row)
-  ];
-}
 function collapsed(summary, body) {
   return [`<details><summary>${escapeMarkdown(summary)}</summary>`, "", ...body, "", "</details>", ""];
 }
 function code(text) {
   return /^[A-Za-z0-9 ._=,:/+'\\-]*$/.test(text) ? `\`${text}\`` : escapeMarkdown(text);
+}
+
+// src/report/terminalText.ts
+function terminalText(text) {
+  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ").replace(/[\u202a-\u202e\u2066-\u2069]/g, "\uFFFD");
 }
 
 // src/report/renderStabilityTerminal.ts
@@ -31245,19 +31212,16 @@ function renderStabilityTerminal(report) {
   const split = s.levels.adjustment === "bonferroni" ? ", \u03B1/2 each by Bonferroni" : "";
   if (r !== null) {
     out.push(
-      `recent window: ${r.n} time points ${clean(r.firstTimestamp ?? "?")} to ${clean(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
+      `recent window: ${r.n} time points ${terminalText(r.firstTimestamp ?? "?")} to ${terminalText(r.lastTimestamp ?? "?")}, relative ${relativeChangeText(r)}, p (DM) ${formatPValue(r.dieboldMariano.decisionPValue)}, p (boot) ${formatPValue(r.bootstrap.decisionPValue)}, \u03B1 = ${s.levels.recent ?? report.policy.alpha}${split}: ${r.verdict}`
     );
   }
   const f = s.fluctuation;
   if (f !== null) {
     out.push(
-      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${clean(w.start)} to ${clean(w.end)}`).join(", ")}`}`
+      `fluctuation test: max ${formatNumber(f.statistic, 3)} vs ${formatNumber(f.criticalValue, 4)} (windows of ${f.windowSize}, \u03BC = ${f.mu}, \u03B1 = ${s.levels.fluctuation ?? report.policy.alpha}${split}); ${f.worsePeriods.length === 0 ? "no stretch significantly worse" : `worse over ${f.worsePeriods.map((w) => `${terminalText(w.start)} to ${terminalText(w.end)}`).join(", ")}`}`
     );
   }
   return out;
-}
-function clean(text) {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
 }
 
 // src/report/renderTerminal.ts
@@ -31268,7 +31232,7 @@ function renderTerminal(report, options) {
   const verdictColor = { pass: "32", warn: "33", fail: "31" }[report.verdict];
   const out = [];
   out.push(
-    `${paint("1", clean2(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
+    `${paint("1", terminalText(s.title))}: ${paint(`1;${verdictColor}`, report.verdict.toUpperCase())}`
   );
   out.push(wrap(`${s.lead} ${s.change}`, 100), "");
   out.push(...textTable(s.main, paint));
@@ -31280,7 +31244,7 @@ function renderTerminal(report, options) {
     out.push(wrap(candidates.spaSentence, 100, "  "), wrap(candidates.setSentence, 100, "  "));
   }
   const chart = differenceSeries(view);
-  if (chart !== null) out.push("", clean2(sparklineText(chart)));
+  if (chart !== null) out.push("", terminalText(sparklineText(chart)));
   const overTime = renderStabilityTerminal(report);
   if (overTime.length > 0) out.push(...overTime.map((l) => wrap(l, 100, "  ")));
   if (s.notes.length > 0) out.push("");
@@ -31291,7 +31255,7 @@ function renderTerminal(report, options) {
   }
   if (s.series !== null) out.push("", wrap(s.series.summary, 100));
   if (s.paths !== null) out.push("", wrap(s.paths.summary, 100));
-  const checks = backtestChecksLines(report, clean2);
+  const checks = backtestChecksLines(report, terminalText);
   if (checks.length > 0) out.push("", ...checks);
   for (const r of report.reasons) {
     if (r.startsWith("The candidate lacks")) out.push(wrap(`- ${r}`, 100, "  "));
@@ -31301,7 +31265,7 @@ function renderTerminal(report, options) {
   out.push(
     paint(
       "2",
-      clean2(
+      terminalText(
         `rows matched ${i.rowsMatched}; left out: ${i.rowsDropped.baseline} baseline-only, ${i.rowsDropped.candidate} candidate-only, ${i.rowsDropped.withoutActual} without actual, ${i.rowsDropped.skippedByLoss} skipped by loss`
       )
     )
@@ -31311,12 +31275,12 @@ function renderTerminal(report, options) {
       out.push(paint("2", wrap(l, 100, "  ")));
     }
   }
-  if (s.changedSettings !== "") out.push(paint("2", clean2(`settings: ${s.changedSettings}`)));
+  if (s.changedSettings !== "") out.push(paint("2", terminalText(`settings: ${s.changedSettings}`)));
   return `${out.join("\n")}
 `;
 }
 function textTable(t, paint) {
-  const rows = t.rows.map((r) => r.map(clean2));
+  const rows = t.rows.map((r) => r.map(terminalText));
   const widths = t.header.map(
     (h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? "").length))
   );
@@ -31325,11 +31289,8 @@ function textTable(t, paint) {
   ).join("  ").trimEnd();
   return [paint("2", line2(t.header)), ...rows.map(line2)];
 }
-function clean2(text) {
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, " ");
-}
 function wrap(text, width, indent2 = "") {
-  const words = clean2(text).split(" ");
+  const words = terminalText(text).split(" ");
   const lines = [];
   let current = "";
   for (const w of words) {

@@ -24847,7 +24847,7 @@ var require_main68 = __commonJS({
     var fromWords = require_lib44();
     var rempio2Kernel = require_kernel_rempio2();
     var rempio2Medium = require_rempio2_medium();
-    var ZERO2 = 0;
+    var ZERO = 0;
     var TWO24 = 16777216;
     var PIO2_1 = 1.5707963267341256;
     var PIO2_1T = 6077100506506192e-26;
@@ -24955,7 +24955,7 @@ var require_main68 = __commonJS({
       }
       TX[2] = z;
       nx = 3;
-      while (TX[nx - 1] === ZERO2) {
+      while (TX[nx - 1] === ZERO) {
         nx -= 1;
       }
       n = rempio2Kernel(TX, TY, e0, nx, 1);
@@ -32327,7 +32327,7 @@ var W = 640;
 var H = 240;
 var M = { left: 56, right: 16, top: 16, bottom: 40 };
 function xml(text2) {
-  return text2.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+  return text2.replace(/[\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
 }
 function linear(lo2, hi2, from, to) {
   const span = hi2 - lo2 || 1;
@@ -32714,9 +32714,22 @@ function intervalNote(report) {
   return measured === void 0 ? base : `${base} A measured coverage beside an interval is the lowest the validation study (docs/validation.md) found at n = ${measured.studiedN} time points, over designs up to strong persistence and heavy tails.`;
 }
 
+// src/report/escapeMarkdown.ts
+function escapeMarkdown(text2) {
+  return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
+}
+
 // src/report/reportTable.ts
 function table(header2, align2, rows) {
   return { header: header2, align: align2, rows };
+}
+function markdownTable(t) {
+  const row = (cells) => `| ${cells.map((c) => escapeMarkdown(c)).join(" | ")} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
+    ...t.rows.map(row)
+  ];
 }
 
 // src/report/candidatesSection.ts
@@ -32933,11 +32946,6 @@ function missingRowsSection(report) {
   return { title, lines, tables };
 }
 
-// src/report/escapeMarkdown.ts
-function escapeMarkdown(text2) {
-  return text2.replace(/[\r\n\t\u2028\u2029]+/g, " ").replace(/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, "\uFFFD").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/([\\`*_[\]~|#!])/g, "\\$1").replace(/@/g, "@\u200B").replace(/#/g, "#\u200B").replace(/:(?=\/\/)/g, ":\u200B").replace(/\b(www)\./gi, "$1\u200B.").replace(/\b(GH)-(?=\d)/gi, "$1-\u200B");
-}
-
 // src/report/renderStabilitySection.ts
 function overTimeParts(report) {
   const stability = report.stability;
@@ -32955,27 +32963,19 @@ function renderStabilitySection(report) {
   const parts = overTimeParts(report);
   if (parts === null) return [];
   const out = ["**Over time**", ""];
-  if (parts.windows !== null) out.push(...markdownRows(parts.windows), "");
+  if (parts.windows !== null) out.push(...markdownTable(parts.windows), "");
   for (const sentence of parts.sentences) out.push(escapeMarkdown(sentence), "");
   if (parts.periods !== null) {
     out.push(
       `<details><summary>Mean loss by period (${parts.periods.rows.length} periods)</summary>`,
       "",
-      ...markdownRows(parts.periods),
+      ...markdownTable(parts.periods),
       "",
       "</details>",
       ""
     );
   }
   return out;
-}
-function markdownRows(t) {
-  const row = (cells) => `| ${cells.map(escapeMarkdown).join(" | ")} |`;
-  return [
-    row(t.header),
-    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
-    ...t.rows.map(row)
-  ];
 }
 function windowTable(overall, recent) {
   const level = recent.relativeChange?.level;
@@ -33120,6 +33120,10 @@ function daysFromCivil(year, month, day) {
   const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
   return era * 146097 + doe - 719468;
 }
+function daysInMonth(year, month) {
+  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
+  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
+}
 
 // src/alignment/timeFormat.ts
 var TIME_FORMAT_NAMES = [
@@ -33163,10 +33167,6 @@ function checkCivil(t, pattern) {
   if (t.minute > 59) return `minute ${t.minute} is not 0\u201359`;
   if (t.second > 59) return `second ${t.second} is not 0\u201359`;
   return null;
-}
-function daysInMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
 function instantOf(t) {
   const seconds = daysFromCivil(t.year, t.month, t.day) * 86400 + t.hour * 3600 + t.minute * 60 + t.second - t.offsetSeconds;
@@ -33704,7 +33704,7 @@ function readIsoLabel(label) {
   const day = Number(m[3]);
   const year = Number(m[1]);
   if (month < 1 || month > 12) return `month ${m[2]} is not 01\u201312`;
-  if (day < 1 || day > 31 || checkCivil({ ...ZERO, year, month, day }, "") !== null)
+  if (day < 1 || day > daysInMonth(year, month))
     return `day ${m[3]} does not exist in ${m[1]}-${m[2]}`;
   const hour = m[4] === void 0 ? 0 : Number(m[4]);
   const minute = m[5] === void 0 ? 0 : Number(m[5]);
@@ -33733,16 +33733,6 @@ function readIsoLabel(label) {
   const { key, epochMillis } = instantOf(civil);
   return { kind: "datetime", key, epochMillis };
 }
-var ZERO = {
-  year: 0,
-  month: 1,
-  day: 1,
-  hour: 0,
-  minute: 0,
-  second: 0,
-  nanos: 0,
-  offsetSeconds: 0
-};
 function readAs(label, format) {
   switch (format) {
     case "auto":
@@ -35173,14 +35163,6 @@ function overTimeSummary(report) {
   if (recent) return "Over time: worse recently";
   if (stretch) return "Over time: worse in some stretches";
   return "Over time: the recent window, the fluctuation test and the mean loss by period";
-}
-function markdownTable(t) {
-  const row = (cells) => `| ${cells.map((c) => escapeMarkdown(c)).join(" | ")} |`;
-  return [
-    row(t.header),
-    `|${t.align.map((a) => a === "right" ? "---:" : "---").join("|")}|`,
-    ...t.rows.map(row)
-  ];
 }
 function collapsed(summary2, body) {
   return [`<details><summary>${escapeMarkdown(summary2)}</summary>`, "", ...body, "", "</details>", ""];
@@ -42731,16 +42713,13 @@ var FoldLayoutReader = class {
   constructor(file, format) {
     this.file = file;
     this.tokenizer = new Tokenizer(
-      format === "tsv" ? "	" : ",",
+      delimiterFor("auto", format === "tsv"),
       (fields, count, line2) => this.record(fields.slice(0, count), line2),
       file
     );
   }
   push(chunk) {
     this.tokenizer.push(chunk);
-  }
-  get linesRead() {
-    return this.tokenizer.lines;
   }
   finish() {
     this.tokenizer.end();
@@ -42812,7 +42791,7 @@ function formatFromPath(path8) {
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
 }
 function textDialect(file, options) {
-  const delimiter3 = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
+  const delimiter3 = options.delimiter ?? delimiterFor("auto", options.format === "tsv");
   const decimalComma = options.decimal === ",";
   if (decimalComma && delimiter3 === ",") {
     throw new InputError(
@@ -42830,6 +42809,23 @@ import { createReadStream } from "node:fs";
 import { stat as stat2 } from "node:fs/promises";
 import { pipeline } from "node:stream/promises";
 import { createGunzip } from "node:zlib";
+
+// src/reading/fileReadError.ts
+function fileReadError(error2, path8) {
+  if (error2 instanceof InputError) return error2;
+  const code2 = error2?.code;
+  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
+  if (code2 === "EACCES" || code2 === "EPERM")
+    return new InputError("permission denied", { file: path8 });
+  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path8 });
+  if (typeof code2 === "string" && code2.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error2.message})`, { file: path8 });
+  }
+  const message = error2 instanceof Error ? error2.message : String(error2);
+  return new InputError(`cannot read the file: ${message}`, { file: path8 });
+}
+
+// src/reading/streamTextFile.ts
 var CHUNK_BYTES = 1 << 20;
 async function streamTextFile(path8, gzip, sink, onProgress) {
   let totalBytes;
@@ -42838,7 +42834,7 @@ async function streamTextFile(path8, gzip, sink, onProgress) {
     if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
     totalBytes = info2.size;
   } catch (error2) {
-    throw asInputError(error2, path8);
+    throw fileReadError(error2, path8);
   }
   const hash = createHash("sha256");
   let bytesRead = 0;
@@ -42878,7 +42874,7 @@ async function streamTextFile(path8, gzip, sink, onProgress) {
     if (gzip) await pipeline(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
     else await pipeline(raw, tap, consume);
   } catch (error2) {
-    throw asInputError(error2, path8);
+    throw fileReadError(error2, path8);
   }
   return `sha256:${hash.digest("hex")}`;
 }
@@ -42980,19 +42976,6 @@ function countByte(bytes, byte) {
     i = bytes.indexOf(byte, i + 1);
   }
   return count;
-}
-function asInputError(error2, path8) {
-  if (error2 instanceof InputError) return error2;
-  const code2 = error2?.code;
-  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
-  if (code2 === "EACCES" || code2 === "EPERM")
-    return new InputError("permission denied", { file: path8 });
-  if (code2 === "EISDIR") return new InputError("is a directory, not a file", { file: path8 });
-  if (typeof code2 === "string" && code2.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error2.message})`, { file: path8 });
-  }
-  const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path8 });
 }
 
 // src/reading/readFoldLayout.ts
@@ -43540,10 +43523,6 @@ var ForecastTableReader = class {
   /** The size of the text input, if known: the columns then grow to the rows it holds. */
   expectBytes(total) {
     this.expectedBytes = total;
-  }
-  /** Physical lines fully read so far. */
-  get linesRead() {
-    return this.tokenizer.lines;
   }
   /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
   finish(sha256 = "") {
@@ -52264,10 +52243,10 @@ async function streamParquetFile(path8, reader, onProgress) {
     if (!info2.isFile()) throw new InputError("not a regular file", { file: path8 });
     size = info2.size;
   } catch (error2) {
-    throw fileError(error2, path8);
+    throw fileReadError(error2, path8);
   }
   const handle = await open2(path8, "r").catch((error2) => {
-    throw fileError(error2, path8);
+    throw fileReadError(error2, path8);
   });
   try {
     const file = fileBuffer(handle, size);
@@ -52283,12 +52262,12 @@ async function streamParquetFile(path8, reader, onProgress) {
     const usedNames = used.map((i) => names[i]);
     const fields = new Array(names.length).fill("");
     const total = Number(metadata.num_rows);
+    const slot = new Map(usedNames.map((name, k) => [name, k]));
     let groupStart = 0;
     for (const group2 of metadata.row_groups) {
       const groupRows2 = Number(group2.num_rows);
       const groupEnd = groupStart + groupRows2;
       const columns = usedNames.map(() => new Array(groupRows2));
-      const slot = new Map(usedNames.map((name, k) => [name, k]));
       try {
         await parquetRead({
           file,
@@ -52422,15 +52401,6 @@ function notParquet(error2, path8) {
   if (error2 instanceof InputError) return error2;
   const message = error2 instanceof Error ? error2.message : String(error2);
   return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path8 });
-}
-function fileError(error2, path8) {
-  if (error2 instanceof InputError) return error2;
-  const code2 = error2?.code;
-  if (code2 === "ENOENT") return new InputError("no such file", { file: path8 });
-  if (code2 === "EACCES" || code2 === "EPERM")
-    return new InputError("permission denied", { file: path8 });
-  const message = error2 instanceof Error ? error2.message : String(error2);
-  return new InputError(`cannot read the file: ${message}`, { file: path8 });
 }
 
 // src/reading/readForecastFile.ts
@@ -55857,7 +55827,7 @@ function toTimePoint(label, kind) {
     wallSecond,
     month: year * 12 + month - 1,
     dayOfMonth: day,
-    monthLength: lengthOfMonth(year, month)
+    monthLength: daysInMonth(year, month)
   };
 }
 function compareTimePoints(a, b) {
@@ -55865,10 +55835,6 @@ function compareTimePoints(a, b) {
 }
 function timePointsOf(labels, kind) {
   return labels.map((label) => toTimePoint(label, kind));
-}
-function lengthOfMonth(year, month) {
-  if (month === 2) return year % 4 === 0 && year % 100 !== 0 || year % 400 === 0 ? 29 : 28;
-  return month === 4 || month === 6 || month === 9 || month === 11 ? 30 : 31;
 }
 
 // src/integrity/stepCount.ts
@@ -57160,9 +57126,6 @@ var LossSeriesReader = class {
       options.lineLimit
     );
   }
-  get linesRead() {
-    return this.tokenizer.lines;
-  }
   push(chunk) {
     this.tokenizer.push(chunk);
   }
@@ -57265,17 +57228,16 @@ var LossSeriesReader = class {
     }
     const b = number("baseline_loss");
     const c = number("candidate_loss");
-    for (const [name, x] of [
-      ["baseline_loss", b],
-      ["candidate_loss", c]
-    ]) {
+    const refuseOverflow = (name, x) => {
       if (Math.abs(x) > MAX_LOSS) {
         throw new InputError(
           `a loss beyond ${MAX_LOSS} would overflow means and variances in double precision; rescale the data`,
           { file: this.path, line: line2, column: name, value: at(name) }
         );
       }
-    }
+    };
+    refuseOverflow("baseline_loss", b);
+    refuseOverflow("candidate_loss", c);
     if ("differential" in index) {
       const d = number("differential");
       const scale = Math.max(1, Math.abs(b), Math.abs(c));

@@ -930,7 +930,7 @@ function formatFromPath(path) {
   return { format: base.endsWith(".tsv") ? "tsv" : "csv", gzip };
 }
 function textDialect(file, options) {
-  const delimiter = options.delimiter ?? (options.format === "tsv" ? "	" : ",");
+  const delimiter = options.delimiter ?? delimiterFor("auto", options.format === "tsv");
   const decimalComma = options.decimal === ",";
   if (decimalComma && delimiter === ",") {
     throw new InputError(
@@ -1092,10 +1092,6 @@ var ForecastTableReader = class {
   /** The size of the text input, if known: the columns then grow to the rows it holds. */
   expectBytes(total) {
     this.expectedBytes = total;
-  }
-  /** Physical lines fully read so far. */
-  get linesRead() {
-    return this.tokenizer.lines;
   }
   /** Ends the input and returns the table; `sha256` is recorded in the summary as given. */
   finish(sha256 = "") {
@@ -9807,6 +9803,21 @@ var compressors = {
   LZ4_RAW: decompressLz4Raw
 };
 
+// src/reading/fileReadError.ts
+function fileReadError(error, path) {
+  if (error instanceof InputError) return error;
+  const code = error?.code;
+  if (code === "ENOENT") return new InputError("no such file", { file: path });
+  if (code === "EACCES" || code === "EPERM")
+    return new InputError("permission denied", { file: path });
+  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path });
+  if (typeof code === "string" && code.startsWith("Z_")) {
+    return new InputError(`not a valid gzip file (${error.message})`, { file: path });
+  }
+  const message = error instanceof Error ? error.message : String(error);
+  return new InputError(`cannot read the file: ${message}`, { file: path });
+}
+
 // src/reading/streamParquetFile.ts
 var MAX_EXACT = BigInt(Number.MAX_SAFE_INTEGER);
 async function streamParquetFile(path, reader, onProgress) {
@@ -9816,10 +9827,10 @@ async function streamParquetFile(path, reader, onProgress) {
     if (!info.isFile()) throw new InputError("not a regular file", { file: path });
     size = info.size;
   } catch (error) {
-    throw fileError(error, path);
+    throw fileReadError(error, path);
   }
   const handle = await open(path, "r").catch((error) => {
-    throw fileError(error, path);
+    throw fileReadError(error, path);
   });
   try {
     const file = fileBuffer(handle, size);
@@ -9835,12 +9846,12 @@ async function streamParquetFile(path, reader, onProgress) {
     const usedNames = used.map((i) => names[i]);
     const fields = new Array(names.length).fill("");
     const total = Number(metadata.num_rows);
+    const slot = new Map(usedNames.map((name, k) => [name, k]));
     let groupStart = 0;
     for (const group of metadata.row_groups) {
       const groupRows = Number(group.num_rows);
       const groupEnd = groupStart + groupRows;
       const columns = usedNames.map(() => new Array(groupRows));
-      const slot = new Map(usedNames.map((name, k) => [name, k]));
       try {
         await parquetRead({
           file,
@@ -9975,15 +9986,6 @@ function notParquet(error, path) {
   const message = error instanceof Error ? error.message : String(error);
   return new InputError(`not a readable Parquet file (${echo(message, 200)})`, { file: path });
 }
-function fileError(error, path) {
-  if (error instanceof InputError) return error;
-  const code = error?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path });
-  const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path });
-}
 
 // src/reading/streamTextFile.ts
 import { isUtf8 } from "node:buffer";
@@ -10000,7 +10002,7 @@ async function streamTextFile(path, gzip, sink, onProgress) {
     if (!info.isFile()) throw new InputError("not a regular file", { file: path });
     totalBytes = info.size;
   } catch (error) {
-    throw asInputError(error, path);
+    throw fileReadError(error, path);
   }
   const hash = createHash2("sha256");
   let bytesRead = 0;
@@ -10040,7 +10042,7 @@ async function streamTextFile(path, gzip, sink, onProgress) {
     if (gzip) await pipeline2(raw, tap, createGunzip({ chunkSize: CHUNK_BYTES }), consume);
     else await pipeline2(raw, tap, consume);
   } catch (error) {
-    throw asInputError(error, path);
+    throw fileReadError(error, path);
   }
   return `sha256:${hash.digest("hex")}`;
 }
@@ -10142,19 +10144,6 @@ function countByte(bytes, byte) {
     i = bytes.indexOf(byte, i + 1);
   }
   return count;
-}
-function asInputError(error, path) {
-  if (error instanceof InputError) return error;
-  const code = error?.code;
-  if (code === "ENOENT") return new InputError("no such file", { file: path });
-  if (code === "EACCES" || code === "EPERM")
-    return new InputError("permission denied", { file: path });
-  if (code === "EISDIR") return new InputError("is a directory, not a file", { file: path });
-  if (typeof code === "string" && code.startsWith("Z_")) {
-    return new InputError(`not a valid gzip file (${error.message})`, { file: path });
-  }
-  const message = error instanceof Error ? error.message : String(error);
-  return new InputError(`cannot read the file: ${message}`, { file: path });
 }
 
 // src/reading/readForecastFile.ts

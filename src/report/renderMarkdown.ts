@@ -6,7 +6,7 @@ import { backtestChecksSection } from './renderBacktestChecks.js';
 import { renderStabilitySection } from './renderStabilitySection.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
-import type { ReportTable } from './reportTable.js';
+import { markdownTable } from './reportTable.js';
 import type { ReportView } from './reportView.js';
 
 export interface MarkdownOptions {
@@ -142,16 +142,6 @@ function overTimeSummary(report: ReportView): string {
   if (recent) return 'Over time: worse recently';
   if (stretch) return 'Over time: worse in some stretches';
   return 'Over time: the recent window, the fluctuation test and the mean loss by period';
-}
-
-/** A GFM table with every cell escaped. */
-export function markdownTable(t: ReportTable): string[] {
-  const row = (cells: readonly string[]) => `| ${cells.map((c) => esc(c)).join(' | ')} |`;
-  return [
-    row(t.header),
-    `|${t.align.map((a) => (a === 'right' ? '---:' : '---')).join('|')}|`,
-    ...t.rows.map(row),
-  ];
 }
 
 function collapsed(summary: string, body: readonly string[]): string[] {

@@ -3,7 +3,7 @@ import type { Stability } from '../stability/stabilityModel.js';
 import { escapeMarkdown as esc } from './escapeMarkdown.js';
 import { relativeChangeText } from './relativeChangeText.js';
 import type { Comparison, Report } from './reportModel.js';
-import { type ReportTable, table } from './reportTable.js';
+import { markdownTable, type ReportTable, table } from './reportTable.js';
 
 /**
  * What the "Over time" section says, from `report.stability`, as plain text and tables that each
@@ -38,28 +38,19 @@ export function renderStabilitySection(report: Report): string[] {
   const parts = overTimeParts(report);
   if (parts === null) return [];
   const out = ['**Over time**', ''];
-  if (parts.windows !== null) out.push(...markdownRows(parts.windows), '');
+  if (parts.windows !== null) out.push(...markdownTable(parts.windows), '');
   for (const sentence of parts.sentences) out.push(esc(sentence), '');
   if (parts.periods !== null) {
     out.push(
       `<details><summary>Mean loss by period (${parts.periods.rows.length} periods)</summary>`,
       '',
-      ...markdownRows(parts.periods),
+      ...markdownTable(parts.periods),
       '',
       '</details>',
       '',
     );
   }
   return out;
-}
-
-function markdownRows(t: ReportTable): string[] {
-  const row = (cells: readonly string[]) => `| ${cells.map(esc).join(' | ')} |`;
-  return [
-    row(t.header),
-    `|${t.align.map((a) => (a === 'right' ? '---:' : '---')).join('|')}|`,
-    ...t.rows.map(row),
-  ];
 }
 
 function windowTable(overall: Comparison, recent: Comparison): ReportTable {

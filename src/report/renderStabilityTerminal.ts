@@ -1,6 +1,7 @@
 import { formatNumber, formatPValue } from '../core/formatNumber.js';
 import { relativeChangeText } from './relativeChangeText.js';
 import type { Report } from './reportModel.js';
+import { terminalText as clean } from './terminalText.js';
 
 /**
  * Terminal lines for `report.stability`: the recent window beside the overall comparison and
@@ -29,9 +30,4 @@ export function renderStabilityTerminal(report: Report): string[] {
     );
   }
   return out;
-}
-
-function clean(text: string): string {
-  // biome-ignore lint/suspicious/noControlCharactersInRegex: stripping control characters is the point
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, ' ');
 }

@@ -6,6 +6,7 @@ import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
 import type { ReportTable } from './reportTable.js';
 import type { ReportView } from './reportView.js';
+import { terminalText as clean } from './terminalText.js';
 
 export interface TerminalOptions {
   /** Use ANSI colours (only when stdout is a terminal and NO_COLOR is unset). */
@@ -88,11 +89,6 @@ function textTable(t: ReportTable, paint: (code: string, text: string) => string
       .join('  ')
       .trimEnd();
   return [paint('2', line(t.header)), ...rows.map(line)];
-}
-
-function clean(text: string): string {
-  // biome-ignore lint/suspicious/noControlCharactersInRegex: stripping control characters is the point
-  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, ' ');
 }
 
 function wrap(text: string, width: number, indent = ''): string {

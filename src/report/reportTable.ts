@@ -1,6 +1,8 @@
+import { escapeMarkdown as esc } from './escapeMarkdown.js';
+
 /**
  * A table as the renderers share it: plain-text cells (each renderer escapes them for its
- * medium), the alignment of each column and an optional caption.
+ * medium) and the alignment of each column.
  */
 export interface ReportTable {
   readonly header: readonly string[];
@@ -14,4 +16,14 @@ export function table(
   rows: readonly (readonly string[])[],
 ): ReportTable {
   return { header, align, rows };
+}
+
+/** A GFM table with every cell escaped. */
+export function markdownTable(t: ReportTable): string[] {
+  const row = (cells: readonly string[]) => `| ${cells.map((c) => esc(c)).join(' | ')} |`;
+  return [
+    row(t.header),
+    `|${t.align.map((a) => (a === 'right' ? '---:' : '---')).join('|')}|`,
+    ...t.rows.map(row),
+  ];
 }

@@ -12,9 +12,14 @@ const W = 640;
 const H = 240;
 const M = { left: 56, right: 16, top: 16, bottom: 40 };
 
-/** Text safe inside SVG/XML (and HTML) content and attribute values. */
+/**
+ * Text safe inside SVG/XML (and HTML) content and attribute values; bidirectional embedding,
+ * override and isolate controls (U+202A–U+202E, U+2066–U+2069) become U+FFFD, so a name from a
+ * file cannot read differently from what it is (as escapeMarkdown does for the comment).
+ */
 export function xml(text: string): string {
   return text
+    .replace(/[\u202a-\u202e\u2066-\u2069]/g, '\uFFFD')
     .replace(/&/g, '&amp;')
     .replace(/</g, '&lt;')
     .replace(/>/g, '&gt;')
