@@ -114,7 +114,7 @@ export function renderStabilityValidation(
     "(20% worse) over the last 15% of time points, equal before. The gate's own code (assessStability)",
     'with the default settings: fluctuation test (Giacomini & Rossi 2010, μ = 0.2, one-sided,',
     'Newey–West long-run variance after AR(1) prewhitening, automatic lag, Table I critical value), and the recent',
-    `window \`--recent 15%\` (Diebold–Mariano ewc and the stationary bootstrap agreeing, ${run.resamples} resamples).`,
+    `window \`--recent 15%\` (Diebold–Mariano ewc-ar1 and the stationary bootstrap agreeing, ${run.resamples} resamples).`,
     'Each check alone runs at α = 0.05 (fluctuation critical value 2.938); when both run, each runs at',
     'α/2 = 0.025 (Bonferroni; fluctuation critical value 3.179, interpolated in log α), and the report says',
     '"not stable" (the gate warns) when either flags: the "combined flag" column, the one the acceptance',

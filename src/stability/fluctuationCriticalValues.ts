@@ -6,7 +6,8 @@
  * Sources: α = 0.05 and 0.10 are the published Table I (the two-sided 5% values for μ = 0.1–0.4
  * as quoted in the project's issue; the rest from memory, each reproduced within Monte Carlo error
  * by validation/fluctuation_table.py, see docs/fluctuation-table.md). α = 0.01 is not in the
- * paper: it is the project's own simulation (same script, 40,000 paths, grid-bias extrapolated).
+ * paper: it is the project's own simulation (same script, 100,000 paths, the 500-step grid of
+ * validation/fluctuationTable.json).
  */
 export const TABLE_MU: readonly number[] = [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9];
 

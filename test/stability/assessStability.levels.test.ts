@@ -56,7 +56,8 @@ describe('assessStability: levels of the two checks', () => {
       fluctuation: 0.025,
       recent: 0.025,
     });
-    // Table I at 2.5%: log-α interpolation between the 1% (3.4981) and 5% (2.938) columns.
+    // Critical value at 2.5%: log-α interpolation between the 1% column (3.4981, the project's
+    // simulation, validation/fluctuationTable.json) and Table I's 5% column (2.938).
     const w = Math.log(2.5) / Math.log(5);
     expect(s.fluctuation!.criticalValue).toBeCloseTo((1 - w) * 3.4981 + w * 2.938, 10);
     expect(s.fluctuation!.criticalValue).toBeCloseTo(

@@ -101,7 +101,7 @@ describe('fluctuationTest', () => {
     );
   });
 
-  it('rejects pure noise at about its level (200 seeded streams; ≤ 10%, 3.4 MC standard errors above 5%)', () => {
+  it('rejects pure noise at about its level (200 seeded streams; ≤ 10%, 3.2 MC standard errors above 5%)', () => {
     let rejections = 0;
     for (let stream = 0; stream < 200; stream++) {
       const random = createRandomSource(7, stream);
