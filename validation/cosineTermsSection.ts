@@ -36,7 +36,7 @@ function describe(design: SimulationDesign): string {
     design.innovations === 't3'
       ? `φ = ${design.phi}, t₃ innovations`
       : design.varianceBreak === true
-        ? `φ = ${design.phi}, variance doubles halfway`
+        ? `φ = ${design.phi}, error standard deviation doubles halfway`
         : `φ = ${design.phi}`;
   return design.candidateScale === 1
     ? errors
