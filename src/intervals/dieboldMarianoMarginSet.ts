@@ -7,6 +7,7 @@ import type { LagRule } from '../statistics/neweyWestLag.js';
 import { selectLag } from '../statistics/neweyWestLag.js';
 import { uniformWeightSum } from '../statistics/uniformLongRunVariance.js';
 import type { VarianceEstimator } from '../statistics/varianceEstimator.js';
+import { roundingTolerance } from '../statistics/varianceTolerance.js';
 import { fiellerSet } from './fiellerSet.js';
 import {
   complementOfSet,
@@ -96,7 +97,7 @@ export function dieboldMarianoMarginSet(input: {
       const gamma0 = longRunCovariance(d, baseline, candidate, (x) =>
         bartlettLongRunVariance(x, 0),
       );
-      const tolerance = n * Number.EPSILON;
+      const tolerance = roundingTolerance(n);
       const positive = complementOfSet(
         fiellerSet({
           meanD: 0,

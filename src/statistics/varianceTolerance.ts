@@ -15,5 +15,10 @@ export function isEffectivelyNonPositive(
   gamma0: number,
   n: number,
 ): boolean {
-  return !(longRunVariance > n * Number.EPSILON * gamma0);
+  return !(longRunVariance > roundingTolerance(n) * gamma0);
+}
+
+/** n·ε: the relative rounding bound of a length-n sum, the factor of γ̂_0 in the zero test above. */
+export function roundingTolerance(n: number): number {
+  return n * Number.EPSILON;
 }
