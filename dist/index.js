@@ -32946,6 +32946,52 @@ function missingRowsSection(report) {
   return { title, lines, tables };
 }
 
+// src/report/renderBacktestChecks.ts
+var SHOWN = 2;
+var MAX_CHARS = 200;
+var clip = (text2) => text2.length <= MAX_CHARS ? text2 : `${text2.slice(0, MAX_CHARS)}\u2026`;
+var CHECK_LABELS = {
+  "look-ahead": "origin at or after the timestamp",
+  "horizon-steps": "horizon differs from the steps from origin to timestamp",
+  "origin-after-actuals": "issued after the last actual",
+  "origin-sets": "origins in one file only",
+  "path-sets": "paths in one file only",
+  "horizon-sets": "horizons in one file only",
+  "time-spans": "timestamps outside the other file's span",
+  "series-coverage": "series in one file only",
+  "fold-purge": "training within the purge or embargo window",
+  "outside-test-window": "rows outside their fold's test window",
+  "exact-predictions": "predictions equal to the actual far more often than the other model"
+};
+function backtestChecksNotes(report) {
+  const integrity = report.integrity;
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
+    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
+    return { summary: `not run (${reasons.join("; ")}).`, notRun: [] };
+  }
+  const mode = integrity.mode === "report" ? " Shown only: they do not change the verdict (backtest-checks report)." : integrity.mode === "warn" ? " Findings warn (backtest-checks warn)." : "";
+  const step = integrity.frequency === null ? "" : ` Steps of ${integrity.frequency.text} (${integrity.frequency.source}).`;
+  return {
+    summary: `${integrity.outcome}.${step}${mode}`,
+    notRun: integrity.notRun.map((n) => `not run \xB7 ${n.id}: ${n.reason}`)
+  };
+}
+function backtestChecksSection(report) {
+  const integrity = report.integrity;
+  const notes = backtestChecksNotes(report);
+  const out = [`**Backtest checks**: ${escapeMarkdown(notes.summary)}`, ""];
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) return out;
+  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
+  for (const line2 of notes.notRun) out.push(`- ${escapeMarkdown(line2)}`);
+  out.push("");
+  return out;
+}
+function checkLine(check) {
+  const shown = check.examples.slice(0, SHOWN).map((e) => escapeMarkdown(clip(e)));
+  const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
+  return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
+}
+
 // src/report/renderStabilitySection.ts
 function overTimeParts(report) {
   const stability = report.stability;
@@ -34985,7 +35031,14 @@ function renderHtml(report, options = {}) {
     htmlTable(s.details),
     `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join("")}</ul>`
   );
-  if (s.checks !== null) out.push("<h2>Backtest checks</h2>", htmlTable(s.checks));
+  if (s.checks !== null || report.integrity.notRun.length > 0) {
+    const notes = backtestChecksNotes(report);
+    out.push("<h2>Backtest checks</h2>", `<p>Outcome: ${xml(notes.summary)}</p>`);
+    if (s.checks !== null) out.push(htmlTable(s.checks));
+    if (notes.notRun.length > 0) {
+      out.push(`<ul>${notes.notRun.map((l) => `<li>${xml(l)}</li>`).join("")}</ul>`);
+    }
+  }
   out.push(
     "<h2>Inputs and coverage</h2>",
     htmlTable(s.inputs.table),
@@ -35012,43 +35065,6 @@ function htmlTable(t) {
     `<tbody>${t.rows.map((r) => `<tr>${r.map((c, j) => cell("td", c, j)).join("")}</tr>`).join("")}</tbody>`,
     "</table></div>"
   ].join("");
-}
-
-// src/report/renderBacktestChecks.ts
-var SHOWN = 2;
-var MAX_CHARS = 200;
-var clip = (text2) => text2.length <= MAX_CHARS ? text2 : `${text2.slice(0, MAX_CHARS)}\u2026`;
-var CHECK_LABELS = {
-  "look-ahead": "origin at or after the timestamp",
-  "horizon-steps": "horizon differs from the steps from origin to timestamp",
-  "origin-after-actuals": "issued after the last actual",
-  "origin-sets": "origins in one file only",
-  "path-sets": "paths in one file only",
-  "horizon-sets": "horizons in one file only",
-  "time-spans": "timestamps outside the other file's span",
-  "series-coverage": "series in one file only",
-  "fold-purge": "training within the purge or embargo window",
-  "outside-test-window": "rows outside their fold's test window",
-  "exact-predictions": "predictions equal to the actual far more often than the other model"
-};
-function backtestChecksSection(report) {
-  const integrity = report.integrity;
-  if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
-    const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
-    return [`**Backtest checks**: not run (${reasons.map(escapeMarkdown).join("; ")}).`, ""];
-  }
-  const mode = integrity.mode === "report" ? " Shown only: they do not change the verdict (backtest-checks report)." : integrity.mode === "warn" ? " Findings warn (backtest-checks warn)." : "";
-  const step = integrity.frequency === null ? "" : ` Steps of ${escapeMarkdown(integrity.frequency.text)} (${integrity.frequency.source}).`;
-  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ""];
-  for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
-  for (const n of integrity.notRun) out.push(`- not run \xB7 ${n.id}: ${escapeMarkdown(n.reason)}`);
-  out.push("");
-  return out;
-}
-function checkLine(check) {
-  const shown = check.examples.slice(0, SHOWN).map((e) => escapeMarkdown(clip(e)));
-  const examples = shown.length === 0 ? "" : `, e.g. ${shown.join("; ")}`;
-  return `${check.status} \xB7 ${check.id} (${CHECK_LABELS[check.id]}): ${check.count}${examples}`;
 }
 
 // src/report/renderMarkdown.ts
@@ -53795,7 +53811,10 @@ function harveyLeybourneNewbold(statistic, n, horizon) {
 
 // src/statistics/varianceTolerance.ts
 function isEffectivelyNonPositive(longRunVariance, gamma0, n) {
-  return !(longRunVariance > n * Number.EPSILON * gamma0);
+  return !(longRunVariance > roundingTolerance(n) * gamma0);
+}
+function roundingTolerance(n) {
+  return n * Number.EPSILON;
 }
 
 // src/statistics/uniformLongRunVariance.ts
@@ -53899,7 +53918,7 @@ function dieboldMarianoMarginSet(input) {
         candidate,
         (x) => bartlettLongRunVariance(x, 0)
       );
-      const tolerance = n * Number.EPSILON;
+      const tolerance = roundingTolerance(n);
       const positive = complementOfSet(
         fiellerSet({
           meanD: 0,

@@ -24,15 +24,16 @@ const CHECK_LABELS: Readonly<Record<CheckId, string>> = {
 };
 
 /**
- * The comment's "Backtest checks" section: one line per check (ok / warn / fail, the count,
- * two examples), then one line per check that could not run and why. Every example comes from
- * an input file and is escaped.
+ * The backtest checks' sentences in plain text, for every renderer to escape for its medium: the
+ * outcome with the time step the checks used and what the mode does to the verdict, and one line
+ * per check that could not run and why. When no check ran, `summary` says so with the reasons
+ * and `notRun` is empty.
  */
-export function backtestChecksSection(report: Report): string[] {
+export function backtestChecksNotes(report: Report): { summary: string; notRun: string[] } {
   const integrity = report.integrity;
   if (integrity.checks.length === 0 && integrity.notRun.length > 0) {
     const reasons = [...new Set(integrity.notRun.map((n) => n.reason))];
-    return [`**Backtest checks**: not run (${reasons.map(esc).join('; ')}).`, ''];
+    return { summary: `not run (${reasons.join('; ')}).`, notRun: [] };
   }
   const mode =
     integrity.mode === 'report'
@@ -43,10 +44,25 @@ export function backtestChecksSection(report: Report): string[] {
   const step =
     integrity.frequency === null
       ? ''
-      : ` Steps of ${esc(integrity.frequency.text)} (${integrity.frequency.source}).`;
-  const out = [`**Backtest checks**: ${integrity.outcome}.${step}${mode}`, ''];
+      : ` Steps of ${integrity.frequency.text} (${integrity.frequency.source}).`;
+  return {
+    summary: `${integrity.outcome}.${step}${mode}`,
+    notRun: integrity.notRun.map((n) => `not run · ${n.id}: ${n.reason}`),
+  };
+}
+
+/**
+ * The comment's "Backtest checks" section: one line per check (ok / warn / fail, the count,
+ * two examples), then one line per check that could not run and why. Every example comes from
+ * an input file and is escaped.
+ */
+export function backtestChecksSection(report: Report): string[] {
+  const integrity = report.integrity;
+  const notes = backtestChecksNotes(report);
+  const out = [`**Backtest checks**: ${esc(notes.summary)}`, ''];
+  if (integrity.checks.length === 0 && integrity.notRun.length > 0) return out;
   for (const check of integrity.checks) out.push(`- ${checkLine(check)}`);
-  for (const n of integrity.notRun) out.push(`- not run · ${n.id}: ${esc(n.reason)}`);
+  for (const line of notes.notRun) out.push(`- ${esc(line)}`);
   out.push('');
   return out;
 }

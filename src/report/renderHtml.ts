@@ -4,6 +4,7 @@ import { candidatesSection } from './candidatesSection.js';
 import { percent, relativeInterval } from './cells.js';
 import { chartCaption, differenceSeries, sparklineText } from './differenceChart.js';
 import { missingRowsSection } from './missingRowsSection.js';
+import { backtestChecksNotes } from './renderBacktestChecks.js';
 import { overTimeParts } from './renderStabilitySection.js';
 import type { Report } from './reportModel.js';
 import { reportSections } from './reportSections.js';
@@ -186,7 +187,14 @@ export function renderHtml(report: Report, options: HtmlOptions = {}): string {
     htmlTable(s.details),
     `<ul>${s.detailNotes.map((n) => `<li>${xml(n)}</li>`).join('')}</ul>`,
   );
-  if (s.checks !== null) out.push('<h2>Backtest checks</h2>', htmlTable(s.checks));
+  if (s.checks !== null || report.integrity.notRun.length > 0) {
+    const notes = backtestChecksNotes(report);
+    out.push('<h2>Backtest checks</h2>', `<p>Outcome: ${xml(notes.summary)}</p>`);
+    if (s.checks !== null) out.push(htmlTable(s.checks));
+    if (notes.notRun.length > 0) {
+      out.push(`<ul>${notes.notRun.map((l) => `<li>${xml(l)}</li>`).join('')}</ul>`);
+    }
+  }
   out.push(
     '<h2>Inputs and coverage</h2>',
     htmlTable(s.inputs.table),
