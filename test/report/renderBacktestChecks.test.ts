@@ -3,6 +3,7 @@ import {
   backtestChecksLines,
   backtestChecksSection,
 } from '../../src/report/renderBacktestChecks.js';
+import { renderHtml } from '../../src/report/renderHtml.js';
 import { renderMarkdown } from '../../src/report/renderMarkdown.js';
 import { sampleReport } from '../action/sampleReport.js';
 
@@ -66,5 +67,17 @@ describe('the backtest checks section', () => {
       '**Backtest checks**: not run (a pre-aggregated loss file has no forecast rows to check).',
       '',
     ]);
+  });
+});
+
+describe('backtest checks in the HTML report', () => {
+  it('shows the outcome with its time step and each check that did not run, escaped', () => {
+    const html = renderHtml(hostile);
+    const section = html.slice(html.indexOf('<h2>Backtest checks</h2>'));
+    expect(section).toContain('<p>Outcome: fail. Steps of 1h (given).</p>');
+    for (const n of hostile.integrity.notRun) {
+      expect(section).toContain(`<li>not run · ${n.id}: `);
+    }
+    expect(section).not.toMatch(/<(?!\/?(h2|p|div|table|thead|tbody|tr|th|td|ul|li)\b)[a-z]/);
   });
 });
