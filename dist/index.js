@@ -32776,10 +32776,10 @@ function candidatesSection(report) {
   const hypothesis = spa.hypothesis === "none-better" ? "no candidate beats the baseline" : "no candidate is worse than the baseline";
   const eliminated = set.eliminationOrder.slice(0, -1).map((name, j) => `${name} (p ${formatPValue(set.stepPValues[j])})`).join(", ");
   return {
-    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection?.preferred ?? "none"})`,
+    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection === void 0 ? "none" : `${selection.preferred}, ${selection.preferredBy === "option" ? "named by --preferred" : "the lowest mean loss"}`})`,
     ranking,
     shortHeader: ["rank", "model", "mean loss", "change", "in set", "MCS p", "SPA p", "verdict"],
-    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}${selection === void 0 ? "" : `, ${selection.timePoints} time points`}).`,
     setSentence: `Model confidence set at ${level} (Hansen, Lunde & Nason 2011, ${set.statistic === "range" ? "range statistic T_R" : "max statistic T_max"}): ${set.members.join(", ")}.${eliminated === "" ? "" : ` Eliminated in order: ${eliminated}.`}`
   };
 }

@@ -70,10 +70,10 @@ export function candidatesSection(report: Report): CandidatesSection | null {
     .map((name, j) => `${name} (p ${formatPValue(set.stepPValues[j])})`)
     .join(', ');
   return {
-    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection?.preferred ?? 'none'})`,
+    heading: `Candidates (${candidates.length}, ranked by mean loss; preferred: ${selection === undefined ? 'none' : `${selection.preferred}, ${selection.preferredBy === 'option' ? 'named by --preferred' : 'the lowest mean loss'}`})`,
     ranking,
     shortHeader: ['rank', 'model', 'mean loss', 'change', 'in set', 'MCS p', 'SPA p', 'verdict'],
-    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}).`,
+    spaSentence: `SPA test (Hansen 2005), H0 "${hypothesis}": statistic ${formatNumber(spa.statistic)}, p-values lower ${formatPValue(spa.pValueLower)}, consistent ${formatPValue(spa.pValueConsistent)}, upper ${formatPValue(spa.pValueUpper)}; White's reality check p ${formatPValue(spa.realityCheck.pValue)} (${spa.resamples} shared resamples, block length ${formatNumber(spa.expectedBlockLength)}${selection === undefined ? '' : `, ${selection.timePoints} time points`}).`,
     setSentence: `Model confidence set at ${level} (Hansen, Lunde & Nason 2011, ${set.statistic === 'range' ? 'range statistic T_R' : 'max statistic T_max'}): ${set.members.join(', ')}.${eliminated === '' ? '' : ` Eliminated in order: ${eliminated}.`}`,
   };
 }
